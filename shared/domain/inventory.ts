@@ -1,0 +1,171 @@
+/**
+ * Portion count: portions needed by the week board against portions baked, per base tray recipe.
+ *
+ * Needed: for every board cell, each portion of a tray on the cell's plate × the client's household
+ * multiplier, summed per tray and per prep date. Quantities and multipliers may be decimals (half a
+ * portion, a household of 1.5); the sum is rounded UP to whole portions per tray and prep date, since
+ * a tray is cut into whole portions.
+ *
+ * Produced: tray count × portions per tray (from the cut plan), per prep date.
+ *
+ * With two prep dates a week, portions baked on the later date cannot cover plates before it, so the
+ * counts are kept per prep date and a tray's `short` and `spare` are the sums over its prep dates
+ * (a tray can be short on Sunday and have spares on Wednesday).
+ */
+import Decimal from 'decimal.js';
+import { compareIsoDates, type IsoDate } from './iso-date';
+import { supplyingPrepDate } from './eat-by';
+
+export interface BoardPortion {
+  trayId: string;
+  /** Portions of this tray on the plate (1, 2, 0.5, …). */
+  quantity: Decimal.Value;
+  /** The prep date these portions come from; by default the latest prep date on or before the cell's day. */
+  prepDate?: IsoDate;
+}
+
+export interface BoardCell {
+  /** The day of the cell. */
+  date: IsoDate;
+  /** The client's household multiplier (2 = the plate feeds two people). */
+  householdMultiplier: Decimal.Value;
+  portions: readonly BoardPortion[];
+}
+
+export interface TrayBatch {
+  trayId: string;
+  prepDate: IsoDate;
+  /** Whole trays baked. */
+  trayCount: number;
+  /** Whole portions one tray is cut into (cut plan). */
+  portionsPerTray: number;
+}
+
+export interface InventoryInput {
+  /** The week's prep dates (one or two, usually). */
+  prepDates: readonly IsoDate[];
+  cells: readonly BoardCell[];
+  batches: readonly TrayBatch[];
+}
+
+export interface PortionTally {
+  /** Whole portions needed (rounded up). */
+  needed: number;
+  /** The unrounded need, for display. */
+  neededExact: number;
+  produced: number;
+  spare: number;
+  short: number;
+}
+
+export interface PrepDateTally extends PortionTally {
+  prepDate: IsoDate;
+  /** Whole trays that cover the need, or null when no cut plan is known for this tray. */
+  traysToCover: number | null;
+}
+
+export interface TrayTally extends PortionTally {
+  trayId: string;
+  /** Sum of the per-prep-date proposals, or null when no cut plan is known. */
+  traysToCover: number | null;
+  byPrepDate: PrepDateTally[];
+}
+
+/** Whole trays needed to cover `needed` portions: ceil(needed / portionsPerTray). */
+export function traysToCover(needed: Decimal.Value, portionsPerTray: Decimal.Value): number {
+  const n = new Decimal(needed);
+  const p = new Decimal(portionsPerTray);
+  if (!n.isFinite() || n.lt(0)) throw new RangeError(`Portions needed must be 0 or more: ${String(needed)}`);
+  if (!p.isFinite() || p.lte(0)) throw new RangeError(`Portions per tray must be greater than 0: ${String(portionsPerTray)}`);
+  return n.div(p).ceil().toNumber();
+}
+
+function wholeCount(value: number, name: string, min: number): number {
+  if (!Number.isInteger(value) || value < min) throw new RangeError(`${name} must be a whole number, ${min} or more: ${value}`);
+  return value;
+}
+
+function sourcePrepDate(cell: BoardCell, portion: BoardPortion, prepDates: readonly IsoDate[]): IsoDate {
+  if (portion.prepDate) return portion.prepDate;
+  if (prepDates.length === 0) throw new RangeError('The week has no prep date to take portions from');
+  // A day before every prep date is booked on the first prep date; the week check flags it.
+  const sorted = [...prepDates].sort(compareIsoDates);
+  return supplyingPrepDate(cell.date, sorted) ?? sorted[0];
+}
+
+interface Bucket {
+  neededExact: Decimal;
+  produced: number;
+  portionsPerTray: number | null;
+}
+
+function bucketsByTray(input: InventoryInput): Map<string, Map<IsoDate, Bucket>> {
+  const trays = new Map<string, Map<IsoDate, Bucket>>();
+  const bucket = (trayId: string, prepDate: IsoDate): Bucket => {
+    let byDate = trays.get(trayId);
+    if (!byDate) trays.set(trayId, (byDate = new Map()));
+    let b = byDate.get(prepDate);
+    if (!b) byDate.set(prepDate, (b = { neededExact: new Decimal(0), produced: 0, portionsPerTray: null }));
+    return b;
+  };
+
+  for (const cell of input.cells) {
+    const multiplier = new Decimal(cell.householdMultiplier);
+    if (!multiplier.isFinite() || multiplier.lte(0)) {
+      throw new RangeError(`Household multiplier must be greater than 0: ${String(cell.householdMultiplier)}`);
+    }
+    for (const portion of cell.portions) {
+      const quantity = new Decimal(portion.quantity);
+      if (!quantity.isFinite() || quantity.lt(0)) throw new RangeError(`Portion quantity must be 0 or more: ${String(portion.quantity)}`);
+      const b = bucket(portion.trayId, sourcePrepDate(cell, portion, input.prepDates));
+      b.neededExact = b.neededExact.plus(quantity.times(multiplier));
+    }
+  }
+
+  for (const batch of input.batches) {
+    const count = wholeCount(batch.trayCount, 'Tray count', 0);
+    const perTray = wholeCount(batch.portionsPerTray, 'Portions per tray', 1);
+    const b = bucket(batch.trayId, batch.prepDate);
+    b.produced += count * perTray;
+    b.portionsPerTray ??= perTray;
+  }
+  return trays;
+}
+
+function tally(neededExact: Decimal, produced: number): PortionTally {
+  const needed = neededExact.ceil().toNumber();
+  return {
+    needed,
+    neededExact: neededExact.toNumber(),
+    produced,
+    spare: Math.max(0, produced - needed),
+    short: Math.max(0, needed - produced),
+  };
+}
+
+/** Per base tray: portions needed against produced, per prep date and in total. */
+export function portionCount(input: InventoryInput): TrayTally[] {
+  const result: TrayTally[] = [];
+  for (const [trayId, byDate] of bucketsByTray(input)) {
+    const knownPerTray = [...byDate.values()].find((b) => b.portionsPerTray !== null)?.portionsPerTray ?? null;
+    const byPrepDate: PrepDateTally[] = [...byDate.entries()]
+      .sort(([a], [b]) => compareIsoDates(a, b))
+      .map(([prepDate, b]) => {
+        const t = tally(b.neededExact, b.produced);
+        const perTray = b.portionsPerTray ?? knownPerTray;
+        return { prepDate, ...t, traysToCover: perTray === null ? null : traysToCover(t.needed, perTray) };
+      });
+    const sum = (pick: (t: PrepDateTally) => number) => byPrepDate.reduce((s, t) => s + pick(t), 0);
+    result.push({
+      trayId,
+      needed: sum((t) => t.needed),
+      neededExact: byPrepDate.reduce((s, t) => s.plus(t.neededExact), new Decimal(0)).toNumber(),
+      produced: sum((t) => t.produced),
+      spare: sum((t) => t.spare),
+      short: sum((t) => t.short),
+      traysToCover: knownPerTray === null ? null : sum((t) => t.traysToCover ?? 0),
+      byPrepDate,
+    });
+  }
+  return result;
+}

@@ -1,0 +1,61 @@
+/**
+ * Plain calendar dates as ISO strings 'YYYY-MM-DD'.
+ *
+ * A prep date, an eat-by date or a planned day is a calendar day, not an instant. All arithmetic
+ * runs on UTC midnights, so a daylight-saving change in the machine's time zone can never shift a
+ * date by one day.
+ */
+
+/** A calendar date written 'YYYY-MM-DD'. */
+export type IsoDate = string;
+
+const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
+const MS_PER_DAY = 86_400_000;
+
+/** True when `value` is a real calendar date written 'YYYY-MM-DD' (so '2025-02-30' is false). */
+export function isIsoDate(value: unknown): value is IsoDate {
+  if (typeof value !== 'string') return false;
+  const match = ISO_DATE.exec(value);
+  if (!match) return false;
+  const [, y, m, d] = match.map(Number);
+  const date = new Date(0);
+  date.setUTCFullYear(y, m - 1, d);
+  return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d;
+}
+
+function toUtcMs(value: IsoDate): number {
+  if (!isIsoDate(value)) throw new RangeError(`Not an ISO calendar date (YYYY-MM-DD): ${String(value)}`);
+  const [y, m, d] = value.split('-').map(Number);
+  const date = new Date(0);
+  date.setUTCFullYear(y, m - 1, d);
+  return date.getTime();
+}
+
+function fromUtcMs(ms: number): IsoDate {
+  const date = new Date(ms);
+  const y = String(date.getUTCFullYear()).padStart(4, '0');
+  const m = String(date.getUTCMonth() + 1).padStart(2, '0');
+  const d = String(date.getUTCDate()).padStart(2, '0');
+  return `${y}-${m}-${d}`;
+}
+
+/** The date `days` calendar days after `date` (negative goes back). `days` must be a whole number. */
+export function addDays(date: IsoDate, days: number): IsoDate {
+  if (!Number.isInteger(days)) throw new RangeError(`Days must be a whole number: ${days}`);
+  return fromUtcMs(toUtcMs(date) + days * MS_PER_DAY);
+}
+
+/** Whole calendar days from `from` to `to` (positive when `to` is later). */
+export function daysBetween(from: IsoDate, to: IsoDate): number {
+  return Math.round((toUtcMs(to) - toUtcMs(from)) / MS_PER_DAY);
+}
+
+/** Day of the week, 0 = Sunday … 6 = Saturday. */
+export function weekdayOf(date: IsoDate): number {
+  return new Date(toUtcMs(date)).getUTCDay();
+}
+
+/** Negative when a is earlier, 0 when equal, positive when later (valid ISO dates only). */
+export function compareIsoDates(a: IsoDate, b: IsoDate): number {
+  return daysBetween(b, a);
+}

@@ -1,0 +1,234 @@
+/**
+ * Week check: one client's day on the week board against the client's targets and rules.
+ *
+ * Cell macros are what the client eats from that plate (the household multiplier is about how much
+ * is cooked, not what this client eats). Day totals are summed exactly, then compared:
+ * - net carbs above the cap                               → warn
+ * - protein below the floor (default 90 % of the target)  → warn
+ * - energy above the target by more than 10 % (default)   → warn
+ * - a plate allergen the client has                       → block, or warn when overridden with a reason
+ * - an ingredient name or tag the client dislikes         → warn
+ * - a refrigerated portion past its eat-by date, or planned before its tray is made → block
+ * - a frozen portion planned past its freezer quality limit → warn
+ * The 90 % and 10 % defaults are common practice, no source; the coach edits them.
+ */
+import Decimal from 'decimal.js';
+import { allergenConflicts, allergenLabel, type AllergenCode } from './allergens';
+import { freezerQualityDate, portionStatus } from './eat-by';
+import { compareIsoDates, type IsoDate } from './iso-date';
+import type { MacroTargets } from './targets';
+
+export type Severity = 'block' | 'warn';
+
+export interface CheckRules {
+  /** Protein below this share of the target is flagged (0.9 = 90 %). */
+  proteinFloorShare: Decimal.Value;
+  /** Energy above target × (1 + this) is flagged (0.1 = 10 %). */
+  energyOverShare: Decimal.Value;
+}
+
+/** Common practice, no source; coach-editable. */
+export const DEFAULT_CHECK_RULES: Readonly<CheckRules> = { proteinFloorShare: '0.9', energyOverShare: '0.1' };
+
+export interface CellMacros {
+  kcal: number;
+  netCarbsG: number;
+  proteinG: number;
+  fatG: number;
+}
+
+export interface AllergenOverride {
+  allergen: AllergenCode;
+  reason: string;
+}
+
+export interface CellPortion {
+  trayId: string;
+  prepDate: IsoDate;
+  fridgeDays: number;
+  /** 'frozen' once the freeze-and-thaw remedy is applied; default 'fridge'. */
+  storage?: 'fridge' | 'frozen';
+  /** Needed when storage is 'frozen'; missing counts as 0 (every later day is flagged). */
+  freezerWeeks?: number;
+}
+
+export interface CheckCell {
+  slot: string;
+  macros: CellMacros;
+  allergens: readonly AllergenCode[];
+  /** Ingredient names and tags of the plate, for the dislike check. */
+  terms: readonly string[];
+  portions: readonly CellPortion[];
+  allergenOverrides?: readonly AllergenOverride[];
+}
+
+export interface DayCheckInput {
+  clientId: string;
+  date: IsoDate;
+  targets: MacroTargets;
+  clientAllergens: readonly AllergenCode[];
+  clientDislikes: readonly string[];
+  cells: readonly CheckCell[];
+  rules?: Partial<CheckRules>;
+}
+
+interface WarningBase {
+  severity: Severity;
+  message: string;
+  clientId: string;
+  date: IsoDate;
+}
+
+export type WeekWarning =
+  | (WarningBase & { kind: 'net-carbs-over'; actualG: number; capG: number })
+  | (WarningBase & { kind: 'protein-short'; actualG: number; targetG: number; floorG: number })
+  | (WarningBase & { kind: 'energy-over'; actualKcal: number; targetKcal: number; limitKcal: number })
+  | (WarningBase & { kind: 'allergen'; slot: string; allergen: AllergenCode; overridden: boolean; reason?: string })
+  | (WarningBase & { kind: 'dislike'; slot: string; term: string })
+  | (WarningBase & { kind: 'past-eat-by'; slot: string; trayId: string; prepDate: IsoDate; eatBy: IsoDate })
+  | (WarningBase & { kind: 'before-prep'; slot: string; trayId: string; prepDate: IsoDate })
+  | (WarningBase & { kind: 'past-freezer-quality'; slot: string; trayId: string; prepDate: IsoDate; qualityUntil: IsoDate });
+
+export type WarningKind = WeekWarning['kind'];
+
+export interface DayTotals {
+  kcal: number;
+  netCarbsG: number;
+  proteinG: number;
+  fatG: number;
+}
+
+export interface DayCheck {
+  clientId: string;
+  date: IsoDate;
+  totals: DayTotals;
+  warnings: WeekWarning[];
+}
+
+const round1 = (d: Decimal) => d.toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber();
+
+/** Lower-case, trimmed, inner spaces collapsed: how names and dislikes are compared. */
+export function normalizeTerm(term: string): string {
+  return term.trim().toLowerCase().replace(/\s+/g, ' ');
+}
+
+function sumMacros(cells: readonly CheckCell[]) {
+  const zero = new Decimal(0);
+  return cells.reduce(
+    (t, c) => ({
+      kcal: t.kcal.plus(c.macros.kcal),
+      netCarbsG: t.netCarbsG.plus(c.macros.netCarbsG),
+      proteinG: t.proteinG.plus(c.macros.proteinG),
+      fatG: t.fatG.plus(c.macros.fatG),
+    }),
+    { kcal: zero, netCarbsG: zero, proteinG: zero, fatG: zero },
+  );
+}
+
+function macroWarnings(input: DayCheckInput, totals: ReturnType<typeof sumMacros>): WeekWarning[] {
+  const rules: CheckRules = {
+    proteinFloorShare: input.rules?.proteinFloorShare ?? DEFAULT_CHECK_RULES.proteinFloorShare,
+    energyOverShare: input.rules?.energyOverShare ?? DEFAULT_CHECK_RULES.energyOverShare,
+  };
+  const base = { severity: 'warn' as const, clientId: input.clientId, date: input.date };
+  const warnings: WeekWarning[] = [];
+  const { targets } = input;
+
+  if (totals.netCarbsG.gt(targets.netCarbCapG)) {
+    const actualG = round1(totals.netCarbsG);
+    warnings.push({ ...base, kind: 'net-carbs-over', actualG, capG: targets.netCarbCapG,
+      message: `Net carbs ${actualG} g are over the ${targets.netCarbCapG} g cap.` });
+  }
+  const floor = new Decimal(targets.proteinG).times(rules.proteinFloorShare);
+  if (totals.proteinG.lt(floor)) {
+    const actualG = round1(totals.proteinG);
+    const floorG = round1(floor);
+    warnings.push({ ...base, kind: 'protein-short', actualG, targetG: targets.proteinG, floorG,
+      message: `Protein ${actualG} g is below the ${floorG} g floor (target ${targets.proteinG} g).` });
+  }
+  const limit = new Decimal(targets.targetKcal).times(new Decimal(rules.energyOverShare).plus(1));
+  if (totals.kcal.gt(limit)) {
+    const actualKcal = round1(totals.kcal);
+    const limitKcal = round1(limit);
+    warnings.push({ ...base, kind: 'energy-over', actualKcal, targetKcal: targets.targetKcal, limitKcal,
+      message: `Energy ${actualKcal} kcal is over ${limitKcal} kcal (target ${targets.targetKcal} kcal).` });
+  }
+  return warnings;
+}
+
+function allergenWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] {
+  return allergenConflicts(cell.allergens, input.clientAllergens).map((allergen) => {
+    const reason = cell.allergenOverrides?.find((o) => o.allergen === allergen)?.reason.trim();
+    const overridden = Boolean(reason);
+    const label = allergenLabel(allergen);
+    return {
+      kind: 'allergen' as const,
+      severity: overridden ? ('warn' as const) : ('block' as const),
+      clientId: input.clientId,
+      date: input.date,
+      slot: cell.slot,
+      allergen,
+      overridden,
+      ...(overridden ? { reason } : {}),
+      message: overridden
+        ? `${label} is on the client's allergen list; allowed by the coach: ${reason}`
+        : `${label} is on the client's allergen list.`,
+    };
+  });
+}
+
+function dislikeWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] {
+  const dislikes = new Set(input.clientDislikes.map(normalizeTerm).filter(Boolean));
+  const hits = [...new Set(cell.terms.map(normalizeTerm))].filter((t) => dislikes.has(t));
+  return hits.map((term) => ({
+    kind: 'dislike' as const, severity: 'warn' as const, clientId: input.clientId, date: input.date,
+    slot: cell.slot, term, message: `The client dislikes ${term}.`,
+  }));
+}
+
+function portionWarning(input: DayCheckInput, cell: CheckCell, portion: CellPortion): WeekWarning | null {
+  const base = { clientId: input.clientId, date: input.date, slot: cell.slot, trayId: portion.trayId, prepDate: portion.prepDate };
+  const { status, eatBy } = portionStatus({ plannedDate: input.date, prepDate: portion.prepDate, fridgeDays: portion.fridgeDays });
+  if (status === 'before-prep') {
+    return { ...base, kind: 'before-prep', severity: 'block',
+      message: `Planned on ${input.date}, before its tray is made on ${portion.prepDate}.` };
+  }
+  if (portion.storage === 'frozen') {
+    const qualityUntil = freezerQualityDate(portion.prepDate, portion.freezerWeeks ?? 0);
+    if (compareIsoDates(input.date, qualityUntil) <= 0) return null;
+    return { ...base, kind: 'past-freezer-quality', severity: 'warn', qualityUntil,
+      message: `Frozen portion planned after its freezer quality limit (${qualityUntil}).` };
+  }
+  if (status === 'past-eat-by') {
+    return { ...base, kind: 'past-eat-by', severity: 'block', eatBy,
+      message: `Past its eat-by date: prepped ${portion.prepDate}, eat by ${eatBy}.` };
+  }
+  return null;
+}
+
+/** Check one client's day. */
+export function checkDay(input: DayCheckInput): DayCheck {
+  const totals = sumMacros(input.cells);
+  const warnings: WeekWarning[] = [...macroWarnings(input, totals)];
+  for (const cell of input.cells) {
+    warnings.push(...allergenWarnings(input, cell), ...dislikeWarnings(input, cell));
+    for (const portion of cell.portions) {
+      const w = portionWarning(input, cell, portion);
+      if (w) warnings.push(w);
+    }
+  }
+  return {
+    clientId: input.clientId,
+    date: input.date,
+    totals: { kcal: round1(totals.kcal), netCarbsG: round1(totals.netCarbsG), proteinG: round1(totals.proteinG), fatG: round1(totals.fatG) },
+    warnings,
+  };
+}
+
+/** Check many client-days; warnings come back flat, blocks first. */
+export function checkWeek(days: readonly DayCheckInput[]): { days: DayCheck[]; warnings: WeekWarning[] } {
+  const checked = days.map(checkDay);
+  const warnings = checked.flatMap((d) => d.warnings);
+  warnings.sort((a, b) => (a.severity === b.severity ? 0 : a.severity === 'block' ? -1 : 1));
+  return { days: checked, warnings };
+}

@@ -1,0 +1,194 @@
+import { describe, expect, it } from 'vitest';
+import {
+  DEFAULT_CHECK_RULES,
+  checkDay,
+  checkWeek,
+  normalizeTerm,
+  type CheckCell,
+  type DayCheckInput,
+} from '@shared/domain/week-check';
+import { computeTargets } from '@shared/domain/targets';
+import { STORAGE_DEFAULTS } from '@shared/domain/eat-by';
+
+const targets = { targetKcal: 1800, netCarbCapG: 20, proteinG: 100, fatG: 140 };
+
+const cell = (over: Partial<CheckCell> = {}): CheckCell => ({
+  slot: 'lunch',
+  macros: { kcal: 0, netCarbsG: 0, proteinG: 0, fatG: 0 },
+  allergens: [],
+  terms: [],
+  portions: [],
+  ...over,
+});
+
+const day = (over: Partial<DayCheckInput> = {}): DayCheckInput => ({
+  clientId: 'c1',
+  date: '2025-01-07',
+  targets,
+  clientAllergens: [],
+  clientDislikes: [],
+  cells: [],
+  ...over,
+});
+
+// Cells whose macros sit exactly on a limit; each macro not under test is set so it raises nothing.
+const macroCells = (field: 'kcal' | 'netCarbsG' | 'proteinG', values: number[]): CheckCell[] =>
+  values.map((v, i) =>
+    cell({
+      slot: `s${i}`,
+      macros: {
+        kcal: field === 'kcal' ? v : 0,
+        netCarbsG: field === 'netCarbsG' ? v : 0,
+        proteinG: field === 'proteinG' ? v : i === 0 ? 100 : 0,
+        fatG: 0,
+      },
+    }),
+  );
+
+describe('defaults (common practice, no source; coach-editable)', () => {
+  it('protein floor 90 % of target, energy allowance 10 % over target', () => {
+    expect(Number(DEFAULT_CHECK_RULES.proteinFloorShare)).toBe(0.9);
+    expect(Number(DEFAULT_CHECK_RULES.energyOverShare)).toBe(0.1);
+  });
+});
+
+describe('macro limits at their boundaries (sums are exact decimals)', () => {
+  it.each([
+    // binary floats: 0.1 + 16.1 + 3.8 = 20.000000000000004, which would wrongly exceed the cap
+    { case: 'net carbs exactly at the 20 g cap', field: 'netCarbsG' as const, values: [0.1, 16.1, 3.8], kinds: [] },
+    { case: 'net carbs 20.1 g over the cap', field: 'netCarbsG' as const, values: [0.1, 16.1, 3.9], kinds: ['net-carbs-over'] },
+    // binary floats: 0.1 + 64.1 + 25.8 = 89.99999999999999, which would wrongly fall below the floor
+    { case: 'protein exactly at the 90 g floor', field: 'proteinG' as const, values: [0.1, 64.1, 25.8], kinds: [] },
+    { case: 'protein 89.9 g below the floor', field: 'proteinG' as const, values: [0.1, 64.1, 25.7], kinds: ['protein-short'] },
+    { case: 'energy exactly at 1800 × 1.1 = 1980 kcal', field: 'kcal' as const, values: [990, 990], kinds: [] },
+    { case: 'energy 1980.1 kcal', field: 'kcal' as const, values: [990, 990.1], kinds: ['energy-over'] },
+  ])('$case → $kinds', ({ field, values, kinds }) => {
+    const result = checkDay(day({ cells: macroCells(field, values) }));
+    expect(result.warnings.map((w) => w.kind)).toEqual(kinds);
+    expect(result.warnings.every((w) => w.severity === 'warn')).toBe(true);
+  });
+
+  it('reports the numbers behind a macro warning', () => {
+    const [w] = checkDay(day({ cells: macroCells('proteinG', [0.1, 64.1, 25.7]) })).warnings;
+    expect(w).toMatchObject({ kind: 'protein-short', actualG: 89.9, targetG: 100, floorG: 90, clientId: 'c1', date: '2025-01-07' });
+    expect(w.message).toContain('89.9 g');
+  });
+
+  it('uses coach-edited rules', () => {
+    const cells = macroCells('proteinG', [95]);
+    expect(checkDay(day({ cells })).warnings).toEqual([]);
+    expect(checkDay(day({ cells, rules: { proteinFloorShare: 1 } })).warnings.map((w) => w.kind)).toEqual(['protein-short']);
+  });
+});
+
+describe('a realistic day from USDA SR28 composition values (published-values §5)', () => {
+  // per 100 g: [kcal, protein g, fat g, carbohydrate − fiber g] from the SR28 ABBREV rows named
+  const SR28 = {
+    egg: [143, 12.56, 9.51, 0.72], // 01123 Egg, whole, raw
+    baconBaked: [548, 35.73, 43.27, 1.35], // 10860 Bacon, cooked, baked
+    cauliflower: [25, 1.92, 0.28, 2.97], // 11135 Cauliflower, raw
+    cheddar: [404, 22.87, 33.31, 3.09], // 01009 Cheese, cheddar
+    sausage: [325, 18.53, 27.25, 1.42], // 07064 Pork sausage, cooked, pan-fried
+    spinach: [23, 2.86, 0.39, 1.43], // 11457 Spinach, raw
+  } as const;
+  const macros = (parts: [keyof typeof SR28, number][]) => {
+    const sum = [0, 0, 0, 0];
+    for (const [food, grams] of parts) SR28[food].forEach((v, i) => (sum[i] += (v * grams) / 100));
+    return { kcal: sum[0], proteinG: sum[1], fatG: sum[2], netCarbsG: sum[3] };
+  };
+  // 3 large eggs (50 g each, SR28 portion) + 3 baked slices (8.1 g each); 200 g cauliflower + 56 g cheddar;
+  // 150 g sausage + 100 g spinach
+  const breakfast = macros([['egg', 150], ['baconBaked', 24.3]]);
+  const lunch = macros([['cauliflower', 200], ['cheddar', 56]]);
+  const dinner = macros([['sausage', 150], ['spinach', 100]]);
+  // Woman 65 kg, 165 cm, 40 y, lightly active (Mifflin 1990 worked example, published-values §7)
+  const womanTargets = computeTargets({ sex: 'female', weightKg: 65, heightCm: 165, ageYears: 40, activity: 'light', goal: 'maintain' });
+
+  const result = checkDay(day({
+    targets: womanTargets,
+    cells: [
+      cell({ slot: 'breakfast', macros: breakfast }),
+      cell({ slot: 'lunch', macros: lunch }),
+      cell({ slot: 'dinner', macros: dinner }),
+    ],
+  }));
+
+  it('sums the day to 0.1', () => {
+    expect(result.totals.kcal).toBeCloseTo(breakfast.kcal + lunch.kcal + dinner.kcal, 1);
+    expect(result.totals.proteinG).toBeCloseTo(breakfast.proteinG + lunch.proteinG + dinner.proteinG, 1);
+    expect(result.totals.netCarbsG).toBeCloseTo(breakfast.netCarbsG + lunch.netCarbsG + dinner.netCarbsG, 1);
+  });
+
+  it('stays under the 20 g net-carb cap and the energy limit, but is short of protein (about 75 g against a 88 g floor)', () => {
+    expect(result.warnings.map((w) => w.kind)).toEqual(['protein-short']);
+  });
+});
+
+describe('allergens (block unless overridden with a reason)', () => {
+  const plate = cell({ slot: 'dinner', allergens: ['egg', 'milk'] });
+  it.each([
+    { case: 'no override', overrides: undefined, severity: 'block', overridden: false },
+    { case: 'blank reason', overrides: [{ allergen: 'milk' as const, reason: '   ' }], severity: 'block', overridden: false },
+    { case: 'override with a reason', overrides: [{ allergen: 'milk' as const, reason: 'Lactose-free cheese; client confirmed' }], severity: 'warn', overridden: true },
+  ])('$case → $severity', ({ overrides, severity, overridden }) => {
+    const result = checkDay(day({ clientAllergens: ['milk', 'tree-nuts'], cells: [{ ...plate, allergenOverrides: overrides }] }));
+    const allergen = result.warnings.filter((w) => w.kind === 'allergen');
+    expect(allergen).toHaveLength(1);
+    expect(allergen[0]).toMatchObject({ allergen: 'milk', slot: 'dinner', severity, overridden });
+    expect(allergen[0].message).toContain('Milk');
+  });
+});
+
+describe('dislikes', () => {
+  it('matches names and tags case- and space-insensitively, once per term', () => {
+    const result = checkDay(day({
+      targets: { ...targets, proteinG: 0 },
+      clientDislikes: ['Cauliflower', 'mushrooms'],
+      cells: [cell({ slot: 'lunch', terms: ['cauliflower ', 'CAULIFLOWER', 'egg', 'mushroom'] })],
+    }));
+    expect(result.warnings.map((w) => (w.kind === 'dislike' ? [w.term, w.severity] : w.kind))).toEqual([['cauliflower', 'warn']]);
+  });
+
+  it.each([
+    { raw: '  Red   Onion ', normal: 'red onion' },
+    { raw: 'Cilantro', normal: 'cilantro' },
+  ])('normalizeTerm($raw) = $normal', ({ raw, normal }) => {
+    expect(normalizeTerm(raw)).toBe(normal);
+  });
+});
+
+describe('eat-by on the board (egg dish: FoodKeeper 3–4 days → 4; freezer 8 weeks)', () => {
+  const egg = STORAGE_DEFAULTS['egg-dish'];
+  const portion = { trayId: 'egg', prepDate: '2025-01-05', fridgeDays: egg.fridgeDays };
+  it.each([
+    { date: '2025-01-09', storage: 'fridge' as const, kind: null, severity: null },
+    { date: '2025-01-10', storage: 'fridge' as const, kind: 'past-eat-by', severity: 'block' },
+    { date: '2025-01-04', storage: 'fridge' as const, kind: 'before-prep', severity: 'block' },
+    { date: '2025-01-13', storage: 'frozen' as const, kind: null, severity: null },
+    { date: '2025-03-03', storage: 'frozen' as const, kind: 'past-freezer-quality', severity: 'warn' },
+  ])('$storage portion on $date → $kind', ({ date, storage, kind, severity }) => {
+    const result = checkDay(day({ date, cells: [cell({ portions: [{ ...portion, storage, freezerWeeks: egg.freezerWeeks }] })], targets: { ...targets, proteinG: 0 } }));
+    const found = result.warnings;
+    expect(found.map((w) => w.kind)).toEqual(kind ? [kind] : []);
+    if (severity) expect(found[0].severity).toBe(severity);
+  });
+
+  it('names the eat-by date', () => {
+    const [w] = checkDay(day({ date: '2025-01-10', cells: [cell({ portions: [portion] })], targets: { ...targets, proteinG: 0 } })).warnings;
+    expect(w).toMatchObject({ kind: 'past-eat-by', eatBy: '2025-01-09', prepDate: '2025-01-05', trayId: 'egg' });
+  });
+});
+
+describe('checkWeek', () => {
+  it('checks every client-day and lists blocks first', () => {
+    const { days, warnings } = checkWeek([
+      day({ clientId: 'a', cells: macroCells('netCarbsG', [25]) }),
+      day({ clientId: 'b', clientAllergens: ['sesame'], cells: [cell({ allergens: ['sesame'], macros: { kcal: 0, netCarbsG: 0, proteinG: 100, fatG: 0 } })] }),
+    ]);
+    expect(days.map((d) => d.clientId)).toEqual(['a', 'b']);
+    expect(warnings.map((w) => [w.clientId, w.kind, w.severity])).toEqual([
+      ['b', 'allergen', 'block'],
+      ['a', 'net-carbs-over', 'warn'],
+    ]);
+  });
+});
