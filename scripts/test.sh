@@ -1,0 +1,40 @@
+#!/usr/bin/env bash
+# npm test: install what is missing, start what the tests need, run every suite, print "N passed, N failed".
+set -uo pipefail
+here="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+cd "$here"
+source scripts/lib.sh
+ensure_node_modules "$here"
+ensure_chromium
+
+out="$here/.data/test-results"
+rm -rf "$out"; mkdir -p "$out"
+
+started_db=0
+pids=()
+cleanup() {
+  for p in "${pids[@]}"; do kill "$p" 2>/dev/null || true; done
+  wait 2>/dev/null || true
+  if [ "$started_db" = 1 ]; then bash scripts/db.sh stop >/dev/null 2>&1 || true; fi
+}
+trap cleanup EXIT
+
+if [ -z "${TEST_DATABASE_URL:-}" ]; then
+  if ! bash scripts/db.sh status >/dev/null 2>&1; then started_db=1; fi
+  bash scripts/db.sh start || die "could not start PostgreSQL"
+  export TEST_DATABASE_URL="$(bash scripts/db.sh url trayline_test)"
+  export E2E_DATABASE_URL="$(bash scripts/db.sh url trayline_e2e)"
+fi
+
+status=0
+log "unit, client and API suites (vitest)"
+node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$out/vitest.json" || status=1
+
+log "end-to-end journeys (Playwright, Debian's chromium)"
+node_modules/.bin/vite build --logLevel error || status=1
+node_modules/.bin/tsx scripts/e2e-db.ts || status=1
+PLAYWRIGHT_JSON_OUTPUT_NAME="$out/playwright.json" node_modules/.bin/playwright test -c tests/e2e/playwright.config.ts \
+  --reporter=list,json || status=1
+
+node scripts/test-summary.mjs "$out/vitest.json" "$out/playwright.json" || status=1
+exit $status

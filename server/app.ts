@@ -1,0 +1,121 @@
+import express, { type Express, Router } from 'express';
+import helmet from 'helmet';
+import session from 'express-session';
+import connectPgSimple from 'connect-pg-simple';
+import { pinoHttp } from 'pino-http';
+import pino from 'pino';
+import { randomUUID } from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Pool } from 'pg';
+import type { Env } from './config/env.js';
+import type { Orm } from './db/orm.js';
+import { errorHandler } from './http/error-handler.js';
+import { NotFound, Forbidden } from './http/errors.js';
+import { requestContext } from './http/request-context.js';
+import { configurePassport } from './modules/auth/passport.js';
+import { authRoutes } from './modules/auth/auth.routes.js';
+import { healthRoutes } from './modules/health/health.routes.js';
+import { apiModules } from './modules/index.js';
+
+export interface AppDeps {
+  orm: Orm;
+  pool: Pool;
+  env: Env;
+  logger?: pino.Logger;
+}
+
+/** CSRF: cookie-authenticated writes must carry this header (a cross-site form cannot set it; SameSite=Lax too). */
+export const CSRF_HEADER = 'x-trayline-csrf';
+
+/** Builds the app without listening (tests use it through supertest). */
+export function createApp({ orm, pool, env, logger }: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', env.TRUST_PROXY);
+
+  const log = logger ?? pino({ level: env.LOG_LEVEL });
+  app.use(
+    pinoHttp({
+      logger: log,
+      genReqId: (req, res) => {
+        const id = (req.headers['x-request-id'] as string) || randomUUID();
+        res.setHeader('x-request-id', id);
+        return id;
+      },
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      serializers: { req: (req) => ({ id: req.id, method: req.method, url: req.url }) },
+    }),
+  );
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+
+  const api = Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(requestContext(orm));
+
+  const PgStore = connectPgSimple(session);
+  api.use(
+    session({
+      name: 'trayline.sid',
+      secret: env.SESSION_SECRET,
+      store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: false }),
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      proxy: true,
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: env.COOKIE_SECURE === 'auto' ? 'auto' : env.COOKIE_SECURE === 'true',
+        maxAge: 14 * 86_400_000,
+      },
+    }),
+  );
+  const passport = configurePassport();
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use((req, _res, next) => {
+    if (req.user) req.actor = req.user;
+    next();
+  });
+  api.use((req, _res, next) => {
+    const safe = req.method === 'GET' || req.method === 'HEAD' || req.method === 'OPTIONS';
+    if (!safe && req.get(CSRF_HEADER) !== '1') return next(new Forbidden(`Missing ${CSRF_HEADER} header`));
+    next();
+  });
+
+  api.use(authRoutes({ pool, loginLimit: env.LOGIN_RATE_LIMIT, publicUrl: env.PUBLIC_URL }));
+  for (const mod of apiModules({ orm, pool, env })) api.use(mod);
+  api.use((req, _res, next) => next(new NotFound(`No API route ${req.method} ${req.originalUrl}`)));
+
+  // Health must answer even when the session store (PostgreSQL) is down: mount it before the session too.
+  app.use('/api', healthRoutes(orm));
+  app.use('/api', api);
+
+  if (env.SERVE_CLIENT === '1') {
+    const dist = path.resolve('dist/client');
+    if (fs.existsSync(path.join(dist, 'index.html'))) {
+      app.use(express.static(dist, { index: false, maxAge: '1h' }));
+      app.get('/{*splat}', (_req, res) => res.sendFile(path.join(dist, 'index.html')));
+    }
+  }
+  app.use(errorHandler());
+  return app;
+}

@@ -1,0 +1,15 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { seedDemo, type DemoStep } from './demo-seed.js';
+
+/**
+ * Reference data every workspace can use (idempotent, run on every start), then the demo workspace.
+ * Modules add their reference seeds and demo steps here.
+ */
+export const referenceSeeds: ((em: EntityManager) => Promise<void>)[] = [];
+export const demoSteps: DemoStep[] = [];
+
+export async function seedAll(em: EntityManager, opts: { demo: boolean }) {
+  for (const seed of referenceSeeds) await seed(em.fork());
+  if (!opts.demo) return { demo: false };
+  return { demo: await seedDemo(em.fork(), demoSteps) };
+}

@@ -1,0 +1,62 @@
+import type { NextFunction, Request, RequestHandler, Response } from 'express';
+import { Forbidden, NotFound, Unauthorized } from './errors.js';
+import type { Role } from '@shared/schemas/auth.schema.js';
+
+/**
+ * The one authorization layer. Every route's first handler is `allow(...)`: a role check, plus the workspace scope
+ * taken from the session (never from the request). Services receive the Actor and filter by `actor.workspaceId`;
+ * an id from another workspace is simply not found (404), so ids cannot be probed.
+ */
+export interface Actor {
+  userId: number;
+  email: string;
+  name: string;
+  role: Role;
+  workspaceId: number;
+  /** For a client member: their client profile id (their own plan data only). */
+  clientId: number | null;
+}
+
+export type Access = 'public' | 'signed-in' | readonly Role[];
+export const ACCESS = Symbol('trayline.access');
+export type Guard = RequestHandler & { [ACCESS]: Access };
+
+export function allow(...roles: Role[]): Guard;
+export function allow(access: 'public' | 'signed-in'): Guard;
+export function allow(...args: (Role | 'public' | 'signed-in')[]): Guard {
+  const access: Access =
+    args.length === 1 && (args[0] === 'public' || args[0] === 'signed-in') ? args[0] : (args as Role[]);
+  const guard = ((req: Request, _res: Response, next: NextFunction) => {
+    if (access === 'public') return next();
+    const actor = req.actor;
+    if (!actor) return next(new Unauthorized());
+    if (access === 'signed-in' || access.includes(actor.role)) return next();
+    next(new Forbidden());
+  }) as Guard;
+  guard[ACCESS] = access;
+  return guard;
+}
+
+export function actorOf(req: Request): Actor {
+  if (!req.actor) throw new Unauthorized();
+  return req.actor;
+}
+
+/** Loads a row and checks it belongs to the actor's workspace; otherwise "not found". */
+export function inWorkspace<T extends { workspace: unknown }>(actor: Actor, row: T | null, what: string): T {
+  if (!row) throw new NotFound(what);
+  const ws = row.workspace as { id?: number } | number;
+  const id = typeof ws === 'number' ? ws : ws?.id;
+  if (id !== actor.workspaceId) throw new NotFound(what);
+  return row;
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface Request {
+      actor?: Actor;
+      id?: string | number | object;
+    }
+  }
+}

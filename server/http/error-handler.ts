@@ -1,0 +1,96 @@
+import type { NextFunction, Request, Response } from 'express';
+import { ZodError } from 'zod';
+import {
+  NotFoundError,
+  OptimisticLockError,
+  UniqueConstraintViolationException,
+  ForeignKeyConstraintViolationException,
+  ConnectionException,
+} from '@mikro-orm/core';
+import type { Problem } from '@shared/problem.js';
+import { HttpError } from './errors.js';
+
+const TITLES: Record<number, string> = {
+  400: 'Bad request',
+  401: 'Not signed in',
+  403: 'Forbidden',
+  404: 'Not found',
+  409: 'Conflict',
+  413: 'Payload too large',
+  415: 'Unsupported media type',
+  429: 'Too many requests',
+  500: 'Internal server error',
+  503: 'Service unavailable',
+};
+
+function problem(status: number, code: string, detail: string, extra: Partial<Problem> = {}): Problem {
+  return { type: `https://trayline.test/problems/${code}`, title: TITLES[status] ?? 'Error', status, code, detail, ...extra };
+}
+
+export function zodToErrors(err: ZodError, where?: string): Record<string, string[]> {
+  const errors: Record<string, string[]> = {};
+  for (const issue of err.issues) {
+    const path = issue.path.length ? issue.path.join('.') : (where ?? 'body');
+    (errors[path] ??= []).push(issue.message);
+  }
+  return errors;
+}
+
+/** The one error middleware: every failure becomes an RFC 9457 problem; no stack in any body. */
+export function errorHandler() {
+  // eslint-disable-next-line @typescript-eslint/no-unused-vars
+  return (err: unknown, req: Request, res: Response, _next: NextFunction) => {
+    const requestId = String(req.id ?? '');
+    let body: Problem;
+    if (err instanceof ZodError) {
+      const errors = zodToErrors(err, (err as unknown as { where?: string }).where);
+      const fields = Object.keys(errors);
+      body = problem(400, 'validation', `Check ${fields.join(', ')}: ${Object.values(errors)[0]?.[0] ?? ''}`.trim(), {
+        errors,
+      });
+    } else if (err instanceof HttpError) {
+      body = problem(err.status, err.code, err.message, err.extra as Partial<Problem>);
+    } else if (err instanceof OptimisticLockError) {
+      const entity = (err as unknown as { entity?: { version?: number } }).entity;
+      body = problem(409, 'stale_version', 'Someone else changed this since you opened it', {
+        currentVersion: entity?.version ?? null,
+      });
+    } else if (err instanceof NotFoundError) {
+      body = problem(404, 'not_found', 'Not found');
+    } else if (err instanceof UniqueConstraintViolationException) {
+      body = problem(409, 'duplicate', 'That already exists');
+    } else if (err instanceof ForeignKeyConstraintViolationException) {
+      body = problem(409, 'in_use', 'This is still used elsewhere');
+    } else if (isBodyParserError(err)) {
+      const status = err.status ?? 400;
+      const detail =
+        err.type === 'entity.parse.failed'
+          ? 'The request body is not valid JSON'
+          : err.type === 'entity.too.large'
+            ? 'The request body is too large'
+            : 'The request body could not be read';
+      body = problem(status, err.type === 'entity.too.large' ? 'too_large' : 'bad_body', detail);
+    } else if (err instanceof ConnectionException || isConnectionError(err)) {
+      req.log?.warn({ err }, 'database unavailable');
+      body = problem(503, 'db_unavailable', 'The database is not reachable; try again shortly', { requestId });
+    } else {
+      req.log?.error({ err }, 'unhandled error');
+      body = problem(500, 'internal', `Something went wrong. Quote request id ${requestId} when reporting it.`, {
+        requestId,
+      });
+    }
+    if (body.status >= 500) body.requestId = requestId;
+    res.status(body.status).type('application/problem+json').json(body);
+  };
+}
+
+function isBodyParserError(err: unknown): err is { status?: number; type?: string } {
+  return !!err && typeof err === 'object' && 'type' in err && typeof (err as { type: unknown }).type === 'string' &&
+    String((err as { type: string }).type).startsWith('entity.');
+}
+
+function isConnectionError(err: unknown): boolean {
+  const code = (err as { code?: string })?.code;
+  const msg = (err as { message?: string })?.message ?? '';
+  return code === 'ECONNREFUSED' || code === '57P01' || /Knex: Timeout acquiring a connection|Connection terminated/.test(msg);
+}

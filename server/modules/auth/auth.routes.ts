@@ -1,0 +1,158 @@
+import { Router } from 'express';
+import rateLimit, { ipKeyGenerator } from 'express-rate-limit';
+import type { Pool } from 'pg';
+import { z } from 'zod';
+import {
+  acceptInvitationSchema,
+  changePasswordSchema,
+  createInvitationSchema,
+  loginSchema,
+  registerSchema,
+  updatePreferencesSchema,
+  type InvitationDto,
+} from '@shared/schemas/auth.schema.js';
+import { actorOf, allow } from '../../http/authz.js';
+import { BadCredentials, Forbidden, TooMany } from '../../http/errors.js';
+import { PgRateLimitStore } from '../../http/rate-limit-store.js';
+import { emOf } from '../../http/request-context.js';
+import { validated } from '../../http/validate.js';
+import * as auth from './auth.service.js';
+import { authenticateLocal, signIn, signOut } from './passport.js';
+import type { IInvitation } from './user.entity.js';
+
+const FIFTEEN_MIN = 15 * 60_000;
+
+function presentInvitation(inv: IInvitation, link?: string): InvitationDto {
+  return {
+    id: inv.id,
+    email: inv.email,
+    role: inv.role as InvitationDto['role'],
+    expiresAt: inv.expiresAt.toISOString(),
+    acceptedAt: inv.acceptedAt ? inv.acceptedAt.toISOString() : null,
+    ...(link ? { link } : {}),
+  };
+}
+
+export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: string }) {
+  const r = Router();
+
+  // Login: 429 after `loginLimit` failures in 15 minutes, counted per e-mail and per IP, in PostgreSQL.
+  const limiter = (prefix: string, limit: number, key: (req: import('express').Request) => string) =>
+    rateLimit({
+      windowMs: FIFTEEN_MIN,
+      limit,
+      skipSuccessfulRequests: true,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      store: new PgRateLimitStore(opts.pool, prefix),
+      keyGenerator: key,
+      handler: (_req, _res, next) => next(new TooMany('Too many failed sign-ins; wait 15 minutes and try again')),
+    });
+  const byEmail = limiter('login-email', opts.loginLimit, (req) => String(req.body?.email ?? '').trim().toLowerCase() || 'none');
+  // Per IP a wider limit (ten times the per-e-mail one): it stops spraying many e-mails from one address.
+  const byIp = limiter('login-ip', opts.loginLimit * 10, (req) => ipKeyGenerator(req.ip ?? '0.0.0.0'));
+
+  r.post(
+    '/auth/login',
+    allow('public'),
+    byIp,
+    byEmail,
+    validated({ body: loginSchema }, async ({ body }, req, res) => {
+      req.body = body; // normalised e-mail for passport-local
+      const { actor, message } = await authenticateLocal(req, res, () => undefined);
+      if (!actor) throw message === 'This account has no workspace' ? new Forbidden(message) : new BadCredentials();
+      await signIn(req, actor);
+      return auth.me(emOf(req), actor);
+    }),
+  );
+
+  r.post(
+    '/auth/register',
+    allow('public'),
+    validated({ body: registerSchema }, async ({ body }, req, res) => {
+      const em = emOf(req);
+      const userId = await auth.register(em, body);
+      const actor = (await auth.loadActor(em, userId))!;
+      await signIn(req, actor);
+      res.status(201);
+      return auth.me(em, actor);
+    }),
+  );
+
+  r.post(
+    '/auth/logout',
+    allow('public'),
+    validated({}, async (_input, req) => {
+      if (req.isAuthenticated?.()) await signOut(req);
+    }),
+  );
+
+  r.get(
+    '/auth/me',
+    allow('signed-in'),
+    validated({}, (_i, req) => auth.me(emOf(req), actorOf(req))),
+  );
+
+  r.patch(
+    '/auth/me',
+    allow('signed-in'),
+    validated({ body: updatePreferencesSchema }, async ({ body }, req) => {
+      await auth.updatePreferences(emOf(req), actorOf(req), body);
+      return auth.me(emOf(req), actorOf(req));
+    }),
+  );
+
+  r.post(
+    '/auth/password',
+    allow('signed-in'),
+    validated({ body: changePasswordSchema }, async ({ body }, req) => {
+      await auth.changePassword(emOf(req), actorOf(req), body);
+    }),
+  );
+
+  r.get(
+    '/invitations',
+    allow('coach'),
+    validated({}, async (_i, req) => (await auth.listInvitations(emOf(req), actorOf(req))).map((i) => presentInvitation(i))),
+  );
+
+  r.post(
+    '/invitations',
+    allow('coach'),
+    validated({ body: createInvitationSchema }, async ({ body }, req, res) => {
+      const { invitation, link } = await auth.createInvitation(emOf(req), actorOf(req), body, opts.publicUrl);
+      res.status(201);
+      return presentInvitation(invitation, link);
+    }),
+  );
+
+  const idParams = z.object({ id: z.coerce.number().int().positive() });
+  r.delete(
+    '/invitations/:id',
+    allow('coach'),
+    validated({ params: idParams }, async ({ params }, req) => {
+      await auth.revokeInvitation(emOf(req), actorOf(req), params.id);
+    }),
+  );
+
+  const tokenParams = z.object({ token: z.string().min(20).max(200) });
+  r.get(
+    '/invitations/:token',
+    allow('public'),
+    validated({ params: tokenParams }, ({ params }, req) => auth.peekInvitation(emOf(req), params.token)),
+  );
+
+  r.post(
+    '/invitations/:token/accept',
+    allow('public'),
+    validated({ params: tokenParams, body: acceptInvitationSchema }, async ({ params, body }, req, res) => {
+      const em = emOf(req);
+      const userId = await auth.acceptInvitation(em, params.token, body);
+      const actor = (await auth.loadActor(em, userId))!;
+      await signIn(req, actor);
+      return auth.me(em, actor);
+    }),
+  );
+
+  return r;
+}

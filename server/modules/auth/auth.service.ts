@@ -1,0 +1,168 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import type { Actor } from '../../http/authz.js';
+import { BadCredentials, Conflict, NotFound, ValidationError } from '../../http/errors.js';
+import type {
+  AcceptInvitationInput,
+  ChangePasswordInput,
+  CreateInvitationInput,
+  MeDto,
+  RegisterInput,
+  Role,
+  UpdatePreferencesInput,
+} from '@shared/schemas/auth.schema.js';
+import { Workspace } from '../workspaces/workspace.entity.js';
+import { Invitation, Membership, User, type IUser } from './user.entity.js';
+import { burnVerify, hashPassword, verifyPassword } from './passwords.js';
+import { hashToken, newToken } from './tokens.js';
+
+const INVITATION_DAYS = 14;
+
+/** The actor of a user: their (first) membership decides workspace and role. */
+export async function loadActor(em: EntityManager, userId: number): Promise<Actor | null> {
+  const m = await em.findOne(
+    Membership,
+    { user: userId },
+    { populate: ['user', 'workspace'], orderBy: { id: 'asc' } },
+  );
+  if (!m) return null;
+  const user = m.user.unwrap();
+  return {
+    userId: user.id,
+    email: user.email,
+    name: user.name,
+    role: m.role as Role,
+    workspaceId: m.workspace.id,
+    clientId: m.clientId ?? null,
+  };
+}
+
+export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
+  const user = await em.findOneOrFail(User, actor.userId);
+  const ws = await em.findOneOrFail(Workspace, actor.workspaceId);
+  return {
+    id: user.id,
+    email: user.email,
+    name: user.name,
+    role: actor.role,
+    workspaceId: ws.id,
+    workspaceName: ws.name,
+    clientId: actor.clientId,
+    unitSystem: user.unitSystem as MeDto['unitSystem'],
+    tempUnit: user.tempUnit as MeDto['tempUnit'],
+  };
+}
+
+/** Checks e-mail and password; the same answer for an unknown e-mail and a wrong password. */
+export async function checkCredentials(em: EntityManager, email: string, password: string): Promise<number> {
+  const user = await em.findOne(User, { email });
+  if (!user) {
+    await burnVerify(password);
+    throw new BadCredentials();
+  }
+  if (!(await verifyPassword(user.passwordHash, password))) throw new BadCredentials();
+  return user.id;
+}
+
+export async function register(em: EntityManager, input: RegisterInput): Promise<number> {
+  const passwordHash = await hashPassword(input.password);
+  return em.transactional(async (tx) => {
+    if (await tx.count(User, { email: input.email })) {
+      throw new ValidationError('An account with this e-mail already exists', {
+        email: ['An account with this e-mail already exists; sign in instead'],
+      });
+    }
+    const ws = tx.create(Workspace, { name: input.businessName });
+    const user = tx.create(User, { email: input.email, name: input.name, passwordHash });
+    tx.create(Membership, { user, workspace: ws, role: 'coach' });
+    await tx.flush();
+    return user.id;
+  });
+}
+
+export async function createInvitation(
+  em: EntityManager,
+  actor: Actor,
+  input: CreateInvitationInput,
+  publicUrl: string,
+) {
+  if (input.role === 'client' && input.clientId === undefined) {
+    // A client invitation without a profile is allowed: the coach links it later.
+  }
+  const existing = await em.findOne(Membership, { workspace: actor.workspaceId, user: { email: input.email } });
+  if (existing) {
+    throw new ValidationError('Already a member', { email: ['This person is already a member of your workspace'] });
+  }
+  const { token, hash } = newToken();
+  const inv = em.create(Invitation, {
+    workspace: actor.workspaceId,
+    email: input.email,
+    role: input.role,
+    clientId: input.clientId ?? null,
+    tokenHash: hash,
+    expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+    invitedBy: actor.userId,
+  });
+  await em.flush();
+  return { invitation: inv, link: `${publicUrl.replace(/\/$/, '')}/invite/${token}` };
+}
+
+export async function listInvitations(em: EntityManager, actor: Actor) {
+  return em.find(Invitation, { workspace: actor.workspaceId }, { orderBy: { id: 'desc' } });
+}
+
+export async function revokeInvitation(em: EntityManager, actor: Actor, id: number) {
+  const inv = await em.findOne(Invitation, { id, workspace: actor.workspaceId });
+  if (!inv) throw new NotFound('Invitation');
+  if (inv.acceptedAt) throw new Conflict('This invitation was already accepted');
+  await em.removeAndFlush(inv);
+}
+
+async function openInvitation(em: EntityManager, token: string) {
+  const inv = await em.findOne(Invitation, { tokenHash: hashToken(token) }, { populate: ['workspace'] });
+  if (!inv || inv.acceptedAt || inv.expiresAt.getTime() < Date.now()) {
+    throw new NotFound('Invitation (it may have expired or been used)');
+  }
+  return inv;
+}
+
+export async function peekInvitation(em: EntityManager, token: string) {
+  const inv = await openInvitation(em, token);
+  return { email: inv.email, role: inv.role as Role, workspaceName: inv.workspace.unwrap().name };
+}
+
+export async function acceptInvitation(em: EntityManager, token: string, input: AcceptInvitationInput): Promise<number> {
+  return em.transactional(async (tx) => {
+    const inv = await openInvitation(tx, token);
+    let user: IUser | null = await tx.findOne(User, { email: inv.email });
+    if (user) {
+      // An existing account joins with its own password.
+      if (!(await verifyPassword(user.passwordHash, input.password))) {
+        throw new ValidationError('Wrong password', {
+          password: ['This e-mail already has an account: enter its password to join'],
+        });
+      }
+    } else {
+      user = tx.create(User, { email: inv.email, name: input.name, passwordHash: await hashPassword(input.password) });
+    }
+    tx.create(Membership, { user, workspace: inv.workspace, role: inv.role, clientId: inv.clientId ?? null });
+    inv.acceptedAt = new Date();
+    await tx.flush();
+    return user.id;
+  });
+}
+
+export async function changePassword(em: EntityManager, actor: Actor, input: ChangePasswordInput) {
+  const user = await em.findOneOrFail(User, actor.userId);
+  if (!(await verifyPassword(user.passwordHash, input.currentPassword))) {
+    throw new ValidationError('Wrong password', { currentPassword: ['Your current password is not right'] });
+  }
+  user.passwordHash = await hashPassword(input.newPassword);
+  await em.flush();
+}
+
+export async function updatePreferences(em: EntityManager, actor: Actor, input: UpdatePreferencesInput) {
+  const user = await em.findOneOrFail(User, actor.userId);
+  if (input.unitSystem) user.unitSystem = input.unitSystem;
+  if (input.tempUnit) user.tempUnit = input.tempUnit;
+  await em.flush();
+}

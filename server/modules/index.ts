@@ -1,0 +1,15 @@
+// Every API module's router, in one list. Each router's routes start with `allow(...)` (see http/authz.ts).
+import type { Router } from 'express';
+import type { Pool } from 'pg';
+import type { Env } from '../config/env.js';
+import type { Orm } from '../db/orm.js';
+
+export interface ModuleDeps {
+  orm: Orm;
+  pool: Pool;
+  env: Env;
+}
+
+export function apiModules(_deps: ModuleDeps): Router[] {
+  return [];
+}

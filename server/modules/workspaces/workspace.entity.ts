@@ -1,0 +1,20 @@
+import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
+
+/** A coach's business. Every row of the product belongs to one workspace. */
+export const Workspace = defineEntity({
+  name: 'Workspace',
+  tableName: 'workspace',
+  properties: {
+    id: p.integer().primary().autoincrement(),
+    name: p.string().length(120),
+    /** Net-carb rule: 'half-other-polyols' (default), 'full', 'fiber-only'. */
+    netCarbRule: p.string().length(40).default('half-other-polyols'),
+    /** Meal slots of the week board, in order. */
+    mealSlots: p.json<string[]>().default(JSON.stringify(['breakfast'])),
+    isDemo: p.boolean().default(false),
+    version: p.integer().version(),
+    createdAt: p.datetime().onCreate(() => new Date()),
+    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+  },
+});
+export type IWorkspace = InferEntity<typeof Workspace>;

@@ -1,0 +1,76 @@
+import { z } from 'zod';
+
+export const ROLES = ['coach', 'assistant', 'client'] as const;
+export const roleSchema = z.enum(ROLES);
+export type Role = z.infer<typeof roleSchema>;
+
+const email = z.string().trim().toLowerCase().pipe(z.email({ message: 'Enter a valid e-mail address' }));
+const password = z
+  .string()
+  .min(10, { message: 'Use at least 10 characters' })
+  .max(200, { message: 'Use at most 200 characters' });
+const personName = z.string().trim().min(1, { message: 'Enter a name' }).max(120);
+
+export const loginSchema = z.object({
+  email,
+  password: z.string().min(1, { message: 'Enter your password' }).max(200),
+});
+export type LoginInput = z.infer<typeof loginSchema>;
+
+export const registerSchema = z.object({
+  name: personName,
+  email,
+  password,
+  businessName: z.string().trim().min(1, { message: 'Enter your business name' }).max(120),
+});
+export type RegisterInput = z.infer<typeof registerSchema>;
+
+export const createInvitationSchema = z.object({
+  email,
+  role: z.enum(['assistant', 'client']),
+  /** For a client invitation: the client profile this person will see. */
+  clientId: z.number().int().positive().optional(),
+});
+export type CreateInvitationInput = z.infer<typeof createInvitationSchema>;
+
+export const acceptInvitationSchema = z.object({ name: personName, password });
+export type AcceptInvitationInput = z.infer<typeof acceptInvitationSchema>;
+
+export const changePasswordSchema = z.object({
+  currentPassword: z.string().min(1, { message: 'Enter your current password' }).max(200),
+  newPassword: password,
+});
+export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
+
+export const requestPasswordResetSchema = z.object({ email });
+export const resetPasswordSchema = z.object({ token: z.string().min(20).max(200), newPassword: password });
+
+export const UNIT_SYSTEMS = ['us', 'metric'] as const;
+export const TEMP_UNITS = ['F', 'C'] as const;
+export const updatePreferencesSchema = z.object({
+  unitSystem: z.enum(UNIT_SYSTEMS).optional(),
+  tempUnit: z.enum(TEMP_UNITS).optional(),
+});
+export type UpdatePreferencesInput = z.infer<typeof updatePreferencesSchema>;
+
+export interface MeDto {
+  id: number;
+  email: string;
+  name: string;
+  role: Role;
+  workspaceId: number;
+  workspaceName: string;
+  clientId: number | null;
+  unitSystem: (typeof UNIT_SYSTEMS)[number];
+  tempUnit: (typeof TEMP_UNITS)[number];
+}
+
+export interface InvitationDto {
+  id: number;
+  email: string;
+  role: Role;
+  expiresAt: string;
+  acceptedAt: string | null;
+  /** Only present in the response that creates it: the token is stored hashed. */
+  link?: string;
+}

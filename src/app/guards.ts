@@ -1,0 +1,27 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { redirect, type LoaderFunctionArgs } from 'react-router-dom';
+import { meQuery } from '@/features/auth/api/auth.queries';
+import { paths } from '@/config/paths';
+import type { Role } from '@shared/schemas/auth.schema';
+
+/** Loader for the signed-in area: no session → sign-in, then back here. */
+export function requireSignedIn(qc: QueryClient) {
+  return async ({ request }: LoaderFunctionArgs) => {
+    const me = await qc.ensureQueryData(meQuery());
+    if (!me) {
+      const url = new URL(request.url);
+      throw redirect(`${paths.signIn}?next=${encodeURIComponent(url.pathname + url.search)}`);
+    }
+    return null;
+  };
+}
+
+/** Loader for a page only some roles may open. */
+export function requireRole(qc: QueryClient, roles: Role[]) {
+  return async () => {
+    const me = await qc.ensureQueryData(meQuery());
+    if (me && !roles.includes(me.role)) throw new Response('Not found', { status: 404 });
+    return null;
+  };
+}
+

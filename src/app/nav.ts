@@ -1,0 +1,15 @@
+import type { Role } from '@shared/schemas/auth.schema';
+import { paths } from '@/config/paths';
+
+export interface NavItem {
+  to: string;
+  label: string;
+  roles: Role[];
+}
+
+/** Role-aware navigation: each page appears only for the roles that may open it. */
+export const NAV: NavItem[] = [
+  { to: paths.home, label: 'This week', roles: ['coach', 'assistant'] },
+  { to: paths.team, label: 'Team & clients', roles: ['coach'] },
+  { to: paths.settings, label: 'Settings', roles: ['coach', 'assistant', 'client'] },
+];

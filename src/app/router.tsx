@@ -1,0 +1,28 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { requireSignedIn } from './guards';
+import { AppShell } from './layout/app-shell';
+import { NotFoundPage, RouteError } from './route-error';
+import { appRoutes } from './routes';
+
+export function createRouter(qc: QueryClient) {
+  const routes: RouteObject[] = [
+    {
+      errorElement: <RouteError />,
+      children: [
+        { path: paths.signIn, lazy: () => import('./routes/auth/sign-in.route') },
+        { path: paths.register, lazy: () => import('./routes/auth/register.route') },
+        { path: paths.invite(), lazy: () => import('./routes/auth/accept-invite.route') },
+        {
+          loader: requireSignedIn(qc),
+          element: <AppShell />,
+          errorElement: <RouteError />,
+          children: appRoutes(qc).map((r) => ({ ...r, errorElement: <RouteError /> })),
+        },
+        { path: '*', element: <NotFoundPage /> },
+      ],
+    },
+  ];
+  return createBrowserRouter(routes);
+}

@@ -1,0 +1,13 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { RouteObject } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { requireRole } from './guards';
+
+/** The signed-in pages. Each page module exports `Component` (and may export a `loader` factory). */
+export function appRoutes(qc: QueryClient): RouteObject[] {
+  return [
+    { index: true, lazy: () => import('./routes/home/home.route') },
+    { path: paths.settings, lazy: () => import('./routes/settings/settings.route') },
+    { path: paths.team, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/team/team.route') },
+  ];
+}

@@ -1,0 +1,30 @@
+import { Link, Navigate } from 'react-router-dom';
+import { useMe } from '@/features/auth/hooks/use-me';
+import { Card, PageHeader } from '@/components/ui/states';
+import { Cautions } from '@/components/domain/cautions';
+import { NAV } from '@/app/nav';
+import { paths } from '@/config/paths';
+
+export function Component() {
+  const me = useMe();
+  if (me.role === 'client' && NAV.some((n) => n.to === paths.myPlates)) return <Navigate to={paths.myPlates} replace />;
+  const links = NAV.filter((n) => n.roles.includes(me.role) && n.to !== paths.home);
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader title={`Hello, ${me.name.split(' ')[0]}`} lead={me.workspaceName} />
+      <Card>
+        <h2 className="mb-3 text-xl">Where to go</h2>
+        <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3">
+          {links.map((l) => (
+            <li key={l.to}>
+              <Link to={l.to} className="flex min-h-11 items-center rounded-lg border border-line-strong bg-paper px-3 font-bold hover:bg-paper-deep">
+                {l.label}
+              </Link>
+            </li>
+          ))}
+        </ul>
+      </Card>
+      <Cautions />
+    </div>
+  );
+}

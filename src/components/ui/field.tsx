@@ -1,0 +1,82 @@
+import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
+
+interface FieldShellProps {
+  label: string;
+  error?: string;
+  hint?: ReactNode;
+  children: (ids: { id: string; describedBy?: string }) => ReactNode;
+  className?: string;
+}
+
+/** A labelled control with its hint and its error, wired for screen readers. */
+export function FieldShell({ label, error, hint, children, className = '' }: FieldShellProps) {
+  const id = useId();
+  const hintId = hint ? `${id}-hint` : undefined;
+  const errId = error ? `${id}-err` : undefined;
+  const describedBy = [hintId, errId].filter(Boolean).join(' ') || undefined;
+  return (
+    <div className={`flex flex-col gap-1 ${className}`}>
+      <label htmlFor={id} className="text-sm font-bold text-ink">
+        {label}
+      </label>
+      {children({ id, describedBy })}
+      {hint && (
+        <p id={hintId} className="text-sm text-ink-faint">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={errId} role="alert" className="flex items-start gap-1 text-sm font-bold text-signal">
+          <span aria-hidden>⚠</span> {error}
+        </p>
+      )}
+    </div>
+  );
+}
+
+const control =
+  'min-h-11 w-full rounded-lg border border-line-strong bg-paper-card px-3 py-2 text-ink placeholder:text-ink-faint aria-[invalid=true]:border-signal';
+
+type InputProps = InputHTMLAttributes<HTMLInputElement> & { label: string; error?: string; hint?: ReactNode };
+export const TextField = forwardRef<HTMLInputElement, InputProps>(function TextField(
+  { label, error, hint, className, ...rest },
+  ref,
+) {
+  return (
+    <FieldShell label={label} error={error} hint={hint} className={className}>
+      {({ id, describedBy }) => (
+        <input ref={ref} id={id} aria-describedby={describedBy} aria-invalid={!!error} className={control} {...rest} />
+      )}
+    </FieldShell>
+  );
+});
+
+type SelectProps = SelectHTMLAttributes<HTMLSelectElement> & { label: string; error?: string; hint?: ReactNode };
+export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function SelectField(
+  { label, error, hint, className, children, ...rest },
+  ref,
+) {
+  return (
+    <FieldShell label={label} error={error} hint={hint} className={className}>
+      {({ id, describedBy }) => (
+        <select ref={ref} id={id} aria-describedby={describedBy} aria-invalid={!!error} className={control} {...rest}>
+          {children}
+        </select>
+      )}
+    </FieldShell>
+  );
+});
+
+type AreaProps = TextareaHTMLAttributes<HTMLTextAreaElement> & { label: string; error?: string; hint?: ReactNode };
+export const TextAreaField = forwardRef<HTMLTextAreaElement, AreaProps>(function TextAreaField(
+  { label, error, hint, className, ...rest },
+  ref,
+) {
+  return (
+    <FieldShell label={label} error={error} hint={hint} className={className}>
+      {({ id, describedBy }) => (
+        <textarea ref={ref} id={id} aria-describedby={describedBy} aria-invalid={!!error} className={control} {...rest} />
+      )}
+    </FieldShell>
+  );
+});

@@ -1,0 +1,6 @@
+export const authKeys = {
+  all: ['auth'] as const,
+  me: () => [...authKeys.all, 'me'] as const,
+  invitations: () => [...authKeys.all, 'invitations'] as const,
+  invitation: (token: string) => [...authKeys.all, 'invitation', token] as const,
+};

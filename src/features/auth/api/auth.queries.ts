@@ -1,0 +1,30 @@
+import { queryOptions } from '@tanstack/react-query';
+import type { InvitationDto, MeDto, Role } from '@shared/schemas/auth.schema';
+import { api } from '@/lib/api-client';
+import { isApiError } from '@/lib/problem';
+import { authKeys } from './auth.keys';
+
+/** The signed-in person, or null when signed out (a 401 is an answer here, not an error). */
+export const meQuery = () =>
+  queryOptions({
+    queryKey: authKeys.me(),
+    queryFn: async (): Promise<MeDto | null> => {
+      try {
+        return await api.get<MeDto>('/auth/me');
+      } catch (e) {
+        if (isApiError(e, 401)) return null;
+        throw e;
+      }
+    },
+    staleTime: 5 * 60_000,
+  });
+
+export const invitationsQuery = () =>
+  queryOptions({ queryKey: authKeys.invitations(), queryFn: () => api.get<InvitationDto[]>('/invitations') });
+
+export const invitationQuery = (token: string) =>
+  queryOptions({
+    queryKey: authKeys.invitation(token),
+    queryFn: () => api.get<{ email: string; role: Role; workspaceName: string }>(`/invitations/${token}`),
+    retry: false,
+  });

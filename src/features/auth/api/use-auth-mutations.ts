@@ -1,0 +1,92 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type {
+  AcceptInvitationInput,
+  ChangePasswordInput,
+  CreateInvitationInput,
+  InvitationDto,
+  LoginInput,
+  MeDto,
+  RegisterInput,
+  UpdatePreferencesInput,
+} from '@shared/schemas/auth.schema';
+import { api } from '@/lib/api-client';
+import { authKeys } from './auth.keys';
+
+export function useLogin() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: LoginInput) => api.post<MeDto>('/auth/login', input),
+    meta: { form: true },
+    onSuccess: (me) => {
+      qc.clear();
+      qc.setQueryData(authKeys.me(), me);
+    },
+  });
+}
+
+export function useRegister() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: RegisterInput) => api.post<MeDto>('/auth/register', input),
+    meta: { form: true },
+    onSuccess: (me) => {
+      qc.clear();
+      qc.setQueryData(authKeys.me(), me);
+    },
+  });
+}
+
+export function useAcceptInvitation(token: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: AcceptInvitationInput) => api.post<MeDto>(`/invitations/${token}/accept`, input),
+    meta: { form: true },
+    onSuccess: (me) => {
+      qc.clear();
+      qc.setQueryData(authKeys.me(), me);
+    },
+  });
+}
+
+export function useLogout() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.post<void>('/auth/logout'),
+    onSuccess: () => {
+      qc.clear();
+      qc.setQueryData(authKeys.me(), null);
+    },
+  });
+}
+
+export function useUpdatePreferences() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: UpdatePreferencesInput) => api.patch<MeDto>('/auth/me', input),
+    onSuccess: (me) => qc.setQueryData(authKeys.me(), me),
+  });
+}
+
+export function useChangePassword() {
+  return useMutation({
+    mutationFn: (input: ChangePasswordInput) => api.post<void>('/auth/password', input),
+    meta: { form: true },
+  });
+}
+
+export function useCreateInvitation() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: CreateInvitationInput) => api.post<InvitationDto>('/invitations', input),
+    meta: { form: true },
+    onSuccess: () => qc.invalidateQueries({ queryKey: authKeys.invitations() }),
+  });
+}
+
+export function useRevokeInvitation() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api.delete<void>(`/invitations/${id}`),
+    onSuccess: () => qc.invalidateQueries({ queryKey: authKeys.invitations() }),
+  });
+}

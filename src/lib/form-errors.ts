@@ -1,0 +1,15 @@
+import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
+import { ApiError } from './problem';
+
+/** Copies a 400's field errors onto react-hook-form fields; returns the message left for the form as a whole. */
+export function applyServerErrors<T extends FieldValues>(err: unknown, setError: UseFormSetError<T>): string | null {
+  if (!(err instanceof ApiError)) return err instanceof Error ? err.message : 'Something went wrong';
+  const fields = err.problem.errors ?? {};
+  let placed = false;
+  for (const [path, messages] of Object.entries(fields)) {
+    const name = path.replace(/^body\./, '') as Path<T>;
+    setError(name, { type: 'server', message: messages[0] });
+    placed = true;
+  }
+  return placed ? null : err.message;
+}

@@ -1,0 +1,10 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import './styles/app.css';
+import { AppProviders } from './app/providers';
+
+createRoot(document.getElementById('root')!).render(
+  <StrictMode>
+    <AppProviders />
+  </StrictMode>,
+);

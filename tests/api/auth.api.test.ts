@@ -1,0 +1,150 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import type { Express } from 'express';
+import { verify } from '@node-rs/argon2';
+import pg from 'pg';
+import { agentFor, testApp } from '../support/test-app.js';
+import { coachWorkspace, member, PASSWORD, uniq } from '../support/factories.js';
+import { TEST_DATABASE_URL } from '../support/db.js';
+
+let app: Express;
+beforeAll(async () => {
+  app = (await testApp()).app;
+});
+
+async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
+  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
+  await c.connect();
+  try {
+    return (await c.query<T>(q, args)).rows;
+  } finally {
+    await c.end();
+  }
+}
+
+describe('sign-in', () => {
+  it('register makes a coach with a workspace, and /me answers the documented shape', async () => {
+    const coach = await coachWorkspace(app);
+    const me = await coach.agent.get('/api/auth/me').expect(200);
+    expect(me.body).toMatchObject({ email: coach.email, role: 'coach', workspaceId: coach.workspaceId });
+    expect(Object.keys(me.body)).toEqual(expect.arrayContaining(['id', 'email', 'name', 'role', 'workspaceId']));
+  });
+
+  it('stores an argon2id hash, never the password', async () => {
+    const coach = await coachWorkspace(app);
+    const [row] = await sql<{ password_hash: string }>('select password_hash from app_user where email = $1', [coach.email]);
+    // PHC string format of argon2id (RFC 9106 names the variant; the PHC format is the library's documented output).
+    expect(row.password_hash).toMatch(/^\$argon2id\$v=19\$m=\d+,t=\d+,p=\d+\$/);
+    expect(row.password_hash).not.toContain(PASSWORD);
+    expect(await verify(row.password_hash, PASSWORD)).toBe(true);
+  });
+
+  it('the same message for an unknown e-mail and a wrong password', async () => {
+    const coach = await coachWorkspace(app);
+    const wrong = await agentFor(app).post('/api/auth/login').send({ email: coach.email, password: 'nope-nope-nope' });
+    const unknown = await agentFor(app)
+      .post('/api/auth/login')
+      .send({ email: `${uniq('ghost')}@example.test`, password: 'nope-nope-nope' });
+    expect(wrong.status).toBe(401);
+    expect(unknown.status).toBe(401);
+    expect(wrong.body.detail).toBe(unknown.body.detail);
+  });
+
+  it('rotates the session id at sign-in (no session fixation)', async () => {
+    const coach = await coachWorkspace(app);
+    const agent = agentFor(app);
+    // An anonymous session first: a failed login does not create one, so make one with a wrong password then read cookie.
+    const first = await agent.post('/api/auth/login').send({ email: coach.email, password: PASSWORD }).expect(200);
+    const cookie1 = String(first.headers['set-cookie']);
+    await agent.post('/api/auth/logout').expect(204);
+    const second = await agent.post('/api/auth/login').send({ email: coach.email, password: PASSWORD }).expect(200);
+    const cookie2 = String(second.headers['set-cookie']);
+    const sid = (c: string) => /trayline\.sid=([^;]+)/.exec(c)?.[1];
+    expect(sid(cookie1)).toBeTruthy();
+    expect(sid(cookie2)).toBeTruthy();
+    expect(sid(cookie1)).not.toBe(sid(cookie2));
+    // A planted (fixated) session id is not accepted as signed in after login with another id.
+    const planted = request(app).get('/api/auth/me').set('cookie', `trayline.sid=${sid(cookie1)}`);
+    expect((await planted).status).toBe(401);
+  });
+
+  it('sets the cookie httpOnly and SameSite=Lax', async () => {
+    const coach = await coachWorkspace(app);
+    const res = await agentFor(app).post('/api/auth/login').send({ email: coach.email, password: PASSWORD }).expect(200);
+    const cookie = String(res.headers['set-cookie']);
+    expect(cookie).toMatch(/HttpOnly/i);
+    expect(cookie).toMatch(/SameSite=Lax/i);
+  });
+
+  it('logout ends the session', async () => {
+    const coach = await coachWorkspace(app);
+    await coach.agent.post('/api/auth/logout').expect(204);
+    await coach.agent.get('/api/auth/me').expect(401);
+  });
+
+  it('sessions live in PostgreSQL', async () => {
+    await coachWorkspace(app);
+    const [row] = await sql<{ n: string }>('select count(*)::text as n from session');
+    expect(Number(row.n)).toBeGreaterThan(0);
+  });
+});
+
+describe('abuse protection', () => {
+  it('answers 429 after 10 failed sign-ins for one e-mail in 15 minutes (counted in PostgreSQL)', async () => {
+    const coach = await coachWorkspace(app);
+    for (let i = 0; i < 10; i++) {
+      await agentFor(app).post('/api/auth/login').send({ email: coach.email, password: 'wrong-password' }).expect(401);
+    }
+    const blocked = await agentFor(app).post('/api/auth/login').send({ email: coach.email, password: PASSWORD });
+    expect(blocked.status).toBe(429);
+    const [row] = await sql<{ hits: number }>("select hits from rate_limit_hit where key = $1", [`login-email:${coach.email}`]);
+    expect(row.hits).toBeGreaterThanOrEqual(10);
+  });
+
+  it('refuses a cookie-authenticated write without the CSRF header', async () => {
+    const coach = await coachWorkspace(app);
+    const res = await coach.agent
+      .post('/api/invitations')
+      .set('x-trayline-csrf', '')
+      .send({ email: 'x@example.test', role: 'assistant' });
+    expect(res.status).toBe(403);
+    expect(res.body.detail).toMatch(/x-trayline-csrf/);
+  });
+
+  it('sends a CSP that allows scripts from self only', async () => {
+    const res = await request(app).get('/api/health');
+    expect(res.headers['content-security-policy']).toMatch(/script-src 'self'(;|$)/);
+  });
+});
+
+describe('invitations', () => {
+  it('a coach invites an assistant; the link works once; the token is stored hashed', async () => {
+    const coach = await coachWorkspace(app);
+    const inv = await coach.agent.post('/api/invitations').send({ email: `${uniq('a')}@example.test`, role: 'assistant' }).expect(201);
+    const token = String(inv.body.link).split('/invite/')[1];
+    const rows = await sql<{ token_hash: string }>('select token_hash from invitation where id = $1', [inv.body.id]);
+    expect(rows[0].token_hash).not.toBe(token);
+    expect(rows[0].token_hash).toMatch(/^[0-9a-f]{64}$/);
+    const peek = await request(app).get(`/api/invitations/${token}`).expect(200);
+    expect(peek.body.role).toBe('assistant');
+    const agent = agentFor(app);
+    const me = await agent.post(`/api/invitations/${token}/accept`).send({ name: 'Sam', password: PASSWORD }).expect(200);
+    expect(me.body).toMatchObject({ role: 'assistant', workspaceId: coach.workspaceId });
+    await agentFor(app).post(`/api/invitations/${token}/accept`).send({ name: 'Sam', password: PASSWORD }).expect(404);
+  });
+
+  it('an assistant cannot invite', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    await assistant.agent.post('/api/invitations').send({ email: 'z@example.test', role: 'client' }).expect(403);
+  });
+
+  it('password change needs the current password', async () => {
+    const coach = await coachWorkspace(app);
+    const bad = await coach.agent.post('/api/auth/password').send({ currentPassword: 'nope', newPassword: 'another-long-password' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.errors.currentPassword).toBeDefined();
+    await coach.agent.post('/api/auth/password').send({ currentPassword: PASSWORD, newPassword: 'another-long-password' }).expect(204);
+    await agentFor(app).post('/api/auth/login').send({ email: coach.email, password: 'another-long-password' }).expect(200);
+  });
+});

@@ -1,0 +1,57 @@
+import type { Express } from 'express';
+import type { Access } from '@server/http/authz.js';
+import type { Member } from './factories.js';
+
+/**
+ * One row per API route ("METHOD /api/path" exactly as the router declares it).
+ * - access: who may call it (must equal the route's allow() guard).
+ * - path: a concrete path for the request (ids from workspace A, made in `prepare`); default: the pattern itself.
+ * - body: a request body (allowed roles may still get 400/404/409: the matrix only checks the guard).
+ * - crossWorkspace: the coach of workspace B asking for this path gets 404.
+ * - skipRoles: roles whose call would change state the other calls need (e.g. logout), checked elsewhere.
+ */
+export interface MatrixContext {
+  app: Express;
+  coachA: Member;
+  coachB: Member;
+  ids: Record<string, number | string>;
+}
+
+export interface MatrixRow {
+  access: Access;
+  path?: (ctx: MatrixContext) => string;
+  body?: (ctx: MatrixContext) => unknown;
+  prepare?: (ctx: MatrixContext) => Promise<void>;
+  crossWorkspace?: boolean;
+  skipRoles?: string[];
+}
+
+const R = (access: Access, more: Omit<MatrixRow, 'access'> = {}): MatrixRow => ({ access, ...more });
+
+export const MATRIX: Record<string, MatrixRow> = {
+  'GET /api/health': R('public'),
+  'POST /api/auth/login': R('public', { body: () => ({ email: 'nobody@example.test', password: 'x' }) }),
+  'POST /api/auth/register': R('public'),
+  // Logging out would end the shared sessions the other rows use; logout is tested in auth.api.test.ts.
+  'POST /api/auth/logout': R('public', { skipRoles: ['coach', 'assistant', 'client'] }),
+  'GET /api/auth/me': R('signed-in'),
+  'PATCH /api/auth/me': R('signed-in'),
+  'POST /api/auth/password': R('signed-in'),
+  'GET /api/invitations': R(['coach']),
+  'POST /api/invitations': R(['coach']),
+  'DELETE /api/invitations/:id': R(['coach'], {
+    prepare: async (ctx) => {
+      const res = await ctx.coachA.agent
+        .post('/api/invitations')
+        .send({ email: `matrix-${Date.now()}@example.test`, role: 'assistant' });
+      ctx.ids.invitation = res.body.id;
+    },
+    // A DELETE that succeeds for the coach would make later calls 404; the coach runs last among allowed roles.
+    path: (ctx) => `/api/invitations/${ctx.ids.invitation}`,
+    crossWorkspace: true,
+  }),
+  'GET /api/invitations/:token': R('public', { path: () => '/api/invitations/unknown-token-unknown-token' }),
+  'POST /api/invitations/:token/accept': R('public', {
+    path: () => '/api/invitations/unknown-token-unknown-token/accept',
+  }),
+};

@@ -1,0 +1,44 @@
+import type { Express } from 'express';
+import { agentFor, type Agent } from './test-app.js';
+import type { Role } from '@shared/schemas/auth.schema.js';
+
+let seq = 0;
+export const uniq = (p: string) => `${p}-${process.pid}-${++seq}`;
+export const PASSWORD = 'correct-horse-battery';
+
+export interface Member {
+  agent: Agent;
+  email: string;
+  userId: number;
+  workspaceId: number;
+  role: Role;
+}
+
+/** Registers a new coach with their own workspace and returns a signed-in agent. */
+export async function coachWorkspace(app: Express, name = uniq('coach')): Promise<Member> {
+  const agent = agentFor(app);
+  const email = `${name}@example.test`;
+  const res = await agent
+    .post('/api/auth/register')
+    .send({ name, email, password: PASSWORD, businessName: `${name} kitchen` })
+    .expect(201);
+  return { agent, email, userId: res.body.id, workspaceId: res.body.workspaceId, role: 'coach' };
+}
+
+/** Invites and signs in an assistant or client member of the coach's workspace. */
+export async function member(
+  app: Express,
+  coach: Member,
+  role: 'assistant' | 'client',
+  extra: { clientId?: number } = {},
+): Promise<Member> {
+  const email = `${uniq(role)}@example.test`;
+  const inv = await coach.agent.post('/api/invitations').send({ email, role, ...extra }).expect(201);
+  const token = String(inv.body.link).split('/invite/')[1];
+  const agent = agentFor(app);
+  const res = await agent
+    .post(`/api/invitations/${token}/accept`)
+    .send({ name: `${role} person`, password: PASSWORD })
+    .expect(200);
+  return { agent, email, userId: res.body.id, workspaceId: res.body.workspaceId, role };
+}
