@@ -1,5 +1,6 @@
 // The list of every entity the ORM knows. Add a module's entities here.
 import { Workspace } from '../modules/workspaces/workspace.entity.js';
 import { Invitation, Membership, PasswordReset, User } from '../modules/auth/user.entity.js';
+import { Ingredient } from '../modules/ingredients/ingredient.entity.js';
 
-export const entities = [Workspace, User, Membership, Invitation, PasswordReset];
+export const entities = [Workspace, User, Membership, Invitation, PasswordReset, Ingredient];
