@@ -7,7 +7,7 @@ ensure_node_modules() {
   local root="$1"
   if [ ! -d "$root/node_modules" ] || [ "$root/package-lock.json" -nt "$root/node_modules/.package-lock.json" ]; then
     log "installing npm packages (npm ci)"
-    (cd "$root" && npm ci --no-audit --no-fund --loglevel=error) || die "npm ci failed"
+    (cd "$root" && npm ci --include=dev --no-audit --no-fund --loglevel=error) || die "npm ci failed"
   fi
 }
 
