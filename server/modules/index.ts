@@ -3,6 +3,7 @@ import type { Router } from 'express';
 import type { Pool } from 'pg';
 import type { Env } from '../config/env.js';
 import type { Orm } from '../db/orm.js';
+import { clientRoutes } from './clients/client.routes.js';
 
 export interface ModuleDeps {
   orm: Orm;
@@ -11,5 +12,5 @@ export interface ModuleDeps {
 }
 
 export function apiModules(_deps: ModuleDeps): Router[] {
-  return [];
+  return [clientRoutes()];
 }

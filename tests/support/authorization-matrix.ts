@@ -1,6 +1,6 @@
 import type { Express } from 'express';
 import type { Access } from '@server/http/authz.js';
-import type { Member } from './factories.js';
+import { clientInput, type Member } from './factories.js';
 
 /**
  * One row per API route ("METHOD /api/path" exactly as the router declares it).
@@ -53,5 +53,29 @@ export const MATRIX: Record<string, MatrixRow> = {
   'GET /api/invitations/:token': R('public', { path: () => '/api/invitations/unknown-token-unknown-token' }),
   'POST /api/invitations/:token/accept': R('public', {
     path: () => '/api/invitations/unknown-token-unknown-token/accept',
+  }),
+  // Clients (issue 7)
+  'GET /api/clients': R(['coach', 'assistant']),
+  'POST /api/clients': R(['coach']),
+  'GET /api/clients/:id': R(['coach', 'client'], {
+    prepare: async (ctx) => {
+      const res = await ctx.coachA.agent.post('/api/clients').send(clientInput());
+      ctx.ids.client = res.body.id;
+    },
+    path: (ctx) => `/api/clients/${ctx.ids.client}`,
+    crossWorkspace: true,
+  }),
+  'PATCH /api/clients/:id': R(['coach'], {
+    path: (ctx) => `/api/clients/${ctx.ids.client}`,
+    body: () => ({ version: 1, name: 'Matrix client' }),
+    crossWorkspace: true,
+  }),
+  'DELETE /api/clients/:id': R(['coach'], {
+    prepare: async (ctx) => {
+      const res = await ctx.coachA.agent.post('/api/clients').send(clientInput());
+      ctx.ids.clientToDelete = res.body.id;
+    },
+    path: (ctx) => `/api/clients/${ctx.ids.clientToDelete}`,
+    crossWorkspace: true,
   }),
 };

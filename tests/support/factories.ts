@@ -42,3 +42,30 @@ export async function member(
     .expect(200);
   return { agent, email, userId: res.body.id, workspaceId: res.body.workspaceId, role };
 }
+
+/** A client profile in the coach's workspace (API body of POST /api/clients). */
+export function clientInput(overrides: Record<string, unknown> = {}) {
+  return {
+    name: uniq('Client'),
+    email: null,
+    householdMultiplier: '1',
+    sex: 'female',
+    ageYears: 40,
+    heightCm: '165',
+    weightKg: '65',
+    activity: 'light',
+    goal: 'maintain',
+    netCarbCapG: '20',
+    proteinGPerKg: '1.5',
+    targetMode: 'computed',
+    allergens: [],
+    dislikes: [],
+    healthNotes: '',
+    ...overrides,
+  };
+}
+
+export async function makeClient(coach: Member, overrides: Record<string, unknown> = {}) {
+  const res = await coach.agent.post('/api/clients').send(clientInput(overrides)).expect(201);
+  return res.body as { id: number; version: number; name: string } & Record<string, unknown>;
+}

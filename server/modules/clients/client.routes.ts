@@ -1,0 +1,52 @@
+import { Router } from 'express';
+import { clientIdParams, createClientSchema, updateClientSchema } from '@shared/schemas/clients.schema.js';
+import { actorOf, allow } from '../../http/authz.js';
+import { emOf } from '../../http/request-context.js';
+import { validated } from '../../http/validate.js';
+import * as clients from './client.service.js';
+
+export function clientRoutes() {
+  const r = Router();
+
+  // Coach: full profiles with targets. Assistant: names and portions per plate only.
+  r.get(
+    '/clients',
+    allow('coach', 'assistant'),
+    validated({}, (_i, req) => clients.listClients(emOf(req), actorOf(req))),
+  );
+
+  r.post(
+    '/clients',
+    allow('coach'),
+    validated({ body: createClientSchema }, async ({ body }, req, res) => {
+      const dto = await clients.createClient(emOf(req), actorOf(req), body);
+      res.status(201);
+      return dto;
+    }),
+  );
+
+  // A client reads their own profile (no health notes); any other id is "not found".
+  r.get(
+    '/clients/:id',
+    allow('coach', 'client'),
+    validated({ params: clientIdParams }, ({ params }, req) => clients.getClient(emOf(req), actorOf(req), params.id)),
+  );
+
+  r.patch(
+    '/clients/:id',
+    allow('coach'),
+    validated({ params: clientIdParams, body: updateClientSchema }, ({ params, body }, req) =>
+      clients.updateClient(emOf(req), actorOf(req), params.id, body),
+    ),
+  );
+
+  r.delete(
+    '/clients/:id',
+    allow('coach'),
+    validated({ params: clientIdParams }, async ({ params }, req) => {
+      await clients.deleteClient(emOf(req), actorOf(req), params.id);
+    }),
+  );
+
+  return r;
+}

@@ -1,0 +1,103 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import type { Actor } from '../../http/authz.js';
+import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
+import type { CreateClientData, UpdateClientData, ClientListItemDto } from '@shared/schemas/clients.schema.js';
+import { Membership } from '../auth/user.entity.js';
+import { Workspace } from '../workspaces/workspace.entity.js';
+import { Client, type IClient } from './client.entity.js';
+import { presentClient, presentClientSelf, presentClientSummary } from './client.presenter.js';
+
+export async function mealSlotsOf(em: EntityManager, workspaceId: number): Promise<string[]> {
+  const ws = await em.findOneOrFail(Workspace, workspaceId);
+  return ws.mealSlots?.length ? ws.mealSlots : ['breakfast'];
+}
+
+/** The client profile an actor may read: coach any in the workspace, a client only their own; else NotFound. */
+export async function findClient(em: EntityManager, actor: Actor, id: number): Promise<IClient> {
+  if (actor.role === 'client' && actor.clientId !== id) throw new NotFound('Client');
+  const row = await em.findOne(Client, { id, workspace: actor.workspaceId });
+  if (!row) throw new NotFound('Client');
+  return row;
+}
+
+/** Clients of the workspace, by name (one query). */
+export async function loadClients(em: EntityManager, workspaceId: number, ids?: readonly number[]): Promise<IClient[]> {
+  const where = ids ? { workspace: workspaceId, id: { $in: [...ids] } } : { workspace: workspaceId };
+  return em.find(Client, where, { orderBy: { name: 'asc', id: 'asc' } });
+}
+
+async function accounts(em: EntityManager, workspaceId: number, ids: number[]) {
+  const map = new Map<number, { email: string; name: string }>();
+  if (!ids.length) return map;
+  const rows = await em.find(
+    Membership,
+    { workspace: workspaceId, role: 'client', clientId: { $in: ids } },
+    { populate: ['user'] },
+  );
+  for (const m of rows) if (m.clientId) map.set(m.clientId, { email: m.user.unwrap().email, name: m.user.unwrap().name });
+  return map;
+}
+
+export async function listClients(em: EntityManager, actor: Actor): Promise<ClientListItemDto[]> {
+  const rows = await loadClients(em, actor.workspaceId);
+  if (actor.role !== 'coach') return rows.map(presentClientSummary);
+  const slots = await mealSlotsOf(em, actor.workspaceId);
+  const acc = await accounts(em, actor.workspaceId, rows.map((r) => r.id));
+  return rows.map((r) => presentClient(r, slots, acc.get(r.id) ?? null));
+}
+
+export async function getClient(em: EntityManager, actor: Actor, id: number) {
+  const row = await findClient(em, actor, id);
+  const slots = await mealSlotsOf(em, actor.workspaceId);
+  if (actor.role === 'client') return presentClientSelf(row, slots);
+  const acc = await accounts(em, actor.workspaceId, [row.id]);
+  return presentClient(row, slots, acc.get(row.id) ?? null);
+}
+
+function fields(input: Partial<CreateClientData>) {
+  const out: Partial<IClient> = {};
+  const keys = [
+    'name', 'email', 'householdMultiplier', 'sex', 'ageYears', 'heightCm', 'weightKg', 'activity', 'goal',
+    'netCarbCapG', 'proteinGPerKg', 'targetMode', 'manualTargets', 'slotShares', 'allergens', 'dislikes', 'healthNotes',
+  ] as const;
+  for (const k of keys) if (input[k] !== undefined) (out as Record<string, unknown>)[k] = input[k];
+  if (input.goalAdjustment !== undefined) out.goalAdjustment = input.goalAdjustment === null ? null : String(input.goalAdjustment);
+  return out;
+}
+
+export async function createClient(em: EntityManager, actor: Actor, input: CreateClientData) {
+  const row = em.create(Client, {
+    workspace: actor.workspaceId,
+    slotShares: {},
+    allergens: [],
+    dislikes: [],
+    healthNotes: '',
+    ...fields(input),
+  } as never) as IClient;
+  await em.flush();
+  return getClient(em, actor, row.id);
+}
+
+export async function updateClient(em: EntityManager, actor: Actor, id: number, input: UpdateClientData) {
+  const row = await findClient(em, actor, id);
+  if (row.version !== input.version) {
+    throw new StaleEdit(row.version, await getClient(em, actor, id));
+  }
+  const next = fields(input);
+  const mode = next.targetMode ?? row.targetMode;
+  const manual = next.manualTargets !== undefined ? next.manualTargets : row.manualTargets;
+  if (mode === 'manual' && !manual) {
+    throw ValidationError.field('manualTargets', 'Type the daily targets, or let Trayline compute them');
+  }
+  em.assign(row, next);
+  await em.flush();
+  return getClient(em, actor, id);
+}
+
+export async function deleteClient(em: EntityManager, actor: Actor, id: number) {
+  const row = await findClient(em, actor, id);
+  await em.transactional(async (tx) => {
+    await tx.nativeUpdate(Membership, { workspace: actor.workspaceId, clientId: id }, { clientId: null });
+    await tx.nativeDelete(Client, { id: row.id, workspace: actor.workspaceId });
+  });
+}
