@@ -1,0 +1,99 @@
+import type { BakeEvent, BakeRunResult } from '@shared/domain/bake-run-types.js';
+import { CAUTIONS } from '@shared/domain/eat-by.js';
+import { toCelsiusRounded } from '@shared/domain/temperature.js';
+import { cautionsBlock, createDoc, finishDoc, heading, paragraph, table } from './pdf-document.js';
+import { clock, longDate } from './pdf-format.js';
+
+export interface BakeRunPdfMeta {
+  businessName: string;
+  /** e.g. "Bake run, Sun 6 Dec". */
+  title: string;
+  filename?: string;
+}
+
+const deg = (f: number | null | undefined) => (f == null ? '' : `${f} °F (${toCelsiusRounded(f)} °C)`);
+
+function what(e: BakeEvent, trayName: (id: string | null) => string): string {
+  const tray = trayName(e.trayId);
+  switch (e.kind) {
+    case 'preheat':
+      return `Preheat to ${deg(e.tempF)}`;
+    case 'setpoint-change':
+      return `Change set point from ${deg(e.fromF)} to ${deg(e.tempF)}`;
+    case 'ready':
+      return `Oven at ${deg(e.tempF)}`;
+    case 'hands-on-start':
+      return `Cook ${e.cook ?? 1}: prepare ${tray}${e.untilAt ? ` (until ${clock(e.untilAt)})` : ''}`;
+    case 'tray-in':
+      return `${tray} in`;
+    case 'first-check':
+      return `First check of ${tray}${e.internalF ? `: internal ${deg(e.internalF)}` : ''}`;
+    case 'tray-out':
+      return `${tray} out`;
+    case 'cooling-start':
+      return `${tray}: start cooling (from ${deg(e.tempF ?? 135)})`;
+    case 'cool-to-70-by':
+      return `${tray} at ${deg(70)} or below by now`;
+    case 'fridge-41-by':
+      return `${tray} at ${deg(41)} or below (in the fridge) by now`;
+    default:
+      return e.kind;
+  }
+}
+
+/** The bake-run sheet (shared/domain/bake-run.ts output): ovens and set points, the timeline, the trays, cautions. */
+export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta): Promise<{ filename: string; buffer: Buffer }> {
+  const doc = createDoc({ businessName: meta.businessName, title: meta.title, subject: 'Bake run' });
+  const names = new Map(run.trays.map((t) => [t.id, t.name]));
+  const trayName = (id: string | null) => (id ? names.get(id) ?? id : '');
+  heading(doc, meta.title, 20);
+  paragraph(doc, `${longDate(run.start.slice(0, 10))}: start ${clock(run.start)}, last tray out ${clock(run.endAt)} (${run.sessionMinutes} minutes).`);
+  paragraph(doc, run.provenOptimal ? 'This is the shortest plan among those the scheduler considers.' : `Within ${run.gapPct}% of the lower bound (${run.lowerBoundMinutes} minutes).`, { size: 9 });
+  doc.moveDown(0.5);
+
+  heading(doc, 'Ovens', 14);
+  table(
+    doc,
+    [
+      { header: 'Oven', width: 0.16 },
+      { header: 'Set point', width: 0.2 },
+      { header: 'Heat from', width: 0.1, align: 'right' },
+      { header: 'Ready', width: 0.1, align: 'right' },
+      { header: 'Until', width: 0.1, align: 'right' },
+      { header: 'Trays', width: 0.34 },
+    ],
+    run.ovens.flatMap((o) =>
+      o.setPoints.map((sp) => [o.name, deg(sp.tempF), clock(sp.changeAt), clock(sp.readyAt), clock(sp.endAt), sp.trayIds.map(trayName).join(', ')]),
+    ),
+  );
+
+  heading(doc, 'Timeline', 14);
+  table(
+    doc,
+    [
+      { header: 'Time', width: 0.1, align: 'right' },
+      { header: 'Oven', width: 0.16 },
+      { header: 'What', width: 0.74 },
+    ],
+    run.events.map((e) => [clock(e.at), e.oven ?? '', what(e, trayName)]),
+  );
+
+  heading(doc, 'Trays', 14);
+  table(
+    doc,
+    [
+      { header: 'Tray', width: 0.28 },
+      { header: 'Oven', width: 0.14 },
+      { header: 'Rack / spot', width: 0.12, align: 'center' },
+      { header: 'Set point', width: 0.18 },
+      { header: 'In', width: 0.09, align: 'right' },
+      { header: 'Out', width: 0.09, align: 'right' },
+      { header: 'Minutes', width: 0.1, align: 'right' },
+    ],
+    run.trays.map((t) => [t.name, t.oven, `${t.rack} / ${t.position}`, deg(t.tempF), clock(t.inAt), clock(t.outAt), String(t.bakeMinutes)]),
+  );
+
+  const cooling = CAUTIONS.filter((c) => c.topic === 'food-safety').map((c) => ({ text: c.text, source: c.source }));
+  cautionsBlock(doc, [...run.cautions.map((text) => ({ text, source: 'Bake run' })), ...cooling]);
+  return { filename: meta.filename ?? 'bake-run.pdf', buffer: await finishDoc(doc, { businessName: meta.businessName, title: meta.title }) };
+}
