@@ -2,6 +2,7 @@
 import { Workspace } from '../modules/workspaces/workspace.entity.js';
 import { Invitation, Membership, PasswordReset, User } from '../modules/auth/user.entity.js';
 import { Ingredient } from '../modules/ingredients/ingredient.entity.js';
+import { Tray, TrayLine, TrayPhoto } from '../modules/trays/tray.entity.js';
 import { Client } from '../modules/clients/client.entity.js';
 
-export const entities = [Workspace, User, Membership, Invitation, PasswordReset, Ingredient, Client];
+export const entities = [Workspace, User, Membership, Invitation, PasswordReset, Ingredient, Tray, TrayLine, TrayPhoto, Client];

@@ -4,6 +4,7 @@ import type { Pool } from 'pg';
 import type { Env } from '../config/env.js';
 import type { Orm } from '../db/orm.js';
 import { clientRoutes } from './clients/client.routes.js';
+import { trayRoutes } from './trays/trays.routes.js';
 
 export interface ModuleDeps {
   orm: Orm;
@@ -11,6 +12,6 @@ export interface ModuleDeps {
   env: Env;
 }
 
-export function apiModules(_deps: ModuleDeps): Router[] {
-  return [clientRoutes()];
+export function apiModules(deps: ModuleDeps): Router[] {
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes()];
 }

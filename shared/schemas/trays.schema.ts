@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { DEFAULT_BAKE_RULES, type BakeRuleCategory } from '../domain/bake-rules-defaults';
-import { parseAmount, unitKind } from '../domain/units';
+import { normalizeUnit, parseAmount, unitKind } from '../domain/units';
 import type { NutrientNumbers } from '../domain/nutrition';
 import type { EnergyShares } from '../domain/nutrition';
 
@@ -79,17 +79,20 @@ export const trayLineSchema = z.object({
         ctx.addIssue({ code: 'custom', message: e instanceof Error ? e.message : 'Could not read this amount' });
       }
     }),
-  /** A unit code (g, oz, cup, tbsp, each…) or one of the ingredient's piece names (large, slice…). */
+  /** A unit as typed ("cups", "Tbsp", "g") or one of the ingredient's piece names (large, slice…); stored as a code. */
   unit: z
     .string()
     .trim()
     .min(1, { message: 'Choose a unit' })
     .max(40)
-    .superRefine((u, ctx) => {
+    .transform((u, ctx) => {
       try {
-        unitKind(u);
+        const code = normalizeUnit(u);
+        unitKind(code);
+        return code as string;
       } catch (e) {
         ctx.addIssue({ code: 'custom', message: e instanceof Error ? e.message : 'Not a unit' });
+        return z.NEVER;
       }
     }),
   note: z.string().trim().max(200).default(''),
@@ -125,7 +128,7 @@ export const trayInputSchema = z.object({
   panLining: z.enum(PAN_LININGS).default('parchment'),
   bake: bakeInputSchema,
   /** Cooked mass ÷ raw mass (e.g. 0.35 for baked bacon, 0.9 for an egg slab). */
-  yieldFactor: positiveDecimal('The cooked-yield factor', 3),
+  yieldFactor: positiveDecimal('The cooked-yield factor', 5),
   cutPlan: cutPlanSchema,
   storage: storageInputSchema,
   reheatSteps: z.array(z.string().trim().min(1, { message: 'Write the step or remove it' }).max(300)).max(12).default([]),
