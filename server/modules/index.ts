@@ -5,6 +5,8 @@ import type { Env } from '../config/env.js';
 import type { Orm } from '../db/orm.js';
 import { clientRoutes } from './clients/client.routes.js';
 import { trayRoutes } from './trays/trays.routes.js';
+import { pantryRoutes } from './shopping/pantry.routes.js';
+import { shoppingRoutes } from './shopping/shopping.routes.js';
 
 export interface ModuleDeps {
   orm: Orm;
@@ -13,5 +15,5 @@ export interface ModuleDeps {
 }
 
 export function apiModules(deps: ModuleDeps): Router[] {
-  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes()];
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), pantryRoutes(), shoppingRoutes()];
 }

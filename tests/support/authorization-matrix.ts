@@ -1,6 +1,6 @@
 import type { Express } from 'express';
 import type { Access } from '@server/http/authz.js';
-import { clientInput, type Member } from './factories.js';
+import { clientInput, makeIngredient, type Member } from './factories.js';
 
 /**
  * One row per API route ("METHOD /api/path" exactly as the router declares it).
@@ -77,5 +77,35 @@ export const MATRIX: Record<string, MatrixRow> = {
     },
     path: (ctx) => `/api/clients/${ctx.ids.clientToDelete}`,
     crossWorkspace: true,
+  }),
+  // Pantry and shopping list (issue 8): coach and assistant; clients never.
+  'GET /api/pantry': R(['coach', 'assistant']),
+  'POST /api/pantry': R(['coach', 'assistant'], {
+    body: (ctx) => ({ ingredientId: ctx.ids.pantryIngredient, amount: '1', unit: 'g' }),
+  }),
+  'GET /api/pantry/:id': R(['coach', 'assistant'], {
+    prepare: async (ctx) => {
+      ctx.ids.pantryIngredient = (await makeIngredient(ctx.coachA)).id;
+      const other = (await makeIngredient(ctx.coachA)).id;
+      const res = await ctx.coachA.agent.post('/api/pantry').send({ ingredientId: other, amount: '100', unit: 'g' });
+      ctx.ids.pantryItem = res.body.id;
+      const gone = (await makeIngredient(ctx.coachA)).id;
+      const del = await ctx.coachA.agent.post('/api/pantry').send({ ingredientId: gone, amount: '100', unit: 'g' });
+      ctx.ids.pantryItemToDelete = del.body.id;
+    },
+    path: (ctx) => `/api/pantry/${ctx.ids.pantryItem}`,
+    crossWorkspace: true,
+  }),
+  'PATCH /api/pantry/:id': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/pantry/${ctx.ids.pantryItem}`,
+    body: () => ({ amount: '50', unit: 'g', version: 1 }),
+    crossWorkspace: true,
+  }),
+  'DELETE /api/pantry/:id': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/pantry/${ctx.ids.pantryItemToDelete}`,
+    crossWorkspace: true,
+  }),
+  'POST /api/shopping/preview': R(['coach', 'assistant'], {
+    body: (ctx) => ({ addOns: [{ ingredientId: ctx.ids.pantryIngredient, amount: '100', unit: 'g' }] }),
   }),
 };

@@ -1,0 +1,71 @@
+import Decimal from 'decimal.js';
+import { OTHER_AISLE, type ShoppingItem } from '@shared/domain/shopping.js';
+import { STORE_AISLE_LABELS, type StoreAisleCode } from '@shared/schemas/ingredients.schema.js';
+import type { ShoppingCheckDto, ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema.js';
+import { baseAmountText } from './shopping-ingredient.js';
+import type { ComputedShoppingList } from './shopping.service.js';
+
+const UNCHECKED: ShoppingCheckDto = { checked: false, checkedBy: null, checkedAt: null };
+
+const n2 = (d: Decimal) => d.toDecimalPlaces(2, Decimal.ROUND_HALF_UP).toNumber();
+
+export function aisleLabel(aisle: string): string {
+  if (aisle === OTHER_AISLE) return 'Other';
+  return STORE_AISLE_LABELS[aisle as StoreAisleCode] ?? aisle;
+}
+
+function presentItem(item: ShoppingItem, computed: ComputedShoppingList, check: ShoppingCheckDto): ShoppingItemDto {
+  const ing = computed.ingredients.get(Number(item.ingredientId))!;
+  const p = item.purchase;
+  return {
+    ingredientId: Number(item.ingredientId),
+    name: item.name,
+    aisle: item.aisle,
+    aisleLabel: aisleLabel(item.aisle),
+    baseUnit: item.base.unit,
+    needed: n2(item.needed),
+    inPantry: n2(item.inPantry),
+    fromPantry: n2(item.fromPantry),
+    toBuy: n2(item.toBuy),
+    neededText: baseAmountText(item.needed, ing),
+    toBuyText: baseAmountText(item.toBuy, ing),
+    purchase: p
+      ? {
+          label: p.label,
+          packages: p.packages,
+          size: p.size.toNumber(),
+          unit: p.unit,
+          spare: n2(p.spareInPurchaseUnit),
+          spareText: baseAmountText(p.spare, ing),
+        }
+      : null,
+    costCents: item.cost ? item.cost.toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toNumber() : null,
+    check,
+  };
+}
+
+export function presentShoppingList(
+  computed: ComputedShoppingList,
+  opts: {
+    weekId: number | null;
+    checks?: ReadonlyMap<number, ShoppingCheckDto>;
+    bought?: { at: string; by: string | null } | null;
+  },
+): ShoppingListDto {
+  const aisles = computed.list.aisles.map((g) => ({
+    aisle: g.aisle,
+    label: aisleLabel(g.aisle),
+    items: g.items.map((i) => presentItem(i, computed, opts.checks?.get(Number(i.ingredientId)) ?? UNCHECKED)),
+  }));
+  const items = aisles.flatMap((a) => a.items);
+  return {
+    weekId: opts.weekId,
+    aisles,
+    itemCount: items.length,
+    checkedCount: items.filter((i) => i.check.checked).length,
+    totalCostCents: computed.list.totalCost.toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toNumber(),
+    costComplete: computed.list.costComplete,
+    problems: computed.problems,
+    bought: opts.bought ?? null,
+  };
+}

@@ -1,0 +1,126 @@
+import Decimal from 'decimal.js';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import {
+  buildShoppingList,
+  toBaseAmount,
+  type PantryStock,
+  type ShoppingItem,
+  type ShoppingList,
+  type ShoppingNeed,
+} from '@shared/domain/shopping.js';
+import { normalizeUnit, UnitConversionError, UnknownUnitError } from '@shared/domain/units.js';
+import { STORE_AISLE_CODES } from '@shared/schemas/ingredients.schema.js';
+import {
+  shoppingNeedsSchema,
+  type ShoppingListDto,
+  type ShoppingNeedsInput,
+  type ShoppingProblemDto,
+} from '@shared/schemas/shopping.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { ValidationError } from '../../http/errors.js';
+import { Tray } from '../trays/tray.entity.js';
+import { pantryStock } from './pantry.service.js';
+import { loadShoppingIngredients, type ShoppingRow } from './shopping-ingredient.js';
+import { presentShoppingList } from './shopping.presenter.js';
+
+/** The week's list, computed: the domain result plus the rows it was computed from. */
+export interface ComputedShoppingList {
+  list: ShoppingList;
+  ingredients: Map<number, ShoppingRow>;
+  problems: ShoppingProblemDto[];
+}
+
+/** Store order of the aisles: the library's aisle codes as listed (produce first … oils last), "Other" at the end. */
+export const AISLE_ORDER: readonly string[] = STORE_AISLE_CODES;
+
+function convertible(ing: ShoppingRow, amount: Decimal.Value, unit: string): string | null {
+  try {
+    toBaseAmount(amount, normalizeUnit(unit), ing);
+    return null;
+  } catch (e) {
+    if (e instanceof UnitConversionError || e instanceof UnknownUnitError) return e.message;
+    throw e;
+  }
+}
+
+/** Every tray line × its tray count, as needs (amounts as stored per tray, in the line's unit). */
+async function trayNeeds(
+  em: EntityManager,
+  actor: Actor,
+  trays: readonly { trayId: number; count: number }[],
+): Promise<ShoppingNeed[]> {
+  const counts = new Map<number, number>();
+  for (const t of trays) counts.set(t.trayId, (counts.get(t.trayId) ?? 0) + t.count);
+  if (!counts.size) return [];
+  const rows = await em.find(Tray, { id: { $in: [...counts.keys()] }, workspace: actor.workspaceId }, { populate: ['lines'] });
+  const found = new Set(rows.map((r) => r.id));
+  const errors: Record<string, string[]> = {};
+  trays.forEach((t, i) => {
+    if (!found.has(t.trayId)) errors[`trays.${i}.trayId`] = [`No base tray with id ${t.trayId} in your workspace`];
+  });
+  if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
+  const needs: ShoppingNeed[] = [];
+  for (const tray of rows) {
+    const count = counts.get(tray.id) ?? 0;
+    if (count <= 0) continue;
+    for (const line of tray.lines.getItems()) {
+      needs.push({ ingredientId: String(line.ingredient.id), amount: new Decimal(line.amount).times(count), unit: line.unit });
+    }
+  }
+  return needs;
+}
+
+/**
+ * The shopping list for trays × counts plus add-on amounts, minus the workspace's pantry. Lines whose unit the
+ * ingredient cannot be converted from are left out and named in `problems` (never counted as zero silently).
+ */
+export async function computeShoppingList(
+  em: EntityManager,
+  actor: Actor,
+  input: ShoppingNeedsInput,
+): Promise<ComputedShoppingList> {
+  const parsed = shoppingNeedsSchema.parse(input);
+  const raw: ShoppingNeed[] = [
+    ...(await trayNeeds(em, actor, parsed.trays)),
+    ...parsed.addOns.map((a) => ({ ingredientId: String(a.ingredientId), amount: a.amount, unit: a.unit })),
+  ];
+  const { stock: rawStock } = await pantryStock(em, actor);
+  const ids = [...raw, ...rawStock].map((n) => Number(n.ingredientId));
+  const ingredients = await loadShoppingIngredients(em, actor, ids);
+
+  const problems: ShoppingProblemDto[] = [];
+  const needs: ShoppingNeed[] = [];
+  for (const need of raw) {
+    const ing = ingredients.get(Number(need.ingredientId));
+    if (!ing) {
+      problems.push({ ingredientId: Number(need.ingredientId), name: `Ingredient ${need.ingredientId}`, message: 'Not in your library' });
+      continue;
+    }
+    const problem = convertible(ing, need.amount, need.unit);
+    if (problem) {
+      if (!problems.some((p) => p.ingredientId === ing.rowId && p.message === problem)) {
+        problems.push({ ingredientId: ing.rowId, name: ing.name, message: problem });
+      }
+      continue;
+    }
+    needs.push({ ...need, unit: normalizeUnit(need.unit) });
+  }
+  const pantry: PantryStock[] = rawStock.filter((s) => {
+    const ing = ingredients.get(Number(s.ingredientId));
+    return ing !== undefined && convertible(ing, s.amount, s.unit) === null;
+  });
+  const list = buildShoppingList({ needs, ingredients: [...ingredients.values()], pantry, aisleOrder: AISLE_ORDER });
+  return { list, ingredients, problems };
+}
+
+/** The whole list as items, for callers that only need the numbers. */
+export function itemsOf(list: ShoppingList): ShoppingItem[] {
+  return list.aisles.flatMap((a) => a.items);
+}
+
+/**
+ * The shopping list DTO for trays × counts and add-ons (no prep week needed): what the week's list is built from.
+ */
+export async function shoppingListFor(em: EntityManager, actor: Actor, input: ShoppingNeedsInput): Promise<ShoppingListDto> {
+  return presentShoppingList(await computeShoppingList(em, actor, input), { weekId: null });
+}

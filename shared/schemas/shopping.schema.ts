@@ -1,0 +1,217 @@
+/**
+ * Shopping list, pantry and container labels: request inputs (zod) and response DTOs.
+ */
+import Decimal from 'decimal.js';
+import { z } from 'zod';
+import { isIsoDate } from '../domain/iso-date';
+import { LABEL_SHEET_CODES } from '../domain/label-sheets';
+import type { AllergenCode } from '../domain/allergens';
+import type { LabelSheetCode } from '../domain/label-sheets';
+
+const PLAIN_DECIMAL = /^(?:\d+(?:\.\d*)?|\.\d+)$/;
+
+/** An amount typed as text or a number: a plain decimal string of 0 or more, at most 4 decimals. */
+export const amountField = z
+  .union([z.string(), z.number()], { message: 'Enter an amount' })
+  .transform((v, ctx) => {
+    const s = typeof v === 'number' ? String(v) : v.trim().replace(/^(\d*),(\d+)$/, '$1.$2');
+    if (s === '') {
+      ctx.addIssue({ code: 'custom', message: 'Enter an amount' });
+      return z.NEVER;
+    }
+    if (!PLAIN_DECIMAL.test(s)) {
+      ctx.addIssue({ code: 'custom', message: 'The amount must be a number of 0 or more' });
+      return z.NEVER;
+    }
+    const d = new Decimal(s);
+    if (d.gt(1_000_000)) {
+      ctx.addIssue({ code: 'custom', message: 'The amount must be at most 1,000,000' });
+      return z.NEVER;
+    }
+    return d.toDecimalPlaces(4, Decimal.ROUND_HALF_UP).toFixed();
+  });
+
+const unitField = z.string({ message: 'Choose a unit' }).trim().min(1, { message: 'Choose a unit' }).max(40);
+
+// ---------------------------------------------------------------------------------------------------------------
+// Pantry
+// ---------------------------------------------------------------------------------------------------------------
+
+export const pantryCreateSchema = z.object({
+  ingredientId: z.coerce.number({ message: 'Choose an ingredient' }).int().positive({ message: 'Choose an ingredient' }),
+  amount: amountField,
+  /** Any unit the ingredient can be converted from (g, oz, cup with a density, a piece name…). */
+  unit: unitField,
+});
+export type PantryCreateInput = z.input<typeof pantryCreateSchema>;
+export type PantryCreateValues = z.output<typeof pantryCreateSchema>;
+
+export const pantryUpdateSchema = z.object({
+  amount: amountField,
+  unit: unitField,
+  version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }),
+});
+export type PantryUpdateInput = z.input<typeof pantryUpdateSchema>;
+export type PantryUpdateValues = z.output<typeof pantryUpdateSchema>;
+
+export const pantryIdParams = z.object({ id: z.coerce.number().int().positive() });
+
+export interface PantryItemDto {
+  id: number;
+  ingredientId: number;
+  ingredientName: string;
+  aisle: string | null;
+  /** Stored in the ingredient's base unit: grams, or pieces for count-bought items (eggs → "large"). */
+  amount: number;
+  unit: string;
+  /** The amount in kitchen words ("2 lb 3 oz", "18 large"). */
+  display: string;
+  version: number;
+  updatedAt: string;
+}
+
+export interface PantryListDto {
+  items: PantryItemDto[];
+}
+
+// ---------------------------------------------------------------------------------------------------------------
+// Shopping list
+// ---------------------------------------------------------------------------------------------------------------
+
+export const weekIdParams = z.object({ weekId: z.coerce.number().int().positive() });
+
+export const checkParams = z.object({
+  weekId: z.coerce.number().int().positive(),
+  ingredientId: z.coerce.number().int().positive(),
+});
+
+export const checkBodySchema = z.object({ checked: z.boolean({ message: 'Say whether the item is checked (true or false)' }) });
+export type CheckBodyInput = z.input<typeof checkBodySchema>;
+
+/** Needs given directly (before or beside a prep week): trays × counts and add-on amounts. */
+export const shoppingNeedsSchema = z.object({
+  trays: z
+    .array(z.object({ trayId: z.coerce.number().int().positive(), count: z.coerce.number().int().min(0).max(1000) }))
+    .max(200)
+    .default([]),
+  addOns: z
+    .array(z.object({ ingredientId: z.coerce.number().int().positive(), amount: amountField, unit: unitField }))
+    .max(2000)
+    .default([]),
+});
+export type ShoppingNeedsInput = z.input<typeof shoppingNeedsSchema>;
+export type ShoppingNeedsValues = z.output<typeof shoppingNeedsSchema>;
+
+export interface ShoppingCheckDto {
+  checked: boolean;
+  checkedBy: string | null;
+  checkedAt: string | null;
+}
+
+export interface ShoppingItemDto {
+  ingredientId: number;
+  name: string;
+  aisle: string;
+  aisleLabel: string;
+  /** Base unit the amounts are in: "g" or a piece name. */
+  baseUnit: string;
+  needed: number;
+  inPantry: number;
+  fromPantry: number;
+  toBuy: number;
+  /** Kitchen words for the amounts ("2 lb 3 oz", "36 large"). */
+  neededText: string;
+  toBuyText: string;
+  /** Null when the ingredient has no purchase unit: buy `toBuyText` as is. */
+  purchase: {
+    label: string;
+    packages: number;
+    /** Package size in its own unit, e.g. 8 (oz) or 12 (large). */
+    size: number;
+    unit: string;
+    /** Bought beyond the need, in the purchase unit and in words. */
+    spare: number;
+    spareText: string;
+  } | null;
+  costCents: number | null;
+  check: ShoppingCheckDto;
+}
+
+export interface ShoppingAisleDto {
+  aisle: string;
+  label: string;
+  items: ShoppingItemDto[];
+}
+
+/** A line of the plan that could not be counted (a unit the ingredient cannot be converted from). */
+export interface ShoppingProblemDto {
+  ingredientId: number;
+  name: string;
+  message: string;
+}
+
+export interface ShoppingListDto {
+  weekId: number | null;
+  aisles: ShoppingAisleDto[];
+  itemCount: number;
+  checkedCount: number;
+  totalCostCents: number;
+  /** False when some item has no price: the total is a lower bound. */
+  costComplete: boolean;
+  problems: ShoppingProblemDto[];
+  /** When the list was marked bought (and the pantry updated), else null. */
+  bought: { at: string; by: string | null } | null;
+}
+
+export interface MarkBoughtDto {
+  /** False when the list had been marked bought before (nothing changed this time). */
+  applied: boolean;
+  at: string;
+  pantry: { ingredientId: number; name: string; before: number; after: number; unit: string }[];
+}
+
+// ---------------------------------------------------------------------------------------------------------------
+// Container labels
+// ---------------------------------------------------------------------------------------------------------------
+
+export const labelsQuerySchema = z.object({
+  layout: z.enum(LABEL_SHEET_CODES as unknown as [LabelSheetCode, ...LabelSheetCode[]], { message: 'Choose a label sheet' }).default('letter-2x5'),
+  prepDate: z
+    .string()
+    .refine(isIsoDate, { message: 'Give the prep date as YYYY-MM-DD' })
+    .optional(),
+});
+export type LabelsQuery = z.input<typeof labelsQuerySchema>;
+
+export interface LabelMacrosDto {
+  /** Already rounded per 21 CFR 101.9(c), as printed. */
+  calories: string;
+  fat: string;
+  carbohydrate: string;
+  protein: string;
+  /** Net carbs per the workspace's rule (no regulatory definition; shown apart from the panel values). */
+  netCarbs: string;
+}
+
+export interface ContainerLabelDto {
+  /** "Client name" or the tray name for a container that is not assigned to a client. */
+  title: string;
+  subtitle: string;
+  madeOn: string;
+  eatBy: string;
+  freezeBy: string | null;
+  reheat: string | null;
+  macros: LabelMacrosDto | null;
+  allergens: AllergenCode[];
+  allergenText: string;
+  /** Address the QR code points at, and the QR code as a data URL (SVG). */
+  url: string;
+  qr: string;
+}
+
+export interface LabelSheetDto {
+  layout: LabelSheetCode;
+  prepDate: string | null;
+  prepDates: string[];
+  labels: ContainerLabelDto[];
+}
