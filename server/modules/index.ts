@@ -3,6 +3,8 @@ import type { Router } from 'express';
 import type { Pool } from 'pg';
 import type { Env } from '../config/env.js';
 import type { Orm } from '../db/orm.js';
+import { ingredientRoutes } from './ingredients/ingredient.routes.js';
+import { workspaceSettingsRoutes } from './workspaces/workspace-settings.routes.js';
 import { clientRoutes } from './clients/client.routes.js';
 import { trayRoutes } from './trays/trays.routes.js';
 import { pantryRoutes } from './shopping/pantry.routes.js';
@@ -15,5 +17,5 @@ export interface ModuleDeps {
 }
 
 export function apiModules(deps: ModuleDeps): Router[] {
-  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), pantryRoutes(), shoppingRoutes()];
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), shoppingRoutes()];
 }

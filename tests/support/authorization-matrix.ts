@@ -1,6 +1,6 @@
 import type { Express } from 'express';
 import type { Access } from '@server/http/authz.js';
-import { clientInput, makeIngredient, type Member } from './factories.js';
+import { clientInput, ingredientInput, makeIngredient, type Member } from './factories.js';
 
 /**
  * One row per API route ("METHOD /api/path" exactly as the router declares it).
@@ -78,6 +78,40 @@ export const MATRIX: Record<string, MatrixRow> = {
     path: (ctx) => `/api/clients/${ctx.ids.clientToDelete}`,
     crossWorkspace: true,
   }),
+  // Ingredients, recipe calculation, workspace settings (issue 4)
+  'GET /api/ingredients': R(['coach', 'assistant']),
+  'POST /api/ingredients': R(['coach'], { body: () => ingredientInput() }),
+  'POST /api/ingredients/import': R(['coach']),
+  'GET /api/ingredients/:id': R(['coach', 'assistant'], {
+    prepare: async (ctx) => {
+      const res = await ctx.coachA.agent.post('/api/ingredients').send(ingredientInput());
+      ctx.ids.ingredient = res.body.id;
+    },
+    path: (ctx) => `/api/ingredients/${ctx.ids.ingredient}`,
+    crossWorkspace: true,
+  }),
+  'PATCH /api/ingredients/:id': R(['coach'], {
+    path: (ctx) => `/api/ingredients/${ctx.ids.ingredient}`,
+    body: () => ({ ...ingredientInput(), version: 1 }),
+    crossWorkspace: true,
+  }),
+  'DELETE /api/ingredients/:id': R(['coach'], {
+    prepare: async (ctx) => {
+      const res = await ctx.coachA.agent.post('/api/ingredients').send(ingredientInput());
+      ctx.ids.ingredientToDelete = res.body.id;
+    },
+    path: (ctx) => `/api/ingredients/${ctx.ids.ingredientToDelete}`,
+    crossWorkspace: true,
+  }),
+  'POST /api/ingredients/:id/copy': R(['coach'], {
+    path: (ctx) => `/api/ingredients/${ctx.ids.ingredient}/copy`,
+    crossWorkspace: true,
+  }),
+  'POST /api/calc/recipe': R(['coach', 'assistant'], {
+    body: (ctx) => ({ items: [{ ingredientId: ctx.ids.ingredient, amount: '1 1/2', unit: 'oz' }], portions: 2 }),
+  }),
+  'GET /api/workspace/settings': R(['coach']),
+  'PATCH /api/workspace/settings': R(['coach'], { body: () => ({ netCarbRule: 'half-other-polyols', version: 1 }) }),
   // Pantry and shopping list (issue 8): coach and assistant; clients never.
   'GET /api/pantry': R(['coach', 'assistant']),
   'POST /api/pantry': R(['coach', 'assistant'], {

@@ -69,3 +69,34 @@ export async function makeClient(coach: Member, overrides: Record<string, unknow
   const res = await coach.agent.post('/api/clients').send(clientInput(overrides)).expect(201);
   return res.body as { id: number; version: number; name: string } & Record<string, unknown>;
 }
+
+/** A valid workspace-own ingredient body for POST /api/ingredients (per 100 g; invented test values). */
+export function ingredientInput(overrides: Record<string, unknown> = {}) {
+  return {
+    name: uniq('Test cheese'),
+    category: 'dairy',
+    kcal: '350',
+    fatG: '30',
+    satFatG: '18',
+    proteinG: '20',
+    carbsG: '2',
+    fiberG: '0',
+    sugarsG: '1',
+    sodiumMg: '600',
+    densityGPerMl: null,
+    pieceWeights: [{ name: 'slice', grams: '21' }],
+    allergens: ['milk'],
+    purchase: { amount: '8', unit: 'oz', label: '8 oz block' },
+    priceCents: 399,
+    aisle: 'dairy-eggs',
+    source: 'package label (test)',
+    ...overrides,
+  };
+}
+
+/** Creates a workspace-own ingredient as the coach; returns the response body (IngredientDto). */
+export async function makeIngredient(coach: Member, overrides: Record<string, unknown> = {}) {
+  const res = await coach.agent.post('/api/ingredients').send(ingredientInput(overrides));
+  if (res.status !== 201) throw new Error(`makeIngredient: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body as { id: number; name: string; version: number };
+}

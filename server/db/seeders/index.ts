@@ -1,11 +1,12 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { seedDemo, type DemoStep } from './demo-seed.js';
+import { seedReferenceIngredients } from './ingredient-seed.js';
 
 /**
  * Reference data every workspace can use (idempotent, run on every start), then the demo workspace.
  * Modules add their reference seeds and demo steps here.
  */
-export const referenceSeeds: ((em: EntityManager) => Promise<void>)[] = [];
+export const referenceSeeds: ((em: EntityManager) => Promise<void>)[] = [seedReferenceIngredients];
 export const demoSteps: DemoStep[] = [];
 
 export async function seedAll(em: EntityManager, opts: { demo: boolean }) {

@@ -1,0 +1,228 @@
+import Papa from 'papaparse';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { MAJOR_ALLERGENS } from '@shared/domain/allergens.js';
+import {
+  IMPORT_COLUMNS,
+  ingredientInputSchema,
+  REQUIRED_IMPORT_COLUMNS,
+  type ImportColumn,
+  type ImportProblem,
+  type ImportResultDto,
+  type IngredientValues,
+} from '@shared/schemas/ingredients.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { HttpError } from '../../http/errors.js';
+import { Ingredient } from './ingredient.entity.js';
+import { ownNames, rowData } from './ingredient.service.js';
+
+/**
+ * CSV import of workspace-own ingredients: every row is checked first with the same zod schema as the form;
+ * when any row fails, nothing is written and the answer is a 400 with a row-level report (line, column,
+ * reason). Otherwise all rows are created in ONE transaction.
+ */
+export const MAX_IMPORT_ROWS = 2000;
+
+export class ImportRejected extends HttpError {
+  constructor(public readonly report: ImportProblem[]) {
+    const msg = `The file was not imported: ${report.length} problem${report.length === 1 ? '' : 's'} (nothing was saved)`;
+    super(400, 'import_rejected', msg, { errors: { file: [msg] }, report });
+  }
+}
+
+/** Field path of the schema → CSV column. */
+const FIELD_COLUMNS: Record<string, ImportColumn> = {
+  name: 'name',
+  category: 'category',
+  kcal: 'kcal',
+  fatG: 'fat_g',
+  satFatG: 'sat_fat_g',
+  proteinG: 'protein_g',
+  carbsG: 'carbs_g',
+  fiberG: 'fiber_g',
+  sugarsG: 'sugars_g',
+  erythritolG: 'erythritol_g',
+  alluloseG: 'allulose_g',
+  otherPolyolsG: 'other_polyols_g',
+  sodiumMg: 'sodium_mg',
+  densityGPerMl: 'density_g_per_ml',
+  densitySource: 'density_g_per_ml',
+  pieceWeights: 'piece_weights',
+  allergens: 'allergens',
+  'purchase.amount': 'purchase_amount',
+  'purchase.unit': 'purchase_unit',
+  'purchase.label': 'purchase_label',
+  priceCents: 'price_cents',
+  aisle: 'aisle',
+  source: 'source',
+  note: 'note',
+};
+
+function columnOf(path: readonly PropertyKey[]): string {
+  const [a, b] = path.map(String);
+  if (a === 'purchase' && b) return FIELD_COLUMNS[`purchase.${b}`] ?? 'purchase_unit';
+  return FIELD_COLUMNS[a] ?? a ?? 'row';
+}
+
+/** Reads the upload as UTF-8 text; refuses binary content. */
+export function csvText(buffer: Buffer): string {
+  let text: string;
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(buffer);
+  } catch {
+    throw new HttpError(415, 'unsupported_media_type', 'The file is not UTF-8 text: save it as "CSV UTF-8" and try again');
+  }
+  if (text.includes('\u0000')) throw new HttpError(415, 'unsupported_media_type', 'The file is not a CSV text file');
+  return text.replace(/^\uFEFF/, '');
+}
+
+interface CsvRow {
+  line: number;
+  cells: string[];
+}
+
+/** Rows with the file line each starts on (quoted cells may span lines). */
+function parseRows(text: string): { rows: CsvRow[]; problems: ImportProblem[] } {
+  const rows: CsvRow[] = [];
+  const problems: ImportProblem[] = [];
+  let lastCursor = 0;
+  let line = 1;
+  Papa.parse<string[]>(text, {
+    skipEmptyLines: false,
+    step: (res) => {
+      const start = lastCursor;
+      lastCursor = res.meta.cursor;
+      const cells = res.data;
+      for (const err of res.errors) problems.push({ line, column: 'row', reason: err.message });
+      if (!(cells.length === 1 && cells[0].trim() === '')) rows.push({ line, cells });
+      line += (text.slice(start, lastCursor).match(/\r\n|\r|\n/g) ?? []).length;
+    },
+  });
+  return { rows, problems };
+}
+
+function splitList(cell: string): string[] {
+  return cell
+    .split(/[;|,]/)
+    .map((s) => s.trim())
+    .filter(Boolean);
+}
+
+const ALLERGEN_BY_WORD = new Map<string, string>(
+  MAJOR_ALLERGENS.flatMap((a) => [
+    [a.code, a.code],
+    [a.label.toLowerCase(), a.code],
+  ]),
+);
+
+/** One CSV record → the input object of the form schema (cells as text; the schema does the checking). */
+function toInput(rec: Record<string, string>, line: number, problems: ImportProblem[]) {
+  const cell = (c: ImportColumn) => (rec[c] ?? '').trim();
+  const pieceWeights = splitList(cell('piece_weights')).map((part) => {
+    const m = /^(.+?)\s*[:=]\s*(.+)$/.exec(part);
+    if (!m) {
+      problems.push({ line, column: 'piece_weights', reason: `"${part}" is not "name:grams" (e.g. large:50; slice:28)` });
+      return { name: part, grams: '1' };
+    }
+    return { name: m[1], grams: m[2] };
+  });
+  const allergens = splitList(cell('allergens')).map((word) => {
+    const code = ALLERGEN_BY_WORD.get(word.toLowerCase()) ?? ALLERGEN_BY_WORD.get(word.toLowerCase().replace(/\s+/g, '-'));
+    return code ?? word;
+  });
+  const hasPurchase = cell('purchase_amount') || cell('purchase_unit') || cell('purchase_label');
+  return {
+    name: cell('name'),
+    category: cell('category').toLowerCase(),
+    kcal: cell('kcal'),
+    fatG: cell('fat_g'),
+    satFatG: cell('sat_fat_g'),
+    proteinG: cell('protein_g'),
+    carbsG: cell('carbs_g'),
+    fiberG: cell('fiber_g'),
+    sugarsG: cell('sugars_g'),
+    erythritolG: cell('erythritol_g'),
+    alluloseG: cell('allulose_g'),
+    otherPolyolsG: cell('other_polyols_g'),
+    sodiumMg: cell('sodium_mg'),
+    densityGPerMl: cell('density_g_per_ml'),
+    densitySource: cell('density_g_per_ml') ? 'CSV import' : null,
+    pieceWeights,
+    allergens,
+    purchase: hasPurchase
+      ? { amount: cell('purchase_amount'), unit: cell('purchase_unit'), label: cell('purchase_label') }
+      : null,
+    priceCents: cell('price_cents'),
+    aisle: cell('aisle').toLowerCase(),
+    source: cell('source'),
+    note: cell('note'),
+  };
+}
+
+/** Checks every row; returns the values to write, or the full report of problems. */
+export function checkCsv(text: string, existingNames: Set<string>): { values: IngredientValues[]; report: ImportProblem[] } {
+  const { rows, problems: report } = parseRows(text);
+  if (!rows.length) return { values: [], report: [{ line: 1, column: 'row', reason: 'The file is empty' }] };
+  const header = rows[0].cells.map((h) => h.trim().toLowerCase());
+  const known = new Set<string>(IMPORT_COLUMNS);
+  header.forEach((h) => {
+    if (!known.has(h)) report.push({ line: rows[0].line, column: h || '(blank)', reason: `Unknown column; use: ${IMPORT_COLUMNS.join(', ')}` });
+  });
+  header.forEach((h, i) => {
+    if (header.indexOf(h) !== i) report.push({ line: rows[0].line, column: h, reason: 'This column appears twice' });
+  });
+  for (const col of REQUIRED_IMPORT_COLUMNS) {
+    if (!header.includes(col)) report.push({ line: rows[0].line, column: col, reason: 'Required column is missing' });
+  }
+  const data = rows.slice(1);
+  if (!data.length) report.push({ line: rows[0].line + 1, column: 'row', reason: 'The file has a header but no ingredients' });
+  if (data.length > MAX_IMPORT_ROWS) {
+    report.push({ line: data[MAX_IMPORT_ROWS].line, column: 'row', reason: `At most ${MAX_IMPORT_ROWS} ingredients per file` });
+  }
+  if (report.length) return { values: [], report };
+
+  const values: IngredientValues[] = [];
+  const seen = new Map<string, number>();
+  for (const { line, cells } of data) {
+    if (cells.length !== header.length) {
+      report.push({ line, column: 'row', reason: `Has ${cells.length} cells; the header has ${header.length}` });
+      continue;
+    }
+    const rec = Object.fromEntries(header.map((h, i) => [h, cells[i] ?? '']));
+    const rowProblems: ImportProblem[] = [];
+    const parsed = ingredientInputSchema.safeParse(toInput(rec, line, rowProblems));
+    if (!parsed.success) {
+      for (const issue of parsed.error.issues) rowProblems.push({ line, column: columnOf(issue.path), reason: issue.message });
+    } else {
+      const key = parsed.data.name.toLowerCase();
+      if (existingNames.has(key)) rowProblems.push({ line, column: 'name', reason: `Your library already has "${parsed.data.name}"` });
+      else if (seen.has(key)) rowProblems.push({ line, column: 'name', reason: `Same name as line ${seen.get(key)}` });
+      seen.set(key, line);
+      values.push(parsed.data);
+    }
+    report.push(...dedupe(rowProblems));
+  }
+  return { values, report };
+}
+
+function dedupe(problems: ImportProblem[]): ImportProblem[] {
+  const keys = new Set<string>();
+  return problems.filter((p) => {
+    const k = `${p.line}|${p.column}|${p.reason}`;
+    if (keys.has(k)) return false;
+    keys.add(k);
+    return true;
+  });
+}
+
+/** All rows or none: a report of every problem (400), else every row created in one transaction. */
+export async function importIngredientsCsv(em: EntityManager, actor: Actor, buffer: Buffer): Promise<ImportResultDto> {
+  const text = csvText(buffer);
+  const { values, report } = checkCsv(text, await ownNames(em, actor));
+  if (report.length) throw new ImportRejected(report);
+  const ids = await em.transactional(async (tx) => {
+    const rows = values.map((v) => tx.create(Ingredient, { ...rowData(v), workspace: actor.workspaceId, provenance: 'workspace' }));
+    await tx.flush();
+    return rows.map((r) => r.id);
+  });
+  return { created: ids.length, ids };
+}

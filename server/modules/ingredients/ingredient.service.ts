@@ -1,0 +1,312 @@
+import Decimal from 'decimal.js';
+import { ForeignKeyConstraintViolationException, sql, type FilterQuery } from '@mikro-orm/core';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import type { AllergenCode } from '@shared/domain/allergens.js';
+import {
+  computeRecipeExact,
+  DEFAULT_NET_CARB_RULE,
+  NET_CARB_RULES,
+  toNutrientNumbers,
+  type NetCarbRule,
+  type NutritionIngredient,
+  type RecipeLine,
+} from '@shared/domain/nutrition.js';
+import { UnitConversionError } from '@shared/domain/units.js';
+import {
+  ingredientListQuerySchema,
+  recipeCalcSchema,
+  type IngredientDto,
+  type IngredientListDto,
+  type IngredientListQuery,
+  type IngredientUpdateValues,
+  type IngredientValues,
+  type RecipeCalcDto,
+  type RecipeCalcInput,
+} from '@shared/schemas/ingredients.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { Conflict, Forbidden, NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
+import { Workspace } from '../workspaces/workspace.entity.js';
+import { Ingredient, type IIngredient } from './ingredient.entity.js';
+import { allergensOf, isOwnedBy, isShared, presentIngredient, toNutritionIngredient } from './ingredient.presenter.js';
+
+/** A library row in the shape the nutrition domain reads, plus what plates and shopping lists need beside it. */
+export type LoadedIngredient = NutritionIngredient & { id: number; allergens: AllergenCode[]; priceCents: number | null };
+
+const SHARED_READ_ONLY =
+  'Shared reference ingredients are read-only. Use "Copy to my library" to make your own version you can change.';
+
+// ---------------------------------------------------------------------------------------------------------------
+// The workspace's net-carb rule
+// ---------------------------------------------------------------------------------------------------------------
+
+export function toNetCarbRule(kind: string | null | undefined): NetCarbRule {
+  const known = NET_CARB_RULES.find((r) => r.kind === kind);
+  return known ? { kind: known.kind } : DEFAULT_NET_CARB_RULE;
+}
+
+/** The net-carb rule the workspace counts with (Workspace.netCarbRule; the default when unset). */
+export async function netCarbRuleOf(em: EntityManager, workspaceId: number): Promise<NetCarbRule> {
+  const ws = await em.findOneOrFail(Workspace, workspaceId, { fields: ['netCarbRule'] });
+  return toNetCarbRule(ws.netCarbRule);
+}
+
+// ---------------------------------------------------------------------------------------------------------------
+// For other modules: rows by id, recipe calculation
+// ---------------------------------------------------------------------------------------------------------------
+
+/** Library rows the actor may use: the workspace's own and the shared reference rows. */
+function visibleTo(actor: Actor): FilterQuery<IIngredient> {
+  return { $or: [{ workspace: actor.workspaceId }, { workspace: null }] } as FilterQuery<IIngredient>;
+}
+
+async function findVisible(em: EntityManager, actor: Actor, ids: readonly number[]): Promise<Map<number, IIngredient>> {
+  const unique = [...new Set(ids)];
+  if (!unique.length) return new Map();
+  const rows = await em.find(Ingredient, { $and: [{ id: { $in: unique } }, visibleTo(actor)] } as FilterQuery<IIngredient>);
+  return new Map(rows.map((r) => [r.id, r]));
+}
+
+/**
+ * Loads library rows the actor may use (own workspace or shared), keyed by id, as `NutritionIngredient`s
+ * (plus id, allergens and price). Throws ValidationError (field `ingredientIds`) naming every id that is
+ * missing or belongs to another workspace.
+ */
+export async function loadNutritionIngredients(
+  em: EntityManager,
+  actor: Actor,
+  ids: readonly number[],
+): Promise<Map<number, LoadedIngredient>> {
+  const found = await findVisible(em, actor, ids);
+  const missing = [...new Set(ids)].filter((id) => !found.has(id));
+  if (missing.length) {
+    const msg = `No ingredient with id ${missing.join(', ')} in your library`;
+    throw new ValidationError(msg, { ingredientIds: [msg] });
+  }
+  return new Map(
+    [...found.values()].map((row) => [
+      row.id,
+      { ...toNutritionIngredient(row), id: row.id, allergens: allergensOf(row), priceCents: row.priceCents ?? null },
+    ]),
+  );
+}
+
+/**
+ * Nutrition of a recipe for the actor's workspace: `{ items: [{ ingredientId, amount, unit }], portions,
+ * yieldFactor? }` with amounts as typed ('1 1/2', '¾', '1-2' → midpoint) or numbers, and units as typed
+ * ('cups', 'Tbsp', 'large'). Uses the workspace's net-carb rule.
+ * 400s name the field: `items.N.ingredientId` (not in the library), `items.N.amount`, `items.N.unit` (a
+ * conversion needs a fact the ingredient lacks: the message names the ingredient and the fact).
+ */
+export async function computeRecipeForActor(em: EntityManager, actor: Actor, input: RecipeCalcInput): Promise<RecipeCalcDto> {
+  const parsed = recipeCalcSchema.parse(input);
+  const found = await findVisible(em, actor, parsed.items.map((i) => i.ingredientId));
+  const errors: Record<string, string[]> = {};
+  parsed.items.forEach((item, i) => {
+    if (!found.has(item.ingredientId)) errors[`items.${i}.ingredientId`] = [`No ingredient with id ${item.ingredientId} in your library`];
+  });
+  if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
+
+  const lines: RecipeLine[] = parsed.items.map((item) => ({
+    ingredient: toNutritionIngredient(found.get(item.ingredientId)!),
+    amount: item.amount,
+    unit: item.unit,
+  }));
+  parsed.items.forEach((item, i) => {
+    try {
+      computeRecipeExact([lines[i]]);
+    } catch (e) {
+      if (!(e instanceof UnitConversionError)) throw e;
+      errors[`items.${i}.unit`] = [`${e.message} Add it to the ingredient, or use grams.`];
+    }
+  });
+  if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
+
+  const rule = await netCarbRuleOf(em, actor.workspaceId);
+  const exact = computeRecipeExact(lines, { portions: parsed.portions, yieldFactor: parsed.yieldFactor, netCarbRule: rule });
+  return {
+    total: toNutrientNumbers(exact.total),
+    perPortion: toNutrientNumbers(exact.perPortion),
+    portions: exact.portions,
+    yieldFactor: exact.yieldFactor.toNumber(),
+    netCarbRule: rule.kind,
+    lines: parsed.items.map((item, i) => ({
+      ingredientId: item.ingredientId,
+      name: exact.lines[i].ingredient,
+      amount: new Decimal(item.amount).toNumber(),
+      unit: item.unit,
+      grams: exact.lines[i].grams.toDecimalPlaces(2).toNumber(),
+    })),
+  };
+}
+
+// ---------------------------------------------------------------------------------------------------------------
+// Library
+// ---------------------------------------------------------------------------------------------------------------
+
+function escapeLike(q: string): string {
+  return q.replace(/[\\%_]/g, (c) => `\\${c}`);
+}
+
+export async function listIngredients(em: EntityManager, actor: Actor, query: IngredientListQuery): Promise<IngredientListDto> {
+  const q = ingredientListQuerySchema.parse(query);
+  const and: FilterQuery<IIngredient>[] = [];
+  if (q.scope === 'mine') and.push({ workspace: actor.workspaceId } as FilterQuery<IIngredient>);
+  else if (q.scope === 'shared') and.push({ workspace: null } as FilterQuery<IIngredient>);
+  else and.push(visibleTo(actor));
+  if (q.q) and.push({ name: { $ilike: `%${escapeLike(q.q)}%` } });
+  if (q.category) and.push({ category: q.category });
+  const desc = q.sort.startsWith('-');
+  const field = (desc ? q.sort.slice(1) : q.sort) as keyof IIngredient;
+  const dir = desc ? 'desc' : 'asc';
+  const orderBy =
+    field === 'name' ? [{ [sql.lower('name')]: dir }, { id: 'asc' }] : [{ [field]: dir }, { [sql.lower('name')]: 'asc' }, { id: 'asc' }];
+  const [rows, total] = await em.findAndCount(Ingredient, { $and: and } as FilterQuery<IIngredient>, {
+    orderBy: orderBy as never,
+    limit: q.pageSize,
+    offset: (q.page - 1) * q.pageSize,
+  });
+  const rule = await netCarbRuleOf(em, actor.workspaceId);
+  return { items: rows.map((r) => presentIngredient(r, actor, rule)), total, page: q.page, pageSize: q.pageSize, netCarbRule: rule.kind };
+}
+
+async function findOne(em: EntityManager, actor: Actor, id: number): Promise<IIngredient> {
+  const row = (await findVisible(em, actor, [id])).get(id);
+  if (!row) throw new NotFound('Ingredient');
+  return row;
+}
+
+/** An own row the coach may change; a shared row is 403 (with the copy hint), another workspace's 404. */
+async function findEditable(em: EntityManager, actor: Actor, id: number): Promise<IIngredient> {
+  const row = await findOne(em, actor, id);
+  if (isShared(row)) throw new Forbidden(SHARED_READ_ONLY);
+  if (!isOwnedBy(row, actor)) throw new NotFound('Ingredient');
+  return row;
+}
+
+export async function getIngredient(em: EntityManager, actor: Actor, id: number): Promise<IngredientDto> {
+  const row = await findOne(em, actor, id);
+  return presentIngredient(row, actor, await netCarbRuleOf(em, actor.workspaceId));
+}
+
+/** Column values of an entity row from validated input (decimals stay strings). */
+export function rowData(v: IngredientValues) {
+  return {
+    name: v.name,
+    category: v.category,
+    kcal: v.kcal,
+    fatG: v.fatG,
+    satFatG: v.satFatG,
+    proteinG: v.proteinG,
+    carbsG: v.carbsG,
+    fiberG: v.fiberG,
+    sugarsG: v.sugarsG,
+    erythritolG: v.erythritolG,
+    alluloseG: v.alluloseG,
+    otherPolyolsG: v.otherPolyolsG,
+    sodiumMg: v.sodiumMg,
+    densityGPerMl: v.densityGPerMl,
+    densitySource: v.densitySource,
+    pieceWeights: Object.fromEntries(v.pieceWeights.map((p) => [p.name, Number(p.grams)])),
+    allergens: [...v.allergens],
+    purchaseAmount: v.purchase?.amount ?? null,
+    purchaseUnit: v.purchase ? v.purchase.unit.trim() : null,
+    purchaseLabel: v.purchase?.label ?? null,
+    priceCents: v.priceCents,
+    aisle: v.aisle,
+    source: v.source,
+    note: v.note,
+  };
+}
+
+/** Own-library names in use (lower case), optionally without one row. */
+export async function ownNames(em: EntityManager, actor: Actor, exceptId?: number): Promise<Set<string>> {
+  const rows = await em.find(Ingredient, { workspace: actor.workspaceId }, { fields: ['id', 'name'] });
+  return new Set(rows.filter((r) => r.id !== exceptId).map((r) => r.name.trim().toLowerCase()));
+}
+
+async function checkName(em: EntityManager, actor: Actor, name: string, exceptId?: number) {
+  if ((await ownNames(em, actor, exceptId)).has(name.trim().toLowerCase())) {
+    throw ValidationError.field('name', `Your library already has "${name}"`);
+  }
+}
+
+export async function createIngredient(em: EntityManager, actor: Actor, v: IngredientValues): Promise<IngredientDto> {
+  await checkName(em, actor, v.name);
+  const row = em.create(Ingredient, { ...rowData(v), workspace: actor.workspaceId, provenance: 'workspace' });
+  await em.flush();
+  return presentIngredient(row, actor, await netCarbRuleOf(em, actor.workspaceId));
+}
+
+export async function updateIngredient(
+  em: EntityManager,
+  actor: Actor,
+  id: number,
+  v: IngredientUpdateValues,
+): Promise<IngredientDto> {
+  const row = await findEditable(em, actor, id);
+  const rule = await netCarbRuleOf(em, actor.workspaceId);
+  if (row.version !== v.version) throw new StaleEdit(row.version, presentIngredient(row, actor, rule));
+  await checkName(em, actor, v.name, row.id);
+  em.assign(row, rowData(v));
+  await em.flush();
+  return presentIngredient(row, actor, rule);
+}
+
+/** Deletes an own row; 409 when a base tray (or anything else) still references it. */
+export async function deleteIngredient(em: EntityManager, actor: Actor, id: number): Promise<void> {
+  const row = await findEditable(em, actor, id);
+  try {
+    await em.transactional(async (tx) => {
+      await tx.nativeDelete(Ingredient, { id: row.id });
+    });
+  } catch (e) {
+    if (e instanceof ForeignKeyConstraintViolationException) {
+      throw new Conflict(`"${row.name}" is used by a base tray, so it cannot be deleted. Remove it from the tray first.`, {
+        code: 'in_use',
+      });
+    }
+    throw e;
+  }
+  em.clear();
+}
+
+/** "Copy to my library": a workspace-own copy of a shared (or own) row, named "<name> (copy)" when taken. */
+export async function copyIngredient(em: EntityManager, actor: Actor, id: number): Promise<IngredientDto> {
+  const src = await findOne(em, actor, id);
+  const names = await ownNames(em, actor);
+  let name = src.name;
+  for (let n = 1; names.has(name.toLowerCase()); n++) name = `${src.name} (copy${n > 1 ? ` ${n}` : ''})`;
+  const row = em.create(Ingredient, {
+    workspace: actor.workspaceId,
+    slug: null,
+    name: name.slice(0, 160),
+    category: src.category,
+    kcal: src.kcal,
+    fatG: src.fatG,
+    satFatG: src.satFatG,
+    proteinG: src.proteinG,
+    carbsG: src.carbsG,
+    fiberG: src.fiberG,
+    sugarsG: src.sugarsG,
+    erythritolG: src.erythritolG,
+    alluloseG: src.alluloseG,
+    otherPolyolsG: src.otherPolyolsG,
+    sodiumMg: src.sodiumMg,
+    densityGPerMl: src.densityGPerMl,
+    densitySource: src.densitySource,
+    pieceWeights: { ...(src.pieceWeights ?? {}) },
+    allergens: [...(src.allergens ?? [])],
+    purchaseAmount: src.purchaseAmount,
+    purchaseUnit: src.purchaseUnit,
+    purchaseLabel: src.purchaseLabel,
+    priceCents: src.priceCents,
+    aisle: src.aisle,
+    source: src.source,
+    // The copy is the workspace's own from now on; its source text still says where the values came from.
+    provenance: 'workspace',
+    fdcId: src.fdcId,
+    note: src.note,
+  });
+  await em.flush();
+  return presentIngredient(row, actor, await netCarbRuleOf(em, actor.workspaceId));
+}
