@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { seedDemo, type DemoStep } from './demo-seed.js';
+import { seedDemoTrays } from './tray-demo.js';
 import { seedReferenceIngredients } from './ingredient-seed.js';
 
 /**
@@ -7,7 +8,7 @@ import { seedReferenceIngredients } from './ingredient-seed.js';
  * Modules add their reference seeds and demo steps here.
  */
 export const referenceSeeds: ((em: EntityManager) => Promise<void>)[] = [seedReferenceIngredients];
-export const demoSteps: DemoStep[] = [];
+export const demoSteps: DemoStep[] = [seedDemoTrays];
 
 export async function seedAll(em: EntityManager, opts: { demo: boolean }) {
   for (const seed of referenceSeeds) await seed(em.fork());
