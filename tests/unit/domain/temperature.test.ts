@@ -1,0 +1,77 @@
+/**
+ * °F ↔ °C against the definition (NIST SP 811: °C = (°F − 32) × 5/9) and two general-purpose reference libraries
+ * (convert-units, js-quantities).
+ */
+import fc from 'fast-check';
+import convert from 'convert-units';
+import Qty from 'js-quantities';
+import { describe, expect, it } from 'vitest';
+
+import {
+  celsiusDeltaToFahrenheit,
+  celsiusToFahrenheit,
+  fahrenheitDeltaToCelsius,
+  fahrenheitToCelsius,
+  toCelsiusRounded,
+  toFahrenheitRounded,
+} from '@shared/domain/temperature';
+
+describe('temperature scales', () => {
+  it.each([
+    // Fixed points of the definition (NIST SP 811): water freezes at 32 °F = 0 °C, boils at 212 °F = 100 °C;
+    // the scales cross at −40.
+    [32, 0],
+    [212, 100],
+    [-40, -40],
+    // FDA Food Code §3-501.14 pairs its °F limits with °C: 135 °F (57 °C), 70 °F (21 °C), 41 °F (5 °C).
+    [135, 57],
+    [70, 21],
+    [41, 5],
+    // USDA FSIS pairs 160 °F with 71.1 °C and 165 °F with 73.9 °C (one decimal).
+    [160, 71],
+    [165, 74],
+  ])('%d °F ≈ %d °C', (f, c) => {
+    expect(toCelsiusRounded(f)).toBe(c);
+  });
+
+  it.each([
+    [160, 71.1],
+    [165, 73.9],
+    [145, 62.8],
+  ])('USDA FSIS chart: %d °F = %d °C to one decimal', (f, c) => {
+    // USDA FSIS Safe Minimum Internal Temperatures chart gives these °C values beside the °F ones.
+    expect(toCelsiusRounded(f, 1)).toBe(c);
+  });
+
+  it.each([325, 350, 375, 400, 425, 450, 500])('oven %d °F agrees with convert-units and js-quantities', (f) => {
+    const exact = fahrenheitToCelsius(f).toNumber();
+    expect(exact).toBeCloseTo(convert(f).from('F').to('C'), 9);
+    expect(exact).toBeCloseTo(Qty(f, 'tempF').to('tempC').scalar, 9);
+  });
+
+  it.each([150, 180, 200, 220, 230])('oven %d °C agrees with convert-units (exact: × 9/5 + 32)', (c) => {
+    expect(celsiusToFahrenheit(c).toNumber()).toBeCloseTo(convert(c).from('C').to('F'), 9);
+    // × 1.8 + 32 is an exact decimal: 200 °C = 392 °F exactly.
+    expect(celsiusToFahrenheit(c).equals(c * 1.8 + 32)).toBe(true);
+  });
+
+  it('rounded helpers round half up at the presentation edge', () => {
+    // 350 °F = 176.666… °C → 177; 180 °C = 356 °F.
+    expect(toCelsiusRounded(350)).toBe(177);
+    expect(toFahrenheitRounded(180)).toBe(356);
+  });
+
+  it('differences scale by 5/9 without the 32 offset (a 25 °F convection offset ≈ 13.9 °C)', () => {
+    // Reference §8: "lower the set temperature by about 25 °F (≈ 14 °C)".
+    expect(fahrenheitDeltaToCelsius(25).toDecimalPlaces(1).toNumber()).toBe(13.9);
+    expect(celsiusDeltaToFahrenheit(20).toNumber()).toBe(36);
+  });
+
+  it('°F → °C → °F round-trips', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: -100, max: 1000 }), (f) => {
+        expect(celsiusToFahrenheit(fahrenheitToCelsius(f)).toDecimalPlaces(10).toNumber()).toBe(f);
+      }),
+    );
+  });
+});
