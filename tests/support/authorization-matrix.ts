@@ -1,6 +1,6 @@
 import type { Express } from 'express';
 import type { Access } from '@server/http/authz.js';
-import { clientInput, ingredientInput, makeIngredient, type Member } from './factories.js';
+import { clientInput, ingredientInput, makeIngredient, makeTray, trayInput, type Member } from './factories.js';
 
 /**
  * One row per API route ("METHOD /api/path" exactly as the router declares it).
@@ -141,5 +141,38 @@ export const MATRIX: Record<string, MatrixRow> = {
   }),
   'POST /api/shopping/preview': R(['coach', 'assistant'], {
     body: (ctx) => ({ addOns: [{ ingredientId: ctx.ids.pantryIngredient, amount: '100', unit: 'g' }] }),
+  }),
+  // Base trays (issue 5): coach writes; assistant reads; a client reads only trays in their own plan (none yet: 404).
+  'GET /api/trays': R(['coach', 'assistant', 'client']),
+  'POST /api/trays': R(['coach'], {
+    prepare: async (ctx) => {
+      ctx.ids.trayIngredient = (await makeIngredient(ctx.coachA)).id;
+      ctx.ids.tray = (await makeTray(ctx.coachA, {}, Number(ctx.ids.trayIngredient))).id;
+      ctx.ids.trayToDelete = (await makeTray(ctx.coachA, {}, Number(ctx.ids.trayIngredient))).id;
+    },
+    body: (ctx) => trayInput(Number(ctx.ids.trayIngredient)),
+  }),
+  'GET /api/trays/:id': R(['coach', 'assistant', 'client'], { path: (ctx) => `/api/trays/${ctx.ids.tray}`, crossWorkspace: true }),
+  'PUT /api/trays/:id': R(['coach'], {
+    path: (ctx) => `/api/trays/${ctx.ids.tray}`,
+    body: (ctx) => ({ ...trayInput(Number(ctx.ids.trayIngredient)), version: 1 }),
+    crossWorkspace: true,
+  }),
+  'DELETE /api/trays/:id': R(['coach'], { path: (ctx) => `/api/trays/${ctx.ids.trayToDelete}`, crossWorkspace: true }),
+  'GET /api/trays/:id/portion-card': R(['coach', 'assistant', 'client'], {
+    path: (ctx) => `/api/trays/${ctx.ids.tray}/portion-card`,
+    crossWorkspace: true,
+  }),
+  'POST /api/trays/:id/scale': R(['coach', 'assistant', 'client'], {
+    path: (ctx) => `/api/trays/${ctx.ids.tray}/scale`,
+    body: () => ({ factor: 2 }),
+    crossWorkspace: true,
+  }),
+  'POST /api/trays/:id/duplicate': R(['coach'], { path: (ctx) => `/api/trays/${ctx.ids.tray}/duplicate`, crossWorkspace: true }),
+  'POST /api/trays/:id/photo': R(['coach'], { path: (ctx) => `/api/trays/${ctx.ids.tray}/photo`, crossWorkspace: true }),
+  'GET /api/trays/:id/photo': R(['coach', 'assistant', 'client'], { path: (ctx) => `/api/trays/${ctx.ids.tray}/photo`, crossWorkspace: true }),
+  'GET /api/trays/:id/thumbnail': R(['coach', 'assistant', 'client'], {
+    path: (ctx) => `/api/trays/${ctx.ids.tray}/thumbnail`,
+    crossWorkspace: true,
   }),
 };

@@ -100,3 +100,29 @@ export async function makeIngredient(coach: Member, overrides: Record<string, un
   if (res.status !== 201) throw new Error(`makeIngredient: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body as { id: number; name: string; version: number };
 }
+
+/** A valid base-tray body for POST /api/trays (invented test values): one line of the given ingredient. */
+export function trayInput(ingredientId: number, overrides: Record<string, unknown> = {}) {
+  return {
+    name: uniq('Test egg slab'),
+    description: 'A test tray',
+    lines: [{ ingredientId, amountText: '8', unit: 'oz', note: '' }],
+    pan: { code: 'half-sheet' },
+    panLining: 'parchment',
+    bake: { category: 'egg-slab', tempF: 350, minMinutes: 25, maxMinutes: 30 },
+    yieldFactor: 0.9,
+    cutPlan: { kind: 'grid', rows: 4, columns: 4 },
+    storage: { fridgeDays: 4, freezerWeeks: 8 },
+    reheatSteps: ['Microwave covered until hot in the centre'],
+    tags: ['breakfast'],
+    ...overrides,
+  };
+}
+
+/** Creates a base tray as the coach (with a fresh ingredient unless one is given); returns the TrayDto body. */
+export async function makeTray(coach: Member, overrides: Record<string, unknown> = {}, ingredientId?: number) {
+  const ing = ingredientId ?? (await makeIngredient(coach)).id;
+  const res = await coach.agent.post('/api/trays').send(trayInput(ing, overrides));
+  if (res.status !== 201) throw new Error(`makeTray: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body as { id: number; version: number; name: string } & Record<string, unknown>;
+}
