@@ -9,5 +9,8 @@ export function appRoutes(qc: QueryClient): RouteObject[] {
     { index: true, lazy: () => import('./routes/home/home.route') },
     { path: paths.settings, lazy: () => import('./routes/settings/settings.route') },
     { path: paths.team, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/team/team.route') },
+    { path: paths.ingredients, loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/ingredients/ingredients.route') },
+    { path: paths.ingredientNew, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/ingredients/ingredient-new.route') },
+    { path: paths.ingredient(), loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/ingredients/ingredient.route') },
   ];
 }

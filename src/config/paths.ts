@@ -7,6 +7,8 @@ export const paths = {
   settings: '/settings',
   team: '/team',
   ingredients: '/ingredients',
+  ingredientNew: '/ingredients/new',
+  ingredient: (id: number | string = ':ingredientId') => `/ingredients/${id}`,
   trays: '/trays',
   tray: (id: number | string = ':trayId') => `/trays/${id}`,
   trayNew: '/trays/new',

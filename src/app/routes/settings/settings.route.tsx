@@ -9,6 +9,7 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Card, Notice, PageHeader } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
+import { NetCarbRuleCard } from '@/features/ingredients/components/net-carb-rule-card';
 
 export function Component() {
   const me = useMe();
@@ -54,6 +55,7 @@ export function Component() {
           </SelectField>
         </div>
       </Card>
+      {me.role === 'coach' && <NetCarbRuleCard />}
       <Card>
         <h2 className="mb-3 text-xl">Password</h2>
         <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">

@@ -1,0 +1,123 @@
+import { useState } from 'react';
+import { useNavigate, useParams } from 'react-router-dom';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { toast } from 'sonner';
+import type { IngredientDto } from '@shared/schemas/ingredients.schema';
+import { useMe } from '@/features/auth/hooks/use-me';
+import { ingredientQuery } from '@/features/ingredients/api/ingredients.queries';
+import { ingredientKeys } from '@/features/ingredients/api/ingredients.keys';
+import { useCopyIngredient, useDeleteIngredient, useUpdateIngredient } from '@/features/ingredients/api/use-ingredient-mutations';
+import { formValuesOf, IngredientForm } from '@/features/ingredients/components/ingredient-form';
+import { IngredientFacts } from '@/features/ingredients/components/ingredient-facts';
+import { AtwaterFlag } from '@/features/ingredients/components/ingredient-bits';
+import { Button } from '@/components/ui/button';
+import { ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { isApiError } from '@/lib/problem';
+import { paths } from '@/config/paths';
+
+function EditOwn({ ingredient }: { ingredient: IngredientDto }) {
+  const qc = useQueryClient();
+  const navigate = useNavigate();
+  const update = useUpdateIngredient(ingredient.id);
+  const del = useDeleteIngredient();
+  const [stale, setStale] = useState(false);
+  const [formKey, setFormKey] = useState(0);
+  return (
+    <>
+      <p>
+        <AtwaterFlag check={ingredient.atwater} long />
+      </p>
+      {stale && (
+        <Notice tone="warn" title="Someone else saved this ingredient while you were editing">
+          The form now shows their version. Make your change again and save.
+        </Notice>
+      )}
+      <IngredientForm
+        key={`${ingredient.id}-${formKey}`}
+        initial={formValuesOf(ingredient)}
+        submitLabel="Save changes"
+        busy={update.isPending}
+        onSave={async (values) => {
+          setStale(false);
+          try {
+            await update.mutateAsync({ ...values, version: ingredient.version });
+            toast.success('Saved');
+          } catch (err) {
+            if (isApiError(err, 409)) {
+              const current = err.problem.current as IngredientDto | undefined;
+              if (current) qc.setQueryData(ingredientKeys.detail(ingredient.id), current);
+              else await qc.invalidateQueries({ queryKey: ingredientKeys.detail(ingredient.id) });
+              setStale(true);
+              setFormKey((k) => k + 1);
+              return;
+            }
+            throw err;
+          }
+        }}
+      />
+      <div className="border-t border-line pt-4">
+        <Button
+          variant="danger"
+          busy={del.isPending}
+          onClick={() => {
+            if (!window.confirm(`Delete ${ingredient.name}? This cannot be undone.`)) return;
+            del.mutate(ingredient.id, {
+              onSuccess: () => {
+                toast.success('Deleted');
+                navigate(paths.ingredients);
+              },
+            });
+          }}
+        >
+          Delete ingredient
+        </Button>
+        <p className="mt-1 text-sm text-ink-faint">An ingredient used by a base tray cannot be deleted.</p>
+      </div>
+    </>
+  );
+}
+
+export function Component() {
+  const me = useMe();
+  const id = Number(useParams().ingredientId);
+  const navigate = useNavigate();
+  const detail = useQuery({ ...ingredientQuery(id), enabled: Number.isInteger(id) && id > 0 });
+  const copy = useCopyIngredient();
+
+  if (!Number.isInteger(id) || id <= 0) return <ErrorState error={new Error('Not an ingredient')} />;
+  if (detail.isPending) return <PageSkeleton />;
+  if (detail.isError) return <ErrorState error={detail.error} retry={() => detail.refetch()} />;
+  const i = detail.data;
+  return (
+    <div className="flex max-w-5xl flex-col gap-6">
+      <PageHeader title={i.name} lead={i.shared ? 'Shared library (read-only)' : 'Your library'}>
+        {me.role === 'coach' && (
+          <Button
+            variant="secondary"
+            busy={copy.isPending}
+            onClick={() =>
+              copy.mutate(i.id, {
+                onSuccess: (dto) => {
+                  toast.success(`Copied to your library as “${dto.name}”`);
+                  navigate(paths.ingredient(dto.id));
+                },
+              })
+            }
+          >
+            Copy to my library
+          </Button>
+        )}
+      </PageHeader>
+      {i.editable ? (
+        <EditOwn ingredient={i} />
+      ) : (
+        <>
+          {i.shared && me.role === 'coach' && (
+            <Notice tone="info">Shared ingredients are the same for every workspace. Copy one to your library to change it.</Notice>
+          )}
+          <IngredientFacts ingredient={i} />
+        </>
+      )}
+    </div>
+  );
+}
