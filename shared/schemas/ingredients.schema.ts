@@ -265,6 +265,8 @@ export const ingredientListQuerySchema = z.object({
   sort: z.enum(INGREDIENT_SORTS, { message: 'Not a sort order' }).default('name'),
 });
 export type IngredientListQuery = z.input<typeof ingredientListQuerySchema>;
+/** The list filters with their defaults filled in (what the client keeps and sends). */
+export type IngredientListParams = z.output<typeof ingredientListQuerySchema>;
 
 export const ingredientIdParams = z.object({ id: z.coerce.number().int().positive({ message: 'Not an ingredient id' }) });
 
