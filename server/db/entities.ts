@@ -4,6 +4,8 @@ import { Invitation, Membership, PasswordReset, User } from '../modules/auth/use
 import { Ingredient } from '../modules/ingredients/ingredient.entity.js';
 import { Tray, TrayLine, TrayPhoto } from '../modules/trays/tray.entity.js';
 import { Client } from '../modules/clients/client.entity.js';
+import { Assembly, AssemblyItem } from '../modules/assemblies/assembly.entity.js';
+import { Week, WeekCell, WeekPublication, WeekTray } from '../modules/weeks/week.entity.js';
 import { PantryItem } from '../modules/shopping/pantry.entity.js';
 
-export const entities = [Workspace, User, Membership, Invitation, PasswordReset, Ingredient, Tray, TrayLine, TrayPhoto, Client, PantryItem];
+export const entities = [Workspace, User, Membership, Invitation, PasswordReset, Ingredient, Tray, TrayLine, TrayPhoto, Client, Assembly, AssemblyItem, Week, WeekTray, WeekCell, WeekPublication, PantryItem];

@@ -6,6 +6,8 @@ import type { Orm } from '../db/orm.js';
 import { ingredientRoutes } from './ingredients/ingredient.routes.js';
 import { workspaceSettingsRoutes } from './workspaces/workspace-settings.routes.js';
 import { clientRoutes } from './clients/client.routes.js';
+import { assemblyRoutes } from './assemblies/assembly.routes.js';
+import { weekRoutes } from './weeks/week.routes.js';
 import { trayRoutes } from './trays/trays.routes.js';
 import { pantryRoutes } from './shopping/pantry.routes.js';
 import { shoppingRoutes } from './shopping/shopping.routes.js';
@@ -17,5 +19,5 @@ export interface ModuleDeps {
 }
 
 export function apiModules(deps: ModuleDeps): Router[] {
-  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), shoppingRoutes()];
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), shoppingRoutes()];
 }

@@ -1,6 +1,6 @@
 import type { Express } from 'express';
 import type { Access } from '@server/http/authz.js';
-import { clientInput, ingredientInput, makeIngredient, makeTray, trayInput, type Member } from './factories.js';
+import { clientInput, ingredientInput, makeAssembly, makeIngredient, makeTray, makeWeek, trayInput, type Member } from './factories.js';
 
 /**
  * One row per API route ("METHOD /api/path" exactly as the router declares it).
@@ -78,6 +78,59 @@ export const MATRIX: Record<string, MatrixRow> = {
     path: (ctx) => `/api/clients/${ctx.ids.clientToDelete}`,
     crossWorkspace: true,
   }),
+  // Plates (issue 7)
+  'GET /api/assemblies': R(['coach', 'assistant']),
+  'POST /api/assemblies': R(['coach']),
+  'GET /api/assemblies/:id': R(['coach', 'assistant'], {
+    prepare: async (ctx) => {
+      const tray = await makeTray(ctx.coachA);
+      ctx.ids.tray7 = tray.id;
+      ctx.ids.assembly = (await makeAssembly(ctx.coachA, tray.id)).id;
+      ctx.ids.assemblyToDelete = (await makeAssembly(ctx.coachA, tray.id)).id;
+    },
+    path: (ctx) => `/api/assemblies/${ctx.ids.assembly}`,
+    crossWorkspace: true,
+  }),
+  'PUT /api/assemblies/:id': R(['coach'], {
+    path: (ctx) => `/api/assemblies/${ctx.ids.assembly}`,
+    body: (ctx) => ({ version: 1, name: 'Matrix plate', trays: [{ trayId: ctx.ids.tray7, portions: 1 }] }),
+    crossWorkspace: true,
+  }),
+  'DELETE /api/assemblies/:id': R(['coach'], { path: (ctx) => `/api/assemblies/${ctx.ids.assemblyToDelete}`, crossWorkspace: true }),
+  // Prep weeks and the week board (issue 7)
+  'GET /api/weeks/mine': R(['client']),
+  'GET /api/weeks/glance': R(['coach']),
+  'GET /api/weeks': R(['coach', 'assistant']),
+  'POST /api/weeks': R(['coach'], { body: () => ({ startDate: '2026-03-02', prepDate: '2026-03-01' }) }),
+  'GET /api/weeks/:id': R(['coach'], {
+    prepare: async (ctx) => {
+      ctx.ids.week = (await makeWeek(ctx.coachA)).week.id;
+      ctx.ids.weekToDelete = (await makeWeek(ctx.coachA)).week.id;
+    },
+    path: (ctx) => `/api/weeks/${ctx.ids.week}`,
+    crossWorkspace: true,
+  }),
+  'PATCH /api/weeks/:id': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}`, body: () => ({ version: 999 }), crossWorkspace: true }),
+  'DELETE /api/weeks/:id': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.weekToDelete}`, crossWorkspace: true }),
+  'PUT /api/weeks/:id/cells': R(['coach'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.week}/cells`,
+    body: () => ({ version: 999, cells: [{ clientId: 1, date: '2026-01-05', slot: 'breakfast', assemblyId: null }] }),
+    crossWorkspace: true,
+  }),
+  'PUT /api/weeks/:id/trays': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/trays`, body: () => ({ version: 999, trays: [] }), crossWorkspace: true }),
+  'POST /api/weeks/:id/trays/cover': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/trays/cover`, body: () => ({ version: 999 }), crossWorkspace: true }),
+  'POST /api/weeks/:id/copy-day': R(['coach'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.week}/copy-day`,
+    body: () => ({ version: 999, fromDate: '2026-01-05', toDate: '2026-01-06' }),
+    crossWorkspace: true,
+  }),
+  'POST /api/weeks/:id/copy': R(['coach'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.week}/copy`,
+    body: () => ({ startDate: '2026-02-02', prepDate: '2026-02-01' }),
+    crossWorkspace: true,
+  }),
+  'POST /api/weeks/:id/publish': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/publish`, body: () => ({ version: 999 }), crossWorkspace: true }),
+  'GET /api/weeks/:id/publications': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/publications`, crossWorkspace: true }),
   // Ingredients, recipe calculation, workspace settings (issue 4)
   'GET /api/ingredients': R(['coach', 'assistant']),
   'POST /api/ingredients': R(['coach'], { body: () => ingredientInput() }),

@@ -126,3 +126,19 @@ export async function makeTray(coach: Member, overrides: Record<string, unknown>
   if (res.status !== 201) throw new Error(`makeTray: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body as { id: number; version: number; name: string } & Record<string, unknown>;
 }
+
+/** A plate (POST /api/assemblies) of `portions` of one tray, plus optional add-ons. */
+export async function makeAssembly(coach: Member, trayId: number, overrides: Record<string, unknown> = {}) {
+  const res = await coach.agent
+    .post('/api/assemblies')
+    .send({ name: uniq('Plate'), trays: [{ trayId, portions: 1 }], addOns: [], assemblySteps: ['Plate it'], reheatSteps: [], ...overrides });
+  if (res.status !== 201) throw new Error(`makeAssembly: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body as { id: number; version: number; name: string } & Record<string, unknown>;
+}
+
+/** A prep week (POST /api/weeks); returns the board. Default: board Mon 2026-01-05 … Sun 01-11, prep Sun 01-04. */
+export async function makeWeek(coach: Member, overrides: Record<string, unknown> = {}) {
+  const res = await coach.agent.post('/api/weeks').send({ startDate: '2026-01-05', prepDate: '2026-01-04', ...overrides });
+  if (res.status !== 201) throw new Error(`makeWeek: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body as { week: { id: number; version: number } } & Record<string, unknown>;
+}

@@ -36,29 +36,24 @@ import {
   type TrayIngredient,
 } from './tray-nutrition.js';
 import { removePhotoFiles } from './tray-photo.service.js';
+import { publishedTrayIdsForClient, trayInUse } from '../weeks/week-publish.service.js';
 
 type ListQuery = z.output<typeof listTraysQuerySchema>;
 type UpdateValues = z.output<typeof updateTraySchema>;
 type ScaleValues = z.output<typeof scaleTraySchema>;
 
 // ---------------------------------------------------------------------------------------------------------------
-// Hooks for the week board (plans do not exist yet)
+// Hooks for the week board
 // ---------------------------------------------------------------------------------------------------------------
 
-/**
- * HOOK for the week board: ids of the trays in the signed-in client's own plan. Plans do not exist yet, so a
- * client sees no trays. The week-board engineer replaces the body (published weeks → plates → trays).
- */
-export async function trayIdsInClientPlan(_em: EntityManager, _actor: Actor): Promise<number[]> {
-  return [];
+/** Ids of the trays in the signed-in client's own published plans (the weeks module reads the publications). */
+export async function trayIdsInClientPlan(em: EntityManager, actor: Actor): Promise<number[]> {
+  return publishedTrayIdsForClient(em, actor);
 }
 
-/**
- * HOOK for the week board: whether any plan uses this tray. A used tray is archived on DELETE, never deleted.
- * Plans do not exist yet, so nothing uses a tray.
- */
-export async function trayIsUsedByPlan(_em: EntityManager, _actor: Actor, _trayId: number): Promise<boolean> {
-  return false;
+/** Whether a plate or a prep week uses this tray. A used tray is archived on DELETE, never deleted. */
+export async function trayIsUsedByPlan(em: EntityManager, actor: Actor, trayId: number): Promise<boolean> {
+  return trayInUse(em, actor.workspaceId, trayId);
 }
 
 // ---------------------------------------------------------------------------------------------------------------

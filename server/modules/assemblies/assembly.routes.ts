@@ -1,0 +1,48 @@
+import { Router } from 'express';
+import { assemblyIdParams, createAssemblySchema, updateAssemblySchema } from '@shared/schemas/assemblies.schema.js';
+import { actorOf, allow } from '../../http/authz.js';
+import { emOf } from '../../http/request-context.js';
+import { validated } from '../../http/validate.js';
+import * as plates from './assembly.service.js';
+
+export function assemblyRoutes() {
+  const r = Router();
+
+  // Plates hold no client data: the assistant may read them (prep day), only the coach writes.
+  r.get('/assemblies', allow('coach', 'assistant'), validated({}, (_i, req) => plates.listAssemblies(emOf(req), actorOf(req))));
+
+  r.post(
+    '/assemblies',
+    allow('coach'),
+    validated({ body: createAssemblySchema }, async ({ body }, req, res) => {
+      const dto = await plates.createAssembly(emOf(req), actorOf(req), body);
+      res.status(201);
+      return dto;
+    }),
+  );
+
+  r.get(
+    '/assemblies/:id',
+    allow('coach', 'assistant'),
+    validated({ params: assemblyIdParams }, ({ params }, req) => plates.getAssembly(emOf(req), actorOf(req), params.id)),
+  );
+
+  r.put(
+    '/assemblies/:id',
+    allow('coach'),
+    validated({ params: assemblyIdParams, body: updateAssemblySchema }, ({ params, body }, req) =>
+      plates.updateAssembly(emOf(req), actorOf(req), params.id, body),
+    ),
+  );
+
+  // A plate used on a week board cannot be deleted (409 in_use).
+  r.delete(
+    '/assemblies/:id',
+    allow('coach'),
+    validated({ params: assemblyIdParams }, async ({ params }, req) => {
+      await plates.deleteAssembly(emOf(req), actorOf(req), params.id);
+    }),
+  );
+
+  return r;
+}

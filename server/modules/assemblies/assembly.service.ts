@@ -1,0 +1,117 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { parseAmount } from '@shared/domain/units.js';
+import type { AssemblyDto, AssemblyValues, UpdateAssemblyValues } from '@shared/schemas/assemblies.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
+import { Tray } from '../trays/tray.entity.js';
+import { gramsOfLine, loadTrayIngredients } from '../trays/tray-nutrition.js';
+import { Assembly, AssemblyItem, type IAssembly } from './assembly.entity.js';
+import { presentAssembly } from './assembly.presenter.js';
+import { loadPlateContext } from './plate-facts.js';
+
+/** Plates of the workspace with their items (two queries), optionally only these ids. */
+export async function loadAssemblies(em: EntityManager, workspaceId: number, ids?: readonly number[]): Promise<IAssembly[]> {
+  const where = ids ? { workspace: workspaceId, id: { $in: [...ids] } } : { workspace: workspaceId };
+  return em.find(Assembly, where, { populate: ['items'], orderBy: { name: 'asc', id: 'asc' } });
+}
+
+export async function findAssembly(em: EntityManager, actor: Actor, id: number): Promise<IAssembly> {
+  const a = await em.findOne(Assembly, { id, workspace: actor.workspaceId }, { populate: ['items'] });
+  if (!a) throw new NotFound('Plate');
+  return a;
+}
+
+export async function listAssemblies(em: EntityManager, actor: Actor): Promise<AssemblyDto[]> {
+  const rows = await loadAssemblies(em, actor.workspaceId);
+  const ctx = await loadPlateContext(em, actor, rows);
+  return rows.map((a) => presentAssembly(a, ctx));
+}
+
+export async function getAssembly(em: EntityManager, actor: Actor, id: number): Promise<AssemblyDto> {
+  const a = await findAssembly(em, actor, id);
+  return presentAssembly(a, await loadPlateContext(em, actor, [a]));
+}
+
+/** Trays must be the workspace's, add-ons usable ingredients whose amount can be weighed. */
+async function checkValues(em: EntityManager, actor: Actor, v: AssemblyValues) {
+  const errors: Record<string, string[]> = {};
+  const trayIds = v.trays.map((t) => t.trayId);
+  const trays = trayIds.length ? await em.find(Tray, { id: { $in: trayIds }, workspace: actor.workspaceId }) : [];
+  const known = new Set(trays.map((t) => t.id));
+  v.trays.forEach((t, i) => {
+    if (!known.has(t.trayId)) errors[`trays.${i}.trayId`] = ['This base tray does not exist in your workspace'];
+  });
+  const ingredients = await loadTrayIngredients(em, actor, v.addOns.map((a) => a.ingredientId));
+  v.addOns.forEach((a, i) => {
+    const ing = ingredients.get(a.ingredientId);
+    if (!ing) {
+      errors[`addOns.${i}.ingredientId`] = ['This ingredient does not exist in your library'];
+      return;
+    }
+    const grams = gramsOfLine({ ingredientId: a.ingredientId, amount: parseAmount(a.amountText).value, unit: a.unit }, ing);
+    if (grams === null) errors[`addOns.${i}.unit`] = [`${ing.name} has no weight for "${a.unit}": pick grams or a unit it knows`];
+  });
+  if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
+}
+
+function writeItems(em: EntityManager, a: IAssembly, v: AssemblyValues) {
+  let position = 0;
+  for (const t of v.trays) {
+    em.create(AssemblyItem, { assembly: a, position: position++, tray: t.trayId, portions: String(t.portions) } as never);
+  }
+  for (const x of v.addOns) {
+    em.create(AssemblyItem, {
+      assembly: a,
+      position: position++,
+      ingredient: x.ingredientId,
+      amountText: x.amountText,
+      amount: parseAmount(x.amountText).value.toString(),
+      unit: x.unit,
+      note: x.note ?? '',
+    } as never);
+  }
+}
+
+export async function createAssembly(em: EntityManager, actor: Actor, v: AssemblyValues): Promise<AssemblyDto> {
+  await checkValues(em, actor, v);
+  const id = await em.transactional(async (tx) => {
+    const a = tx.create(Assembly, {
+      workspace: actor.workspaceId,
+      name: v.name,
+      description: v.description,
+      assemblySteps: v.assemblySteps,
+      reheatSteps: v.reheatSteps,
+    } as never) as IAssembly;
+    writeItems(tx, a, v);
+    await tx.flush();
+    return a.id;
+  });
+  return getAssembly(em, actor, id);
+}
+
+export async function updateAssembly(em: EntityManager, actor: Actor, id: number, v: UpdateAssemblyValues): Promise<AssemblyDto> {
+  const a = await findAssembly(em, actor, id);
+  if (a.version !== v.version) throw new StaleEdit(a.version, await getAssembly(em, actor, id));
+  await checkValues(em, actor, v);
+  await em.transactional(async (tx) => {
+    await tx.nativeDelete(AssemblyItem, { assembly: id });
+    const row = await tx.findOneOrFail(Assembly, { id, workspace: actor.workspaceId });
+    row.name = v.name;
+    row.description = v.description;
+    row.assemblySteps = [...v.assemblySteps];
+    row.reheatSteps = [...v.reheatSteps];
+    row.updatedAt = new Date(); // a change of items alone still bumps the version
+    writeItems(tx, row, v);
+    await tx.flush();
+  });
+  em.clear();
+  return getAssembly(em, actor, id);
+}
+
+export async function deleteAssembly(em: EntityManager, actor: Actor, id: number): Promise<void> {
+  const a = await findAssembly(em, actor, id);
+  await em.transactional(async (tx) => {
+    await tx.nativeDelete(AssemblyItem, { assembly: a.id });
+    await tx.nativeDelete(Assembly, { id: a.id, workspace: actor.workspaceId });
+  });
+}

@@ -1,0 +1,171 @@
+import Decimal from 'decimal.js';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { ALLERGEN_CODES, type AllergenCode } from '@shared/domain/allergens.js';
+import {
+  addSums,
+  nutrientsForGrams,
+  scaleSums,
+  toNutrientNumbers,
+  toVector,
+  zeroSums,
+  type NetCarbRule,
+  type NutrientSums,
+  type NutrientVector,
+} from '@shared/domain/nutrition.js';
+import { portionsOf } from '@shared/domain/tray-plan.js';
+import type { PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { Tray, type ITray } from '../trays/tray.entity.js';
+import { cutPlanOf, linesOf, nutritionLines } from '../trays/tray.presenter.js';
+import {
+  gramsOfLine,
+  loadTrayIngredients,
+  netCarbRuleOf,
+  trayAllergens,
+  trayNutrition,
+  type TrayIngredient,
+} from '../trays/tray-nutrition.js';
+import type { IAssembly, IAssemblyItem } from './assembly.entity.js';
+
+/**
+ * What plates and the week board need to know about base trays and add-ons, loaded in a fixed number of queries
+ * (trays with lines, ingredients, the net-carb rule) whatever the number of plates: no N+1.
+ */
+export interface TrayFacts {
+  id: number;
+  name: string;
+  fridgeDays: number;
+  freezerWeeks: number;
+  portionsPerTray: number | null;
+  /** Nutrients of one portion, or null when a line cannot be weighed. */
+  perPortion: NutrientSums | null;
+  allergens: AllergenCode[];
+  terms: string[];
+  reheatSteps: string[];
+  archived: boolean;
+}
+
+export interface PlateContext {
+  rule: NetCarbRule;
+  trays: Map<number, TrayFacts>;
+  ingredients: Map<number, TrayIngredient>;
+}
+
+export interface PlateFacts {
+  id: number;
+  vector: NutrientVector;
+  macros: PlateMacrosDto;
+  complete: boolean;
+  allergens: AllergenCode[];
+  terms: string[];
+  trays: { trayId: number; portions: string }[];
+}
+
+export function itemsOf(a: IAssembly): IAssemblyItem[] {
+  return [...a.items.getItems()].sort((x, y) => x.position - y.position);
+}
+
+function trayFacts(t: ITray, ingredients: Map<number, TrayIngredient>, rule: NetCarbRule): TrayFacts {
+  let portionsPerTray: number | null = null;
+  try {
+    portionsPerTray = portionsOf(cutPlanOf(t));
+  } catch {
+    portionsPerTray = null;
+  }
+  const lines = nutritionLines(t);
+  const recipe = portionsPerTray ? trayNutrition(lines, ingredients, { portions: portionsPerTray, yieldFactor: t.yieldFactor, rule }) : null;
+  const names = linesOf(t).map((l) => ingredients.get(l.ingredient.id)?.name).filter((n): n is string => !!n);
+  return {
+    id: t.id,
+    name: t.name,
+    fridgeDays: t.fridgeDays,
+    freezerWeeks: t.freezerWeeks,
+    portionsPerTray,
+    perPortion: recipe ? recipe.perPortion : null,
+    allergens: trayAllergens(lines, ingredients),
+    terms: [t.name, ...(t.tags ?? []), ...names],
+    reheatSteps: t.reheatSteps ?? [],
+    archived: t.archived,
+  };
+}
+
+/** Loads the trays and ingredients of these plates (plus `extraTrayIds`, e.g. a week's tray counts). */
+export async function loadPlateContext(
+  em: EntityManager,
+  actor: Actor,
+  assemblies: readonly IAssembly[],
+  extraTrayIds: readonly number[] = [],
+): Promise<PlateContext> {
+  const items = assemblies.flatMap(itemsOf);
+  const trayIds = [...new Set([...items.filter((i) => i.tray).map((i) => i.tray!.id), ...extraTrayIds])];
+  const [trays, rule] = await Promise.all([
+    trayIds.length
+      ? em.find(Tray, { id: { $in: trayIds }, workspace: actor.workspaceId }, { populate: ['lines'] })
+      : Promise.resolve([] as ITray[]),
+    netCarbRuleOf(em, actor),
+  ]);
+  const ingredientIds = [
+    ...trays.flatMap((t) => linesOf(t).map((l) => l.ingredient.id)),
+    ...items.filter((i) => i.ingredient).map((i) => i.ingredient!.id),
+  ];
+  const ingredients = await loadTrayIngredients(em, actor, ingredientIds);
+  return { rule, ingredients, trays: new Map(trays.map((t) => [t.id, trayFacts(t, ingredients, rule)])) };
+}
+
+const r1 = (d: Decimal) => d.toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber();
+
+export function macrosOf(v: NutrientVector): PlateMacrosDto {
+  return { kcal: r1(v.kcal), fatG: r1(v.fatG), proteinG: r1(v.proteinG), carbsG: r1(v.carbsG), fiberG: r1(v.fiberG), netCarbsG: r1(v.netCarbsG) };
+}
+
+/** Add-on grams, or null when the ingredient lacks the fact its unit needs. */
+export function addOnGrams(item: IAssemblyItem, ctx: PlateContext): Decimal | null {
+  if (!item.ingredient || item.amount === null || item.amount === undefined) return null;
+  return gramsOfLine({ ingredientId: item.ingredient.id, amount: item.amount, unit: item.unit }, ctx.ingredients.get(item.ingredient.id));
+}
+
+/** A plate's nutrients (sum of tray portions and add-ons), allergens and dislike terms. */
+export function plateFacts(a: IAssembly, ctx: PlateContext): PlateFacts {
+  let sums = zeroSums();
+  let complete = true;
+  const allergens = new Set<AllergenCode>();
+  const terms: string[] = [a.name];
+  const trays: PlateFacts['trays'] = [];
+  for (const item of itemsOf(a)) {
+    if (item.tray) {
+      const t = ctx.trays.get(item.tray.id);
+      const portions = new Decimal(item.portions ?? 1);
+      if (!t) {
+        complete = false;
+        continue;
+      }
+      trays.push({ trayId: t.id, portions: portions.toString() });
+      t.allergens.forEach((x) => allergens.add(x));
+      terms.push(...t.terms);
+      if (t.perPortion) sums = addSums(sums, scaleSums(t.perPortion, portions));
+      else complete = false;
+    } else if (item.ingredient) {
+      const ing = ctx.ingredients.get(item.ingredient.id);
+      const grams = addOnGrams(item, ctx);
+      if (!ing || grams === null) {
+        complete = false;
+        continue;
+      }
+      ing.allergens.forEach((x) => allergens.add(x));
+      terms.push(ing.name);
+      sums = addSums(sums, nutrientsForGrams(ing.facts.per100g, grams));
+    }
+  }
+  const vector = toVector(sums, ctx.rule);
+  return {
+    id: a.id,
+    vector,
+    macros: macrosOf(vector),
+    complete,
+    allergens: ALLERGEN_CODES.filter((c) => allergens.has(c)),
+    terms: [...new Set(terms)],
+    trays,
+  };
+}
+
+export { toNutrientNumbers };

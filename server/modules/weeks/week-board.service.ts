@@ -1,0 +1,158 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { CAUTIONS } from '@shared/domain/eat-by.js';
+import { addDays, compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
+import { cellKey, computeBoard, type BoardInput, type BoardResult } from '@shared/domain/week-board.js';
+import type { AllergenCode } from '@shared/domain/allergens.js';
+import type { AssemblyDto } from '@shared/schemas/assemblies.schema.js';
+import { WEEK_DAYS, type BoardDto, type BoardCellDto, type WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { NotFound } from '../../http/errors.js';
+import { loadAssemblies } from '../assemblies/assembly.service.js';
+import { presentAssembly } from '../assemblies/assembly.presenter.js';
+import { loadPlateContext, plateFacts, type PlateContext } from '../assemblies/plate-facts.js';
+import { loadClients, mealSlotsOf } from '../clients/client.service.js';
+import { plannedTargets } from '../clients/client.presenter.js';
+import type { IClient } from '../clients/client.entity.js';
+import type { IAssembly } from '../assemblies/assembly.entity.js';
+import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell, type IWeekTray } from './week.entity.js';
+
+export function weekDays(w: Pick<IWeek, 'startDate'>): IsoDate[] {
+  return Array.from({ length: WEEK_DAYS }, (_, i) => addDays(w.startDate, i));
+}
+
+export function prepDatesOf(w: Pick<IWeek, 'prepDate' | 'secondPrepDate'>): IsoDate[] {
+  return [w.prepDate, ...(w.secondPrepDate ? [w.secondPrepDate] : [])].sort(compareIsoDates);
+}
+
+export async function findWeek(em: EntityManager, actor: Actor, id: number): Promise<IWeek> {
+  const w = await em.findOne(Week, { id, workspace: actor.workspaceId });
+  if (!w) throw new NotFound('Week');
+  return w;
+}
+
+export function presentWeekSummary(w: IWeek, cellCount: number, publishedAt: Date | null): WeekSummaryDto {
+  return {
+    id: w.id,
+    name: w.name || `Week of ${w.startDate}`,
+    startDate: w.startDate,
+    endDate: addDays(w.startDate, WEEK_DAYS - 1),
+    prepDate: w.prepDate,
+    secondPrepDate: w.secondPrepDate ?? null,
+    publishedVersion: w.publishedVersion ?? null,
+    publishedAt: publishedAt ? publishedAt.toISOString() : null,
+    changedSincePublished: w.publishedBoardVersion != null && w.publishedBoardVersion !== w.version,
+    cellCount,
+    version: w.version,
+  };
+}
+
+export async function lastPublishedAt(em: EntityManager, week: IWeek): Promise<Date | null> {
+  if (!week.publishedVersion) return null;
+  const pub = await em.findOne(WeekPublication, { week: week.id, number: week.publishedVersion }, { fields: ['publishedAt'] });
+  return pub?.publishedAt ?? null;
+}
+
+/** Everything a board needs, in a fixed number of queries (no N+1): ~10 whatever the size of the week. */
+export interface BoardData {
+  week: IWeek;
+  slots: string[];
+  clients: IClient[];
+  assemblies: IAssembly[];
+  cells: IWeekCell[];
+  trays: IWeekTray[];
+  ctx: PlateContext;
+  publishedAt: Date | null;
+}
+
+export async function loadBoardData(em: EntityManager, actor: Actor, week: IWeek): Promise<BoardData> {
+  const [slots, clients, assemblies, cells, trays, publishedAt] = await Promise.all([
+    mealSlotsOf(em, actor.workspaceId),
+    loadClients(em, actor.workspaceId),
+    loadAssemblies(em, actor.workspaceId),
+    em.find(WeekCell, { week: week.id }, { orderBy: { date: 'asc', id: 'asc' } }),
+    em.find(WeekTray, { week: week.id }, { orderBy: { id: 'asc' } }),
+    lastPublishedAt(em, week),
+  ]);
+  const ctx = await loadPlateContext(em, actor, assemblies, trays.map((t) => t.tray.id));
+  return { week, slots, clients, assemblies, cells, trays, ctx, publishedAt };
+}
+
+export function cellDto(c: IWeekCell): BoardCellDto {
+  return {
+    clientId: c.client.id,
+    date: c.date,
+    slot: c.slot,
+    assemblyId: c.assembly.id,
+    prepDate: c.prepDate ?? null,
+    storage: (c.storage as 'fridge' | 'frozen') ?? 'fridge',
+    allergenOverrides: (c.allergenOverrides ?? []) as { allergen: AllergenCode; reason: string }[],
+  };
+}
+
+/** The pure board input from loaded rows, with `cells` replaced when given (to check an edit before saving it). */
+export function boardInput(d: BoardData, cells: readonly BoardCellDto[] = d.cells.map(cellDto)): BoardInput {
+  const plates = new Map(
+    d.assemblies.map((a) => {
+      const f = plateFacts(a, d.ctx);
+      return [a.id, { id: a.id, macros: { kcal: f.macros.kcal, netCarbsG: f.macros.netCarbsG, proteinG: f.macros.proteinG, fatG: f.macros.fatG }, allergens: f.allergens, terms: f.terms, trays: f.trays }];
+    }),
+  );
+  return {
+    prepDates: prepDatesOf(d.week),
+    clients: d.clients.map((c) => ({
+      id: c.id,
+      householdMultiplier: String(c.householdMultiplier),
+      targets: plannedTargets(c, d.slots),
+      allergens: (c.allergens ?? []) as AllergenCode[],
+      dislikes: c.dislikes ?? [],
+    })),
+    plates,
+    trays: new Map([...d.ctx.trays.values()].map((t) => [t.id, { id: t.id, fridgeDays: t.fridgeDays, freezerWeeks: t.freezerWeeks, portionsPerTray: t.portionsPerTray }])),
+    cells: cells.map((c) => ({ ...c, prepDate: c.prepDate ?? null })),
+    batches: d.trays.map((t) => ({ trayId: t.tray.id, prepDate: t.prepDate, trayCount: t.trayCount })),
+  };
+}
+
+export function presentBoard(d: BoardData, result: BoardResult = computeBoard(boardInput(d))): BoardDto {
+  const platesDto: AssemblyDto[] = d.assemblies.map((a) => presentAssembly(a, d.ctx));
+  return {
+    week: presentWeekSummary(d.week, d.cells.length, d.publishedAt),
+    days: weekDays(d.week),
+    slots: d.slots,
+    prepDates: prepDatesOf(d.week),
+    clients: d.clients.map((c) => ({
+      id: c.id,
+      name: c.name,
+      householdMultiplier: String(Number(c.householdMultiplier)),
+      allergens: (c.allergens ?? []) as AllergenCode[],
+      dislikes: c.dislikes ?? [],
+      targets: plannedTargets(c, d.slots),
+    })),
+    plates: platesDto,
+    cells: d.cells.map(cellDto),
+    trays: d.trays.map((t) => {
+      const f = d.ctx.trays.get(t.tray.id);
+      return {
+        trayId: t.tray.id,
+        name: f?.name ?? 'Unknown tray',
+        prepDate: t.prepDate,
+        trayCount: t.trayCount,
+        portionsPerTray: f?.portionsPerTray ?? null,
+        fridgeDays: f?.fridgeDays ?? 0,
+        freezerWeeks: f?.freezerWeeks ?? 0,
+      };
+    }),
+    checks: result.days.map((day) => ({ clientId: Number(day.clientId), date: day.date, totals: day.totals, warnings: day.warnings })),
+    warnings: result.warnings,
+    eatBy: result.cells,
+    inventory: result.inventory,
+    cautions: CAUTIONS,
+  };
+}
+
+export async function getBoard(em: EntityManager, actor: Actor, id: number): Promise<BoardDto> {
+  const week = await findWeek(em, actor, id);
+  return presentBoard(await loadBoardData(em, actor, week));
+}
+
+export { cellKey };

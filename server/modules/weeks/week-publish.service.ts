@@ -1,0 +1,172 @@
+import Decimal from 'decimal.js';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { CAUTIONS } from '@shared/domain/eat-by.js';
+import { addDays, compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
+import { cellKey, computeBoard, type BoardResult } from '@shared/domain/week-board.js';
+import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
+import type { BoardDto, MyDayDto, MyPlateDto, MyWeekDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { Conflict, StaleEdit } from '../../http/errors.js';
+import { AssemblyItem } from '../assemblies/assembly.entity.js';
+import { Week, WeekPublication, WeekTray, type IWeek, type IWeekPublication } from './week.entity.js';
+import { boardInput, findWeek, getBoard, loadBoardData, presentBoard, prepDatesOf, type BoardData } from './week-board.service.js';
+import { todayIso } from './week.service.js';
+
+const r1 = (d: Decimal) => d.toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber();
+
+function sumMacros(list: PlateMacrosDto[]): PlateMacrosDto {
+  const keys = ['kcal', 'fatG', 'proteinG', 'carbsG', 'fiberG', 'netCarbsG'] as const;
+  const out = {} as PlateMacrosDto;
+  for (const k of keys) out[k] = r1(list.reduce((s, m) => s.plus(m[k]), new Decimal(0)));
+  return out;
+}
+
+function myPlate(plate: AssemblyDto, slot: string, eat: BoardResult['cells'][number] | undefined, date: IsoDate, prepDate: IsoDate): MyPlateDto {
+  const storage = eat?.portions[0]?.storage ?? 'fridge';
+  const eatBys = (eat?.portions ?? []).map((p) => p.eatBy).sort(compareIsoDates);
+  return {
+    slot,
+    name: plate.name,
+    description: plate.description,
+    macros: plate.macros,
+    allergens: plate.allergens,
+    trays: plate.trays.map((t) => ({ trayId: t.trayId, name: t.trayName, portions: t.portions, reheatSteps: t.reheatSteps })),
+    addOns: plate.addOns.map((a) => ({ name: a.ingredientName, amountText: a.amountText, unit: a.unit, note: a.note })),
+    assemblySteps: plate.assemblySteps,
+    reheatSteps: plate.reheatSteps,
+    eatBy: storage === 'frozen' ? null : (eatBys[0] ?? null),
+    storage,
+    thawOn: storage === 'frozen' ? addDays(date, -1) : null,
+    prepDate,
+  };
+}
+
+/** Every client's days as clients will read them. */
+export function buildSnapshot(d: BoardData, board: BoardDto): WeekSnapshot {
+  const plates = new Map(board.plates.map((p) => [p.id, p]));
+  const eat = new Map(board.eatBy.map((c) => [cellKey(c), c]));
+  const slotOrder = (s: string) => board.slots.indexOf(s);
+  const clients: WeekSnapshot['clients'] = {};
+  for (const client of board.clients) {
+    const cells = board.cells.filter((c) => c.clientId === client.id);
+    if (!cells.length) continue;
+    const trayIds = new Set<number>();
+    const days: MyDayDto[] = board.days
+      .map((date) => {
+        const list = cells
+          .filter((c) => c.date === date)
+          .sort((a, b) => slotOrder(a.slot) - slotOrder(b.slot))
+          .flatMap((c) => {
+            const plate = plates.get(c.assemblyId);
+            if (!plate) return [];
+            plate.trays.forEach((t) => trayIds.add(t.trayId));
+            const e = eat.get(cellKey(c));
+            return [myPlate(plate, c.slot, e, date, e?.portions[0]?.prepDate ?? c.prepDate ?? d.week.prepDate)];
+          });
+        return { date, plates: list, totals: sumMacros(list.map((p) => p.macros)) };
+      })
+      .filter((day) => day.plates.length > 0);
+    clients[String(client.id)] = { days, trayIds: [...trayIds] };
+  }
+  return {
+    weekId: d.week.id,
+    name: board.week.name,
+    startDate: board.week.startDate,
+    endDate: board.week.endDate,
+    prepDates: prepDatesOf(d.week),
+    clients,
+  };
+}
+
+/**
+ * Publishes the board as the next version: the snapshot is what clients read until the next publication. Refused
+ * (409) while a blocking problem remains (an allergen without an override, a portion past its eat-by date or planned
+ * before its tray is made).
+ */
+export async function publishWeek(em: EntityManager, actor: Actor, id: number, version: number): Promise<BoardDto> {
+  const week = await findWeek(em, actor, id);
+  if (week.version !== version) throw new StaleEdit(week.version, await getBoard(em, actor, id));
+  const data = await loadBoardData(em, actor, week);
+  const result = computeBoard(boardInput(data));
+  const blocks = result.warnings.filter((w) => w.severity === 'block');
+  if (blocks.length) {
+    throw new Conflict(`${blocks.length} problem(s) must be solved before publishing: ${blocks[0].message}`, { blocks });
+  }
+  if (!data.cells.length) throw new Conflict('The board is empty: place plates before publishing');
+  const snapshot = buildSnapshot(data, presentBoard(data, result));
+  await em.transactional(async (tx) => {
+    const w = await tx.findOneOrFail(Week, { id: week.id, workspace: actor.workspaceId });
+    const number = (w.publishedVersion ?? 0) + 1;
+    tx.create(WeekPublication, { workspace: actor.workspaceId, week: w.id, number, snapshot, publishedBy: actor.userId } as never);
+    w.publishedVersion = number;
+    // The flush bumps the version by one: that is the board version clients now see.
+    w.publishedBoardVersion = w.version + 1;
+    await tx.flush();
+  });
+  em.clear();
+  return getBoard(em, actor, id);
+}
+
+export async function listPublications(em: EntityManager, actor: Actor, id: number) {
+  const week = await findWeek(em, actor, id);
+  const rows = await em.find(WeekPublication, { week: week.id }, { fields: ['number', 'publishedAt', 'publishedBy'], orderBy: { number: 'desc' } });
+  return rows.map((p) => ({ number: p.number, publishedAt: p.publishedAt.toISOString(), publishedBy: p.publishedBy }));
+}
+
+/** Latest publication of the workspace's most recent published weeks (by start date). */
+async function latestPublications(em: EntityManager, workspaceId: number, limit: number) {
+  const weeks = await em.find(
+    Week,
+    { workspace: workspaceId, publishedVersion: { $ne: null } },
+    { orderBy: { startDate: 'desc', id: 'desc' }, limit },
+  );
+  if (!weeks.length) return [] as { week: IWeek; pub: IWeekPublication }[];
+  const pubs = await em.find(WeekPublication, { $or: weeks.map((w) => ({ week: w.id, number: w.publishedVersion! })) });
+  const byWeek = new Map(pubs.map((p) => [p.week.id, p]));
+  return weeks.filter((w) => byWeek.has(w.id)).map((w) => ({ week: w, pub: byWeek.get(w.id)! }));
+}
+
+/** The client's published week: the one covering `today`, else the next, else the latest. Null when none. */
+export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<MyWeekDto | null> {
+  if (actor.clientId === null) return null;
+  const weeks = await em.find(Week, { workspace: actor.workspaceId, publishedVersion: { $ne: null } }, { fields: ['id', 'startDate', 'publishedVersion'] });
+  const sorted = [...weeks].sort((a, b) => compareIsoDates(a.startDate, b.startDate));
+  const current =
+    sorted.find((w) => compareIsoDates(w.startDate, today) <= 0 && compareIsoDates(today, addDays(w.startDate, 6)) <= 0) ??
+    sorted.find((w) => compareIsoDates(w.startDate, today) > 0) ??
+    sorted[sorted.length - 1];
+  if (!current) return null;
+  const pub = await em.findOne(WeekPublication, { week: current.id, number: current.publishedVersion! });
+  if (!pub) return null;
+  const mine = pub.snapshot.clients[String(actor.clientId)];
+  return {
+    weekId: current.id,
+    name: pub.snapshot.name,
+    publishedVersion: pub.number,
+    publishedAt: pub.publishedAt.toISOString(),
+    startDate: pub.snapshot.startDate,
+    endDate: pub.snapshot.endDate,
+    days: mine?.days ?? [],
+    cautions: CAUTIONS,
+  };
+}
+
+// ── Hooks for the trays module ─────────────────────────────────────────────────────────────────────
+
+/** Trays in the signed-in client's published plans (the latest publication of the 8 most recent published weeks). */
+export async function publishedTrayIdsForClient(em: EntityManager, actor: Actor): Promise<number[]> {
+  if (actor.role !== 'client' || actor.clientId === null) return [];
+  const list = await latestPublications(em, actor.workspaceId, 8);
+  const ids = new Set<number>();
+  for (const { pub } of list) for (const id of pub.snapshot.clients[String(actor.clientId)]?.trayIds ?? []) ids.add(id);
+  return [...ids];
+}
+
+/** Whether a plate or a week uses this tray (then it is archived, never deleted). */
+export async function trayInUse(em: EntityManager, workspaceId: number, trayId: number): Promise<boolean> {
+  const [items, batches] = await Promise.all([
+    em.count(AssemblyItem, { tray: trayId, assembly: { workspace: workspaceId } }),
+    em.count(WeekTray, { tray: trayId, week: { workspace: workspaceId } }),
+  ]);
+  return items + batches > 0;
+}

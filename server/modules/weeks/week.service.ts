@@ -1,0 +1,353 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
+import { addDays, compareIsoDates, daysBetween, type IsoDate } from '@shared/domain/iso-date.js';
+import { cellKey, computeBoard, coveringBatches } from '@shared/domain/week-board.js';
+import type {
+  BoardDto,
+  GlanceDto,
+  WeekSummaryDto,
+} from '@shared/schemas/weeks.schema.js';
+import type { z } from 'zod';
+import type {
+  copyDaySchema,
+  copyWeekSchema,
+  createWeekSchema,
+  putCellsSchema,
+  putTraysSchema,
+  updateWeekSchema,
+} from '@shared/schemas/weeks.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { StaleEdit, ValidationError } from '../../http/errors.js';
+import { Tray } from '../trays/tray.entity.js';
+import { Week, WeekCell, WeekPublication, WeekTray, type IWeek } from './week.entity.js';
+import {
+  boardInput,
+  findWeek,
+  getBoard,
+  loadBoardData,
+  prepDatesOf,
+  presentBoard,
+  presentWeekSummary,
+  weekDays,
+  type BoardData,
+} from './week-board.service.js';
+
+type CreateWeek = z.output<typeof createWeekSchema>;
+type UpdateWeek = z.output<typeof updateWeekSchema>;
+type PutCells = z.output<typeof putCellsSchema>;
+type PutTrays = z.output<typeof putTraysSchema>;
+type CopyDay = z.output<typeof copyDaySchema>;
+type CopyWeek = z.output<typeof copyWeekSchema>;
+
+export const todayIso = (): IsoDate => new Date().toISOString().slice(0, 10);
+
+// ── Reading ─────────────────────────────────────────────────────────────────────────────────────────
+
+export async function listWeeks(em: EntityManager, actor: Actor): Promise<WeekSummaryDto[]> {
+  const weeks = await em.find(Week, { workspace: actor.workspaceId }, { orderBy: { startDate: 'desc', id: 'desc' } });
+  if (!weeks.length) return [];
+  const ids = weeks.map((w) => w.id);
+  const counts = (await em
+    .getConnection()
+    .execute(`select week_id, count(*) as n from week_cell where week_id in (${ids.map(() => '?').join(', ')}) group by week_id`, ids)) as {
+    week_id: number;
+    n: string;
+  }[];
+  const countOf = new Map(counts.map((r) => [Number(r.week_id), Number(r.n)]));
+  const pubs = await em.find(WeekPublication, { week: { $in: ids } }, { fields: ['week', 'number', 'publishedAt'] });
+  const pubAt = new Map(pubs.map((p) => [`${p.week.id}|${p.number}`, p.publishedAt]));
+  return weeks.map((w) => presentWeekSummary(w, countOf.get(w.id) ?? 0, pubAt.get(`${w.id}|${w.publishedVersion}`) ?? null));
+}
+
+// ── Writing the week itself ─────────────────────────────────────────────────────────────────────────
+
+function checkPrepDates(startDate: IsoDate, prepDate: IsoDate, second: IsoDate | null | undefined) {
+  const end = addDays(startDate, 6);
+  const errors: Record<string, string[]> = {};
+  if (compareIsoDates(prepDate, end) > 0) errors.prepDate = ['The prep date must be on or before the last day of the week'];
+  if (daysBetween(prepDate, startDate) > 7) errors.prepDate = ['The prep date is more than a week before the board starts'];
+  if (second && (compareIsoDates(second, prepDate) <= 0 || compareIsoDates(second, end) > 0)) {
+    errors.secondPrepDate = ['The second prep date comes after the first, within the week'];
+  }
+  if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
+}
+
+export async function createWeek(em: EntityManager, actor: Actor, v: CreateWeek): Promise<BoardDto> {
+  checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
+  const w = em.create(Week, {
+    workspace: actor.workspaceId,
+    name: v.name,
+    startDate: v.startDate,
+    prepDate: v.prepDate,
+    secondPrepDate: v.secondPrepDate ?? null,
+  } as never) as IWeek;
+  await em.flush();
+  return getBoard(em, actor, w.id);
+}
+
+async function stale(em: EntityManager, actor: Actor, week: IWeek): Promise<never> {
+  throw new StaleEdit(week.version, await getBoard(em, actor, week.id));
+}
+
+async function openForEdit(em: EntityManager, actor: Actor, id: number, version: number): Promise<IWeek> {
+  const week = await findWeek(em, actor, id);
+  if (week.version !== version) await stale(em, actor, week);
+  return week;
+}
+
+/** Bumps the week's version with the rows written beside it (one transaction), then answers the new board. */
+async function commit(em: EntityManager, actor: Actor, week: IWeek, write: (tx: EntityManager, w: IWeek) => Promise<void>) {
+  await em.transactional(async (tx) => {
+    const w = await tx.findOneOrFail(Week, { id: week.id, workspace: actor.workspaceId });
+    await write(tx, w);
+    w.updatedAt = new Date();
+    await tx.flush();
+  });
+  em.clear();
+  return getBoard(em, actor, week.id);
+}
+
+export async function updateWeek(em: EntityManager, actor: Actor, id: number, v: UpdateWeek): Promise<BoardDto> {
+  const week = await openForEdit(em, actor, id, v.version);
+  const prepDate = v.prepDate ?? week.prepDate;
+  const second = v.secondPrepDate === undefined ? week.secondPrepDate : v.secondPrepDate;
+  checkPrepDates(week.startDate, prepDate, second);
+  return commit(em, actor, week, async (tx, w) => {
+    // Counts and cell choices follow their prep date when it moves.
+    const moves: [IsoDate | null | undefined, IsoDate | null][] = [
+      [w.prepDate, prepDate],
+      [w.secondPrepDate, second ?? null],
+    ];
+    for (const [from, to] of moves) {
+      if (!from || from === to) continue;
+      if (to) {
+        await tx.nativeUpdate(WeekTray, { week: w.id, prepDate: from }, { prepDate: to });
+        await tx.nativeUpdate(WeekCell, { week: w.id, prepDate: from }, { prepDate: to });
+      } else {
+        await tx.nativeDelete(WeekTray, { week: w.id, prepDate: from });
+        await tx.nativeUpdate(WeekCell, { week: w.id, prepDate: from }, { prepDate: null });
+      }
+    }
+    if (v.name !== undefined) w.name = v.name;
+    w.prepDate = prepDate;
+    w.secondPrepDate = second ?? null;
+  });
+}
+
+export async function deleteWeek(em: EntityManager, actor: Actor, id: number): Promise<void> {
+  const week = await findWeek(em, actor, id);
+  await em.transactional(async (tx) => {
+    await tx.nativeDelete(WeekCell, { week: week.id });
+    await tx.nativeDelete(WeekTray, { week: week.id });
+    await tx.nativeDelete(WeekPublication, { week: week.id });
+    await tx.nativeDelete(Week, { id: week.id, workspace: actor.workspaceId });
+  });
+}
+
+// ── The board ───────────────────────────────────────────────────────────────────────────────────────
+
+/** Checks cells against the board's clients, days, slots, plates and prep dates, and the allergen rule. */
+function checkCells(d: BoardData, cells: PutCells['cells']) {
+  const errors: Record<string, string[]> = {};
+  const days = new Set(weekDays(d.week));
+  const prepDates = new Set(prepDatesOf(d.week));
+  const clients = new Map(d.clients.map((c) => [c.id, c]));
+  const plates = new Set(d.assemblies.map((a) => a.id));
+  const seen = new Set<string>();
+  cells.forEach((c, i) => {
+    const at = `cells.${i}`;
+    if (!clients.has(c.clientId)) errors[`${at}.clientId`] = ['This client is not in your workspace'];
+    if (!days.has(c.date)) errors[`${at}.date`] = ['This day is not on the board of this week'];
+    if (!d.slots.includes(c.slot)) errors[`${at}.slot`] = [`Meal slots of this workspace: ${d.slots.join(', ')}`];
+    if (c.prepDate && !prepDates.has(c.prepDate)) errors[`${at}.prepDate`] = ['Not a prep date of this week'];
+    const key = cellKey(c);
+    if (seen.has(key)) errors[`${at}`] = ['The same cell appears twice'];
+    seen.add(key);
+    if (c.assemblyId === null) return;
+    if (!plates.has(c.assemblyId)) {
+      errors[`${at}.assemblyId`] = ['This plate does not exist in your workspace'];
+      return;
+    }
+    const client = clients.get(c.clientId);
+    if (!client) return;
+    const plate = d.assemblies.find((a) => a.id === c.assemblyId)!;
+    const plateAllergens = boardPlateAllergens(d, plate.id);
+    const conflicts = allergenConflicts(plateAllergens, (client.allergens ?? []) as AllergenCode[]);
+    const overridden = new Set(c.allergenOverrides.map((o) => o.allergen));
+    const open = conflicts.filter((a) => !overridden.has(a));
+    if (open.length) {
+      errors[`${at}.allergenOverrides`] = [
+        `${plate.name} contains ${open.map(allergenLabel).join(', ')}, on ${client.name}'s allergen list: choose another plate or override with a reason`,
+      ];
+    }
+  });
+  if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
+}
+
+const plateAllergenCache = new WeakMap<BoardData, Map<number, AllergenCode[]>>();
+function boardPlateAllergens(d: BoardData, assemblyId: number): AllergenCode[] {
+  let map = plateAllergenCache.get(d);
+  if (!map) {
+    const input = boardInput(d, []);
+    map = new Map([...input.plates.values()].map((p) => [p.id, [...p.allergens]]));
+    plateAllergenCache.set(d, map);
+  }
+  return map.get(assemblyId) ?? [];
+}
+
+/** Sets, changes or empties cells (a partial update of the board, all-or-nothing). */
+export async function putCells(em: EntityManager, actor: Actor, id: number, v: PutCells): Promise<BoardDto> {
+  const week = await openForEdit(em, actor, id, v.version);
+  const data = await loadBoardData(em, actor, week);
+  checkCells(data, v.cells);
+  return commit(em, actor, week, async (tx, w) => {
+    const existing = await tx.find(WeekCell, { week: w.id, date: { $in: [...new Set(v.cells.map((c) => c.date))] } });
+    const byKey = new Map(existing.map((c) => [cellKey({ clientId: c.client.id, date: c.date, slot: c.slot }), c]));
+    for (const c of v.cells) {
+      const row = byKey.get(cellKey(c));
+      if (c.assemblyId === null) {
+        if (row) tx.remove(row);
+        continue;
+      }
+      const values = {
+        assembly: c.assemblyId,
+        prepDate: c.prepDate ?? null,
+        storage: c.storage,
+        allergenOverrides: c.allergenOverrides,
+      };
+      if (row) tx.assign(row, values as never);
+      else tx.create(WeekCell, { week: w.id, client: c.clientId, date: c.date, slot: c.slot, ...values } as never);
+    }
+  });
+}
+
+/** Replaces the week's tray counts. */
+export async function putTrays(em: EntityManager, actor: Actor, id: number, v: PutTrays): Promise<BoardDto> {
+  const week = await openForEdit(em, actor, id, v.version);
+  const prepDates = new Set(prepDatesOf(week));
+  const trayIds = [...new Set(v.trays.map((t) => t.trayId))];
+  const known = new Set((await em.find(Tray, { id: { $in: trayIds }, workspace: actor.workspaceId }, { fields: ['id'] })).map((t) => t.id));
+  const errors: Record<string, string[]> = {};
+  v.trays.forEach((t, i) => {
+    if (!known.has(t.trayId)) errors[`trays.${i}.trayId`] = ['This base tray does not exist in your workspace'];
+    if (!prepDates.has(t.prepDate)) errors[`trays.${i}.prepDate`] = ['Not a prep date of this week'];
+  });
+  if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
+  return replaceTrays(em, actor, week, v.trays);
+}
+
+async function replaceTrays(em: EntityManager, actor: Actor, week: IWeek, trays: { trayId: number; prepDate: IsoDate; trayCount: number }[]) {
+  return commit(em, actor, week, async (tx, w) => {
+    await tx.nativeDelete(WeekTray, { week: w.id });
+    const merged = new Map<string, { trayId: number; prepDate: IsoDate; trayCount: number }>();
+    for (const t of trays) {
+      const k = `${t.trayId}|${t.prepDate}`;
+      const prev = merged.get(k);
+      merged.set(k, { ...t, trayCount: (prev?.trayCount ?? 0) + t.trayCount });
+    }
+    for (const t of merged.values()) tx.create(WeekTray, { week: w.id, tray: t.trayId, prepDate: t.prepDate, trayCount: t.trayCount } as never);
+  });
+}
+
+/** Sets every tray count to cover the portions the board needs (whole trays, per prep date). */
+export async function coverTrays(em: EntityManager, actor: Actor, id: number, version: number): Promise<BoardDto> {
+  const week = await openForEdit(em, actor, id, version);
+  const data = await loadBoardData(em, actor, week);
+  const batches = coveringBatches(boardInput(data)).filter((b) => b.trayCount > 0);
+  return replaceTrays(em, actor, week, batches);
+}
+
+/** Copies one day's cells (all clients, or one) onto another day of the same week, replacing what was there. */
+export async function copyDay(em: EntityManager, actor: Actor, id: number, v: CopyDay): Promise<BoardDto> {
+  const week = await openForEdit(em, actor, id, v.version);
+  const days = weekDays(week);
+  if (!days.includes(v.fromDate)) throw ValidationError.field('fromDate', 'This day is not on the board of this week');
+  if (!days.includes(v.toDate)) throw ValidationError.field('toDate', 'This day is not on the board of this week');
+  if (v.fromDate === v.toDate) throw ValidationError.field('toDate', 'Pick another day to copy to');
+  const filter = v.clientId ? { client: v.clientId } : {};
+  return commit(em, actor, week, async (tx, w) => {
+    const from = await tx.find(WeekCell, { week: w.id, date: v.fromDate, ...filter });
+    await tx.nativeDelete(WeekCell, { week: w.id, date: v.toDate, ...filter });
+    for (const c of from) {
+      tx.create(WeekCell, {
+        week: w.id,
+        client: c.client.id,
+        date: v.toDate,
+        slot: c.slot,
+        assembly: c.assembly.id,
+        prepDate: null,
+        storage: 'fridge',
+        allergenOverrides: c.allergenOverrides,
+      } as never);
+    }
+  });
+}
+
+/** A new week with the same board shifted to a new start date, and the same tray counts. */
+export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: CopyWeek): Promise<BoardDto> {
+  const source = await findWeek(em, actor, id);
+  checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
+  const shift = daysBetween(source.startDate, v.startDate);
+  const newId = await em.transactional(async (tx) => {
+    const w = tx.create(Week, {
+      workspace: actor.workspaceId,
+      name: v.name,
+      startDate: v.startDate,
+      prepDate: v.prepDate,
+      secondPrepDate: v.secondPrepDate ?? null,
+    } as never) as IWeek;
+    await tx.flush();
+    const mapPrep = (d: IsoDate | null | undefined): IsoDate | null =>
+      d && d === source.secondPrepDate ? (v.secondPrepDate ?? null) : null;
+    for (const c of await tx.find(WeekCell, { week: source.id })) {
+      tx.create(WeekCell, {
+        week: w.id,
+        client: c.client.id,
+        date: addDays(c.date, shift),
+        slot: c.slot,
+        assembly: c.assembly.id,
+        prepDate: mapPrep(c.prepDate),
+        storage: c.storage,
+        allergenOverrides: c.allergenOverrides,
+      } as never);
+    }
+    for (const t of await tx.find(WeekTray, { week: source.id })) {
+      const prepDate = t.prepDate === source.secondPrepDate && v.secondPrepDate ? v.secondPrepDate : v.prepDate;
+      tx.create(WeekTray, { week: w.id, tray: t.tray.id, prepDate, trayCount: t.trayCount } as never);
+    }
+    await tx.flush();
+    return w.id;
+  });
+  em.clear();
+  return getBoard(em, actor, newId);
+}
+
+// ── Home page ───────────────────────────────────────────────────────────────────────────────────────
+
+/** The week covering `today`, else the next one, else the latest. */
+export function pickWeek<T extends { startDate: IsoDate }>(weeks: readonly T[], today: IsoDate): T | null {
+  const sorted = [...weeks].sort((a, b) => compareIsoDates(a.startDate, b.startDate));
+  const current = sorted.find((w) => compareIsoDates(w.startDate, today) <= 0 && compareIsoDates(today, addDays(w.startDate, 6)) <= 0);
+  return current ?? sorted.find((w) => compareIsoDates(w.startDate, today) > 0) ?? sorted[sorted.length - 1] ?? null;
+}
+
+export async function glance(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<GlanceDto> {
+  const weeks = await em.find(Week, { workspace: actor.workspaceId });
+  const week = pickWeek(weeks, today);
+  if (!week) return { week: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null };
+  const data = await loadBoardData(em, actor, week);
+  const result = computeBoard(boardInput(data));
+  const nextPrepDate =
+    weeks
+      .flatMap((w) => prepDatesOf(w))
+      .filter((d) => compareIsoDates(d, today) >= 0)
+      .sort(compareIsoDates)[0] ?? null;
+  return {
+    week: presentBoard(data, result).week,
+    warnings: result.warnings.filter((w) => w.severity === 'warn').length,
+    blocks: result.warnings.filter((w) => w.severity === 'block').length,
+    portionsShort: result.inventory.reduce((s, t) => s + t.short, 0),
+    nextPrepDate,
+  };
+}
+

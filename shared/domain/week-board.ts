@@ -1,0 +1,223 @@
+/**
+ * The week board, computed in one pass: every client-day checked against the client's targets and rules
+ * (week-check.ts), every portion's eat-by date with remedies (eat-by.ts), and the portion count against the trays
+ * baked (inventory.ts). Pure: the server loads everything in a few batched queries and calls this once.
+ *
+ * - A cell's plate macros are what the client eats; the household multiplier only scales the portions cooked.
+ * - A cell's portions come from its own prep date when the coach picked one, otherwise from the latest prep date on
+ *   or before the cell's day (the freshest); a day before every prep date is booked on the first one and flagged.
+ * - A cell stored 'frozen' follows the freeze-and-thaw remedy: frozen on its prep day, thawed the evening before.
+ */
+import { eatByRemedies, portionStatus, supplyingPrepDate, type EatByRemedy, type PortionStatusKind } from './eat-by';
+import { portionCount, type BoardCell, type TrayTally } from './inventory';
+import { compareIsoDates, type IsoDate } from './iso-date';
+import type { AllergenCode } from './allergens';
+import type { MacroTargets } from './targets';
+import { checkWeek, type AllergenOverride, type CellMacros, type CheckCell, type DayCheck, type WeekWarning } from './week-check';
+
+export interface BoardClient {
+  id: number;
+  householdMultiplier: string;
+  /** Targets for the planned part of the day (the board's meal slots). */
+  targets: MacroTargets;
+  allergens: readonly AllergenCode[];
+  dislikes: readonly string[];
+}
+
+export interface BoardTray {
+  id: number;
+  fridgeDays: number;
+  freezerWeeks: number;
+  /** Portions one tray is cut into, or null when the cut plan is unknown. */
+  portionsPerTray: number | null;
+}
+
+export interface BoardPlate {
+  id: number;
+  macros: CellMacros;
+  allergens: readonly AllergenCode[];
+  /** Ingredient names, tray names and tags: what a dislike is compared against. */
+  terms: readonly string[];
+  trays: readonly { trayId: number; portions: string }[];
+}
+
+export type CellStorage = 'fridge' | 'frozen';
+
+export interface BoardCellInput {
+  clientId: number;
+  date: IsoDate;
+  slot: string;
+  assemblyId: number;
+  /** The prep date the portions come from; null = the default (latest on or before the day). */
+  prepDate: IsoDate | null;
+  storage: CellStorage;
+  allergenOverrides: readonly AllergenOverride[];
+}
+
+export interface BoardBatch {
+  trayId: number;
+  prepDate: IsoDate;
+  trayCount: number;
+}
+
+export interface BoardInput {
+  prepDates: readonly IsoDate[];
+  clients: readonly BoardClient[];
+  plates: ReadonlyMap<number, BoardPlate>;
+  trays: ReadonlyMap<number, BoardTray>;
+  cells: readonly BoardCellInput[];
+  batches: readonly BoardBatch[];
+}
+
+export interface CellPortionResult {
+  trayId: number;
+  prepDate: IsoDate;
+  eatBy: IsoDate;
+  status: PortionStatusKind;
+  storage: CellStorage;
+  remedies: EatByRemedy[];
+}
+
+export interface CellResult {
+  clientId: number;
+  date: IsoDate;
+  slot: string;
+  portions: CellPortionResult[];
+}
+
+export interface BoardResult {
+  days: DayCheck[];
+  warnings: WeekWarning[];
+  cells: CellResult[];
+  inventory: TrayTally[];
+}
+
+export function cellKey(c: { clientId: number; date: IsoDate; slot: string }): string {
+  return `${c.clientId}|${c.date}|${c.slot}`;
+}
+
+/** The prep date a cell's portions come from. */
+export function cellPrepDate(cell: Pick<BoardCellInput, 'date' | 'prepDate'>, prepDates: readonly IsoDate[]): IsoDate {
+  if (cell.prepDate) return cell.prepDate;
+  const sorted = [...prepDates].sort(compareIsoDates);
+  if (sorted.length === 0) throw new RangeError('The week has no prep date');
+  return supplyingPrepDate(cell.date, sorted) ?? sorted[0];
+}
+
+function cellPortions(cell: BoardCellInput, plate: BoardPlate, input: BoardInput): CellPortionResult[] {
+  const prepDate = cellPrepDate(cell, input.prepDates);
+  const out: CellPortionResult[] = [];
+  for (const part of plate.trays) {
+    const tray = input.trays.get(part.trayId);
+    if (!tray) continue;
+    const { status, eatBy } = portionStatus({ plannedDate: cell.date, prepDate, fridgeDays: tray.fridgeDays });
+    const remedies =
+      cell.storage === 'frozen'
+        ? []
+        : eatByRemedies({
+            plannedDate: cell.date,
+            prepDate,
+            fridgeDays: tray.fridgeDays,
+            freezerWeeks: tray.freezerWeeks,
+            weekPrepDates: input.prepDates,
+          });
+    out.push({ trayId: part.trayId, prepDate, eatBy, status, storage: cell.storage, remedies });
+  }
+  return out;
+}
+
+/** The whole board: day checks (blocks first), per-cell eat-by and remedies, and the portion count. */
+export function computeBoard(input: BoardInput): BoardResult {
+  const clients = new Map(input.clients.map((c) => [c.id, c]));
+  const byDay = new Map<string, { client: BoardClient; date: IsoDate; cells: CheckCell[] }>();
+  const cellResults: CellResult[] = [];
+  const inventoryCells: BoardCell[] = [];
+
+  for (const cell of input.cells) {
+    const client = clients.get(cell.clientId);
+    const plate = input.plates.get(cell.assemblyId);
+    if (!client || !plate) continue;
+    const portions = cellPortions(cell, plate, input);
+    cellResults.push({ clientId: cell.clientId, date: cell.date, slot: cell.slot, portions });
+
+    const key = `${cell.clientId}|${cell.date}`;
+    let day = byDay.get(key);
+    if (!day) byDay.set(key, (day = { client, date: cell.date, cells: [] }));
+    day.cells.push({
+      slot: cell.slot,
+      macros: plate.macros,
+      allergens: plate.allergens,
+      terms: plate.terms,
+      allergenOverrides: cell.allergenOverrides,
+      portions: portions.map((p) => ({
+        trayId: String(p.trayId),
+        prepDate: p.prepDate,
+        fridgeDays: input.trays.get(p.trayId)!.fridgeDays,
+        storage: p.storage,
+        freezerWeeks: input.trays.get(p.trayId)!.freezerWeeks,
+      })),
+    });
+
+    inventoryCells.push({
+      date: cell.date,
+      householdMultiplier: client.householdMultiplier,
+      portions: plate.trays
+        .filter((t) => input.trays.has(t.trayId))
+        .map((t) => ({ trayId: String(t.trayId), quantity: t.portions, prepDate: portions[0]?.prepDate ?? cellPrepDate(cell, input.prepDates) })),
+    });
+  }
+
+  const { days, warnings } = checkWeek(
+    [...byDay.values()].map((d) => ({
+      clientId: String(d.client.id),
+      date: d.date,
+      targets: d.client.targets,
+      clientAllergens: d.client.allergens,
+      clientDislikes: d.client.dislikes,
+      cells: d.cells,
+    })),
+  );
+
+  // A tray the board needs but nobody has set a count for yet counts as 0 trays (so its cut plan is known).
+  const batches = [...input.batches];
+  for (const c of inventoryCells) {
+    for (const p of c.portions) {
+      const trayId = Number(p.trayId);
+      if (!batches.some((b) => b.trayId === trayId && b.prepDate === p.prepDate)) batches.push({ trayId, prepDate: p.prepDate!, trayCount: 0 });
+    }
+  }
+  const inventory = portionCount({
+    prepDates: input.prepDates,
+    cells: inventoryCells,
+    batches: batches
+      .filter((b) => input.trays.get(b.trayId)?.portionsPerTray)
+      .map((b) => ({
+        trayId: String(b.trayId),
+        prepDate: b.prepDate,
+        trayCount: b.trayCount,
+        portionsPerTray: input.trays.get(b.trayId)!.portionsPerTray!,
+      })),
+  });
+
+  return { days, warnings, cells: cellResults, inventory };
+}
+
+/**
+ * Tray counts that cover the need: for each tray and prep date with a known cut plan, ceil(needed ÷ portions per
+ * tray); counts for trays the board no longer needs are kept at 0.
+ */
+export function coveringBatches(input: BoardInput): BoardBatch[] {
+  const { inventory } = computeBoard(input);
+  const out: BoardBatch[] = [];
+  for (const t of inventory) {
+    for (const p of t.byPrepDate) {
+      if (p.traysToCover === null) continue;
+      out.push({ trayId: Number(t.trayId), prepDate: p.prepDate, trayCount: p.traysToCover });
+    }
+  }
+  // Trays only in the batches (no cell needs them): 0.
+  for (const b of input.batches) {
+    if (!out.some((o) => o.trayId === b.trayId && o.prepDate === b.prepDate)) out.push({ ...b, trayCount: 0 });
+  }
+  return out;
+}

@@ -1,0 +1,93 @@
+import { z } from 'zod';
+import type { AllergenCode } from '../domain/allergens';
+import type { NutrientNumbers } from '../domain/nutrition';
+import { trayLineSchema } from './trays.schema';
+
+/** Plates (assemblies): portions of base trays plus add-ons from the ingredient library. */
+
+export const assemblyTrayItemSchema = z.object({
+  trayId: z.coerce.number({ message: 'Choose a base tray' }).int().positive({ message: 'Choose a base tray' }),
+  /** Portions of the tray on one plate (1, 2, 0.5…). */
+  portions: z.coerce
+    .number({ message: 'Enter the portions as a number' })
+    .refine((v) => v > 0, { message: 'Portions must be above 0' })
+    .refine((v) => v <= 12, { message: 'At most 12 portions' })
+    .refine((v) => Number.isInteger(v * 4), { message: 'Use quarters of a portion at most (0.25, 0.5…)' }),
+});
+export type AssemblyTrayItemInput = z.input<typeof assemblyTrayItemSchema>;
+
+/** An add-on: an ingredient with an amount as typed ("1", "2 Tbsp", "1 handful" is typed as grams or cups). */
+export const assemblyAddOnSchema = trayLineSchema;
+export type AssemblyAddOnInput = z.input<typeof assemblyAddOnSchema>;
+
+const steps = z.array(z.string().trim().min(1).max(400)).max(20);
+
+export const assemblyValuesSchema = z.object({
+  name: z.string().trim().min(1, { message: 'Enter a name' }).max(120),
+  description: z.string().trim().max(1000).default(''),
+  trays: z.array(assemblyTrayItemSchema).max(8).default([]),
+  addOns: z.array(assemblyAddOnSchema).max(20).default([]),
+  assemblySteps: steps.default([]),
+  reheatSteps: steps.default([]),
+});
+export const createAssemblySchema = assemblyValuesSchema.refine((v) => v.trays.length + v.addOns.length > 0, {
+  path: ['trays'],
+  message: 'Add at least one base tray portion or one add-on',
+});
+export type AssemblyInput = z.input<typeof createAssemblySchema>;
+export type AssemblyValues = z.output<typeof createAssemblySchema>;
+
+export const updateAssemblySchema = assemblyValuesSchema
+  .extend({ version: z.number().int().positive() })
+  .refine((v) => v.trays.length + v.addOns.length > 0, {
+    path: ['trays'],
+    message: 'Add at least one base tray portion or one add-on',
+  });
+export type UpdateAssemblyValues = z.output<typeof updateAssemblySchema>;
+
+export const assemblyIdParams = z.object({ id: z.coerce.number().int().positive() });
+
+export interface AssemblyTrayItemDto {
+  trayId: number;
+  trayName: string;
+  portions: number;
+  fridgeDays: number;
+  freezerWeeks: number;
+  reheatSteps: string[];
+}
+
+export interface AssemblyAddOnDto {
+  ingredientId: number;
+  ingredientName: string;
+  amountText: string;
+  unit: string;
+  note: string;
+  grams: number | null;
+}
+
+/** Macros of one plate (what one person eats). */
+export interface PlateMacrosDto {
+  kcal: number;
+  fatG: number;
+  proteinG: number;
+  carbsG: number;
+  fiberG: number;
+  netCarbsG: number;
+}
+
+export interface AssemblyDto {
+  id: number;
+  name: string;
+  description: string;
+  trays: AssemblyTrayItemDto[];
+  addOns: AssemblyAddOnDto[];
+  assemblySteps: string[];
+  reheatSteps: string[];
+  nutrition: NutrientNumbers | null;
+  macros: PlateMacrosDto;
+  /** False when a line lacks a fact to be weighed (its nutrients are left out). */
+  complete: boolean;
+  allergens: AllergenCode[];
+  version: number;
+  updatedAt: string;
+}

@@ -1,0 +1,216 @@
+import { z } from 'zod';
+import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
+import type { Caution } from '../domain/eat-by';
+import type { TrayTally } from '../domain/inventory';
+import { isIsoDate, type IsoDate } from '../domain/iso-date';
+import type { MacroTargets } from '../domain/targets';
+import type { CellResult } from '../domain/week-board';
+import type { DayTotals, WeekWarning } from '../domain/week-check';
+import type { AssemblyDto, PlateMacrosDto } from './assemblies.schema';
+
+/** Prep weeks, the week board, publishing. */
+
+export const isoDate = z.string().refine(isIsoDate, { message: 'Use a date like 2026-01-04' });
+const version = z.number().int().positive();
+const allergen = z.enum(ALLERGEN_CODES as unknown as [AllergenCode, ...AllergenCode[]]);
+
+export const WEEK_DAYS = 7;
+
+export const createWeekSchema = z
+  .object({
+    name: z.string().trim().max(120).default(''),
+    /** The first day of the board. */
+    startDate: isoDate,
+    prepDate: isoDate,
+    secondPrepDate: isoDate.nullable().optional(),
+  })
+  .refine((w) => !w.secondPrepDate || w.secondPrepDate > w.prepDate, {
+    path: ['secondPrepDate'],
+    message: 'The second prep date comes after the first',
+  });
+export type CreateWeekInput = z.input<typeof createWeekSchema>;
+
+export const updateWeekSchema = z.object({
+  version,
+  name: z.string().trim().max(120).optional(),
+  prepDate: isoDate.optional(),
+  secondPrepDate: isoDate.nullable().optional(),
+});
+export type UpdateWeekInput = z.input<typeof updateWeekSchema>;
+
+export const allergenOverrideSchema = z.object({
+  allergen,
+  reason: z.string().trim().min(3, { message: 'Give a reason (at least 3 characters)' }).max(300),
+});
+
+export const cellInputSchema = z.object({
+  clientId: z.number().int().positive(),
+  date: isoDate,
+  slot: z.string().trim().min(1).max(40),
+  /** null empties the cell. */
+  assemblyId: z.number().int().positive().nullable(),
+  /** Take the portions from this prep date (null = the default: the latest on or before the day). */
+  prepDate: isoDate.nullable().optional(),
+  storage: z.enum(['fridge', 'frozen']).default('fridge'),
+  allergenOverrides: z.array(allergenOverrideSchema).max(9).default([]),
+});
+export type CellInput = z.input<typeof cellInputSchema>;
+
+export const putCellsSchema = z.object({ version, cells: z.array(cellInputSchema).min(1).max(2000) });
+export type PutCellsInput = z.input<typeof putCellsSchema>;
+
+export const putTraysSchema = z.object({
+  version,
+  trays: z
+    .array(z.object({ trayId: z.number().int().positive(), prepDate: isoDate, trayCount: z.number().int().min(0).max(200) }))
+    .max(200),
+});
+export type PutTraysInput = z.input<typeof putTraysSchema>;
+
+export const versionOnlySchema = z.object({ version });
+
+export const copyDaySchema = z.object({
+  version,
+  fromDate: isoDate,
+  toDate: isoDate,
+  /** Only this client's row; all clients when missing. */
+  clientId: z.number().int().positive().optional(),
+});
+export type CopyDayInput = z.input<typeof copyDaySchema>;
+
+export const copyWeekSchema = z.object({
+  name: z.string().trim().max(120).default(''),
+  startDate: isoDate,
+  prepDate: isoDate,
+  secondPrepDate: isoDate.nullable().optional(),
+});
+export type CopyWeekInput = z.input<typeof copyWeekSchema>;
+
+export const weekIdParams = z.object({ id: z.coerce.number().int().positive() });
+
+export type WeekStatus = 'draft' | 'published';
+
+export interface WeekSummaryDto {
+  id: number;
+  name: string;
+  startDate: IsoDate;
+  endDate: IsoDate;
+  prepDate: IsoDate;
+  secondPrepDate: IsoDate | null;
+  /** Published version number, or null when never published. */
+  publishedVersion: number | null;
+  publishedAt: string | null;
+  /** True when the board changed after the last publication. */
+  changedSincePublished: boolean;
+  cellCount: number;
+  version: number;
+}
+
+export interface BoardClientDto {
+  id: number;
+  name: string;
+  householdMultiplier: string;
+  allergens: AllergenCode[];
+  dislikes: string[];
+  /** Targets for the board's meal slots (their share of the day). */
+  targets: MacroTargets;
+}
+
+export interface BoardCellDto {
+  clientId: number;
+  date: IsoDate;
+  slot: string;
+  assemblyId: number;
+  prepDate: IsoDate | null;
+  storage: 'fridge' | 'frozen';
+  allergenOverrides: { allergen: AllergenCode; reason: string }[];
+}
+
+export interface BoardTrayDto {
+  trayId: number;
+  name: string;
+  prepDate: IsoDate;
+  trayCount: number;
+  portionsPerTray: number | null;
+  fridgeDays: number;
+  freezerWeeks: number;
+}
+
+export interface BoardDayDto {
+  clientId: number;
+  date: IsoDate;
+  totals: DayTotals;
+  warnings: WeekWarning[];
+}
+
+export interface BoardDto {
+  week: WeekSummaryDto;
+  days: IsoDate[];
+  slots: string[];
+  prepDates: IsoDate[];
+  clients: BoardClientDto[];
+  plates: AssemblyDto[];
+  cells: BoardCellDto[];
+  trays: BoardTrayDto[];
+  /** Per client-day totals and warnings. */
+  checks: BoardDayDto[];
+  warnings: WeekWarning[];
+  /** Per cell: each portion's eat-by and remedies. */
+  eatBy: CellResult[];
+  inventory: TrayTally[];
+  cautions: readonly Caution[];
+}
+
+export interface GlanceDto {
+  week: WeekSummaryDto | null;
+  warnings: number;
+  blocks: number;
+  portionsShort: number;
+  nextPrepDate: IsoDate | null;
+}
+
+/** What a client sees: their published plates. */
+export interface MyPlateDto {
+  slot: string;
+  name: string;
+  description: string;
+  macros: PlateMacrosDto;
+  allergens: AllergenCode[];
+  trays: { trayId: number; name: string; portions: number; reheatSteps: string[] }[];
+  addOns: { name: string; amountText: string; unit: string; note: string }[];
+  assemblySteps: string[];
+  reheatSteps: string[];
+  /** The earliest eat-by of the plate's portions. */
+  eatBy: IsoDate | null;
+  storage: 'fridge' | 'frozen';
+  /** For a frozen plate: move it from the freezer to the fridge on this evening. */
+  thawOn: IsoDate | null;
+  prepDate: IsoDate;
+}
+
+export interface MyDayDto {
+  date: IsoDate;
+  plates: MyPlateDto[];
+  totals: PlateMacrosDto;
+}
+
+export interface MyWeekDto {
+  weekId: number;
+  name: string;
+  publishedVersion: number;
+  publishedAt: string;
+  startDate: IsoDate;
+  endDate: IsoDate;
+  days: MyDayDto[];
+  cautions: readonly Caution[];
+}
+
+/** The stored snapshot of one publication: every client's days, as clients will read them. */
+export interface WeekSnapshot {
+  weekId: number;
+  name: string;
+  startDate: IsoDate;
+  endDate: IsoDate;
+  prepDates: IsoDate[];
+  clients: Record<string, { days: MyDayDto[]; trayIds: number[] }>;
+}

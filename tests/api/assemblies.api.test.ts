@@ -1,0 +1,108 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import pg from 'pg';
+import { testApp } from '../support/test-app.js';
+import { coachWorkspace, makeAssembly, makeClient, makeIngredient, makeTray, makeWeek, member } from '../support/factories.js';
+import { TEST_DATABASE_URL } from '../support/db.js';
+
+let app: Express;
+beforeAll(async () => {
+  app = (await testApp()).app;
+});
+
+async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
+  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
+  await c.connect();
+  try {
+    return (await c.query<T>(q, args)).rows;
+  } finally {
+    await c.end();
+  }
+}
+
+// Avoirdupois ounce = 28.349523125 g exactly (NIST Handbook 44, Appendix C).
+const OZ_G = 28.349523125;
+
+describe('plates (assemblies)', () => {
+  it('adds tray portions and add-ons into the plate’s macros and allergens', async () => {
+    const coach = await coachWorkspace(app);
+    // Test ingredient per 100 g: 350 kcal, 30 g fat, 20 g protein, 2 g carbs, milk; a slice weighs 21 g.
+    const cheese = await makeIngredient(coach);
+    // Tray: 8 oz of it, cut 4 × 4 = 16 portions.
+    const tray = await makeTray(coach, {}, cheese.id);
+    const res = await coach.agent
+      .post('/api/assemblies')
+      .send({
+        name: 'Cheese plate',
+        trays: [{ trayId: tray.id, portions: 2 }],
+        addOns: [{ ingredientId: cheese.id, amountText: '1', unit: 'slice', note: 'on top' }],
+        assemblySteps: ['Stack', 'Wrap'],
+        reheatSteps: ['Microwave 60 s'],
+      })
+      .expect(201);
+    // Expected by hand: 2 portions = 2 × 8 oz / 16 = 28.349523125 g; plus a 21 g slice → 49.349523125 g of cheese.
+    const grams = (2 * 8 * OZ_G) / 16 + 21;
+    expect(res.body.nutrition.kcal).toBeCloseTo((grams * 350) / 100, 1);
+    expect(res.body.macros.proteinG).toBeCloseTo((grams * 20) / 100, 1);
+    expect(res.body.macros.fatG).toBeCloseTo((grams * 30) / 100, 1);
+    expect(res.body.allergens).toEqual(['milk']);
+    expect(res.body.complete).toBe(true);
+    expect(res.body.trays[0]).toMatchObject({ trayId: tray.id, portions: 2, fridgeDays: 4 });
+    expect(res.body.addOns[0]).toMatchObject({ ingredientId: cheese.id, grams: 21, note: 'on top' });
+    const rows = await sql('select position, tray_id, ingredient_id from assembly_item where assembly_id = $1 order by position', [res.body.id]);
+    expect(rows).toEqual([
+      { position: 0, tray_id: tray.id, ingredient_id: null },
+      { position: 1, tray_id: null, ingredient_id: cheese.id },
+    ]);
+  });
+
+  it('answers 400 naming the line for a tray of another workspace or an amount that cannot be weighed', async () => {
+    const coach = await coachWorkspace(app);
+    const other = await coachWorkspace(app);
+    const foreign = await makeTray(other);
+    const cheese = await makeIngredient(coach); // no density: cups cannot be weighed
+    const res = await coach.agent
+      .post('/api/assemblies')
+      .send({ name: 'Bad', trays: [{ trayId: foreign.id, portions: 1 }], addOns: [{ ingredientId: cheese.id, amountText: '1', unit: 'cup' }] })
+      .expect(400);
+    expect(Object.keys(res.body.errors)).toEqual(expect.arrayContaining(['trays.0.trayId', 'addOns.0.unit']));
+    const empty = await coach.agent.post('/api/assemblies').send({ name: 'Empty' }).expect(400);
+    expect(empty.body.errors).toHaveProperty('trays');
+  });
+
+  it('refuses a stale edit with 409 and the current plate', async () => {
+    const coach = await coachWorkspace(app);
+    const tray = await makeTray(coach);
+    const plate = await makeAssembly(coach, tray.id);
+    const body = { name: 'Renamed', trays: [{ trayId: tray.id, portions: 1.5 }] };
+    const ok = await coach.agent.put(`/api/assemblies/${plate.id}`).send({ ...body, version: plate.version }).expect(200);
+    expect(ok.body.version).toBe(plate.version + 1);
+    expect(ok.body.trays[0].portions).toBe(1.5);
+    const late = await coach.agent.put(`/api/assemblies/${plate.id}`).send({ ...body, name: 'Late', version: plate.version }).expect(409);
+    expect(late.body).toMatchObject({ code: 'stale_version', currentVersion: plate.version + 1, current: { name: 'Renamed' } });
+  });
+
+  it('keeps plates per workspace, lets the assistant read them, and refuses to delete a plate on a board', async () => {
+    const coach = await coachWorkspace(app);
+    const other = await coachWorkspace(app);
+    const tray = await makeTray(coach);
+    const plate = await makeAssembly(coach, tray.id);
+    await other.agent.get(`/api/assemblies/${plate.id}`).expect(404);
+    expect((await other.agent.get('/api/assemblies').expect(200)).body).toEqual([]);
+    const assistant = await member(app, coach, 'assistant');
+    await assistant.agent.get(`/api/assemblies/${plate.id}`).expect(200);
+    await assistant.agent.post('/api/assemblies').send({ name: 'x', trays: [{ trayId: tray.id, portions: 1 }] }).expect(403);
+
+    const client = await makeClient(coach);
+    const board = await makeWeek(coach);
+    await coach.agent
+      .put(`/api/weeks/${board.week.id}/cells`)
+      .send({ version: board.week.version, cells: [{ clientId: client.id, date: '2026-01-05', slot: 'breakfast', assemblyId: plate.id }] })
+      .expect(200);
+    const del = await coach.agent.delete(`/api/assemblies/${plate.id}`).expect(409);
+    expect(del.body.code).toBe('in_use');
+    const unused = await makeAssembly(coach, tray.id);
+    await coach.agent.delete(`/api/assemblies/${unused.id}`).expect(204);
+    expect(await sql('select id from assembly where id = $1', [unused.id])).toEqual([]);
+  });
+});

@@ -1,0 +1,245 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import pg from 'pg';
+import { testApp } from '../support/test-app.js';
+import {
+  coachWorkspace,
+  makeAssembly,
+  makeClient,
+  makeIngredient,
+  makeTray,
+  makeWeek,
+  member,
+  type Member,
+} from '../support/factories.js';
+import { TEST_DATABASE_URL } from '../support/db.js';
+
+let app: Express;
+beforeAll(async () => {
+  app = (await testApp()).app;
+});
+
+async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
+  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
+  await c.connect();
+  try {
+    return (await c.query<T>(q, args)).rows;
+  } finally {
+    await c.end();
+  }
+}
+
+// Board days: Mon 2026-01-05 … Sun 2026-01-11; prep on Sun 2026-01-04 (the factory's default week).
+const DAYS = ['2026-01-05', '2026-01-06', '2026-01-07', '2026-01-08', '2026-01-09', '2026-01-10', '2026-01-11'];
+
+async function setup(coach: Member, opts: { household?: string; allergens?: string[]; fridgeDays?: number } = {}) {
+  const ing = await makeIngredient(coach); // contains milk
+  // Cut 4 × 4 = 16 portions per tray.
+  const tray = await makeTray(coach, { storage: { fridgeDays: opts.fridgeDays ?? 4, freezerWeeks: 8 } }, ing.id);
+  const plate = await makeAssembly(coach, tray.id);
+  const client = await makeClient(coach, { householdMultiplier: opts.household ?? '1', allergens: opts.allergens ?? [] });
+  const board = await makeWeek(coach);
+  return { ing, tray, plate, client, week: board.week };
+}
+
+async function fillWeek(coach: Member, weekId: number, version: number, clientId: number, assemblyId: number, days = DAYS) {
+  return coach.agent
+    .put(`/api/weeks/${weekId}/cells`)
+    .send({ version, cells: days.map((date) => ({ clientId, date, slot: 'breakfast', assemblyId })) });
+}
+
+describe('portion count', () => {
+  it('needs plates × household multiplier and proposes whole trays (inventory arithmetic)', async () => {
+    const coach = await coachWorkspace(app);
+    const { tray, plate, client, week } = await setup(coach, { household: '3', fridgeDays: 7 });
+    const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id);
+    expect(filled.status).toBe(200);
+    // 7 days × 1 portion × household of 3 = 21 portions; no trays yet → 21 short.
+    expect(filled.body.inventory).toEqual([
+      expect.objectContaining({ trayId: String(tray.id), needed: 21, produced: 0, short: 21, spare: 0, traysToCover: 2 }),
+    ]);
+    const one = await coach.agent
+      .put(`/api/weeks/${week.id}/trays`)
+      .send({ version: filled.body.week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 1 }] })
+      .expect(200);
+    // 1 tray × 16 portions = 16 produced → 5 short.
+    expect(one.body.inventory[0]).toMatchObject({ needed: 21, produced: 16, short: 5, spare: 0 });
+    const covered = await coach.agent.post(`/api/weeks/${week.id}/trays/cover`).send({ version: one.body.week.version }).expect(200);
+    // ceil(21 / 16) = 2 trays → 32 produced, 11 spare.
+    expect(covered.body.trays).toEqual([expect.objectContaining({ trayId: tray.id, prepDate: '2026-01-04', trayCount: 2, portionsPerTray: 16 })]);
+    expect(covered.body.inventory[0]).toMatchObject({ needed: 21, produced: 32, short: 0, spare: 11 });
+    const [row] = await sql<{ tray_count: number }>('select tray_count from week_tray where week_id = $1', [week.id]);
+    expect(row.tray_count).toBe(2);
+  });
+});
+
+describe('eat-by on the board', () => {
+  // USDA FSIS FoodKeeper / Cold Food Storage chart (published-values §6b): egg dishes and cooked leftovers keep
+  // 3–4 days refrigerated at 40 °F or below. Trayline counts the prep day as day 0: prepped Sunday 2026-01-04 with
+  // 4 fridge days → eat by Thursday 2026-01-08; Friday is past it.
+  it('flags a portion past its eat-by, offers freeze-and-thaw, blocks publishing until it is applied', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach);
+    const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id);
+    const friday = filled.body.eatBy.find((c: { date: string }) => c.date === '2026-01-09');
+    expect(friday.portions[0]).toMatchObject({ prepDate: '2026-01-04', eatBy: '2026-01-08', status: 'past-eat-by' });
+    expect(friday.portions[0].remedies).toEqual([
+      expect.objectContaining({ kind: 'freeze-and-thaw', freezeOn: '2026-01-04', thawReminderOn: '2026-01-08', eatOn: '2026-01-09' }),
+    ]);
+    const thursday = filled.body.eatBy.find((c: { date: string }) => c.date === '2026-01-08');
+    expect(thursday.portions[0].status).toBe('ok');
+    const pastDays = filled.body.warnings.filter((w: { kind: string }) => w.kind === 'past-eat-by').map((w: { date: string }) => w.date);
+    expect(pastDays).toEqual(['2026-01-09', '2026-01-10', '2026-01-11']);
+
+    const refused = await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: filled.body.week.version }).expect(409);
+    expect(refused.body.code).toBe('conflict');
+    expect(refused.body.blocks.length).toBeGreaterThanOrEqual(3);
+
+    // Apply the remedy: frozen on prep day, thawed the evening before.
+    const frozen = await coach.agent
+      .put(`/api/weeks/${week.id}/cells`)
+      .send({
+        version: filled.body.week.version,
+        cells: DAYS.slice(4).map((date) => ({ clientId: client.id, date, slot: 'breakfast', assemblyId: plate.id, storage: 'frozen' })),
+      })
+      .expect(200);
+    expect(frozen.body.warnings.filter((w: { kind: string }) => w.kind === 'past-eat-by')).toEqual([]);
+    await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: frozen.body.week.version }).expect(200);
+  });
+
+  it('a second prep date supplies the later days (remedy b)', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach);
+    const withSecond = await coach.agent.patch(`/api/weeks/${week.id}`).send({ version: week.version, secondPrepDate: '2026-01-07' }).expect(200);
+    const filled = await fillWeek(coach, week.id, withSecond.body.week.version, client.id, plate.id);
+    // Wednesday's prep (4 fridge days) covers Wed–Sun: eat by Sunday 2026-01-11.
+    const sunday = filled.body.eatBy.find((c: { date: string }) => c.date === '2026-01-11');
+    expect(sunday.portions[0]).toMatchObject({ prepDate: '2026-01-07', eatBy: '2026-01-11', status: 'ok' });
+    expect(filled.body.warnings.filter((w: { severity: string }) => w.severity === 'block')).toEqual([]);
+    expect(filled.body.cautions.map((c: { id: string }) => c.id)).toEqual(
+      expect.arrayContaining(['cooling', 'reheating', 'two-hour-rule', 'local-codes']),
+    );
+  });
+});
+
+describe('the week board', () => {
+  it('refuses an allergen conflict unless the coach overrides it with a reason', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach, { allergens: ['milk'] });
+    const cell = { clientId: client.id, date: DAYS[0], slot: 'breakfast', assemblyId: plate.id };
+    const refused = await coach.agent.put(`/api/weeks/${week.id}/cells`).send({ version: week.version, cells: [cell] }).expect(400);
+    expect(refused.body.errors['cells.0.allergenOverrides'][0]).toMatch(/Milk/);
+    expect(await sql('select id from week_cell where week_id = $1', [week.id])).toEqual([]);
+    const ok = await coach.agent
+      .put(`/api/weeks/${week.id}/cells`)
+      .send({ version: week.version, cells: [{ ...cell, allergenOverrides: [{ allergen: 'milk', reason: 'Lactose-free version agreed with client' }] }] })
+      .expect(200);
+    expect(ok.body.warnings).toEqual(
+      expect.arrayContaining([expect.objectContaining({ kind: 'allergen', severity: 'warn', overridden: true })]),
+    );
+  });
+
+  it('two edits from two browsers: the second gets 409 with the current board, never a silent overwrite', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach);
+    const other = await makeAssembly(coach, (plate.trays as { trayId: number }[])[0].trayId, { name: 'Other plate' });
+    const first = await fillWeek(coach, week.id, week.version, client.id, plate.id, [DAYS[0]]);
+    expect(first.status).toBe(200);
+    const second = await fillWeek(coach, week.id, week.version, client.id, other.id, [DAYS[0]]);
+    expect(second.status).toBe(409);
+    expect(second.body).toMatchObject({ code: 'stale_version', currentVersion: first.body.week.version });
+    expect(second.body.current.cells).toEqual([expect.objectContaining({ assemblyId: plate.id, date: DAYS[0] })]);
+    const rows = await sql<{ assembly_id: number }>('select assembly_id from week_cell where week_id = $1', [week.id]);
+    expect(rows).toEqual([{ assembly_id: plate.id }]);
+  });
+
+  it('shows day totals against the client’s targets, copies a day and a week', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach);
+    const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id, [DAYS[0]]);
+    const check = filled.body.checks.find((c: { date: string }) => c.date === DAYS[0]);
+    const plateDto = filled.body.plates.find((p: { id: number }) => p.id === plate.id);
+    expect(check.totals.kcal).toBeCloseTo(plateDto.macros.kcal, 0);
+    // One small cheese portion is far below breakfast's protein share: flagged.
+    expect(check.warnings.map((w: { kind: string }) => w.kind)).toContain('protein-short');
+
+    const copied = await coach.agent
+      .post(`/api/weeks/${week.id}/copy-day`)
+      .send({ version: filled.body.week.version, fromDate: DAYS[0], toDate: DAYS[1] })
+      .expect(200);
+    expect(copied.body.cells.map((c: { date: string }) => c.date).sort()).toEqual([DAYS[0], DAYS[1]]);
+
+    const next = await coach.agent
+      .post(`/api/weeks/${week.id}/copy`)
+      .send({ startDate: '2026-01-12', prepDate: '2026-01-11' })
+      .expect(201);
+    expect(next.body.week.id).not.toBe(week.id);
+    expect(next.body.cells.map((c: { date: string }) => c.date).sort()).toEqual(['2026-01-12', '2026-01-13']);
+  });
+
+  it('answers 400 naming the field for a day off the board or an unknown slot', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach);
+    const res = await coach.agent
+      .put(`/api/weeks/${week.id}/cells`)
+      .send({ version: week.version, cells: [{ clientId: client.id, date: '2026-02-01', slot: 'supper', assemblyId: plate.id }] })
+      .expect(400);
+    expect(Object.keys(res.body.errors)).toEqual(expect.arrayContaining(['cells.0.date', 'cells.0.slot']));
+  });
+});
+
+describe('publishing and the client view', () => {
+  it('a client reads only their own published plates; edits stay hidden until the next publication', async () => {
+    const coach = await coachWorkspace(app);
+    const { tray, plate, client, week } = await setup(coach, { fridgeDays: 7 });
+    const otherClient = await makeClient(coach, { name: 'Other' });
+    const otherTray = await makeTray(coach);
+    const otherPlate = await makeAssembly(coach, otherTray.id, { name: 'Not yours' });
+    const a = await fillWeek(coach, week.id, week.version, client.id, plate.id, [DAYS[0], DAYS[1]]);
+    const b = await fillWeek(coach, week.id, a.body.week.version, otherClient.id, otherPlate.id, [DAYS[0]]);
+    const published = await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: b.body.week.version }).expect(200);
+    expect(published.body.week).toMatchObject({ publishedVersion: 1, changedSincePublished: false });
+
+    const me = await member(app, coach, 'client', { clientId: client.id });
+    const mine = await me.agent.get('/api/weeks/mine?today=2026-01-05').expect(200);
+    expect(mine.body).toMatchObject({ weekId: week.id, publishedVersion: 1 });
+    expect(mine.body.days.map((d: { date: string }) => d.date)).toEqual([DAYS[0], DAYS[1]]);
+    expect(mine.body.days[0].plates[0]).toMatchObject({ name: plate.name, eatBy: '2026-01-11', storage: 'fridge', assemblySteps: ['Plate it'] });
+    expect(JSON.stringify(mine.body)).not.toContain('Not yours');
+
+    // The trays hook: a client may read the trays of their published plan, and no others.
+    await me.agent.get(`/api/trays/${tray.id}`).expect(200);
+    await me.agent.get(`/api/trays/${otherTray.id}`).expect(404);
+    // Never the board or another client's profile.
+    await me.agent.get(`/api/weeks/${week.id}`).expect(403);
+    await me.agent.get(`/api/clients/${otherClient.id}`).expect(404);
+
+    // The coach changes the board: the client still sees version 1 until the coach publishes again.
+    const edited = await fillWeek(coach, week.id, published.body.week.version, client.id, plate.id, [DAYS[2]]);
+    expect(edited.body.week.changedSincePublished).toBe(true);
+    const still = await me.agent.get('/api/weeks/mine?today=2026-01-05').expect(200);
+    expect(still.body.days).toHaveLength(2);
+    await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: edited.body.week.version }).expect(200);
+    const now = await me.agent.get('/api/weeks/mine?today=2026-01-05').expect(200);
+    expect(now.body.publishedVersion).toBe(2);
+    expect(now.body.days).toHaveLength(3);
+    const pubs = await sql<{ number: number }>('select number from week_publication where week_id = $1 order by number', [week.id]);
+    expect(pubs).toEqual([{ number: 1 }, { number: 2 }]);
+  });
+
+  it('keeps the board from assistants and other workspaces; the home glance counts problems', async () => {
+    const coach = await coachWorkspace(app);
+    const other = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach);
+    const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id);
+    const assistant = await member(app, coach, 'assistant');
+    await assistant.agent.get(`/api/weeks/${week.id}`).expect(403);
+    const list = await assistant.agent.get('/api/weeks').expect(200);
+    expect(list.body).toEqual([expect.objectContaining({ id: week.id, cellCount: 7 })]);
+    await other.agent.get(`/api/weeks/${week.id}`).expect(404);
+    await other.agent.put(`/api/weeks/${week.id}/cells`).send({ version: filled.body.week.version, cells: [{ clientId: client.id, date: DAYS[0], slot: 'breakfast', assemblyId: null }] }).expect(404);
+    const glance = await coach.agent.get('/api/weeks/glance?today=2026-01-03').expect(200);
+    expect(glance.body).toMatchObject({ week: { id: week.id }, nextPrepDate: '2026-01-04', portionsShort: 7 });
+    expect(glance.body.blocks).toBe(3);
+  });
+});
