@@ -7,5 +7,6 @@ import { Client } from '../modules/clients/client.entity.js';
 import { Assembly, AssemblyItem } from '../modules/assemblies/assembly.entity.js';
 import { Week, WeekCell, WeekPublication, WeekTray } from '../modules/weeks/week.entity.js';
 import { PantryItem } from '../modules/shopping/pantry.entity.js';
+import { BakeRule, BakeRunSetting, Oven } from '../modules/bake-runs/bake-run.entity.js';
 
-export const entities = [Workspace, User, Membership, Invitation, PasswordReset, Ingredient, Tray, TrayLine, TrayPhoto, Client, Assembly, AssemblyItem, Week, WeekTray, WeekCell, WeekPublication, PantryItem];
+export const entities = [Workspace, User, Membership, Invitation, PasswordReset, Ingredient, Tray, TrayLine, TrayPhoto, Client, Assembly, AssemblyItem, Week, WeekTray, WeekCell, WeekPublication, PantryItem, BakeRule, Oven, BakeRunSetting];

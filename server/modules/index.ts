@@ -9,6 +9,7 @@ import { clientRoutes } from './clients/client.routes.js';
 import { assemblyRoutes } from './assemblies/assembly.routes.js';
 import { weekRoutes } from './weeks/week.routes.js';
 import { trayRoutes } from './trays/trays.routes.js';
+import { bakeRunRoutes } from './bake-runs/bake-run.routes.js';
 import { pantryRoutes } from './shopping/pantry.routes.js';
 import { shoppingRoutes } from './shopping/shopping.routes.js';
 
@@ -19,5 +20,5 @@ export interface ModuleDeps {
 }
 
 export function apiModules(deps: ModuleDeps): Router[] {
-  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), shoppingRoutes()];
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), shoppingRoutes(), bakeRunRoutes()];
 }

@@ -228,4 +228,68 @@ export const MATRIX: Record<string, MatrixRow> = {
     path: (ctx) => `/api/trays/${ctx.ids.tray}/thumbnail`,
     crossWorkspace: true,
   }),
+  // Bake rules, ovens and the bake run (issue 6): coach writes, assistant reads; clients never.
+  'GET /api/bake-rules': R(['coach', 'assistant']),
+  'POST /api/bake-rules': R(['coach'], {
+    body: () => ({ category: `matrix-${Date.now()}`, label: 'Matrix rule', tempF: 375, minMinutes: 10, maxMinutes: 12, handsOnMinutes: 5 }),
+  }),
+  'GET /api/bake-rules/:id': R(['coach', 'assistant'], {
+    prepare: async (ctx) => {
+      const rules = (await ctx.coachA.agent.get('/api/bake-rules')).body as { id: number }[];
+      ctx.ids.bakeRule = rules[0].id;
+      ctx.ids.bakeRuleToDelete = rules[1].id;
+    },
+    path: (ctx) => `/api/bake-rules/${ctx.ids.bakeRule}`,
+    crossWorkspace: true,
+  }),
+  'PUT /api/bake-rules/:id': R(['coach'], {
+    path: (ctx) => `/api/bake-rules/${ctx.ids.bakeRule}`,
+    body: () => ({ label: 'Matrix rule', tempF: 350, minMinutes: 20, maxMinutes: 25, handsOnMinutes: 5, version: 999 }),
+    crossWorkspace: true,
+  }),
+  'DELETE /api/bake-rules/:id': R(['coach'], { path: (ctx) => `/api/bake-rules/${ctx.ids.bakeRuleToDelete}`, crossWorkspace: true }),
+  'GET /api/ovens': R(['coach', 'assistant']),
+  'POST /api/ovens': R(['coach'], { body: () => ({ name: `Matrix oven ${Date.now()}`, racks: 2, traysPerRack: 1 }) }),
+  'GET /api/ovens/:id': R(['coach', 'assistant'], {
+    prepare: async (ctx) => {
+      ctx.ids.oven = (await ctx.coachA.agent.post('/api/ovens').send({ name: 'Matrix left', racks: 2, traysPerRack: 1 })).body.id;
+      ctx.ids.ovenToDelete = (await ctx.coachA.agent.post('/api/ovens').send({ name: 'Matrix gone', racks: 1, traysPerRack: 1 })).body.id;
+    },
+    path: (ctx) => `/api/ovens/${ctx.ids.oven}`,
+    crossWorkspace: true,
+  }),
+  'PUT /api/ovens/:id': R(['coach'], {
+    path: (ctx) => `/api/ovens/${ctx.ids.oven}`,
+    body: () => ({ name: 'Matrix left', racks: 2, traysPerRack: 1, version: 999 }),
+    crossWorkspace: true,
+  }),
+  'DELETE /api/ovens/:id': R(['coach'], { path: (ctx) => `/api/ovens/${ctx.ids.ovenToDelete}`, crossWorkspace: true }),
+  'POST /api/calc/bake-run': R(['coach', 'assistant'], {
+    body: () => ({
+      start: '2026-12-06T08:00',
+      cooks: 1,
+      ovens: [{ name: 'Left', racks: 1, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 15, maxF: 500 }],
+      trays: [{ id: 't1', name: 'Tray', tempF: 350, minMinutes: 14, maxMinutes: 16, handsOnMinutes: 5 }],
+    }),
+  }),
+  'GET /api/weeks/:weekId/bake-run': R(['coach', 'assistant'], {
+    prepare: async (ctx) => {
+      ctx.ids.bakeWeek = (await makeWeek(ctx.coachA)).week.id;
+    },
+    path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run`,
+    crossWorkspace: true,
+  }),
+  'PUT /api/weeks/:weekId/bake-run/settings': R(['coach'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run/settings`,
+    body: () => ({ start: '2026-01-04T08:00', cooks: 1, version: 999 }),
+    crossWorkspace: true,
+  }),
+  'GET /api/weeks/:weekId/bake-run.pdf': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run.pdf`,
+    crossWorkspace: true,
+  }),
+  'GET /api/weeks/:weekId/bake-run.ics': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run.ics`,
+    crossWorkspace: true,
+  }),
 };

@@ -142,3 +142,15 @@ export async function makeWeek(coach: Member, overrides: Record<string, unknown>
   if (res.status !== 201) throw new Error(`makeWeek: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body as { week: { id: number; version: number } } & Record<string, unknown>;
 }
+
+/** A valid oven body for POST /api/ovens (invented test values; rates are the defaults). */
+export function ovenInput(overrides: Record<string, unknown> = {}) {
+  return { name: uniq('Oven'), racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 15, maxF: 500, ...overrides };
+}
+
+/** Creates an oven in the coach's workspace; returns the OvenDto body. */
+export async function makeOven(coach: Member, overrides: Record<string, unknown> = {}) {
+  const res = await coach.agent.post('/api/ovens').send(ovenInput(overrides));
+  if (res.status !== 201) throw new Error(`makeOven: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body as { id: number; version: number; name: string } & Record<string, unknown>;
+}

@@ -1,6 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { seedDemo, type DemoStep } from './demo-seed.js';
 import { seedDemoTrays } from './tray-demo.js';
+import { seedDemoOvens } from './bake-run-demo.js';
 import { seedReferenceIngredients } from './ingredient-seed.js';
 import { seedDemoIngredients } from './ingredient-demo.js';
 
@@ -9,7 +10,7 @@ import { seedDemoIngredients } from './ingredient-demo.js';
  * Modules add their reference seeds and demo steps here.
  */
 export const referenceSeeds: ((em: EntityManager) => Promise<void>)[] = [seedReferenceIngredients];
-export const demoSteps: DemoStep[] = [seedDemoIngredients, seedDemoTrays];
+export const demoSteps: DemoStep[] = [seedDemoIngredients, seedDemoTrays, seedDemoOvens];
 
 export async function seedAll(em: EntityManager, opts: { demo: boolean }) {
   for (const seed of referenceSeeds) await seed(em.fork());

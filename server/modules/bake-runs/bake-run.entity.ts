@@ -1,0 +1,87 @@
+import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
+import { Workspace } from '../workspaces/workspace.entity.js';
+import { Week } from '../weeks/week.entity.js';
+
+/**
+ * A workspace's bake rule for one food category (seeded from DEFAULT_BAKE_RULES on the first read, then the coach's).
+ * Temperatures in °F (numeric). A deleted rule is kept with `deletedAt` so the defaults are not seeded again and
+ * a category code stays unique per workspace (creating it again revives the row).
+ */
+export const BakeRule = defineEntity({
+  name: 'BakeRule',
+  tableName: 'bake_rule',
+  uniques: [{ properties: ['workspace', 'category'] }],
+  properties: {
+    id: p.integer().primary().autoincrement(),
+    workspace: () => p.manyToOne(Workspace).ref(),
+    category: p.string().length(40),
+    label: p.string().length(120),
+    tempF: p.decimal().precision(8).scale(4),
+    minMinutes: p.integer(),
+    maxMinutes: p.integer(),
+    handsOnMinutes: p.integer(),
+    toleranceF: p.decimal().precision(8).scale(4).default('10'),
+    donenessCue: p.text().default(''),
+    minInternalF: p.decimal().precision(8).scale(4).nullable(),
+    restMinutes: p.integer().default(0),
+    minInternalSource: p.string().length(200).nullable(),
+    rackPreference: p.string().length(10).default('any'),
+    /** Convection adjustment: the oven is set this much lower, °F (default 25). */
+    convectionDeltaF: p.decimal().precision(8).scale(4).default('25'),
+    /** Crowding: + this % bake time for each tray beyond the first (default 10; common practice, no source). */
+    crowdingPct: p.decimal().precision(8).scale(4).default('10'),
+    bakeSource: p.string().length(200).default('common practice, no source'),
+    note: p.text().default(''),
+    deletedAt: p.datetime().nullable(),
+    version: p.integer().version(),
+    createdAt: p.datetime().onCreate(() => new Date()),
+    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+  },
+});
+export type IBakeRule = InferEntity<typeof BakeRule>;
+
+/** An oven of the workspace: capacity, heating/cooling rates (°F per minute) and maximum set point (°F). */
+export const Oven = defineEntity({
+  name: 'Oven',
+  tableName: 'oven',
+  uniques: [{ properties: ['workspace', 'name'] }],
+  properties: {
+    id: p.integer().primary().autoincrement(),
+    workspace: () => p.manyToOne(Workspace).ref(),
+    name: p.string().length(60),
+    racks: p.integer(),
+    traysPerRack: p.integer(),
+    convection: p.boolean().default(false),
+    heatFPerMin: p.decimal().precision(8).scale(4).default('25'),
+    coolFPerMin: p.decimal().precision(8).scale(4).default('15'),
+    maxF: p.decimal().precision(8).scale(4).default('500'),
+    isDemo: p.boolean().default(false),
+    version: p.integer().version(),
+    createdAt: p.datetime().onCreate(() => new Date()),
+    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+  },
+});
+export type IOven = InferEntity<typeof Oven>;
+
+/** The saved bake-run settings of one prep date of a prep week. */
+export const BakeRunSetting = defineEntity({
+  name: 'BakeRunSetting',
+  tableName: 'bake_run_setting',
+  uniques: [{ properties: ['week', 'prepDate'] }],
+  properties: {
+    id: p.integer().primary().autoincrement(),
+    workspace: () => p.manyToOne(Workspace).ref(),
+    week: () => p.manyToOne(Week).ref().deleteRule('cascade'),
+    prepDate: p.string().length(10),
+    /** Local "YYYY-MM-DDTHH:mm". */
+    start: p.string().length(16),
+    cooks: p.integer(),
+    /** Base tray id → hands-on minutes for one tray of it. */
+    handsOnMinutes: p.json<Record<string, number>>().default('{}'),
+    ovenIds: p.json<number[]>().default('[]'),
+    version: p.integer().version(),
+    createdAt: p.datetime().onCreate(() => new Date()),
+    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+  },
+});
+export type IBakeRunSetting = InferEntity<typeof BakeRunSetting>;

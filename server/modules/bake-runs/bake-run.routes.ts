@@ -1,0 +1,137 @@
+import { Router } from 'express';
+import {
+  bakeRuleCreateSchema,
+  bakeRuleUpdateSchema,
+  bakeRunSettingsSchema,
+  calcBakeRunRequestSchema,
+  idParams,
+  ovenCreateSchema,
+  ovenUpdateSchema,
+  prepDateQuery,
+  weekIdParam,
+} from '@shared/schemas/bake-setup.schema.js';
+import { actorOf, allow } from '../../http/authz.js';
+import { Conflict } from '../../http/errors.js';
+import { emOf } from '../../http/request-context.js';
+import { validated } from '../../http/validate.js';
+import { Workspace } from '../workspaces/workspace.entity.js';
+import { renderBakeRunPdf } from '../pdf/bake-run.pdf.js';
+import * as setup from './bake-setup.service.js';
+import * as runs from './bake-run.service.js';
+import { bakeRunIcs } from './bake-run-ics.js';
+
+/** Bake rules and ovens (coach writes, assistant reads), the stateless calculator and a prep week's bake run. */
+export function bakeRunRoutes() {
+  const r = Router();
+
+  r.get('/bake-rules', allow('coach', 'assistant'), validated({}, (_i, req) => setup.listBakeRules(emOf(req), actorOf(req))));
+  r.post(
+    '/bake-rules',
+    allow('coach'),
+    validated({ body: bakeRuleCreateSchema }, async ({ body }, req, res) => {
+      const dto = await setup.createBakeRule(emOf(req), actorOf(req), body);
+      res.status(201);
+      return dto;
+    }),
+  );
+  r.get(
+    '/bake-rules/:id',
+    allow('coach', 'assistant'),
+    validated({ params: idParams }, ({ params }, req) => setup.getBakeRule(emOf(req), actorOf(req), params.id)),
+  );
+  r.put(
+    '/bake-rules/:id',
+    allow('coach'),
+    validated({ params: idParams, body: bakeRuleUpdateSchema }, ({ params, body }, req) =>
+      setup.updateBakeRule(emOf(req), actorOf(req), params.id, body),
+    ),
+  );
+  r.delete(
+    '/bake-rules/:id',
+    allow('coach'),
+    validated({ params: idParams }, async ({ params }, req) => {
+      await setup.deleteBakeRule(emOf(req), actorOf(req), params.id);
+    }),
+  );
+
+  r.get('/ovens', allow('coach', 'assistant'), validated({}, (_i, req) => setup.listOvens(emOf(req), actorOf(req))));
+  r.post(
+    '/ovens',
+    allow('coach'),
+    validated({ body: ovenCreateSchema }, async ({ body }, req, res) => {
+      const dto = await setup.createOven(emOf(req), actorOf(req), body);
+      res.status(201);
+      return dto;
+    }),
+  );
+  r.get('/ovens/:id', allow('coach', 'assistant'), validated({ params: idParams }, ({ params }, req) => setup.getOven(emOf(req), actorOf(req), params.id)));
+  r.put(
+    '/ovens/:id',
+    allow('coach'),
+    validated({ params: idParams, body: ovenUpdateSchema }, ({ params, body }, req) => setup.updateOven(emOf(req), actorOf(req), params.id, body)),
+  );
+  r.delete(
+    '/ovens/:id',
+    allow('coach'),
+    validated({ params: idParams }, async ({ params }, req) => {
+      await setup.deleteOven(emOf(req), actorOf(req), params.id);
+    }),
+  );
+
+  r.post(
+    '/calc/bake-run',
+    allow('coach', 'assistant'),
+    validated({ body: calcBakeRunRequestSchema }, ({ body }, req) => runs.calcBakeRun(emOf(req), actorOf(req), body)),
+  );
+
+  r.get(
+    '/weeks/:weekId/bake-run',
+    allow('coach', 'assistant'),
+    validated({ params: weekIdParam, query: prepDateQuery }, ({ params, query }, req) =>
+      runs.getWeekBakeRun(emOf(req), actorOf(req), params.weekId, query.prepDate),
+    ),
+  );
+  r.put(
+    '/weeks/:weekId/bake-run/settings',
+    allow('coach'),
+    validated({ params: weekIdParam, body: bakeRunSettingsSchema }, ({ params, body }, req) =>
+      runs.putWeekBakeRunSettings(emOf(req), actorOf(req), params.weekId, body),
+    ),
+  );
+
+  const plannedRun = async (req: Parameters<typeof emOf>[0], weekId: number, prepDate?: string) => {
+    const dto = await runs.getWeekBakeRun(emOf(req), actorOf(req), weekId, prepDate);
+    if (!dto.run) throw new Conflict(`Nothing to plan yet: ${dto.problems.join(' ')}`, { problems: dto.problems });
+    return { dto, run: dto.run };
+  };
+
+  r.get(
+    '/weeks/:weekId/bake-run.pdf',
+    allow('coach', 'assistant'),
+    validated({ params: weekIdParam, query: prepDateQuery }, async ({ params, query }, req, res) => {
+      const { dto, run } = await plannedRun(req, params.weekId, query.prepDate);
+      const ws = await emOf(req).findOneOrFail(Workspace, { id: actorOf(req).workspaceId });
+      const { filename, buffer } = await renderBakeRunPdf(run, {
+        businessName: ws.name,
+        title: `Bake run, ${dto.weekName}, prep ${dto.prepDate}`,
+        filename: `bake-run-${dto.prepDate}.pdf`,
+      });
+      res.setHeader('content-type', 'application/pdf');
+      res.setHeader('content-disposition', `attachment; filename="${filename}"`);
+      res.send(buffer);
+    }),
+  );
+  r.get(
+    '/weeks/:weekId/bake-run.ics',
+    allow('coach', 'assistant'),
+    validated({ params: weekIdParam, query: prepDateQuery }, async ({ params, query }, req, res) => {
+      const { dto, run } = await plannedRun(req, params.weekId, query.prepDate);
+      const text = bakeRunIcs(run, { calendarName: `Bake run ${dto.prepDate}`, uidPrefix: `week${dto.weekId}-${dto.prepDate}` });
+      res.setHeader('content-type', 'text/calendar; charset=utf-8');
+      res.setHeader('content-disposition', `attachment; filename="bake-run-${dto.prepDate}.ics"`);
+      res.send(text);
+    }),
+  );
+
+  return r;
+}

@@ -1,0 +1,264 @@
+import Decimal from 'decimal.js';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { ZodError } from 'zod';
+import { planBakeRun } from '@shared/domain/bake-run.js';
+import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-run-types.js';
+import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
+import type {
+  BakeRunSettingsDto,
+  BakeRunSettingsValues,
+  CalcBakeRunRequest,
+  WeekBakeRunDto,
+  WeekBakeTrayDto,
+} from '@shared/schemas/bake-setup.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
+import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
+import { Tray } from '../trays/tray.entity.js';
+import { BakeRunSetting, BakeRule, type IBakeRule, type IBakeRunSetting, type IOven } from './bake-run.entity.js';
+import { loadBakeRules, loadOvens, presentOven } from './bake-setup.service.js';
+
+const num = (v: string | number): number => new Decimal(v).toNumber();
+
+/** Run-level rules from the workspace rules the run uses (the scheduler takes one value per run). */
+export function runRulesFrom(rules: readonly IBakeRule[]): { rules: Partial<BakeRunRules>; cautions: string[] } {
+  if (rules.length === 0) return { rules: {}, cautions: [] };
+  const crowding = rules.map((r) => num(r.crowdingPct));
+  const deltas = rules.map((r) => num(r.convectionDeltaF));
+  // Crowding: the largest of the rules (longer times, the safe side). Convection: the value most rules give.
+  const counts = new Map<number, number>();
+  for (const d of deltas) counts.set(d, (counts.get(d) ?? 0) + 1);
+  const delta = [...counts.entries()].sort((a, b) => b[1] - a[1] || a[0] - b[0])[0][0];
+  const cautions: string[] = [];
+  if (new Set(crowding).size > 1)
+    cautions.push(`The bake rules in this run give different crowding rules; the plan uses the largest, +${Math.max(...crowding)}% per extra tray.`);
+  if (new Set(deltas).size > 1)
+    cautions.push(`The bake rules in this run give different convection adjustments; the plan sets convection ovens ${delta} °F lower for every tray.`);
+  return {
+    rules: {
+      crowdingPerExtraTray: new Decimal(Math.max(...crowding)).dividedBy(100).toNumber(),
+      convectionMode: 'temperature',
+      convectionDeltaF: delta,
+    },
+    cautions,
+  };
+}
+
+function ruleTrayDefaults(rule: IBakeRule) {
+  return {
+    tempF: num(rule.tempF),
+    minMinutes: rule.minMinutes,
+    maxMinutes: rule.maxMinutes,
+    handsOnMinutes: rule.handsOnMinutes,
+    toleranceF: num(rule.toleranceF),
+    rackPreference: rule.rackPreference,
+    ...(rule.minInternalF == null ? {} : { minInternalF: num(rule.minInternalF) }),
+  };
+}
+
+/** Parses with the shared schema; a failure is a 400 naming `trays.N.field` etc. */
+function parseRun(body: unknown) {
+  const result = bakeRunInputSchema.safeParse(body);
+  if (!result.success) {
+    (result.error as unknown as { where: string }).where = 'body';
+    throw result.error;
+  }
+  return result.data;
+}
+
+/** POST /api/calc/bake-run: resolves `ruleId`s from the workspace's rules, validates, plans. */
+export async function calcBakeRun(em: EntityManager, actor: Actor, body: CalcBakeRunRequest): Promise<BakeRunResult> {
+  const wanted = [...new Set(body.trays.map((t) => t.ruleId).filter((id): id is number => id !== undefined))];
+  const found = wanted.length
+    ? await em.find(BakeRule, { id: { $in: wanted }, workspace: actor.workspaceId, deletedAt: null })
+    : [];
+  const byId = new Map(found.map((r) => [r.id, r]));
+  const used: IBakeRule[] = [];
+  const trays = body.trays.map((t, i) => {
+    const { ruleId, ...given } = t;
+    if (ruleId === undefined) return given;
+    const rule = byId.get(ruleId);
+    if (!rule) throw ValidationError.field(`trays.${i}.ruleId`, `No bake rule with id ${ruleId} in your workspace.`);
+    used.push(rule);
+    const defaults = ruleTrayDefaults(rule);
+    const hasTemp = given.tempF !== undefined || given.tempC !== undefined;
+    return {
+      name: rule.label,
+      ...defaults,
+      ...(hasTemp ? { tempF: undefined } : {}),
+      ...Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined)),
+    };
+  });
+  const derived = runRulesFrom([...new Set(used)]);
+  const input = parseRun({ ...body, trays, rules: body.rules ?? (used.length ? derived.rules : undefined) });
+  const run = planBakeRun(input);
+  return body.rules ? run : { ...run, cautions: [...derived.cautions, ...run.cautions] };
+}
+
+// ---- the saved bake run of a prep week ----
+
+async function findWeek(em: EntityManager, actor: Actor, id: number): Promise<IWeek> {
+  const w = await em.findOne(Week, { id, workspace: actor.workspaceId });
+  if (!w) throw new NotFound('Week');
+  return w;
+}
+
+function prepDatesOf(w: IWeek): string[] {
+  return [w.prepDate, ...(w.secondPrepDate ? [w.secondPrepDate] : [])].sort();
+}
+
+function pickPrepDate(w: IWeek, wanted: string | undefined): string {
+  const dates = prepDatesOf(w);
+  if (wanted === undefined) return w.prepDate;
+  if (!dates.includes(wanted)) throw ValidationError.field('prepDate', `This week's prep dates are ${dates.join(' and ')}.`);
+  return wanted;
+}
+
+function presentSettings(prepDate: string, row: IBakeRunSetting | null): BakeRunSettingsDto {
+  return row
+    ? { prepDate, start: row.start, cooks: row.cooks, handsOnMinutes: { ...row.handsOnMinutes }, ovenIds: [...row.ovenIds], version: row.version }
+    : { prepDate, start: `${prepDate}T08:00`, cooks: 1, handsOnMinutes: {}, ovenIds: [], version: null };
+}
+
+/** The tray rows of the run: the week's tray counts × each base tray's bake values and its category's rule. */
+async function weekTrays(em: EntityManager, week: IWeek, prepDate: string, settings: BakeRunSettingsDto, rules: IBakeRule[]) {
+  const rows = await em.find(WeekTray, { week: week.id, prepDate, trayCount: { $gt: 0 } }, { orderBy: { id: 'asc' } });
+  const trays = rows.length ? await em.find(Tray, { id: { $in: rows.map((r) => r.tray.id) } }) : [];
+  const trayById = new Map(trays.map((t) => [t.id, t]));
+  const ruleByCategory = new Map(rules.map((r) => [r.category, r]));
+  const list: WeekBakeTrayDto[] = [];
+  const used: IBakeRule[] = [];
+  for (const row of rows) {
+    const tray = trayById.get(row.tray.id);
+    if (!tray) continue;
+    const rule = ruleByCategory.get(tray.bakeCategory);
+    if (rule) used.push(rule);
+    list.push({
+      trayId: tray.id,
+      name: tray.name,
+      category: tray.bakeCategory,
+      trayCount: row.trayCount,
+      tempF: tray.bakeTempF,
+      minMinutes: tray.bakeMinMinutes,
+      maxMinutes: tray.bakeMaxMinutes,
+      handsOnMinutes: settings.handsOnMinutes[String(tray.id)] ?? rule?.handsOnMinutes ?? 10,
+      donenessCue: rule?.donenessCue ?? '',
+      minInternalF: rule?.minInternalF == null ? null : num(rule.minInternalF),
+    });
+  }
+  const schedulerTrays = list.flatMap((t) => {
+    const rule = ruleByCategory.get(t.category);
+    return Array.from({ length: t.trayCount }, (_, k): BakeTray => ({
+      id: `${t.trayId}-${k + 1}`,
+      name: t.trayCount > 1 ? `${t.name} (${k + 1}/${t.trayCount})` : t.name,
+      tempF: t.tempF,
+      minMinutes: t.minMinutes,
+      maxMinutes: t.maxMinutes,
+      handsOnMinutes: t.handsOnMinutes,
+      ...(rule ? { toleranceF: num(rule.toleranceF), rackPreference: rule.rackPreference as BakeTray['rackPreference'] } : {}),
+      ...(t.minInternalF === null ? {} : { minInternalF: t.minInternalF }),
+    }));
+  });
+  return { list, schedulerTrays, used: [...new Set(used)] };
+}
+
+function ovenInput(o: IOven) {
+  return {
+    name: o.name,
+    racks: o.racks,
+    traysPerRack: o.traysPerRack,
+    convection: o.convection,
+    heatFPerMin: num(o.heatFPerMin),
+    coolFPerMin: num(o.coolFPerMin),
+    maxF: num(o.maxF),
+  };
+}
+
+export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: number, wantedDate?: string): Promise<WeekBakeRunDto> {
+  const week = await findWeek(em, actor, weekId);
+  const prepDate = pickPrepDate(week, wantedDate);
+  const row = await em.findOne(BakeRunSetting, { week: week.id, prepDate });
+  const settings = presentSettings(prepDate, row);
+  const [rules, allOvens] = await Promise.all([loadBakeRules(em, actor.workspaceId), loadOvens(em, actor.workspaceId)]);
+  const ovens = settings.ovenIds.length ? allOvens.filter((o) => settings.ovenIds.includes(o.id)) : allOvens;
+  const { list, schedulerTrays, used } = await weekTrays(em, week, prepDate, settings, rules);
+  const problems: string[] = [];
+  if (schedulerTrays.length === 0) problems.push('No trays to bake on this prep date: set the tray counts of the week first.');
+  if (ovens.length === 0) problems.push('No ovens: add your ovens under "Bake rules & ovens".');
+  if (schedulerTrays.length > 200) problems.push('More than 200 trays on one prep date: split them over two prep dates.');
+  let run: BakeRunResult | null = null;
+  if (problems.length === 0) {
+    const derived = runRulesFrom(used);
+    const parsed = bakeRunInputSchema.safeParse({
+      start: settings.start,
+      cooks: settings.cooks,
+      ambientF: 70,
+      ovens: ovens.map(ovenInput),
+      trays: schedulerTrays,
+      rules: derived.rules,
+    } satisfies BakeRunRequestBody);
+    if (parsed.success) {
+      const planned = planBakeRun(parsed.data);
+      run = { ...planned, cautions: [...derived.cautions, ...planned.cautions] };
+    } else {
+      problems.push(...describeIssues(parsed.error, schedulerTrays));
+    }
+  }
+  return {
+    weekId: week.id,
+    weekName: week.name || `Week of ${week.startDate}`,
+    prepDate,
+    prepDates: prepDatesOf(week),
+    settings,
+    trays: list,
+    ovens: ovens.map(presentOven),
+    run,
+    problems,
+  };
+}
+
+function describeIssues(error: ZodError, trays: BakeTray[]): string[] {
+  return [
+    ...new Set(
+      error.issues.map((i) => {
+        const [where, index] = i.path;
+        const tray = where === 'trays' && typeof index === 'number' ? trays[index] : undefined;
+        return tray ? `${tray.name}: ${i.message}` : i.message;
+      }),
+    ),
+  ];
+}
+
+export async function putWeekBakeRunSettings(
+  em: EntityManager,
+  actor: Actor,
+  weekId: number,
+  v: BakeRunSettingsValues,
+): Promise<WeekBakeRunDto> {
+  const week = await findWeek(em, actor, weekId);
+  const prepDate = pickPrepDate(week, v.prepDate);
+  if (v.ovenIds.length) {
+    const ovens = await loadOvens(em, actor.workspaceId);
+    const known = new Set(ovens.map((o) => o.id));
+    const missing = v.ovenIds.filter((id) => !known.has(id));
+    if (missing.length) throw ValidationError.field('ovenIds', `No oven with id ${missing.join(', ')} in your workspace.`);
+  }
+  const row = await em.findOne(BakeRunSetting, { week: week.id, prepDate });
+  if (row) {
+    if (v.version !== row.version) throw new StaleEdit(row.version, presentSettings(prepDate, row));
+    em.assign(row, { start: v.start, cooks: v.cooks, handsOnMinutes: v.handsOnMinutes, ovenIds: [...new Set(v.ovenIds)] });
+  } else {
+    if (v.version !== undefined) throw new StaleEdit(null, presentSettings(prepDate, null));
+    em.create(BakeRunSetting, {
+      workspace: actor.workspaceId,
+      week: week.id,
+      prepDate,
+      start: v.start,
+      cooks: v.cooks,
+      handsOnMinutes: v.handsOnMinutes,
+      ovenIds: [...new Set(v.ovenIds)],
+    });
+  }
+  await em.flush();
+  return getWeekBakeRun(em, actor, weekId, prepDate);
+}

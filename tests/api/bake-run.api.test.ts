@@ -1,0 +1,269 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import pg from 'pg';
+import { testApp } from '../support/test-app.js';
+import { coachWorkspace, makeOven, makeTray, makeWeek, member, ovenInput } from '../support/factories.js';
+import { TEST_DATABASE_URL } from '../support/db.js';
+import { DEFAULT_BAKE_RULES } from '@shared/domain/bake-rules-defaults.js';
+
+let app: Express;
+beforeAll(async () => {
+  app = (await testApp()).app;
+});
+
+async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
+  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
+  await c.connect();
+  try {
+    return (await c.query<T>(q, args)).rows;
+  } finally {
+    await c.end();
+  }
+}
+
+/** One conventional oven, 2 racks × 1 tray; heating 25 °F/min, cooling 15 °F/min (the defaults; common practice, no source). */
+const LEFT = { name: 'Left', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 15, maxF: 500 };
+
+const run = (over: Record<string, unknown> = {}) => ({
+  start: '2026-12-06T08:00',
+  cooks: 1,
+  ambientF: 70,
+  ovens: [LEFT],
+  trays: [
+    { id: 'hot', name: 'Roasted radish', tempF: 425, minMinutes: 14, maxMinutes: 16, handsOnMinutes: 0 },
+    { id: 'cool', name: 'Egg slab', tempF: 350, minMinutes: 14, maxMinutes: 16, handsOnMinutes: 0 },
+  ],
+  ...over,
+});
+
+describe('POST /api/calc/bake-run', () => {
+  it('bakes the lower set point first when heating is faster than cooling (worked by hand)', async () => {
+    const coach = await coachWorkspace(app);
+    const res = await coach.agent.post('/api/calc/bake-run').send(run()).expect(200);
+    // Worked by hand from the model (shared/domain/bake-run-model.ts), ambient 70 °F, ±10 °F tolerance so the two
+    // trays cannot share a set point:
+    //   350 first: preheat ceil((350 − 70) / 25) = ceil(11.2) = 12 min → egg slab 08:12–08:26 (14 min alone);
+    //              raise 350 → 425: heat 75 / 25 = 3 min → ready 08:29; radish 08:29–08:43. Session 43 min.
+    //   425 first: preheat ceil(355 / 25) = ceil(14.2) = 15 min → radish 08:15–08:29; lower 425 → 350: cool
+    //              75 / 15 = 5 min → 08:34; egg slab 08:34–08:48. Session 48 min.
+    // The rates favour 350 then 425 (3 min of heating beats 5 min of cooling): 43 minutes.
+    expect(res.body.sessionMinutes).toBe(43);
+    expect(res.body.lowerBoundMinutes).toBeLessThanOrEqual(43);
+    expect(res.body.trays).toEqual([
+      expect.objectContaining({ id: 'cool', oven: 'Left', tempF: 350, inAt: '2026-12-06T08:12', outAt: '2026-12-06T08:26', bakeMinutes: 14 }),
+      expect.objectContaining({ id: 'hot', oven: 'Left', tempF: 425, inAt: '2026-12-06T08:29', outAt: '2026-12-06T08:43', bakeMinutes: 14 }),
+    ]);
+    for (const t of res.body.trays) expect(t.rack).toBeGreaterThanOrEqual(1);
+    const ovenEvents = res.body.events.filter((e: { kind: string }) => ['preheat', 'setpoint-change', 'ready'].includes(e.kind));
+    expect(ovenEvents).toEqual([
+      expect.objectContaining({ at: '2026-12-06T08:00', kind: 'preheat', oven: 'Left', trayId: null, tempF: 350 }),
+      expect.objectContaining({ at: '2026-12-06T08:12', kind: 'ready', tempF: 350 }),
+      expect.objectContaining({ at: '2026-12-06T08:26', kind: 'setpoint-change', tempF: 425, fromF: 350 }),
+      expect.objectContaining({ at: '2026-12-06T08:29', kind: 'ready', tempF: 425 }),
+    ]);
+    // FDA Food Code §3-501.14: 70 °F within 2 hours of 135 °F → the egg slab (out 08:26) by 10:26.
+    expect(res.body.events).toContainEqual(
+      expect.objectContaining({ kind: 'cool-to-70-by', trayId: 'cool', at: '2026-12-06T10:26', tempF: 70 }),
+    );
+    expect(res.body.cautions.length).toBeGreaterThan(0);
+  });
+
+  it('accepts °C: 180 °C = 356 °F (NIST SP 811: °F = °C × 9/5 + 32)', async () => {
+    const coach = await coachWorkspace(app);
+    const res = await coach.agent
+      .post('/api/calc/bake-run')
+      .send(run({ trays: [{ id: 'c', name: 'Batter slab', tempC: 180, minMinutes: 15, maxMinutes: 20, handsOnMinutes: 0 }] }))
+      .expect(200);
+    expect(res.body.trays[0].tempF).toBe(356);
+    // Preheat ceil((356 − 70) / 25) = ceil(11.44) = 12 min, then 15 min alone: 27 min.
+    expect(res.body.sessionMinutes).toBe(27);
+  });
+
+  it.each([
+    ['no ovens', { ovens: [] }, 'ovens'],
+    ['a tray hotter than every oven', { ovens: [{ ...LEFT, maxF: 400 }] }, 'trays.0.tempF'],
+    ['minutes ≤ 0', { trays: [{ id: 'a', name: 'A', tempF: 350, minMinutes: 0, maxMinutes: 10, handsOnMinutes: 0 }] }, 'trays.0.minMinutes'],
+    ['max < min', { trays: [{ id: 'a', name: 'A', tempF: 350, minMinutes: 20, maxMinutes: 10, handsOnMinutes: 0 }] }, 'trays.0.maxMinutes'],
+    ['a bad start', { start: '2026-12-06 8am' }, 'start'],
+    ['no cooks', { cooks: 0 }, 'cooks'],
+  ])('400 naming the field: %s', async (_what, over, field) => {
+    const coach = await coachWorkspace(app);
+    const res = await coach.agent.post('/api/calc/bake-run').send(run(over)).expect(400);
+    expect(res.headers['content-type']).toMatch(/application\/problem\+json/);
+    expect(res.body.code).toBe('validation');
+    expect(Object.keys(res.body.errors)).toContain(field);
+  });
+
+  it('resolves ruleId from the workspace rules; another workspace rule is a 400 on trays.N.ruleId', async () => {
+    const coach = await coachWorkspace(app);
+    const other = await coachWorkspace(app);
+    const rules = (await coach.agent.get('/api/bake-rules').expect(200)).body as { id: number; category: string }[];
+    const egg = rules.find((r) => r.category === 'egg-slab')!;
+    const res = await coach.agent
+      .post('/api/calc/bake-run')
+      .send(run({ trays: [{ id: 'e1', ruleId: egg.id }] }))
+      .expect(200);
+    // Egg slab default: 350 °F, 25–30 min (common practice, no source); USDA FSIS egg dishes 160 °F.
+    expect(res.body.trays[0]).toMatchObject({ id: 'e1', tempF: 350, bakeMinutes: 25 });
+    expect(res.body.events).toContainEqual(expect.objectContaining({ kind: 'first-check', trayId: 'e1', internalF: 160 }));
+    // Preheat 12 min; hands-on 10 min (rule) ends before that, so in at 08:12, out 08:37.
+    expect(res.body.sessionMinutes).toBe(37);
+
+    const theirs = (await other.agent.get('/api/bake-rules').expect(200)).body[0].id;
+    const bad = await coach.agent.post('/api/calc/bake-run').send(run({ trays: [{ id: 'x', ruleId: theirs }] })).expect(400);
+    expect(Object.keys(bad.body.errors)).toEqual(['trays.0.ruleId']);
+  });
+});
+
+describe('bake rules', () => {
+  it('seeds the defaults once per workspace, coach edits with optimistic locking, assistant reads', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const list = (await assistant.agent.get('/api/bake-rules').expect(200)).body as { id: number; category: string; minInternalF: number | null; minInternalSource: string | null; version: number }[];
+    expect(list.map((r) => r.category).sort()).toEqual(DEFAULT_BAKE_RULES.map((r) => r.category).sort());
+    // USDA FSIS Safe Minimum Internal Temperatures: poultry 165 °F, egg dishes 160 °F, named as the source.
+    expect(list.find((r) => r.category === 'poultry-pieces')).toMatchObject({ minInternalF: 165 });
+    expect(list.find((r) => r.category === 'egg-slab')?.minInternalSource).toMatch(/USDA FSIS/);
+    const rows = await sql<{ n: string }>('select count(*) as n from bake_rule where workspace_id = $1', [coach.workspaceId]);
+    expect(Number(rows[0].n)).toBe(DEFAULT_BAKE_RULES.length);
+
+    const egg = list.find((r) => r.category === 'egg-slab')!;
+    const body = { label: 'Egg slab', tempC: 180, minMinutes: 24, maxMinutes: 28, handsOnMinutes: 12, minInternalF: 160 };
+    await assistant.agent.put(`/api/bake-rules/${egg.id}`).send({ ...body, version: egg.version }).expect(403);
+    const saved = await coach.agent.put(`/api/bake-rules/${egg.id}`).send({ ...body, version: egg.version }).expect(200);
+    // 180 °C → 356 °F (NIST SP 811); defaults: convection −25 °F, crowding +10 % (common practice, no source).
+    expect(saved.body).toMatchObject({ tempF: 356, tempC: 180, convectionDeltaF: 25, crowdingPct: 10, version: egg.version + 1 });
+    const stale = await coach.agent.put(`/api/bake-rules/${egg.id}`).send({ ...body, version: egg.version }).expect(409);
+    expect(stale.body).toMatchObject({ code: 'stale_version', currentVersion: egg.version + 1 });
+    const [row] = await sql<{ temp_f: string; version: number }>('select temp_f, version from bake_rule where id = $1', [egg.id]);
+    expect(row).toEqual({ temp_f: '356.0000', version: egg.version + 1 });
+
+    const bad = await coach.agent.put(`/api/bake-rules/${egg.id}`).send({ ...body, maxMinutes: 10, version: 2 }).expect(400);
+    expect(Object.keys(bad.body.errors)).toContain('maxMinutes');
+
+    // Delete keeps the row: the defaults are not seeded again; creating the category again revives it.
+    await coach.agent.delete(`/api/bake-rules/${egg.id}`).expect(204);
+    expect((await coach.agent.get('/api/bake-rules').expect(200)).body).toHaveLength(DEFAULT_BAKE_RULES.length - 1);
+    await coach.agent.get(`/api/bake-rules/${egg.id}`).expect(404);
+    const again = await coach.agent
+      .post('/api/bake-rules')
+      .send({ category: 'egg-slab', label: 'Egg slab again', tempF: 340, minMinutes: 26, maxMinutes: 32, handsOnMinutes: 10 })
+      .expect(201);
+    expect(again.body).toMatchObject({ id: egg.id, tempF: 340 });
+    await coach.agent
+      .post('/api/bake-rules')
+      .send({ category: 'egg-slab', label: 'Dup', tempF: 340, minMinutes: 26, maxMinutes: 32, handsOnMinutes: 10 })
+      .expect(409);
+    const custom = await coach.agent
+      .post('/api/bake-rules')
+      .send({ category: 'meatballs', label: 'Meatballs', tempF: 400, minMinutes: 18, maxMinutes: 22, handsOnMinutes: 15, crowdingPct: 12 })
+      .expect(201);
+    expect(custom.body).toMatchObject({ category: 'meatballs', crowdingPct: 12, rackPreference: 'any' });
+  });
+});
+
+describe('ovens', () => {
+  it('CRUD with defaults, °C maximum, 409 on a stale version or a taken name; assistant reads only', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    await assistant.agent.post('/api/ovens').send(ovenInput()).expect(403);
+    const created = await coach.agent.post('/api/ovens').send({ name: 'Left oven', racks: 2, traysPerRack: 1, maxC: 260 }).expect(201);
+    // Defaults: heating 25 °F/min, cooling 15 °F/min door ajar (common practice, no source); 260 °C = 500 °F (NIST SP 811).
+    expect(created.body).toMatchObject({ heatFPerMin: 25, coolFPerMin: 15, maxF: 500, maxC: 260, convection: false, version: 1 });
+    expect((await assistant.agent.get('/api/ovens').expect(200)).body).toHaveLength(1);
+    await coach.agent.post('/api/ovens').send({ name: 'Left oven', racks: 1, traysPerRack: 1 }).expect(409);
+
+    const put = { name: 'Left oven', racks: 3, traysPerRack: 2, convection: true, heatFPerMin: 20, coolFPerMin: 10, maxF: 550 };
+    const saved = await coach.agent.put(`/api/ovens/${created.body.id}`).send({ ...put, version: 1 }).expect(200);
+    expect(saved.body).toMatchObject({ racks: 3, traysPerRack: 2, convection: true, version: 2 });
+    const stale = await coach.agent.put(`/api/ovens/${created.body.id}`).send({ ...put, version: 1 }).expect(409);
+    expect(stale.body).toMatchObject({ code: 'stale_version', currentVersion: 2 });
+    const [row] = await sql<{ racks: number; heat_fper_min: string }>('select racks, heat_fper_min from oven where id = $1', [created.body.id]);
+    expect(row).toEqual({ racks: 3, heat_fper_min: '20.0000' });
+
+    const bad = await coach.agent.post('/api/ovens').send({ name: '', racks: 0, traysPerRack: 1 }).expect(400);
+    expect(Object.keys(bad.body.errors)).toEqual(expect.arrayContaining(['name', 'racks']));
+
+    await coach.agent.delete(`/api/ovens/${created.body.id}`).expect(204);
+    expect(await sql('select id from oven where id = $1', [created.body.id])).toEqual([]);
+  });
+
+  it('keeps workspaces apart: another workspace’s oven, rule and week are not found', async () => {
+    const a = await coachWorkspace(app);
+    const b = await coachWorkspace(app);
+    const oven = await makeOven(a);
+    const rule = (await a.agent.get('/api/bake-rules').expect(200)).body[0];
+    const week = (await makeWeek(a)).week;
+    await b.agent.get(`/api/ovens/${oven.id}`).expect(404);
+    await b.agent.put(`/api/ovens/${oven.id}`).send({ ...ovenInput(), version: 1 }).expect(404);
+    await b.agent.delete(`/api/ovens/${oven.id}`).expect(404);
+    await b.agent.get(`/api/bake-rules/${rule.id}`).expect(404);
+    await b.agent.delete(`/api/bake-rules/${rule.id}`).expect(404);
+    await b.agent.get(`/api/weeks/${week.id}/bake-run`).expect(404);
+    expect((await b.agent.get('/api/ovens').expect(200)).body).toEqual([]);
+    expect(await sql('select id from oven where id = $1', [oven.id])).toHaveLength(1);
+  });
+});
+
+describe('the bake run of a prep week', () => {
+  it('plans the week’s tray counts in the workspace ovens; settings with a version; PDF and iCal', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    // The factory tray: egg-slab, 350 °F, 25–30 min (its own values); the default egg-slab rule: hands-on 10 min.
+    const tray = await makeTray(coach);
+    const { week } = await makeWeek(coach);
+    await coach.agent
+      .put(`/api/weeks/${week.id}/trays`)
+      .send({ version: week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 2 }] })
+      .expect(200);
+
+    const empty = await assistant.agent.get(`/api/weeks/${week.id}/bake-run`).expect(200);
+    expect(empty.body.run).toBeNull();
+    expect(empty.body.problems.join(' ')).toMatch(/oven/i);
+    await coach.agent.get(`/api/weeks/${week.id}/bake-run.pdf`).expect(409);
+
+    const oven = await makeOven(coach, { name: 'Left', racks: 2, traysPerRack: 1 });
+    const got = await assistant.agent.get(`/api/weeks/${week.id}/bake-run`).expect(200);
+    expect(got.body.settings).toEqual({ prepDate: '2026-01-04', start: '2026-01-04T08:00', cooks: 1, handsOnMinutes: {}, ovenIds: [], version: null });
+    expect(got.body.trays).toEqual([expect.objectContaining({ trayId: tray.id, trayCount: 2, tempF: 350, minMinutes: 25, handsOnMinutes: 10 })]);
+    // Worked by hand: one cook preps 10 + 10 min (ready 08:10 and 08:20); preheat ceil(280 / 25) = 12 min.
+    // Tray 1 in 08:12. Tray 2 in 08:20: both in, each progresses 1 / (1 + 0.10) per minute (crowding +10 %,
+    // common practice, no source). Tray 1 has 8 min by 08:20 and needs 17 more → 18.7 → out at the first whole
+    // minute 08:39; tray 2 has 19 × 1/1.1 = 17.27 by 08:39, then 7.73 alone → out 08:47. Session 47 min.
+    expect(got.body.run.trays).toHaveLength(2);
+    expect(got.body.run.sessionMinutes).toBe(47);
+    expect(got.body.run.trays.map((t: { inAt: string; outAt: string }) => [t.inAt, t.outAt])).toEqual([
+      ['2026-01-04T08:12', '2026-01-04T08:39'],
+      ['2026-01-04T08:20', '2026-01-04T08:47'],
+    ]);
+
+    const settings = { start: '2026-01-04T09:30', cooks: 2, handsOnMinutes: { [String(tray.id)]: 0 }, ovenIds: [oven.id] };
+    await assistant.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send(settings).expect(403);
+    const saved = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send(settings).expect(200);
+    expect(saved.body.settings).toMatchObject({ start: '2026-01-04T09:30', cooks: 2, version: 1 });
+    // No hands-on: both in at 09:42 (preheat 12 min), 25 min × 1.1 crowded = 27.5 → out 10:10 (first whole minute).
+    expect(saved.body.run.sessionMinutes).toBe(40);
+    await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send(settings).expect(409);
+    const stale = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ ...settings, version: 7 }).expect(409);
+    expect(stale.body).toMatchObject({ code: 'stale_version', currentVersion: 1 });
+    await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ ...settings, cooks: 1, version: 1 }).expect(200);
+    const [row] = await sql<{ cooks: number; version: number; oven_ids: number[] }>(
+      'select cooks, version, oven_ids from bake_run_setting where week_id = $1',
+      [week.id],
+    );
+    expect(row).toEqual({ cooks: 1, version: 2, oven_ids: [oven.id] });
+    const badOven = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ ...settings, ovenIds: [999999], version: 2 }).expect(400);
+    expect(Object.keys(badOven.body.errors)).toEqual(['ovenIds']);
+    await coach.agent.get(`/api/weeks/${week.id}/bake-run?prepDate=2026-01-09`).expect(400);
+
+    const pdf = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.pdf`).buffer(true).expect(200);
+    expect(pdf.headers['content-type']).toBe('application/pdf');
+    expect(Buffer.from(pdf.body).subarray(0, 5).toString()).toBe('%PDF-');
+    const ics = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.ics`).expect(200);
+    expect(ics.headers['content-type']).toMatch(/text\/calendar/);
+    // RFC 5545 floating local times: preheat at 09:30 (just in time for the 09:42 start).
+    expect(ics.text).toMatch(/BEGIN:VCALENDAR/);
+    expect(ics.text).toMatch(/DTSTART:20260104T093000/);
+    expect(ics.text).toMatch(/BEGIN:VALARM/);
+  });
+});
