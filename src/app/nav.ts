@@ -10,6 +10,7 @@ export interface NavItem {
 /** Role-aware navigation: each page appears only for the roles that may open it. */
 export const NAV: NavItem[] = [
   { to: paths.home, label: 'This week', roles: ['coach', 'assistant'] },
+  { to: paths.trays, label: 'Base trays', roles: ['coach', 'assistant'] },
   { to: paths.ingredients, label: 'Ingredients', roles: ['coach', 'assistant'] },
   { to: paths.team, label: 'Team & clients', roles: ['coach'] },
   { to: paths.settings, label: 'Settings', roles: ['coach', 'assistant', 'client'] },

@@ -12,5 +12,8 @@ export function appRoutes(qc: QueryClient): RouteObject[] {
     { path: paths.ingredients, loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/ingredients/ingredients.route') },
     { path: paths.ingredientNew, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/ingredients/ingredient-new.route') },
     { path: paths.ingredient(), loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/ingredients/ingredient.route') },
+    { path: paths.trays, lazy: () => import('./routes/trays/trays.route') },
+    { path: paths.trayNew, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/trays/tray-new.route') },
+    { path: paths.tray(), lazy: () => import('./routes/trays/tray-detail.route') },
   ];
 }

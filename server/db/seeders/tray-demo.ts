@@ -89,7 +89,8 @@ export const DEMO_TRAYS: DemoTray[] = [
   },
   {
     name: 'Oven bacon',
-    description: 'Strips laid flat, not touching, on a rack over the pan. Drain on paper and cool quickly.',
+    description:
+      'Strips laid flat, not touching, on a rack over the pan. Drain on paper and cool quickly. The numbers use raw bacon, so they still count the fat that renders out: a cautious, high figure.',
     lines: [['bacon-raw', '16', 'strips', 'thick-cut works too; add a few minutes']],
     pan: { code: 'half-sheet', unit: 'in' },
     panLining: 'foil',

@@ -1,0 +1,20 @@
+import { useNavigate } from 'react-router-dom';
+import { TrayEditor } from '@/features/trays/components/tray-editor';
+import { useCreateTray } from '@/features/trays/api/use-tray-mutations';
+import { PageHeader } from '@/components/ui/states';
+import { paths } from '@/config/paths';
+
+export function Component() {
+  const create = useCreateTray();
+  const navigate = useNavigate();
+  return (
+    <div>
+      <PageHeader title="New base tray" lead="One recipe, one pan, a cut plan. The numbers update as you type." />
+      <TrayEditor
+        busy={create.isPending}
+        onSave={(values) => create.mutateAsync(values)}
+        onSaved={(tray) => navigate(paths.tray(tray.id), { replace: true })}
+      />
+    </div>
+  );
+}

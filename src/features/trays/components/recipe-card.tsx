@@ -1,0 +1,69 @@
+import { allergenLabel } from '@shared/domain/allergens';
+import { PAN_LINING_LABELS, type TrayDto } from '@shared/schemas/trays.schema';
+import { Card } from '@/components/ui/states';
+
+/** The recipe as a printable card (the print stylesheet hides navigation and buttons marked `no-print`). */
+export function RecipeCard({ tray }: { tray: TrayDto }) {
+  const cut =
+    tray.cutPlan.kind === 'grid'
+      ? `${tray.cutPlan.rows} rows × ${tray.cutPlan.columns} columns (${tray.portions} portions)`
+      : `${tray.cutPlan.pieces} pieces of equal weight`;
+  return (
+    <Card className="break-inside-avoid">
+      <h2 className="mb-1 text-xl">Recipe card</h2>
+      {tray.description && <p className="mb-3 whitespace-pre-line text-ink-soft">{tray.description}</p>}
+      <dl className="num mb-3 grid gap-x-4 gap-y-1 text-sm sm:grid-cols-2">
+        <div>
+          <dt className="inline font-bold">Pan: </dt>
+          <dd className="inline">
+            {tray.pan.label}, {PAN_LINING_LABELS[tray.panLining].toLowerCase()}
+          </dd>
+        </div>
+        <div>
+          <dt className="inline font-bold">Bake: </dt>
+          <dd className="inline">
+            {tray.bake.tempF} °F ({Math.round(((tray.bake.tempF - 32) * 5) / 9)} °C), {tray.bake.minMinutes}–{tray.bake.maxMinutes} min ·{' '}
+            {tray.bake.categoryLabel}
+          </dd>
+        </div>
+        <div>
+          <dt className="inline font-bold">Cut: </dt>
+          <dd className="inline">{cut}</dd>
+        </div>
+        <div>
+          <dt className="inline font-bold">Store: </dt>
+          <dd className="inline">
+            fridge {tray.storage.fridgeDays} days (prep day is day 0) · freezer {tray.storage.freezerWeeks} weeks
+          </dd>
+        </div>
+      </dl>
+      <h3 className="font-bold">Ingredients</h3>
+      <ul className="num mb-3 list-disc pl-5">
+        {tray.lines.map((l) => (
+          <li key={l.id}>
+            {l.amountText} {l.unit} {l.ingredientName}
+            {l.note && <span className="text-ink-soft">, {l.note}</span>}
+          </li>
+        ))}
+      </ul>
+      <h3 className="font-bold">Reheat</h3>
+      <ol className="mb-3 list-decimal pl-5">
+        {tray.reheatSteps.map((s, i) => (
+          <li key={i}>{s}</li>
+        ))}
+        <li>
+          Every part reaches {tray.reheat.minF} °F ({tray.reheat.minC} °C) ({tray.reheat.source}).
+        </li>
+      </ol>
+      <p className="text-sm">
+        <span className="font-bold">Allergens:</span>{' '}
+        {tray.allergens.length ? tray.allergens.map(allergenLabel).join(', ') : 'none of the nine major allergens'} (from the
+        ingredients; check package labels).
+      </p>
+      <p className="mt-2 text-xs text-ink-faint">
+        Cool from 135 °F to 70 °F within 2 hours and to 41 °F within 6 hours (FDA Food Code 3-501.14). Eat-by dates are guidance;
+        your local food code comes first.
+      </p>
+    </Card>
+  );
+}
