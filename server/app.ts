@@ -17,11 +17,14 @@ import { configurePassport } from './modules/auth/passport.js';
 import { authRoutes } from './modules/auth/auth.routes.js';
 import { healthRoutes } from './modules/health/health.routes.js';
 import { apiModules } from './modules/index.js';
+import type { MailQueue } from './modules/mail/mail.service.js';
 
 export interface AppDeps {
   orm: Orm;
   pool: Pool;
   env: Env;
+  /** pg-boss mail queue (server/modules/mail/mail-runtime.ts), started by main.ts and the test app. */
+  mail: MailQueue;
   logger?: pino.Logger;
 }
 
@@ -29,7 +32,7 @@ export interface AppDeps {
 export const CSRF_HEADER = 'x-trayline-csrf';
 
 /** Builds the app without listening (tests use it through supertest). */
-export function createApp({ orm, pool, env, logger }: AppDeps): Express {
+export function createApp({ orm, pool, env, mail, logger }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', env.TRUST_PROXY);
@@ -101,8 +104,8 @@ export function createApp({ orm, pool, env, logger }: AppDeps): Express {
     next();
   });
 
-  api.use(authRoutes({ pool, loginLimit: env.LOGIN_RATE_LIMIT, publicUrl: env.PUBLIC_URL }));
-  for (const mod of apiModules({ orm, pool, env })) api.use(mod);
+  api.use(authRoutes({ pool, loginLimit: env.LOGIN_RATE_LIMIT, publicUrl: env.PUBLIC_URL, mail }));
+  for (const mod of apiModules({ orm, pool, env, mail })) api.use(mod);
   api.use((req, _res, next) => next(new NotFound(`No API route ${req.method} ${req.originalUrl}`)));
 
   // Health must answer even when the session store (PostgreSQL) is down: mount it before the session too.

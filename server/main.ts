@@ -4,12 +4,28 @@ import pino from 'pino';
 import { env } from './config/env.js';
 import { createOrm } from './db/orm.js';
 import { createApp } from './app.js';
+import { createMailRuntime } from './modules/mail/mail-runtime.js';
+import { smtpFromEnv } from './modules/mail/mail-transport.js';
 
 const log = pino({ level: env.LOG_LEVEL });
 const orm = await createOrm(env.DATABASE_URL);
 const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 5, connectionTimeoutMillis: 1500 });
 pool.on('error', (err) => log.warn({ err }, 'session pool error'));
-const app = createApp({ orm, pool, env, logger: log });
+// E-mail jobs (pg-boss, schema `pgboss` of the same database) and their send worker. Started in the background
+// so the server answers (503 on /api/health) even while PostgreSQL is away; it keeps trying until it starts.
+const mail = createMailRuntime({ databaseUrl: env.DATABASE_URL, orm, smtp: smtpFromEnv(env), logger: log });
+let mailTimer: NodeJS.Timeout | null = null;
+const startMail = () => {
+  mail.start().then(
+    () => log.info('mail queue started'),
+    (err) => {
+      log.warn({ err }, 'mail queue not started yet; trying again in 5 s');
+      mailTimer = setTimeout(startMail, 5000);
+    },
+  );
+};
+startMail();
+const app = createApp({ orm, pool, env, mail, logger: log });
 const server = http.createServer(app);
 server.listen(env.PORT, env.HOST, () => {
   log.info(`Trayline listening on http://${env.HOST}:${env.PORT}`);
@@ -21,6 +37,8 @@ async function shutdown(signal: string) {
   stopping = true;
   log.info(`${signal}: closing`);
   server.close();
+  if (mailTimer) clearTimeout(mailTimer);
+  await mail.stop().catch((err) => log.warn({ err }, 'mail stop failed'));
   await Promise.allSettled([orm.close(true), pool.end()]);
   process.exit(0);
 }

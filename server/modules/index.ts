@@ -3,6 +3,8 @@ import type { Router } from 'express';
 import type { Pool } from 'pg';
 import type { Env } from '../config/env.js';
 import type { Orm } from '../db/orm.js';
+import type { MailQueue } from './mail/mail.service.js';
+import { mailRoutes } from './mail/mail.routes.js';
 import { ingredientRoutes } from './ingredients/ingredient.routes.js';
 import { workspaceSettingsRoutes } from './workspaces/workspace-settings.routes.js';
 import { clientRoutes } from './clients/client.routes.js';
@@ -17,8 +19,10 @@ export interface ModuleDeps {
   orm: Orm;
   pool: Pool;
   env: Env;
+  /** The app's pg-boss mail queue: `queueMail(em, deps.mail, input)` (server/modules/mail/mail.service.ts). */
+  mail: MailQueue;
 }
 
 export function apiModules(deps: ModuleDeps): Router[] {
-  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), shoppingRoutes(), bakeRunRoutes()];
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), shoppingRoutes(), bakeRunRoutes(), mailRoutes({ mail: deps.mail, env: deps.env })];
 }

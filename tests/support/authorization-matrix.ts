@@ -1,6 +1,7 @@
 import type { Express } from 'express';
 import type { Access } from '@server/http/authz.js';
 import { clientInput, ingredientInput, makeAssembly, makeIngredient, makeTray, makeWeek, trayInput, type Member } from './factories.js';
+import { fakeCaughtMailFor } from './mail-support.js';
 
 /**
  * One row per API route ("METHOD /api/path" exactly as the router declares it).
@@ -37,6 +38,27 @@ export const MATRIX: Record<string, MatrixRow> = {
   'GET /api/auth/me': R('signed-in'),
   'PATCH /api/auth/me': R('signed-in'),
   'POST /api/auth/password': R('signed-in'),
+  'POST /api/auth/password-reset': R('public', { body: () => ({ email: `matrix-reset-${Date.now()}@example.test` }) }),
+  'POST /api/auth/password-reset/confirm': R('public', {
+    body: () => ({ token: 'unknown-token-unknown-token', newPassword: 'a-new-password-123' }),
+  }),
+  'GET /api/outbox': R(['coach']),
+  'POST /api/outbox/:id/retry': R(['coach'], {
+    prepare: async (ctx) => {
+      // The invitations made for the matrix's members queued e-mails in workspace A; a caught copy of the newest.
+      const made = await fakeCaughtMailFor(ctx.coachA);
+      ctx.ids.outbox = made.outboxId;
+      ctx.ids.caughtMail = made.caughtId;
+    },
+    path: (ctx) => `/api/outbox/${ctx.ids.outbox}/retry`,
+    crossWorkspace: true,
+  }),
+  'GET /api/dev/mail': R(['coach']),
+  'GET /api/dev/mail/:id': R(['coach'], { path: (ctx) => `/api/dev/mail/${ctx.ids.caughtMail}`, crossWorkspace: true }),
+  'GET /api/dev/mail/:id/attachments/:index': R(['coach'], {
+    path: (ctx) => `/api/dev/mail/${ctx.ids.caughtMail}/attachments/0`,
+    crossWorkspace: true,
+  }),
   'GET /api/invitations': R(['coach']),
   'POST /api/invitations': R(['coach']),
   'DELETE /api/invitations/:id': R(['coach'], {

@@ -5,9 +5,11 @@ import type { Express } from 'express';
 import { loadEnv } from '@server/config/env.js';
 import { createOrm, type Orm } from '@server/db/orm.js';
 import { createApp } from '@server/app.js';
+import { createMailRuntime, type MailRuntime } from '@server/modules/mail/mail-runtime.js';
+import { smtpFromEnv } from '@server/modules/mail/mail-transport.js';
 import { TEST_DATABASE_URL } from './db.js';
 
-let state: { app: Express; orm: Orm; pool: pg.Pool } | null = null;
+let state: { app: Express; orm: Orm; pool: pg.Pool; mail: MailRuntime } | null = null;
 
 export async function testApp(overrides: Record<string, string> = {}) {
   if (state && Object.keys(overrides).length === 0) return state;
@@ -22,16 +24,20 @@ export async function testApp(overrides: Record<string, string> = {}) {
   });
   const orm = await createOrm(env.DATABASE_URL);
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 4 });
-  const app = createApp({ orm, pool, env, logger: pino({ level: 'silent' }) });
-  const s = { app, orm, pool };
+  // pg-boss queue only (no send worker): mail tests start their own worker and catcher (tests/api/mail.api.test.ts).
+  const mail = createMailRuntime({ databaseUrl: env.DATABASE_URL, orm, smtp: smtpFromEnv(env), work: false });
+  await mail.start().catch(() => undefined); // a test of a database that is away still gets an app
+  const app = createApp({ orm, pool, env, mail, logger: pino({ level: 'silent' }) });
+  const s = { app, orm, pool, mail };
   if (Object.keys(overrides).length === 0) state = s;
   return s;
 }
 
 export async function closeTestApp() {
   if (!state) return;
-  const { orm, pool } = state;
+  const { orm, pool, mail } = state;
   state = null;
+  await mail.stop().catch(() => undefined);
   await Promise.allSettled([orm.close(true), pool.end()]);
 }
 

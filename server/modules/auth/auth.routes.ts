@@ -5,6 +5,8 @@ import { z } from 'zod';
 import {
   acceptInvitationSchema,
   changePasswordSchema,
+  requestPasswordResetSchema,
+  resetPasswordSchema,
   createInvitationSchema,
   loginSchema,
   registerSchema,
@@ -19,6 +21,7 @@ import { validated } from '../../http/validate.js';
 import * as auth from './auth.service.js';
 import { authenticateLocal, signIn, signOut } from './passport.js';
 import type { IInvitation } from './user.entity.js';
+import type { MailQueue } from '../mail/mail.service.js';
 
 const FIFTEEN_MIN = 15 * 60_000;
 
@@ -33,7 +36,7 @@ function presentInvitation(inv: IInvitation, link?: string): InvitationDto {
   };
 }
 
-export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: string }) {
+export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: string; mail: MailQueue; resetLimit?: number }) {
   const r = Router();
 
   // Login: 429 after `loginLimit` failures in 15 minutes, counted per e-mail and per IP, in PostgreSQL.
@@ -120,9 +123,44 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
     '/invitations',
     allow('coach'),
     validated({ body: createInvitationSchema }, async ({ body }, req, res) => {
-      const { invitation, link } = await auth.createInvitation(emOf(req), actorOf(req), body, opts.publicUrl);
+      const { invitation, link } = await auth.createInvitation(emOf(req), actorOf(req), body, opts.publicUrl, opts.mail);
       res.status(201);
       return presentInvitation(invitation, link);
+    }),
+  );
+
+  // Password reset requests: every request counts (not only failures), per e-mail and per IP, in PostgreSQL.
+  const resetLimit = opts.resetLimit ?? 5;
+  const resetLimiter = (prefix: string, limit: number, key: (req: import('express').Request) => string) =>
+    rateLimit({
+      windowMs: FIFTEEN_MIN,
+      limit,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      store: new PgRateLimitStore(opts.pool, prefix),
+      keyGenerator: key,
+      handler: (_req, _res, next) => next(new TooMany('Too many password reset requests; wait 15 minutes and try again')),
+    });
+  const resetByEmail = resetLimiter('reset-email', resetLimit, (req) => String(req.body?.email ?? '').trim().toLowerCase() || 'none');
+  const resetByIp = resetLimiter('reset-ip', resetLimit * 10, (req) => ipKeyGenerator(req.ip ?? '0.0.0.0'));
+
+  r.post(
+    '/auth/password-reset',
+    allow('public'),
+    resetByIp,
+    resetByEmail,
+    validated({ body: requestPasswordResetSchema }, async ({ body }, req) => {
+      // Always 204: the answer does not tell whether the e-mail has an account.
+      await auth.requestPasswordReset(emOf(req), body.email, opts.publicUrl, opts.mail);
+    }),
+  );
+
+  r.post(
+    '/auth/password-reset/confirm',
+    allow('public'),
+    resetByIp,
+    validated({ body: resetPasswordSchema }, async ({ body }, req) => {
+      await auth.confirmPasswordReset(emOf(req), body.token, body.newPassword);
     }),
   );
 

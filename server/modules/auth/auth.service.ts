@@ -11,11 +11,14 @@ import type {
   UpdatePreferencesInput,
 } from '@shared/schemas/auth.schema.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
-import { Invitation, Membership, User, type IUser } from './user.entity.js';
+import { Invitation, Membership, PasswordReset, User, type IUser } from './user.entity.js';
 import { burnVerify, hashPassword, verifyPassword } from './passwords.js';
 import { hashToken, newToken } from './tokens.js';
+import { queueMail, type MailQueue } from '../mail/mail.service.js';
+import { invitationMail, passwordResetMail } from '../mail/mail-templates.js';
 
 const INVITATION_DAYS = 14;
+const PASSWORD_RESET_MINUTES = 60;
 
 /** The actor of a user: their (first) membership decides workspace and role. */
 export async function loadActor(em: EntityManager, userId: number): Promise<Actor | null> {
@@ -84,6 +87,7 @@ export async function createInvitation(
   actor: Actor,
   input: CreateInvitationInput,
   publicUrl: string,
+  mail: MailQueue,
 ) {
   if (input.role === 'client' && input.clientId === undefined) {
     // A client invitation without a profile is allowed: the coach links it later.
@@ -93,17 +97,31 @@ export async function createInvitation(
     throw new ValidationError('Already a member', { email: ['This person is already a member of your workspace'] });
   }
   const { token, hash } = newToken();
-  const inv = em.create(Invitation, {
-    workspace: actor.workspaceId,
-    email: input.email,
-    role: input.role,
-    clientId: input.clientId ?? null,
-    tokenHash: hash,
-    expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
-    invitedBy: actor.userId,
+  const link = `${publicUrl.replace(/\/$/, '')}/invite/${token}`;
+  // The invitation and its e-mail (outbox row + send job) are committed together or not at all.
+  const inv = await em.transactional(async (tx) => {
+    const row = tx.create(Invitation, {
+      workspace: actor.workspaceId,
+      email: input.email,
+      role: input.role,
+      clientId: input.clientId ?? null,
+      tokenHash: hash,
+      expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+      invitedBy: actor.userId,
+    });
+    await tx.flush();
+    const ws = await tx.findOneOrFail(Workspace, actor.workspaceId);
+    const body = invitationMail({ workspaceName: ws.name, inviterName: actor.name, role: input.role, link, days: INVITATION_DAYS });
+    await queueMail(tx, mail, {
+      workspaceId: actor.workspaceId,
+      kind: 'invitation',
+      to: input.email,
+      ...body,
+      clientId: input.clientId ?? null,
+    });
+    return row;
   });
-  await em.flush();
-  return { invitation: inv, link: `${publicUrl.replace(/\/$/, '')}/invite/${token}` };
+  return { invitation: inv, link };
 }
 
 export async function listInvitations(em: EntityManager, actor: Actor) {
@@ -165,4 +183,50 @@ export async function updatePreferences(em: EntityManager, actor: Actor, input: 
   if (input.unitSystem) user.unitSystem = input.unitSystem;
   if (input.tempUnit) user.tempUnit = input.tempUnit;
   await em.flush();
+}
+
+/**
+ * Password reset, step 1: for a known e-mail, a one-time token (stored hashed, valid 60 minutes) and an e-mail
+ * with the link. An unknown e-mail gets the same answer and no e-mail. The outbox row has no workspace: no coach
+ * sees reset mail (its link would let them take over the account).
+ */
+export async function requestPasswordReset(em: EntityManager, email: string, publicUrl: string, mail: MailQueue): Promise<void> {
+  const user = await em.findOne(User, { email });
+  if (!user) return;
+  const { token, hash } = newToken();
+  await em.transactional(async (tx) => {
+    tx.create(PasswordReset, {
+      user: user.id,
+      tokenHash: hash,
+      expiresAt: new Date(Date.now() + PASSWORD_RESET_MINUTES * 60_000),
+    });
+    await tx.flush();
+    const link = `${publicUrl.replace(/\/$/, '')}/reset-password/${token}`;
+    await queueMail(tx, mail, { workspaceId: null, kind: 'password-reset', to: user.email, ...passwordResetMail({ link, minutes: PASSWORD_RESET_MINUTES }) });
+  });
+}
+
+/**
+ * Password reset, step 2: a valid, unused, unexpired token sets the new password, uses up every open reset of
+ * the account and ends the account's sessions (whoever was signed in must sign in again).
+ */
+export async function confirmPasswordReset(em: EntityManager, token: string, newPassword: string): Promise<void> {
+  const passwordHash = await hashPassword(newPassword);
+  await em.transactional(async (tx) => {
+    const reset = await tx.findOne(PasswordReset, { tokenHash: hashToken(token) });
+    if (!reset || reset.usedAt || reset.expiresAt.getTime() < Date.now()) {
+      throw new ValidationError('This reset link has expired or was already used', {
+        token: ['This reset link has expired or was already used; ask for a new one'],
+      });
+    }
+    const user = await tx.findOneOrFail(User, reset.user.id);
+    user.passwordHash = passwordHash;
+    const now = new Date();
+    const open = await tx.find(PasswordReset, { user: user.id, usedAt: null });
+    for (const r of open) r.usedAt = now;
+    await tx.flush();
+    await tx
+      .getConnection()
+      .execute(`delete from "session" where (sess->'passport'->>'user') = ?`, [String(user.id)], 'run', tx.getTransactionContext());
+  });
 }

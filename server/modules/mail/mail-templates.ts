@@ -1,0 +1,61 @@
+/** E-mail bodies (plain text first, simple HTML second). Every value is escaped in the HTML part. */
+export interface MailBody {
+  subject: string;
+  text: string;
+  html: string;
+}
+
+export function escapeHtml(s: string): string {
+  return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+}
+
+function layout(paragraphs: string[], link?: { href: string; label: string }): string {
+  const ps = paragraphs.map((p) => `<p style="margin:0 0 12px">${escapeHtml(p).replace(/\n/g, '<br>')}</p>`).join('');
+  const button = link
+    ? `<p style="margin:16px 0"><a href="${escapeHtml(link.href)}" style="background:#1f1b16;color:#fff;padding:10px 16px;border-radius:8px;text-decoration:none;font-weight:bold">${escapeHtml(link.label)}</a></p><p style="margin:0 0 12px;font-size:13px;color:#5b544b">Or open this address: ${escapeHtml(link.href)}</p>`
+    : '';
+  return `<!doctype html><html><body style="font-family:Arial,Helvetica,sans-serif;color:#1f1b16;line-height:1.5;max-width:560px">${ps}${button}<p style="font-size:12px;color:#5b544b">Sent by Trayline.</p></body></html>`;
+}
+
+const ROLE_WORDS: Record<string, string> = { assistant: 'kitchen assistant', client: 'client', coach: 'coach' };
+
+export function invitationMail(p: { workspaceName: string; inviterName: string; role: string; link: string; days: number }): MailBody {
+  const role = ROLE_WORDS[p.role] ?? p.role;
+  const lines = [
+    `${p.inviterName} invites you to join ${p.workspaceName} on Trayline as ${role}.`,
+    `The link works once and for ${p.days} days.`,
+    'If you did not expect this invitation, ignore this e-mail.',
+  ];
+  return {
+    subject: `${p.workspaceName} invites you to Trayline`,
+    text: `${lines[0]}\n\nAccept the invitation: ${p.link}\n\n${lines.slice(1).join('\n')}\n`,
+    html: layout(lines, { href: p.link, label: 'Accept the invitation' }),
+  };
+}
+
+export function passwordResetMail(p: { link: string; minutes: number }): MailBody {
+  const lines = [
+    'Someone (hopefully you) asked to reset the password of this Trayline account.',
+    `The link works once and for ${p.minutes} minutes.`,
+    'If you did not ask for it, ignore this e-mail: your password stays as it is.',
+  ];
+  return {
+    subject: 'Reset your Trayline password',
+    text: `${lines[0]}\n\nChoose a new password: ${p.link}\n\n${lines.slice(1).join('\n')}\n`,
+    html: layout(lines, { href: p.link, label: 'Choose a new password' }),
+  };
+}
+
+/** A client's week (the PDF is attached by the job). `note` is the coach's personal note. */
+export function weekPlanMail(p: { businessName: string; clientName: string; weekLabel: string; note?: string | null; link?: string }): MailBody {
+  const lines = [
+    `Hello ${p.clientName},`,
+    `your plan for the week of ${p.weekLabel} is attached as a PDF: each day's plate, how to put it together and reheat it, the macros and the eat-by dates.`,
+    ...(p.note ? [`A note from ${p.businessName}:\n${p.note}`] : []),
+  ];
+  return {
+    subject: `${p.businessName}: your plates for the week of ${p.weekLabel}`,
+    text: `${lines.join('\n\n')}${p.link ? `\n\nSee it on your phone: ${p.link}` : ''}\n`,
+    html: layout(lines, p.link ? { href: p.link, label: 'Open my plates' } : undefined),
+  };
+}
