@@ -1,8 +1,13 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import Qty from 'js-quantities';
+import Papa from 'papaparse';
+import pg from 'pg';
+import { PDFParse } from 'pdf-parse';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, makeIngredient, makeTray, member, type Member } from '../support/factories.js';
+import { TEST_DATABASE_URL } from '../support/db.js';
+import { shoppingWeek } from '../support/shopping-week.js';
 
 let app: Express;
 beforeAll(async () => {
@@ -29,7 +34,21 @@ const creamBody = {
 };
 // Cheese in 8 oz packages (the factory's default ingredient: 8 oz block, $3.99).
 
-function preview(who: Member, body: unknown) {
+async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
+  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
+  await c.connect();
+  try {
+    return (await c.query<T>(q, args)).rows;
+  } finally {
+    await c.end();
+  }
+}
+
+type Item = { ingredientId: number } & Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
+const itemsOf = (body: { aisles: { items: Item[] }[] }) => body.aisles.flatMap((a) => a.items);
+const itemOf = (body: { aisles: { items: Item[] }[] }, id: number) => itemsOf(body).find((i) => i.ingredientId === id)!;
+
+function preview(who: Member, body: object) {
   return who.agent.post('/api/shopping/preview').send(body);
 }
 
@@ -123,5 +142,136 @@ describe('shopping list from trays × counts and add-ons', () => {
     const res = await preview(other, { trays: [{ trayId: tray.id, count: 1 }] }).expect(400);
     expect(res.body.errors).toHaveProperty(['trays.0.trayId']);
     await preview(client, { trays: [] }).expect(403);
+  });
+});
+
+describe('the prep week\'s shopping list', () => {
+  it('adds every tray count and every plate add-on (× household multiplier), rounded to packages', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const w = await shoppingWeek(coach);
+    const res = await assistant.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(200);
+    // 3 trays × 12 eggs = 36 → 3 dozen (a dozen is 12).
+    expect(itemOf(res.body, w.eggs.id)).toMatchObject({ needed: 36, purchase: { packages: 3, spare: 0 }, costCents: 1197 });
+    // Cheese: 3 trays × 10 oz + 1 oz add-on × 2 (household multiplier) × 2 days = 34 oz → 5 × 8 oz, 6 oz spare.
+    const cheese = itemOf(res.body, w.cheese.id);
+    expect(cheese.needed).toBeCloseTo(Qty(34, 'oz').to('g').scalar, 2);
+    expect(cheese.purchase.packages).toBe(5);
+    expect(cheese.purchase.spare).toBeCloseTo(6, 4);
+    expect(res.body).toMatchObject({ weekId: w.weekId, itemCount: 2, checkedCount: 0, totalCostCents: 1197 + 5 * 399, bought: null });
+  });
+
+  it('saves each check mark on its own: two shoppers tapping at once lose nothing, and a repeated tap changes nothing', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const w = await shoppingWeek(coach);
+    const put = (who: Member, id: number, checked: boolean) =>
+      who.agent.put(`/api/weeks/${w.weekId}/shopping/checks/${id}`).send({ checked });
+    // Both shoppers at the same moment, each on a different item, and both on the same item.
+    const [a, b, c] = await Promise.all([put(assistant, w.eggs.id, true), put(coach, w.cheese.id, true), put(coach, w.eggs.id, true)]);
+    expect([a.status, b.status, c.status]).toEqual([200, 200, 200]);
+    const list = await assistant.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(200);
+    expect(list.body.checkedCount).toBe(2);
+    expect(itemOf(list.body, w.eggs.id).check.checked).toBe(true);
+    expect(itemOf(list.body, w.cheese.id).check).toMatchObject({ checked: true, checkedBy: expect.any(String) });
+    const rows = await sql<{ ingredient_id: number; checked: boolean }>(
+      'select ingredient_id, checked from shopping_check where week_id = $1 order by ingredient_id',
+      [w.weekId],
+    );
+    expect(rows).toEqual([
+      { ingredient_id: w.eggs.id, checked: true },
+      { ingredient_id: w.cheese.id, checked: true },
+    ]);
+    // Idempotent: the same tap again keeps the first time; an uncheck clears who and when.
+    const again = await put(coach, w.cheese.id, true).expect(200);
+    expect(again.body.checkedAt).toBe(itemOf(list.body, w.cheese.id).check.checkedAt);
+    const off = await put(assistant, w.eggs.id, false).expect(200);
+    expect(off.body).toEqual({ ingredientId: w.eggs.id, checked: false, checkedBy: null, checkedAt: expect.any(String) });
+    expect(itemOf((await coach.agent.get(`/api/weeks/${w.weekId}/shopping`)).body, w.cheese.id).check.checked).toBe(true);
+    // Many taps in parallel on alternating items end with each item's last state.
+    await Promise.all([put(assistant, w.eggs.id, true), put(coach, w.cheese.id, false)]);
+    const final = await coach.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(200);
+    expect(itemOf(final.body, w.eggs.id).check.checked).toBe(true);
+    expect(itemOf(final.body, w.cheese.id).check.checked).toBe(false);
+    await put(coach, w.eggs.id, 'yes' as never).expect(400);
+  });
+
+  it('marks the list bought once: the pantry keeps the spare and loses what the list used, never below zero', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const w = await shoppingWeek(coach);
+    const stock = await coach.agent.post('/api/pantry').send({ ingredientId: w.cheese.id, amount: '20', unit: 'oz' }).expect(201);
+    // Need 34 oz, pantry 20 → buy 14 oz → 2 × 8 oz packages, 2 oz spare; pantry after = 20 − 20 + 2 = 2 oz.
+    const first = await assistant.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).expect(200);
+    expect(first.body.applied).toBe(true);
+    const [row] = await sql<{ amount: string; version: number }>('select amount, version from pantry_item where id = $1', [stock.body.id]);
+    expect(Number(row.amount)).toBeCloseTo(Qty(2, 'oz').to('g').scalar, 3);
+    expect(row.version).toBe(2);
+    // Eggs: 3 dozen exactly, no spare and no stock → no pantry row.
+    expect(await sql('select id from pantry_item where ingredient_id = $1', [w.eggs.id])).toEqual([]);
+    // A second call changes nothing and answers the recorded change.
+    const second = await coach.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).expect(200);
+    expect(second.body).toEqual({ ...first.body, applied: false });
+    const [again] = await sql<{ amount: string; version: number }>('select amount, version from pantry_item where id = $1', [stock.body.id]);
+    expect(again).toEqual(row);
+    expect(await sql('select id from shopping_purchase where week_id = $1', [w.weekId])).toHaveLength(1);
+    const list = await assistant.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(200);
+    expect(list.body.bought).toMatchObject({ at: first.body.at });
+    expect(first.body.pantry.every((p: { after: number }) => p.after >= 0)).toBe(true);
+  });
+
+  it('exports CSV (papaparse round trip) with one row per item, and escapes spreadsheet formulas', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await shoppingWeek(coach, { eggs: { name: '=HYPERLINK("x")' } });
+    await coach.agent.put(`/api/weeks/${w.weekId}/shopping/checks/${w.eggs.id}`).send({ checked: true }).expect(200);
+    const res = await coach.agent.get(`/api/weeks/${w.weekId}/shopping.csv`).expect(200);
+    expect(res.headers['content-type']).toMatch(/^text\/csv/);
+    expect(res.headers['content-disposition']).toMatch(/shopping-list-2026-01-05\.csv/);
+    const parsed = Papa.parse<string[]>(res.text.trim());
+    expect(parsed.errors).toEqual([]);
+    const [header, ...rows] = parsed.data;
+    expect(header).toEqual(['Aisle', 'Item', 'Needed', 'From pantry', 'To buy', 'Unit', 'Packages', 'Package', 'Spare', 'Estimated cost', 'Checked']);
+    expect(rows).toHaveLength(2);
+    const egg = rows.find((r) => r[1].includes('HYPERLINK'))!;
+    // OWASP "CSV injection": a cell starting with = is prefixed with a quote so a spreadsheet shows it as text.
+    expect(egg[1]).toBe(`'=HYPERLINK("x")`);
+    expect(egg).toEqual(['Dairy and eggs', egg[1], '36', '0', '36', 'large', '3', 'dozen large eggs', '0 large', '11.97', 'yes']);
+    const cheese = rows.find((r) => r !== egg)!;
+    expect(cheese.slice(6)).toEqual(['5', '8 oz block', '6 oz', '19.95', 'no']);
+  });
+
+  it('renders the list as a PDF through the shared renderer', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await shoppingWeek(coach);
+    const res = await coach.agent.get(`/api/weeks/${w.weekId}/shopping.pdf`).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    }).expect(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    const parser = new PDFParse({ data: new Uint8Array(res.body as Buffer) });
+    const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+    await parser.destroy();
+    expect(text).toContain('Dairy and eggs');
+    expect(text).toContain('3 × dozen large eggs');
+  });
+
+  it('scopes weeks to the workspace (404), refuses clients (403), and finds this week for the assistant', async () => {
+    const coach = await coachWorkspace(app);
+    const other = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const client = await member(app, coach, 'client');
+    const w = await shoppingWeek(coach);
+    await other.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(404);
+    await other.agent.put(`/api/weeks/${w.weekId}/shopping/checks/${w.eggs.id}`).send({ checked: true }).expect(404);
+    await other.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).expect(404);
+    await client.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(403);
+    // Another workspace's ingredient on this week's list: 404, nothing written.
+    const foreign = await makeIngredient(other);
+    await coach.agent.put(`/api/weeks/${w.weekId}/shopping/checks/${foreign.id}`).send({ checked: true }).expect(404);
+    expect(await sql('select id from shopping_check where ingredient_id = $1', [foreign.id])).toEqual([]);
+    const current = await assistant.agent.get('/api/weeks/current').expect(200);
+    expect(current.body).toMatchObject({ id: w.weekId, startDate: '2026-01-05' });
+    expect((await other.agent.get('/api/weeks/current').expect(200)).body).toBeNull();
   });
 });

@@ -1,0 +1,22 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import type { ShoppingList } from '@shared/domain/shopping.js';
+import type { Actor } from '../../http/authz.js';
+import { renderShoppingListPdf } from '../pdf/shopping-list.pdf.js';
+import { Workspace } from '../workspaces/workspace.entity.js';
+import { aisleLabel } from './shopping.presenter.js';
+import { weekShoppingExport } from './shopping-week.service.js';
+
+/** The week's list as a PDF through the shared renderer (aisle codes shown as the store aisle's name). */
+export async function shoppingPdf(em: EntityManager, actor: Actor, weekId: number) {
+  const { week, computed } = await weekShoppingExport(em, actor, weekId);
+  const ws = await em.findOneOrFail(Workspace, actor.workspaceId, { fields: ['name'] });
+  const list: ShoppingList = {
+    ...computed.list,
+    aisles: computed.list.aisles.map((a) => ({ ...a, aisle: aisleLabel(a.aisle) })),
+  };
+  return renderShoppingListPdf(list, {
+    businessName: ws.name,
+    title: `Shopping list, week of ${week.startDate}`,
+    filename: `shopping-list-${week.startDate}.pdf`,
+  });
+}

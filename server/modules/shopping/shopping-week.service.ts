@@ -1,0 +1,186 @@
+import Decimal from 'decimal.js';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { UniqueConstraintViolationException } from '@mikro-orm/core';
+import type { MarkBoughtDto, ShoppingCheckDto, ShoppingListDto, ShoppingNeedsValues } from '@shared/schemas/shopping.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { NotFound } from '../../http/errors.js';
+import { User } from '../auth/user.entity.js';
+import { findWeek, loadBoardData, type BoardData } from '../weeks/week-board.service.js';
+import { itemsOf as assemblyItemsOf } from '../assemblies/plate-facts.js';
+import type { IWeek } from '../weeks/week.entity.js';
+import { listWeeks, pickWeek, todayIso } from '../weeks/week.service.js';
+import type { IsoDate } from '@shared/domain/iso-date.js';
+import type { WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
+import { PantryItem } from './pantry.entity.js';
+import { pantryAmount } from './pantry.service.js';
+import { loadShoppingIngredients } from './shopping-ingredient.js';
+import { ShoppingCheck, ShoppingPurchase, type IShoppingPurchase } from './shopping.entity.js';
+import { presentShoppingList } from './shopping.presenter.js';
+import { computeShoppingList, itemsOf, type ComputedShoppingList } from './shopping.service.js';
+
+/**
+ * What a prep week asks the shop for: every tray count of every prep date (× the tray's lines), and every add-on
+ * of every plate on the board (× the client's household multiplier).
+ */
+export function weekNeeds(data: BoardData): ShoppingNeedsValues {
+  const trays = data.trays.filter((t) => t.trayCount > 0).map((t) => ({ trayId: t.tray.id, count: t.trayCount }));
+  const plates = new Map(data.assemblies.map((a) => [a.id, a]));
+  const multipliers = new Map(data.clients.map((c) => [c.id, new Decimal(c.householdMultiplier ?? 1)]));
+  const addOns: ShoppingNeedsValues['addOns'] = [];
+  for (const cell of data.cells) {
+    const plate = plates.get(cell.assembly.id);
+    if (!plate) continue;
+    const times = multipliers.get(cell.client.id) ?? new Decimal(1);
+    for (const item of assemblyItemsOf(plate)) {
+      if (!item.ingredient || item.amount === null || item.amount === undefined || !item.unit) continue;
+      addOns.push({ ingredientId: item.ingredient.id, amount: new Decimal(item.amount).times(times).toFixed(), unit: item.unit });
+    }
+  }
+  return { trays, addOns };
+}
+
+async function computeForWeek(em: EntityManager, actor: Actor, week: IWeek): Promise<ComputedShoppingList> {
+  const data = await loadBoardData(em, actor, week);
+  return computeShoppingList(em, actor, weekNeeds(data));
+}
+
+async function userNames(em: EntityManager, ids: readonly number[]): Promise<Map<number, string>> {
+  const unique = [...new Set(ids)];
+  if (!unique.length) return new Map();
+  const users = await em.find(User, { id: { $in: unique } }, { fields: ['id', 'name'] });
+  return new Map(users.map((u) => [u.id, u.name]));
+}
+
+async function checksOf(em: EntityManager, weekId: number): Promise<Map<number, ShoppingCheckDto>> {
+  const rows = await em.find(ShoppingCheck, { week: weekId });
+  const names = await userNames(em, rows.filter((r) => r.checkedBy).map((r) => r.checkedBy!.id));
+  return new Map(
+    rows.map((r) => [
+      r.ingredient.id,
+      {
+        checked: r.checked,
+        checkedBy: r.checkedBy ? (names.get(r.checkedBy.id) ?? null) : null,
+        checkedAt: r.checkedAt ? r.checkedAt.toISOString() : null,
+      },
+    ]),
+  );
+}
+
+async function boughtOf(em: EntityManager, purchase: IShoppingPurchase | null) {
+  if (!purchase) return null;
+  const names = await userNames(em, purchase.boughtBy ? [purchase.boughtBy.id] : []);
+  return { at: purchase.boughtAt.toISOString(), by: purchase.boughtBy ? (names.get(purchase.boughtBy.id) ?? null) : null };
+}
+
+/** The week's list: computed now from the board, the tray counts and the pantry, with the check marks. */
+export async function weekShoppingList(em: EntityManager, actor: Actor, weekId: number): Promise<ShoppingListDto> {
+  const week = await findWeek(em, actor, weekId);
+  const [computed, checks, purchase] = await Promise.all([
+    computeForWeek(em, actor, week),
+    checksOf(em, week.id),
+    em.findOne(ShoppingPurchase, { week: week.id }),
+  ]);
+  return presentShoppingList(computed, { weekId: week.id, checks, bought: await boughtOf(em, purchase) });
+}
+
+/** The computed list of a week (domain objects, for the CSV and PDF exports). */
+export async function weekShoppingExport(em: EntityManager, actor: Actor, weekId: number) {
+  const week = await findWeek(em, actor, weekId);
+  const [computed, checks] = await Promise.all([computeForWeek(em, actor, week), checksOf(em, week.id)]);
+  return { week, computed, dto: presentShoppingList(computed, { weekId: week.id, checks }) };
+}
+
+/**
+ * Checks or unchecks one item. One row per (week, ingredient), written with a single upsert: concurrent taps on
+ * different items never touch each other's rows, and repeating the same tap changes nothing (the first
+ * checker and time stay).
+ */
+export async function setCheck(
+  em: EntityManager,
+  actor: Actor,
+  weekId: number,
+  ingredientId: number,
+  checked: boolean,
+): Promise<ShoppingCheckDto & { ingredientId: number }> {
+  const week = await findWeek(em, actor, weekId);
+  if (!(await loadShoppingIngredients(em, actor, [ingredientId])).has(ingredientId)) throw new NotFound('Ingredient');
+  const knex = em.getKnex();
+  await knex.raw(
+    `insert into shopping_check (workspace_id, week_id, ingredient_id, checked, checked_by_id, checked_at)
+     values (?, ?, ?, ?, ?, now())
+     on conflict (week_id, ingredient_id) do update
+       set checked = excluded.checked, checked_by_id = excluded.checked_by_id, checked_at = excluded.checked_at
+       where shopping_check.checked is distinct from excluded.checked`,
+    [actor.workspaceId, week.id, ingredientId, checked, checked ? actor.userId : null],
+  );
+  const row = await em.fork().findOneOrFail(ShoppingCheck, { week: week.id, ingredient: ingredientId });
+  const names = await userNames(em, row.checkedBy ? [row.checkedBy.id] : []);
+  return {
+    ingredientId,
+    checked: row.checked,
+    checkedBy: row.checkedBy ? (names.get(row.checkedBy.id) ?? null) : null,
+    checkedAt: row.checkedAt ? row.checkedAt.toISOString() : null,
+  };
+}
+
+function presentPurchase(p: IShoppingPurchase, applied: boolean): MarkBoughtDto {
+  return {
+    applied,
+    at: p.boughtAt.toISOString(),
+    pantry: (p.changes ?? []).map((c) => ({ ...c, before: Number(c.before), after: Number(c.after) })),
+  };
+}
+
+/**
+ * Marks the week's list bought: for every item, the pantry keeps what the list did not use plus the spare of the
+ * packages bought (new amount = on hand − used from the pantry + spare, never below zero). Once per week: the
+ * first call records the change; any later call returns that record and changes nothing.
+ */
+export async function markBought(em: EntityManager, actor: Actor, weekId: number): Promise<MarkBoughtDto> {
+  const week = await findWeek(em, actor, weekId);
+  const done = await em.findOne(ShoppingPurchase, { week: week.id });
+  if (done) return presentPurchase(done, false);
+  const computed = await computeForWeek(em, actor, week);
+  try {
+    return await em.transactional(async (tx) => {
+      const rows = await tx.find(PantryItem, { workspace: actor.workspaceId });
+      const byIngredient = new Map(rows.map((r) => [r.ingredient.id, r]));
+      const changes: IShoppingPurchase['changes'] = [];
+      for (const item of itemsOf(computed.list)) {
+        const id = Number(item.ingredientId);
+        const spare = item.purchase ? Decimal.max(item.purchase.spare, 0) : new Decimal(0);
+        const row = byIngredient.get(id);
+        // The row as it is now (someone may have edited it since the list was computed).
+        const before = row ? new Decimal(row.amount) : new Decimal(0);
+        const after = pantryAmount(before.minus(item.fromPantry).plus(spare));
+        if (after.eq(before)) continue;
+        if (row) {
+          row.amount = after.toFixed(4);
+          row.unit = item.base.unit;
+        } else {
+          tx.create(PantryItem, { workspace: actor.workspaceId, ingredient: id, amount: after.toFixed(4), unit: item.base.unit });
+        }
+        changes.push({ ingredientId: id, name: item.name, before: before.toFixed(4), after: after.toFixed(4), unit: item.base.unit });
+      }
+      const purchase = tx.create(ShoppingPurchase, {
+        workspace: actor.workspaceId,
+        week: week.id,
+        boughtBy: actor.userId,
+        changes,
+      });
+      await tx.flush();
+      return presentPurchase(purchase, true);
+    });
+  } catch (e) {
+    // Two "mark bought" at once: the unique week row lets one through; the other reports the recorded one.
+    if (!(e instanceof UniqueConstraintViolationException)) throw e;
+    const recorded = await em.fork().findOneOrFail(ShoppingPurchase, { week: week.id });
+    return presentPurchase(recorded, false);
+  }
+}
+
+/** The week covering today, else the next, else the latest: the assistant's "this week". */
+export async function currentWeek(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<WeekSummaryDto | null> {
+  const weeks = await listWeeks(em, actor);
+  return pickWeek(weeks, today);
+}

@@ -1,0 +1,76 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import { testApp } from '../support/test-app.js';
+import { coachWorkspace, makeIngredient, member } from '../support/factories.js';
+import { shoppingWeek } from '../support/shopping-week.js';
+
+let app: Express;
+beforeAll(async () => {
+  app = (await testApp()).app;
+});
+
+describe('container labels', () => {
+  it('prints one label per container with per-portion macros rounded per 21 CFR 101.9(c)', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    // One portion = 100 g of one ingredient (a tray of 100 g cut into 1 piece, no add-on), so the label shows the
+    // ingredient's per-100 g values rounded. Invented values, Atwater-consistent within 15 %.
+    const slab = await makeIngredient(coach, {
+      kcal: '52', fatG: '4.76', satFatG: '1', proteinG: '2.6', carbsG: '0.7', sugarsG: '0.2', allergens: ['milk'],
+    });
+    const w = await shoppingWeek(coach, {
+      multiplier: '1',
+      trayCount: 3,
+      tray: {
+        lines: [{ ingredientId: slab.id, amountText: '100', unit: 'g', note: '' }],
+        cutPlan: { kind: 'pieces', pieces: 1 },
+        yieldFactor: 1,
+        storage: { fridgeDays: 4, freezerWeeks: 8 },
+      },
+    });
+    const res = await assistant.agent.get(`/api/weeks/${w.weekId}/labels?layout=a4-3x7&prepDate=2026-01-04`).expect(200);
+    expect(res.body).toMatchObject({ layout: 'a4-3x7', prepDate: '2026-01-04', prepDates: ['2026-01-04'] });
+    // 2 plates on the board + (3 portions baked − 2 used) = 1 spare portion → 3 containers.
+    expect(res.body.labels).toHaveLength(3);
+    const [mon, tue, spare] = res.body.labels;
+    expect(mon.subtitle).toContain('2026-01-05 breakfast');
+    expect(tue.subtitle).toContain('2026-01-06 breakfast');
+    // Eat-by = prep date + fridge days (shared/domain/eat-by.ts rule: the prep date is day 0): 01-04 + 4 = 01-08.
+    expect(mon).toMatchObject({ madeOn: '2026-01-04', eatBy: '2026-01-08', freezeBy: '2026-01-08' });
+    expect(mon.reheat).toMatch(/165 °F/);
+    expect(mon.url).toBe('http://127.0.0.1:8080/my-plates?date=2026-01-05');
+    expect(mon.qr).toMatch(/^data:image\/svg\+xml;base64,/);
+    expect(Buffer.from(mon.qr.split(',')[1], 'base64').toString()).toContain('<svg');
+    // 21 CFR 101.9(c): calories > 50 → nearest 10 (52 → 50); fat < 5 g → nearest 0.5 g (4.76 → 5 g);
+    // carbohydrate < 1 g → "less than 1 g" (0.7); protein ≥ 1 g → nearest 1 g (2.6 → 3 g).
+    expect(spare).toMatchObject({
+      title: w.tray.name,
+      subtitle: 'Spare portion',
+      eatBy: '2026-01-08',
+      macros: { calories: '50', fat: '5 g', carbohydrate: 'less than 1 g', protein: '3 g', netCarbs: 'less than 1 g' },
+      allergens: ['milk'],
+      allergenText: 'Contains: Milk',
+    });
+    expect(spare.url).toBe(`http://127.0.0.1:8080/trays/${w.tray.id}`);
+    // The plate = 100 g slab + 1 oz (28.349523125 g, NIST) of the factory cheese (350 kcal, 30 g fat, 20 g protein,
+    // 2 g carbohydrate per 100 g): 52 + 99.22 = 151.2 kcal → 150; fat 4.76 + 8.505 = 13.3 g → 13 g (≥ 5 g: nearest 1 g);
+    // carbohydrate 0.7 + 0.567 = 1.27 g → 1 g; protein 2.6 + 5.67 = 8.27 g → 8 g.
+    expect(mon.macros).toEqual({ calories: '150', fat: '13 g', carbohydrate: '1 g', protein: '8 g', netCarbs: '1 g' });
+    expect(mon.title).toBe((await coach.agent.get(`/api/clients/${w.client.id}`)).body.name);
+  });
+
+  it('names bad input (prep date outside the week, unknown layout), scopes the week, and refuses clients', async () => {
+    const coach = await coachWorkspace(app);
+    const other = await coachWorkspace(app);
+    const client = await member(app, coach, 'client');
+    const w = await shoppingWeek(coach);
+    const bad = await coach.agent.get(`/api/weeks/${w.weekId}/labels?prepDate=2026-01-09`).expect(400);
+    expect(bad.body.errors).toHaveProperty('prepDate');
+    const layout = await coach.agent.get(`/api/weeks/${w.weekId}/labels?layout=vendor-5160`).expect(400);
+    expect(layout.body.errors).toHaveProperty('layout');
+    await other.agent.get(`/api/weeks/${w.weekId}/labels`).expect(404);
+    await client.agent.get(`/api/weeks/${w.weekId}/labels`).expect(403);
+    const fine = await coach.agent.get(`/api/weeks/${w.weekId}/labels`).expect(200);
+    expect(fine.body.layout).toBe('letter-2x5');
+  });
+});
