@@ -24,5 +24,5 @@ export interface ModuleDeps {
 }
 
 export function apiModules(deps: ModuleDeps): Router[] {
-  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), shoppingRoutes(), bakeRunRoutes(), mailRoutes({ mail: deps.mail, env: deps.env })];
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), shoppingRoutes({ publicUrl: deps.env.PUBLIC_URL }), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), bakeRunRoutes(), mailRoutes({ mail: deps.mail, env: deps.env })];
 }

@@ -217,6 +217,35 @@ export const MATRIX: Record<string, MatrixRow> = {
   'POST /api/shopping/preview': R(['coach', 'assistant'], {
     body: (ctx) => ({ addOns: [{ ingredientId: ctx.ids.pantryIngredient, amount: '100', unit: 'g' }] }),
   }),
+  'GET /api/weeks/current': R(['coach', 'assistant']),
+  'GET /api/weeks/:weekId/shopping': R(['coach', 'assistant'], {
+    prepare: async (ctx) => {
+      ctx.ids.shoppingWeek = (await makeWeek(ctx.coachA, { startDate: '2026-02-02', prepDate: '2026-02-01' })).week.id;
+    },
+    path: (ctx) => `/api/weeks/${ctx.ids.shoppingWeek}/shopping`,
+    crossWorkspace: true,
+  }),
+  'GET /api/weeks/:weekId/shopping.csv': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.shoppingWeek}/shopping.csv`,
+    crossWorkspace: true,
+  }),
+  'GET /api/weeks/:weekId/shopping.pdf': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.shoppingWeek}/shopping.pdf`,
+    crossWorkspace: true,
+  }),
+  'PUT /api/weeks/:weekId/shopping/checks/:ingredientId': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.shoppingWeek}/shopping/checks/${ctx.ids.pantryIngredient}`,
+    body: () => ({ checked: true }),
+    crossWorkspace: true,
+  }),
+  'POST /api/weeks/:weekId/shopping/bought': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.shoppingWeek}/shopping/bought`,
+    crossWorkspace: true,
+  }),
+  'GET /api/weeks/:weekId/labels': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.shoppingWeek}/labels`,
+    crossWorkspace: true,
+  }),
   // Base trays (issue 5): coach writes; assistant reads; a client reads only trays in their own plan (none yet: 404).
   'GET /api/trays': R(['coach', 'assistant', 'client']),
   'POST /api/trays': R(['coach'], {
