@@ -195,7 +195,7 @@ function LineRow(props: {
           props.onPick(ing);
           form.setValue(`lines.${i}.ingredientId`, ing.id, { shouldDirty: true, shouldValidate: true });
           if (ing.pieceNames.length && form.getValues(`lines.${i}.unit`) === 'g') {
-            form.setValue(`lines.${i}.unit`, ing.pieceNames[0], { shouldDirty: true });
+            form.setValue(`lines.${i}.unit`, ing.pieceNames.includes('large') ? 'large' : ing.pieceNames[0], { shouldDirty: true });
           }
         }}
       />
