@@ -13,5 +13,6 @@ export const NAV: NavItem[] = [
   { to: paths.trays, label: 'Base trays', roles: ['coach', 'assistant'] },
   { to: paths.ingredients, label: 'Ingredients', roles: ['coach', 'assistant'] },
   { to: paths.team, label: 'Team & clients', roles: ['coach'] },
+  { to: paths.outbox, label: 'Outbox', roles: ['coach'] },
   { to: paths.settings, label: 'Settings', roles: ['coach', 'assistant', 'client'] },
 ];

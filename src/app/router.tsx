@@ -14,6 +14,8 @@ export function createRouter(qc: QueryClient) {
         { path: paths.signIn, lazy: () => import('./routes/auth/sign-in.route') },
         { path: paths.register, lazy: () => import('./routes/auth/register.route') },
         { path: paths.invite(), lazy: () => import('./routes/auth/accept-invite.route') },
+        { path: paths.forgotPassword, lazy: () => import('./routes/auth/forgot-password.route') },
+        { path: paths.resetPassword(), lazy: () => import('./routes/auth/reset-password.route') },
         {
           loader: requireSignedIn(qc),
           element: <AppShell />,

@@ -15,5 +15,7 @@ export function appRoutes(qc: QueryClient): RouteObject[] {
     { path: paths.trays, lazy: () => import('./routes/trays/trays.route') },
     { path: paths.trayNew, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/trays/tray-new.route') },
     { path: paths.tray(), lazy: () => import('./routes/trays/tray-detail.route') },
+    { path: paths.outbox, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/outbox/outbox.route') },
+    { path: paths.devMail, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/outbox/dev-mail.route') },
   ];
 }

@@ -3,6 +3,8 @@ export const paths = {
   home: '/',
   signIn: '/sign-in',
   register: '/register',
+  forgotPassword: '/forgot-password',
+  resetPassword: (token = ':token') => `/reset-password/${token}`,
   invite: (token = ':token') => `/invite/${token}`,
   settings: '/settings',
   team: '/team',
@@ -23,6 +25,7 @@ export const paths = {
   labels: (id: number | string = ':weekId') => `/weeks/${id}/labels`,
   pantry: '/pantry',
   outbox: '/outbox',
+  devMail: '/dev/mail',
   myPlates: '/my-plates',
   myTargets: '/my-targets',
 } as const;

@@ -41,6 +41,9 @@ export function Component() {
           error={form.formState.errors.password?.message}
           {...form.register('password')}
         />
+        <Link className="-mt-2 self-start text-sm font-bold underline" to={paths.forgotPassword}>
+          Forgot password?
+        </Link>
         <Button type="submit" busy={login.isPending}>
           Sign in
         </Button>

@@ -1,0 +1,162 @@
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import { OUTBOX_STATUSES, type MailKind, type OutboxStatus } from '@shared/schemas/mail.schema';
+import { outboxBusy, outboxQuery } from '@/features/mail/api/mail.queries';
+import { useRetryOutbox } from '@/features/mail/api/use-retry-outbox';
+import { OutboxStatusBadge } from '@/features/mail/components/outbox-status';
+import { Button } from '@/components/ui/button';
+import { SelectField } from '@/components/ui/field';
+import { Card, EmptyState, ErrorState, Notice, PageHeader, Progress, Skeleton } from '@/components/ui/states';
+import { errorMessage } from '@/lib/problem';
+import { paths } from '@/config/paths';
+
+const KIND_WORDS: Record<MailKind, string> = {
+  invitation: 'Invitation',
+  'password-reset': 'Password reset',
+  'week-plan': 'Week plan',
+  'shopping-list': 'Shopping list',
+  'bake-run': 'Bake run',
+};
+
+const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+
+export function Component() {
+  const [page, setPage] = useState(1);
+  const [status, setStatus] = useState<OutboxStatus | ''>('');
+  const outbox = useQuery(outboxQuery({ page, status: status || undefined }));
+  const retry = useRetryOutbox();
+  const [retryError, setRetryError] = useState<string | null>(null);
+
+  const data = outbox.data;
+  const busy = outboxBusy(data);
+  const activeBatches = (data?.batches ?? []).filter((b) => b.pending > 0 || Date.now() - new Date(b.createdAt).getTime() < 10 * 60_000);
+  const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
+
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader
+        title="Outbox"
+        lead="Every e-mail Trayline sends for you: invitations, week plans, shopping lists and bake runs. Failed messages are tried again automatically (up to 5 times, waiting longer each time)."
+      >
+        {data?.devMailView && (
+          <Link className="inline-flex min-h-11 items-center rounded-lg border border-line-strong px-4 font-bold hover:bg-paper-deep" to={paths.devMail}>
+            Caught mail (development)
+          </Link>
+        )}
+      </PageHeader>
+
+      {activeBatches.length > 0 && (
+        <Card>
+          <h2 className="mb-3 text-xl">Sending to many</h2>
+          <div className="flex flex-col gap-4">
+            {activeBatches.map((b) => (
+              <div key={b.batchId} className="flex flex-col gap-1">
+                <Progress value={b.sent} max={b.total} label={`Batch of ${when(b.createdAt)}: sent`} />
+                <p className="text-sm text-ink-soft">
+                  <span className="num">{b.pending}</span> waiting · <span className="num">{b.failed}</span> failed
+                </p>
+              </div>
+            ))}
+          </div>
+        </Card>
+      )}
+
+      <Card>
+        <div className="mb-4 flex flex-wrap items-end justify-between gap-3">
+          <SelectField
+            label="Show"
+            value={status}
+            onChange={(e) => {
+              setStatus(e.target.value as OutboxStatus | '');
+              setPage(1);
+            }}
+          >
+            <option value="">All messages</option>
+            {OUTBOX_STATUSES.map((s) => (
+              <option key={s} value={s}>
+                {s.charAt(0).toUpperCase() + s.slice(1)} {data ? `(${data.counts[s]})` : ''}
+              </option>
+            ))}
+          </SelectField>
+          {busy && (
+            <p className="text-sm text-ink-soft" aria-live="polite">
+              <span aria-hidden>↻</span> Some messages are on their way; this list refreshes by itself.
+            </p>
+          )}
+        </div>
+        {retryError && (
+          <div className="mb-3">
+            <Notice tone="block" title={retryError} />
+          </div>
+        )}
+        {outbox.isPending ? (
+          <Skeleton className="h-40 w-full" label="Loading the outbox" />
+        ) : outbox.isError ? (
+          <ErrorState error={outbox.error} retry={() => outbox.refetch()} />
+        ) : data!.items.length === 0 ? (
+          <EmptyState title={status ? `No ${status} messages` : 'Nothing sent yet'}>
+            Invitations and week plans you send appear here with their delivery status.
+          </EmptyState>
+        ) : (
+          <div className="overflow-x-auto">
+            <table className="w-full text-left">
+              <caption className="sr-only">Messages, newest first</caption>
+              <thead>
+                <tr className="border-b border-line text-sm text-ink-faint">
+                  <th className="py-2 pr-3">Status</th>
+                  <th className="py-2 pr-3">To</th>
+                  <th className="py-2 pr-3">What</th>
+                  <th className="py-2 pr-3">Queued</th>
+                  <th className="py-2 pr-3">Tries</th>
+                  <th className="py-2"><span className="sr-only">Actions</span></th>
+                </tr>
+              </thead>
+              <tbody>
+                {data!.items.map((m) => (
+                  <tr key={m.id} className="border-b border-line align-top">
+                    <td className="py-2 pr-3"><OutboxStatusBadge status={m.status} /></td>
+                    <td className="py-2 pr-3 break-all">{m.to}</td>
+                    <td className="py-2 pr-3">
+                      <p className="font-bold">{KIND_WORDS[m.kind]}</p>
+                      <p className="text-sm text-ink-soft">{m.subject}</p>
+                      {m.attachments.length > 0 && <p className="text-sm text-ink-faint">PDF: {m.attachments.join(', ')}</p>}
+                      {m.lastError && m.status !== 'sent' && <p className="text-sm text-signal-700">Last error: {m.lastError}</p>}
+                    </td>
+                    <td className="py-2 pr-3 text-sm">
+                      {when(m.createdAt)}
+                      {m.sentAt && <span className="block text-ink-faint">sent {when(m.sentAt)}</span>}
+                    </td>
+                    <td className="num py-2 pr-3">{m.attempts}</td>
+                    <td className="py-2">
+                      {m.status === 'failed' && (
+                        <Button
+                          size="sm"
+                          variant="secondary"
+                          busy={retry.isPending && retry.variables === m.id}
+                          onClick={() => {
+                            setRetryError(null);
+                            retry.mutate(m.id, { onError: (e) => setRetryError(errorMessage(e)) });
+                          }}
+                        >
+                          Send again
+                        </Button>
+                      )}
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+        {data && pages > 1 && (
+          <nav className="mt-4 flex items-center gap-3" aria-label="Outbox pages">
+            <Button size="sm" variant="secondary" disabled={page <= 1} onClick={() => setPage((p) => p - 1)}>Newer</Button>
+            <span className="num text-sm">Page {page} of {pages}</span>
+            <Button size="sm" variant="secondary" disabled={page >= pages} onClick={() => setPage((p) => p + 1)}>Older</Button>
+          </nav>
+        )}
+      </Card>
+    </div>
+  );
+}

@@ -1,0 +1,20 @@
+import type { OutboxStatus } from '@shared/schemas/mail.schema';
+
+const LOOK: Record<OutboxStatus, { icon: string; label: string; cls: string }> = {
+  queued: { icon: '…', label: 'Queued', cls: 'border-line-strong bg-paper-deep text-ink' },
+  sending: { icon: '↗', label: 'Sending', cls: 'border-frost bg-frost-50 text-ink' },
+  sent: { icon: '✓', label: 'Sent', cls: 'border-herb bg-paper-card text-ink' },
+  retrying: { icon: '↻', label: 'Retrying', cls: 'border-caution bg-caution-50 text-ink' },
+  failed: { icon: '⛔', label: 'Failed', cls: 'border-signal bg-signal-50 text-ink' },
+};
+
+/** A status as icon + word (never colour alone). */
+export function OutboxStatusBadge({ status }: { status: OutboxStatus }) {
+  const l = LOOK[status];
+  return (
+    <span className={`inline-flex items-center gap-1 rounded-full border px-2 py-0.5 text-sm font-bold ${l.cls}`}>
+      <span aria-hidden>{l.icon}</span>
+      {l.label}
+    </span>
+  );
+}
