@@ -11,7 +11,8 @@ let stopping = false;
 const stop = async () => {
   if (stopping) return;
   stopping = true;
-  await catcher.stop();
+  setTimeout(() => process.exit(0), 3000).unref(); // never hang on the way out
+  await catcher.stop().catch(() => undefined);
   process.exit(0);
 };
 process.on('SIGINT', () => void stop());
