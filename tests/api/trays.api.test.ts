@@ -75,7 +75,7 @@ describe('who sees and edits base trays', () => {
     const put = await assistant.agent.put(`/api/trays/${tray.id}`).send({ ...trayInput(ingredientId), version: 1 });
     expect(put.status).toBe(403);
     expect(put.body.code).toBe('forbidden');
-    // trayIdsInClientPlan() returns [] until the week board exists.
+    // trayIdsInClientPlan(): a client without a published plan sees no trays.
     expect((await client.agent.get('/api/trays').expect(200)).body).toEqual([]);
     expect((await client.agent.get(`/api/trays/${tray.id}`)).status).toBe(404);
     expect((await client.agent.get(`/api/trays/${tray.id}/portion-card`)).status).toBe(404);
