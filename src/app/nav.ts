@@ -10,6 +10,11 @@ export interface NavItem {
 /** Role-aware navigation: each page appears only for the roles that may open it. */
 export const NAV: NavItem[] = [
   { to: paths.home, label: 'This week', roles: ['coach', 'assistant'] },
+  { to: paths.weeks, label: 'Week board', roles: ['coach'] },
+  { to: paths.plates, label: 'Plates', roles: ['coach'] },
+  { to: paths.clients, label: 'Clients', roles: ['coach'] },
+  { to: paths.myPlates, label: 'My plates', roles: ['client'] },
+  { to: paths.myTargets, label: 'My targets', roles: ['client'] },
   { to: paths.trays, label: 'Base trays', roles: ['coach', 'assistant'] },
   { to: paths.ingredients, label: 'Ingredients', roles: ['coach', 'assistant'] },
   { to: paths.team, label: 'Team & clients', roles: ['coach'] },

@@ -15,6 +15,13 @@ export function appRoutes(qc: QueryClient): RouteObject[] {
     { path: paths.trays, lazy: () => import('./routes/trays/trays.route') },
     { path: paths.trayNew, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/trays/tray-new.route') },
     { path: paths.tray(), lazy: () => import('./routes/trays/tray-detail.route') },
+    { path: paths.clients, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/clients/clients.route') },
+    { path: paths.client(), loader: requireRole(qc, ['coach']), lazy: () => import('./routes/clients/client.route') },
+    { path: paths.plates, loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/plates/plates.route') },
+    { path: paths.weeks, loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/weeks/weeks.route') },
+    { path: paths.week(), loader: requireRole(qc, ['coach']), lazy: () => import('./routes/weeks/week.route') },
+    { path: paths.myPlates, loader: requireRole(qc, ['client']), lazy: () => import('./routes/my/my-plates.route') },
+    { path: paths.myTargets, loader: requireRole(qc, ['client']), lazy: () => import('./routes/my/my-targets.route') },
     { path: paths.outbox, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/outbox/outbox.route') },
     { path: paths.devMail, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/outbox/dev-mail.route') },
   ];

@@ -1,0 +1,137 @@
+import { useState } from 'react';
+import { useNavigate, useParams } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import type { ClientDto } from '@shared/schemas/clients.schema';
+import { clientQuery } from '@/features/clients/api/clients.queries';
+import { useDeleteClient, useInviteClient, useUpdateClient } from '@/features/clients/api/use-client-mutations';
+import { ClientForm, clientToInput } from '@/features/clients/components/client-form';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { Card, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { Cautions } from '@/components/domain/cautions';
+import { applyServerErrors } from '@/lib/form-errors';
+import { errorMessage, isApiError } from '@/lib/problem';
+import { paths } from '@/config/paths';
+
+function InviteCard({ client }: { client: ClientDto }) {
+  const invite = useInviteClient(client.id);
+  const [email, setEmail] = useState(client.email ?? '');
+  const [link, setLink] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  if (client.account) {
+    return (
+      <Card>
+        <h2 className="mb-2 text-xl">Client account</h2>
+        <p>
+          {client.account.name} ({client.account.email}) signs in to see their plates and targets.
+        </p>
+      </Card>
+    );
+  }
+  return (
+    <Card>
+      <h2 className="mb-2 text-xl">Invite to “My plates”</h2>
+      <form
+        className="grid gap-3 sm:grid-cols-[1fr_auto] sm:items-end"
+        onSubmit={(e) => {
+          e.preventDefault();
+          setError(null);
+          invite.mutate(email, {
+            onSuccess: (inv) => setLink(inv.link ?? null),
+            onError: (err) => setError(isApiError(err) ? (Object.values(err.fieldErrors)[0]?.[0] ?? err.message) : errorMessage(err)),
+          });
+        }}
+      >
+        <TextField label="E-mail" type="email" value={email} onChange={(e) => setEmail(e.target.value)} error={error ?? undefined} />
+        <Button type="submit" busy={invite.isPending}>
+          Invite
+        </Button>
+      </form>
+      {link && (
+        <div className="mt-3">
+          <Notice tone="info" title="Invitation link (valid 14 days)">
+            <input readOnly aria-label="Invitation link" value={link} className="mt-2 w-full rounded border border-line-strong bg-paper px-2 py-1 font-mono text-sm" onFocus={(e) => e.currentTarget.select()} />
+          </Notice>
+        </div>
+      )}
+    </Card>
+  );
+}
+
+export function Component() {
+  const id = Number(useParams().clientId);
+  const q = useQuery(clientQuery(id));
+  const update = useUpdateClient(id);
+  const del = useDeleteClient();
+  const navigate = useNavigate();
+  const [formError, setFormError] = useState<string | null>(null);
+  const [stale, setStale] = useState(false);
+  if (q.isPending) return <PageSkeleton />;
+  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  const client = q.data as ClientDto;
+  const slots = Object.keys(client.targets.slots);
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader title={client.name} lead={`Daily targets: ${client.targets.targetKcal} kcal · net carbs ≤ ${client.targets.netCarbCapG} g · protein ${client.targets.proteinG} g · fat ${client.targets.fatG} g`}>
+        <Button
+          variant="danger"
+          busy={del.isPending}
+          onClick={() => {
+            if (window.confirm(`Delete ${client.name}? Their cells on week boards go too.`)) del.mutate(id, { onSuccess: () => navigate(paths.clients) });
+          }}
+        >
+          Delete
+        </Button>
+      </PageHeader>
+      {stale && (
+        <Notice tone="warn" title="Someone else changed this profile">
+          The form now shows their version; make your change again.
+        </Notice>
+      )}
+      <Card>
+        <ClientForm
+          key={client.version}
+          initial={clientToInput(client)}
+          slots={slots}
+          submitLabel="Save changes"
+          busy={update.isPending}
+          formError={formError}
+          onSubmit={(values, setError) => {
+            setFormError(null);
+            setStale(false);
+            update.mutate(
+              { ...values, version: client.version },
+              {
+                onError: (e) => {
+                  if (isApiError(e, 409)) {
+                    setStale(true);
+                    q.refetch();
+                    return;
+                  }
+                  setFormError(applyServerErrors(e, setError));
+                },
+              },
+            );
+          }}
+        />
+      </Card>
+      <Card>
+        <h2 className="mb-2 text-xl">Per meal slot</h2>
+        <ul className="grid gap-2 sm:grid-cols-3">
+          {Object.entries(client.targets.slots).map(([slot, t]) => (
+            <li key={slot} className="rounded-lg bg-paper p-3">
+              <p className="font-bold capitalize">
+                {slot} <span className="num text-sm text-ink-faint">({Math.round(t.share * 100)} %)</span>
+              </p>
+              <p className="num text-sm">
+                {t.targetKcal} kcal · ≤ {t.netCarbCapG} g net carbs · {t.proteinG} g protein
+              </p>
+            </li>
+          ))}
+        </ul>
+      </Card>
+      <InviteCard client={client} />
+      <Cautions topic="diet" compact />
+    </div>
+  );
+}

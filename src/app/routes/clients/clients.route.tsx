@@ -1,0 +1,99 @@
+import { useState } from 'react';
+import { Link, useNavigate } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import { allergenLabel } from '@shared/domain/allergens';
+import type { ClientDto, ClientListItemDto } from '@shared/schemas/clients.schema';
+import { clientsQuery } from '@/features/clients/api/clients.queries';
+import { useCreateClient } from '@/features/clients/api/use-client-mutations';
+import { ClientForm, emptyClient } from '@/features/clients/components/client-form';
+import { Button } from '@/components/ui/button';
+import { Card, EmptyState, ErrorState, PageHeader, Skeleton } from '@/components/ui/states';
+import { applyServerErrors } from '@/lib/form-errors';
+import { paths } from '@/config/paths';
+
+const isFull = (c: ClientListItemDto): c is ClientDto => 'targets' in c;
+
+export function Component() {
+  const list = useQuery(clientsQuery());
+  const create = useCreateClient();
+  const navigate = useNavigate();
+  const [adding, setAdding] = useState(false);
+  const [formError, setFormError] = useState<string | null>(null);
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader title="Clients" lead="Profiles, daily targets, allergens and dislikes.">
+        <Button onClick={() => setAdding((a) => !a)} aria-expanded={adding}>
+          {adding ? 'Close' : 'New client'}
+        </Button>
+      </PageHeader>
+      {adding && (
+        <Card>
+          <h2 className="mb-3 text-xl">New client</h2>
+          <ClientForm
+            initial={emptyClient}
+            submitLabel="Save client"
+            busy={create.isPending}
+            formError={formError}
+            onSubmit={(values, setError) => {
+              setFormError(null);
+              create.mutate(values, {
+                onSuccess: (c) => navigate(paths.client(c.id)),
+                onError: (e) => setFormError(applyServerErrors(e, setError)),
+              });
+            }}
+          />
+        </Card>
+      )}
+      <Card>
+        {list.isPending ? (
+          <Skeleton className="h-32 w-full" />
+        ) : list.isError ? (
+          <ErrorState error={list.error} retry={() => list.refetch()} />
+        ) : list.data.length === 0 ? (
+          <EmptyState title="No clients yet" action={<Button onClick={() => setAdding(true)}>Add your first client</Button>}>
+            Add a client to compute their targets and place plates for them on the week board.
+          </EmptyState>
+        ) : (
+          <div className="overflow-x-auto">
+            <table className="w-full text-left">
+              <thead>
+                <tr className="border-b border-line text-sm text-ink-faint">
+                  <th className="py-2">Name</th>
+                  <th className="text-right">Portions per plate</th>
+                  <th className="text-right">kcal</th>
+                  <th className="text-right">Net-carb cap</th>
+                  <th className="text-right">Protein</th>
+                  <th>Allergens</th>
+                  <th>Account</th>
+                </tr>
+              </thead>
+              <tbody>
+                {list.data.map((c) => (
+                  <tr key={c.id} className="border-b border-line">
+                    <td className="py-2">
+                      <Link className="font-bold underline" to={paths.client(c.id)}>
+                        {c.name}
+                      </Link>
+                    </td>
+                    <td className="num text-right">{c.householdMultiplier}</td>
+                    {isFull(c) ? (
+                      <>
+                        <td className="num text-right">{c.targets.targetKcal}</td>
+                        <td className="num text-right">{c.targets.netCarbCapG} g</td>
+                        <td className="num text-right">{c.targets.proteinG} g</td>
+                        <td>{c.allergens.map(allergenLabel).join(', ') || '—'}</td>
+                        <td>{c.account ? 'Joined' : 'Not invited'}</td>
+                      </>
+                    ) : (
+                      <td colSpan={5} />
+                    )}
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </Card>
+    </div>
+  );
+}

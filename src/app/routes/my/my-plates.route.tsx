@@ -1,0 +1,131 @@
+import { useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { allergenLabel } from '@shared/domain/allergens';
+import type { MyPlateDto } from '@shared/schemas/weeks.schema';
+import { localToday, myWeekQuery } from '@/features/weeks/api/weeks.queries';
+import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { Cautions } from '@/components/domain/cautions';
+
+const dayLabel = (iso: string, long = false) =>
+  new Date(`${iso}T12:00:00Z`).toLocaleDateString(undefined, { weekday: long ? 'long' : 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
+
+function Macros({ m }: { m: MyPlateDto['macros'] }) {
+  return (
+    <dl className="grid grid-cols-4 gap-1 text-center">
+      {[
+        ['kcal', Math.round(m.kcal)],
+        ['net carbs', `${m.netCarbsG} g`],
+        ['protein', `${m.proteinG} g`],
+        ['fat', `${m.fatG} g`],
+      ].map(([k, v]) => (
+        <div key={k} className="rounded-lg bg-paper p-2">
+          <dd className="num text-lg font-bold">{v}</dd>
+          <dt className="text-xs text-ink-faint">{k}</dt>
+        </div>
+      ))}
+    </dl>
+  );
+}
+
+function PlateCard({ plate }: { plate: MyPlateDto }) {
+  return (
+    <Card className="flex flex-col gap-3">
+      <p className="text-sm uppercase tracking-wide text-ink-faint">{plate.slot}</p>
+      <h2 className="text-2xl">{plate.name}</h2>
+      {plate.description && <p className="text-ink-soft">{plate.description}</p>}
+      <Macros m={plate.macros} />
+      {plate.allergens.length > 0 && <p className="text-sm">Contains: {plate.allergens.map(allergenLabel).join(', ')}</p>}
+      {plate.storage === 'frozen' ? (
+        <Notice tone="cold" title={`Frozen portion: move it to the fridge on the evening of ${plate.thawOn ? dayLabel(plate.thawOn, true) : 'the day before'}`}>
+          Thaw in the refrigerator, never on the counter.
+        </Notice>
+      ) : (
+        plate.eatBy && <Notice tone="cold" title={`Eat by ${dayLabel(plate.eatBy, true)}`}>Keep it in the fridge at 40 °F (4 °C) or below.</Notice>
+      )}
+      <section>
+        <h3 className="font-bold">What is on the plate</h3>
+        <ul className="list-disc pl-5">
+          {plate.trays.map((t) => (
+            <li key={t.trayId}>
+              {t.portions} portion{t.portions === 1 ? '' : 's'} of {t.name}
+            </li>
+          ))}
+          {plate.addOns.map((a, i) => (
+            <li key={i}>
+              {a.amountText} {a.unit} {a.name} {a.note && <span className="text-ink-faint">({a.note})</span>}
+            </li>
+          ))}
+        </ul>
+      </section>
+      {plate.assemblySteps.length > 0 && (
+        <section>
+          <h3 className="font-bold">Put it together</h3>
+          <ol className="list-decimal pl-5">
+            {plate.assemblySteps.map((s, i) => (
+              <li key={i}>{s}</li>
+            ))}
+          </ol>
+        </section>
+      )}
+      <section>
+        <h3 className="font-bold">Reheat</h3>
+        <ol className="list-decimal pl-5">
+          {[...plate.reheatSteps, ...plate.trays.flatMap((t) => t.reheatSteps)].map((s, i) => (
+            <li key={i}>{s}</li>
+          ))}
+          <li>Heat until every part reaches 165 °F (74 °C).</li>
+        </ol>
+      </section>
+    </Card>
+  );
+}
+
+export function Component() {
+  const today = localToday();
+  const q = useQuery(myWeekQuery(today));
+  const [picked, setPicked] = useState<string | null>(null);
+  if (q.isPending) return <PageSkeleton />;
+  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  const week = q.data;
+  if (!week || week.days.length === 0) {
+    return (
+      <div className="flex flex-col gap-6">
+        <PageHeader title="My plates" />
+        <EmptyState title="No plan yet">Your coach has not published a week for you yet.</EmptyState>
+      </div>
+    );
+  }
+  const day = week.days.find((d) => d.date === (picked ?? today)) ?? (picked ? undefined : week.days.find((d) => d.date >= today) ?? week.days[0]);
+  return (
+    <div className="mx-auto flex max-w-xl flex-col gap-5">
+      <PageHeader title={day?.date === today ? "Today's plate" : 'My plates'} lead={day ? dayLabel(day.date, true) : undefined} />
+      {day ? day.plates.map((p) => <PlateCard key={p.slot} plate={p} />) : <EmptyState title="Nothing planned that day" />}
+      <Card>
+        <h2 className="mb-2 text-xl">The week at a glance</h2>
+        <ul className="flex flex-col divide-y divide-line">
+          {week.days.map((d) => (
+            <li key={d.date}>
+              <button
+                type="button"
+                onClick={() => setPicked(d.date)}
+                aria-current={d.date === day?.date ? 'date' : undefined}
+                className={`flex min-h-11 w-full items-center justify-between gap-2 px-2 py-2 text-left ${d.date === day?.date ? 'bg-paper-deep font-bold' : ''}`}
+              >
+                <span>
+                  {dayLabel(d.date)}
+                  {d.date === today && <span className="ml-1 text-xs text-herb-700">today</span>}
+                  <span className="block text-sm font-normal text-ink-soft">{d.plates.map((p) => p.name).join(' · ')}</span>
+                </span>
+                <span className="num text-sm">{Math.round(d.totals.kcal)} kcal · {d.totals.netCarbsG} g net</span>
+              </button>
+            </li>
+          ))}
+        </ul>
+        <p className="mt-2 text-xs text-ink-faint">
+          Version {week.publishedVersion}, published {new Date(week.publishedAt).toLocaleString()}.
+        </p>
+      </Card>
+      <Cautions compact />
+    </div>
+  );
+}

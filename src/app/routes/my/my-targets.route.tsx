@@ -1,0 +1,62 @@
+import { useQuery } from '@tanstack/react-query';
+import { allergenLabel } from '@shared/domain/allergens';
+import { clientQuery } from '@/features/clients/api/clients.queries';
+import { useMe } from '@/features/auth/hooks/use-me';
+import { Card, EmptyState, ErrorState, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { Cautions } from '@/components/domain/cautions';
+
+function Linked({ clientId }: { clientId: number }) {
+  const q = useQuery(clientQuery(clientId));
+  if (q.isPending) return <PageSkeleton />;
+  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  const c = q.data;
+  const t = c.targets;
+  return (
+    <div className="mx-auto flex max-w-xl flex-col gap-5">
+      <PageHeader title="My targets" lead={t.mode === 'computed' ? 'Computed by your coach from your profile' : 'Set by your coach'} />
+      <Card>
+        <dl className="grid grid-cols-2 gap-3">
+          {[
+            ['Energy', `${t.targetKcal} kcal`],
+            ['Net carbs, at most', `${t.netCarbCapG} g`],
+            ['Protein', `${t.proteinG} g`],
+            ['Fat', `${t.fatG} g`],
+          ].map(([k, v]) => (
+            <div key={k} className="rounded-lg bg-paper p-3">
+              <dt className="text-sm text-ink-faint">{k}</dt>
+              <dd className="num text-2xl font-bold">{v}</dd>
+            </div>
+          ))}
+        </dl>
+        <p className="mt-3 text-sm text-ink-soft">Per day. Your plates:</p>
+        <ul className="mt-1 flex flex-col gap-1 text-sm">
+          {Object.entries(t.slots).map(([slot, s]) => (
+            <li key={slot} className="num">
+              <span className="capitalize">{slot}</span>: {s.targetKcal} kcal · ≤ {s.netCarbCapG} g net carbs · {s.proteinG} g protein
+            </li>
+          ))}
+        </ul>
+      </Card>
+      <Card>
+        <h2 className="mb-2 text-xl">What your coach plans around</h2>
+        <p>Allergens: {c.allergens.length ? c.allergens.map(allergenLabel).join(', ') : 'none recorded'}</p>
+        <p>Dislikes: {c.dislikes.length ? c.dislikes.join(', ') : 'none recorded'}</p>
+        <p className="mt-2 text-sm text-ink-faint">Something wrong? Tell your coach.</p>
+      </Card>
+      <Cautions topic="diet" compact />
+    </div>
+  );
+}
+
+export function Component() {
+  const me = useMe();
+  if (!me.clientId) {
+    return (
+      <div className="flex flex-col gap-6">
+        <PageHeader title="My targets" />
+        <EmptyState title="Your profile is not linked yet">Ask your coach to link your account to your client profile.</EmptyState>
+      </div>
+    );
+  }
+  return <Linked clientId={me.clientId} />;
+}

@@ -1,0 +1,105 @@
+import { useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import type { AssemblyDto } from '@shared/schemas/assemblies.schema';
+import { assembliesQuery } from '@/features/assemblies/api/assemblies.queries';
+import { useDeleteAssembly, useSaveAssembly } from '@/features/assemblies/api/use-assembly-mutations';
+import { AssemblyForm, assemblyToInput, emptyAssembly } from '@/features/assemblies/components/assembly-form';
+import { PlateMacros } from '@/features/assemblies/components/plate-macros';
+import { Button } from '@/components/ui/button';
+import { Card, EmptyState, ErrorState, Notice, PageHeader, Skeleton } from '@/components/ui/states';
+import { applyServerErrors } from '@/lib/form-errors';
+import { errorMessage, isApiError } from '@/lib/problem';
+import { useMe } from '@/features/auth/hooks/use-me';
+
+function Editor({ plate, onDone }: { plate: AssemblyDto | null; onDone: () => void }) {
+  const save = useSaveAssembly(plate?.id ?? null);
+  const [formError, setFormError] = useState<string | null>(null);
+  return (
+    <Card>
+      <h2 className="mb-3 text-xl">{plate ? `Edit ${plate.name}` : 'New plate'}</h2>
+      <AssemblyForm
+        key={plate ? `${plate.id}-${plate.version}` : 'new'}
+        initial={plate ? assemblyToInput(plate) : emptyAssembly}
+        names={Object.fromEntries((plate?.addOns ?? []).map((a) => [a.ingredientId, a.ingredientName]))}
+        busy={save.isPending}
+        formError={formError}
+        onSubmit={(values, setError) => {
+          setFormError(null);
+          save.mutate(plate ? { ...values, version: plate.version } : values, {
+            onSuccess: onDone,
+            onError: (e) =>
+              setFormError(isApiError(e, 409) ? 'Someone else changed this plate: close and open it again to see their version.' : applyServerErrors(e, setError)),
+          });
+        }}
+      />
+    </Card>
+  );
+}
+
+export function Component() {
+  const me = useMe();
+  const list = useQuery(assembliesQuery());
+  const del = useDeleteAssembly();
+  const [editing, setEditing] = useState<AssemblyDto | 'new' | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const coach = me.role === 'coach';
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader title="Plates" lead="Portions of base trays plus add-ons, with their macros, allergens and steps.">
+        {coach && <Button onClick={() => setEditing(editing ? null : 'new')}>{editing ? 'Close' : 'New plate'}</Button>}
+      </PageHeader>
+      {editing && <Editor plate={editing === 'new' ? null : editing} onDone={() => setEditing(null)} />}
+      {error && <Notice tone="block" title={error} />}
+      {list.isPending ? (
+        <Skeleton className="h-40 w-full" />
+      ) : list.isError ? (
+        <ErrorState error={list.error} retry={() => list.refetch()} />
+      ) : list.data.length === 0 ? (
+        <EmptyState title="No plates yet" action={coach ? <Button onClick={() => setEditing('new')}>Make a plate</Button> : undefined}>
+          A plate combines portions of base trays with add-ons such as a low-carb wrap or a spoon of cream cheese.
+        </EmptyState>
+      ) : (
+        <ul className="grid gap-4 md:grid-cols-2">
+          {list.data.map((p) => (
+            <li key={p.id}>
+              <Card className="flex h-full flex-col gap-2">
+                <h2 className="text-xl">{p.name}</h2>
+                <PlateMacros macros={p.macros} allergens={p.allergens} />
+                {!p.complete && <Notice tone="warn" title="Some parts could not be weighed: their nutrients are left out." />}
+                <ul className="list-disc pl-5 text-sm">
+                  {p.trays.map((t) => (
+                    <li key={`t${t.trayId}`}>
+                      {t.portions} × {t.trayName}
+                    </li>
+                  ))}
+                  {p.addOns.map((a, i) => (
+                    <li key={`a${i}`}>
+                      {a.amountText} {a.unit} {a.ingredientName} {a.note && <span className="text-ink-faint">({a.note})</span>}
+                    </li>
+                  ))}
+                </ul>
+                {coach && (
+                  <div className="mt-auto flex gap-2">
+                    <Button size="sm" variant="secondary" onClick={() => setEditing(p)}>
+                      Edit
+                    </Button>
+                    <Button
+                      size="sm"
+                      variant="ghost"
+                      onClick={() => {
+                        setError(null);
+                        del.mutate(p.id, { onError: (e) => setError(isApiError(e, 409) ? `${p.name} is on a week board: take it off first.` : errorMessage(e)) });
+                      }}
+                    >
+                      Delete
+                    </Button>
+                  </div>
+                )}
+              </Card>
+            </li>
+          ))}
+        </ul>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,233 @@
+import { useState } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { allergenConflicts } from '@shared/domain/allergens';
+import type { BoardDto, CellInput } from '@shared/schemas/weeks.schema';
+import { boardQuery } from '@/features/weeks/api/weeks.queries';
+import { weekKeys } from '@/features/weeks/api/weeks.keys';
+import { useCopyDay, useCoverTrays, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek } from '@/features/weeks/api/use-week-mutations';
+import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/weeks/components/board-grid';
+import { InventoryPanel } from '@/features/weeks/components/inventory-panel';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { Cautions } from '@/components/domain/cautions';
+import { errorMessage, isApiError } from '@/lib/problem';
+import { paths } from '@/config/paths';
+
+type Pending = { kind: 'cells'; edit: CellEdit } | { kind: 'other'; label: string; run: (version: number) => void };
+
+export function Component() {
+  const id = Number(useParams().weekId);
+  const qc = useQueryClient();
+  const q = useQuery(boardQuery(id));
+  const putCells = usePutCells(id);
+  const putTrays = usePutTrays(id);
+  const cover = useCoverTrays(id);
+  const copyDay = useCopyDay(id);
+  const publish = usePublishWeek(id);
+  const update = useUpdateWeek(id);
+  const [conflict, setConflict] = useState<Pending | null>(null);
+  const [allergen, setAllergen] = useState<{ edit: CellEdit; message: string } | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const [copyFrom, setCopyFrom] = useState('');
+  const [copyTo, setCopyTo] = useState('');
+  const busy = putCells.isPending || putTrays.isPending || cover.isPending || copyDay.isPending || publish.isPending || update.isPending;
+
+  if (q.isPending) return <PageSkeleton />;
+  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  const board = q.data;
+
+  /** A 409 loads their board and keeps ours pending: the coach chooses (merge prompt), never a silent overwrite. */
+  const onFail = (pending: Pending) => (e: unknown) => {
+    if (isApiError(e, 409) && e.problem.code === 'stale_version') {
+      const current = e.problem.current as BoardDto | undefined;
+      if (current) qc.setQueryData(weekKeys.detail(id), current);
+      else void q.refetch();
+      setConflict(pending);
+      return;
+    }
+    if (pending.kind === 'cells' && isApiError(e, 400)) {
+      const msg = Object.entries(e.fieldErrors).find(([k]) => k.endsWith('allergenOverrides'))?.[1]?.[0];
+      if (msg) {
+        setAllergen({ edit: pending.edit, message: msg });
+        return;
+      }
+    }
+    setError(isApiError(e) ? (Object.values(e.fieldErrors)[0]?.[0] ?? e.message) : errorMessage(e));
+  };
+
+  const sendCells = (edit: CellEdit, version = board.week.version) => {
+    setError(null);
+    putCells.mutate({ version, cells: edit.cells }, { onError: onFail({ kind: 'cells', edit }) });
+  };
+
+  const withVersion = (label: string, run: (version: number) => void) => {
+    setError(null);
+    run(board.week.version);
+    return label;
+  };
+
+  const overrideAndSend = (reason: string) => {
+    if (!allergen) return;
+    const cells: CellInput[] = allergen.edit.cells.map((c) => {
+      const client = board.clients.find((x) => x.id === c.clientId);
+      const plate = board.plates.find((p) => p.id === c.assemblyId);
+      const codes = allergenConflicts(plate?.allergens ?? [], client?.allergens ?? []);
+      return { ...c, allergenOverrides: codes.map((allergen) => ({ allergen, reason })) };
+    });
+    setAllergen(null);
+    sendCells({ ...allergen.edit, cells });
+  };
+
+  const blocks = board.warnings.filter((w) => w.severity === 'block');
+  const warns = board.warnings.filter((w) => w.severity === 'warn');
+  const short = board.inventory.reduce((s, t) => s + t.short, 0);
+
+  return (
+    <div className="flex flex-col gap-5">
+      <PageHeader
+        title={board.week.name}
+        lead={`${board.week.startDate} – ${board.week.endDate} · prep ${board.prepDates.join(' and ')} · ${
+          board.week.publishedVersion ? `published v${board.week.publishedVersion}${board.week.changedSincePublished ? ', changed since' : ''}` : 'not published'
+        }`}
+      >
+        <Link to={paths.weeks} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline">
+          All weeks
+        </Link>
+        <Button
+          busy={publish.isPending}
+          disabled={busy || blocks.length > 0 || board.cells.length === 0}
+          onClick={() => withVersion('publish', (version) => publish.mutate({ version }, { onError: onFail({ kind: 'other', label: 'Publish', run: (v) => publish.mutate({ version: v }) }) }))}
+        >
+          {board.week.publishedVersion ? 'Publish a new version' : 'Publish to clients'}
+        </Button>
+      </PageHeader>
+
+      {conflict && (
+        <Notice tone="warn" title="Someone else changed this week since you opened it">
+          <p>The board now shows their version (v{board.week.version}). Your change was not saved: {conflict.kind === 'cells' ? conflict.edit.label : conflict.label}.</p>
+          <div className="mt-2 flex gap-2">
+            <Button
+              size="sm"
+              onClick={() => {
+                const c = conflict;
+                setConflict(null);
+                if (c.kind === 'cells') sendCells(c.edit, board.week.version);
+                else c.run(board.week.version);
+              }}
+            >
+              Apply my change on top of theirs
+            </Button>
+            <Button size="sm" variant="secondary" onClick={() => setConflict(null)}>
+              Keep theirs
+            </Button>
+          </div>
+        </Notice>
+      )}
+      {allergen && <AllergenOverridePrompt message={allergen.message} busy={putCells.isPending} onConfirm={overrideAndSend} onCancel={() => setAllergen(null)} />}
+      {error && <Notice tone="block" title={error} />}
+
+      <div className="grid gap-3 sm:grid-cols-3">
+        <Notice tone={blocks.length ? 'block' : 'info'} title={`${blocks.length} problem(s) block publishing`}>
+          {blocks.slice(0, 3).map((w, i) => (
+            <p key={i}>{w.message}</p>
+          ))}
+        </Notice>
+        <Notice tone={warns.length ? 'warn' : 'info'} title={`${warns.length} warning(s)`}>
+          Over the net-carb cap, short of protein, dislikes, overridden allergens.
+        </Notice>
+        <Notice tone={short ? 'warn' : 'info'} title={short ? `${short} portion(s) short` : 'Every portion is baked'} />
+      </div>
+
+      {board.clients.length === 0 || board.plates.length === 0 ? (
+        <EmptyState title={board.clients.length === 0 ? 'No clients yet' : 'No plates yet'}>
+          {board.clients.length === 0 ? <Link to={paths.clients} className="underline">Add clients</Link> : <Link to={paths.plates} className="underline">Make plates</Link>} to fill the board.
+        </EmptyState>
+      ) : (
+        <Card>
+          <BoardGrid board={board} busy={busy} onEdit={(edit) => sendCells(edit)} />
+        </Card>
+      )}
+
+      <Card>
+        <h2 className="mb-3 text-xl">Copy a day</h2>
+        <form
+          className="grid items-end gap-3 sm:grid-cols-[1fr_1fr_auto]"
+          onSubmit={(e) => {
+            e.preventDefault();
+            if (!copyFrom || !copyTo) return;
+            const run = (version: number) => copyDay.mutate({ version, fromDate: copyFrom, toDate: copyTo }, { onError: onFail({ kind: 'other', label: `copy ${copyFrom} to ${copyTo}`, run }) });
+            withVersion('copy', run);
+          }}
+        >
+          <SelectField label="From" value={copyFrom} onChange={(e) => setCopyFrom(e.target.value)}>
+            <option value="">Choose…</option>
+            {board.days.map((d) => (
+              <option key={d} value={d}>
+                {d}
+              </option>
+            ))}
+          </SelectField>
+          <SelectField label="To (replaces that day)" value={copyTo} onChange={(e) => setCopyTo(e.target.value)}>
+            <option value="">Choose…</option>
+            {board.days.map((d) => (
+              <option key={d} value={d}>
+                {d}
+              </option>
+            ))}
+          </SelectField>
+          <Button type="submit" variant="secondary" busy={copyDay.isPending} disabled={!copyFrom || !copyTo || copyFrom === copyTo}>
+            Copy day
+          </Button>
+        </form>
+      </Card>
+
+      <Card>
+        <h2 className="mb-3 text-xl">Portion count</h2>
+        <InventoryPanel
+          board={board}
+          busy={busy}
+          onCover={() => {
+            const run = (version: number) => cover.mutate({ version }, { onError: onFail({ kind: 'other', label: 'set tray counts', run }) });
+            withVersion('cover', run);
+          }}
+          onSave={(trays) => {
+            const run = (version: number) => putTrays.mutate({ version, trays }, { onError: onFail({ kind: 'other', label: 'save tray counts', run }) });
+            withVersion('trays', run);
+          }}
+        />
+      </Card>
+
+      <Card>
+        <h2 className="mb-3 text-xl">Prep days</h2>
+        <PrepDates board={board} busy={update.isPending} onSave={(prepDate, secondPrepDate) => {
+          const run = (version: number) => update.mutate({ version, prepDate, secondPrepDate }, { onError: onFail({ kind: 'other', label: 'change the prep days', run }) });
+          withVersion('prep', run);
+        }} />
+      </Card>
+
+      <Cautions topic="food-safety" compact />
+    </div>
+  );
+}
+
+function PrepDates({ board, busy, onSave }: { board: BoardDto; busy: boolean; onSave: (prep: string, second: string | null) => void }) {
+  const [prep, setPrep] = useState(board.week.prepDate);
+  const [second, setSecond] = useState(board.week.secondPrepDate ?? '');
+  return (
+    <form
+      className="grid items-end gap-3 sm:grid-cols-[1fr_1fr_auto]"
+      onSubmit={(e) => {
+        e.preventDefault();
+        onSave(prep, second || null);
+      }}
+    >
+      <TextField label="Prep day" type="date" value={prep} onChange={(e) => setPrep(e.target.value)} />
+      <TextField label="Second prep day (optional)" type="date" value={second} onChange={(e) => setSecond(e.target.value)} hint="Fresher portions for the end of the week" />
+      <Button type="submit" variant="secondary" busy={busy}>
+        Save prep days
+      </Button>
+    </form>
+  );
+}

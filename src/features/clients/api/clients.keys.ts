@@ -1,0 +1,8 @@
+/** Query keys of client profiles (general → specific). */
+export const clientKeys = {
+  all: ['clients'] as const,
+  lists: () => [...clientKeys.all, 'list'] as const,
+  list: () => [...clientKeys.lists()] as const,
+  details: () => [...clientKeys.all, 'detail'] as const,
+  detail: (id: number) => [...clientKeys.details(), id] as const,
+};

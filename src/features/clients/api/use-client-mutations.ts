@@ -1,0 +1,46 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { ClientDto, CreateClientInput, UpdateClientInput } from '@shared/schemas/clients.schema';
+import type { CreateInvitationInput, InvitationDto } from '@shared/schemas/auth.schema';
+import { api } from '@/lib/api-client';
+import { clientKeys } from './clients.keys';
+
+export function useCreateClient() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: CreateClientInput) => api.post<ClientDto>('/clients', input),
+    meta: { form: true },
+    onSuccess: (c) => {
+      qc.setQueryData(clientKeys.detail(c.id), c);
+      return qc.invalidateQueries({ queryKey: clientKeys.lists() });
+    },
+  });
+}
+
+export function useUpdateClient(id: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: UpdateClientInput) => api.patch<ClientDto>(`/clients/${id}`, input),
+    meta: { form: true },
+    onSuccess: (c) => {
+      qc.setQueryData(clientKeys.detail(id), c);
+      return qc.invalidateQueries({ queryKey: clientKeys.lists() });
+    },
+  });
+}
+
+export function useDeleteClient() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api.delete<void>(`/clients/${id}`),
+    onSuccess: () => qc.invalidateQueries({ queryKey: clientKeys.all }),
+  });
+}
+
+/** Invites the client to their own "my plates" (POST /api/invitations with the profile's id). */
+export function useInviteClient(id: number) {
+  return useMutation({
+    mutationFn: (email: string) =>
+      api.post<InvitationDto>('/invitations', { email, role: 'client', clientId: id } satisfies CreateInvitationInput),
+    meta: { form: true },
+  });
+}

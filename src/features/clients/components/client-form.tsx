@@ -1,0 +1,249 @@
+import { useMemo } from 'react';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { MAJOR_ALLERGENS } from '@shared/domain/allergens';
+import { computeTargets, type ActivityLevel, type Goal, type Sex } from '@shared/domain/targets';
+import {
+  ACTIVITY_LABELS,
+  ACTIVITY_LEVELS,
+  GOAL_LABELS,
+  GOALS,
+  createClientSchema,
+  type ClientDto,
+  type CreateClientData,
+  type CreateClientInput,
+} from '@shared/schemas/clients.schema';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/states';
+
+export const emptyClient: CreateClientInput = {
+  name: '',
+  email: '',
+  householdMultiplier: '1',
+  sex: 'female',
+  ageYears: 40,
+  heightCm: '165',
+  weightKg: '70',
+  activity: 'light',
+  goal: 'maintain',
+  goalAdjustment: null,
+  netCarbCapG: '20',
+  proteinGPerKg: '1.5',
+  targetMode: 'computed',
+  manualTargets: null,
+  slotShares: {},
+  allergens: [],
+  dislikes: [],
+  healthNotes: '',
+};
+
+export function clientToInput(c: ClientDto): CreateClientInput {
+  return {
+    name: c.name,
+    email: c.email ?? '',
+    householdMultiplier: c.householdMultiplier,
+    sex: c.sex,
+    ageYears: c.ageYears,
+    heightCm: c.heightCm,
+    weightKg: c.weightKg,
+    activity: c.activity,
+    goal: c.goal,
+    goalAdjustment: c.goalAdjustment,
+    netCarbCapG: c.netCarbCapG,
+    proteinGPerKg: c.proteinGPerKg,
+    targetMode: c.targetMode,
+    manualTargets: c.manualTargets,
+    slotShares: c.slotShares,
+    allergens: c.allergens,
+    dislikes: c.dislikes,
+    healthNotes: c.healthNotes,
+  };
+}
+
+/** Live preview of the computed targets with the shared Mifflin–St Jeor code (the server computes the same). */
+function TargetsPreview({ values }: { values: Partial<CreateClientInput> }) {
+  const preview = useMemo(() => {
+    try {
+      return computeTargets({
+        sex: values.sex as Sex,
+        weightKg: String(values.weightKg ?? ''),
+        heightCm: String(values.heightCm ?? ''),
+        ageYears: Number(values.ageYears),
+        activity: values.activity as ActivityLevel,
+        goal: values.goal as Goal,
+        netCarbCapG: String(values.netCarbCapG ?? '20'),
+        proteinGPerKg: String(values.proteinGPerKg ?? '1.5'),
+        goalAdjustment: values.goalAdjustment ?? undefined,
+      });
+    } catch {
+      return null;
+    }
+  }, [values.sex, values.weightKg, values.heightCm, values.ageYears, values.activity, values.goal, values.netCarbCapG, values.proteinGPerKg, values.goalAdjustment]);
+  if (!preview) return <Notice tone="info" title="Enter weight, height and age to see the targets" />;
+  return (
+    <div className="flex flex-col gap-2" aria-live="polite">
+      <dl className="grid grid-cols-2 gap-2 sm:grid-cols-4">
+        {[
+          ['Energy', `${preview.targetKcal} kcal`],
+          ['Net-carb cap', `${preview.netCarbCapG} g`],
+          ['Protein', `${preview.proteinG} g`],
+          ['Fat', `${preview.fatG} g`],
+        ].map(([k, v]) => (
+          <div key={k} className="rounded-lg bg-paper p-2">
+            <dt className="text-xs text-ink-faint">{k}</dt>
+            <dd className="num text-lg font-bold">{v}</dd>
+          </div>
+        ))}
+      </dl>
+      <p className="text-xs text-ink-faint">
+        Resting energy <span className="num">{preview.reeKcal}</span> kcal by the Mifflin–St Jeor equation (Am J Clin Nutr
+        1990), × activity = <span className="num">{preview.tdeeKcal}</span> kcal; fat fills the rest after protein and net carbs.
+      </p>
+      {preview.notes.map((n) => (
+        <Notice key={n.code} tone="warn" title={n.message} />
+      ))}
+    </div>
+  );
+}
+
+interface Props {
+  initial: CreateClientInput;
+  slots?: string[];
+  busy?: boolean;
+  submitLabel: string;
+  formError?: string | null;
+  onSubmit: (values: CreateClientData, setError: ReturnType<typeof useForm<CreateClientInput, unknown, CreateClientData>>['setError']) => void;
+}
+
+export function ClientForm({ initial, slots = [], busy, submitLabel, formError, onSubmit }: Props) {
+  const form = useForm<CreateClientInput, unknown, CreateClientData>({ resolver: zodResolver(createClientSchema), defaultValues: initial });
+  const { register, formState, control } = form;
+  const values = useWatch({ control }) as Partial<CreateClientInput>;
+  const err = formState.errors;
+  const manual = values.targetMode === 'manual';
+  return (
+    <form noValidate onSubmit={form.handleSubmit((v) => onSubmit(v, form.setError))} className="flex flex-col gap-5">
+      <fieldset className="grid gap-4 sm:grid-cols-2">
+        <legend className="mb-2 text-lg font-bold">Who</legend>
+        <TextField label="Name" error={err.name?.message} {...register('name')} />
+        <TextField label="E-mail (for the invitation)" type="email" error={err.email?.message} {...register('email')} />
+        <TextField
+          label="Portions per plate (household)"
+          inputMode="decimal"
+          hint="2 = the plate feeds two people"
+          error={err.householdMultiplier?.message}
+          {...register('householdMultiplier')}
+        />
+      </fieldset>
+
+      <fieldset className="grid gap-4 sm:grid-cols-3">
+        <legend className="mb-2 text-lg font-bold">Body and activity</legend>
+        <SelectField label="Equation form (sex)" error={err.sex?.message} {...register('sex')}>
+          <option value="female">Female</option>
+          <option value="male">Male</option>
+        </SelectField>
+        <TextField label="Age (years)" inputMode="numeric" error={err.ageYears?.message} {...register('ageYears', { valueAsNumber: true })} />
+        <TextField label="Height (cm)" inputMode="decimal" error={err.heightCm?.message} {...register('heightCm')} />
+        <TextField label="Weight (kg)" inputMode="decimal" error={err.weightKg?.message} {...register('weightKg')} />
+        <SelectField label="Activity" error={err.activity?.message} {...register('activity')}>
+          {ACTIVITY_LEVELS.map((a) => (
+            <option key={a} value={a}>
+              {ACTIVITY_LABELS[a]}
+            </option>
+          ))}
+        </SelectField>
+        <SelectField label="Goal" error={err.goal?.message} {...register('goal')}>
+          {GOALS.map((g) => (
+            <option key={g} value={g}>
+              {GOAL_LABELS[g]}
+            </option>
+          ))}
+        </SelectField>
+      </fieldset>
+
+      <fieldset className="flex flex-col gap-4">
+        <legend className="mb-2 text-lg font-bold">Daily targets</legend>
+        <SelectField label="Targets" error={err.targetMode?.message} {...register('targetMode')}>
+          <option value="computed">Computed (Mifflin–St Jeor × activity, keto split)</option>
+          <option value="manual">Typed by hand</option>
+        </SelectField>
+        {manual ? (
+          <div className="grid gap-4 sm:grid-cols-4">
+            <TextField label="Energy (kcal)" inputMode="numeric" error={err.manualTargets?.targetKcal?.message ?? err.manualTargets?.message} {...register('manualTargets.targetKcal', { valueAsNumber: true })} />
+            <TextField label="Net-carb cap (g)" inputMode="decimal" error={err.manualTargets?.netCarbCapG?.message} {...register('manualTargets.netCarbCapG', { valueAsNumber: true })} />
+            <TextField label="Protein (g)" inputMode="decimal" error={err.manualTargets?.proteinG?.message} {...register('manualTargets.proteinG', { valueAsNumber: true })} />
+            <TextField label="Fat (g)" inputMode="decimal" error={err.manualTargets?.fatG?.message} {...register('manualTargets.fatG', { valueAsNumber: true })} />
+          </div>
+        ) : (
+          <>
+            <div className="grid gap-4 sm:grid-cols-2">
+              <TextField label="Net-carb cap (g per day)" inputMode="decimal" hint="20 g is the strict keto start" error={err.netCarbCapG?.message} {...register('netCarbCapG')} />
+              <TextField label="Protein (g per kg)" inputMode="decimal" hint="Usual keto range 1.2–2.0" error={err.proteinGPerKg?.message} {...register('proteinGPerKg')} />
+            </div>
+            <TargetsPreview values={values} />
+          </>
+        )}
+        {slots.length > 0 && (
+          <div className="grid gap-4 sm:grid-cols-3">
+            {slots.map((slot) => (
+              <TextField
+                key={slot}
+                label={`Share of the day: ${slot}`}
+                inputMode="decimal"
+                hint="0.3 = 30 %"
+                error={(err.slotShares as Record<string, { message?: string }> | undefined)?.[slot]?.message ?? (err.slotShares as { message?: string } | undefined)?.message}
+                {...register(`slotShares.${slot}` as const, { setValueAs: (v) => (v === '' || v === undefined ? undefined : Number(v)) })}
+              />
+            ))}
+          </div>
+        )}
+      </fieldset>
+
+      <fieldset className="flex flex-col gap-3">
+        <legend className="mb-2 text-lg font-bold">Allergens and dislikes</legend>
+        <Controller
+          control={control}
+          name="allergens"
+          render={({ field }) => (
+            <div className="flex flex-wrap gap-2" role="group" aria-label="Allergens">
+              {MAJOR_ALLERGENS.map((a) => {
+                const on = (field.value ?? []).includes(a.code);
+                return (
+                  <label key={a.code} className={`flex min-h-11 items-center gap-2 rounded-lg border px-3 ${on ? 'border-signal bg-signal-50' : 'border-line-strong'}`}>
+                    <input
+                      type="checkbox"
+                      checked={on}
+                      onChange={(e) => field.onChange(e.target.checked ? [...(field.value ?? []), a.code] : (field.value ?? []).filter((x) => x !== a.code))}
+                    />
+                    {a.label}
+                  </label>
+                );
+              })}
+            </div>
+          )}
+        />
+        <Controller
+          control={control}
+          name="dislikes"
+          render={({ field }) => (
+            <TextField
+              label="Dislikes"
+              hint="Ingredient names or tags, separated by commas"
+              defaultValue={(field.value ?? []).join(', ')}
+              onBlur={(e) => field.onChange(e.target.value.split(',').map((s) => s.trim()).filter(Boolean))}
+            />
+          )}
+        />
+      </fieldset>
+
+      <TextAreaField label="Health notes (coach only)" rows={3} error={err.healthNotes?.message} {...register('healthNotes')} />
+      {formError && <Notice tone="block" title={formError} />}
+      <div>
+        <Button type="submit" busy={busy}>
+          {submitLabel}
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,21 @@
+import { queryOptions } from '@tanstack/react-query';
+import type { BoardDto, GlanceDto, MyWeekDto, WeekSummaryDto } from '@shared/schemas/weeks.schema';
+import { api, qs } from '@/lib/api-client';
+import { weekKeys } from './weeks.keys';
+
+/** Today on this device, as a calendar date (what "today's plate" means to the person holding the phone). */
+export function localToday(): string {
+  const d = new Date();
+  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
+}
+
+export const weeksQuery = () => queryOptions({ queryKey: weekKeys.list(), queryFn: () => api.get<WeekSummaryDto[]>('/weeks') });
+
+export const boardQuery = (id: number) =>
+  queryOptions({ queryKey: weekKeys.detail(id), queryFn: () => api.get<BoardDto>(`/weeks/${id}`) });
+
+export const glanceQuery = (today: string) =>
+  queryOptions({ queryKey: weekKeys.glance(today), queryFn: () => api.get<GlanceDto>(`/weeks/glance${qs({ today })}`) });
+
+export const myWeekQuery = (today: string) =>
+  queryOptions({ queryKey: weekKeys.mine(today), queryFn: () => api.get<MyWeekDto | null>(`/weeks/mine${qs({ today })}`) });

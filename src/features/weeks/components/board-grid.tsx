@@ -1,0 +1,299 @@
+import { useMemo, useState } from 'react';
+import {
+  DndContext,
+  KeyboardSensor,
+  PointerSensor,
+  useDraggable,
+  useDroppable,
+  useSensor,
+  useSensors,
+  type DragEndEvent,
+} from '@dnd-kit/core';
+import { allergenLabel } from '@shared/domain/allergens';
+import type { BoardCellDto, BoardDto, CellInput } from '@shared/schemas/weeks.schema';
+import type { WeekWarning } from '@shared/domain/week-check';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+
+const dayLabel = (iso: string) =>
+  new Date(`${iso}T12:00:00Z`).toLocaleDateString(undefined, { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
+
+export const cellId = (clientId: number, date: string, slot: string) => `cell|${clientId}|${date}|${slot}`;
+
+function PaletteItem({ id, name, detail }: { id: number; name: string; detail: string }) {
+  const { attributes, listeners, setNodeRef, transform, isDragging } = useDraggable({ id: `plate|${id}` });
+  return (
+    <li
+      ref={setNodeRef}
+      {...listeners}
+      {...attributes}
+      aria-roledescription="Plate you can drag onto the board"
+      style={transform ? { transform: `translate3d(${transform.x}px, ${transform.y}px, 0)` } : undefined}
+      className={`cursor-grab rounded-lg border border-line-strong bg-paper-card px-3 py-2 shadow-tray focus:outline-2 focus:outline-ink ${isDragging ? 'z-30 opacity-80' : ''}`}
+    >
+      <p className="font-bold">{name}</p>
+      <p className="num text-xs text-ink-faint">{detail}</p>
+    </li>
+  );
+}
+
+interface CellProps {
+  id: string;
+  cell: BoardCellDto | undefined;
+  plateName: string | undefined;
+  kcal: number | undefined;
+  flags: WeekWarning[];
+  selected: boolean;
+  onSelect: () => void;
+}
+
+function Cell({ id, cell, plateName, kcal, flags, selected, onSelect }: CellProps) {
+  const { setNodeRef, isOver } = useDroppable({ id });
+  const blocked = flags.some((f) => f.severity === 'block');
+  return (
+    <button
+      type="button"
+      ref={setNodeRef}
+      onClick={onSelect}
+      aria-pressed={selected}
+      className={`flex min-h-14 w-full flex-col items-start rounded-md border px-2 py-1 text-left text-xs ${
+        isOver ? 'border-herb bg-herb-50' : blocked ? 'border-signal bg-signal-50' : flags.length ? 'border-caution bg-caution-50' : 'border-line bg-paper-card'
+      } ${selected ? 'outline-2 outline-ink' : ''}`}
+    >
+      {cell ? (
+        <>
+          <span className="font-bold leading-tight">{plateName ?? 'Plate'}</span>
+          <span className="num text-ink-faint">{kcal !== undefined ? `${Math.round(kcal)} kcal` : ''}</span>
+          {cell.storage === 'frozen' && <span className="text-frost-700">❄ frozen</span>}
+          {flags.length > 0 && (
+            <span className={blocked ? 'font-bold text-signal-700' : 'text-caution'}>
+              {blocked ? '⛔' : '⚠'} {flags.length}
+            </span>
+          )}
+        </>
+      ) : (
+        <span className="text-ink-faint">Empty</span>
+      )}
+    </button>
+  );
+}
+
+export interface CellEdit {
+  cells: CellInput[];
+  label: string;
+}
+
+interface Props {
+  board: BoardDto;
+  busy: boolean;
+  onEdit: (edit: CellEdit) => void;
+}
+
+/** The week board: clients × days (× meal slots). Drag a plate onto a cell, or select a cell and pick a plate. */
+export function BoardGrid({ board, busy, onEdit }: Props) {
+  const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor));
+  const [selected, setSelected] = useState<string | null>(null);
+  const plates = useMemo(() => new Map(board.plates.map((p) => [p.id, p])), [board.plates]);
+  const cells = useMemo(() => new Map(board.cells.map((c) => [cellId(c.clientId, c.date, c.slot), c])), [board.cells]);
+  const checks = useMemo(() => new Map(board.checks.map((c) => [`${c.clientId}|${c.date}`, c])), [board.checks]);
+
+  const place = (clientId: number, date: string, slot: string, assemblyId: number | null, extra: Partial<CellInput> = {}) => {
+    const old = cells.get(cellId(clientId, date, slot));
+    onEdit({
+      label: assemblyId ? `${plates.get(assemblyId)?.name ?? 'Plate'} on ${date}` : `Empty ${date}`,
+      cells: [
+        {
+          clientId,
+          date,
+          slot,
+          assemblyId,
+          storage: extra.storage ?? (old?.assemblyId === assemblyId ? old?.storage : 'fridge') ?? 'fridge',
+          prepDate: extra.prepDate !== undefined ? extra.prepDate : old?.assemblyId === assemblyId ? old?.prepDate : null,
+          allergenOverrides: extra.allergenOverrides ?? (old?.assemblyId === assemblyId ? old?.allergenOverrides : []) ?? [],
+        },
+      ],
+    });
+  };
+
+  const onDragEnd = (e: DragEndEvent) => {
+    if (!e.over) return;
+    const [, plateId] = String(e.active.id).split('|');
+    const [, clientId, date, slot] = String(e.over.id).split('|');
+    place(Number(clientId), date, slot, Number(plateId));
+  };
+
+  const sel = selected ? selected.split('|') : null;
+  const selCell = selected ? cells.get(selected) : undefined;
+  const selClient = sel ? board.clients.find((c) => c.id === Number(sel[1])) : undefined;
+  const selFlags = sel ? (checks.get(`${sel[1]}|${sel[2]}`)?.warnings ?? []).filter((w) => !('slot' in w) || w.slot === sel[3]) : [];
+  const selEat = sel ? board.eatBy.find((c) => c.clientId === Number(sel[1]) && c.date === sel[2] && c.slot === sel[3]) : undefined;
+
+  return (
+    <DndContext sensors={sensors} onDragEnd={onDragEnd}>
+      <div className="flex flex-col gap-4 lg:flex-row">
+        <aside className="lg:w-56" aria-label="Plates">
+          <h2 className="mb-2 text-lg font-bold">Plates</h2>
+          <p className="mb-2 text-xs text-ink-faint">Drag onto a cell (or focus, press Space, move with the arrow keys, Space to drop).</p>
+          <ul className="flex flex-col gap-2">
+            {board.plates.map((p) => (
+              <PaletteItem key={p.id} id={p.id} name={p.name} detail={`${Math.round(p.macros.kcal)} kcal · ${p.macros.netCarbsG} g net · ${p.macros.proteinG} g P`} />
+            ))}
+          </ul>
+        </aside>
+        <div className="min-w-0 flex-1 overflow-x-auto">
+          <table className="w-full border-separate border-spacing-1">
+            <thead>
+              <tr>
+                <th className="sticky left-0 bg-paper text-left text-sm">Client</th>
+                {board.days.map((d) => (
+                  <th key={d} className="text-left text-sm font-bold">
+                    {dayLabel(d)}
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {board.clients.map((client) => (
+                <tr key={client.id}>
+                  <th scope="row" className="sticky left-0 z-10 bg-paper pr-2 text-left align-top text-sm">
+                    <span className="font-bold">{client.name}</span>
+                    <span className="num block text-xs text-ink-faint">
+                      ×{client.householdMultiplier} · {client.targets.targetKcal} kcal · ≤{client.targets.netCarbCapG} g
+                    </span>
+                    {client.allergens.length > 0 && <span className="block text-xs text-signal-700">⚠ {client.allergens.map(allergenLabel).join(', ')}</span>}
+                  </th>
+                  {board.days.map((date) => {
+                    const day = checks.get(`${client.id}|${date}`);
+                    return (
+                      <td key={date} className="min-w-32 align-top">
+                        <div className="flex flex-col gap-1">
+                          {board.slots.map((slot) => {
+                            const id = cellId(client.id, date, slot);
+                            const cell = cells.get(id);
+                            const plate = cell ? plates.get(cell.assemblyId) : undefined;
+                            const flags = (day?.warnings ?? []).filter((w) => 'slot' in w && w.slot === slot);
+                            return (
+                              <div key={slot}>
+                                {board.slots.length > 1 && <span className="text-[10px] uppercase text-ink-faint">{slot}</span>}
+                                <Cell id={id} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} onSelect={() => setSelected(selected === id ? null : id)} />
+                              </div>
+                            );
+                          })}
+                          {day && (
+                            <p className="num text-[11px] leading-tight text-ink-soft" title="Day totals against the planned share of the client's targets">
+                              {Math.round(day.totals.kcal)}/{client.targets.targetKcal} kcal · {day.totals.netCarbsG}/{client.targets.netCarbCapG} g net · {day.totals.proteinG}/
+                              {client.targets.proteinG} g P
+                              {day.warnings.some((w) => !('slot' in w)) && (
+                                <span className="block font-bold text-caution">⚠ {day.warnings.filter((w) => !('slot' in w)).map((w) => w.kind.replace(/-/g, ' ')).join(', ')}</span>
+                              )}
+                            </p>
+                          )}
+                        </div>
+                      </td>
+                    );
+                  })}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </div>
+
+      {sel && selClient && (
+        <section aria-label="Selected cell" className="mt-4 rounded-tray border border-line-strong bg-paper-card p-4">
+          <h3 className="mb-2 font-bold">
+            {selClient.name} · {dayLabel(sel[2])} · {sel[3]}
+          </h3>
+          <div className="grid gap-3 sm:grid-cols-3">
+            <SelectField label="Plate" value={selCell?.assemblyId ?? ''} disabled={busy} onChange={(e) => place(selClient.id, sel[2], sel[3], e.target.value ? Number(e.target.value) : null)}>
+              <option value="">Empty</option>
+              {board.plates.map((p) => (
+                <option key={p.id} value={p.id}>
+                  {p.name}
+                </option>
+              ))}
+            </SelectField>
+            {selCell && (
+              <>
+                <SelectField label="Storage" value={selCell.storage} disabled={busy} onChange={(e) => place(selClient.id, sel[2], sel[3], selCell.assemblyId, { storage: e.target.value as 'fridge' | 'frozen' })}>
+                  <option value="fridge">Fridge</option>
+                  <option value="frozen">Freeze on prep day, thaw the evening before</option>
+                </SelectField>
+                <SelectField
+                  label="Portions from"
+                  value={selCell.prepDate ?? ''}
+                  disabled={busy}
+                  onChange={(e) => place(selClient.id, sel[2], sel[3], selCell.assemblyId, { prepDate: e.target.value || null })}
+                >
+                  <option value="">Latest prep day before (default)</option>
+                  {board.prepDates.map((d) => (
+                    <option key={d} value={d}>
+                      Prep day {dayLabel(d)}
+                    </option>
+                  ))}
+                </SelectField>
+              </>
+            )}
+          </div>
+          {selEat && (
+            <ul className="mt-3 flex flex-col gap-1 text-sm">
+              {selEat.portions.map((p, i) => (
+                <li key={i} className="text-frost-700">
+                  ❄ Prepped {dayLabel(p.prepDate)}, eat by <span className="num">{dayLabel(p.eatBy)}</span>
+                  {p.status !== 'ok' && <strong className="text-signal-700"> — {p.status.replace(/-/g, ' ')}</strong>}
+                  {p.remedies.map((r, j) => (
+                    <span key={j} className="ml-2">
+                      <Button
+                        size="sm"
+                        variant="secondary"
+                        disabled={busy}
+                        onClick={() =>
+                          r.kind === 'freeze-and-thaw'
+                            ? place(selClient.id, sel[2], sel[3], selCell!.assemblyId, { storage: 'frozen' })
+                            : place(selClient.id, sel[2], sel[3], selCell!.assemblyId, { prepDate: r.prepDate })
+                        }
+                      >
+                        {r.kind === 'freeze-and-thaw' ? `Freeze on prep day, thaw on the evening of ${dayLabel(r.thawReminderOn)}` : `Take it from prep day ${dayLabel(r.prepDate)}`}
+                      </Button>
+                    </span>
+                  ))}
+                </li>
+              ))}
+            </ul>
+          )}
+          {selFlags.length > 0 && (
+            <ul className="mt-3 flex flex-col gap-1 text-sm" aria-label="Problems of this cell">
+              {selFlags.map((w, i) => (
+                <li key={i} className={w.severity === 'block' ? 'font-bold text-signal-700' : 'text-caution'}>
+                  {w.severity === 'block' ? '⛔' : '⚠'} {w.message}
+                </li>
+              ))}
+            </ul>
+          )}
+          {selCell && selCell.allergenOverrides.length > 0 && (
+            <p className="mt-2 text-sm">Allergen override: {selCell.allergenOverrides.map((o) => `${allergenLabel(o.allergen)} (${o.reason})`).join('; ')}</p>
+          )}
+        </section>
+      )}
+    </DndContext>
+  );
+}
+
+/** Asks the coach for a reason when a plate contains one of the client's allergens. */
+export function AllergenOverridePrompt({ message, busy, onConfirm, onCancel }: { message: string; busy: boolean; onConfirm: (reason: string) => void; onCancel: () => void }) {
+  const [reason, setReason] = useState('');
+  return (
+    <div role="alertdialog" aria-label="Allergen conflict" className="flex flex-col gap-3 rounded-tray border-2 border-signal bg-signal-50 p-4">
+      <p className="font-bold">⛔ {message}</p>
+      <TextField label="Reason to override (kept with the plan)" value={reason} onChange={(e) => setReason(e.target.value)} />
+      <div className="flex gap-2">
+        <Button variant="danger" disabled={reason.trim().length < 3} busy={busy} onClick={() => onConfirm(reason.trim())}>
+          Override with this reason
+        </Button>
+        <Button variant="secondary" onClick={onCancel}>
+          Cancel
+        </Button>
+      </div>
+    </div>
+  );
+}

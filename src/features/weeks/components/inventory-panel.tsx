@@ -1,0 +1,73 @@
+import { useState } from 'react';
+import type { BoardDto, PutTraysInput } from '@shared/schemas/weeks.schema';
+import { Button } from '@/components/ui/button';
+
+const dayLabel = (iso: string) =>
+  new Date(`${iso}T12:00:00Z`).toLocaleDateString(undefined, { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
+
+/** Portions needed (cells × household) against portions baked (tray counts × cut plan), per tray and prep day. */
+export function InventoryPanel({ board, busy, onCover, onSave }: { board: BoardDto; busy: boolean; onCover: () => void; onSave: (trays: PutTraysInput['trays']) => void }) {
+  const names = new Map(board.trays.map((t) => [t.trayId, t.name]));
+  for (const p of board.plates) for (const t of p.trays) names.set(t.trayId, t.trayName);
+  const counts = new Map(board.trays.map((t) => [`${t.trayId}|${t.prepDate}`, t.trayCount]));
+  const [draft, setDraft] = useState<Record<string, string>>({});
+  const rows = board.inventory.flatMap((t) => t.byPrepDate.map((p) => ({ trayId: Number(t.trayId), ...p })));
+  const save = () => {
+    const all = new Map(counts);
+    for (const [k, v] of Object.entries(draft)) all.set(k, Math.max(0, Math.floor(Number(v) || 0)));
+    onSave([...all.entries()].map(([k, trayCount]) => ({ trayId: Number(k.split('|')[0]), prepDate: k.split('|')[1], trayCount })));
+    setDraft({});
+  };
+  if (!rows.length) return <p className="text-ink-soft">Place plates on the board to count portions.</p>;
+  return (
+    <div className="flex flex-col gap-3">
+      <div className="overflow-x-auto">
+        <table className="w-full text-left text-sm">
+          <thead>
+            <tr className="border-b border-line text-ink-faint">
+              <th className="py-2">Base tray</th>
+              <th>Prep day</th>
+              <th className="text-right">Needed</th>
+              <th className="text-right">Trays</th>
+              <th className="text-right">Baked</th>
+              <th className="text-right">Short / spare</th>
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((r) => {
+              const key = `${r.trayId}|${r.prepDate}`;
+              return (
+                <tr key={key} className="border-b border-line">
+                  <td className="py-2 font-bold">{names.get(r.trayId) ?? `Tray ${r.trayId}`}</td>
+                  <td>{dayLabel(r.prepDate)}</td>
+                  <td className="num text-right">{r.needed}</td>
+                  <td className="text-right">
+                    <input
+                      aria-label={`Trays of ${names.get(r.trayId)} on ${r.prepDate}`}
+                      inputMode="numeric"
+                      className="num w-16 rounded border border-line-strong bg-paper-card px-2 py-1 text-right"
+                      value={draft[key] ?? String(counts.get(key) ?? 0)}
+                      onChange={(e) => setDraft({ ...draft, [key]: e.target.value })}
+                    />
+                  </td>
+                  <td className="num text-right">{r.produced}</td>
+                  <td className={`num text-right font-bold ${r.short ? 'text-signal-700' : 'text-herb-700'}`}>
+                    {r.short ? `⚠ ${r.short} short` : `${r.spare} spare`}
+                  </td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      </div>
+      <div className="flex flex-wrap gap-2">
+        <Button size="sm" variant="secondary" disabled={busy || !Object.keys(draft).length} onClick={save}>
+          Save tray counts
+        </Button>
+        <Button size="sm" busy={busy} onClick={onCover}>
+          Set tray counts to cover the need
+        </Button>
+      </div>
+    </div>
+  );
+}

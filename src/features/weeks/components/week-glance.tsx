@@ -1,0 +1,31 @@
+import { Link } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import { glanceQuery, localToday } from '../api/weeks.queries';
+import { Card, ErrorState, Notice, Skeleton } from '@/components/ui/states';
+import { paths } from '@/config/paths';
+
+/** The coach's "this week at a glance": warnings, portions short, the next prep day. */
+export function WeekGlance() {
+  const q = useQuery(glanceQuery(localToday()));
+  if (q.isPending) return <Skeleton className="h-28 w-full" label="Loading this week" />;
+  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  const g = q.data;
+  if (!g.week) return null;
+  return (
+    <Card>
+      <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
+        <h2 className="text-xl">This week at a glance</h2>
+        <Link to={paths.week(g.week.id)} className="font-bold underline">
+          {g.week.name}
+        </Link>
+      </div>
+      <div className="grid gap-3 sm:grid-cols-3">
+        <Notice tone={g.blocks ? 'block' : g.warnings ? 'warn' : 'info'} title={`${g.blocks + g.warnings} warning(s)`}>
+          {g.blocks ? `${g.blocks} block publishing` : 'None blocks publishing'}
+        </Notice>
+        <Notice tone={g.portionsShort ? 'warn' : 'info'} title={g.portionsShort ? `${g.portionsShort} portion(s) short` : 'No portion short'} />
+        <Notice tone="cold" title={g.nextPrepDate ? `Next prep day: ${g.nextPrepDate}` : 'No prep day ahead'} />
+      </div>
+    </Card>
+  );
+}
