@@ -17,6 +17,8 @@ export const NAV: NavItem[] = [
   { to: paths.myTargets, label: 'My targets', roles: ['client'] },
   { to: paths.trays, label: 'Base trays', roles: ['coach', 'assistant'] },
   { to: paths.ingredients, label: 'Ingredients', roles: ['coach', 'assistant'] },
+  { to: paths.bakeRunPlanner, label: 'Bake run', roles: ['coach', 'assistant'] },
+  { to: paths.bakeRules, label: 'Bake rules & ovens', roles: ['coach'] },
   { to: paths.team, label: 'Team & clients', roles: ['coach'] },
   { to: paths.outbox, label: 'Outbox', roles: ['coach'] },
   { to: paths.settings, label: 'Settings', roles: ['coach', 'assistant', 'client'] },

@@ -24,5 +24,8 @@ export function appRoutes(qc: QueryClient): RouteObject[] {
     { path: paths.myTargets, loader: requireRole(qc, ['client']), lazy: () => import('./routes/my/my-targets.route') },
     { path: paths.outbox, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/outbox/outbox.route') },
     { path: paths.devMail, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/outbox/dev-mail.route') },
+    { path: paths.bakeRunPlanner, loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/bake-runs/bake-run-planner.route') },
+    { path: paths.bakeRun(), loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/bake-runs/week-bake-run.route') },
+    { path: paths.bakeRules, loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/bake-runs/bake-rules.route') },
   ];
 }

@@ -21,6 +21,7 @@ export const paths = {
   week: (id: number | string = ':weekId') => `/weeks/${id}`,
   bakeRun: (id: number | string = ':weekId') => `/weeks/${id}/bake-run`,
   bakeRules: '/bake-rules',
+  bakeRunPlanner: '/bake-run',
   shopping: (id: number | string = ':weekId') => `/weeks/${id}/shopping`,
   labels: (id: number | string = ':weekId') => `/weeks/${id}/labels`,
   pantry: '/pantry',

@@ -1,0 +1,102 @@
+import { useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { Link, useParams, useSearchParams } from 'react-router-dom';
+import { bakeRunFiles, ovensQuery, weekBakeRunQuery } from '@/features/bake-runs/api/bake-runs.queries';
+import { useSaveBakeRunSettings } from '@/features/bake-runs/api/use-bake-run-mutations';
+import { BakeRunSettingsForm } from '@/features/bake-runs/components/bake-run-settings-form';
+import { BakeRunView, UnitToggle } from '@/features/bake-runs/components/bake-run-view';
+import type { TempUnit } from '@/features/bake-runs/components/temperature';
+import { useMe } from '@/features/auth/hooks/use-me';
+import { Button } from '@/components/ui/button';
+import { SelectField } from '@/components/ui/field';
+import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { paths } from '@/config/paths';
+
+const linkClass = 'inline-flex min-h-11 items-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
+
+/** A prep week's bake run: the coach sets start, cooks, ovens and hands-on minutes; everyone reads the plan. */
+export function Component() {
+  const me = useMe();
+  const weekId = Number(useParams().weekId);
+  const [params, setParams] = useSearchParams();
+  const prepDate = params.get('prepDate') ?? undefined;
+  const [unit, setUnit] = useState<TempUnit>(me.tempUnit);
+  const q = useQuery(weekBakeRunQuery(weekId, prepDate));
+  const ovens = useQuery({ ...ovensQuery(), enabled: me.role === 'coach' });
+  const save = useSaveBakeRunSettings(weekId);
+
+  if (q.isPending) return <PageSkeleton />;
+  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  const dto = q.data;
+  const files = bakeRunFiles(weekId, dto.prepDate);
+  return (
+    <div className="flex flex-col gap-5">
+      <PageHeader title="Bake run" lead={`${dto.weekName}, prep day ${dto.prepDate}`}>
+        <UnitToggle unit={unit} onChange={setUnit} />
+        {dto.run && (
+          <>
+            <Button variant="secondary" onClick={() => window.print()}>
+              Print run sheet
+            </Button>
+            <a className={linkClass} href={files.pdf}>
+              PDF
+            </a>
+            <a className={linkClass} href={files.ics}>
+              Add to calendar (iCal)
+            </a>
+          </>
+        )}
+      </PageHeader>
+      {dto.prepDates.length > 1 && (
+        <SelectField
+          label="Prep day"
+          className="no-print max-w-xs"
+          value={dto.prepDate}
+          onChange={(e) => setParams({ prepDate: e.target.value }, { replace: true })}
+        >
+          {dto.prepDates.map((d) => (
+            <option key={d} value={d}>
+              {d}
+            </option>
+          ))}
+        </SelectField>
+      )}
+      {me.role === 'coach' && ovens.data && (
+        <BakeRunSettingsForm
+          key={`${dto.prepDate}-${dto.settings.version}`}
+          dto={dto}
+          allOvens={ovens.data}
+          saving={save.isPending}
+          error={save.error}
+          onSave={(body) => save.mutate(body)}
+          onReload={() => {
+            save.reset();
+            q.refetch();
+          }}
+        />
+      )}
+      {dto.problems.length > 0 && (
+        <EmptyState title="Nothing to plan yet">
+          <ul className="list-disc pl-4">
+            {dto.problems.map((p) => (
+              <li key={p}>{p}</li>
+            ))}
+          </ul>
+          {me.role === 'coach' && (
+            <p className="mt-2">
+              <Link className="font-bold underline" to={paths.bakeRules}>
+                Bake rules &amp; ovens
+              </Link>{' '}
+              ·{' '}
+              <Link className="font-bold underline" to={paths.week(weekId)}>
+                Week board
+              </Link>
+            </p>
+          )}
+        </EmptyState>
+      )}
+      {dto.run && <BakeRunView run={dto.run} unit={unit} />}
+      {dto.run === null && dto.problems.length === 0 && <Notice tone="info">No plan.</Notice>}
+    </div>
+  );
+}

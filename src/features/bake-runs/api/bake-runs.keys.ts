@@ -1,0 +1,9 @@
+/** Query keys of the bake-run feature (bake rules, ovens, a week's bake run, weeks to pick from). */
+export const bakeRunsKeys = {
+  all: ['bake-runs'] as const,
+  rules: () => [...bakeRunsKeys.all, 'rules'] as const,
+  ovens: () => [...bakeRunsKeys.all, 'ovens'] as const,
+  weeks: () => [...bakeRunsKeys.all, 'weeks'] as const,
+  weekRuns: () => [...bakeRunsKeys.all, 'week-run'] as const,
+  weekRun: (weekId: number, prepDate?: string) => [...bakeRunsKeys.weekRuns(), weekId, prepDate ?? null] as const,
+};

@@ -1,0 +1,74 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { BakeRunResult } from '@shared/domain/bake-run-types';
+import type { BakeRunRequestBody } from '@shared/schemas/bake-run.schema';
+import type {
+  BakeRuleCreateInput,
+  BakeRuleDto,
+  BakeRunSettingsInput,
+  OvenCreateInput,
+  OvenDto,
+  WeekBakeRunDto,
+} from '@shared/schemas/bake-setup.schema';
+import { api } from '@/lib/api-client';
+import { bakeRunsKeys } from './bake-runs.keys';
+
+/** A tray of the ad-hoc planner may name a bake rule instead of its temperature and minutes. */
+export type CalcTray = Partial<BakeRunRequestBody['trays'][number]> & { id: string; ruleId?: number };
+export type CalcBakeRunBody = Omit<BakeRunRequestBody, 'trays'> & { trays: CalcTray[] };
+
+export function useCalcBakeRun() {
+  return useMutation({
+    mutationFn: (body: CalcBakeRunBody) => api.post<BakeRunResult>('/calc/bake-run', body),
+    meta: { form: true, silent: true },
+  });
+}
+
+export function useSaveBakeRunSettings(weekId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: BakeRunSettingsInput) => api.put<WeekBakeRunDto>(`/weeks/${weekId}/bake-run/settings`, body),
+    meta: { form: true, silent: true },
+    onSuccess: (dto) => {
+      qc.setQueryData(bakeRunsKeys.weekRun(weekId, dto.prepDate), dto);
+      return qc.invalidateQueries({ queryKey: bakeRunsKeys.weekRuns() });
+    },
+  });
+}
+
+type RuleBody = Omit<BakeRuleCreateInput, 'category'> & { category?: string; version?: number };
+
+export function useSaveBakeRule() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, ...body }: RuleBody & { id?: number }) =>
+      id ? api.put<BakeRuleDto>(`/bake-rules/${id}`, body) : api.post<BakeRuleDto>('/bake-rules', body),
+    meta: { form: true, silent: true },
+    onSuccess: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.all }),
+  });
+}
+
+export function useDeleteBakeRule() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api.delete<void>(`/bake-rules/${id}`),
+    onSuccess: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.all }),
+  });
+}
+
+export function useSaveOven() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, ...body }: OvenCreateInput & { id?: number; version?: number }) =>
+      id ? api.put<OvenDto>(`/ovens/${id}`, body) : api.post<OvenDto>('/ovens', body),
+    meta: { form: true, silent: true },
+    onSuccess: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.all }),
+  });
+}
+
+export function useDeleteOven() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api.delete<void>(`/ovens/${id}`),
+    onSuccess: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.all }),
+  });
+}

@@ -1,0 +1,129 @@
+import { useForm } from 'react-hook-form';
+import { RACK_PREFERENCES, type BakeRuleDto } from '@shared/schemas/bake-setup.schema';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/states';
+import { applyServerErrors } from '@/lib/form-errors';
+import { isApiError } from '@/lib/problem';
+import { useSaveBakeRule } from '../api/use-bake-run-mutations';
+import type { TempUnit } from './temperature';
+
+interface RuleForm {
+  category: string;
+  label: string;
+  tempF: string;
+  tempC: string;
+  minMinutes: string;
+  maxMinutes: string;
+  handsOnMinutes: string;
+  toleranceF: string;
+  donenessCue: string;
+  minInternalF: string;
+  minInternalSource: string;
+  rackPreference: string;
+  convectionDeltaF: string;
+  crowdingPct: string;
+  note: string;
+}
+
+const str = (v: number | null | undefined) => (v == null ? '' : String(v));
+
+/** Create or edit a bake rule (coach). The set temperature is typed in the person's unit. */
+export function BakeRuleFormCard({ rule, unit, onDone }: { rule: BakeRuleDto | null; unit: TempUnit; onDone: () => void }) {
+  const save = useSaveBakeRule();
+  const form = useForm<RuleForm>({
+    defaultValues: {
+      category: rule?.category ?? '',
+      label: rule?.label ?? '',
+      tempF: str(rule?.tempF),
+      tempC: str(rule?.tempC),
+      minMinutes: str(rule?.minMinutes),
+      maxMinutes: str(rule?.maxMinutes),
+      handsOnMinutes: str(rule?.handsOnMinutes ?? 10),
+      toleranceF: str(rule?.toleranceF ?? 10),
+      donenessCue: rule?.donenessCue ?? '',
+      minInternalF: str(rule?.minInternalF),
+      minInternalSource: rule?.minInternalSource ?? '',
+      rackPreference: rule?.rackPreference ?? 'any',
+      convectionDeltaF: str(rule?.convectionDeltaF ?? 25),
+      crowdingPct: str(rule?.crowdingPct ?? 10),
+      note: rule?.note ?? '',
+    },
+  });
+  const err = form.formState.errors;
+  const submit = form.handleSubmit(async (v) => {
+    const body = {
+      label: v.label,
+      ...(unit === 'C' ? { tempC: Number(v.tempC) } : { tempF: Number(v.tempF) }),
+      minMinutes: Number(v.minMinutes),
+      maxMinutes: Number(v.maxMinutes),
+      handsOnMinutes: Number(v.handsOnMinutes),
+      toleranceF: Number(v.toleranceF),
+      donenessCue: v.donenessCue,
+      minInternalF: v.minInternalF.trim() === '' ? null : Number(v.minInternalF),
+      minInternalSource: v.minInternalSource.trim() === '' ? null : v.minInternalSource,
+      rackPreference: v.rackPreference as BakeRuleDto['rackPreference'],
+      convectionDeltaF: Number(v.convectionDeltaF),
+      crowdingPct: Number(v.crowdingPct),
+      note: v.note,
+    };
+    try {
+      await save.mutateAsync(rule ? { ...body, id: rule.id, version: rule.version } : { ...body, category: v.category });
+      onDone();
+    } catch (e) {
+      const rest = applyServerErrors(e, form.setError);
+      if (rest && !isApiError(e, 409)) form.setError('root', { message: rest });
+    }
+  });
+  return (
+    <form onSubmit={submit} className="flex flex-col gap-3 rounded-tray border border-line bg-paper-card p-4" aria-label={rule ? `Edit ${rule.label}` : 'New bake rule'}>
+      <div className="grid gap-3 sm:grid-cols-3">
+        {!rule && <TextField label="Category code" placeholder="e.g. meatballs" {...form.register('category')} error={err.category?.message} />}
+        <TextField label="Name" {...form.register('label')} error={err.label?.message} />
+        {unit === 'C' ? (
+          <TextField label="Set temperature (°C)" type="number" step="any" {...form.register('tempC')} error={err.tempC?.message ?? err.tempF?.message} />
+        ) : (
+          <TextField label="Set temperature (°F)" type="number" step="any" {...form.register('tempF')} error={err.tempF?.message} />
+        )}
+        <TextField label="Bake time from (min)" type="number" {...form.register('minMinutes')} error={err.minMinutes?.message} hint="One tray, uncrowded conventional oven" />
+        <TextField label="Bake time to (min)" type="number" {...form.register('maxMinutes')} error={err.maxMinutes?.message} />
+        <TextField label="Hands-on per tray (min)" type="number" {...form.register('handsOnMinutes')} error={err.handsOnMinutes?.message} />
+        <TextField label="Tolerance (± °F)" type="number" step="any" {...form.register('toleranceF')} error={err.toleranceF?.message} />
+        <TextField label="Minimum internal (°F)" type="number" step="any" {...form.register('minInternalF')} error={err.minInternalF?.message} hint="Blank when food safety names none" />
+        <TextField label="Source of the minimum" {...form.register('minInternalSource')} error={err.minInternalSource?.message} hint="e.g. USDA FSIS Safe Minimum Internal Temperatures chart" />
+        <SelectField label="Rack" {...form.register('rackPreference')} error={err.rackPreference?.message}>
+          {RACK_PREFERENCES.map((r) => (
+            <option key={r} value={r}>
+              {r}
+            </option>
+          ))}
+        </SelectField>
+        <TextField label="Convection: lower by (°F)" type="number" step="any" {...form.register('convectionDeltaF')} error={err.convectionDeltaF?.message} hint="Default 25" />
+        <TextField
+          label="Crowding: + % time per extra tray"
+          type="number"
+          step="any"
+          {...form.register('crowdingPct')}
+          error={err.crowdingPct?.message}
+          hint="Default 10 (common practice, no source)"
+        />
+      </div>
+      <TextAreaField label="Doneness cue" rows={2} {...form.register('donenessCue')} error={err.donenessCue?.message} />
+      <TextAreaField label="Note" rows={2} {...form.register('note')} error={err.note?.message} />
+      {isApiError(save.error, 409) && (
+        <Notice tone="warn" title="Not saved">
+          {save.error.message}. Close this form to see the current values.
+        </Notice>
+      )}
+      {err.root && <Notice tone="block">{err.root.message}</Notice>}
+      <div className="flex gap-2">
+        <Button type="submit" busy={save.isPending}>
+          Save rule
+        </Button>
+        <Button type="button" variant="ghost" onClick={onDone}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}

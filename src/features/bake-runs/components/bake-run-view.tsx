@@ -1,0 +1,118 @@
+import type { BakeRunResult } from '@shared/domain/bake-run-types';
+import { Notice } from '@/components/ui/states';
+import { BakeRunSheet } from './bake-run-sheet';
+import { BakeRunTimeline } from './bake-run-timeline';
+import { BakeRunTimers, useRunMinute } from './bake-run-timers';
+import { BAND_CLASS, clock, formatTemp, type TempUnit } from './temperature';
+
+/** °F / °C toggle, starting from the person's preference (a local choice, not saved). */
+export function UnitToggle({ unit, onChange }: { unit: TempUnit; onChange: (u: TempUnit) => void }) {
+  return (
+    <div role="group" aria-label="Temperature unit" className="no-print inline-flex rounded-lg border border-line-strong">
+      {(['F', 'C'] as const).map((u) => (
+        <button
+          key={u}
+          type="button"
+          aria-pressed={unit === u}
+          onClick={() => onChange(u)}
+          className={`min-h-11 min-w-14 px-3 font-bold first:rounded-l-lg last:rounded-r-lg ${unit === u ? 'bg-ink text-paper-card' : 'bg-paper-card text-ink'}`}
+        >
+          °{u}
+        </button>
+      ))}
+    </div>
+  );
+}
+
+function Legend({ unit }: { unit: TempUnit }) {
+  const bands: [1 | 2 | 3 | 4 | 5, string][] = [
+    [1, `below ${formatTemp(325, unit)}`],
+    [2, `${formatTemp(325, unit)}–${formatTemp(374, unit)}`],
+    [3, `${formatTemp(375, unit)}–${formatTemp(399, unit)}`],
+    [4, `${formatTemp(400, unit)}–${formatTemp(424, unit)}`],
+    [5, `${formatTemp(425, unit)} and up`],
+  ];
+  return (
+    <ul className="flex flex-wrap gap-2 text-xs" aria-label="Temperature bands">
+      {bands.map(([b, text]) => (
+        <li key={b} className={`rounded px-2 py-1 font-bold ${BAND_CLASS[b]}`}>
+          {text}
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+/** A planned bake run: summary, timers on prep day, the timeline, the trays and the run sheet, the cautions. */
+export function BakeRunView({ run, unit }: { run: BakeRunResult; unit: TempUnit }) {
+  const nowMinute = useRunMinute(run);
+  return (
+    <div className="flex flex-col gap-5">
+      <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+        {[
+          ['Start', clock(run.start)],
+          ['Last tray out', clock(run.endAt)],
+          ['Session', `${run.sessionMinutes} min`],
+          ['Lower bound', `${run.lowerBoundMinutes} min (${run.provenOptimal ? 'shortest plan' : `within ${run.gapPct}%`})`],
+        ].map(([k, v]) => (
+          <div key={k} className="rounded-lg bg-paper-card p-3 shadow-tray">
+            <dt className="text-sm text-ink-soft">{k}</dt>
+            <dd className="num text-2xl font-bold">{v}</dd>
+          </div>
+        ))}
+      </dl>
+      {nowMinute !== null && <BakeRunTimers run={run} unit={unit} nowMinute={nowMinute} />}
+      <section className="flex flex-col gap-2">
+        <div className="flex flex-wrap items-center justify-between gap-2">
+          <h2 className="text-xl">Timeline</h2>
+          <Legend unit={unit} />
+        </div>
+        <BakeRunTimeline run={run} unit={unit} nowMinute={nowMinute} />
+      </section>
+      <section className="flex flex-col gap-2">
+        <h2 className="text-xl">Trays</h2>
+        <div className="overflow-x-auto">
+          <table className="w-full text-left text-base">
+            <thead className="text-sm text-ink-soft">
+              <tr>
+                <th className="p-2">Tray</th>
+                <th className="p-2">Oven</th>
+                <th className="p-2">Rack</th>
+                <th className="p-2">Set point</th>
+                <th className="p-2">In</th>
+                <th className="p-2">Check / out</th>
+                <th className="p-2">Pull by</th>
+              </tr>
+            </thead>
+            <tbody>
+              {run.trays.map((t) => (
+                <tr key={t.id} className="border-t border-line">
+                  <td className="p-2 font-bold">{t.name}</td>
+                  <td className="p-2">{t.oven}</td>
+                  <td className="num p-2">{t.rack}</td>
+                  <td className="num p-2">{formatTemp(t.tempF, unit)}</td>
+                  <td className="num p-2">{clock(t.inAt)}</td>
+                  <td className="num p-2">
+                    {clock(t.outAt)} <span className="text-sm text-ink-soft">({t.bakeMinutes} min)</span>
+                  </td>
+                  <td className="num p-2">{clock(t.pullByAt)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </section>
+      <section className="flex flex-col gap-2">
+        <h2 className="text-xl">Run sheet</h2>
+        <BakeRunSheet run={run} unit={unit} nowMinute={nowMinute} />
+      </section>
+      <Notice tone="warn" title="Food safety">
+        <ul className="list-disc pl-4">
+          {run.cautions.map((c) => (
+            <li key={c}>{c}</li>
+          ))}
+        </ul>
+      </Notice>
+    </div>
+  );
+}

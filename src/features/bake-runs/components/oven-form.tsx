@@ -1,0 +1,90 @@
+import { useForm } from 'react-hook-form';
+import type { OvenDto } from '@shared/schemas/bake-setup.schema';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/states';
+import { applyServerErrors } from '@/lib/form-errors';
+import { isApiError } from '@/lib/problem';
+import { useSaveOven } from '../api/use-bake-run-mutations';
+import type { TempUnit } from './temperature';
+import { toCelsiusRounded } from '@shared/domain/temperature';
+
+interface OvenForm {
+  name: string;
+  racks: number;
+  traysPerRack: number;
+  convection: boolean;
+  heatFPerMin: number;
+  coolFPerMin: number;
+  maxF: number;
+  maxC: number;
+}
+
+/** Create or edit an oven (coach). The maximum is typed in the person's unit; rates are °F per minute. */
+export function OvenFormCard({ oven, unit, onDone }: { oven: OvenDto | null; unit: TempUnit; onDone: () => void }) {
+  const save = useSaveOven();
+  const form = useForm<OvenForm>({
+    defaultValues: oven
+      ? { ...oven }
+      : { name: '', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 15, maxF: 500, maxC: toCelsiusRounded(500) },
+  });
+  const err = form.formState.errors;
+  const submit = form.handleSubmit(async (v) => {
+    const body = {
+      name: v.name,
+      racks: Number(v.racks),
+      traysPerRack: Number(v.traysPerRack),
+      convection: v.convection,
+      heatFPerMin: Number(v.heatFPerMin),
+      coolFPerMin: Number(v.coolFPerMin),
+      ...(unit === 'C' ? { maxC: Number(v.maxC) } : { maxF: Number(v.maxF) }),
+    };
+    try {
+      await save.mutateAsync(oven ? { ...body, id: oven.id, version: oven.version } : body);
+      onDone();
+    } catch (e) {
+      const rest = applyServerErrors(e, form.setError);
+      if (rest && !isApiError(e, 409)) form.setError('root', { message: rest });
+    }
+  });
+  return (
+    <form onSubmit={submit} className="flex flex-col gap-3 rounded-tray border border-line bg-paper-card p-4" aria-label={oven ? `Edit ${oven.name}` : 'New oven'}>
+      <div className="grid gap-3 sm:grid-cols-3">
+        <TextField label="Name" {...form.register('name')} error={err.name?.message} />
+        <TextField label="Racks" type="number" min={1} max={12} {...form.register('racks')} error={err.racks?.message} />
+        <TextField label="Trays per rack" type="number" min={1} max={6} {...form.register('traysPerRack')} error={err.traysPerRack?.message} />
+        <TextField label="Heating rate (°F per minute)" type="number" step="any" {...form.register('heatFPerMin')} error={err.heatFPerMin?.message} hint="Default 25 (common practice, no source)" />
+        <TextField
+          label="Cooling rate, door ajar (°F per minute)"
+          type="number"
+          step="any"
+          {...form.register('coolFPerMin')}
+          error={err.coolFPerMin?.message}
+          hint="Default 15 (common practice, no source)"
+        />
+        {unit === 'C' ? (
+          <TextField label="Maximum (°C)" type="number" step="any" {...form.register('maxC')} error={err.maxC?.message ?? err.maxF?.message} />
+        ) : (
+          <TextField label="Maximum (°F)" type="number" step="any" {...form.register('maxF')} error={err.maxF?.message} />
+        )}
+      </div>
+      <label className="flex min-h-11 items-center gap-2">
+        <input type="checkbox" className="h-5 w-5" {...form.register('convection')} /> Convection (fan) oven
+      </label>
+      {isApiError(save.error, 409) && (
+        <Notice tone="warn" title="Not saved">
+          {save.error.message}. Close this form to see the current values.
+        </Notice>
+      )}
+      {err.root && <Notice tone="block">{err.root.message}</Notice>}
+      <div className="flex gap-2">
+        <Button type="submit" busy={save.isPending}>
+          Save oven
+        </Button>
+        <Button type="button" variant="ghost" onClick={onDone}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,42 @@
+import { toCelsiusRounded } from '@shared/domain/temperature';
+
+export type TempUnit = 'F' | 'C';
+
+/** A set point as the person reads it (°C rounded to whole degrees, as on oven dials). */
+export function formatTemp(tempF: number | null | undefined, unit: TempUnit): string {
+  if (tempF == null) return '';
+  return unit === 'C' ? `${toCelsiusRounded(tempF)} °C` : `${Math.round(tempF * 10) / 10} °F`;
+}
+
+/** Temperature band 1–5 of the oven colour scale (tokens oven-1 … oven-5); the number is always written too. */
+export function tempBand(tempF: number): 1 | 2 | 3 | 4 | 5 {
+  if (tempF < 325) return 1;
+  if (tempF < 375) return 2;
+  if (tempF < 400) return 3;
+  if (tempF < 425) return 4;
+  return 5;
+}
+
+/** Background + readable text colour for a band (light bands take ink, dark bands take paper). */
+export const BAND_CLASS: Record<1 | 2 | 3 | 4 | 5, string> = {
+  1: 'bg-oven-1 text-ink',
+  2: 'bg-oven-2 text-ink',
+  3: 'bg-oven-3 text-paper-card',
+  4: 'bg-oven-4 text-paper-card',
+  5: 'bg-oven-5 text-paper-card',
+};
+
+export const clock = (local: string) => local.slice(11, 16);
+
+/** Minutes of a local "YYYY-MM-DDTHH:mm" since the epoch reading (kitchen clock, no time zone). */
+export function localMinutes(local: string): number {
+  const [d, t] = local.split('T');
+  const [y, m, day] = d.split('-').map(Number);
+  const [h, mi] = t.split(':').map(Number);
+  return Math.round(Date.UTC(y, m - 1, day, h, mi) / 60_000);
+}
+
+/** The device's local clock as the same reading. */
+export function nowLocalMinutes(now: Date): number {
+  return Math.floor(Date.UTC(now.getFullYear(), now.getMonth(), now.getDate(), now.getHours(), now.getMinutes(), now.getSeconds()) / 60_000);
+}
