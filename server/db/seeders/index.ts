@@ -4,13 +4,14 @@ import { seedDemoTrays } from './tray-demo.js';
 import { seedDemoOvens } from './bake-run-demo.js';
 import { seedReferenceIngredients } from './ingredient-seed.js';
 import { seedDemoIngredients } from './ingredient-demo.js';
+import { seedDemoWeek } from './week-demo.js';
 
 /**
  * Reference data every workspace can use (idempotent, run on every start), then the demo workspace.
  * Modules add their reference seeds and demo steps here.
  */
 export const referenceSeeds: ((em: EntityManager) => Promise<void>)[] = [seedReferenceIngredients];
-export const demoSteps: DemoStep[] = [seedDemoIngredients, seedDemoTrays, seedDemoOvens];
+export const demoSteps: DemoStep[] = [seedDemoIngredients, seedDemoTrays, seedDemoOvens, seedDemoWeek];
 
 export async function seedAll(em: EntityManager, opts: { demo: boolean }) {
   for (const seed of referenceSeeds) await seed(em.fork());

@@ -98,12 +98,8 @@ export async function loadPlateContext(
 ): Promise<PlateContext> {
   const items = assemblies.flatMap(itemsOf);
   const trayIds = [...new Set([...items.filter((i) => i.tray).map((i) => i.tray!.id), ...extraTrayIds])];
-  const [trays, rule] = await Promise.all([
-    trayIds.length
-      ? em.find(Tray, { id: { $in: trayIds }, workspace: actor.workspaceId }, { populate: ['lines'] })
-      : Promise.resolve([] as ITray[]),
-    netCarbRuleOf(em, actor),
-  ]);
+  const trays = trayIds.length ? await em.find(Tray, { id: { $in: trayIds }, workspace: actor.workspaceId }, { populate: ['lines'] }) : [];
+  const rule = await netCarbRuleOf(em, actor);
   const ingredientIds = [
     ...trays.flatMap((t) => linesOf(t).map((l) => l.ingredient.id)),
     ...items.filter((i) => i.ingredient).map((i) => i.ingredient!.id),

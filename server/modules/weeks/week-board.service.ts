@@ -65,14 +65,13 @@ export interface BoardData {
 }
 
 export async function loadBoardData(em: EntityManager, actor: Actor, week: IWeek): Promise<BoardData> {
-  const [slots, clients, assemblies, cells, trays, publishedAt] = await Promise.all([
-    mealSlotsOf(em, actor.workspaceId),
-    loadClients(em, actor.workspaceId),
-    loadAssemblies(em, actor.workspaceId),
-    em.find(WeekCell, { week: week.id }, { orderBy: { date: 'asc', id: 'asc' } }),
-    em.find(WeekTray, { week: week.id }, { orderBy: { id: 'asc' } }),
-    lastPublishedAt(em, week),
-  ]);
+  // One after another: inside a transaction the queries share one connection.
+  const slots = await mealSlotsOf(em, actor.workspaceId);
+  const clients = await loadClients(em, actor.workspaceId);
+  const assemblies = await loadAssemblies(em, actor.workspaceId);
+  const cells = await em.find(WeekCell, { week: week.id }, { orderBy: { date: 'asc', id: 'asc' } });
+  const trays = await em.find(WeekTray, { week: week.id }, { orderBy: { id: 'asc' } });
+  const publishedAt = await lastPublishedAt(em, week);
   const ctx = await loadPlateContext(em, actor, assemblies, trays.map((t) => t.tray.id));
   return { week, slots, clients, assemblies, cells, trays, ctx, publishedAt };
 }

@@ -164,9 +164,7 @@ export async function publishedTrayIdsForClient(em: EntityManager, actor: Actor)
 
 /** Whether a plate or a week uses this tray (then it is archived, never deleted). */
 export async function trayInUse(em: EntityManager, workspaceId: number, trayId: number): Promise<boolean> {
-  const [items, batches] = await Promise.all([
-    em.count(AssemblyItem, { tray: trayId, assembly: { workspace: workspaceId } }),
-    em.count(WeekTray, { tray: trayId, week: { workspace: workspaceId } }),
-  ]);
+  const items = await em.count(AssemblyItem, { tray: trayId, assembly: { workspace: workspaceId } });
+  const batches = await em.count(WeekTray, { tray: trayId, week: { workspace: workspaceId } });
   return items + batches > 0;
 }
