@@ -194,6 +194,8 @@ export interface LabelMacrosDto {
 }
 
 export interface ContainerLabelDto {
+  /** A client's plate from the board, or a spare portion of a tray baked that day. */
+  kind: 'plate' | 'spare';
   /** "Client name" or the tray name for a container that is not assigned to a client. */
   title: string;
   subtitle: string;

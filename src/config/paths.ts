@@ -25,6 +25,8 @@ export const paths = {
   shopping: (id: number | string = ':weekId') => `/weeks/${id}/shopping`,
   labels: (id: number | string = ':weekId') => `/weeks/${id}/labels`,
   pantry: '/pantry',
+  shoppingThisWeek: '/shopping',
+  labelsThisWeek: '/labels',
   outbox: '/outbox',
   devMail: '/dev/mail',
   myPlates: '/my-plates',

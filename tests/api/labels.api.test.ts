@@ -32,6 +32,7 @@ describe('container labels', () => {
     expect(res.body).toMatchObject({ layout: 'a4-3x7', prepDate: '2026-01-04', prepDates: ['2026-01-04'] });
     // 2 plates on the board + (3 portions baked − 2 used) = 1 spare portion → 3 containers.
     expect(res.body.labels).toHaveLength(3);
+    expect(res.body.labels.map((l: { kind: string }) => l.kind)).toEqual(['plate', 'plate', 'spare']);
     const [mon, tue, spare] = res.body.labels;
     expect(mon.subtitle).toContain('2026-01-05 breakfast');
     expect(tue.subtitle).toContain('2026-01-06 breakfast');

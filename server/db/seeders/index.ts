@@ -4,6 +4,7 @@ import { seedDemoTrays } from './tray-demo.js';
 import { seedDemoOvens } from './bake-run-demo.js';
 import { seedReferenceIngredients } from './ingredient-seed.js';
 import { seedDemoIngredients } from './ingredient-demo.js';
+import { seedDemoPantry } from './pantry-demo.js';
 import { seedDemoWeek } from './week-demo.js';
 
 /**
@@ -11,7 +12,7 @@ import { seedDemoWeek } from './week-demo.js';
  * Modules add their reference seeds and demo steps here.
  */
 export const referenceSeeds: ((em: EntityManager) => Promise<void>)[] = [seedReferenceIngredients];
-export const demoSteps: DemoStep[] = [seedDemoIngredients, seedDemoTrays, seedDemoOvens, seedDemoWeek];
+export const demoSteps: DemoStep[] = [seedDemoIngredients, seedDemoTrays, seedDemoOvens, seedDemoPantry, seedDemoWeek];
 
 export async function seedAll(em: EntityManager, opts: { demo: boolean }) {
   for (const seed of referenceSeeds) await seed(em.fork());

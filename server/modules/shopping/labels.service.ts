@@ -98,6 +98,7 @@ export async function weekLabels(
     const multiplier = new Decimal(client.householdMultiplier ?? 1);
     drafts.push({
       sort: `0|${cell.date}|${slotRank(cell.slot)}|${client.name}`,
+      kind: 'plate',
       title: client.name,
       subtitle: `${plate.name} · ${cell.date} ${cell.slot}${multiplier.eq(1) ? '' : ` · ${multiplier.toString()} portions`}`,
       madeOn: prepDate,
@@ -125,6 +126,7 @@ export async function weekLabels(
     for (let i = 0; i < Math.floor(day.spare); i++) {
       drafts.push({
         sort: `1|${tray.name}|${String(i).padStart(4, '0')}`,
+        kind: 'spare',
         title: tray.name,
         subtitle: 'Spare portion',
         madeOn: prepDate,

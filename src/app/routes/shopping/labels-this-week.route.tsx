@@ -1,0 +1,7 @@
+import { CurrentWeekRedirect } from '@/features/shopping/components/current-week-redirect';
+import { paths } from '@/config/paths';
+
+/** "Labels" in the navigation: this week's label sheet. */
+export function Component() {
+  return <CurrentWeekRedirect to={(id) => paths.labels(id)} what="label sheet" />;
+}

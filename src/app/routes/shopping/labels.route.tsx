@@ -1,0 +1,81 @@
+import { useParams, useSearchParams } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import { LABEL_SHEETS, LABEL_SHEET_CODES, labelsPerSheet, type LabelSheetCode } from '@shared/domain/label-sheets';
+import type { ContainerLabelDto } from '@shared/schemas/shopping.schema';
+import { labelSheetQuery } from '@/features/shopping/api/shopping.queries';
+import { LabelSheet } from '@/features/shopping/components/label-sheet';
+import { Button } from '@/components/ui/button';
+import { SelectField } from '@/components/ui/field';
+import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+
+const labelsOf = (labels: ContainerLabelDto[], withSpares: boolean) => (withSpares ? labels : labels.filter((l) => l.kind === 'plate'));
+
+/** Container labels of one prep day, printed on a generic label sheet. */
+export function Component() {
+  const weekId = Number(useParams().weekId);
+  const [params, setParams] = useSearchParams();
+  const layout = (LABEL_SHEET_CODES as readonly string[]).includes(params.get('layout') ?? '')
+    ? (params.get('layout') as LabelSheetCode)
+    : 'letter-2x5';
+  const prepDate = params.get('prepDate');
+  const withSpares = params.get('spares') !== '0';
+  const q = useQuery(labelSheetQuery(weekId, layout, prepDate));
+  const set = (k: string, v: string) => {
+    const next = new URLSearchParams(params);
+    next.set(k, v);
+    setParams(next, { replace: true });
+  };
+
+  return (
+    <div className="flex flex-col gap-5">
+      <div className="no-print flex flex-col gap-4">
+        <PageHeader title="Container labels" lead="One label per container: whose it is, when it was made, until when it is good.">
+          <Button onClick={() => window.print()} disabled={!q.data || labelsOf(q.data.labels, withSpares).length === 0}>
+            Print labels
+          </Button>
+        </PageHeader>
+        <div className="flex flex-wrap gap-3">
+          <SelectField label="Label sheet" value={layout} onChange={(e) => set('layout', e.target.value)} className="w-80">
+            {LABEL_SHEET_CODES.map((c) => (
+              <option key={c} value={c}>
+                {LABEL_SHEETS[c].name}
+              </option>
+            ))}
+          </SelectField>
+          <label className="flex min-h-11 items-center gap-2 self-end font-bold">
+            <input type="checkbox" className="h-5 w-5 accent-herb" checked={withSpares} onChange={(e) => set('spares', e.target.checked ? '1' : '0')} />
+            Label spare portions too
+          </label>
+          {q.data && q.data.prepDates.length > 1 && (
+            <SelectField label="Prep day" value={q.data.prepDate ?? ''} onChange={(e) => set('prepDate', e.target.value)} className="w-48">
+              {q.data.prepDates.map((d) => (
+                <option key={d} value={d}>
+                  {d}
+                </option>
+              ))}
+            </SelectField>
+          )}
+        </div>
+        <Notice tone="cold" title="Print at actual size">
+          Choose 100 % (not "fit to page") and no margins, then test on plain paper against your label sheet. Eat-by dates
+          are guidance, not a guarantee: keep the fridge at 40 °F (4 °C) or below, and your local food code comes first.
+        </Notice>
+      </div>
+      {q.isPending ? (
+        <PageSkeleton />
+      ) : q.isError ? (
+        <ErrorState error={q.error} retry={() => q.refetch()} />
+      ) : labelsOf(q.data.labels, withSpares).length === 0 ? (
+        <EmptyState title="No containers for this prep day">Fill the week board and set tray counts: each plate and each spare portion gets a label.</EmptyState>
+      ) : (
+        <>
+          <p className="no-print num text-ink-soft">
+            {labelsOf(q.data.labels, withSpares).length} labels on{' '}
+            {Math.ceil(labelsOf(q.data.labels, withSpares).length / labelsPerSheet(LABEL_SHEETS[layout]))} sheet(s), prep day {q.data.prepDate}
+          </p>
+          <LabelSheet layout={layout} labels={labelsOf(q.data.labels, withSpares)} />
+        </>
+      )}
+    </div>
+  );
+}

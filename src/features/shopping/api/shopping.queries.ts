@@ -1,0 +1,39 @@
+import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import type { LabelSheetCode } from '@shared/domain/label-sheets';
+import type { IngredientListDto } from '@shared/schemas/ingredients.schema';
+import type { LabelSheetDto, PantryListDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
+import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
+import { api, qs } from '@/lib/api-client';
+import { pantryKeys, shoppingKeys } from './shopping.keys';
+
+/** The week's list; refreshed every 15 s so two people shopping see each other's marks. */
+export const shoppingListQuery = (weekId: number) =>
+  queryOptions({
+    queryKey: shoppingKeys.list(weekId),
+    queryFn: () => api.get<ShoppingListDto>(`/weeks/${weekId}/shopping`),
+    refetchInterval: 15_000,
+  });
+
+export const currentWeekQuery = () =>
+  queryOptions({ queryKey: shoppingKeys.currentWeek(), queryFn: () => api.get<WeekSummaryDto | null>('/weeks/current') });
+
+export const labelSheetQuery = (weekId: number, layout: LabelSheetCode, prepDate: string | null) =>
+  queryOptions({
+    queryKey: shoppingKeys.labelSheet(weekId, layout, prepDate),
+    queryFn: () => api.get<LabelSheetDto>(`/weeks/${weekId}/labels${qs({ layout, prepDate })}`),
+    placeholderData: keepPreviousData,
+  });
+
+export const pantryQuery = () =>
+  queryOptions({ queryKey: pantryKeys.list(), queryFn: () => api.get<PantryListDto>('/pantry') });
+
+export const pantryIngredientSearchQuery = (q: string) =>
+  queryOptions({
+    queryKey: pantryKeys.ingredientSearch(q),
+    queryFn: () => api.get<IngredientListDto>(`/ingredients${qs({ q, pageSize: 20, sort: 'name' })}`),
+    placeholderData: keepPreviousData,
+  });
+
+/** Export addresses (plain links: the browser downloads them with the session cookie). */
+export const shoppingCsvUrl = (weekId: number) => `/api/weeks/${weekId}/shopping.csv`;
+export const shoppingPdfUrl = (weekId: number) => `/api/weeks/${weekId}/shopping.pdf`;

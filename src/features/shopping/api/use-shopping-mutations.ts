@@ -1,0 +1,61 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { MarkBoughtDto, ShoppingCheckDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
+import { api } from '@/lib/api-client';
+import { pantryKeys, shoppingKeys } from './shopping.keys';
+
+type CheckVars = { ingredientId: number; checked: boolean };
+
+function withCheck(list: ShoppingListDto, ingredientId: number, check: ShoppingCheckDto): ShoppingListDto {
+  const aisles = list.aisles.map((a) => ({
+    ...a,
+    items: a.items.map((i) => (i.ingredientId === ingredientId ? { ...i, check } : i)),
+  }));
+  return { ...list, aisles, checkedCount: aisles.flatMap((a) => a.items).filter((i) => i.check.checked).length };
+}
+
+/**
+ * One tap = one idempotent PUT of that item's mark. Optimistic: the mark shows at once and rolls back if the
+ * server refuses; the list is re-read only when the last pending tap has settled (so a slow answer never undoes a
+ * newer tap).
+ */
+export function useSetCheck(weekId: number) {
+  const qc = useQueryClient();
+  const key = shoppingKeys.list(weekId);
+  return useMutation({
+    mutationKey: shoppingKeys.checks(weekId),
+    mutationFn: (v: CheckVars) => api.put<ShoppingCheckDto & { ingredientId: number }>(`/weeks/${weekId}/shopping/checks/${v.ingredientId}`, { checked: v.checked }),
+    onMutate: async (v) => {
+      await qc.cancelQueries({ queryKey: key });
+      const previous = qc.getQueryData<ShoppingListDto>(key);
+      if (previous) {
+        qc.setQueryData<ShoppingListDto>(key, withCheck(previous, v.ingredientId, { checked: v.checked, checkedBy: 'you', checkedAt: new Date().toISOString() }));
+      }
+      return { previous };
+    },
+    onError: (_e, v, ctx) => {
+      const now = qc.getQueryData<ShoppingListDto>(key);
+      const before = ctx?.previous?.aisles.flatMap((a) => a.items).find((i) => i.ingredientId === v.ingredientId);
+      if (now && before) qc.setQueryData<ShoppingListDto>(key, withCheck(now, v.ingredientId, before.check));
+    },
+    onSuccess: (saved) => {
+      const now = qc.getQueryData<ShoppingListDto>(key);
+      if (now) qc.setQueryData<ShoppingListDto>(key, withCheck(now, saved.ingredientId, saved));
+    },
+    onSettled: () => {
+      if (qc.isMutating({ mutationKey: shoppingKeys.checks(weekId) }) === 1) return qc.invalidateQueries({ queryKey: key });
+    },
+  });
+}
+
+/** Marks the list bought (once per week): updates the pantry. */
+export function useMarkBought(weekId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.post<MarkBoughtDto>(`/weeks/${weekId}/shopping/bought`),
+    onSuccess: () =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: shoppingKeys.list(weekId) }),
+        qc.invalidateQueries({ queryKey: pantryKeys.lists() }),
+      ]),
+  });
+}

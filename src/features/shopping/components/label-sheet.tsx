@@ -1,0 +1,76 @@
+import { LABEL_SHEETS, labelPosition, pagesOf, type LabelSheetCode } from '@shared/domain/label-sheets';
+import { REHEAT_MIN_C, REHEAT_MIN_F } from '@shared/domain/eat-by';
+import type { ContainerLabelDto } from '@shared/schemas/shopping.schema';
+
+const fmt = (iso: string) =>
+  new Date(`${iso}T12:00:00Z`).toLocaleDateString([], { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' });
+
+function Label({ label, small }: { label: ContainerLabelDto; small: boolean }) {
+  const m = label.macros;
+  return (
+    <div className={`flex h-full gap-[2%] overflow-hidden p-[4%] leading-tight text-black ${small ? 'text-[6.5pt]' : 'text-[8.5pt]'}`}>
+      <div className="flex min-w-0 flex-1 flex-col gap-[1px]">
+        <p className={`truncate font-bold ${small ? 'text-[8pt]' : 'text-[11pt]'}`}>{label.title}</p>
+        <p className="truncate">{label.subtitle}</p>
+        <p>
+          Made <b>{fmt(label.madeOn)}</b> · Eat by <b>{fmt(label.eatBy)}</b>
+        </p>
+        {label.freezeBy && <p>{label.freezeBy.startsWith('Frozen') ? label.freezeBy : <>Freeze by <b>{fmt(label.freezeBy)}</b></>}</p>}
+        <p className="truncate">
+          Reheat: {label.reheat ?? 'until hot'} — to {REHEAT_MIN_F} °F ({REHEAT_MIN_C} °C)
+        </p>
+        {m ? (
+          <p className="num">
+            {m.calories} kcal · fat {m.fat} · carb {m.carbohydrate} · protein {m.protein} · net carb {m.netCarbs}
+          </p>
+        ) : (
+          <p>Macros: incomplete (a line cannot be weighed)</p>
+        )}
+        <p className="truncate font-bold">{label.allergenText}</p>
+      </div>
+      <img src={label.qr} alt={`QR code to ${label.url}`} className={`${small ? 'w-[14mm]' : 'w-[0.95in]'} shrink-0 self-center`} />
+    </div>
+  );
+}
+
+/**
+ * The sheet at real size: one page per sheet, labels placed by the sheet's geometry. Print at 100 % (actual size).
+ */
+export function LabelSheet({ layout, labels }: { layout: LabelSheetCode; labels: ContainerLabelDto[] }) {
+  const sheet = LABEL_SHEETS[layout];
+  const u = sheet.unit;
+  const pages = pagesOf(labels, sheet);
+  return (
+    <>
+      <style>{`@page { size: ${sheet.page.cssSize}; margin: 0; } @media print { #main { padding: 0 !important; margin: 0 !important; max-width: none !important; } .label-page { box-shadow: none !important; margin: 0 !important; break-after: page; } .label-page:last-child { break-after: auto; } }`}</style>
+      <div className="flex flex-col items-center gap-6 overflow-x-auto print:block print:gap-0">
+        {pages.map((page, p) => (
+          <div
+            key={p}
+            className="label-page relative shrink-0 bg-white shadow-tray"
+            style={{ width: `${sheet.page.width}${u}`, height: `${sheet.page.height}${u}` }}
+            aria-label={`Sheet ${p + 1} of ${pages.length}`}
+          >
+            {page.map((label, i) => {
+              const pos = labelPosition(sheet, i);
+              return (
+                <div
+                  key={i}
+                  className="absolute rounded-[2mm] outline outline-1 outline-dashed outline-line print:outline-0"
+                  style={{
+                    left: `${pos.x.toNumber()}${u}`,
+                    top: `${pos.y.toNumber()}${u}`,
+                    width: `${sheet.label.width}${u}`,
+                    height: `${sheet.label.height}${u}`,
+                  }}
+                >
+                  <Label label={label} small={layout === 'a4-3x7'} />
+                </div>
+              );
+            })}
+          </div>
+        ))}
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,126 @@
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useQuery } from '@tanstack/react-query';
+import type { IngredientDto } from '@shared/schemas/ingredients.schema';
+import {
+  pantryCreateSchema,
+  type PantryCreateInput,
+  type PantryCreateValues,
+  type PantryItemDto,
+} from '@shared/schemas/shopping.schema';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/states';
+import { applyServerErrors } from '@/lib/form-errors';
+import { errorMessage, isApiError } from '@/lib/problem';
+import { pantryIngredientSearchQuery } from '../api/shopping.queries';
+import { useCreatePantryItem, useDeletePantryItem, useUpdatePantryItem } from '../api/use-pantry-mutations';
+
+const MASS = ['g', 'kg', 'oz', 'lb'];
+const VOLUME = ['ml', 'l', 'tsp', 'tbsp', 'cup', 'pint', 'quart'];
+
+/** Units an ingredient can be counted in: mass always, volume with a density, its pieces. */
+export function unitsFor(ing: Pick<IngredientDto, 'densityGPerMl' | 'pieceWeights' | 'purchase'> | null): string[] {
+  if (!ing) return MASS;
+  const pieces = Object.keys(ing.pieceWeights ?? {});
+  const purchasePiece = ing.purchase && !MASS.includes(ing.purchase.unit) && !VOLUME.includes(ing.purchase.unit) ? [ing.purchase.unit] : [];
+  return [...new Set([...purchasePiece, ...pieces, ...MASS, ...(ing.densityGPerMl ? VOLUME : [])])];
+}
+
+export function AddPantryItem() {
+  const [search, setSearch] = useState('');
+  const results = useQuery(pantryIngredientSearchQuery(search.trim()));
+  const create = useCreatePantryItem();
+  const [formError, setFormError] = useState<string | null>(null);
+  const form = useForm<PantryCreateInput, unknown, PantryCreateValues>({
+    resolver: zodResolver(pantryCreateSchema),
+    defaultValues: { ingredientId: '' as unknown as number, amount: '', unit: 'g' },
+  });
+  const chosenId = Number(form.watch('ingredientId'));
+  const chosen = results.data?.items.find((i) => i.id === chosenId) ?? null;
+  const submit = form.handleSubmit((values) => {
+    setFormError(null);
+    create.mutate(values, {
+      onSuccess: () => form.reset({ ingredientId: '' as unknown as number, amount: '', unit: 'g' }),
+      onError: (e) => setFormError(isApiError(e, 409) ? errorMessage(e) : applyServerErrors(e, form.setError)),
+    });
+  });
+  const err = form.formState.errors;
+  return (
+    <form onSubmit={submit} className="grid gap-3 sm:grid-cols-2" noValidate>
+      <TextField label="Find an ingredient" value={search} onChange={(e) => setSearch(e.target.value)} placeholder="eggs, cream cheese…" />
+      <SelectField label="Ingredient" error={err.ingredientId?.message} {...form.register('ingredientId')}>
+        <option value="">Choose…</option>
+        {results.data?.items.map((i) => (
+          <option key={i.id} value={i.id}>
+            {i.name}
+          </option>
+        ))}
+      </SelectField>
+      <TextField label="Amount on hand" inputMode="decimal" error={err.amount?.message} {...form.register('amount')} />
+      <SelectField label="Unit" error={err.unit?.message} {...form.register('unit')}>
+        {unitsFor(chosen).map((u) => (
+          <option key={u} value={u}>
+            {u}
+          </option>
+        ))}
+      </SelectField>
+      {formError && (
+        <div className="sm:col-span-2">
+          <Notice tone="warn">{formError}</Notice>
+        </div>
+      )}
+      <div className="sm:col-span-2">
+        <Button type="submit" busy={create.isPending}>
+          Add to pantry
+        </Button>
+      </div>
+    </form>
+  );
+}
+
+/** One pantry row: change the amount (in any unit the ingredient knows) or remove it. */
+export function PantryRow({ item }: { item: PantryItemDto }) {
+  const update = useUpdatePantryItem();
+  const remove = useDeletePantryItem();
+  const [amount, setAmount] = useState(String(Math.round(item.amount * 100) / 100));
+  const [unit, setUnit] = useState(item.unit);
+  const [error, setError] = useState<string | null>(null);
+  const units = [...new Set([item.unit, ...MASS])];
+  const save = () => {
+    setError(null);
+    update.mutate(
+      { id: item.id, amount, unit, version: item.version },
+      {
+        onError: (e) =>
+          setError(isApiError(e, 409) ? 'Someone changed this since you opened it: the current amount is shown.' : errorMessage(e)),
+      },
+    );
+  };
+  return (
+    <li className="flex flex-col gap-2 rounded-lg border border-line-strong bg-paper-card p-3">
+      <div className="flex items-baseline justify-between gap-2">
+        <span className="font-bold">{item.ingredientName}</span>
+        <span className="num text-ink-soft">{item.display}</span>
+      </div>
+      <div className="flex flex-wrap items-end gap-2">
+        <TextField label="Amount" className="w-32" inputMode="decimal" value={amount} onChange={(e) => setAmount(e.target.value)} />
+        <SelectField label="Unit" className="w-28" value={unit} onChange={(e) => setUnit(e.target.value)}>
+          {units.map((u) => (
+            <option key={u} value={u}>
+              {u}
+            </option>
+          ))}
+        </SelectField>
+        <Button variant="secondary" busy={update.isPending} onClick={save}>
+          Save
+        </Button>
+        <Button variant="ghost" busy={remove.isPending} onClick={() => remove.mutate(item.id)}>
+          Remove <span className="sr-only">{item.ingredientName}</span>
+        </Button>
+      </div>
+      {error && <Notice tone="warn">{error}</Notice>}
+    </li>
+  );
+}

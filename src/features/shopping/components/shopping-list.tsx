@@ -1,0 +1,81 @@
+import type { ShoppingAisleDto, ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
+import { useSetCheck } from '../api/use-shopping-mutations';
+
+export const money = (cents: number) => `$${(cents / 100).toFixed(2)}`;
+
+function buyText(item: ShoppingItemDto): string {
+  if (item.toBuy <= 0) return 'From the pantry';
+  if (item.purchase) return `${item.purchase.packages} × ${item.purchase.label}`;
+  return item.toBuyText;
+}
+
+function ItemRow({ item, onToggle }: { item: ShoppingItemDto; onToggle: (checked: boolean) => void }) {
+  const checked = item.check.checked;
+  const covered = item.toBuy <= 0;
+  return (
+    <li>
+      <label
+        className={`flex min-h-14 cursor-pointer items-start gap-3 rounded-lg border px-3 py-3 print:min-h-0 print:border-0 print:py-1 ${
+          checked ? 'border-line bg-paper-deep text-ink-faint' : 'border-line-strong bg-paper-card'
+        }`}
+      >
+        <input
+          type="checkbox"
+          className="mt-1 h-6 w-6 shrink-0 accent-herb print:hidden"
+          checked={checked}
+          onChange={(e) => onToggle(e.target.checked)}
+        />
+        <span aria-hidden className="hidden print:inline">
+          ☐
+        </span>
+        <span className="flex min-w-0 flex-1 flex-col">
+          <span className={`font-bold ${checked ? 'line-through' : ''}`}>{item.name}</span>
+          <span className={`num text-lg ${checked ? 'line-through' : ''} ${covered ? 'text-herb-700' : ''}`}>{buyText(item)}</span>
+          <span className="num text-sm text-ink-soft">
+            need {item.neededText}
+            {item.fromPantry > 0 && ` · pantry covers ${item.fromPantry === item.needed ? 'all' : 'part'}`}
+            {item.purchase && item.purchase.packages > 0 && item.purchase.spare > 0 && ` · ${item.purchase.spareText} spare`}
+          </span>
+          {checked && item.check.checkedBy && (
+            <span className="text-xs text-ink-faint print:hidden">
+              ✓ {item.check.checkedBy}
+              {item.check.checkedAt && ` at ${new Date(item.check.checkedAt).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' })}`}
+            </span>
+          )}
+        </span>
+        <span className="num shrink-0 text-right text-sm">{item.costCents !== null && item.costCents > 0 ? money(item.costCents) : ''}</span>
+      </label>
+    </li>
+  );
+}
+
+/** One aisle: unchecked items first (in name order), checked ones sink to the bottom struck through. */
+function AisleGroup({ aisle, onToggle }: { aisle: ShoppingAisleDto; onToggle: (item: ShoppingItemDto, checked: boolean) => void }) {
+  const ordered = [...aisle.items.filter((i) => !i.check.checked), ...aisle.items.filter((i) => i.check.checked)];
+  const left = aisle.items.filter((i) => !i.check.checked).length;
+  return (
+    <section aria-labelledby={`aisle-${aisle.aisle}`} className="break-inside-avoid">
+      <h2 id={`aisle-${aisle.aisle}`} className="mb-2 flex items-baseline justify-between text-xl">
+        {aisle.label}
+        <span className="num font-sans text-sm text-ink-faint print:hidden">{left ? `${left} left` : 'done'}</span>
+      </h2>
+      <ul className="flex flex-col gap-2 print:gap-0">
+        {ordered.map((item) => (
+          <ItemRow key={item.ingredientId} item={item} onToggle={(c) => onToggle(item, c)} />
+        ))}
+      </ul>
+    </section>
+  );
+}
+
+export function ShoppingList({ list, weekId }: { list: ShoppingListDto; weekId: number }) {
+  const setCheck = useSetCheck(weekId);
+  const toggle = (item: ShoppingItemDto, checked: boolean) => setCheck.mutate({ ingredientId: item.ingredientId, checked });
+  return (
+    <div className="flex flex-col gap-6 print:gap-3">
+      {list.aisles.map((a) => (
+        <AisleGroup key={a.aisle} aisle={a} onToggle={toggle} />
+      ))}
+    </div>
+  );
+}
