@@ -12,6 +12,8 @@ import { loadEnv } from '../../server/config/env.js';
 import { ormConfig } from '../../server/db/mikro-orm.config.js';
 import { createOrm } from '../../server/db/orm.js';
 import { createApp } from '../../server/app.js';
+import { createMailRuntime } from '../../server/modules/mail/mail-runtime.js';
+import { smtpFromEnv } from '../../server/modules/mail/mail-transport.js';
 import { seedAll } from '../../server/db/seeders/index.js';
 import { benchCases, type BenchCase, type BenchContext } from './cases.js';
 
@@ -72,7 +74,10 @@ await freshDatabase();
 const env = loadEnv({ ...process.env, DATABASE_URL: url, LOG_LEVEL: 'silent', SERVE_CLIENT: '0', NODE_ENV: 'production' });
 const orm = await createOrm(url);
 const pool = new pg.Pool({ connectionString: url, max: 10 });
-const app = createApp({ orm, pool, env, logger: pino({ level: 'silent' }) });
+// The mail queue without a send worker: the benchmark measures requests, not SMTP.
+const mail = createMailRuntime({ databaseUrl: url, orm, smtp: smtpFromEnv(env), work: false });
+await mail.start();
+const app = createApp({ orm, pool, env, mail, logger: pino({ level: 'silent' }) });
 const server = http.createServer(app);
 await new Promise<void>((r) => server.listen(0, '127.0.0.1', () => r()));
 const port = (server.address() as { port: number }).port;
@@ -129,6 +134,7 @@ try {
 } finally {
   server.closeAllConnections();
   await new Promise((r) => server.close(r));
+  await mail.stop();
   await orm.close(true);
   await pool.end();
 }
