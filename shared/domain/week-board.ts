@@ -104,24 +104,45 @@ export function cellPrepDate(cell: Pick<BoardCellInput, 'date' | 'prepDate'>, pr
   return supplyingPrepDate(cell.date, sorted) ?? sorted[0];
 }
 
-function cellPortions(cell: BoardCellInput, plate: BoardPlate, input: BoardInput): CellPortionResult[] {
-  const prepDate = cellPrepDate(cell, input.prepDates);
+/**
+ * Per-board memo: a board repeats the same few (day, prep date, tray, storage) combinations hundreds of times, so
+ * each eat-by answer is computed once (the date arithmetic dominates the cost of a large board).
+ */
+interface Memo {
+  prep: Map<string, IsoDate>;
+  portion: Map<string, Omit<CellPortionResult, 'trayId'>>;
+}
+
+function memoPrepDate(memo: Memo, cell: Pick<BoardCellInput, 'date' | 'prepDate'>, prepDates: readonly IsoDate[]): IsoDate {
+  const key = `${cell.date}|${cell.prepDate ?? ''}`;
+  let v = memo.prep.get(key);
+  if (v === undefined) memo.prep.set(key, (v = cellPrepDate(cell, prepDates)));
+  return v;
+}
+
+function cellPortions(cell: BoardCellInput, plate: BoardPlate, input: BoardInput, memo: Memo): CellPortionResult[] {
+  const prepDate = memoPrepDate(memo, cell, input.prepDates);
   const out: CellPortionResult[] = [];
   for (const part of plate.trays) {
     const tray = input.trays.get(part.trayId);
     if (!tray) continue;
-    const { status, eatBy } = portionStatus({ plannedDate: cell.date, prepDate, fridgeDays: tray.fridgeDays });
-    const remedies =
-      cell.storage === 'frozen'
-        ? []
-        : eatByRemedies({
-            plannedDate: cell.date,
-            prepDate,
-            fridgeDays: tray.fridgeDays,
-            freezerWeeks: tray.freezerWeeks,
-            weekPrepDates: input.prepDates,
-          });
-    out.push({ trayId: part.trayId, prepDate, eatBy, status, storage: cell.storage, remedies });
+    const key = `${cell.date}|${prepDate}|${tray.fridgeDays}|${tray.freezerWeeks}|${cell.storage}`;
+    let r = memo.portion.get(key);
+    if (!r) {
+      const { status, eatBy } = portionStatus({ plannedDate: cell.date, prepDate, fridgeDays: tray.fridgeDays });
+      const remedies =
+        cell.storage === 'frozen' || status === 'ok'
+          ? []
+          : eatByRemedies({
+              plannedDate: cell.date,
+              prepDate,
+              fridgeDays: tray.fridgeDays,
+              freezerWeeks: tray.freezerWeeks,
+              weekPrepDates: input.prepDates,
+            });
+      memo.portion.set(key, (r = { prepDate, eatBy, status, storage: cell.storage, remedies }));
+    }
+    out.push({ trayId: part.trayId, ...r });
   }
   return out;
 }
@@ -132,12 +153,13 @@ export function computeBoard(input: BoardInput): BoardResult {
   const byDay = new Map<string, { client: BoardClient; date: IsoDate; cells: CheckCell[] }>();
   const cellResults: CellResult[] = [];
   const inventoryCells: BoardCell[] = [];
+  const memo: Memo = { prep: new Map(), portion: new Map() };
 
   for (const cell of input.cells) {
     const client = clients.get(cell.clientId);
     const plate = input.plates.get(cell.assemblyId);
     if (!client || !plate) continue;
-    const portions = cellPortions(cell, plate, input);
+    const portions = cellPortions(cell, plate, input, memo);
     cellResults.push({ clientId: cell.clientId, date: cell.date, slot: cell.slot, portions });
 
     const key = `${cell.clientId}|${cell.date}`;
@@ -163,7 +185,7 @@ export function computeBoard(input: BoardInput): BoardResult {
       householdMultiplier: client.householdMultiplier,
       portions: plate.trays
         .filter((t) => input.trays.has(t.trayId))
-        .map((t) => ({ trayId: String(t.trayId), quantity: t.portions, prepDate: portions[0]?.prepDate ?? cellPrepDate(cell, input.prepDates) })),
+        .map((t) => ({ trayId: String(t.trayId), quantity: t.portions, prepDate: portions[0]?.prepDate ?? memoPrepDate(memo, cell, input.prepDates) })),
     });
   }
 

@@ -1,0 +1,71 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { computeBoard, coveringBatches, type BoardInput } from '@shared/domain/week-board';
+import { addDays } from '@shared/domain/iso-date';
+
+const START = '2026-01-05'; // Monday
+const DAYS = Array.from({ length: 7 }, (_, i) => addDays(START, i));
+
+function board(over: Partial<BoardInput> = {}): BoardInput {
+  return {
+    prepDates: ['2026-01-04'],
+    clients: [{ id: 1, householdMultiplier: '1', targets: { targetKcal: 600, netCarbCapG: 6, proteinG: 30, fatG: 45 }, allergens: [], dislikes: [] }],
+    plates: new Map([[10, { id: 10, macros: { kcal: 500, netCarbsG: 4, proteinG: 30, fatG: 40 }, allergens: [], terms: ['egg slab'], trays: [{ trayId: 7, portions: '1' }] }]]),
+    // 4 fridge days: USDA FSIS FoodKeeper, egg dishes 3–4 days refrigerated (published-values §6b); 16 portions a tray.
+    trays: new Map([[7, { id: 7, fridgeDays: 4, freezerWeeks: 8, portionsPerTray: 16 }]]),
+    cells: DAYS.map((date) => ({ clientId: 1, date, slot: 'breakfast', assemblyId: 10, prepDate: null, storage: 'fridge' as const, allergenOverrides: [] })),
+    batches: [],
+    ...over,
+  };
+}
+
+describe('computeBoard', () => {
+  it('eat-by follows the FSIS 3–4 day refrigerator time: Sunday prep is good through Thursday', () => {
+    // USDA FSIS FoodKeeper / Cold Food Storage chart: cooked egg dishes 3–4 days at 40 °F or below; prep day = day 0.
+    const r = computeBoard(board());
+    const byDate = new Map(r.cells.map((c) => [c.date, c.portions[0]]));
+    expect(DAYS.map((d) => byDate.get(d)!.status)).toEqual(['ok', 'ok', 'ok', 'ok', 'past-eat-by', 'past-eat-by', 'past-eat-by']);
+    expect(byDate.get('2026-01-09')!.eatBy).toBe('2026-01-08');
+    expect(byDate.get('2026-01-09')!.remedies.map((x) => x.kind)).toEqual(['freeze-and-thaw']);
+    expect(r.warnings.filter((w) => w.kind === 'past-eat-by').map((w) => w.severity)).toEqual(['block', 'block', 'block']);
+  });
+
+  it('a second prep date supplies the end of the week', () => {
+    const r = computeBoard(board({ prepDates: ['2026-01-04', '2026-01-07'] }));
+    expect(r.cells.every((c) => c.portions[0].status === 'ok')).toBe(true);
+    // Portions are counted per prep date: Mon–Tue from Sunday (2), Wed–Sun from Wednesday (5).
+    expect(r.inventory[0].byPrepDate.map((p) => [p.prepDate, p.needed])).toEqual([
+      ['2026-01-04', 2],
+      ['2026-01-07', 5],
+    ]);
+  });
+
+  it('frozen cells carry no eat-by block (freeze on prep day, thaw the evening before)', () => {
+    const b = board();
+    const r = computeBoard({ ...b, cells: b.cells.map((c) => ({ ...c, storage: 'frozen' as const })) });
+    expect(r.warnings.filter((w) => w.severity === 'block')).toEqual([]);
+  });
+
+  // Inventory arithmetic (hand-checked): 7 plates × household 3 = 21 portions; 16 a tray → ceil(21/16) = 2 trays.
+  it('counts plates × household multiplier and proposes whole trays', () => {
+    const b = board({ clients: [{ ...board().clients[0], householdMultiplier: '3' }] });
+    expect(computeBoard(b).inventory[0]).toMatchObject({ needed: 21, produced: 0, short: 21, traysToCover: 2 });
+    expect(coveringBatches(b)).toEqual([{ trayId: 7, prepDate: '2026-01-04', trayCount: 2 }]);
+  });
+
+  it('property: the proposed tray counts always cover the need, with less than one tray spare per prep date', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.constantFrom('0.5', '1', '1.5', '2', '3'), { minLength: 1, maxLength: 6 }),
+        fc.integer({ min: 1, max: 24 }),
+        (households, perTray) => {
+          const clients = households.map((h, i) => ({ ...board().clients[0], id: i + 1, householdMultiplier: h }));
+          const cells = clients.flatMap((c) => DAYS.slice(0, 4).map((date) => ({ ...board().cells[0], clientId: c.id, date })));
+          const input = board({ clients, cells, trays: new Map([[7, { id: 7, fridgeDays: 4, freezerWeeks: 8, portionsPerTray: perTray }]]) });
+          const covered = computeBoard({ ...input, batches: coveringBatches(input) }).inventory[0];
+          return covered.short === 0 && covered.spare < perTray;
+        },
+      ),
+    );
+  });
+});
