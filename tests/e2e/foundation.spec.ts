@@ -24,7 +24,7 @@ test('signed out, a deep link goes to sign-in and comes back after signing in', 
 
 test('navigation follows the role: the assistant has no team page', async ({ page }) => {
   await signIn(page, 'assistant@trayline.test');
-  await expect(page.getByRole('link', { name: 'Team & clients' })).toHaveCount(0);
+  await expect(page.getByRole('link', { name: 'Team' })).toHaveCount(0);
   await page.screenshot({ path: `${SHOTS}/assistant-home.png`, fullPage: true });
   await page.goto('/team');
   await expect(page.getByRole('heading', { name: 'Nothing on this tray' })).toBeVisible();

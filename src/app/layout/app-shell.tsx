@@ -1,68 +1,125 @@
-import { Suspense, useState } from 'react';
-import { NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { Suspense, useEffect, useState } from 'react';
+import { NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { useLogout } from '@/features/auth/api/use-auth-mutations';
 import { PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
-import { NAV } from '../nav';
+import { NAV, NAV_GROUPS, type NavItem } from '../nav';
 
+const ROLE_WORDS = { coach: 'Coach', assistant: 'Kitchen assistant', client: 'Client' } as const;
+
+/**
+ * The signed-in frame: a grouped side rail on wide screens, a top bar with a drawer on phones.
+ * The navigation lists only what the person's role may open.
+ */
 export function AppShell() {
   const me = useMe();
   const logout = useLogout();
   const navigate = useNavigate();
+  const location = useLocation();
   const [open, setOpen] = useState(false);
+  useEffect(() => setOpen(false), [location.pathname]);
   const items = NAV.filter((n) => n.roles.includes(me.role));
   const signOut = () => logout.mutate(undefined, { onSuccess: () => navigate(paths.signIn) });
+  const nav = <NavGroups items={items} />;
   return (
-    <div className="min-h-screen">
+    <div className="min-h-screen md:grid md:grid-cols-[15rem_minmax(0,1fr)]">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-paper-card focus:p-2">
         Skip to content
       </a>
-      <header className="no-print sticky top-0 z-30 border-b border-line bg-paper/95 backdrop-blur">
-        <div className="mx-auto flex max-w-7xl items-center gap-3 px-4 py-2">
-          <NavLink to={paths.home} className="flex items-center gap-2 font-display text-2xl text-ink" aria-label="Trayline home">
-            <TrayMark />
-            Trayline
-          </NavLink>
-          <span className="hidden truncate text-sm text-ink-faint md:inline">{me.workspaceName}</span>
-          <button
-            type="button"
-            className="ml-auto min-h-11 rounded-lg border border-line-strong px-3 font-bold md:hidden"
-            aria-expanded={open}
-            aria-controls="main-nav"
-            onClick={() => setOpen((o) => !o)}
-          >
-            Menu
-          </button>
-          <nav id="main-nav" aria-label="Main" className={`${open ? 'flex' : 'hidden'} absolute left-0 right-0 top-full flex-col gap-1 border-b border-line bg-paper p-3 md:static md:ml-auto md:flex md:flex-row md:items-center md:border-0 md:p-0`}>
-            {items.map((item) => (
-              <NavLink
-                key={item.to}
-                to={item.to}
-                end={item.to === paths.home}
-                onClick={() => setOpen(false)}
-                className={({ isActive }) =>
-                  `rounded-lg px-3 py-2 font-bold ${isActive ? 'bg-ink text-paper-card' : 'text-ink hover:bg-paper-deep'}`
-                }
-              >
-                {item.label}
-              </NavLink>
-            ))}
-            <button type="button" onClick={signOut} className="rounded-lg px-3 py-2 text-left font-bold text-ink-soft hover:bg-paper-deep">
-              Sign out <span className="sr-only">{me.name}</span>
-            </button>
-          </nav>
-        </div>
+      {/* Phone top bar */}
+      <header className="no-print sticky top-0 z-30 flex items-center gap-2 border-b border-line bg-paper/95 px-4 py-2 backdrop-blur md:hidden">
+        <Brand />
+        <button
+          type="button"
+          className="ml-auto min-h-11 rounded-lg border border-line-strong px-4 font-bold"
+          aria-expanded={open}
+          aria-controls="phone-nav"
+          onClick={() => setOpen((o) => !o)}
+        >
+          Menu
+        </button>
       </header>
-      <main id="main" className="mx-auto max-w-7xl px-4 py-6">
-        <Suspense fallback={<PageSkeleton />}>
-          <Outlet />
-        </Suspense>
-      </main>
-      <footer className="no-print mx-auto max-w-7xl px-4 pb-8 text-xs text-ink-faint">
-        Trayline plans food; it does not replace your local food code or a licensed professional.
-      </footer>
+      {open && (
+        <div id="phone-nav" className="no-print fixed inset-x-0 top-[57px] bottom-0 z-30 overflow-y-auto bg-paper p-4 md:hidden">
+          <nav aria-label="Main">{nav}</nav>
+          <SignOut name={me.name} role={ROLE_WORDS[me.role]} onSignOut={signOut} />
+        </div>
+      )}
+      {/* Wide side rail */}
+      <aside className="no-print sticky top-0 hidden h-screen flex-col gap-4 overflow-y-auto border-r border-line bg-paper-deep/60 px-3 py-4 md:flex">
+        <Brand />
+        <p className="px-2 text-xs text-ink-faint">{me.workspaceName}</p>
+        <nav aria-label="Main" className="flex-1">
+          {nav}
+        </nav>
+        <SignOut name={me.name} role={ROLE_WORDS[me.role]} onSignOut={signOut} />
+      </aside>
+      <div className="min-w-0">
+        <main id="main" className="mx-auto max-w-7xl px-4 py-6 md:px-8">
+          <Suspense fallback={<PageSkeleton />}>
+            <Outlet />
+          </Suspense>
+        </main>
+        <footer className="no-print mx-auto max-w-7xl px-4 pb-8 text-xs text-ink-faint md:px-8">
+          Trayline plans food; it does not replace your local food code or a licensed professional.
+        </footer>
+      </div>
     </div>
+  );
+}
+
+function NavGroups({ items }: { items: NavItem[] }) {
+  return (
+    <div className="flex flex-col gap-4">
+      {NAV_GROUPS.map((g) => {
+        const inGroup = items.filter((i) => (i.group ?? 'account') === g.id);
+        if (inGroup.length === 0) return null;
+        return (
+          <div key={g.id}>
+            <p className="mb-1 px-2 text-xs font-bold uppercase tracking-wider text-ink-faint">{g.label}</p>
+            <ul className="flex flex-col gap-0.5">
+              {inGroup.map((item) => (
+                <li key={item.to}>
+                  <NavLink
+                    to={item.to}
+                    end={item.to === paths.home}
+                    className={({ isActive }) =>
+                      `flex min-h-11 items-center rounded-lg px-3 font-bold md:min-h-9 ${
+                        isActive ? 'bg-ink text-paper-card' : 'text-ink hover:bg-paper-deep'
+                      }`
+                    }
+                  >
+                    {item.label}
+                  </NavLink>
+                </li>
+              ))}
+            </ul>
+          </div>
+        );
+      })}
+    </div>
+  );
+}
+
+function SignOut({ name, role, onSignOut }: { name: string; role: string; onSignOut: () => void }) {
+  return (
+    <div className="mt-4 border-t border-line pt-3">
+      <p className="px-2 text-sm font-bold">{name}</p>
+      <p className="px-2 text-xs text-ink-faint">{role}</p>
+      <button type="button" onClick={onSignOut} className="mt-1 min-h-11 w-full rounded-lg px-2 text-left font-bold text-ink-soft hover:bg-paper-deep md:min-h-9">
+        Sign out
+      </button>
+    </div>
+  );
+}
+
+function Brand() {
+  return (
+    <NavLink to={paths.home} className="flex items-center gap-2 px-2 font-display text-2xl text-ink" aria-label="Trayline home">
+      <TrayMark />
+      Trayline
+    </NavLink>
   );
 }
 
