@@ -4,7 +4,7 @@ import type { Express } from 'express';
 import { verify } from '@node-rs/argon2';
 import pg from 'pg';
 import { agentFor, testApp } from '../support/test-app.js';
-import { coachWorkspace, member, PASSWORD, uniq } from '../support/factories.js';
+import { coachWorkspace, makeClient, member, PASSWORD, uniq } from '../support/factories.js';
 import { TEST_DATABASE_URL } from '../support/db.js';
 
 let app: Express;
@@ -146,5 +146,20 @@ describe('invitations', () => {
     expect(bad.body.errors.currentPassword).toBeDefined();
     await coach.agent.post('/api/auth/password').send({ currentPassword: PASSWORD, newPassword: 'another-long-password' }).expect(204);
     await agentFor(app).post('/api/auth/login').send({ email: coach.email, password: 'another-long-password' }).expect(200);
+  });
+});
+
+describe('client invitations', () => {
+  it('refuses to link a client profile of another workspace (400 naming clientId)', async () => {
+    const coachA = await coachWorkspace(app);
+    const coachB = await coachWorkspace(app);
+    const client = await makeClient(coachB);
+    const res = await coachA.agent
+      .post('/api/invitations')
+      .send({ email: `${uniq('c')}@example.test`, role: 'client', clientId: client.id });
+    expect(res.status).toBe(400);
+    expect(res.body.errors.clientId).toBeDefined();
+    const [row] = await sql<{ n: string }>('select count(*)::text as n from invitation where client_id = $1', [client.id]);
+    expect(row.n).toBe('0');
   });
 });

@@ -11,6 +11,7 @@ import type {
   UpdatePreferencesInput,
 } from '@shared/schemas/auth.schema.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
+import { loadClients } from '../clients/client.service.js';
 import { Invitation, Membership, PasswordReset, User, type IUser } from './user.entity.js';
 import { burnVerify, hashPassword, verifyPassword } from './passwords.js';
 import { hashToken, newToken } from './tokens.js';
@@ -89,8 +90,11 @@ export async function createInvitation(
   publicUrl: string,
   mail: MailQueue,
 ) {
-  if (input.role === 'client' && input.clientId === undefined) {
-    // A client invitation without a profile is allowed: the coach links it later.
+  if (input.clientId !== undefined) {
+    // The client profile must be one of this workspace's (another workspace's id reads as unknown).
+    if (input.role !== 'client') throw ValidationError.field('clientId', 'Only a client invitation links a client profile');
+    const [client] = await loadClients(em, actor.workspaceId, [input.clientId]);
+    if (!client) throw ValidationError.field('clientId', 'No such client in your workspace');
   }
   const existing = await em.findOne(Membership, { workspace: actor.workspaceId, user: { email: input.email } });
   if (existing) {
