@@ -10,6 +10,7 @@ import { workspaceSettingsRoutes } from './workspaces/workspace-settings.routes.
 import { clientRoutes } from './clients/client.routes.js';
 import { assemblyRoutes } from './assemblies/assembly.routes.js';
 import { weekRoutes } from './weeks/week.routes.js';
+import { weekMailRoutes } from './weeks/week-mail.routes.js';
 import { trayRoutes } from './trays/trays.routes.js';
 import { bakeRunRoutes } from './bake-runs/bake-run.routes.js';
 import { pantryRoutes } from './shopping/pantry.routes.js';
@@ -24,5 +25,5 @@ export interface ModuleDeps {
 }
 
 export function apiModules(deps: ModuleDeps): Router[] {
-  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), shoppingRoutes({ publicUrl: deps.env.PUBLIC_URL }), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), bakeRunRoutes(), mailRoutes({ mail: deps.mail, env: deps.env })];
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), shoppingRoutes({ publicUrl: deps.env.PUBLIC_URL }), weekMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), bakeRunRoutes(), mailRoutes({ mail: deps.mail, env: deps.env })];
 }

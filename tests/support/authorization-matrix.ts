@@ -153,6 +153,14 @@ export const MATRIX: Record<string, MatrixRow> = {
   }),
   'POST /api/weeks/:id/publish': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/publish`, body: () => ({ version: 999 }), crossWorkspace: true }),
   'GET /api/weeks/:id/publications': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/publications`, crossWorkspace: true }),
+  // Sending a week, delivery log, week-plan PDFs (issue 9)
+  'GET /api/weeks/mine/plan.pdf': R(['client']),
+  'POST /api/weeks/:weekId/send': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/send`, body: () => ({ note: 'Matrix' }), crossWorkspace: true }),
+  'GET /api/weeks/:weekId/clients/:clientId/plan.pdf': R(['coach'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.week}/clients/${ctx.ids.client}/plan.pdf`,
+    crossWorkspace: true,
+  }),
+  'GET /api/clients/:clientId/deliveries': R(['coach'], { path: (ctx) => `/api/clients/${ctx.ids.client}/deliveries`, crossWorkspace: true }),
   // Ingredients, recipe calculation, workspace settings (issue 4)
   'GET /api/ingredients': R(['coach', 'assistant']),
   'POST /api/ingredients': R(['coach'], { body: () => ingredientInput() }),

@@ -1,0 +1,60 @@
+import { Router } from 'express';
+import {
+  clientDeliveriesParams,
+  deliveriesQuerySchema,
+  sendWeekSchema,
+  weekClientPlanParams,
+  weekSendParams,
+} from '@shared/schemas/week-mail.schema.js';
+import { actorOf, allow } from '../../http/authz.js';
+import { emOf } from '../../http/request-context.js';
+import { validated } from '../../http/validate.js';
+import type { MailQueue } from '../mail/mail.service.js';
+import type { RenderedPdf } from '../mail/pdf-registry.js';
+import { clientDeliveries, coachPlanPdf, myPlanPdf, sendWeek } from './week-mail.service.js';
+import type { Response } from 'express';
+
+function sendPdf(res: Response, pdf: RenderedPdf) {
+  res.type('application/pdf').attachment(pdf.filename).setHeader('cache-control', 'private, no-store');
+  res.send(pdf.buffer);
+}
+
+/** Sending a published week to clients, the delivery log, and the week-plan PDF downloads. */
+export function weekMailRoutes(deps: { mail: MailQueue; publicUrl: string }) {
+  const r = Router();
+
+  // Fixed path before any '/weeks/:id…': the signed-in client's own current published week.
+  r.get(
+    '/weeks/mine/plan.pdf',
+    allow('client'),
+    validated({}, async (_i, req, res) => sendPdf(res, await myPlanPdf(emOf(req), actorOf(req)))),
+  );
+
+  r.post(
+    '/weeks/:weekId/send',
+    allow('coach'),
+    validated({ params: weekSendParams, body: sendWeekSchema }, async ({ params, body }, req, res) => {
+      const out = await sendWeek(emOf(req), deps.mail, actorOf(req), params.weekId, body, { publicUrl: deps.publicUrl });
+      res.status(202);
+      return out;
+    }),
+  );
+
+  r.get(
+    '/weeks/:weekId/clients/:clientId/plan.pdf',
+    allow('coach'),
+    validated({ params: weekClientPlanParams }, async ({ params }, req, res) =>
+      sendPdf(res, await coachPlanPdf(emOf(req), actorOf(req), params.weekId, params.clientId)),
+    ),
+  );
+
+  r.get(
+    '/clients/:clientId/deliveries',
+    allow('coach'),
+    validated({ params: clientDeliveriesParams, query: deliveriesQuerySchema }, ({ params, query }, req) =>
+      clientDeliveries(emOf(req), actorOf(req), params.clientId, query.limit),
+    ),
+  );
+
+  return r;
+}

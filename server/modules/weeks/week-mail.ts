@@ -1,0 +1,113 @@
+import Decimal from 'decimal.js';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { CAUTIONS } from '@shared/domain/eat-by.js';
+import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema.js';
+import type { PdfMacros, WeekPlanPdfData, WeekPlanPdfDay } from '@shared/schemas/pdf.schema.js';
+import { NotFound } from '../../http/errors.js';
+import { registerPdf, type RenderedPdf } from '../mail/pdf-registry.js';
+import { renderWeekPlanPdf } from '../pdf/week-plan.pdf.js';
+import { longDate } from '../pdf/pdf-format.js';
+import { Client, type IClient } from '../clients/client.entity.js';
+import { plannedTargets } from '../clients/client.presenter.js';
+import { mealSlotsOf } from '../clients/client.service.js';
+import { Workspace } from '../workspaces/workspace.entity.js';
+import { Week, WeekPublication } from './week.entity.js';
+
+/**
+ * The week-plan PDF: one client's days from a PUBLISHED snapshot (what the client reads on "my plates"), never
+ * from the live board. The mail job renders it at send time from `{ weekId, clientId, publicationVersion }`.
+ */
+export interface WeekPlanPayload {
+  weekId: number;
+  clientId: number;
+  publicationVersion: number;
+  note?: string | null;
+}
+
+export const WEEK_PLAN_PDF = 'week-plan';
+
+function macros(m: MyPlateDto['macros']): PdfMacros {
+  return { kcal: m.kcal, fatG: m.fatG, proteinG: m.proteinG, netCarbsG: m.netCarbsG, carbsG: m.carbsG };
+}
+
+function plateNotes(p: MyPlateDto): string[] {
+  const notes: string[] = [];
+  if (p.storage === 'frozen' && p.thawOn) notes.push(`Frozen: move it from the freezer to the fridge on the evening of ${longDate(p.thawOn)}.`);
+  if (p.allergens.length) notes.push(`Contains: ${p.allergens.join(', ')}.`);
+  if (p.addOns.length) notes.push(`Add: ${p.addOns.map((a) => `${a.amountText} ${a.unit} ${a.name}`.trim()).join('; ')}.`);
+  return notes;
+}
+
+/** The snapshot's days as the PDF lays them out; portions per plate = the client's household multiplier. */
+export function pdfDays(days: readonly MyDayDto[], householdMultiplier: Decimal.Value): WeekPlanPdfDay[] {
+  const portions = new Decimal(householdMultiplier).toString();
+  return days.map((d) => ({
+    date: d.date,
+    slots: d.plates.map((p) => ({
+      slot: p.slot,
+      plateName: p.name,
+      portions,
+      assemblySteps: p.assemblySteps,
+      reheatSteps: p.reheatSteps.length ? p.reheatSteps : [...new Set(p.trays.flatMap((t) => t.reheatSteps))],
+      macros: macros(p.macros),
+      eatBy: p.eatBy,
+      notes: plateNotes(p),
+    })),
+    totals: macros(d.totals),
+  }));
+}
+
+export interface PublishedPlan {
+  data: WeekPlanPdfData;
+  client: IClient;
+  weekName: string;
+  startDate: string;
+}
+
+/**
+ * One client's plan from publication `publicationVersion` of the week, scoped to the week's workspace (the client
+ * must belong to it). NotFound when the publication, the client or their plates in it are missing.
+ */
+export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, workspaceId?: number): Promise<PublishedPlan> {
+  const week = await em.findOne(Week, { id: p.weekId, ...(workspaceId ? { workspace: workspaceId } : {}) });
+  if (!week) throw new NotFound('Week');
+  const wsId = week.workspace.id;
+  const pub = await em.findOne(WeekPublication, { week: week.id, number: p.publicationVersion });
+  if (!pub) throw new NotFound('Published week');
+  const client = await em.findOne(Client, { id: p.clientId, workspace: wsId });
+  if (!client) throw new NotFound('Client');
+  const mine = pub.snapshot.clients[String(client.id)];
+  if (!mine?.days.length) throw new NotFound("This client's plates in the published week");
+  const ws = await em.findOneOrFail(Workspace, wsId);
+  const t = plannedTargets(client, await mealSlotsOf(em, wsId));
+  return {
+    client,
+    weekName: pub.snapshot.name,
+    startDate: pub.snapshot.startDate,
+    data: {
+      businessName: ws.name,
+      clientName: client.name,
+      weekStart: pub.snapshot.startDate,
+      targets: { kcal: t.targetKcal, fatG: t.fatG, proteinG: t.proteinG, netCarbsG: t.netCarbCapG },
+      days: pdfDays(mine.days, client.householdMultiplier),
+      note: p.note ?? null,
+      cautions: CAUTIONS.map((c) => ({ text: c.text, source: c.source })),
+    },
+  };
+}
+
+export async function renderPublishedPlan(em: EntityManager, p: WeekPlanPayload, workspaceId?: number): Promise<RenderedPdf> {
+  return renderWeekPlanPdf((await publishedPlan(em, p, workspaceId)).data);
+}
+
+function payloadOf(raw: Record<string, unknown>): WeekPlanPayload {
+  const n = (k: string) => {
+    const v = Number(raw[k]);
+    if (!Number.isInteger(v) || v <= 0) throw new Error(`week-plan PDF: bad ${k} in the payload`);
+    return v;
+  };
+  return { weekId: n('weekId'), clientId: n('clientId'), publicationVersion: n('publicationVersion'), note: typeof raw.note === 'string' ? raw.note : null };
+}
+
+// Wiring at import time (the routes import this file): the mail job finds the renderer by kind.
+registerPdf(WEEK_PLAN_PDF, (em, payload) => renderPublishedPlan(em as EntityManager, payloadOf(payload)));

@@ -1,0 +1,261 @@
+import { randomUUID } from 'node:crypto';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import { PDFParse } from 'pdf-parse';
+import type { Orm } from '@server/db/orm.js';
+import { startMailCatcher, type MailCatcher } from '@server/modules/mail/mail-catcher.js';
+import { startMail, type MailRuntime } from '@server/modules/mail/mail-runtime.js';
+import { agentFor, testApp } from '../support/test-app.js';
+import { coachWorkspace, makeAssembly, makeClient, makeIngredient, makeTray, makeWeek, member, uniq, type Member } from '../support/factories.js';
+import { TEST_DATABASE_URL } from '../support/db.js';
+import { freePort, sql, until } from '../support/mail-support.js';
+
+/**
+ * Sending a published prep week: one outbox row per client with an e-mail (one transaction), the send worker
+ * delivers to the in-process catcher, and the caught message carries the week-plan PDF built from the published
+ * snapshot. Amounts are invented test values.
+ */
+let app: Express;
+let orm: Orm;
+let catcher: MailCatcher | null = null;
+let worker: MailRuntime | null = null;
+
+beforeAll(async () => {
+  const t = await testApp();
+  app = t.app;
+  orm = t.orm;
+  const port = await freePort();
+  catcher = await startMailCatcher({ port, databaseUrl: TEST_DATABASE_URL });
+  worker = await startMail({
+    databaseUrl: TEST_DATABASE_URL,
+    orm,
+    smtp: { host: '127.0.0.1', port, secure: false, from: 'Trayline <no-reply@trayline.test>' },
+    retry: { retryLimit: 3, retryDelay: 1, retryBackoff: false, expireInSeconds: 10 },
+    pollingIntervalSeconds: 0.5,
+    maintenanceIntervalSeconds: 1,
+    applicationName: 'trayline-week-mail-test',
+  });
+});
+
+afterAll(async () => {
+  await worker?.stop();
+  await catcher?.stop();
+});
+
+const DAYS = ['2026-01-05', '2026-01-06'];
+
+/**
+ * A published week: Ana (e-mail) eats plate A on two days, Ben (e-mail) plate B on one day, Cy (no e-mail) plate A
+ * on one day; Dee (e-mail) has no plates. Ingredient: 350 kcal, 30 g fat, 20 g protein, 2 g carbs per 100 g.
+ */
+async function publishedWeek(coach: Member, opts: { publish?: boolean } = {}) {
+  const ing = await makeIngredient(coach, { allergens: [] });
+  // 16 oz of the ingredient per tray, cut 4 × 4 = 16 portions: 1 oz per portion.
+  const tray = await makeTray(coach, { lines: [{ ingredientId: ing.id, amountText: '16', unit: 'oz', note: '' }], yieldFactor: 1 }, ing.id);
+  const plateA = await makeAssembly(coach, tray.id, { name: uniq('Herb frittata square') });
+  const plateB = await makeAssembly(coach, tray.id, { name: uniq('Double frittata'), trays: [{ trayId: tray.id, portions: 2 }] });
+  const ana = await makeClient(coach, { name: uniq('Ana'), email: `${uniq('ana')}@example.test` });
+  const ben = await makeClient(coach, { name: uniq('Ben'), email: `${uniq('ben')}@example.test` });
+  const cy = await makeClient(coach, { name: uniq('Cy'), email: null });
+  const dee = await makeClient(coach, { name: uniq('Dee'), email: `${uniq('dee')}@example.test` });
+  const board = await makeWeek(coach);
+  const cell = (clientId: number, date: string, assemblyId: number) => ({ clientId, date, slot: 'breakfast', assemblyId });
+  const filled = await coach.agent
+    .put(`/api/weeks/${board.week.id}/cells`)
+    .send({ version: board.week.version, cells: [...DAYS.map((d) => cell(ana.id, d, plateA.id)), cell(ben.id, DAYS[0], plateB.id), cell(cy.id, DAYS[0], plateA.id)] })
+    .expect(200);
+  const trays = await coach.agent
+    .put(`/api/weeks/${board.week.id}/trays`)
+    .send({ version: filled.body.week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 1 }] })
+    .expect(200);
+  if (opts.publish !== false) {
+    await coach.agent.post(`/api/weeks/${board.week.id}/publish`).send({ version: trays.body.week.version }).expect(200);
+  }
+  return { weekId: board.week.id, plateA, plateB, ana, ben, cy, dee };
+}
+
+async function pdfText(buf: Buffer | Uint8Array): Promise<string> {
+  const parser = new PDFParse({ data: new Uint8Array(buf) });
+  const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+  await parser.destroy();
+  return text;
+}
+
+type Row = { id: number; to: string; client_id: number; status: string; batch_id: string; idempotency_key: string; note: string | null; attachments: { pdf: string; payload: Record<string, unknown> }[] };
+const rowsOfBatch = (batchId: string) => sql<Row>('select * from outbox where batch_id = $1 order by id', [batchId]);
+
+const binary = (res: { on: (e: string, f: (c?: Buffer) => void) => void }, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (c) => chunks.push(c!));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
+};
+
+describe('sending a week', () => {
+  it('to all: one e-mail per client with an e-mail on the published board; the PDF holds that client’s plates and macros', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await publishedWeek(coach);
+    const res = await coach.agent.post(`/api/weeks/${w.weekId}/send`).send({ note: 'Drink water, sleep well.' }).expect(202);
+    expect(res.body).toMatchObject({ queued: 2, publicationVersion: 1, repeated: false });
+    expect(res.body.batchId).toMatch(/^[0-9a-f-]{36}$/);
+    // Cy is on the board without an e-mail; Dee has an e-mail but no plates (not a candidate for "all").
+    expect(res.body.skipped).toEqual([{ clientId: w.cy.id, name: w.cy.name, reason: 'no-email' }]);
+
+    const rows = await rowsOfBatch(res.body.batchId);
+    expect(rows.map((r) => [r.client_id, r.to]).sort()).toEqual([[w.ana.id, w.ana.email], [w.ben.id, w.ben.email]].sort());
+    for (const r of rows) {
+      expect(r.note).toBe('Drink water, sleep well.');
+      expect(r.attachments).toEqual([{ pdf: 'week-plan', payload: { weekId: w.weekId, clientId: r.client_id, publicationVersion: 1, note: 'Drink water, sleep well.' } }]);
+    }
+
+    // The published plates as the clients read them: the PDF must show the same plates and numbers.
+    const anaMember = await member(app, coach, 'client', { clientId: w.ana.id });
+    const mine = await anaMember.agent.get('/api/weeks/mine').expect(200);
+    const anaPlate = mine.body.days[0].plates[0];
+    // By hand: 1 oz = 28.349523125 g (NIST Handbook 44, exact), × 350 kcal / 100 g = 99.2 kcal; fat 30 g / 100 g → 8.5 g.
+    expect(anaPlate.macros.kcal).toBeCloseTo(99.2, 0);
+    expect(Number(anaPlate.macros.fatG)).toBeCloseTo(8.5, 1);
+
+    const anaRow = rows.find((r) => r.client_id === w.ana.id)!;
+    await until(async () => (await sql<Row>('select status from outbox where id = $1', [anaRow.id]))[0].status === 'sent', 20_000, 'sent');
+    const [caught] = await sql<{ id: number; to: string; subject: string; text: string }>(
+      'select id, "to", subject, text from caught_mail where message_id = $1',
+      [`<${anaRow.idempotency_key}@trayline>`],
+    );
+    expect(caught.to).toBe(w.ana.email);
+    expect(caught.subject).toContain('your plates for the week of');
+    expect(caught.text).toContain('Drink water, sleep well.');
+    const [att] = await sql<{ filename: string; content_type: string; content: Buffer }>(
+      'select filename, content_type, content from caught_mail_attachment where mail_id = $1',
+      [caught.id],
+    );
+    expect(att.content_type).toBe('application/pdf');
+    expect(att.filename).toMatch(/^week-2026-01-05-.+\.pdf$/);
+    const text = await pdfText(att.content);
+    expect(text).toContain(w.plateA.name);
+    expect(text).not.toContain(w.plateB.name);
+    expect(text).toContain(w.ana.name);
+    expect(text).toContain(`${coach.email.split('@')[0]} kitchen`); // the workspace name heads the page
+    expect(text).toContain('Drink water, sleep well.');
+    // The PDF prints kcal with 0 and grams with 1 decimal place.
+    expect(text).toContain(String(Math.round(anaPlate.macros.kcal)));
+    expect(text).toContain(Number(anaPlate.macros.fatG).toFixed(1));
+    expect(text).toContain(Number(anaPlate.macros.proteinG).toFixed(1));
+
+    // Ben's e-mail carries Ben's plate (two portions of the tray: twice the numbers).
+    const benRow = rows.find((r) => r.client_id === w.ben.id)!;
+    await until(async () => (await sql<Row>('select status from outbox where id = $1', [benRow.id]))[0].status === 'sent', 20_000, 'sent');
+    const [benAtt] = await sql<{ content: Buffer }>(
+      'select a.content from caught_mail_attachment a join caught_mail m on m.id = a.mail_id where m.message_id = $1',
+      [`<${benRow.idempotency_key}@trayline>`],
+    );
+    const benText = await pdfText(benAtt.content);
+    expect(benText).toContain(w.plateB.name);
+    expect(benText).not.toContain(w.plateA.name);
+    expect(benText).toContain((Number(anaPlate.macros.fatG) * 2).toFixed(1));
+
+    // The outbox shows the batch's progress; the delivery log of Ana lists the e-mail.
+    const outbox = await coach.agent.get(`/api/outbox?batchId=${res.body.batchId}`).expect(200);
+    expect(outbox.body.total).toBe(2);
+    const log = await coach.agent.get(`/api/clients/${w.ana.id}/deliveries`).expect(200);
+    // Every e-mail of that client (the invitation of Ana's account too), newest first.
+    const ids = log.body.items.map((i: { id: number }) => i.id);
+    expect(ids).toEqual([...ids].sort((x: number, y: number) => y - x));
+    expect(log.body.items.map((i: { kind: string }) => i.kind).sort()).toEqual(['invitation', 'week-plan']);
+    const plan = log.body.items.find((i: { kind: string }) => i.kind === 'week-plan');
+    expect(plan).toMatchObject({ id: anaRow.id, to: w.ana.email, weekId: w.weekId, status: 'sent', note: 'Drink water, sleep well.', attachments: ['week-plan'] });
+    expect(plan.weekName).toContain('2026-01-05');
+  });
+
+  it('to chosen clients: skips those without an e-mail, without plates or not in the workspace', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await publishedWeek(coach);
+    const stranger = await makeClient(await coachWorkspace(app), { email: 'x@example.test' });
+    const res = await coach.agent
+      .post(`/api/weeks/${w.weekId}/send`)
+      .send({ clientIds: [w.ben.id, w.cy.id, w.dee.id, stranger.id] })
+      .expect(202);
+    expect(res.body.queued).toBe(1);
+    expect(res.body.skipped).toEqual([
+      { clientId: w.cy.id, name: w.cy.name, reason: 'no-email' },
+      { clientId: w.dee.id, name: w.dee.name, reason: 'not-on-board' },
+      { clientId: stranger.id, name: null, reason: 'unknown-client' },
+    ]);
+    const rows = await rowsOfBatch(res.body.batchId);
+    expect(rows.map((r) => r.to)).toEqual([w.ben.email]);
+    expect(rows[0].note).toBeNull();
+  });
+
+  it('a repeated request does not send twice: same requestId → same batch; same send within seconds → same batch', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await publishedWeek(coach);
+    const requestId = randomUUID();
+    const first = await coach.agent.post(`/api/weeks/${w.weekId}/send`).send({ note: 'Hi', requestId }).expect(202);
+    const again = await coach.agent.post(`/api/weeks/${w.weekId}/send`).send({ note: 'Hi', requestId }).expect(202);
+    expect(again.body).toMatchObject({ batchId: first.body.batchId, queued: 2, repeated: true });
+    // A double click without a requestId: the same week version, note and clients within the window.
+    const a = await coach.agent.post(`/api/weeks/${w.weekId}/send`).send({ note: 'Bye' }).expect(202);
+    const b = await coach.agent.post(`/api/weeks/${w.weekId}/send`).send({ note: 'Bye' }).expect(202);
+    expect(a.body.repeated).toBe(false);
+    expect(b.body).toMatchObject({ batchId: a.body.batchId, repeated: true });
+    // A different note is a new send.
+    const c = await coach.agent.post(`/api/weeks/${w.weekId}/send`).send({ note: 'Another note' }).expect(202);
+    expect(c.body.batchId).not.toBe(a.body.batchId);
+    const [n] = await sql<{ n: string }>('select count(*) as n from outbox where week_id = $1', [w.weekId]);
+    expect(Number(n.n)).toBe(6);
+  });
+
+  it('refuses an unpublished week (409), a client (403), another workspace (404) and a note over 1000 characters (400)', async () => {
+    const coach = await coachWorkspace(app);
+    const draft = await publishedWeek(coach, { publish: false });
+    const refused = await coach.agent.post(`/api/weeks/${draft.weekId}/send`).send({}).expect(409);
+    expect(refused.body.detail ?? refused.body.title).toMatch(/publish/i);
+    const [n] = await sql<{ n: string }>('select count(*) as n from outbox where week_id = $1', [draft.weekId]);
+    expect(n.n).toBe('0');
+
+    const w = await publishedWeek(coach);
+    const client = await member(app, coach, 'client', { clientId: w.ana.id });
+    await client.agent.post(`/api/weeks/${w.weekId}/send`).send({}).expect(403);
+    const other = await coachWorkspace(app);
+    await other.agent.post(`/api/weeks/${w.weekId}/send`).send({}).expect(404);
+    await other.agent.get(`/api/clients/${w.ana.id}/deliveries`).expect(404);
+    await other.agent.get(`/api/weeks/${w.weekId}/clients/${w.ana.id}/plan.pdf`).expect(404);
+    const long = await coach.agent.post(`/api/weeks/${w.weekId}/send`).send({ note: 'x'.repeat(1001) }).expect(400);
+    expect(long.body.errors['body.note'] ?? long.body.errors.note).toBeDefined();
+    const ids = await coach.agent.post(`/api/weeks/${w.weekId}/send`).send({ clientIds: ['a'] }).expect(400);
+    expect(JSON.stringify(ids.body.errors)).toContain('clientIds');
+  });
+});
+
+describe('week-plan PDF downloads', () => {
+  it('the coach downloads any client’s published plan; a client only their own latest published week', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await publishedWeek(coach);
+    const pdf = await coach.agent.get(`/api/weeks/${w.weekId}/clients/${w.ben.id}/plan.pdf`).buffer(true).parse(binary).expect(200);
+    expect(pdf.headers['content-type']).toBe('application/pdf');
+    expect(pdf.headers['content-disposition']).toContain('attachment');
+    const text = await pdfText(pdf.body as Buffer);
+    expect(text).toContain(w.plateB.name);
+    expect(text).toContain(w.ben.name);
+    // Dee has no plates in the published week.
+    await coach.agent.get(`/api/weeks/${w.weekId}/clients/${w.dee.id}/plan.pdf`).expect(404);
+
+    const ana = await member(app, coach, 'client', { clientId: w.ana.id });
+    const own = await ana.agent.get('/api/weeks/mine/plan.pdf').buffer(true).parse(binary).expect(200);
+    const ownText = await pdfText(own.body as Buffer);
+    expect(ownText).toContain(w.ana.name);
+    expect(ownText).toContain(w.plateA.name);
+    expect(ownText).not.toContain(w.ben.name);
+    expect(ownText).not.toContain(w.plateB.name);
+    // A client never reaches the coach's route, and a client without plates gets 404.
+    await ana.agent.get(`/api/weeks/${w.weekId}/clients/${w.ana.id}/plan.pdf`).expect(403);
+    const dee = await member(app, coach, 'client', { clientId: w.dee.id });
+    await dee.agent.get('/api/weeks/mine/plan.pdf').expect(404);
+    await agentFor(app).get('/api/weeks/mine/plan.pdf').expect(401);
+  });
+
+  it('an unpublished week has no plan PDF (409)', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await publishedWeek(coach, { publish: false });
+    await coach.agent.get(`/api/weeks/${w.weekId}/clients/${w.ana.id}/plan.pdf`).expect(409);
+  });
+});
