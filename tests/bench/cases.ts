@@ -86,4 +86,98 @@ async function calcBakeRun(ctx: BenchContext): Promise<BenchCase | null> {
   };
 }
 
-export const benchCases: ((ctx: BenchContext) => Promise<BenchCase | null>)[] = [calcRecipe, calcBakeRun];
+/**
+ * A big prep week (issue goals): 60 clients × 7 days × 2 slots over 12 base trays, made through the API as the coach
+ * (the 7 demo trays plus 5 duplicates, one plate per tray, one PUT of all 840 cells, then the cover action for the
+ * tray counts). Body measurements are invented test values. Made once and shared by the week and shopping cases.
+ */
+let bigWeek: Promise<number> | null = null;
+async function makeBigWeek(ctx: BenchContext): Promise<number> {
+  const sexes = ['female', 'male'] as const;
+  const activities = ['sedentary', 'light', 'moderate', 'active', 'very-active'] as const;
+  const goals = ['lose', 'maintain', 'gain'] as const;
+  const clientIds = await Promise.all(
+    Array.from({ length: 60 }, async (_, i) => {
+      const c = await postJson<{ id: number }>(ctx, '/api/clients', {
+        name: `Bench client ${i + 1}`,
+        householdMultiplier: i % 10 === 0 ? '2' : '1',
+        sex: sexes[i % 2],
+        ageYears: 25 + (i % 40),
+        heightCm: String(155 + (i % 30)),
+        weightKg: String(55 + (i % 45)),
+        activity: activities[i % activities.length],
+        goal: goals[i % goals.length],
+        netCarbCapG: '20',
+        proteinGPerKg: '1.5',
+        targetMode: 'computed',
+      });
+      return c.id;
+    }),
+  );
+  const trays = await getJson<{ items: { id: number }[] } | { id: number }[]>(ctx, '/api/trays?pageSize=100');
+  const trayIds = (Array.isArray(trays) ? trays : trays.items).map((t) => t.id);
+  for (let i = 0; trayIds.length < 12; i++) trayIds.push((await postJson<{ id: number }>(ctx, `/api/trays/${trayIds[i]}/duplicate`, {})).id);
+  const plateIds: number[] = [];
+  for (const [i, trayId] of trayIds.slice(0, 12).entries()) {
+    const p = await postJson<{ id: number }>(ctx, '/api/assemblies', { name: `Bench plate ${i + 1}`, trays: [{ trayId, portions: 1 }] });
+    plateIds.push(p.id);
+  }
+  type Board = { week: { id: number; version: number }; days: string[]; slots: string[] };
+  const board = await postJson<Board>(ctx, '/api/weeks', { name: 'Bench week', startDate: '2026-12-07', prepDate: '2026-12-06', secondPrepDate: '2026-12-09' });
+  const slots = board.slots.slice(0, 2);
+  const cells = clientIds.flatMap((clientId, ci) =>
+    board.days.flatMap((date, di) => slots.map((slot, si) => ({ clientId, date, slot, assemblyId: plateIds[(ci + di * 2 + si) % plateIds.length] }))),
+  );
+  const send = async (method: string, p: string, body: unknown) => {
+    const r = await fetch(ctx.base + p, {
+      method,
+      headers: { cookie: ctx.cookie, 'content-type': 'application/json', 'x-trayline-csrf': '1' },
+      body: JSON.stringify(body),
+    });
+    if (!r.ok) throw new Error(`${p}: ${r.status} ${await r.text()}`);
+    return (await r.json()) as Board;
+  };
+  const filled = await send('PUT', `/api/weeks/${board.week.id}/cells`, { version: board.week.version, cells });
+  await postJson<Board>(ctx, `/api/weeks/${board.week.id}/trays/cover`, { version: filled.week.version });
+  return board.week.id;
+}
+const bigWeekId = (ctx: BenchContext) => (bigWeek ??= makeBigWeek(ctx));
+
+async function weekRecompute(ctx: BenchContext): Promise<BenchCase | null> {
+  const id = await bigWeekId(ctx);
+  const board = await getJson<{ cells: unknown[]; clients: unknown[]; trays: unknown[] }>(ctx, `/api/weeks/${id}`);
+  return {
+    name: 'week recompute (60 clients × 7 days × 2 slots, 12 tray recipes)',
+    method: 'GET',
+    path: `/api/weeks/${id}`,
+    goal: '≤ 3×',
+    notes: `GET /api/weeks/:id: ${board.clients.length} clients, ${board.cells.length} cells, ${board.trays.length} tray counts`,
+  };
+}
+
+async function weekShopping(ctx: BenchContext): Promise<BenchCase | null> {
+  const id = await bigWeekId(ctx);
+  await getJson(ctx, `/api/weeks/${id}/shopping`);
+  return { name: 'shopping list (the 60-client week)', method: 'GET', path: `/api/weeks/${id}/shopping` };
+}
+
+/**
+ * One client's week-plan PDF (issue 9): GET /api/weeks/:weekId/clients/:clientId/plan.pdf for the demo's published
+ * week, rendered from the stored snapshot. The ids are found through the API as the coach.
+ */
+async function clientPlanPdf(ctx: BenchContext): Promise<BenchCase | null> {
+  type Summary = { id: number; name: string; publishedVersion: number | null };
+  const weeks = await getJson<Summary[]>(ctx, '/api/weeks');
+  const week = weeks.find((w) => w.publishedVersion !== null);
+  if (!week) return null;
+  const board = await getJson<{ cells: { clientId: number }[] }>(ctx, `/api/weeks/${week.id}`);
+  for (const clientId of [...new Set(board.cells.map((c) => c.clientId))]) {
+    const path = `/api/weeks/${week.id}/clients/${clientId}/plan.pdf`;
+    const r = await fetch(ctx.base + path, { headers: { cookie: ctx.cookie } });
+    const bytes = (await r.arrayBuffer()).byteLength;
+    if (r.ok) return { name: "one client's PDF (week plan)", method: 'GET', path, notes: `${week.name}, client ${clientId}: ${bytes} bytes` };
+  }
+  return null;
+}
+
+export const benchCases: ((ctx: BenchContext) => Promise<BenchCase | null>)[] = [calcRecipe, calcBakeRun, weekRecompute, weekShopping, clientPlanPdf];
