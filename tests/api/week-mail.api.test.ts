@@ -240,7 +240,9 @@ describe('week-plan PDF downloads', () => {
     await coach.agent.get(`/api/weeks/${w.weekId}/clients/${w.dee.id}/plan.pdf`).expect(404);
 
     const ana = await member(app, coach, 'client', { clientId: w.ana.id });
-    const own = await ana.agent.get('/api/weeks/mine/plan.pdf').buffer(true).parse(binary).expect(200);
+    const own = await ana.agent.get('/api/weeks/mine/plan.pdf?today=2026-01-05').buffer(true).parse(binary).expect(200);
+    const bad = await ana.agent.get('/api/weeks/mine/plan.pdf?today=tomorrow').expect(400);
+    expect(JSON.stringify(bad.body.errors)).toContain('today');
     const ownText = await pdfText(own.body as Buffer);
     expect(ownText).toContain(w.ana.name);
     expect(ownText).toContain(w.plateA.name);

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import {
   clientDeliveriesParams,
+  myPlanQuery,
   deliveriesQuerySchema,
   sendWeekSchema,
   weekClientPlanParams,
@@ -27,7 +28,7 @@ export function weekMailRoutes(deps: { mail: MailQueue; publicUrl: string }) {
   r.get(
     '/weeks/mine/plan.pdf',
     allow('client'),
-    validated({}, async (_i, req, res) => sendPdf(res, await myPlanPdf(emOf(req), actorOf(req)))),
+    validated({ query: myPlanQuery }, async ({ query }, req, res) => sendPdf(res, await myPlanPdf(emOf(req), actorOf(req), query.today))),
   );
 
   r.post(

@@ -147,9 +147,9 @@ export async function coachPlanPdf(em: EntityManager, actor: Actor, weekId: numb
 }
 
 /** A client downloads their own current published week (the one "my plates" shows). */
-export async function myPlanPdf(em: EntityManager, actor: Actor) {
+export async function myPlanPdf(em: EntityManager, actor: Actor, today?: string) {
   if (actor.clientId === null) throw new NotFound('Published week');
-  const mine = await myWeek(em, actor);
+  const mine = await myWeek(em, actor, today);
   if (!mine || !mine.days.length) throw new NotFound('Published week');
   return renderPublishedPlan(em, { weekId: mine.weekId, clientId: actor.clientId, publicationVersion: mine.publishedVersion }, actor.workspaceId);
 }

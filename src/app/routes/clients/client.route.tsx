@@ -5,6 +5,7 @@ import type { ClientDto } from '@shared/schemas/clients.schema';
 import { clientQuery } from '@/features/clients/api/clients.queries';
 import { useDeleteClient, useInviteClient, useUpdateClient } from '@/features/clients/api/use-client-mutations';
 import { ClientForm, clientToInput } from '@/features/clients/components/client-form';
+import { DeliveryLog } from '@/features/week-mail/components/delivery-log';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Card, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
@@ -131,6 +132,10 @@ export function Component() {
         </ul>
       </Card>
       <InviteCard client={client} />
+      <Card>
+        <h2 className="mb-3 text-xl">Plans sent</h2>
+        <DeliveryLog clientId={client.id} />
+      </Card>
       <Cautions topic="diet" compact />
     </div>
   );

@@ -5,6 +5,7 @@ import type { MyPlateDto } from '@shared/schemas/weeks.schema';
 import { localToday, myWeekQuery } from '@/features/weeks/api/weeks.queries';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
+import { myPlanPdfUrl } from '@/features/week-mail/api/week-mail.queries';
 
 const dayLabel = (iso: string, long = false) =>
   new Date(`${iso}T12:00:00Z`).toLocaleDateString(undefined, { weekday: long ? 'long' : 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
@@ -98,7 +99,11 @@ export function Component() {
   const day = week.days.find((d) => d.date === (picked ?? today)) ?? (picked ? undefined : week.days.find((d) => d.date >= today) ?? week.days[0]);
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-5">
-      <PageHeader title={day?.date === today ? "Today's plate" : 'My plates'} lead={day ? dayLabel(day.date, true) : undefined} />
+      <PageHeader title={day?.date === today ? "Today's plate" : 'My plates'} lead={day ? dayLabel(day.date, true) : undefined}>
+        <a href={`${myPlanPdfUrl}?today=${today}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline" download>
+          Download my week (PDF)
+        </a>
+      </PageHeader>
       {day ? day.plates.map((p) => <PlateCard key={p.slot} plate={p} />) : <EmptyState title="Nothing planned that day" />}
       <Card>
         <h2 className="mb-2 text-xl">The week at a glance</h2>

@@ -8,6 +8,7 @@ import { weekKeys } from '@/features/weeks/api/weeks.keys';
 import { useCopyDay, useCoverTrays, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek } from '@/features/weeks/api/use-week-mutations';
 import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/weeks/components/board-grid';
 import { InventoryPanel } from '@/features/weeks/components/inventory-panel';
+import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
@@ -149,6 +150,11 @@ export function Component() {
           <BoardGrid board={board} busy={busy} onEdit={(edit) => sendCells(edit)} />
         </Card>
       )}
+
+      <Card>
+        <h2 className="mb-3 text-xl">Send plans</h2>
+        <SendPlansPanel board={board} />
+      </Card>
 
       <Card>
         <h2 className="mb-3 text-xl">Copy a day</h2>
