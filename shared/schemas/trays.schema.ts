@@ -258,6 +258,8 @@ export interface TraySummaryDto {
   tags: string[];
   allergens: AllergenCode[];
   portions: number;
+  /** How the pan is cut (drawn on library cards that have no photo). */
+  cutPlan: CutPlanInput;
   pan: PanDto;
   photo: TrayPhotoDto | null;
   /** Per portion; null when a line cannot be turned into grams. */

@@ -118,6 +118,7 @@ export function presentSummary(
     tags: tray.tags ?? [],
     allergens: trayAllergens(lines, ingredients),
     portions,
+    cutPlan,
     pan: presentPan(panOf(storedPanOf(tray))),
     photo: presentPhoto(tray.id, photo),
     perPortion: exact

@@ -2,8 +2,9 @@ import { Link } from 'react-router-dom';
 import { allergenLabel } from '@shared/domain/allergens';
 import type { TraySummaryDto } from '@shared/schemas/trays.schema';
 import { paths } from '@/config/paths';
+import { PanDrawing } from './pan-drawing';
 
-/** A library card: photo, name, per-portion macros, tags and allergens. */
+/** A library card: photo (or a drawing of the pan and its cut plan), name, per-portion macros, tags and allergens. */
 export function TrayCard({ tray }: { tray: TraySummaryDto }) {
   const p = tray.perPortion;
   return (
@@ -11,11 +12,8 @@ export function TrayCard({ tray }: { tray: TraySummaryDto }) {
       {tray.photo ? (
         <img src={tray.photo.thumbnailUrl} alt="" width={480} height={360} className="aspect-[4/3] w-full object-cover" loading="lazy" />
       ) : (
-        <div className="flex aspect-[4/3] w-full items-center justify-center bg-paper-deep text-ink-faint" aria-hidden>
-          <svg viewBox="0 0 32 32" className="h-12 w-12">
-            <rect x="2" y="7" width="28" height="18" rx="3" fill="currentColor" opacity=".35" />
-            <path d="M12.3 10v12M19.7 10v12M5 16h22" stroke="currentColor" strokeWidth="1.4" />
-          </svg>
+        <div className="flex h-[118px] w-full items-center justify-center border-b border-line bg-paper-deep px-4">
+          <PanDrawing pan={tray.pan} cutPlan={tray.cutPlan} />
         </div>
       )}
       <div className="flex flex-1 flex-col gap-2 p-4">
@@ -25,7 +23,7 @@ export function TrayCard({ tray }: { tray: TraySummaryDto }) {
           </Link>
         </h2>
         <p className="text-sm text-ink-faint">
-          {tray.portions} portions · {tray.pan.label}
+          {tray.portions} portions · <span className="whitespace-nowrap">{tray.pan.label}</span>
           {tray.archived && <span className="ml-2 rounded bg-paper-deep px-1 font-bold text-ink-soft">Archived</span>}
           {tray.isDemo && <span className="ml-2 rounded bg-paper-deep px-1 text-ink-soft">demo</span>}
         </p>
