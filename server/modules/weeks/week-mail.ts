@@ -1,5 +1,6 @@
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
+import { allergenLabel } from '@shared/domain/allergens.js';
 import { CAUTIONS } from '@shared/domain/eat-by.js';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema.js';
 import type { PdfMacros, WeekPlanPdfData, WeekPlanPdfDay } from '@shared/schemas/pdf.schema.js';
@@ -33,7 +34,7 @@ function macros(m: MyPlateDto['macros']): PdfMacros {
 function plateNotes(p: MyPlateDto): string[] {
   const notes: string[] = [];
   if (p.storage === 'frozen' && p.thawOn) notes.push(`Frozen: move it from the freezer to the fridge on the evening of ${longDate(p.thawOn)}.`);
-  if (p.allergens.length) notes.push(`Contains: ${p.allergens.join(', ')}.`);
+  if (p.allergens.length) notes.push(`Contains: ${p.allergens.map(allergenLabel).join(', ')}.`);
   if (p.addOns.length) notes.push(`Add: ${p.addOns.map((a) => `${a.amountText} ${a.unit} ${a.name}`.trim()).join('; ')}.`);
   return notes;
 }
