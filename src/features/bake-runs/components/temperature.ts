@@ -21,7 +21,7 @@ export function tempBand(tempF: number): 1 | 2 | 3 | 4 | 5 {
 export const BAND_CLASS: Record<1 | 2 | 3 | 4 | 5, string> = {
   1: 'bg-oven-1 text-ink',
   2: 'bg-oven-2 text-ink',
-  3: 'bg-oven-3 text-paper-card',
+  3: 'bg-oven-3 text-ink',
   4: 'bg-oven-4 text-paper-card',
   5: 'bg-oven-5 text-paper-card',
 };

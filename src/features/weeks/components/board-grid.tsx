@@ -22,17 +22,20 @@ export const cellId = (clientId: number, date: string, slot: string) => `cell|${
 
 function PaletteItem({ id, name, detail }: { id: number; name: string; detail: string }) {
   const { attributes, listeners, setNodeRef, transform, isDragging } = useDraggable({ id: `plate|${id}` });
+  // The list item stays a plain <li>; the draggable (role="button" from dnd-kit) sits inside it.
   return (
-    <li
-      ref={setNodeRef}
-      {...listeners}
-      {...attributes}
-      aria-roledescription="Plate you can drag onto the board"
-      style={transform ? { transform: `translate3d(${transform.x}px, ${transform.y}px, 0)` } : undefined}
-      className={`cursor-grab rounded-lg border border-line-strong bg-paper-card px-3 py-2 shadow-tray focus:outline-2 focus:outline-ink ${isDragging ? 'z-30 opacity-80' : ''}`}
-    >
-      <p className="font-bold">{name}</p>
-      <p className="num text-xs text-ink-faint">{detail}</p>
+    <li>
+      <div
+        ref={setNodeRef}
+        {...listeners}
+        {...attributes}
+        aria-roledescription="Plate you can drag onto the board"
+        style={transform ? { transform: `translate3d(${transform.x}px, ${transform.y}px, 0)` } : undefined}
+        className={`cursor-grab rounded-lg border border-line-strong bg-paper-card px-3 py-2 shadow-tray focus:outline-2 focus:outline-ink ${isDragging ? 'relative z-30 opacity-80' : ''}`}
+      >
+        <p className="font-bold">{name}</p>
+        <p className="num text-xs text-ink-faint">{detail}</p>
+      </div>
     </li>
   );
 }
@@ -45,9 +48,11 @@ interface CellProps {
   flags: WeekWarning[];
   selected: boolean;
   onSelect: () => void;
+  /** Where the cell is (client, day, slot), for its accessible name. */
+  where: string;
 }
 
-function Cell({ id, cell, plateName, kcal, flags, selected, onSelect }: CellProps) {
+function Cell({ id, cell, plateName, kcal, flags, selected, onSelect, where }: CellProps) {
   const { setNodeRef, isOver } = useDroppable({ id });
   const blocked = flags.some((f) => f.severity === 'block');
   return (
@@ -56,6 +61,7 @@ function Cell({ id, cell, plateName, kcal, flags, selected, onSelect }: CellProp
       ref={setNodeRef}
       onClick={onSelect}
       aria-pressed={selected}
+      aria-label={`${where}: ${cell ? (plateName ?? 'Plate') : 'empty'}${flags.length ? `, ${flags.length} problem${flags.length === 1 ? '' : 's'}` : ''}`}
       className={`flex min-h-14 w-full flex-col items-start rounded-md border px-2 py-1 text-left text-xs ${
         isOver ? 'border-herb bg-herb-50' : blocked ? 'border-signal bg-signal-50' : flags.length ? 'border-caution bg-caution-50' : 'border-line bg-paper-card'
       } ${selected ? 'outline-2 outline-ink' : ''}`}
@@ -66,7 +72,7 @@ function Cell({ id, cell, plateName, kcal, flags, selected, onSelect }: CellProp
           <span className="num text-ink-faint">{kcal !== undefined ? `${Math.round(kcal)} kcal` : ''}</span>
           {cell.storage === 'frozen' && <span className="text-frost-700">❄ frozen</span>}
           {flags.length > 0 && (
-            <span className={blocked ? 'font-bold text-signal-700' : 'text-caution'}>
+            <span className={blocked ? 'font-bold text-signal-700' : 'text-caution-700'}>
               {blocked ? '⛔' : '⚠'} {flags.length}
             </span>
           )}
@@ -175,7 +181,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
                             return (
                               <div key={slot}>
                                 {board.slots.length > 1 && <span className="text-[10px] uppercase text-ink-faint">{slot}</span>}
-                                <Cell id={id} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} onSelect={() => setSelected(selected === id ? null : id)} />
+                                <Cell id={id} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} onSelect={() => setSelected(selected === id ? null : id)} where={`${client.name}, ${dayLabel(date)}, ${slot}`} />
                               </div>
                             );
                           })}
@@ -184,7 +190,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
                               {Math.round(day.totals.kcal)}/{client.targets.targetKcal} kcal · {day.totals.netCarbsG}/{client.targets.netCarbCapG} g net · {day.totals.proteinG}/
                               {client.targets.proteinG} g P
                               {day.warnings.some((w) => !('slot' in w)) && (
-                                <span className="block font-bold text-caution">⚠ {day.warnings.filter((w) => !('slot' in w)).map((w) => w.kind.replace(/-/g, ' ')).join(', ')}</span>
+                                <span className="block font-bold text-caution-700">⚠ {day.warnings.filter((w) => !('slot' in w)).map((w) => w.kind.replace(/-/g, ' ')).join(', ')}</span>
                               )}
                             </p>
                           )}
@@ -264,7 +270,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
           {selFlags.length > 0 && (
             <ul className="mt-3 flex flex-col gap-1 text-sm" aria-label="Problems of this cell">
               {selFlags.map((w, i) => (
-                <li key={i} className={w.severity === 'block' ? 'font-bold text-signal-700' : 'text-caution'}>
+                <li key={i} className={w.severity === 'block' ? 'font-bold text-signal-700' : 'text-caution-700'}>
                   {w.severity === 'block' ? '⛔' : '⚠'} {w.message}
                 </li>
               ))}
