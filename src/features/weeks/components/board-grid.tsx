@@ -136,21 +136,27 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
 
   return (
     <DndContext sensors={sensors} onDragEnd={onDragEnd}>
-      <div className="flex flex-col gap-4 lg:flex-row">
-        <aside className="lg:w-56" aria-label="Plates">
+      <div className="flex flex-col gap-4 2xl:flex-row">
+        <aside className="2xl:w-56 2xl:shrink-0" aria-label="Plates">
           <h2 className="mb-2 text-lg font-bold">Plates</h2>
           <p className="mb-2 text-xs text-ink-faint">Drag onto a cell (or focus, press Space, move with the arrow keys, Space to drop).</p>
-          <ul className="flex flex-col gap-2">
+          <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3 2xl:flex 2xl:flex-col">
             {board.plates.map((p) => (
               <PaletteItem key={p.id} id={p.id} name={p.name} detail={`${Math.round(p.macros.kcal)} kcal · ${p.macros.netCarbsG} g net · ${p.macros.proteinG} g P`} />
             ))}
           </ul>
         </aside>
-        <div className="min-w-0 flex-1 overflow-x-auto">
-          <table className="w-full border-separate border-spacing-1">
+        {/* The grid scrolls sideways inside its card; the client column stays put. Focusable so arrow keys scroll it. */}
+        <div
+          role="region"
+          aria-label="Week board, scrolls sideways"
+          tabIndex={0}
+          className="min-w-0 flex-1 overflow-x-auto rounded-lg border border-line bg-paper-card pb-1"
+        >
+          <table className="w-full min-w-[60rem] border-separate border-spacing-1">
             <thead>
               <tr>
-                <th className="sticky left-0 bg-paper text-left text-sm">Client</th>
+                <th className="sticky left-0 z-20 bg-paper-card px-1 text-left text-sm">Client</th>
                 {board.days.map((d) => (
                   <th key={d} className="text-left text-sm font-bold">
                     {dayLabel(d)}
@@ -161,7 +167,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
             <tbody>
               {board.clients.map((client) => (
                 <tr key={client.id}>
-                  <th scope="row" className="sticky left-0 z-10 bg-paper pr-2 text-left align-top text-sm">
+                  <th scope="row" className="sticky left-0 z-10 w-36 min-w-36 border-r border-line bg-paper-card px-1 pr-2 text-left align-top text-sm">
                     <span className="font-bold">{client.name}</span>
                     <span className="num block text-xs text-ink-faint">
                       ×{client.householdMultiplier} · {client.targets.targetKcal} kcal · ≤{client.targets.netCarbCapG} g
@@ -171,7 +177,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
                   {board.days.map((date) => {
                     const day = checks.get(`${client.id}|${date}`);
                     return (
-                      <td key={date} className="min-w-32 align-top">
+                      <td key={date} className="min-w-28 align-top">
                         <div className="flex flex-col gap-1">
                           {board.slots.map((slot) => {
                             const id = cellId(client.id, date, slot);
