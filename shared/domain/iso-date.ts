@@ -12,9 +12,19 @@ export type IsoDate = string;
 const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
 const MS_PER_DAY = 86_400_000;
 
+/**
+ * Parse caches: a week board compares the same few dozen dates thousands of times. Only valid dates are stored
+ * (so an invalid one still throws every time); the maps are pure memos of deterministic functions, bounded, and
+ * cleared when full.
+ */
+const CACHE_LIMIT = 4_096;
+const parsed = new Map<string, number>();
+const written = new Map<number, IsoDate>();
+
 /** True when `value` is a real calendar date written 'YYYY-MM-DD' (so '2025-02-30' is false). */
 export function isIsoDate(value: unknown): value is IsoDate {
   if (typeof value !== 'string') return false;
+  if (parsed.has(value)) return true;
   const match = ISO_DATE.exec(value);
   if (!match) return false;
   const [, y, m, d] = match.map(Number);
@@ -24,19 +34,29 @@ export function isIsoDate(value: unknown): value is IsoDate {
 }
 
 function toUtcMs(value: IsoDate): number {
+  const known = typeof value === 'string' ? parsed.get(value) : undefined;
+  if (known !== undefined) return known;
   if (!isIsoDate(value)) throw new RangeError(`Not an ISO calendar date (YYYY-MM-DD): ${String(value)}`);
   const [y, m, d] = value.split('-').map(Number);
   const date = new Date(0);
   date.setUTCFullYear(y, m - 1, d);
-  return date.getTime();
+  const ms = date.getTime();
+  if (parsed.size >= CACHE_LIMIT) parsed.clear();
+  parsed.set(value, ms);
+  return ms;
 }
 
 function fromUtcMs(ms: number): IsoDate {
+  const known = written.get(ms);
+  if (known !== undefined) return known;
   const date = new Date(ms);
   const y = String(date.getUTCFullYear()).padStart(4, '0');
   const m = String(date.getUTCMonth() + 1).padStart(2, '0');
   const d = String(date.getUTCDate()).padStart(2, '0');
-  return `${y}-${m}-${d}`;
+  const text = `${y}-${m}-${d}`;
+  if (written.size >= CACHE_LIMIT) written.clear();
+  written.set(ms, text);
+  return text;
 }
 
 /** The date `days` calendar days after `date` (negative goes back). `days` must be a whole number. */

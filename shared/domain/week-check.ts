@@ -112,17 +112,49 @@ export function normalizeTerm(term: string): string {
   return term.trim().toLowerCase().replace(/\s+/g, ' ');
 }
 
-function sumMacros(cells: readonly CheckCell[]) {
+/**
+ * Memos of pure conversions, keyed by the input objects: a week board passes the same plate macros, term lists
+ * and dislike lists to hundreds of cells, so each is converted once. Each entry keeps a copy of what it was made
+ * from and is rebuilt when the object has changed since; WeakMaps keep nothing alive.
+ */
+type ExactMacros = { kcal: Decimal; netCarbsG: Decimal; proteinG: Decimal; fatG: Decimal };
+const exactMacros = new WeakMap<CellMacros, { from: CellMacros; exact: ExactMacros }>();
+const normalizedTerms = new WeakMap<readonly string[], { from: string[]; terms: string[] }>();
+const normalizedDislikes = new WeakMap<readonly string[], { from: string[]; set: Set<string> }>();
+
+const sameList = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((x, i) => x === b[i]);
+
+function exactOf(m: CellMacros): ExactMacros {
+  const e = exactMacros.get(m);
+  if (e && e.from.kcal === m.kcal && e.from.netCarbsG === m.netCarbsG && e.from.proteinG === m.proteinG && e.from.fatG === m.fatG)
+    return e.exact;
+  const exact = { kcal: new Decimal(m.kcal), netCarbsG: new Decimal(m.netCarbsG), proteinG: new Decimal(m.proteinG), fatG: new Decimal(m.fatG) };
+  exactMacros.set(m, { from: { kcal: m.kcal, netCarbsG: m.netCarbsG, proteinG: m.proteinG, fatG: m.fatG }, exact });
+  return exact;
+}
+
+function dislikeSet(list: readonly string[]): Set<string> {
+  const e = normalizedDislikes.get(list);
+  if (e && sameList(e.from, list)) return e.set;
+  const set = new Set(list.map(normalizeTerm).filter(Boolean));
+  normalizedDislikes.set(list, { from: [...list], set });
+  return set;
+}
+
+function termList(list: readonly string[]): string[] {
+  const e = normalizedTerms.get(list);
+  if (e && sameList(e.from, list)) return e.terms;
+  const terms = [...new Set(list.map(normalizeTerm))];
+  normalizedTerms.set(list, { from: [...list], terms });
+  return terms;
+}
+
+function sumMacros(cells: readonly CheckCell[]): ExactMacros {
   const zero = new Decimal(0);
-  return cells.reduce(
-    (t, c) => ({
-      kcal: t.kcal.plus(c.macros.kcal),
-      netCarbsG: t.netCarbsG.plus(c.macros.netCarbsG),
-      proteinG: t.proteinG.plus(c.macros.proteinG),
-      fatG: t.fatG.plus(c.macros.fatG),
-    }),
-    { kcal: zero, netCarbsG: zero, proteinG: zero, fatG: zero },
-  );
+  return cells.reduce((t, c) => {
+    const m = exactOf(c.macros);
+    return { kcal: t.kcal.plus(m.kcal), netCarbsG: t.netCarbsG.plus(m.netCarbsG), proteinG: t.proteinG.plus(m.proteinG), fatG: t.fatG.plus(m.fatG) };
+  }, { kcal: zero, netCarbsG: zero, proteinG: zero, fatG: zero });
 }
 
 function macroWarnings(input: DayCheckInput, totals: ReturnType<typeof sumMacros>): WeekWarning[] {
@@ -178,8 +210,9 @@ function allergenWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] 
 }
 
 function dislikeWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] {
-  const dislikes = new Set(input.clientDislikes.map(normalizeTerm).filter(Boolean));
-  const hits = [...new Set(cell.terms.map(normalizeTerm))].filter((t) => dislikes.has(t));
+  if (input.clientDislikes.length === 0) return [];
+  const dislikes = dislikeSet(input.clientDislikes);
+  const hits = termList(cell.terms).filter((t) => dislikes.has(t));
   return hits.map((term) => ({
     kind: 'dislike' as const, severity: 'warn' as const, clientId: input.clientId, date: input.date,
     slot: cell.slot, term, message: `The client dislikes ${term}.`,

@@ -21,22 +21,31 @@ import { invitationMail, passwordResetMail } from '../mail/mail-templates.js';
 const INVITATION_DAYS = 14;
 const PASSWORD_RESET_MINUTES = 60;
 
-/** The actor of a user: their (first) membership decides workspace and role. */
+/**
+ * The actor of a user: their (first) membership decides workspace and role. Every authenticated request runs
+ * this, so it is one plain SQL join read straight into the Actor (no entities hydrated into the identity map).
+ */
 export async function loadActor(em: EntityManager, userId: number): Promise<Actor | null> {
-  const m = await em.findOne(
-    Membership,
-    { user: userId },
-    { populate: ['user', 'workspace'], orderBy: { id: 'asc' } },
+  if (!Number.isSafeInteger(userId)) return null;
+  const rows = await em.getConnection().execute<
+    { user_id: number; email: string; name: string; role: string; workspace_id: number; client_id: number | null }[]
+  >(
+    `select u.id as user_id, u.email, u.name, m.role, m.workspace_id, m.client_id
+       from membership m join app_user u on u.id = m.user_id
+      where m.user_id = ? order by m.id asc limit 1`,
+    [userId],
+    'all',
+    em.getTransactionContext(),
   );
+  const m = rows[0];
   if (!m) return null;
-  const user = m.user.unwrap();
   return {
-    userId: user.id,
-    email: user.email,
-    name: user.name,
+    userId: m.user_id,
+    email: m.email,
+    name: m.name,
     role: m.role as Role,
-    workspaceId: m.workspace.id,
-    clientId: m.clientId ?? null,
+    workspaceId: m.workspace_id,
+    clientId: m.client_id ?? null,
   };
 }
 

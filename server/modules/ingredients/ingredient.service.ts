@@ -99,7 +99,11 @@ export async function loadNutritionIngredients(
  */
 export async function computeRecipeForActor(em: EntityManager, actor: Actor, input: RecipeCalcInput): Promise<RecipeCalcDto> {
   const parsed = recipeCalcSchema.parse(input);
-  const found = await findVisible(em, actor, parsed.items.map((i) => i.ingredientId));
+  // The rows and the workspace's rule do not depend on each other: read them side by side.
+  const [found, rule] = await Promise.all([
+    findVisible(em, actor, parsed.items.map((i) => i.ingredientId)),
+    netCarbRuleOf(em, actor.workspaceId),
+  ]);
   const errors: Record<string, string[]> = {};
   parsed.items.forEach((item, i) => {
     if (!found.has(item.ingredientId)) errors[`items.${i}.ingredientId`] = [`No ingredient with id ${item.ingredientId} in your library`];
@@ -111,18 +115,23 @@ export async function computeRecipeForActor(em: EntityManager, actor: Actor, inp
     amount: item.amount,
     unit: item.unit,
   }));
-  parsed.items.forEach((item, i) => {
-    try {
-      computeRecipeExact([lines[i]]);
-    } catch (e) {
-      if (!(e instanceof UnitConversionError)) throw e;
-      errors[`items.${i}.unit`] = [`${e.message} Add it to the ingredient, or use grams.`];
-    }
-  });
-  if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
-
-  const rule = await netCarbRuleOf(em, actor.workspaceId);
-  const exact = computeRecipeExact(lines, { portions: parsed.portions, yieldFactor: parsed.yieldFactor, netCarbRule: rule });
+  let exact: ReturnType<typeof computeRecipeExact>;
+  try {
+    // Computed once; only when a line cannot be converted is each line tried alone, to name every bad line.
+    exact = computeRecipeExact(lines, { portions: parsed.portions, yieldFactor: parsed.yieldFactor, netCarbRule: rule });
+  } catch (first) {
+    if (!(first instanceof UnitConversionError)) throw first;
+    parsed.items.forEach((item, i) => {
+      try {
+        computeRecipeExact([lines[i]]);
+      } catch (e) {
+        if (!(e instanceof UnitConversionError)) throw e;
+        errors[`items.${i}.unit`] = [`${e.message} Add it to the ingredient, or use grams.`];
+      }
+    });
+    if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
+    throw first;
+  }
   return {
     total: toNutrientNumbers(exact.total),
     perPortion: toNutrientNumbers(exact.perPortion),

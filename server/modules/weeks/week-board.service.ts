@@ -3,6 +3,7 @@ import { CAUTIONS } from '@shared/domain/eat-by.js';
 import { addDays, compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, type BoardInput, type BoardResult } from '@shared/domain/week-board.js';
 import type { AllergenCode } from '@shared/domain/allergens.js';
+import type { MacroTargets } from '@shared/domain/targets.js';
 import type { AssemblyDto } from '@shared/schemas/assemblies.schema.js';
 import { WEEK_DAYS, type BoardDto, type BoardCellDto, type WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
 import type { Actor } from '../../http/authz.js';
@@ -52,13 +53,48 @@ export async function lastPublishedAt(em: EntityManager, week: IWeek): Promise<D
   return pub?.publishedAt ?? null;
 }
 
+/**
+ * A board cell as the board reads it: a plain row (a week holds hundreds of cells; hydrating each as a managed
+ * entity cost more than the whole board computation). Writes still go through the WeekCell entity.
+ */
+export interface BoardCellRow {
+  id: number;
+  client: { id: number };
+  assembly: { id: number };
+  date: IsoDate;
+  slot: string;
+  prepDate?: IsoDate | null;
+  storage: string;
+  allergenOverrides: { allergen: string; reason: string }[];
+}
+
+async function loadCellRows(em: EntityManager, weekId: number): Promise<BoardCellRow[]> {
+  const rows: { id: number; client: number; assembly: number; date: string; slot: string; prepDate: string | null; storage: string; allergenOverrides: BoardCellRow['allergenOverrides'] | string | null }[] =
+    await em
+      .createQueryBuilder(WeekCell)
+      .select(['id', 'client', 'date', 'slot', 'assembly', 'prepDate', 'storage', 'allergenOverrides'])
+      .where({ week: weekId })
+      .orderBy({ date: 'asc', id: 'asc' })
+      .execute('all');
+  return rows.map((r) => ({
+    id: r.id,
+    client: { id: r.client },
+    assembly: { id: r.assembly },
+    date: r.date,
+    slot: r.slot,
+    prepDate: r.prepDate,
+    storage: r.storage,
+    allergenOverrides: typeof r.allergenOverrides === 'string' ? JSON.parse(r.allergenOverrides) : (r.allergenOverrides ?? []),
+  }));
+}
+
 /** Everything a board needs, in a fixed number of queries (no N+1): ~10 whatever the size of the week. */
 export interface BoardData {
   week: IWeek;
   slots: string[];
   clients: IClient[];
   assemblies: IAssembly[];
-  cells: IWeekCell[];
+  cells: BoardCellRow[];
   trays: IWeekTray[];
   ctx: PlateContext;
   publishedAt: Date | null;
@@ -69,14 +105,14 @@ export async function loadBoardData(em: EntityManager, actor: Actor, week: IWeek
   const slots = await mealSlotsOf(em, actor.workspaceId);
   const clients = await loadClients(em, actor.workspaceId);
   const assemblies = await loadAssemblies(em, actor.workspaceId);
-  const cells = await em.find(WeekCell, { week: week.id }, { orderBy: { date: 'asc', id: 'asc' } });
+  const cells = await loadCellRows(em, week.id);
   const trays = await em.find(WeekTray, { week: week.id }, { orderBy: { id: 'asc' } });
   const publishedAt = await lastPublishedAt(em, week);
   const ctx = await loadPlateContext(em, actor, assemblies, trays.map((t) => t.tray.id));
   return { week, slots, clients, assemblies, cells, trays, ctx, publishedAt };
 }
 
-export function cellDto(c: IWeekCell): BoardCellDto {
+export function cellDto(c: BoardCellRow | IWeekCell): BoardCellDto {
   return {
     clientId: c.client.id,
     date: c.date,
@@ -86,6 +122,16 @@ export function cellDto(c: IWeekCell): BoardCellDto {
     storage: (c.storage as 'fridge' | 'frozen') ?? 'fridge',
     allergenOverrides: (c.allergenOverrides ?? []) as { allergen: AllergenCode; reason: string }[],
   };
+}
+
+/** A client's planned targets, computed once per loaded board (the input and the DTO both need them). */
+const targetsMemo = new WeakMap<BoardData, Map<number, MacroTargets>>();
+function targetsOf(d: BoardData, c: IClient): MacroTargets {
+  let memo = targetsMemo.get(d);
+  if (!memo) targetsMemo.set(d, (memo = new Map()));
+  let t = memo.get(c.id);
+  if (!t) memo.set(c.id, (t = plannedTargets(c, d.slots)));
+  return t;
 }
 
 /** The pure board input from loaded rows, with `cells` replaced when given (to check an edit before saving it). */
@@ -101,7 +147,7 @@ export function boardInput(d: BoardData, cells: readonly BoardCellDto[] = d.cell
     clients: d.clients.map((c) => ({
       id: c.id,
       householdMultiplier: String(c.householdMultiplier),
-      targets: plannedTargets(c, d.slots),
+      targets: targetsOf(d, c),
       allergens: (c.allergens ?? []) as AllergenCode[],
       dislikes: c.dislikes ?? [],
     })),
@@ -125,7 +171,7 @@ export function presentBoard(d: BoardData, result: BoardResult = computeBoard(bo
       householdMultiplier: String(Number(c.householdMultiplier)),
       allergens: (c.allergens ?? []) as AllergenCode[],
       dislikes: c.dislikes ?? [],
-      targets: plannedTargets(c, d.slots),
+      targets: targetsOf(d, c),
     })),
     plates: platesDto,
     cells: d.cells.map(cellDto),
