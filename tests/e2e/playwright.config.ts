@@ -12,6 +12,8 @@ export default defineConfig({
   workers: 1,
   retries: 0,
   timeout: 60_000,
+  // The first page of a run waits for a cold server (ORM, first queries): allow a little more than the default 5 s.
+  expect: { timeout: 10_000 },
   use: {
     baseURL: `http://127.0.0.1:${port}`,
     trace: 'off',

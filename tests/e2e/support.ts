@@ -1,3 +1,4 @@
+import AxeBuilder from '@axe-core/playwright';
 import { expect, type Page } from '@playwright/test';
 
 export const DEMO_PASSWORD = 'trayline-demo';
@@ -9,4 +10,20 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await expect(page.getByRole('button', { name: /Sign out/ }).or(page.getByRole('button', { name: 'Menu' }))).toBeVisible();
+}
+
+/**
+ * axe-core (WCAG 2 A and AA rules) on the page as it is now: fails on any violation of impact serious or critical,
+ * naming the rule, its help text and the first offending nodes.
+ */
+export async function expectNoSeriousA11yViolations(page: Page, context = '') {
+  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa']).analyze();
+  const serious = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+  const report = serious.map((v) => `${v.id} (${v.impact}): ${v.help}\n    ${v.nodes.slice(0, 4).map((n) => n.target.join(' ')).join('\n    ')}`);
+  expect(report, `axe violations${context ? ` on ${context}` : ''} at ${page.url()}`).toEqual([]);
+}
+
+/** A name no other test (or earlier run) has used. */
+export function unique(prefix: string) {
+  return `${prefix} ${Date.now().toString(36)}${Math.floor(Math.random() * 1296).toString(36)}`;
 }

@@ -1,0 +1,52 @@
+import { expect, test, type Page } from '@playwright/test';
+import { expectNoSeriousA11yViolations, signIn, SHOTS } from './support';
+
+test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+
+/** The item's name as the list shows it: the first line of the checkbox's label. */
+const itemName = async (page: Page, index: number) =>
+  (await page.getByRole('checkbox', { checked: false }).nth(index).locator('xpath=..').locator('span.font-bold').first().textContent())!.trim();
+
+test('the assistant checks two items on the shopping list (they sink, strike through and stay), then prints it', async ({ page }) => {
+  await signIn(page, 'assistant@trayline.test');
+  await page.goto('/shopping');
+  await expect(page).toHaveURL(/\/weeks\/\d+\/shopping$/);
+  await expect(page.getByRole('heading', { level: 1, name: 'Shopping list' })).toBeVisible();
+  await expect(page.getByRole('checkbox').first()).toBeVisible();
+  await expectNoSeriousA11yViolations(page, 'shopping list');
+
+  const names = [await itemName(page, 0), await itemName(page, 1)];
+  for (const name of names) {
+    const box = page.getByRole('checkbox', { name: new RegExp(`^${name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`) });
+    await box.check();
+    await expect(box).toBeChecked();
+  }
+
+  const checkedState = async () => {
+    for (const name of names) {
+      const box = page.getByRole('checkbox', { name: new RegExp(`^${name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`) });
+      await expect(box).toBeChecked();
+      // Struck through, and last in its aisle (checked items sink below the ones still to buy).
+      await expect(box.locator('xpath=..').getByText(name, { exact: true })).toHaveCSS('text-decoration-line', 'line-through');
+      const aisle = page.getByRole('region').filter({ has: box });
+      await expect(aisle.getByRole('checkbox').last()).toBeChecked();
+      const boxes = await aisle.getByRole('checkbox').all();
+      const states = await Promise.all(boxes.map((b) => b.isChecked()));
+      expect(states.indexOf(true) === -1 || states.slice(states.indexOf(true)).every(Boolean), 'checked items come after unchecked ones').toBe(true);
+    }
+  };
+  await checkedState();
+  await expect(page.getByText(/^2 of \d+ checked/)).toBeVisible();
+
+  // Saved on the server: still checked after a reload.
+  await page.reload();
+  await expect(page.getByRole('heading', { level: 1, name: 'Shopping list' })).toBeVisible();
+  await checkedState();
+
+  // Print: the app's navigation and the page's buttons are hidden; the list stays.
+  await page.emulateMedia({ media: 'print' });
+  await expect(page.getByRole('button', { name: 'Menu' })).toBeHidden();
+  await expect(page.getByRole('button', { name: 'Print' })).toBeHidden();
+  await expect(page.getByRole('heading', { level: 1, name: 'Shopping list' })).toBeVisible();
+  await page.screenshot({ path: `${SHOTS}/assistant-shopping.png`, fullPage: true });
+});

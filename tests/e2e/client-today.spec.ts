@@ -1,0 +1,33 @@
+import { expect, test } from '@playwright/test';
+import { expectNoSeriousA11yViolations, signIn, SHOTS } from './support';
+
+// The demo week is seeded from the Monday of the current UTC week through Sunday, with every client's first slot
+// planned each day (server/db/seeders/week-demo.ts). The browser runs in UTC too, so "today" is always on it.
+test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, timezoneId: 'UTC' });
+
+test("a client on a phone sees today's plate with its macros and eat-by", async ({ page }) => {
+  await signIn(page, 'client1@trayline.test');
+  await expect(page).toHaveURL(/\/my-plates$/);
+  await expect(page.getByRole('heading', { level: 1, name: "Today's plate" })).toBeVisible();
+  const today = new Date().toLocaleDateString('en-US', { weekday: 'long', day: 'numeric', month: 'short', timeZone: 'UTC' });
+  await expect(page.getByText(today, { exact: true })).toBeVisible();
+
+  // The first plate card: its name, the four macros (each a number with its term) and the eat-by (or thaw) note.
+  const card = page.locator('main').getByRole('heading', { level: 2 }).first();
+  await expect(card).not.toBeEmpty();
+  for (const [term, value] of [
+    ['kcal', /^\d+$/],
+    ['net carbs', /^\d+(\.\d+)? g$/],
+    ['protein', /^\d+(\.\d+)? g$/],
+    ['fat', /^\d+(\.\d+)? g$/],
+  ] as const) {
+    const term1 = page.getByRole('term').filter({ hasText: new RegExp(`^${term}$`) }).first();
+    await expect(term1).toBeVisible();
+    await expect(term1.locator('xpath=preceding-sibling::dd[1]')).toHaveText(value);
+  }
+  await expect(page.getByText(/^(Eat by|Frozen portion: move it to the fridge on the evening of) /).first()).toBeVisible();
+  await expect(page.getByRole('button', { name: /today/ })).toHaveAttribute('aria-current', 'date');
+
+  await expectNoSeriousA11yViolations(page, 'my plates');
+  await page.screenshot({ path: `${SHOTS}/client-today.png`, fullPage: true });
+});

@@ -1,0 +1,126 @@
+import { expect, test, type Locator, type Page } from '@playwright/test';
+import { expectNoSeriousA11yViolations, signIn, SHOTS, unique } from './support';
+
+/** Picks an ingredient in the tray editor's ARIA combobox with the keyboard (type, ArrowDown, Enter). */
+async function pickIngredient(page: Page, line: number, search: string, option: RegExp) {
+  const box = page.getByRole('combobox', { name: `Ingredient ${line}` });
+  await box.fill(search);
+  await expect(page.getByRole('option', { name: option }).first()).toBeVisible();
+  await box.press('ArrowDown');
+  await box.press('ArrowUp');
+  await expect(page.getByRole('option', { name: option, selected: true })).toBeVisible();
+  await box.press('Enter');
+  await expect(box).toHaveValue(option);
+}
+
+/**
+ * Drags a palette item onto a cell with the keyboard only (@dnd-kit KeyboardSensor: Space picks up, each arrow
+ * press moves 25 px, Space drops). Steers by where the two boxes are after each press, so an auto-scroll of the
+ * board while dragging does not throw it off.
+ */
+async function keyboardDrag(page: Page, item: Locator, target: Locator) {
+  await target.scrollIntoViewIfNeeded();
+  await item.scrollIntoViewIfNeeded();
+  await item.focus();
+  await expect(item).toBeFocused();
+  await page.keyboard.press('Space');
+  for (let i = 0; i < 120; i++) {
+    const from = (await item.boundingBox())!;
+    const to = (await target.boundingBox())!;
+    const dx = to.x + to.width / 2 - (from.x + from.width / 2);
+    const dy = to.y + to.height / 2 - (from.y + from.height / 2);
+    if (Math.abs(dx) <= to.width / 2 - 8 && Math.abs(dy) <= to.height / 2 - 8) break;
+    if (Math.abs(dx) > to.width / 2 - 8) await page.keyboard.press(dx > 0 ? 'ArrowRight' : 'ArrowLeft');
+    else await page.keyboard.press(dy > 0 ? 'ArrowDown' : 'ArrowUp');
+  }
+  await page.keyboard.press('Space');
+}
+
+test('the coach drafts a week: base tray, plate, board (keyboard drag and cell panel), warning cleared, published, bake run', async ({ page }) => {
+  test.setTimeout(120_000);
+  const trayName = unique('E2E cheddar egg slab');
+  const plateName = unique('E2E cheddar slab plate');
+  const weekName = unique('E2E week');
+
+  await signIn(page, 'coach@trayline.test');
+
+  // 1. A base tray: two ingredients through the combobox, amounts, pan and a 4 × 6 cut plan; live numbers show.
+  await page.goto('/trays/new');
+  await expect(page.getByRole('heading', { name: 'New base tray' })).toBeVisible();
+  await page.getByLabel('Name', { exact: true }).fill(trayName);
+  await page.getByRole('button', { name: 'Add an ingredient' }).click();
+  await pickIngredient(page, 1, 'eggs, whole', /^Eggs, whole, raw/);
+  await page.getByLabel('Amount').nth(0).fill('24');
+  await page.getByLabel('Unit').nth(0).selectOption('large');
+  await page.getByRole('button', { name: 'Add an ingredient' }).click();
+  await pickIngredient(page, 2, 'cheddar', /^Cheddar cheese/);
+  await page.getByLabel('Amount').nth(1).fill('300');
+  await page.getByLabel('Unit').nth(1).selectOption('g');
+  await page.getByLabel('Pan', { exact: true }).selectOption({ index: 0 });
+  await page.getByRole('radio', { name: 'Rows × columns' }).check();
+  await page.getByRole('textbox', { name: 'Rows' }).fill('4');
+  await page.getByRole('textbox', { name: 'Columns' }).fill('6');
+  const live = page.locator('dl').filter({ hasText: 'Net carbs' });
+  await expect(live.getByText('kcal')).toBeVisible({ timeout: 10_000 });
+  await expect(page.getByText(/per portion of 24/)).toBeVisible();
+  await expectNoSeriousA11yViolations(page, 'tray editor');
+  await page.getByRole('button', { name: 'Create base tray' }).click();
+  await expect(page).toHaveURL(/\/trays\/\d+$/);
+  await expect(page.getByRole('heading', { name: trayName })).toBeVisible();
+  await expectNoSeriousA11yViolations(page, 'tray page');
+
+  // 2. A plate made of one portion of that tray.
+  await page.goto('/plates');
+  await page.getByRole('button', { name: 'New plate' }).click();
+  await page.getByLabel('Plate name').fill(plateName);
+  await page.getByRole('button', { name: 'Add a tray portion' }).click();
+  await page.getByLabel('Base tray').selectOption({ label: trayName });
+  await page.getByLabel('Portions').fill('1');
+  await expectNoSeriousA11yViolations(page, 'plates editor');
+  await page.getByRole('button', { name: 'Save plate' }).click();
+  await expect(page.getByRole('heading', { name: plateName })).toBeVisible();
+
+  // 3. A new prep week (next Monday by default).
+  await page.goto('/weeks');
+  await expectNoSeriousA11yViolations(page, 'prep weeks');
+  await page.getByLabel('Name (optional)').fill(weekName);
+  await page.getByRole('button', { name: 'Create' }).click();
+  await expect(page).toHaveURL(/\/weeks\/\d+$/);
+  await expect(page.getByRole('heading', { name: weekName })).toBeVisible();
+  const weekUrl = page.url();
+
+  // 4. One plate by keyboard drag and drop onto Dana's first breakfast, another through the cell panel.
+  const danaCells = page.getByRole('button', { name: /^Dana Whitlock, .*, breakfast: / });
+  const first = danaCells.nth(0);
+  await expect(first).toHaveAccessibleName(/: empty$/);
+  const item = page.getByRole('button', { name: new RegExp(`^${plateName}`) });
+  await keyboardDrag(page, item, first);
+  await expect(first).toHaveAccessibleName(new RegExp(`: ${plateName}`));
+
+  const second = danaCells.nth(1);
+  await second.focus();
+  await page.keyboard.press('Enter');
+  const panel = page.getByRole('region', { name: 'Selected cell' });
+  await panel.getByLabel('Plate', { exact: true }).selectOption({ label: plateName });
+  await expect(second).toHaveAccessibleName(new RegExp(`: ${plateName}`));
+
+  // 5. No trays are counted yet, so portions are short; the cover action clears the warning.
+  await expect(page.getByRole('note').filter({ hasText: /portion\(s\) short/ })).toBeVisible();
+  await expectNoSeriousA11yViolations(page, 'week board');
+  await page.getByRole('button', { name: 'Set tray counts to cover the need' }).click();
+  await expect(page.getByText('Every portion is baked')).toBeVisible();
+  await expect(page.getByRole('note').filter({ hasText: /portion\(s\) short/ })).toHaveCount(0);
+
+  // 6. Publish, then the bake run of that week shows its timeline.
+  await page.getByRole('button', { name: 'Publish to clients' }).click();
+  await expect(page.getByText(/published v1/)).toBeVisible();
+  await page.screenshot({ path: `${SHOTS}/coach-drafts-week-board.png`, fullPage: true });
+
+  await page.goto(`${weekUrl}/bake-run`);
+  await expect(page.getByRole('heading', { name: 'Bake run' })).toBeVisible();
+  const timeline = page.getByRole('figure', { name: 'Bake run timeline' });
+  await expect(timeline).toBeVisible();
+  await expect(timeline.getByRole('listitem', { name: new RegExp(trayName) }).first()).toBeVisible();
+  await expectNoSeriousA11yViolations(page, 'bake run');
+  await page.screenshot({ path: `${SHOTS}/coach-drafts-week.png`, fullPage: true });
+});
