@@ -22,14 +22,14 @@ import type { DemoContext } from './demo-seed.js';
  * are not advice.
  */
 const DEMO_CLIENTS: (Partial<CreateClientInput> & Pick<CreateClientInput, 'sex' | 'ageYears' | 'heightCm' | 'weightKg' | 'activity' | 'goal'>)[] = [
-  { sex: 'female', ageYears: 42, heightCm: '168', weightKg: '74', activity: 'light', goal: 'lose' },
+  { sex: 'female', ageYears: 42, heightCm: '168', weightKg: '74', activity: 'moderate', goal: 'lose' },
   {
     sex: 'female', ageYears: 35, heightCm: '160', weightKg: '62', activity: 'moderate', goal: 'maintain', allergens: ['milk'],
     healthNotes: 'Dairy-free; tolerates aged sheep-milk feta in small amounts (demo).',
   },
   {
-    sex: 'male', ageYears: 48, heightCm: '182', weightKg: '95', activity: 'sedentary', goal: 'lose', allergens: ['egg'],
-    slotShares: { breakfast: 0.25, lunch: 0.25 }, healthNotes: 'Egg allergy. Cooks his own dinner and snacks (demo).',
+    sex: 'male', ageYears: 48, heightCm: '182', weightKg: '95', activity: 'light', goal: 'lose', allergens: ['egg'],
+    slotShares: { breakfast: 0.21, lunch: 0.21 }, healthNotes: 'Egg allergy. Cooks his own dinner and snacks (demo).',
   },
   {
     sex: 'female', ageYears: 39, heightCm: '172', weightKg: '68', activity: 'active', goal: 'maintain', householdMultiplier: '3',
@@ -41,22 +41,25 @@ const DEMO_CLIENTS: (Partial<CreateClientInput> & Pick<CreateClientInput, 'sex' 
     healthNotes: 'Trains mornings; big dinners at home (demo).',
   },
   {
-    sex: 'female', ageYears: 55, heightCm: '165', weightKg: '80', activity: 'light', goal: 'lose',
+    sex: 'female', ageYears: 55, heightCm: '165', weightKg: '80', activity: 'light', goal: 'maintain', slotShares: { breakfast: 0.24, lunch: 0.24 },
     healthNotes: 'Type 2 diabetes: medication reviewed with her clinician before starting (demo).',
   },
-  { sex: 'male', ageYears: 61, heightCm: '175', weightKg: '88', activity: 'sedentary', goal: 'lose', slotShares: { breakfast: 0.25, lunch: 0.3 } },
+  {
+    sex: 'male', ageYears: 61, heightCm: '175', weightKg: '88', activity: 'light', goal: 'maintain', netCarbCapG: '40',
+    slotShares: { breakfast: 0.22, lunch: 0.23 },
+  },
   { sex: 'female', ageYears: 27, heightCm: '158', weightKg: '57', activity: 'moderate', goal: 'maintain', targetMode: 'manual', manualTargets: { targetKcal: 1900, netCarbCapG: 35, proteinG: 90, fatG: 150 },
     slotShares: { breakfast: 0.25, lunch: 0.25 } },
 ];
 
 /**
- * The prepped breakfast and lunch cover a share of a client's day (the rest is their own cooking): 30 % + 30 % by
- * default, less for clients who eat big dinners at home. Low-carb (30 g net carbs a day), 1.0 g protein per kg unless
+ * The prepped breakfast and lunch cover a share of a client's day (the rest is their own cooking): 25 % + 25 % by
+ * default, less for clients who eat big dinners at home. Low-carb (35 g net carbs a day), 1.2 g protein per kg unless
  * said otherwise. Demo values chosen so the demo week reads as well planned; they are not advice.
  */
 const CLIENT_DEFAULTS = {
-  householdMultiplier: '1', netCarbCapG: '30', proteinGPerKg: '1.0', targetMode: 'computed' as const,
-  slotShares: { breakfast: 0.3, lunch: 0.3 },
+  householdMultiplier: '1', netCarbCapG: '35', proteinGPerKg: '1.2', targetMode: 'computed' as const,
+  slotShares: { breakfast: 0.25, lunch: 0.25 },
 };
 
 type Part = [tray: string, portions: number] | [slug: string, amountText: string, unit: string, note?: string];
