@@ -10,6 +10,7 @@ import { Button } from '@/components/ui/button';
 import { Card, EmptyState, ErrorState, PageHeader, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
+import { DemoNotice } from '@/features/auth/components/demo-notice';
 
 const isFull = (c: ClientListItemDto): c is ClientDto => 'targets' in c;
 
@@ -26,6 +27,7 @@ export function Component() {
           {adding ? 'Close' : 'New client'}
         </Button>
       </PageHeader>
+      <DemoNotice>These clients are invented demo people: names, measurements and notes are made up and are not advice.</DemoNotice>
       {adding && (
         <Card>
           <h2 className="mb-3 text-xl">New client</h2>
@@ -63,8 +65,8 @@ export function Component() {
                   <th className="text-right">kcal</th>
                   <th className="text-right">Net-carb cap</th>
                   <th className="text-right">Protein</th>
-                  <th>Allergens</th>
-                  <th>Account</th>
+                  <th className="pl-6">Allergens</th>
+                  <th className="pl-4">Account</th>
                 </tr>
               </thead>
               <tbody>
@@ -81,8 +83,8 @@ export function Component() {
                         <td className="num text-right">{c.targets.targetKcal}</td>
                         <td className="num text-right">{c.targets.netCarbCapG} g</td>
                         <td className="num text-right">{c.targets.proteinG} g</td>
-                        <td>{c.allergens.map(allergenLabel).join(', ') || '—'}</td>
-                        <td>{c.account ? 'Joined' : 'Not invited'}</td>
+                        <td className="pl-6">{c.allergens.map(allergenLabel).join(', ') || '—'}</td>
+                        <td className="pl-4">{c.account ? 'Joined' : 'Not invited'}</td>
                       </>
                     ) : (
                       <td colSpan={5} />

@@ -43,11 +43,13 @@ export function LabelSheet({ layout, labels }: { layout: LabelSheetCode; labels:
   return (
     <>
       <style>{`@page { size: ${sheet.page.cssSize}; margin: 0; } @media print { #main { padding: 0 !important; margin: 0 !important; max-width: none !important; } .label-page { box-shadow: none !important; margin: 0 !important; break-after: page; } .label-page:last-child { break-after: auto; } }`}</style>
-      <div className="flex flex-col items-center gap-6 overflow-x-auto print:block print:gap-0">
+      <p className="no-print text-sm text-ink-faint md:hidden">The sheets are at real size: scroll sideways to see a whole sheet.</p>
+      {/* Sheets centre with auto margins, so a sheet wider than a phone still scrolls to its left edge. */}
+      <div role="region" aria-label="Label sheets at real size" tabIndex={0} className="flex flex-col items-start gap-6 overflow-x-auto pb-2 print:block print:gap-0">
         {pages.map((page, p) => (
           <div
             key={p}
-            className="label-page relative shrink-0 bg-white shadow-tray"
+            className="label-page relative mx-auto shrink-0 bg-white shadow-tray"
             style={{ width: `${sheet.page.width}${u}`, height: `${sheet.page.height}${u}` }}
             aria-label={`Sheet ${p + 1} of ${pages.length}`}
           >
