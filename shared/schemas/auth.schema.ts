@@ -60,6 +60,8 @@ export interface MeDto {
   role: Role;
   workspaceId: number;
   workspaceName: string;
+  /** The seeded demo workspace (invented people and recipes). */
+  workspaceIsDemo: boolean;
   clientId: number | null;
   unitSystem: (typeof UNIT_SYSTEMS)[number];
   tempUnit: (typeof TEMP_UNITS)[number];

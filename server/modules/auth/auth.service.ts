@@ -59,6 +59,7 @@ export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
     role: actor.role,
     workspaceId: ws.id,
     workspaceName: ws.name,
+    workspaceIsDemo: ws.isDemo,
     clientId: actor.clientId,
     unitSystem: user.unitSystem as MeDto['unitSystem'],
     tempUnit: user.tempUnit as MeDto['tempUnit'],

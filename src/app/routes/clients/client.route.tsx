@@ -13,6 +13,7 @@ import { Cautions } from '@/components/domain/cautions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
+import { DemoNotice } from '@/features/auth/components/demo-notice';
 
 function InviteCard({ client }: { client: ClientDto }) {
   const invite = useInviteClient(client.id);
@@ -84,6 +85,7 @@ export function Component() {
           Delete
         </Button>
       </PageHeader>
+      <DemoNotice>An invented demo client: measurements, targets and notes are made up and are not advice.</DemoNotice>
       {stale && (
         <Notice tone="warn" title="Someone else changed this profile">
           The form now shows their version; make your change again.

@@ -6,6 +6,7 @@ import { localToday, myWeekQuery } from '@/features/weeks/api/weeks.queries';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { myPlanPdfUrl } from '@/features/week-mail/api/week-mail.queries';
+import { DemoNotice } from '@/features/auth/components/demo-notice';
 
 const dayLabel = (iso: string, long = false) =>
   new Date(`${iso}T12:00:00Z`).toLocaleDateString(undefined, { weekday: long ? 'long' : 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
@@ -104,6 +105,7 @@ export function Component() {
           Download my week (PDF)
         </a>
       </PageHeader>
+      <DemoNotice>A demo account: this plan and its people are invented for trying Trayline.</DemoNotice>
       {day ? day.plates.map((p) => <PlateCard key={p.slot} plate={p} />) : <EmptyState title="Nothing planned that day" />}
       <Card>
         <h2 className="mb-2 text-xl">The week at a glance</h2>

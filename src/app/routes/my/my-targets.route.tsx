@@ -4,6 +4,7 @@ import { clientQuery } from '@/features/clients/api/clients.queries';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { Card, EmptyState, ErrorState, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
+import { DemoNotice } from '@/features/auth/components/demo-notice';
 
 function Linked({ clientId }: { clientId: number }) {
   const q = useQuery(clientQuery(clientId));
@@ -14,6 +15,7 @@ function Linked({ clientId }: { clientId: number }) {
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-5">
       <PageHeader title="My targets" lead={t.mode === 'computed' ? 'Computed by your coach from your profile' : 'Set by your coach'} />
+      <DemoNotice>A demo account: these targets belong to an invented person and are not advice.</DemoNotice>
       <Card>
         <dl className="grid grid-cols-2 gap-3">
           {[

@@ -10,6 +10,7 @@ import { Card, EmptyState, ErrorState, Notice, PageHeader, Skeleton } from '@/co
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError } from '@/lib/problem';
 import { useMe } from '@/features/auth/hooks/use-me';
+import { DemoNotice } from '@/features/auth/components/demo-notice';
 
 function Editor({ plate, onDone }: { plate: AssemblyDto | null; onDone: () => void }) {
   const save = useSaveAssembly(plate?.id ?? null);
@@ -48,6 +49,7 @@ export function Component() {
       <PageHeader title="Plates" lead="Portions of base trays plus add-ons, with their macros, allergens and steps.">
         {coach && <Button onClick={() => setEditing(editing ? null : 'new')}>{editing ? 'Close' : 'New plate'}</Button>}
       </PageHeader>
+      <DemoNotice>These plates are invented demo data for trying Trayline; their numbers come from the demo base trays.</DemoNotice>
       {editing && <Editor plate={editing === 'new' ? null : editing} onDone={() => setEditing(null)} />}
       {error && <Notice tone="block" title={error} />}
       {list.isPending ? (
