@@ -89,7 +89,8 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await expect(page.getByRole('heading', { name: weekName })).toBeVisible();
   const weekUrl = page.url();
 
-  // 4. One plate by keyboard drag and drop onto Dana's first breakfast, another through the cell panel.
+  // 4. Keyboard only on the board: one plate by drag and drop onto Dana's first breakfast, another through the
+  //    cell panel (focus the cell, Enter), then the cover action and publishing (focus, Enter).
   const danaCells = page.getByRole('button', { name: /^Dana Whitlock, .*, breakfast: / });
   const first = danaCells.nth(0);
   await expect(first).toHaveAccessibleName(/: empty$/);
@@ -101,18 +102,22 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await second.focus();
   await page.keyboard.press('Enter');
   const panel = page.getByRole('region', { name: 'Selected cell' });
+  // The cell panel's plate select (a native select: keyboard-operable as it is).
+  await panel.getByLabel('Plate', { exact: true }).focus();
   await panel.getByLabel('Plate', { exact: true }).selectOption({ label: plateName });
   await expect(second).toHaveAccessibleName(new RegExp(`: ${plateName}`));
 
   // 5. No trays are counted yet, so portions are short; the cover action clears the warning.
   await expect(page.getByRole('note').filter({ hasText: /portion\(s\) short/ })).toBeVisible();
   await expectNoSeriousA11yViolations(page, 'week board');
-  await page.getByRole('button', { name: 'Set tray counts to cover the need' }).click();
+  await page.getByRole('button', { name: 'Set tray counts to cover the need' }).focus();
+  await page.keyboard.press('Enter');
   await expect(page.getByText('Every portion is baked')).toBeVisible();
   await expect(page.getByRole('note').filter({ hasText: /portion\(s\) short/ })).toHaveCount(0);
 
   // 6. Publish, then the bake run of that week shows its timeline.
-  await page.getByRole('button', { name: 'Publish to clients' }).click();
+  await page.getByRole('button', { name: 'Publish to clients' }).focus();
+  await page.keyboard.press('Enter');
   await expect(page.getByText(/published v1/)).toBeVisible();
   await page.screenshot({ path: `${SHOTS}/coach-drafts-week-board.png`, fullPage: true });
 
