@@ -107,7 +107,22 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await panel.getByLabel('Plate', { exact: true }).selectOption({ label: plateName });
   await expect(second).toHaveAccessibleName(new RegExp(`: ${plateName}`));
 
-  // 5. No trays are counted yet, so portions are short; the cover action clears the warning.
+  // 5a. The plate has egg: on a client allergic to egg the board asks for a reason before it overrides.
+  const eggRow = page.getByRole('rowheader').filter({ hasText: /⚠ .*\bEgg\b/ }).first();
+  const eggClient = (await eggRow.locator('span.font-bold').first().textContent())!.trim();
+  const eggCell = page.getByRole('button', { name: new RegExp(`^${eggClient}, .*, breakfast: empty$`) }).first();
+  await eggCell.focus();
+  await page.keyboard.press('Enter');
+  await panel.getByLabel('Plate', { exact: true }).selectOption({ label: plateName });
+  const prompt = page.getByRole('alertdialog', { name: 'Allergen conflict' });
+  await expect(prompt).toBeVisible();
+  await expectNoSeriousA11yViolations(page, 'allergen prompt');
+  await prompt.getByLabel('Reason to override (kept with the plan)').fill('Cleared by the client in writing (e2e)');
+  await prompt.getByRole('button', { name: 'Override with this reason' }).click();
+  await expect(prompt).toBeHidden();
+  await expect(page.getByText(/^Allergen override: Egg \(Cleared by the client in writing \(e2e\)\)/)).toBeVisible();
+
+  // 5b. No trays are counted yet, so portions are short; the cover action clears the warning.
   await expect(page.getByRole('note').filter({ hasText: /portion\(s\) short/ })).toBeVisible();
   await expectNoSeriousA11yViolations(page, 'week board');
   await page.getByRole('button', { name: 'Set tray counts to cover the need' }).focus();
