@@ -186,7 +186,7 @@ function LineRow(props: {
     return all;
   }, [facts, unit]);
   return (
-    <li className="grid gap-2 rounded-lg border border-line p-3 sm:grid-cols-2 sm:items-start xl:grid-cols-[2fr_6rem_minmax(11rem,1.2fr)_1.5fr_auto]">
+    <li className="grid gap-2 rounded-lg border border-line p-3 sm:grid-cols-2 sm:items-start">
       <IngredientCombobox
         label={`Ingredient ${i + 1}`}
         value={id ? { id, name } : null}
@@ -208,7 +208,7 @@ function LineRow(props: {
         ))}
       </SelectField>
       <TextField label="Note" placeholder="e.g. chopped" error={err?.note?.message} {...form.register(`lines.${i}.note`)} />
-      <div className="flex gap-1 xl:mt-6" role="group" aria-label={`Line ${i + 1} actions`}>
+      <div className="flex gap-1 sm:col-span-2" role="group" aria-label={`Line ${i + 1} actions`}>
         <Button type="button" size="sm" variant="ghost" disabled={i === 0} onClick={() => props.onMove(i - 1)} aria-label={`Move line ${i + 1} up`}>
           ↑
         </Button>
