@@ -136,7 +136,14 @@ export function Component() {
           ))}
         </Notice>
         <Notice tone={warns.length ? 'warn' : 'info'} title={`${warns.length} warning(s)`}>
-          Over the net-carb cap, short of protein, dislikes, overridden allergens.
+          {warns.length === 0
+            ? 'No day over the net-carb cap or short of protein, no dislikes, no allergens allowed.'
+            : warns.slice(0, 3).map((w, i) => (
+                <p key={i}>
+                  <span className="font-bold">{board.clients.find((c) => String(c.id) === String(w.clientId))?.name ?? 'A client'}</span>, {w.date}: {w.message}
+                </p>
+              ))}
+          {warns.length > 3 && <p>…and {warns.length - 3} more, flagged on the board.</p>}
         </Notice>
         <Notice tone={short ? 'warn' : 'info'} title={short ? `${short} portion(s) short` : 'Every portion is baked'} />
       </div>
