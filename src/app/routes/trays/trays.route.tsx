@@ -37,8 +37,8 @@ export function Component() {
           </Link>
         )}
       </PageHeader>
-      <form role="search" aria-label="Filter base trays" className="no-print grid gap-3 sm:grid-cols-5" onSubmit={(e) => e.preventDefault()}>
-        <TextField label="Search" defaultValue={filters.q ?? ''} onChange={(e) => set('q', e.target.value)} />
+      <form role="search" aria-label="Filter base trays" className="no-print grid grid-cols-2 gap-3 sm:grid-cols-5" onSubmit={(e) => e.preventDefault()}>
+        <TextField label="Search" className="col-span-2 sm:col-span-1" defaultValue={filters.q ?? ''} onChange={(e) => set('q', e.target.value)} />
         <SelectField label="Free of" value={params.get('freeOf') ?? ''} onChange={(e) => set('freeOf', e.target.value)}>
           <option value="">Any allergens</option>
           {MAJOR_ALLERGENS.map((a) => (
@@ -48,7 +48,7 @@ export function Component() {
           ))}
         </SelectField>
         <TextField
-          label="Net carbs per portion ≤ (g)"
+          label="Net carbs ≤ (g/portion)"
           inputMode="decimal"
           defaultValue={params.get('maxNetCarbs') ?? ''}
           onChange={(e) => set('maxNetCarbs', e.target.value.trim())}
