@@ -133,6 +133,19 @@ function exactOf(m: CellMacros): ExactMacros {
   return exact;
 }
 
+/** Protein floor and energy limit of one client's targets under the rules (memoized like the macros above). */
+const limitMemo = new WeakMap<MacroTargets, { proteinG: number; targetKcal: number; share: string; over: string; floor: Decimal; limit: Decimal }>();
+function limitsOf(targets: MacroTargets, rules: CheckRules): { floor: Decimal; limit: Decimal } {
+  const share = String(rules.proteinFloorShare);
+  const over = String(rules.energyOverShare);
+  const e = limitMemo.get(targets);
+  if (e && e.proteinG === targets.proteinG && e.targetKcal === targets.targetKcal && e.share === share && e.over === over) return e;
+  const floor = new Decimal(targets.proteinG).times(rules.proteinFloorShare);
+  const limit = new Decimal(targets.targetKcal).times(new Decimal(rules.energyOverShare).plus(1));
+  limitMemo.set(targets, { proteinG: targets.proteinG, targetKcal: targets.targetKcal, share, over, floor, limit });
+  return { floor, limit };
+}
+
 function dislikeSet(list: readonly string[]): Set<string> {
   const e = normalizedDislikes.get(list);
   if (e && sameList(e.from, list)) return e.set;
@@ -171,14 +184,13 @@ function macroWarnings(input: DayCheckInput, totals: ReturnType<typeof sumMacros
     warnings.push({ ...base, kind: 'net-carbs-over', actualG, capG: targets.netCarbCapG,
       message: `Net carbs ${actualG} g are over the ${targets.netCarbCapG} g cap.` });
   }
-  const floor = new Decimal(targets.proteinG).times(rules.proteinFloorShare);
+  const { floor, limit } = limitsOf(targets, rules);
   if (totals.proteinG.lt(floor)) {
     const actualG = round1(totals.proteinG);
     const floorG = round1(floor);
     warnings.push({ ...base, kind: 'protein-short', actualG, targetG: targets.proteinG, floorG,
       message: `Protein ${actualG} g is below the ${floorG} g floor (target ${targets.proteinG} g).` });
   }
-  const limit = new Decimal(targets.targetKcal).times(new Decimal(rules.energyOverShare).plus(1));
   if (totals.kcal.gt(limit)) {
     const actualKcal = round1(totals.kcal);
     const limitKcal = round1(limit);
