@@ -200,7 +200,8 @@ function LineRow(props: {
         }}
       />
       <TextField label="Amount" inputMode="text" error={err?.amountText?.message} {...form.register(`lines.${i}.amountText`)} />
-      <SelectField label="Unit" error={err?.unit?.message} {...form.register(`lines.${i}.unit`)}>
+      {/* Controlled by the watched value: a unit chosen on pick shows even when its option appears only after the pick. */}
+      <SelectField label="Unit" error={err?.unit?.message} {...form.register(`lines.${i}.unit`)} value={unit}>
         {units.map((u) => (
           <option key={u.code} value={u.code}>
             {u.label}
