@@ -113,7 +113,7 @@ export function createApp({ orm, pool, env, mail, logger }: AppDeps): Express {
   app.use('/api', api);
 
   if (env.SERVE_CLIENT === '1') {
-    const dist = path.resolve('dist/client');
+    const dist = path.resolve(env.CLIENT_DIST);
     if (fs.existsSync(path.join(dist, 'index.html'))) {
       app.use(express.static(dist, { index: false, maxAge: '1h' }));
       app.get('/{*splat}', (_req, res) => res.sendFile(path.join(dist, 'index.html')));

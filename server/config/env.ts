@@ -25,6 +25,8 @@ const envSchema = z.object({
   FILES_DIR: z.string().default('.data/files'),
   DEMO_SEED: z.enum(['0', '1']).default('1'),
   SERVE_CLIENT: z.enum(['0', '1']).default('1'),
+  /** Folder of the built client that the API serves (the end-to-end run uses a folder of its own). */
+  CLIENT_DIST: z.string().default('dist/client'),
   DEV_MAIL_VIEW: z.enum(['0', '1']).default('1'),
 });
 

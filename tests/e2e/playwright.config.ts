@@ -34,6 +34,8 @@ export default defineConfig({
       PORT: String(port),
       DATABASE_URL: dbUrl,
       NODE_ENV: 'production',
+      // scripts/test.sh builds the client into a folder of the e2e run's own, so another build cannot pull it away.
+      CLIENT_DIST: process.env.E2E_CLIENT_DIST ?? '.data/e2e-client',
       LOG_LEVEL: 'warn',
       PUBLIC_URL: `http://127.0.0.1:${port}`,
       SMTP_PORT: process.env.E2E_SMTP_PORT ?? '2626',
