@@ -31,7 +31,7 @@ log "unit, client and API suites (vitest)"
 node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$out/vitest.json" || status=1
 
 log "end-to-end journeys (Playwright, Debian's chromium)"
-node_modules/.bin/vite build --logLevel error --emptyOutDir --outDir "$here/.data/e2e-client" || status=1
+node_modules/.bin/vite build --logLevel error --emptyOutDir --outDir "$here/dist/e2e-client" || status=1
 node_modules/.bin/tsx scripts/e2e-db.ts || status=1
 # The local mail catcher for the e2e server (Playwright's webServer sends to SMTP_PORT=${E2E_SMTP_PORT:-2626}); it
 # stores caught mail in the e2e database. Started as node itself (not the tsx launcher) so cleanup's kill reaches it.

@@ -35,7 +35,7 @@ export default defineConfig({
       DATABASE_URL: dbUrl,
       NODE_ENV: 'production',
       // scripts/test.sh builds the client into a folder of the e2e run's own, so another build cannot pull it away.
-      CLIENT_DIST: process.env.E2E_CLIENT_DIST ?? '.data/e2e-client',
+      CLIENT_DIST: process.env.E2E_CLIENT_DIST ?? 'dist/e2e-client',
       LOG_LEVEL: 'warn',
       PUBLIC_URL: `http://127.0.0.1:${port}`,
       SMTP_PORT: process.env.E2E_SMTP_PORT ?? '2626',
