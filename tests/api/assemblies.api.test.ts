@@ -1,24 +1,14 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
-import pg from 'pg';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, makeAssembly, makeClient, makeIngredient, makeTray, makeWeek, member } from '../support/factories.js';
-import { TEST_DATABASE_URL } from '../support/db.js';
+import { sql } from '../support/db.js';
 
 let app: Express;
 beforeAll(async () => {
   app = (await testApp()).app;
 });
 
-async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
-}
 
 // Avoirdupois ounce = 28.349523125 g exactly (NIST Handbook 44, Appendix C).
 const OZ_G = 28.349523125;

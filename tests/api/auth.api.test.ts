@@ -2,25 +2,15 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import type { Express } from 'express';
 import { verify } from '@node-rs/argon2';
-import pg from 'pg';
 import { agentFor, testApp } from '../support/test-app.js';
 import { coachWorkspace, makeClient, member, PASSWORD, uniq } from '../support/factories.js';
-import { TEST_DATABASE_URL } from '../support/db.js';
+import { sql } from '../support/db.js';
 
 let app: Express;
 beforeAll(async () => {
   app = (await testApp()).app;
 });
 
-async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
-}
 
 describe('sign-in', () => {
   it('register makes a coach with a workspace, and /me answers the documented shape', async () => {

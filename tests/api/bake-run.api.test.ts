@@ -1,9 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
-import pg from 'pg';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, makeOven, makeTray, makeWeek, member, ovenInput } from '../support/factories.js';
-import { TEST_DATABASE_URL } from '../support/db.js';
+import { sql } from '../support/db.js';
 import { DEFAULT_BAKE_RULES } from '@shared/domain/bake-rules-defaults.js';
 
 let app: Express;
@@ -11,15 +10,6 @@ beforeAll(async () => {
   app = (await testApp()).app;
 });
 
-async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
-}
 
 /** One conventional oven, 2 racks × 1 tray; heating 25 °F/min, cooling 15 °F/min (the defaults; common practice, no source). */
 const LEFT = { name: 'Left', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 15, maxF: 500 };

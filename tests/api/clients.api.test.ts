@@ -1,24 +1,14 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
-import pg from 'pg';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, makeClient, member, clientInput } from '../support/factories.js';
-import { TEST_DATABASE_URL } from '../support/db.js';
+import { sql } from '../support/db.js';
 
 let app: Express;
 beforeAll(async () => {
   app = (await testApp()).app;
 });
 
-async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
-}
 
 describe('client profiles and targets', () => {
   // Worked examples of the Mifflin–St Jeor equation: Mifflin MD, St Jeor ST, Hill LA, Scott BJ, Daugherty SA,

@@ -1,10 +1,9 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import Decimal from 'decimal.js';
-import pg from 'pg';
 import type { Express } from 'express';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, ingredientInput, makeIngredient, member, uniq, type Member } from '../support/factories.js';
-import { TEST_DATABASE_URL } from '../support/db.js';
+import { sql } from '../support/db.js';
 import { seedReferenceIngredients } from '@server/db/seeders/ingredient-seed.js';
 import { SEED_INGREDIENTS } from '@server/db/seeders/data/ingredients.data.js';
 
@@ -14,15 +13,6 @@ let assistantA: Member;
 let clientA: Member;
 let coachB: Member;
 
-async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
-}
 
 async function idOf(slug: string): Promise<number> {
   const [row] = await sql<{ id: number }>('select id from ingredient where slug = $1', [slug]);

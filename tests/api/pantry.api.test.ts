@@ -1,25 +1,15 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
-import pg from 'pg';
 import Qty from 'js-quantities';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, makeIngredient, member } from '../support/factories.js';
-import { TEST_DATABASE_URL } from '../support/db.js';
+import { sql } from '../support/db.js';
 
 let app: Express;
 beforeAll(async () => {
   app = (await testApp()).app;
 });
 
-async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
-}
 
 // Eggs bought by the dozen of "large" pieces; 50 g per large egg (USDA FDC 171287 portion "large").
 const eggBody = {

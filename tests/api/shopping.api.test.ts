@@ -2,11 +2,10 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import Qty from 'js-quantities';
 import Papa from 'papaparse';
-import pg from 'pg';
 import { PDFParse } from 'pdf-parse';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, makeIngredient, makeTray, member, type Member } from '../support/factories.js';
-import { TEST_DATABASE_URL } from '../support/db.js';
+import { sql } from '../support/db.js';
 import { shoppingWeek } from '../support/shopping-week.js';
 
 let app: Express;
@@ -34,15 +33,6 @@ const creamBody = {
 };
 // Cheese in 8 oz packages (the factory's default ingredient: 8 oz block, $3.99).
 
-async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
-}
 
 type Item = { ingredientId: number } & Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
 const itemsOf = (body: { aisles: { items: Item[] }[] }) => body.aisles.flatMap((a) => a.items);

@@ -2,13 +2,12 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import fs from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import pg from 'pg';
 import sharp from 'sharp';
 import Decimal from 'decimal.js';
 import type { Express } from 'express';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, makeIngredient, makeTray, member, trayInput, type Member } from '../support/factories.js';
-import { TEST_DATABASE_URL } from '../support/db.js';
+import { sql } from '../support/db.js';
 import { seedReferenceIngredients } from '@server/db/seeders/ingredient-seed.js';
 import { SEED_INGREDIENTS } from '@server/db/seeders/data/ingredients.data.js';
 import { seedDemoTrays, DEMO_TRAYS } from '@server/db/seeders/tray-demo.js';
@@ -25,15 +24,6 @@ let other: Member;
 let ingredientId: number;
 let seedDemo: (m: Member) => Promise<void>;
 
-async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
-}
 
 beforeAll(async () => {
   filesDir = await fs.mkdtemp(path.join(os.tmpdir(), 'trayline-trays-'));

@@ -1,6 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
-import pg from 'pg';
 import { testApp } from '../support/test-app.js';
 import {
   coachWorkspace,
@@ -12,22 +11,13 @@ import {
   member,
   type Member,
 } from '../support/factories.js';
-import { TEST_DATABASE_URL } from '../support/db.js';
+import { sql } from '../support/db.js';
 
 let app: Express;
 beforeAll(async () => {
   app = (await testApp()).app;
 });
 
-async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []) {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
-}
 
 // Board days: Mon 2026-01-05 … Sun 2026-01-11; prep on Sun 2026-01-04 (the factory's default week).
 const DAYS = ['2026-01-05', '2026-01-06', '2026-01-07', '2026-01-08', '2026-01-09', '2026-01-10', '2026-01-11'];

@@ -17,3 +17,14 @@ export async function truncateAll(url = TEST_DATABASE_URL): Promise<void> {
     await client.end();
   }
 }
+
+/** Reads the test database directly, to assert the state an API call left behind. */
+export async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []): Promise<T[]> {
+  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
+  await c.connect();
+  try {
+    return (await c.query<T>(q, args)).rows;
+  } finally {
+    await c.end();
+  }
+}
