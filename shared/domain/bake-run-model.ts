@@ -36,7 +36,7 @@ export const DEFAULT_BAKE_RUN_RULES: Readonly<BakeRunRules> = Object.freeze({
 export const DEFAULT_BAKE_RUN_SEARCH: Readonly<BakeRunSearchOptions> = Object.freeze({
   exactMaxTrays: 8,
   exactNodeLimit: 400_000,
-  heuristicEvaluations: 30_000,
+  heuristicEvaluations: 50_000,
 });
 
 /** Progress comparisons tolerate this much floating-point error (progress is in minutes). */

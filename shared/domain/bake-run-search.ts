@@ -3,9 +3,10 @@
  *
  * - `heuristicPlan`: five greedy constructions (prep orders by rule, each tray to the oven where it comes out
  *   first), then first-improvement local search (move a tray to another oven, move all trays of one set point to
- *   another oven, move a tray elsewhere in the sequence, swap two trays) on the score (session length, then the
- *   sum of out minutes), then iterated local search: kick the plan (move a run of trays, send two trays to other
- *   ovens), improve again, keep it when no worse. Kicks come from a fixed-seed generator and the budget counts
+ *   another oven, move a tray elsewhere in the sequence, swap two set-point blocks of one oven, swap two trays)
+ *   on the score (session length, then the sum of out minutes), then iterated local search in two chains (the
+ *   second with block swaps): kick the plan (move a run of trays, send two trays to other ovens), improve
+ *   again, keep it when no worse. Kicks come from a fixed-seed generator and the budget counts
  *   plan evaluations, never wall-clock time, so the same input always gives the same plan. It stops early when
  *   the session equals the lower bound.
  * - `exactPlan`: depth-first branch and bound that appends one (tray, oven) to the sequence per level, seeded
@@ -111,7 +112,7 @@ interface LocalState {
 }
 
 /** First-improvement local search; returns evaluations used. */
-function improve(prep: PreparedBakeRun, s: LocalState, budget: number, floor: number): number {
+function improve(prep: PreparedBakeRun, s: LocalState, budget: number, floor: number, blockSwaps: boolean): number {
   const { n, m } = prep;
   const ws = createWorkspace(prep);
   let used = 0;
@@ -173,7 +174,22 @@ function improve(prep: PreparedBakeRun, s: LocalState, budget: number, floor: nu
         s.order.splice(p, 0, x);
       }
     }
-    // 4. swap two trays in the sequence
+    // 4. swap two set-point blocks of one oven: their trays trade places in the sequence, each block in its order
+    for (let o = 0; o < m && blockSwaps && used < budget && !improved; o++) {
+      const blocks = ovenBlocks(prep, s, o);
+      for (let a = 0; a < blocks.length && used < budget && !improved; a++) {
+        for (let b = a + 1; b < blocks.length && used < budget; b++) {
+          const saved = s.order.slice();
+          swapBlocks(s.order, blocks[a], blocks[b]);
+          if (tryPlan()) {
+            improved = true;
+            break;
+          }
+          for (let p = 0; p < n; p++) s.order[p] = saved[p];
+        }
+      }
+    }
+    // 5. swap two trays in the sequence
     for (let p = 0; p < n && used < budget; p++) {
       for (let q = p + 1; q < n && q <= p + window && used < budget; q++) {
         [s.order[p], s.order[q]] = [s.order[q], s.order[p]];
@@ -188,6 +204,28 @@ function improve(prep: PreparedBakeRun, s: LocalState, budget: number, floor: nu
   return used;
 }
 
+/** The trays of oven o cut into runs of the same set point class, in sequence order. */
+function ovenBlocks(prep: PreparedBakeRun, s: LocalState, o: number): number[][] {
+  const blocks: number[][] = [];
+  let sp = -1;
+  for (const i of s.order) {
+    if (s.ovenOf[i] !== o) continue;
+    const c = prep.spOf[o][i];
+    if (c !== sp || blocks.length === 0) blocks.push([]);
+    sp = c;
+    blocks[blocks.length - 1].push(i);
+  }
+  return blocks;
+}
+
+/** Puts the trays of blocks x and y (x first in the sequence) into each other's order: y's trays, then x's. */
+function swapBlocks(order: number[], x: number[], y: number[]): void {
+  const inBoth = new Set([...x, ...y]);
+  const replacement = [...y, ...x];
+  let k = 0;
+  for (let p = 0; p < order.length; p++) if (inBoth.has(order[p])) order[p] = replacement[k++];
+}
+
 export function heuristicPlan(prep: PreparedBakeRun, budget: number, floor = 0): SearchOutcome {
   const rank = rankById(prep);
   const ws = createWorkspace(prep);
@@ -200,21 +238,33 @@ export function heuristicPlan(prep: PreparedBakeRun, budget: number, floor = 0):
     if (!best || better(score, best.score)) best = { order, ovenOf, score };
   }
   const s = best!;
-  evaluations += improve(prep, s, Math.max(0, budget - evaluations), floor);
-  // Iterated local search: kick the current plan (pseudo-random with a fixed seed, so still deterministic),
-  // improve it again, keep it when it is no worse.
+  evaluations += improve(prep, s, Math.max(0, budget - evaluations), floor, false);
+  // Iterated local search in two chains that share the budget: kick the current plan (pseudo-random with a fixed
+  // seed, so still deterministic), improve it again, keep it when it is no worse. The first chain (3/5 of the
+  // budget) uses moves 1–3 and 5; the second starts again from the improved greedy plan with block swaps (move 4)
+  // as well, a different neighbourhood that leaves other local optima. The best plan of both is returned.
   const random = seededRandom(0x7a11);
-  let current: LocalState = { order: s.order.slice(), ovenOf: s.ovenOf.slice(), score: s.score };
+  const start: LocalState = { order: s.order.slice(), ovenOf: s.ovenOf.slice(), score: s.score };
   let bestState: LocalState = { order: s.order.slice(), ovenOf: s.ovenOf.slice(), score: s.score };
-  while (evaluations < budget && bestState.score.makespan > floor && prep.n > 2) {
-    const trial: LocalState = { order: current.order.slice(), ovenOf: current.ovenOf.slice(), score: current.score };
-    kick(prep, trial, random);
-    trial.score = evaluatePlan(prep, trial, ws);
-    evaluations++;
-    evaluations += improve(prep, trial, budget - evaluations, floor);
-    if (!better(current.score, trial.score)) current = trial;
-    if (better(trial.score, bestState.score))
-      bestState = { order: trial.order.slice(), ovenOf: trial.ovenOf.slice(), score: trial.score };
+  const half = Math.max(evaluations, Math.floor((budget * 3) / 5));
+  for (const [limit, blockSwaps] of [[half, false], [budget, true]] as const) {
+    if (bestState.score.makespan <= floor) break;
+    let current: LocalState = { order: start.order.slice(), ovenOf: start.ovenOf.slice(), score: start.score };
+    if (blockSwaps && evaluations < limit) {
+      evaluations += improve(prep, current, limit - evaluations, floor, true);
+      if (better(current.score, bestState.score))
+        bestState = { order: current.order.slice(), ovenOf: current.ovenOf.slice(), score: current.score };
+    }
+    while (evaluations < limit && bestState.score.makespan > floor && prep.n > 2) {
+      const trial: LocalState = { order: current.order.slice(), ovenOf: current.ovenOf.slice(), score: current.score };
+      kick(prep, trial, random);
+      trial.score = evaluatePlan(prep, trial, ws);
+      evaluations++;
+      evaluations += improve(prep, trial, limit - evaluations, floor, blockSwaps);
+      if (!better(current.score, trial.score)) current = trial;
+      if (better(trial.score, bestState.score))
+        bestState = { order: trial.order.slice(), ovenOf: trial.ovenOf.slice(), score: trial.score };
+    }
   }
   return {
     plan: { order: bestState.order, ovenOf: bestState.ovenOf },
