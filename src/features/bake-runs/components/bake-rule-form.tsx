@@ -1,8 +1,7 @@
+import { FormFooter } from './form-footer';
 import { useForm } from 'react-hook-form';
 import { RACK_PREFERENCES, type BakeRuleDto } from '@shared/schemas/bake-setup.schema';
-import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
-import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/problem';
 import { useSaveBakeRule } from '../api/use-bake-run-mutations';
@@ -110,20 +109,7 @@ export function BakeRuleFormCard({ rule, unit, onDone }: { rule: BakeRuleDto | n
       </div>
       <TextAreaField label="Doneness cue" rows={2} {...form.register('donenessCue')} error={err.donenessCue?.message} />
       <TextAreaField label="Note" rows={2} {...form.register('note')} error={err.note?.message} />
-      {isApiError(save.error, 409) && (
-        <Notice tone="warn" title="Not saved">
-          {save.error.message}. Close this form to see the current values.
-        </Notice>
-      )}
-      {err.root && <Notice tone="block">{err.root.message}</Notice>}
-      <div className="flex gap-2">
-        <Button type="submit" busy={save.isPending}>
-          Save rule
-        </Button>
-        <Button type="button" variant="ghost" onClick={onDone}>
-          Cancel
-        </Button>
-      </div>
+      <FormFooter saveLabel="Save rule" error={save.error} rootError={err.root?.message} busy={save.isPending} onCancel={onDone} />
     </form>
   );
 }

@@ -1,8 +1,7 @@
+import { FormFooter } from './form-footer';
 import { useForm } from 'react-hook-form';
 import type { OvenDto } from '@shared/schemas/bake-setup.schema';
-import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
-import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/problem';
 import { useSaveOven } from '../api/use-bake-run-mutations';
@@ -71,20 +70,7 @@ export function OvenFormCard({ oven, unit, onDone }: { oven: OvenDto | null; uni
       <label className="flex min-h-11 items-center gap-2">
         <input type="checkbox" className="h-5 w-5" {...form.register('convection')} /> Convection (fan) oven
       </label>
-      {isApiError(save.error, 409) && (
-        <Notice tone="warn" title="Not saved">
-          {save.error.message}. Close this form to see the current values.
-        </Notice>
-      )}
-      {err.root && <Notice tone="block">{err.root.message}</Notice>}
-      <div className="flex gap-2">
-        <Button type="submit" busy={save.isPending}>
-          Save oven
-        </Button>
-        <Button type="button" variant="ghost" onClick={onDone}>
-          Cancel
-        </Button>
-      </div>
+      <FormFooter saveLabel="Save oven" error={save.error} rootError={err.root?.message} busy={save.isPending} onCancel={onDone} />
     </form>
   );
 }
