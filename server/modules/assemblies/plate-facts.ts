@@ -15,8 +15,8 @@ import {
 import { portionsOf } from '@shared/domain/tray-plan.js';
 import type { PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
 import type { Actor } from '../../http/authz.js';
-import { Tray, type ITray } from '../trays/tray.entity.js';
-import { cutPlanOf, linesOf, nutritionLines } from '../trays/tray.presenter.js';
+import { Tray, TrayLine } from '../trays/tray.entity.js';
+import { cutPlanOf } from '../trays/tray.presenter.js';
 import {
   gramsOfLine,
   loadTrayIngredients,
@@ -65,16 +65,59 @@ export function itemsOf(a: IAssembly): IAssemblyItem[] {
   return [...a.items.getItems()].sort((x, y) => x.position - y.position);
 }
 
-function trayFacts(t: ITray, ingredients: Map<number, TrayIngredient>, rule: NetCarbRule): TrayFacts {
+/** A tray as plate facts read it: a plain row with its lines in order (no entity hydration). */
+interface TrayRow {
+  id: number;
+  name: string;
+  fridgeDays: number;
+  freezerWeeks: number;
+  cutKind: string;
+  cutRows: number | null;
+  cutColumns: number | null;
+  cutPieces: number | null;
+  yieldFactor: string;
+  tags: string[] | null;
+  reheatSteps: string[] | null;
+  archived: boolean;
+  lines: { ingredientId: number; amount: string; unit: string }[];
+}
+
+const jsonList = (v: unknown): string[] | null => (typeof v === 'string' ? JSON.parse(v) : (v as string[] | null));
+
+async function loadTrayRows(em: EntityManager, workspaceId: number, ids: readonly number[]): Promise<TrayRow[]> {
+  if (ids.length === 0) return [];
+  const trays: (Omit<TrayRow, 'lines' | 'tags' | 'reheatSteps'> & { tags: unknown; reheatSteps: unknown })[] = await em
+    .createQueryBuilder(Tray)
+    .select(['id', 'name', 'fridgeDays', 'freezerWeeks', 'cutKind', 'cutRows', 'cutColumns', 'cutPieces', 'yieldFactor', 'tags', 'reheatSteps', 'archived'])
+    .where({ id: { $in: [...ids] }, workspace: workspaceId })
+    .orderBy({ id: 'asc' })
+    .execute('all');
+  if (trays.length === 0) return [];
+  const lines: { tray: number; ingredient: number; amount: string; unit: string }[] = await em
+    .createQueryBuilder(TrayLine)
+    .select(['tray', 'ingredient', 'amount', 'unit', 'position', 'id'])
+    .where({ tray: { $in: trays.map((t) => t.id) } })
+    .orderBy({ tray: 'asc', position: 'asc', id: 'asc' })
+    .execute('all');
+  const byTray = new Map<number, TrayRow['lines']>();
+  for (const l of lines) {
+    let list = byTray.get(l.tray);
+    if (!list) byTray.set(l.tray, (list = []));
+    list.push({ ingredientId: l.ingredient, amount: l.amount, unit: l.unit });
+  }
+  return trays.map((t) => ({ ...t, tags: jsonList(t.tags), reheatSteps: jsonList(t.reheatSteps), lines: byTray.get(t.id) ?? [] }));
+}
+
+function trayFacts(t: TrayRow, ingredients: Map<number, TrayIngredient>, rule: NetCarbRule): TrayFacts {
   let portionsPerTray: number | null = null;
   try {
     portionsPerTray = portionsOf(cutPlanOf(t));
   } catch {
     portionsPerTray = null;
   }
-  const lines = nutritionLines(t);
+  const lines = t.lines;
   const recipe = portionsPerTray ? trayNutrition(lines, ingredients, { portions: portionsPerTray, yieldFactor: t.yieldFactor, rule }) : null;
-  const names = linesOf(t).map((l) => ingredients.get(l.ingredient.id)?.name).filter((n): n is string => !!n);
+  const names = lines.map((l) => ingredients.get(l.ingredientId)?.name).filter((n): n is string => !!n);
   return {
     id: t.id,
     name: t.name,
@@ -98,10 +141,10 @@ export async function loadPlateContext(
 ): Promise<PlateContext> {
   const items = assemblies.flatMap(itemsOf);
   const trayIds = [...new Set([...items.filter((i) => i.tray).map((i) => i.tray!.id), ...extraTrayIds])];
-  const trays = trayIds.length ? await em.find(Tray, { id: { $in: trayIds }, workspace: actor.workspaceId }, { populate: ['lines'] }) : [];
+  const trays = await loadTrayRows(em, actor.workspaceId, trayIds);
   const rule = await netCarbRuleOf(em, actor);
   const ingredientIds = [
-    ...trays.flatMap((t) => linesOf(t).map((l) => l.ingredient.id)),
+    ...trays.flatMap((t) => t.lines.map((l) => l.ingredientId)),
     ...items.filter((i) => i.ingredient).map((i) => i.ingredient!.id),
   ];
   const ingredients = await loadTrayIngredients(em, actor, ingredientIds);

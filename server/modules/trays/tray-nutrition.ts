@@ -31,8 +31,13 @@ export async function loadTrayIngredients(
 ): Promise<Map<number, TrayIngredient>> {
   const unique = [...new Set(ids)];
   if (unique.length === 0) return new Map();
-  // The package size is not part of LoadedIngredient: read it beside (for the cost per portion).
-  const purchase = await em.find(Ingredient, { id: { $in: unique } });
+  // The package size is not part of LoadedIngredient: read it beside (for the cost per portion), as plain rows
+  // (hydrating the same ingredients twice made the second load merge into every entity).
+  const purchase: { id: number; purchaseAmount: string | null; purchaseUnit: string | null }[] = await em
+    .createQueryBuilder(Ingredient)
+    .select(['id', 'purchaseAmount', 'purchaseUnit'])
+    .where({ id: { $in: unique } })
+    .execute('all');
   const packs = new Map(purchase.map((r) => [r.id, r]));
   let loaded: Awaited<ReturnType<typeof loadNutritionIngredients>>;
   try {

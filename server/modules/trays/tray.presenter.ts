@@ -19,7 +19,7 @@ export function storedPanOf(tray: ITray): StoredPan {
   };
 }
 
-export function cutPlanOf(tray: ITray): StoredCutPlan {
+export function cutPlanOf(tray: Pick<ITray, 'cutKind' | 'cutPieces' | 'cutRows' | 'cutColumns'>): StoredCutPlan {
   return tray.cutKind === 'pieces'
     ? { kind: 'pieces', pieces: tray.cutPieces ?? 1 }
     : { kind: 'grid', rows: tray.cutRows ?? 1, columns: tray.cutColumns ?? 1 };
