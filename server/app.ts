@@ -31,6 +31,10 @@ export interface AppDeps {
 /** CSRF: cookie-authenticated writes must carry this header (a cross-site form cannot set it; SameSite=Lax too). */
 export const CSRF_HEADER = 'x-trayline-csrf';
 
+const SESSION_MAX_AGE_MS = 14 * 86_400_000;
+/** How far the stored session expiry may lag the cookie's before a request rewrites it (seconds). */
+const TOUCH_SLACK_S = 60;
+
 /** Builds the app without listening (tests use it through supertest). */
 export function createApp({ orm, pool, env, mail, logger }: AppDeps): Express {
   const app = express();
@@ -74,11 +78,30 @@ export function createApp({ orm, pool, env, mail, logger }: AppDeps): Express {
   api.use(requestContext(orm));
 
   const PgStore = connectPgSimple(session);
+  /**
+   * Sessions slide (rolling cookie, stored expiry moved on each request), but the stored expiry is only rewritten
+   * when it lags the new one by more than TOUCH_SLACK_S: a burst of requests costs one committed write, not one each
+   * (an UPDATE that matches no row commits without a disk flush). The stored expiry stays within a minute of the
+   * cookie's 14 days.
+   */
+  class SlidingPgStore extends PgStore {
+    override touch(sid: string, sess: session.SessionData, done?: (err?: unknown) => void): void {
+      const expires = sess.cookie?.expires;
+      const expireS = Math.ceil((expires ? new Date(expires).getTime() : Date.now() + SESSION_MAX_AGE_MS) / 1000);
+      pool
+        .query('update session set expire = to_timestamp($1) where sid = $2 and expire < to_timestamp($1) - make_interval(secs => $3)', [
+          expireS,
+          sid,
+          TOUCH_SLACK_S,
+        ])
+        .then(() => done?.(), (err: unknown) => done?.(err));
+    }
+  }
   api.use(
     session({
       name: 'trayline.sid',
       secret: env.SESSION_SECRET,
-      store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: false }),
+      store: new SlidingPgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: false }),
       resave: false,
       saveUninitialized: false,
       rolling: true,
@@ -87,7 +110,7 @@ export function createApp({ orm, pool, env, mail, logger }: AppDeps): Express {
         httpOnly: true,
         sameSite: 'lax',
         secure: env.COOKIE_SECURE === 'auto' ? 'auto' : env.COOKIE_SECURE === 'true',
-        maxAge: 14 * 86_400_000,
+        maxAge: SESSION_MAX_AGE_MS,
       },
     }),
   );

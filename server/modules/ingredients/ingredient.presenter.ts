@@ -23,7 +23,9 @@ export function isOwnedBy(row: IIngredient, actor: Actor): boolean {
 }
 
 /** The stored row as the nutrition domain reads it (decimal strings go to decimal.js as they are). */
-export function toNutritionIngredient(row: IIngredient): NutritionIngredient {
+export function toNutritionIngredient(
+  row: Pick<IIngredient, 'name' | 'densityGPerMl' | 'pieceWeights' | keyof NutritionIngredient['per100g']>,
+): NutritionIngredient {
   return {
     name: row.name,
     densityGPerMl: row.densityGPerMl ?? null,

@@ -13,7 +13,7 @@ import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import { importIngredientsCsv } from './ingredient-import.service.js';
 import {
-  computeRecipeForActor,
+  computeParsedRecipeForActor,
   copyIngredient,
   createIngredient,
   deleteIngredient,
@@ -114,7 +114,7 @@ export function ingredientRoutes() {
   r.post(
     '/calc/recipe',
     allow('coach', 'assistant'),
-    validated({ body: recipeCalcSchema }, ({ body }, req) => computeRecipeForActor(emOf(req), actorOf(req), body)),
+    validated({ body: recipeCalcSchema }, ({ body }, req) => computeParsedRecipeForActor(emOf(req), actorOf(req), body)),
   );
 
   return r;

@@ -22,6 +22,7 @@ import {
   type IngredientValues,
   type RecipeCalcDto,
   type RecipeCalcInput,
+  type RecipeCalcValues,
 } from '@shared/schemas/ingredients.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { Conflict, Forbidden, NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
@@ -98,12 +99,46 @@ export async function loadNutritionIngredients(
  * conversion needs a fact the ingredient lacks: the message names the ingredient and the fact).
  */
 export async function computeRecipeForActor(em: EntityManager, actor: Actor, input: RecipeCalcInput): Promise<RecipeCalcDto> {
-  const parsed = recipeCalcSchema.parse(input);
-  // The rows and the workspace's rule do not depend on each other: read them side by side.
-  const [found, rule] = await Promise.all([
-    findVisible(em, actor, parsed.items.map((i) => i.ingredientId)),
-    netCarbRuleOf(em, actor.workspaceId),
-  ]);
+  return computeParsedRecipeForActor(em, actor, recipeCalcSchema.parse(input));
+}
+
+/** The columns the recipe calculation reads, as plain rows (no entity hydration: this runs on every keystroke). */
+type CalcRow = Pick<IIngredient, 'id' | 'name' | 'densityGPerMl' | 'pieceWeights' | NutrientColumn>;
+type NutrientColumn = keyof NutritionIngredient['per100g'];
+
+const CALC_COLUMNS = `i.id, i.name, i.density_g_per_ml as "densityGPerMl", i.piece_weights as "pieceWeights", i.kcal,
+  i.fat_g as "fatG", i.sat_fat_g as "satFatG", i.protein_g as "proteinG", i.carbs_g as "carbsG", i.fiber_g as "fiberG",
+  i.sugars_g as "sugarsG", i.erythritol_g as "erythritolG", i.allulose_g as "alluloseG", i.other_polyols_g as "otherPolyolsG",
+  i.sodium_mg as "sodiumMg"`;
+
+/**
+ * In one round trip: the rows findVisible would give (own workspace or shared), as plain column values keyed by id,
+ * and the workspace's net-carb rule (as netCarbRuleOf). The workspace row is always there; ids not visible drop out.
+ */
+async function loadForCalc(
+  em: EntityManager,
+  actor: Actor,
+  ids: readonly number[],
+): Promise<{ found: Map<number, CalcRow>; rule: NetCarbRule }> {
+  const unique = [...new Set(ids)];
+  const match = unique.length ? `i.id in (${unique.map(() => '?').join(', ')})` : 'false';
+  const rows = await em.getConnection().execute<(Omit<CalcRow, 'id'> & { id: number | null; netCarbRule: string })[]>(
+    `select w.net_carb_rule as "netCarbRule", ${CALC_COLUMNS}
+       from workspace w left join ingredient i on ${match} and (i.workspace_id = w.id or i.workspace_id is null)
+      where w.id = ?`,
+    [...unique, actor.workspaceId],
+    'all',
+    em.getTransactionContext(),
+  );
+  if (!rows.length) throw new NotFound('Workspace');
+  const found = new Map<number, CalcRow>();
+  for (const r of rows) if (r.id !== null) found.set(r.id, r as CalcRow);
+  return { found, rule: toNetCarbRule(rows[0].netCarbRule) };
+}
+
+/** computeRecipeForActor for input already checked by recipeCalcSchema (the route validates the body once). */
+export async function computeParsedRecipeForActor(em: EntityManager, actor: Actor, parsed: RecipeCalcValues): Promise<RecipeCalcDto> {
+  const { found, rule } = await loadForCalc(em, actor, parsed.items.map((i) => i.ingredientId));
   const errors: Record<string, string[]> = {};
   parsed.items.forEach((item, i) => {
     if (!found.has(item.ingredientId)) errors[`items.${i}.ingredientId`] = [`No ingredient with id ${item.ingredientId} in your library`];
