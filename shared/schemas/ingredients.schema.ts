@@ -1,8 +1,9 @@
 import Decimal from 'decimal.js';
 import { z } from 'zod';
+import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { NET_CARB_RULES, type AtwaterCheck, type NetCarbRuleKind, type NutrientNumbers } from '../domain/nutrition';
-import { AmountParseError, isMassUnit, isVolumeUnit, normalizeUnit, parseAmount, unitKind, UnknownUnitError } from '../domain/units';
+import { AmountParseError, isMassUnit, isVolumeUnit, parseAmount, unitKind, UnknownUnitError } from '../domain/units';
 
 /** Ingredient library, recipe calculation and the net-carb setting: inputs (zod) and DTOs for API and client. */
 
@@ -290,20 +291,8 @@ export const recipeItemSchema = z.object({
       return z.NEVER;
     }
   }),
-  /** A unit as typed ("cups", "Tbsp", "g") or one of the ingredient's piece names; normalised to a code. */
-  unit: z
-    .string()
-    .trim()
-    .min(1, { message: 'Choose a unit' })
-    .max(40)
-    .transform((u, ctx) => {
-      try {
-        return normalizeUnit(u);
-      } catch (e) {
-        ctx.addIssue({ code: 'custom', message: e instanceof Error ? e.message : 'Not a unit' });
-        return z.NEVER;
-      }
-    }),
+  /** A unit as typed or one of the ingredient's piece names; normalised to a code. */
+  unit: unitTextSchema,
 });
 
 export const recipeCalcSchema = z.object({

@@ -1,7 +1,8 @@
 import { z } from 'zod';
+import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { DEFAULT_BAKE_RULES, type BakeRuleCategory } from '../domain/bake-rules-defaults';
-import { normalizeUnit, parseAmount, unitKind } from '../domain/units';
+import { parseAmount } from '../domain/units';
 import type { NutrientNumbers } from '../domain/nutrition';
 import type { EnergyShares } from '../domain/nutrition';
 
@@ -79,22 +80,8 @@ export const trayLineSchema = z.object({
         ctx.addIssue({ code: 'custom', message: e instanceof Error ? e.message : 'Could not read this amount' });
       }
     }),
-  /** A unit as typed ("cups", "Tbsp", "g") or one of the ingredient's piece names (large, slice…); stored as a code. */
-  unit: z
-    .string()
-    .trim()
-    .min(1, { message: 'Choose a unit' })
-    .max(40)
-    .transform((u, ctx) => {
-      try {
-        const code = normalizeUnit(u);
-        unitKind(code);
-        return code as string;
-      } catch (e) {
-        ctx.addIssue({ code: 'custom', message: e instanceof Error ? e.message : 'Not a unit' });
-        return z.NEVER;
-      }
-    }),
+  /** A unit as typed or one of the ingredient's piece names; normalised to a code. */
+  unit: unitTextSchema,
   note: z.string().trim().max(200).default(''),
 });
 export type TrayLineInput = z.input<typeof trayLineSchema>;
