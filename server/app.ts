@@ -1,7 +1,6 @@
 import express, { type Express, Router } from 'express';
 import helmet from 'helmet';
 import session from 'express-session';
-import connectPgSimple from 'connect-pg-simple';
 import { pinoHttp } from 'pino-http';
 import pino from 'pino';
 import { randomUUID } from 'node:crypto';
@@ -14,6 +13,7 @@ import { errorHandler } from './http/error-handler.js';
 import { NotFound, Forbidden } from './http/errors.js';
 import { requestContext } from './http/request-context.js';
 import { configurePassport } from './modules/auth/passport.js';
+import { createSessionStore } from './modules/auth/session-store.js';
 import { authRoutes } from './modules/auth/auth.routes.js';
 import { healthRoutes } from './modules/health/health.routes.js';
 import { apiModules } from './modules/index.js';
@@ -32,8 +32,6 @@ export interface AppDeps {
 export const CSRF_HEADER = 'x-trayline-csrf';
 
 const SESSION_MAX_AGE_MS = 14 * 86_400_000;
-/** How far the stored session expiry may lag the cookie's before a request rewrites it (seconds). */
-const TOUCH_SLACK_S = 60;
 
 /** Builds the app without listening (tests use it through supertest). */
 export function createApp({ orm, pool, env, mail, logger }: AppDeps): Express {
@@ -77,31 +75,11 @@ export function createApp({ orm, pool, env, mail, logger }: AppDeps): Express {
   api.use(express.json({ limit: '1mb' }));
   api.use(requestContext(orm));
 
-  const PgStore = connectPgSimple(session);
-  /**
-   * Sessions slide (rolling cookie, stored expiry moved on each request), but the stored expiry is only rewritten
-   * when it lags the new one by more than TOUCH_SLACK_S: a burst of requests costs one committed write, not one each
-   * (an UPDATE that matches no row commits without a disk flush). The stored expiry stays within a minute of the
-   * cookie's 14 days.
-   */
-  class SlidingPgStore extends PgStore {
-    override touch(sid: string, sess: session.SessionData, done?: (err?: unknown) => void): void {
-      const expires = sess.cookie?.expires;
-      const expireS = Math.ceil((expires ? new Date(expires).getTime() : Date.now() + SESSION_MAX_AGE_MS) / 1000);
-      pool
-        .query('update session set expire = to_timestamp($1) where sid = $2 and expire < to_timestamp($1) - make_interval(secs => $3)', [
-          expireS,
-          sid,
-          TOUCH_SLACK_S,
-        ])
-        .then(() => done?.(), (err: unknown) => done?.(err));
-    }
-  }
   api.use(
     session({
       name: 'trayline.sid',
       secret: env.SESSION_SECRET,
-      store: new SlidingPgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: false }),
+      store: createSessionStore(pool, SESSION_MAX_AGE_MS),
       resave: false,
       saveUninitialized: false,
       rolling: true,

@@ -77,6 +77,37 @@ describe('sign-in', () => {
     const [row] = await sql<{ n: string }>('select count(*)::text as n from session');
     expect(Number(row.n)).toBeGreaterThan(0);
   });
+
+  it('reads the role from PostgreSQL with the session: a changed membership applies on the next request', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    await assistant.agent.get('/api/ingredients').expect(200);
+    await sql("update membership set role = 'client' where user_id = $1", [assistant.userId]);
+    const me = await assistant.agent.get('/api/auth/me').expect(200);
+    expect(me.body.role).toBe('client');
+    await assistant.agent.get('/api/ingredients').expect(403);
+    // A session whose user has lost every membership is signed out, not an error.
+    await sql('delete from membership where user_id = $1', [assistant.userId]);
+    await assistant.agent.get('/api/auth/me').expect(401);
+  });
+
+  it('slides the stored expiry without a write per request (rewritten only when it lags by over a minute)', async () => {
+    const coach = await coachWorkspace(app);
+    const sessionOf = async () =>
+      (await sql<{ sid: string; expire: Date }>(`select sid, expire from session where (sess->'passport'->>'user') = $1`, [String(coach.userId)]))[0];
+    const before = await sessionOf();
+    await coach.agent.get('/api/auth/me').expect(200);
+    expect((await sessionOf()).expire.getTime()).toBe(before.expire.getTime());
+    // Lagging by ten minutes: the next request moves it to within a minute of the cookie's 14 days.
+    await sql("update session set expire = expire - interval '10 minutes' where sid = $1", [before.sid]);
+    await coach.agent.get('/api/auth/me').expect(200);
+    const after = await sessionOf();
+    const fourteenDays = Date.now() + 14 * 86_400_000;
+    expect(Math.abs(after.expire.getTime() - fourteenDays)).toBeLessThan(60_000 + 5_000);
+    // An expired session is not read at all.
+    await sql("update session set expire = now() - interval '1 second' where sid = $1", [before.sid]);
+    await coach.agent.get('/api/auth/me').expect(401);
+  });
 });
 
 describe('abuse protection', () => {

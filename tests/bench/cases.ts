@@ -1,8 +1,5 @@
-import type { Orm } from '../../server/db/orm.js';
-
 export interface BenchContext {
   base: string;
-  orm: Orm;
   cookie: string;
 }
 
@@ -12,6 +9,10 @@ export interface BenchCase {
   path: string;
   body?: unknown;
   goal?: string;
+  /** The goal as a median latency ratio to health (the result column says met or not). */
+  goalRatio?: number;
+  /** Sequential requests for the latency measure, when the case is slow (default BENCH_SEQUENTIAL). */
+  sequential?: number;
   notes?: string;
   /** Extra lines for the results file (quality numbers such as a gap to a lower bound). */
   report?: () => Promise<string[]>;
@@ -27,7 +28,7 @@ async function getJson<T>(ctx: BenchContext, p: string): Promise<T> {
 async function calcRecipe(ctx: BenchContext): Promise<BenchCase | null> {
   const list = await getJson<{ items: { id: number; densityGPerMl: number | null }[] }>(ctx, '/api/ingredients?pageSize=100');
   const items = list.items.slice(0, 40).map((i, n) => ({ ingredientId: i.id, amount: String(10 + n), unit: 'g' }));
-  return { name: 'POST /api/calc/recipe (40 lines)', method: 'POST', path: '/api/calc/recipe', body: { items, portions: 12 }, goal: '≤ 2×' };
+  return { name: 'POST /api/calc/recipe (40 lines)', method: 'POST', path: '/api/calc/recipe', body: { items, portions: 12 }, goal: '≤ 2×', goalRatio: 2 };
 }
 
 /**
@@ -69,6 +70,7 @@ async function calcBakeRun(ctx: BenchContext): Promise<BenchCase | null> {
     method: 'POST',
     path: '/api/calc/bake-run',
     body,
+    sequential: 30,
     goal: 'gap to the lower bound ≤ 5 %',
     report: async () => {
       type Run = { sessionMinutes: number; lowerBoundMinutes: number; gapPct: number; method: string };
@@ -151,6 +153,7 @@ async function weekRecompute(ctx: BenchContext): Promise<BenchCase | null> {
     method: 'GET',
     path: `/api/weeks/${id}`,
     goal: '≤ 3×',
+    goalRatio: 3,
     notes: `GET /api/weeks/:id: ${board.clients.length} clients, ${board.cells.length} cells, ${board.trays.length} tray counts`,
   };
 }
@@ -158,7 +161,7 @@ async function weekRecompute(ctx: BenchContext): Promise<BenchCase | null> {
 async function weekShopping(ctx: BenchContext): Promise<BenchCase | null> {
   const id = await bigWeekId(ctx);
   await getJson(ctx, `/api/weeks/${id}/shopping`);
-  return { name: 'shopping list (the 60-client week)', method: 'GET', path: `/api/weeks/${id}/shopping` };
+  return { name: 'shopping list (the 60-client week)', method: 'GET', path: `/api/weeks/${id}/shopping`, sequential: 60 };
 }
 
 /**
@@ -175,7 +178,7 @@ async function clientPlanPdf(ctx: BenchContext): Promise<BenchCase | null> {
     const path = `/api/weeks/${week.id}/clients/${clientId}/plan.pdf`;
     const r = await fetch(ctx.base + path, { headers: { cookie: ctx.cookie } });
     const bytes = (await r.arrayBuffer()).byteLength;
-    if (r.ok) return { name: "one client's PDF (week plan)", method: 'GET', path, notes: `${week.name}, client ${clientId}: ${bytes} bytes` };
+    if (r.ok) return { name: "one client's PDF (week plan)", method: 'GET', path, sequential: 60, notes: `${week.name}, client ${clientId}: ${bytes} bytes` };
   }
   return null;
 }

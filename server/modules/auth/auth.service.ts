@@ -22,31 +22,39 @@ const INVITATION_DAYS = 14;
 const PASSWORD_RESET_MINUTES = 60;
 
 /**
- * The actor of a user: their (first) membership decides workspace and role. Every authenticated request runs
- * this, so it is one plain SQL join read straight into the Actor (no entities hydrated into the identity map).
+ * The actor of a user: their (first) membership decides workspace and role. Every authenticated request needs
+ * it, so it is one plain SQL join read straight into the Actor (no entities hydrated into the identity map); the
+ * session store reads it in the same query as the session (session-store.ts).
  */
-export async function loadActor(em: EntityManager, userId: number): Promise<Actor | null> {
-  if (!Number.isSafeInteger(userId)) return null;
-  const rows = await em.getConnection().execute<
-    { user_id: number; email: string; name: string; role: string; workspace_id: number; client_id: number | null }[]
-  >(
-    `select u.id as user_id, u.email, u.name, m.role, m.workspace_id, m.client_id
-       from membership m join app_user u on u.id = m.user_id
-      where m.user_id = ? order by m.id asc limit 1`,
-    [userId],
-    'all',
-    em.getTransactionContext(),
-  );
-  const m = rows[0];
-  if (!m) return null;
+export const ACTOR_SQL = (userIdExpr: string) =>
+  `select u.id as user_id, u.email, u.name, m.role, m.workspace_id, m.client_id
+     from membership m join app_user u on u.id = m.user_id
+    where m.user_id = ${userIdExpr} order by m.id asc limit 1`;
+
+export interface ActorRow {
+  user_id: number;
+  email: string;
+  name: string;
+  role: string;
+  workspace_id: number;
+  client_id: number | null;
+}
+
+export function actorFromRow(m: ActorRow): Actor {
   return {
-    userId: m.user_id,
+    userId: Number(m.user_id),
     email: m.email,
     name: m.name,
     role: m.role as Role,
-    workspaceId: m.workspace_id,
-    clientId: m.client_id ?? null,
+    workspaceId: Number(m.workspace_id),
+    clientId: m.client_id == null ? null : Number(m.client_id),
   };
+}
+
+export async function loadActor(em: EntityManager, userId: number): Promise<Actor | null> {
+  if (!Number.isSafeInteger(userId)) return null;
+  const rows = await em.getConnection().execute<ActorRow[]>(ACTOR_SQL('?'), [userId], 'all', em.getTransactionContext());
+  return rows[0] ? actorFromRow(rows[0]) : null;
 }
 
 export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {

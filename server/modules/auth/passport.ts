@@ -5,6 +5,7 @@ import { RequestContext } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Actor } from '../../http/authz.js';
 import { checkCredentials, loadActor } from './auth.service.js';
+import { preloadedActor } from './session-store.js';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -16,7 +17,10 @@ declare global {
 
 let configured = false;
 
-/** passport-local checks credentials; the session stores only the user id; each request reloads the actor. */
+/**
+ * passport-local checks credentials; the session stores only the user id; each request reloads the actor (read with
+ * the session by the session store, so a role or membership change applies on the next request).
+ */
 export function configurePassport() {
   if (configured) return passport;
   configured = true;
@@ -33,8 +37,10 @@ export function configurePassport() {
   );
   passport.serializeUser((user, done) => done(null, user.userId));
   passport.deserializeUser((req: Request, id: unknown, done: (err: unknown, user?: Actor | false) => void) => {
-    const em = req.em!;
-    loadActor(em, Number(id))
+    const userId = Number(id);
+    const preloaded = preloadedActor(req, userId);
+    if (preloaded) return done(null, preloaded);
+    loadActor(req.em!, userId)
       .then((actor) => done(null, actor ?? false))
       .catch(done);
   });

@@ -1,5 +1,6 @@
 import Decimal from 'decimal.js';
 import { ForeignKeyConstraintViolationException, sql, type FilterQuery } from '@mikro-orm/core';
+import { preparedRows } from '../../db/prepared.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { AllergenCode } from '@shared/domain/allergens.js';
 import {
@@ -120,15 +121,13 @@ async function loadForCalc(
   actor: Actor,
   ids: readonly number[],
 ): Promise<{ found: Map<number, CalcRow>; rule: NetCarbRule }> {
-  const unique = [...new Set(ids)];
-  const match = unique.length ? `i.id in (${unique.map(() => '?').join(', ')})` : 'false';
-  const rows = await em.getConnection().execute<(Omit<CalcRow, 'id'> & { id: number | null; netCarbRule: string })[]>(
+  const rows = await preparedRows<Omit<CalcRow, 'id'> & { id: number | null; netCarbRule: string }>(
+    em,
+    'trayline_calc_ingredients',
     `select w.net_carb_rule as "netCarbRule", ${CALC_COLUMNS}
-       from workspace w left join ingredient i on ${match} and (i.workspace_id = w.id or i.workspace_id is null)
-      where w.id = ?`,
-    [...unique, actor.workspaceId],
-    'all',
-    em.getTransactionContext(),
+       from workspace w left join ingredient i on i.id = any($1::int[]) and (i.workspace_id = w.id or i.workspace_id is null)
+      where w.id = $2`,
+    [[...new Set(ids)], actor.workspaceId],
   );
   if (!rows.length) throw new NotFound('Workspace');
   const found = new Map<number, CalcRow>();
