@@ -10,6 +10,7 @@ interface PgConnection {
  * PostgreSQL plans a named statement once per connection; for a small query run on every request, planning costs
  * more than running it. `text` uses PostgreSQL placeholders ($1, $2, …) and must be the same for a given name
  * (pass lists as one array parameter: `id = any($1::int[])`).
+ * Values come back as the ORM's connection gives them: jsonb parsed, numeric and timestamptz as strings.
  */
 export async function preparedRows<T>(em: EntityManager, name: string, text: string, values: readonly unknown[]): Promise<T[]> {
   const knex: Knex = em.getTransactionContext<Knex.Transaction>() ?? em.getKnex();

@@ -2,9 +2,9 @@ import Decimal from 'decimal.js';
 import { toNutrientNumbers } from '@shared/domain/nutrition.js';
 import type { AssemblyDto } from '@shared/schemas/assemblies.schema.js';
 import type { IAssembly } from './assembly.entity.js';
-import { addOnGrams, itemsOf, plateFacts, type PlateContext } from './plate-facts.js';
+import { addOnGrams, itemsOf, plateFacts, type PlateContext, type PlateLike } from './plate-facts.js';
 
-export function presentAssembly(a: IAssembly, ctx: PlateContext): AssemblyDto {
+export function presentAssembly(a: PlateLike, ctx: PlateContext): AssemblyDto {
   const facts = plateFacts(a, ctx);
   const items = itemsOf(a);
   return {

@@ -7,7 +7,39 @@ import { Tray } from '../trays/tray.entity.js';
 import { gramsOfLine, loadTrayIngredients } from '../trays/tray-nutrition.js';
 import { Assembly, AssemblyItem, type IAssembly } from './assembly.entity.js';
 import { presentAssembly } from './assembly.presenter.js';
-import { loadPlateContext } from './plate-facts.js';
+import { loadPlateContext, type PlateItemRow, type PlateRow } from './plate-facts.js';
+import { preparedRows } from '../../db/prepared.js';
+
+/**
+ * Plates of the workspace with their items as plain rows, by name (two prepared statements; what the week board
+ * reads: no entity hydration). Writes go through the Assembly entity.
+ */
+export async function loadPlateRows(em: EntityManager, workspaceId: number): Promise<PlateRow[]> {
+  const plates = await preparedRows<Omit<PlateRow, 'items' | 'updatedAt'> & { updatedAt: string | Date }>(
+    em,
+    'trayline_plate_rows',
+    `select id, name, description, assembly_steps as "assemblySteps", reheat_steps as "reheatSteps", version, updated_at as "updatedAt"
+       from assembly where workspace_id = $1 order by name asc, id asc`,
+    [workspaceId],
+  );
+  if (!plates.length) return [];
+  const items = await preparedRows<Omit<PlateItemRow, 'tray' | 'ingredient'> & { assembly: number; tray: number | null; ingredient: number | null }>(
+    em,
+    'trayline_plate_items',
+    `select i.id, i.assembly_id as assembly, i.position, i.tray_id as tray, i.portions, i.ingredient_id as ingredient,
+            i.amount_text as "amountText", i.amount, i.unit, i.note
+       from assembly_item i join assembly a on a.id = i.assembly_id
+      where a.workspace_id = $1 order by i.assembly_id asc, i.position asc, i.id asc`,
+    [workspaceId],
+  );
+  const byPlate = new Map<number, PlateItemRow[]>();
+  for (const i of items) {
+    let list = byPlate.get(i.assembly);
+    if (!list) byPlate.set(i.assembly, (list = []));
+    list.push({ ...i, tray: i.tray === null ? null : { id: i.tray }, ingredient: i.ingredient === null ? null : { id: i.ingredient } });
+  }
+  return plates.map((p) => ({ ...p, updatedAt: new Date(p.updatedAt), items: byPlate.get(p.id) ?? [] }));
+}
 
 /** Plates of the workspace with their items (two queries), optionally only these ids. */
 export async function loadAssemblies(em: EntityManager, workspaceId: number, ids?: readonly number[]): Promise<IAssembly[]> {

@@ -15,7 +15,7 @@ import {
 import { portionsOf } from '@shared/domain/tray-plan.js';
 import type { PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
 import type { Actor } from '../../http/authz.js';
-import { Tray, TrayLine } from '../trays/tray.entity.js';
+import { preparedRows } from '../../db/prepared.js';
 import { cutPlanOf } from '../trays/tray.presenter.js';
 import {
   gramsOfLine,
@@ -25,7 +25,7 @@ import {
   trayNutrition,
   type TrayIngredient,
 } from '../trays/tray-nutrition.js';
-import type { IAssembly, IAssemblyItem } from './assembly.entity.js';
+import type { IAssembly } from './assembly.entity.js';
 
 /**
  * What plates and the week board need to know about base trays and add-ons, loaded in a fixed number of queries
@@ -61,8 +61,36 @@ export interface PlateFacts {
   trays: { trayId: number; portions: string }[];
 }
 
-export function itemsOf(a: IAssembly): IAssemblyItem[] {
-  return [...a.items.getItems()].sort((x, y) => x.position - y.position);
+/** One part of a plate as plate facts read it (an AssemblyItem entity or a plain row). */
+export interface PlateItemRow {
+  id: number;
+  position: number;
+  tray?: { id: number } | null;
+  portions?: string | null;
+  ingredient?: { id: number } | null;
+  amountText: string;
+  amount?: string | null;
+  unit: string;
+  note?: string | null;
+}
+
+/** A plate as the week board reads it: a plain row with its items in order (no entity hydration). */
+export interface PlateRow {
+  id: number;
+  name: string;
+  description?: string | null;
+  assemblySteps?: string[] | null;
+  reheatSteps?: string[] | null;
+  version: number;
+  updatedAt: Date;
+  items: PlateItemRow[];
+}
+
+export type PlateLike = IAssembly | PlateRow;
+
+export function itemsOf(a: PlateLike): PlateItemRow[] {
+  const items: readonly PlateItemRow[] = Array.isArray(a.items) ? a.items : (a as IAssembly).items.getItems();
+  return [...items].sort((x, y) => x.position - y.position);
 }
 
 /** A tray as plate facts read it: a plain row with its lines in order (no entity hydration). */
@@ -82,30 +110,31 @@ interface TrayRow {
   lines: { ingredientId: number; amount: string; unit: string }[];
 }
 
-const jsonList = (v: unknown): string[] | null => (typeof v === 'string' ? JSON.parse(v) : (v as string[] | null));
-
 async function loadTrayRows(em: EntityManager, workspaceId: number, ids: readonly number[]): Promise<TrayRow[]> {
   if (ids.length === 0) return [];
-  const trays: (Omit<TrayRow, 'lines' | 'tags' | 'reheatSteps'> & { tags: unknown; reheatSteps: unknown })[] = await em
-    .createQueryBuilder(Tray)
-    .select(['id', 'name', 'fridgeDays', 'freezerWeeks', 'cutKind', 'cutRows', 'cutColumns', 'cutPieces', 'yieldFactor', 'tags', 'reheatSteps', 'archived'])
-    .where({ id: { $in: [...ids] }, workspace: workspaceId })
-    .orderBy({ id: 'asc' })
-    .execute('all');
+  const trays = await preparedRows<Omit<TrayRow, 'lines'>>(
+    em,
+    'trayline_tray_rows',
+    `select id, name, fridge_days as "fridgeDays", freezer_weeks as "freezerWeeks", cut_kind as "cutKind", cut_rows as "cutRows",
+            cut_columns as "cutColumns", cut_pieces as "cutPieces", yield_factor as "yieldFactor", tags, reheat_steps as "reheatSteps", archived
+       from tray where id = any($1::int[]) and workspace_id = $2 order by id asc`,
+    [[...new Set(ids)], workspaceId],
+  );
   if (trays.length === 0) return [];
-  const lines: { tray: number; ingredient: number; amount: string; unit: string }[] = await em
-    .createQueryBuilder(TrayLine)
-    .select(['tray', 'ingredient', 'amount', 'unit', 'position', 'id'])
-    .where({ tray: { $in: trays.map((t) => t.id) } })
-    .orderBy({ tray: 'asc', position: 'asc', id: 'asc' })
-    .execute('all');
+  const lines = await preparedRows<{ tray: number; ingredientId: number; amount: string; unit: string }>(
+    em,
+    'trayline_tray_lines',
+    `select tray_id as tray, ingredient_id as "ingredientId", amount, unit
+       from tray_line where tray_id = any($1::int[]) order by tray_id asc, position asc, id asc`,
+    [trays.map((t) => t.id)],
+  );
   const byTray = new Map<number, TrayRow['lines']>();
   for (const l of lines) {
     let list = byTray.get(l.tray);
     if (!list) byTray.set(l.tray, (list = []));
-    list.push({ ingredientId: l.ingredient, amount: l.amount, unit: l.unit });
+    list.push({ ingredientId: l.ingredientId, amount: l.amount, unit: l.unit });
   }
-  return trays.map((t) => ({ ...t, tags: jsonList(t.tags), reheatSteps: jsonList(t.reheatSteps), lines: byTray.get(t.id) ?? [] }));
+  return trays.map((t) => ({ ...t, lines: byTray.get(t.id) ?? [] }));
 }
 
 function trayFacts(t: TrayRow, ingredients: Map<number, TrayIngredient>, rule: NetCarbRule): TrayFacts {
@@ -136,7 +165,7 @@ function trayFacts(t: TrayRow, ingredients: Map<number, TrayIngredient>, rule: N
 export async function loadPlateContext(
   em: EntityManager,
   actor: Actor,
-  assemblies: readonly IAssembly[],
+  assemblies: readonly PlateLike[],
   extraTrayIds: readonly number[] = [],
 ): Promise<PlateContext> {
   const items = assemblies.flatMap(itemsOf);
@@ -158,13 +187,24 @@ export function macrosOf(v: NutrientVector): PlateMacrosDto {
 }
 
 /** Add-on grams, or null when the ingredient lacks the fact its unit needs. */
-export function addOnGrams(item: IAssemblyItem, ctx: PlateContext): Decimal | null {
+export function addOnGrams(item: PlateItemRow, ctx: PlateContext): Decimal | null {
   if (!item.ingredient || item.amount === null || item.amount === undefined) return null;
   return gramsOfLine({ ingredientId: item.ingredient.id, amount: item.amount, unit: item.unit }, ctx.ingredients.get(item.ingredient.id));
 }
 
-/** A plate's nutrients (sum of tray portions and add-ons), allergens and dislike terms. */
-export function plateFacts(a: IAssembly, ctx: PlateContext): PlateFacts {
+/** Facts computed for a context, per plate: a board asks for the same plate's facts several times. */
+const factsMemo = new WeakMap<PlateContext, WeakMap<PlateLike, PlateFacts>>();
+
+/** A plate's nutrients (sum of tray portions and add-ons), allergens and dislike terms (computed once per context). */
+export function plateFacts(a: PlateLike, ctx: PlateContext): PlateFacts {
+  let memo = factsMemo.get(ctx);
+  if (!memo) factsMemo.set(ctx, (memo = new WeakMap()));
+  let f = memo.get(a);
+  if (!f) memo.set(a, (f = computePlateFacts(a, ctx)));
+  return f;
+}
+
+function computePlateFacts(a: PlateLike, ctx: PlateContext): PlateFacts {
   let sums = zeroSums();
   let complete = true;
   const allergens = new Set<AllergenCode>();

@@ -42,3 +42,27 @@ export const Client = defineEntity({
   },
 });
 export type IClient = InferEntity<typeof Client>;
+
+/** A client's scalar columns: what the week board, targets and plans read (an entity or a plain row). */
+export type ClientFacts = Pick<
+  IClient,
+  | 'id'
+  | 'name'
+  | 'email'
+  | 'householdMultiplier'
+  | 'sex'
+  | 'ageYears'
+  | 'heightCm'
+  | 'weightKg'
+  | 'activity'
+  | 'goal'
+  | 'goalAdjustment'
+  | 'netCarbCapG'
+  | 'proteinGPerKg'
+  | 'targetMode'
+  | 'manualTargets'
+  | 'slotShares'
+  | 'allergens'
+  | 'dislikes'
+  | 'version'
+>;

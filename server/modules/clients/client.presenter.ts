@@ -8,7 +8,7 @@ import type {
   ClientTargetsDto,
   TargetMode,
 } from '@shared/schemas/clients.schema.js';
-import type { IClient } from './client.entity.js';
+import type { ClientFacts, IClient } from './client.entity.js';
 
 /** Default share of the day for a slot the defaults do not name (common practice, no source). */
 const OTHER_SLOT_SHARE = '0.1';
@@ -25,7 +25,7 @@ export function slotShares(client: Pick<IClient, 'slotShares'>, mealSlots: reado
 }
 
 /** The client's daily targets: typed by hand, or Mifflin–St Jeor × activity with the keto split. */
-export function dayTargets(client: IClient): Omit<ClientTargetsDto, 'slots'> {
+export function dayTargets(client: ClientFacts): Omit<ClientTargetsDto, 'slots'> {
   if (client.targetMode === 'manual' && client.manualTargets) {
     return { mode: 'manual', reeKcal: null, tdeeKcal: null, notes: [], ...client.manualTargets };
   }
@@ -52,7 +52,7 @@ export function dayTargets(client: IClient): Omit<ClientTargetsDto, 'slots'> {
   };
 }
 
-export function clientTargets(client: IClient, mealSlots: readonly string[]): ClientTargetsDto {
+export function clientTargets(client: ClientFacts, mealSlots: readonly string[]): ClientTargetsDto {
   const day = dayTargets(client);
   const shares = slotShares(client, mealSlots);
   const perSlot = slotTargets(day, shares);
@@ -65,7 +65,7 @@ export function clientTargets(client: IClient, mealSlots: readonly string[]): Cl
  * Targets for the planned part of a day: the sum of the slot targets of the week board's meal slots. A board that
  * plans breakfast only is compared against breakfast's share of the day, not the whole day.
  */
-export function plannedTargets(client: IClient, mealSlots: readonly string[]): MacroTargets {
+export function plannedTargets(client: ClientFacts, mealSlots: readonly string[]): MacroTargets {
   const day = dayTargets(client);
   const shares = slotShares(client, mealSlots);
   const share = Object.values(shares).reduce((s, v) => s.plus(v), new Decimal(0));
@@ -73,7 +73,7 @@ export function plannedTargets(client: IClient, mealSlots: readonly string[]): M
   return { targetKcal: r(day.targetKcal, 0), netCarbCapG: r(day.netCarbCapG, 1), proteinG: r(day.proteinG, 1), fatG: r(day.fatG, 1) };
 }
 
-export function presentClientSummary(c: IClient): ClientSummaryDto {
+export function presentClientSummary(c: Pick<ClientFacts, 'id' | 'name' | 'householdMultiplier'>): ClientSummaryDto {
   return { id: c.id, name: c.name, householdMultiplier: new Decimal(c.householdMultiplier).toString() };
 }
 

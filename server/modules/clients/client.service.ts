@@ -3,12 +3,13 @@ import type { Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import type { CreateClientData, UpdateClientData, ClientListItemDto } from '@shared/schemas/clients.schema.js';
 import { Membership } from '../auth/user.entity.js';
-import { Workspace } from '../workspaces/workspace.entity.js';
-import { Client, type IClient } from './client.entity.js';
+import { preparedRows } from '../../db/prepared.js';
+import { Client, type ClientFacts, type IClient } from './client.entity.js';
 import { presentClient, presentClientSelf, presentClientSummary } from './client.presenter.js';
 
 export async function mealSlotsOf(em: EntityManager, workspaceId: number): Promise<string[]> {
-  const ws = await em.findOneOrFail(Workspace, workspaceId);
+  const [ws] = await preparedRows<{ mealSlots: string[] | null }>(em, 'trayline_meal_slots', 'select meal_slots as "mealSlots" from workspace where id = $1', [workspaceId]);
+  if (!ws) throw new NotFound('Workspace');
   return ws.mealSlots?.length ? ws.mealSlots : ['breakfast'];
 }
 
@@ -21,6 +22,24 @@ export async function findClient(em: EntityManager, actor: Actor, id: number): P
 }
 
 /** Clients of the workspace, by name (one query). */
+/**
+ * A workspace's clients as plain rows, by name (what the week board reads: a board holds every client, and
+ * hydrating each as a managed entity cost more than computing the board). One prepared statement; writes go
+ * through the Client entity.
+ */
+export async function loadClientFacts(em: EntityManager, workspaceId: number): Promise<ClientFacts[]> {
+  return preparedRows<ClientFacts>(
+    em,
+    'trayline_client_facts',
+    `select id, name, email, household_multiplier as "householdMultiplier", sex, age_years as "ageYears",
+            height_cm as "heightCm", weight_kg as "weightKg", activity, goal, goal_adjustment as "goalAdjustment",
+            net_carb_cap_g as "netCarbCapG", protein_g_per_kg as "proteinGPerKg", target_mode as "targetMode",
+            manual_targets as "manualTargets", slot_shares as "slotShares", allergens, dislikes, version
+       from client where workspace_id = $1 order by name asc, id asc`,
+    [workspaceId],
+  );
+}
+
 export async function loadClients(em: EntityManager, workspaceId: number, ids?: readonly number[]): Promise<IClient[]> {
   const where = ids ? { workspace: workspaceId, id: { $in: [...ids] } } : { workspace: workspaceId };
   return em.find(Client, where, { orderBy: { name: 'asc', id: 'asc' } });

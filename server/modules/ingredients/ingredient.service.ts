@@ -2,7 +2,7 @@ import Decimal from 'decimal.js';
 import { ForeignKeyConstraintViolationException, sql, type FilterQuery } from '@mikro-orm/core';
 import { preparedRows } from '../../db/prepared.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import type { AllergenCode } from '@shared/domain/allergens.js';
+import { isAllergenCode, type AllergenCode } from '@shared/domain/allergens.js';
 import {
   computeRecipeExact,
   DEFAULT_NET_CARB_RULE,
@@ -27,9 +27,8 @@ import {
 } from '@shared/schemas/ingredients.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { Conflict, Forbidden, NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
-import { Workspace } from '../workspaces/workspace.entity.js';
 import { Ingredient, type IIngredient } from './ingredient.entity.js';
-import { allergensOf, isOwnedBy, isShared, presentIngredient, toNutritionIngredient } from './ingredient.presenter.js';
+import { isOwnedBy, isShared, presentIngredient, toNutritionIngredient } from './ingredient.presenter.js';
 
 /** A library row in the shape the nutrition domain reads, plus what plates and shopping lists need beside it. */
 export type LoadedIngredient = NutritionIngredient & { id: number; allergens: AllergenCode[]; priceCents: number | null };
@@ -48,7 +47,8 @@ export function toNetCarbRule(kind: string | null | undefined): NetCarbRule {
 
 /** The net-carb rule the workspace counts with (Workspace.netCarbRule; the default when unset). */
 export async function netCarbRuleOf(em: EntityManager, workspaceId: number): Promise<NetCarbRule> {
-  const ws = await em.findOneOrFail(Workspace, workspaceId, { fields: ['netCarbRule'] });
+  const [ws] = await preparedRows<{ netCarbRule: string }>(em, 'trayline_net_carb_rule', 'select net_carb_rule as "netCarbRule" from workspace where id = $1', [workspaceId]);
+  if (!ws) throw new NotFound('Workspace');
   return toNetCarbRule(ws.netCarbRule);
 }
 
@@ -77,17 +77,45 @@ export async function loadNutritionIngredients(
   em: EntityManager,
   actor: Actor,
   ids: readonly number[],
-): Promise<Map<number, LoadedIngredient>> {
-  const found = await findVisible(em, actor, ids);
+): Promise<Map<number, UsableIngredient>> {
+  const found = await loadUsableIngredients(em, actor, ids);
   const missing = [...new Set(ids)].filter((id) => !found.has(id));
   if (missing.length) {
     const msg = `No ingredient with id ${missing.join(', ')} in your library`;
     throw new ValidationError(msg, { ingredientIds: [msg] });
   }
+  return found;
+}
+
+/** A library row ready for nutrition, allergens, cost and packages. */
+export type UsableIngredient = LoadedIngredient & { purchaseAmount: string | null; purchaseUnit: string | null };
+
+/**
+ * The library rows the actor may use (own workspace or shared) among `ids`, keyed by id; ids that are missing or
+ * belong to another workspace are simply absent. One prepared statement, plain rows (boards and trays read dozens).
+ */
+export async function loadUsableIngredients(em: EntityManager, actor: Actor, ids: readonly number[]): Promise<Map<number, UsableIngredient>> {
+  const unique = [...new Set(ids)].filter((id) => Number.isSafeInteger(id));
+  if (!unique.length) return new Map();
+  const rows = await preparedRows<CalcRow & { allergens: string[] | null; priceCents: number | null; purchaseAmount: string | null; purchaseUnit: string | null }>(
+    em,
+    'trayline_usable_ingredients',
+    `select ${CALC_COLUMNS}, i.allergens, i.price_cents as "priceCents", i.purchase_amount as "purchaseAmount", i.purchase_unit as "purchaseUnit"
+       from ingredient i
+      where i.id = any($1::int[]) and (i.workspace_id = $2 or i.workspace_id is null)`,
+    [unique, actor.workspaceId],
+  );
   return new Map(
-    [...found.values()].map((row) => [
+    rows.map((row) => [
       row.id,
-      { ...toNutritionIngredient(row), id: row.id, allergens: allergensOf(row), priceCents: row.priceCents ?? null },
+      {
+        ...toNutritionIngredient(row),
+        id: row.id,
+        allergens: (row.allergens ?? []).filter(isAllergenCode),
+        priceCents: row.priceCents ?? null,
+        purchaseAmount: row.purchaseAmount ?? null,
+        purchaseUnit: row.purchaseUnit ?? null,
+      },
     ]),
   );
 }

@@ -3,10 +3,8 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { ALLERGEN_CODES, type AllergenCode } from '@shared/domain/allergens.js';
 import { computeRecipeExact, type NetCarbRule, type NutritionIngredient, type RecipeExact } from '@shared/domain/nutrition.js';
 import { toGrams, UnitConversionError } from '@shared/domain/units.js';
-import { ValidationError } from '../../http/errors.js';
 import type { Actor } from '../../http/authz.js';
-import { Ingredient } from '../ingredients/ingredient.entity.js';
-import { loadNutritionIngredients, netCarbRuleOf as workspaceNetCarbRule } from '../ingredients/ingredient.service.js';
+import { loadUsableIngredients, netCarbRuleOf as workspaceNetCarbRule } from '../ingredients/ingredient.service.js';
 
 /** What a tray needs to know about one ingredient: its facts for nutrition, allergens and price. */
 export interface TrayIngredient {
@@ -29,49 +27,11 @@ export async function loadTrayIngredients(
   actor: Actor,
   ids: readonly number[],
 ): Promise<Map<number, TrayIngredient>> {
-  const unique = [...new Set(ids)];
-  if (unique.length === 0) return new Map();
-  // The package size is not part of LoadedIngredient: read it beside (for the cost per portion), as plain rows
-  // (hydrating the same ingredients twice made the second load merge into every entity).
-  const purchase: { id: number; purchaseAmount: string | null; purchaseUnit: string | null }[] = await em
-    .createQueryBuilder(Ingredient)
-    .select(['id', 'purchaseAmount', 'purchaseUnit'])
-    .where({ id: { $in: unique } })
-    .execute('all');
-  const packs = new Map(purchase.map((r) => [r.id, r]));
-  let loaded: Awaited<ReturnType<typeof loadNutritionIngredients>>;
-  try {
-    loaded = await loadNutritionIngredients(em, actor, unique);
-  } catch (e) {
-    if (!(e instanceof ValidationError)) throw e;
-    // Some ids are not usable: load the rest, leave those out.
-    const usable = unique.filter((id) => packs.has(id));
-    loaded = new Map();
-    for (const id of usable) {
-      try {
-        const one = await loadNutritionIngredients(em, actor, [id]);
-        for (const [k, v] of one) loaded.set(k, v);
-      } catch (inner) {
-        if (!(inner instanceof ValidationError)) throw inner;
-      }
-    }
-  }
+  const loaded = await loadUsableIngredients(em, actor, ids);
   return new Map(
     [...loaded.values()].map((ing) => {
-      const { id, allergens, priceCents, ...facts } = ing;
-      const pack = packs.get(id);
-      return [
-        id,
-        {
-          id,
-          name: facts.name,
-          facts,
-          allergens,
-          priceCents,
-          purchaseAmount: pack?.purchaseAmount ?? null,
-          purchaseUnit: pack?.purchaseUnit ?? null,
-        },
-      ];
+      const { id, allergens, priceCents, purchaseAmount, purchaseUnit, ...facts } = ing;
+      return [id, { id, name: facts.name, facts, allergens, priceCents, purchaseAmount, purchaseUnit }];
     }),
   );
 }

@@ -8,14 +8,14 @@ import type { AssemblyDto } from '@shared/schemas/assemblies.schema.js';
 import { WEEK_DAYS, type BoardDto, type BoardCellDto, type WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { NotFound } from '../../http/errors.js';
-import { loadAssemblies } from '../assemblies/assembly.service.js';
+import { preparedRows } from '../../db/prepared.js';
+import { loadPlateRows } from '../assemblies/assembly.service.js';
 import { presentAssembly } from '../assemblies/assembly.presenter.js';
-import { loadPlateContext, plateFacts, type PlateContext } from '../assemblies/plate-facts.js';
-import { loadClients, mealSlotsOf } from '../clients/client.service.js';
+import { loadPlateContext, plateFacts, type PlateContext, type PlateRow } from '../assemblies/plate-facts.js';
+import { loadClientFacts, mealSlotsOf } from '../clients/client.service.js';
 import { plannedTargets } from '../clients/client.presenter.js';
-import type { IClient } from '../clients/client.entity.js';
-import type { IAssembly } from '../assemblies/assembly.entity.js';
-import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell, type IWeekTray } from './week.entity.js';
+import type { ClientFacts } from '../clients/client.entity.js';
+import { Week, WeekPublication, type IWeek, type IWeekCell } from './week.entity.js';
 
 export function weekDays(w: Pick<IWeek, 'startDate'>): IsoDate[] {
   return Array.from({ length: WEEK_DAYS }, (_, i) => addDays(w.startDate, i));
@@ -69,33 +69,47 @@ export interface BoardCellRow {
 }
 
 async function loadCellRows(em: EntityManager, weekId: number): Promise<BoardCellRow[]> {
-  const rows: { id: number; client: number; assembly: number; date: string; slot: string; prepDate: string | null; storage: string; allergenOverrides: BoardCellRow['allergenOverrides'] | string | null }[] =
-    await em
-      .createQueryBuilder(WeekCell)
-      .select(['id', 'client', 'date', 'slot', 'assembly', 'prepDate', 'storage', 'allergenOverrides'])
-      .where({ week: weekId })
-      .orderBy({ date: 'asc', id: 'asc' })
-      .execute('all');
-  return rows.map((r) => ({
-    id: r.id,
-    client: { id: r.client },
-    assembly: { id: r.assembly },
-    date: r.date,
-    slot: r.slot,
-    prepDate: r.prepDate,
-    storage: r.storage,
-    allergenOverrides: typeof r.allergenOverrides === 'string' ? JSON.parse(r.allergenOverrides) : (r.allergenOverrides ?? []),
-  }));
+  const rows = await preparedRows<Omit<BoardCellRow, 'client' | 'assembly'> & { client: number; assembly: number }>(
+    em,
+    'trayline_week_cells',
+    `select id, client_id as client, assembly_id as assembly, date, slot, prep_date as "prepDate", storage,
+            allergen_overrides as "allergenOverrides"
+       from week_cell where week_id = $1 order by date asc, id asc`,
+    [weekId],
+  );
+  return rows.map((r) => ({ ...r, client: { id: r.client }, assembly: { id: r.assembly }, allergenOverrides: r.allergenOverrides ?? [] }));
 }
 
-/** Everything a board needs, in a fixed number of queries (no N+1): ~10 whatever the size of the week. */
+/** A week's tray count as the board reads it (a plain row). */
+export interface BoardTrayRow {
+  id: number;
+  tray: { id: number };
+  prepDate: IsoDate;
+  trayCount: number;
+}
+
+async function loadWeekTrayRows(em: EntityManager, weekId: number): Promise<BoardTrayRow[]> {
+  const rows = await preparedRows<{ id: number; tray: number; prepDate: IsoDate; trayCount: number }>(
+    em,
+    'trayline_week_trays',
+    'select id, tray_id as tray, prep_date as "prepDate", tray_count as "trayCount" from week_tray where week_id = $1 order by id asc',
+    [weekId],
+  );
+  return rows.map((r) => ({ id: r.id, tray: { id: r.tray }, prepDate: r.prepDate, trayCount: r.trayCount }));
+}
+
+/**
+ * Everything a board needs, in a fixed number of queries (no N+1): ~10 whatever the size of the week, read as
+ * plain rows (a board holds every client, plate and cell of the week; hydrating them as managed entities cost
+ * more than computing the board).
+ */
 export interface BoardData {
   week: IWeek;
   slots: string[];
-  clients: IClient[];
-  assemblies: IAssembly[];
+  clients: ClientFacts[];
+  assemblies: PlateRow[];
   cells: BoardCellRow[];
-  trays: IWeekTray[];
+  trays: BoardTrayRow[];
   ctx: PlateContext;
   publishedAt: Date | null;
 }
@@ -103,10 +117,10 @@ export interface BoardData {
 export async function loadBoardData(em: EntityManager, actor: Actor, week: IWeek): Promise<BoardData> {
   // One after another: inside a transaction the queries share one connection.
   const slots = await mealSlotsOf(em, actor.workspaceId);
-  const clients = await loadClients(em, actor.workspaceId);
-  const assemblies = await loadAssemblies(em, actor.workspaceId);
+  const clients = await loadClientFacts(em, actor.workspaceId);
+  const assemblies = await loadPlateRows(em, actor.workspaceId);
   const cells = await loadCellRows(em, week.id);
-  const trays = await em.find(WeekTray, { week: week.id }, { orderBy: { id: 'asc' } });
+  const trays = await loadWeekTrayRows(em, week.id);
   const publishedAt = await lastPublishedAt(em, week);
   const ctx = await loadPlateContext(em, actor, assemblies, trays.map((t) => t.tray.id));
   return { week, slots, clients, assemblies, cells, trays, ctx, publishedAt };
@@ -126,7 +140,7 @@ export function cellDto(c: BoardCellRow | IWeekCell): BoardCellDto {
 
 /** A client's planned targets, computed once per loaded board (the input and the DTO both need them). */
 const targetsMemo = new WeakMap<BoardData, Map<number, MacroTargets>>();
-function targetsOf(d: BoardData, c: IClient): MacroTargets {
+function targetsOf(d: BoardData, c: ClientFacts): MacroTargets {
   let memo = targetsMemo.get(d);
   if (!memo) targetsMemo.set(d, (memo = new Map()));
   let t = memo.get(c.id);
