@@ -134,16 +134,24 @@ function exactOf(m: CellMacros): ExactMacros {
 }
 
 /** Protein floor and energy limit of one client's targets under the rules (memoized like the macros above). */
-const limitMemo = new WeakMap<MacroTargets, { proteinG: number; targetKcal: number; share: string; over: string; floor: Decimal; limit: Decimal }>();
-function limitsOf(targets: MacroTargets, rules: CheckRules): { floor: Decimal; limit: Decimal } {
+interface Limits {
+  floor: Decimal;
+  limit: Decimal;
+  /** ceil(floor × 1000) and floor(limit × 1000): the thresholds of the thousandths fast path. */
+  floorMilliCeil: number;
+  limitMilliFloor: number;
+}
+const limitMemo = new WeakMap<MacroTargets, { proteinG: number; targetKcal: number; share: string; over: string } & Limits>();
+function limitsOf(targets: MacroTargets, rules: CheckRules): Limits {
   const share = String(rules.proteinFloorShare);
   const over = String(rules.energyOverShare);
   const e = limitMemo.get(targets);
   if (e && e.proteinG === targets.proteinG && e.targetKcal === targets.targetKcal && e.share === share && e.over === over) return e;
   const floor = new Decimal(targets.proteinG).times(rules.proteinFloorShare);
   const limit = new Decimal(targets.targetKcal).times(new Decimal(rules.energyOverShare).plus(1));
-  limitMemo.set(targets, { proteinG: targets.proteinG, targetKcal: targets.targetKcal, share, over, floor, limit });
-  return { floor, limit };
+  const limits: Limits = { floor, limit, floorMilliCeil: thresholdOf(floor, 'ceil'), limitMilliFloor: thresholdOf(limit, 'floor') };
+  limitMemo.set(targets, { proteinG: targets.proteinG, targetKcal: targets.targetKcal, share, over, ...limits });
+  return limits;
 }
 
 function dislikeSet(list: readonly string[]): Set<string> {
@@ -170,7 +178,92 @@ function sumMacros(cells: readonly CheckCell[]): ExactMacros {
   }, { kcal: zero, netCarbsG: zero, proteinG: zero, fatG: zero });
 }
 
-function macroWarnings(input: DayCheckInput, totals: ReturnType<typeof sumMacros>): WeekWarning[] {
+/**
+ * Fast exact path: plate macros are given to 0.1 (a board's plates are rounded so), so a day's sums are exact as
+ * whole thousandths in ordinary integers, and every comparison with a target becomes an integer comparison
+ * against a threshold computed once per client with decimal.js (an integer S beats x exactly when S > floor(x),
+ * and falls short of x exactly when S < ceil(x)). Macros with more than three decimals take the Decimal path.
+ */
+const MILLI = 1000;
+type MilliMacros = { kcal: number; netCarbsG: number; proteinG: number; fatG: number };
+const milliMemo = new WeakMap<CellMacros, { from: CellMacros; milli: MilliMacros | null }>();
+
+function milliOf(x: number): number | null {
+  const m = Math.round(x * MILLI);
+  return Number.isSafeInteger(m) && m / MILLI === x ? m : null;
+}
+
+function milliMacros(m: CellMacros): MilliMacros | null {
+  const e = milliMemo.get(m);
+  if (e && e.from.kcal === m.kcal && e.from.netCarbsG === m.netCarbsG && e.from.proteinG === m.proteinG && e.from.fatG === m.fatG)
+    return e.milli;
+  const kcal = milliOf(m.kcal);
+  const netCarbsG = milliOf(m.netCarbsG);
+  const proteinG = milliOf(m.proteinG);
+  const fatG = milliOf(m.fatG);
+  const milli = kcal === null || netCarbsG === null || proteinG === null || fatG === null ? null : { kcal, netCarbsG, proteinG, fatG };
+  milliMemo.set(m, { from: { kcal: m.kcal, netCarbsG: m.netCarbsG, proteinG: m.proteinG, fatG: m.fatG }, milli });
+  return milli;
+}
+
+function sumMilli(cells: readonly CheckCell[]): MilliMacros | null {
+  const t: MilliMacros = { kcal: 0, netCarbsG: 0, proteinG: 0, fatG: 0 };
+  for (const c of cells) {
+    const m = milliMacros(c.macros);
+    if (!m) return null;
+    t.kcal += m.kcal;
+    t.netCarbsG += m.netCarbsG;
+    t.proteinG += m.proteinG;
+    t.fatG += m.fatG;
+  }
+  return Number.isSafeInteger(t.kcal + t.netCarbsG + t.proteinG + t.fatG) ? t : null;
+}
+
+/** Thousandths rounded half up to one decimal (non-negative sums). */
+const milliRound1 = (m: number) => (m >= 0 ? Math.floor((m + 50) / 100) / 10 : round1(new Decimal(m).div(MILLI)));
+
+/** A day's totals: exact Decimals, or exact thousandths (the fast path), with the comparisons the rules need. */
+interface DayTotalsView {
+  netCarbsOver(capG: number): boolean;
+  proteinBelow(floor: Decimal, floorMilliCeil: number): boolean;
+  energyOver(limit: Decimal, limitMilliFloor: number): boolean;
+  rounded(): DayTotals;
+}
+
+function totalsView(cells: readonly CheckCell[]): DayTotalsView {
+  const milli = sumMilli(cells);
+  if (milli) {
+    return {
+      netCarbsOver: (capG) => milli.netCarbsG > thresholdOf(capG, 'floor'),
+      proteinBelow: (_floor, floorMilliCeil) => milli.proteinG < floorMilliCeil,
+      energyOver: (_limit, limitMilliFloor) => milli.kcal > limitMilliFloor,
+      rounded: () => ({ kcal: milliRound1(milli.kcal), netCarbsG: milliRound1(milli.netCarbsG), proteinG: milliRound1(milli.proteinG), fatG: milliRound1(milli.fatG) }),
+    };
+  }
+  const exact = sumMacros(cells);
+  return {
+    netCarbsOver: (capG) => exact.netCarbsG.gt(capG),
+    proteinBelow: (floor) => exact.proteinG.lt(floor),
+    energyOver: (limit) => exact.kcal.gt(limit),
+    rounded: () => ({ kcal: round1(exact.kcal), netCarbsG: round1(exact.netCarbsG), proteinG: round1(exact.proteinG), fatG: round1(exact.fatG) }),
+  };
+}
+
+/** floor or ceil of x × 1000, exactly (x a target or limit); memoized per value. */
+const thresholds = new Map<string, number>();
+function thresholdOf(x: Decimal.Value, mode: 'floor' | 'ceil'): number {
+  const key = `${mode}|${x.toString()}`;
+  let t = thresholds.get(key);
+  if (t === undefined) {
+    const scaled = new Decimal(x).times(MILLI);
+    t = (mode === 'floor' ? scaled.floor() : scaled.ceil()).toNumber();
+    if (thresholds.size > 10_000) thresholds.clear();
+    thresholds.set(key, t);
+  }
+  return t;
+}
+
+function macroWarnings(input: DayCheckInput, totals: DayTotalsView, actual: DayTotals): WeekWarning[] {
   const rules: CheckRules = {
     proteinFloorShare: input.rules?.proteinFloorShare ?? DEFAULT_CHECK_RULES.proteinFloorShare,
     energyOverShare: input.rules?.energyOverShare ?? DEFAULT_CHECK_RULES.energyOverShare,
@@ -179,20 +272,20 @@ function macroWarnings(input: DayCheckInput, totals: ReturnType<typeof sumMacros
   const warnings: WeekWarning[] = [];
   const { targets } = input;
 
-  if (totals.netCarbsG.gt(targets.netCarbCapG)) {
-    const actualG = round1(totals.netCarbsG);
+  if (totals.netCarbsOver(targets.netCarbCapG)) {
+    const actualG = actual.netCarbsG;
     warnings.push({ ...base, kind: 'net-carbs-over', actualG, capG: targets.netCarbCapG,
       message: `Net carbs ${actualG} g are over the ${targets.netCarbCapG} g cap.` });
   }
-  const { floor, limit } = limitsOf(targets, rules);
-  if (totals.proteinG.lt(floor)) {
-    const actualG = round1(totals.proteinG);
+  const { floor, limit, floorMilliCeil, limitMilliFloor } = limitsOf(targets, rules);
+  if (totals.proteinBelow(floor, floorMilliCeil)) {
+    const actualG = actual.proteinG;
     const floorG = round1(floor);
     warnings.push({ ...base, kind: 'protein-short', actualG, targetG: targets.proteinG, floorG,
       message: `Protein ${actualG} g is below the ${floorG} g floor (target ${targets.proteinG} g).` });
   }
-  if (totals.kcal.gt(limit)) {
-    const actualKcal = round1(totals.kcal);
+  if (totals.energyOver(limit, limitMilliFloor)) {
+    const actualKcal = actual.kcal;
     const limitKcal = round1(limit);
     warnings.push({ ...base, kind: 'energy-over', actualKcal, targetKcal: targets.targetKcal, limitKcal,
       message: `Energy ${actualKcal} kcal is over ${limitKcal} kcal (target ${targets.targetKcal} kcal).` });
@@ -253,8 +346,9 @@ function portionWarning(input: DayCheckInput, cell: CheckCell, portion: CellPort
 
 /** Check one client's day. */
 export function checkDay(input: DayCheckInput): DayCheck {
-  const totals = sumMacros(input.cells);
-  const warnings: WeekWarning[] = [...macroWarnings(input, totals)];
+  const view = totalsView(input.cells);
+  const totals = view.rounded();
+  const warnings: WeekWarning[] = [...macroWarnings(input, view, totals)];
   for (const cell of input.cells) {
     warnings.push(...allergenWarnings(input, cell), ...dislikeWarnings(input, cell));
     for (const portion of cell.portions) {
@@ -265,7 +359,7 @@ export function checkDay(input: DayCheckInput): DayCheck {
   return {
     clientId: input.clientId,
     date: input.date,
-    totals: { kcal: round1(totals.kcal), netCarbsG: round1(totals.netCarbsG), proteinG: round1(totals.proteinG), fatG: round1(totals.fatG) },
+    totals,
     warnings,
   };
 }

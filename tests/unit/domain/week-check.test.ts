@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import Decimal from 'decimal.js';
 import {
   DEFAULT_CHECK_RULES,
   checkDay,
@@ -72,6 +74,34 @@ describe('macro limits at their boundaries (sums are exact decimals)', () => {
     const [w] = checkDay(day({ cells: macroCells('proteinG', [0.1, 64.1, 25.7]) })).warnings;
     expect(w).toMatchObject({ kind: 'protein-short', actualG: 89.9, targetG: 100, floorG: 90, clientId: 'c1', date: '2025-01-07' });
     expect(w.message).toContain('89.9 g');
+  });
+
+  it('macros with more than three decimals are still summed exactly (0.0001 + 19.9999 is the 20 g cap)', () => {
+    expect(checkDay(day({ cells: macroCells('netCarbsG', [0.0001, 19.9999]) })).warnings).toEqual([]);
+    expect(checkDay(day({ cells: macroCells('netCarbsG', [0.0001, 20]) })).warnings.map((w) => w.kind)).toEqual(['net-carbs-over']);
+  });
+
+  // Property (fast-check): the day check agrees with a plain decimal.js computation of the same rules, for
+  // macros given to 0.1 (as a board's plates are) or to 0.001 and targets given to 0.1. Reference: decimal.js.
+  it('agrees with an exact decimal.js reference on random days', () => {
+    const macro = fc.oneof(fc.integer({ min: 0, max: 20_000 }).map((n) => n / 10), fc.integer({ min: 0, max: 2_000_000 }).map((n) => n / 1000));
+    const macros = fc.record({ kcal: macro, netCarbsG: macro, proteinG: macro, fatG: macro });
+    const tenth = (min: number, max: number) => fc.integer({ min: min * 10, max: max * 10 }).map((n) => n / 10);
+    const goals = fc.record({ targetKcal: fc.integer({ min: 200, max: 4000 }), netCarbCapG: tenth(5, 60), proteinG: tenth(10, 250), fatG: tenth(10, 300) });
+    fc.assert(
+      fc.property(fc.array(macros, { minLength: 1, maxLength: 4 }), goals, (list, t) => {
+        const result = checkDay(day({ targets: t, cells: list.map((m, i) => cell({ slot: `s${i}`, macros: m })) }));
+        const sum = (k: keyof (typeof list)[number]) => list.reduce((a, m) => a.plus(m[k]), new Decimal(0));
+        const r1 = (d: Decimal) => d.toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber();
+        const expected: string[] = [];
+        if (sum('netCarbsG').gt(t.netCarbCapG)) expected.push('net-carbs-over');
+        if (sum('proteinG').lt(new Decimal(t.proteinG).times('0.9'))) expected.push('protein-short');
+        if (sum('kcal').gt(new Decimal(t.targetKcal).times('1.1'))) expected.push('energy-over');
+        expect(result.warnings.map((w) => w.kind)).toEqual(expected);
+        expect(result.totals).toEqual({ kcal: r1(sum('kcal')), netCarbsG: r1(sum('netCarbsG')), proteinG: r1(sum('proteinG')), fatG: r1(sum('fatG')) });
+      }),
+      { numRuns: 500 },
+    );
   });
 
   it('uses coach-edited rules', () => {
