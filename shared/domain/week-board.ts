@@ -142,7 +142,7 @@ function cellPortions(cell: BoardCellInput, plate: BoardPlate, input: BoardInput
             });
       memo.portion.set(key, (r = { prepDate, eatBy, status, storage: cell.storage, remedies }));
     }
-    out.push({ trayId: part.trayId, ...r });
+    out.push({ trayId: part.trayId, prepDate: r.prepDate, eatBy: r.eatBy, status: r.status, storage: r.storage, remedies: r.remedies });
   }
   return out;
 }

@@ -140,6 +140,9 @@ interface Limits {
   /** ceil(floor × 1000) and floor(limit × 1000): the thresholds of the thousandths fast path. */
   floorMilliCeil: number;
   limitMilliFloor: number;
+  /** floor and limit rounded to 0.1, for the messages. */
+  floorG: number;
+  limitKcal: number;
 }
 const limitMemo = new WeakMap<MacroTargets, { proteinG: number; targetKcal: number; share: string; over: string } & Limits>();
 function limitsOf(targets: MacroTargets, rules: CheckRules): Limits {
@@ -149,7 +152,14 @@ function limitsOf(targets: MacroTargets, rules: CheckRules): Limits {
   if (e && e.proteinG === targets.proteinG && e.targetKcal === targets.targetKcal && e.share === share && e.over === over) return e;
   const floor = new Decimal(targets.proteinG).times(rules.proteinFloorShare);
   const limit = new Decimal(targets.targetKcal).times(new Decimal(rules.energyOverShare).plus(1));
-  const limits: Limits = { floor, limit, floorMilliCeil: thresholdOf(floor, 'ceil'), limitMilliFloor: thresholdOf(limit, 'floor') };
+  const limits: Limits = {
+    floor,
+    limit,
+    floorMilliCeil: thresholdOf(floor, 'ceil'),
+    limitMilliFloor: thresholdOf(limit, 'floor'),
+    floorG: round1(floor),
+    limitKcal: round1(limit),
+  };
   limitMemo.set(targets, { proteinG: targets.proteinG, targetKcal: targets.targetKcal, share, over, ...limits });
   return limits;
 }
@@ -222,31 +232,18 @@ function sumMilli(cells: readonly CheckCell[]): MilliMacros | null {
 /** Thousandths rounded half up to one decimal (non-negative sums). */
 const milliRound1 = (m: number) => (m >= 0 ? Math.floor((m + 50) / 100) / 10 : round1(new Decimal(m).div(MILLI)));
 
-/** A day's totals: exact Decimals, or exact thousandths (the fast path), with the comparisons the rules need. */
-interface DayTotalsView {
-  netCarbsOver(capG: number): boolean;
-  proteinBelow(floor: Decimal, floorMilliCeil: number): boolean;
-  energyOver(limit: Decimal, limitMilliFloor: number): boolean;
-  rounded(): DayTotals;
+/** A day's sums: exact thousandths (the fast path) or exact Decimals. Plain data, no closures (a board checks hundreds of days). */
+type DaySums = { milli: MilliMacros; exact: null } | { milli: null; exact: ExactMacros };
+
+function daySums(cells: readonly CheckCell[]): DaySums {
+  const milli = sumMilli(cells);
+  return milli ? { milli, exact: null } : { milli: null, exact: sumMacros(cells) };
 }
 
-function totalsView(cells: readonly CheckCell[]): DayTotalsView {
-  const milli = sumMilli(cells);
-  if (milli) {
-    return {
-      netCarbsOver: (capG) => milli.netCarbsG > thresholdOf(capG, 'floor'),
-      proteinBelow: (_floor, floorMilliCeil) => milli.proteinG < floorMilliCeil,
-      energyOver: (_limit, limitMilliFloor) => milli.kcal > limitMilliFloor,
-      rounded: () => ({ kcal: milliRound1(milli.kcal), netCarbsG: milliRound1(milli.netCarbsG), proteinG: milliRound1(milli.proteinG), fatG: milliRound1(milli.fatG) }),
-    };
-  }
-  const exact = sumMacros(cells);
-  return {
-    netCarbsOver: (capG) => exact.netCarbsG.gt(capG),
-    proteinBelow: (floor) => exact.proteinG.lt(floor),
-    energyOver: (limit) => exact.kcal.gt(limit),
-    rounded: () => ({ kcal: round1(exact.kcal), netCarbsG: round1(exact.netCarbsG), proteinG: round1(exact.proteinG), fatG: round1(exact.fatG) }),
-  };
+function roundedTotals(s: DaySums): DayTotals {
+  if (s.milli) return { kcal: milliRound1(s.milli.kcal), netCarbsG: milliRound1(s.milli.netCarbsG), proteinG: milliRound1(s.milli.proteinG), fatG: milliRound1(s.milli.fatG) };
+  const e = s.exact;
+  return { kcal: round1(e.kcal), netCarbsG: round1(e.netCarbsG), proteinG: round1(e.proteinG), fatG: round1(e.fatG) };
 }
 
 /** floor or ceil of x × 1000, exactly (x a target or limit); memoized per value. */
@@ -263,31 +260,32 @@ function thresholdOf(x: Decimal.Value, mode: 'floor' | 'ceil'): number {
   return t;
 }
 
-function macroWarnings(input: DayCheckInput, totals: DayTotalsView, actual: DayTotals): WeekWarning[] {
+function macroWarnings(input: DayCheckInput, sums: DaySums, actual: DayTotals): WeekWarning[] {
   const rules: CheckRules = {
     proteinFloorShare: input.rules?.proteinFloorShare ?? DEFAULT_CHECK_RULES.proteinFloorShare,
     energyOverShare: input.rules?.energyOverShare ?? DEFAULT_CHECK_RULES.energyOverShare,
   };
-  const base = { severity: 'warn' as const, clientId: input.clientId, date: input.date };
+  // Object literals, not spreads of a shared base: a board builds hundreds of these, and a spread costs microseconds.
+  const { clientId, date } = input;
+  const severity = 'warn' as const;
   const warnings: WeekWarning[] = [];
   const { targets } = input;
 
-  if (totals.netCarbsOver(targets.netCarbCapG)) {
+  const netCarbsOver = sums.milli ? sums.milli.netCarbsG > thresholdOf(targets.netCarbCapG, 'floor') : sums.exact.netCarbsG.gt(targets.netCarbCapG);
+  if (netCarbsOver) {
     const actualG = actual.netCarbsG;
-    warnings.push({ ...base, kind: 'net-carbs-over', actualG, capG: targets.netCarbCapG,
+    warnings.push({ severity, clientId, date, kind: 'net-carbs-over', actualG, capG: targets.netCarbCapG,
       message: `Net carbs ${actualG} g are over the ${targets.netCarbCapG} g cap.` });
   }
-  const { floor, limit, floorMilliCeil, limitMilliFloor } = limitsOf(targets, rules);
-  if (totals.proteinBelow(floor, floorMilliCeil)) {
+  const { floor, limit, floorMilliCeil, limitMilliFloor, floorG, limitKcal } = limitsOf(targets, rules);
+  if (sums.milli ? sums.milli.proteinG < floorMilliCeil : sums.exact.proteinG.lt(floor)) {
     const actualG = actual.proteinG;
-    const floorG = round1(floor);
-    warnings.push({ ...base, kind: 'protein-short', actualG, targetG: targets.proteinG, floorG,
+    warnings.push({ severity, clientId, date, kind: 'protein-short', actualG, targetG: targets.proteinG, floorG,
       message: `Protein ${actualG} g is below the ${floorG} g floor (target ${targets.proteinG} g).` });
   }
-  if (totals.energyOver(limit, limitMilliFloor)) {
+  if (sums.milli ? sums.milli.kcal > limitMilliFloor : sums.exact.kcal.gt(limit)) {
     const actualKcal = actual.kcal;
-    const limitKcal = round1(limit);
-    warnings.push({ ...base, kind: 'energy-over', actualKcal, targetKcal: targets.targetKcal, limitKcal,
+    warnings.push({ severity, clientId, date, kind: 'energy-over', actualKcal, targetKcal: targets.targetKcal, limitKcal,
       message: `Energy ${actualKcal} kcal is over ${limitKcal} kcal (target ${targets.targetKcal} kcal).` });
   }
   return warnings;
@@ -325,20 +323,22 @@ function dislikeWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] {
 }
 
 function portionWarning(input: DayCheckInput, cell: CheckCell, portion: CellPortion): WeekWarning | null {
-  const base = { clientId: input.clientId, date: input.date, slot: cell.slot, trayId: portion.trayId, prepDate: portion.prepDate };
+  const { clientId, date } = input;
+  const { slot } = cell;
+  const { trayId, prepDate } = portion;
   const { status, eatBy } = portionStatus({ plannedDate: input.date, prepDate: portion.prepDate, fridgeDays: portion.fridgeDays });
   if (status === 'before-prep') {
-    return { ...base, kind: 'before-prep', severity: 'block',
+    return { clientId, date, slot, trayId, prepDate, kind: 'before-prep', severity: 'block',
       message: `Planned on ${input.date}, before its tray is made on ${portion.prepDate}.` };
   }
   if (portion.storage === 'frozen') {
     const qualityUntil = freezerQualityDate(portion.prepDate, portion.freezerWeeks ?? 0);
     if (compareIsoDates(input.date, qualityUntil) <= 0) return null;
-    return { ...base, kind: 'past-freezer-quality', severity: 'warn', qualityUntil,
+    return { clientId, date, slot, trayId, prepDate, kind: 'past-freezer-quality', severity: 'warn', qualityUntil,
       message: `Frozen portion planned after its freezer quality limit (${qualityUntil}).` };
   }
   if (status === 'past-eat-by') {
-    return { ...base, kind: 'past-eat-by', severity: 'block', eatBy,
+    return { clientId, date, slot, trayId, prepDate, kind: 'past-eat-by', severity: 'block', eatBy,
       message: `Past its eat-by date: prepped ${portion.prepDate}, eat by ${eatBy}.` };
   }
   return null;
@@ -346,9 +346,9 @@ function portionWarning(input: DayCheckInput, cell: CheckCell, portion: CellPort
 
 /** Check one client's day. */
 export function checkDay(input: DayCheckInput): DayCheck {
-  const view = totalsView(input.cells);
-  const totals = view.rounded();
-  const warnings: WeekWarning[] = [...macroWarnings(input, view, totals)];
+  const sums = daySums(input.cells);
+  const totals = roundedTotals(sums);
+  const warnings: WeekWarning[] = [...macroWarnings(input, sums, totals)];
   for (const cell of input.cells) {
     warnings.push(...allergenWarnings(input, cell), ...dislikeWarnings(input, cell));
     for (const portion of cell.portions) {

@@ -77,7 +77,16 @@ async function loadCellRows(em: EntityManager, weekId: number): Promise<BoardCel
        from week_cell where week_id = $1 order by date asc, id asc`,
     [weekId],
   );
-  return rows.map((r) => ({ ...r, client: { id: r.client }, assembly: { id: r.assembly }, allergenOverrides: r.allergenOverrides ?? [] }));
+  return rows.map((r) => ({
+    id: r.id,
+    client: { id: r.client },
+    assembly: { id: r.assembly },
+    date: r.date,
+    slot: r.slot,
+    prepDate: r.prepDate,
+    storage: r.storage,
+    allergenOverrides: r.allergenOverrides ?? [],
+  }));
 }
 
 /** A week's tray count as the board reads it (a plain row). */
@@ -167,7 +176,15 @@ export function boardInput(d: BoardData, cells: readonly BoardCellDto[] = d.cell
     })),
     plates,
     trays: new Map([...d.ctx.trays.values()].map((t) => [t.id, { id: t.id, fridgeDays: t.fridgeDays, freezerWeeks: t.freezerWeeks, portionsPerTray: t.portionsPerTray }])),
-    cells: cells.map((c) => ({ ...c, prepDate: c.prepDate ?? null })),
+    cells: cells.map((c) => ({
+      clientId: c.clientId,
+      date: c.date,
+      slot: c.slot,
+      assemblyId: c.assemblyId,
+      prepDate: c.prepDate ?? null,
+      storage: c.storage,
+      allergenOverrides: c.allergenOverrides,
+    })),
     batches: d.trays.map((t) => ({ trayId: t.tray.id, prepDate: t.prepDate, trayCount: t.trayCount })),
   };
 }
