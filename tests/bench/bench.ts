@@ -160,9 +160,9 @@ try {
   const health: Request = { method: 'GET', path: '/api/health', headers: {} };
   const requests = cases.map((c) => ({ c, r: { method: c.method, path: c.path, body: c.body, headers: { cookie: ctx.cookie } } }));
 
-  // Warm-up: every request a few dozen times (JIT, connection pools, PostgreSQL caches).
-  await latency(base, health, 300);
-  for (const { c, r } of requests) await latency(base, r, Math.min(100, c.sequential ?? 100));
+  // Warm-up: every request a few hundred times (JIT, connection pools, prepared statements, PostgreSQL caches).
+  await latency(base, health, 500);
+  for (const { c, r } of requests) await latency(base, r, Math.min(300, c.sequential ?? 300));
 
   const h = await latency(base, health);
   const hT = await throughput(base, health);
