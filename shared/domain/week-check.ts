@@ -133,34 +133,44 @@ function exactOf(m: CellMacros): ExactMacros {
   return exact;
 }
 
-/** Protein floor and energy limit of one client's targets under the rules (memoized like the macros above). */
+/** Net-carb cap, protein floor and energy limit of one client's targets under the rules (memoized like the macros above). */
 interface Limits {
   floor: Decimal;
   limit: Decimal;
-  /** ceil(floor × 1000) and floor(limit × 1000): the thresholds of the thousandths fast path. */
+  /** floor(cap × 1000), ceil(floor × 1000) and floor(limit × 1000): the thresholds of the thousandths fast path. */
+  capMilliFloor: number;
   floorMilliCeil: number;
   limitMilliFloor: number;
   /** floor and limit rounded to 0.1, for the messages. */
   floorG: number;
   limitKcal: number;
 }
-const limitMemo = new WeakMap<MacroTargets, { proteinG: number; targetKcal: number; share: string; over: string } & Limits>();
+const limitMemo = new WeakMap<MacroTargets, { netCarbCapG: number; proteinG: number; targetKcal: number; share: string; over: string } & Limits>();
 function limitsOf(targets: MacroTargets, rules: CheckRules): Limits {
   const share = String(rules.proteinFloorShare);
   const over = String(rules.energyOverShare);
   const e = limitMemo.get(targets);
-  if (e && e.proteinG === targets.proteinG && e.targetKcal === targets.targetKcal && e.share === share && e.over === over) return e;
+  if (
+    e &&
+    e.netCarbCapG === targets.netCarbCapG &&
+    e.proteinG === targets.proteinG &&
+    e.targetKcal === targets.targetKcal &&
+    e.share === share &&
+    e.over === over
+  )
+    return e;
   const floor = new Decimal(targets.proteinG).times(rules.proteinFloorShare);
   const limit = new Decimal(targets.targetKcal).times(new Decimal(rules.energyOverShare).plus(1));
   const limits: Limits = {
     floor,
     limit,
-    floorMilliCeil: thresholdOf(floor, 'ceil'),
-    limitMilliFloor: thresholdOf(limit, 'floor'),
+    capMilliFloor: milliThreshold(targets.netCarbCapG, 'floor'),
+    floorMilliCeil: milliThreshold(floor, 'ceil'),
+    limitMilliFloor: milliThreshold(limit, 'floor'),
     floorG: round1(floor),
     limitKcal: round1(limit),
   };
-  limitMemo.set(targets, { proteinG: targets.proteinG, targetKcal: targets.targetKcal, share, over, ...limits });
+  limitMemo.set(targets, { netCarbCapG: targets.netCarbCapG, proteinG: targets.proteinG, targetKcal: targets.targetKcal, share, over, ...limits });
   return limits;
 }
 
@@ -197,6 +207,12 @@ function sumMacros(cells: readonly CheckCell[]): ExactMacros {
 const MILLI = 1000;
 type MilliMacros = { kcal: number; netCarbsG: number; proteinG: number; fatG: number };
 const milliMemo = new WeakMap<CellMacros, { from: CellMacros; milli: MilliMacros | null }>();
+
+/** floor or ceil of x × 1000, exactly (x a target or limit). */
+function milliThreshold(x: Decimal.Value, mode: 'floor' | 'ceil'): number {
+  const scaled = new Decimal(x).times(MILLI);
+  return (mode === 'floor' ? scaled.floor() : scaled.ceil()).toNumber();
+}
 
 function milliOf(x: number): number | null {
   const m = Math.round(x * MILLI);
@@ -246,20 +262,6 @@ function roundedTotals(s: DaySums): DayTotals {
   return { kcal: round1(e.kcal), netCarbsG: round1(e.netCarbsG), proteinG: round1(e.proteinG), fatG: round1(e.fatG) };
 }
 
-/** floor or ceil of x × 1000, exactly (x a target or limit); memoized per value. */
-const thresholds = new Map<string, number>();
-function thresholdOf(x: Decimal.Value, mode: 'floor' | 'ceil'): number {
-  const key = `${mode}|${x.toString()}`;
-  let t = thresholds.get(key);
-  if (t === undefined) {
-    const scaled = new Decimal(x).times(MILLI);
-    t = (mode === 'floor' ? scaled.floor() : scaled.ceil()).toNumber();
-    if (thresholds.size > 10_000) thresholds.clear();
-    thresholds.set(key, t);
-  }
-  return t;
-}
-
 function macroWarnings(input: DayCheckInput, sums: DaySums, actual: DayTotals): WeekWarning[] {
   const rules: CheckRules = {
     proteinFloorShare: input.rules?.proteinFloorShare ?? DEFAULT_CHECK_RULES.proteinFloorShare,
@@ -271,13 +273,12 @@ function macroWarnings(input: DayCheckInput, sums: DaySums, actual: DayTotals): 
   const warnings: WeekWarning[] = [];
   const { targets } = input;
 
-  const netCarbsOver = sums.milli ? sums.milli.netCarbsG > thresholdOf(targets.netCarbCapG, 'floor') : sums.exact.netCarbsG.gt(targets.netCarbCapG);
-  if (netCarbsOver) {
+  const { floor, limit, capMilliFloor, floorMilliCeil, limitMilliFloor, floorG, limitKcal } = limitsOf(targets, rules);
+  if (sums.milli ? sums.milli.netCarbsG > capMilliFloor : sums.exact.netCarbsG.gt(targets.netCarbCapG)) {
     const actualG = actual.netCarbsG;
     warnings.push({ severity, clientId, date, kind: 'net-carbs-over', actualG, capG: targets.netCarbCapG,
       message: `Net carbs ${actualG} g are over the ${targets.netCarbCapG} g cap.` });
   }
-  const { floor, limit, floorMilliCeil, limitMilliFloor, floorG, limitKcal } = limitsOf(targets, rules);
   if (sums.milli ? sums.milli.proteinG < floorMilliCeil : sums.exact.proteinG.lt(floor)) {
     const actualG = actual.proteinG;
     warnings.push({ severity, clientId, date, kind: 'protein-short', actualG, targetG: targets.proteinG, floorG,

@@ -21,7 +21,6 @@ export async function findClient(em: EntityManager, actor: Actor, id: number): P
   return row;
 }
 
-/** Clients of the workspace, by name (one query). */
 /**
  * A workspace's clients as plain rows, by name (what the week board reads: a board holds every client, and
  * hydrating each as a managed entity cost more than computing the board). One prepared statement; writes go
@@ -40,6 +39,7 @@ export async function loadClientFacts(em: EntityManager, workspaceId: number): P
   );
 }
 
+/** Clients of the workspace as entities, by name (one query), optionally only these ids. */
 export async function loadClients(em: EntityManager, workspaceId: number, ids?: readonly number[]): Promise<IClient[]> {
   const where = ids ? { workspace: workspaceId, id: { $in: [...ids] } } : { workspace: workspaceId };
   return em.find(Client, where, { orderBy: { name: 'asc', id: 'asc' } });

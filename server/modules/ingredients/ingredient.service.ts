@@ -68,25 +68,6 @@ async function findVisible(em: EntityManager, actor: Actor, ids: readonly number
   return new Map(rows.map((r) => [r.id, r]));
 }
 
-/**
- * Loads library rows the actor may use (own workspace or shared), keyed by id, as `NutritionIngredient`s
- * (plus id, allergens and price). Throws ValidationError (field `ingredientIds`) naming every id that is
- * missing or belongs to another workspace.
- */
-export async function loadNutritionIngredients(
-  em: EntityManager,
-  actor: Actor,
-  ids: readonly number[],
-): Promise<Map<number, UsableIngredient>> {
-  const found = await loadUsableIngredients(em, actor, ids);
-  const missing = [...new Set(ids)].filter((id) => !found.has(id));
-  if (missing.length) {
-    const msg = `No ingredient with id ${missing.join(', ')} in your library`;
-    throw new ValidationError(msg, { ingredientIds: [msg] });
-  }
-  return found;
-}
-
 /** A library row ready for nutrition, allergens, cost and packages. */
 export type UsableIngredient = LoadedIngredient & { purchaseAmount: string | null; purchaseUnit: string | null };
 
