@@ -112,22 +112,26 @@ interface TrayRow {
 
 async function loadTrayRows(em: EntityManager, workspaceId: number, ids: readonly number[]): Promise<TrayRow[]> {
   if (ids.length === 0) return [];
-  const trays = await preparedRows<Omit<TrayRow, 'lines'>>(
-    em,
-    'trayline_tray_rows',
-    `select id, name, fridge_days as "fridgeDays", freezer_weeks as "freezerWeeks", cut_kind as "cutKind", cut_rows as "cutRows",
-            cut_columns as "cutColumns", cut_pieces as "cutPieces", yield_factor as "yieldFactor", tags, reheat_steps as "reheatSteps", archived
-       from tray where id = any($1::int[]) and workspace_id = $2 order by id asc`,
-    [[...new Set(ids)], workspaceId],
-  );
-  if (trays.length === 0) return [];
-  const lines = await preparedRows<{ tray: number; ingredientId: number; amount: string; unit: string }>(
-    em,
-    'trayline_tray_lines',
-    `select tray_id as tray, ingredient_id as "ingredientId", amount, unit
-       from tray_line where tray_id = any($1::int[]) order by tray_id asc, position asc, id asc`,
-    [trays.map((t) => t.id)],
-  );
+  const unique = [...new Set(ids)];
+  // Trays and their lines side by side (both limited to the workspace).
+  const [trays, lines] = await Promise.all([
+    preparedRows<Omit<TrayRow, 'lines'>>(
+      em,
+      'trayline_tray_rows',
+      `select id, name, fridge_days as "fridgeDays", freezer_weeks as "freezerWeeks", cut_kind as "cutKind", cut_rows as "cutRows",
+              cut_columns as "cutColumns", cut_pieces as "cutPieces", yield_factor as "yieldFactor", tags, reheat_steps as "reheatSteps", archived
+         from tray where id = any($1::int[]) and workspace_id = $2 order by id asc`,
+      [unique, workspaceId],
+    ),
+    preparedRows<{ tray: number; ingredientId: number; amount: string; unit: string }>(
+      em,
+      'trayline_tray_lines',
+      `select l.tray_id as tray, l.ingredient_id as "ingredientId", l.amount, l.unit
+         from tray_line l join tray t on t.id = l.tray_id
+        where l.tray_id = any($1::int[]) and t.workspace_id = $2 order by l.tray_id asc, l.position asc, l.id asc`,
+      [unique, workspaceId],
+    ),
+  ]);
   const byTray = new Map<number, TrayRow['lines']>();
   for (const l of lines) {
     let list = byTray.get(l.tray);
@@ -170,8 +174,7 @@ export async function loadPlateContext(
 ): Promise<PlateContext> {
   const items = assemblies.flatMap(itemsOf);
   const trayIds = [...new Set([...items.filter((i) => i.tray).map((i) => i.tray!.id), ...extraTrayIds])];
-  const trays = await loadTrayRows(em, actor.workspaceId, trayIds);
-  const rule = await netCarbRuleOf(em, actor);
+  const [trays, rule] = await Promise.all([loadTrayRows(em, actor.workspaceId, trayIds), netCarbRuleOf(em, actor)]);
   const ingredientIds = [
     ...trays.flatMap((t) => t.lines.map((l) => l.ingredientId)),
     ...items.filter((i) => i.ingredient).map((i) => i.ingredient!.id),

@@ -124,13 +124,16 @@ export interface BoardData {
 }
 
 export async function loadBoardData(em: EntityManager, actor: Actor, week: IWeek): Promise<BoardData> {
-  // One after another: inside a transaction the queries share one connection.
-  const slots = await mealSlotsOf(em, actor.workspaceId);
-  const clients = await loadClientFacts(em, actor.workspaceId);
-  const assemblies = await loadPlateRows(em, actor.workspaceId);
-  const cells = await loadCellRows(em, week.id);
-  const trays = await loadWeekTrayRows(em, week.id);
-  const publishedAt = await lastPublishedAt(em, week);
+  // Independent reads side by side: outside a transaction each takes its own pooled connection (the board waits for
+  // the slowest, not the sum); inside one, they queue on the transaction's connection.
+  const [slots, clients, assemblies, cells, trays, publishedAt] = await Promise.all([
+    mealSlotsOf(em, actor.workspaceId),
+    loadClientFacts(em, actor.workspaceId),
+    loadPlateRows(em, actor.workspaceId),
+    loadCellRows(em, week.id),
+    loadWeekTrayRows(em, week.id),
+    lastPublishedAt(em, week),
+  ]);
   const ctx = await loadPlateContext(em, actor, assemblies, trays.map((t) => t.tray.id));
   return { week, slots, clients, assemblies, cells, trays, ctx, publishedAt };
 }
