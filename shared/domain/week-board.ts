@@ -120,12 +120,33 @@ function memoPrepDate(memo: Memo, cell: Pick<BoardCellInput, 'date' | 'prepDate'
   return v;
 }
 
-function cellPortions(cell: BoardCellInput, plate: BoardPlate, input: BoardInput, memo: Memo): CellPortionResult[] {
-  const prepDate = memoPrepDate(memo, cell, input.prepDates);
+/** What a cell's eat-by needs to know about one tray of its plate. */
+export type PortionTray = Pick<BoardTray, 'fridgeDays' | 'freezerWeeks'> & { trayId: number };
+
+const newMemo = (): Memo => ({ prep: new Map(), portion: new Map() });
+
+/**
+ * One cell's portions: for each tray of its plate, the prep date it comes from, its eat-by, its status and the
+ * remedies when it is past its eat-by. The board computes every cell with this; the board page computes the
+ * selected cell with it (the board answer does not carry every cell's portions).
+ */
+export function cellEatBy(
+  cell: Pick<BoardCellInput, 'date' | 'prepDate' | 'storage'>,
+  trays: readonly PortionTray[],
+  weekPrepDates: readonly IsoDate[],
+): CellPortionResult[] {
+  return portionsWithMemo(cell, trays, weekPrepDates, newMemo());
+}
+
+function portionsWithMemo(
+  cell: Pick<BoardCellInput, 'date' | 'prepDate' | 'storage'>,
+  trays: readonly PortionTray[],
+  weekPrepDates: readonly IsoDate[],
+  memo: Memo,
+): CellPortionResult[] {
+  const prepDate = memoPrepDate(memo, cell, weekPrepDates);
   const out: CellPortionResult[] = [];
-  for (const part of plate.trays) {
-    const tray = input.trays.get(part.trayId);
-    if (!tray) continue;
+  for (const tray of trays) {
     const key = `${cell.date}|${prepDate}|${tray.fridgeDays}|${tray.freezerWeeks}|${cell.storage}`;
     let r = memo.portion.get(key);
     if (!r) {
@@ -138,13 +159,22 @@ function cellPortions(cell: BoardCellInput, plate: BoardPlate, input: BoardInput
               prepDate,
               fridgeDays: tray.fridgeDays,
               freezerWeeks: tray.freezerWeeks,
-              weekPrepDates: input.prepDates,
+              weekPrepDates,
             });
       memo.portion.set(key, (r = { prepDate, eatBy, status, storage: cell.storage, remedies }));
     }
-    out.push({ trayId: part.trayId, prepDate: r.prepDate, eatBy: r.eatBy, status: r.status, storage: r.storage, remedies: r.remedies });
+    out.push({ trayId: tray.trayId, prepDate: r.prepDate, eatBy: r.eatBy, status: r.status, storage: r.storage, remedies: r.remedies });
   }
   return out;
+}
+
+function cellPortions(cell: BoardCellInput, plate: BoardPlate, input: BoardInput, memo: Memo): CellPortionResult[] {
+  const trays: PortionTray[] = [];
+  for (const part of plate.trays) {
+    const tray = input.trays.get(part.trayId);
+    if (tray) trays.push({ trayId: part.trayId, fridgeDays: tray.fridgeDays, freezerWeeks: tray.freezerWeeks });
+  }
+  return portionsWithMemo(cell, trays, input.prepDates, memo);
 }
 
 /** The whole board: day checks (blocks first), per-cell eat-by and remedies, and the portion count. */
@@ -153,7 +183,7 @@ export function computeBoard(input: BoardInput): BoardResult {
   const byDay = new Map<string, { client: BoardClient; date: IsoDate; cells: CheckCell[] }>();
   const cellResults: CellResult[] = [];
   const inventoryCells: BoardCell[] = [];
-  const memo: Memo = { prep: new Map(), portion: new Map() };
+  const memo = newMemo();
 
   for (const cell of input.cells) {
     const client = clients.get(cell.clientId);

@@ -368,7 +368,11 @@ export function checkDay(input: DayCheckInput): DayCheck {
 /** Check many client-days; warnings come back flat, blocks first. */
 export function checkWeek(days: readonly DayCheckInput[]): { days: DayCheck[]; warnings: WeekWarning[] } {
   const checked = days.map(checkDay);
-  const warnings = checked.flatMap((d) => d.warnings);
-  warnings.sort((a, b) => (a.severity === b.severity ? 0 : a.severity === 'block' ? -1 : 1));
-  return { days: checked, warnings };
+  return { days: checked, warnings: flatWarnings(checked) };
+}
+
+/** The warnings of checked days as one list, blocks first (the board's problem list; the week board page builds it). */
+export function flatWarnings(days: readonly { warnings: readonly WeekWarning[] }[]): WeekWarning[] {
+  const warnings = days.flatMap((d) => d.warnings);
+  return warnings.sort((a, b) => (a.severity === b.severity ? 0 : a.severity === 'block' ? -1 : 1));
 }

@@ -152,11 +152,12 @@ export interface BoardDto {
   plates: AssemblyDto[];
   cells: BoardCellDto[];
   trays: BoardTrayDto[];
-  /** Per client-day totals and warnings. */
+  /**
+   * Per client-day totals and warnings (the week's problem list is `flatWarnings(checks)`). A cell's portions, with
+   * eat-by and remedies, are `cellEatBy(cell, plate.trays, prepDates)` (shared/domain/week-board.ts): the board
+   * answer does not carry them for every cell.
+   */
   checks: BoardDayDto[];
-  warnings: WeekWarning[];
-  /** Per cell: each portion's eat-by and remedies. */
-  eatBy: CellResult[];
   inventory: TrayTally[];
   cautions: readonly Caution[];
 }

@@ -1,5 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
+import { flatWarnings, type WeekWarning } from '@shared/domain/week-check.js';
+import type { BoardDto } from '@shared/schemas/weeks.schema.js';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, uniq, type Member } from '../support/factories.js';
 import { seedReferenceIngredients } from '@server/db/seeders/ingredient-seed.js';
@@ -20,13 +22,7 @@ let app: Express;
 let closeOwn: () => Promise<void>;
 let coach: Member;
 
-interface Board {
-  week: { id: number };
-  clients: { id: number; name: string }[];
-  plates: { name: string; description: string }[];
-  cells: { storage: string }[];
-  warnings: { kind: string; overridden?: boolean; reason?: string }[];
-}
+type Board = BoardDto;
 
 beforeAll(async () => {
   const own = await testApp();
@@ -69,9 +65,10 @@ describe('demo prep week', () => {
     expect(board.plates).toHaveLength(6);
     expect(board.plates.every((p) => p.description.startsWith('Demo plate'))).toBe(true);
 
-    const kinds = board.warnings.map((w) => w.kind).sort();
+    const warnings = flatWarnings(board.checks);
+    const kinds = warnings.map((w) => w.kind).sort();
     expect(kinds).toEqual(['allergen', 'dislike']);
-    const allergen = board.warnings.find((w) => w.kind === 'allergen')!;
+    const allergen = warnings.find((w): w is Extract<WeekWarning, { kind: 'allergen' }> => w.kind === 'allergen')!;
     expect(allergen.overridden).toBe(true);
     expect(allergen.reason).toMatch(/demo/);
     expect(board.cells.filter((c) => c.storage === 'frozen')).toHaveLength(1);

@@ -12,6 +12,16 @@ import {
   type Member,
 } from '../support/factories.js';
 import { sql } from '../support/db.js';
+import { cellEatBy } from '@shared/domain/week-board.js';
+import { flatWarnings } from '@shared/domain/week-check.js';
+import type { BoardDto } from '@shared/schemas/weeks.schema.js';
+
+/** A cell's portions (prep date, eat-by, status, remedies) as the board page shows them from the board answer. */
+function portionsOn(board: BoardDto, date: string) {
+  const cell = board.cells.find((c) => c.date === date)!;
+  const plate = board.plates.find((p) => p.id === cell.assemblyId)!;
+  return cellEatBy(cell, plate.trays, board.prepDates);
+}
 
 let app: Express;
 beforeAll(async () => {
@@ -71,14 +81,14 @@ describe('eat-by on the board', () => {
     const coach = await coachWorkspace(app);
     const { plate, client, week } = await setup(coach);
     const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id);
-    const friday = filled.body.eatBy.find((c: { date: string }) => c.date === '2026-01-09');
+    const friday = { portions: portionsOn(filled.body, '2026-01-09') };
     expect(friday.portions[0]).toMatchObject({ prepDate: '2026-01-04', eatBy: '2026-01-08', status: 'past-eat-by' });
     expect(friday.portions[0].remedies).toEqual([
       expect.objectContaining({ kind: 'freeze-and-thaw', freezeOn: '2026-01-04', thawReminderOn: '2026-01-08', eatOn: '2026-01-09' }),
     ]);
-    const thursday = filled.body.eatBy.find((c: { date: string }) => c.date === '2026-01-08');
+    const thursday = { portions: portionsOn(filled.body, '2026-01-08') };
     expect(thursday.portions[0].status).toBe('ok');
-    const pastDays = filled.body.warnings.filter((w: { kind: string }) => w.kind === 'past-eat-by').map((w: { date: string }) => w.date);
+    const pastDays = flatWarnings(filled.body.checks).filter((w: { kind: string }) => w.kind === 'past-eat-by').map((w: { date: string }) => w.date);
     expect(pastDays).toEqual(['2026-01-09', '2026-01-10', '2026-01-11']);
 
     const refused = await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: filled.body.week.version }).expect(409);
@@ -93,7 +103,7 @@ describe('eat-by on the board', () => {
         cells: DAYS.slice(4).map((date) => ({ clientId: client.id, date, slot: 'breakfast', assemblyId: plate.id, storage: 'frozen' })),
       })
       .expect(200);
-    expect(frozen.body.warnings.filter((w: { kind: string }) => w.kind === 'past-eat-by')).toEqual([]);
+    expect(flatWarnings(frozen.body.checks).filter((w: { kind: string }) => w.kind === 'past-eat-by')).toEqual([]);
     await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: frozen.body.week.version }).expect(200);
   });
 
@@ -103,9 +113,9 @@ describe('eat-by on the board', () => {
     const withSecond = await coach.agent.patch(`/api/weeks/${week.id}`).send({ version: week.version, secondPrepDate: '2026-01-07' }).expect(200);
     const filled = await fillWeek(coach, week.id, withSecond.body.week.version, client.id, plate.id);
     // Wednesday's prep (4 fridge days) covers Wed–Sun: eat by Sunday 2026-01-11.
-    const sunday = filled.body.eatBy.find((c: { date: string }) => c.date === '2026-01-11');
+    const sunday = { portions: portionsOn(filled.body, '2026-01-11') };
     expect(sunday.portions[0]).toMatchObject({ prepDate: '2026-01-07', eatBy: '2026-01-11', status: 'ok' });
-    expect(filled.body.warnings.filter((w: { severity: string }) => w.severity === 'block')).toEqual([]);
+    expect(flatWarnings(filled.body.checks).filter((w: { severity: string }) => w.severity === 'block')).toEqual([]);
     expect(filled.body.cautions.map((c: { id: string }) => c.id)).toEqual(
       expect.arrayContaining(['cooling', 'reheating', 'two-hour-rule', 'local-codes']),
     );
@@ -124,7 +134,7 @@ describe('the week board', () => {
       .put(`/api/weeks/${week.id}/cells`)
       .send({ version: week.version, cells: [{ ...cell, allergenOverrides: [{ allergen: 'milk', reason: 'Lactose-free version agreed with client' }] }] })
       .expect(200);
-    expect(ok.body.warnings).toEqual(
+    expect(flatWarnings(ok.body.checks)).toEqual(
       expect.arrayContaining([expect.objectContaining({ kind: 'allergen', severity: 'warn', overridden: true })]),
     );
   });

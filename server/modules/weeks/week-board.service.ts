@@ -222,8 +222,6 @@ export function presentBoard(d: BoardData, result: BoardResult = computeBoard(bo
       };
     }),
     checks: result.days.map((day) => ({ clientId: Number(day.clientId), date: day.date, totals: day.totals, warnings: day.warnings })),
-    warnings: result.warnings,
-    eatBy: result.cells,
     inventory: result.inventory,
     cautions: CAUTIONS,
   };

@@ -42,9 +42,9 @@ function myPlate(plate: AssemblyDto, slot: string, eat: BoardResult['cells'][num
 }
 
 /** Every client's days as clients will read them. */
-export function buildSnapshot(d: BoardData, board: BoardDto): WeekSnapshot {
+export function buildSnapshot(d: BoardData, board: BoardDto, result: BoardResult): WeekSnapshot {
   const plates = new Map(board.plates.map((p) => [p.id, p]));
-  const eat = new Map(board.eatBy.map((c) => [cellKey(c), c]));
+  const eat = new Map(result.cells.map((c) => [cellKey(c), c]));
   const slotOrder = (s: string) => board.slots.indexOf(s);
   const clients: WeekSnapshot['clients'] = {};
   for (const client of board.clients) {
@@ -93,7 +93,7 @@ export async function publishWeek(em: EntityManager, actor: Actor, id: number, v
     throw new Conflict(`${blocks.length} problem(s) must be solved before publishing: ${blocks[0].message}`, { blocks });
   }
   if (!data.cells.length) throw new Conflict('The board is empty: place plates before publishing');
-  const snapshot = buildSnapshot(data, presentBoard(data, result));
+  const snapshot = buildSnapshot(data, presentBoard(data, result), result);
   await em.transactional(async (tx) => {
     const w = await tx.findOneOrFail(Week, { id: week.id, workspace: actor.workspaceId });
     const number = (w.publishedVersion ?? 0) + 1;

@@ -1,7 +1,8 @@
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { allergenConflicts } from '@shared/domain/allergens';
+import { flatWarnings } from '@shared/domain/week-check';
 import type { BoardDto, CellInput } from '@shared/schemas/weeks.schema';
 import { boardQuery } from '@/features/weeks/api/weeks.queries';
 import { weekKeys } from '@/features/weeks/api/weeks.keys';
@@ -34,6 +35,9 @@ export function Component() {
   const [copyFrom, setCopyFrom] = useState('');
   const [copyTo, setCopyTo] = useState('');
   const busy = putCells.isPending || putTrays.isPending || cover.isPending || copyDay.isPending || publish.isPending || update.isPending;
+
+  // The week's problem list, blocks first: built once per board answer from the day checks.
+  const warnings = useMemo(() => (q.data ? flatWarnings(q.data.checks) : []), [q.data]);
 
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
@@ -81,8 +85,8 @@ export function Component() {
     sendCells({ ...allergen.edit, cells });
   };
 
-  const blocks = board.warnings.filter((w) => w.severity === 'block');
-  const warns = board.warnings.filter((w) => w.severity === 'warn');
+  const blocks = warnings.filter((w) => w.severity === 'block');
+  const warns = warnings.filter((w) => w.severity === 'warn');
   const short = board.inventory.reduce((s, t) => s + t.short, 0);
 
   return (

@@ -12,6 +12,7 @@ import {
 import { allergenLabel } from '@shared/domain/allergens';
 import type { BoardCellDto, BoardDto, CellInput } from '@shared/schemas/weeks.schema';
 import type { WeekWarning } from '@shared/domain/week-check';
+import { cellEatBy } from '@shared/domain/week-board';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 
@@ -132,7 +133,8 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const selCell = selected ? cells.get(selected) : undefined;
   const selClient = sel ? board.clients.find((c) => c.id === Number(sel[1])) : undefined;
   const selFlags = sel ? (checks.get(`${sel[1]}|${sel[2]}`)?.warnings ?? []).filter((w) => !('slot' in w) || w.slot === sel[3]) : [];
-  const selEat = sel ? board.eatBy.find((c) => c.clientId === Number(sel[1]) && c.date === sel[2] && c.slot === sel[3]) : undefined;
+  const selPlate = selCell ? plates.get(selCell.assemblyId) : undefined;
+  const selEat = selCell && selPlate ? { portions: cellEatBy(selCell, selPlate.trays, board.prepDates) } : undefined;
 
   return (
     <DndContext sensors={sensors} onDragEnd={onDragEnd}>
