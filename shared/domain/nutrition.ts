@@ -154,40 +154,53 @@ export function usTotalCarbsFromEu(euCarbohydrateG: Num, fiberG: MaybeNum): Deci
 // Vectors
 // ---------------------------------------------------------------------------------------------------------------
 
+/** The shared zero: absent and zero nutrients are this one immutable Decimal (no parsing, no arithmetic). */
+const ZERO = new Decimal(0);
+const ZERO_TEXT = /^[-+]?(0+(\.0*)?|\.0+)$/;
+
 export function zeroSums(): NutrientSums {
   const z = {} as Record<keyof NutrientSums, Decimal>;
-  for (const k of SUM_KEYS) z[k] = new Decimal(0);
+  for (const k of SUM_KEYS) z[k] = ZERO;
   return z;
+}
+
+/** A stored nutrient value times a factor; an absent or zero value gives the shared zero (no parsing, no product). */
+function timesOrZero(v: MaybeNum, f: Decimal): Decimal {
+  if (v === null || v === undefined || v === '' || v === 0) return ZERO;
+  if (typeof v === 'string' && ZERO_TEXT.test(v)) return ZERO;
+  return new Decimal(v).times(f);
 }
 
 /** The additive nutrients in `grams` of an ingredient (massG = grams). */
 export function nutrientsForGrams(per100g: NutrientsPer100g, grams: Num): NutrientSums {
-  const f = new Decimal(grams).div(100);
+  const g = new Decimal(grams);
+  const f = g.div(100);
   return {
-    kcal: dec(per100g.kcal).times(f),
-    fatG: dec(per100g.fatG).times(f),
-    satFatG: dec(per100g.satFatG).times(f),
-    proteinG: dec(per100g.proteinG).times(f),
-    carbsG: dec(per100g.carbsG).times(f),
-    fiberG: dec(per100g.fiberG).times(f),
-    sugarsG: dec(per100g.sugarsG).times(f),
-    erythritolG: dec(per100g.erythritolG).times(f),
-    alluloseG: dec(per100g.alluloseG).times(f),
-    otherPolyolsG: dec(per100g.otherPolyolsG).times(f),
-    sodiumMg: dec(per100g.sodiumMg).times(f),
-    massG: new Decimal(grams),
+    kcal: timesOrZero(per100g.kcal, f),
+    fatG: timesOrZero(per100g.fatG, f),
+    satFatG: timesOrZero(per100g.satFatG, f),
+    proteinG: timesOrZero(per100g.proteinG, f),
+    carbsG: timesOrZero(per100g.carbsG, f),
+    fiberG: timesOrZero(per100g.fiberG, f),
+    sugarsG: timesOrZero(per100g.sugarsG, f),
+    erythritolG: timesOrZero(per100g.erythritolG, f),
+    alluloseG: timesOrZero(per100g.alluloseG, f),
+    otherPolyolsG: timesOrZero(per100g.otherPolyolsG, f),
+    sodiumMg: timesOrZero(per100g.sodiumMg, f),
+    massG: g,
   };
 }
 
+/** Sums field by field; adding the shared zero keeps the other side as it is (Decimals are immutable). */
 export function addSums(a: NutrientSums, b: NutrientSums): NutrientSums {
   const out = {} as Record<keyof NutrientSums, Decimal>;
-  for (const k of SUM_KEYS) out[k] = a[k].plus(b[k]);
+  for (const k of SUM_KEYS) out[k] = b[k] === ZERO ? a[k] : a[k] === ZERO ? b[k] : a[k].plus(b[k]);
   return out;
 }
 
 export function scaleSums(a: NutrientSums, factor: Num): NutrientSums {
   const out = {} as Record<keyof NutrientSums, Decimal>;
-  for (const k of SUM_KEYS) out[k] = a[k].times(factor);
+  for (const k of SUM_KEYS) out[k] = a[k] === ZERO ? ZERO : a[k].times(factor);
   return out;
 }
 
