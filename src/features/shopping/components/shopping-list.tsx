@@ -1,3 +1,4 @@
+import { useEffect, useState } from 'react';
 import type { ShoppingAisleDto, ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
 import { useSetCheck } from '../api/use-shopping-mutations';
 
@@ -10,7 +11,12 @@ function buyText(item: ShoppingItemDto): string {
 }
 
 function ItemRow({ item, onToggle }: { item: ShoppingItemDto; onToggle: (checked: boolean) => void }) {
-  const checked = item.check.checked;
+  // The tap shows at once: the cached list takes the mark only after any list read in flight is cancelled, and a
+  // controlled checkbox would spring back meanwhile. Any new mark for this item (optimistic, saved or rolled back)
+  // replaces the tap.
+  const [tapped, setTapped] = useState<boolean | null>(null);
+  useEffect(() => setTapped(null), [item.check]);
+  const checked = tapped ?? item.check.checked;
   const covered = item.toBuy <= 0;
   return (
     <li>
@@ -23,7 +29,10 @@ function ItemRow({ item, onToggle }: { item: ShoppingItemDto; onToggle: (checked
           type="checkbox"
           className="mt-1 h-6 w-6 shrink-0 accent-herb print:hidden"
           checked={checked}
-          onChange={(e) => onToggle(e.target.checked)}
+          onChange={(e) => {
+            setTapped(e.target.checked);
+            onToggle(e.target.checked);
+          }}
         />
         <span aria-hidden className="hidden print:inline">
           ☐
