@@ -94,9 +94,36 @@ function sourcePrepDate(cell: BoardCell, portion: BoardPortion, prepDates: reado
 }
 
 interface Bucket {
-  neededExact: Decimal;
+  /** Portions needed, as counts of each distinct exact (quantity × multiplier) product: summed once at the end. */
+  needed: Map<Decimal, number>;
   produced: number;
   portionsPerTray: number | null;
+}
+
+/**
+ * The exact product quantity × household multiplier, validated and computed once per distinct pair: a board repeats
+ * the same few pairs hundreds of times, and the Decimal arithmetic per cell dominated the count.
+ */
+function productMemo(): (quantity: Decimal.Value, multiplier: Decimal.Value) => Decimal {
+  const products = new Map<string, Decimal>();
+  return (quantity, multiplier) => {
+    const key = `${String(quantity)}|${String(multiplier)}`;
+    let p = products.get(key);
+    if (p === undefined) {
+      const m = new Decimal(multiplier);
+      if (!m.isFinite() || m.lte(0)) throw new RangeError(`Household multiplier must be greater than 0: ${String(multiplier)}`);
+      const q = new Decimal(quantity);
+      if (!q.isFinite() || q.lt(0)) throw new RangeError(`Portion quantity must be 0 or more: ${String(quantity)}`);
+      products.set(key, (p = q.times(m)));
+    }
+    return p;
+  };
+}
+
+function neededExactOf(b: Bucket): Decimal {
+  let sum = new Decimal(0);
+  for (const [product, count] of b.needed) sum = sum.plus(product.times(count));
+  return sum;
 }
 
 function bucketsByTray(input: InventoryInput): Map<string, Map<IsoDate, Bucket>> {
@@ -105,20 +132,17 @@ function bucketsByTray(input: InventoryInput): Map<string, Map<IsoDate, Bucket>>
     let byDate = trays.get(trayId);
     if (!byDate) trays.set(trayId, (byDate = new Map()));
     let b = byDate.get(prepDate);
-    if (!b) byDate.set(prepDate, (b = { neededExact: new Decimal(0), produced: 0, portionsPerTray: null }));
+    if (!b) byDate.set(prepDate, (b = { needed: new Map(), produced: 0, portionsPerTray: null }));
     return b;
   };
+  const product = productMemo();
 
   for (const cell of input.cells) {
-    const multiplier = new Decimal(cell.householdMultiplier);
-    if (!multiplier.isFinite() || multiplier.lte(0)) {
-      throw new RangeError(`Household multiplier must be greater than 0: ${String(cell.householdMultiplier)}`);
-    }
+    if (cell.portions.length === 0) product(0, cell.householdMultiplier); // a bad multiplier is refused even on a plate without trays
     for (const portion of cell.portions) {
-      const quantity = new Decimal(portion.quantity);
-      if (!quantity.isFinite() || quantity.lt(0)) throw new RangeError(`Portion quantity must be 0 or more: ${String(portion.quantity)}`);
+      const p = product(portion.quantity, cell.householdMultiplier);
       const b = bucket(portion.trayId, sourcePrepDate(cell, portion, input.prepDates));
-      b.neededExact = b.neededExact.plus(quantity.times(multiplier));
+      b.needed.set(p, (b.needed.get(p) ?? 0) + 1);
     }
   }
 
@@ -151,7 +175,7 @@ export function portionCount(input: InventoryInput): TrayTally[] {
     const byPrepDate: PrepDateTally[] = [...byDate.entries()]
       .sort(([a], [b]) => compareIsoDates(a, b))
       .map(([prepDate, b]) => {
-        const t = tally(b.neededExact, b.produced);
+        const t = tally(neededExactOf(b), b.produced);
         const perTray = b.portionsPerTray ?? knownPerTray;
         return { prepDate, ...t, traysToCover: perTray === null ? null : traysToCover(t.needed, perTray) };
       });

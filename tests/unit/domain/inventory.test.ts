@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
+import Decimal from 'decimal.js';
 import { portionCount, traysToCover, type BoardCell, type TrayBatch } from '@shared/domain/inventory';
 
 // The portion count is plain arithmetic (ceiling division, sums); the checks below are arithmetic
@@ -142,5 +143,42 @@ describe('portionCount: input checks', () => {
     { why: 'zero portions per tray', input: { prepDates: ['2025-01-05'], cells: [], batches: [{ trayId: 'x', prepDate: '2025-01-05', trayCount: 1, portionsPerTray: 0 }] } },
   ])('rejects $why', ({ input }) => {
     expect(() => portionCount(input)).toThrow(RangeError);
+  });
+});
+
+describe('portionCount: the sum per tray and prep date is exact whatever the order and repetition of cells', () => {
+  // Reference: the definition computed directly with decimal.js (a general-purpose arbitrary-precision library from
+  // npm), one product per portion, no grouping: needed = ceil(Σ quantity × multiplier) per tray and prep date.
+  const quantity = fc.constantFrom('0.25', '0.5', '1', '1.5', '2', '3', '0.1', '0.3333');
+  const multiplier = fc.constantFrom('1', '1.5', '2', '2.25', '3', '0.5', '0.1');
+  const prepDate = fc.constantFrom('2025-01-05', '2025-01-08');
+  const cells = fc.array(
+    fc.record({
+      householdMultiplier: multiplier,
+      portions: fc.array(fc.record({ trayId: fc.constantFrom('a', 'b', 'c'), quantity, prepDate }), { maxLength: 3 }),
+    }),
+    { maxLength: 120 },
+  );
+  it('equals ceil of the plain decimal.js sum for every tray and prep date (300 random boards)', () => {
+    fc.assert(
+      fc.property(cells, (cs) => {
+        const input = { prepDates: ['2025-01-05', '2025-01-08'], cells: cs.map((c) => ({ date: '2025-01-09', ...c })), batches: [] };
+        const expected = new Map<string, Decimal>();
+        for (const c of input.cells) {
+          for (const p of c.portions) {
+            const k = `${p.trayId}|${p.prepDate}`;
+            expected.set(k, (expected.get(k) ?? new Decimal(0)).plus(new Decimal(p.quantity).times(c.householdMultiplier)));
+          }
+        }
+        const got = new Map<string, { needed: number; neededExact: number }>();
+        for (const t of portionCount(input)) for (const b of t.byPrepDate) got.set(`${t.trayId}|${b.prepDate}`, b);
+        expect([...got.keys()].sort()).toEqual([...expected.keys()].sort());
+        for (const [k, sum] of expected) {
+          expect(got.get(k)!.needed).toBe(sum.ceil().toNumber());
+          expect(got.get(k)!.neededExact).toBe(sum.toNumber());
+        }
+      }),
+      { numRuns: 300 },
+    );
   });
 });
