@@ -9,6 +9,7 @@ import type {
   TargetMode,
 } from '@shared/schemas/clients.schema.js';
 import type { ClientFacts, IClient } from './client.entity.js';
+import { pureMemo } from '../../lib/pure-memo.js';
 
 /** Default share of the day for a slot the defaults do not name (common practice, no source). */
 const OTHER_SLOT_SHARE = '0.1';
@@ -63,9 +64,20 @@ export function clientTargets(client: ClientFacts, mealSlots: readonly string[])
 
 /**
  * Targets for the planned part of a day: the sum of the slot targets of the week board's meal slots. A board that
- * plans breakfast only is compared against breakfast's share of the day, not the whole day.
+ * plans breakfast only is compared against breakfast's share of the day, not the whole day. Memoized on the inputs it
+ * reads (a board computes every client's on each load; see server/lib/pure-memo.ts).
  */
-export function plannedTargets(client: ClientFacts, mealSlots: readonly string[]): MacroTargets {
+export const plannedTargets: (client: ClientFacts, mealSlots: readonly string[]) => MacroTargets = pureMemo(
+  computePlannedTargets,
+  (c, mealSlots) =>
+    JSON.stringify([
+      c.targetMode, c.manualTargets, c.sex, String(c.weightKg), String(c.heightCm), c.ageYears, c.activity, c.goal,
+      c.goalAdjustment == null ? null : String(c.goalAdjustment), String(c.netCarbCapG), String(c.proteinGPerKg),
+      c.slotShares, mealSlots,
+    ]),
+);
+
+export function computePlannedTargets(client: ClientFacts, mealSlots: readonly string[]): MacroTargets {
   const day = dayTargets(client);
   const shares = slotShares(client, mealSlots);
   const share = Object.values(shares).reduce((s, v) => s.plus(v), new Decimal(0));
