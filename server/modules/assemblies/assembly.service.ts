@@ -15,23 +15,26 @@ import { preparedRows } from '../../db/prepared.js';
  * reads: no entity hydration). Writes go through the Assembly entity.
  */
 export async function loadPlateRows(em: EntityManager, workspaceId: number): Promise<PlateRow[]> {
-  const plates = await preparedRows<Omit<PlateRow, 'items' | 'updatedAt'> & { updatedAt: string | Date }>(
-    em,
-    'trayline_plate_rows',
-    `select id, name, description, assembly_steps as "assemblySteps", reheat_steps as "reheatSteps", version, updated_at as "updatedAt"
-       from assembly where workspace_id = $1 order by name asc, id asc`,
-    [workspaceId],
-  );
+  // Plates and their items side by side (both limited to the workspace).
+  const [plates, items] = await Promise.all([
+    preparedRows<Omit<PlateRow, 'items' | 'updatedAt'> & { updatedAt: string | Date }>(
+      em,
+      'trayline_plate_rows',
+      `select id, name, description, assembly_steps as "assemblySteps", reheat_steps as "reheatSteps", version, updated_at as "updatedAt"
+         from assembly where workspace_id = $1 order by name asc, id asc`,
+      [workspaceId],
+    ),
+    preparedRows<Omit<PlateItemRow, 'tray' | 'ingredient'> & { assembly: number; tray: number | null; ingredient: number | null }>(
+      em,
+      'trayline_plate_items',
+      `select i.id, i.assembly_id as assembly, i.position, i.tray_id as tray, i.portions, i.ingredient_id as ingredient,
+              i.amount_text as "amountText", i.amount, i.unit, i.note
+         from assembly_item i join assembly a on a.id = i.assembly_id
+        where a.workspace_id = $1 order by i.assembly_id asc, i.position asc, i.id asc`,
+      [workspaceId],
+    ),
+  ]);
   if (!plates.length) return [];
-  const items = await preparedRows<Omit<PlateItemRow, 'tray' | 'ingredient'> & { assembly: number; tray: number | null; ingredient: number | null }>(
-    em,
-    'trayline_plate_items',
-    `select i.id, i.assembly_id as assembly, i.position, i.tray_id as tray, i.portions, i.ingredient_id as ingredient,
-            i.amount_text as "amountText", i.amount, i.unit, i.note
-       from assembly_item i join assembly a on a.id = i.assembly_id
-      where a.workspace_id = $1 order by i.assembly_id asc, i.position asc, i.id asc`,
-    [workspaceId],
-  );
   const byPlate = new Map<number, PlateItemRow[]>();
   for (const i of items) {
     let list = byPlate.get(i.assembly);

@@ -21,11 +21,13 @@ import {
   gramsOfLine,
   loadTrayIngredients,
   netCarbRuleOf,
+  toTrayIngredients,
   trayAllergens,
   trayNutrition,
   type TrayIngredient,
 } from '../trays/tray-nutrition.js';
 import type { IAssembly } from './assembly.entity.js';
+import { loadUsableIngredientsWhere } from '../ingredients/ingredient.service.js';
 
 /**
  * What plates and the week board need to know about base trays and add-ons, loaded in a fixed number of queries
@@ -139,6 +141,57 @@ async function loadTrayRows(em: EntityManager, workspaceId: number, ids: readonl
     list.push({ ingredientId: l.ingredientId, amount: l.amount, unit: l.unit });
   }
   return trays.map((t) => ({ ...t, lines: byTray.get(t.id) ?? [] }));
+}
+
+/**
+ * The trays a workspace's plates use plus those a week counts (`$1` workspace, `$2` week or null): the scope of
+ * the week board's plate context, resolved in SQL so trays and ingredients are read in the same round as the plates.
+ */
+const BOARD_TRAY_SCOPE = `select ai.tray_id from assembly_item ai join assembly a on a.id = ai.assembly_id
+                           where a.workspace_id = $1 and ai.tray_id is not null
+                          union
+                          select wt.tray_id from week_tray wt join week w on w.id = wt.week_id
+                           where wt.week_id = $2 and w.workspace_id = $1`;
+
+/**
+ * The plate context of every plate of the workspace and of a week's tray counts, in one round of three statements
+ * side by side (trays with their lines, the ingredients they and the add-ons name), whatever the number of plates.
+ */
+export async function loadWorkspacePlateContext(
+  em: EntityManager,
+  workspaceId: number,
+  weekId: number | null,
+  rule: NetCarbRule | Promise<NetCarbRule>,
+): Promise<PlateContext> {
+  const [trays, ingredients, r] = await Promise.all([
+    preparedRows<TrayRow>(
+      em,
+      'trayline_board_trays',
+      `select t.id, t.name, t.fridge_days as "fridgeDays", t.freezer_weeks as "freezerWeeks", t.cut_kind as "cutKind",
+              t.cut_rows as "cutRows", t.cut_columns as "cutColumns", t.cut_pieces as "cutPieces", t.yield_factor as "yieldFactor",
+              t.tags, t.reheat_steps as "reheatSteps", t.archived,
+              coalesce((select json_agg(json_build_object('ingredientId', l.ingredient_id, 'amount', l.amount::text, 'unit', l.unit)
+                                        order by l.position asc, l.id asc)
+                          from tray_line l where l.tray_id = t.id), '[]') as lines
+         from tray t
+        where t.workspace_id = $1 and t.id in (${BOARD_TRAY_SCOPE})
+        order by t.id asc`,
+      [workspaceId, weekId],
+    ),
+    loadUsableIngredientsWhere(
+      em,
+      'trayline_board_ingredients',
+      `select l.ingredient_id from tray_line l join tray t on t.id = l.tray_id
+        where t.workspace_id = $1 and t.id in (${BOARD_TRAY_SCOPE})
+       union
+       select ai.ingredient_id from assembly_item ai join assembly a on a.id = ai.assembly_id
+        where a.workspace_id = $1 and ai.ingredient_id is not null`,
+      1,
+      [workspaceId, weekId],
+    ).then(toTrayIngredients),
+    rule,
+  ]);
+  return { rule: r, ingredients, trays: new Map(trays.map((t) => [t.id, trayFacts(t, ingredients, r)])) };
 }
 
 function trayFacts(t: TrayRow, ingredients: Map<number, TrayIngredient>, rule: NetCarbRule): TrayFacts {

@@ -71,6 +71,22 @@ async function findVisible(em: EntityManager, actor: Actor, ids: readonly number
 /** A library row ready for nutrition, allergens, cost and packages. */
 export type UsableIngredient = LoadedIngredient & { purchaseAmount: string | null; purchaseUnit: string | null };
 
+type UsableRow = CalcRow & { allergens: string[] | null; priceCents: number | null; purchaseAmount: string | null; purchaseUnit: string | null };
+
+function usableFromRow(row: UsableRow): UsableIngredient {
+  return {
+    ...toNutritionIngredient(row),
+    id: row.id,
+    allergens: (row.allergens ?? []).filter(isAllergenCode),
+    priceCents: row.priceCents ?? null,
+    purchaseAmount: row.purchaseAmount ?? null,
+    purchaseUnit: row.purchaseUnit ?? null,
+  };
+}
+
+const USABLE_COLUMNS = () =>
+  `${CALC_COLUMNS}, i.allergens, i.price_cents as "priceCents", i.purchase_amount as "purchaseAmount", i.purchase_unit as "purchaseUnit"`;
+
 /**
  * The library rows the actor may use (own workspace or shared) among `ids`, keyed by id; ids that are missing or
  * belong to another workspace are simply absent. One prepared statement, plain rows (boards and trays read dozens).
@@ -78,27 +94,35 @@ export type UsableIngredient = LoadedIngredient & { purchaseAmount: string | nul
 export async function loadUsableIngredients(em: EntityManager, actor: Actor, ids: readonly number[]): Promise<Map<number, UsableIngredient>> {
   const unique = [...new Set(ids)].filter((id) => Number.isSafeInteger(id));
   if (!unique.length) return new Map();
-  const rows = await preparedRows<CalcRow & { allergens: string[] | null; priceCents: number | null; purchaseAmount: string | null; purchaseUnit: string | null }>(
+  const rows = await preparedRows<UsableRow>(
     em,
     'trayline_usable_ingredients',
-    `select ${CALC_COLUMNS}, i.allergens, i.price_cents as "priceCents", i.purchase_amount as "purchaseAmount", i.purchase_unit as "purchaseUnit"
-       from ingredient i
-      where i.id = any($1::int[]) and (i.workspace_id = $2 or i.workspace_id is null)`,
+    `select ${USABLE_COLUMNS()} from ingredient i where i.id = any($1::int[]) and (i.workspace_id = $2 or i.workspace_id is null)`,
     [unique, actor.workspaceId],
   );
-  return new Map(
-    rows.map((row) => [
-      row.id,
-      {
-        ...toNutritionIngredient(row),
-        id: row.id,
-        allergens: (row.allergens ?? []).filter(isAllergenCode),
-        priceCents: row.priceCents ?? null,
-        purchaseAmount: row.purchaseAmount ?? null,
-        purchaseUnit: row.purchaseUnit ?? null,
-      },
-    ]),
+  return new Map(rows.map((row) => [row.id, usableFromRow(row)]));
+}
+
+/**
+ * The usable library rows (own workspace or shared) whose id is among those an SQL subquery selects, keyed by id:
+ * lets a caller read ingredients in the same round as the rows that name them. `idsSql` is a constant select of
+ * one integer column over the statement's own parameters (the same for a given `name`).
+ */
+export async function loadUsableIngredientsWhere(
+  em: EntityManager,
+  name: string,
+  idsSql: string,
+  workspaceParam: number,
+  values: readonly unknown[],
+): Promise<Map<number, UsableIngredient>> {
+  const rows = await preparedRows<UsableRow>(
+    em,
+    name,
+    `select ${USABLE_COLUMNS()} from ingredient i
+      where (i.workspace_id = $${workspaceParam} or i.workspace_id is null) and i.id in (${idsSql})`,
+    values,
   );
+  return new Map(rows.map((row) => [row.id, usableFromRow(row)]));
 }
 
 /**

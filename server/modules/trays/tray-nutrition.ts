@@ -4,7 +4,7 @@ import { ALLERGEN_CODES, type AllergenCode } from '@shared/domain/allergens.js';
 import { computeRecipeExact, type NetCarbRule, type NutritionIngredient, type RecipeExact } from '@shared/domain/nutrition.js';
 import { toGrams, UnitConversionError } from '@shared/domain/units.js';
 import type { Actor } from '../../http/authz.js';
-import { loadUsableIngredients, netCarbRuleOf as workspaceNetCarbRule } from '../ingredients/ingredient.service.js';
+import { loadUsableIngredients, netCarbRuleOf as workspaceNetCarbRule, type UsableIngredient } from '../ingredients/ingredient.service.js';
 
 /** What a tray needs to know about one ingredient: its facts for nutrition, allergens and price. */
 export interface TrayIngredient {
@@ -27,7 +27,11 @@ export async function loadTrayIngredients(
   actor: Actor,
   ids: readonly number[],
 ): Promise<Map<number, TrayIngredient>> {
-  const loaded = await loadUsableIngredients(em, actor, ids);
+  return toTrayIngredients(await loadUsableIngredients(em, actor, ids));
+}
+
+/** Library rows in the shape trays and plates read them. */
+export function toTrayIngredients(loaded: Map<number, UsableIngredient>): Map<number, TrayIngredient> {
   return new Map(
     [...loaded.values()].map((ing) => {
       const { id, allergens, priceCents, purchaseAmount, purchaseUnit, ...facts } = ing;

@@ -11,8 +11,10 @@ import { NotFound } from '../../http/errors.js';
 import { preparedRows } from '../../db/prepared.js';
 import { loadPlateRows } from '../assemblies/assembly.service.js';
 import { presentAssembly } from '../assemblies/assembly.presenter.js';
-import { loadPlateContext, plateFacts, type PlateContext, type PlateRow } from '../assemblies/plate-facts.js';
-import { loadClientFacts, mealSlotsOf } from '../clients/client.service.js';
+import { loadWorkspacePlateContext, plateFacts, type PlateContext, type PlateRow } from '../assemblies/plate-facts.js';
+import { loadClientFacts } from '../clients/client.service.js';
+import { toNetCarbRule } from '../ingredients/ingredient.service.js';
+import type { NetCarbRule } from '@shared/domain/nutrition.js';
 import { plannedTargets } from '../clients/client.presenter.js';
 import type { ClientFacts } from '../clients/client.entity.js';
 import { Week, WeekPublication, type IWeek, type IWeekCell } from './week.entity.js';
@@ -31,7 +33,7 @@ export async function findWeek(em: EntityManager, actor: Actor, id: number): Pro
   return w;
 }
 
-export function presentWeekSummary(w: IWeek, cellCount: number, publishedAt: Date | null): WeekSummaryDto {
+export function presentWeekSummary(w: BoardWeek, cellCount: number, publishedAt: Date | null): WeekSummaryDto {
   return {
     id: w.id,
     name: w.name || `Week of ${w.startDate}`,
@@ -47,7 +49,7 @@ export function presentWeekSummary(w: IWeek, cellCount: number, publishedAt: Dat
   };
 }
 
-export async function lastPublishedAt(em: EntityManager, week: IWeek): Promise<Date | null> {
+export async function lastPublishedAt(em: EntityManager, week: Pick<IWeek, 'id' | 'publishedVersion'>): Promise<Date | null> {
   if (!week.publishedVersion) return null;
   const pub = await em.findOne(WeekPublication, { week: week.id, number: week.publishedVersion }, { fields: ['publishedAt'] });
   return pub?.publishedAt ?? null;
@@ -68,14 +70,15 @@ export interface BoardCellRow {
   allergenOverrides: { allergen: string; reason: string }[];
 }
 
-async function loadCellRows(em: EntityManager, weekId: number): Promise<BoardCellRow[]> {
+async function loadCellRows(em: EntityManager, workspaceId: number, weekId: number): Promise<BoardCellRow[]> {
   const rows = await preparedRows<Omit<BoardCellRow, 'client' | 'assembly'> & { client: number; assembly: number }>(
     em,
     'trayline_week_cells',
-    `select id, client_id as client, assembly_id as assembly, date, slot, prep_date as "prepDate", storage,
-            allergen_overrides as "allergenOverrides"
-       from week_cell where week_id = $1 order by date asc, id asc`,
-    [weekId],
+    `select c.id, c.client_id as client, c.assembly_id as assembly, c.date, c.slot, c.prep_date as "prepDate", c.storage,
+            c.allergen_overrides as "allergenOverrides"
+       from week_cell c join week w on w.id = c.week_id
+      where c.week_id = $1 and w.workspace_id = $2 order by c.date collate "C" asc, c.id asc`,
+    [weekId, workspaceId],
   );
   return rows.map((r) => ({
     id: r.id,
@@ -97,23 +100,28 @@ export interface BoardTrayRow {
   trayCount: number;
 }
 
-async function loadWeekTrayRows(em: EntityManager, weekId: number): Promise<BoardTrayRow[]> {
+async function loadWeekTrayRows(em: EntityManager, workspaceId: number, weekId: number): Promise<BoardTrayRow[]> {
   const rows = await preparedRows<{ id: number; tray: number; prepDate: IsoDate; trayCount: number }>(
     em,
     'trayline_week_trays',
-    'select id, tray_id as tray, prep_date as "prepDate", tray_count as "trayCount" from week_tray where week_id = $1 order by id asc',
-    [weekId],
+    `select t.id, t.tray_id as tray, t.prep_date as "prepDate", t.tray_count as "trayCount"
+       from week_tray t join week w on w.id = t.week_id
+      where t.week_id = $1 and w.workspace_id = $2 order by t.id asc`,
+    [weekId, workspaceId],
   );
   return rows.map((r) => ({ id: r.id, tray: { id: r.tray }, prepDate: r.prepDate, trayCount: r.trayCount }));
 }
 
+/** The week fields a board reads (the Week entity, or a plain row read with the board). */
+export type BoardWeek = Pick<IWeek, 'id' | 'name' | 'startDate' | 'prepDate' | 'secondPrepDate' | 'publishedVersion' | 'publishedBoardVersion' | 'version'>;
+
 /**
- * Everything a board needs, in a fixed number of queries (no N+1): ~10 whatever the size of the week, read as
- * plain rows (a board holds every client, plate and cell of the week; hydrating them as managed entities cost
- * more than computing the board).
+ * Everything a board needs, read in one round of prepared statements side by side (no N+1, no statement waiting
+ * for another: the trays and ingredients the plates name are found in SQL), as plain rows (a board holds every
+ * client, plate and cell of the week; hydrating them as managed entities cost more than computing the board).
  */
 export interface BoardData {
-  week: IWeek;
+  week: BoardWeek;
   slots: string[];
   clients: ClientFacts[];
   assemblies: PlateRow[];
@@ -123,19 +131,58 @@ export interface BoardData {
   publishedAt: Date | null;
 }
 
-export async function loadBoardData(em: EntityManager, actor: Actor, week: IWeek): Promise<BoardData> {
-  // Independent reads side by side: outside a transaction each takes its own pooled connection (the board waits for
-  // the slowest, not the sum); inside one, they queue on the transaction's connection.
-  const [slots, clients, assemblies, cells, trays, publishedAt] = await Promise.all([
-    mealSlotsOf(em, actor.workspaceId),
+/** The workspace settings a board reads: meal slots and the net-carb rule (one row). */
+async function boardSettings(em: EntityManager, workspaceId: number): Promise<{ slots: string[]; rule: NetCarbRule }> {
+  const [ws] = await preparedRows<{ mealSlots: string[] | null; netCarbRule: string }>(
+    em,
+    'trayline_board_settings',
+    'select meal_slots as "mealSlots", net_carb_rule as "netCarbRule" from workspace where id = $1',
+    [workspaceId],
+  );
+  if (!ws) throw new NotFound('Workspace');
+  return { slots: ws.mealSlots?.length ? ws.mealSlots : ['breakfast'], rule: toNetCarbRule(ws.netCarbRule) };
+}
+
+/** A week of the workspace as a plain row with the time of its latest publication, or null. */
+async function readBoardWeek(em: EntityManager, workspaceId: number, id: number): Promise<(BoardWeek & { publishedAt: Date | null }) | null> {
+  const [row] = await preparedRows<BoardWeek & { publishedAt: string | Date | null }>(
+    em,
+    'trayline_board_week',
+    `select w.id, w.name, w.start_date as "startDate", w.prep_date as "prepDate", w.second_prep_date as "secondPrepDate",
+            w.published_version as "publishedVersion", w.published_board_version as "publishedBoardVersion", w.version,
+            p.published_at as "publishedAt"
+       from week w left join week_publication p on p.week_id = w.id and p.number = w.published_version
+      where w.id = $1 and w.workspace_id = $2`,
+    [id, workspaceId],
+  );
+  return row ? { ...row, publishedAt: row.publishedAt ? new Date(row.publishedAt) : null } : null;
+}
+
+async function loadBoardParts(em: EntityManager, actor: Actor, weekId: number) {
+  const settings = boardSettings(em, actor.workspaceId);
+  const [{ slots }, clients, assemblies, cells, trays, ctx] = await Promise.all([
+    settings,
     loadClientFacts(em, actor.workspaceId),
     loadPlateRows(em, actor.workspaceId),
-    loadCellRows(em, week.id),
-    loadWeekTrayRows(em, week.id),
-    lastPublishedAt(em, week),
+    loadCellRows(em, actor.workspaceId, weekId),
+    loadWeekTrayRows(em, actor.workspaceId, weekId),
+    loadWorkspacePlateContext(em, actor.workspaceId, weekId, settings.then((s) => s.rule)),
   ]);
-  const ctx = await loadPlateContext(em, actor, assemblies, trays.map((t) => t.tray.id));
-  return { week, slots, clients, assemblies, cells, trays, ctx, publishedAt };
+  return { slots, clients, assemblies, cells, trays, ctx };
+}
+
+/** A board's data for a week already read (e.g. locked for an edit, in its transaction). */
+export async function loadBoardData(em: EntityManager, actor: Actor, week: BoardWeek): Promise<BoardData> {
+  const [parts, publishedAt] = await Promise.all([loadBoardParts(em, actor, week.id), lastPublishedAt(em, week)]);
+  return { week, publishedAt, ...parts };
+}
+
+/** A board's data by week id: the week row is read in the same round as the rest (NotFound outside the workspace). */
+export async function loadBoardById(em: EntityManager, actor: Actor, id: number): Promise<BoardData> {
+  const [week, parts] = await Promise.all([readBoardWeek(em, actor.workspaceId, id), loadBoardParts(em, actor, id)]);
+  if (!week) throw new NotFound('Week');
+  const { publishedAt, ...w } = week;
+  return { week: w, publishedAt, ...parts };
 }
 
 export function cellDto(c: BoardCellRow | IWeekCell): BoardCellDto {
@@ -228,8 +275,7 @@ export function presentBoard(d: BoardData, result: BoardResult = computeBoard(bo
 }
 
 export async function getBoard(em: EntityManager, actor: Actor, id: number): Promise<BoardDto> {
-  const week = await findWeek(em, actor, id);
-  return presentBoard(await loadBoardData(em, actor, week));
+  return presentBoard(await loadBoardById(em, actor, id));
 }
 
 export { cellKey };
