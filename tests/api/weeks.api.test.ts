@@ -73,6 +73,30 @@ describe('portion count', () => {
   });
 });
 
+describe('what the board reads in one round', () => {
+  it('names a tray counted for the week that no plate uses, with its cut plan and spares; another week of the workspace is apart', async () => {
+    const coach = await coachWorkspace(app);
+    const { ing, plate, client, week } = await setup(coach);
+    // A second tray on no plate, counted only in this week: the board finds it through the tray counts alone.
+    const extra = await makeTray(coach, { name: 'Counted only' }, ing.id);
+    const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id, DAYS.slice(0, 2));
+    await coach.agent
+      .put(`/api/weeks/${week.id}/trays`)
+      .send({ version: filled.body.week.version, trays: [{ trayId: extra.id, prepDate: '2026-01-04', trayCount: 1 }] })
+      .expect(200);
+    const board = (await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body as BoardDto;
+    expect(board.trays).toEqual([expect.objectContaining({ trayId: extra.id, name: 'Counted only', trayCount: 1, portionsPerTray: 16 })]);
+    expect(board.inventory.find((t) => t.trayId === String(extra.id))).toMatchObject({ needed: 0, produced: 16, spare: 16 });
+    expect(board.cells).toHaveLength(2);
+    expect(board.week).toMatchObject({ id: week.id, cellCount: 2, publishedAt: null });
+
+    const other = (await makeWeek(coach, { startDate: '2026-01-12', prepDate: '2026-01-11' })).week;
+    const otherBoard = (await coach.agent.get(`/api/weeks/${other.id}`).expect(200)).body as BoardDto;
+    expect(otherBoard.cells).toEqual([]);
+    expect(otherBoard.trays).toEqual([]);
+  });
+});
+
 describe('eat-by on the board', () => {
   // USDA FSIS FoodKeeper / Cold Food Storage chart (published-values §6b): egg dishes and cooked leftovers keep
   // 3–4 days refrigerated at 40 °F or below. Trayline counts the prep day as day 0: prepped Sunday 2026-01-04 with
