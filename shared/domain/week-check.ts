@@ -91,6 +91,36 @@ export type WeekWarning =
 
 export type WarningKind = WeekWarning['kind'];
 
+/** A warning's facts without its sentence and without the client and day it belongs to (they are its day check's). */
+export type WarningData = WeekWarning extends infer W ? (W extends WeekWarning ? Omit<W, 'message' | 'clientId' | 'date'> : never) : never;
+
+/**
+ * A warning's sentence, from its kind and values: the one wording of each problem. The week check writes it on every
+ * warning; the board answer leaves it out and the board page words each warning with this.
+ */
+export function warningMessage(w: WarningData, date: IsoDate): string {
+  switch (w.kind) {
+    case 'net-carbs-over':
+      return `Net carbs ${w.actualG} g are over the ${w.capG} g cap.`;
+    case 'protein-short':
+      return `Protein ${w.actualG} g is below the ${w.floorG} g floor (target ${w.targetG} g).`;
+    case 'energy-over':
+      return `Energy ${w.actualKcal} kcal is over ${w.limitKcal} kcal (target ${w.targetKcal} kcal).`;
+    case 'allergen':
+      return w.overridden
+        ? `${allergenLabel(w.allergen)} is on the client's allergen list; allowed by the coach: ${w.reason}`
+        : `${allergenLabel(w.allergen)} is on the client's allergen list.`;
+    case 'dislike':
+      return `The client dislikes ${w.term}.`;
+    case 'before-prep':
+      return `Planned on ${date}, before its tray is made on ${w.prepDate}.`;
+    case 'past-freezer-quality':
+      return `Frozen portion planned after its freezer quality limit (${w.qualityUntil}).`;
+    case 'past-eat-by':
+      return `Past its eat-by date: prepped ${w.prepDate}, eat by ${w.eatBy}.`;
+  }
+}
+
 export interface DayTotals {
   kcal: number;
   netCarbsG: number;
@@ -276,18 +306,18 @@ function macroWarnings(input: DayCheckInput, sums: DaySums, actual: DayTotals): 
   const { floor, limit, capMilliFloor, floorMilliCeil, limitMilliFloor, floorG, limitKcal } = limitsOf(targets, rules);
   if (sums.milli ? sums.milli.netCarbsG > capMilliFloor : sums.exact.netCarbsG.gt(targets.netCarbCapG)) {
     const actualG = actual.netCarbsG;
-    warnings.push({ severity, clientId, date, kind: 'net-carbs-over', actualG, capG: targets.netCarbCapG,
-      message: `Net carbs ${actualG} g are over the ${targets.netCarbCapG} g cap.` });
+    const w = { severity, kind: 'net-carbs-over' as const, actualG, capG: targets.netCarbCapG };
+    warnings.push({ severity, clientId, date, kind: w.kind, actualG, capG: w.capG, message: warningMessage(w, date) });
   }
   if (sums.milli ? sums.milli.proteinG < floorMilliCeil : sums.exact.proteinG.lt(floor)) {
     const actualG = actual.proteinG;
-    warnings.push({ severity, clientId, date, kind: 'protein-short', actualG, targetG: targets.proteinG, floorG,
-      message: `Protein ${actualG} g is below the ${floorG} g floor (target ${targets.proteinG} g).` });
+    const w = { severity, kind: 'protein-short' as const, actualG, targetG: targets.proteinG, floorG };
+    warnings.push({ severity, clientId, date, kind: w.kind, actualG, targetG: w.targetG, floorG, message: warningMessage(w, date) });
   }
   if (sums.milli ? sums.milli.kcal > limitMilliFloor : sums.exact.kcal.gt(limit)) {
     const actualKcal = actual.kcal;
-    warnings.push({ severity, clientId, date, kind: 'energy-over', actualKcal, targetKcal: targets.targetKcal, limitKcal,
-      message: `Energy ${actualKcal} kcal is over ${limitKcal} kcal (target ${targets.targetKcal} kcal).` });
+    const w = { severity, kind: 'energy-over' as const, actualKcal, targetKcal: targets.targetKcal, limitKcal };
+    warnings.push({ severity, clientId, date, kind: w.kind, actualKcal, targetKcal: w.targetKcal, limitKcal, message: warningMessage(w, date) });
   }
   return warnings;
 }
@@ -296,20 +326,15 @@ function allergenWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] 
   return allergenConflicts(cell.allergens, input.clientAllergens).map((allergen) => {
     const reason = cell.allergenOverrides?.find((o) => o.allergen === allergen)?.reason.trim();
     const overridden = Boolean(reason);
-    const label = allergenLabel(allergen);
-    return {
+    const w = {
       kind: 'allergen' as const,
       severity: overridden ? ('warn' as const) : ('block' as const),
-      clientId: input.clientId,
-      date: input.date,
       slot: cell.slot,
       allergen,
       overridden,
       ...(overridden ? { reason } : {}),
-      message: overridden
-        ? `${label} is on the client's allergen list; allowed by the coach: ${reason}`
-        : `${label} is on the client's allergen list.`,
     };
+    return { ...w, clientId: input.clientId, date: input.date, message: warningMessage(w, input.date) };
   });
 }
 
@@ -319,7 +344,7 @@ function dislikeWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] {
   const hits = termList(cell.terms).filter((t) => dislikes.has(t));
   return hits.map((term) => ({
     kind: 'dislike' as const, severity: 'warn' as const, clientId: input.clientId, date: input.date,
-    slot: cell.slot, term, message: `The client dislikes ${term}.`,
+    slot: cell.slot, term, message: warningMessage({ kind: 'dislike', severity: 'warn', slot: cell.slot, term }, input.date),
   }));
 }
 
@@ -329,18 +354,18 @@ function portionWarning(input: DayCheckInput, cell: CheckCell, portion: CellPort
   const { trayId, prepDate } = portion;
   const { status, eatBy } = portionStatus({ plannedDate: input.date, prepDate: portion.prepDate, fridgeDays: portion.fridgeDays });
   if (status === 'before-prep') {
-    return { clientId, date, slot, trayId, prepDate, kind: 'before-prep', severity: 'block',
-      message: `Planned on ${input.date}, before its tray is made on ${portion.prepDate}.` };
+    const w = { slot, trayId, prepDate, kind: 'before-prep' as const, severity: 'block' as const };
+    return { clientId, date, slot, trayId, prepDate, kind: w.kind, severity: w.severity, message: warningMessage(w, date) };
   }
   if (portion.storage === 'frozen') {
     const qualityUntil = freezerQualityDate(portion.prepDate, portion.freezerWeeks ?? 0);
     if (compareIsoDates(input.date, qualityUntil) <= 0) return null;
-    return { clientId, date, slot, trayId, prepDate, kind: 'past-freezer-quality', severity: 'warn', qualityUntil,
-      message: `Frozen portion planned after its freezer quality limit (${qualityUntil}).` };
+    const w = { slot, trayId, prepDate, kind: 'past-freezer-quality' as const, severity: 'warn' as const, qualityUntil };
+    return { clientId, date, slot, trayId, prepDate, kind: w.kind, severity: w.severity, qualityUntil, message: warningMessage(w, date) };
   }
   if (status === 'past-eat-by') {
-    return { clientId, date, slot, trayId, prepDate, kind: 'past-eat-by', severity: 'block', eatBy,
-      message: `Past its eat-by date: prepped ${portion.prepDate}, eat by ${eatBy}.` };
+    const w = { slot, trayId, prepDate, kind: 'past-eat-by' as const, severity: 'block' as const, eatBy };
+    return { clientId, date, slot, trayId, prepDate, kind: w.kind, severity: w.severity, eatBy, message: warningMessage(w, date) };
   }
   return null;
 }

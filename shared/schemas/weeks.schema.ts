@@ -143,6 +143,7 @@ export interface BoardDayDto {
   warnings: WeekWarning[];
 }
 
+/** The week board as pages read it. The API sends it as a `BoardAnswer` (board-answer.ts); `expandBoard` gives this. */
 export interface BoardDto {
   week: WeekSummaryDto;
   days: IsoDate[];

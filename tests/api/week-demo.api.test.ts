@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import { flatWarnings, type WeekWarning } from '@shared/domain/week-check.js';
 import type { BoardDto } from '@shared/schemas/weeks.schema.js';
+import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer.js';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, uniq, type Member } from '../support/factories.js';
 import { seedReferenceIngredients } from '@server/db/seeders/ingredient-seed.js';
@@ -59,7 +60,7 @@ describe('demo prep week', () => {
     const list = (await coach.agent.get('/api/weeks').expect(200)).body as { id: number }[] | { items: { id: number }[] };
     const weeks = Array.isArray(list) ? list : list.items;
     expect(weeks).toHaveLength(1);
-    const board = (await coach.agent.get(`/api/weeks/${weeks[0].id}`).expect(200)).body as Board;
+    const board: Board = expandBoard((await coach.agent.get(`/api/weeks/${weeks[0].id}`).expect(200)).body as BoardAnswer);
 
     expect(board.clients).toHaveLength(8);
     expect(board.plates).toHaveLength(6);

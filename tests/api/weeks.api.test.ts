@@ -14,10 +14,11 @@ import {
 import { sql } from '../support/db.js';
 import { cellEatBy } from '@shared/domain/week-board.js';
 import { flatWarnings } from '@shared/domain/week-check.js';
-import type { BoardDto } from '@shared/schemas/weeks.schema.js';
+import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer.js';
 
 /** A cell's portions (prep date, eat-by, status, remedies) as the board page shows them from the board answer. */
-function portionsOn(board: BoardDto, date: string) {
+function portionsOn(answer: BoardAnswer, date: string) {
+  const board = expandBoard(answer);
   const cell = board.cells.find((c) => c.date === date)!;
   const plate = board.plates.find((p) => p.id === cell.assemblyId)!;
   return cellEatBy(cell, plate.trays, board.prepDates);
@@ -84,14 +85,14 @@ describe('what the board reads in one round', () => {
       .put(`/api/weeks/${week.id}/trays`)
       .send({ version: filled.body.week.version, trays: [{ trayId: extra.id, prepDate: '2026-01-04', trayCount: 1 }] })
       .expect(200);
-    const board = (await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body as BoardDto;
+    const board = expandBoard((await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body as BoardAnswer);
     expect(board.trays).toEqual([expect.objectContaining({ trayId: extra.id, name: 'Counted only', trayCount: 1, portionsPerTray: 16 })]);
     expect(board.inventory.find((t) => t.trayId === String(extra.id))).toMatchObject({ needed: 0, produced: 16, spare: 16 });
     expect(board.cells).toHaveLength(2);
     expect(board.week).toMatchObject({ id: week.id, cellCount: 2, publishedAt: null });
 
     const other = (await makeWeek(coach, { startDate: '2026-01-12', prepDate: '2026-01-11' })).week;
-    const otherBoard = (await coach.agent.get(`/api/weeks/${other.id}`).expect(200)).body as BoardDto;
+    const otherBoard = expandBoard((await coach.agent.get(`/api/weeks/${other.id}`).expect(200)).body as BoardAnswer);
     expect(otherBoard.cells).toEqual([]);
     expect(otherBoard.trays).toEqual([]);
   });
@@ -112,7 +113,7 @@ describe('eat-by on the board', () => {
     ]);
     const thursday = { portions: portionsOn(filled.body, '2026-01-08') };
     expect(thursday.portions[0].status).toBe('ok');
-    const pastDays = flatWarnings(filled.body.checks).filter((w: { kind: string }) => w.kind === 'past-eat-by').map((w: { date: string }) => w.date);
+    const pastDays = flatWarnings(expandBoard(filled.body).checks).filter((w: { kind: string }) => w.kind === 'past-eat-by').map((w: { date: string }) => w.date);
     expect(pastDays).toEqual(['2026-01-09', '2026-01-10', '2026-01-11']);
 
     const refused = await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: filled.body.week.version }).expect(409);
@@ -127,7 +128,7 @@ describe('eat-by on the board', () => {
         cells: DAYS.slice(4).map((date) => ({ clientId: client.id, date, slot: 'breakfast', assemblyId: plate.id, storage: 'frozen' })),
       })
       .expect(200);
-    expect(flatWarnings(frozen.body.checks).filter((w: { kind: string }) => w.kind === 'past-eat-by')).toEqual([]);
+    expect(flatWarnings(expandBoard(frozen.body).checks).filter((w: { kind: string }) => w.kind === 'past-eat-by')).toEqual([]);
     await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: frozen.body.week.version }).expect(200);
   });
 
@@ -139,7 +140,7 @@ describe('eat-by on the board', () => {
     // Wednesday's prep (4 fridge days) covers Wed–Sun: eat by Sunday 2026-01-11.
     const sunday = { portions: portionsOn(filled.body, '2026-01-11') };
     expect(sunday.portions[0]).toMatchObject({ prepDate: '2026-01-07', eatBy: '2026-01-11', status: 'ok' });
-    expect(flatWarnings(filled.body.checks).filter((w: { severity: string }) => w.severity === 'block')).toEqual([]);
+    expect(flatWarnings(expandBoard(filled.body).checks).filter((w: { severity: string }) => w.severity === 'block')).toEqual([]);
     expect(filled.body.cautions.map((c: { id: string }) => c.id)).toEqual(
       expect.arrayContaining(['cooling', 'reheating', 'two-hour-rule', 'local-codes']),
     );
@@ -158,7 +159,7 @@ describe('the week board', () => {
       .put(`/api/weeks/${week.id}/cells`)
       .send({ version: week.version, cells: [{ ...cell, allergenOverrides: [{ allergen: 'milk', reason: 'Lactose-free version agreed with client' }] }] })
       .expect(200);
-    expect(flatWarnings(ok.body.checks)).toEqual(
+    expect(flatWarnings(expandBoard(ok.body).checks)).toEqual(
       expect.arrayContaining([expect.objectContaining({ kind: 'allergen', severity: 'warn', overridden: true })]),
     );
   });
@@ -181,7 +182,7 @@ describe('the week board', () => {
     const coach = await coachWorkspace(app);
     const { plate, client, week } = await setup(coach);
     const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id, [DAYS[0]]);
-    const check = filled.body.checks.find((c: { date: string }) => c.date === DAYS[0]);
+    const check = expandBoard(filled.body).checks.find((c: { date: string }) => c.date === DAYS[0])!;
     const plateDto = filled.body.plates.find((p: { id: number }) => p.id === plate.id);
     expect(check.totals.kcal).toBeCloseTo(plateDto.macros.kcal, 0);
     // One small cheese portion is far below breakfast's protein share: flagged.

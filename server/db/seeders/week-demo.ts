@@ -13,6 +13,7 @@ import { createAssembly } from '../../modules/assemblies/assembly.service.js';
 import { coverTrays, createWeek, putCells } from '../../modules/weeks/week.service.js';
 import { publishWeek } from '../../modules/weeks/week-publish.service.js';
 import { flatWarnings } from '@shared/domain/week-check.js';
+import { expandBoard } from '@shared/schemas/board-answer.js';
 import type { DemoContext } from './demo-seed.js';
 
 /**
@@ -187,9 +188,10 @@ export async function seedDemoWeek(ctx: DemoContext): Promise<void> {
   setCell(0, 6, slots[0], { prepDate: addDays(start, -1), storage: 'frozen' });
   board = await putCells(em, actor, board.week.id, { version: board.week.version, cells: cells as never });
   // Apply the eat-by remedy the board proposes (freeze and thaw) wherever a portion would be past its date.
-  const past = flatWarnings(board.checks).filter((w) => w.kind === 'past-eat-by');
+  const read = expandBoard(board);
+  const past = flatWarnings(read.checks).filter((w) => w.kind === 'past-eat-by');
   if (past.length) {
-    const frozen = board.cells
+    const frozen = read.cells
       .filter((c) => past.some((w) => w.clientId === String(c.clientId) && w.date === c.date && 'slot' in w && w.slot === c.slot))
       .map((c) => ({ ...c, storage: 'frozen' as const }));
     board = await putCells(em, actor, board.week.id, { version: board.week.version, cells: frozen });

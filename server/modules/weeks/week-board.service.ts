@@ -5,7 +5,8 @@ import { cellKey, computeBoard, type BoardInput, type BoardResult } from '@share
 import type { AllergenCode } from '@shared/domain/allergens.js';
 import type { MacroTargets } from '@shared/domain/targets.js';
 import type { AssemblyDto } from '@shared/schemas/assemblies.schema.js';
-import { WEEK_DAYS, type BoardDto, type BoardCellDto, type WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
+import { WEEK_DAYS, type BoardCellDto, type WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
+import { cellAnswer, dayAnswer, type BoardAnswer } from '@shared/schemas/board-answer.js';
 import type { Actor } from '../../http/authz.js';
 import { NotFound } from '../../http/errors.js';
 import { preparedRows } from '../../db/prepared.js';
@@ -239,7 +240,8 @@ export function boardInput(d: BoardData, cells: readonly BoardCellDto[] = d.cell
   };
 }
 
-export function presentBoard(d: BoardData, result: BoardResult = computeBoard(boardInput(d))): BoardDto {
+/** The board answer (shared/schemas/board-answer.ts: cell defaults and warning sentences left out; pages expand it). */
+export function presentBoard(d: BoardData, result: BoardResult = computeBoard(boardInput(d))): BoardAnswer {
   const platesDto: AssemblyDto[] = d.assemblies.map((a) => presentAssembly(a, d.ctx));
   return {
     week: presentWeekSummary(d.week, d.cells.length, d.publishedAt),
@@ -255,7 +257,7 @@ export function presentBoard(d: BoardData, result: BoardResult = computeBoard(bo
       targets: targetsOf(d, c),
     })),
     plates: platesDto,
-    cells: d.cells.map(cellDto),
+    cells: d.cells.map((c) => cellAnswer(cellDto(c))),
     trays: d.trays.map((t) => {
       const f = d.ctx.trays.get(t.tray.id);
       return {
@@ -268,13 +270,13 @@ export function presentBoard(d: BoardData, result: BoardResult = computeBoard(bo
         freezerWeeks: f?.freezerWeeks ?? 0,
       };
     }),
-    checks: result.days.map((day) => ({ clientId: Number(day.clientId), date: day.date, totals: day.totals, warnings: day.warnings })),
+    checks: result.days.map((day) => dayAnswer(Number(day.clientId), day.date, day.totals, day.warnings)),
     inventory: result.inventory,
     cautions: CAUTIONS,
   };
 }
 
-export async function getBoard(em: EntityManager, actor: Actor, id: number): Promise<BoardDto> {
+export async function getBoard(em: EntityManager, actor: Actor, id: number): Promise<BoardAnswer> {
   return presentBoard(await loadBoardById(em, actor, id));
 }
 

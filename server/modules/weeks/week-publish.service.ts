@@ -4,7 +4,8 @@ import { CAUTIONS } from '@shared/domain/eat-by.js';
 import { addDays, compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, type BoardResult } from '@shared/domain/week-board.js';
 import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
-import type { BoardDto, MyDayDto, MyPlateDto, MyWeekDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
+import type { MyDayDto, MyPlateDto, MyWeekDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
+import type { BoardAnswer } from '@shared/schemas/board-answer.js';
 import type { Actor } from '../../http/authz.js';
 import { Conflict, StaleEdit } from '../../http/errors.js';
 import { AssemblyItem } from '../assemblies/assembly.entity.js';
@@ -42,7 +43,7 @@ function myPlate(plate: AssemblyDto, slot: string, eat: BoardResult['cells'][num
 }
 
 /** Every client's days as clients will read them. */
-export function buildSnapshot(d: BoardData, board: BoardDto, result: BoardResult): WeekSnapshot {
+export function buildSnapshot(d: BoardData, board: BoardAnswer, result: BoardResult): WeekSnapshot {
   const plates = new Map(board.plates.map((p) => [p.id, p]));
   const eat = new Map(result.cells.map((c) => [cellKey(c), c]));
   const slotOrder = (s: string) => board.slots.indexOf(s);
@@ -83,7 +84,7 @@ export function buildSnapshot(d: BoardData, board: BoardDto, result: BoardResult
  * (409) while a blocking problem remains (an allergen without an override, a portion past its eat-by date or planned
  * before its tray is made).
  */
-export async function publishWeek(em: EntityManager, actor: Actor, id: number, version: number): Promise<BoardDto> {
+export async function publishWeek(em: EntityManager, actor: Actor, id: number, version: number): Promise<BoardAnswer> {
   const week = await findWeek(em, actor, id);
   if (week.version !== version) throw new StaleEdit(week.version, await getBoard(em, actor, id));
   const data = await loadBoardData(em, actor, week);

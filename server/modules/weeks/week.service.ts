@@ -2,11 +2,8 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
 import { addDays, compareIsoDates, daysBetween, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, coveringBatches } from '@shared/domain/week-board.js';
-import type {
-  BoardDto,
-  GlanceDto,
-  WeekSummaryDto,
-} from '@shared/schemas/weeks.schema.js';
+import type { GlanceDto, WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
+import type { BoardAnswer } from '@shared/schemas/board-answer.js';
 import type { z } from 'zod';
 import type {
   copyDaySchema,
@@ -72,7 +69,7 @@ function checkPrepDates(startDate: IsoDate, prepDate: IsoDate, second: IsoDate |
   if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
 }
 
-export async function createWeek(em: EntityManager, actor: Actor, v: CreateWeek): Promise<BoardDto> {
+export async function createWeek(em: EntityManager, actor: Actor, v: CreateWeek): Promise<BoardAnswer> {
   checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
   const w = em.create(Week, {
     workspace: actor.workspaceId,
@@ -107,7 +104,7 @@ async function commit(em: EntityManager, actor: Actor, week: IWeek, write: (tx: 
   return getBoard(em, actor, week.id);
 }
 
-export async function updateWeek(em: EntityManager, actor: Actor, id: number, v: UpdateWeek): Promise<BoardDto> {
+export async function updateWeek(em: EntityManager, actor: Actor, id: number, v: UpdateWeek): Promise<BoardAnswer> {
   const week = await openForEdit(em, actor, id, v.version);
   const prepDate = v.prepDate ?? week.prepDate;
   const second = v.secondPrepDate === undefined ? week.secondPrepDate : v.secondPrepDate;
@@ -196,7 +193,7 @@ function boardPlateAllergens(d: BoardData, assemblyId: number): AllergenCode[] {
 }
 
 /** Sets, changes or empties cells (a partial update of the board, all-or-nothing). */
-export async function putCells(em: EntityManager, actor: Actor, id: number, v: PutCells): Promise<BoardDto> {
+export async function putCells(em: EntityManager, actor: Actor, id: number, v: PutCells): Promise<BoardAnswer> {
   const week = await openForEdit(em, actor, id, v.version);
   const data = await loadBoardData(em, actor, week);
   checkCells(data, v.cells);
@@ -222,7 +219,7 @@ export async function putCells(em: EntityManager, actor: Actor, id: number, v: P
 }
 
 /** Replaces the week's tray counts. */
-export async function putTrays(em: EntityManager, actor: Actor, id: number, v: PutTrays): Promise<BoardDto> {
+export async function putTrays(em: EntityManager, actor: Actor, id: number, v: PutTrays): Promise<BoardAnswer> {
   const week = await openForEdit(em, actor, id, v.version);
   const prepDates = new Set(prepDatesOf(week));
   const trayIds = [...new Set(v.trays.map((t) => t.trayId))];
@@ -250,7 +247,7 @@ async function replaceTrays(em: EntityManager, actor: Actor, week: IWeek, trays:
 }
 
 /** Sets every tray count to cover the portions the board needs (whole trays, per prep date). */
-export async function coverTrays(em: EntityManager, actor: Actor, id: number, version: number): Promise<BoardDto> {
+export async function coverTrays(em: EntityManager, actor: Actor, id: number, version: number): Promise<BoardAnswer> {
   const week = await openForEdit(em, actor, id, version);
   const data = await loadBoardData(em, actor, week);
   const batches = coveringBatches(boardInput(data)).filter((b) => b.trayCount > 0);
@@ -258,7 +255,7 @@ export async function coverTrays(em: EntityManager, actor: Actor, id: number, ve
 }
 
 /** Copies one day's cells (all clients, or one) onto another day of the same week, replacing what was there. */
-export async function copyDay(em: EntityManager, actor: Actor, id: number, v: CopyDay): Promise<BoardDto> {
+export async function copyDay(em: EntityManager, actor: Actor, id: number, v: CopyDay): Promise<BoardAnswer> {
   const week = await openForEdit(em, actor, id, v.version);
   const days = weekDays(week);
   if (!days.includes(v.fromDate)) throw ValidationError.field('fromDate', 'This day is not on the board of this week');
@@ -284,7 +281,7 @@ export async function copyDay(em: EntityManager, actor: Actor, id: number, v: Co
 }
 
 /** A new week with the same board shifted to a new start date, and the same tray counts. */
-export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: CopyWeek): Promise<BoardDto> {
+export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: CopyWeek): Promise<BoardAnswer> {
   const source = await findWeek(em, actor, id);
   checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
   const shift = daysBetween(source.startDate, v.startDate);

@@ -4,6 +4,7 @@ import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { allergenConflicts } from '@shared/domain/allergens';
 import { flatWarnings } from '@shared/domain/week-check';
 import type { BoardDto, CellInput } from '@shared/schemas/weeks.schema';
+import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import { boardQuery } from '@/features/weeks/api/weeks.queries';
 import { weekKeys } from '@/features/weeks/api/weeks.keys';
 import { useCopyDay, useCoverTrays, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek } from '@/features/weeks/api/use-week-mutations';
@@ -46,8 +47,8 @@ export function Component() {
   /** A 409 loads their board and keeps ours pending: the coach chooses (merge prompt), never a silent overwrite. */
   const onFail = (pending: Pending) => (e: unknown) => {
     if (isApiError(e, 409) && e.problem.code === 'stale_version') {
-      const current = e.problem.current as BoardDto | undefined;
-      if (current) qc.setQueryData(weekKeys.detail(id), current);
+      const current = e.problem.current as BoardAnswer | undefined;
+      if (current) qc.setQueryData(weekKeys.detail(id), expandBoard(current));
       else void q.refetch();
       setConflict(pending);
       return;

@@ -8,6 +8,7 @@ import type {
   PutTraysInput,
   UpdateWeekInput,
 } from '@shared/schemas/weeks.schema';
+import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import { api } from '@/lib/api-client';
 import { weekKeys } from './weeks.keys';
 
@@ -25,24 +26,24 @@ function useBoardWrite<T>(id: number, send: (input: T) => Promise<BoardDto>) {
 }
 
 export const usePutCells = (id: number) =>
-  useBoardWrite(id, (input: { version: number; cells: CellInput[] }) => api.put<BoardDto>(`/weeks/${id}/cells`, input));
+  useBoardWrite(id, (input: { version: number; cells: CellInput[] }) => api.put<BoardAnswer>(`/weeks/${id}/cells`, input).then(expandBoard));
 
-export const usePutTrays = (id: number) => useBoardWrite(id, (input: PutTraysInput) => api.put<BoardDto>(`/weeks/${id}/trays`, input));
+export const usePutTrays = (id: number) => useBoardWrite(id, (input: PutTraysInput) => api.put<BoardAnswer>(`/weeks/${id}/trays`, input).then(expandBoard));
 
 export const useCoverTrays = (id: number) =>
-  useBoardWrite(id, (input: { version: number }) => api.post<BoardDto>(`/weeks/${id}/trays/cover`, input));
+  useBoardWrite(id, (input: { version: number }) => api.post<BoardAnswer>(`/weeks/${id}/trays/cover`, input).then(expandBoard));
 
-export const useCopyDay = (id: number) => useBoardWrite(id, (input: CopyDayInput) => api.post<BoardDto>(`/weeks/${id}/copy-day`, input));
+export const useCopyDay = (id: number) => useBoardWrite(id, (input: CopyDayInput) => api.post<BoardAnswer>(`/weeks/${id}/copy-day`, input).then(expandBoard));
 
-export const useUpdateWeek = (id: number) => useBoardWrite(id, (input: UpdateWeekInput) => api.patch<BoardDto>(`/weeks/${id}`, input));
+export const useUpdateWeek = (id: number) => useBoardWrite(id, (input: UpdateWeekInput) => api.patch<BoardAnswer>(`/weeks/${id}`, input).then(expandBoard));
 
 export const usePublishWeek = (id: number) =>
-  useBoardWrite(id, (input: { version: number }) => api.post<BoardDto>(`/weeks/${id}/publish`, input));
+  useBoardWrite(id, (input: { version: number }) => api.post<BoardAnswer>(`/weeks/${id}/publish`, input).then(expandBoard));
 
 export function useCreateWeek() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: CreateWeekInput) => api.post<BoardDto>('/weeks', input),
+    mutationFn: (input: CreateWeekInput) => api.post<BoardAnswer>('/weeks', input).then(expandBoard),
     meta: { form: true },
     onSuccess: (board) => {
       qc.setQueryData(weekKeys.detail(board.week.id), board);
@@ -54,7 +55,7 @@ export function useCreateWeek() {
 export function useCopyWeek(id: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: CopyWeekInput) => api.post<BoardDto>(`/weeks/${id}/copy`, input),
+    mutationFn: (input: CopyWeekInput) => api.post<BoardAnswer>(`/weeks/${id}/copy`, input).then(expandBoard),
     meta: { form: true },
     onSuccess: (board) => {
       qc.setQueryData(weekKeys.detail(board.week.id), board);

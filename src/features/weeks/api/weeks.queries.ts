@@ -1,5 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { BoardDto, GlanceDto, MyWeekDto, WeekSummaryDto } from '@shared/schemas/weeks.schema';
+import type { GlanceDto, MyWeekDto, WeekSummaryDto } from '@shared/schemas/weeks.schema';
+import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import { api, qs } from '@/lib/api-client';
 import { weekKeys } from './weeks.keys';
 
@@ -12,7 +13,7 @@ export function localToday(): string {
 export const weeksQuery = () => queryOptions({ queryKey: weekKeys.list(), queryFn: () => api.get<WeekSummaryDto[]>('/weeks') });
 
 export const boardQuery = (id: number) =>
-  queryOptions({ queryKey: weekKeys.detail(id), queryFn: () => api.get<BoardDto>(`/weeks/${id}`) });
+  queryOptions({ queryKey: weekKeys.detail(id), queryFn: () => api.get<BoardAnswer>(`/weeks/${id}`).then(expandBoard) });
 
 export const glanceQuery = (today: string) =>
   queryOptions({ queryKey: weekKeys.glance(today), queryFn: () => api.get<GlanceDto>(`/weeks/glance${qs({ today })}`) });
