@@ -8,6 +8,7 @@ import {
   makeIngredient,
   makeTray,
   makeWeek,
+  ingredientInput,
   member,
   type Member,
 } from '../support/factories.js';
@@ -95,6 +96,25 @@ describe('what the board reads in one round', () => {
     const otherBoard = expandBoard((await coach.agent.get(`/api/weeks/${other.id}`).expect(200)).body as BoardAnswer);
     expect(otherBoard.cells).toEqual([]);
     expect(otherBoard.trays).toEqual([]);
+  });
+});
+
+describe('the board after a library edit', () => {
+  it('reads the tray and plate macros from the edited ingredient (nothing kept from an earlier load)', async () => {
+    const coach = await coachWorkspace(app);
+    const { ing, plate, client, week } = await setup(coach);
+    const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id, [DAYS[0]]);
+    const before = expandBoard(filled.body as BoardAnswer);
+    const current = (await coach.agent.get(`/api/ingredients/${ing.id}`).expect(200)).body as Record<string, unknown>;
+    await coach.agent
+      .patch(`/api/ingredients/${ing.id}`)
+      .send({ ...ingredientInput({ name: current.name as string }), proteinG: '40', version: current.version })
+      .expect(200);
+    const after = expandBoard((await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body as BoardAnswer);
+    const protein = (b: typeof before) => b.plates.find((p) => p.id === plate.id)!.macros.proteinG;
+    // The plate is one tray portion of that ingredient only: doubling its protein per 100 g doubles the plate's.
+    expect(protein(after)).toBeCloseTo(protein(before) * 2, 0);
+    expect(after.checks[0].totals.proteinG).toBe(protein(after));
   });
 });
 

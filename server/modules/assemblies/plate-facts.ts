@@ -28,6 +28,7 @@ import {
 } from '../trays/tray-nutrition.js';
 import type { IAssembly } from './assembly.entity.js';
 import { loadUsableIngredientsWhere } from '../ingredients/ingredient.service.js';
+import { pureMemo } from '../../lib/pure-memo.js';
 
 /**
  * What plates and the week board need to know about base trays and add-ons, loaded in a fixed number of queries
@@ -96,7 +97,7 @@ export function itemsOf(a: PlateLike): PlateItemRow[] {
 }
 
 /** A tray as plate facts read it: a plain row with its lines in order (no entity hydration). */
-interface TrayRow {
+export interface TrayRow {
   id: number;
   name: string;
   fridgeDays: number;
@@ -194,7 +195,17 @@ export async function loadWorkspacePlateContext(
   return { rule: r, ingredients, trays: new Map(trays.map((t) => [t.id, trayFacts(t, ingredients, r)])) };
 }
 
-function trayFacts(t: TrayRow, ingredients: Map<number, TrayIngredient>, rule: NetCarbRule): TrayFacts {
+/**
+ * A tray's facts, memoized on everything they are computed from: the tray row with its lines, each line's library
+ * row, and the net-carb rule (a board load computes every tray's nutrition with decimal.js otherwise).
+ */
+export const trayFacts: (t: TrayRow, ingredients: Map<number, TrayIngredient>, rule: NetCarbRule) => TrayFacts = pureMemo(
+  computeTrayFacts,
+  (t, ingredients, rule) => JSON.stringify([t, t.lines.map((l) => ingredients.get(l.ingredientId) ?? null), rule]),
+  2000,
+);
+
+export function computeTrayFacts(t: TrayRow, ingredients: Map<number, TrayIngredient>, rule: NetCarbRule): TrayFacts {
   let portionsPerTray: number | null = null;
   try {
     portionsPerTray = portionsOf(cutPlanOf(t));
@@ -211,9 +222,10 @@ function trayFacts(t: TrayRow, ingredients: Map<number, TrayIngredient>, rule: N
     freezerWeeks: t.freezerWeeks,
     portionsPerTray,
     perPortion: recipe ? recipe.perPortion : null,
-    allergens: trayAllergens(lines, ingredients),
-    terms: [t.name, ...(t.tags ?? []), ...names],
-    reheatSteps: t.reheatSteps ?? [],
+    // Frozen: the memo shares these between requests.
+    allergens: Object.freeze(trayAllergens(lines, ingredients)) as AllergenCode[],
+    terms: Object.freeze([t.name, ...(t.tags ?? []), ...names]) as string[],
+    reheatSteps: Object.freeze([...(t.reheatSteps ?? [])]) as string[],
     archived: t.archived,
   };
 }
