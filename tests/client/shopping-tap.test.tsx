@@ -1,0 +1,76 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { act, cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { QueryClient, QueryClientProvider, useQuery } from '@tanstack/react-query';
+import type { ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
+import { shoppingKeys } from '@/features/shopping/api/shopping.keys';
+import { ShoppingList } from '@/features/shopping/components/shopping-list';
+
+const item = (ingredientId: number): ShoppingItemDto => ({
+  ingredientId,
+  name: `Item ${ingredientId}`,
+  aisle: 'dairy-eggs',
+  aisleLabel: 'Dairy and eggs',
+  baseUnit: 'g',
+  needed: 100,
+  inPantry: 0,
+  fromPantry: 0,
+  toBuy: 100,
+  neededText: '3.5 oz',
+  toBuyText: '3.5 oz',
+  purchase: null,
+  costCents: null,
+  check: { checked: false, checkedBy: null, checkedAt: null },
+});
+const list = (): ShoppingListDto => ({
+  weekId: 7,
+  aisles: [{ aisle: 'dairy-eggs', label: 'Dairy and eggs', items: [item(1)] }],
+  itemCount: 1,
+  checkedCount: 0,
+  totalCostCents: 0,
+  costComplete: false,
+  problems: [],
+  bought: null,
+});
+const json = (body: unknown, status = 200) =>
+  new Response(JSON.stringify(body), { status, headers: { 'content-type': status < 400 ? 'application/json' : 'application/problem+json' } });
+
+/** The page as the assistant has it: the list read through the query cache, the rows from ShoppingList. */
+function Page() {
+  const q = useQuery({ queryKey: shoppingKeys.list(7), queryFn: () => fetch('/api/weeks/7/shopping').then((r) => r.json() as Promise<ShoppingListDto>) });
+  return q.data ? <ShoppingList list={q.data} weekId={7} /> : null;
+}
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+describe('a tap on the shopping list', () => {
+  it('shows on the box at once while a list read is still in flight, and springs back when the save is refused', async () => {
+    const pending: { url: string; resolve: (r: Response) => void }[] = [];
+    vi.stubGlobal('fetch', vi.fn((url: string) => new Promise<Response>((resolve) => pending.push({ url, resolve }))));
+    const qc = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+    qc.setQueryData(shoppingKeys.list(7), list());
+    render(
+      <QueryClientProvider client={qc}>
+        <Page />
+      </QueryClientProvider>,
+    );
+    // A list read is in flight (the cached list is stale), as when the page was just opened or refocused.
+    act(() => {
+      void qc.invalidateQueries({ queryKey: shoppingKeys.list(7) }); // its answer never comes in this test
+    });
+    await waitFor(() => expect(pending.some((p) => p.url.endsWith('/shopping'))).toBe(true));
+
+    const box = screen.getByRole('checkbox', { name: /Item 1/ }) as HTMLInputElement;
+    fireEvent.click(box);
+    expect(box.checked).toBe(true); // at once, before any answer
+
+    await waitFor(() => expect(pending.some((p) => p.url.includes('/shopping/checks/1'))).toBe(true));
+    expect(box.checked).toBe(true);
+    await act(async () => {
+      pending.find((p) => p.url.includes('/shopping/checks/1'))!.resolve(json({ type: 'about:blank', title: 'Error', status: 500, code: 'internal', detail: 'boom' }, 500));
+    });
+    await waitFor(() => expect(box.checked).toBe(false));
+  });
+});
