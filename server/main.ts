@@ -13,7 +13,7 @@ const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 5, connectio
 pool.on('error', (err) => log.warn({ err }, 'session pool error'));
 // E-mail jobs (pg-boss, schema `pgboss` of the same database) and their send worker. Started in the background
 // so the server answers (503 on /api/health) even while PostgreSQL is away; it keeps trying until it starts.
-const mail = createMailRuntime({ databaseUrl: env.DATABASE_URL, orm, smtp: smtpFromEnv(env), logger: log });
+const mail = createMailRuntime({ databaseUrl: env.DATABASE_URL, orm, smtp: smtpFromEnv(env), publicUrl: env.PUBLIC_URL, logger: log });
 let mailTimer: NodeJS.Timeout | null = null;
 const startMail = () => {
   mail.start().then(

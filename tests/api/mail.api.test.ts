@@ -5,7 +5,8 @@ import { PDFParse } from 'pdf-parse';
 import type { Orm } from '@server/db/orm.js';
 import { startMailCatcher, type MailCatcher } from '@server/modules/mail/mail-catcher.js';
 import { startMail, type MailRuntime } from '@server/modules/mail/mail-runtime.js';
-import { MAIL_QUEUE, queueMail } from '@server/modules/mail/mail.service.js';
+import { MAIL_QUEUE, RESET_QUEUE, queueMail } from '@server/modules/mail/mail.service.js';
+import { issuePasswordReset } from '@server/modules/auth/auth.service.js';
 import { registerPdf } from '@server/modules/mail/pdf-registry.js';
 import { renderWeekPlanPdf } from '@server/modules/pdf/week-plan.pdf.js';
 import { agentFor, testApp } from '../support/test-app.js';
@@ -30,6 +31,7 @@ const RETRY = { retryLimit: 5, retryDelay: 1, retryBackoff: true, expireInSecond
 const startWorker = () =>
   startMail({
     databaseUrl: TEST_DATABASE_URL,
+    publicUrl: 'http://127.0.0.1:5173',
     orm,
     smtp: { host: '127.0.0.1', port, secure: false, from: FROM },
     retry: RETRY,
@@ -318,10 +320,14 @@ describe('password reset', () => {
   it('e-mails a one-time link; the link sets a new password once; an unknown e-mail gets the same 204', async () => {
     const coach = await coachWorkspace(app);
     await agentFor(app).post('/api/auth/password-reset').send({ email: coach.email }).expect(204);
-    const [row] = await sql<OutboxRow & { workspace_id: number | null; kind: string }>(
-      `select * from outbox where "to" = $1 and kind = 'password-reset'`,
-      [coach.email],
-    );
+    // The request only queued a job; the worker issues the token and queues the e-mail.
+    const row = await until(async () => {
+      const [r] = await sql<OutboxRow & { workspace_id: number | null; kind: string }>(
+        `select * from outbox where "to" = $1 and kind = 'password-reset'`,
+        [coach.email],
+      );
+      return r ?? null;
+    }, 20_000, 'reset e-mail queued');
     expect(row.workspace_id).toBeNull();
     await sentRow(row.id);
     const [caught] = await caughtFor(row.idempotency_key);
@@ -339,6 +345,11 @@ describe('password reset', () => {
 
     const ghost = `${uniq('ghost')}@example.test`;
     await agentFor(app).post('/api/auth/password-reset').send({ email: ghost }).expect(204);
+    // The same work as for an account (one job), done by the worker: no e-mail, no token.
+    await until(async () => {
+      const jobs = await sql<{ state: string }>(`select state from pgboss.job where name = $1 and data->>'email' = $2`, [RESET_QUEUE, ghost]);
+      return jobs.length === 1 && jobs[0].state === 'completed' ? jobs : null;
+    }, 20_000, 'ghost reset job completed');
     expect(await sql('select id from outbox where "to" = $1', [ghost])).toHaveLength(0);
     // A reset e-mail is never in any coach's outbox (its link would let the coach take over the account).
     const again2 = agentFor(app);
@@ -346,6 +357,17 @@ describe('password reset', () => {
     const list = await again2.get('/api/outbox').expect(200);
     expect(list.body.items.map((i: { kind: string }) => i.kind)).not.toContain('password-reset');
   }, 40_000);
+
+  it('a retried reset job queues its e-mail once (idempotent per job)', async () => {
+    const coach = await coachWorkspace(app);
+    const jobId = crypto.randomUUID();
+    await issuePasswordReset(orm.em.fork(), coach.email, 'http://127.0.0.1:5173', queue, jobId);
+    await issuePasswordReset(orm.em.fork(), coach.email, 'http://127.0.0.1:5173', queue, jobId);
+    const rows = await sql<{ idempotency_key: string }>(`select idempotency_key from outbox where "to" = $1 and kind = 'password-reset'`, [coach.email]);
+    expect(rows).toEqual([{ idempotency_key: `password-reset:${jobId}` }]);
+    const resets = await sql('select r.id from password_reset r join app_user u on u.id = r.user_id where u.email = $1', [coach.email]);
+    expect(resets).toHaveLength(1);
+  });
 
   it('is rate-limited per e-mail (5 in 15 minutes) and validates its input', async () => {
     const email = `${uniq('limit')}@example.test`;

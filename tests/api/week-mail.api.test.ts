@@ -28,6 +28,7 @@ beforeAll(async () => {
   catcher = await startMailCatcher({ port, databaseUrl: TEST_DATABASE_URL });
   worker = await startMail({
     databaseUrl: TEST_DATABASE_URL,
+    publicUrl: 'http://127.0.0.1:5173',
     orm,
     smtp: { host: '127.0.0.1', port, secure: false, from: 'Trayline <no-reply@trayline.test>' },
     retry: { retryLimit: 3, retryDelay: 1, retryBackoff: false, expireInSeconds: 10 },

@@ -7,6 +7,7 @@ const databaseUrl = process.env.DATABASE_URL!;
 const orm = await createOrm(databaseUrl);
 await startMail({
   databaseUrl,
+  publicUrl: 'http://127.0.0.1:5173',
   orm,
   smtp: { host: '127.0.0.1', port: 9, secure: false, from: 'Trayline <no-reply@trayline.test>' },
   retry: { retryLimit: 5, retryDelay: 1, retryBackoff: false, expireInSeconds: 3 },

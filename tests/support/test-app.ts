@@ -25,7 +25,7 @@ export async function testApp(overrides: Record<string, string> = {}) {
   const orm = await createOrm(env.DATABASE_URL);
   const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 4 });
   // pg-boss queue only (no send worker): mail tests start their own worker and catcher (tests/api/mail.api.test.ts).
-  const mail = createMailRuntime({ databaseUrl: env.DATABASE_URL, orm, smtp: smtpFromEnv(env), work: false });
+  const mail = createMailRuntime({ databaseUrl: env.DATABASE_URL, orm, smtp: smtpFromEnv(env), publicUrl: env.PUBLIC_URL, work: false });
   await mail.start().catch(() => undefined); // a test of a database that is away still gets an app
   const app = createApp({ orm, pool, env, mail, logger: pino({ level: 'silent' }) });
   const s = { app, orm, pool, mail };

@@ -149,9 +149,9 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
     allow('public'),
     resetByIp,
     resetByEmail,
-    validated({ body: requestPasswordResetSchema }, async ({ body }, req) => {
-      // Always 204: the answer does not tell whether the e-mail has an account.
-      await auth.requestPasswordReset(emOf(req), body.email, opts.publicUrl, opts.mail);
+    validated({ body: requestPasswordResetSchema }, async ({ body }) => {
+      // Always 204 after the same work: the answer does not tell whether the e-mail has an account.
+      await auth.requestPasswordReset(body.email, opts.mail);
     }),
   );
 

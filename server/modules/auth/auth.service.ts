@@ -15,7 +15,8 @@ import { loadClients } from '../clients/client.service.js';
 import { Invitation, Membership, PasswordReset, User, type IUser } from './user.entity.js';
 import { burnVerify, hashPassword, verifyPassword } from './passwords.js';
 import { hashToken, newToken } from './tokens.js';
-import { queueMail, type MailQueue } from '../mail/mail.service.js';
+import { queueMail, RESET_QUEUE, type MailQueue, type ResetJobData } from '../mail/mail.service.js';
+import { Outbox } from '../mail/outbox.entity.js';
 import { invitationMail, passwordResetMail } from '../mail/mail-templates.js';
 
 const INVITATION_DAYS = 14;
@@ -208,15 +209,28 @@ export async function updatePreferences(em: EntityManager, actor: Actor, input: 
 }
 
 /**
- * Password reset, step 1: for a known e-mail, a one-time token (stored hashed, valid 60 minutes) and an e-mail
- * with the link. An unknown e-mail gets the same answer and no e-mail. The outbox row has no workspace: no coach
- * sees reset mail (its link would let them take over the account).
+ * Password reset, step 1 (the request): queues `{ email }` for the mail worker and nothing else, whatever the e-mail,
+ * so neither the answer nor its timing tells whether the e-mail has an account (the worker does the lookup).
  */
-export async function requestPasswordReset(em: EntityManager, email: string, publicUrl: string, mail: MailQueue): Promise<void> {
+export async function requestPasswordReset(email: string, mail: MailQueue): Promise<void> {
+  const data: ResetJobData = { email };
+  const id = await mail.boss.send(RESET_QUEUE, data, mail.jobOptions);
+  if (!id) throw new Error(`The ${RESET_QUEUE} queue does not exist: start pg-boss (startMail) before asking for resets`);
+}
+
+/**
+ * Password reset, step 1 (the worker's job): for a known e-mail, a one-time token (stored hashed, valid 60 minutes)
+ * and an e-mail with the link; an unknown e-mail gets nothing. The outbox row has no workspace: no coach sees reset
+ * mail (its link would let them take over the account). Idempotent per job: a retried job whose e-mail was already
+ * queued does nothing.
+ */
+export async function issuePasswordReset(em: EntityManager, email: string, publicUrl: string, mail: MailQueue, jobId: string): Promise<void> {
   const user = await em.findOne(User, { email });
   if (!user) return;
-  const { token, hash } = newToken();
+  const idempotencyKey = `password-reset:${jobId}`;
   await em.transactional(async (tx) => {
+    if (await tx.findOne(Outbox, { idempotencyKey }, { fields: ['id'] })) return;
+    const { token, hash } = newToken();
     tx.create(PasswordReset, {
       user: user.id,
       tokenHash: hash,
@@ -224,7 +238,13 @@ export async function requestPasswordReset(em: EntityManager, email: string, pub
     });
     await tx.flush();
     const link = `${publicUrl.replace(/\/$/, '')}/reset-password/${token}`;
-    await queueMail(tx, mail, { workspaceId: null, kind: 'password-reset', to: user.email, ...passwordResetMail({ link, minutes: PASSWORD_RESET_MINUTES }) });
+    await queueMail(tx, mail, {
+      workspaceId: null,
+      kind: 'password-reset',
+      to: user.email,
+      idempotencyKey,
+      ...passwordResetMail({ link, minutes: PASSWORD_RESET_MINUTES }),
+    });
   });
 }
 

@@ -2,13 +2,14 @@ import pg from 'pg';
 import PgBoss from 'pg-boss';
 import type { MikroORM } from '@mikro-orm/postgresql';
 import type { Logger } from 'pino';
-import { MAIL_QUEUE, type MailJobData, type MailQueue } from './mail.service.js';
+import { MAIL_QUEUE, RESET_QUEUE, type MailJobData, type MailQueue, type ResetJobData } from './mail.service.js';
+import { issuePasswordReset } from '../auth/auth.service.js';
 import { smtpSender, type MailSender, type SmtpSettings } from './mail-transport.js';
 import { sendOutboxRow } from './mail-worker.js';
 
 /**
  * pg-boss for e-mail, in the app's own database (schema `pgboss`): the `mail.send` queue, its worker and a
- * reconciler. Started by server/main.ts (with the worker) and by the API tests (queue only, or with a worker
+ * reconciler, and the `auth.password-reset` queue whose jobs turn a reset request into a token and an e-mail. Started by server/main.ts (with the worker) and by the API tests (queue only, or with a worker
  * pointed at an in-process catcher). Every piece of state is in PostgreSQL; several instances can run at once.
  */
 export interface MailRetryOptions {
@@ -26,6 +27,8 @@ export interface StartMailOptions {
   databaseUrl: string;
   orm: MikroORM;
   smtp: SmtpSettings;
+  /** The app's address, for the links in e-mails the worker writes (password reset). */
+  publicUrl: string;
   /** Start the send worker in this process (default true). */
   work?: boolean;
   retry?: Partial<MailRetryOptions>;
@@ -97,6 +100,8 @@ export function createMailRuntime(opts: StartMailOptions): MailRuntime {
       await boss.start();
       await boss.createQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...retry });
       await boss.updateQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...retry });
+      await boss.createQueue(RESET_QUEUE, { name: RESET_QUEUE, ...retry });
+      await boss.updateQueue(RESET_QUEUE, { name: RESET_QUEUE, ...retry });
       started = true;
       if (!work) return;
       pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 3, application_name: appName });
@@ -114,6 +119,15 @@ export function createMailRuntime(opts: StartMailOptions): MailRuntime {
             opts.logger?.warn({ err, outboxId: job.data.outboxId, retryCount: job.retryCount }, 'mail send failed');
             throw err;
           }
+        },
+      );
+      const runtime: MailQueue = { boss, jobOptions };
+      await boss.work<ResetJobData>(
+        RESET_QUEUE,
+        { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 2 },
+        async ([job]) => {
+          // The job names the e-mail only; the log says nothing about whether it has an account.
+          await issuePasswordReset(opts.orm.em.fork(), job.data.email, opts.publicUrl, runtime, job.id);
         },
       );
       const p = pool;

@@ -11,6 +11,16 @@ export interface MailJobData {
   outboxId: number;
 }
 
+/**
+ * Password-reset requests, as jobs: the request only queues `{ email }` (the same work whether or not the e-mail has
+ * an account, so the answer's timing tells nothing); the mail worker issues the token and queues the e-mail.
+ */
+export const RESET_QUEUE = 'auth.password-reset';
+
+export interface ResetJobData {
+  email: string;
+}
+
 /** What a module gives to queue one e-mail. The body is final text; PDFs are described, rendered at send time. */
 export interface QueueMailInput {
   /** The outbox it shows in; null for mail no coach should see (password reset). */
