@@ -1,0 +1,100 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { MemoryRouter } from 'react-router-dom';
+import type { BoardDto } from '@shared/schemas/weeks.schema';
+import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
+
+// Invented names and addresses for the check.
+const clients = [
+  { id: 1, name: 'Ada Client', email: 'ada@example.test', householdMultiplier: '1' },
+  { id: 2, name: 'Ben Client', email: null, householdMultiplier: '1' },
+  { id: 3, name: 'Cy Off-board', email: 'cy@example.test', householdMultiplier: '1' },
+];
+const board = (over: Partial<BoardDto['week']> = {}) =>
+  ({
+    week: { id: 7, publishedVersion: 2, changedSincePublished: false, ...over },
+    cells: [
+      { clientId: 1, date: '2026-01-05', slot: 'breakfast', assemblyId: 1, prepDate: null, storage: 'fridge', allergenOverrides: [] },
+      { clientId: 2, date: '2026-01-05', slot: 'breakfast', assemblyId: 1, prepDate: null, storage: 'fridge', allergenOverrides: [] },
+    ],
+  }) as unknown as BoardDto;
+const json = (body: unknown, status = 200) =>
+  new Response(JSON.stringify(body), { status, headers: { 'content-type': status < 400 ? 'application/json' : 'application/problem+json' } });
+
+function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Response) {
+  const calls: { url: string; body: Record<string, unknown> | null }[] = [];
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (url: string, init?: RequestInit) => {
+      const body = init?.body ? (JSON.parse(String(init.body)) as Record<string, unknown>) : null;
+      calls.push({ url, body });
+      if (url === '/api/clients') return json(clients);
+      if (url === '/api/weeks/7/send') return send(body!);
+      if (url.startsWith('/api/outbox')) {
+        return json({ items: [], total: 1, page: 1, pageSize: 25, counts: { queued: 0, sending: 0, retrying: 0, sent: 1, failed: 0 }, batches: [] });
+      }
+      return json({ type: 'about:blank', title: 'Not found', status: 404, code: 'not_found', detail: url }, 404);
+    }),
+  );
+  const qc = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  render(
+    <MemoryRouter>
+      <QueryClientProvider client={qc}>
+        <SendPlansPanel board={b} />
+      </QueryClientProvider>
+    </MemoryRouter>,
+  );
+  return calls;
+}
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+describe('send plans panel', () => {
+  it('asks to publish first when the week was never published', () => {
+    renderPanel(board({ publishedVersion: null }), () => json({}));
+    expect(screen.getByText('Publish the week first')).toBeTruthy();
+  });
+
+  it('lists the clients on the board, counts only those with an e-mail, and sends to the ones chosen with the note', async () => {
+    const calls = renderPanel(board({ changedSincePublished: true }), () =>
+      json({ batchId: 'b-1', queued: 1, publicationVersion: 2, skipped: [], repeated: false }, 202),
+    );
+    const list = await screen.findByRole('list', { name: 'Clients on this week' });
+    expect(within(list).getAllByRole('listitem').map((li) => li.textContent)).toEqual([
+      expect.stringContaining('Ada Client'),
+      expect.stringContaining('No e-mail on the profile'),
+    ]);
+    expect(screen.getByText(/The board changed since version 2 was published/)).toBeTruthy();
+    expect(screen.getByRole('button', { name: 'Send to 1 client(s)' })).toBeTruthy();
+
+    fireEvent.click(screen.getByRole('radio', { name: 'Only the clients I choose' }));
+    const none = screen.getByRole('button', { name: 'Send to 0 client(s)' }) as HTMLButtonElement;
+    expect(none.disabled).toBe(true);
+    const [ada, ben] = within(list).getAllByRole('checkbox') as HTMLInputElement[];
+    expect(ben.disabled).toBe(true); // no e-mail: cannot be chosen
+    fireEvent.click(ada);
+    fireEvent.change(screen.getByLabelText('Personal note (optional)'), { target: { value: 'Enjoy the week' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Send to 1 client(s)' }));
+
+    await screen.findByText(/1 plan\(s\) queued/);
+    const sent = calls.find((c) => c.url === '/api/weeks/7/send')!.body!;
+    expect(sent).toMatchObject({ clientIds: [1], note: 'Enjoy the week' });
+    expect(typeof sent.requestId).toBe('string');
+    await waitFor(() => expect(screen.getByText(/1 sent · 0 waiting · 0 failed/)).toBeTruthy());
+    expect(calls.some((c) => c.url === '/api/outbox?batchId=b-1')).toBe(true);
+  });
+
+  it('shows why a send was refused and keeps the form', async () => {
+    renderPanel(board(), () =>
+      json({ type: 'about:blank', title: 'Bad request', status: 400, code: 'validation', detail: 'Invalid input', errors: { note: ['Note is too long'] } }, 400),
+    );
+    fireEvent.click(await screen.findByRole('button', { name: 'Send to 1 client(s)' }));
+    expect(await screen.findByText('Note is too long')).toBeTruthy();
+    expect(screen.getByText('Not sent')).toBeTruthy();
+    expect(screen.getByRole('button', { name: 'Send to 1 client(s)' })).toBeTruthy();
+  });
+});
