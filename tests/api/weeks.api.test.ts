@@ -1,6 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import { testApp } from '../support/test-app.js';
+import type { Orm } from '@server/db/orm.js';
+import { commitWeekEdit } from '@server/modules/weeks/week.service.js';
 import {
   coachWorkspace,
   makeAssembly,
@@ -26,8 +28,9 @@ function portionsOn(answer: BoardAnswer, date: string) {
 }
 
 let app: Express;
+let orm: Orm;
 beforeAll(async () => {
-  app = (await testApp()).app;
+  ({ app, orm } = await testApp());
 });
 
 
@@ -196,6 +199,42 @@ describe('the week board', () => {
     expect(second.body.current.cells).toEqual([expect.objectContaining({ assemblyId: plate.id, date: DAYS[0] })]);
     const rows = await sql<{ assembly_id: number }>('select assembly_id from week_cell where week_id = $1', [week.id]);
     expect(rows).toEqual([{ assembly_id: plate.id }]);
+  });
+
+  it('an edit checked against a version another edit has since replaced is refused in its transaction (409), nothing written', async () => {
+    const coach = await coachWorkspace(app);
+    const { week } = await setup(coach);
+    const actor = { userId: coach.userId, workspaceId: coach.workspaceId, role: 'coach', email: coach.email, name: 'Coach', clientId: null } as const;
+    // The edit was checked at version v; another edit lands before it commits.
+    const [{ version }] = await sql<{ version: number }>('select version from week where id = $1', [week.id]);
+    await sql('update week set version = version + 1 where id = $1', [week.id]);
+    let wrote = false;
+    const attempt = commitWeekEdit(orm.em.fork(), actor, { id: week.id, version }, async () => {
+      wrote = true;
+    });
+    await expect(attempt).rejects.toMatchObject({ name: 'OptimisticLockError' });
+    expect(wrote).toBe(false);
+    expect(await sql('select version from week where id = $1', [week.id])).toEqual([{ version: version + 1 }]);
+  });
+
+  it('two edits sent at the same moment from the same version: exactly one lands, the other gets 409', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach);
+    const other = await makeAssembly(coach, (plate.trays as { trayId: number }[])[0].trayId, { name: 'Other plate' });
+    for (let round = 0; round < 5; round++) {
+      const [{ version }] = await sql<{ version: number }>('select version from week where id = $1', [week.id]);
+      const [a, b] = await Promise.all([
+        fillWeek(coach, week.id, version, client.id, plate.id, [DAYS[0]]),
+        fillWeek(coach, week.id, version, client.id, other.id, [DAYS[0]]),
+      ]);
+      expect([a.status, b.status].sort()).toEqual([200, 409]);
+      const winner = a.status === 200 ? plate.id : other.id;
+      const rows = await sql<{ assembly_id: number; version: number }>(
+        'select c.assembly_id, w.version from week_cell c join week w on w.id = c.week_id where c.week_id = $1',
+        [week.id],
+      );
+      expect(rows).toEqual([{ assembly_id: winner, version: version + 1 }]);
+    }
   });
 
   it('shows day totals against the client’s targets, copies a day and a week', async () => {

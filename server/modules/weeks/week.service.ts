@@ -1,3 +1,4 @@
+import { LockMode } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
 import { addDays, compareIsoDates, daysBetween, type IsoDate } from '@shared/domain/iso-date.js';
@@ -21,6 +22,7 @@ import {
   boardInput,
   findWeek,
   getBoard,
+  loadBoardById,
   loadBoardData,
   prepDatesOf,
   presentBoard,
@@ -82,7 +84,7 @@ export async function createWeek(em: EntityManager, actor: Actor, v: CreateWeek)
   return getBoard(em, actor, w.id);
 }
 
-async function stale(em: EntityManager, actor: Actor, week: IWeek): Promise<never> {
+async function stale(em: EntityManager, actor: Actor, week: Pick<IWeek, 'id' | 'version'>): Promise<never> {
   throw new StaleEdit(week.version, await getBoard(em, actor, week.id));
 }
 
@@ -92,10 +94,18 @@ async function openForEdit(em: EntityManager, actor: Actor, id: number, version:
   return week;
 }
 
-/** Bumps the week's version with the rows written beside it (one transaction), then answers the new board. */
-async function commit(em: EntityManager, actor: Actor, week: IWeek, write: (tx: EntityManager, w: IWeek) => Promise<void>) {
+/**
+ * Bumps the week's version with the rows written beside it (one transaction), then answers the new board. The week
+ * must still be at the version the edit was checked against: another edit that landed in between makes this a 409
+ * (checked when the week is read in the transaction, and again by the versioned UPDATE), never a silent overwrite.
+ */
+export async function commitWeekEdit(em: EntityManager, actor: Actor, week: Pick<IWeek, 'id' | 'version'>, write: (tx: EntityManager, w: IWeek) => Promise<void>) {
   await em.transactional(async (tx) => {
-    const w = await tx.findOneOrFail(Week, { id: week.id, workspace: actor.workspaceId });
+    const w = await tx.findOneOrFail(
+      Week,
+      { id: week.id, workspace: actor.workspaceId },
+      { lockMode: LockMode.OPTIMISTIC, lockVersion: week.version, refresh: true },
+    );
     await write(tx, w);
     w.updatedAt = new Date();
     await tx.flush();
@@ -109,7 +119,7 @@ export async function updateWeek(em: EntityManager, actor: Actor, id: number, v:
   const prepDate = v.prepDate ?? week.prepDate;
   const second = v.secondPrepDate === undefined ? week.secondPrepDate : v.secondPrepDate;
   checkPrepDates(week.startDate, prepDate, second);
-  return commit(em, actor, week, async (tx, w) => {
+  return commitWeekEdit(em, actor, week, async (tx, w) => {
     // Counts and cell choices follow their prep date when it moves.
     const moves: [IsoDate | null | undefined, IsoDate | null][] = [
       [w.prepDate, prepDate],
@@ -194,11 +204,17 @@ function boardPlateAllergens(d: BoardData, assemblyId: number): AllergenCode[] {
 
 /** Sets, changes or empties cells (a partial update of the board, all-or-nothing). */
 export async function putCells(em: EntityManager, actor: Actor, id: number, v: PutCells): Promise<BoardAnswer> {
-  const week = await openForEdit(em, actor, id, v.version);
-  const data = await loadBoardData(em, actor, week);
+  // The week and what the cells are checked against, in one round (a drag on the board runs this).
+  const data = await loadBoardById(em, actor, id);
+  if (data.week.version !== v.version) await stale(em, actor, data.week);
   checkCells(data, v.cells);
-  return commit(em, actor, week, async (tx, w) => {
-    const existing = await tx.find(WeekCell, { week: w.id, date: { $in: [...new Set(v.cells.map((c) => c.date))] } });
+  return commitWeekEdit(em, actor, data.week, async (tx, w) => {
+    // Only the rows of the edited clients and days (a drag touches one cell; the ORM hydrates and diffs every row read).
+    const existing = await tx.find(WeekCell, {
+      week: w.id,
+      client: { $in: [...new Set(v.cells.map((c) => c.clientId))] },
+      date: { $in: [...new Set(v.cells.map((c) => c.date))] },
+    });
     const byKey = new Map(existing.map((c) => [cellKey({ clientId: c.client.id, date: c.date, slot: c.slot }), c]));
     for (const c of v.cells) {
       const row = byKey.get(cellKey(c));
@@ -234,7 +250,7 @@ export async function putTrays(em: EntityManager, actor: Actor, id: number, v: P
 }
 
 async function replaceTrays(em: EntityManager, actor: Actor, week: IWeek, trays: { trayId: number; prepDate: IsoDate; trayCount: number }[]) {
-  return commit(em, actor, week, async (tx, w) => {
+  return commitWeekEdit(em, actor, week, async (tx, w) => {
     await tx.nativeDelete(WeekTray, { week: w.id });
     const merged = new Map<string, { trayId: number; prepDate: IsoDate; trayCount: number }>();
     for (const t of trays) {
@@ -262,7 +278,7 @@ export async function copyDay(em: EntityManager, actor: Actor, id: number, v: Co
   if (!days.includes(v.toDate)) throw ValidationError.field('toDate', 'This day is not on the board of this week');
   if (v.fromDate === v.toDate) throw ValidationError.field('toDate', 'Pick another day to copy to');
   const filter = v.clientId ? { client: v.clientId } : {};
-  return commit(em, actor, week, async (tx, w) => {
+  return commitWeekEdit(em, actor, week, async (tx, w) => {
     const from = await tx.find(WeekCell, { week: w.id, date: v.fromDate, ...filter });
     await tx.nativeDelete(WeekCell, { week: w.id, date: v.toDate, ...filter });
     for (const c of from) {
