@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Actor } from '../../http/authz.js';
+import { preparedRows } from '../../db/prepared.js';
 import { BadCredentials, Conflict, NotFound, ValidationError } from '../../http/errors.js';
 import type {
   AcceptInvitationInput,
@@ -58,20 +59,27 @@ export async function loadActor(em: EntityManager, userId: number): Promise<Acto
   return rows[0] ? actorFromRow(rows[0]) : null;
 }
 
+/** The signed-in person and their workspace: one prepared statement (every page load of the app asks for it). */
 export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
-  const user = await em.findOneOrFail(User, actor.userId);
-  const ws = await em.findOneOrFail(Workspace, actor.workspaceId);
+  const [row] = await preparedRows<{ id: number; email: string; name: string; unitSystem: string; tempUnit: string; workspaceName: string; workspaceIsDemo: boolean }>(
+    em,
+    'trayline_me',
+    `select u.id, u.email, u.name, u.unit_system as "unitSystem", u.temp_unit as "tempUnit", w.name as "workspaceName", w.is_demo as "workspaceIsDemo"
+       from app_user u, workspace w where u.id = $1 and w.id = $2`,
+    [actor.userId, actor.workspaceId],
+  );
+  if (!row) throw new NotFound('User');
   return {
-    id: user.id,
-    email: user.email,
-    name: user.name,
+    id: row.id,
+    email: row.email,
+    name: row.name,
     role: actor.role,
-    workspaceId: ws.id,
-    workspaceName: ws.name,
-    workspaceIsDemo: ws.isDemo,
+    workspaceId: actor.workspaceId,
+    workspaceName: row.workspaceName,
+    workspaceIsDemo: row.workspaceIsDemo,
     clientId: actor.clientId,
-    unitSystem: user.unitSystem as MeDto['unitSystem'],
-    tempUnit: user.tempUnit as MeDto['tempUnit'],
+    unitSystem: row.unitSystem as MeDto['unitSystem'],
+    tempUnit: row.tempUnit as MeDto['tempUnit'],
   };
 }
 
