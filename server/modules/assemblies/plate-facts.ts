@@ -263,16 +263,44 @@ export function addOnGrams(item: PlateItemRow, ctx: PlateContext): Decimal | nul
 /** Facts computed for a context, per plate: a board asks for the same plate's facts several times. */
 const factsMemo = new WeakMap<PlateContext, WeakMap<PlateLike, PlateFacts>>();
 
+/**
+ * A number per tray-facts object. Tray facts come from the `trayFacts` memo, so one object stands for one content:
+ * a plate's key can name its trays by these numbers instead of their whole content.
+ */
+const trayFactNumbers = new WeakMap<TrayFacts, number>();
+let lastTrayFactNumber = 0;
+function trayFactNumber(t: TrayFacts): number {
+  let n = trayFactNumbers.get(t);
+  if (n === undefined) trayFactNumbers.set(t, (n = ++lastTrayFactNumber));
+  return n;
+}
+
+/** Everything computePlateFacts reads: the plate's name and items, its trays' facts, its add-ons' rows, the rule. */
+function plateFactsKey(a: PlateLike, ctx: PlateContext): string {
+  const items = itemsOf(a).map((i) => {
+    if (i.tray) {
+      const t = ctx.trays.get(i.tray.id);
+      return ['tray', i.tray.id, i.portions ?? null, t ? trayFactNumber(t) : null];
+    }
+    if (i.ingredient) return ['add-on', i.ingredient.id, i.amount ?? null, i.unit, ctx.ingredients.get(i.ingredient.id) ?? null];
+    return ['none'];
+  });
+  return JSON.stringify([a.id, a.name, items, ctx.rule]);
+}
+
+/** Plate facts memoized on everything they are computed from (see plateFactsKey), across requests. */
+const memoPlateFacts: (a: PlateLike, ctx: PlateContext) => PlateFacts = pureMemo(computePlateFacts, plateFactsKey, 5000);
+
 /** A plate's nutrients (sum of tray portions and add-ons), allergens and dislike terms (computed once per context). */
 export function plateFacts(a: PlateLike, ctx: PlateContext): PlateFacts {
   let memo = factsMemo.get(ctx);
   if (!memo) factsMemo.set(ctx, (memo = new WeakMap()));
   let f = memo.get(a);
-  if (!f) memo.set(a, (f = computePlateFacts(a, ctx)));
+  if (!f) memo.set(a, (f = memoPlateFacts(a, ctx)));
   return f;
 }
 
-function computePlateFacts(a: PlateLike, ctx: PlateContext): PlateFacts {
+export function computePlateFacts(a: PlateLike, ctx: PlateContext): PlateFacts {
   let sums = zeroSums();
   let complete = true;
   const allergens = new Set<AllergenCode>();
@@ -304,14 +332,15 @@ function computePlateFacts(a: PlateLike, ctx: PlateContext): PlateFacts {
     }
   }
   const vector = toVector(sums, ctx.rule);
+  // Frozen: the memo shares these between requests.
   return {
     id: a.id,
-    vector,
-    macros: macrosOf(vector),
+    vector: Object.freeze(vector),
+    macros: Object.freeze(macrosOf(vector)),
     complete,
-    allergens: ALLERGEN_CODES.filter((c) => allergens.has(c)),
-    terms: [...new Set(terms)],
-    trays,
+    allergens: Object.freeze(ALLERGEN_CODES.filter((c) => allergens.has(c))) as AllergenCode[],
+    terms: Object.freeze([...new Set(terms)]) as string[],
+    trays: Object.freeze(trays.map((t) => Object.freeze(t))) as PlateFacts['trays'],
   };
 }
 
