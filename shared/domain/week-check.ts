@@ -84,7 +84,7 @@ export type WeekWarning =
   | (WarningBase & { kind: 'protein-short'; actualG: number; targetG: number; floorG: number })
   | (WarningBase & { kind: 'energy-over'; actualKcal: number; targetKcal: number; limitKcal: number })
   | (WarningBase & { kind: 'allergen'; slot: string; allergen: AllergenCode; overridden: boolean; reason?: string })
-  | (WarningBase & { kind: 'dislike'; slot: string; term: string })
+  | (WarningBase & { kind: 'dislike'; slot: string; term: string; matched?: string })
   | (WarningBase & { kind: 'past-eat-by'; slot: string; trayId: string; prepDate: IsoDate; eatBy: IsoDate })
   | (WarningBase & { kind: 'before-prep'; slot: string; trayId: string; prepDate: IsoDate })
   | (WarningBase & { kind: 'past-freezer-quality'; slot: string; trayId: string; prepDate: IsoDate; qualityUntil: IsoDate });
@@ -111,7 +111,7 @@ export function warningMessage(w: WarningData, date: IsoDate): string {
         ? `${allergenLabel(w.allergen)} is on the client's allergen list; allowed by the coach: ${w.reason}`
         : `${allergenLabel(w.allergen)} is on the client's allergen list.`;
     case 'dislike':
-      return `The client dislikes ${w.term}.`;
+      return w.matched && w.matched !== w.term ? `The client dislikes ${w.term} (${w.matched}).` : `The client dislikes ${w.term}.`;
     case 'before-prep':
       return `Planned on ${date}, before its tray is made on ${w.prepDate}.`;
     case 'past-freezer-quality':
@@ -149,8 +149,8 @@ export function normalizeTerm(term: string): string {
  */
 type ExactMacros = { kcal: Decimal; netCarbsG: Decimal; proteinG: Decimal; fatG: Decimal };
 const exactMacros = new WeakMap<CellMacros, { from: CellMacros; exact: ExactMacros }>();
-const normalizedTerms = new WeakMap<readonly string[], { from: string[]; terms: string[] }>();
-const normalizedDislikes = new WeakMap<readonly string[], { from: string[]; set: Set<string> }>();
+const normalizedTerms = new WeakMap<readonly string[], { from: string[]; terms: TermWords[] }>();
+const normalizedDislikes = new WeakMap<readonly string[], { from: string[]; list: TermWords[] }>();
 
 const sameList = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((x, i) => x === b[i]);
 
@@ -204,18 +204,57 @@ function limitsOf(targets: MacroTargets, rules: CheckRules): Limits {
   return limits;
 }
 
-function dislikeSet(list: readonly string[]): Set<string> {
-  const e = normalizedDislikes.get(list);
-  if (e && sameList(e.from, list)) return e.set;
-  const set = new Set(list.map(normalizeTerm).filter(Boolean));
-  normalizedDislikes.set(list, { from: [...list], set });
-  return set;
+/** A normalized term and its words, plurals folded (see termWords). */
+interface TermWords {
+  term: string;
+  words: Set<string>;
 }
 
-function termList(list: readonly string[]): string[] {
+/**
+ * The words of a term, lower-case, with simple English plurals folded to one form ("mushrooms" → "mushroom",
+ * "berries" → "berry", "tomatoes" → "tomato"), so a dislike typed as people say it finds the library's names
+ * ("onions" finds "Onions, raw"). Both sides are folded the same way, so an odd fold ("asparagus" → "asparagu")
+ * still matches itself. Common practice (simple plural folding), no source.
+ */
+export function termWords(term: string): Set<string> {
+  const words = new Set<string>();
+  for (const raw of normalizeTerm(term).split(/[^\p{L}\p{N}]+/u)) {
+    if (!raw) continue;
+    let w = raw;
+    if (w.length > 4 && w.endsWith('ies')) w = `${w.slice(0, -3)}y`;
+    else if (w.length > 4 && w.endsWith('oes')) w = w.slice(0, -2);
+    else if (w.length > 3 && w.endsWith('s') && !w.endsWith('ss')) w = w.slice(0, -1);
+    words.add(w);
+  }
+  return words;
+}
+
+/** Whether a plate term contains every word of a dislike (in any order): "red onion" is in "Onions, red, raw". */
+export function dislikeMatches(dislike: ReadonlySet<string>, term: ReadonlySet<string>): boolean {
+  if (dislike.size === 0) return false;
+  for (const w of dislike) if (!term.has(w)) return false;
+  return true;
+}
+
+function dislikeList(list: readonly string[]): TermWords[] {
+  const e = normalizedDislikes.get(list);
+  if (e && sameList(e.from, list)) return e.list;
+  const seen = new Set<string>();
+  const out: TermWords[] = [];
+  for (const d of list) {
+    const term = normalizeTerm(d);
+    if (!term || seen.has(term)) continue;
+    seen.add(term);
+    out.push({ term, words: termWords(term) });
+  }
+  normalizedDislikes.set(list, { from: [...list], list: out });
+  return out;
+}
+
+function termList(list: readonly string[]): TermWords[] {
   const e = normalizedTerms.get(list);
   if (e && sameList(e.from, list)) return e.terms;
-  const terms = [...new Set(list.map(normalizeTerm))];
+  const terms = [...new Set(list.map(normalizeTerm))].filter(Boolean).map((term) => ({ term, words: termWords(term) }));
   normalizedTerms.set(list, { from: [...list], terms });
   return terms;
 }
@@ -338,14 +377,18 @@ function allergenWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] 
   });
 }
 
+/** One warning per dislike the plate meets, naming the first of its terms (ingredient, tray, tag) that holds it. */
 function dislikeWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] {
   if (input.clientDislikes.length === 0) return [];
-  const dislikes = dislikeSet(input.clientDislikes);
-  const hits = termList(cell.terms).filter((t) => dislikes.has(t));
-  return hits.map((term) => ({
-    kind: 'dislike' as const, severity: 'warn' as const, clientId: input.clientId, date: input.date,
-    slot: cell.slot, term, message: warningMessage({ kind: 'dislike', severity: 'warn', slot: cell.slot, term }, input.date),
-  }));
+  const terms = termList(cell.terms);
+  const out: WeekWarning[] = [];
+  for (const d of dislikeList(input.clientDislikes)) {
+    const hit = terms.find((t) => dislikeMatches(d.words, t.words));
+    if (!hit) continue;
+    const w = { kind: 'dislike' as const, severity: 'warn' as const, slot: cell.slot, term: d.term, matched: hit.term };
+    out.push({ ...w, clientId: input.clientId, date: input.date, message: warningMessage(w, input.date) });
+  }
+  return out;
 }
 
 function portionWarning(input: DayCheckInput, cell: CheckCell, portion: CellPortion): WeekWarning | null {

@@ -261,6 +261,18 @@ describe('the week board', () => {
     expect(next.body.cells.map((c: { date: string }) => c.date).sort()).toEqual(['2026-01-12', '2026-01-13']);
   });
 
+  it('flags a dislike typed as people say it against the library name of an ingredient in the tray', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, week, ing } = await setup(coach);
+    const client = await makeClient(coach, { dislikes: ['Cheeses'] });
+    const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id, [DAYS[0]]);
+    const dislikes = flatWarnings(expandBoard(filled.body).checks).filter((w) => w.kind === 'dislike');
+    expect(dislikes).toEqual([
+      expect.objectContaining({ clientId: String(client.id), date: DAYS[0], term: 'cheeses', matched: ing.name.toLowerCase(), severity: 'warn' }),
+    ]);
+    expect(dislikes[0].message).toBe(`The client dislikes cheeses (${ing.name.toLowerCase()}).`);
+  });
+
   it('answers 400 naming the field for a day off the board or an unknown slot', async () => {
     const coach = await coachWorkspace(app);
     const { plate, client, week } = await setup(coach);

@@ -170,13 +170,40 @@ describe('allergens (block unless overridden with a reason)', () => {
 });
 
 describe('dislikes', () => {
-  it('matches names and tags case- and space-insensitively, once per term', () => {
+  it('matches names and tags case- and space-insensitively, once per dislike, plurals folded', () => {
     const result = checkDay(day({
       targets: { ...targets, proteinG: 0 },
-      clientDislikes: ['Cauliflower', 'mushrooms'],
+      clientDislikes: ['Cauliflower', 'mushrooms', 'CAULIFLOWER '],
       cells: [cell({ slot: 'lunch', terms: ['cauliflower ', 'CAULIFLOWER', 'egg', 'mushroom'] })],
     }));
-    expect(result.warnings.map((w) => (w.kind === 'dislike' ? [w.term, w.severity] : w.kind))).toEqual([['cauliflower', 'warn']]);
+    expect(result.warnings.map((w) => (w.kind === 'dislike' ? [w.term, w.severity] : w.kind))).toEqual([
+      ['cauliflower', 'warn'],
+      ['mushrooms', 'warn'],
+    ]);
+  });
+
+  // Library names read like "Onions, raw" (USDA FoodData Central descriptions); coaches type "onions" or "red onion".
+  it.each([
+    { dislike: 'onions', term: 'Onions, raw', hit: true },
+    { dislike: 'onion', term: 'Onions, raw', hit: true },
+    { dislike: 'red onion', term: 'Onions, red, raw', hit: true },
+    { dislike: 'tomatoes', term: 'Tomatoes, cherry, raw', hit: true },
+    { dislike: 'cherry tomato', term: 'Tomatoes, cherry, raw', hit: true },
+    { dislike: 'berries', term: 'Blackberries, raw', hit: false }, // whole words only: a berry dislike does not reach "blackberries"
+    { dislike: 'egg', term: 'Eggplant, raw', hit: false },
+    { dislike: 'cream', term: 'Cheese, cream', hit: true },
+    { dislike: 'sweet', term: 'sweet', hit: true },
+    { dislike: 'red onion', term: 'Onions, raw', hit: false },
+  ])('"$dislike" in "$term" → $hit', ({ dislike, term, hit }) => {
+    const result = checkDay(day({ targets: { ...targets, proteinG: 0 }, clientDislikes: [dislike], cells: [cell({ terms: [term] })] }));
+    const found = result.warnings.filter((w) => w.kind === 'dislike');
+    expect(found.length).toBe(hit ? 1 : 0);
+    if (hit) expect(found[0]).toMatchObject({ term: normalizeTerm(dislike), matched: normalizeTerm(term) });
+  });
+
+  it('words the warning with the dislike and the plate term that holds it', () => {
+    const [w] = checkDay(day({ targets: { ...targets, proteinG: 0 }, clientDislikes: ['Onions'], cells: [cell({ terms: ['Egg slab', 'Onions, red, raw'] })] })).warnings;
+    expect(w.message).toBe('The client dislikes onions (onions, red, raw).');
   });
 
   it.each([
