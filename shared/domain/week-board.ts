@@ -9,11 +9,11 @@
  * - A cell stored 'frozen' follows the freeze-and-thaw remedy: frozen on its prep day, thawed the evening before.
  */
 import { eatByRemedies, portionStatus, supplyingPrepDate, type EatByRemedy, type PortionStatusKind } from './eat-by';
-import { portionCount, type BoardCell, type TrayTally } from './inventory';
+import { portionCount, type BoardCell, type BoardPortion, type TrayTally } from './inventory';
 import { compareIsoDates, type IsoDate } from './iso-date';
 import type { AllergenCode } from './allergens';
 import type { MacroTargets } from './targets';
-import { checkWeek, type AllergenOverride, type CellMacros, type CheckCell, type DayCheck, type WeekWarning } from './week-check';
+import { checkWeek, type AllergenOverride, type CellMacros, type CellPortion, type CheckCell, type DayCheck, type WeekWarning } from './week-check';
 
 export interface BoardClient {
   id: number;
@@ -177,6 +177,13 @@ function cellPortions(cell: BoardCellInput, plate: BoardPlate, input: BoardInput
   return portionsWithMemo(cell, trays, input.prepDates, memo);
 }
 
+/** What every cell with the same plate, day, prep date and storage shares (computed once per board). */
+interface CellShape {
+  portions: CellPortionResult[];
+  checkPortions: CheckCell['portions'];
+  inventoryPortions: BoardCell['portions'];
+}
+
 /** The whole board: day checks (blocks first), per-cell eat-by and remedies, and the portion count. */
 export function computeBoard(input: BoardInput): BoardResult {
   const clients = new Map(input.clients.map((c) => [c.id, c]));
@@ -184,13 +191,29 @@ export function computeBoard(input: BoardInput): BoardResult {
   const cellResults: CellResult[] = [];
   const inventoryCells: BoardCell[] = [];
   const memo = newMemo();
+  // A board repeats the same few plate × day × prep date × storage combinations for every client: their portions,
+  // eat-by and counting rows are computed once and shared (read-only) by the cells.
+  const shapes = new Map<string, CellShape>();
 
   for (const cell of input.cells) {
     const client = clients.get(cell.clientId);
     const plate = input.plates.get(cell.assemblyId);
     if (!client || !plate) continue;
-    const portions = cellPortions(cell, plate, input, memo);
-    cellResults.push({ clientId: cell.clientId, date: cell.date, slot: cell.slot, portions });
+    const shapeKey = `${cell.assemblyId}|${cell.date}|${cell.prepDate ?? ''}|${cell.storage}`;
+    let shape = shapes.get(shapeKey);
+    if (!shape) {
+      const portions = cellPortions(cell, plate, input, memo);
+      const checkPortions: CellPortion[] = [];
+      for (const p of portions) {
+        const tray = input.trays.get(p.trayId)!;
+        checkPortions.push({ trayId: String(p.trayId), prepDate: p.prepDate, fridgeDays: tray.fridgeDays, storage: p.storage, freezerWeeks: tray.freezerWeeks });
+      }
+      const prepDate = portions[0]?.prepDate ?? memoPrepDate(memo, cell, input.prepDates);
+      const inventoryPortions: BoardPortion[] = [];
+      for (const t of plate.trays) if (input.trays.has(t.trayId)) inventoryPortions.push({ trayId: String(t.trayId), quantity: t.portions, prepDate });
+      shapes.set(shapeKey, (shape = { portions, checkPortions, inventoryPortions }));
+    }
+    cellResults.push({ clientId: cell.clientId, date: cell.date, slot: cell.slot, portions: shape.portions });
 
     const key = `${cell.clientId}|${cell.date}`;
     let day = byDay.get(key);
@@ -201,22 +224,10 @@ export function computeBoard(input: BoardInput): BoardResult {
       allergens: plate.allergens,
       terms: plate.terms,
       allergenOverrides: cell.allergenOverrides,
-      portions: portions.map((p) => ({
-        trayId: String(p.trayId),
-        prepDate: p.prepDate,
-        fridgeDays: input.trays.get(p.trayId)!.fridgeDays,
-        storage: p.storage,
-        freezerWeeks: input.trays.get(p.trayId)!.freezerWeeks,
-      })),
+      portions: shape.checkPortions,
     });
 
-    inventoryCells.push({
-      date: cell.date,
-      householdMultiplier: client.householdMultiplier,
-      portions: plate.trays
-        .filter((t) => input.trays.has(t.trayId))
-        .map((t) => ({ trayId: String(t.trayId), quantity: t.portions, prepDate: portions[0]?.prepDate ?? memoPrepDate(memo, cell, input.prepDates) })),
-    });
+    inventoryCells.push({ date: cell.date, householdMultiplier: client.householdMultiplier, portions: shape.inventoryPortions });
   }
 
   const { days, warnings } = checkWeek(
@@ -232,10 +243,13 @@ export function computeBoard(input: BoardInput): BoardResult {
 
   // A tray the board needs but nobody has set a count for yet counts as 0 trays (so its cut plan is known).
   const batches = [...input.batches];
-  for (const c of inventoryCells) {
-    for (const p of c.portions) {
-      const trayId = Number(p.trayId);
-      if (!batches.some((b) => b.trayId === trayId && b.prepDate === p.prepDate)) batches.push({ trayId, prepDate: p.prepDate!, trayCount: 0 });
+  const counted = new Set(batches.map((b) => `${b.trayId}|${b.prepDate}`));
+  for (const shape of shapes.values()) {
+    for (const p of shape.inventoryPortions) {
+      const batchKey = `${p.trayId}|${p.prepDate}`;
+      if (counted.has(batchKey)) continue;
+      counted.add(batchKey);
+      batches.push({ trayId: Number(p.trayId), prepDate: p.prepDate!, trayCount: 0 });
     }
   }
   const inventory = portionCount({

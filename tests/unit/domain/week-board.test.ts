@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { computeBoard, coveringBatches, type BoardInput } from '@shared/domain/week-board';
+import { cellEatBy, computeBoard, coveringBatches, type BoardInput } from '@shared/domain/week-board';
+import { checkWeek, type CheckCell, type DayCheckInput } from '@shared/domain/week-check';
+import { portionCount } from '@shared/domain/inventory';
 import { addDays } from '@shared/domain/iso-date';
 
 const START = '2026-01-05'; // Monday
@@ -66,6 +68,71 @@ describe('computeBoard', () => {
           return covered.short === 0 && covered.spare < perTray;
         },
       ),
+    );
+  });
+});
+
+describe('computeBoard shares the work of cells alike without changing any answer', () => {
+  // Reference: every cell computed on its own with the same shared functions (cellEatBy for its portions, a day check
+  // of its client's cells, the portion count over one row per cell): what the board must equal whatever it shares.
+  const TRAYS = new Map([
+    [7, { id: 7, fridgeDays: 4, freezerWeeks: 8, portionsPerTray: 16 }],
+    [8, { id: 8, fridgeDays: 3, freezerWeeks: 4, portionsPerTray: 12 }],
+  ]);
+  const PLATES = new Map([
+    [10, { id: 10, macros: { kcal: 500, netCarbsG: 4, proteinG: 30, fatG: 40 }, allergens: ['egg' as const], terms: ['egg slab'], trays: [{ trayId: 7, portions: '1' }] }],
+    [11, { id: 11, macros: { kcal: 350.5, netCarbsG: 6.2, proteinG: 18.4, fatG: 25 }, allergens: [], terms: ['Onions, raw', 'sweet'], trays: [{ trayId: 7, portions: '0.5' }, { trayId: 8, portions: '2' }] }],
+  ]);
+  const PREP = ['2026-01-04', '2026-01-07'];
+  const cellArb = fc.record({
+    clientId: fc.integer({ min: 1, max: 4 }),
+    date: fc.constantFrom(...DAYS),
+    slot: fc.constantFrom('breakfast', 'lunch'),
+    assemblyId: fc.constantFrom(10, 11),
+    prepDate: fc.constantFrom(null, ...PREP),
+    storage: fc.constantFrom('fridge' as const, 'frozen' as const),
+  });
+  it('equals the cell-by-cell computation on 200 random boards', () => {
+    fc.assert(
+      fc.property(fc.uniqueArray(cellArb, { selector: (c) => `${c.clientId}|${c.date}|${c.slot}`, maxLength: 40 }), (cells) => {
+        const clients = [1, 2, 3, 4].map((id) => ({
+          id,
+          householdMultiplier: ['1', '2', '1.5', '0.5'][id - 1],
+          targets: { targetKcal: 600, netCarbCapG: 6, proteinG: 30, fatG: 45 },
+          allergens: id === 2 ? (['egg'] as const) : [],
+          dislikes: id === 3 ? ['onions'] : [],
+        }));
+        const input: BoardInput = { ...board(), prepDates: PREP, clients, plates: PLATES, trays: TRAYS, cells: cells.map((c) => ({ ...c, allergenOverrides: [] })) };
+        const r = computeBoard(input);
+
+        // Portions and eat-by of every cell, as the page computes the selected one.
+        expect(r.cells.map((c) => c.portions)).toEqual(
+          input.cells.map((c) => cellEatBy(c, PLATES.get(c.assemblyId)!.trays.map((t) => ({ trayId: t.trayId, ...TRAYS.get(t.trayId)! })), PREP)),
+        );
+        // Day checks over each client's cells, built one by one.
+        const byDay = new Map<string, DayCheckInput>();
+        for (const [i, c] of input.cells.entries()) {
+          const client = clients[c.clientId - 1];
+          const plate = PLATES.get(c.assemblyId)!;
+          const key = `${c.clientId}|${c.date}`;
+          if (!byDay.has(key)) byDay.set(key, { clientId: String(c.clientId), date: c.date, targets: client.targets, clientAllergens: client.allergens, clientDislikes: client.dislikes, cells: [] });
+          (byDay.get(key)!.cells as CheckCell[]).push({
+            slot: c.slot, macros: plate.macros, allergens: plate.allergens, terms: plate.terms, allergenOverrides: [],
+            portions: r.cells[i].portions.map((p) => ({ trayId: String(p.trayId), prepDate: p.prepDate, fridgeDays: TRAYS.get(p.trayId)!.fridgeDays, storage: p.storage, freezerWeeks: TRAYS.get(p.trayId)!.freezerWeeks })),
+          });
+        }
+        expect(r.days).toEqual(checkWeek([...byDay.values()]).days);
+        // The portion count over one row per cell.
+        const rows = input.cells.map((c, i) => ({
+          date: c.date,
+          householdMultiplier: clients[c.clientId - 1].householdMultiplier,
+          portions: PLATES.get(c.assemblyId)!.trays.map((t) => ({ trayId: String(t.trayId), quantity: t.portions, prepDate: r.cells[i].portions[0].prepDate })),
+        }));
+        const pairs = [...new Set(rows.flatMap((row) => row.portions.map((p) => `${p.trayId}|${p.prepDate}`)))];
+        const batches = pairs.map((k) => ({ trayId: k.split('|')[0], prepDate: k.split('|')[1], trayCount: 0, portionsPerTray: TRAYS.get(Number(k.split('|')[0]))!.portionsPerTray }));
+        expect(r.inventory).toEqual(portionCount({ prepDates: PREP, cells: rows, batches }));
+      }),
+      { numRuns: 200 },
     );
   });
 });
