@@ -164,7 +164,17 @@ try {
     if (i > 200 || server.exitCode !== null) throw new Error('The server did not start');
     await new Promise((r) => setTimeout(r, 100));
   }
-  const ctx: BenchContext = { base, cookie: '' };
+  const healthRequest: Request = { method: 'GET', path: '/api/health', headers: {} };
+  const ctx: BenchContext = {
+    base,
+    cookie: '',
+    databaseUrl: url,
+    healthMedian: async (n) => {
+      const s = { times: [] as number[], bytes: 0, errors: 0 };
+      await samples(base, healthRequest, n, s);
+      return summary(s).median;
+    },
+  };
   const login = await fetch(`${base}/api/auth/login`, {
     method: 'POST',
     headers: { 'content-type': 'application/json', 'x-trayline-csrf': '1' },
