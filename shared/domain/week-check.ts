@@ -121,6 +121,12 @@ export function warningMessage(w: WarningData, date: IsoDate): string {
   }
 }
 
+/** A warning built with its facts, given its sentence (warningMessage, the one wording). */
+function worded<W extends WeekWarning>(w: W): W {
+  w.message = warningMessage(w, w.date);
+  return w;
+}
+
 export interface DayTotals {
   kcal: number;
   netCarbsG: number;
@@ -345,18 +351,15 @@ function macroWarnings(input: DayCheckInput, sums: DaySums, actual: DayTotals): 
   const { floor, limit, capMilliFloor, floorMilliCeil, limitMilliFloor, floorG, limitKcal } = limitsOf(targets, rules);
   if (sums.milli ? sums.milli.netCarbsG > capMilliFloor : sums.exact.netCarbsG.gt(targets.netCarbCapG)) {
     const actualG = actual.netCarbsG;
-    const w = { severity, kind: 'net-carbs-over' as const, actualG, capG: targets.netCarbCapG };
-    warnings.push({ severity, clientId, date, kind: w.kind, actualG, capG: w.capG, message: warningMessage(w, date) });
+    warnings.push(worded({ severity, clientId, date, kind: 'net-carbs-over', actualG, capG: targets.netCarbCapG, message: '' }));
   }
   if (sums.milli ? sums.milli.proteinG < floorMilliCeil : sums.exact.proteinG.lt(floor)) {
     const actualG = actual.proteinG;
-    const w = { severity, kind: 'protein-short' as const, actualG, targetG: targets.proteinG, floorG };
-    warnings.push({ severity, clientId, date, kind: w.kind, actualG, targetG: w.targetG, floorG, message: warningMessage(w, date) });
+    warnings.push(worded({ severity, clientId, date, kind: 'protein-short', actualG, targetG: targets.proteinG, floorG, message: '' }));
   }
   if (sums.milli ? sums.milli.kcal > limitMilliFloor : sums.exact.kcal.gt(limit)) {
     const actualKcal = actual.kcal;
-    const w = { severity, kind: 'energy-over' as const, actualKcal, targetKcal: targets.targetKcal, limitKcal };
-    warnings.push({ severity, clientId, date, kind: w.kind, actualKcal, targetKcal: w.targetKcal, limitKcal, message: warningMessage(w, date) });
+    warnings.push(worded({ severity, clientId, date, kind: 'energy-over', actualKcal, targetKcal: targets.targetKcal, limitKcal, message: '' }));
   }
   return warnings;
 }
@@ -365,15 +368,17 @@ function allergenWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] 
   return allergenConflicts(cell.allergens, input.clientAllergens).map((allergen) => {
     const reason = cell.allergenOverrides?.find((o) => o.allergen === allergen)?.reason.trim();
     const overridden = Boolean(reason);
-    const w = {
-      kind: 'allergen' as const,
-      severity: overridden ? ('warn' as const) : ('block' as const),
+    return worded({
+      kind: 'allergen',
+      severity: overridden ? 'warn' : 'block',
+      clientId: input.clientId,
+      date: input.date,
       slot: cell.slot,
       allergen,
       overridden,
       ...(overridden ? { reason } : {}),
-    };
-    return { ...w, clientId: input.clientId, date: input.date, message: warningMessage(w, input.date) };
+      message: '',
+    });
   });
 }
 
@@ -385,8 +390,7 @@ function dislikeWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] {
   for (const d of dislikeList(input.clientDislikes)) {
     const hit = terms.find((t) => dislikeMatches(d.words, t.words));
     if (!hit) continue;
-    const w = { kind: 'dislike' as const, severity: 'warn' as const, slot: cell.slot, term: d.term, matched: hit.term };
-    out.push({ ...w, clientId: input.clientId, date: input.date, message: warningMessage(w, input.date) });
+    out.push(worded({ kind: 'dislike', severity: 'warn', clientId: input.clientId, date: input.date, slot: cell.slot, term: d.term, matched: hit.term, message: '' }));
   }
   return out;
 }
@@ -397,18 +401,15 @@ function portionWarning(input: DayCheckInput, cell: CheckCell, portion: CellPort
   const { trayId, prepDate } = portion;
   const { status, eatBy } = portionStatus({ plannedDate: input.date, prepDate: portion.prepDate, fridgeDays: portion.fridgeDays });
   if (status === 'before-prep') {
-    const w = { slot, trayId, prepDate, kind: 'before-prep' as const, severity: 'block' as const };
-    return { clientId, date, slot, trayId, prepDate, kind: w.kind, severity: w.severity, message: warningMessage(w, date) };
+    return worded({ clientId, date, slot, trayId, prepDate, kind: 'before-prep', severity: 'block', message: '' });
   }
   if (portion.storage === 'frozen') {
     const qualityUntil = freezerQualityDate(portion.prepDate, portion.freezerWeeks ?? 0);
     if (compareIsoDates(input.date, qualityUntil) <= 0) return null;
-    const w = { slot, trayId, prepDate, kind: 'past-freezer-quality' as const, severity: 'warn' as const, qualityUntil };
-    return { clientId, date, slot, trayId, prepDate, kind: w.kind, severity: w.severity, qualityUntil, message: warningMessage(w, date) };
+    return worded({ clientId, date, slot, trayId, prepDate, kind: 'past-freezer-quality', severity: 'warn', qualityUntil, message: '' });
   }
   if (status === 'past-eat-by') {
-    const w = { slot, trayId, prepDate, kind: 'past-eat-by' as const, severity: 'block' as const, eatBy };
-    return { clientId, date, slot, trayId, prepDate, kind: w.kind, severity: w.severity, eatBy, message: warningMessage(w, date) };
+    return worded({ clientId, date, slot, trayId, prepDate, kind: 'past-eat-by', severity: 'block', eatBy, message: '' });
   }
   return null;
 }
