@@ -68,6 +68,15 @@ async function findVisible(em: EntityManager, actor: Actor, ids: readonly number
   return new Map(rows.map((r) => [r.id, r]));
 }
 
+/** The columns the recipe calculation reads, as plain rows (no entity hydration: this runs on every keystroke). */
+type CalcRow = Pick<IIngredient, 'id' | 'name' | 'densityGPerMl' | 'pieceWeights' | NutrientColumn>;
+type NutrientColumn = keyof NutritionIngredient['per100g'];
+
+const CALC_COLUMNS = `i.id, i.name, i.density_g_per_ml as "densityGPerMl", i.piece_weights as "pieceWeights", i.kcal,
+  i.fat_g as "fatG", i.sat_fat_g as "satFatG", i.protein_g as "proteinG", i.carbs_g as "carbsG", i.fiber_g as "fiberG",
+  i.sugars_g as "sugarsG", i.erythritol_g as "erythritolG", i.allulose_g as "alluloseG", i.other_polyols_g as "otherPolyolsG",
+  i.sodium_mg as "sodiumMg"`;
+
 /** A library row ready for nutrition, allergens, cost and packages. */
 export type UsableIngredient = LoadedIngredient & { purchaseAmount: string | null; purchaseUnit: string | null };
 
@@ -84,8 +93,8 @@ function usableFromRow(row: UsableRow): UsableIngredient {
   };
 }
 
-const USABLE_COLUMNS = () =>
-  `${CALC_COLUMNS}, i.allergens, i.price_cents as "priceCents", i.purchase_amount as "purchaseAmount", i.purchase_unit as "purchaseUnit"`;
+const USABLE_COLUMNS = `${CALC_COLUMNS}, i.allergens, i.price_cents as "priceCents", i.purchase_amount as "purchaseAmount",
+  i.purchase_unit as "purchaseUnit"`;
 
 /**
  * The library rows the actor may use (own workspace or shared) among `ids`, keyed by id; ids that are missing or
@@ -94,13 +103,7 @@ const USABLE_COLUMNS = () =>
 export async function loadUsableIngredients(em: EntityManager, actor: Actor, ids: readonly number[]): Promise<Map<number, UsableIngredient>> {
   const unique = [...new Set(ids)].filter((id) => Number.isSafeInteger(id));
   if (!unique.length) return new Map();
-  const rows = await preparedRows<UsableRow>(
-    em,
-    'trayline_usable_ingredients',
-    `select ${USABLE_COLUMNS()} from ingredient i where i.id = any($1::int[]) and (i.workspace_id = $2 or i.workspace_id is null)`,
-    [unique, actor.workspaceId],
-  );
-  return new Map(rows.map((row) => [row.id, usableFromRow(row)]));
+  return loadUsableIngredientsWhere(em, 'trayline_usable_ingredients', 'select unnest($1::int[])', 2, [unique, actor.workspaceId]);
 }
 
 /**
@@ -118,7 +121,7 @@ export async function loadUsableIngredientsWhere(
   const rows = await preparedRows<UsableRow>(
     em,
     name,
-    `select ${USABLE_COLUMNS()} from ingredient i
+    `select ${USABLE_COLUMNS} from ingredient i
       where (i.workspace_id = $${workspaceParam} or i.workspace_id is null) and i.id in (${idsSql})`,
     values,
   );
@@ -135,15 +138,6 @@ export async function loadUsableIngredientsWhere(
 export async function computeRecipeForActor(em: EntityManager, actor: Actor, input: RecipeCalcInput): Promise<RecipeCalcDto> {
   return computeParsedRecipeForActor(em, actor, recipeCalcSchema.parse(input));
 }
-
-/** The columns the recipe calculation reads, as plain rows (no entity hydration: this runs on every keystroke). */
-type CalcRow = Pick<IIngredient, 'id' | 'name' | 'densityGPerMl' | 'pieceWeights' | NutrientColumn>;
-type NutrientColumn = keyof NutritionIngredient['per100g'];
-
-const CALC_COLUMNS = `i.id, i.name, i.density_g_per_ml as "densityGPerMl", i.piece_weights as "pieceWeights", i.kcal,
-  i.fat_g as "fatG", i.sat_fat_g as "satFatG", i.protein_g as "proteinG", i.carbs_g as "carbsG", i.fiber_g as "fiberG",
-  i.sugars_g as "sugarsG", i.erythritol_g as "erythritolG", i.allulose_g as "alluloseG", i.other_polyols_g as "otherPolyolsG",
-  i.sodium_mg as "sodiumMg"`;
 
 /**
  * In one round trip: the rows findVisible would give (own workspace or shared), as plain column values keyed by id,
