@@ -113,35 +113,23 @@ export interface TrayRow {
   lines: { ingredientId: number; amount: string; unit: string }[];
 }
 
+/** A tray row with its lines in order (one statement: the lines come aggregated as JSON). */
+const TRAY_ROW_SELECT = `select t.id, t.name, t.fridge_days as "fridgeDays", t.freezer_weeks as "freezerWeeks", t.cut_kind as "cutKind",
+         t.cut_rows as "cutRows", t.cut_columns as "cutColumns", t.cut_pieces as "cutPieces", t.yield_factor as "yieldFactor",
+         t.tags, t.reheat_steps as "reheatSteps", t.archived,
+         coalesce((select json_agg(json_build_object('ingredientId', l.ingredient_id, 'amount', l.amount::text, 'unit', l.unit)
+                                   order by l.position asc, l.id asc)
+                     from tray_line l where l.tray_id = t.id), '[]') as lines
+    from tray t`;
+
 async function loadTrayRows(em: EntityManager, workspaceId: number, ids: readonly number[]): Promise<TrayRow[]> {
   if (ids.length === 0) return [];
-  const unique = [...new Set(ids)];
-  // Trays and their lines side by side (both limited to the workspace).
-  const [trays, lines] = await Promise.all([
-    preparedRows<Omit<TrayRow, 'lines'>>(
-      em,
-      'trayline_tray_rows',
-      `select id, name, fridge_days as "fridgeDays", freezer_weeks as "freezerWeeks", cut_kind as "cutKind", cut_rows as "cutRows",
-              cut_columns as "cutColumns", cut_pieces as "cutPieces", yield_factor as "yieldFactor", tags, reheat_steps as "reheatSteps", archived
-         from tray where id = any($1::int[]) and workspace_id = $2 order by id asc`,
-      [unique, workspaceId],
-    ),
-    preparedRows<{ tray: number; ingredientId: number; amount: string; unit: string }>(
-      em,
-      'trayline_tray_lines',
-      `select l.tray_id as tray, l.ingredient_id as "ingredientId", l.amount, l.unit
-         from tray_line l join tray t on t.id = l.tray_id
-        where l.tray_id = any($1::int[]) and t.workspace_id = $2 order by l.tray_id asc, l.position asc, l.id asc`,
-      [unique, workspaceId],
-    ),
-  ]);
-  const byTray = new Map<number, TrayRow['lines']>();
-  for (const l of lines) {
-    let list = byTray.get(l.tray);
-    if (!list) byTray.set(l.tray, (list = []));
-    list.push({ ingredientId: l.ingredientId, amount: l.amount, unit: l.unit });
-  }
-  return trays.map((t) => ({ ...t, lines: byTray.get(t.id) ?? [] }));
+  return preparedRows<TrayRow>(
+    em,
+    'trayline_tray_rows',
+    `${TRAY_ROW_SELECT} where t.id = any($1::int[]) and t.workspace_id = $2 order by t.id asc`,
+    [[...new Set(ids)], workspaceId],
+  );
 }
 
 /**
@@ -168,15 +156,7 @@ export async function loadWorkspacePlateContext(
     preparedRows<TrayRow>(
       em,
       'trayline_board_trays',
-      `select t.id, t.name, t.fridge_days as "fridgeDays", t.freezer_weeks as "freezerWeeks", t.cut_kind as "cutKind",
-              t.cut_rows as "cutRows", t.cut_columns as "cutColumns", t.cut_pieces as "cutPieces", t.yield_factor as "yieldFactor",
-              t.tags, t.reheat_steps as "reheatSteps", t.archived,
-              coalesce((select json_agg(json_build_object('ingredientId', l.ingredient_id, 'amount', l.amount::text, 'unit', l.unit)
-                                        order by l.position asc, l.id asc)
-                          from tray_line l where l.tray_id = t.id), '[]') as lines
-         from tray t
-        where t.workspace_id = $1 and t.id in (${BOARD_TRAY_SCOPE})
-        order by t.id asc`,
+      `${TRAY_ROW_SELECT} where t.workspace_id = $1 and t.id in (${BOARD_TRAY_SCOPE}) order by t.id asc`,
       [workspaceId, weekId],
     ),
     loadUsableIngredientsWhere(
