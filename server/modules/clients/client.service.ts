@@ -7,10 +7,13 @@ import { preparedRows } from '../../db/prepared.js';
 import { Client, type ClientFacts, type IClient } from './client.entity.js';
 import { presentClient, presentClientSelf, presentClientSummary } from './client.presenter.js';
 
+/** A workspace's meal slots as stored; breakfast alone when none are set. */
+export const mealSlotsFrom = (stored: string[] | null | undefined): string[] => (stored?.length ? stored : ['breakfast']);
+
 export async function mealSlotsOf(em: EntityManager, workspaceId: number): Promise<string[]> {
   const [ws] = await preparedRows<{ mealSlots: string[] | null }>(em, 'trayline_meal_slots', 'select meal_slots as "mealSlots" from workspace where id = $1', [workspaceId]);
   if (!ws) throw new NotFound('Workspace');
-  return ws.mealSlots?.length ? ws.mealSlots : ['breakfast'];
+  return mealSlotsFrom(ws.mealSlots);
 }
 
 /** The client profile an actor may read: coach any in the workspace, a client only their own; else NotFound. */

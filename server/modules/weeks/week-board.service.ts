@@ -13,7 +13,7 @@ import { preparedRows } from '../../db/prepared.js';
 import { loadPlateRows } from '../assemblies/assembly.service.js';
 import { presentAssembly } from '../assemblies/assembly.presenter.js';
 import { loadWorkspacePlateContext, plateFacts, type PlateContext, type PlateRow } from '../assemblies/plate-facts.js';
-import { loadClientFacts } from '../clients/client.service.js';
+import { loadClientFacts, mealSlotsFrom } from '../clients/client.service.js';
 import { toNetCarbRule } from '../ingredients/ingredient.service.js';
 import type { NetCarbRule } from '@shared/domain/nutrition.js';
 import { plannedTargets } from '../clients/client.presenter.js';
@@ -141,7 +141,7 @@ async function boardSettings(em: EntityManager, workspaceId: number): Promise<{ 
     [workspaceId],
   );
   if (!ws) throw new NotFound('Workspace');
-  return { slots: ws.mealSlots?.length ? ws.mealSlots : ['breakfast'], rule: toNetCarbRule(ws.netCarbRule) };
+  return { slots: mealSlotsFrom(ws.mealSlots), rule: toNetCarbRule(ws.netCarbRule) };
 }
 
 /** A week of the workspace as a plain row with the time of its latest publication, or null. */
