@@ -9,8 +9,9 @@ import { sendOutboxRow } from './mail-worker.js';
 
 /**
  * pg-boss for e-mail, in the app's own database (schema `pgboss`): the `mail.send` queue, its worker and a
- * reconciler, and the `auth.password-reset` queue whose jobs turn a reset request into a token and an e-mail. Started by server/main.ts (with the worker) and by the API tests (queue only, or with a worker
- * pointed at an in-process catcher). Every piece of state is in PostgreSQL; several instances can run at once.
+ * reconciler, and the `auth.password-reset` queue whose jobs turn a reset request into a token and an e-mail.
+ * Started by server/main.ts (with the workers) and by the API tests (queues only, or with workers pointed at an
+ * in-process catcher). Every piece of state is in PostgreSQL; several instances can run at once.
  */
 export interface MailRetryOptions {
   retryLimit: number;
