@@ -2,37 +2,12 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { ReactNode } from 'react';
 import { act, renderHook, waitFor } from '@testing-library/react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import type { ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
+import type { ShoppingListDto } from '@shared/schemas/shopping.schema';
+import { shoppingItem, shoppingList } from './shopping-fixtures';
 import { shoppingKeys } from '@/features/shopping/api/shopping.keys';
 import { useSetCheck } from '@/features/shopping/api/use-shopping-mutations';
 
-const item = (ingredientId: number, checked = false): ShoppingItemDto => ({
-  ingredientId,
-  name: `Item ${ingredientId}`,
-  aisle: 'dairy-eggs',
-  aisleLabel: 'Dairy and eggs',
-  baseUnit: 'g',
-  needed: 100,
-  inPantry: 0,
-  fromPantry: 0,
-  toBuy: 100,
-  neededText: '3.5 oz',
-  toBuyText: '3.5 oz',
-  purchase: null,
-  costCents: null,
-  check: { checked, checkedBy: null, checkedAt: null },
-});
-
-const list = (): ShoppingListDto => ({
-  weekId: 7,
-  aisles: [{ aisle: 'dairy-eggs', label: 'Dairy and eggs', items: [item(1), item(2)] }],
-  itemCount: 2,
-  checkedCount: 0,
-  totalCostCents: 0,
-  costComplete: false,
-  problems: [],
-  bought: null,
-});
+const list = () => shoppingList([shoppingItem(1), shoppingItem(2)]);
 
 function setup() {
   const qc = new QueryClient({ defaultOptions: { queries: { retry: false, staleTime: Infinity }, mutations: { retry: false } } });

@@ -1,36 +1,12 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { act, cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { QueryClient, QueryClientProvider, useQuery } from '@tanstack/react-query';
-import type { ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
+import type { ShoppingListDto } from '@shared/schemas/shopping.schema';
+import { shoppingItem, shoppingList } from './shopping-fixtures';
 import { shoppingKeys } from '@/features/shopping/api/shopping.keys';
 import { ShoppingList } from '@/features/shopping/components/shopping-list';
 
-const item = (ingredientId: number): ShoppingItemDto => ({
-  ingredientId,
-  name: `Item ${ingredientId}`,
-  aisle: 'dairy-eggs',
-  aisleLabel: 'Dairy and eggs',
-  baseUnit: 'g',
-  needed: 100,
-  inPantry: 0,
-  fromPantry: 0,
-  toBuy: 100,
-  neededText: '3.5 oz',
-  toBuyText: '3.5 oz',
-  purchase: null,
-  costCents: null,
-  check: { checked: false, checkedBy: null, checkedAt: null },
-});
-const list = (): ShoppingListDto => ({
-  weekId: 7,
-  aisles: [{ aisle: 'dairy-eggs', label: 'Dairy and eggs', items: [item(1)] }],
-  itemCount: 1,
-  checkedCount: 0,
-  totalCostCents: 0,
-  costComplete: false,
-  problems: [],
-  bought: null,
-});
+const list = () => shoppingList([shoppingItem(1)]);
 const json = (body: unknown, status = 200) =>
   new Response(JSON.stringify(body), { status, headers: { 'content-type': status < 400 ? 'application/json' : 'application/problem+json' } });
 
