@@ -1,7 +1,8 @@
 // preparedRows (server/db/prepared.ts): the named statements hot reads use must run on the request's connection,
 // inside its transaction when it has one (they see its uncommitted rows; other connections do not), and answer the
 // same as the ORM's own query.
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
+import pg from 'pg';
 import type { Orm } from '../../server/db/orm.js';
 import { preparedRows } from '../../server/db/prepared.js';
 import { testApp } from '../support/test-app.js';
@@ -50,5 +51,27 @@ describe('preparedRows', () => {
     const viaOrm = await orm.em.fork().getConnection().execute<{ id: number }[]>('select id from workspace where id in (?, ?) order by id', ids);
     expect(viaPrepared).toEqual(viaOrm);
     expect(viaPrepared).toEqual([{ id: workspaceId }]);
+  });
+
+  it("takes turns on a transaction's connection when started side by side (pg 9 refuses a query while one runs)", async () => {
+    // pg 8 queues a second query on a busy client and warns that pg 9 will not (node_modules/pg/lib/client.js).
+    type Queued = { _queryQueue: unknown[]; activeQuery: unknown };
+    const overlaps: number[] = [];
+    const query = pg.Client.prototype.query;
+    const spy = vi.spyOn(pg.Client.prototype, 'query').mockImplementation(function (this: pg.Client, ...args: unknown[]) {
+      const self = this as unknown as Queued;
+      if (self._queryQueue.length > 0 || self.activeQuery) overlaps.push(self._queryQueue.length);
+      return (query as (...a: unknown[]) => unknown).apply(this, args);
+    } as typeof query);
+    try {
+      const names = await orm.em.fork().transactional((tx) =>
+        Promise.all(Array.from({ length: 6 }, () => preparedRows<{ name: string }>(tx, 'test_workspace_name', NAME_SQL, [workspaceId]))),
+      );
+      expect(names).toHaveLength(6);
+      expect(new Set(names.map((r) => r[0].name)).size).toBe(1);
+    } finally {
+      spy.mockRestore();
+    }
+    expect(overlaps).toEqual([]);
   });
 });
