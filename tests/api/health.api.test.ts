@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { testApp } from '../support/test-app.js';
+import { coachWorkspace, makeIngredient } from '../support/factories.js';
 
 describe('foundation: health and the one error handler', () => {
   it('GET /api/health answers 200 {ok:true, db:"up"} against the test database', async () => {
@@ -48,5 +49,29 @@ describe('foundation: health and the one error handler', () => {
       .send({ email: 'not-an-email', password: 'short' })
       .expect(400);
     expect(Object.keys(res.body.errors).sort()).toEqual(['businessName', 'email', 'name', 'password']);
+  });
+});
+
+describe('foundation: compressed answers', () => {
+  it('gzips a large JSON answer for a client that accepts it, and sends it plain to one that does not', async () => {
+    const { app } = await testApp();
+    const coach = await coachWorkspace(app);
+    for (let i = 0; i < 6; i++) await makeIngredient(coach);
+    const list = (encoding: string) =>
+      coach.agent.get('/api/ingredients?pageSize=100').set('accept-encoding', encoding).buffer(true).expect(200);
+    const gz = await list('gzip');
+    expect(gz.headers['content-encoding']).toBe('gzip');
+    expect(gz.headers.vary).toMatch(/accept-encoding/i);
+    const plain = await list('identity');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    // superagent inflates gzip: both read the same page of the library.
+    expect(gz.body).toEqual(plain.body);
+    expect(Number(plain.headers['content-length'])).toBeGreaterThan(1024);
+  });
+
+  it('leaves a small answer uncompressed', async () => {
+    const { app } = await testApp();
+    const res = await request(app).get('/api/health').set('accept-encoding', 'gzip').expect(200);
+    expect(res.headers['content-encoding']).toBeUndefined();
   });
 });
