@@ -123,12 +123,12 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await expect(page.getByText(/^Allergen override: Egg \(Cleared by the client in writing \(e2e\)\)/)).toBeVisible();
 
   // 5b. No trays are counted yet, so portions are short; the cover action clears the warning.
-  await expect(page.getByRole('note').filter({ hasText: /portion\(s\) short/ })).toBeVisible();
+  await expect(page.getByRole('note').filter({ hasText: /portions? short/ })).toBeVisible();
   await expectNoSeriousA11yViolations(page, 'week board');
   await page.getByRole('button', { name: 'Set tray counts to cover the need' }).focus();
   await page.keyboard.press('Enter');
   await expect(page.getByText('Every portion is baked')).toBeVisible();
-  await expect(page.getByRole('note').filter({ hasText: /portion\(s\) short/ })).toHaveCount(0);
+  await expect(page.getByRole('note').filter({ hasText: /portions? short/ })).toHaveCount(0);
 
   // 6. Publish, then the bake run of that week shows its timeline.
   await page.getByRole('button', { name: 'Publish to clients' }).focus();

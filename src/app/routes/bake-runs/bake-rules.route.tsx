@@ -9,6 +9,7 @@ import { formatTemp, type TempUnit } from '@/features/bake-runs/components/tempe
 import { useMe } from '@/features/auth/hooks/use-me';
 import { Button } from '@/components/ui/button';
 import { EmptyState, ErrorState, Notice, PageHeader, Skeleton } from '@/components/ui/states';
+import { counted } from '@/lib/words';
 
 /** Bake rules per food category and the workspace's ovens. The coach edits; assistants read. */
 export function Component() {
@@ -53,7 +54,7 @@ export function Component() {
                 <li key={o.id} className="flex flex-col gap-2 rounded-tray bg-paper-card p-4 shadow-tray">
                   <h3 className="text-xl">{o.name}</h3>
                   <p className="num">
-                    {o.racks} {o.racks === 1 ? 'rack' : 'racks'} × {o.traysPerRack} {o.traysPerRack === 1 ? 'tray' : 'trays'}
+                    {counted(o.racks, 'rack')} × {counted(o.traysPerRack, 'tray')}
                     {o.convection ? ' · convection' : ' · conventional'} · max {formatTemp(o.maxF, unit)}
                   </p>
                   <p className="num text-sm text-ink-soft">

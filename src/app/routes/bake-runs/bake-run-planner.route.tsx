@@ -11,6 +11,7 @@ import { TextField } from '@/components/ui/field';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
+import { counted } from '@/lib/words';
 
 function todayAt8(): string {
   const d = new Date();
@@ -157,7 +158,7 @@ export function Component() {
           {calc.error && !isApiError(calc.error, 400) ? <ErrorState error={calc.error} /> : null}
           <div>
             <Button type="submit" busy={calc.isPending} disabled={trays.length === 0 || ovenIds.length === 0}>
-              Plan {trays.length} {trays.length === 1 ? 'tray' : 'trays'}
+              Plan {counted(trays.length, 'tray')}
             </Button>
           </div>
         </form>

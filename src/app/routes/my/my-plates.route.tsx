@@ -7,6 +7,7 @@ import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '
 import { Cautions } from '@/components/domain/cautions';
 import { myPlanPdfUrl } from '@/features/week-mail/api/week-mail.queries';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
+import { counted } from '@/lib/words';
 
 const dayLabel = (iso: string, long = false) =>
   new Date(`${iso}T12:00:00Z`).toLocaleDateString(undefined, { weekday: long ? 'long' : 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
@@ -49,7 +50,7 @@ function PlateCard({ plate }: { plate: MyPlateDto }) {
         <ul className="list-disc pl-5">
           {plate.trays.map((t) => (
             <li key={t.trayId}>
-              {t.portions} portion{t.portions === 1 ? '' : 's'} of {t.name}
+              {counted(t.portions, 'portion')} of {t.name}
             </li>
           ))}
           {plate.addOns.map((a, i) => (

@@ -7,6 +7,7 @@ import { LabelSheet } from '@/features/shopping/components/label-sheet';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { counted } from '@/lib/words';
 
 const labelsOf = (labels: ContainerLabelDto[], withSpares: boolean) => (withSpares ? labels : labels.filter((l) => l.kind === 'plate'));
 
@@ -70,8 +71,8 @@ export function Component() {
       ) : (
         <>
           <p className="no-print num text-ink-soft">
-            {labelsOf(q.data.labels, withSpares).length} labels on{' '}
-            {Math.ceil(labelsOf(q.data.labels, withSpares).length / labelsPerSheet(LABEL_SHEETS[layout]))} sheet(s), prep day {q.data.prepDate}
+            {counted(labelsOf(q.data.labels, withSpares).length, 'label')} on{' '}
+            {counted(Math.ceil(labelsOf(q.data.labels, withSpares).length / labelsPerSheet(LABEL_SHEETS[layout])), 'sheet')}, prep day {q.data.prepDate}
           </p>
           <LabelSheet layout={layout} labels={labelsOf(q.data.labels, withSpares)} />
         </>

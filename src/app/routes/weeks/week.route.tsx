@@ -17,6 +17,7 @@ import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '
 import { Cautions } from '@/components/domain/cautions';
 import { errorMessage, isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
+import { agrees, counted } from '@/lib/words';
 
 type Pending = { kind: 'cells'; edit: CellEdit } | { kind: 'other'; label: string; run: (version: number) => void };
 
@@ -135,12 +136,12 @@ export function Component() {
       {error && <Notice tone="block" title={error} />}
 
       <div className="grid gap-3 sm:grid-cols-3">
-        <Notice tone={blocks.length ? 'block' : 'info'} title={`${blocks.length} problem(s) block publishing`}>
+        <Notice tone={blocks.length ? 'block' : 'info'} title={`${counted(blocks.length, 'problem')} ${agrees(blocks.length, 'blocks', 'block')} publishing`}>
           {blocks.slice(0, 3).map((w, i) => (
             <p key={i}>{w.message}</p>
           ))}
         </Notice>
-        <Notice tone={warns.length ? 'warn' : 'info'} title={`${warns.length} warning(s)`}>
+        <Notice tone={warns.length ? 'warn' : 'info'} title={counted(warns.length, 'warning')}>
           {warns.length === 0
             ? 'No day over the net-carb cap or short of protein, no dislikes, no allergens allowed.'
             : warns.slice(0, 3).map((w, i) => (
@@ -150,7 +151,7 @@ export function Component() {
               ))}
           {warns.length > 3 && <p>…and {warns.length - 3} more, flagged on the board.</p>}
         </Notice>
-        <Notice tone={short ? 'warn' : 'info'} title={short ? `${short} portion(s) short` : 'Every portion is baked'} />
+        <Notice tone={short ? 'warn' : 'info'} title={short ? `${counted(short, 'portion')} short` : 'Every portion is baked'} />
       </div>
 
       {board.clients.length === 0 || board.plates.length === 0 ? (

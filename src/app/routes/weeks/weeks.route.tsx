@@ -27,7 +27,7 @@ export function Component() {
   const [formError, setFormError] = useState<string | null>(null);
   return (
     <div className="flex flex-col gap-6">
-      <PageHeader title="Prep weeks" lead="Each week: its prep day(s), the trays to bake and the week board." />
+      <PageHeader title="Prep weeks" lead="Each week: one or two prep days, the trays to bake and the week board." />
       {me.role === 'coach' && (
         <Card>
           <h2 className="mb-3 text-xl">New week</h2>

@@ -5,6 +5,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/states';
 import { ApiError, errorMessage } from '@/lib/problem';
 import { useImportIngredients } from '../api/use-ingredient-mutations';
+import { counted } from '@/lib/words';
 
 const EXAMPLE_ROW = [
   'Basil pesto (example)', 'condiments', '450', '45', '7', '5', '6', '2', '3', '0', '0', '0', '700', '0.95', '',
@@ -36,7 +37,7 @@ export function IngredientImport() {
     }
     upload.mutate(file, {
       onSuccess: (res) => {
-        toast.success(`Imported ${res.created} ingredient${res.created === 1 ? '' : 's'}`);
+        toast.success(`Imported ${counted(res.created, 'ingredient')}`);
         setFile(null);
         if (fileRef.current) fileRef.current.value = '';
       },

@@ -6,6 +6,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { Card, Notice } from '@/components/ui/states';
 import { errorMessage } from '@/lib/problem';
 import { useScaleTray } from '../api/use-tray-mutations';
+import { counted } from '@/lib/words';
 
 type Mode = 'targetPortions' | 'factor' | 'pan';
 
@@ -69,7 +70,7 @@ export function ScalePanel({ tray, system }: { tray: TrayDto; system: 'us' | 'me
         <div className="mt-4" aria-live="polite">
           <p className="num mb-2 font-bold">
             {r.mode === 'targetPortions' &&
-              `${r.trays} ${r.trays === 1 ? 'tray' : 'trays'} · ${r.portionsBaked} portions baked · ${r.spare} spare`}
+              `${counted(r.trays ?? 0, 'tray')} · ${counted(r.portionsBaked ?? 0, 'portion')} baked · ${r.spare} spare`}
             {r.mode === 'factor' && `× ${r.factor}`}
             {r.mode === 'pan' && `${r.pan?.label}: × ${r.factor} by area · ${r.portionsAtSameSize} portions of the same size`}
           </p>

@@ -13,6 +13,7 @@ import { errorMessage, isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { clientPlanPdfUrl } from '../api/week-mail.queries';
 import { useSendWeek } from '../api/use-send-week';
+import { counted } from '@/lib/words';
 
 /** Live progress of one batch: polls the outbox filtered by the batch until nothing waits. */
 function BatchProgress({ result }: { result: SendWeekResultDto }) {
@@ -29,7 +30,7 @@ function BatchProgress({ result }: { result: SendWeekResultDto }) {
         {c.sent} sent · {pending} waiting{c.retrying ? ` (${c.retrying} retrying)` : ''} · {c.failed} failed
       </p>
       {c.failed > 0 && (
-        <Notice tone="block" title={`${c.failed} e-mail(s) failed`}>
+        <Notice tone="block" title={`${counted(c.failed, 'e-mail')} failed`}>
           Open the <Link to={paths.outbox} className="underline">outbox</Link> to see why and send them again.
         </Notice>
       )}
@@ -143,7 +144,7 @@ export function SendPlansPanel({ board }: { board: BoardDto }) {
         {error && <Notice tone="block" title="Not sent">{error}</Notice>}
         <div className="flex flex-wrap items-center gap-3">
           <Button type="submit" busy={send.isPending} disabled={send.isPending || (mode === 'some' && chosen.size === 0) || (mode === 'all' && withEmail.length === 0)}>
-            {mode === 'all' ? `Send to ${withEmail.length} client(s)` : `Send to ${chosen.size} client(s)`}
+            {mode === 'all' ? `Send to ${counted(withEmail.length, 'client')}` : `Send to ${counted(chosen.size, 'client')}`}
           </Button>
           <Link to={paths.outbox} className="underline">
             Open the outbox
@@ -154,11 +155,11 @@ export function SendPlansPanel({ board }: { board: BoardDto }) {
       {result && (
         <div className="flex flex-col gap-2 rounded-lg border border-line-strong p-3">
           <p className="font-bold">
-            {result.repeated ? 'Already sent: this is the same batch' : `${result.queued} plan(s) queued`} (published version {result.publicationVersion})
+            {result.repeated ? 'Already sent: this is the same batch' : `${counted(result.queued, 'plan')} queued`} (published version {result.publicationVersion})
           </p>
           {result.queued > 0 && <BatchProgress result={result} />}
           {result.skipped.length > 0 && (
-            <Notice tone="warn" title={`${result.skipped.length} client(s) skipped`}>
+            <Notice tone="warn" title={`${counted(result.skipped.length, 'client')} skipped`}>
               <ul>
                 {result.skipped.map((s) => (
                   <li key={s.clientId}>

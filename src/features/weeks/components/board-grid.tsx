@@ -15,6 +15,7 @@ import type { WeekWarning } from '@shared/domain/week-check';
 import { cellEatBy } from '@shared/domain/week-board';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
+import { counted } from '@/lib/words';
 
 const dayLabel = (iso: string) =>
   new Date(`${iso}T12:00:00Z`).toLocaleDateString(undefined, { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
@@ -62,7 +63,7 @@ function Cell({ id, cell, plateName, kcal, flags, selected, onSelect, where }: C
       ref={setNodeRef}
       onClick={onSelect}
       aria-pressed={selected}
-      aria-label={`${where}: ${cell ? (plateName ?? 'Plate') : 'empty'}${flags.length ? `, ${flags.length} problem${flags.length === 1 ? '' : 's'}` : ''}`}
+      aria-label={`${where}: ${cell ? (plateName ?? 'Plate') : 'empty'}${flags.length ? `, ${counted(flags.length, 'problem')}` : ''}`}
       className={`flex min-h-14 w-full flex-col items-start rounded-md border px-2 py-1 text-left text-xs ${
         isOver ? 'border-herb bg-herb-50' : blocked ? 'border-signal bg-signal-50' : flags.length ? 'border-caution bg-caution-50' : 'border-line bg-paper-card'
       } ${selected ? 'outline-2 outline-ink' : ''}`}

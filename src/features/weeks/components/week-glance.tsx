@@ -3,6 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { glanceQuery, localToday } from '../api/weeks.queries';
 import { Card, ErrorState, Notice, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
+import { agrees, counted } from '@/lib/words';
 
 /** The coach's "this week at a glance": warnings, portions short, the next prep day. */
 export function WeekGlance() {
@@ -20,10 +21,10 @@ export function WeekGlance() {
         </Link>
       </div>
       <div className="grid gap-3 sm:grid-cols-3">
-        <Notice tone={g.blocks ? 'block' : g.warnings ? 'warn' : 'info'} title={`${g.blocks + g.warnings} warning(s)`}>
-          {g.blocks ? `${g.blocks} block publishing` : 'None blocks publishing'}
+        <Notice tone={g.blocks ? 'block' : g.warnings ? 'warn' : 'info'} title={counted(g.blocks + g.warnings, 'warning')}>
+          {g.blocks ? `${g.blocks} ${agrees(g.blocks, 'blocks', 'block')} publishing` : 'None blocks publishing'}
         </Notice>
-        <Notice tone={g.portionsShort ? 'warn' : 'info'} title={g.portionsShort ? `${g.portionsShort} portion(s) short` : 'No portion short'} />
+        <Notice tone={g.portionsShort ? 'warn' : 'info'} title={g.portionsShort ? `${counted(g.portionsShort, 'portion')} short` : 'No portion short'} />
         <Notice tone="cold" title={g.nextPrepDate ? `Next prep day: ${g.nextPrepDate}` : 'No prep day ahead'} />
       </div>
     </Card>
