@@ -142,6 +142,7 @@ describe('eat-by on the board', () => {
     const refused = await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: filled.body.week.version }).expect(409);
     expect(refused.body.code).toBe('conflict');
     expect(refused.body.blocks.length).toBeGreaterThanOrEqual(3);
+    expect(refused.body.detail).toMatch(new RegExp(`^${refused.body.blocks.length} problems must be solved before publishing: \\S`));
 
     // Apply the remedy: frozen on prep day, thawed the evening before.
     const frozen = await coach.agent

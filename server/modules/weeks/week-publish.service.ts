@@ -91,7 +91,7 @@ export async function publishWeek(em: EntityManager, actor: Actor, id: number, v
   const result = computeBoard(boardInput(data));
   const blocks = result.warnings.filter((w) => w.severity === 'block');
   if (blocks.length) {
-    throw new Conflict(`${blocks.length} problem(s) must be solved before publishing: ${blocks[0].message}`, { blocks });
+    throw new Conflict(`${blocks.length === 1 ? '1 problem' : `${blocks.length} problems`} must be solved before publishing: ${blocks[0].message}`, { blocks });
   }
   if (!data.cells.length) throw new Conflict('The board is empty: place plates before publishing');
   const snapshot = buildSnapshot(data, presentBoard(data, result), result);
