@@ -74,7 +74,6 @@ export interface DayCheckInput {
 
 interface WarningBase {
   severity: Severity;
-  message: string;
   clientId: string;
   date: IsoDate;
 }
@@ -91,12 +90,15 @@ export type WeekWarning =
 
 export type WarningKind = WeekWarning['kind'];
 
-/** A warning's facts without its sentence and without the client and day it belongs to (they are its day check's). */
-export type WarningData = WeekWarning extends infer W ? (W extends WeekWarning ? Omit<W, 'message' | 'clientId' | 'date'> : never) : never;
+/** A warning's facts without the client and day it belongs to (they are its day check's). */
+export type WarningData = WeekWarning extends infer W ? (W extends WeekWarning ? Omit<W, 'clientId' | 'date'> : never) : never;
+
+/** A warning with its sentence, as people read it (the board pages, a refused publish). */
+export type WordedWarning = WeekWarning & { message: string };
 
 /**
- * A warning's sentence, from its kind and values: the one wording of each problem. The week check writes it on every
- * warning; the board answer leaves it out and the board page words each warning with this.
+ * A warning's sentence, from its kind and values: the one wording of each problem. The week check gives facts only;
+ * whoever shows a warning to a person words it with this (`worded`).
  */
 export function warningMessage(w: WarningData, date: IsoDate): string {
   switch (w.kind) {
@@ -121,10 +123,9 @@ export function warningMessage(w: WarningData, date: IsoDate): string {
   }
 }
 
-/** A warning built with its facts, given its sentence (warningMessage, the one wording). */
-function worded<W extends WeekWarning>(w: W): W {
-  w.message = warningMessage(w, w.date);
-  return w;
+/** A warning with its sentence (warningMessage, the one wording). */
+export function worded(w: WeekWarning): WordedWarning {
+  return { ...w, message: warningMessage(w, w.date) };
 }
 
 export interface DayTotals {
@@ -351,15 +352,15 @@ function macroWarnings(input: DayCheckInput, sums: DaySums, actual: DayTotals): 
   const { floor, limit, capMilliFloor, floorMilliCeil, limitMilliFloor, floorG, limitKcal } = limitsOf(targets, rules);
   if (sums.milli ? sums.milli.netCarbsG > capMilliFloor : sums.exact.netCarbsG.gt(targets.netCarbCapG)) {
     const actualG = actual.netCarbsG;
-    warnings.push(worded({ severity, clientId, date, kind: 'net-carbs-over', actualG, capG: targets.netCarbCapG, message: '' }));
+    warnings.push({ severity, clientId, date, kind: 'net-carbs-over', actualG, capG: targets.netCarbCapG });
   }
   if (sums.milli ? sums.milli.proteinG < floorMilliCeil : sums.exact.proteinG.lt(floor)) {
     const actualG = actual.proteinG;
-    warnings.push(worded({ severity, clientId, date, kind: 'protein-short', actualG, targetG: targets.proteinG, floorG, message: '' }));
+    warnings.push({ severity, clientId, date, kind: 'protein-short', actualG, targetG: targets.proteinG, floorG });
   }
   if (sums.milli ? sums.milli.kcal > limitMilliFloor : sums.exact.kcal.gt(limit)) {
     const actualKcal = actual.kcal;
-    warnings.push(worded({ severity, clientId, date, kind: 'energy-over', actualKcal, targetKcal: targets.targetKcal, limitKcal, message: '' }));
+    warnings.push({ severity, clientId, date, kind: 'energy-over', actualKcal, targetKcal: targets.targetKcal, limitKcal });
   }
   return warnings;
 }
@@ -368,7 +369,7 @@ function allergenWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] 
   return allergenConflicts(cell.allergens, input.clientAllergens).map((allergen) => {
     const reason = cell.allergenOverrides?.find((o) => o.allergen === allergen)?.reason.trim();
     const overridden = Boolean(reason);
-    return worded({
+    return {
       kind: 'allergen',
       severity: overridden ? 'warn' : 'block',
       clientId: input.clientId,
@@ -377,8 +378,7 @@ function allergenWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] 
       allergen,
       overridden,
       ...(overridden ? { reason } : {}),
-      message: '',
-    });
+    };
   });
 }
 
@@ -390,7 +390,7 @@ function dislikeWarnings(input: DayCheckInput, cell: CheckCell): WeekWarning[] {
   for (const d of dislikeList(input.clientDislikes)) {
     const hit = terms.find((t) => dislikeMatches(d.words, t.words));
     if (!hit) continue;
-    out.push(worded({ kind: 'dislike', severity: 'warn', clientId: input.clientId, date: input.date, slot: cell.slot, term: d.term, matched: hit.term, message: '' }));
+    out.push({ kind: 'dislike', severity: 'warn', clientId: input.clientId, date: input.date, slot: cell.slot, term: d.term, matched: hit.term });
   }
   return out;
 }
@@ -401,15 +401,15 @@ function portionWarning(input: DayCheckInput, cell: CheckCell, portion: CellPort
   const { trayId, prepDate } = portion;
   const { status, eatBy } = portionStatus({ plannedDate: input.date, prepDate: portion.prepDate, fridgeDays: portion.fridgeDays });
   if (status === 'before-prep') {
-    return worded({ clientId, date, slot, trayId, prepDate, kind: 'before-prep', severity: 'block', message: '' });
+    return { clientId, date, slot, trayId, prepDate, kind: 'before-prep', severity: 'block' };
   }
   if (portion.storage === 'frozen') {
     const qualityUntil = freezerQualityDate(portion.prepDate, portion.freezerWeeks ?? 0);
     if (compareIsoDates(input.date, qualityUntil) <= 0) return null;
-    return worded({ clientId, date, slot, trayId, prepDate, kind: 'past-freezer-quality', severity: 'warn', qualityUntil, message: '' });
+    return { clientId, date, slot, trayId, prepDate, kind: 'past-freezer-quality', severity: 'warn', qualityUntil };
   }
   if (status === 'past-eat-by') {
-    return worded({ clientId, date, slot, trayId, prepDate, kind: 'past-eat-by', severity: 'block', eatBy, message: '' });
+    return { clientId, date, slot, trayId, prepDate, kind: 'past-eat-by', severity: 'block', eatBy };
   }
   return null;
 }
@@ -441,7 +441,7 @@ export function checkWeek(days: readonly DayCheckInput[]): { days: DayCheck[]; w
 }
 
 /** The warnings of checked days as one list, blocks first (the board's problem list; the week board page builds it). */
-export function flatWarnings(days: readonly { warnings: readonly WeekWarning[] }[]): WeekWarning[] {
+export function flatWarnings<W extends WeekWarning>(days: readonly { warnings: readonly W[] }[]): W[] {
   const warnings = days.flatMap((d) => d.warnings);
   return warnings.sort((a, b) => (a.severity === b.severity ? 0 : a.severity === 'block' ? -1 : 1));
 }

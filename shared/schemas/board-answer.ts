@@ -4,12 +4,13 @@
  * A board holds every cell and client-day of the week (840 cells and 420 day checks for 60 clients with two meal
  * slots), so its answer leaves out what the page can restore exactly:
  * - a cell's fields at their defaults (no prep date picked, kept in the fridge, no allergen allowed by the coach);
- * - a day check's empty warning list, and on each warning the client and day (its check's) and the sentence, which
- *   `warningMessage` words from the warning's kind and values (shared/domain/week-check.ts).
+ * - a day check's empty warning list, and on each warning the client and day (its check's).
+ * The week check gives warnings as facts; `expandBoard` words each one with `warningMessage`
+ * (shared/domain/week-check.ts), the one wording.
  * `expandBoard` gives the full `BoardDto`; every reader of a board answer goes through it.
  */
 import type { IsoDate } from '../domain/iso-date';
-import { warningMessage, type WarningData, type WeekWarning } from '../domain/week-check';
+import { warningMessage, type WarningData, type WeekWarning, type WordedWarning } from '../domain/week-check';
 import type { BoardCellDto, BoardDayDto, BoardDto } from './weeks.schema';
 
 /** A cell as sent: `prepDate`, `storage` and `allergenOverrides` only when they differ from the defaults. */
@@ -51,7 +52,7 @@ export function dayAnswer(clientId: number, date: IsoDate, totals: BoardDayDto['
 function warningData(w: WeekWarning): WarningData {
   // Copy every field but the three the day check carries (no spread-and-delete: a board has hundreds).
   const out: Record<string, unknown> = {};
-  for (const k in w) if (k !== 'message' && k !== 'clientId' && k !== 'date') out[k] = (w as unknown as Record<string, unknown>)[k];
+  for (const k in w) if (k !== 'clientId' && k !== 'date') out[k] = (w as unknown as Record<string, unknown>)[k];
   return out as WarningData;
 }
 
@@ -72,7 +73,7 @@ export function expandBoard(a: BoardAnswer): BoardDto {
       clientId: d.clientId,
       date: d.date,
       totals: d.totals,
-      warnings: (d.warnings ?? []).map((w) => ({ ...w, clientId: String(d.clientId), date: d.date, message: warningMessage(w, d.date) }) as WeekWarning),
+      warnings: (d.warnings ?? []).map((w) => ({ ...w, clientId: String(d.clientId), date: d.date, message: warningMessage(w, d.date) }) as WordedWarning),
     })),
   };
 }

@@ -5,7 +5,7 @@ import type { TrayTally } from '../domain/inventory';
 import { isIsoDate, type IsoDate } from '../domain/iso-date';
 import type { MacroTargets } from '../domain/targets';
 import type { CellResult } from '../domain/week-board';
-import type { DayTotals, WeekWarning } from '../domain/week-check';
+import type { DayTotals, WordedWarning } from '../domain/week-check';
 import type { AssemblyDto, PlateMacrosDto } from './assemblies.schema';
 
 /** Prep weeks, the week board, publishing. */
@@ -140,7 +140,7 @@ export interface BoardDayDto {
   clientId: number;
   date: IsoDate;
   totals: DayTotals;
-  warnings: WeekWarning[];
+  warnings: WordedWarning[];
 }
 
 /** The week board as pages read it. The API sends it as a `BoardAnswer` (board-answer.ts); `expandBoard` gives this. */

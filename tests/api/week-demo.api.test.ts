@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
-import { flatWarnings, type WeekWarning } from '@shared/domain/week-check.js';
+import { flatWarnings, type WordedWarning } from '@shared/domain/week-check.js';
 import type { BoardDto } from '@shared/schemas/weeks.schema.js';
 import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer.js';
 import { testApp } from '../support/test-app.js';
@@ -69,7 +69,7 @@ describe('demo prep week', () => {
     const warnings = flatWarnings(board.checks);
     const kinds = warnings.map((w) => w.kind).sort();
     expect(kinds).toEqual(['allergen', 'dislike']);
-    const allergen = warnings.find((w): w is Extract<WeekWarning, { kind: 'allergen' }> => w.kind === 'allergen')!;
+    const allergen = warnings.find((w): w is Extract<WordedWarning, { kind: 'allergen' }> => w.kind === 'allergen')!;
     expect(allergen.overridden).toBe(true);
     expect(allergen.reason).toMatch(/demo/);
     expect(board.cells.filter((c) => c.storage === 'frozen')).toHaveLength(1);

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { checkWeek, type CheckCell, type DayCheckInput } from '@shared/domain/week-check';
+import { checkWeek, worded, type CheckCell, type DayCheckInput } from '@shared/domain/week-check';
 import { cellAnswer, dayAnswer, expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import type { BoardCellDto, BoardDto } from '@shared/schemas/weeks.schema';
 
-// The board answer leaves out cell defaults and warning sentences; the page restores them with expandBoard. These
+// The board answer leaves out cell defaults; the page restores them and words each warning with expandBoard. These
 // checks hold the round trip to the full board the week check computes (nothing lost, nothing reworded).
 const targets = { targetKcal: 500, netCarbCapG: 10, proteinG: 40, fatG: 40 };
 const cell = (over: Partial<CheckCell>): CheckCell => ({ slot: 'breakfast', macros: { kcal: 0, netCarbsG: 0, proteinG: 40, fatG: 0 }, allergens: [], terms: [], portions: [], ...over });
@@ -23,7 +23,7 @@ const { days } = checkWeek([
 ]);
 
 describe('board answer: day checks', () => {
-  const full = days.map((d) => ({ clientId: Number(d.clientId), date: d.date, totals: d.totals, warnings: d.warnings }));
+  const full = days.map((d) => ({ clientId: Number(d.clientId), date: d.date, totals: d.totals, warnings: d.warnings.map(worded) }));
   const answer = days.map((d) => dayAnswer(Number(d.clientId), d.date, d.totals, d.warnings));
   const expanded = expandBoard({ cells: [], checks: answer } as unknown as BoardAnswer).checks;
 
@@ -33,7 +33,7 @@ describe('board answer: day checks', () => {
     );
   });
 
-  it('expands to exactly the checks the week check computed, sentences included', () => {
+  it('expands to exactly the checks the week check computed, each worded', () => {
     expect(expanded).toEqual(full);
   });
 

@@ -11,7 +11,7 @@ import {
 } from '@dnd-kit/core';
 import { allergenLabel } from '@shared/domain/allergens';
 import type { BoardCellDto, BoardDto, CellInput } from '@shared/schemas/weeks.schema';
-import type { WeekWarning } from '@shared/domain/week-check';
+import type { WordedWarning } from '@shared/domain/week-check';
 import { cellEatBy } from '@shared/domain/week-board';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -47,7 +47,7 @@ interface CellProps {
   cell: BoardCellDto | undefined;
   plateName: string | undefined;
   kcal: number | undefined;
-  flags: WeekWarning[];
+  flags: WordedWarning[];
   selected: boolean;
   onSelect: () => void;
   /** Where the cell is (client, day, slot), for its accessible name. */
