@@ -3,6 +3,7 @@ import type { Express } from 'express';
 import { testApp } from '../support/test-app.js';
 import type { Orm } from '@server/db/orm.js';
 import { commitWeekEdit } from '@server/modules/weeks/week.service.js';
+import { findWeek, loadBoardData } from '@server/modules/weeks/week-board.service.js';
 import {
   coachWorkspace,
   makeAssembly,
@@ -322,6 +323,15 @@ describe('publishing and the client view', () => {
     expect(now.body.days).toHaveLength(3);
     const pubs = await sql<{ number: number }>('select number from week_publication where week_id = $1 order by number', [week.id]);
     expect(pubs).toEqual([{ number: 1 }, { number: 2 }]);
+
+    // The time of the current publication, as the board read and the reads behind the shopping list and labels give it.
+    const [{ at }] = await sql<{ at: Date }>('select published_at as at from week_publication where week_id = $1 and number = 2', [week.id]);
+    const board = await coach.agent.get(`/api/weeks/${week.id}`).expect(200);
+    expect(board.body.week.publishedAt).toBe(at.toISOString());
+    const actor = { userId: coach.userId, workspaceId: coach.workspaceId, role: 'coach', email: coach.email, name: 'Coach', clientId: null } as const;
+    const em = orm.em.fork();
+    const data = await loadBoardData(em, actor, await findWeek(em, actor, week.id));
+    expect(data.publishedAt?.toISOString()).toBe(at.toISOString());
   });
 
   it('keeps the board from assistants and other workspaces; the home glance counts problems', async () => {

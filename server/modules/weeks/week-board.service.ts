@@ -18,7 +18,7 @@ import { toNetCarbRule } from '../ingredients/ingredient.service.js';
 import type { NetCarbRule } from '@shared/domain/nutrition.js';
 import { plannedTargets } from '../clients/client.presenter.js';
 import type { ClientFacts } from '../clients/client.entity.js';
-import { Week, WeekPublication, type IWeek, type IWeekCell } from './week.entity.js';
+import { Week, type IWeek, type IWeekCell } from './week.entity.js';
 
 export function weekDays(w: Pick<IWeek, 'startDate'>): IsoDate[] {
   return Array.from({ length: WEEK_DAYS }, (_, i) => addDays(w.startDate, i));
@@ -50,10 +50,16 @@ export function presentWeekSummary(w: BoardWeek, cellCount: number, publishedAt:
   };
 }
 
+/** When the week's current published version was published (a prepared read: it rides beside a board's other reads). */
 export async function lastPublishedAt(em: EntityManager, week: Pick<IWeek, 'id' | 'publishedVersion'>): Promise<Date | null> {
   if (!week.publishedVersion) return null;
-  const pub = await em.findOne(WeekPublication, { week: week.id, number: week.publishedVersion }, { fields: ['publishedAt'] });
-  return pub?.publishedAt ?? null;
+  const [pub] = await preparedRows<{ publishedAt: string | Date }>(
+    em,
+    'trayline_week_published_at',
+    'select published_at as "publishedAt" from week_publication where week_id = $1 and number = $2',
+    [week.id, week.publishedVersion],
+  );
+  return pub ? new Date(pub.publishedAt) : null;
 }
 
 /**
