@@ -329,3 +329,32 @@ export function eatByRemedies(input: RemedyInput): EatByRemedy[] {
   }
   return remedies;
 }
+
+/** A client's task for one evening: move a frozen portion to the refrigerator for the next day's plate. */
+export interface ThawTask {
+  /** The evening of this day (at THAW_REMINDER_TIME). */
+  thawOn: IsoDate;
+  /** The day the plate is eaten. */
+  eatOn: IsoDate;
+  slot: string;
+  name: string;
+  /** Eat the thawed portion by this day at the latest. */
+  eatByAfterThaw: IsoDate;
+}
+
+/**
+ * Every thaw task of a client's week, in the order they fall: one per frozen plate that has its thaw evening,
+ * from the plans' days (`thawOn` is the evening before the plate's day, see freezeRemedy).
+ */
+export function thawTasks(
+  days: readonly { date: IsoDate; plates: readonly { slot: string; name: string; storage: 'fridge' | 'frozen'; thawOn: IsoDate | null }[] }[],
+): ThawTask[] {
+  const tasks: ThawTask[] = [];
+  for (const d of days) {
+    for (const p of d.plates) {
+      if (p.storage !== 'frozen' || !p.thawOn) continue;
+      tasks.push({ thawOn: p.thawOn, eatOn: d.date, slot: p.slot, name: p.name, eatByAfterThaw: addDays(d.date, THAWED_EAT_WITHIN_DAYS) });
+    }
+  }
+  return tasks.sort((a, b) => compareIsoDates(a.thawOn, b.thawOn) || compareIsoDates(a.eatOn, b.eatOn));
+}

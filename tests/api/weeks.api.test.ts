@@ -15,6 +15,7 @@ import {
   member,
   type Member,
 } from '../support/factories.js';
+import ICAL from 'ical.js';
 import { sql } from '../support/db.js';
 import { cellEatBy } from '@shared/domain/week-board.js';
 import { flatWarnings } from '@shared/domain/week-check.js';
@@ -155,6 +156,26 @@ describe('eat-by on the board', () => {
       .expect(200);
     expect(flatWarnings(expandBoard(frozen.body).checks).filter((w: { kind: string }) => w.kind === 'past-eat-by')).toEqual([]);
     await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: frozen.body.week.version }).expect(200);
+
+    // The client's thaw reminders for a calendar, read back with ical.js (Mozilla's RFC 5545 parser): the evening
+    // before each frozen plate, at 19:00 on the phone's own clock (floating time), with an alarm.
+    const me = await member(app, coach, 'client', { clientId: client.id });
+    const ics = await me.agent.get('/api/weeks/mine/thaw-reminders.ics?today=2026-01-05').expect(200);
+    expect(ics.headers['content-type']).toMatch(/^text\/calendar/);
+    expect(ics.headers['content-disposition']).toMatch(/attachment; filename="thaw-reminders-2026-01-05\.ics"/);
+    const events = new ICAL.Component(ICAL.parse(ics.text)).getAllSubcomponents('vevent').map((v) => new ICAL.Event(v));
+    expect(events.map((e) => [e.startDate.toString(), e.startDate.zone?.tzid])).toEqual([
+      ['2026-01-08T19:00:00', 'floating'],
+      ['2026-01-09T19:00:00', 'floating'],
+      ['2026-01-10T19:00:00', 'floating'],
+    ]);
+    expect(events.every((e) => e.summary === `Move tomorrow's ${plate.name} to the fridge`)).toBe(true);
+    expect(events[0].description).toContain('For breakfast on Friday 9 January 2026');
+    expect(events.every((e) => e.component.getAllSubcomponents('valarm').length === 1)).toBe(true);
+    await me.agent.get('/api/weeks/mine/thaw-reminders.ics?today=someday').expect(400);
+    const other = await member(app, coach, 'client', { clientId: (await makeClient(coach, { name: 'Nothing frozen' })).id });
+    const none = await other.agent.get('/api/weeks/mine/thaw-reminders.ics?today=2026-01-05').expect(200);
+    expect(new ICAL.Component(ICAL.parse(none.text)).getAllSubcomponents('vevent')).toEqual([]);
   });
 
   it('a second prep date supplies the later days (remedy b)', async () => {

@@ -1,3 +1,4 @@
+import fs from 'node:fs/promises';
 import { expect, test } from '@playwright/test';
 import { expectNoSeriousA11yViolations, signIn, SHOTS } from './support';
 
@@ -30,4 +31,24 @@ test("a client on a phone sees today's plate with its macros and eat-by", async 
 
   await expectNoSeriousA11yViolations(page, 'my plates');
   await page.screenshot({ path: `${SHOTS}/client-today.png`, fullPage: true });
+});
+
+test('a client sees the evening to move a frozen plate to the fridge, and takes the reminders to their calendar', async ({ page }) => {
+  // The demo freezes Dana's Sunday breakfast (server/db/seeders/week-demo.ts): it thaws on Saturday evening.
+  await signIn(page, 'client1@trayline.test');
+  const evening = page.getByRole('button', { name: /thaw tonight/ }).first();
+  await expect(evening).toBeVisible();
+  await evening.click();
+  await expect(evening).toHaveAttribute('aria-current', 'date');
+  const notice = page.getByRole('note').filter({ hasText: /(Tonight|On the evening of .+): move a frozen plate to the fridge/ });
+  await expect(notice).toBeVisible();
+  await expect(notice).toContainText('never on the counter');
+
+  const download = page.waitForEvent('download');
+  await page.getByRole('link', { name: 'Thaw reminders for my calendar' }).click();
+  const file = await download;
+  expect(file.suggestedFilename()).toMatch(/^thaw-reminders-\d{4}-\d{2}-\d{2}\.ics$/);
+  const text = await fs.readFile((await file.path())!, 'utf8');
+  expect(text).toMatch(/BEGIN:VEVENT[\s\S]*SUMMARY:Move tomorrow's .+ to the fridge/);
+  await expectNoSeriousA11yViolations(page, 'my plates, thaw evening');
 });

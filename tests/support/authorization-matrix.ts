@@ -155,6 +155,7 @@ export const MATRIX: Record<string, MatrixRow> = {
   'GET /api/weeks/:id/publications': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/publications`, crossWorkspace: true }),
   // Sending a week, delivery log, week-plan PDFs (issue 9)
   'GET /api/weeks/mine/plan.pdf': R(['client']),
+  'GET /api/weeks/mine/thaw-reminders.ics': R(['client']),
   'POST /api/weeks/:weekId/send': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/send`, body: () => ({ note: 'Matrix' }), crossWorkspace: true }),
   'GET /api/weeks/:weekId/clients/:clientId/plan.pdf': R(['coach'], {
     path: (ctx) => `/api/weeks/${ctx.ids.week}/clients/${ctx.ids.client}/plan.pdf`,

@@ -1,14 +1,10 @@
 import ical, { ICalAlarmRelatesTo, ICalAlarmType } from 'ical-generator';
-import { parseLocalMinutes } from '@shared/domain/bake-run-time.js';
 import type { BakeRunResult } from '@shared/domain/bake-run-types.js';
 import { toCelsiusRounded } from '@shared/domain/temperature.js';
+import { floating } from '../../lib/ics.js';
 
 const deg = (f: number | null | undefined) => (f == null ? '' : `${f} °F (${toCelsiusRounded(f)} °C)`);
 
-/** A local "YYYY-MM-DDTHH:mm" as a Date whose UTC fields are the kitchen clock (written as a floating time). */
-function floating(local: string): Date {
-  return new Date(parseLocalMinutes(local)! * 60_000);
-}
 
 /**
  * The bake run as an iCalendar file (RFC 5545) made with ical-generator: floating local times (the kitchen clock,

@@ -13,6 +13,10 @@ import { validated } from '../../http/validate.js';
 import type { MailQueue } from '../mail/mail.service.js';
 import type { RenderedPdf } from '../mail/pdf-registry.js';
 import { clientDeliveries, coachPlanPdf, myPlanPdf, sendWeek } from './week-mail.service.js';
+import { myWeek } from './week-publish.service.js';
+import { thawRemindersIcs } from './thaw-reminders-ics.js';
+import { thawTasks } from '@shared/domain/eat-by.js';
+import { NotFound } from '../../http/errors.js';
 import type { Response } from 'express';
 
 function sendPdf(res: Response, pdf: RenderedPdf) {
@@ -29,6 +33,20 @@ export function weekMailRoutes(deps: { mail: MailQueue; publicUrl: string }) {
     '/weeks/mine/plan.pdf',
     allow('client'),
     validated({ query: myPlanQuery }, async ({ query }, req, res) => sendPdf(res, await myPlanPdf(emOf(req), actorOf(req), query.today))),
+  );
+
+  // The signed-in client's thaw reminders (the evening before each frozen plate of their current week), for a calendar.
+  r.get(
+    '/weeks/mine/thaw-reminders.ics',
+    allow('client'),
+    validated({ query: myPlanQuery }, async ({ query }, req, res) => {
+      const week = await myWeek(emOf(req), actorOf(req), query.today);
+      if (!week) throw new NotFound('Published week');
+      const text = thawRemindersIcs(thawTasks(week.days), { calendarName: `Thaw reminders, ${week.name}`, uidPrefix: `week${week.weekId}-thaw` });
+      res.setHeader('content-type', 'text/calendar; charset=utf-8');
+      res.setHeader('content-disposition', `attachment; filename="thaw-reminders-${week.startDate}.ics"`);
+      res.send(text);
+    }),
   );
 
   r.post(

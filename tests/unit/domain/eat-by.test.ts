@@ -20,6 +20,7 @@ import {
   eatByDate,
   eatByRemedies,
   freezeRemedy,
+  thawTasks,
   otherPrepDateRemedy,
   portionStatus,
   supplyingPrepDate,
@@ -218,5 +219,41 @@ describe('CAUTIONS (shown by the UI, labels and PDFs)', () => {
     expect(new Set(CAUTIONS.map((c) => c.id)).size).toBe(CAUTIONS.length);
     for (const c of CAUTIONS) expect(c.source.length).toBeGreaterThan(0);
     expect(CAUTIONS.filter((c) => c.topic === 'diet')).toHaveLength(1);
+  });
+});
+
+describe('thawTasks (a client week: what to move to the fridge, which evening)', () => {
+  // Refrigerator thawing the evening before the plate's day: USDA FSIS "The Big Thaw" asks to plan ahead and thaw in
+  // the refrigerator; "overnight for a small portion" is from memory. THAWED_EAT_WITHIN_DAYS is common practice.
+  const plate = (slot: string, name: string, storage: 'fridge' | 'frozen', thawOn: string | null) => ({ slot, name, storage, thawOn });
+  const week = [
+    { date: '2025-01-11', plates: [plate('breakfast', 'Egg slab', 'fridge', null)] },
+    { date: '2025-01-12', plates: [plate('breakfast', 'Egg slab', 'frozen', '2025-01-11'), plate('lunch', 'Batter squares', 'frozen', '2025-01-11')] },
+    { date: '2025-01-10', plates: [plate('lunch', 'Coconut slab', 'frozen', '2025-01-09')] },
+  ];
+
+  it('gives one task per frozen plate, on its thaw evening, in the order the evenings fall', () => {
+    expect(thawTasks(week)).toEqual([
+      { thawOn: '2025-01-09', eatOn: '2025-01-10', slot: 'lunch', name: 'Coconut slab', eatByAfterThaw: addDays('2025-01-10', THAWED_EAT_WITHIN_DAYS) },
+      { thawOn: '2025-01-11', eatOn: '2025-01-12', slot: 'breakfast', name: 'Egg slab', eatByAfterThaw: '2025-01-13' },
+      { thawOn: '2025-01-11', eatOn: '2025-01-12', slot: 'lunch', name: 'Batter squares', eatByAfterThaw: '2025-01-13' },
+    ]);
+  });
+
+  it('has nothing for fridge plates, nor for a frozen plate without a thaw evening', () => {
+    expect(thawTasks([{ date: '2025-01-12', plates: [plate('breakfast', 'Egg slab', 'fridge', null), plate('lunch', 'Odd', 'frozen', null)] }])).toEqual([]);
+  });
+
+  it('matches freezeRemedy: the task falls on the remedy evening and eats on the planned day', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 20 }), fc.integer({ min: 1, max: 12 }), (daysAfterPrep, freezerWeeks) => {
+        const prepDate = '2025-01-05';
+        const plannedDate = addDays(prepDate, daysAfterPrep);
+        const remedy = freezeRemedy({ plannedDate, prepDate, fridgeDays: 1, freezerWeeks });
+        if (!remedy) return;
+        const [task] = thawTasks([{ date: plannedDate, plates: [plate('breakfast', 'Egg slab', 'frozen', remedy.thawReminderOn)] }]);
+        expect(task).toMatchObject({ thawOn: remedy.thawReminderOn, eatOn: remedy.eatOn, eatByAfterThaw: remedy.eatByAfterThaw });
+      }),
+    );
   });
 });

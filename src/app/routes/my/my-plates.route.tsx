@@ -1,11 +1,12 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { allergenLabel } from '@shared/domain/allergens';
+import { thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
 import type { MyPlateDto } from '@shared/schemas/weeks.schema';
 import { localToday, myWeekQuery } from '@/features/weeks/api/weeks.queries';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
-import { myPlanPdfUrl } from '@/features/week-mail/api/week-mail.queries';
+import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/week-mail/api/week-mail.queries';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { counted } from '@/lib/words';
 
@@ -83,6 +84,26 @@ function PlateCard({ plate }: { plate: MyPlateDto }) {
   );
 }
 
+/** "19:00" as the phone's locale writes a time of day ("7:00 PM" in the US). */
+const clockTime = (hhmm: string) => new Date(`2000-01-01T${hhmm}:00`).toLocaleTimeString(undefined, { hour: 'numeric', minute: '2-digit' });
+
+/** The evening's job: frozen plates of the next day to move to the fridge (the reminder the plan promises). */
+function ThawTonight({ tasks, date, isToday }: { tasks: ThawTask[]; date: string; isToday: boolean }) {
+  if (tasks.length === 0) return null;
+  return (
+    <Notice tone="cold" title={`${isToday ? 'Tonight' : `On the evening of ${dayLabel(date, true)}`}: move ${tasks.length === 1 ? 'a frozen plate' : 'frozen plates'} to the fridge`}>
+      <ul className="list-disc pl-5">
+        {tasks.map((t) => (
+          <li key={`${t.eatOn}-${t.slot}`}>
+            {t.name} ({t.slot}, {dayLabel(t.eatOn, true)})
+          </li>
+        ))}
+      </ul>
+      <p>Around {clockTime(THAW_REMINDER_TIME)}: thaw in the refrigerator, never on the counter.</p>
+    </Notice>
+  );
+}
+
 export function Component() {
   const today = localToday();
   const q = useQuery(myWeekQuery(today));
@@ -99,14 +120,22 @@ export function Component() {
     );
   }
   const day = week.days.find((d) => d.date === (picked ?? today)) ?? (picked ? undefined : week.days.find((d) => d.date >= today) ?? week.days[0]);
+  const thaws = thawTasks(week.days);
+  const shownDate = day?.date ?? picked ?? today;
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-5">
       <PageHeader title={day?.date === today ? "Today's plate" : 'My plates'} lead={day ? dayLabel(day.date, true) : undefined}>
         <a href={`${myPlanPdfUrl}?today=${today}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline" download>
           Download my week (PDF)
         </a>
+        {thaws.length > 0 && (
+          <a href={`${myThawRemindersUrl}?today=${today}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline" download>
+            Thaw reminders for my calendar
+          </a>
+        )}
       </PageHeader>
       <DemoNotice>A demo account: this plan and its people are invented for trying Trayline.</DemoNotice>
+      <ThawTonight tasks={thaws.filter((t) => t.thawOn === shownDate)} date={shownDate} isToday={shownDate === today} />
       {day ? day.plates.map((p) => <PlateCard key={p.slot} plate={p} />) : <EmptyState title="Nothing planned that day" />}
       <Card>
         <h2 className="mb-2 text-xl">The week at a glance</h2>
@@ -115,13 +144,18 @@ export function Component() {
             <li key={d.date}>
               <button
                 type="button"
-                onClick={() => setPicked(d.date)}
+                onClick={() => {
+                  setPicked(d.date);
+                  // The day's plates are drawn above this list: bring them into view.
+                  window.scrollTo({ top: 0, behavior: 'smooth' });
+                }}
                 aria-current={d.date === day?.date ? 'date' : undefined}
                 className={`flex min-h-11 w-full items-center justify-between gap-2 px-2 py-2 text-left ${d.date === day?.date ? 'bg-paper-deep font-bold' : ''}`}
               >
                 <span>
                   {dayLabel(d.date)}
                   {d.date === today && <span className="ml-1 text-xs text-herb-700">today</span>}
+                  {thaws.some((t) => t.thawOn === d.date) && <span className="ml-1 text-xs text-frost-700">❄ thaw tonight</span>}
                   <span className="block text-sm font-normal text-ink-soft">{d.plates.map((p) => p.name).join(' · ')}</span>
                 </span>
                 <span className="num text-sm">{Math.round(d.totals.kcal)} kcal · {d.totals.netCarbsG} g net</span>

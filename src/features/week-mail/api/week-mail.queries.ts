@@ -18,3 +18,6 @@ export const clientPlanPdfUrl = (weekId: number, clientId: number) => `/api/week
 
 /** The signed-in client's own current published week. */
 export const myPlanPdfUrl = '/api/weeks/mine/plan.pdf';
+
+/** The signed-in client's thaw reminders (an iCalendar file for the phone's calendar). */
+export const myThawRemindersUrl = '/api/weeks/mine/thaw-reminders.ics';
