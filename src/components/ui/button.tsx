@@ -33,3 +33,20 @@ export const Button = forwardRef<HTMLButtonElement, ButtonProps>(function Button
     </button>
   );
 });
+
+/**
+ * Edit and Delete for one item of a list of cards. The visible words stay short; the accessible names say which
+ * item ("Edit Left oven"), as a page holds one pair per card.
+ */
+export function EditDeleteButtons({ name, onEdit, onDelete, className = 'flex gap-2' }: { name: string; onEdit: () => void; onDelete: () => void; className?: string }) {
+  return (
+    <div className={className}>
+      <Button size="sm" variant="secondary" onClick={onEdit} aria-label={`Edit ${name}`}>
+        Edit
+      </Button>
+      <Button size="sm" variant="ghost" onClick={onDelete} aria-label={`Delete ${name}`}>
+        Delete
+      </Button>
+    </div>
+  );
+}

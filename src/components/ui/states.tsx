@@ -99,3 +99,35 @@ export function Progress({ value, max, label }: { value: number; max: number; la
     </div>
   );
 }
+
+/** What QueryView needs of a TanStack Query result. */
+interface QueryLike<T> {
+  isPending: boolean;
+  isError: boolean;
+  error: unknown;
+  data: T | undefined;
+  refetch: () => unknown;
+}
+
+/**
+ * The three states every read shows before its content: `loading` while pending (a page skeleton by default), the
+ * error with a retry, and `empty` when `isEmpty` says the data has nothing to show; otherwise `children(data)`.
+ */
+export function QueryView<T>({
+  query,
+  loading = <PageSkeleton />,
+  isEmpty,
+  empty,
+  children,
+}: {
+  query: QueryLike<T>;
+  loading?: ReactNode;
+  isEmpty?: (data: T) => boolean;
+  empty?: ReactNode;
+  children: (data: T) => ReactNode;
+}) {
+  if (query.isPending) return <>{loading}</>;
+  if (query.isError || query.data === undefined) return <ErrorState error={query.error} retry={() => void query.refetch()} />;
+  if (isEmpty?.(query.data)) return <>{empty}</>;
+  return <>{children(query.data)}</>;
+}

@@ -7,8 +7,8 @@ import { OvenFormCard } from '@/features/bake-runs/components/oven-form';
 import { UnitToggle } from '@/features/bake-runs/components/bake-run-view';
 import { formatTemp, type TempUnit } from '@/features/bake-runs/components/temperature';
 import { useMe } from '@/features/auth/hooks/use-me';
-import { Button } from '@/components/ui/button';
-import { EmptyState, ErrorState, Notice, PageHeader, Skeleton } from '@/components/ui/states';
+import { Button, EditDeleteButtons } from '@/components/ui/button';
+import { EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { counted } from '@/lib/words';
 
 /** Bake rules per food category and the workspace's ovens. The coach edits; assistants read. */
@@ -37,50 +37,44 @@ export function Component() {
           {coach && editingOven === null && <Button onClick={() => setEditingOven('new')}>Add an oven</Button>}
         </div>
         {editingOven === 'new' && <OvenFormCard oven={null} unit={unit} onDone={() => setEditingOven(null)} />}
-        {ovens.isPending ? (
-          <Skeleton className="h-24 w-full" label="Loading ovens" />
-        ) : ovens.isError ? (
-          <ErrorState error={ovens.error} retry={() => ovens.refetch()} />
-        ) : ovens.data.length === 0 ? (
-          <EmptyState title="No ovens yet">{coach ? 'Add the ovens of your kitchen to plan bake runs.' : 'Your coach has not added ovens yet.'}</EmptyState>
-        ) : (
-          <ul className="grid gap-3 sm:grid-cols-2">
-            {ovens.data.map((o) =>
-              editingOven === o.id ? (
-                <li key={o.id} className="sm:col-span-2">
-                  <OvenFormCard oven={o} unit={unit} onDone={() => setEditingOven(null)} />
-                </li>
-              ) : (
-                <li key={o.id} className="flex flex-col gap-2 rounded-tray bg-paper-card p-4 shadow-tray">
-                  <h3 className="text-xl">{o.name}</h3>
-                  <p className="num">
-                    {counted(o.racks, 'rack')} × {counted(o.traysPerRack, 'tray')}
-                    {o.convection ? ' · convection' : ' · conventional'} · max {formatTemp(o.maxF, unit)}
-                  </p>
-                  <p className="num text-sm text-ink-soft">
-                    Heats {o.heatFPerMin} °F/min, cools {o.coolFPerMin} °F/min with the door ajar
-                  </p>
-                  {coach && (
-                    <div className="flex gap-2">
-                      <Button size="sm" variant="secondary" onClick={() => setEditingOven(o.id)}>
-                        Edit
-                      </Button>
-                      <Button
-                        size="sm"
-                        variant="ghost"
-                        onClick={() => {
+        <QueryView
+          query={ovens}
+          loading={<Skeleton className="h-24 w-full" label="Loading ovens" />}
+          isEmpty={(data) => data.length === 0}
+          empty={<EmptyState title="No ovens yet">{coach ? 'Add the ovens of your kitchen to plan bake runs.' : 'Your coach has not added ovens yet.'}</EmptyState>}
+        >
+          {(data) => (
+            <ul className="grid gap-3 sm:grid-cols-2">
+              {data.map((o) =>
+                editingOven === o.id ? (
+                  <li key={o.id} className="sm:col-span-2">
+                    <OvenFormCard oven={o} unit={unit} onDone={() => setEditingOven(null)} />
+                  </li>
+                ) : (
+                  <li key={o.id} className="flex flex-col gap-2 rounded-tray bg-paper-card p-4 shadow-tray">
+                    <h3 className="text-xl">{o.name}</h3>
+                    <p className="num">
+                      {counted(o.racks, 'rack')} × {counted(o.traysPerRack, 'tray')}
+                      {o.convection ? ' · convection' : ' · conventional'} · max {formatTemp(o.maxF, unit)}
+                    </p>
+                    <p className="num text-sm text-ink-soft">
+                      Heats {o.heatFPerMin} °F/min, cools {o.coolFPerMin} °F/min with the door ajar
+                    </p>
+                    {coach && (
+                      <EditDeleteButtons
+                        name={o.name}
+                        onEdit={() => setEditingOven(o.id)}
+                        onDelete={() => {
                           if (window.confirm(`Delete ${o.name}?`)) delOven.mutate(o.id);
                         }}
-                      >
-                        Delete
-                      </Button>
-                    </div>
-                  )}
-                </li>
-              ),
-            )}
-          </ul>
-        )}
+                      />
+                    )}
+                  </li>
+                ),
+              )}
+            </ul>
+          )}
+        </QueryView>
       </section>
 
       <section className="flex flex-col gap-3" aria-labelledby="rules-h">
@@ -95,60 +89,55 @@ export function Component() {
           Minimum Internal Temperatures chart; check them with a thermometer. Your local food code comes first.
         </Notice>
         {editingRule === 'new' && <BakeRuleFormCard rule={null} unit={unit} onDone={() => setEditingRule(null)} />}
-        {rules.isPending ? (
-          <Skeleton className="h-48 w-full" label="Loading bake rules" />
-        ) : rules.isError ? (
-          <ErrorState error={rules.error} retry={() => rules.refetch()} />
-        ) : rules.data.length === 0 ? (
-          <EmptyState title="No bake rules">{coach ? 'Add a bake rule for each kind of tray you bake.' : 'Your coach has not set bake rules.'}</EmptyState>
-        ) : (
-          <ul className="flex flex-col gap-3">
-            {rules.data.map((r) =>
-              editingRule === r.id ? (
-                <li key={r.id}>
-                  <BakeRuleFormCard rule={r} unit={unit} onDone={() => setEditingRule(null)} />
-                </li>
-              ) : (
-                <li key={r.id} className="flex flex-col gap-1 rounded-tray bg-paper-card p-4 shadow-tray">
-                  <div className="flex flex-wrap items-baseline justify-between gap-2">
-                    <h3 className="text-lg">{r.label}</h3>
-                    <span className="num text-lg font-bold">
-                      {formatTemp(r.tempF, unit)} · {r.minMinutes}–{r.maxMinutes} min
-                    </span>
-                  </div>
-                  <p className="text-sm text-ink-soft">{r.donenessCue}</p>
-                  <p className="num text-sm">
-                    Hands-on {r.handsOnMinutes} min · rack {r.rackPreference} · convection −{r.convectionDeltaF} °F · crowding +{r.crowdingPct}% per
-                    extra tray
-                    {r.minInternalF !== null && (
-                      <>
-                        {' '}
-                        · internal {formatTemp(r.minInternalF, unit)}
-                        {r.restMinutes ? ` + ${r.restMinutes} min rest` : ''} ({r.minInternalSource})
-                      </>
-                    )}
-                  </p>
-                  {coach && (
-                    <div className="mt-1 flex gap-2">
-                      <Button size="sm" variant="secondary" onClick={() => setEditingRule(r.id)}>
-                        Edit
-                      </Button>
-                      <Button
-                        size="sm"
-                        variant="ghost"
-                        onClick={() => {
+        <QueryView
+          query={rules}
+          loading={<Skeleton className="h-48 w-full" label="Loading bake rules" />}
+          isEmpty={(data) => data.length === 0}
+          empty={<EmptyState title="No bake rules">{coach ? 'Add a bake rule for each kind of tray you bake.' : 'Your coach has not set bake rules.'}</EmptyState>}
+        >
+          {(data) => (
+            <ul className="flex flex-col gap-3">
+              {data.map((r) =>
+                editingRule === r.id ? (
+                  <li key={r.id}>
+                    <BakeRuleFormCard rule={r} unit={unit} onDone={() => setEditingRule(null)} />
+                  </li>
+                ) : (
+                  <li key={r.id} className="flex flex-col gap-1 rounded-tray bg-paper-card p-4 shadow-tray">
+                    <div className="flex flex-wrap items-baseline justify-between gap-2">
+                      <h3 className="text-lg">{r.label}</h3>
+                      <span className="num text-lg font-bold">
+                        {formatTemp(r.tempF, unit)} · {r.minMinutes}–{r.maxMinutes} min
+                      </span>
+                    </div>
+                    <p className="text-sm text-ink-soft">{r.donenessCue}</p>
+                    <p className="num text-sm">
+                      Hands-on {r.handsOnMinutes} min · rack {r.rackPreference} · convection −{r.convectionDeltaF} °F · crowding +{r.crowdingPct}% per
+                      extra tray
+                      {r.minInternalF !== null && (
+                        <>
+                          {' '}
+                          · internal {formatTemp(r.minInternalF, unit)}
+                          {r.restMinutes ? ` + ${r.restMinutes} min rest` : ''} ({r.minInternalSource})
+                        </>
+                      )}
+                    </p>
+                    {coach && (
+                      <EditDeleteButtons
+                        name={r.label}
+                        className="mt-1 flex gap-2"
+                        onEdit={() => setEditingRule(r.id)}
+                        onDelete={() => {
                           if (window.confirm(`Delete the rule "${r.label}"?`)) delRule.mutate(r.id);
                         }}
-                      >
-                        Delete
-                      </Button>
-                    </div>
-                  )}
-                </li>
-              ),
-            )}
-          </ul>
-        )}
+                      />
+                    )}
+                  </li>
+                ),
+              )}
+            </ul>
+          )}
+        </QueryView>
       </section>
     </div>
   );

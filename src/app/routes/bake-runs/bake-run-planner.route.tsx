@@ -8,7 +8,7 @@ import { formatTemp, type TempUnit } from '@/features/bake-runs/components/tempe
 import { useMe } from '@/features/auth/hooks/use-me';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
-import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton, QueryView } from '@/components/ui/states';
 import { isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { counted } from '@/lib/words';
@@ -73,24 +73,25 @@ export function Component() {
 
       <Card className="no-print">
         <h2 className="mb-2 text-xl">Prep weeks</h2>
-        {weeks.isPending ? (
-          <p className="text-ink-soft">Loading weeks…</p>
-        ) : weeks.isError ? (
-          <ErrorState error={weeks.error} retry={() => weeks.refetch()} />
-        ) : weeks.data.length === 0 ? (
-          <p className="text-ink-soft">No prep weeks yet. Try a run below.</p>
-        ) : (
-          <ul className="flex flex-col gap-1">
-            {weeks.data.map((w) => (
-              <li key={w.id}>
-                <Link className="inline-flex min-h-11 items-center font-bold underline" to={paths.bakeRun(w.id)}>
-                  {w.name}: prep {w.prepDate}
-                  {w.secondPrepDate ? ` and ${w.secondPrepDate}` : ''}
-                </Link>
-              </li>
-            ))}
-          </ul>
-        )}
+        <QueryView
+          query={weeks}
+          loading={<p className="text-ink-soft">Loading weeks…</p>}
+          isEmpty={(data) => data.length === 0}
+          empty={<p className="text-ink-soft">No prep weeks yet. Try a run below.</p>}
+        >
+          {(data) => (
+            <ul className="flex flex-col gap-1">
+              {data.map((w) => (
+                <li key={w.id}>
+                  <Link className="inline-flex min-h-11 items-center font-bold underline" to={paths.bakeRun(w.id)}>
+                    {w.name}: prep {w.prepDate}
+                    {w.secondPrepDate ? ` and ${w.secondPrepDate}` : ''}
+                  </Link>
+                </li>
+              ))}
+            </ul>
+          )}
+        </QueryView>
       </Card>
 
       {ovens.data.length === 0 ? (

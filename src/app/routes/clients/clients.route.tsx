@@ -7,7 +7,7 @@ import { clientsQuery } from '@/features/clients/api/clients.queries';
 import { useCreateClient } from '@/features/clients/api/use-client-mutations';
 import { ClientForm, emptyClient } from '@/features/clients/components/client-form';
 import { Button } from '@/components/ui/button';
-import { Card, EmptyState, ErrorState, PageHeader, Skeleton } from '@/components/ui/states';
+import { Card, EmptyState, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
@@ -47,54 +47,57 @@ export function Component() {
         </Card>
       )}
       <Card>
-        {list.isPending ? (
-          <Skeleton className="h-32 w-full" />
-        ) : list.isError ? (
-          <ErrorState error={list.error} retry={() => list.refetch()} />
-        ) : list.data.length === 0 ? (
-          <EmptyState title="No clients yet" action={<Button onClick={() => setAdding(true)}>Add your first client</Button>}>
-            Add a client to compute their targets and place plates for them on the week board.
-          </EmptyState>
-        ) : (
-          <div className="overflow-x-auto">
-            <table className="w-full text-left">
-              <thead>
-                <tr className="border-b border-line text-sm text-ink-faint">
-                  <th className="py-2">Name</th>
-                  <th className="text-right">Portions per plate</th>
-                  <th className="text-right">kcal</th>
-                  <th className="text-right">Net-carb cap</th>
-                  <th className="text-right">Protein</th>
-                  <th className="pl-6">Allergens</th>
-                  <th className="pl-4">Account</th>
-                </tr>
-              </thead>
-              <tbody>
-                {list.data.map((c) => (
-                  <tr key={c.id} className="border-b border-line">
-                    <td className="py-2">
-                      <Link className="font-bold underline" to={paths.client(c.id)}>
-                        {c.name}
-                      </Link>
-                    </td>
-                    <td className="num text-right">{c.householdMultiplier}</td>
-                    {isFull(c) ? (
-                      <>
-                        <td className="num text-right">{c.targets.targetKcal}</td>
-                        <td className="num text-right">{c.targets.netCarbCapG} g</td>
-                        <td className="num text-right">{c.targets.proteinG} g</td>
-                        <td className="pl-6">{c.allergens.map(allergenLabel).join(', ') || '—'}</td>
-                        <td className="pl-4">{c.account ? 'Joined' : 'Not invited'}</td>
-                      </>
-                    ) : (
-                      <td colSpan={5} />
-                    )}
+        <QueryView
+          query={list}
+          loading={<Skeleton className="h-32 w-full" />}
+          isEmpty={(data) => data.length === 0}
+          empty={
+            <EmptyState title="No clients yet" action={<Button onClick={() => setAdding(true)}>Add your first client</Button>}>
+              Add a client to compute their targets and place plates for them on the week board.
+            </EmptyState>
+          }
+        >
+          {(data) => (
+            <div className="overflow-x-auto">
+              <table className="w-full text-left">
+                <thead>
+                  <tr className="border-b border-line text-sm text-ink-faint">
+                    <th className="py-2">Name</th>
+                    <th className="text-right">Portions per plate</th>
+                    <th className="text-right">kcal</th>
+                    <th className="text-right">Net-carb cap</th>
+                    <th className="text-right">Protein</th>
+                    <th className="pl-6">Allergens</th>
+                    <th className="pl-4">Account</th>
                   </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-        )}
+                </thead>
+                <tbody>
+                  {data.map((c) => (
+                    <tr key={c.id} className="border-b border-line">
+                      <td className="py-2">
+                        <Link className="font-bold underline" to={paths.client(c.id)}>
+                          {c.name}
+                        </Link>
+                      </td>
+                      <td className="num text-right">{c.householdMultiplier}</td>
+                      {isFull(c) ? (
+                        <>
+                          <td className="num text-right">{c.targets.targetKcal}</td>
+                          <td className="num text-right">{c.targets.netCarbCapG} g</td>
+                          <td className="num text-right">{c.targets.proteinG} g</td>
+                          <td className="pl-6">{c.allergens.map(allergenLabel).join(', ') || '—'}</td>
+                          <td className="pl-4">{c.account ? 'Joined' : 'Not invited'}</td>
+                        </>
+                      ) : (
+                        <td colSpan={5} />
+                      )}
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+          )}
+        </QueryView>
       </Card>
     </div>
   );

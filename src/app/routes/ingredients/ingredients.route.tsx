@@ -17,7 +17,7 @@ import { IngredientTable } from '@/features/ingredients/components/ingredient-ta
 import { IngredientImport } from '@/features/ingredients/components/ingredient-import';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
-import { Card, EmptyState, ErrorState, Notice, PageHeader, Skeleton } from '@/components/ui/states';
+import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 
 const PAGE_SIZE = 25;
@@ -107,44 +107,49 @@ export function Component() {
       </Card>
 
       <Card>
-        {list.isPending ? (
-          <div className="flex flex-col gap-2" role="status" aria-label="Loading ingredients">
-            {Array.from({ length: 8 }, (_, i) => (
-              <Skeleton key={i} className="h-8 w-full" label="" />
-            ))}
-          </div>
-        ) : list.isError ? (
-          <ErrorState error={list.error} retry={() => list.refetch()} />
-        ) : list.data.items.length === 0 ? (
-          <EmptyState
-            title={filtered ? 'No ingredient matches' : 'No ingredients yet'}
-            action={
-              filtered ? (
-                <Button variant="secondary" onClick={() => { setSearch(''); update({ q: '', category: '', scope: '' }); }}>
-                  Clear the search
+        <QueryView
+          query={list}
+          loading={
+            <div className="flex flex-col gap-2" role="status" aria-label="Loading ingredients">
+              {Array.from({ length: 8 }, (_, i) => (
+                <Skeleton key={i} className="h-8 w-full" label="" />
+              ))}
+            </div>
+          }
+          isEmpty={(data) => data.items.length === 0}
+          empty={
+            <EmptyState
+              title={filtered ? 'No ingredient matches' : 'No ingredients yet'}
+              action={
+                filtered ? (
+                  <Button variant="secondary" onClick={() => { setSearch(''); update({ q: '', category: '', scope: '' }); }}>
+                    Clear the search
+                  </Button>
+                ) : undefined
+              }
+            >
+              {filtered ? 'Try another name or category.' : isCoach ? 'Add your own ingredient or import a CSV below.' : 'Your coach has not added any yet.'}
+            </EmptyState>
+          }
+        >
+          {(data) => (
+            <>
+              <IngredientTable items={data.items} sort={filters.sort} onSort={(s) => update({ sort: s === 'name' ? '' : s })} />
+              <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center gap-3">
+                <Button variant="secondary" size="sm" disabled={filters.page <= 1} onClick={() => update({ page: String(filters.page - 1) })}>
+                  Previous
                 </Button>
-              ) : undefined
-            }
-          >
-            {filtered ? 'Try another name or category.' : isCoach ? 'Add your own ingredient or import a CSV below.' : 'Your coach has not added any yet.'}
-          </EmptyState>
-        ) : (
-          <>
-            <IngredientTable items={list.data.items} sort={filters.sort} onSort={(s) => update({ sort: s === 'name' ? '' : s })} />
-            <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center gap-3">
-              <Button variant="secondary" size="sm" disabled={filters.page <= 1} onClick={() => update({ page: String(filters.page - 1) })}>
-                Previous
-              </Button>
-              <span className="num text-sm" aria-live="polite">
-                Page {filters.page} of {pages} · {list.data.total} ingredients
-              </span>
-              <Button variant="secondary" size="sm" disabled={filters.page >= pages} onClick={() => update({ page: String(filters.page + 1) })}>
-                Next
-              </Button>
-              {list.isFetching && <span className="text-sm text-ink-faint">Updating…</span>}
-            </nav>
-          </>
-        )}
+                <span className="num text-sm" aria-live="polite">
+                  Page {filters.page} of {pages} · {data.total} ingredients
+                </span>
+                <Button variant="secondary" size="sm" disabled={filters.page >= pages} onClick={() => update({ page: String(filters.page + 1) })}>
+                  Next
+                </Button>
+                {list.isFetching && <span className="text-sm text-ink-faint">Updating…</span>}
+              </nav>
+            </>
+          )}
+        </QueryView>
       </Card>
 
       {isCoach && (

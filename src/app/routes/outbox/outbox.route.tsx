@@ -7,7 +7,7 @@ import { useRetryOutbox } from '@/features/mail/api/use-retry-outbox';
 import { OutboxStatusBadge } from '@/features/mail/components/outbox-status';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
-import { Card, EmptyState, ErrorState, Notice, PageHeader, Progress, Skeleton } from '@/components/ui/states';
+import { Card, EmptyState, Notice, PageHeader, Progress, QueryView, Skeleton } from '@/components/ui/states';
 import { errorMessage } from '@/lib/problem';
 import { paths } from '@/config/paths';
 
@@ -90,65 +90,68 @@ export function Component() {
             <Notice tone="block" title={retryError} />
           </div>
         )}
-        {outbox.isPending ? (
-          <Skeleton className="h-40 w-full" label="Loading the outbox" />
-        ) : outbox.isError ? (
-          <ErrorState error={outbox.error} retry={() => outbox.refetch()} />
-        ) : data!.items.length === 0 ? (
-          <EmptyState title={status ? `No ${status} messages` : 'Nothing sent yet'}>
-            Invitations and week plans you send appear here with their delivery status.
-          </EmptyState>
-        ) : (
-          <div className="overflow-x-auto">
-            <table className="w-full text-left">
-              <caption className="sr-only">Messages, newest first</caption>
-              <thead>
-                <tr className="border-b border-line text-sm text-ink-faint">
-                  <th className="py-2 pr-3">Status</th>
-                  <th className="py-2 pr-3">To</th>
-                  <th className="py-2 pr-3">What</th>
-                  <th className="py-2 pr-3">Queued</th>
-                  <th className="py-2 pr-3">Tries</th>
-                  <th className="py-2"><span className="sr-only">Actions</span></th>
-                </tr>
-              </thead>
-              <tbody>
-                {data!.items.map((m) => (
-                  <tr key={m.id} className="border-b border-line align-top">
-                    <td className="py-2 pr-3"><OutboxStatusBadge status={m.status} /></td>
-                    <td className="py-2 pr-3 break-all">{m.to}</td>
-                    <td className="py-2 pr-3">
-                      <p className="font-bold">{KIND_WORDS[m.kind]}</p>
-                      <p className="text-sm text-ink-soft">{m.subject}</p>
-                      {m.attachments.length > 0 && <p className="text-sm text-ink-faint">PDF: {m.attachments.join(', ')}</p>}
-                      {m.lastError && m.status !== 'sent' && <p className="text-sm text-signal-700">Last error: {m.lastError}</p>}
-                    </td>
-                    <td className="py-2 pr-3 text-sm">
-                      {when(m.createdAt)}
-                      {m.sentAt && <span className="block text-ink-faint">sent {when(m.sentAt)}</span>}
-                    </td>
-                    <td className="num py-2 pr-3">{m.attempts}</td>
-                    <td className="py-2">
-                      {m.status === 'failed' && (
-                        <Button
-                          size="sm"
-                          variant="secondary"
-                          busy={retry.isPending && retry.variables === m.id}
-                          onClick={() => {
-                            setRetryError(null);
-                            retry.mutate(m.id, { onError: (e) => setRetryError(errorMessage(e)) });
-                          }}
-                        >
-                          Send again
-                        </Button>
-                      )}
-                    </td>
+        <QueryView
+          query={outbox}
+          loading={<Skeleton className="h-40 w-full" label="Loading the outbox" />}
+          isEmpty={(page) => page.items.length === 0}
+          empty={
+            <EmptyState title={status ? `No ${status} messages` : 'Nothing sent yet'}>
+              Invitations and week plans you send appear here with their delivery status.
+            </EmptyState>
+          }
+        >
+          {(page) => (
+            <div className="overflow-x-auto">
+              <table className="w-full text-left">
+                <caption className="sr-only">Messages, newest first</caption>
+                <thead>
+                  <tr className="border-b border-line text-sm text-ink-faint">
+                    <th className="py-2 pr-3">Status</th>
+                    <th className="py-2 pr-3">To</th>
+                    <th className="py-2 pr-3">What</th>
+                    <th className="py-2 pr-3">Queued</th>
+                    <th className="py-2 pr-3">Tries</th>
+                    <th className="py-2"><span className="sr-only">Actions</span></th>
                   </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-        )}
+                </thead>
+                <tbody>
+                  {page.items.map((m) => (
+                    <tr key={m.id} className="border-b border-line align-top">
+                      <td className="py-2 pr-3"><OutboxStatusBadge status={m.status} /></td>
+                      <td className="py-2 pr-3 break-all">{m.to}</td>
+                      <td className="py-2 pr-3">
+                        <p className="font-bold">{KIND_WORDS[m.kind]}</p>
+                        <p className="text-sm text-ink-soft">{m.subject}</p>
+                        {m.attachments.length > 0 && <p className="text-sm text-ink-faint">PDF: {m.attachments.join(', ')}</p>}
+                        {m.lastError && m.status !== 'sent' && <p className="text-sm text-signal-700">Last error: {m.lastError}</p>}
+                      </td>
+                      <td className="py-2 pr-3 text-sm">
+                        {when(m.createdAt)}
+                        {m.sentAt && <span className="block text-ink-faint">sent {when(m.sentAt)}</span>}
+                      </td>
+                      <td className="num py-2 pr-3">{m.attempts}</td>
+                      <td className="py-2">
+                        {m.status === 'failed' && (
+                          <Button
+                            size="sm"
+                            variant="secondary"
+                            busy={retry.isPending && retry.variables === m.id}
+                            onClick={() => {
+                              setRetryError(null);
+                              retry.mutate(m.id, { onError: (e) => setRetryError(errorMessage(e)) });
+                            }}
+                          >
+                            Send again
+                          </Button>
+                        )}
+                      </td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+          )}
+        </QueryView>
         {data && pages > 1 && (
           <nav className="mt-4 flex items-center gap-3" aria-label="Outbox pages">
             <Button size="sm" variant="secondary" disabled={page <= 1} onClick={() => setPage((p) => p - 1)}>Newer</Button>

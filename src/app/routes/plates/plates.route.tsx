@@ -5,8 +5,8 @@ import { assembliesQuery } from '@/features/assemblies/api/assemblies.queries';
 import { useDeleteAssembly, useSaveAssembly } from '@/features/assemblies/api/use-assembly-mutations';
 import { AssemblyForm, assemblyToInput, emptyAssembly } from '@/features/assemblies/components/assembly-form';
 import { PlateMacros } from '@/features/assemblies/components/plate-macros';
-import { Button } from '@/components/ui/button';
-import { Card, EmptyState, ErrorState, Notice, PageHeader, Skeleton } from '@/components/ui/states';
+import { Button, EditDeleteButtons } from '@/components/ui/button';
+import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError } from '@/lib/problem';
 import { useMe } from '@/features/auth/hooks/use-me';
@@ -52,56 +52,53 @@ export function Component() {
       <DemoNotice>These plates are invented demo data for trying Trayline; their numbers come from the demo base trays.</DemoNotice>
       {editing && <Editor plate={editing === 'new' ? null : editing} onDone={() => setEditing(null)} />}
       {error && <Notice tone="block" title={error} />}
-      {list.isPending ? (
-        <Skeleton className="h-40 w-full" />
-      ) : list.isError ? (
-        <ErrorState error={list.error} retry={() => list.refetch()} />
-      ) : list.data.length === 0 ? (
-        <EmptyState title="No plates yet" action={coach ? <Button onClick={() => setEditing('new')}>Make a plate</Button> : undefined}>
-          A plate combines portions of base trays with add-ons such as a low-carb wrap or a spoon of cream cheese.
-        </EmptyState>
-      ) : (
-        <ul className="grid gap-4 md:grid-cols-2">
-          {list.data.map((p) => (
-            <li key={p.id}>
-              <Card className="flex h-full flex-col gap-2">
-                <h2 className="text-xl">{p.name}</h2>
-                <PlateMacros macros={p.macros} allergens={p.allergens} />
-                {!p.complete && <Notice tone="warn" title="Some parts could not be weighed: their nutrients are left out." />}
-                <ul className="list-disc pl-5 text-sm">
-                  {p.trays.map((t) => (
-                    <li key={`t${t.trayId}`}>
-                      {t.portions} × {t.trayName}
-                    </li>
-                  ))}
-                  {p.addOns.map((a, i) => (
-                    <li key={`a${i}`}>
-                      {a.amountText} {a.unit} {a.ingredientName} {a.note && <span className="text-ink-faint">({a.note})</span>}
-                    </li>
-                  ))}
-                </ul>
-                {coach && (
-                  <div className="mt-auto flex gap-2">
-                    <Button size="sm" variant="secondary" onClick={() => setEditing(p)}>
-                      Edit
-                    </Button>
-                    <Button
-                      size="sm"
-                      variant="ghost"
-                      onClick={() => {
+      <QueryView
+        query={list}
+        loading={<Skeleton className="h-40 w-full" />}
+        isEmpty={(data) => data.length === 0}
+        empty={
+          <EmptyState title="No plates yet" action={coach ? <Button onClick={() => setEditing('new')}>Make a plate</Button> : undefined}>
+            A plate combines portions of base trays with add-ons such as a low-carb wrap or a spoon of cream cheese.
+          </EmptyState>
+        }
+      >
+        {(data) => (
+          <ul className="grid gap-4 md:grid-cols-2">
+            {data.map((p) => (
+              <li key={p.id}>
+                <Card className="flex h-full flex-col gap-2">
+                  <h2 className="text-xl">{p.name}</h2>
+                  <PlateMacros macros={p.macros} allergens={p.allergens} />
+                  {!p.complete && <Notice tone="warn" title="Some parts could not be weighed: their nutrients are left out." />}
+                  <ul className="list-disc pl-5 text-sm">
+                    {p.trays.map((t) => (
+                      <li key={`t${t.trayId}`}>
+                        {t.portions} × {t.trayName}
+                      </li>
+                    ))}
+                    {p.addOns.map((a, i) => (
+                      <li key={`a${i}`}>
+                        {a.amountText} {a.unit} {a.ingredientName} {a.note && <span className="text-ink-faint">({a.note})</span>}
+                      </li>
+                    ))}
+                  </ul>
+                  {coach && (
+                    <EditDeleteButtons
+                      name={p.name}
+                      className="mt-auto flex gap-2"
+                      onEdit={() => setEditing(p)}
+                      onDelete={() => {
                         setError(null);
                         del.mutate(p.id, { onError: (e) => setError(isApiError(e, 409) ? `${p.name} is on a week board: take it off first.` : errorMessage(e)) });
                       }}
-                    >
-                      Delete
-                    </Button>
-                  </div>
-                )}
-              </Card>
-            </li>
-          ))}
-        </ul>
-      )}
+                    />
+                  )}
+                </Card>
+              </li>
+            ))}
+          </ul>
+        )}
+      </QueryView>
     </div>
   );
 }

@@ -6,7 +6,7 @@ import { labelSheetQuery } from '@/features/shopping/api/shopping.queries';
 import { LabelSheet } from '@/features/shopping/components/label-sheet';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
-import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { EmptyState, Notice, PageHeader, QueryView } from '@/components/ui/states';
 import { counted } from '@/lib/words';
 
 const labelsOf = (labels: ContainerLabelDto[], withSpares: boolean) => (withSpares ? labels : labels.filter((l) => l.kind === 'plate'));
@@ -62,21 +62,21 @@ export function Component() {
           are guidance, not a guarantee: keep the fridge at 40 °F (4 °C) or below, and your local food code comes first.
         </Notice>
       </div>
-      {q.isPending ? (
-        <PageSkeleton />
-      ) : q.isError ? (
-        <ErrorState error={q.error} retry={() => q.refetch()} />
-      ) : labelsOf(q.data.labels, withSpares).length === 0 ? (
-        <EmptyState title="No containers for this prep day">Fill the week board and set tray counts: each plate and each spare portion gets a label.</EmptyState>
-      ) : (
-        <>
-          <p className="no-print num text-ink-soft">
-            {counted(labelsOf(q.data.labels, withSpares).length, 'label')} on{' '}
-            {counted(Math.ceil(labelsOf(q.data.labels, withSpares).length / labelsPerSheet(LABEL_SHEETS[layout])), 'sheet')}, prep day {q.data.prepDate}
-          </p>
-          <LabelSheet layout={layout} labels={labelsOf(q.data.labels, withSpares)} />
-        </>
-      )}
+      <QueryView
+        query={q}
+        isEmpty={(data) => labelsOf(data.labels, withSpares).length === 0}
+        empty={<EmptyState title="No containers for this prep day">Fill the week board and set tray counts: each plate and each spare portion gets a label.</EmptyState>}
+      >
+        {(data) => (
+          <>
+            <p className="no-print num text-ink-soft">
+              {counted(labelsOf(data.labels, withSpares).length, 'label')} on{' '}
+              {counted(Math.ceil(labelsOf(data.labels, withSpares).length / labelsPerSheet(LABEL_SHEETS[layout])), 'sheet')}, prep day {data.prepDate}
+            </p>
+            <LabelSheet layout={layout} labels={labelsOf(data.labels, withSpares)} />
+          </>
+        )}
+      </QueryView>
     </div>
   );
 }

@@ -7,7 +7,7 @@ import { invitationsQuery } from '@/features/auth/api/auth.queries';
 import { useCreateInvitation, useRevokeInvitation } from '@/features/auth/api/use-auth-mutations';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
-import { Card, EmptyState, ErrorState, Notice, PageHeader, Skeleton } from '@/components/ui/states';
+import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 
 export function Component() {
@@ -57,40 +57,41 @@ export function Component() {
       </Card>
       <Card>
         <h2 className="mb-3 text-xl">Invitations</h2>
-        {list.isPending ? (
-          <Skeleton className="h-20 w-full" />
-        ) : list.isError ? (
-          <ErrorState error={list.error} retry={() => list.refetch()} />
-        ) : list.data.length === 0 ? (
-          <EmptyState title="No invitations yet">Invite your kitchen assistant above.</EmptyState>
-        ) : (
-          <table className="w-full text-left">
-            <thead>
-              <tr className="border-b border-line text-sm text-ink-faint">
-                <th className="py-2">E-mail</th>
-                <th>Role</th>
-                <th>Status</th>
-                <th><span className="sr-only">Actions</span></th>
-              </tr>
-            </thead>
-            <tbody>
-              {list.data.map((inv) => (
-                <tr key={inv.id} className="border-b border-line">
-                  <td className="py-2">{inv.email}</td>
-                  <td>{inv.role}</td>
-                  <td>{inv.acceptedAt ? 'Joined' : new Date(inv.expiresAt) < new Date() ? 'Expired' : 'Waiting'}</td>
-                  <td className="text-right">
-                    {!inv.acceptedAt && (
-                      <Button size="sm" variant="ghost" onClick={() => revoke.mutate(inv.id)}>
-                        Withdraw
-                      </Button>
-                    )}
-                  </td>
+        <QueryView
+          query={list}
+          loading={<Skeleton className="h-20 w-full" />}
+          isEmpty={(data) => data.length === 0}
+          empty={<EmptyState title="No invitations yet">Invite your kitchen assistant above.</EmptyState>}
+        >
+          {(data) => (
+            <table className="w-full text-left">
+              <thead>
+                <tr className="border-b border-line text-sm text-ink-faint">
+                  <th className="py-2">E-mail</th>
+                  <th>Role</th>
+                  <th>Status</th>
+                  <th><span className="sr-only">Actions</span></th>
                 </tr>
-              ))}
-            </tbody>
-          </table>
-        )}
+              </thead>
+              <tbody>
+                {data.map((inv) => (
+                  <tr key={inv.id} className="border-b border-line">
+                    <td className="py-2">{inv.email}</td>
+                    <td>{inv.role}</td>
+                    <td>{inv.acceptedAt ? 'Joined' : new Date(inv.expiresAt) < new Date() ? 'Expired' : 'Waiting'}</td>
+                    <td className="text-right">
+                      {!inv.acceptedAt && (
+                        <Button size="sm" variant="ghost" onClick={() => revoke.mutate(inv.id)}>
+                          Withdraw
+                        </Button>
+                      )}
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          )}
+        </QueryView>
       </Card>
     </div>
   );

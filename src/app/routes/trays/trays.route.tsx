@@ -6,7 +6,7 @@ import { traysQuery } from '@/features/trays/api/trays.queries';
 import { TrayCard } from '@/features/trays/components/tray-card';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { SelectField, TextField } from '@/components/ui/field';
-import { EmptyState, ErrorState, PageHeader, Skeleton } from '@/components/ui/states';
+import { EmptyState, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 
 /** The base-tray library: cards with photo, macros per portion and tags; filters kept in the address. */
@@ -60,40 +60,45 @@ export function Component() {
           <option value="all">All trays</option>
         </SelectField>
       </form>
-      {list.isPending ? (
-        <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
-          {[0, 1, 2].map((i) => (
-            <Skeleton key={i} className="h-72 w-full" label="Loading base trays" />
-          ))}
-        </div>
-      ) : list.isError ? (
-        <ErrorState error={list.error} retry={() => list.refetch()} />
-      ) : list.data.length === 0 ? (
-        filtered ? (
-          <EmptyState title="No base tray matches these filters">Clear a filter to see more.</EmptyState>
-        ) : (
-          <EmptyState
-            title={me.role === 'client' ? 'Nothing planned for you yet' : 'No base trays yet'}
-            action={
-              me.role === 'coach' ? (
-                <Link to={paths.trayNew} className="inline-flex min-h-11 items-center rounded-lg bg-ink px-4 font-bold text-paper-card">
-                  Write the first base tray
-                </Link>
-              ) : undefined
-            }
-          >
-            {me.role === 'client'
-              ? 'Your coach’s base trays appear here once they are in your plan.'
-              : 'A base tray is one recipe on one pan, cut into equal portions.'}
-          </EmptyState>
-        )
-      ) : (
-        <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3" aria-label="Base trays">
-          {list.data.map((t) => (
-            <TrayCard key={t.id} tray={t} />
-          ))}
-        </ul>
-      )}
+      <QueryView
+        query={list}
+        loading={
+          <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+            {[0, 1, 2].map((i) => (
+              <Skeleton key={i} className="h-72 w-full" label="Loading base trays" />
+            ))}
+          </div>
+        }
+        isEmpty={(data) => data.length === 0}
+        empty={
+          filtered ? (
+            <EmptyState title="No base tray matches these filters">Clear a filter to see more.</EmptyState>
+          ) : (
+            <EmptyState
+              title={me.role === 'client' ? 'Nothing planned for you yet' : 'No base trays yet'}
+              action={
+                me.role === 'coach' ? (
+                  <Link to={paths.trayNew} className="inline-flex min-h-11 items-center rounded-lg bg-ink px-4 font-bold text-paper-card">
+                    Write the first base tray
+                  </Link>
+                ) : undefined
+              }
+            >
+              {me.role === 'client'
+                ? 'Your coach’s base trays appear here once they are in your plan.'
+                : 'A base tray is one recipe on one pan, cut into equal portions.'}
+            </EmptyState>
+          )
+        }
+      >
+        {(data) => (
+          <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3" aria-label="Base trays">
+            {data.map((t) => (
+              <TrayCard key={t.id} tray={t} />
+            ))}
+          </ul>
+        )}
+      </QueryView>
     </div>
   );
 }

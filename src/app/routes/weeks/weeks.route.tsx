@@ -7,7 +7,7 @@ import { useCreateWeek } from '@/features/weeks/api/use-week-mutations';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
-import { Card, EmptyState, ErrorState, Notice, PageHeader, Skeleton } from '@/components/ui/states';
+import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { isApiError, errorMessage } from '@/lib/problem';
 import { paths } from '@/config/paths';
 
@@ -62,36 +62,37 @@ export function Component() {
         </Card>
       )}
       <Card>
-        {list.isPending ? (
-          <Skeleton className="h-24 w-full" />
-        ) : list.isError ? (
-          <ErrorState error={list.error} retry={() => list.refetch()} />
-        ) : list.data.length === 0 ? (
-          <EmptyState title="No prep weeks yet">Create a week above to start its board.</EmptyState>
-        ) : (
-          <ul className="flex flex-col divide-y divide-line">
-            {list.data.map((w) => (
-              <li key={w.id} className="flex flex-wrap items-center justify-between gap-2 py-3">
-                <div>
-                  {me.role === 'coach' ? (
-                    <Link to={paths.week(w.id)} className="text-lg font-bold underline">
-                      {w.name}
-                    </Link>
-                  ) : (
-                    <span className="text-lg font-bold">{w.name}</span>
-                  )}
-                  <p className="text-sm text-ink-soft">
-                    {w.startDate} – {w.endDate} · prep {w.prepDate}
-                    {w.secondPrepDate ? ` and ${w.secondPrepDate}` : ''} · <span className="num">{w.cellCount}</span> plates placed
-                  </p>
-                </div>
-                <span className="text-sm">
-                  {w.publishedVersion ? `Published v${w.publishedVersion}${w.changedSincePublished ? ' (changed since)' : ''}` : 'Draft'}
-                </span>
-              </li>
-            ))}
-          </ul>
-        )}
+        <QueryView
+          query={list}
+          loading={<Skeleton className="h-24 w-full" />}
+          isEmpty={(data) => data.length === 0}
+          empty={<EmptyState title="No prep weeks yet">Create a week above to start its board.</EmptyState>}
+        >
+          {(data) => (
+            <ul className="flex flex-col divide-y divide-line">
+              {data.map((w) => (
+                <li key={w.id} className="flex flex-wrap items-center justify-between gap-2 py-3">
+                  <div>
+                    {me.role === 'coach' ? (
+                      <Link to={paths.week(w.id)} className="text-lg font-bold underline">
+                        {w.name}
+                      </Link>
+                    ) : (
+                      <span className="text-lg font-bold">{w.name}</span>
+                    )}
+                    <p className="text-sm text-ink-soft">
+                      {w.startDate} – {w.endDate} · prep {w.prepDate}
+                      {w.secondPrepDate ? ` and ${w.secondPrepDate}` : ''} · <span className="num">{w.cellCount}</span> plates placed
+                    </p>
+                  </div>
+                  <span className="text-sm">
+                    {w.publishedVersion ? `Published v${w.publishedVersion}${w.changedSincePublished ? ' (changed since)' : ''}` : 'Draft'}
+                  </span>
+                </li>
+              ))}
+            </ul>
+          )}
+        </QueryView>
       </Card>
     </div>
   );

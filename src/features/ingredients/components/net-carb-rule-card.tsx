@@ -3,7 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import type { NetCarbRuleKind } from '@shared/domain/nutrition';
 import { Button } from '@/components/ui/button';
-import { Card, ErrorState, Notice, Skeleton } from '@/components/ui/states';
+import { Card, Notice, QueryView, Skeleton } from '@/components/ui/states';
 import { isApiError } from '@/lib/problem';
 import { workspaceSettingsQuery } from '../api/ingredients.queries';
 import { useUpdateWorkspaceSettings } from '../api/use-ingredient-mutations';
@@ -22,60 +22,61 @@ export function NetCarbRuleCard() {
   return (
     <Card>
       <h2 id={groupId} className="mb-3 text-xl">Net carbs</h2>
-      {settings.isPending ? (
-        <Skeleton className="h-24 w-full" />
-      ) : settings.isError ? (
-        <ErrorState error={settings.error} retry={() => settings.refetch()} />
-      ) : (
-        <form
-          className="flex flex-col gap-3"
-          onSubmit={(e) => {
-            e.preventDefault();
-            if (!choice) return;
-            setStale(false);
-            save.mutate(
-              { netCarbRule: choice, version: settings.data.version },
-              {
-                onSuccess: () => toast.success('Net-carb rule saved; every net-carb number now uses it'),
-                onError: (err) => {
-                  if (isApiError(err, 409)) {
-                    setStale(true);
-                    void settings.refetch();
-                  }
+      <QueryView
+        query={settings}
+        loading={<Skeleton className="h-24 w-full" />}
+      >
+        {(data) => (
+          <form
+            className="flex flex-col gap-3"
+            onSubmit={(e) => {
+              e.preventDefault();
+              if (!choice) return;
+              setStale(false);
+              save.mutate(
+                { netCarbRule: choice, version: data.version },
+                {
+                  onSuccess: () => toast.success('Net-carb rule saved; every net-carb number now uses it'),
+                  onError: (err) => {
+                    if (isApiError(err, 409)) {
+                      setStale(true);
+                      void settings.refetch();
+                    }
+                  },
                 },
-              },
-            );
-          }}
-        >
-          <Notice tone="info">{settings.data.help}</Notice>
-          <fieldset aria-labelledby={groupId} className="flex flex-col gap-2">
-            {settings.data.netCarbRules.map((r) => (
-              <label key={r.kind} className="flex min-h-11 items-start gap-3 rounded-lg border border-line p-3 has-[:checked]:border-ink">
-                <input
-                  type="radio"
-                  name="netCarbRule"
-                  value={r.kind}
-                  checked={choice === r.kind}
-                  onChange={() => setChoice(r.kind)}
-                  className="mt-1 h-5 w-5"
-                />
-                <span>
-                  <span className="font-bold">{r.label}</span>
-                  <span className="block text-sm text-ink-soft">{r.formula}</span>
-                </span>
-              </label>
-            ))}
-          </fieldset>
-          {stale && (
-            <Notice tone="warn" title="Someone else changed this setting">
-              The current choice is shown again; save once more to apply yours.
-            </Notice>
-          )}
-          <Button type="submit" busy={save.isPending} disabled={choice === settings.data.netCarbRule} className="self-start">
-            Save rule
-          </Button>
-        </form>
-      )}
+              );
+            }}
+          >
+            <Notice tone="info">{data.help}</Notice>
+            <fieldset aria-labelledby={groupId} className="flex flex-col gap-2">
+              {data.netCarbRules.map((r) => (
+                <label key={r.kind} className="flex min-h-11 items-start gap-3 rounded-lg border border-line p-3 has-[:checked]:border-ink">
+                  <input
+                    type="radio"
+                    name="netCarbRule"
+                    value={r.kind}
+                    checked={choice === r.kind}
+                    onChange={() => setChoice(r.kind)}
+                    className="mt-1 h-5 w-5"
+                  />
+                  <span>
+                    <span className="font-bold">{r.label}</span>
+                    <span className="block text-sm text-ink-soft">{r.formula}</span>
+                  </span>
+                </label>
+              ))}
+            </fieldset>
+            {stale && (
+              <Notice tone="warn" title="Someone else changed this setting">
+                The current choice is shown again; save once more to apply yours.
+              </Notice>
+            )}
+            <Button type="submit" busy={save.isPending} disabled={choice === data.netCarbRule} className="self-start">
+              Save rule
+            </Button>
+          </form>
+        )}
+      </QueryView>
     </Card>
   );
 }
