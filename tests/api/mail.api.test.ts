@@ -7,7 +7,7 @@ import { startMailCatcher, type MailCatcher } from '@server/modules/mail/mail-ca
 import { startMail, type MailRuntime } from '@server/modules/mail/mail-runtime.js';
 import { MAIL_QUEUE, RESET_QUEUE, queueMail } from '@server/modules/mail/mail.service.js';
 import { issuePasswordReset } from '@server/modules/auth/auth.service.js';
-import { registerPdf } from '@server/modules/mail/pdf-registry.js';
+import { registerAttachment } from '@server/modules/mail/attachment-registry.js';
 import { renderWeekPlanPdf } from '@server/modules/pdf/week-plan.pdf.js';
 import { agentFor, testApp } from '../support/test-app.js';
 import { coachWorkspace, PASSWORD, uniq } from '../support/factories.js';
@@ -115,7 +115,7 @@ describe('invitation e-mail', () => {
 
 describe('PDF attachments', () => {
   it('a week-plan e-mail carries the PDF rendered at send time, to the right recipient', async () => {
-    registerPdf('test-week-plan', async (_em, payload) =>
+    registerAttachment('test-week-plan', async (_em, payload) =>
       renderWeekPlanPdf({
         businessName: 'Oat & Ember Prep',
         clientName: String(payload.clientName),

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
+import ICAL from 'ical.js';
 import { PDFParse } from 'pdf-parse';
 import type { Orm } from '@server/db/orm.js';
 import { startMailCatcher, type MailCatcher } from '@server/modules/mail/mail-catcher.js';
@@ -49,7 +50,7 @@ const DAYS = ['2026-01-05', '2026-01-06'];
  * A published week: Ana (e-mail) eats plate A on two days, Ben (e-mail) plate B on one day, Cy (no e-mail) plate A
  * on one day; Dee (e-mail) has no plates. Ingredient: 350 kcal, 30 g fat, 20 g protein, 2 g carbs per 100 g.
  */
-async function publishedWeek(coach: Member, opts: { publish?: boolean } = {}) {
+async function publishedWeek(coach: Member, opts: { publish?: boolean; anaSecondDayFrozen?: boolean } = {}) {
   const ing = await makeIngredient(coach, { allergens: [] });
   // 16 oz of the ingredient per tray, cut 4 × 4 = 16 portions: 1 oz per portion.
   const tray = await makeTray(coach, { lines: [{ ingredientId: ing.id, amountText: '16', unit: 'oz', note: '' }], yieldFactor: 1 }, ing.id);
@@ -63,7 +64,15 @@ async function publishedWeek(coach: Member, opts: { publish?: boolean } = {}) {
   const cell = (clientId: number, date: string, assemblyId: number) => ({ clientId, date, slot: 'breakfast', assemblyId });
   const filled = await coach.agent
     .put(`/api/weeks/${board.week.id}/cells`)
-    .send({ version: board.week.version, cells: [...DAYS.map((d) => cell(ana.id, d, plateA.id)), cell(ben.id, DAYS[0], plateB.id), cell(cy.id, DAYS[0], plateA.id)] })
+    .send({
+      version: board.week.version,
+      cells: [
+        cell(ana.id, DAYS[0], plateA.id),
+        { ...cell(ana.id, DAYS[1], plateA.id), ...(opts.anaSecondDayFrozen ? { prepDate: '2026-01-04', storage: 'frozen' } : {}) },
+        cell(ben.id, DAYS[0], plateB.id),
+        cell(cy.id, DAYS[0], plateA.id),
+      ],
+    })
     .expect(200);
   const trays = await coach.agent
     .put(`/api/weeks/${board.week.id}/trays`)
@@ -92,6 +101,34 @@ const binary = (res: { on: (e: string, f: (c?: Buffer) => void) => void }, cb: (
 };
 
 describe('sending a week', () => {
+  it('a client with a frozen plate also gets the thaw reminders as a calendar file, and the e-mail says so', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await publishedWeek(coach, { anaSecondDayFrozen: true });
+    const res = await coach.agent.post(`/api/weeks/${w.weekId}/send`).send({ clientIds: [w.ana.id, w.ben.id] }).expect(202);
+    const rows = await rowsOfBatch(res.body.batchId);
+    const payload = (clientId: number) => ({ weekId: w.weekId, clientId, publicationVersion: 1, note: null });
+    const ana = rows.find((r) => r.client_id === w.ana.id)!;
+    const ben = rows.find((r) => r.client_id === w.ben.id)!;
+    expect(ana.attachments).toEqual([
+      { pdf: 'week-plan', payload: payload(w.ana.id) },
+      { pdf: 'week-thaw-reminders', payload: payload(w.ana.id) },
+    ]);
+    expect(ben.attachments).toEqual([{ pdf: 'week-plan', payload: payload(w.ben.id) }]);
+
+    await until(async () => (await sql<Row>('select status from outbox where id = $1', [ana.id]))[0].status === 'sent', 20_000, 'sent');
+    const [caught] = await sql<{ id: number; text: string }>('select id, text from caught_mail where message_id = $1', [`<${ana.idempotency_key}@trayline>`]);
+    expect(caught.text).toContain('the calendar file attached reminds you on the evening before');
+    const atts = await sql<{ filename: string; content_type: string; content: Buffer }>(
+      'select filename, content_type, content from caught_mail_attachment where mail_id = $1 order by position',
+      [caught.id],
+    );
+    expect(atts.map((a) => a.content_type.split(';')[0])).toEqual(['application/pdf', 'text/calendar']);
+    expect(atts[1].filename).toBe('thaw-reminders-2026-01-05.ics');
+    // Read back with ical.js (Mozilla's RFC 5545 parser): Tuesday's frozen plate thaws on Monday evening at 19:00.
+    const events = new ICAL.Component(ICAL.parse(atts[1].content.toString('utf8'))).getAllSubcomponents('vevent').map((v) => new ICAL.Event(v));
+    expect(events.map((e) => [e.startDate.toString(), e.summary])).toEqual([['2026-01-05T19:00:00', `Move tomorrow's ${w.plateA.name} to the fridge`]]);
+  });
+
   it('to all: one e-mail per client with an e-mail on the published board; the PDF holds that client’s plates and macros', async () => {
     const coach = await coachWorkspace(app);
     const w = await publishedWeek(coach);

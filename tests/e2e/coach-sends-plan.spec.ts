@@ -28,7 +28,7 @@ test("the coach e-mails one client the week's plan; the outbox shows it sent and
   await page.goto('/outbox');
   const row = page.getByRole('row').filter({ hasText: client.email }).first();
   await expect(row.getByRole('cell').first()).toHaveText(/^\W*Sent$/, { timeout: 15_000 });
-  await expect(row.getByText(/^PDF: \S+/)).toBeVisible();
+  await expect(row.getByText(/^Attached: the week plan \(PDF\)/)).toBeVisible();
   await expectNoSeriousA11yViolations(page, 'outbox');
 
   // The caught message: to that client, with our note in its text and a PDF attachment.
@@ -42,6 +42,9 @@ test("the coach e-mails one client the week's plan; the outbox shows it sent and
   const attachment = item.getByRole('link', { name: /\.pdf$/ });
   await expect(attachment).toBeVisible();
   await expect(item.getByText(/\(application\/pdf, \d+ KB\)/)).toBeVisible();
+  // Dana's week has a frozen plate (the demo's Sunday breakfast): her thaw reminders ride along as a calendar file.
+  await expect(item.getByRole('link', { name: /^thaw-reminders-\d{4}-\d{2}-\d{2}\.ics$/ })).toBeVisible();
+  await expect(item.getByText(/the calendar file attached reminds you/)).toBeVisible();
   await expectNoSeriousA11yViolations(page, 'caught mail');
   await page.screenshot({ path: `${SHOTS}/coach-sends-plan.png`, fullPage: true });
 

@@ -47,10 +47,21 @@ export function passwordResetMail(p: { link: string; minutes: number }): MailBod
 }
 
 /** A client's week (the PDF is attached by the job). `note` is the coach's personal note. */
-export function weekPlanMail(p: { businessName: string; clientName: string; weekLabel: string; note?: string | null; link?: string }): MailBody {
+export function weekPlanMail(p: {
+  businessName: string;
+  clientName: string;
+  weekLabel: string;
+  note?: string | null;
+  link?: string;
+  /** A calendar file of thaw reminders goes along (the week has a frozen plate). */
+  thawReminders?: boolean;
+}): MailBody {
   const lines = [
     `Hello ${p.clientName},`,
     `your plan for the week of ${p.weekLabel} is attached as a PDF: each day's plate, how to put it together and reheat it, the macros and the eat-by dates.`,
+    ...(p.thawReminders
+      ? ['Some plates come frozen: the calendar file attached reminds you on the evening before to move each one from the freezer to the fridge. Open it to add the reminders to your calendar.']
+      : []),
     ...(p.note ? [`A note from ${p.businessName}:\n${p.note}`] : []),
   ];
   return {

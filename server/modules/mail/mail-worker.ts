@@ -1,7 +1,7 @@
 import pg from 'pg';
 import type { MikroORM } from '@mikro-orm/postgresql';
 import type { OutboxAttachmentSpec } from './outbox.entity.js';
-import { MissingPdfRenderer, pdfRenderer } from './pdf-registry.js';
+import { MissingAttachmentRenderer, attachmentRenderer } from './attachment-registry.js';
 import type { MailSender } from './mail-transport.js';
 import { messageIdOf } from './mail.service.js';
 
@@ -80,10 +80,10 @@ export async function sendOutboxRow(deps: WorkerDeps, id: number, attempt: { fin
     }
     const attachments = [];
     for (const spec of row.attachments ?? []) {
-      const render = pdfRenderer(spec.pdf);
-      if (!render) throw new MissingPdfRenderer(spec.pdf);
-      const pdf = await render(deps.orm.em.fork(), spec.payload);
-      attachments.push({ filename: pdf.filename, content: pdf.buffer, contentType: 'application/pdf' });
+      const render = attachmentRenderer(spec.pdf);
+      if (!render) throw new MissingAttachmentRenderer(spec.pdf);
+      const file = await render(deps.orm.em.fork(), spec.payload);
+      attachments.push({ filename: file.filename, content: file.buffer, contentType: file.contentType ?? 'application/pdf' });
     }
     await deps.send({
       from: deps.from,

@@ -11,15 +11,14 @@ import { actorOf, allow } from '../../http/authz.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import type { MailQueue } from '../mail/mail.service.js';
-import type { RenderedPdf } from '../mail/pdf-registry.js';
+import type { RenderedAttachment } from '../mail/attachment-registry.js';
 import { clientDeliveries, coachPlanPdf, myPlanPdf, sendWeek } from './week-mail.service.js';
 import { myWeek } from './week-publish.service.js';
-import { thawRemindersIcs } from './thaw-reminders-ics.js';
-import { thawTasks } from '@shared/domain/eat-by.js';
+import { thawRemindersFile } from './week-mail.js';
 import { NotFound } from '../../http/errors.js';
 import type { Response } from 'express';
 
-function sendPdf(res: Response, pdf: RenderedPdf) {
+function sendPdf(res: Response, pdf: RenderedAttachment) {
   res.type('application/pdf').attachment(pdf.filename).setHeader('cache-control', 'private, no-store');
   res.send(pdf.buffer);
 }
@@ -42,10 +41,10 @@ export function weekMailRoutes(deps: { mail: MailQueue; publicUrl: string }) {
     validated({ query: myPlanQuery }, async ({ query }, req, res) => {
       const week = await myWeek(emOf(req), actorOf(req), query.today);
       if (!week) throw new NotFound('Published week');
-      const text = thawRemindersIcs(thawTasks(week.days), { calendarName: `Thaw reminders, ${week.name}`, uidPrefix: `week${week.weekId}-thaw` });
-      res.setHeader('content-type', 'text/calendar; charset=utf-8');
-      res.setHeader('content-disposition', `attachment; filename="thaw-reminders-${week.startDate}.ics"`);
-      res.send(text);
+      const file = thawRemindersFile(week, week.days);
+      res.setHeader('content-type', file.contentType!);
+      res.setHeader('content-disposition', `attachment; filename="${file.filename}"`);
+      res.send(file.buffer);
     }),
   );
 

@@ -14,7 +14,7 @@ import { Workspace } from '../workspaces/workspace.entity.js';
 import { Week, WeekPublication } from './week.entity.js';
 import { findWeek } from './week-board.service.js';
 import { myWeek } from './week-publish.service.js';
-import { renderPublishedPlan, WEEK_PLAN_PDF, type WeekPlanPayload } from './week-mail.js';
+import { hasThawReminders, renderPublishedPlan, THAW_REMINDERS_ICS, WEEK_PLAN_PDF, type WeekPlanPayload } from './week-mail.js';
 
 /** Seconds in which the same send (same week version, note and clients) without a requestId counts as a repeat. */
 export const REPEAT_WINDOW_SECONDS = 15;
@@ -104,7 +104,8 @@ export async function sendWeek(
     const weekLabel = longDate(pub.snapshot.startDate);
     const link = `${opts.publicUrl.replace(/\/$/, '')}/my-plates`;
     for (const r of recipients) {
-      const body = weekPlanMail({ businessName: ws.name, clientName: r.name, weekLabel, note, link });
+      const thaw = hasThawReminders(pub.snapshot.clients[String(r.clientId)]?.days ?? []);
+      const body = weekPlanMail({ businessName: ws.name, clientName: r.name, weekLabel, note, link, thawReminders: thaw });
       const payload: WeekPlanPayload = { weekId: week.id, clientId: r.clientId, publicationVersion: version, note };
       await queueMail(tx, queue, {
         workspaceId: actor.workspaceId,
@@ -117,7 +118,11 @@ export async function sendWeek(
         weekId: week.id,
         batchId,
         note,
-        attachments: [{ pdf: WEEK_PLAN_PDF, payload: payload as unknown as Record<string, unknown> }],
+        // The plan first (a repeated send is recognised by it), then the thaw reminders when a plate is frozen.
+        attachments: [
+          { pdf: WEEK_PLAN_PDF, payload: payload as unknown as Record<string, unknown> },
+          ...(thaw ? [{ pdf: THAW_REMINDERS_ICS, payload: payload as unknown as Record<string, unknown> }] : []),
+        ],
         idempotencyKey: deliveryKey(week.id, version, r.clientId, batchId),
       });
     }

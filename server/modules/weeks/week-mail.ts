@@ -1,11 +1,12 @@
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenLabel } from '@shared/domain/allergens.js';
-import { CAUTIONS } from '@shared/domain/eat-by.js';
+import { CAUTIONS, thawTasks } from '@shared/domain/eat-by.js';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema.js';
 import type { PdfMacros, WeekPlanPdfData, WeekPlanPdfDay } from '@shared/schemas/pdf.schema.js';
 import { NotFound } from '../../http/errors.js';
-import { registerPdf, type RenderedPdf } from '../mail/pdf-registry.js';
+import { registerAttachment, type RenderedAttachment } from '../mail/attachment-registry.js';
+import { thawRemindersIcs } from './thaw-reminders-ics.js';
 import { renderWeekPlanPdf } from '../pdf/week-plan.pdf.js';
 import { longDate } from '../pdf/pdf-format.js';
 import { Client, type IClient } from '../clients/client.entity.js';
@@ -26,6 +27,8 @@ export interface WeekPlanPayload {
 }
 
 export const WEEK_PLAN_PDF = 'week-plan';
+/** The client's thaw reminders as a calendar file, sent beside the plan when the week has a frozen plate. */
+export const THAW_REMINDERS_ICS = 'week-thaw-reminders';
 
 function macros(m: MyPlateDto['macros']): PdfMacros {
   return { kcal: m.kcal, fatG: m.fatG, proteinG: m.proteinG, netCarbsG: m.netCarbsG, carbsG: m.carbsG };
@@ -97,8 +100,29 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
   };
 }
 
-export async function renderPublishedPlan(em: EntityManager, p: WeekPlanPayload, workspaceId?: number): Promise<RenderedPdf> {
+export async function renderPublishedPlan(em: EntityManager, p: WeekPlanPayload, workspaceId?: number): Promise<RenderedAttachment> {
   return renderWeekPlanPdf((await publishedPlan(em, p, workspaceId)).data);
+}
+
+/** Does this client's plan in the published snapshot hold a frozen plate to thaw (the calendar file goes along)? */
+export function hasThawReminders(days: readonly MyDayDto[]): boolean {
+  return thawTasks(days).length > 0;
+}
+
+/** A client's thaw reminders for a published week, as a calendar file (the download and the plan e-mail's). */
+export function thawRemindersFile(week: { weekId: number; name: string; startDate: string }, days: readonly MyDayDto[]): RenderedAttachment {
+  return {
+    filename: `thaw-reminders-${week.startDate}.ics`,
+    buffer: Buffer.from(thawRemindersIcs(thawTasks(days), { calendarName: `Thaw reminders, ${week.name}`, uidPrefix: `week${week.weekId}-thaw` })),
+    contentType: 'text/calendar; charset=utf-8',
+  };
+}
+
+/** The thaw reminders of one client's published plan, rendered when the plan e-mail leaves. */
+export async function renderThawReminders(em: EntityManager, p: WeekPlanPayload): Promise<RenderedAttachment> {
+  const pub = await em.findOne(WeekPublication, { week: p.weekId, number: p.publicationVersion });
+  if (!pub) throw new NotFound('Published week');
+  return thawRemindersFile({ weekId: p.weekId, name: pub.snapshot.name, startDate: pub.snapshot.startDate }, pub.snapshot.clients[String(p.clientId)]?.days ?? []);
 }
 
 function payloadOf(raw: Record<string, unknown>): WeekPlanPayload {
@@ -111,4 +135,5 @@ function payloadOf(raw: Record<string, unknown>): WeekPlanPayload {
 }
 
 // Wiring at import time (the routes import this file): the mail job finds the renderer by kind.
-registerPdf(WEEK_PLAN_PDF, (em, payload) => renderPublishedPlan(em as EntityManager, payloadOf(payload)));
+registerAttachment(WEEK_PLAN_PDF, (em, payload) => renderPublishedPlan(em as EntityManager, payloadOf(payload)));
+registerAttachment(THAW_REMINDERS_ICS, (em, payload) => renderThawReminders(em as EntityManager, payloadOf(payload)));

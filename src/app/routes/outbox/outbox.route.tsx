@@ -19,6 +19,9 @@ const KIND_WORDS: Record<MailKind, string> = {
   'bake-run': 'Bake run',
 };
 
+/** What each attachment kind is, in words (an unknown kind shows as stored). */
+const ATTACHMENT_WORDS: Record<string, string> = { 'week-plan': 'the week plan (PDF)', 'week-thaw-reminders': 'thaw reminders (calendar)' };
+
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 export function Component() {
@@ -122,7 +125,7 @@ export function Component() {
                       <td className="py-2 pr-3">
                         <p className="font-bold">{KIND_WORDS[m.kind]}</p>
                         <p className="text-sm text-ink-soft">{m.subject}</p>
-                        {m.attachments.length > 0 && <p className="text-sm text-ink-faint">PDF: {m.attachments.join(', ')}</p>}
+                        {m.attachments.length > 0 && <p className="text-sm text-ink-faint">Attached: {m.attachments.map((k) => ATTACHMENT_WORDS[k] ?? k).join(', ')}</p>}
                         {m.lastError && m.status !== 'sent' && <p className="text-sm text-signal-700">Last error: {m.lastError}</p>}
                       </td>
                       <td className="py-2 pr-3 text-sm">

@@ -4,6 +4,7 @@ import { OutboxStatusBadge } from '@/features/mail/components/outbox-status';
 import { EmptyState, ErrorState, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { deliveriesQuery } from '../api/week-mail.queries';
+import { counted } from '@/lib/words';
 
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -47,7 +48,7 @@ export function DeliveryLog({ clientId }: { clientId: number }) {
                   <time dateTime={m.sentAt}>{when(m.sentAt)}</time>
                 </>
               )}
-              {m.attachments.length > 0 && ` · ${m.attachments.length} PDF`}
+              {m.attachments.length > 0 && ` · ${counted(m.attachments.length, 'attachment')}`}
             </p>
             {m.note && <p className="text-sm italic">“{m.note}”</p>}
             {m.lastError && m.status !== 'sent' && <p className="text-sm text-signal-700">{m.lastError}</p>}
