@@ -9,9 +9,8 @@ import { Cautions } from '@/components/domain/cautions';
 import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/week-mail/api/week-mail.queries';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { counted } from '@/lib/words';
+import { dayLabel } from '@/lib/dates';
 
-const dayLabel = (iso: string, long = false) =>
-  new Date(`${iso}T12:00:00Z`).toLocaleDateString(undefined, { weekday: long ? 'long' : 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
 
 function Macros({ m }: { m: MyPlateDto['macros'] }) {
   return (

@@ -1,9 +1,8 @@
 import { LABEL_SHEETS, labelPosition, pagesOf, type LabelSheetCode } from '@shared/domain/label-sheets';
 import { REHEAT_MIN_C, REHEAT_MIN_F } from '@shared/domain/eat-by';
 import type { ContainerLabelDto } from '@shared/schemas/shopping.schema';
+import { dayLabel } from '@/lib/dates';
 
-const fmt = (iso: string) =>
-  new Date(`${iso}T12:00:00Z`).toLocaleDateString([], { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' });
 
 function Label({ label, small }: { label: ContainerLabelDto; small: boolean }) {
   const m = label.macros;
@@ -13,9 +12,9 @@ function Label({ label, small }: { label: ContainerLabelDto; small: boolean }) {
         <p className={`truncate font-bold ${small ? 'text-[8pt]' : 'text-[11pt]'}`}>{label.title}</p>
         <p className="truncate">{label.subtitle}</p>
         <p>
-          Made <b>{fmt(label.madeOn)}</b> · Eat by <b>{fmt(label.eatBy)}</b>
+          Made <b>{dayLabel(label.madeOn)}</b> · Eat by <b>{dayLabel(label.eatBy)}</b>
         </p>
-        {label.freezeBy && <p>{label.freezeBy.startsWith('Frozen') ? label.freezeBy : <>Freeze by <b>{fmt(label.freezeBy)}</b></>}</p>}
+        {label.freezeBy && <p>{label.freezeBy.startsWith('Frozen') ? label.freezeBy : <>Freeze by <b>{dayLabel(label.freezeBy)}</b></>}</p>}
         <p className="truncate">
           Reheat: {label.reheat ?? 'until hot'} — to {REHEAT_MIN_F} °F ({REHEAT_MIN_C} °C)
         </p>

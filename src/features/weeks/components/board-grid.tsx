@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { memo, useCallback, useMemo, useState } from 'react';
 import {
   DndContext,
   KeyboardSensor,
@@ -10,15 +10,15 @@ import {
   type DragEndEvent,
 } from '@dnd-kit/core';
 import { allergenLabel } from '@shared/domain/allergens';
-import type { BoardCellDto, BoardDto, CellInput } from '@shared/schemas/weeks.schema';
+import type { AssemblyDto } from '@shared/schemas/assemblies.schema';
+import type { BoardCellDto, BoardDayDto, BoardDto, CellInput } from '@shared/schemas/weeks.schema';
 import type { WordedWarning } from '@shared/domain/week-check';
 import { cellEatBy } from '@shared/domain/week-board';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { counted } from '@/lib/words';
+import { dayLabel } from '@/lib/dates';
 
-const dayLabel = (iso: string) =>
-  new Date(`${iso}T12:00:00Z`).toLocaleDateString(undefined, { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
 
 export const cellId = (clientId: number, date: string, slot: string) => `cell|${clientId}|${date}|${slot}`;
 
@@ -49,7 +49,7 @@ interface CellProps {
   kcal: number | undefined;
   flags: WordedWarning[];
   selected: boolean;
-  onSelect: () => void;
+  onSelect: (id: string) => void;
   /** Where the cell is (client, day, slot), for its accessible name. */
   where: string;
 }
@@ -61,7 +61,7 @@ function Cell({ id, cell, plateName, kcal, flags, selected, onSelect, where }: C
     <button
       type="button"
       ref={setNodeRef}
-      onClick={onSelect}
+      onClick={() => onSelect(id)}
       aria-pressed={selected}
       aria-label={`${where}: ${cell ? (plateName ?? 'Plate') : 'empty'}${flags.length ? `, ${counted(flags.length, 'problem')}` : ''}`}
       className={`flex min-h-14 w-full flex-col items-start rounded-md border px-2 py-1 text-left text-xs ${
@@ -86,6 +86,85 @@ function Cell({ id, cell, plateName, kcal, flags, selected, onSelect, where }: C
   );
 }
 
+type BoardClient = BoardDto['clients'][number];
+
+interface ClientRowProps {
+  client: BoardClient;
+  days: string[];
+  slots: string[];
+  plates: Map<number, AssemblyDto>;
+  /** This client's cells, day by day and slot by slot (undefined where empty). */
+  cells: (BoardCellDto | undefined)[];
+  /** This client's day checks, day by day. */
+  checks: (BoardDayDto | undefined)[];
+  /** The selected cell when it is in this row. */
+  selected: string | null;
+  onSelect: (id: string) => void;
+}
+
+/** Same props, element by element for the row's cells and checks (they keep their identity when unchanged). */
+function sameRow(a: ClientRowProps, b: ClientRowProps): boolean {
+  const sameItems = <T,>(x: readonly T[], y: readonly T[]) => x.length === y.length && x.every((v, i) => v === y[i]);
+  return (
+    a.client === b.client &&
+    a.days === b.days &&
+    a.slots === b.slots &&
+    a.plates === b.plates &&
+    a.selected === b.selected &&
+    a.onSelect === b.onSelect &&
+    sameItems(a.cells, b.cells) &&
+    sameItems(a.checks, b.checks)
+  );
+}
+
+/**
+ * One client's week on the board. Memoized: an edit gives a new board, but unchanged cells and day checks keep their
+ * identity (the query cache shares equal parts), so only the rows whose cells or checks changed render again.
+ */
+const ClientRow = memo(function ClientRow({ client, days, slots, plates, cells, checks, selected, onSelect }: ClientRowProps) {
+  return (
+    <tr>
+      <th scope="row" className="sticky left-0 z-10 w-36 min-w-36 border-r border-line bg-paper-card px-1 pr-2 text-left align-top text-sm">
+        <span className="font-bold">{client.name}</span>
+        <span className="num block text-xs text-ink-faint">
+          ×{client.householdMultiplier} · {client.targets.targetKcal} kcal · ≤{client.targets.netCarbCapG} g
+        </span>
+        {client.allergens.length > 0 && <span className="block text-xs text-signal-700">⚠ {client.allergens.map(allergenLabel).join(', ')}</span>}
+      </th>
+      {days.map((date, d) => {
+        const day = checks[d];
+        return (
+          <td key={date} className="min-w-28 align-top">
+            <div className="flex flex-col gap-1">
+              {slots.map((slot, k) => {
+                const id = cellId(client.id, date, slot);
+                const cell = cells[d * slots.length + k];
+                const plate = cell ? plates.get(cell.assemblyId) : undefined;
+                const flags = (day?.warnings ?? []).filter((w) => 'slot' in w && w.slot === slot);
+                return (
+                  <div key={slot}>
+                    {slots.length > 1 && <span className="text-[10px] uppercase text-ink-faint">{slot}</span>}
+                    <Cell id={id} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} onSelect={onSelect} where={`${client.name}, ${dayLabel(date)}, ${slot}`} />
+                  </div>
+                );
+              })}
+              {day && (
+                <p className="num text-[11px] leading-tight text-ink-soft" title="Day totals against the planned share of the client's targets">
+                  {Math.round(day.totals.kcal)}/{client.targets.targetKcal} kcal · {day.totals.netCarbsG}/{client.targets.netCarbCapG} g net · {day.totals.proteinG}/
+                  {client.targets.proteinG} g P
+                  {day.warnings.some((w) => !('slot' in w)) && (
+                    <span className="block font-bold text-caution-700">⚠ {day.warnings.filter((w) => !('slot' in w)).map((w) => w.kind.replace(/-/g, ' ')).join(', ')}</span>
+                  )}
+                </p>
+              )}
+            </div>
+          </td>
+        );
+      })}
+    </tr>
+  );
+}, sameRow);
+
 export interface CellEdit {
   cells: CellInput[];
   label: string;
@@ -101,6 +180,7 @@ interface Props {
 export function BoardGrid({ board, busy, onEdit }: Props) {
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor));
   const [selected, setSelected] = useState<string | null>(null);
+  const onSelect = useCallback((id: string) => setSelected((s) => (s === id ? null : id)), []);
   const plates = useMemo(() => new Map(board.plates.map((p) => [p.id, p])), [board.plates]);
   const cells = useMemo(() => new Map(board.cells.map((c) => [cellId(c.clientId, c.date, c.slot), c])), [board.cells]);
   const checks = useMemo(() => new Map(board.checks.map((c) => [`${c.clientId}|${c.date}`, c])), [board.checks]);
@@ -169,45 +249,17 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
             </thead>
             <tbody>
               {board.clients.map((client) => (
-                <tr key={client.id}>
-                  <th scope="row" className="sticky left-0 z-10 w-36 min-w-36 border-r border-line bg-paper-card px-1 pr-2 text-left align-top text-sm">
-                    <span className="font-bold">{client.name}</span>
-                    <span className="num block text-xs text-ink-faint">
-                      ×{client.householdMultiplier} · {client.targets.targetKcal} kcal · ≤{client.targets.netCarbCapG} g
-                    </span>
-                    {client.allergens.length > 0 && <span className="block text-xs text-signal-700">⚠ {client.allergens.map(allergenLabel).join(', ')}</span>}
-                  </th>
-                  {board.days.map((date) => {
-                    const day = checks.get(`${client.id}|${date}`);
-                    return (
-                      <td key={date} className="min-w-28 align-top">
-                        <div className="flex flex-col gap-1">
-                          {board.slots.map((slot) => {
-                            const id = cellId(client.id, date, slot);
-                            const cell = cells.get(id);
-                            const plate = cell ? plates.get(cell.assemblyId) : undefined;
-                            const flags = (day?.warnings ?? []).filter((w) => 'slot' in w && w.slot === slot);
-                            return (
-                              <div key={slot}>
-                                {board.slots.length > 1 && <span className="text-[10px] uppercase text-ink-faint">{slot}</span>}
-                                <Cell id={id} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} onSelect={() => setSelected(selected === id ? null : id)} where={`${client.name}, ${dayLabel(date)}, ${slot}`} />
-                              </div>
-                            );
-                          })}
-                          {day && (
-                            <p className="num text-[11px] leading-tight text-ink-soft" title="Day totals against the planned share of the client's targets">
-                              {Math.round(day.totals.kcal)}/{client.targets.targetKcal} kcal · {day.totals.netCarbsG}/{client.targets.netCarbCapG} g net · {day.totals.proteinG}/
-                              {client.targets.proteinG} g P
-                              {day.warnings.some((w) => !('slot' in w)) && (
-                                <span className="block font-bold text-caution-700">⚠ {day.warnings.filter((w) => !('slot' in w)).map((w) => w.kind.replace(/-/g, ' ')).join(', ')}</span>
-                              )}
-                            </p>
-                          )}
-                        </div>
-                      </td>
-                    );
-                  })}
-                </tr>
+                <ClientRow
+                  key={client.id}
+                  client={client}
+                  days={board.days}
+                  slots={board.slots}
+                  plates={plates}
+                  cells={board.days.flatMap((date) => board.slots.map((slot) => cells.get(cellId(client.id, date, slot))))}
+                  checks={board.days.map((date) => checks.get(`${client.id}|${date}`))}
+                  selected={selected?.startsWith(`cell|${client.id}|`) ? selected : null}
+                  onSelect={onSelect}
+                />
               ))}
             </tbody>
           </table>

@@ -1,9 +1,8 @@
 import { useState } from 'react';
 import type { BoardDto, PutTraysInput } from '@shared/schemas/weeks.schema';
 import { Button } from '@/components/ui/button';
+import { dayLabel } from '@/lib/dates';
 
-const dayLabel = (iso: string) =>
-  new Date(`${iso}T12:00:00Z`).toLocaleDateString(undefined, { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
 
 /** Portions needed (cells × household) against portions baked (tray counts × cut plan), per tray and prep day. */
 export function InventoryPanel({ board, busy, onCover, onSave }: { board: BoardDto; busy: boolean; onCover: () => void; onSave: (trays: PutTraysInput['trays']) => void }) {
