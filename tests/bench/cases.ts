@@ -28,6 +28,14 @@ async function getJson<T>(ctx: BenchContext, p: string): Promise<T> {
   return (await r.json()) as T;
 }
 
+/**
+ * The floor of any signed-in request: GET /api/auth/me reads the session with its user (one statement) and answers
+ * one small row. No goal; it shows how much of a signed-in case's ratio is the session alone.
+ */
+async function signedInFloor(): Promise<BenchCase | null> {
+  return { name: 'GET /api/auth/me (signed-in floor)', method: 'GET', path: '/api/auth/me', notes: 'session read with its user, one small answer' };
+}
+
 /** POST /api/calc/recipe with 40 lines from the reference library. */
 async function calcRecipe(ctx: BenchContext): Promise<BenchCase | null> {
   const list = await getJson<{ items: { id: number; densityGPerMl: number | null }[] }>(ctx, '/api/ingredients?pageSize=100');
@@ -229,4 +237,4 @@ async function clientPlanPdf(ctx: BenchContext): Promise<BenchCase | null> {
   return null;
 }
 
-export const benchCases: ((ctx: BenchContext) => Promise<BenchCase | null>)[] = [calcRecipe, calcBakeRun, weekRecompute, weekShopping, clientPlanPdf];
+export const benchCases: ((ctx: BenchContext) => Promise<BenchCase | null>)[] = [signedInFloor, calcRecipe, calcBakeRun, weekRecompute, weekShopping, clientPlanPdf];
