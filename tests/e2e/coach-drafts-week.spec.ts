@@ -33,7 +33,11 @@ async function keyboardDrag(page: Page, item: Locator, target: Locator) {
     if (Math.abs(dx) > to.width / 2 - 8) await page.keyboard.press(dx > 0 ? 'ArrowRight' : 'ArrowLeft');
     else await page.keyboard.press(dy > 0 ? 'ArrowDown' : 'ArrowUp');
   }
+  // A screen reader hears where the plate is before it drops: the cell's own words.
+  const where = ((await target.getAttribute('aria-label')) ?? '').split(':')[0];
+  await expect(page.getByText(`Over ${where}`, { exact: true })).toBeAttached();
   await page.keyboard.press('Space');
+  await expect(page.getByText(`Over ${where}`, { exact: true })).toHaveCount(0);
 }
 
 test('the coach drafts a week: base tray, plate, board (keyboard drag and cell panel), warning cleared, published, bake run', async ({ page }) => {
@@ -106,6 +110,23 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await panel.getByLabel('Plate', { exact: true }).focus();
   await panel.getByLabel('Plate', { exact: true }).selectOption({ label: plateName });
   await expect(second).toHaveAccessibleName(new RegExp(`: ${plateName}`));
+
+  // 4b. And with a mouse, on a screen wide enough to hold the plates beside the board: the plate lands where the
+  //     pointer lets go of it (the live region names the cell under it first).
+  await page.setViewportSize({ width: 1600, height: 1000 });
+  const third = danaCells.nth(2);
+  await expect(third).toHaveAccessibleName(/: empty$/);
+  await third.scrollIntoViewIfNeeded();
+  const from = (await item.boundingBox())!;
+  const to = (await third.boundingBox())!;
+  await page.mouse.move(from.x + 12, from.y + 12);
+  await page.mouse.down();
+  await page.mouse.move(from.x + 40, from.y + 20, { steps: 4 });
+  await page.mouse.move(to.x + to.width / 2, to.y + to.height / 2, { steps: 12 });
+  await expect(page.getByText(/^Over Dana Whitlock, .*, breakfast$/)).toBeAttached();
+  await page.mouse.up();
+  await expect(third).toHaveAccessibleName(new RegExp(`: ${plateName}`));
+  await page.setViewportSize({ width: 1280, height: 720 });
 
   // 5a. The plate has egg: on a client allergic to egg the board asks for a reason before it overrides.
   const eggRow = page.getByRole('rowheader').filter({ hasText: /⚠ .*\bEgg\b/ }).first();

@@ -1,13 +1,13 @@
-import { memo, useCallback, useMemo, useState } from 'react';
+import { memo, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import {
   DndContext,
   KeyboardSensor,
   PointerSensor,
   useDraggable,
-  useDroppable,
   useSensor,
   useSensors,
   type DragEndEvent,
+  type DragMoveEvent,
 } from '@dnd-kit/core';
 import { allergenLabel } from '@shared/domain/allergens';
 import type { AssemblyDto } from '@shared/schemas/assemblies.schema';
@@ -49,18 +49,19 @@ interface CellProps {
   kcal: number | undefined;
   flags: WordedWarning[];
   selected: boolean;
+  /** A plate is being dragged over this cell. */
+  isOver: boolean;
   onSelect: (id: string) => void;
   /** Where the cell is (client, day, slot), for its accessible name. */
   where: string;
 }
 
-function Cell({ id, cell, plateName, kcal, flags, selected, onSelect, where }: CellProps) {
-  const { setNodeRef, isOver } = useDroppable({ id });
+function Cell({ id, cell, plateName, kcal, flags, selected, isOver, onSelect, where }: CellProps) {
   const blocked = flags.some((f) => f.severity === 'block');
   return (
     <button
       type="button"
-      ref={setNodeRef}
+      data-cell-id={id}
       onClick={() => onSelect(id)}
       aria-pressed={selected}
       aria-label={`${where}: ${cell ? (plateName ?? 'Plate') : 'empty'}${flags.length ? `, ${counted(flags.length, 'problem')}` : ''}`}
@@ -99,6 +100,8 @@ interface ClientRowProps {
   checks: (BoardDayDto | undefined)[];
   /** The selected cell when it is in this row. */
   selected: string | null;
+  /** The cell a plate is dragged over, when it is in this row. */
+  over: string | null;
   onSelect: (id: string) => void;
 }
 
@@ -111,6 +114,7 @@ function sameRow(a: ClientRowProps, b: ClientRowProps): boolean {
     a.slots === b.slots &&
     a.plates === b.plates &&
     a.selected === b.selected &&
+    a.over === b.over &&
     a.onSelect === b.onSelect &&
     sameItems(a.cells, b.cells) &&
     sameItems(a.checks, b.checks)
@@ -121,7 +125,7 @@ function sameRow(a: ClientRowProps, b: ClientRowProps): boolean {
  * One client's week on the board. Memoized: an edit gives a new board, but unchanged cells and day checks keep their
  * identity (the query cache shares equal parts), so only the rows whose cells or checks changed render again.
  */
-const ClientRow = memo(function ClientRow({ client, days, slots, plates, cells, checks, selected, onSelect }: ClientRowProps) {
+const ClientRow = memo(function ClientRow({ client, days, slots, plates, cells, checks, selected, over, onSelect }: ClientRowProps) {
   return (
     <tr>
       <th scope="row" className="sticky left-0 z-10 w-36 min-w-36 border-r border-line bg-paper-card px-1 pr-2 text-left align-top text-sm">
@@ -144,7 +148,7 @@ const ClientRow = memo(function ClientRow({ client, days, slots, plates, cells, 
                 return (
                   <div key={slot}>
                     {slots.length > 1 && <span className="text-[10px] uppercase text-ink-faint">{slot}</span>}
-                    <Cell id={id} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} onSelect={onSelect} where={`${client.name}, ${dayLabel(date)}, ${slot}`} />
+                    <Cell id={id} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} isOver={over === id} onSelect={onSelect} where={`${client.name}, ${dayLabel(date)}, ${slot}`} />
                   </div>
                 );
               })}
@@ -203,12 +207,51 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
     });
   };
 
+  // The cell under the drag, found from where it is on screen (no droppable per cell: registering 840 of them cost
+  // more than drawing the board). A pointer drag aims with the pointer; a keyboard drag with the plate's centre.
+  const [over, setOver] = useState<string | null>(null);
+  const pointer = useRef<{ x: number; y: number } | null>(null);
+  useEffect(() => {
+    const track = (ev: PointerEvent) => {
+      pointer.current = { x: ev.clientX, y: ev.clientY };
+    };
+    window.addEventListener('pointermove', track, { capture: true, passive: true });
+    return () => window.removeEventListener('pointermove', track, { capture: true });
+  }, []);
+  const cellUnder = (e: DragMoveEvent | DragEndEvent): string | null => {
+    let x: number, y: number;
+    if (typeof PointerEvent !== 'undefined' && e.activatorEvent instanceof PointerEvent && pointer.current) {
+      ({ x, y } = pointer.current);
+    } else {
+      const r = e.active.rect.current.translated;
+      if (!r) return null;
+      x = r.left + r.width / 2;
+      y = r.top + r.height / 2;
+    }
+    for (const el of document.elementsFromPoint(x, y)) {
+      const id = el.closest('[data-cell-id]')?.getAttribute('data-cell-id');
+      if (id) return id;
+    }
+    return null;
+  };
+  const onDragMove = (e: DragMoveEvent) => {
+    const id = cellUnder(e);
+    setOver((prev) => (prev === id ? prev : id));
+  };
   const onDragEnd = (e: DragEndEvent) => {
-    if (!e.over) return;
+    const id = cellUnder(e);
+    setOver(null);
+    if (!id) return;
     const [, plateId] = String(e.active.id).split('|');
-    const [, clientId, date, slot] = String(e.over.id).split('|');
+    const [, clientId, date, slot] = id.split('|');
     place(Number(clientId), date, slot, Number(plateId));
   };
+  const overWhere = useMemo(() => {
+    if (!over) return null;
+    const [, clientId, date, slot] = over.split('|');
+    const client = board.clients.find((c) => c.id === Number(clientId));
+    return client ? `${client.name}, ${dayLabel(date)}, ${slot}` : null;
+  }, [over, board.clients]);
 
   const sel = selected ? selected.split('|') : null;
   const selCell = selected ? cells.get(selected) : undefined;
@@ -218,7 +261,10 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const selEat = selCell && selPlate ? { portions: cellEatBy(selCell, selPlate.trays, board.prepDates) } : undefined;
 
   return (
-    <DndContext sensors={sensors} onDragEnd={onDragEnd}>
+    <DndContext sensors={sensors} onDragMove={onDragMove} onDragEnd={onDragEnd} onDragCancel={() => setOver(null)}>
+      <p className="sr-only" aria-live="polite">
+        {overWhere ? `Over ${overWhere}` : ''}
+      </p>
       <div className="flex flex-col gap-4 2xl:flex-row">
         <aside className="2xl:w-56 2xl:shrink-0" aria-label="Plates">
           <h2 className="mb-2 text-lg font-bold">Plates</h2>
@@ -258,6 +304,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
                   cells={board.days.flatMap((date) => board.slots.map((slot) => cells.get(cellId(client.id, date, slot))))}
                   checks={board.days.map((date) => checks.get(`${client.id}|${date}`))}
                   selected={selected?.startsWith(`cell|${client.id}|`) ? selected : null}
+                  over={over?.startsWith(`cell|${client.id}|`) ? over : null}
                   onSelect={onSelect}
                 />
               ))}
