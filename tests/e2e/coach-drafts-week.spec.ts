@@ -38,6 +38,8 @@ async function keyboardDrag(page: Page, item: Locator, target: Locator) {
   await expect(page.getByText(`Over ${where}`, { exact: true })).toBeAttached();
   await page.keyboard.press('Space');
   await expect(page.getByText(`Over ${where}`, { exact: true })).toHaveCount(0);
+  // …and then what was dropped where, in words (not dnd-kit's internal ids).
+  await expect(page.getByText(`dropped on ${where}.`)).toBeAttached();
 }
 
 test('the coach drafts a week: base tray, plate, board (keyboard drag and cell panel), warning cleared, published, bake run', async ({ page }) => {

@@ -6,6 +6,7 @@ import {
   useDraggable,
   useSensor,
   useSensors,
+  type Announcements,
   type DragEndEvent,
   type DragMoveEvent,
 } from '@dnd-kit/core';
@@ -18,7 +19,6 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { counted } from '@/lib/words';
 import { dayLabel } from '@/lib/dates';
-
 
 export const cellId = (clientId: number, date: string, slot: string) => `cell|${clientId}|${date}|${slot}`;
 
@@ -252,6 +252,19 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
     const client = board.clients.find((c) => c.id === Number(clientId));
     return client ? `${client.name}, ${dayLabel(date)}, ${slot}` : null;
   }, [over, board.clients]);
+  // What a screen reader hears, in plate names and cell words (dnd-kit's defaults say internal ids). While moving,
+  // the live line above names the cell under the plate.
+  const lastWhere = useRef<string | null>(null);
+  useEffect(() => {
+    lastWhere.current = overWhere;
+  }, [overWhere]);
+  const plateOf = (activeId: string | number) => plates.get(Number(String(activeId).split('|')[1]))?.name ?? 'The plate';
+  const announcements: Announcements = {
+    onDragStart: ({ active }) => `Picked up ${plateOf(active.id)}. The arrow keys move it, Space drops it, Escape puts it back.`,
+    onDragOver: () => undefined,
+    onDragEnd: ({ active }) => (lastWhere.current ? `${plateOf(active.id)} dropped on ${lastWhere.current}.` : `${plateOf(active.id)} dropped outside the board.`),
+    onDragCancel: ({ active }) => `${plateOf(active.id)} put back.`,
+  };
 
   const sel = selected ? selected.split('|') : null;
   const selCell = selected ? cells.get(selected) : undefined;
@@ -261,7 +274,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const selEat = selCell && selPlate ? { portions: cellEatBy(selCell, selPlate.trays, board.prepDates) } : undefined;
 
   return (
-    <DndContext sensors={sensors} onDragMove={onDragMove} onDragEnd={onDragEnd} onDragCancel={() => setOver(null)}>
+    <DndContext sensors={sensors} accessibility={{ announcements }} onDragMove={onDragMove} onDragEnd={onDragEnd} onDragCancel={() => setOver(null)}>
       <p className="sr-only" aria-live="polite">
         {overWhere ? `Over ${overWhere}` : ''}
       </p>
