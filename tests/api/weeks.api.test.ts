@@ -162,7 +162,8 @@ describe('eat-by on the board', () => {
     const me = await member(app, coach, 'client', { clientId: client.id });
     const ics = await me.agent.get('/api/weeks/mine/thaw-reminders.ics?today=2026-01-05').expect(200);
     expect(ics.headers['content-type']).toMatch(/^text\/calendar/);
-    expect(ics.headers['content-disposition']).toMatch(/attachment; filename="thaw-reminders-2026-01-05\.ics"/);
+    expect(ics.headers['cache-control']).toBe('private, no-store');
+    expect(ics.headers['content-disposition']).toMatch(/^attachment; filename="?thaw-reminders-2026-01-05\.ics"?$/);
     const events = new ICAL.Component(ICAL.parse(ics.text)).getAllSubcomponents('vevent').map((v) => new ICAL.Event(v));
     expect(events.map((e) => [e.startDate.toString(), e.startDate.zone?.tzid])).toEqual([
       ['2026-01-08T19:00:00', 'floating'],

@@ -18,9 +18,10 @@ import { thawRemindersFile } from './week-mail.js';
 import { NotFound } from '../../http/errors.js';
 import type { Response } from 'express';
 
-function sendPdf(res: Response, pdf: RenderedAttachment) {
-  res.type('application/pdf').attachment(pdf.filename).setHeader('cache-control', 'private, no-store');
-  res.send(pdf.buffer);
+/** A personal file to download (a plan PDF, a calendar file): never kept by a shared cache. */
+function sendAttachment(res: Response, file: RenderedAttachment) {
+  res.type(file.contentType ?? 'application/pdf').attachment(file.filename).setHeader('cache-control', 'private, no-store');
+  res.send(file.buffer);
 }
 
 /** Sending a published week to clients, the delivery log, and the week-plan PDF downloads. */
@@ -31,7 +32,7 @@ export function weekMailRoutes(deps: { mail: MailQueue; publicUrl: string }) {
   r.get(
     '/weeks/mine/plan.pdf',
     allow('client'),
-    validated({ query: myPlanQuery }, async ({ query }, req, res) => sendPdf(res, await myPlanPdf(emOf(req), actorOf(req), query.today))),
+    validated({ query: myPlanQuery }, async ({ query }, req, res) => sendAttachment(res, await myPlanPdf(emOf(req), actorOf(req), query.today))),
   );
 
   // The signed-in client's thaw reminders (the evening before each frozen plate of their current week), for a calendar.
@@ -41,10 +42,7 @@ export function weekMailRoutes(deps: { mail: MailQueue; publicUrl: string }) {
     validated({ query: myPlanQuery }, async ({ query }, req, res) => {
       const week = await myWeek(emOf(req), actorOf(req), query.today);
       if (!week) throw new NotFound('Published week');
-      const file = thawRemindersFile(week, week.days);
-      res.setHeader('content-type', file.contentType!);
-      res.setHeader('content-disposition', `attachment; filename="${file.filename}"`);
-      res.send(file.buffer);
+      sendAttachment(res, thawRemindersFile(week, week.days));
     }),
   );
 
@@ -62,7 +60,7 @@ export function weekMailRoutes(deps: { mail: MailQueue; publicUrl: string }) {
     '/weeks/:weekId/clients/:clientId/plan.pdf',
     allow('coach'),
     validated({ params: weekClientPlanParams }, async ({ params }, req, res) =>
-      sendPdf(res, await coachPlanPdf(emOf(req), actorOf(req), params.weekId, params.clientId)),
+      sendAttachment(res, await coachPlanPdf(emOf(req), actorOf(req), params.weekId, params.clientId)),
     ),
   );
 
