@@ -49,4 +49,13 @@ test('the assistant checks two items on the shopping list (they sink, strike thr
   await expect(page.getByRole('button', { name: 'Print' })).toBeHidden();
   await expect(page.getByRole('heading', { level: 1, name: 'Shopping list' })).toBeVisible();
   await page.screenshot({ path: `${SHOTS}/assistant-shopping.png`, fullPage: true });
+
+  // Home: the kitchen's week shows the same progress, the next prep day and the way to the bake run.
+  await page.emulateMedia({ media: 'screen' });
+  await page.goto('/');
+  await expect(page.getByRole('heading', { name: 'This week in the kitchen' })).toBeVisible();
+  await expect(page.getByRole('progressbar', { name: 'In the trolley' })).toHaveAttribute('aria-valuenow', '2');
+  await expect(page.getByText(/^(Next prep day: .+|No prep day ahead this week)$/)).toBeVisible();
+  await expect(page.getByRole('link', { name: 'Bake run' }).first()).toBeVisible();
+  await expectNoSeriousA11yViolations(page, 'assistant home');
 });

@@ -5,6 +5,7 @@ import { Cautions } from '@/components/domain/cautions';
 import { NAV } from '@/app/nav';
 import { paths } from '@/config/paths';
 import { WeekGlance } from '@/features/weeks/components/week-glance';
+import { KitchenGlance } from '@/features/shopping/components/kitchen-glance';
 
 export function Component() {
   const me = useMe();
@@ -14,6 +15,7 @@ export function Component() {
     <div className="flex flex-col gap-6">
       <PageHeader title={`Hello, ${me.name.split(' ')[0]}`} lead={me.workspaceName} />
       {me.role === 'coach' && <WeekGlance />}
+      {me.role === 'assistant' && <KitchenGlance />}
       <Card>
         <h2 className="mb-3 text-xl">Where to go</h2>
         <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3">

@@ -1,0 +1,87 @@
+import { Link } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
+import { Card, EmptyState, Notice, Progress, QueryView, Skeleton } from '@/components/ui/states';
+import { paths } from '@/config/paths';
+import { dayLabel } from '@/lib/dates';
+import { localToday } from '@/features/weeks/api/weeks.queries';
+import { currentWeekQuery, shoppingListQuery } from '../api/shopping.queries';
+
+/** The prep days of the week still to come (today included), earliest first. */
+function prepDaysAhead(w: WeekSummaryDto, today: string): string[] {
+  return [w.prepDate, ...(w.secondPrepDate ? [w.secondPrepDate] : [])].filter((d) => d >= today).sort();
+}
+
+function ShoppingProgress({ weekId }: { weekId: number }) {
+  const q = useQuery(shoppingListQuery(weekId));
+  return (
+    <QueryView query={q} loading={<Skeleton className="h-10 w-full" label="Loading the shopping list" />}>
+      {(list) =>
+        list.bought ? (
+          <p>Marked bought {new Date(list.bought.at).toLocaleDateString(undefined, { weekday: 'short', day: 'numeric', month: 'short' })}: the pantry is up to date.</p>
+        ) : list.itemCount === 0 ? (
+          <p>Nothing to buy yet.</p>
+        ) : (
+          <Progress value={list.checkedCount} max={list.itemCount} label="In the trolley" />
+        )
+      }
+    </QueryView>
+  );
+}
+
+/** The kitchen's "this week": the next prep day, how far the shopping is, and the week's bake run and labels. */
+export function KitchenGlance() {
+  const q = useQuery(currentWeekQuery());
+  const today = localToday();
+  return (
+    <QueryView
+      query={q}
+      loading={<Skeleton className="h-28 w-full" label="Loading this week" />}
+      isEmpty={(w) => w === null}
+      empty={<EmptyState title="No prep week yet">The shopping list, bake run and labels appear here once the coach plans a week.</EmptyState>}
+    >
+      {(w) => {
+        const week = w!;
+        const ahead = prepDaysAhead(week, today);
+        return (
+          <Card>
+            <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
+              <h2 className="text-xl">This week in the kitchen</h2>
+              <span className="text-ink-soft">{week.name}</span>
+            </div>
+            <div className="grid gap-3 sm:grid-cols-2">
+              <Notice tone="cold" title={ahead.length ? `Next prep day: ${dayLabel(ahead[0], true)}${ahead[0] === today ? ' (today)' : ''}` : 'No prep day ahead this week'}>
+                {ahead.length > 1 && `Then ${dayLabel(ahead[1], true)}.`}
+              </Notice>
+              <div className="flex flex-col gap-2 rounded-lg border border-line-strong bg-paper-card p-3">
+                <Link to={paths.shopping(week.id)} className="font-bold underline">
+                  Shopping list
+                </Link>
+                <ShoppingProgress weekId={week.id} />
+              </div>
+            </div>
+            {!week.publishedVersion && (
+              <div className="mt-3">
+                <Notice tone="warn" title="Not published yet">
+                  The coach is still planning this week: the shopping list and bake run may change.
+                </Notice>
+              </div>
+            )}
+            <ul className="mt-3 flex flex-wrap gap-2">
+              {[
+                { to: paths.bakeRun(week.id), label: 'Bake run' },
+                { to: paths.labels(week.id), label: 'Labels' },
+              ].map((l) => (
+                <li key={l.to}>
+                  <Link to={l.to} className="inline-flex min-h-11 items-center rounded-lg border border-line-strong bg-paper px-3 font-bold hover:bg-paper-deep">
+                    {l.label}
+                  </Link>
+                </li>
+              ))}
+            </ul>
+          </Card>
+        );
+      }}
+    </QueryView>
+  );
+}

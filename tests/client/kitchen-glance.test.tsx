@@ -1,0 +1,60 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { cleanup, render, screen } from '@testing-library/react';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { MemoryRouter } from 'react-router-dom';
+import { KitchenGlance } from '@/features/shopping/components/kitchen-glance';
+import { dayLabel } from '@/lib/dates';
+
+// The assistant's "this week": invented week and list values for the check; "today" is pinned with fake timers.
+const json = (body: unknown) => new Response(JSON.stringify(body), { headers: { 'content-type': 'application/json' } });
+const week = { id: 7, name: 'Week of Jan 5', startDate: '2026-01-05', endDate: '2026-01-11', prepDate: '2026-01-04', secondPrepDate: '2026-01-07', publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 9, version: 3 };
+const list = (over: Record<string, unknown> = {}) => ({ weekId: 7, aisles: [], itemCount: 12, checkedCount: 5, totalCostCents: 0, costComplete: true, problems: [], bought: null, ...over });
+
+function show(current: unknown, shopping: unknown = list()) {
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (url: string) => (url === '/api/weeks/current' ? json(current) : url === '/api/weeks/7/shopping' ? json(shopping) : json(null))),
+  );
+  render(
+    <MemoryRouter>
+      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
+        <KitchenGlance />
+      </QueryClientProvider>
+    </MemoryRouter>,
+  );
+}
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+  vi.useRealTimers();
+});
+
+describe('kitchen glance', () => {
+  it('names the next prep day still to come, the shopping progress, and links the week’s bake run and labels', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 5, 9), toFake: ['Date'] });
+    show(week);
+    // Sunday's prep is past on Monday: Wednesday's is next.
+    expect(await screen.findByText(`Next prep day: ${dayLabel('2026-01-07', true)}`)).toBeTruthy();
+    const bar = await screen.findByRole('progressbar', { name: 'In the trolley' });
+    expect(bar.getAttribute('aria-valuenow')).toBe('5');
+    expect(bar.getAttribute('aria-valuemax')).toBe('12');
+    expect(screen.getByRole('link', { name: 'Shopping list' }).getAttribute('href')).toBe('/weeks/7/shopping');
+    expect(screen.getByRole('link', { name: 'Bake run' }).getAttribute('href')).toBe('/weeks/7/bake-run');
+    expect(screen.getByRole('link', { name: 'Labels' }).getAttribute('href')).toBe('/weeks/7/labels');
+    expect(screen.queryByText('Not published yet')).toBeNull();
+  });
+
+  it('says when the week is not published, and when the list was marked bought', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 4, 9), toFake: ['Date'] });
+    show({ ...week, publishedVersion: null }, list({ bought: { at: '2026-01-03T18:00:00Z', by: 'Kit' } }));
+    expect(await screen.findByText(`Next prep day: ${dayLabel('2026-01-04', true)} (today)`)).toBeTruthy();
+    expect(await screen.findByText(/^Marked bought .*: the pantry is up to date\.$/)).toBeTruthy();
+    expect(screen.getByText('Not published yet')).toBeTruthy();
+  });
+
+  it('shows the empty state when the coach has planned no week', async () => {
+    show(null);
+    expect(await screen.findByRole('heading', { name: 'No prep week yet' })).toBeTruthy();
+  });
+});
