@@ -25,6 +25,7 @@ export const cellId = (clientId: number, date: string, slot: string) => `cell|${
 function PaletteItem({ id, name, detail }: { id: number; name: string; detail: string }) {
   const { attributes, listeners, setNodeRef, transform, isDragging } = useDraggable({ id: `plate|${id}` });
   // The list item stays a plain <li>; the draggable (role="button" from dnd-kit) sits inside it.
+  // touch-none: on a touch screen the browser would take the finger's move for a scroll and cancel the drag.
   return (
     <li>
       <div
@@ -33,7 +34,7 @@ function PaletteItem({ id, name, detail }: { id: number; name: string; detail: s
         {...attributes}
         aria-roledescription="Plate you can drag onto the board"
         style={transform ? { transform: `translate3d(${transform.x}px, ${transform.y}px, 0)` } : undefined}
-        className={`cursor-grab rounded-lg border border-line-strong bg-paper-card px-3 py-2 shadow-tray focus:outline-2 focus:outline-ink ${isDragging ? 'relative z-30 opacity-80' : ''}`}
+        className={`cursor-grab touch-none rounded-lg border border-line-strong bg-paper-card px-3 py-2 shadow-tray focus:outline-2 focus:outline-ink ${isDragging ? 'relative z-30 opacity-80' : ''}`}
       >
         <p className="font-bold">{name}</p>
         <p className="num text-xs text-ink-faint">{detail}</p>
