@@ -1,7 +1,8 @@
-import { Link, Navigate } from 'react-router-dom';
+import { Navigate } from 'react-router-dom';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { Card, PageHeader } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
+import { TileLink } from '@/components/ui/tile-link';
 import { NAV } from '@/app/nav';
 import { paths } from '@/config/paths';
 import { WeekGlance } from '@/features/weeks/components/week-glance';
@@ -21,9 +22,7 @@ export function Component() {
         <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3">
           {links.map((l) => (
             <li key={l.to}>
-              <Link to={l.to} className="flex min-h-11 items-center rounded-lg border border-line-strong bg-paper px-3 font-bold hover:bg-paper-deep">
-                {l.label}
-              </Link>
+              <TileLink to={l.to} label={l.label} />
             </li>
           ))}
         </ul>

@@ -3,6 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { Card, EmptyState, Notice, Progress, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
+import { TileLink } from '@/components/ui/tile-link';
 import { dayLabel } from '@/lib/dates';
 import { localToday } from '@/features/weeks/api/weeks.queries';
 import { currentWeekQuery, shoppingListQuery } from '../api/shopping.queries';
@@ -73,9 +74,7 @@ export function KitchenGlance() {
                 { to: paths.labels(week.id), label: 'Labels' },
               ].map((l) => (
                 <li key={l.to}>
-                  <Link to={l.to} className="inline-flex min-h-11 items-center rounded-lg border border-line-strong bg-paper px-3 font-bold hover:bg-paper-deep">
-                    {l.label}
-                  </Link>
+                  <TileLink to={l.to} label={l.label} className="inline-flex" />
                 </li>
               ))}
             </ul>
