@@ -195,6 +195,33 @@ describe('eat-by on the board', () => {
 });
 
 describe('the week board', () => {
+  it('answers each cell edit with the board a fresh read gives (placed, replaced, moved to frozen, overridden, emptied)', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach, { allergens: ['milk'] });
+    const other = await makeAssembly(coach, (await makeTray(coach, {}, (await makeIngredient(coach, { allergens: [] })).id)).id, { name: 'No milk plate' });
+    const second = await makeClient(coach, { name: 'Second client' });
+    let version = week.version;
+    const edits = [
+      [{ clientId: second.id, date: DAYS[2], slot: 'breakfast', assemblyId: plate.id }, { clientId: second.id, date: DAYS[0], slot: 'breakfast', assemblyId: other.id }],
+      [{ clientId: second.id, date: DAYS[2], slot: 'breakfast', assemblyId: other.id }],
+      [{ clientId: second.id, date: DAYS[5], slot: 'breakfast', assemblyId: plate.id, storage: 'frozen', prepDate: '2026-01-04' }],
+      [{ clientId: client.id, date: DAYS[1], slot: 'breakfast', assemblyId: plate.id, allergenOverrides: [{ allergen: 'milk', reason: 'Lactose-free, client confirmed' }] }],
+      [{ clientId: second.id, date: DAYS[0], slot: 'breakfast', assemblyId: null }],
+    ];
+    for (const cells of edits) {
+      const put = await coach.agent.put(`/api/weeks/${week.id}/cells`).send({ version, cells }).expect(200);
+      const read = await coach.agent.get(`/api/weeks/${week.id}`).expect(200);
+      expect(put.body).toEqual(read.body);
+      expect(put.body.week.version).toBe(version + 1);
+      version = put.body.week.version;
+    }
+    expect(expandBoard(await coach.agent.get(`/api/weeks/${week.id}`).then((r) => r.body)).cells.map((c) => [c.clientId, c.date, c.assemblyId, c.storage])).toEqual([
+      [client.id, DAYS[1], plate.id, 'fridge'],
+      [second.id, DAYS[2], other.id, 'fridge'],
+      [second.id, DAYS[5], plate.id, 'frozen'],
+    ]);
+  });
+
   it('refuses an allergen conflict unless the coach overrides it with a reason', async () => {
     const coach = await coachWorkspace(app);
     const { plate, client, week } = await setup(coach, { allergens: ['milk'] });

@@ -17,7 +17,7 @@ import type {
 import type { Actor } from '../../http/authz.js';
 import { StaleEdit, ValidationError } from '../../http/errors.js';
 import { Tray } from '../trays/tray.entity.js';
-import { Week, WeekCell, WeekPublication, WeekTray, type IWeek } from './week.entity.js';
+import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell } from './week.entity.js';
 import {
   boardInput,
   findWeek,
@@ -28,6 +28,7 @@ import {
   presentBoard,
   presentWeekSummary,
   weekDays,
+  type BoardCellRow,
   type BoardData,
 } from './week-board.service.js';
 
@@ -99,8 +100,15 @@ async function openForEdit(em: EntityManager, actor: Actor, id: number, version:
  * must still be at the version the edit was checked against: another edit that landed in between makes this a 409
  * (checked when the week is read in the transaction, and again by the versioned UPDATE), never a silent overwrite.
  */
-export async function commitWeekEdit(em: EntityManager, actor: Actor, week: Pick<IWeek, 'id' | 'version'>, write: (tx: EntityManager, w: IWeek) => Promise<void>) {
-  await em.transactional(async (tx) => {
+export async function commitWeekEdit(
+  em: EntityManager,
+  actor: Actor,
+  week: Pick<IWeek, 'id' | 'version'>,
+  write: (tx: EntityManager, w: IWeek) => Promise<void>,
+  /** The answer from the committed version, when the caller can build it without reading the board again. */
+  answer?: (version: number) => BoardAnswer,
+): Promise<BoardAnswer> {
+  const version = await em.transactional(async (tx) => {
     const w = await tx.findOneOrFail(
       Week,
       { id: week.id, workspace: actor.workspaceId },
@@ -109,9 +117,10 @@ export async function commitWeekEdit(em: EntityManager, actor: Actor, week: Pick
     await write(tx, w);
     w.updatedAt = new Date();
     await tx.flush();
+    return w.version;
   });
   em.clear();
-  return getBoard(em, actor, week.id);
+  return answer ? answer(version) : getBoard(em, actor, week.id);
 }
 
 export async function updateWeek(em: EntityManager, actor: Actor, id: number, v: UpdateWeek): Promise<BoardAnswer> {
@@ -208,30 +217,58 @@ export async function putCells(em: EntityManager, actor: Actor, id: number, v: P
   const data = await loadBoardById(em, actor, id);
   if (data.week.version !== v.version) await stale(em, actor, data.week);
   checkCells(data, v.cells);
-  return commitWeekEdit(em, actor, data.week, async (tx, w) => {
-    // Only the rows of the edited clients and days (a drag touches one cell; the ORM hydrates and diffs every row read).
-    const existing = await tx.find(WeekCell, {
-      week: w.id,
-      client: { $in: [...new Set(v.cells.map((c) => c.clientId))] },
-      date: { $in: [...new Set(v.cells.map((c) => c.date))] },
-    });
-    const byKey = new Map(existing.map((c) => [cellKey({ clientId: c.client.id, date: c.date, slot: c.slot }), c]));
-    for (const c of v.cells) {
-      const row = byKey.get(cellKey(c));
-      if (c.assemblyId === null) {
-        if (row) tx.remove(row);
-        continue;
+  const written = new Map<string, IWeekCell>();
+  return commitWeekEdit(
+    em,
+    actor,
+    data.week,
+    async (tx, w) => {
+      // Only the rows of the edited clients and days (a drag touches one cell; the ORM hydrates and diffs every row read).
+      const existing = await tx.find(WeekCell, {
+        week: w.id,
+        client: { $in: [...new Set(v.cells.map((c) => c.clientId))] },
+        date: { $in: [...new Set(v.cells.map((c) => c.date))] },
+      });
+      const byKey = new Map(existing.map((c) => [cellKey({ clientId: c.client.id, date: c.date, slot: c.slot }), c]));
+      for (const c of v.cells) {
+        const row = byKey.get(cellKey(c));
+        if (c.assemblyId === null) {
+          if (row) tx.remove(row);
+          continue;
+        }
+        const values = {
+          assembly: c.assemblyId,
+          prepDate: c.prepDate ?? null,
+          storage: c.storage,
+          allergenOverrides: c.allergenOverrides,
+        };
+        if (row) tx.assign(row, values as never);
+        written.set(cellKey(c), row ?? tx.create(WeekCell, { week: w.id, client: c.clientId, date: c.date, slot: c.slot, ...values } as never));
       }
-      const values = {
-        assembly: c.assemblyId,
-        prepDate: c.prepDate ?? null,
-        storage: c.storage,
-        allergenOverrides: c.allergenOverrides,
-      };
-      if (row) tx.assign(row, values as never);
-      else tx.create(WeekCell, { week: w.id, client: c.clientId, date: c.date, slot: c.slot, ...values } as never);
-    }
-  });
+    },
+    // The commit held the version the board was read at, so the board now is that board with these cells: answer it
+    // from the rows already read instead of reading all of them again.
+    (version) => presentBoard(withEditedCells(data, version, v.cells, written)),
+  );
+}
+
+/** The board read before an edit, with the edit's cells in place (removed, replaced or added) and the new version. */
+function withEditedCells(data: BoardData, version: number, cells: PutCells['cells'], written: Map<string, IWeekCell>): BoardData {
+  const edited = new Set(cells.map((c) => cellKey(c)));
+  const kept = data.cells.filter((c) => !edited.has(cellKey({ clientId: c.client.id, date: c.date, slot: c.slot })));
+  const placed: BoardCellRow[] = [...written.values()].map((c) => ({
+    id: c.id,
+    client: { id: c.client.id },
+    assembly: { id: c.assembly.id },
+    date: c.date,
+    slot: c.slot,
+    prepDate: c.prepDate ?? null,
+    storage: c.storage,
+    allergenOverrides: (c.allergenOverrides ?? []) as BoardCellRow['allergenOverrides'],
+  }));
+  // In the order the board reads them (day, then id), as a fresh read would give them.
+  const all = [...kept, ...placed].sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : a.id - b.id));
+  return { ...data, week: { ...data.week, version }, cells: all };
 }
 
 /** Replaces the week's tray counts. */
