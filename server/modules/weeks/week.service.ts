@@ -246,8 +246,9 @@ export async function putCells(em: EntityManager, actor: Actor, id: number, v: P
         written.set(cellKey(c), row ?? tx.create(WeekCell, { week: w.id, client: c.clientId, date: c.date, slot: c.slot, ...values } as never));
       }
     },
-    // The commit held the version the board was read at, so the board now is that board with these cells: answer it
-    // from the rows already read instead of reading all of them again.
+    // The commit held the version the board was read at, so its cells are the ones read plus this edit: answer from
+    // the rows already read instead of reading all of them again. Plates, clients and trays are as read a moment
+    // before the commit; a change made to them meanwhile shows on the next read, as it would a moment later anyway.
     (version) => presentBoard(withEditedCells(data, version, v.cells, written)),
   );
 }
