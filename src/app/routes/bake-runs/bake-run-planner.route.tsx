@@ -12,6 +12,7 @@ import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton, QueryVi
 import { isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { counted } from '@/lib/words';
+import { dayLabel } from '@/lib/dates';
 
 function todayAt8(): string {
   const d = new Date();
@@ -84,8 +85,8 @@ export function Component() {
               {data.map((w) => (
                 <li key={w.id}>
                   <Link className="inline-flex min-h-11 items-center font-bold underline" to={paths.bakeRun(w.id)}>
-                    {w.name}: prep {w.prepDate}
-                    {w.secondPrepDate ? ` and ${w.secondPrepDate}` : ''}
+                    {w.name}: prep {dayLabel(w.prepDate)}
+                    {w.secondPrepDate ? ` and ${dayLabel(w.secondPrepDate)}` : ''}
                   </Link>
                 </li>
               ))}

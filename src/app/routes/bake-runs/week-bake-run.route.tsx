@@ -11,6 +11,7 @@ import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
+import { dayLabel } from '@/lib/dates';
 
 const linkClass = 'inline-flex min-h-11 items-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
 
@@ -31,7 +32,7 @@ export function Component() {
   const files = bakeRunFiles(weekId, dto.prepDate);
   return (
     <div className="flex flex-col gap-5">
-      <PageHeader title="Bake run" lead={`${dto.weekName}, prep day ${dto.prepDate}`}>
+      <PageHeader title="Bake run" lead={`${dto.weekName}, prep day ${dayLabel(dto.prepDate, true)}`}>
         <UnitToggle unit={unit} onChange={setUnit} />
         {dto.run && (
           <>

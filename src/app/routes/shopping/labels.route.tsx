@@ -8,6 +8,7 @@ import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { EmptyState, Notice, PageHeader, QueryView } from '@/components/ui/states';
 import { counted } from '@/lib/words';
+import { dayLabel } from '@/lib/dates';
 
 const labelsOf = (labels: ContainerLabelDto[], withSpares: boolean) => (withSpares ? labels : labels.filter((l) => l.kind === 'plate'));
 
@@ -71,7 +72,7 @@ export function Component() {
           <>
             <p className="no-print num text-ink-soft">
               {counted(labelsOf(data.labels, withSpares).length, 'label')} on{' '}
-              {counted(Math.ceil(labelsOf(data.labels, withSpares).length / labelsPerSheet(LABEL_SHEETS[layout])), 'sheet')}, prep day {data.prepDate}
+              {counted(Math.ceil(labelsOf(data.labels, withSpares).length / labelsPerSheet(LABEL_SHEETS[layout])), 'sheet')}, prep day {data.prepDate ? dayLabel(data.prepDate, true) : 'not set'}
             </p>
             <LabelSheet layout={layout} labels={labelsOf(data.labels, withSpares)} />
           </>

@@ -18,6 +18,7 @@ import { Cautions } from '@/components/domain/cautions';
 import { errorMessage, isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { agrees, counted } from '@/lib/words';
+import { dayLabel } from '@/lib/dates';
 
 type Pending = { kind: 'cells'; edit: CellEdit } | { kind: 'other'; label: string; run: (version: number) => void };
 
@@ -95,7 +96,7 @@ export function Component() {
     <div className="flex flex-col gap-5">
       <PageHeader
         title={board.week.name}
-        lead={`${board.week.startDate} – ${board.week.endDate} · prep ${board.prepDates.join(' and ')} · ${
+        lead={`${dayLabel(board.week.startDate)} – ${dayLabel(board.week.endDate)} · prep ${board.prepDates.map((d) => dayLabel(d)).join(' and ')} · ${
           board.week.publishedVersion ? `published v${board.week.publishedVersion}${board.week.changedSincePublished ? ', changed since' : ''}` : 'not published'
         }`}
       >
@@ -146,7 +147,7 @@ export function Component() {
             ? 'No day over the net-carb cap or short of protein, no dislikes, no allergens allowed.'
             : warns.slice(0, 3).map((w, i) => (
                 <p key={i}>
-                  <span className="font-bold">{board.clients.find((c) => String(c.id) === String(w.clientId))?.name ?? 'A client'}</span>, {w.date}: {w.message}
+                  <span className="font-bold">{board.clients.find((c) => String(c.id) === String(w.clientId))?.name ?? 'A client'}</span>, {dayLabel(w.date)}: {w.message}
                 </p>
               ))}
           {warns.length > 3 && <p>…and {warns.length - 3} more, flagged on the board.</p>}

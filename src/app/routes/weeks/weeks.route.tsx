@@ -10,6 +10,7 @@ import { TextField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { isApiError, errorMessage } from '@/lib/problem';
 import { paths } from '@/config/paths';
+import { dayLabel } from '@/lib/dates';
 
 function nextMonday(today: string): string {
   const d = new Date(`${today}T12:00:00Z`).getUTCDay();
@@ -81,8 +82,8 @@ export function Component() {
                       <span className="text-lg font-bold">{w.name}</span>
                     )}
                     <p className="text-sm text-ink-soft">
-                      {w.startDate} – {w.endDate} · prep {w.prepDate}
-                      {w.secondPrepDate ? ` and ${w.secondPrepDate}` : ''} · <span className="num">{w.cellCount}</span> plates placed
+                      {dayLabel(w.startDate)} – {dayLabel(w.endDate)} · prep {dayLabel(w.prepDate)}
+                      {w.secondPrepDate ? ` and ${dayLabel(w.secondPrepDate)}` : ''} · <span className="num">{w.cellCount}</span> plates placed
                     </p>
                   </div>
                   <span className="text-sm">
