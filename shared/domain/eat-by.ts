@@ -292,6 +292,11 @@ export function otherPrepDateRemedy(input: Omit<RemedyInput, 'freezerWeeks'>): P
   return prepDate === null ? null : { kind: 'use-other-prep-date', prepDate, eatBy: eatByDate(prepDate, input.fridgeDays) };
 }
 
+/** The last day to eat a portion thawed in the refrigerator for `eatOn` (THAWED_EAT_WITHIN_DAYS after it). */
+export function thawedEatBy(eatOn: IsoDate): IsoDate {
+  return addDays(eatOn, THAWED_EAT_WITHIN_DAYS);
+}
+
 /**
  * Remedy (a): freeze the portion on its prep day and thaw it in the refrigerator from the evening
  * before the planned day. Null when the tray is not freezable (0 weeks), when the planned day is past
@@ -308,7 +313,7 @@ export function freezeRemedy(input: Omit<RemedyInput, 'weekPrepDates'>): FreezeR
     thawReminderOn: addDays(input.plannedDate, -1),
     thawReminderTime: THAW_REMINDER_TIME,
     eatOn: input.plannedDate,
-    eatByAfterThaw: addDays(input.plannedDate, THAWED_EAT_WITHIN_DAYS),
+    eatByAfterThaw: thawedEatBy(input.plannedDate),
     freezerQualityUntil,
   };
 }
@@ -353,7 +358,7 @@ export function thawTasks(
   for (const d of days) {
     for (const p of d.plates) {
       if (p.storage !== 'frozen' || !p.thawOn) continue;
-      tasks.push({ thawOn: p.thawOn, eatOn: d.date, slot: p.slot, name: p.name, eatByAfterThaw: addDays(d.date, THAWED_EAT_WITHIN_DAYS) });
+      tasks.push({ thawOn: p.thawOn, eatOn: d.date, slot: p.slot, name: p.name, eatByAfterThaw: thawedEatBy(d.date) });
     }
   }
   return tasks.sort((a, b) => compareIsoDates(a.thawOn, b.thawOn) || compareIsoDates(a.eatOn, b.eatOn));

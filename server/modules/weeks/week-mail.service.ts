@@ -14,7 +14,8 @@ import { Workspace } from '../workspaces/workspace.entity.js';
 import { Week, WeekPublication } from './week.entity.js';
 import { findWeek } from './week-board.service.js';
 import { myWeek } from './week-publish.service.js';
-import { hasThawReminders, renderPublishedPlan, THAW_REMINDERS_ICS, WEEK_PLAN_PDF, type WeekPlanPayload } from './week-mail.js';
+import { renderPublishedPlan, THAW_REMINDERS_ICS, WEEK_PLAN_PDF, type WeekPlanPayload } from './week-mail.js';
+import { thawTasks } from '@shared/domain/eat-by.js';
 
 /** Seconds in which the same send (same week version, note and clients) without a requestId counts as a repeat. */
 export const REPEAT_WINDOW_SECONDS = 15;
@@ -104,9 +105,11 @@ export async function sendWeek(
     const weekLabel = longDate(pub.snapshot.startDate);
     const link = `${opts.publicUrl.replace(/\/$/, '')}/my-plates`;
     for (const r of recipients) {
-      const thaw = hasThawReminders(pub.snapshot.clients[String(r.clientId)]?.days ?? []);
+      // A frozen plate in this client's plan: their thaw reminders go along as a calendar file.
+      const thaw = thawTasks(pub.snapshot.clients[String(r.clientId)]?.days ?? []).length > 0;
       const body = weekPlanMail({ businessName: ws.name, clientName: r.name, weekLabel, note, link, thawReminders: thaw });
       const payload: WeekPlanPayload = { weekId: week.id, clientId: r.clientId, publicationVersion: version, note };
+      const spec = payload as unknown as Record<string, unknown>;
       await queueMail(tx, queue, {
         workspaceId: actor.workspaceId,
         kind: 'week-plan',
@@ -120,8 +123,8 @@ export async function sendWeek(
         note,
         // The plan first (a repeated send is recognised by it), then the thaw reminders when a plate is frozen.
         attachments: [
-          { pdf: WEEK_PLAN_PDF, payload: payload as unknown as Record<string, unknown> },
-          ...(thaw ? [{ pdf: THAW_REMINDERS_ICS, payload: payload as unknown as Record<string, unknown> }] : []),
+          { pdf: WEEK_PLAN_PDF, payload: spec },
+          ...(thaw ? [{ pdf: THAW_REMINDERS_ICS, payload: spec }] : []),
         ],
         idempotencyKey: deliveryKey(week.id, version, r.clientId, batchId),
       });

@@ -104,11 +104,6 @@ export async function renderPublishedPlan(em: EntityManager, p: WeekPlanPayload,
   return renderWeekPlanPdf((await publishedPlan(em, p, workspaceId)).data);
 }
 
-/** Does this client's plan in the published snapshot hold a frozen plate to thaw (the calendar file goes along)? */
-export function hasThawReminders(days: readonly MyDayDto[]): boolean {
-  return thawTasks(days).length > 0;
-}
-
 /** A client's thaw reminders for a published week, as a calendar file (the download and the plan e-mail's). */
 export function thawRemindersFile(week: { weekId: number; name: string; startDate: string }, days: readonly MyDayDto[]): RenderedAttachment {
   return {
