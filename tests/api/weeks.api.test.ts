@@ -145,6 +145,7 @@ describe('eat-by on the board', () => {
     expect(refused.body.code).toBe('conflict');
     expect(refused.body.blocks.length).toBeGreaterThanOrEqual(3);
     expect(refused.body.detail).toMatch(new RegExp(`^${refused.body.blocks.length} problems must be solved before publishing: \\S`));
+    expect(refused.body.blocks[0]).toMatchObject({ kind: 'past-eat-by', message: expect.stringMatching(/^Past its eat-by date: /) });
 
     // Apply the remedy: frozen on prep day, thawed the evening before.
     const frozen = await coach.agent

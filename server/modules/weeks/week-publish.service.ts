@@ -3,7 +3,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { CAUTIONS } from '@shared/domain/eat-by.js';
 import { addDays, compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, type BoardResult } from '@shared/domain/week-board.js';
-import { warningMessage } from '@shared/domain/week-check.js';
+import { worded } from '@shared/domain/week-check.js';
 import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
 import type { MyDayDto, MyPlateDto, MyWeekDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
 import type { BoardAnswer } from '@shared/schemas/board-answer.js';
@@ -90,9 +90,10 @@ export async function publishWeek(em: EntityManager, actor: Actor, id: number, v
   if (week.version !== version) throw new StaleEdit(week.version, await getBoard(em, actor, id));
   const data = await loadBoardData(em, actor, week);
   const result = computeBoard(boardInput(data));
-  const blocks = result.warnings.filter((w) => w.severity === 'block');
+  // The refusal is read by a person: its problems come worded.
+  const blocks = result.warnings.filter((w) => w.severity === 'block').map(worded);
   if (blocks.length) {
-    throw new Conflict(`${blocks.length === 1 ? '1 problem' : `${blocks.length} problems`} must be solved before publishing: ${warningMessage(blocks[0], blocks[0].date)}`, { blocks });
+    throw new Conflict(`${blocks.length === 1 ? '1 problem' : `${blocks.length} problems`} must be solved before publishing: ${blocks[0].message}`, { blocks });
   }
   if (!data.cells.length) throw new Conflict('The board is empty: place plates before publishing');
   const snapshot = buildSnapshot(data, presentBoard(data, result), result);
