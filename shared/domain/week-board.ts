@@ -15,6 +15,11 @@ import type { AllergenCode } from './allergens';
 import type { MacroTargets } from './targets';
 import { checkWeek, type AllergenOverride, type CellMacros, type CellPortion, type CheckCell, type DayCheck, type WeekWarning } from './week-check';
 
+/** A week's prep days (one or two), earliest first. */
+export function prepDatesOf(w: { prepDate: IsoDate; secondPrepDate?: IsoDate | null }): IsoDate[] {
+  return [w.prepDate, ...(w.secondPrepDate ? [w.secondPrepDate] : [])].sort(compareIsoDates);
+}
+
 export interface BoardClient {
   id: number;
   householdMultiplier: string;

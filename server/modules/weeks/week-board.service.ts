@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { CAUTIONS } from '@shared/domain/eat-by.js';
-import { addDays, compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
-import { cellKey, computeBoard, type BoardInput, type BoardResult } from '@shared/domain/week-board.js';
+import { addDays, type IsoDate } from '@shared/domain/iso-date.js';
+import { cellKey, computeBoard, prepDatesOf, type BoardInput, type BoardResult } from '@shared/domain/week-board.js';
 import type { AllergenCode } from '@shared/domain/allergens.js';
 import type { MacroTargets } from '@shared/domain/targets.js';
 import type { AssemblyDto } from '@shared/schemas/assemblies.schema.js';
@@ -24,9 +24,7 @@ export function weekDays(w: Pick<IWeek, 'startDate'>): IsoDate[] {
   return Array.from({ length: WEEK_DAYS }, (_, i) => addDays(w.startDate, i));
 }
 
-export function prepDatesOf(w: Pick<IWeek, 'prepDate' | 'secondPrepDate'>): IsoDate[] {
-  return [w.prepDate, ...(w.secondPrepDate ? [w.secondPrepDate] : [])].sort(compareIsoDates);
-}
+export { prepDatesOf };
 
 export async function findWeek(em: EntityManager, actor: Actor, id: number): Promise<IWeek> {
   const w = await em.findOne(Week, { id, workspace: actor.workspaceId });

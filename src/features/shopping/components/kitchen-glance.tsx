@@ -1,17 +1,13 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
+import { compareIsoDates } from '@shared/domain/iso-date';
+import { prepDatesOf } from '@shared/domain/week-board';
 import { Card, EmptyState, Notice, Progress, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { TileLink } from '@/components/ui/tile-link';
 import { dayLabel } from '@/lib/dates';
 import { localToday } from '@/features/weeks/api/weeks.queries';
 import { currentWeekQuery, shoppingListQuery } from '../api/shopping.queries';
-
-/** The prep days of the week still to come (today included), earliest first. */
-function prepDaysAhead(w: WeekSummaryDto, today: string): string[] {
-  return [w.prepDate, ...(w.secondPrepDate ? [w.secondPrepDate] : [])].filter((d) => d >= today).sort();
-}
 
 function ShoppingProgress({ weekId }: { weekId: number }) {
   const q = useQuery(shoppingListQuery(weekId));
@@ -43,7 +39,8 @@ export function KitchenGlance() {
     >
       {(w) => {
         const week = w!;
-        const ahead = prepDaysAhead(week, today);
+        // The prep days still to come (today included).
+        const ahead = prepDatesOf(week).filter((d) => compareIsoDates(d, today) >= 0);
         return (
           <Card>
             <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
