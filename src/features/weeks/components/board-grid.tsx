@@ -22,6 +22,9 @@ import { dayLabel } from '@/lib/dates';
 
 export const cellId = (clientId: number, date: string, slot: string) => `cell|${clientId}|${date}|${slot}`;
 
+/** Where a cell is, in words: the start of its accessible name, and what the live line says while a plate is over it. */
+const cellWhere = (clientName: string, date: string, slot: string) => `${clientName}, ${dayLabel(date)}, ${slot}`;
+
 function PaletteItem({ id, name, detail }: { id: number; name: string; detail: string }) {
   const { attributes, listeners, setNodeRef, transform, isDragging } = useDraggable({ id: `plate|${id}` });
   // The list item stays a plain <li>; the draggable (role="button" from dnd-kit) sits inside it.
@@ -149,7 +152,7 @@ const ClientRow = memo(function ClientRow({ client, days, slots, plates, cells, 
                 return (
                   <div key={slot}>
                     {slots.length > 1 && <span className="text-[10px] uppercase text-ink-faint">{slot}</span>}
-                    <Cell id={id} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} isOver={over === id} onSelect={onSelect} where={`${client.name}, ${dayLabel(date)}, ${slot}`} />
+                    <Cell id={id} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} isOver={over === id} onSelect={onSelect} where={cellWhere(client.name, date, slot)} />
                   </div>
                 );
               })}
@@ -251,7 +254,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
     if (!over) return null;
     const [, clientId, date, slot] = over.split('|');
     const client = board.clients.find((c) => c.id === Number(clientId));
-    return client ? `${client.name}, ${dayLabel(date)}, ${slot}` : null;
+    return client ? cellWhere(client.name, date, slot) : null;
   }, [over, board.clients]);
   // What a screen reader hears, in plate names and cell words (dnd-kit's defaults say internal ids). While moving,
   // the live line above names the cell under the plate.
