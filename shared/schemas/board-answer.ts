@@ -50,7 +50,7 @@ export function dayAnswer(clientId: number, date: IsoDate, totals: BoardDayDto['
 }
 
 function warningData(w: WeekWarning): WarningData {
-  // Copy every field but the three the day check carries (no spread-and-delete: a board has hundreds).
+  // Copy every field but the two the day check carries (no spread-and-delete: a board has hundreds).
   const out: Record<string, unknown> = {};
   for (const k in w) if (k !== 'clientId' && k !== 'date') out[k] = (w as unknown as Record<string, unknown>)[k];
   return out as WarningData;

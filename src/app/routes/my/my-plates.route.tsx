@@ -11,7 +11,6 @@ import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { counted } from '@/lib/words';
 import { dayLabel } from '@/lib/dates';
 
-
 function Macros({ m }: { m: MyPlateDto['macros'] }) {
   return (
     <dl className="grid grid-cols-4 gap-1 text-center">

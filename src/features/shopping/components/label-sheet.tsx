@@ -3,7 +3,6 @@ import { REHEAT_MIN_C, REHEAT_MIN_F } from '@shared/domain/eat-by';
 import type { ContainerLabelDto } from '@shared/schemas/shopping.schema';
 import { dayLabel } from '@/lib/dates';
 
-
 function Label({ label, small }: { label: ContainerLabelDto; small: boolean }) {
   const m = label.macros;
   return (

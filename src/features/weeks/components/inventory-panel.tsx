@@ -3,7 +3,6 @@ import type { BoardDto, PutTraysInput } from '@shared/schemas/weeks.schema';
 import { Button } from '@/components/ui/button';
 import { dayLabel } from '@/lib/dates';
 
-
 /** Portions needed (cells × household) against portions baked (tray counts × cut plan), per tray and prep day. */
 export function InventoryPanel({ board, busy, onCover, onSave }: { board: BoardDto; busy: boolean; onCover: () => void; onSave: (trays: PutTraysInput['trays']) => void }) {
   const names = new Map(board.trays.map((t) => [t.trayId, t.name]));
