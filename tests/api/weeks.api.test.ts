@@ -174,7 +174,8 @@ describe('eat-by on the board', () => {
     expect(events.every((e) => e.summary === `Move tomorrow's ${plate.name} to the fridge`)).toBe(true);
     expect(events[0].description).toContain('For breakfast on Friday 9 January 2026');
     expect(events.every((e) => e.component.getAllSubcomponents('valarm').length === 1)).toBe(true);
-    await me.agent.get('/api/weeks/mine/thaw-reminders.ics?today=someday').expect(400);
+    const bad = await me.agent.get('/api/weeks/mine/thaw-reminders.ics?today=someday').expect(400);
+    expect(Object.keys(bad.body.errors)).toEqual(['today']);
     const other = await member(app, coach, 'client', { clientId: (await makeClient(coach, { name: 'Nothing frozen' })).id });
     const none = await other.agent.get('/api/weeks/mine/thaw-reminders.ics?today=2026-01-05').expect(200);
     expect(new ICAL.Component(ICAL.parse(none.text)).getAllSubcomponents('vevent')).toEqual([]);
