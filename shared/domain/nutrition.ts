@@ -156,6 +156,7 @@ export function usTotalCarbsFromEu(euCarbohydrateG: Num, fiberG: MaybeNum): Deci
 
 /** The shared zero: absent and zero nutrients are this one immutable Decimal (no parsing, no arithmetic). */
 const ZERO = new Decimal(0);
+const HUNDREDTH = new Decimal('0.01');
 const ZERO_TEXT = /^[-+]?(0+(\.0*)?|\.0+)$/;
 
 export function zeroSums(): NutrientSums {
@@ -164,17 +165,54 @@ export function zeroSums(): NutrientSums {
   return z;
 }
 
+/**
+ * Stored nutrient values are decimal strings that repeat from request to request (the same library rows): each
+ * text is parsed once. Decimals are immutable, so sharing one is safe; the map is cleared when it grows past
+ * PARSED_LIMIT (a pure parse memo: it holds nothing a fresh process would answer differently).
+ */
+const PARSED = new Map<string, Decimal>();
+const PARSED_LIMIT = 20_000;
+
+function parsedText(v: string): Decimal {
+  let d = PARSED.get(v);
+  if (d === undefined) {
+    d = ZERO_TEXT.test(v) ? ZERO : new Decimal(v);
+    if (PARSED.size >= PARSED_LIMIT) PARSED.clear();
+    PARSED.set(v, d);
+  }
+  return d;
+}
+
 /** A stored nutrient value times a factor; an absent or zero value gives the shared zero (no parsing, no product). */
 function timesOrZero(v: MaybeNum, f: Decimal): Decimal {
   if (v === null || v === undefined || v === '' || v === 0) return ZERO;
-  if (typeof v === 'string' && ZERO_TEXT.test(v)) return ZERO;
-  return new Decimal(v).times(f);
+  const d = typeof v === 'string' ? parsedText(v) : new Decimal(v);
+  return d === ZERO || d.isZero() ? ZERO : d.times(f);
 }
+
+/**
+ * Products already computed, by their inputs' exact text (grams and every per-100 g value): a recipe form asks again
+ * on each keystroke with one line changed, and a week board weighs the same add-on on many plates. Cleared past
+ * PARSED_LIMIT entries; values are frozen (callers share them).
+ */
+const PRODUCTS = new Map<string, NutrientSums>();
 
 /** The additive nutrients in `grams` of an ingredient (massG = grams). */
 export function nutrientsForGrams(per100g: NutrientsPer100g, grams: Num): NutrientSums {
-  const g = new Decimal(grams);
-  const f = g.div(100);
+  const g = grams instanceof Decimal ? grams : new Decimal(grams);
+  const key = `${g.toString()}|${per100g.kcal}|${per100g.fatG}|${per100g.satFatG}|${per100g.proteinG}|${per100g.carbsG}|${per100g.fiberG}|${per100g.sugarsG}|${per100g.erythritolG}|${per100g.alluloseG}|${per100g.otherPolyolsG}|${per100g.sodiumMg}`;
+  let sums = PRODUCTS.get(key);
+  if (sums === undefined) {
+    sums = Object.freeze(productsOf(per100g, g));
+    if (PRODUCTS.size >= PARSED_LIMIT) PRODUCTS.clear();
+    PRODUCTS.set(key, sums);
+  }
+  return sums;
+}
+
+function productsOf(per100g: NutrientsPer100g, g: Decimal): NutrientSums {
+  // × 0.01 is exact and cheaper than ÷ 100 (decimal.js divides digit by digit).
+  const f = g.times(HUNDREDTH);
   return {
     kcal: timesOrZero(per100g.kcal, f),
     fatG: timesOrZero(per100g.fatG, f),
@@ -196,6 +234,14 @@ export function addSums(a: NutrientSums, b: NutrientSums): NutrientSums {
   const out = {} as Record<keyof NutrientSums, Decimal>;
   for (const k of SUM_KEYS) out[k] = b[k] === ZERO ? a[k] : a[k] === ZERO ? b[k] : a[k].plus(b[k]);
   return out;
+}
+
+/** `into += b` field by field (for a running total the caller owns; the shared zero is never changed). */
+function addInto(into: NutrientSums, b: NutrientSums): void {
+  for (const k of SUM_KEYS) {
+    const v = b[k];
+    if (v !== ZERO) into[k] = into[k] === ZERO ? v : into[k].plus(v);
+  }
 }
 
 export function scaleSums(a: NutrientSums, factor: Num): NutrientSums {
@@ -268,11 +314,13 @@ function checkOptions(options: RecipeOptions): { portions: number; yieldFactor: 
  */
 export function computeRecipeExact(lines: readonly RecipeLine[], options: RecipeOptions = {}): RecipeExact {
   const { portions, yieldFactor, rule } = checkOptions(options);
+  const raw = zeroSums();
   const results = lines.map((line) => {
     const grams = toGrams(line.amount, line.unit, line.ingredient);
-    return { ingredient: line.ingredient.name, grams, nutrients: nutrientsForGrams(line.ingredient.per100g, grams) };
+    const nutrients = nutrientsForGrams(line.ingredient.per100g, grams);
+    addInto(raw, nutrients);
+    return { ingredient: line.ingredient.name, grams, nutrients };
   });
-  const raw = results.reduce((acc, r) => addSums(acc, r.nutrients), zeroSums());
   const cooked: NutrientSums = { ...raw, massG: raw.massG.times(yieldFactor) };
   const perPortion = scaleSums(cooked, new Decimal(1).div(portions));
   return {

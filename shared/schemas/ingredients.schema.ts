@@ -275,10 +275,15 @@ export const ingredientIdParams = z.object({ id: z.coerce.number().int().positiv
 // Recipe calculation
 // ---------------------------------------------------------------------------------------------------------------
 
+/** A positive decimal written as Decimal#toFixed writes it: no sign, no leading or trailing zeros, not zero. */
+const CANONICAL_POSITIVE = /^(?:[1-9]\d*(?:\.\d*[1-9])?|0\.\d*[1-9])$/;
+
 export const recipeItemSchema = z.object({
   ingredientId: z.coerce.number({ message: 'Choose an ingredient' }).int().positive({ message: 'Choose an ingredient' }),
   /** The amount as typed ('1 1/2', '¾', '1-2' → midpoint) or a number. */
   amount: z.union([z.string(), z.number()]).transform((v, ctx) => {
+    // Already a canonical positive decimal ("250", "12.5"): it is its own exact value (the form sends these).
+    if (typeof v === 'string' && CANONICAL_POSITIVE.test(v)) return v;
     try {
       const parsed = parseAmount(String(v));
       if (parsed.value.lte(0)) {

@@ -10,6 +10,7 @@ import {
   computeRecipeExact,
   energyShares,
   netCarbs,
+  nutrientsForGrams,
   usTotalCarbsFromEu,
   type CarbBreakdown,
   type EnergyInputs,
@@ -263,6 +264,46 @@ describe('recipe totals and portions', () => {
         );
       }),
     );
+  });
+});
+
+describe('products kept by their inputs (nutrientsForGrams)', () => {
+  // Each product is value × grams ÷ 100, worked out here with decimal.js from the inputs' text.
+  const expected = (per100g: Record<string, string>, grams: string) =>
+    Object.fromEntries(Object.entries(per100g).map(([k, v]) => [k, new Decimal(v).times(grams).div(100).toString()]));
+  const shown = (sums: Record<string, Decimal>, keys: string[]) => Object.fromEntries(keys.map((k) => [k, sums[k].toString()]));
+  const value = fc.stringMatching(/^(0|[1-9]\d{0,3})(\.\d{1,4})?$/);
+  const per100g = fc.record({
+    kcal: value, fatG: value, satFatG: value, proteinG: value, carbsG: value, fiberG: value, sugarsG: value,
+    erythritolG: value, alluloseG: value, otherPolyolsG: value, sodiumMg: value,
+  });
+
+  it('property: a second call with the same text, or with any one value changed, gives the exact products (fast-check)', () => {
+    fc.assert(
+      fc.property(per100g, fc.stringMatching(/^[1-9]\d{0,3}(\.\d{1,6})?$/), fc.constantFrom(...Object.keys(SR.egg)), (facts, grams, changed) => {
+        const keys = Object.keys(facts);
+        const first = nutrientsForGrams(facts, grams);
+        const again = nutrientsForGrams({ ...facts }, grams);
+        expect(again).toBe(first); // kept, shared
+        expect(Object.isFrozen(again)).toBe(true);
+        expect(shown(again as never, keys)).toEqual(expected(facts, grams));
+        expect(again.massG.toString()).toBe(new Decimal(grams).toString());
+        const moved = { ...facts, [changed]: new Decimal((facts as Record<string, string>)[changed]).plus('0.0001').toString() };
+        expect(shown(nutrientsForGrams(moved, grams) as never, keys)).toEqual(expected(moved, grams));
+        const moreGrams = new Decimal(grams).plus('0.000001').toString();
+        expect(shown(nutrientsForGrams(facts, moreGrams) as never, keys)).toEqual(expected(facts, moreGrams));
+      }),
+    );
+  });
+
+  it('numbers, Decimals and text of one value give the same products; absent and zero give exact zeros', () => {
+    const asText = nutrientsForGrams({ kcal: '143.0000', fatG: '9.5100', proteinG: '12.5600', carbsG: '0.7200', fiberG: '0.0000' }, '50');
+    const asNumber = nutrientsForGrams({ kcal: 143, fatG: 9.51, proteinG: 12.56, carbsG: 0.72, fiberG: 0 }, 50);
+    const asDecimal = nutrientsForGrams({ kcal: new Decimal(143), fatG: new Decimal('9.51'), proteinG: new Decimal('12.56'), carbsG: new Decimal('0.72') }, new Decimal(50));
+    for (const sums of [asText, asNumber, asDecimal]) {
+      expect([sums.kcal, sums.fatG, sums.proteinG, sums.carbsG].map(String)).toEqual(['71.5', '4.755', '6.28', '0.36']);
+      expect(sums.fiberG.isZero() && sums.sugarsG.isZero() && sums.sodiumMg.isZero()).toBe(true);
+    }
   });
 });
 

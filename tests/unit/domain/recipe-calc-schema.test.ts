@@ -1,0 +1,44 @@
+import Decimal from 'decimal.js';
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { recipeCalcSchema } from '@shared/schemas/ingredients.schema';
+import { parseAmount } from '@shared/domain/units';
+
+const amountOf = (amount: string | number) =>
+  recipeCalcSchema.safeParse({ items: [{ ingredientId: 1, amount, unit: 'g' }], portions: 1 });
+
+describe('recipe calculation input: amounts', () => {
+  it('property: an amount already written as decimal.js writes it comes back as it is, as parseAmount reads it (fast-check)', () => {
+    // Positive decimals up to 6 places: their canonical text (Decimal#toFixed) takes the short path.
+    const positive = fc
+      .tuple(fc.bigInt({ min: 1n, max: 10n ** 12n }), fc.integer({ min: 0, max: 6 }))
+      .map(([units, places]) => new Decimal(units.toString()).div(new Decimal(10).pow(places)).toFixed());
+    fc.assert(
+      fc.property(positive, (text) => {
+        const r = amountOf(text);
+        expect(r.success).toBe(true);
+        expect(r.success && r.data.items[0].amount).toBe(text);
+        expect(parseAmount(text).value.toFixed()).toBe(text);
+      }),
+    );
+  });
+
+  it.each([
+    ['010', '10'],
+    ['10.50', '10.5'],
+    ['.5', '0.5'],
+    ['1 1/2', '1.5'],
+    ['¾', '0.75'],
+    ['1-2', '1.5'],
+    [' 12 ', '12'],
+  ])('%j, not canonical, is read the long way: %s', (typed, value) => {
+    const r = amountOf(typed);
+    expect(r.success && r.data.items[0].amount).toBe(value);
+  });
+
+  it.each(['0', '0.0', '-1', 'a pinch', ''])('%j is refused on items.0.amount', (typed) => {
+    const r = amountOf(typed);
+    expect(r.success).toBe(false);
+    expect(r.error?.issues[0].path).toEqual(['items', 0, 'amount']);
+  });
+});
