@@ -24,8 +24,8 @@ export function ormConfig(clientUrl: string, opts: { debug?: boolean } = {}) {
       snapshot: false,
     },
     seeder: { path: here('./seeders'), glob: '!(*.d).{js,ts}' },
-    // connect-pg-simple's session table is created by our own migration.
-    schemaGenerator: { skipTables: ['session', 'rate_limit_hit'] },
+    // connect-pg-simple's session table, the login counters and the nutrition stamps are created by our own migrations.
+    schemaGenerator: { skipTables: ['session', 'rate_limit_hit', 'nutrition_stamp'] },
     forceUtcTimezone: true,
     allowGlobalContext: false,
   });

@@ -15,6 +15,11 @@ export interface Actor {
   workspaceId: number;
   /** For a client member: their client profile id (their own plan data only). */
   clientId: number | null;
+  /**
+   * The workspace's nutrition stamp, read in the same statement as the person (see the nutrition_stamp migration):
+   * library rows a process read under this stamp are still what the database holds. Absent when not read.
+   */
+  nutritionVersion?: string | null;
 }
 
 export type Access = 'public' | 'signed-in' | readonly Role[];

@@ -29,8 +29,8 @@ const PASSWORD_RESET_MINUTES = 60;
  * session store reads it in the same query as the session (session-store.ts).
  */
 export const ACTOR_SQL = (userIdExpr: string) =>
-  `select u.id as user_id, u.email, u.name, m.role, m.workspace_id, m.client_id
-     from membership m join app_user u on u.id = m.user_id
+  `select u.id as user_id, u.email, u.name, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version
+     from membership m join app_user u on u.id = m.user_id left join nutrition_stamp ns on ns.workspace_id = m.workspace_id
     where m.user_id = ${userIdExpr} order by m.id asc limit 1`;
 
 export interface ActorRow {
@@ -40,6 +40,7 @@ export interface ActorRow {
   role: string;
   workspace_id: number;
   client_id: number | null;
+  nutrition_version: string | null;
 }
 
 export function actorFromRow(m: ActorRow): Actor {
@@ -50,6 +51,7 @@ export function actorFromRow(m: ActorRow): Actor {
     role: m.role as Role,
     workspaceId: Number(m.workspace_id),
     clientId: m.client_id == null ? null : Number(m.client_id),
+    nutritionVersion: m.nutrition_version ?? null,
   };
 }
 

@@ -29,6 +29,7 @@ import type { Actor } from '../../http/authz.js';
 import { Conflict, Forbidden, NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Ingredient, type IIngredient } from './ingredient.entity.js';
 import { isOwnedBy, isShared, presentIngredient, toNutritionIngredient } from './ingredient.presenter.js';
+import { stampedRowsCache } from './calc-rows-cache.js';
 
 /** A library row in the shape the nutrition domain reads, plus what plates and shopping lists need beside it. */
 export type LoadedIngredient = NutritionIngredient & { id: number; allergens: AllergenCode[]; priceCents: number | null };
@@ -139,27 +140,47 @@ export async function computeRecipeForActor(em: EntityManager, actor: Actor, inp
   return computeParsedRecipeForActor(em, actor, recipeCalcSchema.parse(input));
 }
 
+/** Library rows the calculation read, kept under the workspace's nutrition stamp (calc-rows-cache.ts). */
+const calcRows = stampedRowsCache<CalcRow>();
+
 /**
- * In one round trip: the rows findVisible would give (own workspace or shared), as plain column values keyed by id,
- * and the workspace's net-carb rule (as netCarbRuleOf). The workspace row is always there; ids not visible drop out.
+ * The rows findVisible would give (own workspace or shared), as plain column values keyed by id, and the
+ * workspace's net-carb rule (as netCarbRuleOf); ids not visible drop out. Answered from the rows kept under the
+ * stamp the actor was read with when it still holds them all; otherwise one round trip, which also reads the stamp
+ * those rows belong to (same statement, same snapshot) and keeps them under it.
  */
 async function loadForCalc(
   em: EntityManager,
   actor: Actor,
   ids: readonly number[],
 ): Promise<{ found: Map<number, CalcRow>; rule: NetCarbRule }> {
-  const rows = await preparedRows<Omit<CalcRow, 'id'> & { id: number | null; netCarbRule: string }>(
+  const kept = calcRows.get(actor.workspaceId, actor.nutritionVersion, ids);
+  if (kept) return kept;
+  const unique = [...new Set(ids)];
+  const rows = await preparedRows<Omit<CalcRow, 'id'> & { id: number | null; netCarbRule: string; nutritionVersion: string | null }>(
     em,
     'trayline_calc_ingredients',
-    `select w.net_carb_rule as "netCarbRule", ${CALC_COLUMNS}
-       from workspace w left join ingredient i on i.id = any($1::int[]) and (i.workspace_id = w.id or i.workspace_id is null)
+    `select w.net_carb_rule as "netCarbRule", ns.version::text as "nutritionVersion", ${CALC_COLUMNS}
+       from workspace w left join nutrition_stamp ns on ns.workspace_id = w.id
+       left join ingredient i on i.id = any($1::int[]) and (i.workspace_id = w.id or i.workspace_id is null)
       where w.id = $2`,
-    [[...new Set(ids)], actor.workspaceId],
+    [unique, actor.workspaceId],
   );
   if (!rows.length) throw new NotFound('Workspace');
   const found = new Map<number, CalcRow>();
-  for (const r of rows) if (r.id !== null) found.set(r.id, r as CalcRow);
-  return { found, rule: toNetCarbRule(rows[0].netCarbRule) };
+  for (const r of rows) {
+    if (r.id === null) continue;
+    const { netCarbRule: _rule, nutritionVersion: _version, ...row } = r;
+    found.set(r.id, row as CalcRow);
+  }
+  const rule = toNetCarbRule(rows[0].netCarbRule);
+  calcRows.set(actor.workspaceId, rows[0].nutritionVersion, rule, unique, found);
+  return { found, rule };
+}
+
+/** Forgets the kept calculation rows (tests that compare a cold read with a kept one). */
+export function forgetCalcRows(): void {
+  calcRows.clear();
 }
 
 /** computeRecipeForActor for input already checked by recipeCalcSchema (the route validates the body once). */
