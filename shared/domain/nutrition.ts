@@ -197,10 +197,21 @@ function timesOrZero(v: MaybeNum, f: Decimal): Decimal {
  */
 const PRODUCTS = new Map<string, NutrientSums>();
 
+/** Every per-100 g value as text, for PRODUCTS' keys; a frozen object (it cannot change) is written once. */
+const FROZEN_FACTS_TEXT = new WeakMap<NutrientsPer100g, string>();
+function factsText(v: NutrientsPer100g): string {
+  let text = FROZEN_FACTS_TEXT.get(v);
+  if (text === undefined) {
+    text = `${v.kcal}|${v.fatG}|${v.satFatG}|${v.proteinG}|${v.carbsG}|${v.fiberG}|${v.sugarsG}|${v.erythritolG}|${v.alluloseG}|${v.otherPolyolsG}|${v.sodiumMg}`;
+    if (Object.isFrozen(v)) FROZEN_FACTS_TEXT.set(v, text);
+  }
+  return text;
+}
+
 /** The additive nutrients in `grams` of an ingredient (massG = grams). */
 export function nutrientsForGrams(per100g: NutrientsPer100g, grams: Num): NutrientSums {
   const g = grams instanceof Decimal ? grams : new Decimal(grams);
-  const key = `${g.toString()}|${per100g.kcal}|${per100g.fatG}|${per100g.satFatG}|${per100g.proteinG}|${per100g.carbsG}|${per100g.fiberG}|${per100g.sugarsG}|${per100g.erythritolG}|${per100g.alluloseG}|${per100g.otherPolyolsG}|${per100g.sodiumMg}`;
+  const key = `${g.toString()}|${factsText(per100g)}`;
   let sums = PRODUCTS.get(key);
   if (sums === undefined) {
     sums = Object.freeze(productsOf(per100g, g));

@@ -140,8 +140,16 @@ export async function computeRecipeForActor(em: EntityManager, actor: Actor, inp
   return computeParsedRecipeForActor(em, actor, recipeCalcSchema.parse(input));
 }
 
-/** Library rows the calculation read, kept under the workspace's nutrition stamp (calc-rows-cache.ts). */
-const calcRows = stampedRowsCache<CalcRow>();
+/** Library rows the calculation read, as nutrition facts, kept under the workspace's nutrition stamp (calc-rows-cache.ts). */
+const calcRows = stampedRowsCache<NutritionIngredient>();
+
+/** A row as the nutrition math reads it, frozen through (kept rows are shared by requests). */
+function frozenFacts(row: CalcRow): NutritionIngredient {
+  const facts = toNutritionIngredient(row);
+  Object.freeze(facts.per100g);
+  if (facts.pieceWeights) Object.freeze(facts.pieceWeights);
+  return Object.freeze(facts);
+}
 
 /**
  * The rows findVisible would give (own workspace or shared), as plain column values keyed by id, and the
@@ -153,7 +161,7 @@ async function loadForCalc(
   em: EntityManager,
   actor: Actor,
   ids: readonly number[],
-): Promise<{ found: Map<number, CalcRow>; rule: NetCarbRule }> {
+): Promise<{ found: Map<number, NutritionIngredient>; rule: NetCarbRule }> {
   const kept = calcRows.get(actor.workspaceId, actor.nutritionVersion, ids);
   if (kept) return kept;
   const unique = [...new Set(ids)];
@@ -167,12 +175,8 @@ async function loadForCalc(
     [unique, actor.workspaceId],
   );
   if (!rows.length) throw new NotFound('Workspace');
-  const found = new Map<number, CalcRow>();
-  for (const r of rows) {
-    if (r.id === null) continue;
-    const { netCarbRule: _rule, nutritionVersion: _version, ...row } = r;
-    found.set(r.id, row as CalcRow);
-  }
+  const found = new Map<number, NutritionIngredient>();
+  for (const r of rows) if (r.id !== null) found.set(r.id, frozenFacts(r as CalcRow));
   const rule = toNetCarbRule(rows[0].netCarbRule);
   calcRows.set(actor.workspaceId, rows[0].nutritionVersion, rule, unique, found);
   return { found, rule };
@@ -193,7 +197,7 @@ export async function computeParsedRecipeForActor(em: EntityManager, actor: Acto
   if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
 
   const lines: RecipeLine[] = parsed.items.map((item) => ({
-    ingredient: toNutritionIngredient(found.get(item.ingredientId)!),
+    ingredient: found.get(item.ingredientId)!,
     amount: item.amount,
     unit: item.unit,
   }));
@@ -223,7 +227,7 @@ export async function computeParsedRecipeForActor(em: EntityManager, actor: Acto
     lines: parsed.items.map((item, i) => ({
       ingredientId: item.ingredientId,
       name: exact.lines[i].ingredient,
-      amount: new Decimal(item.amount).toNumber(),
+      amount: Number(item.amount), // exact decimal text (recipeCalcSchema): the nearest number, as Decimal#toNumber gives
       unit: item.unit,
       grams: exact.lines[i].grams.toDecimalPlaces(2).toNumber(),
     })),

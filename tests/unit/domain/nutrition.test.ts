@@ -296,6 +296,16 @@ describe('products kept by their inputs (nutrientsForGrams)', () => {
     );
   });
 
+  it('an object changed in place between two calls gives the new products; a frozen one is read once and cannot change', () => {
+    const facts: Record<string, string> = { kcal: '100', fatG: '10', proteinG: '5', carbsG: '1' };
+    expect(nutrientsForGrams(facts as never, '50').kcal.toString()).toBe('50');
+    facts.kcal = '120';
+    expect(nutrientsForGrams(facts as never, '50').kcal.toString()).toBe('60');
+    const frozen = Object.freeze({ ...facts });
+    expect(nutrientsForGrams(frozen as never, '50').kcal.toString()).toBe('60');
+    expect(nutrientsForGrams(frozen as never, '25').fatG.toString()).toBe('2.5');
+  });
+
   it('numbers, Decimals and text of one value give the same products; absent and zero give exact zeros', () => {
     const asText = nutrientsForGrams({ kcal: '143.0000', fatG: '9.5100', proteinG: '12.5600', carbsG: '0.7200', fiberG: '0.0000' }, '50');
     const asNumber = nutrientsForGrams({ kcal: 143, fatG: 9.51, proteinG: 12.56, carbsG: 0.72, fiberG: 0 }, 50);
