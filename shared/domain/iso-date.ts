@@ -79,3 +79,21 @@ export function weekdayOf(date: IsoDate): number {
 export function compareIsoDates(a: IsoDate, b: IsoDate): number {
   return daysBetween(b, a);
 }
+
+const WEEKDAYS = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'];
+const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
+
+/**
+ * "Monday 7 December 2026" from "2026-12-07": a calendar date in words for printed plans, e-mails and the
+ * sentences of the week check (always English; the pages use the reader's locale, src/lib/dates.ts).
+ */
+export function longDate(iso: IsoDate): string {
+  const [y, m, d] = iso.split('-').map(Number);
+  return `${WEEKDAYS[weekdayOf(iso)]} ${d} ${MONTHS[m - 1]} ${y}`;
+}
+
+/** "Wed 9 Dec" from "2026-12-09" (as longDate, short). */
+export function shortDate(iso: IsoDate): string {
+  const [, m, d] = iso.split('-').map(Number);
+  return `${WEEKDAYS[weekdayOf(iso)].slice(0, 3)} ${d} ${MONTHS[m - 1].slice(0, 3)}`;
+}

@@ -15,7 +15,7 @@
 import Decimal from 'decimal.js';
 import { allergenConflicts, allergenLabel, type AllergenCode } from './allergens';
 import { freezerQualityDate, portionStatus } from './eat-by';
-import { compareIsoDates, type IsoDate } from './iso-date';
+import { compareIsoDates, shortDate, type IsoDate } from './iso-date';
 import type { MacroTargets } from './targets';
 
 export type Severity = 'block' | 'warn';
@@ -115,11 +115,11 @@ export function warningMessage(w: WarningData, date: IsoDate): string {
     case 'dislike':
       return w.matched && w.matched !== w.term ? `The client dislikes ${w.term} (${w.matched}).` : `The client dislikes ${w.term}.`;
     case 'before-prep':
-      return `Planned on ${date}, before its tray is made on ${w.prepDate}.`;
+      return `Planned on ${shortDate(date)}, before its tray is made on ${shortDate(w.prepDate)}.`;
     case 'past-freezer-quality':
-      return `Frozen portion planned after its freezer quality limit (${w.qualityUntil}).`;
+      return `Frozen portion planned after its freezer quality limit (${shortDate(w.qualityUntil)}).`;
     case 'past-eat-by':
-      return `Past its eat-by date: prepped ${w.prepDate}, eat by ${w.eatBy}.`;
+      return `Past its eat-by date: prepped ${shortDate(w.prepDate)}, eat by ${shortDate(w.eatBy)}.`;
   }
 }
 

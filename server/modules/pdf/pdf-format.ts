@@ -14,22 +14,8 @@ export function signed(value: Decimal.Value, dp: number): string {
   return d.isPositive() && !d.isZero() ? `+${fixed(d, dp)}` : fixed(d, dp);
 }
 
-const WEEKDAYS = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'];
-const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
-
-/** "Monday 7 December 2026" from "2026-12-07" (calendar date, no time zone). */
-export function longDate(iso: string): string {
-  const [y, m, d] = iso.split('-').map(Number);
-  const wd = new Date(Date.UTC(y, m - 1, d)).getUTCDay();
-  return `${WEEKDAYS[wd]} ${d} ${MONTHS[m - 1]} ${y}`;
-}
-
-/** "Wed 9 Dec" from "2026-12-09". */
-export function shortDate(iso: string): string {
-  const [y, m, d] = iso.split('-').map(Number);
-  const wd = new Date(Date.UTC(y, m - 1, d)).getUTCDay();
-  return `${WEEKDAYS[wd].slice(0, 3)} ${d} ${MONTHS[m - 1].slice(0, 3)}`;
-}
+/** Dates in words: one wording for printed plans, e-mails and the week check's sentences. */
+export { longDate, shortDate } from '@shared/domain/iso-date.js';
 
 /** "HH:mm" from a local "YYYY-MM-DDTHH:mm". */
 export function clock(localDateTime: string): string {

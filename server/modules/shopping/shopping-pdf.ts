@@ -4,6 +4,7 @@ import type { Actor } from '../../http/authz.js';
 import { renderShoppingListPdf } from '../pdf/shopping-list.pdf.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { aisleLabel } from './shopping.presenter.js';
+import { shortDate } from '@shared/domain/iso-date.js';
 import { weekShoppingExport } from './shopping-week.service.js';
 
 /** The week's list as a PDF through the shared renderer (aisle codes shown as the store aisle's name). */
@@ -16,7 +17,7 @@ export async function shoppingPdf(em: EntityManager, actor: Actor, weekId: numbe
   };
   return renderShoppingListPdf(list, {
     businessName: ws.name,
-    title: `Shopping list, week of ${week.startDate}`,
+    title: `Shopping list, week of ${shortDate(week.startDate)}`,
     filename: `shopping-list-${week.startDate}.pdf`,
   });
 }

@@ -49,9 +49,9 @@ describe('board answer: day checks', () => {
     ['protein-short', 'Protein 10 g is below the 36 g floor (target 40 g).'],
     ['energy-over', 'Energy 600 kcal is over 550 kcal (target 500 kcal).'],
     ['dislike', 'The client dislikes mushroom.'],
-    ['before-prep', 'Planned on 2025-01-04, before its tray is made on 2025-01-05.'],
-    ['past-eat-by', 'Past its eat-by date: prepped 2025-01-05, eat by 2025-01-09.'],
-    ['past-freezer-quality', 'Frozen portion planned after its freezer quality limit (2025-03-02).'],
+    ['before-prep', 'Planned on Sat 4 Jan, before its tray is made on Sun 5 Jan.'],
+    ['past-eat-by', 'Past its eat-by date: prepped Sun 5 Jan, eat by Thu 9 Jan.'],
+    ['past-freezer-quality', 'Frozen portion planned after its freezer quality limit (Sun 2 Mar).'],
   ])('words %s as the board page shows it', (kind, sentence) => {
     expect(expanded.flatMap((d) => d.warnings).find((w) => w.kind === kind)?.message).toBe(sentence);
   });

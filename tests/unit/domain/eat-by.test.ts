@@ -26,7 +26,7 @@ import {
   supplyingPrepDate,
   type FoodCategory,
 } from '@shared/domain/eat-by';
-import { addDays, daysBetween, isIsoDate, weekdayOf } from '@shared/domain/iso-date';
+import { addDays, daysBetween, isIsoDate, longDate, shortDate, weekdayOf } from '@shared/domain/iso-date';
 
 // convert-units (general-purpose npm library, no type declarations) as the outside °F → °C reference.
 const require = createRequire(import.meta.url);
@@ -255,5 +255,24 @@ describe('thawTasks (a client week: what to move to the fridge, which evening)',
         expect(task).toMatchObject({ thawOn: remedy.thawReminderOn, eatOn: remedy.eatOn, eatByAfterThaw: remedy.eatByAfterThaw });
       }),
     );
+  });
+});
+
+describe('dates in words (printed plans, e-mails, the week check sentences)', () => {
+  it('property: the weekday and the day agree with the JavaScript Date of the same UTC calendar day (fast-check)', () => {
+    const names = ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'];
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 3650 }), (n) => {
+        const iso = addDays('2024-01-01', n);
+        const js = new Date(`${iso}T00:00:00Z`);
+        expect(shortDate(iso).split(' ')).toEqual([names[js.getUTCDay()], String(js.getUTCDate()), js.toLocaleString('en-US', { month: 'short', timeZone: 'UTC' })]);
+        expect(longDate(iso).endsWith(` ${js.getUTCFullYear()}`)).toBe(true);
+      }),
+    );
+  });
+
+  it('2025-01-05 was a Sunday (a worked calendar fact, also used above) and leap day 2028-02-29 a Tuesday', () => {
+    expect(shortDate('2025-01-05')).toBe('Sun 5 Jan');
+    expect(longDate('2028-02-29')).toBe('Tuesday 29 February 2028');
   });
 });
