@@ -3,13 +3,14 @@ import pg from 'pg';
 import pino from 'pino';
 import { env } from './config/env.js';
 import { createOrm } from './db/orm.js';
+import { sessionPoolConfig } from './db/connections.js';
 import { createApp } from './app.js';
 import { createMailRuntime } from './modules/mail/mail-runtime.js';
 import { smtpFromEnv } from './modules/mail/mail-transport.js';
 
 const log = pino({ level: env.LOG_LEVEL });
 const orm = await createOrm(env.DATABASE_URL);
-const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 5, connectionTimeoutMillis: 1500 });
+const pool = new pg.Pool(sessionPoolConfig(env.DATABASE_URL));
 pool.on('error', (err) => log.warn({ err }, 'session pool error'));
 // E-mail jobs (pg-boss, schema `pgboss` of the same database) and their send worker. Started in the background
 // so the server answers (503 on /api/health) even while PostgreSQL is away; it keeps trying until it starts.

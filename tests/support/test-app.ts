@@ -4,6 +4,7 @@ import request from 'supertest';
 import type { Express } from 'express';
 import { loadEnv } from '@server/config/env.js';
 import { createOrm, type Orm } from '@server/db/orm.js';
+import { sessionPoolConfig } from '@server/db/connections.js';
 import { createApp } from '@server/app.js';
 import { createMailRuntime, type MailRuntime } from '@server/modules/mail/mail-runtime.js';
 import { smtpFromEnv } from '@server/modules/mail/mail-transport.js';
@@ -23,7 +24,7 @@ export async function testApp(overrides: Record<string, string> = {}) {
     ...overrides,
   });
   const orm = await createOrm(env.DATABASE_URL);
-  const pool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 4 });
+  const pool = new pg.Pool(sessionPoolConfig(env.DATABASE_URL));
   // pg-boss queue only (no send worker): mail tests start their own worker and catcher (tests/api/mail.api.test.ts).
   const mail = createMailRuntime({ databaseUrl: env.DATABASE_URL, orm, smtp: smtpFromEnv(env), publicUrl: env.PUBLIC_URL, work: false });
   await mail.start().catch(() => undefined); // a test of a database that is away still gets an app
