@@ -103,7 +103,7 @@ async function paired(base: string, health: Request, r: Request, n: number): Pro
   return { health: summary(h), case: summary(c) };
 }
 
-async function throughput(base: string, r: Request, secs = seconds): Promise<{ rps: number; errors: number }> {
+async function throughput(base: string, r: Request, secs = seconds): Promise<{ rps: number; errors: number; statuses: string }> {
   const result = await autocannon({
     url: base + r.path,
     method: r.method as 'GET',
@@ -112,7 +112,10 @@ async function throughput(base: string, r: Request, secs = seconds): Promise<{ r
     connections,
     duration: secs,
   });
-  return { rps: result.requests.average, errors: result.errors + result.non2xx };
+  // What went wrong, when something did: "503 ×1", "no answer ×2" (the errors column counts them).
+  const failed = Object.entries(result.statusCodeStats ?? {}).filter(([code]) => !code.startsWith('2'));
+  const statuses = [...failed.map(([code, v]) => `${code} ×${(v as { count: number }).count}`), ...(result.errors ? [`no answer ×${result.errors}`] : [])].join(', ');
+  return { rps: result.requests.average, errors: result.errors + result.non2xx, statuses };
 }
 
 function bundleSize(): { file: string; gzipKb: number } {
@@ -208,7 +211,7 @@ try {
     const ratio = s.median / ph.median;
     const verdict = c.goalRatio === undefined ? '' : ratio <= c.goalRatio ? 'met' : 'NOT met';
     rows.push(
-      `| ${c.name} | ${s.median.toFixed(2)} | ${s.p95.toFixed(2)} | ${ph.median.toFixed(2)} | ${ratio.toFixed(2)} | ${(s.p95 / ph.p95).toFixed(2)} | ${(hT.rps / Math.max(t.rps, 0.01)).toFixed(2)} | ${c.goal ?? '—'} | ${verdict} | ${s.errors + t.errors} | ${[`${(s.bytes / 1024).toFixed(1)} KB`, c.notes].filter(Boolean).join('; ')} |`,
+      `| ${c.name} | ${s.median.toFixed(2)} | ${s.p95.toFixed(2)} | ${ph.median.toFixed(2)} | ${ratio.toFixed(2)} | ${(s.p95 / ph.p95).toFixed(2)} | ${(hT.rps / Math.max(t.rps, 0.01)).toFixed(2)} | ${c.goal ?? '—'} | ${verdict} | ${s.errors + t.errors} | ${[`${(s.bytes / 1024).toFixed(1)} KB`, c.notes, t.statuses && `throughput run: ${t.statuses}`].filter(Boolean).join('; ')} |`,
     );
   }
   const b = bundleSize();
