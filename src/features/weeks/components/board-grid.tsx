@@ -58,18 +58,26 @@ interface CellProps {
   onSelect: (id: string) => void;
   /** Where the cell is (client, day, slot), for its accessible name. */
   where: string;
+  /**
+   * The meal slot's name, shown small above the plate when the week has more than one slot. Drawn by CSS from
+   * data-slot (no element of its own: a 60-client board has 840 cells, and each element costs layout and paint).
+   */
+  slot?: string;
 }
 
-function Cell({ id, cell, plateName, kcal, flags, selected, isOver, onSelect, where }: CellProps) {
+function Cell({ id, slot, cell, plateName, kcal, flags, selected, isOver, onSelect, where }: CellProps) {
   const blocked = flags.some((f) => f.severity === 'block');
   return (
     <button
       type="button"
       data-cell-id={id}
+      data-slot={slot}
       onClick={() => onSelect(id)}
       aria-pressed={selected}
       aria-label={`${where}: ${cell ? (plateName ?? 'Plate') : 'empty'}${flags.length ? `, ${counted(flags.length, 'problem')}` : ''}`}
       className={`flex min-h-14 w-full flex-col items-start rounded-md border px-2 py-1 text-left text-xs ${
+        slot ? 'before:text-[10px] before:uppercase before:text-ink-faint before:content-[attr(data-slot)]' : ''
+      } ${
         isOver ? 'border-herb bg-herb-50' : blocked ? 'border-signal bg-signal-50' : flags.length ? 'border-caution bg-caution-50' : 'border-line bg-paper-card'
       } ${selected ? 'outline-2 outline-ink' : ''}`}
     >
@@ -150,10 +158,7 @@ const ClientRow = memo(function ClientRow({ client, days, slots, plates, cells, 
                 const plate = cell ? plates.get(cell.assemblyId) : undefined;
                 const flags = (day?.warnings ?? []).filter((w) => 'slot' in w && w.slot === slot);
                 return (
-                  <div key={slot}>
-                    {slots.length > 1 && <span className="text-[10px] uppercase text-ink-faint">{slot}</span>}
-                    <Cell id={id} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} isOver={over === id} onSelect={onSelect} where={cellWhere(client.name, date, slot)} />
-                  </div>
+                  <Cell key={slot} id={id} slot={slots.length > 1 ? slot : undefined} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} isOver={over === id} onSelect={onSelect} where={cellWhere(client.name, date, slot)} />
                 );
               })}
               {day && (
