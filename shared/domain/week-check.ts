@@ -236,11 +236,25 @@ export function termWords(term: string): Set<string> {
   return words;
 }
 
-/** Whether a plate term contains every word of a dislike (in any order): "red onion" is in "Onions, red, raw". */
+/** Dislike words this long also find compounds that end with them: "berry" in "blackberry", "melon" in "watermelon". */
+const COMPOUND_MIN_LETTERS = 5;
+
+/**
+ * Whether a plate term contains every word of a dislike (in any order): "red onion" is in "Onions, red, raw". A word
+ * of 5 letters or more also finds an English compound ending with it ("berries" finds "Blackberries, raw"); shorter
+ * ones match whole words only, so "corn" stays out of "peppercorns" and "egg" out of "eggplant". A dislike is a
+ * warning the coach reads with the matched name beside it, so a compound that is not the disliked food ("apple" in
+ * "pineapple") costs a glance, while a missed one would reach the client's plate. Common practice, no source.
+ */
 export function dislikeMatches(dislike: ReadonlySet<string>, term: ReadonlySet<string>): boolean {
   if (dislike.size === 0) return false;
-  for (const w of dislike) if (!term.has(w)) return false;
+  for (const w of dislike) if (!term.has(w) && !(w.length >= COMPOUND_MIN_LETTERS && endsOneOf(term, w))) return false;
   return true;
+}
+
+function endsOneOf(words: ReadonlySet<string>, ending: string): boolean {
+  for (const t of words) if (t.length > ending.length && t.endsWith(ending)) return true;
+  return false;
 }
 
 function dislikeList(list: readonly string[]): TermWords[] {

@@ -190,8 +190,13 @@ describe('dislikes', () => {
     { dislike: 'red onion', term: 'Onions, red, raw', hit: true },
     { dislike: 'tomatoes', term: 'Tomatoes, cherry, raw', hit: true },
     { dislike: 'cherry tomato', term: 'Tomatoes, cherry, raw', hit: true },
-    { dislike: 'berries', term: 'Blackberries, raw', hit: false }, // whole words only: a berry dislike does not reach "blackberries"
+    { dislike: 'berries', term: 'Blackberries, raw', hit: true }, // a word of 5+ letters finds compounds ending with it
+    { dislike: 'strawberry', term: 'Strawberries, raw', hit: true },
+    { dislike: 'melon', term: 'Watermelon, raw', hit: true },
+    { dislike: 'blackberries', term: 'Berries, mixed', hit: false }, // a compound does not find its last word
+    { dislike: 'corn', term: 'Peppercorns, black', hit: false }, // shorter words match whole words only
     { dislike: 'egg', term: 'Eggplant, raw', hit: false },
+    { dislike: 'ham', term: 'Graham crackers', hit: false },
     { dislike: 'cream', term: 'Cheese, cream', hit: true },
     { dislike: 'sweet', term: 'sweet', hit: true },
     { dislike: 'red onion', term: 'Onions, raw', hit: false },

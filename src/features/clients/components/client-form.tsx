@@ -229,7 +229,7 @@ export function ClientForm({ initial, slots = [], busy, submitLabel, formError, 
           render={({ field }) => (
             <TextField
               label="Dislikes"
-              hint={'Separated by commas. The board flags a plate when an ingredient, base tray or tag has every word of a dislike ("red onion" finds "Onions, red, raw").'}
+              hint={'Separated by commas. The board flags a plate when an ingredient, base tray or tag has every word of a dislike ("red onion" finds "Onions, red, raw"); a word of five letters or more also finds words ending with it ("berries" finds "Blackberries").'}
               defaultValue={(field.value ?? []).join(', ')}
               onBlur={(e) => field.onChange(e.target.value.split(',').map((s) => s.trim()).filter(Boolean))}
             />
