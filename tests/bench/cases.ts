@@ -29,11 +29,17 @@ async function getJson<T>(ctx: BenchContext, p: string): Promise<T> {
 }
 
 /**
- * The floor of any signed-in request: GET /api/auth/me reads the session with its user (one statement) and answers
- * one small row. No goal; it shows how much of a signed-in case's ratio is the session alone.
+ * The floor of a signed-in request that reads something: GET /api/auth/me reads the session with its user (one
+ * statement), then one small row (the person's preferences and workspace name, a second statement). No goal; it
+ * shows how much of a signed-in case's ratio is the session and one read alone.
  */
 async function signedInFloor(): Promise<BenchCase | null> {
-  return { name: 'GET /api/auth/me (signed-in floor)', method: 'GET', path: '/api/auth/me', notes: 'session read with its user, one small answer' };
+  return {
+    name: 'GET /api/auth/me (signed-in floor)',
+    method: 'GET',
+    path: '/api/auth/me',
+    notes: 'session read with its user, then one small read (two statements)',
+  };
 }
 
 /** POST /api/calc/recipe with 40 lines from the reference library. */
