@@ -3,6 +3,7 @@ import { Migrator } from '@mikro-orm/migrations';
 import { SeedManager } from '@mikro-orm/seeder';
 import { fileURLToPath } from 'node:url';
 import { entities } from './entities.js';
+import { CONNECT_TIMEOUT_MS, IDLE_TIMEOUT_MS } from './connections.js';
 
 const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 
@@ -12,9 +13,10 @@ export function ormConfig(clientUrl: string, opts: { debug?: boolean } = {}) {
     entities,
     extensions: [Migrator, SeedManager],
     debug: opts.debug ?? false,
-    // Fail fast when the database is away, so /api/health answers within 2 s and requests don't pile up.
-    pool: { min: 0, max: 10, acquireTimeoutMillis: 4000, idleTimeoutMillis: 10000 },
-    driverOptions: { connection: { connectionTimeoutMillis: 1500 } },
+    // Connection limits as the session pool's (connections.ts: wall time runs while the process is busy); a request
+    // waits at most acquireTimeoutMillis for a connection. /api/health keeps its own 1.8 s limit.
+    pool: { min: 0, max: 10, acquireTimeoutMillis: CONNECT_TIMEOUT_MS + 1000, idleTimeoutMillis: IDLE_TIMEOUT_MS },
+    driverOptions: { connection: { connectionTimeoutMillis: CONNECT_TIMEOUT_MS } },
     migrations: {
       path: here('./migrations'),
       glob: '!(*.d).{js,ts}',
