@@ -177,7 +177,7 @@ export function Component() {
           onSubmit={(e) => {
             e.preventDefault();
             if (!copyFrom || !copyTo) return;
-            const run = (version: number) => copyDay.mutate({ version, fromDate: copyFrom, toDate: copyTo }, { onError: onFail({ kind: 'other', label: `copy ${copyFrom} to ${copyTo}`, run }) });
+            const run = (version: number) => copyDay.mutate({ version, fromDate: copyFrom, toDate: copyTo }, { onError: onFail({ kind: 'other', label: `copy ${dayLabel(copyFrom)} to ${dayLabel(copyTo)}`, run }) });
             withVersion('copy', run);
           }}
         >

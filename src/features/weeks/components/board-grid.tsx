@@ -201,7 +201,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const place = (clientId: number, date: string, slot: string, assemblyId: number | null, extra: Partial<CellInput> = {}) => {
     const old = cells.get(cellId(clientId, date, slot));
     onEdit({
-      label: assemblyId ? `${plates.get(assemblyId)?.name ?? 'Plate'} on ${date}` : `Empty ${date}`,
+      label: assemblyId ? `${plates.get(assemblyId)?.name ?? 'Plate'} on ${dayLabel(date)}` : `Empty ${dayLabel(date)}`,
       cells: [
         {
           clientId,

@@ -41,7 +41,7 @@ export function InventoryPanel({ board, busy, onCover, onSave }: { board: BoardD
                   <td className="num text-right">{r.needed}</td>
                   <td className="text-right">
                     <input
-                      aria-label={`Trays of ${names.get(r.trayId)} on ${r.prepDate}`}
+                      aria-label={`Trays of ${names.get(r.trayId)} on ${dayLabel(r.prepDate)}`}
                       inputMode="numeric"
                       className="num w-16 rounded border border-line-strong bg-paper-card px-2 py-1 text-right"
                       value={draft[key] ?? String(counts.get(key) ?? 0)}
