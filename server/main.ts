@@ -4,6 +4,7 @@ import pino from 'pino';
 import { env } from './config/env.js';
 import { createOrm } from './db/orm.js';
 import { sessionPoolConfig } from './db/connections.js';
+import { closeBakeRunPool } from './lib/bake-run-pool.js';
 import { createApp } from './app.js';
 import { createMailRuntime } from './modules/mail/mail-runtime.js';
 import { smtpFromEnv } from './modules/mail/mail-transport.js';
@@ -40,7 +41,7 @@ async function shutdown(signal: string) {
   server.close();
   if (mailTimer) clearTimeout(mailTimer);
   await mail.stop().catch((err) => log.warn({ err }, 'mail stop failed'));
-  await Promise.allSettled([orm.close(true), pool.end()]);
+  await Promise.allSettled([orm.close(true), pool.end(), closeBakeRunPool()]);
   process.exit(0);
 }
 process.on('SIGINT', () => void shutdown('SIGINT'));

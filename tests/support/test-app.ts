@@ -5,6 +5,7 @@ import type { Express } from 'express';
 import { loadEnv } from '@server/config/env.js';
 import { createOrm, type Orm } from '@server/db/orm.js';
 import { sessionPoolConfig } from '@server/db/connections.js';
+import { closeBakeRunPool } from '@server/lib/bake-run-pool.js';
 import { createApp } from '@server/app.js';
 import { createMailRuntime, type MailRuntime } from '@server/modules/mail/mail-runtime.js';
 import { smtpFromEnv } from '@server/modules/mail/mail-transport.js';
@@ -39,7 +40,7 @@ export async function closeTestApp() {
   const { orm, pool, mail } = state;
   state = null;
   await mail.stop().catch(() => undefined);
-  await Promise.allSettled([orm.close(true), pool.end()]);
+  await Promise.allSettled([orm.close(true), pool.end(), closeBakeRunPool()]);
 }
 
 /** A supertest agent that keeps cookies and sends the CSRF header on writes. */

@@ -1,7 +1,8 @@
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { ZodError } from 'zod';
-import { planBakeRun } from '@shared/domain/bake-run.js';
+import { planBakeRunOffThread } from '../../lib/bake-run-pool.js';
+import { prepDatesOf } from '@shared/domain/week-board.js';
 import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-run-types.js';
 import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
 import type {
@@ -91,7 +92,7 @@ export async function calcBakeRun(em: EntityManager, actor: Actor, body: CalcBak
   });
   const derived = runRulesFrom([...new Set(used)]);
   const input = parseRun({ ...body, trays, rules: body.rules ?? (used.length ? derived.rules : undefined) });
-  const run = planBakeRun(input);
+  const run = await planBakeRunOffThread(input);
   return body.rules ? run : { ...run, cautions: [...derived.cautions, ...run.cautions] };
 }
 
@@ -101,10 +102,6 @@ async function findWeek(em: EntityManager, actor: Actor, id: number): Promise<IW
   const w = await em.findOne(Week, { id, workspace: actor.workspaceId });
   if (!w) throw new NotFound('Week');
   return w;
-}
-
-function prepDatesOf(w: IWeek): string[] {
-  return [w.prepDate, ...(w.secondPrepDate ? [w.secondPrepDate] : [])].sort();
 }
 
 function pickPrepDate(w: IWeek, wanted: string | undefined): string {
@@ -198,7 +195,7 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
       rules: derived.rules,
     } satisfies BakeRunRequestBody);
     if (parsed.success) {
-      const planned = planBakeRun(parsed.data);
+      const planned = await planBakeRunOffThread(parsed.data);
       run = { ...planned, cautions: [...derived.cautions, ...planned.cautions] };
     } else {
       problems.push(...describeIssues(parsed.error, schedulerTrays));
