@@ -5,8 +5,9 @@ import type { BakeRunInput, BakeRunResult } from '@shared/domain/bake-run-types.
 /**
  * The bake-run scheduler off the request thread. A 40-tray, 3-oven run computes for ~0.2 s; on the thread that
  * answers requests, every other request (other people's pages, health checks) waited behind it. Worker threads
- * (tinypool) take it: one less than the machine's cores, at least one; an idle thread ends after 30 s. Each thread
- * registers tsx itself (bake-run-worker.mjs). Input and result are plain data (no classes to lose on the way).
+ * (tinypool) take it: one less than the machine's cores, at least one; a thread idle for 10 minutes ends (starting
+ * one takes ~0.5 s). Each thread registers tsx itself (bake-run-worker.mjs). Input and result are plain data (no
+ * classes to lose on the way).
  */
 let pool: Tinypool | null = null;
 
@@ -15,7 +16,7 @@ function workers(): Tinypool {
     filename: new URL('./bake-run-worker.mjs', import.meta.url).href,
     minThreads: 0,
     maxThreads: Math.max(1, os.availableParallelism() - 1),
-    idleTimeout: 30_000,
+    idleTimeout: 10 * 60_000,
   });
   return pool;
 }

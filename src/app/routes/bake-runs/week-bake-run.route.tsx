@@ -57,7 +57,7 @@ export function Component() {
         >
           {dto.prepDates.map((d) => (
             <option key={d} value={d}>
-              {d}
+              {dayLabel(d, true)}
             </option>
           ))}
         </SelectField>

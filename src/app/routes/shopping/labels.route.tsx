@@ -52,7 +52,7 @@ export function Component() {
             <SelectField label="Prep day" value={q.data.prepDate ?? ''} onChange={(e) => set('prepDate', e.target.value)} className="w-48">
               {q.data.prepDates.map((d) => (
                 <option key={d} value={d}>
-                  {d}
+                  {dayLabel(d, true)}
                 </option>
               ))}
             </SelectField>

@@ -185,7 +185,7 @@ export function Component() {
             <option value="">Choose…</option>
             {board.days.map((d) => (
               <option key={d} value={d}>
-                {d}
+                {dayLabel(d, true)}
               </option>
             ))}
           </SelectField>
@@ -193,7 +193,7 @@ export function Component() {
             <option value="">Choose…</option>
             {board.days.map((d) => (
               <option key={d} value={d}>
-                {d}
+                {dayLabel(d, true)}
               </option>
             ))}
           </SelectField>
