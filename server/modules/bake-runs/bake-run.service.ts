@@ -18,6 +18,7 @@ import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
 import { Tray } from '../trays/tray.entity.js';
 import { BakeRunSetting, BakeRule, type IBakeRule, type IBakeRunSetting, type IOven } from './bake-run.entity.js';
 import { loadBakeRules, loadOvens, presentOven } from './bake-setup.service.js';
+import { shortDate } from '@shared/domain/iso-date.js';
 
 const num = (v: string | number): number => new Decimal(v).toNumber();
 
@@ -203,7 +204,7 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
   }
   return {
     weekId: week.id,
-    weekName: week.name || `Week of ${week.startDate}`,
+    weekName: week.name || `Week of ${shortDate(week.startDate)}`,
     prepDate,
     prepDates: prepDatesOf(week),
     settings,
