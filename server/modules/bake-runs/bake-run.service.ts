@@ -2,7 +2,7 @@ import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { ZodError } from 'zod';
 import { planBakeRunOffThread } from '../../lib/bake-run-pool.js';
-import { prepDatesOf } from '@shared/domain/week-board.js';
+import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-run-types.js';
 import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
 import type {
@@ -18,7 +18,6 @@ import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
 import { Tray } from '../trays/tray.entity.js';
 import { BakeRunSetting, BakeRule, type IBakeRule, type IBakeRunSetting, type IOven } from './bake-run.entity.js';
 import { loadBakeRules, loadOvens, presentOven } from './bake-setup.service.js';
-import { shortDate } from '@shared/domain/iso-date.js';
 
 const num = (v: string | number): number => new Decimal(v).toNumber();
 
@@ -204,7 +203,7 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
   }
   return {
     weekId: week.id,
-    weekName: week.name || `Week of ${shortDate(week.startDate)}`,
+    weekName: weekTitle(week),
     prepDate,
     prepDates: prepDatesOf(week),
     settings,

@@ -1,4 +1,3 @@
-import Decimal from 'decimal.js';
 import { ForeignKeyConstraintViolationException, sql, type FilterQuery } from '@mikro-orm/core';
 import { preparedRows } from '../../db/prepared.js';
 import type { EntityManager } from '@mikro-orm/postgresql';

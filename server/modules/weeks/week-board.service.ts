@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { CAUTIONS } from '@shared/domain/eat-by.js';
-import { addDays, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
-import { cellKey, computeBoard, prepDatesOf, type BoardInput, type BoardResult } from '@shared/domain/week-board.js';
+import { addDays, type IsoDate } from '@shared/domain/iso-date.js';
+import { cellKey, computeBoard, prepDatesOf, weekTitle, type BoardInput, type BoardResult } from '@shared/domain/week-board.js';
 import type { AllergenCode } from '@shared/domain/allergens.js';
 import type { MacroTargets } from '@shared/domain/targets.js';
 import type { AssemblyDto } from '@shared/schemas/assemblies.schema.js';
@@ -35,7 +35,7 @@ export async function findWeek(em: EntityManager, actor: Actor, id: number): Pro
 export function presentWeekSummary(w: BoardWeek, cellCount: number, publishedAt: Date | null): WeekSummaryDto {
   return {
     id: w.id,
-    name: w.name || `Week of ${shortDate(w.startDate)}`,
+    name: weekTitle(w),
     startDate: w.startDate,
     endDate: addDays(w.startDate, WEEK_DAYS - 1),
     prepDate: w.prepDate,

@@ -16,7 +16,7 @@ import { findWeek } from './week-board.service.js';
 import { myWeek } from './week-publish.service.js';
 import { renderPublishedPlan, THAW_REMINDERS_ICS, WEEK_PLAN_PDF, type WeekPlanPayload } from './week-mail.js';
 import { thawTasks } from '@shared/domain/eat-by.js';
-import { shortDate } from '@shared/domain/iso-date.js';
+import { weekTitle } from '@shared/domain/week-board.js';
 
 /** Seconds in which the same send (same week version, note and clients) without a requestId counts as a repeat. */
 export const REPEAT_WINDOW_SECONDS = 15;
@@ -140,7 +140,7 @@ export async function clientDeliveries(em: EntityManager, actor: Actor, clientId
   const rows = await em.find(Outbox, { workspace: actor.workspaceId, clientId: client.id }, { orderBy: { id: 'desc' }, limit });
   const weekIds = [...new Set(rows.map((r) => r.weekId).filter((w): w is number => w != null))];
   const weeks = weekIds.length ? await em.find(Week, { id: { $in: weekIds }, workspace: actor.workspaceId }, { fields: ['id', 'name', 'startDate'] }) : [];
-  const names = new Map(weeks.map((w) => [w.id, w.name || `Week of ${shortDate(w.startDate)}`]));
+  const names = new Map(weeks.map((w) => [w.id, weekTitle(w)]));
   return {
     clientId: client.id,
     items: rows.map((r) => ({ ...presentOutbox(r), weekName: r.weekId != null ? (names.get(r.weekId) ?? null) : null })),

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { cellEatBy, computeBoard, coveringBatches, type BoardInput } from '@shared/domain/week-board';
+import { cellEatBy, computeBoard, coveringBatches, weekTitle, type BoardInput } from '@shared/domain/week-board';
 import { checkWeek, type CheckCell, type DayCheckInput } from '@shared/domain/week-check';
 import { portionCount } from '@shared/domain/inventory';
 import { addDays } from '@shared/domain/iso-date';
@@ -134,5 +134,13 @@ describe('computeBoard shares the work of cells alike without changing any answe
       }),
       { numRuns: 200 },
     );
+  });
+});
+
+describe('weekTitle', () => {
+  it('is the week name, or its start day in words when it has none (2026-12-07 is a Monday)', () => {
+    expect(weekTitle({ name: 'Holiday week', startDate: '2026-12-07' })).toBe('Holiday week');
+    expect(weekTitle({ name: '', startDate: '2026-12-07' })).toBe('Week of Mon 7 Dec');
+    expect(weekTitle({ name: null, startDate: '2026-12-07' })).toBe('Week of Mon 7 Dec');
   });
 });
