@@ -2,7 +2,8 @@ import type { BakeEvent, BakeRunResult } from '@shared/domain/bake-run-types.js'
 import { CAUTIONS } from '@shared/domain/eat-by.js';
 import { toCelsiusRounded } from '@shared/domain/temperature.js';
 import { cautionsBlock, createDoc, finishDoc, heading, paragraph, table } from './pdf-document.js';
-import { clock, longDate } from './pdf-format.js';
+import { clock } from './pdf-format.js';
+import { longDate } from '@shared/domain/iso-date.js';
 
 export interface BakeRunPdfMeta {
   businessName: string;

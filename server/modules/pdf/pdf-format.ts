@@ -14,9 +14,6 @@ export function signed(value: Decimal.Value, dp: number): string {
   return d.isPositive() && !d.isZero() ? `+${fixed(d, dp)}` : fixed(d, dp);
 }
 
-/** Dates in words: one wording for printed plans, e-mails and the week check's sentences. */
-export { longDate, shortDate } from '@shared/domain/iso-date.js';
-
 /** "HH:mm" from a local "YYYY-MM-DDTHH:mm". */
 export function clock(localDateTime: string): string {
   return localDateTime.slice(11, 16);

@@ -2,7 +2,8 @@ import Decimal from 'decimal.js';
 import { CAUTIONS } from '@shared/domain/eat-by.js';
 import type { PdfMacros, PdfTargets, WeekPlanPdfData } from '@shared/schemas/pdf.schema.js';
 import { cautionsBlock, createDoc, finishDoc, heading, list, paragraph, table, type Column } from './pdf-document.js';
-import { capitalize, fixed, longDate, shortDate, signed } from './pdf-format.js';
+import { capitalize, fixed, signed } from './pdf-format.js';
+import { longDate, shortDate } from '@shared/domain/iso-date.js';
 
 /** The macro columns in the order every Trayline table shows them (kcal 0 dp, grams 1 dp). */
 const MACROS: { key: keyof PdfMacros; target?: keyof PdfTargets; label: string; dp: number; cap?: boolean }[] = [

@@ -2,7 +2,7 @@ import ical, { ICalAlarmType } from 'ical-generator';
 import { FRIDGE_MAX_C, FRIDGE_MAX_F, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by.js';
 import { addLocalMinutes } from '@shared/domain/bake-run-time.js';
 import { floating } from '../../lib/ics.js';
-import { longDate } from '../pdf/pdf-format.js';
+import { longDate } from '@shared/domain/iso-date.js';
 
 /** Minutes a thaw reminder event lasts in the calendar (moving a box takes a minute; 15 shows as a block). */
 const THAW_EVENT_MINUTES = 15;

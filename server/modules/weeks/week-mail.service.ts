@@ -7,7 +7,7 @@ import { newBatchId, queueMail, type MailQueue } from '../mail/mail.service.js';
 import { weekPlanMail } from '../mail/mail-templates.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { presentOutbox } from '../mail/outbox.service.js';
-import { longDate } from '../pdf/pdf-format.js';
+import { longDate } from '@shared/domain/iso-date.js';
 import { Client } from '../clients/client.entity.js';
 import { findClient } from '../clients/client.service.js';
 import { Workspace } from '../workspaces/workspace.entity.js';

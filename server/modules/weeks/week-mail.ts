@@ -8,7 +8,7 @@ import { NotFound } from '../../http/errors.js';
 import { registerAttachment, type RenderedAttachment } from '../mail/attachment-registry.js';
 import { thawRemindersIcs } from './thaw-reminders-ics.js';
 import { renderWeekPlanPdf } from '../pdf/week-plan.pdf.js';
-import { longDate } from '../pdf/pdf-format.js';
+import { longDate } from '@shared/domain/iso-date.js';
 import { Client, type IClient } from '../clients/client.entity.js';
 import { plannedTargets } from '../clients/client.presenter.js';
 import { mealSlotsOf } from '../clients/client.service.js';
