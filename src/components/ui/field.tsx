@@ -1,4 +1,5 @@
 import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
+import { dayLabel } from '@/lib/dates';
 
 interface FieldShellProps {
   label: string;
@@ -80,3 +81,16 @@ export const TextAreaField = forwardRef<HTMLTextAreaElement, AreaProps>(function
     </FieldShell>
   );
 });
+
+/** A select's options for calendar days: the ISO date as the value, the day in words as the text. */
+export function DayOptions({ days }: { days: readonly string[] }) {
+  return (
+    <>
+      {days.map((d) => (
+        <option key={d} value={d}>
+          {dayLabel(d, true)}
+        </option>
+      ))}
+    </>
+  );
+}

@@ -8,7 +8,7 @@ import { BakeRunView, UnitToggle } from '@/features/bake-runs/components/bake-ru
 import type { TempUnit } from '@/features/bake-runs/components/temperature';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { Button } from '@/components/ui/button';
-import { SelectField } from '@/components/ui/field';
+import { DayOptions, SelectField } from '@/components/ui/field';
 import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { dayLabel } from '@/lib/dates';
@@ -55,11 +55,7 @@ export function Component() {
           value={dto.prepDate}
           onChange={(e) => setParams({ prepDate: e.target.value }, { replace: true })}
         >
-          {dto.prepDates.map((d) => (
-            <option key={d} value={d}>
-              {dayLabel(d, true)}
-            </option>
-          ))}
+          <DayOptions days={dto.prepDates} />
         </SelectField>
       )}
       {me.role === 'coach' && ovens.data && (

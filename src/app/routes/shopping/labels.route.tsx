@@ -5,7 +5,7 @@ import type { ContainerLabelDto } from '@shared/schemas/shopping.schema';
 import { labelSheetQuery } from '@/features/shopping/api/shopping.queries';
 import { LabelSheet } from '@/features/shopping/components/label-sheet';
 import { Button } from '@/components/ui/button';
-import { SelectField } from '@/components/ui/field';
+import { DayOptions, SelectField } from '@/components/ui/field';
 import { EmptyState, Notice, PageHeader, QueryView } from '@/components/ui/states';
 import { counted } from '@/lib/words';
 import { dayLabel } from '@/lib/dates';
@@ -50,11 +50,7 @@ export function Component() {
           </label>
           {q.data && q.data.prepDates.length > 1 && (
             <SelectField label="Prep day" value={q.data.prepDate ?? ''} onChange={(e) => set('prepDate', e.target.value)} className="w-48">
-              {q.data.prepDates.map((d) => (
-                <option key={d} value={d}>
-                  {dayLabel(d, true)}
-                </option>
-              ))}
+              <DayOptions days={q.data.prepDates} />
             </SelectField>
           )}
         </div>

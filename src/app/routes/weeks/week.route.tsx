@@ -12,7 +12,7 @@ import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/wee
 import { InventoryPanel } from '@/features/weeks/components/inventory-panel';
 import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
+import { DayOptions, SelectField, TextField } from '@/components/ui/field';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { errorMessage, isApiError } from '@/lib/problem';
@@ -183,19 +183,11 @@ export function Component() {
         >
           <SelectField label="From" value={copyFrom} onChange={(e) => setCopyFrom(e.target.value)}>
             <option value="">Choose…</option>
-            {board.days.map((d) => (
-              <option key={d} value={d}>
-                {dayLabel(d, true)}
-              </option>
-            ))}
+            <DayOptions days={board.days} />
           </SelectField>
           <SelectField label="To (replaces that day)" value={copyTo} onChange={(e) => setCopyTo(e.target.value)}>
             <option value="">Choose…</option>
-            {board.days.map((d) => (
-              <option key={d} value={d}>
-                {dayLabel(d, true)}
-              </option>
-            ))}
+            <DayOptions days={board.days} />
           </SelectField>
           <Button type="submit" variant="secondary" busy={copyDay.isPending} disabled={!copyFrom || !copyTo || copyFrom === copyTo}>
             Copy day
