@@ -8,7 +8,8 @@ import { dayLabel } from '@/lib/dates';
 
 /** The coach's "this week at a glance": warnings, portions short, the next prep day. */
 export function WeekGlance() {
-  const q = useQuery(glanceQuery(localToday()));
+  const today = localToday();
+  const q = useQuery(glanceQuery(today));
   if (q.isPending) return <Skeleton className="h-28 w-full" label="Loading this week" />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   const g = q.data;
@@ -26,7 +27,7 @@ export function WeekGlance() {
           {g.blocks ? `${g.blocks} ${agrees(g.blocks, 'blocks', 'block')} publishing` : 'None blocks publishing'}
         </Notice>
         <Notice tone={g.portionsShort ? 'warn' : 'info'} title={g.portionsShort ? `${counted(g.portionsShort, 'portion')} short` : 'No portion short'} />
-        <Notice tone="cold" title={g.nextPrepDate ? `Next prep day: ${dayLabel(g.nextPrepDate, true)}` : 'No prep day ahead'} />
+        <Notice tone="cold" title={g.nextPrepDate ? `Next prep day: ${dayLabel(g.nextPrepDate, true)}${g.nextPrepDate === today ? ' (today)' : ''}` : 'No prep day ahead'} />
       </div>
     </Card>
   );

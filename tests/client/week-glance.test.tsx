@@ -1,0 +1,57 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { cleanup, render, screen } from '@testing-library/react';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { MemoryRouter } from 'react-router-dom';
+import { WeekGlance } from '@/features/weeks/components/week-glance';
+import { dayLabel } from '@/lib/dates';
+
+// The coach's "this week at a glance": invented glance values for the check; "today" is pinned with fake timers.
+const json = (body: unknown) => new Response(JSON.stringify(body), { headers: { 'content-type': 'application/json' } });
+const week = { id: 7, name: 'Week of Jan 5', startDate: '2026-01-05', endDate: '2026-01-11', prepDate: '2026-01-04', secondPrepDate: '2026-01-07', publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 9, version: 3 };
+const glance = (over: Record<string, unknown> = {}) => ({ week, warnings: 2, blocks: 0, portionsShort: 0, nextPrepDate: '2026-01-07', ...over });
+
+function show(body: unknown) {
+  const fetch = vi.fn(async (_url: string) => json(body));
+  vi.stubGlobal('fetch', fetch);
+  render(
+    <MemoryRouter>
+      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
+        <WeekGlance />
+      </QueryClientProvider>
+    </MemoryRouter>,
+  );
+  return fetch;
+}
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+  vi.useRealTimers();
+});
+
+describe('week glance', () => {
+  it('asks for the glance of the local day and names the next prep day, the warnings and the portions short', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 5, 9), toFake: ['Date'] });
+    const fetch = show(glance({ portionsShort: 3, blocks: 1 }));
+    expect(await screen.findByText(`Next prep day: ${dayLabel('2026-01-07', true)}`)).toBeTruthy();
+    expect(String(fetch.mock.calls[0][0])).toBe('/api/weeks/glance?today=2026-01-05');
+    expect(screen.getByText('3 warnings')).toBeTruthy();
+    expect(screen.getByText('1 blocks publishing')).toBeTruthy();
+    expect(screen.getByText('3 portions short')).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Week of Jan 5' }).getAttribute('href')).toBe('/weeks/7');
+  });
+
+  it('says "(today)" when the next prep day is today', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 7, 7), toFake: ['Date'] });
+    show(glance());
+    expect(await screen.findByText(`Next prep day: ${dayLabel('2026-01-07', true)} (today)`)).toBeTruthy();
+    expect(screen.getByText('None blocks publishing')).toBeTruthy();
+  });
+
+  it('shows nothing when no week is planned', async () => {
+    const fetch = show(glance({ week: null, nextPrepDate: null }));
+    await vi.waitFor(() => expect(fetch).toHaveBeenCalled());
+    await vi.waitFor(() => expect(screen.queryByLabelText('Loading this week')).toBeNull());
+    expect(screen.queryByText(/Next prep day/)).toBeNull();
+  });
+});
