@@ -3,6 +3,7 @@ import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { requireSignedIn } from './guards';
 import { AppShell } from './layout/app-shell';
+import { PageSkeleton } from '@/components/ui/states';
 import { NotFoundPage, RouteError } from './route-error';
 import { appRoutes } from './routes';
 
@@ -10,6 +11,12 @@ export function createRouter(qc: QueryClient) {
   const routes: RouteObject[] = [
     {
       errorElement: <RouteError />,
+      // Shown while the first page's code and the signed-in check load (a page reload, a link opened in a new tab).
+      hydrateFallbackElement: (
+        <div className="mx-auto max-w-7xl px-4 py-6 md:px-8">
+          <PageSkeleton />
+        </div>
+      ),
       children: [
         { path: paths.signIn, lazy: () => import('./routes/auth/sign-in.route') },
         { path: paths.register, lazy: () => import('./routes/auth/register.route') },
