@@ -10,6 +10,7 @@ import path from 'node:path';
 import type { Pool } from 'pg';
 import type { Env } from './config/env.js';
 import type { Orm } from './db/orm.js';
+import { schemaGate, type SchemaGate } from './db/schema-gate.js';
 import { errorHandler } from './http/error-handler.js';
 import { NotFound, Forbidden } from './http/errors.js';
 import { requestContext } from './http/request-context.js';
@@ -27,6 +28,8 @@ export interface AppDeps {
   /** pg-boss mail queue (server/modules/mail/mail-runtime.ts), started by main.ts and the test app. */
   mail: MailQueue;
   logger?: pino.Logger;
+  /** Keeps requests off a database whose schema is behind the code (made here when not given). */
+  schema?: SchemaGate;
 }
 
 /** CSRF: cookie-authenticated writes must carry this header (a cross-site form cannot set it; SameSite=Lax too). */
@@ -35,7 +38,7 @@ export const CSRF_HEADER = 'x-trayline-csrf';
 const SESSION_MAX_AGE_MS = 14 * 86_400_000;
 
 /** Builds the app without listening (tests use it through supertest). */
-export function createApp({ orm, pool, env, mail, logger }: AppDeps): Express {
+export function createApp({ orm, pool, env, mail, logger, schema = schemaGate(orm) }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', env.TRUST_PROXY);
@@ -77,6 +80,8 @@ export function createApp({ orm, pool, env, mail, logger }: AppDeps): Express {
   app.use(compression());
 
   const api = Router();
+  // Before anything reads a table: a schema older than the code is a 503 that says to migrate, not a 500 per route.
+  api.use(schema.middleware);
   api.use(express.json({ limit: '1mb' }));
   api.use(requestContext(orm));
 
@@ -115,7 +120,7 @@ export function createApp({ orm, pool, env, mail, logger }: AppDeps): Express {
   api.use((req, _res, next) => next(new NotFound(`No API route ${req.method} ${req.originalUrl}`)));
 
   // Health must answer even when the session store (PostgreSQL) is down: mount it before the session too.
-  app.use('/api', healthRoutes(orm));
+  app.use('/api', healthRoutes(orm, schema));
   app.use('/api', api);
 
   if (env.SERVE_CLIENT === '1') {

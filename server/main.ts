@@ -6,6 +6,7 @@ import { createOrm } from './db/orm.js';
 import { sessionPoolConfig } from './db/connections.js';
 import { closeBakeRunPool } from './lib/bake-run-pool.js';
 import { createApp } from './app.js';
+import { schemaGate } from './db/schema-gate.js';
 import { createMailRuntime } from './modules/mail/mail-runtime.js';
 import { smtpFromEnv } from './modules/mail/mail-transport.js';
 
@@ -27,7 +28,13 @@ const startMail = () => {
   );
 };
 startMail();
-const app = createApp({ orm, pool, env, mail, logger: log });
+// Says at start-up when the database is behind this version (requests get a 503 saying so until it is migrated).
+const schema = schemaGate(orm);
+schema.pending().then(
+  (p) => p?.length && log.error({ pending: p }, `the database is ${p.length} migration(s) behind this version: run "npm run db:migrate"`),
+  () => undefined,
+);
+const app = createApp({ orm, pool, env, mail, logger: log, schema });
 const server = http.createServer(app);
 server.listen(env.PORT, env.HOST, () => {
   log.info(`Trayline listening on http://${env.HOST}:${env.PORT}`);

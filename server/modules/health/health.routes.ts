@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { Orm } from '../../db/orm.js';
+import type { SchemaGate } from '../../db/schema-gate.js';
 import { allow } from '../../http/authz.js';
 
 /** Answers within 2 s whatever the database does: 200 up, 503 down. */
@@ -16,11 +17,19 @@ export async function databaseUp(orm: Orm, timeoutMs = 1800): Promise<boolean> {
   }
 }
 
-export function healthRoutes(orm: Orm) {
+/**
+ * 200 `{ok: true, db: 'up'}`; 503 `{ok: false, db: 'down'}` when PostgreSQL does not answer, and
+ * `{ok: false, db: 'up', schema: 'behind', pending}` when migrations this version ships are not applied (a load
+ * balancer keeps such an instance out until someone migrates).
+ */
+export function healthRoutes(orm: Orm, schema: SchemaGate) {
   const r = Router();
   r.get('/health', allow('public'), async (_req, res) => {
     const up = await databaseUp(orm);
-    res.status(up ? 200 : 503).json(up ? { ok: true, db: 'up' } : { ok: false, db: 'down' });
+    if (!up) return void res.status(503).json({ ok: false, db: 'down' });
+    const pending = await schema.pending();
+    if (pending && pending.length) return void res.status(503).json({ ok: false, db: 'up', schema: 'behind', pending });
+    res.json({ ok: true, db: 'up' });
   });
   return r;
 }
