@@ -1,10 +1,11 @@
-// Sums the vitest and Playwright JSON reports into one closing line: "N passed, N failed[, N skipped]".
+// Sums the vitest and Playwright JSON reports and the other checks (lines "name: passed|failed", e.g. the type
+// check) into one closing line: "N passed, N failed[, N skipped]".
 import fs from 'node:fs';
 
 let passed = 0;
 let failed = 0;
 let skipped = 0;
-const [vitestFile, playwrightFile] = process.argv.slice(2);
+const [vitestFile, playwrightFile, checksFile] = process.argv.slice(2);
 
 function read(file) {
   try {
@@ -38,6 +39,23 @@ if (p) {
 } else {
   failed += 1;
   console.error('Playwright report missing: counted as one failure');
+}
+
+if (checksFile) {
+  let text = null;
+  try {
+    text = fs.readFileSync(checksFile, 'utf8');
+  } catch {
+    failed += 1;
+    console.error('checks report missing: counted as one failure');
+  }
+  for (const line of (text ?? '').split('\n').filter(Boolean)) {
+    if (/: passed$/.test(line)) passed += 1;
+    else {
+      failed += 1;
+      console.error(line);
+    }
+  }
 }
 
 console.log(`${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`);

@@ -27,6 +27,10 @@ if [ -z "${TEST_DATABASE_URL:-}" ]; then
 fi
 
 status=0
+# Whole-project type check (the client, the server, shared/, the tests and the scripts): one check in the count.
+log "type check (tsc)"
+if node_modules/.bin/tsc -p tsconfig.json --noEmit; then echo "type check: passed" >"$out/checks.txt"; else echo "type check: failed" >"$out/checks.txt"; status=1; fi
+
 log "unit, client and API suites (vitest)"
 node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$out/vitest.json" || status=1
 
@@ -41,5 +45,5 @@ pids+=($!)
 PLAYWRIGHT_JSON_OUTPUT_NAME="$out/playwright.json" node_modules/.bin/playwright test -c tests/e2e/playwright.config.ts \
   --reporter=list,json || status=1
 
-node scripts/test-summary.mjs "$out/vitest.json" "$out/playwright.json" || status=1
+node scripts/test-summary.mjs "$out/vitest.json" "$out/playwright.json" "$out/checks.txt" || status=1
 exit $status
