@@ -15,7 +15,6 @@ const envSchema = z.object({
   PUBLIC_URL: z.string().default('http://127.0.0.1:8080'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   LOGIN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
-  API_RATE_LIMIT: z.coerce.number().int().positive().default(1200),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   SMTP_USER: z.string().optional(),
