@@ -15,12 +15,12 @@ import type { AllergenCode } from './allergens';
 import type { MacroTargets } from './targets';
 import { checkWeek, type AllergenOverride, type CellMacros, type CellPortion, type CheckCell, type DayCheck, type WeekWarning } from './week-check';
 
-/** A week's prep days (one or two), earliest first. */
 /** What a week is called where a person reads it: its name, or "Week of Mon 7 Dec" when it has none. */
 export function weekTitle(w: { name?: string | null; startDate: IsoDate }): string {
   return w.name || `Week of ${shortDate(w.startDate)}`;
 }
 
+/** A week's prep days (one or two), earliest first. */
 export function prepDatesOf(w: { prepDate: IsoDate; secondPrepDate?: IsoDate | null }): IsoDate[] {
   return [w.prepDate, ...(w.secondPrepDate ? [w.secondPrepDate] : [])].sort(compareIsoDates);
 }
