@@ -7,6 +7,7 @@ import { NAV } from '@/app/nav';
 import { paths } from '@/config/paths';
 import { WeekGlance } from '@/features/weeks/components/week-glance';
 import { KitchenGlance } from '@/features/shopping/components/kitchen-glance';
+import { FirstSteps } from './first-steps';
 
 export function Component() {
   const me = useMe();
@@ -15,6 +16,7 @@ export function Component() {
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title={`Hello, ${me.name.split(' ')[0]}`} lead={me.workspaceName} />
+      {me.role === 'coach' && <FirstSteps />}
       {me.role === 'coach' && <WeekGlance />}
       {me.role === 'assistant' && <KitchenGlance />}
       <Card>

@@ -1,0 +1,82 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { cleanup, render, screen, within } from '@testing-library/react';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { MemoryRouter } from 'react-router-dom';
+import { FirstSteps } from '@/app/routes/home/first-steps';
+
+// A new coach's home: which lists the workspace already has (invented rows for the check).
+const json = (body: unknown) => new Response(JSON.stringify(body), { headers: { 'content-type': 'application/json' } });
+
+function show(have: { trays?: number; plates?: number; clients?: number; ovens?: number; weeks?: number }, fail?: string) {
+  const rows = (n = 0) => Array.from({ length: n }, (_, i) => ({ id: i + 1 }));
+  const byPath: Record<string, unknown> = {
+    '/api/trays': rows(have.trays),
+    '/api/assemblies': rows(have.plates),
+    '/api/clients': rows(have.clients),
+    '/api/ovens': rows(have.ovens),
+    '/api/weeks': rows(have.weeks),
+  };
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (url: string) => {
+      const path = String(url).split('?')[0];
+      if (path === fail) return new Response(JSON.stringify({ status: 500, title: 'Internal server error', detail: 'Something went wrong' }), { status: 500, headers: { 'content-type': 'application/problem+json' } });
+      if (!(path in byPath)) throw new Error(`unexpected ${path}`);
+      return json(byPath[path]);
+    }),
+  );
+  render(
+    <MemoryRouter>
+      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
+        <FirstSteps />
+      </QueryClientProvider>
+    </MemoryRouter>,
+  );
+}
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
+
+describe('first steps', () => {
+  it('an empty workspace: nothing done, the first step leads to a new base tray', async () => {
+    show({});
+    expect(await screen.findByRole('heading', { name: 'First steps' })).toBeTruthy();
+    const bar = screen.getByRole('progressbar', { name: 'Steps done' });
+    expect(bar.getAttribute('aria-valuenow')).toBe('0');
+    expect(bar.getAttribute('aria-valuemax')).toBe('5');
+    const steps = screen.getAllByRole('listitem');
+    expect(steps.map((s) => s.querySelector('p')?.textContent)).toEqual([
+      'Write a base tray (to do)',
+      'Make a plate (to do)',
+      'Add your clients (to do)',
+      'Describe your ovens (to do)',
+      'Plan a week (to do)',
+    ]);
+    expect(within(steps[0]).getByRole('link', { name: 'New base tray' }).getAttribute('href')).toBe('/trays/new');
+    expect(within(steps[4]).getByRole('link', { name: 'Week board' }).getAttribute('href')).toBe('/weeks');
+  });
+
+  it('ticks off what the workspace has and drops its link', async () => {
+    show({ trays: 2, plates: 1, ovens: 1 });
+    const bar = await screen.findByRole('progressbar', { name: 'Steps done' });
+    expect(bar.getAttribute('aria-valuenow')).toBe('3');
+    const steps = screen.getAllByRole('listitem');
+    expect(steps[0].textContent).toContain('(done)');
+    expect(within(steps[0]).queryByRole('link')).toBeNull();
+    expect(steps[2].textContent).toContain('(to do)');
+    expect(within(steps[2]).getByRole('link', { name: 'Clients' }).getAttribute('href')).toBe('/clients');
+  });
+
+  it('is gone once every step is done', async () => {
+    show({ trays: 1, plates: 1, clients: 1, ovens: 1, weeks: 1 });
+    await vi.waitFor(() => expect(screen.queryByLabelText('Loading your first steps')).toBeNull());
+    expect(screen.queryByRole('heading', { name: 'First steps' })).toBeNull();
+  });
+
+  it('shows the error with a way to try again when a list cannot be read', async () => {
+    show({}, '/api/clients');
+    expect(await screen.findByRole('button', { name: /try again/i })).toBeTruthy();
+  });
+});
