@@ -62,6 +62,7 @@ export default defineConfig({
           name: 'client',
           include: ['tests/client/**/*.test.tsx'],
           environment: 'jsdom',
+          setupFiles: ['tests/support/client-setup.ts'],
         },
       },
     ],

@@ -1,11 +1,9 @@
-import { afterEach, describe, expect, it, vi } from 'vitest';
-import { cleanup, render, screen, within } from '@testing-library/react';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { MemoryRouter } from 'react-router-dom';
+import { describe, expect, it, vi } from 'vitest';
+import { screen, within } from '@testing-library/react';
+import { jsonResponse as json, renderInApp } from './render';
 import { FirstSteps } from '@/app/routes/home/first-steps';
 
 // A new coach's home: which lists the workspace already has (invented rows for the check).
-const json = (body: unknown) => new Response(JSON.stringify(body), { headers: { 'content-type': 'application/json' } });
 
 function show(have: { trays?: number; plates?: number; clients?: number; ovens?: number; weeks?: number }, fail?: string) {
   const rows = (n = 0) => Array.from({ length: n }, (_, i) => ({ id: i + 1 }));
@@ -20,24 +18,13 @@ function show(have: { trays?: number; plates?: number; clients?: number; ovens?:
     'fetch',
     vi.fn(async (url: string) => {
       const path = String(url).split('?')[0];
-      if (path === fail) return new Response(JSON.stringify({ status: 500, title: 'Internal server error', detail: 'Something went wrong' }), { status: 500, headers: { 'content-type': 'application/problem+json' } });
+      if (path === fail) return json({ status: 500, title: 'Internal server error', detail: 'Something went wrong' }, 500);
       if (!(path in byPath)) throw new Error(`unexpected ${path}`);
       return json(byPath[path]);
     }),
   );
-  render(
-    <MemoryRouter>
-      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-        <FirstSteps />
-      </QueryClientProvider>
-    </MemoryRouter>,
-  );
+  renderInApp(<FirstSteps />);
 }
-
-afterEach(() => {
-  cleanup();
-  vi.unstubAllGlobals();
-});
 
 describe('first steps', () => {
   it('an empty workspace: nothing done, the first step leads to a new base tray', async () => {

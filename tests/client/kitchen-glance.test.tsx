@@ -1,12 +1,10 @@
-import { afterEach, describe, expect, it, vi } from 'vitest';
-import { cleanup, render, screen } from '@testing-library/react';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { MemoryRouter } from 'react-router-dom';
+import { describe, expect, it, vi } from 'vitest';
+import { screen } from '@testing-library/react';
+import { jsonResponse as json, renderInApp } from './render';
 import { KitchenGlance } from '@/features/shopping/components/kitchen-glance';
 import { dayLabel } from '@/lib/dates';
 
 // The assistant's "this week": invented week and list values for the check; "today" is pinned with fake timers.
-const json = (body: unknown) => new Response(JSON.stringify(body), { headers: { 'content-type': 'application/json' } });
 const week = { id: 7, name: 'Week of Jan 5', startDate: '2026-01-05', endDate: '2026-01-11', prepDate: '2026-01-04', secondPrepDate: '2026-01-07', publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 9, version: 3 };
 const list = (over: Record<string, unknown> = {}) => ({ weekId: 7, aisles: [], itemCount: 12, checkedCount: 5, totalCostCents: 0, costComplete: true, problems: [], bought: null, ...over });
 
@@ -15,20 +13,8 @@ function show(current: unknown, shopping: unknown = list()) {
     'fetch',
     vi.fn(async (url: string) => (url === '/api/weeks/current' ? json(current) : url === '/api/weeks/7/shopping' ? json(shopping) : json(null))),
   );
-  render(
-    <MemoryRouter>
-      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-        <KitchenGlance />
-      </QueryClientProvider>
-    </MemoryRouter>,
-  );
+  renderInApp(<KitchenGlance />);
 }
-
-afterEach(() => {
-  cleanup();
-  vi.unstubAllGlobals();
-  vi.useRealTimers();
-});
 
 describe('kitchen glance', () => {
   it('names the next prep day still to come, the shopping progress, and links the week’s bake run and labels', async () => {

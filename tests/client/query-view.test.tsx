@@ -1,11 +1,9 @@
-import { afterEach, describe, expect, it } from 'vitest';
-import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { QueryClient, QueryClientProvider, useQuery } from '@tanstack/react-query';
 import { EmptyState, QueryView } from '@/components/ui/states';
 
 // A read's three states before its content, as every list page shows them through QueryView.
-afterEach(cleanup);
-
 function List({ load }: { load: () => Promise<string[]> }) {
   const q = useQuery({ queryKey: ['things'], queryFn: load });
   return (

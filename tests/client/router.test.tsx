@@ -1,14 +1,9 @@
-import { afterEach, describe, expect, it, vi } from 'vitest';
-import { cleanup, render, screen } from '@testing-library/react';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { describe, expect, it, vi } from 'vitest';
+import { render, screen } from '@testing-library/react';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { testQueryClient } from './render';
 import { RouterProvider } from 'react-router-dom';
 import { createRouter } from '@/app/router';
-
-afterEach(() => {
-  cleanup();
-  vi.unstubAllGlobals();
-  vi.restoreAllMocks();
-});
 
 describe('app router', () => {
   it('shows a loading page while the first page and the signed-in check load, without React Router’s missing-fallback warning', async () => {
@@ -16,7 +11,7 @@ describe('app router', () => {
     vi.stubGlobal('fetch', vi.fn(() => new Promise<Response>((resolve) => (answer = resolve))));
     const warn = vi.spyOn(console, 'warn').mockImplementation(() => {});
     window.history.pushState({}, '', '/');
-    const qc = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+    const qc = testQueryClient();
     render(
       <QueryClientProvider client={qc}>
         <RouterProvider router={createRouter(qc)} />

@@ -1,7 +1,6 @@
-import { afterEach, describe, expect, it, vi } from 'vitest';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { MemoryRouter } from 'react-router-dom';
+import { describe, expect, it, vi } from 'vitest';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { jsonResponse as json, renderInApp } from './render';
 import type { BoardDto } from '@shared/schemas/weeks.schema';
 import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
 
@@ -19,9 +18,6 @@ const board = (over: Partial<BoardDto['week']> = {}) =>
       { clientId: 2, date: '2026-01-05', slot: 'breakfast', assemblyId: 1, prepDate: null, storage: 'fridge', allergenOverrides: [] },
     ],
   }) as unknown as BoardDto;
-const json = (body: unknown, status = 200) =>
-  new Response(JSON.stringify(body), { status, headers: { 'content-type': status < 400 ? 'application/json' : 'application/problem+json' } });
-
 function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Response) {
   const calls: { url: string; body: Record<string, unknown> | null }[] = [];
   vi.stubGlobal(
@@ -37,21 +33,9 @@ function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Respo
       return json({ type: 'about:blank', title: 'Not found', status: 404, code: 'not_found', detail: url }, 404);
     }),
   );
-  const qc = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  render(
-    <MemoryRouter>
-      <QueryClientProvider client={qc}>
-        <SendPlansPanel board={b} />
-      </QueryClientProvider>
-    </MemoryRouter>,
-  );
+  renderInApp(<SendPlansPanel board={b} />);
   return calls;
 }
-
-afterEach(() => {
-  cleanup();
-  vi.unstubAllGlobals();
-});
 
 describe('send plans panel', () => {
   it('asks to publish first when the week was never published', () => {

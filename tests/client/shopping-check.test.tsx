@@ -1,4 +1,4 @@
-import { afterEach, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import type { ReactNode } from 'react';
 import { act, renderHook, waitFor } from '@testing-library/react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
@@ -19,7 +19,6 @@ function setup() {
 const checkedOf = (qc: QueryClient, id: number) =>
   qc.getQueryData<ShoppingListDto>(shoppingKeys.list(7))!.aisles[0].items.find((i) => i.ingredientId === id)!.check.checked;
 
-afterEach(() => vi.unstubAllGlobals());
 
 describe('check marks on the shopping list (optimistic, with rollback)', () => {
   it('shows the mark at once, keeps it when saved, and rolls back only the refused tap', async () => {

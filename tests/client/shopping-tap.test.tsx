@@ -1,14 +1,13 @@
-import { afterEach, describe, expect, it, vi } from 'vitest';
-import { act, cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
-import { QueryClient, QueryClientProvider, useQuery } from '@tanstack/react-query';
+import { describe, expect, it, vi } from 'vitest';
+import { act, fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { QueryClientProvider, useQuery } from '@tanstack/react-query';
+import { jsonResponse as json, testQueryClient } from './render';
 import type { ShoppingListDto } from '@shared/schemas/shopping.schema';
 import { shoppingItem, shoppingList } from './shopping-fixtures';
 import { shoppingKeys } from '@/features/shopping/api/shopping.keys';
 import { ShoppingList } from '@/features/shopping/components/shopping-list';
 
 const list = () => shoppingList([shoppingItem(1)]);
-const json = (body: unknown, status = 200) =>
-  new Response(JSON.stringify(body), { status, headers: { 'content-type': status < 400 ? 'application/json' : 'application/problem+json' } });
 
 /** The page as the assistant has it: the list read through the query cache, the rows from ShoppingList. */
 function Page() {
@@ -16,16 +15,11 @@ function Page() {
   return q.data ? <ShoppingList list={q.data} weekId={7} /> : null;
 }
 
-afterEach(() => {
-  cleanup();
-  vi.unstubAllGlobals();
-});
-
 describe('a tap on the shopping list', () => {
   it('shows on the box at once while a list read is still in flight, and springs back when the save is refused', async () => {
     const pending: { url: string; resolve: (r: Response) => void }[] = [];
     vi.stubGlobal('fetch', vi.fn((url: string) => new Promise<Response>((resolve) => pending.push({ url, resolve }))));
-    const qc = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+    const qc = testQueryClient();
     qc.setQueryData(shoppingKeys.list(7), list());
     render(
       <QueryClientProvider client={qc}>

@@ -1,33 +1,19 @@
-import { afterEach, describe, expect, it, vi } from 'vitest';
-import { cleanup, render, screen } from '@testing-library/react';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { MemoryRouter } from 'react-router-dom';
+import { describe, expect, it, vi } from 'vitest';
+import { screen } from '@testing-library/react';
+import { jsonResponse as json, renderInApp } from './render';
 import { WeekGlance } from '@/features/weeks/components/week-glance';
 import { dayLabel } from '@/lib/dates';
 
 // The coach's "this week at a glance": invented glance values for the check; "today" is pinned with fake timers.
-const json = (body: unknown) => new Response(JSON.stringify(body), { headers: { 'content-type': 'application/json' } });
 const week = { id: 7, name: 'Week of Jan 5', startDate: '2026-01-05', endDate: '2026-01-11', prepDate: '2026-01-04', secondPrepDate: '2026-01-07', publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 9, version: 3 };
 const glance = (over: Record<string, unknown> = {}) => ({ week, warnings: 2, blocks: 0, portionsShort: 0, nextPrepDate: '2026-01-07', ...over });
 
 function show(body: unknown) {
   const fetch = vi.fn(async (_url: string) => json(body));
   vi.stubGlobal('fetch', fetch);
-  render(
-    <MemoryRouter>
-      <QueryClientProvider client={new QueryClient({ defaultOptions: { queries: { retry: false } } })}>
-        <WeekGlance />
-      </QueryClientProvider>
-    </MemoryRouter>,
-  );
+  renderInApp(<WeekGlance />);
   return fetch;
 }
-
-afterEach(() => {
-  cleanup();
-  vi.unstubAllGlobals();
-  vi.useRealTimers();
-});
 
 describe('week glance', () => {
   it('asks for the glance of the local day and names the next prep day, the warnings and the portions short', async () => {

@@ -1,0 +1,20 @@
+import type { ReactElement } from 'react';
+import { render } from '@testing-library/react';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { MemoryRouter } from 'react-router-dom';
+
+/** A fetch answer with a JSON body (a problem when the status is 400 or more). */
+export const jsonResponse = (body: unknown, status = 200) =>
+  new Response(JSON.stringify(body), { status, headers: { 'content-type': status >= 400 ? 'application/problem+json' : 'application/json' } });
+
+/** A query client for one test: no retries, so an error shows at once. */
+export const testQueryClient = () => new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+
+/** Renders a page part as the app does: inside a router and a query client. */
+export function renderInApp(ui: ReactElement, qc: QueryClient = testQueryClient()) {
+  return render(
+    <MemoryRouter>
+      <QueryClientProvider client={qc}>{ui}</QueryClientProvider>
+    </MemoryRouter>,
+  );
+}
