@@ -5,6 +5,7 @@ import { env } from './config/env.js';
 import { createOrm } from './db/orm.js';
 import { sessionPoolConfig } from './db/connections.js';
 import { closeBakeRunPool } from './lib/bake-run-pool.js';
+import { gracefulClose } from './lib/graceful-close.js';
 import { createApp } from './app.js';
 import { schemaGate } from './db/schema-gate.js';
 import { createMailRuntime } from './modules/mail/mail-runtime.js';
@@ -45,7 +46,9 @@ async function shutdown(signal: string) {
   if (stopping) return;
   stopping = true;
   log.info(`${signal}: closing`);
-  server.close();
+  // Requests in flight finish (up to 10 s) before the pools they use are closed.
+  const { cut } = await gracefulClose(server, 10_000);
+  if (cut) log.warn('requests still running after 10 s were cut');
   if (mailTimer) clearTimeout(mailTimer);
   await mail.stop().catch((err) => log.warn({ err }, 'mail stop failed'));
   await Promise.allSettled([orm.close(true), pool.end(), closeBakeRunPool()]);
