@@ -83,6 +83,18 @@ export const UNIT_OPTIONS: readonly UnitOption[] = [
 
 export const UNIT_CODES: readonly StandardUnit[] = UNIT_OPTIONS.map((u) => u.code);
 
+const SYMBOLS: ReadonlyMap<string, string> = new Map(UNIT_OPTIONS.map((u) => [u.code, u.symbol]));
+
+/**
+ * An amount as typed with its unit, for people to read before an ingredient's name: standard units by their symbol
+ * ("1 fl oz", "250 mL", "1 L"), `each` as a count ("2 ×"), a piece name as stored ("1/4 avocado", "2 slices").
+ */
+export function amountWithUnit(amountText: string, unit: UnitCode): string {
+  const amount = amountText.trim();
+  if (unit === 'each') return `${amount} ×`;
+  return `${amount} ${SYMBOLS.get(unit) ?? unit}`;
+}
+
 export function isMassUnit(code: string): code is MassUnit {
   return Object.prototype.hasOwnProperty.call(GRAMS_PER_UNIT, code);
 }

@@ -3,7 +3,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { energyShares, toNutrientNumbers } from '@shared/domain/nutrition.js';
 import { panOf, planScale, portionAreaOf, portionSizeText, portionsOf, SCALE_ROUNDING_NOTE, type ScaleRequest } from '@shared/domain/tray-plan.js';
 import { scaleLines } from '@shared/domain/scaling.js';
-import { formatKitchenAmount, formatPieces, parseAmount, unitKind, UnitConversionError } from '@shared/domain/units.js';
+import { formatKitchenAmount, formatPieces, parseAmount, unitKind, UnitConversionError, amountWithUnit } from '@shared/domain/units.js';
 import type {
   PortionCardDto,
   ScaleResultDto,
@@ -354,7 +354,7 @@ export async function scaleTray(em: EntityManager, actor: Actor, id: number, inp
       return {
         ingredientId: line.ingredient.id,
         ingredientName: ing?.name ?? 'Unknown ingredient',
-        originalText: `${line.amountText} ${line.unit}`,
+        originalText: amountWithUnit(line.amountText, line.unit),
         unit: line.unit,
         amount: amount.toDecimalPlaces(4, Decimal.ROUND_HALF_UP).toNumber(),
         grams: grams ? grams.toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber() : null,

@@ -5,6 +5,7 @@ import convert from 'convert-units';
 import { describe, expect, it } from 'vitest';
 import {
   AmountParseError,
+  amountWithUnit,
   GRAMS_PER_UNIT,
   MASS_UNITS,
   MILLILITERS_PER_UNIT,
@@ -272,6 +273,30 @@ describe('parseAmount', () => {
         return parseAmount(text).value.eq(expected);
       }),
     );
+  });
+});
+
+describe('an amount with its unit, as people read it', () => {
+  it('writes standard units by their symbols, not their codes', () => {
+    // Abbreviations as NIST Handbook 44, Appendix C writes them ("fl oz", "tsp", "tbsp", "oz", "lb"); mL and L are
+    // the SI symbols for the milliliter and liter (NIST SP 811 allows the capital L).
+    expect(amountWithUnit('1', 'floz')).toBe('1 fl oz');
+    expect(amountWithUnit('250', 'ml')).toBe('250 mL');
+    expect(amountWithUnit('1', 'l')).toBe('1 L');
+    expect(amountWithUnit('1 1/2', 'tbsp')).toBe('1 1/2 tbsp');
+    expect(amountWithUnit('1/2', 'cup')).toBe('1/2 cup');
+    expect(amountWithUnit('3', 'oz')).toBe('3 oz');
+    expect(amountWithUnit(' 100 ', 'g')).toBe('100 g');
+  });
+
+  it('counts whole pieces with ×, and keeps a piece name as stored', () => {
+    expect(amountWithUnit('2', 'each')).toBe('2 ×');
+    expect(amountWithUnit('1/4', 'avocado')).toBe('1/4 avocado');
+    expect(amountWithUnit('1-2', 'slices')).toBe('1-2 slices');
+  });
+
+  it('has a symbol for every standard unit', () => {
+    for (const u of UNIT_OPTIONS) expect(amountWithUnit('1', u.code)).not.toMatch(/floz|\bml\b|\bl$/);
   });
 });
 
