@@ -48,6 +48,8 @@ export function schemaGate(orm: Orm, opts: { recheckMs?: number; shipped?: reado
   const shipped = opts.shipped ?? shippedMigrations();
   let current = false;
   let behind: { pending: string[]; at: number } | null = null;
+  /** When the log last could not be read (the database away): requests go on without asking again until recheckMs. */
+  let unreadAt: number | null = null;
   let reading: Promise<string[] | null> | null = null;
 
   async function readPending(): Promise<string[] | null> {
@@ -58,8 +60,13 @@ export function schemaGate(orm: Orm, opts: { recheckMs?: number; shipped?: reado
     } catch (err) {
       // No migrations log at all: an empty database, nothing applied.
       if ((err as { code?: string }).code === '42P01') applied = new Set();
-      else return null; // the database is away: unknown (health says so; the next request asks again)
+      else {
+        // The database is away: unknown. Health says so; requests meet the database's own error, not a second wait.
+        unreadAt = Date.now();
+        return null;
+      }
     }
+    unreadAt = null;
     const pending = shipped.filter((m) => !applied.has(m));
     if (pending.length === 0) {
       current = true;
@@ -73,6 +80,7 @@ export function schemaGate(orm: Orm, opts: { recheckMs?: number; shipped?: reado
   async function pending(): Promise<string[] | null> {
     if (current) return [];
     if (behind && Date.now() - behind.at < recheckMs) return behind.pending;
+    if (unreadAt !== null && Date.now() - unreadAt < recheckMs) return null;
     reading ??= readPending().finally(() => (reading = null));
     return reading;
   }
