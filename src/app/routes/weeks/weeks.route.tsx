@@ -24,6 +24,8 @@ export function Component() {
   const navigate = useNavigate();
   const start = nextMonday(localToday());
   const [form, setForm] = useState({ name: '', startDate: start, prepDate: addDays(start, -1), secondPrepDate: '' });
+  // The prep day follows the first day of the board (the day before) until the coach picks one.
+  const [prepPicked, setPrepPicked] = useState(false);
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [formError, setFormError] = useState<string | null>(null);
   return (
@@ -52,8 +54,17 @@ export function Component() {
             }}
           >
             <TextField label="Name (optional)" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} />
-            <TextField label="First day of the board" type="date" value={form.startDate} error={errors.startDate?.[0]} onChange={(e) => setForm({ ...form, startDate: e.target.value })} />
-            <TextField label="Prep day" type="date" value={form.prepDate} error={errors.prepDate?.[0]} onChange={(e) => setForm({ ...form, prepDate: e.target.value })} />
+            <TextField label="First day of the board" type="date" value={form.startDate} error={errors.startDate?.[0]} onChange={(e) => {
+                const startDate = e.target.value;
+                const follows = !prepPicked && /^\d{4}-\d{2}-\d{2}$/.test(startDate);
+                setForm({ ...form, startDate, prepDate: follows ? addDays(startDate, -1) : form.prepDate });
+              }}
+            />
+            <TextField label="Prep day" type="date" value={form.prepDate} error={errors.prepDate?.[0]} onChange={(e) => {
+                setPrepPicked(true);
+                setForm({ ...form, prepDate: e.target.value });
+              }}
+            />
             <TextField label="Second prep day" type="date" value={form.secondPrepDate} error={errors.secondPrepDate?.[0]} onChange={(e) => setForm({ ...form, secondPrepDate: e.target.value })} />
             <Button type="submit" busy={create.isPending}>
               Create
