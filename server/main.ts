@@ -1,4 +1,3 @@
-import http from 'node:http';
 import pg from 'pg';
 import pino from 'pino';
 import { env } from './config/env.js';
@@ -6,6 +5,7 @@ import { createOrm } from './db/orm.js';
 import { sessionPoolConfig } from './db/connections.js';
 import { closeBakeRunPool } from './lib/bake-run-pool.js';
 import { gracefulClose } from './lib/graceful-close.js';
+import { createHttpServer } from './lib/http-server.js';
 import { createApp } from './app.js';
 import { schemaGate } from './db/schema-gate.js';
 import { createMailRuntime } from './modules/mail/mail-runtime.js';
@@ -36,7 +36,7 @@ schema.pending().then(
   () => undefined,
 );
 const app = createApp({ orm, pool, env, mail, logger: log, schema });
-const server = http.createServer(app);
+const server = createHttpServer(app);
 server.listen(env.PORT, env.HOST, () => {
   log.info(`Trayline listening on http://${env.HOST}:${env.PORT}`);
 });
