@@ -9,3 +9,8 @@ const long = new Intl.DateTimeFormat(undefined, { weekday: 'long', day: 'numeric
 export function dayLabel(iso: string, longWeekday = false): string {
   return (longWeekday ? long : short).format(new Date(`${iso}T12:00:00Z`));
 }
+
+/** "Next prep day: Wednesday, Dec 9", with "(today)" when it is the reader's today. */
+export function nextPrepDayTitle(date: string, today: string): string {
+  return `Next prep day: ${dayLabel(date, true)}${date === today ? ' (today)' : ''}`;
+}

@@ -5,7 +5,7 @@ import { prepDatesOf } from '@shared/domain/week-board';
 import { Card, EmptyState, Notice, Progress, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { TileLink } from '@/components/ui/tile-link';
-import { dayLabel } from '@/lib/dates';
+import { dayLabel, nextPrepDayTitle } from '@/lib/dates';
 import { localToday } from '@/features/weeks/api/weeks.queries';
 import { currentWeekQuery, shoppingListQuery } from '../api/shopping.queries';
 
@@ -48,7 +48,7 @@ export function KitchenGlance() {
               <span className="text-ink-soft">{week.name}</span>
             </div>
             <div className="grid gap-3 sm:grid-cols-2">
-              <Notice tone="cold" title={ahead.length ? `Next prep day: ${dayLabel(ahead[0], true)}${ahead[0] === today ? ' (today)' : ''}` : 'No prep day ahead this week'}>
+              <Notice tone="cold" title={ahead.length ? nextPrepDayTitle(ahead[0], today) : 'No prep day ahead this week'}>
                 {ahead.length > 1 && `Then ${dayLabel(ahead[1], true)}.`}
               </Notice>
               <div className="flex flex-col gap-2 rounded-lg border border-line-strong bg-paper-card p-3">

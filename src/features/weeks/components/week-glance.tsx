@@ -4,7 +4,7 @@ import { glanceQuery, localToday } from '../api/weeks.queries';
 import { Card, ErrorState, Notice, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { agrees, counted } from '@/lib/words';
-import { dayLabel } from '@/lib/dates';
+import { nextPrepDayTitle } from '@/lib/dates';
 
 /** The coach's "this week at a glance": warnings, portions short, the next prep day. */
 export function WeekGlance() {
@@ -27,7 +27,7 @@ export function WeekGlance() {
           {g.blocks ? `${g.blocks} ${agrees(g.blocks, 'blocks', 'block')} publishing` : 'None blocks publishing'}
         </Notice>
         <Notice tone={g.portionsShort ? 'warn' : 'info'} title={g.portionsShort ? `${counted(g.portionsShort, 'portion')} short` : 'No portion short'} />
-        <Notice tone="cold" title={g.nextPrepDate ? `Next prep day: ${dayLabel(g.nextPrepDate, true)}${g.nextPrepDate === today ? ' (today)' : ''}` : 'No prep day ahead'} />
+        <Notice tone="cold" title={g.nextPrepDate ? nextPrepDayTitle(g.nextPrepDate, today) : 'No prep day ahead'} />
       </div>
     </Card>
   );
