@@ -163,12 +163,22 @@ export interface BoardDto {
   cautions: readonly Caution[];
 }
 
+/** How far a workspace is set up: how many active base trays, plates, clients, ovens and prep weeks it has. */
+export interface SetupCountsDto {
+  trays: number;
+  plates: number;
+  clients: number;
+  ovens: number;
+  weeks: number;
+}
+
 export interface GlanceDto {
   week: WeekSummaryDto | null;
   warnings: number;
   blocks: number;
   portionsShort: number;
   nextPrepDate: IsoDate | null;
+  setup: SetupCountsDto;
 }
 
 /** What a client sees: their published plates. */

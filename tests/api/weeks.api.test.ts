@@ -399,5 +399,12 @@ describe('publishing and the client view', () => {
     const glance = await coach.agent.get('/api/weeks/glance?today=2026-01-03').expect(200);
     expect(glance.body).toMatchObject({ week: { id: week.id }, nextPrepDate: '2026-01-04', portionsShort: 7 });
     expect(glance.body.blocks).toBe(3);
+    // The glance's week is the board's own summary.
+    expect(glance.body.week).toEqual((await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body.week);
+    // How far the workspace is set up (the home's first steps): one tray, plate, client and week, no oven; the other
+    // workspace has none of them.
+    expect(glance.body.setup).toEqual({ trays: 1, plates: 1, clients: 1, ovens: 0, weeks: 1 });
+    const empty = await other.agent.get('/api/weeks/glance?today=2026-01-03').expect(200);
+    expect(empty.body).toEqual({ week: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup: { trays: 0, plates: 0, clients: 0, ovens: 0, weeks: 0 } });
   });
 });

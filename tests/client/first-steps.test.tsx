@@ -3,24 +3,17 @@ import { screen, within } from '@testing-library/react';
 import { jsonResponse as json, renderInApp } from './render';
 import { FirstSteps } from '@/app/routes/home/first-steps';
 
-// A new coach's home: which lists the workspace already has (invented rows for the check).
+// A new coach's home: how much the workspace already has, as the home glance counts it (invented counts).
 
-function show(have: { trays?: number; plates?: number; clients?: number; ovens?: number; weeks?: number }, fail?: string) {
-  const rows = (n = 0) => Array.from({ length: n }, (_, i) => ({ id: i + 1 }));
-  const byPath: Record<string, unknown> = {
-    '/api/trays': rows(have.trays),
-    '/api/assemblies': rows(have.plates),
-    '/api/clients': rows(have.clients),
-    '/api/ovens': rows(have.ovens),
-    '/api/weeks': rows(have.weeks),
-  };
+function show(have: { trays?: number; plates?: number; clients?: number; ovens?: number; weeks?: number }, fail = false) {
+  const setup = { trays: 0, plates: 0, clients: 0, ovens: 0, weeks: 0, ...have };
   vi.stubGlobal(
     'fetch',
     vi.fn(async (url: string) => {
       const path = String(url).split('?')[0];
-      if (path === fail) return json({ status: 500, title: 'Internal server error', detail: 'Something went wrong' }, 500);
-      if (!(path in byPath)) throw new Error(`unexpected ${path}`);
-      return json(byPath[path]);
+      if (path !== '/api/weeks/glance') throw new Error(`unexpected ${path}`);
+      if (fail) return json({ status: 500, title: 'Internal server error', detail: 'Something went wrong' }, 500);
+      return json({ week: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup });
     }),
   );
   renderInApp(<FirstSteps />);
@@ -63,7 +56,7 @@ describe('first steps', () => {
   });
 
   it('shows the error with a way to try again when a list cannot be read', async () => {
-    show({}, '/api/clients');
+    show({}, true);
     expect(await screen.findByRole('button', { name: /try again/i })).toBeTruthy();
   });
 });

@@ -3,7 +3,8 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
 import { addDays, compareIsoDates, daysBetween, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, coveringBatches } from '@shared/domain/week-board.js';
-import type { GlanceDto, WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
+import type { GlanceDto, SetupCountsDto, WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
+import { preparedRows } from '../../db/prepared.js';
 import type { BoardAnswer } from '@shared/schemas/board-answer.js';
 import type { z } from 'zod';
 import type {
@@ -382,10 +383,25 @@ export function pickWeek<T extends { startDate: IsoDate }>(weeks: readonly T[], 
   return current ?? sorted.find((w) => compareIsoDates(w.startDate, today) > 0) ?? sorted[sorted.length - 1] ?? null;
 }
 
+/** How many active base trays, plates, clients, ovens and prep weeks the workspace has (one statement). */
+async function setupCounts(em: EntityManager, workspaceId: number): Promise<SetupCountsDto> {
+  const [row] = await preparedRows<SetupCountsDto>(
+    em,
+    'trayline_setup_counts',
+    `select (select count(*) from tray where workspace_id = $1 and not archived)::int as trays,
+            (select count(*) from assembly where workspace_id = $1)::int as plates,
+            (select count(*) from client where workspace_id = $1)::int as clients,
+            (select count(*) from oven where workspace_id = $1)::int as ovens,
+            (select count(*) from week where workspace_id = $1)::int as weeks`,
+    [workspaceId],
+  );
+  return row;
+}
+
 export async function glance(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<GlanceDto> {
-  const weeks = await em.find(Week, { workspace: actor.workspaceId });
+  const [weeks, setup] = await Promise.all([em.find(Week, { workspace: actor.workspaceId }), setupCounts(em, actor.workspaceId)]);
   const week = pickWeek(weeks, today);
-  if (!week) return { week: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null };
+  if (!week) return { week: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup };
   const data = await loadBoardData(em, actor, week);
   const result = computeBoard(boardInput(data));
   const nextPrepDate =
@@ -394,11 +410,12 @@ export async function glance(em: EntityManager, actor: Actor, today: IsoDate = t
       .filter((d) => compareIsoDates(d, today) >= 0)
       .sort(compareIsoDates)[0] ?? null;
   return {
-    week: presentBoard(data, result).week,
+    week: presentWeekSummary(data.week, data.cells.length, data.publishedAt),
     warnings: result.warnings.filter((w) => w.severity === 'warn').length,
     blocks: result.warnings.filter((w) => w.severity === 'block').length,
     portionsShort: result.inventory.reduce((s, t) => s + t.short, 0),
     nextPrepDate,
+    setup,
   };
 }
 

@@ -1,14 +1,12 @@
 import { Link } from 'react-router-dom';
-import { useQueries } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
+import type { SetupCountsDto } from '@shared/schemas/weeks.schema';
 import { Card, ErrorState, Progress, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
-import { traysQuery } from '@/features/trays/api/trays.queries';
-import { assembliesQuery } from '@/features/assemblies/api/assemblies.queries';
-import { clientsQuery } from '@/features/clients/api/clients.queries';
-import { ovensQuery } from '@/features/bake-runs/api/bake-runs.queries';
-import { weeksQuery } from '@/features/weeks/api/weeks.queries';
+import { glanceQuery, localToday } from '@/features/weeks/api/weeks.queries';
 
 interface Step {
+  count: keyof SetupCountsDto;
   title: string;
   why: string;
   to: string;
@@ -17,23 +15,23 @@ interface Step {
 
 /** The order a new workspace is set up in: each step needs the one before it, except the ovens. */
 const STEPS: Step[] = [
-  { title: 'Write a base tray', why: 'Its ingredients, pan and cut plan give every portion its numbers.', to: paths.trayNew, action: 'New base tray' },
-  { title: 'Make a plate', why: 'Portions of base trays plus add-ons: what a client eats at one meal.', to: paths.plates, action: 'Plates' },
-  { title: 'Add your clients', why: 'Their targets, allergens and dislikes are what each day is checked against.', to: paths.clients, action: 'Clients' },
-  { title: 'Describe your ovens', why: 'The bake run fits the trays into them.', to: paths.bakeRules, action: 'Bake rules & ovens' },
-  { title: 'Plan a week', why: 'Place plates on the week board, cover the portions, publish it to your clients.', to: paths.weeks, action: 'Week board' },
+  { count: 'trays', title: 'Write a base tray', why: 'Its ingredients, pan and cut plan give every portion its numbers.', to: paths.trayNew, action: 'New base tray' },
+  { count: 'plates', title: 'Make a plate', why: 'Portions of base trays plus add-ons: what a client eats at one meal.', to: paths.plates, action: 'Plates' },
+  { count: 'clients', title: 'Add your clients', why: 'Their targets, allergens and dislikes are what each day is checked against.', to: paths.clients, action: 'Clients' },
+  { count: 'ovens', title: 'Describe your ovens', why: 'The bake run fits the trays into them.', to: paths.bakeRules, action: 'Bake rules & ovens' },
+  { count: 'weeks', title: 'Plan a week', why: 'Place plates on the week board, cover the portions, publish it to your clients.', to: paths.weeks, action: 'Week board' },
 ];
 
 /**
- * The coach's first steps in a new workspace, each ticked off once the workspace has one (read from the same
- * lists the pages use). Gone once every step is done.
+ * The coach's first steps in a new workspace, each ticked off once the workspace has one (the counts come with the
+ * home glance: one read shared with "This week at a glance"). Gone once every step is done.
  */
 export function FirstSteps() {
-  const results = useQueries({ queries: [traysQuery({}), assembliesQuery(), clientsQuery(), ovensQuery(), weeksQuery()] });
-  if (results.some((r) => r.isPending)) return <Skeleton className="h-40 w-full" label="Loading your first steps" />;
-  const failed = results.find((r) => r.isError);
-  if (failed) return <ErrorState error={failed.error} retry={() => results.forEach((r) => void r.refetch())} />;
-  const done = results.map((r) => ((r.data as unknown[] | undefined)?.length ?? 0) > 0);
+  const q = useQuery(glanceQuery(localToday()));
+  if (q.isPending) return <Skeleton className="h-40 w-full" label="Loading your first steps" />;
+  if (q.isError) return <ErrorState error={q.error} retry={() => void q.refetch()} />;
+  const setup = q.data.setup;
+  const done = STEPS.map((s) => setup[s.count] > 0);
   const count = done.filter(Boolean).length;
   if (count === STEPS.length) return null;
   const next = done.indexOf(false);
