@@ -7,6 +7,9 @@ import { CONNECT_TIMEOUT_MS, IDLE_TIMEOUT_MS } from './connections.js';
 
 const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 
+/** Where the committed migrations are (the migrator's folder; the schema gate lists the same files). */
+export const MIGRATIONS_PATH = here('./migrations');
+
 export function ormConfig(clientUrl: string, opts: { debug?: boolean } = {}) {
   return defineConfig({
     clientUrl,
@@ -18,7 +21,7 @@ export function ormConfig(clientUrl: string, opts: { debug?: boolean } = {}) {
     pool: { min: 0, max: 10, acquireTimeoutMillis: CONNECT_TIMEOUT_MS + 1000, idleTimeoutMillis: IDLE_TIMEOUT_MS },
     driverOptions: { connection: { connectionTimeoutMillis: CONNECT_TIMEOUT_MS } },
     migrations: {
-      path: here('./migrations'),
+      path: MIGRATIONS_PATH,
       glob: '!(*.d).{js,ts}',
       emit: 'ts',
       transactional: true,

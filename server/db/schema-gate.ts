@@ -1,14 +1,12 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import type { RequestHandler } from 'express';
 import type { Orm } from './orm.js';
 import { HttpError } from '../http/errors.js';
-
-const MIGRATIONS_DIR = fileURLToPath(new URL('./migrations', import.meta.url));
+import { MIGRATIONS_PATH } from './mikro-orm.config.js';
 
 /** The migrations this version of the code ships (file names without extension, as the migrations log records them). */
-export function shippedMigrations(dir = MIGRATIONS_DIR): string[] {
+export function shippedMigrations(dir = MIGRATIONS_PATH): string[] {
   return fs
     .readdirSync(dir)
     .filter((f) => /\.(ts|js)$/.test(f) && !f.endsWith('.d.ts'))
