@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { addDays } from '@shared/domain/iso-date';
+import { addDays, isIsoDate } from '@shared/domain/iso-date';
 import { weeksQuery, localToday } from '@/features/weeks/api/weeks.queries';
 import { useCreateWeek } from '@/features/weeks/api/use-week-mutations';
 import { useMe } from '@/features/auth/hooks/use-me';
@@ -56,7 +56,7 @@ export function Component() {
             <TextField label="Name (optional)" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} />
             <TextField label="First day of the board" type="date" value={form.startDate} error={errors.startDate?.[0]} onChange={(e) => {
                 const startDate = e.target.value;
-                const follows = !prepPicked && /^\d{4}-\d{2}-\d{2}$/.test(startDate);
+                const follows = !prepPicked && isIsoDate(startDate);
                 setForm({ ...form, startDate, prepDate: follows ? addDays(startDate, -1) : form.prepDate });
               }}
             />
