@@ -243,11 +243,15 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
     }
     return null;
   };
+  // A move reported after the drop (the last arrow key's, late) must not bring the "Over …" line back.
+  const dragging = useRef(false);
   const onDragMove = (e: DragMoveEvent) => {
+    if (!dragging.current) return;
     const id = cellUnder(e);
     setOver((prev) => (prev === id ? prev : id));
   };
   const onDragEnd = (e: DragEndEvent) => {
+    dragging.current = false;
     const id = cellUnder(e);
     setOver(null);
     if (!id) return;
@@ -283,7 +287,17 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const selEat = selCell && selPlate ? { portions: cellEatBy(selCell, selPlate.trays, board.prepDates) } : undefined;
 
   return (
-    <DndContext sensors={sensors} accessibility={{ announcements }} onDragMove={onDragMove} onDragEnd={onDragEnd} onDragCancel={() => setOver(null)}>
+    <DndContext
+      sensors={sensors}
+      accessibility={{ announcements }}
+      onDragStart={() => (dragging.current = true)}
+      onDragMove={onDragMove}
+      onDragEnd={onDragEnd}
+      onDragCancel={() => {
+        dragging.current = false;
+        setOver(null);
+      }}
+    >
       <p className="sr-only" aria-live="polite">
         {overWhere ? `Over ${overWhere}` : ''}
       </p>
