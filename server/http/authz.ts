@@ -11,6 +11,11 @@ export interface Actor {
   userId: number;
   email: string;
   name: string;
+  /**
+   * The person's measure preference, read with them: server-written amounts (shopping list, pantry, PDFs) follow it.
+   * Absent where an actor is made without it (US customary then).
+   */
+  unitSystem?: 'us' | 'metric';
   role: Role;
   workspaceId: number;
   /** For a client member: their client profile id (their own plan data only). */
@@ -21,6 +26,9 @@ export interface Actor {
    */
   nutritionVersion?: string | null;
 }
+
+/** The measure system the actor's amounts are written in (US customary unless they chose metric). */
+export const measureOf = (actor: Pick<Actor, 'unitSystem'>): 'us' | 'metric' => actor.unitSystem ?? 'us';
 
 export type Access = 'public' | 'signed-in' | readonly Role[];
 export const ACCESS = Symbol('trayline.access');

@@ -556,11 +556,13 @@ function metricText(v: Decimal, small: 'g' | 'ml', smallSym: string, big: 'kg' |
 /** A count of pieces to the nearest ¼ ("3 large", "1 ½ slice"); below ⅛ the text is "< ¼ <piece>". */
 export function formatPieces(count: Decimal.Value, piece: string): KitchenAmount {
   const c = new Decimal(count);
-  if (c.lte(0)) return { text: `0 ${piece}`, value: 0, unit: piece, exact: c.toNumber() };
-  if (c.lt(0.125)) return { text: `< ¼ ${piece}`, value: 0.25, unit: piece, exact: c.toNumber() };
+  // The generic piece is a bare count ("12"), not "12 each"; a named piece follows the number ("2 ½ large").
+  const withPiece = (n: string) => (piece === 'each' ? n : `${n} ${piece}`);
+  if (c.lte(0)) return { text: withPiece('0'), value: 0, unit: piece, exact: c.toNumber() };
+  if (c.lt(0.125)) return { text: withPiece('< ¼'), value: 0.25, unit: piece, exact: c.toNumber() };
   const { whole, part } = snapToGrid(c, PIECE_PARTS);
   const shown = whole.plus(new Decimal(part[0]).div(part[1]));
-  return { text: `${gridText(whole, part)} ${piece}`, value: shown.toNumber(), unit: piece, exact: c.toNumber() };
+  return { text: withPiece(gridText(whole, part)), value: shown.toNumber(), unit: piece, exact: c.toNumber() };
 }
 
 export type KitchenMeasure = 'auto' | 'mass' | 'volume' | { piece: string };

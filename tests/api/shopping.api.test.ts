@@ -246,6 +246,47 @@ describe('the prep week\'s shopping list', () => {
     expect(text).toContain('3 × dozen large eggs');
   });
 
+  it("writes amounts in the reader's measure system: the list, the pantry and the PDF", async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const w = await shoppingWeek(coach);
+    // Cheese: 3 trays × 10 oz + the plate's 1 oz add-on × 2 days × a household of 2 = 34 oz = 2 lb 2 oz
+    // (16 oz to the pound: NIST Handbook 44 App. C), 963.9 g (js-quantities, a second reference).
+    const grams = Qty(34, 'oz').to('g').scalar;
+    expect(grams).toBeCloseTo(963.88, 2);
+    await assistant.agent.post('/api/pantry').send({ ingredientId: w.cheese.id, amount: '100', unit: 'g' }).expect(201);
+    const pdfText = async () => {
+      const res = await assistant.agent.get(`/api/weeks/${w.weekId}/shopping.pdf`).buffer(true).parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      }).expect(200);
+      const parser = new PDFParse({ data: new Uint8Array(res.body as Buffer) });
+      const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+      await parser.destroy();
+      return text;
+    };
+
+    // US customary (the default): pounds and ounces, on screen, in the pantry and on paper.
+    const us = itemOf((await assistant.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(200)).body, w.cheese.id);
+    expect(us.neededText).toBe('2 lb 2 oz');
+    expect((await assistant.agent.get('/api/pantry').expect(200)).body.items[0].display).toBe('3 ½ oz'); // 100 g = 3.53 oz
+    expect(await pdfText()).toContain('2 lb 2 oz');
+
+    // The assistant switches to metric: the same list in grams and kilograms; the coach's stays in US units.
+    await assistant.agent.patch('/api/auth/me').send({ unitSystem: 'metric' }).expect(200);
+    const metric = itemOf((await assistant.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(200)).body, w.cheese.id);
+    expect(metric.neededText).toBe('964 g');
+    expect(metric.needed).toBeCloseTo(grams, 2);
+    expect((await assistant.agent.get('/api/pantry').expect(200)).body.items[0].display).toBe('100 g');
+    const text = await pdfText();
+    expect(text).toContain('964 g');
+    expect(text).not.toContain('2 lb 2 oz');
+    // Eggs are counted in their piece, whatever the system.
+    expect(text).toContain('36 large');
+    expect(itemOf((await coach.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(200)).body, w.cheese.id).neededText).toBe('2 lb 2 oz');
+  });
+
   it('scopes weeks to the workspace (404), refuses clients (403), and finds this week for the assistant', async () => {
     const coach = await coachWorkspace(app);
     const other = await coachWorkspace(app);

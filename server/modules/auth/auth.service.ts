@@ -29,7 +29,7 @@ const PASSWORD_RESET_MINUTES = 60;
  * session store reads it in the same query as the session (session-store.ts).
  */
 export const ACTOR_SQL = (userIdExpr: string) =>
-  `select u.id as user_id, u.email, u.name, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version
+  `select u.id as user_id, u.email, u.name, u.unit_system, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version
      from membership m join app_user u on u.id = m.user_id left join nutrition_stamp ns on ns.workspace_id = m.workspace_id
     where m.user_id = ${userIdExpr} order by m.id asc limit 1`;
 
@@ -37,6 +37,7 @@ export interface ActorRow {
   user_id: number;
   email: string;
   name: string;
+  unit_system: string;
   role: string;
   workspace_id: number;
   client_id: number | null;
@@ -48,6 +49,7 @@ export function actorFromRow(m: ActorRow): Actor {
     userId: Number(m.user_id),
     email: m.email,
     name: m.name,
+    unitSystem: m.unit_system === 'metric' ? 'metric' : 'us',
     role: m.role as Role,
     workspaceId: Number(m.workspace_id),
     clientId: m.client_id == null ? null : Number(m.client_id),

@@ -9,10 +9,17 @@ export interface ShoppingListPdfMeta {
   /** Currency symbol or code shown before prices. */
   currency?: string;
   filename?: string;
+  /**
+   * An amount of an item (in its base unit) as written for the reader: kitchen amounts in their measure system.
+   * Without it, grams or the bare piece count.
+   */
+  amountText?: (item: ShoppingItem, value: ShoppingItem['needed']) => string;
 }
 
-function amount(item: ShoppingItem, value: ShoppingItem['needed']): string {
-  return item.base.kind === 'mass' ? `${fixed(value, 0)} g` : `${fixed(value, 2).replace(/\.?0+$/, '')} ${item.base.unit}`;
+function plainAmount(item: ShoppingItem, value: ShoppingItem['needed']): string {
+  const n = fixed(value, 2).replace(/\.?0+$/, '');
+  if (item.base.kind === 'mass') return `${fixed(value, 0)} g`;
+  return item.base.unit === 'each' ? n : `${n} ${item.base.unit}`;
 }
 
 const COLUMNS: Column[] = [
@@ -29,6 +36,7 @@ const COLUMNS: Column[] = [
 export async function renderShoppingListPdf(list: ShoppingList, meta: ShoppingListPdfMeta): Promise<{ filename: string; buffer: Buffer }> {
   const doc = createDoc({ businessName: meta.businessName, title: meta.title, subject: 'Shopping list' });
   const cur = meta.currency ?? '$';
+  const amount = meta.amountText ?? plainAmount;
   heading(doc, meta.title, 20);
   const toBuy = list.items.filter((i) => i.toBuy.gt(0)).length;
   paragraph(doc, `${toBuy} of ${list.items.length} items to buy; the pantry covers the rest. Packages are rounded up.`);
@@ -39,7 +47,7 @@ export async function renderShoppingListPdf(list: ShoppingList, meta: ShoppingLi
       '[ ]',
       item.name,
       amount(item, item.needed),
-      amount(item, item.fromPantry),
+      item.fromPantry.gt(0) ? amount(item, item.fromPantry) : '',
       amount(item, item.toBuy),
       item.purchase && item.toBuy.gt(0) ? `${item.purchase.packages} × ${item.purchase.label}` : item.toBuy.gt(0) ? 'as needed' : 'nothing',
       item.cost ? `${cur}${fixed(item.cost, 2)}` : '',

@@ -1,14 +1,14 @@
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { toBaseAmount, baseUnitOf, type PantryStock } from '@shared/domain/shopping.js';
-import { normalizeUnit, UnitConversionError, UnknownUnitError } from '@shared/domain/units.js';
+import { normalizeUnit, UnitConversionError, UnknownUnitError, type MeasureSystem } from '@shared/domain/units.js';
 import type {
   PantryCreateValues,
   PantryItemDto,
   PantryListDto,
   PantryUpdateValues,
 } from '@shared/schemas/shopping.schema.js';
-import type { Actor } from '../../http/authz.js';
+import { measureOf, type Actor } from '../../http/authz.js';
 import { Conflict, NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { PantryItem, type IPantryItem } from './pantry.entity.js';
 import { baseAmountText, loadShoppingIngredients, type ShoppingRow } from './shopping-ingredient.js';
@@ -18,7 +18,7 @@ export function pantryAmount(value: Decimal.Value): Decimal {
   return Decimal.max(new Decimal(value), 0).toDecimalPlaces(4, Decimal.ROUND_HALF_UP);
 }
 
-function presentPantryItem(row: IPantryItem, ing: ShoppingRow | undefined): PantryItemDto {
+function presentPantryItem(row: IPantryItem, ing: ShoppingRow | undefined, system: MeasureSystem): PantryItemDto {
   return {
     id: row.id,
     ingredientId: row.ingredient.id,
@@ -26,7 +26,7 @@ function presentPantryItem(row: IPantryItem, ing: ShoppingRow | undefined): Pant
     aisle: ing?.aisle ?? null,
     amount: Number(row.amount),
     unit: row.unit,
-    display: ing ? baseAmountText(row.amount, ing) : `${Number(row.amount)} ${row.unit}`,
+    display: ing ? baseAmountText(row.amount, ing, system) : `${Number(row.amount)} ${row.unit}`,
     version: row.version,
     updatedAt: row.updatedAt.toISOString(),
   };
@@ -60,7 +60,7 @@ async function findItem(em: EntityManager, actor: Actor, id: number): Promise<IP
 export async function listPantry(em: EntityManager, actor: Actor): Promise<PantryListDto> {
   const rows = await em.find(PantryItem, { workspace: actor.workspaceId }, { orderBy: { id: 'asc' } });
   const ings = await loadShoppingIngredients(em, actor, rows.map((r) => r.ingredient.id));
-  const items = rows.map((r) => presentPantryItem(r, ings.get(r.ingredient.id)));
+  const items = rows.map((r) => presentPantryItem(r, ings.get(r.ingredient.id), measureOf(actor)));
   items.sort((a, b) => a.ingredientName.localeCompare(b.ingredientName));
   return { items };
 }
@@ -68,7 +68,7 @@ export async function listPantry(em: EntityManager, actor: Actor): Promise<Pantr
 export async function getPantryItem(em: EntityManager, actor: Actor, id: number): Promise<PantryItemDto> {
   const row = await findItem(em, actor, id);
   const ing = (await loadShoppingIngredients(em, actor, [row.ingredient.id])).get(row.ingredient.id);
-  return presentPantryItem(row, ing);
+  return presentPantryItem(row, ing, measureOf(actor));
 }
 
 /** One row per ingredient: a second one is 409 naming the existing row (edit that one instead). */
@@ -86,18 +86,18 @@ export async function createPantryItem(em: EntityManager, actor: Actor, v: Pantr
     unit: base.unit,
   });
   await em.flush();
-  return presentPantryItem(row, ing);
+  return presentPantryItem(row, ing, measureOf(actor));
 }
 
 export async function updatePantryItem(em: EntityManager, actor: Actor, id: number, v: PantryUpdateValues): Promise<PantryItemDto> {
   const row = await findItem(em, actor, id);
   const ing = await ingredientFor(em, actor, row.ingredient.id);
-  if (row.version !== v.version) throw new StaleEdit(row.version, presentPantryItem(row, ing));
+  if (row.version !== v.version) throw new StaleEdit(row.version, presentPantryItem(row, ing, measureOf(actor)));
   const base = toBase(ing, v.amount, v.unit);
   row.amount = base.amount.toFixed(4);
   row.unit = base.unit;
   await em.flush();
-  return presentPantryItem(row, ing);
+  return presentPantryItem(row, ing, measureOf(actor));
 }
 
 export async function deletePantryItem(em: EntityManager, actor: Actor, id: number): Promise<void> {

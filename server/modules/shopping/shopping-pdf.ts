@@ -1,9 +1,10 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { ShoppingList } from '@shared/domain/shopping.js';
-import type { Actor } from '../../http/authz.js';
+import { measureOf, type Actor } from '../../http/authz.js';
 import { renderShoppingListPdf } from '../pdf/shopping-list.pdf.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { aisleLabel } from './shopping.presenter.js';
+import { baseAmountText } from './shopping-ingredient.js';
 import { shortDate } from '@shared/domain/iso-date.js';
 import { weekShoppingExport } from './shopping-week.service.js';
 
@@ -19,5 +20,6 @@ export async function shoppingPdf(em: EntityManager, actor: Actor, weekId: numbe
     businessName: ws.name,
     title: `Shopping list, week of ${shortDate(week.startDate)}`,
     filename: `shopping-list-${week.startDate}.pdf`,
+    amountText: (item, value) => baseAmountText(value, computed.ingredients.get(Number(item.ingredientId))!, measureOf(actor)),
   });
 }

@@ -2,7 +2,7 @@ import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { UniqueConstraintViolationException } from '@mikro-orm/core';
 import type { MarkBoughtDto, ShoppingCheckDto, ShoppingListDto, ShoppingNeedsValues } from '@shared/schemas/shopping.schema.js';
-import type { Actor } from '../../http/authz.js';
+import { measureOf, type Actor } from '../../http/authz.js';
 import { NotFound } from '../../http/errors.js';
 import { User } from '../auth/user.entity.js';
 import { findWeek, loadBoardData, type BoardData } from '../weeks/week-board.service.js';
@@ -80,14 +80,14 @@ export async function weekShoppingList(em: EntityManager, actor: Actor, weekId: 
     checksOf(em, week.id),
     em.findOne(ShoppingPurchase, { week: week.id }),
   ]);
-  return presentShoppingList(computed, { weekId: week.id, checks, bought: await boughtOf(em, purchase) });
+  return presentShoppingList(computed, { weekId: week.id, system: measureOf(actor), checks, bought: await boughtOf(em, purchase) });
 }
 
 /** The computed list of a week (domain objects, for the CSV and PDF exports). */
 export async function weekShoppingExport(em: EntityManager, actor: Actor, weekId: number) {
   const week = await findWeek(em, actor, weekId);
   const [computed, checks] = await Promise.all([computeForWeek(em, actor, week), checksOf(em, week.id)]);
-  return { week, computed, dto: presentShoppingList(computed, { weekId: week.id, checks }) };
+  return { week, computed, dto: presentShoppingList(computed, { weekId: week.id, system: measureOf(actor), checks }) };
 }
 
 /**

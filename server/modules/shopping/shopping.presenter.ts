@@ -1,4 +1,5 @@
 import Decimal from 'decimal.js';
+import type { MeasureSystem } from '@shared/domain/units.js';
 import { OTHER_AISLE, type ShoppingItem } from '@shared/domain/shopping.js';
 import { STORE_AISLE_LABELS, type StoreAisleCode } from '@shared/schemas/ingredients.schema.js';
 import type { ShoppingCheckDto, ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema.js';
@@ -14,7 +15,7 @@ export function aisleLabel(aisle: string): string {
   return STORE_AISLE_LABELS[aisle as StoreAisleCode] ?? aisle;
 }
 
-function presentItem(item: ShoppingItem, computed: ComputedShoppingList, check: ShoppingCheckDto): ShoppingItemDto {
+function presentItem(item: ShoppingItem, computed: ComputedShoppingList, check: ShoppingCheckDto, system: MeasureSystem): ShoppingItemDto {
   const ing = computed.ingredients.get(Number(item.ingredientId))!;
   const p = item.purchase;
   return {
@@ -27,8 +28,8 @@ function presentItem(item: ShoppingItem, computed: ComputedShoppingList, check: 
     inPantry: n2(item.inPantry),
     fromPantry: n2(item.fromPantry),
     toBuy: n2(item.toBuy),
-    neededText: baseAmountText(item.needed, ing),
-    toBuyText: baseAmountText(item.toBuy, ing),
+    neededText: baseAmountText(item.needed, ing, system),
+    toBuyText: baseAmountText(item.toBuy, ing, system),
     purchase: p
       ? {
           label: p.label,
@@ -36,7 +37,7 @@ function presentItem(item: ShoppingItem, computed: ComputedShoppingList, check: 
           size: p.size.toNumber(),
           unit: p.unit,
           spare: n2(p.spareInPurchaseUnit),
-          spareText: baseAmountText(p.spare, ing),
+          spareText: baseAmountText(p.spare, ing, system),
         }
       : null,
     costCents: item.cost ? item.cost.toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toNumber() : null,
@@ -48,6 +49,8 @@ export function presentShoppingList(
   computed: ComputedShoppingList,
   opts: {
     weekId: number | null;
+    /** The reader's measure preference for the written amounts (`neededText`, `toBuyText`, `spareText`). */
+    system: MeasureSystem;
     checks?: ReadonlyMap<number, ShoppingCheckDto>;
     bought?: { at: string; by: string | null } | null;
   },
@@ -55,7 +58,7 @@ export function presentShoppingList(
   const aisles = computed.list.aisles.map((g) => ({
     aisle: g.aisle,
     label: aisleLabel(g.aisle),
-    items: g.items.map((i) => presentItem(i, computed, opts.checks?.get(Number(i.ingredientId)) ?? UNCHECKED)),
+    items: g.items.map((i) => presentItem(i, computed, opts.checks?.get(Number(i.ingredientId)) ?? UNCHECKED, opts.system)),
   }));
   const items = aisles.flatMap((a) => a.items);
   return {

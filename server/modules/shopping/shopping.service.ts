@@ -16,7 +16,7 @@ import {
   type ShoppingNeedsInput,
   type ShoppingProblemDto,
 } from '@shared/schemas/shopping.schema.js';
-import type { Actor } from '../../http/authz.js';
+import { measureOf, type Actor } from '../../http/authz.js';
 import { ValidationError } from '../../http/errors.js';
 import { Tray } from '../trays/tray.entity.js';
 import { pantryStock } from './pantry.service.js';
@@ -122,5 +122,5 @@ export function itemsOf(list: ShoppingList): ShoppingItem[] {
  * The shopping list DTO for trays × counts and add-ons (no prep week needed): what the week's list is built from.
  */
 export async function shoppingListFor(em: EntityManager, actor: Actor, input: ShoppingNeedsInput): Promise<ShoppingListDto> {
-  return presentShoppingList(await computeShoppingList(em, actor, input), { weekId: null });
+  return presentShoppingList(await computeShoppingList(em, actor, input), { weekId: null, system: measureOf(actor) });
 }

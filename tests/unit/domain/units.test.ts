@@ -371,6 +371,10 @@ describe('kitchen display', () => {
   it('pieces show to the nearest ¼ (common practice, no source)', () => {
     expect(formatPieces('2.6', 'large').text).toBe('2 ½ large');
     expect(formatPieces('2.9', 'large').text).toBe('3 large');
+    // The generic piece is a bare count: "12", not "12 each" (our wording).
+    expect(formatPieces('12', 'each').text).toBe('12');
+    expect(formatPieces('1.5', 'each').text).toBe('1 ½');
+    expect(formatPieces('0.1', 'each').text).toBe('< ¼');
   });
 
   // The largest half-gap of each unit's grid: a shown value is never further than this from the exact value.
