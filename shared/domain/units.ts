@@ -95,6 +95,38 @@ export function amountWithUnit(amountText: string, unit: UnitCode): string {
   return `${amount} ${SYMBOLS.get(unit) ?? unit}`;
 }
 
+/**
+ * The last word of the name before its first comma or bracket, lower case: the food itself ("Avocado, raw" →
+ * "avocado", "Low-carb tortilla (…)" → "tortilla", "Lemon juice, fresh" → "juice").
+ */
+function foodNoun(name: string): string {
+  return name.split(/[,(]/, 1)[0]!.toLowerCase().split(/[\s-]+/).filter(Boolean).at(-1) ?? '';
+}
+
+/**
+ * An amount, its unit and the ingredient's name as one phrase ("1 fl oz Heavy cream", "2 slice Bacon…"). When a
+ * piece is the food itself (the name's last word before a comma: "avocado" of "Avocado, raw", "tortilla" of
+ * "Low-carb tortilla", "wrap" of "Coconut wraps"), the piece is not said twice: "1/4 Avocado, raw",
+ * "2 × Low-carb tortilla", "6 Olives, ripe, canned", and for one of a plural name "1 wrap (Coconut wraps)".
+ * A piece of something else keeps its name ("1 lemon Lemon juice, fresh").
+ */
+export function amountAndName(amountText: string, unit: UnitCode, name: string): string {
+  const amount = amountText.trim();
+  const piece = unit.trim().toLowerCase();
+  const noun = foodNoun(name);
+  if (piece && piece !== 'each' && !isMassUnit(piece) && !isVolumeUnit(piece) && noun.startsWith(piece)) {
+    let many = false;
+    try {
+      many = parseAmount(amount).value.gt(1);
+    } catch {
+      // An amount that does not parse is written as typed, with its piece.
+    }
+    if (noun === piece) return `${amount}${many ? ' ×' : ''} ${name}`;
+    if (noun === `${piece}s` || noun === `${piece}es`) return many ? `${amount} ${name}` : `${amount} ${piece} (${name})`;
+  }
+  return `${amountWithUnit(amountText, unit)} ${name}`.trim();
+}
+
 export function isMassUnit(code: string): code is MassUnit {
   return Object.prototype.hasOwnProperty.call(GRAMS_PER_UNIT, code);
 }

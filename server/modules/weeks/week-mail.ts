@@ -1,6 +1,6 @@
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { amountWithUnit } from '@shared/domain/units.js';
+import { amountAndName } from '@shared/domain/units.js';
 import { allergenLabel } from '@shared/domain/allergens.js';
 import { CAUTIONS, thawTasks } from '@shared/domain/eat-by.js';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema.js';
@@ -39,7 +39,7 @@ function plateNotes(p: MyPlateDto): string[] {
   const notes: string[] = [];
   if (p.storage === 'frozen' && p.thawOn) notes.push(`Frozen: move it from the freezer to the fridge on the evening of ${longDate(p.thawOn)}.`);
   if (p.allergens.length) notes.push(`Contains: ${p.allergens.map(allergenLabel).join(', ')}.`);
-  if (p.addOns.length) notes.push(`Add: ${p.addOns.map((a) => `${amountWithUnit(a.amountText, a.unit)} ${a.name}`.trim()).join('; ')}.`);
+  if (p.addOns.length) notes.push(`Add: ${p.addOns.map((a) => amountAndName(a.amountText, a.unit, a.name)).join('; ')}.`);
   return notes;
 }
 

@@ -5,6 +5,7 @@ import convert from 'convert-units';
 import { describe, expect, it } from 'vitest';
 import {
   AmountParseError,
+  amountAndName,
   amountWithUnit,
   GRAMS_PER_UNIT,
   MASS_UNITS,
@@ -287,6 +288,27 @@ describe('an amount with its unit, as people read it', () => {
     expect(amountWithUnit('1/2', 'cup')).toBe('1/2 cup');
     expect(amountWithUnit('3', 'oz')).toBe('3 oz');
     expect(amountWithUnit(' 100 ', 'g')).toBe('100 g');
+  });
+
+  it('writes an amount before a name without saying the piece twice (our wording)', () => {
+    expect(amountAndName('1/4', 'avocado', 'Avocado, raw')).toBe('1/4 Avocado, raw');
+    expect(amountAndName('1', 'tortilla', 'Low-carb tortilla (high-fibre wheat)')).toBe('1 Low-carb tortilla (high-fibre wheat)');
+    expect(amountAndName('2', 'tortilla', 'Low-carb tortilla (high-fibre wheat)')).toBe('2 × Low-carb tortilla (high-fibre wheat)');
+    expect(amountAndName('1', 'radish', 'Daikon radish, raw')).toBe('1 Daikon radish, raw');
+    // A plural name: the number alone when there are several, the piece when there is one or less.
+    expect(amountAndName('6', 'olive', 'Olives, ripe, canned')).toBe('6 Olives, ripe, canned');
+    expect(amountAndName('2', 'wrap', 'Egg white wraps')).toBe('2 Egg white wraps');
+    expect(amountAndName('1', 'wrap', 'Coconut wraps')).toBe('1 wrap (Coconut wraps)');
+    expect(amountAndName('1-2', 'wrap', 'Coconut wraps')).toBe('1-2 Coconut wraps');
+    // A piece that is not the food keeps its name; words after the first comma do not count.
+    expect(amountAndName('2', 'slice', 'Bacon, cooked, baked')).toBe('2 slice Bacon, cooked, baked');
+    expect(amountAndName('1', 'large', 'Eggs, whole, raw')).toBe('1 large Eggs, whole, raw');
+    expect(amountAndName('1', 'lemon', 'Lemon juice, fresh')).toBe('1 lemon Lemon juice, fresh');
+    expect(amountAndName('1', 'stalk', 'Celery, raw, stalk')).toBe('1 stalk Celery, raw, stalk');
+    // Standard units and the generic piece as amountWithUnit writes them.
+    expect(amountAndName('1', 'floz', 'Heavy cream')).toBe('1 fl oz Heavy cream');
+    expect(amountAndName('2', 'each', 'Cream-cheese almond batter slab')).toBe('2 × Cream-cheese almond batter slab');
+    expect(amountAndName('1', 'oz', 'Oz. brand spread')).toBe('1 oz Oz. brand spread');
   });
 
   it('counts whole pieces with ×, and keeps a piece name as stored', () => {

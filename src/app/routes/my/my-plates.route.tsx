@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { allergenLabel } from '@shared/domain/allergens';
 import { thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
-import { amountWithUnit } from '@shared/domain/units';
+import { amountAndName } from '@shared/domain/units';
 import type { MyPlateDto } from '@shared/schemas/weeks.schema';
 import { localToday, myWeekQuery } from '@/features/weeks/api/weeks.queries';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
@@ -55,7 +55,7 @@ function PlateCard({ plate }: { plate: MyPlateDto }) {
           ))}
           {plate.addOns.map((a, i) => (
             <li key={i}>
-              {amountWithUnit(a.amountText, a.unit)} {a.name} {a.note && <span className="text-ink-faint">({a.note})</span>}
+              {amountAndName(a.amountText, a.unit, a.name)} {a.note && <span className="text-ink-faint">({a.note})</span>}
             </li>
           ))}
         </ul>

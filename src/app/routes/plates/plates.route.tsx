@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { AssemblyDto } from '@shared/schemas/assemblies.schema';
-import { amountWithUnit } from '@shared/domain/units';
+import { amountAndName } from '@shared/domain/units';
 import { assembliesQuery } from '@/features/assemblies/api/assemblies.queries';
 import { useDeleteAssembly, useSaveAssembly } from '@/features/assemblies/api/use-assembly-mutations';
 import { AssemblyForm, assemblyToInput, emptyAssembly } from '@/features/assemblies/components/assembly-form';
@@ -79,7 +79,7 @@ export function Component() {
                     ))}
                     {p.addOns.map((a, i) => (
                       <li key={`a${i}`}>
-                        {amountWithUnit(a.amountText, a.unit)} {a.ingredientName} {a.note && <span className="text-ink-faint">({a.note})</span>}
+                        {amountAndName(a.amountText, a.unit, a.ingredientName)} {a.note && <span className="text-ink-faint">({a.note})</span>}
                       </li>
                     ))}
                   </ul>

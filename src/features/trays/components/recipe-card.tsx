@@ -1,5 +1,5 @@
 import { allergenLabel } from '@shared/domain/allergens';
-import { amountWithUnit } from '@shared/domain/units';
+import { amountAndName } from '@shared/domain/units';
 import { PAN_LINING_LABELS, type TrayDto } from '@shared/schemas/trays.schema';
 import { Card } from '@/components/ui/states';
 
@@ -42,7 +42,7 @@ export function RecipeCard({ tray }: { tray: TrayDto }) {
       <ul className="num mb-3 list-disc pl-5">
         {tray.lines.map((l) => (
           <li key={l.id}>
-            {amountWithUnit(l.amountText, l.unit)} {l.ingredientName}
+            {amountAndName(l.amountText, l.unit, l.ingredientName)}
             {l.note && <span className="text-ink-soft">, {l.note}</span>}
           </li>
         ))}
