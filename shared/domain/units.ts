@@ -85,6 +85,11 @@ export const UNIT_CODES: readonly StandardUnit[] = UNIT_OPTIONS.map((u) => u.cod
 
 const SYMBOLS: ReadonlyMap<string, string> = new Map(UNIT_OPTIONS.map((u) => [u.code, u.symbol]));
 
+/** A unit as people write it: the symbol of a standard unit ("mL", "fl oz"), a piece name as stored. */
+export function unitSymbol(unit: UnitCode): string {
+  return SYMBOLS.get(unit) ?? unit;
+}
+
 /**
  * An amount as typed with its unit, for people to read before an ingredient's name: standard units by their symbol
  * ("1 fl oz", "250 mL", "1 L"), `each` as a count ("2 ×"), a piece name as stored ("1/4 avocado", "2 slices").
@@ -92,7 +97,7 @@ const SYMBOLS: ReadonlyMap<string, string> = new Map(UNIT_OPTIONS.map((u) => [u.
 export function amountWithUnit(amountText: string, unit: UnitCode): string {
   const amount = amountText.trim();
   if (unit === 'each') return `${amount} ×`;
-  return `${amount} ${SYMBOLS.get(unit) ?? unit}`;
+  return `${amount} ${unitSymbol(unit)}`;
 }
 
 /**

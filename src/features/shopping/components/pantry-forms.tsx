@@ -14,6 +14,8 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError } from '@/lib/problem';
+import { unitSymbol } from '@shared/domain/units';
+import { useMe } from '@/features/auth/hooks/use-me';
 import { pantryIngredientSearchQuery } from '../api/shopping.queries';
 import { useCreatePantryItem, useDeletePantryItem, useUpdatePantryItem } from '../api/use-pantry-mutations';
 
@@ -28,21 +30,36 @@ export function unitsFor(ing: Pick<IngredientDto, 'densityGPerMl' | 'pieceWeight
   return [...new Set([...purchasePiece, ...pieces, ...MASS, ...(ing.densityGPerMl ? VOLUME : [])])];
 }
 
+/** The unit a new pantry amount starts in: the piece a count-bought item is bought in, else the reader's mass unit. */
+export function startingUnit(ing: Pick<IngredientDto, 'purchase'> | null, system: 'us' | 'metric'): string {
+  if (ing?.purchase && !MASS.includes(ing.purchase.unit) && !VOLUME.includes(ing.purchase.unit)) return ing.purchase.unit;
+  return system === 'metric' ? 'g' : 'oz';
+}
+
 export function AddPantryItem() {
   const [search, setSearch] = useState('');
   const results = useQuery(pantryIngredientSearchQuery(search.trim()));
   const create = useCreatePantryItem();
+  const { unitSystem } = useMe();
   const [formError, setFormError] = useState<string | null>(null);
+  const empty = { ingredientId: '' as unknown as number, amount: '', unit: startingUnit(null, unitSystem) };
   const form = useForm<PantryCreateInput, unknown, PantryCreateValues>({
     resolver: zodResolver(pantryCreateSchema),
-    defaultValues: { ingredientId: '' as unknown as number, amount: '', unit: 'g' },
+    defaultValues: empty,
   });
   const chosenId = Number(form.watch('ingredientId'));
   const chosen = results.data?.items.find((i) => i.id === chosenId) ?? null;
+  const ingredientField = form.register('ingredientId', {
+    // A newly chosen ingredient starts in its own unit (eggs in "large"), not in the last one's.
+    onChange: (e: { target: { value: string } }) => {
+      const ing = results.data?.items.find((i) => i.id === Number(e.target.value)) ?? null;
+      form.setValue('unit', startingUnit(ing, unitSystem));
+    },
+  });
   const submit = form.handleSubmit((values) => {
     setFormError(null);
     create.mutate(values, {
-      onSuccess: () => form.reset({ ingredientId: '' as unknown as number, amount: '', unit: 'g' }),
+      onSuccess: () => form.reset(empty),
       onError: (e) => setFormError(isApiError(e, 409) ? errorMessage(e) : applyServerErrors(e, form.setError)),
     });
   });
@@ -50,7 +67,7 @@ export function AddPantryItem() {
   return (
     <form onSubmit={submit} className="grid gap-3 sm:grid-cols-2" noValidate>
       <TextField label="Find an ingredient" value={search} onChange={(e) => setSearch(e.target.value)} placeholder="eggs, cream cheese…" />
-      <SelectField label="Ingredient" error={err.ingredientId?.message} {...form.register('ingredientId')}>
+      <SelectField label="Ingredient" error={err.ingredientId?.message} {...ingredientField}>
         <option value="">Choose…</option>
         {results.data?.items.map((i) => (
           <option key={i.id} value={i.id}>
@@ -62,7 +79,7 @@ export function AddPantryItem() {
       <SelectField label="Unit" error={err.unit?.message} {...form.register('unit')}>
         {unitsFor(chosen).map((u) => (
           <option key={u} value={u}>
-            {u}
+            {unitSymbol(u)}
           </option>
         ))}
       </SelectField>
@@ -109,7 +126,7 @@ export function PantryRow({ item }: { item: PantryItemDto }) {
         <SelectField label="Unit" className="w-28" value={unit} onChange={(e) => setUnit(e.target.value)}>
           {units.map((u) => (
             <option key={u} value={u}>
-              {u}
+              {unitSymbol(u)}
             </option>
           ))}
         </SelectField>
