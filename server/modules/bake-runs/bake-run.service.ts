@@ -16,8 +16,8 @@ import type { Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
 import { Tray } from '../trays/tray.entity.js';
-import { BakeRunSetting, BakeRule, type IBakeRule, type IBakeRunSetting, type IOven } from './bake-run.entity.js';
-import { loadBakeRules, loadOvens, presentOven } from './bake-setup.service.js';
+import { BakeRunSetting, BakeRule, type IBakeRule, type IBakeRunSetting } from './bake-run.entity.js';
+import { loadBakeRules, loadOvens, ovenInput, presentOven } from './bake-setup.service.js';
 
 const num = (v: string | number): number => new Decimal(v).toNumber();
 
@@ -157,18 +157,6 @@ async function weekTrays(em: EntityManager, week: IWeek, prepDate: string, setti
     }));
   });
   return { list, schedulerTrays, used: [...new Set(used)] };
-}
-
-function ovenInput(o: IOven) {
-  return {
-    name: o.name,
-    racks: o.racks,
-    traysPerRack: o.traysPerRack,
-    convection: o.convection,
-    heatFPerMin: num(o.heatFPerMin),
-    coolFPerMin: num(o.coolFPerMin),
-    maxF: num(o.maxF),
-  };
 }
 
 export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: number, wantedDate?: string): Promise<WeekBakeRunDto> {

@@ -43,9 +43,9 @@ export function presentBakeRule(r: IBakeRule): BakeRuleDto {
   };
 }
 
-export function presentOven(o: IOven): OvenDto {
+/** An oven as the bake-run scheduler takes it (numbers, °F). */
+export function ovenInput(o: IOven) {
   return {
-    id: o.id,
     name: o.name,
     racks: o.racks,
     traysPerRack: o.traysPerRack,
@@ -53,6 +53,13 @@ export function presentOven(o: IOven): OvenDto {
     heatFPerMin: num(o.heatFPerMin),
     coolFPerMin: num(o.coolFPerMin),
     maxF: num(o.maxF),
+  };
+}
+
+export function presentOven(o: IOven): OvenDto {
+  return {
+    id: o.id,
+    ...ovenInput(o),
     maxC: toCelsiusRounded(o.maxF),
     version: o.version,
     updatedAt: o.updatedAt.toISOString(),

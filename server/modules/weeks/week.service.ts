@@ -73,15 +73,20 @@ function checkPrepDates(startDate: IsoDate, prepDate: IsoDate, second: IsoDate |
   if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
 }
 
-export async function createWeek(em: EntityManager, actor: Actor, v: CreateWeek): Promise<BoardAnswer> {
-  checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
-  const w = em.create(Week, {
+/** A new week row of the workspace (not flushed). */
+function newWeek(em: EntityManager, actor: Actor, v: CreateWeek): IWeek {
+  return em.create(Week, {
     workspace: actor.workspaceId,
     name: v.name,
     startDate: v.startDate,
     prepDate: v.prepDate,
     secondPrepDate: v.secondPrepDate ?? null,
   } as never) as IWeek;
+}
+
+export async function createWeek(em: EntityManager, actor: Actor, v: CreateWeek): Promise<BoardAnswer> {
+  checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
+  const w = newWeek(em, actor, v);
   await em.flush();
   return getBoard(em, actor, w.id);
 }
@@ -341,13 +346,7 @@ export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: C
   checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
   const shift = daysBetween(source.startDate, v.startDate);
   const newId = await em.transactional(async (tx) => {
-    const w = tx.create(Week, {
-      workspace: actor.workspaceId,
-      name: v.name,
-      startDate: v.startDate,
-      prepDate: v.prepDate,
-      secondPrepDate: v.secondPrepDate ?? null,
-    } as never) as IWeek;
+    const w = newWeek(tx, actor, v);
     await tx.flush();
     const mapPrep = (d: IsoDate | null | undefined): IsoDate | null =>
       d && d === source.secondPrepDate ? (v.secondPrepDate ?? null) : null;
