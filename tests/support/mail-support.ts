@@ -1,7 +1,9 @@
 import net from 'node:net';
-import pg from 'pg';
-import { TEST_DATABASE_URL } from './db.js';
+import { sql } from './db.js';
 import type { Member } from './factories.js';
+
+/** The test database's direct reader, here too for the mail tests. */
+export { sql };
 
 /** A free TCP port on loopback (for an in-process mail catcher that can be stopped and started on the same port). */
 export async function freePort(): Promise<number> {
@@ -15,15 +17,6 @@ export async function freePort(): Promise<number> {
   });
 }
 
-export async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []): Promise<T[]> {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
-}
 
 /** Polls until `fn` returns a truthy value (or throws after `timeoutMs`). */
 export async function until<T>(fn: () => Promise<T | null | undefined | false>, timeoutMs = 20_000, what = 'condition'): Promise<T> {

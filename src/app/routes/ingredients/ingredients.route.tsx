@@ -16,6 +16,7 @@ import { ingredientListQuery } from '@/features/ingredients/api/ingredients.quer
 import { IngredientTable } from '@/features/ingredients/components/ingredient-table';
 import { IngredientImport } from '@/features/ingredients/components/ingredient-import';
 import { Button } from '@/components/ui/button';
+import { Pager } from '@/components/ui/pager';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
@@ -135,18 +136,9 @@ export function Component() {
           {(data) => (
             <>
               <IngredientTable items={data.items} sort={filters.sort} onSort={(s) => update({ sort: s === 'name' ? '' : s })} />
-              <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center gap-3">
-                <Button variant="secondary" size="sm" disabled={filters.page <= 1} onClick={() => update({ page: String(filters.page - 1) })}>
-                  Previous
-                </Button>
-                <span className="num text-sm" aria-live="polite">
-                  Page {filters.page} of {pages} · {data.total} ingredients
-                </span>
-                <Button variant="secondary" size="sm" disabled={filters.page >= pages} onClick={() => update({ page: String(filters.page + 1) })}>
-                  Next
-                </Button>
+              <Pager label="Pages" page={filters.page} pages={pages} onPage={(p) => update({ page: String(p) })} summary={` · ${data.total} ingredients`}>
                 {list.isFetching && <span className="text-sm text-ink-faint">Updating…</span>}
-              </nav>
+              </Pager>
             </>
           )}
         </QueryView>

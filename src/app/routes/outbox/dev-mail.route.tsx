@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { caughtAttachmentUrl, caughtMailListQuery, caughtMailQuery } from '@/features/mail/api/mail.queries';
 import { Button } from '@/components/ui/button';
+import { Pager } from '@/components/ui/pager';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, Skeleton } from '@/components/ui/states';
 import { isApiError } from '@/lib/problem';
 
@@ -74,11 +75,7 @@ export function Component() {
           </ul>
         )}
         {list.data && pages > 1 && (
-          <nav className="mt-4 flex items-center gap-3" aria-label="Caught mail pages">
-            <Button size="sm" variant="secondary" disabled={page <= 1} onClick={() => setPage((p) => p - 1)}>Newer</Button>
-            <span className="num text-sm">Page {page} of {pages}</span>
-            <Button size="sm" variant="secondary" disabled={page >= pages} onClick={() => setPage((p) => p + 1)}>Older</Button>
-          </nav>
+          <Pager label="Caught mail pages" page={page} pages={pages} onPage={setPage} back="Newer" forward="Older" />
         )}
       </Card>
     </div>

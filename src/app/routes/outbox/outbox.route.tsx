@@ -6,6 +6,7 @@ import { outboxBusy, outboxQuery } from '@/features/mail/api/mail.queries';
 import { useRetryOutbox } from '@/features/mail/api/use-retry-outbox';
 import { OutboxStatusBadge } from '@/features/mail/components/outbox-status';
 import { Button } from '@/components/ui/button';
+import { Pager } from '@/components/ui/pager';
 import { SelectField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, Progress, QueryView, Skeleton } from '@/components/ui/states';
 import { errorMessage } from '@/lib/problem';
@@ -156,11 +157,7 @@ export function Component() {
           )}
         </QueryView>
         {data && pages > 1 && (
-          <nav className="mt-4 flex items-center gap-3" aria-label="Outbox pages">
-            <Button size="sm" variant="secondary" disabled={page <= 1} onClick={() => setPage((p) => p - 1)}>Newer</Button>
-            <span className="num text-sm">Page {page} of {pages}</span>
-            <Button size="sm" variant="secondary" disabled={page >= pages} onClick={() => setPage((p) => p + 1)}>Older</Button>
-          </nav>
+          <Pager label="Outbox pages" page={page} pages={pages} onPage={setPage} back="Newer" forward="Older" />
         )}
       </Card>
     </div>
