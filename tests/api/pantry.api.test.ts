@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import Qty from 'js-quantities';
 import { testApp } from '../support/test-app.js';
-import { coachWorkspace, makeIngredient, member } from '../support/factories.js';
+import { coachWorkspace, EGGS_BY_THE_DOZEN, makeIngredient, member } from '../support/factories.js';
 import { sql } from '../support/db.js';
 
 let app: Express;
@@ -10,15 +10,6 @@ beforeAll(async () => {
   app = (await testApp()).app;
 });
 
-
-// Eggs bought by the dozen of "large" pieces; 50 g per large egg (USDA FDC 171287 portion "large").
-const eggBody = {
-  category: 'eggs',
-  pieceWeights: [{ name: 'large', grams: '50' }],
-  allergens: ['egg'],
-  purchase: { amount: '12', unit: 'large', label: 'dozen large eggs' },
-  priceCents: 399,
-};
 
 describe('pantry', () => {
   it('an assistant adds, edits and deletes what is on hand; amounts are stored in the base unit', async () => {
@@ -54,7 +45,7 @@ describe('pantry', () => {
 
   it('counts eggs in pieces, and converts grams to pieces with the piece weight', async () => {
     const coach = await coachWorkspace(app);
-    const eggs = await makeIngredient(coach, eggBody);
+    const eggs = await makeIngredient(coach, EGGS_BY_THE_DOZEN);
     // 18 large eggs as typed.
     const a = await coach.agent.post('/api/pantry').send({ ingredientId: eggs.id, amount: '18', unit: 'large' }).expect(201);
     expect(a.body).toMatchObject({ amount: 18, unit: 'large', display: '18 large' });

@@ -4,7 +4,7 @@ import Qty from 'js-quantities';
 import Papa from 'papaparse';
 import { PDFParse } from 'pdf-parse';
 import { testApp } from '../support/test-app.js';
-import { coachWorkspace, makeIngredient, makeTray, member, type Member } from '../support/factories.js';
+import { coachWorkspace, EGGS_BY_THE_DOZEN, makeIngredient, makeTray, member, type Member } from '../support/factories.js';
 import { sql } from '../support/db.js';
 import { shoppingWeek } from '../support/shopping-week.js';
 
@@ -13,15 +13,6 @@ beforeAll(async () => {
   app = (await testApp()).app;
 });
 
-// Eggs bought by the dozen of "large" pieces; 50 g per large egg (USDA FDC 171287 portion "large").
-const eggBody = {
-  category: 'eggs',
-  pieceWeights: [{ name: 'large', grams: '50' }],
-  allergens: ['egg'],
-  purchase: { amount: '12', unit: 'large', label: 'dozen large eggs' },
-  priceCents: 399,
-  aisle: 'dairy-eggs',
-};
 // Heavy cream: 1 cup = 238 g (USDA SR28, NDB 01053, from memory) → 1.006 g/mL with the NIST cup of 236.5882365 mL.
 const creamBody = {
   category: 'dairy',
@@ -46,7 +37,7 @@ describe('shopping list from trays × counts and add-ons', () => {
   it('rounds up to whole packages: 36 eggs → 3 dozen; 30 oz of an 8 oz package → 4 packages, 2 oz spare', async () => {
     const coach = await coachWorkspace(app);
     const assistant = await member(app, coach, 'assistant');
-    const eggs = await makeIngredient(coach, eggBody);
+    const eggs = await makeIngredient(coach, EGGS_BY_THE_DOZEN);
     const cheese = await makeIngredient(coach);
     // A tray of 12 large eggs and 10 oz of cheese, baked 3 times: 36 eggs and 30 oz (the worked examples).
     const tray = await makeTray(coach, {
@@ -95,7 +86,7 @@ describe('shopping list from trays × counts and add-ons', () => {
   it('subtracts the pantry, never below zero, before rounding to packages', async () => {
     const coach = await coachWorkspace(app);
     const cheese = await makeIngredient(coach);
-    const eggs = await makeIngredient(coach, eggBody);
+    const eggs = await makeIngredient(coach, EGGS_BY_THE_DOZEN);
     await coach.agent.post('/api/pantry').send({ ingredientId: cheese.id, amount: '20', unit: 'oz' }).expect(201);
     await coach.agent.post('/api/pantry').send({ ingredientId: eggs.id, amount: '48', unit: 'large' }).expect(201);
     const res = await preview(coach, {

@@ -94,6 +94,16 @@ export function ingredientInput(overrides: Record<string, unknown> = {}) {
   };
 }
 
+/** Eggs bought by the dozen of "large" pieces; 50 g per large egg (USDA FDC 171287 portion "large"). */
+export const EGGS_BY_THE_DOZEN = {
+  category: 'eggs',
+  pieceWeights: [{ name: 'large', grams: '50' }],
+  allergens: ['egg'],
+  purchase: { amount: '12', unit: 'large', label: 'dozen large eggs' },
+  priceCents: 399,
+  aisle: 'dairy-eggs',
+};
+
 /** Creates a workspace-own ingredient as the coach; returns the response body (IngredientDto). */
 export async function makeIngredient(coach: Member, overrides: Record<string, unknown> = {}) {
   const res = await coach.agent.post('/api/ingredients').send(ingredientInput(overrides));

@@ -1,4 +1,4 @@
-import { makeAssembly, makeClient, makeIngredient, makeTray, makeWeek, type Member } from './factories.js';
+import { EGGS_BY_THE_DOZEN, makeAssembly, makeClient, makeIngredient, makeTray, makeWeek, type Member } from './factories.js';
 
 /**
  * A prep week for shopping-list and label tests (invented test values): one tray of 12 large eggs and 10 oz of
@@ -9,15 +9,7 @@ export async function shoppingWeek(
   coach: Member,
   opts: { trayCount?: number; multiplier?: string; tray?: Record<string, unknown>; eggs?: Record<string, unknown> } = {},
 ) {
-  const eggs = await makeIngredient(coach, {
-    category: 'eggs',
-    pieceWeights: [{ name: 'large', grams: '50' }],
-    allergens: ['egg'],
-    purchase: { amount: '12', unit: 'large', label: 'dozen large eggs' },
-    priceCents: 399,
-    aisle: 'dairy-eggs',
-    ...opts.eggs,
-  });
+  const eggs = await makeIngredient(coach, { ...EGGS_BY_THE_DOZEN, ...opts.eggs });
   const cheese = await makeIngredient(coach);
   const tray = await makeTray(coach, {
     lines: [
