@@ -10,7 +10,6 @@ beforeAll(async () => {
   app = (await testApp()).app;
 });
 
-
 describe('pantry', () => {
   it('an assistant adds, edits and deletes what is on hand; amounts are stored in the base unit', async () => {
     const coach = await coachWorkspace(app);
