@@ -108,15 +108,42 @@ function foodNoun(name: string): string {
   return name.split(/[,(]/, 1)[0]!.toLowerCase().split(/[\s-]+/).filter(Boolean).at(-1) ?? '';
 }
 
+const SYSTEM_OF: ReadonlyMap<string, MeasureSystem | 'any'> = new Map(UNIT_OPTIONS.map((u) => [u.code, u.system]));
+
+/**
+ * A typed mass or volume in the reader's other measure system, as a kitchen amount ("3 oz" → "85 g" for a metric
+ * reader, "100 g" → "3 ½ oz" for a US one); null when there is nothing to convert: a piece, a unit already of the
+ * reader's system, a range, or text that does not parse.
+ */
+export function amountInSystem(amountText: string, unit: UnitCode, system: MeasureSystem): string | null {
+  const code = unit.trim().toLowerCase();
+  const from = SYSTEM_OF.get(code);
+  if (from === undefined || from === 'any' || from === system) return null;
+  let parsed: ParsedAmount;
+  try {
+    parsed = parseAmount(amountText);
+  } catch {
+    return null;
+  }
+  if (parsed.isRange) return null;
+  if (isMassUnit(code)) return formatMass(parsed.value.times(GRAMS_PER_UNIT[code]), system).text;
+  if (isVolumeUnit(code)) return formatVolume(parsed.value.times(MILLILITERS_PER_UNIT[code]), system).text;
+  return null;
+}
+
 /**
  * An amount, its unit and the ingredient's name as one phrase ("1 fl oz Heavy cream", "2 slice Bacon…"). When a
  * piece is the food itself (the name's last word before a comma: "avocado" of "Avocado, raw", "tortilla" of
  * "Low-carb tortilla", "wrap" of "Coconut wraps"), the piece is not said twice: "1/4 Avocado, raw",
  * "2 × Low-carb tortilla", "6 Olives, ripe, canned", and for one of a plural name "1 wrap (Coconut wraps)".
- * A piece of something else keeps its name ("1 lemon Lemon juice, fresh").
+ * A piece of something else keeps its name ("1 lemon Lemon juice, fresh"). With the reader's `system`, a mass or
+ * volume typed in the other system also gives the reader's amount (amountInSystem).
  */
-export function amountAndName(amountText: string, unit: UnitCode, name: string): string {
+export function amountAndName(amountText: string, unit: UnitCode, name: string, system?: MeasureSystem): string {
   const amount = amountText.trim();
+  // A reader of the other measure system gets the typed amount and, in brackets, theirs: "3 oz (85 g) Smoked salmon".
+  const theirs = system ? amountInSystem(amountText, unit, system) : null;
+  if (theirs) return `${amountWithUnit(amountText, unit)} (${theirs}) ${name}`.trim();
   const piece = unit.trim().toLowerCase();
   const noun = foodNoun(name);
   if (piece && piece !== 'each' && !isMassUnit(piece) && !isVolumeUnit(piece) && noun.startsWith(piece)) {

@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import ICAL from 'ical.js';
 import { PDFParse } from 'pdf-parse';
+import { shoppingWeek } from '../support/shopping-week.js';
 import type { Orm } from '@server/db/orm.js';
 import { startMailCatcher, type MailCatcher } from '@server/modules/mail/mail-catcher.js';
 import { startMail, type MailRuntime } from '@server/modules/mail/mail-runtime.js';
@@ -291,6 +292,26 @@ describe('week-plan PDF downloads', () => {
     const dee = await member(app, coach, 'client', { clientId: w.dee.id });
     await dee.agent.get('/api/weeks/mine/plan.pdf').expect(404);
     await agentFor(app).get('/api/weeks/mine/plan.pdf').expect(401);
+  });
+
+  it("writes add-ons typed in the other measure system in the client's too, once they choose one", async () => {
+    const coach = await coachWorkspace(app);
+    // A plate with 1 oz of cheese as an add-on, on the client's board (tests/support/shopping-week.ts).
+    const w = await shoppingWeek(coach);
+    const board = await coach.agent.get(`/api/weeks/${w.weekId}`).expect(200);
+    await coach.agent.post(`/api/weeks/${w.weekId}/publish`).send({ version: board.body.week.version }).expect(200);
+    const coachCopy = async () => pdfText((await coach.agent.get(`/api/weeks/${w.weekId}/clients/${w.client.id}/plan.pdf`).buffer(true).parse(binary).expect(200)).body as Buffer);
+    // No account yet: as the coach typed it.
+    expect(await coachCopy()).toMatch(/Add: 1 oz Test cheese/);
+    const client = await member(app, coach, 'client', { clientId: w.client.id });
+    await client.agent.patch('/api/auth/me').send({ unitSystem: 'metric' }).expect(200);
+    // 1 oz = 28.349523125 g (NIST Handbook 44 App. C), shown to the gram: "28 g", beside what the coach typed.
+    const own = await pdfText((await client.agent.get('/api/weeks/mine/plan.pdf?today=2026-01-05').buffer(true).parse(binary).expect(200)).body as Buffer);
+    expect(own).toMatch(/Add: 1 oz \(28 g\) Test cheese/);
+    expect(await coachCopy()).toMatch(/Add: 1 oz \(28 g\) Test cheese/); // the coach's copy is the client's plan
+    // Back to US customary: nothing to convert.
+    await client.agent.patch('/api/auth/me').send({ unitSystem: 'us' }).expect(200);
+    expect(await coachCopy()).toMatch(/Add: 1 oz Test cheese/);
   });
 
   it('an unpublished week has no plan PDF (409)', async () => {

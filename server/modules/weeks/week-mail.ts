@@ -1,6 +1,6 @@
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { amountAndName } from '@shared/domain/units.js';
+import { amountAndName, type MeasureSystem } from '@shared/domain/units.js';
 import { allergenLabel } from '@shared/domain/allergens.js';
 import { CAUTIONS, thawTasks } from '@shared/domain/eat-by.js';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema.js';
@@ -14,6 +14,7 @@ import { Client, type IClient } from '../clients/client.entity.js';
 import { plannedTargets } from '../clients/client.presenter.js';
 import { mealSlotsOf } from '../clients/client.service.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
+import { Membership } from '../auth/user.entity.js';
 import { Week, WeekPublication } from './week.entity.js';
 
 /**
@@ -35,16 +36,19 @@ function macros(m: MyPlateDto['macros']): PdfMacros {
   return { kcal: m.kcal, fatG: m.fatG, proteinG: m.proteinG, netCarbsG: m.netCarbsG, carbsG: m.carbsG };
 }
 
-function plateNotes(p: MyPlateDto): string[] {
+function plateNotes(p: MyPlateDto, system?: MeasureSystem): string[] {
   const notes: string[] = [];
   if (p.storage === 'frozen' && p.thawOn) notes.push(`Frozen: move it from the freezer to the fridge on the evening of ${longDate(p.thawOn)}.`);
   if (p.allergens.length) notes.push(`Contains: ${p.allergens.map(allergenLabel).join(', ')}.`);
-  if (p.addOns.length) notes.push(`Add: ${p.addOns.map((a) => amountAndName(a.amountText, a.unit, a.name)).join('; ')}.`);
+  if (p.addOns.length) notes.push(`Add: ${p.addOns.map((a) => amountAndName(a.amountText, a.unit, a.name, system)).join('; ')}.`);
   return notes;
 }
 
-/** The snapshot's days as the PDF lays them out; portions per plate = the client's household multiplier. */
-export function pdfDays(days: readonly MyDayDto[], householdMultiplier: Decimal.Value): WeekPlanPdfDay[] {
+/**
+ * The snapshot's days as the PDF lays them out; portions per plate = the client's household multiplier. With the
+ * client's measure system, add-ons typed in the other one also give the client's amount.
+ */
+export function pdfDays(days: readonly MyDayDto[], householdMultiplier: Decimal.Value, system?: MeasureSystem): WeekPlanPdfDay[] {
   const portions = new Decimal(householdMultiplier).toString();
   return days.map((d) => ({
     date: d.date,
@@ -56,7 +60,7 @@ export function pdfDays(days: readonly MyDayDto[], householdMultiplier: Decimal.
       reheatSteps: p.reheatSteps.length ? p.reheatSteps : [...new Set(p.trays.flatMap((t) => t.reheatSteps))],
       macros: macros(p.macros),
       eatBy: p.eatBy,
-      notes: plateNotes(p),
+      notes: plateNotes(p, system),
     })),
     totals: macros(d.totals),
   }));
@@ -85,6 +89,9 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
   if (!mine?.days.length) throw new NotFound("This client's plates in the published week");
   const ws = await em.findOneOrFail(Workspace, wsId);
   const t = plannedTargets(client, await mealSlotsOf(em, wsId));
+  // The client's own measure preference when they have an account (the plan is theirs to read); else as typed.
+  const account = await em.findOne(Membership, { clientId: client.id, workspace: wsId, role: 'client' }, { populate: ['user'] });
+  const system = account ? (account.user.$.unitSystem === 'metric' ? 'metric' : 'us') : undefined;
   return {
     client,
     weekName: pub.snapshot.name,
@@ -94,7 +101,7 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
       clientName: client.name,
       weekStart: pub.snapshot.startDate,
       targets: { kcal: t.targetKcal, fatG: t.fatG, proteinG: t.proteinG, netCarbsG: t.netCarbCapG },
-      days: pdfDays(mine.days, client.householdMultiplier),
+      days: pdfDays(mine.days, client.householdMultiplier, system),
       note: p.note ?? null,
       cautions: CAUTIONS.map((c) => ({ text: c.text, source: c.source })),
     },

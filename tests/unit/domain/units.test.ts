@@ -6,6 +6,7 @@ import { describe, expect, it } from 'vitest';
 import {
   AmountParseError,
   amountAndName,
+  amountInSystem,
   amountWithUnit,
   GRAMS_PER_UNIT,
   MASS_UNITS,
@@ -309,6 +310,28 @@ describe('an amount with its unit, as people read it', () => {
     expect(amountAndName('1', 'floz', 'Heavy cream')).toBe('1 fl oz Heavy cream');
     expect(amountAndName('2', 'each', 'Cream-cheese almond batter slab')).toBe('2 × Cream-cheese almond batter slab');
     expect(amountAndName('1', 'oz', 'Oz. brand spread')).toBe('1 oz Oz. brand spread');
+  });
+
+  it("gives a typed mass or volume in the reader's other system, checked against js-quantities", () => {
+    // Kitchen amounts of the exact conversions (NIST Handbook 44 App. C; js-quantities as the second reference).
+    const g = (oz: number) => Qty(oz, 'oz').to('g').scalar;
+    expect(g(3)).toBeCloseTo(85.05, 2);
+    expect(amountInSystem('3', 'oz', 'metric')).toBe('85 g');
+    expect(Qty(0.5, 'cu').to('ml').scalar).toBeCloseTo(118.29, 2);
+    expect(amountInSystem('1/2', 'cup', 'metric')).toBe('118 mL');
+    expect(Qty(100, 'g').to('oz').scalar).toBeCloseTo(3.527, 3);
+    expect(amountInSystem('100', 'g', 'us')).toBe('3 ½ oz'); // to the nearest ¼ oz (our kitchen grid)
+    expect(amountInSystem('1', 'lb', 'metric')).toBe(`${Math.round(Qty(1, 'lb').to('g').scalar)} g`);
+    // Nothing to convert: the reader's own system, a piece, a range, text that does not parse.
+    expect(amountInSystem('3', 'oz', 'us')).toBeNull();
+    expect(amountInSystem('2', 'slice', 'metric')).toBeNull();
+    expect(amountInSystem('2', 'each', 'metric')).toBeNull();
+    expect(amountInSystem('1-2', 'oz', 'metric')).toBeNull();
+    expect(amountInSystem('some', 'oz', 'metric')).toBeNull();
+    // Beside the typed amount, before the name.
+    expect(amountAndName('3', 'oz', 'Smoked salmon', 'metric')).toBe('3 oz (85 g) Smoked salmon');
+    expect(amountAndName('3', 'oz', 'Smoked salmon', 'us')).toBe('3 oz Smoked salmon');
+    expect(amountAndName('1/4', 'avocado', 'Avocado, raw', 'metric')).toBe('1/4 Avocado, raw');
   });
 
   it('counts whole pieces with ×, and keeps a piece name as stored', () => {

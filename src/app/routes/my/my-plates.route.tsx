@@ -3,6 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { allergenLabel } from '@shared/domain/allergens';
 import { thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
 import { amountAndName } from '@shared/domain/units';
+import { useMe } from '@/features/auth/hooks/use-me';
 import type { MyPlateDto } from '@shared/schemas/weeks.schema';
 import { localToday, myWeekQuery } from '@/features/weeks/api/weeks.queries';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
@@ -31,6 +32,7 @@ function Macros({ m }: { m: MyPlateDto['macros'] }) {
 }
 
 function PlateCard({ plate }: { plate: MyPlateDto }) {
+  const { unitSystem } = useMe();
   return (
     <Card className="flex flex-col gap-3">
       <p className="text-sm uppercase tracking-wide text-ink-faint">{plate.slot}</p>
@@ -55,7 +57,7 @@ function PlateCard({ plate }: { plate: MyPlateDto }) {
           ))}
           {plate.addOns.map((a, i) => (
             <li key={i}>
-              {amountAndName(a.amountText, a.unit, a.name)} {a.note && <span className="text-ink-faint">({a.note})</span>}
+              {amountAndName(a.amountText, a.unit, a.name, unitSystem)} {a.note && <span className="text-ink-faint">({a.note})</span>}
             </li>
           ))}
         </ul>

@@ -79,7 +79,7 @@ export function Component() {
                     ))}
                     {p.addOns.map((a, i) => (
                       <li key={`a${i}`}>
-                        {amountAndName(a.amountText, a.unit, a.ingredientName)} {a.note && <span className="text-ink-faint">({a.note})</span>}
+                        {amountAndName(a.amountText, a.unit, a.ingredientName, me.unitSystem)} {a.note && <span className="text-ink-faint">({a.note})</span>}
                       </li>
                     ))}
                   </ul>
