@@ -2,7 +2,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import type { MeDto } from '@shared/schemas/auth.schema';
 import { meQuery } from '@/features/auth/api/auth.queries';
-import { AddPantryItem } from '@/features/shopping/components/pantry-forms';
+import { AddPantryItem, startingAmount } from '@/features/shopping/components/pantry-forms';
 import { jsonResponse, renderInApp, testQueryClient } from './render';
 
 // The assistant's "Add what you have" form; invented people and ingredients (only the fields the form reads).
@@ -52,5 +52,12 @@ describe('adding to the pantry', () => {
     expect(unit().value).toBe('g');
     choose(eggs.id);
     await waitFor(() => expect(unit().value).toBe('large'));
+  });
+
+  it("opens a row's amount in the reader's unit: ounces for a US reader, as stored otherwise", () => {
+    // 100 g ÷ 28.349523125 g per oz (NIST Handbook 44 App. C) = 3.527… oz, to 0.01.
+    expect(startingAmount({ amount: 100, unit: 'g' }, 'us')).toEqual({ amount: '3.53', unit: 'oz' });
+    expect(startingAmount({ amount: 100, unit: 'g' }, 'metric')).toEqual({ amount: '100', unit: 'g' });
+    expect(startingAmount({ amount: 18, unit: 'large' }, 'us')).toEqual({ amount: '18', unit: 'large' });
   });
 });

@@ -14,12 +14,13 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError } from '@/lib/problem';
-import { unitSymbol } from '@shared/domain/units';
+import { GRAMS_PER_UNIT, unitSymbol } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { pantryIngredientSearchQuery } from '../api/shopping.queries';
 import { useCreatePantryItem, useDeletePantryItem, useUpdatePantryItem } from '../api/use-pantry-mutations';
 
 const MASS = ['g', 'kg', 'oz', 'lb'];
+const GRAMS_PER_OZ = GRAMS_PER_UNIT.oz.toNumber();
 const VOLUME = ['ml', 'l', 'tsp', 'tbsp', 'cup', 'pint', 'quart'];
 
 /** Units an ingredient can be counted in: mass always, volume with a density, its pieces. */
@@ -97,12 +98,23 @@ export function AddPantryItem() {
   );
 }
 
+/**
+ * Where a pantry row's amount field starts: a US reader's grams in ounces (to 0.01 oz), anything else as stored
+ * (grams for a metric reader, pieces for count-bought items).
+ */
+export function startingAmount(item: Pick<PantryItemDto, 'amount' | 'unit'>, system: 'us' | 'metric'): { amount: string; unit: string } {
+  if (item.unit === 'g' && system === 'us') return { amount: String(Math.round((item.amount / GRAMS_PER_OZ) * 100) / 100), unit: 'oz' };
+  return { amount: String(Math.round(item.amount * 100) / 100), unit: item.unit };
+}
+
 /** One pantry row: change the amount (in any unit the ingredient knows) or remove it. */
 export function PantryRow({ item }: { item: PantryItemDto }) {
   const update = useUpdatePantryItem();
   const remove = useDeletePantryItem();
-  const [amount, setAmount] = useState(String(Math.round(item.amount * 100) / 100));
-  const [unit, setUnit] = useState(item.unit);
+  const { unitSystem } = useMe();
+  const start = startingAmount(item, unitSystem);
+  const [amount, setAmount] = useState(start.amount);
+  const [unit, setUnit] = useState(start.unit);
   const [error, setError] = useState<string | null>(null);
   const units = [...new Set([item.unit, ...MASS])];
   const save = () => {
