@@ -94,7 +94,7 @@ export function Component() {
               onSaved={() => setNotice('Saved.')}
             />
           ) : (
-            <RecipeCard tray={tray} />
+            <RecipeCard tray={tray} system={me.unitSystem} />
           )}
         </div>
         <div className="flex flex-col gap-6">
@@ -106,7 +106,7 @@ export function Component() {
       </div>
       {view === 'edit' && isCoach && (
         <div className="hidden print:block">
-          <RecipeCard tray={tray} />
+          <RecipeCard tray={tray} system={me.unitSystem} />
         </div>
       )}
       <ScalePanel tray={tray} system={me.unitSystem} />

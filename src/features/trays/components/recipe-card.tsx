@@ -3,8 +3,11 @@ import { amountAndName } from '@shared/domain/units';
 import { PAN_LINING_LABELS, type TrayDto } from '@shared/schemas/trays.schema';
 import { Card } from '@/components/ui/states';
 
-/** The recipe as a printable card (the print stylesheet hides navigation and buttons marked `no-print`). */
-export function RecipeCard({ tray }: { tray: TrayDto }) {
+/**
+ * The recipe as a printable card (the print stylesheet hides navigation and buttons marked `no-print`); with the
+ * reader's `system`, a line typed in the other one also gives theirs ("16 oz (454 g) Cream cheese").
+ */
+export function RecipeCard({ tray, system }: { tray: TrayDto; system?: 'us' | 'metric' }) {
   const cut =
     tray.cutPlan.kind === 'grid'
       ? `${tray.cutPlan.rows} rows × ${tray.cutPlan.columns} columns (${tray.portions} portions)`
@@ -42,7 +45,7 @@ export function RecipeCard({ tray }: { tray: TrayDto }) {
       <ul className="num mb-3 list-disc pl-5">
         {tray.lines.map((l) => (
           <li key={l.id}>
-            {amountAndName(l.amountText, l.unit, l.ingredientName)}
+            {amountAndName(l.amountText, l.unit, l.ingredientName, system)}
             {l.note && <span className="text-ink-soft">, {l.note}</span>}
           </li>
         ))}
