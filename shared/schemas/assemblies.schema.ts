@@ -47,6 +47,11 @@ export type UpdateAssemblyValues = z.output<typeof updateAssemblySchema>;
 
 export const assemblyIdParams = z.object({ id: z.coerce.number().int().positive() });
 
+/** The plate editor's live numbers: the parts of an unsaved plate (nothing is written). */
+export const platePreviewSchema = assemblyValuesSchema.pick({ trays: true, addOns: true });
+export type PlatePreviewInput = z.input<typeof platePreviewSchema>;
+export type PlatePreviewValues = z.output<typeof platePreviewSchema>;
+
 export interface AssemblyTrayItemDto {
   trayId: number;
   trayName: string;
@@ -73,6 +78,16 @@ export interface PlateMacrosDto {
   carbsG: number;
   fiberG: number;
   netCarbsG: number;
+}
+
+/** What an unsaved plate adds up to (POST /api/assemblies/preview). */
+export interface PlatePreviewDto {
+  macros: PlateMacrosDto;
+  allergens: AllergenCode[];
+  /** False when a part lacks a fact to be weighed (its nutrients are left out). */
+  complete: boolean;
+  /** Each add-on's weight in grams, in the order sent (null when it cannot be weighed). */
+  addOnGrams: (number | null)[];
 }
 
 export interface AssemblyDto {

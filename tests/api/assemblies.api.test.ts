@@ -46,6 +46,33 @@ describe('plates (assemblies)', () => {
     ]);
   });
 
+  it('previews an unsaved plate: the same numbers the saved plate gets, a 400 naming a part it cannot use, nothing written', async () => {
+    const coach = await coachWorkspace(app);
+    const cheese = await makeIngredient(coach); // 350 kcal, 30 g fat, 20 g protein per 100 g; milk; slice 21 g
+    const tray = await makeTray(coach, {}, cheese.id); // 8 oz cut 4 × 4
+    const parts = { trays: [{ trayId: tray.id, portions: 2 }], addOns: [{ ingredientId: cheese.id, amountText: '1', unit: 'slice', note: '' }] };
+    const before = await sql<{ n: string }>('select count(*) as n from assembly');
+    const preview = await coach.agent.post('/api/assemblies/preview').send(parts).expect(200);
+    // By hand, as above: 2 × 8 oz / 16 + 21 g = 49.349523125 g of the ingredient (NIST ounce).
+    const grams = (2 * 8 * OZ_G) / 16 + 21;
+    expect(preview.body.macros.kcal).toBeCloseTo((grams * 350) / 100, 1);
+    expect(preview.body.macros.proteinG).toBeCloseTo((grams * 20) / 100, 1);
+    expect(preview.body).toMatchObject({ allergens: ['milk'], complete: true, addOnGrams: [21] });
+    expect(await sql('select count(*) as n from assembly')).toEqual(before);
+    // Saved, the plate has the numbers the preview showed.
+    const saved = await coach.agent.post('/api/assemblies').send({ name: 'Previewed plate', ...parts }).expect(201);
+    expect(saved.body.macros).toEqual(preview.body.macros);
+    // A part it cannot use: the field is named, as on save.
+    const bad = await coach.agent
+      .post('/api/assemblies/preview')
+      .send({ trays: [], addOns: [{ ingredientId: cheese.id, amountText: '1', unit: 'cup', note: '' }] })
+      .expect(400);
+    expect(Object.keys(bad.body.errors)).toEqual(['addOns.0.unit']);
+    // Nothing on the plate yet: zeros, not an error.
+    const empty = await coach.agent.post('/api/assemblies/preview').send({ trays: [], addOns: [] }).expect(200);
+    expect(empty.body).toMatchObject({ macros: { kcal: 0, proteinG: 0 }, allergens: [], complete: true, addOnGrams: [] });
+  });
+
   it('answers 400 naming the line for a tray of another workspace or an amount that cannot be weighed', async () => {
     const coach = await coachWorkspace(app);
     const other = await coachWorkspace(app);

@@ -82,6 +82,10 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await page.getByRole('button', { name: 'Add a tray portion' }).click();
   await page.getByLabel('Base tray').selectOption({ label: trayName });
   await page.getByLabel('Portions').fill('1');
+  // The plate's numbers while it is being made: one portion of the tray, with the tray's egg and milk.
+  const platePreview = page.locator('div[aria-live="polite"]').filter({ hasText: 'This plate adds up to' });
+  await expect(platePreview.getByText(/\d kcal/)).toBeVisible({ timeout: 10_000 });
+  await expect(platePreview.getByText(/Contains: .*Milk, Egg|Contains: .*Egg, Milk/)).toBeVisible();
   await expectNoSeriousA11yViolations(page, 'plates editor');
   await page.getByRole('button', { name: 'Save plate' }).click();
   await expect(page.getByRole('heading', { name: plateName })).toBeVisible();

@@ -103,6 +103,7 @@ export const MATRIX: Record<string, MatrixRow> = {
   // Plates (issue 7)
   'GET /api/assemblies': R(['coach', 'assistant']),
   'POST /api/assemblies': R(['coach']),
+  'POST /api/assemblies/preview': R(['coach'], { body: (ctx) => ({ trays: [], addOns: [{ ingredientId: ctx.ids.ingredient, amountText: '1', unit: 'oz' }] }) }),
   'GET /api/assemblies/:id': R(['coach', 'assistant'], {
     prepare: async (ctx) => {
       const tray = await makeTray(ctx.coachA);

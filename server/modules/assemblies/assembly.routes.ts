@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { assemblyIdParams, createAssemblySchema, updateAssemblySchema } from '@shared/schemas/assemblies.schema.js';
+import { assemblyIdParams, createAssemblySchema, platePreviewSchema, updateAssemblySchema } from '@shared/schemas/assemblies.schema.js';
 import { actorOf, allow } from '../../http/authz.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
@@ -19,6 +19,13 @@ export function assemblyRoutes() {
       res.status(201);
       return dto;
     }),
+  );
+
+  // The plate editor's live numbers (nothing is written).
+  r.post(
+    '/assemblies/preview',
+    allow('coach'),
+    validated({ body: platePreviewSchema }, ({ body }, req) => plates.previewAssembly(emOf(req), actorOf(req), body)),
   );
 
   r.get(

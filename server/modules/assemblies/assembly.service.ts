@@ -1,13 +1,13 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { parseAmount } from '@shared/domain/units.js';
-import type { AssemblyDto, AssemblyValues, UpdateAssemblyValues } from '@shared/schemas/assemblies.schema.js';
+import type { AssemblyDto, AssemblyValues, PlatePreviewDto, PlatePreviewValues, UpdateAssemblyValues } from '@shared/schemas/assemblies.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Tray } from '../trays/tray.entity.js';
 import { gramsOfLine, loadTrayIngredients } from '../trays/tray-nutrition.js';
 import { Assembly, AssemblyItem, type IAssembly } from './assembly.entity.js';
 import { presentAssembly } from './assembly.presenter.js';
-import { loadPlateContext, type PlateItemRow, type PlateRow } from './plate-facts.js';
+import { addOnGrams, loadPlateContext, plateFacts, type PlateItemRow, type PlateRow } from './plate-facts.js';
 import { preparedRows } from '../../db/prepared.js';
 
 /**
@@ -68,7 +68,7 @@ export async function getAssembly(em: EntityManager, actor: Actor, id: number): 
 }
 
 /** Trays must be the workspace's, add-ons usable ingredients whose amount can be weighed. */
-async function checkValues(em: EntityManager, actor: Actor, v: AssemblyValues) {
+async function checkValues(em: EntityManager, actor: Actor, v: Pick<AssemblyValues, 'trays' | 'addOns'>) {
   const errors: Record<string, string[]> = {};
   const trayIds = v.trays.map((t) => t.trayId);
   const trays = trayIds.length ? await em.find(Tray, { id: { $in: trayIds }, workspace: actor.workspaceId }) : [];
@@ -105,6 +105,35 @@ function writeItems(em: EntityManager, a: IAssembly, v: AssemblyValues) {
       note: x.note ?? '',
     } as never);
   }
+}
+
+/**
+ * The numbers of a plate being edited, before it is saved: the same checks and facts as a saved plate (a 400 names
+ * the part that cannot be used), nothing written.
+ */
+export async function previewAssembly(em: EntityManager, actor: Actor, v: PlatePreviewValues): Promise<PlatePreviewDto> {
+  await checkValues(em, actor, v);
+  const items: PlateItemRow[] = [
+    ...v.trays.map((t, i) => ({ id: -1 - i, position: i, tray: { id: t.trayId }, portions: String(t.portions), amountText: '', unit: '' })),
+    ...v.addOns.map((x, j) => ({
+      id: -1 - v.trays.length - j,
+      position: v.trays.length + j,
+      ingredient: { id: x.ingredientId },
+      amountText: x.amountText,
+      amount: parseAmount(x.amountText).value.toString(),
+      unit: x.unit,
+      note: x.note ?? '',
+    })),
+  ];
+  const draft: PlateRow = { id: 0, name: '', version: 0, updatedAt: new Date(0), items };
+  const ctx = await loadPlateContext(em, actor, [draft]);
+  const facts = plateFacts(draft, ctx);
+  return {
+    macros: facts.macros,
+    allergens: facts.allergens,
+    complete: facts.complete,
+    addOnGrams: items.filter((i) => i.ingredient).map((i) => addOnGrams(i, ctx)?.toDecimalPlaces(1).toNumber() ?? null),
+  };
 }
 
 export async function createAssembly(em: EntityManager, actor: Actor, v: AssemblyValues): Promise<AssemblyDto> {

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { AssemblyDto, AssemblyInput } from '@shared/schemas/assemblies.schema';
+import type { AssemblyDto, AssemblyInput, PlatePreviewDto, PlatePreviewInput } from '@shared/schemas/assemblies.schema';
 import { api } from '@/lib/api-client';
 import { assemblyKeys } from './assemblies.keys';
 
@@ -21,5 +21,13 @@ export function useDeleteAssembly() {
   return useMutation({
     mutationFn: (id: number) => api.delete<void>(`/assemblies/${id}`),
     onSuccess: () => qc.invalidateQueries({ queryKey: assemblyKeys.all }),
+  });
+}
+
+/** The plate editor's live numbers (POST /api/assemblies/preview); errors are shown beside them, not toasted. */
+export function usePlatePreview() {
+  return useMutation({
+    mutationFn: (input: PlatePreviewInput) => api.post<PlatePreviewDto>('/assemblies/preview', input),
+    meta: { silent: true },
   });
 }

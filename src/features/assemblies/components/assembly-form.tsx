@@ -7,6 +7,7 @@ import { ingredientOptionsQuery, trayOptionsQuery } from '../api/assemblies.quer
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
+import { PlatePreview, previewParts } from './plate-preview';
 
 export const emptyAssembly: AssemblyInput = { name: '', description: '', trays: [], addOns: [], assemblySteps: [], reheatSteps: [] };
 
@@ -82,6 +83,8 @@ export function AssemblyForm({ initial, names = {}, busy, formError, onSubmit }:
   const [steps, setSteps] = useState((initial.assemblySteps ?? []).join('\n'));
   const [reheat, setReheat] = useState((initial.reheatSteps ?? []).join('\n'));
   const err = form.formState.errors;
+  const watchedTrays = form.watch('trays');
+  const watchedAddOns = form.watch('addOns');
   return (
     <form
       noValidate
@@ -146,6 +149,8 @@ export function AssemblyForm({ initial, names = {}, busy, formError, onSubmit }:
           </Button>
         </div>
       </fieldset>
+
+      <PlatePreview parts={previewParts({ trays: watchedTrays, addOns: watchedAddOns })} />
 
       <TextAreaField label="Assembly steps (one per line)" rows={3} value={steps} onChange={(e) => setSteps(e.target.value)} />
       <TextAreaField label="Reheat steps (one per line)" rows={3} value={reheat} onChange={(e) => setReheat(e.target.value)} hint="Reheat until every part reaches 165 °F (74 °C)." />

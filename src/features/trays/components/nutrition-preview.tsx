@@ -1,8 +1,8 @@
-import { useEffect, useMemo, useState } from 'react';
 import { energyShares } from '@shared/domain/nutrition';
 import type { RecipeCalcInput } from '@shared/schemas/ingredients.schema';
 import { Notice } from '@/components/ui/states';
 import { ApiError } from '@/lib/problem';
+import { useLivePreview } from '@/lib/use-live-preview';
 import { useRecipePreview } from '../api/use-tray-mutations';
 
 /**
@@ -11,18 +11,7 @@ import { useRecipePreview } from '../api/use-tray-mutations';
  */
 export function NutritionPreview({ input }: { input: RecipeCalcInput | null }) {
   const preview = useRecipePreview();
-  const [shown, setShown] = useState<string | null>(null);
-  const key = useMemo(() => (input ? JSON.stringify(input) : null), [input]);
-
-  useEffect(() => {
-    if (!key || key === shown) return;
-    const t = setTimeout(() => {
-      setShown(key);
-      preview.mutate(JSON.parse(key) as RecipeCalcInput);
-    }, 500);
-    return () => clearTimeout(t);
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [key]);
+  useLivePreview(input, preview);
 
   if (!input) {
     return <p className="text-sm text-ink-faint">Add ingredients with amounts to see the numbers per portion.</p>;

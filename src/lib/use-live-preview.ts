@@ -1,0 +1,21 @@
+import { useEffect, useMemo, useState } from 'react';
+import type { UseMutationResult } from '@tanstack/react-query';
+
+/**
+ * Sends a form's current input to a preview mutation once the typing stops (`delayMs` after the last change), and
+ * only when it differs from the input last sent. `null` sends nothing (the form has nothing to work out yet).
+ */
+export function useLivePreview<I, O>(input: I | null, preview: UseMutationResult<O, unknown, I>, delayMs = 500): void {
+  const [sent, setSent] = useState<string | null>(null);
+  const key = useMemo(() => (input ? JSON.stringify(input) : null), [input]);
+  useEffect(() => {
+    if (!key || key === sent) return;
+    const t = setTimeout(() => {
+      setSent(key);
+      preview.mutate(JSON.parse(key) as I);
+    }, delayMs);
+    return () => clearTimeout(t);
+    // The mutation object changes identity on every state change; the key alone decides.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [key]);
+}
