@@ -12,3 +12,21 @@ export function counted(n: number, one: string, other = `${one}s`): string {
 export function agrees(n: number, one: string, other: string): string {
   return rules.select(n) === 'one' ? one : other;
 }
+
+/** Lower case without accents: "Tomás" and "tomas" read the same to a search box (Unicode NFD, marks dropped). */
+function folded(s: string): string {
+  return s.normalize('NFD').replace(/\p{M}/gu, '').toLowerCase();
+}
+
+/**
+ * The items whose texts contain every word of `query`, in any order, ignoring case and accents; all of them for an
+ * empty query. `filterByText(clients, 'egg ana', (c) => [c.name, ...c.allergens])`.
+ */
+export function filterByText<T>(items: readonly T[], query: string, texts: (item: T) => readonly string[]): T[] {
+  const words = folded(query).split(/\s+/).filter(Boolean);
+  if (words.length === 0) return [...items];
+  return items.filter((item) => {
+    const hay = folded(texts(item).join(' '));
+    return words.every((w) => hay.includes(w));
+  });
+}

@@ -11,8 +11,65 @@ import { Card, EmptyState, PageHeader, QueryView, Skeleton } from '@/components/
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
+import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
+import { filterByText } from '@/lib/words';
 
 const isFull = (c: ClientListItemDto): c is ClientDto => 'targets' in c;
+
+/** The clients as a table, with a filter box once the list is long. */
+function ClientList({ clients }: { clients: ClientListItemDto[] }) {
+  const [find, setFind] = useState('');
+  const shown = filterByText(clients, find, (c) => [c.name, ...(isFull(c) ? [...c.allergens.map(allergenLabel), ...c.dislikes] : [])]);
+  return (
+    <>
+      {clients.length >= FILTER_FROM && (
+        <ListFilter label="Find a client" placeholder="name, allergen or dislike" value={find} onChange={setFind} shown={shown.length} total={clients.length} className="mb-3" />
+      )}
+      {shown.length === 0 ? (
+        <p className="text-ink-soft">No client matches “{find.trim()}”.</p>
+      ) : (
+        <div className="overflow-x-auto">
+          <table className="w-full text-left">
+            <thead>
+              <tr className="border-b border-line text-sm text-ink-faint">
+                <th className="py-2">Name</th>
+                <th className="text-right">Portions per plate</th>
+                <th className="text-right">kcal</th>
+                <th className="text-right">Net-carb cap</th>
+                <th className="text-right">Protein</th>
+                <th className="pl-6">Allergens</th>
+                <th className="pl-4">Account</th>
+              </tr>
+            </thead>
+            <tbody>
+              {shown.map((c) => (
+                <tr key={c.id} className="border-b border-line">
+                  <td className="py-2">
+                    <Link className="font-bold underline" to={paths.client(c.id)}>
+                      {c.name}
+                    </Link>
+                  </td>
+                  <td className="num text-right">{c.householdMultiplier}</td>
+                  {isFull(c) ? (
+                    <>
+                      <td className="num text-right">{c.targets.targetKcal}</td>
+                      <td className="num text-right">{c.targets.netCarbCapG} g</td>
+                      <td className="num text-right">{c.targets.proteinG} g</td>
+                      <td className="pl-6">{c.allergens.map(allergenLabel).join(', ') || '—'}</td>
+                      <td className="pl-4">{c.account ? 'Joined' : 'Not invited'}</td>
+                    </>
+                  ) : (
+                    <td colSpan={5} />
+                  )}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+    </>
+  );
+}
 
 export function Component() {
   const list = useQuery(clientsQuery());
@@ -57,46 +114,7 @@ export function Component() {
             </EmptyState>
           }
         >
-          {(data) => (
-            <div className="overflow-x-auto">
-              <table className="w-full text-left">
-                <thead>
-                  <tr className="border-b border-line text-sm text-ink-faint">
-                    <th className="py-2">Name</th>
-                    <th className="text-right">Portions per plate</th>
-                    <th className="text-right">kcal</th>
-                    <th className="text-right">Net-carb cap</th>
-                    <th className="text-right">Protein</th>
-                    <th className="pl-6">Allergens</th>
-                    <th className="pl-4">Account</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {data.map((c) => (
-                    <tr key={c.id} className="border-b border-line">
-                      <td className="py-2">
-                        <Link className="font-bold underline" to={paths.client(c.id)}>
-                          {c.name}
-                        </Link>
-                      </td>
-                      <td className="num text-right">{c.householdMultiplier}</td>
-                      {isFull(c) ? (
-                        <>
-                          <td className="num text-right">{c.targets.targetKcal}</td>
-                          <td className="num text-right">{c.targets.netCarbCapG} g</td>
-                          <td className="num text-right">{c.targets.proteinG} g</td>
-                          <td className="pl-6">{c.allergens.map(allergenLabel).join(', ') || '—'}</td>
-                          <td className="pl-4">{c.account ? 'Joined' : 'Not invited'}</td>
-                        </>
-                      ) : (
-                        <td colSpan={5} />
-                      )}
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            </div>
-          )}
+          {(data) => <ClientList clients={data} />}
         </QueryView>
       </Card>
     </div>

@@ -12,6 +12,9 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError } from '@/lib/problem';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
+import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
+import { filterByText } from '@/lib/words';
+import { allergenLabel } from '@shared/domain/allergens';
 
 function Editor({ plate, onDone }: { plate: AssemblyDto | null; onDone: () => void }) {
   const save = useSaveAssembly(plate?.id ?? null);
@@ -44,6 +47,7 @@ export function Component() {
   const del = useDeleteAssembly();
   const [editing, setEditing] = useState<AssemblyDto | 'new' | null>(null);
   const [error, setError] = useState<string | null>(null);
+  const [find, setFind] = useState('');
   const coach = me.role === 'coach';
   return (
     <div className="flex flex-col gap-6">
@@ -63,42 +67,54 @@ export function Component() {
           </EmptyState>
         }
       >
-        {(data) => (
-          <ul className="grid gap-4 md:grid-cols-2">
-            {data.map((p) => (
-              <li key={p.id}>
-                <Card className="flex h-full flex-col gap-2">
-                  <h2 className="text-xl">{p.name}</h2>
-                  <PlateMacros macros={p.macros} allergens={p.allergens} />
-                  {!p.complete && <Notice tone="warn" title="Some parts could not be weighed: their nutrients are left out." />}
-                  <ul className="list-disc pl-5 text-sm">
-                    {p.trays.map((t) => (
-                      <li key={`t${t.trayId}`}>
-                        {t.portions} × {t.trayName}
-                      </li>
-                    ))}
-                    {p.addOns.map((a, i) => (
-                      <li key={`a${i}`}>
-                        {amountAndName(a.amountText, a.unit, a.ingredientName, me.unitSystem)} {a.note && <span className="text-ink-faint">({a.note})</span>}
-                      </li>
-                    ))}
-                  </ul>
-                  {coach && (
-                    <EditDeleteButtons
-                      name={p.name}
-                      className="mt-auto flex gap-2"
-                      onEdit={() => setEditing(p)}
-                      onDelete={() => {
-                        setError(null);
-                        del.mutate(p.id, { onError: (e) => setError(isApiError(e, 409) ? `${p.name} is on a week board: take it off first.` : errorMessage(e)) });
-                      }}
-                    />
-                  )}
-                </Card>
-              </li>
-            ))}
-          </ul>
-        )}
+        {(data) => {
+          const shown = filterByText(data, find, (p) => [p.name, ...p.allergens.map(allergenLabel), ...p.trays.map((t) => t.trayName), ...p.addOns.map((x) => x.ingredientName)]);
+          return (
+            <>
+              {data.length >= FILTER_FROM && (
+                <ListFilter label="Find a plate" placeholder="name, base tray, add-on or allergen" value={find} onChange={setFind} shown={shown.length} total={data.length} />
+              )}
+              {shown.length === 0 ? (
+                <p className="text-ink-soft">No plate matches “{find.trim()}”.</p>
+              ) : (
+                <ul className="grid gap-4 md:grid-cols-2">
+                  {shown.map((p) => (
+                    <li key={p.id}>
+                      <Card className="flex h-full flex-col gap-2">
+                        <h2 className="text-xl">{p.name}</h2>
+                        <PlateMacros macros={p.macros} allergens={p.allergens} />
+                        {!p.complete && <Notice tone="warn" title="Some parts could not be weighed: their nutrients are left out." />}
+                        <ul className="list-disc pl-5 text-sm">
+                          {p.trays.map((t) => (
+                            <li key={`t${t.trayId}`}>
+                              {t.portions} × {t.trayName}
+                            </li>
+                          ))}
+                          {p.addOns.map((a, i) => (
+                            <li key={`a${i}`}>
+                              {amountAndName(a.amountText, a.unit, a.ingredientName, me.unitSystem)} {a.note && <span className="text-ink-faint">({a.note})</span>}
+                            </li>
+                          ))}
+                        </ul>
+                        {coach && (
+                          <EditDeleteButtons
+                            name={p.name}
+                            className="mt-auto flex gap-2"
+                            onEdit={() => setEditing(p)}
+                            onDelete={() => {
+                              setError(null);
+                              del.mutate(p.id, { onError: (e) => setError(isApiError(e, 409) ? `${p.name} is on a week board: take it off first.` : errorMessage(e)) });
+                            }}
+                          />
+                        )}
+                      </Card>
+                    </li>
+                  ))}
+                </ul>
+              )}
+            </>
+          );
+        }}
       </QueryView>
     </div>
   );

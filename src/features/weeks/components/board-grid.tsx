@@ -17,8 +17,9 @@ import type { WordedWarning } from '@shared/domain/week-check';
 import { cellEatBy } from '@shared/domain/week-board';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
-import { counted } from '@/lib/words';
+import { counted, filterByText } from '@/lib/words';
 import { dayLabel } from '@/lib/dates';
+import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
 
 export const cellId = (clientId: number, date: string, slot: string) => `cell|${clientId}|${date}|${slot}`;
 
@@ -193,6 +194,8 @@ interface Props {
 export function BoardGrid({ board, busy, onEdit }: Props) {
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor));
   const [selected, setSelected] = useState<string | null>(null);
+  const [findPlate, setFindPlate] = useState('');
+  const palette = filterByText(board.plates, findPlate, (p) => [p.name, ...p.allergens.map(allergenLabel)]);
   const onSelect = useCallback((id: string) => setSelected((s) => (s === id ? null : id)), []);
   const plates = useMemo(() => new Map(board.plates.map((p) => [p.id, p])), [board.plates]);
   const cells = useMemo(() => new Map(board.cells.map((c) => [cellId(c.clientId, c.date, c.slot), c])), [board.cells]);
@@ -305,8 +308,11 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
         <aside className="2xl:w-56 2xl:shrink-0" aria-label="Plates">
           <h2 className="mb-2 text-lg font-bold">Plates</h2>
           <p className="mb-2 text-xs text-ink-faint">Drag onto a cell (or focus, press Space, move with the arrow keys, Space to drop).</p>
+          {board.plates.length >= FILTER_FROM && (
+            <ListFilter label="Find a plate" placeholder="name or allergen" value={findPlate} onChange={setFindPlate} shown={palette.length} total={board.plates.length} className="mb-2" />
+          )}
           <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3 2xl:flex 2xl:flex-col">
-            {board.plates.map((p) => (
+            {palette.map((p) => (
               <PaletteItem key={p.id} id={p.id} name={p.name} detail={`${Math.round(p.macros.kcal)} kcal · ${p.macros.netCarbsG} g net · ${p.macros.proteinG} g P`} />
             ))}
           </ul>
