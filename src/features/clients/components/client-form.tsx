@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { MAJOR_ALLERGENS } from '@shared/domain/allergens';
@@ -16,6 +16,7 @@ import {
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
+import { useMe } from '@/features/auth/hooks/use-me';
 
 export const emptyClient: CreateClientInput = {
   name: '',
@@ -107,6 +108,84 @@ function TargetsPreview({ values }: { values: Partial<CreateClientInput> }) {
   );
 }
 
+/** Centimetres per inch and kilograms per pound, exact by definition (NIST Handbook 44, Appendix C). */
+const CM_PER_IN = 2.54;
+const KG_PER_LB = 0.45359237;
+const round = (v: number, dp: number) => Math.round(v * 10 ** dp) / 10 ** dp;
+
+/** Stored centimetres as feet and inches (inches to 0.5), for a US reader; blank when not a number. */
+export function feetInches(cm: string): { ft: string; in: string } {
+  const total = Number(cm) / CM_PER_IN;
+  if (!cm.trim() || !Number.isFinite(total)) return { ft: '', in: '' };
+  const halfInches = Math.round(total * 2) / 2;
+  return { ft: String(Math.floor(halfInches / 12)), in: String(halfInches - 12 * Math.floor(halfInches / 12)) };
+}
+
+/** Feet and inches as typed → centimetres to 0.01 (what the profile stores); '' when neither is a number. */
+export function cmOf(ft: string, inches: string): string {
+  const f = ft.trim() ? Number(ft) : 0;
+  const i = inches.trim() ? Number(inches) : 0;
+  if ((!ft.trim() && !inches.trim()) || !Number.isFinite(f) || !Number.isFinite(i)) return '';
+  return String(round((f * 12 + i) * CM_PER_IN, 2));
+}
+
+export const poundsOf = (kg: string) => (kg.trim() && Number.isFinite(Number(kg)) ? String(round(Number(kg) / KG_PER_LB, 1)) : '');
+export const kgOf = (lb: string) => (lb.trim() && Number.isFinite(Number(lb)) ? String(round(Number(lb) * KG_PER_LB, 2)) : '');
+
+/**
+ * Height in feet and inches and weight in pounds for a coach who works in US measures; the profile keeps
+ * centimetres and kilograms (what the Mifflin–St Jeor equation takes), shown beside the fields.
+ */
+function UsBodyFields(props: {
+  heightCm: string;
+  weightKg: string;
+  errors: { height?: string; weight?: string };
+  onHeightCm: (cm: string) => void;
+  onWeightKg: (kg: string) => void;
+}) {
+  const start = feetInches(props.heightCm);
+  const [ft, setFt] = useState(start.ft);
+  const [inches, setInches] = useState(start.in);
+  const [lb, setLb] = useState(poundsOf(props.weightKg));
+  return (
+    <>
+      <div className="grid grid-cols-2 gap-2">
+        <TextField
+          label="Height (ft)"
+          inputMode="numeric"
+          value={ft}
+          error={props.errors.height}
+          hint={props.heightCm ? `= ${props.heightCm} cm` : undefined}
+          onChange={(e) => {
+            setFt(e.target.value);
+            props.onHeightCm(cmOf(e.target.value, inches));
+          }}
+        />
+        <TextField
+          label="Height (in)"
+          inputMode="decimal"
+          value={inches}
+          onChange={(e) => {
+            setInches(e.target.value);
+            props.onHeightCm(cmOf(ft, e.target.value));
+          }}
+        />
+      </div>
+      <TextField
+        label="Weight (lb)"
+        inputMode="decimal"
+        value={lb}
+        error={props.errors.weight}
+        hint={props.weightKg ? `= ${props.weightKg} kg` : undefined}
+        onChange={(e) => {
+          setLb(e.target.value);
+          props.onWeightKg(kgOf(e.target.value));
+        }}
+      />
+    </>
+  );
+}
+
 interface Props {
   initial: CreateClientInput;
   slots?: string[];
@@ -122,6 +201,7 @@ export function ClientForm({ initial, slots = [], busy, submitLabel, formError, 
   const values = useWatch({ control }) as Partial<CreateClientInput>;
   const err = formState.errors;
   const manual = values.targetMode === 'manual';
+  const { unitSystem } = useMe();
   return (
     <form noValidate onSubmit={form.handleSubmit((v) => onSubmit(v, form.setError))} className="flex flex-col gap-5">
       <fieldset className="grid gap-4 sm:grid-cols-2">
@@ -144,8 +224,20 @@ export function ClientForm({ initial, slots = [], busy, submitLabel, formError, 
           <option value="male">Male</option>
         </SelectField>
         <TextField label="Age (years)" inputMode="numeric" error={err.ageYears?.message} {...register('ageYears', { valueAsNumber: true })} />
-        <TextField label="Height (cm)" inputMode="decimal" error={err.heightCm?.message} {...register('heightCm')} />
-        <TextField label="Weight (kg)" inputMode="decimal" error={err.weightKg?.message} {...register('weightKg')} />
+        {unitSystem === 'us' ? (
+          <UsBodyFields
+            heightCm={String(values.heightCm ?? '')}
+            weightKg={String(values.weightKg ?? '')}
+            errors={{ height: err.heightCm?.message, weight: err.weightKg?.message }}
+            onHeightCm={(v) => form.setValue('heightCm', v, { shouldDirty: true, shouldValidate: formState.isSubmitted })}
+            onWeightKg={(v) => form.setValue('weightKg', v, { shouldDirty: true, shouldValidate: formState.isSubmitted })}
+          />
+        ) : (
+          <>
+            <TextField label="Height (cm)" inputMode="decimal" error={err.heightCm?.message} {...register('heightCm')} />
+            <TextField label="Weight (kg)" inputMode="decimal" error={err.weightKg?.message} {...register('weightKg')} />
+          </>
+        )}
         <SelectField label="Activity" error={err.activity?.message} {...register('activity')}>
           {ACTIVITY_LEVELS.map((a) => (
             <option key={a} value={a}>

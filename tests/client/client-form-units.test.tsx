@@ -1,0 +1,59 @@
+import { describe, expect, it, vi } from 'vitest';
+import { fireEvent, screen, waitFor } from '@testing-library/react';
+import Qty from 'js-quantities';
+import type { MeDto } from '@shared/schemas/auth.schema';
+import { meQuery } from '@/features/auth/api/auth.queries';
+import { ClientForm, cmOf, emptyClient, feetInches, kgOf, poundsOf } from '@/features/clients/components/client-form';
+import { renderInApp, testQueryClient } from './render';
+
+const coach = (unitSystem: MeDto['unitSystem']): MeDto => ({
+  id: 1,
+  email: 'coach@example.test',
+  name: 'Ada Coach',
+  role: 'coach',
+  workspaceId: 1,
+  workspaceName: 'Example Prep',
+  workspaceIsDemo: false,
+  clientId: null,
+  unitSystem,
+  tempUnit: 'F',
+});
+
+describe('height and weight in US measures', () => {
+  it('converts with the exact inch and pound (NIST Handbook 44 App. C), checked against js-quantities', () => {
+    expect(cmOf('5', '6')).toBe(String(Math.round(Qty('66 in').to('cm').scalar * 100) / 100)); // 167.64
+    expect(cmOf('5', '6')).toBe('167.64');
+    expect(cmOf('', '70')).toBe('177.8');
+    expect(cmOf('', '')).toBe('');
+    expect(feetInches('167.64')).toEqual({ ft: '5', in: '6' });
+    expect(feetInches('168')).toEqual({ ft: '5', in: '6' }); // 66.14 in, to the half inch
+    expect(kgOf('163')).toBe(String(Math.round(Qty('163 lb').to('kg').scalar * 100) / 100)); // 73.94
+    expect(poundsOf('73.94')).toBe('163'); // back to the pound typed
+    expect(kgOf('x')).toBe('');
+  });
+
+  it("a US coach types feet, inches and pounds; the profile gets centimetres and kilograms", async () => {
+    const qc = testQueryClient();
+    qc.setQueryData(meQuery().queryKey, coach('us'));
+    const onSubmit = vi.fn();
+    renderInApp(<ClientForm initial={{ ...emptyClient, name: 'Ana Example' }} submitLabel="Save client" onSubmit={onSubmit} />, qc);
+    fireEvent.change(screen.getByLabelText('Height (ft)'), { target: { value: '5' } });
+    fireEvent.change(screen.getByLabelText('Height (in)'), { target: { value: '6' } });
+    fireEvent.change(screen.getByLabelText('Weight (lb)'), { target: { value: '163' } });
+    expect(screen.getByText('= 167.64 cm')).toBeTruthy();
+    expect(screen.getByText('= 73.94 kg')).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Save client' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalled());
+    expect(onSubmit.mock.calls[0]![0]).toMatchObject({ heightCm: '167.64', weightKg: '73.94' });
+    expect(screen.queryByLabelText('Height (cm)')).toBeNull();
+  });
+
+  it('a metric coach types centimetres and kilograms', () => {
+    const qc = testQueryClient();
+    qc.setQueryData(meQuery().queryKey, coach('metric'));
+    renderInApp(<ClientForm initial={emptyClient} submitLabel="Save client" onSubmit={vi.fn()} />, qc);
+    expect((screen.getByLabelText('Height (cm)') as HTMLInputElement).value).toBe('165');
+    expect((screen.getByLabelText('Weight (kg)') as HTMLInputElement).value).toBe('70');
+    expect(screen.queryByLabelText('Weight (lb)')).toBeNull();
+  });
+});
