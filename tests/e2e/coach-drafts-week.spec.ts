@@ -119,9 +119,12 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
 
   // 4b. And with a mouse, on a screen wide enough to hold the plates beside the board: the plate lands where the
   //     pointer lets go of it (the live region names the cell under it first).
-  await page.setViewportSize({ width: 1600, height: 1000 });
+  //     Tall enough that neither the plate nor the cell sits in the band by the window's edge where a drag scrolls
+  //     the page (a scroll under a still pointer would move another cell beneath it).
+  await page.setViewportSize({ width: 1600, height: 1300 });
   const third = danaCells.nth(2);
   await expect(third).toHaveAccessibleName(/: empty$/);
+  await page.evaluate(() => window.scrollTo(0, 0));
   await third.scrollIntoViewIfNeeded();
   const from = (await item.boundingBox())!;
   const to = (await third.boundingBox())!;
