@@ -51,6 +51,11 @@ export interface WeekPlanPdfData {
   /** ISO date of the week's first day. */
   weekStart: string;
   targets: PdfTargets;
+  /**
+   * What the targets cover, when not the whole day: e.g. "breakfast and lunch, 50 % of your day" (the board plans
+   * those meals; the targets are their share of the day's).
+   */
+  targetsCover?: string | null;
   days: WeekPlanPdfDay[];
   /** The coach's personal note, if any. */
   note?: string | null;

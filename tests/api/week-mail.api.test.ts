@@ -275,6 +275,9 @@ describe('week-plan PDF downloads', () => {
     const text = await pdfText(pdf.body as Buffer);
     expect(text).toContain(w.plateB.name);
     expect(text).toContain(w.ben.name);
+    // The board plans breakfast only: the targets are breakfast's share of the day (30 % by default), and say so.
+    expect(text).toContain('Targets for breakfast, 30 % of your day');
+    expect(text).not.toContain('Daily targets');
     // Dee has no plates in the published week.
     await coach.agent.get(`/api/weeks/${w.weekId}/clients/${w.dee.id}/plan.pdf`).expect(404);
 

@@ -21,13 +21,14 @@ const COLUMNS: Column[] = [
   ...MACROS.map((m) => ({ header: m.label, width: 0.102, align: 'right' as const })),
 ];
 
-function targetLine(t: PdfTargets): string {
+function targetLine(t: PdfTargets, cover?: string | null): string {
   const parts: string[] = [];
   if (t.kcal != null) parts.push(`${fixed(t.kcal, 0)} kcal`);
   if (t.fatG != null) parts.push(`fat ${fixed(t.fatG, 1)} g`);
   if (t.proteinG != null) parts.push(`protein ${fixed(t.proteinG, 1)} g`);
   if (t.netCarbsG != null) parts.push(`net carbs at most ${fixed(t.netCarbsG, 1)} g`);
-  return parts.length ? `Daily targets: ${parts.join(' · ')}` : 'No daily targets set.';
+  if (!parts.length) return 'No daily targets set.';
+  return cover ? `Targets for ${cover}: ${parts.join(' · ')}` : `Daily targets: ${parts.join(' · ')}`;
 }
 
 /** The client's week: per day a macro table (plates, day total, target, difference), then each plate's steps. */
@@ -40,7 +41,7 @@ export async function renderWeekPlanPdf(data: WeekPlanPdfData): Promise<{ filena
   const doc = createDoc(meta);
   heading(doc, `${data.clientName}: your week`, 22);
   paragraph(doc, `Week of ${longDate(data.weekStart)}`);
-  paragraph(doc, targetLine(data.targets));
+  paragraph(doc, targetLine(data.targets, data.targetsCover));
   if (data.note) {
     doc.moveDown(0.4);
     paragraph(doc, 'A note from your coach', { bold: true });

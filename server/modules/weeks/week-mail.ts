@@ -11,7 +11,7 @@ import { thawRemindersIcs } from './thaw-reminders-ics.js';
 import { renderWeekPlanPdf } from '../pdf/week-plan.pdf.js';
 import { longDate } from '@shared/domain/iso-date.js';
 import { Client, type IClient } from '../clients/client.entity.js';
-import { plannedTargets } from '../clients/client.presenter.js';
+import { plannedTargets, slotShares } from '../clients/client.presenter.js';
 import { mealSlotsOf } from '../clients/client.service.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { Membership } from '../auth/user.entity.js';
@@ -66,6 +66,18 @@ export function pdfDays(days: readonly MyDayDto[], householdMultiplier: Decimal.
   }));
 }
 
+/**
+ * What a plan's targets cover when the board plans part of the day: "breakfast and lunch, 50 % of your day"
+ * (their shares of the client's day); null when the planned meals make the whole day.
+ */
+export function targetsCover(client: Pick<IClient, 'slotShares'>, slots: readonly string[]): string | null {
+  const share = Object.values(slotShares(client, slots)).reduce((s, v) => s.plus(v), new Decimal(0));
+  if (share.gte(1) || slots.length === 0) return null;
+  const names = slots.map((s) => s.toLowerCase());
+  const list = names.length === 1 ? names[0] : `${names.slice(0, -1).join(', ')} and ${names.at(-1)}`;
+  return `${list}, ${share.times(100).toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toString()} % of your day`;
+}
+
 export interface PublishedPlan {
   data: WeekPlanPdfData;
   client: IClient;
@@ -88,7 +100,8 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
   const mine = pub.snapshot.clients[String(client.id)];
   if (!mine?.days.length) throw new NotFound("This client's plates in the published week");
   const ws = await em.findOneOrFail(Workspace, wsId);
-  const t = plannedTargets(client, await mealSlotsOf(em, wsId));
+  const slots = await mealSlotsOf(em, wsId);
+  const t = plannedTargets(client, slots);
   // The client's own measure preference when they have an account (the plan is theirs to read); else as typed.
   const account = await em.findOne(Membership, { clientId: client.id, workspace: wsId, role: 'client' }, { populate: ['user'] });
   const system = account ? (account.user.$.unitSystem === 'metric' ? 'metric' : 'us') : undefined;
@@ -101,6 +114,7 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
       clientName: client.name,
       weekStart: pub.snapshot.startDate,
       targets: { kcal: t.targetKcal, fatG: t.fatG, proteinG: t.proteinG, netCarbsG: t.netCarbCapG },
+      targetsCover: targetsCover(client, slots),
       days: pdfDays(mine.days, client.householdMultiplier, system),
       note: p.note ?? null,
       cautions: CAUTIONS.map((c) => ({ text: c.text, source: c.source })),
