@@ -7,7 +7,7 @@ describe("what a plan's targets cover", () => {
   it('names the planned meals and their share of the day when they are not the whole day', () => {
     expect(targetsCover({ slotShares: {} }, ['breakfast'])).toBe('breakfast, 30 % of your day');
     expect(targetsCover({ slotShares: {} }, ['breakfast', 'lunch'])).toBe('breakfast and lunch, 65 % of your day');
-    expect(targetsCover({ slotShares: { Breakfast: '0.25', Lunch: '0.25' } }, ['Breakfast', 'Lunch'])).toBe('breakfast and lunch, 50 % of your day');
+    expect(targetsCover({ slotShares: { Breakfast: 0.25, Lunch: 0.25 } }, ['Breakfast', 'Lunch'])).toBe('breakfast and lunch, 50 % of your day');
   });
 
   it('says nothing when the planned meals make the whole day', () => {
