@@ -2,22 +2,10 @@ import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import Qty from 'js-quantities';
 import type { MeDto } from '@shared/schemas/auth.schema';
-import { meQuery } from '@/features/auth/api/auth.queries';
 import { ClientForm, cmOf, emptyClient, feetInches, kgOf, poundsOf } from '@/features/clients/components/client-form';
-import { renderInApp, testQueryClient } from './render';
+import { queryClientFor, renderInApp, signedIn } from './render';
 
-const coach = (unitSystem: MeDto['unitSystem']): MeDto => ({
-  id: 1,
-  email: 'coach@example.test',
-  name: 'Ada Coach',
-  role: 'coach',
-  workspaceId: 1,
-  workspaceName: 'Example Prep',
-  workspaceIsDemo: false,
-  clientId: null,
-  unitSystem,
-  tempUnit: 'F',
-});
+const coach = (unitSystem: MeDto['unitSystem']) => signedIn({ unitSystem });
 
 describe('height and weight in US measures', () => {
   it('converts with the exact inch and pound (NIST Handbook 44 App. C), checked against js-quantities', () => {
@@ -33,8 +21,7 @@ describe('height and weight in US measures', () => {
   });
 
   it("a US coach types feet, inches and pounds; the profile gets centimetres and kilograms", async () => {
-    const qc = testQueryClient();
-    qc.setQueryData(meQuery().queryKey, coach('us'));
+    const qc = queryClientFor(coach('us'));
     const onSubmit = vi.fn();
     renderInApp(<ClientForm initial={{ ...emptyClient, name: 'Ana Example' }} submitLabel="Save client" onSubmit={onSubmit} />, qc);
     fireEvent.change(screen.getByLabelText('Height (ft)'), { target: { value: '5' } });
@@ -49,8 +36,7 @@ describe('height and weight in US measures', () => {
   });
 
   it('a metric coach types centimetres and kilograms', () => {
-    const qc = testQueryClient();
-    qc.setQueryData(meQuery().queryKey, coach('metric'));
+    const qc = queryClientFor(coach('metric'));
     renderInApp(<ClientForm initial={emptyClient} submitLabel="Save client" onSubmit={vi.fn()} />, qc);
     expect((screen.getByLabelText('Height (cm)') as HTMLInputElement).value).toBe('165');
     expect((screen.getByLabelText('Weight (kg)') as HTMLInputElement).value).toBe('70');

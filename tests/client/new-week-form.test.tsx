@@ -1,30 +1,15 @@
 import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen } from '@testing-library/react';
-import type { MeDto } from '@shared/schemas/auth.schema';
-import { meQuery } from '@/features/auth/api/auth.queries';
 import { Component as WeeksPage } from '@/app/routes/weeks/weeks.route';
-import { jsonResponse, renderInApp, testQueryClient } from './render';
+import { jsonResponse, queryClientFor, renderInApp, signedIn } from './render';
 
 // The coach's "New week" form; an invented coach, "today" pinned with fake timers (Wednesday 2 December 2026).
-const coach: MeDto = {
-  id: 1,
-  email: 'coach@example.test',
-  name: 'Ada Coach',
-  role: 'coach',
-  workspaceId: 1,
-  workspaceName: 'Example Prep',
-  workspaceIsDemo: false,
-  clientId: null,
-  unitSystem: 'us',
-  tempUnit: 'F',
-};
+const coach = signedIn();
 
 function show() {
   vi.useFakeTimers({ now: new Date(2026, 11, 2, 9), toFake: ['Date'] });
   vi.stubGlobal('fetch', vi.fn(async () => jsonResponse([])));
-  const qc = testQueryClient();
-  qc.setQueryData(meQuery().queryKey, coach);
-  renderInApp(<WeeksPage />, qc);
+  renderInApp(<WeeksPage />, queryClientFor(coach));
 }
 
 const field = (label: string) => screen.getByLabelText(label) as HTMLInputElement;

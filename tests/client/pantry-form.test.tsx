@@ -1,31 +1,17 @@
 import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import type { MeDto } from '@shared/schemas/auth.schema';
-import { meQuery } from '@/features/auth/api/auth.queries';
 import { AddPantryItem, startingAmount } from '@/features/shopping/components/pantry-forms';
-import { jsonResponse, renderInApp, testQueryClient } from './render';
+import { jsonResponse, queryClientFor, renderInApp, signedIn } from './render';
 
 // The assistant's "Add what you have" form; invented people and ingredients (only the fields the form reads).
-const assistant = (unitSystem: MeDto['unitSystem']): MeDto => ({
-  id: 2,
-  email: 'assistant@example.test',
-  name: 'Sam Helper',
-  role: 'assistant',
-  workspaceId: 1,
-  workspaceName: 'Example Prep',
-  workspaceIsDemo: false,
-  clientId: null,
-  unitSystem,
-  tempUnit: 'F',
-});
+const assistant = (unitSystem: MeDto['unitSystem']) => signedIn({ id: 2, email: 'assistant@example.test', name: 'Sam Helper', role: 'assistant', unitSystem });
 const eggs = { id: 11, name: 'Eggs, example', densityGPerMl: null, pieceWeights: { large: 50 }, purchase: { amount: 12, unit: 'large', label: 'dozen' } };
 const cream = { id: 12, name: 'Cream, example', densityGPerMl: 1.01, pieceWeights: {}, purchase: { amount: 1, unit: 'quart', label: 'carton' } };
 
 async function show(unitSystem: MeDto['unitSystem']) {
   vi.stubGlobal('fetch', vi.fn(async () => jsonResponse({ items: [eggs, cream], total: 2, page: 1, pageSize: 20 })));
-  const qc = testQueryClient();
-  qc.setQueryData(meQuery().queryKey, assistant(unitSystem));
-  renderInApp(<AddPantryItem />, qc);
+  renderInApp(<AddPantryItem />, queryClientFor(assistant(unitSystem)));
   await waitFor(() => expect(screen.getByRole('option', { name: 'Eggs, example' })).toBeTruthy());
 }
 

@@ -2,6 +2,8 @@ import type { ReactElement } from 'react';
 import { render } from '@testing-library/react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { MemoryRouter } from 'react-router-dom';
+import type { MeDto } from '@shared/schemas/auth.schema';
+import { meQuery } from '@/features/auth/api/auth.queries';
 
 /** A fetch answer with a JSON body (a problem when the status is 400 or more). */
 export const jsonResponse = (body: unknown, status = 200) =>
@@ -17,4 +19,28 @@ export function renderInApp(ui: ReactElement, qc: QueryClient = testQueryClient(
       <QueryClientProvider client={qc}>{ui}</QueryClientProvider>
     </MemoryRouter>,
   );
+}
+
+/** An invented signed-in person (a coach in US measures unless told otherwise). */
+export function signedIn(overrides: Partial<MeDto> = {}): MeDto {
+  return {
+    id: 1,
+    email: 'coach@example.test',
+    name: 'Ada Coach',
+    role: 'coach',
+    workspaceId: 1,
+    workspaceName: 'Example Prep',
+    workspaceIsDemo: false,
+    clientId: null,
+    unitSystem: 'us',
+    tempUnit: 'F',
+    ...overrides,
+  };
+}
+
+/** A query client for one test with `me` already signed in (what the app shell guarantees its pages). */
+export function queryClientFor(me: MeDto): QueryClient {
+  const qc = testQueryClient();
+  qc.setQueryData(meQuery().queryKey, me);
+  return qc;
 }
