@@ -29,7 +29,7 @@ function ClientList({ clients }: { clients: ClientListItemDto[] }) {
         <p className="text-ink-soft">No client matches “{find.trim()}”.</p>
       ) : (
         <div className="overflow-x-auto">
-          <table className="w-full text-left">
+          <table className="w-full min-w-[40rem] text-left [&_td]:px-2 [&_td]:whitespace-nowrap [&_th]:px-2">
             <thead>
               <tr className="border-b border-line text-sm text-ink-faint">
                 <th className="py-2">Name</th>
