@@ -112,6 +112,10 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await second.focus();
   await page.keyboard.press('Enter');
   const panel = page.getByRole('region', { name: 'Selected cell' });
+  // The cell's details open under its client's row, not after the whole board.
+  await panel.scrollIntoViewIfNeeded();
+  await expect(page.getByRole('row').filter({ has: panel })).toHaveCount(1);
+  await expect(page.getByRole('row').filter({ has: panel }).locator('xpath=preceding-sibling::tr[1]')).toContainText('Dana Whitlock');
   // The cell panel's plate select (a native select: keyboard-operable as it is).
   await panel.getByLabel('Plate', { exact: true }).focus();
   await panel.getByLabel('Plate', { exact: true }).selectOption({ label: plateName });

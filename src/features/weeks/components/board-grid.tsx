@@ -1,4 +1,4 @@
-import { memo, useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { Fragment, memo, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import {
   DndContext,
   KeyboardSensor,
@@ -289,6 +289,104 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const selPlate = selCell ? plates.get(selCell.assemblyId) : undefined;
   const selEat = selCell && selPlate ? { portions: cellEatBy(selCell, selPlate.trays, board.prepDates) } : undefined;
 
+  // The selected cell's details open in a row right under its client (on a long board the end of the grid is far
+  // away), as wide as the visible part of the grid and pinned to its left edge while the grid scrolls sideways.
+  const gridBox = useRef<HTMLDivElement>(null);
+  const [panelWidth, setPanelWidth] = useState<number | null>(null);
+  useEffect(() => {
+    const el = gridBox.current;
+    if (!el || typeof ResizeObserver === 'undefined') return;
+    const ro = new ResizeObserver(() => setPanelWidth(Math.max(0, el.clientWidth - 12)));
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, []);
+  const panel =
+    sel && selClient ? (
+      <section
+        aria-label="Selected cell"
+        className="sticky left-0 my-1 rounded-tray border border-line-strong bg-paper-card p-4 shadow-tray"
+        style={panelWidth ? { width: panelWidth } : undefined}
+      >
+        <div className="mb-2 flex items-start justify-between gap-2">
+          <h3 className="font-bold">
+            {selClient.name} · {dayLabel(sel[2])} · {sel[3]}
+          </h3>
+          <Button size="sm" variant="ghost" onClick={() => setSelected(null)}>
+            Close <span className="sr-only">the selected cell</span>
+          </Button>
+        </div>
+        <div className="grid gap-3 sm:grid-cols-3">
+          <SelectField label="Plate" value={selCell?.assemblyId ?? ''} disabled={busy} onChange={(e) => place(selClient.id, sel[2], sel[3], e.target.value ? Number(e.target.value) : null)}>
+            <option value="">Empty</option>
+            {board.plates.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
+            ))}
+          </SelectField>
+          {selCell && (
+            <>
+              <SelectField label="Storage" value={selCell.storage} disabled={busy} onChange={(e) => place(selClient.id, sel[2], sel[3], selCell.assemblyId, { storage: e.target.value as 'fridge' | 'frozen' })}>
+                <option value="fridge">Fridge</option>
+                <option value="frozen">Freeze on prep day, thaw the evening before</option>
+              </SelectField>
+              <SelectField
+                label="Portions from"
+                value={selCell.prepDate ?? ''}
+                disabled={busy}
+                onChange={(e) => place(selClient.id, sel[2], sel[3], selCell.assemblyId, { prepDate: e.target.value || null })}
+              >
+                <option value="">Latest prep day before (default)</option>
+                {board.prepDates.map((d) => (
+                  <option key={d} value={d}>
+                    Prep day {dayLabel(d)}
+                  </option>
+                ))}
+              </SelectField>
+            </>
+          )}
+        </div>
+        {selEat && (
+          <ul className="mt-3 flex flex-col gap-1 text-sm">
+            {selEat.portions.map((p, i) => (
+              <li key={i} className="text-frost-700">
+                ❄ Prepped {dayLabel(p.prepDate)}, eat by <span className="num">{dayLabel(p.eatBy)}</span>
+                {p.status !== 'ok' && <strong className="text-signal-700"> — {p.status.replace(/-/g, ' ')}</strong>}
+                {p.remedies.map((r, j) => (
+                  <span key={j} className="ml-2">
+                    <Button
+                      size="sm"
+                      variant="secondary"
+                      disabled={busy}
+                      onClick={() =>
+                        r.kind === 'freeze-and-thaw'
+                          ? place(selClient.id, sel[2], sel[3], selCell!.assemblyId, { storage: 'frozen' })
+                          : place(selClient.id, sel[2], sel[3], selCell!.assemblyId, { prepDate: r.prepDate })
+                      }
+                    >
+                      {r.kind === 'freeze-and-thaw' ? `Freeze on prep day, thaw on the evening of ${dayLabel(r.thawReminderOn)}` : `Take it from prep day ${dayLabel(r.prepDate)}`}
+                    </Button>
+                  </span>
+                ))}
+              </li>
+            ))}
+          </ul>
+        )}
+        {selFlags.length > 0 && (
+          <ul className="mt-3 flex flex-col gap-1 text-sm" aria-label="Problems of this cell">
+            {selFlags.map((w, i) => (
+              <li key={i} className={w.severity === 'block' ? 'font-bold text-signal-700' : 'text-caution-700'}>
+                {w.severity === 'block' ? '⛔' : '⚠'} {w.message}
+              </li>
+            ))}
+          </ul>
+        )}
+        {selCell && selCell.allergenOverrides.length > 0 && (
+          <p className="mt-2 text-sm">Allergen override: {selCell.allergenOverrides.map((o) => `${allergenLabel(o.allergen)} (${o.reason})`).join('; ')}</p>
+        )}
+      </section>
+    ) : null;
+
   return (
     <DndContext
       sensors={sensors}
@@ -319,6 +417,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
         </aside>
         {/* The grid scrolls sideways inside its card; the client column stays put. Focusable so arrow keys scroll it. */}
         <div
+          ref={gridBox}
           role="region"
           aria-label="Week board, scrolls sideways"
           tabIndex={0}
@@ -337,100 +436,32 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
             </thead>
             <tbody>
               {board.clients.map((client) => (
-                <ClientRow
-                  key={client.id}
-                  client={client}
-                  days={board.days}
-                  slots={board.slots}
-                  plates={plates}
-                  cells={board.days.flatMap((date) => board.slots.map((slot) => cells.get(cellId(client.id, date, slot))))}
-                  checks={board.days.map((date) => checks.get(`${client.id}|${date}`))}
-                  selected={selected?.startsWith(`cell|${client.id}|`) ? selected : null}
-                  over={over?.startsWith(`cell|${client.id}|`) ? over : null}
-                  onSelect={onSelect}
-                />
+                <Fragment key={client.id}>
+                  <ClientRow
+                    client={client}
+                    days={board.days}
+                    slots={board.slots}
+                    plates={plates}
+                    cells={board.days.flatMap((date) => board.slots.map((slot) => cells.get(cellId(client.id, date, slot))))}
+                    checks={board.days.map((date) => checks.get(`${client.id}|${date}`))}
+                    selected={selected?.startsWith(`cell|${client.id}|`) ? selected : null}
+                    over={over?.startsWith(`cell|${client.id}|`) ? over : null}
+                    onSelect={onSelect}
+                  />
+                  {panel && selClient?.id === client.id && (
+                    <tr>
+                      <td colSpan={board.days.length + 1} className="p-0">
+                        {panel}
+                      </td>
+                    </tr>
+                  )}
+                </Fragment>
               ))}
             </tbody>
           </table>
         </div>
       </div>
 
-      {sel && selClient && (
-        <section aria-label="Selected cell" className="mt-4 rounded-tray border border-line-strong bg-paper-card p-4">
-          <h3 className="mb-2 font-bold">
-            {selClient.name} · {dayLabel(sel[2])} · {sel[3]}
-          </h3>
-          <div className="grid gap-3 sm:grid-cols-3">
-            <SelectField label="Plate" value={selCell?.assemblyId ?? ''} disabled={busy} onChange={(e) => place(selClient.id, sel[2], sel[3], e.target.value ? Number(e.target.value) : null)}>
-              <option value="">Empty</option>
-              {board.plates.map((p) => (
-                <option key={p.id} value={p.id}>
-                  {p.name}
-                </option>
-              ))}
-            </SelectField>
-            {selCell && (
-              <>
-                <SelectField label="Storage" value={selCell.storage} disabled={busy} onChange={(e) => place(selClient.id, sel[2], sel[3], selCell.assemblyId, { storage: e.target.value as 'fridge' | 'frozen' })}>
-                  <option value="fridge">Fridge</option>
-                  <option value="frozen">Freeze on prep day, thaw the evening before</option>
-                </SelectField>
-                <SelectField
-                  label="Portions from"
-                  value={selCell.prepDate ?? ''}
-                  disabled={busy}
-                  onChange={(e) => place(selClient.id, sel[2], sel[3], selCell.assemblyId, { prepDate: e.target.value || null })}
-                >
-                  <option value="">Latest prep day before (default)</option>
-                  {board.prepDates.map((d) => (
-                    <option key={d} value={d}>
-                      Prep day {dayLabel(d)}
-                    </option>
-                  ))}
-                </SelectField>
-              </>
-            )}
-          </div>
-          {selEat && (
-            <ul className="mt-3 flex flex-col gap-1 text-sm">
-              {selEat.portions.map((p, i) => (
-                <li key={i} className="text-frost-700">
-                  ❄ Prepped {dayLabel(p.prepDate)}, eat by <span className="num">{dayLabel(p.eatBy)}</span>
-                  {p.status !== 'ok' && <strong className="text-signal-700"> — {p.status.replace(/-/g, ' ')}</strong>}
-                  {p.remedies.map((r, j) => (
-                    <span key={j} className="ml-2">
-                      <Button
-                        size="sm"
-                        variant="secondary"
-                        disabled={busy}
-                        onClick={() =>
-                          r.kind === 'freeze-and-thaw'
-                            ? place(selClient.id, sel[2], sel[3], selCell!.assemblyId, { storage: 'frozen' })
-                            : place(selClient.id, sel[2], sel[3], selCell!.assemblyId, { prepDate: r.prepDate })
-                        }
-                      >
-                        {r.kind === 'freeze-and-thaw' ? `Freeze on prep day, thaw on the evening of ${dayLabel(r.thawReminderOn)}` : `Take it from prep day ${dayLabel(r.prepDate)}`}
-                      </Button>
-                    </span>
-                  ))}
-                </li>
-              ))}
-            </ul>
-          )}
-          {selFlags.length > 0 && (
-            <ul className="mt-3 flex flex-col gap-1 text-sm" aria-label="Problems of this cell">
-              {selFlags.map((w, i) => (
-                <li key={i} className={w.severity === 'block' ? 'font-bold text-signal-700' : 'text-caution-700'}>
-                  {w.severity === 'block' ? '⛔' : '⚠'} {w.message}
-                </li>
-              ))}
-            </ul>
-          )}
-          {selCell && selCell.allergenOverrides.length > 0 && (
-            <p className="mt-2 text-sm">Allergen override: {selCell.allergenOverrides.map((o) => `${allergenLabel(o.allergen)} (${o.reason})`).join('; ')}</p>
-          )}
-        </section>
-      )}
     </DndContext>
   );
 }
