@@ -2,7 +2,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import Qty from 'js-quantities';
 import type { MeDto } from '@shared/schemas/auth.schema';
-import { ClientForm, cmOf, emptyClient, feetInches, kgOf, poundsOf } from '@/features/clients/components/client-form';
+import { ClientForm, cmOf, emptyClient, feetInches, kgOf, perLb, poundsOf } from '@/features/clients/components/client-form';
 import { queryClientFor, renderInApp, signedIn } from './render';
 
 const coach = (unitSystem: MeDto['unitSystem']) => signedIn({ unitSystem });
@@ -18,6 +18,9 @@ describe('height and weight in US measures', () => {
     expect(kgOf('163')).toBe(String(Math.round(Qty(163, 'lb').to('kg').scalar * 100) / 100)); // 73.94
     expect(poundsOf('73.94')).toBe('163'); // back to the pound typed
     expect(kgOf('x')).toBe('');
+    // 1.5 g of protein per kg of body weight is 1.5 × 0.45359237 = 0.68 g per lb.
+    expect(perLb('1.5')).toBe('0.68');
+    expect(perLb('')).toBe('');
   });
 
   it("a US coach types feet, inches and pounds; the profile gets centimetres and kilograms", async () => {
@@ -29,6 +32,7 @@ describe('height and weight in US measures', () => {
     fireEvent.change(screen.getByLabelText('Weight (lb)'), { target: { value: '163' } });
     expect(screen.getByText('= 167.64 cm')).toBeTruthy();
     expect(screen.getByText('= 73.94 kg')).toBeTruthy();
+    expect(screen.getByText(/= 0\.68 g per lb of body weight/)).toBeTruthy(); // the form's 1.5 g per kg
     fireEvent.click(screen.getByRole('button', { name: 'Save client' }));
     await waitFor(() => expect(onSubmit).toHaveBeenCalled());
     expect(onSubmit.mock.calls[0]![0]).toMatchObject({ heightCm: '167.64', weightKg: '73.94' });

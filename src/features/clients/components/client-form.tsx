@@ -130,6 +130,11 @@ export function cmOf(ft: string, inches: string): string {
 }
 
 export const poundsOf = (kg: string) => (kg.trim() && Number.isFinite(Number(kg)) ? String(round(Number(kg) / KG_PER_LB, 1)) : '');
+/** Protein per kg of body weight as per lb (× 0.45359237 kg/lb), to 0.01; '' when not a number. */
+export const perLb = (gPerKg: unknown) => {
+  const v = Number(gPerKg);
+  return String(gPerKg ?? '').trim() && Number.isFinite(v) && v > 0 ? String(round(v * KG_PER_LB, 2)) : '';
+};
 export const kgOf = (lb: string) => (lb.trim() && Number.isFinite(Number(lb)) ? String(round(Number(lb) * KG_PER_LB, 2)) : '');
 
 /**
@@ -271,7 +276,7 @@ export function ClientForm({ initial, slots = [], busy, submitLabel, formError, 
           <>
             <div className="grid gap-4 sm:grid-cols-2">
               <TextField label="Net-carb cap (g per day)" inputMode="decimal" hint="20 g is the strict keto start" error={err.netCarbCapG?.message} {...register('netCarbCapG')} />
-              <TextField label="Protein (g per kg)" inputMode="decimal" hint="Usual keto range 1.2–2.0" error={err.proteinGPerKg?.message} {...register('proteinGPerKg')} />
+              <TextField label="Protein (g per kg)" inputMode="decimal" hint={`Usual keto range 1.2–2.0${unitSystem === 'us' && perLb(values.proteinGPerKg) ? ` · = ${perLb(values.proteinGPerKg)} g per lb of body weight` : ''}`} error={err.proteinGPerKg?.message} {...register('proteinGPerKg')} />
             </div>
             <TargetsPreview values={values} />
           </>

@@ -424,6 +424,9 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
           className="min-w-0 flex-1 overflow-x-auto rounded-lg border border-line bg-paper-card pb-1"
         >
           <table className="w-full min-w-[60rem] border-separate border-spacing-1">
+            <caption className="caption-top px-1 pt-1 text-left text-xs text-ink-faint">
+              Targets under each name and each day's totals count the board's meals ({board.slots.join(', ')}): the client's share of the day for them.
+            </caption>
             <thead>
               <tr>
                 <th className="sticky left-0 z-20 bg-paper-card px-1 text-left text-sm">Client</th>
