@@ -136,6 +136,8 @@ export interface ClientDto extends ClientSelfDto {
   healthNotes: string;
   /** The signed-in client account linked to this profile, if any. */
   account: { email: string; name: string } | null;
+  /** The open invitation to this profile while no account has joined (the newest one still valid), else null. */
+  invitation: { email: string; expiresAt: string } | null;
   createdAt: string;
   updatedAt: string;
 }

@@ -100,6 +100,29 @@ describe('client profiles and targets', () => {
     expect(coachView.body.healthNotes).toBe('takes metformin');
   });
 
+  it('shows the coach an open invitation until the client joins', async () => {
+    const coach = await coachWorkspace(app);
+    const c = await makeClient(coach);
+    const before = await coach.agent.get(`/api/clients/${c.id}`).expect(200);
+    expect(before.body).toMatchObject({ account: null, invitation: null });
+    const email = `invited-${c.id}@example.test`;
+    await coach.agent.post('/api/invitations').send({ email, role: 'client', clientId: c.id }).expect(201);
+    const invited = await coach.agent.get(`/api/clients/${c.id}`).expect(200);
+    expect(invited.body.account).toBeNull();
+    expect(invited.body.invitation).toMatchObject({ email });
+    // Valid for 14 days from now (the invitation's own rule).
+    expect(new Date(invited.body.invitation.expiresAt).getTime()).toBeGreaterThan(Date.now() + 13 * 86_400_000);
+    expect((await coach.agent.get('/api/clients').expect(200)).body.find((x: { id: number }) => x.id === c.id).invitation).toMatchObject({ email });
+    // An expired invitation is not open.
+    await sql("update invitation set expires_at = now() - interval '1 minute' where client_id = $1", [c.id]);
+    expect((await coach.agent.get(`/api/clients/${c.id}`).expect(200)).body.invitation).toBeNull();
+    // Joined: the account, no invitation.
+    await member(app, coach, 'client', { clientId: c.id });
+    const joined = await coach.agent.get(`/api/clients/${c.id}`).expect(200);
+    expect(joined.body.invitation).toBeNull();
+    expect(joined.body.account).not.toBeNull();
+  });
+
   it('two edits from the same version: the second gets 409 with the current record, never a silent overwrite', async () => {
     const coach = await coachWorkspace(app);
     const c = await makeClient(coach);

@@ -116,11 +116,13 @@ export function presentClient(
   c: IClient,
   mealSlots: readonly string[],
   account: { email: string; name: string } | null,
+  invitation: { email: string; expiresAt: Date } | null = null,
 ): ClientDto {
   return {
     ...presentClientSelf(c, mealSlots),
     healthNotes: c.healthNotes ?? '',
     account,
+    invitation: account || !invitation ? null : { email: invitation.email, expiresAt: invitation.expiresAt.toISOString() },
     createdAt: c.createdAt.toISOString(),
     updatedAt: c.updatedAt.toISOString(),
   };

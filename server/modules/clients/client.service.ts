@@ -2,7 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import type { CreateClientData, UpdateClientData, ClientListItemDto } from '@shared/schemas/clients.schema.js';
-import { Membership } from '../auth/user.entity.js';
+import { Invitation, Membership } from '../auth/user.entity.js';
 import { preparedRows } from '../../db/prepared.js';
 import { Client, type ClientFacts, type IClient } from './client.entity.js';
 import { presentClient, presentClientSelf, presentClientSummary } from './client.presenter.js';
@@ -60,20 +60,34 @@ async function accounts(em: EntityManager, workspaceId: number, ids: number[]) {
   return map;
 }
 
+/** The newest open invitation (not accepted, not expired) to each of these client profiles. */
+async function openInvitations(em: EntityManager, workspaceId: number, ids: number[]) {
+  const map = new Map<number, { email: string; expiresAt: Date }>();
+  if (!ids.length) return map;
+  const rows = await em.find(
+    Invitation,
+    { workspace: workspaceId, role: 'client', clientId: { $in: ids }, acceptedAt: null, expiresAt: { $gt: new Date() } },
+    { orderBy: { createdAt: 'desc', id: 'desc' } },
+  );
+  for (const i of rows) if (i.clientId && !map.has(i.clientId)) map.set(i.clientId, { email: i.email, expiresAt: i.expiresAt });
+  return map;
+}
+
 export async function listClients(em: EntityManager, actor: Actor): Promise<ClientListItemDto[]> {
   const rows = await loadClients(em, actor.workspaceId);
   if (actor.role !== 'coach') return rows.map(presentClientSummary);
   const slots = await mealSlotsOf(em, actor.workspaceId);
-  const acc = await accounts(em, actor.workspaceId, rows.map((r) => r.id));
-  return rows.map((r) => presentClient(r, slots, acc.get(r.id) ?? null));
+  const ids = rows.map((r) => r.id);
+  const [acc, inv] = await Promise.all([accounts(em, actor.workspaceId, ids), openInvitations(em, actor.workspaceId, ids)]);
+  return rows.map((r) => presentClient(r, slots, acc.get(r.id) ?? null, inv.get(r.id) ?? null));
 }
 
 export async function getClient(em: EntityManager, actor: Actor, id: number) {
   const row = await findClient(em, actor, id);
   const slots = await mealSlotsOf(em, actor.workspaceId);
   if (actor.role === 'client') return presentClientSelf(row, slots);
-  const acc = await accounts(em, actor.workspaceId, [row.id]);
-  return presentClient(row, slots, acc.get(row.id) ?? null);
+  const [acc, inv] = await Promise.all([accounts(em, actor.workspaceId, [row.id]), openInvitations(em, actor.workspaceId, [row.id])]);
+  return presentClient(row, slots, acc.get(row.id) ?? null, inv.get(row.id) ?? null);
 }
 
 function fields(input: Partial<CreateClientData>) {

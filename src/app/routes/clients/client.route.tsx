@@ -33,6 +33,13 @@ function InviteCard({ client }: { client: ClientDto }) {
   return (
     <Card>
       <h2 className="mb-2 text-xl">Invite to “My plates”</h2>
+      {client.invitation && !link && (
+        <p className="mb-3 text-sm">
+          Invited <strong>{client.invitation.email}</strong>; not joined yet. The link works until{' '}
+          {new Date(client.invitation.expiresAt).toLocaleDateString(undefined, { weekday: 'long', month: 'short', day: 'numeric' })}. Invite again
+          to send a new link.
+        </p>
+      )}
       <form
         className="grid gap-3 sm:grid-cols-[1fr_auto] sm:items-end"
         onSubmit={(e) => {

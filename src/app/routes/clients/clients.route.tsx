@@ -56,7 +56,7 @@ function ClientList({ clients }: { clients: ClientListItemDto[] }) {
                       <td className="num text-right">{c.targets.netCarbCapG} g</td>
                       <td className="num text-right">{c.targets.proteinG} g</td>
                       <td className="pl-6">{c.allergens.map(allergenLabel).join(', ') || '—'}</td>
-                      <td className="pl-4">{c.account ? 'Joined' : 'Not invited'}</td>
+                      <td className="pl-4">{c.account ? 'Joined' : c.invitation ? 'Invited' : 'Not invited'}</td>
                     </>
                   ) : (
                     <td colSpan={5} />

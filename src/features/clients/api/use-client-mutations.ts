@@ -38,9 +38,12 @@ export function useDeleteClient() {
 
 /** Invites the client to their own "my plates" (POST /api/invitations with the profile's id). */
 export function useInviteClient(id: number) {
+  const qc = useQueryClient();
   return useMutation({
     mutationFn: (email: string) =>
       api.post<InvitationDto>('/invitations', { email, role: 'client', clientId: id } satisfies CreateInvitationInput),
     meta: { form: true },
+    // The profile and the list now show the open invitation.
+    onSuccess: () => qc.invalidateQueries({ queryKey: clientKeys.all }),
   });
 }
