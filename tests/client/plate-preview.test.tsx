@@ -42,6 +42,7 @@ describe('plate preview', () => {
     renderInApp(<Form />);
     await waitFor(() => expect(screen.getByText('173 kcal')).toBeTruthy());
     expect(screen.getByText('Contains: Milk')).toBeTruthy();
+    expect(screen.getByText('Add-ons weigh: 1 slice ≈ 21 g')).toBeTruthy();
     expect(fetchMock).toHaveBeenCalledTimes(1);
     expect(String(fetchMock.mock.calls[0]![0])).toContain('/api/assemblies/preview');
 

@@ -20,6 +20,8 @@ export function PlatePreview({ parts }: { parts: PlatePreviewInput | null }) {
   if (!parts) return <p className="text-sm text-ink-faint">Choose a base tray or an add-on to see what the plate adds up to.</p>;
   const problem = preview.error instanceof ApiError ? preview.error : null;
   const data = preview.data;
+  // The add-ons as they were sent: the weights answer those, not what has been typed since.
+  const sentAddOns = preview.variables?.addOns ?? [];
   return (
     <div aria-live="polite" aria-busy={preview.isPending} className="flex flex-col gap-2 rounded-lg bg-paper-deep p-3">
       <p className="text-xs font-bold uppercase text-ink-faint">This plate adds up to</p>
@@ -29,6 +31,14 @@ export function PlatePreview({ parts }: { parts: PlatePreviewInput | null }) {
         </Notice>
       )}
       {data && <PlateMacros macros={data.macros} allergens={data.allergens} />}
+      {data && sentAddOns.length > 0 && data.addOnGrams.length === sentAddOns.length && (
+        <p className="num text-sm text-ink-soft">
+          Add-ons weigh:{' '}
+          {sentAddOns
+            .map((a, i) => `${String(a.amountText).trim()} ${String(a.unit).trim()} ≈ ${data.addOnGrams[i] === null ? '?' : `${data.addOnGrams[i]} g`}`)
+            .join(' · ')}
+        </p>
+      )}
       {data && !data.complete && <p className="text-sm text-caution-700">A base tray on it has a line that cannot be weighed: its numbers are left out.</p>}
       {preview.isPending && !data && <p className="text-sm text-ink-faint">Working out the numbers…</p>}
     </div>
