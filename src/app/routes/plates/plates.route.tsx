@@ -26,6 +26,7 @@ function Editor({ plate, onDone }: { plate: AssemblyDto | null; onDone: () => vo
         key={plate ? `${plate.id}-${plate.version}` : 'new'}
         initial={plate ? assemblyToInput(plate) : emptyAssembly}
         names={Object.fromEntries((plate?.addOns ?? []).map((a) => [a.ingredientId, a.ingredientName]))}
+        trayNames={Object.fromEntries((plate?.trays ?? []).map((t) => [t.trayId, t.trayName]))}
         busy={save.isPending}
         formError={formError}
         onSubmit={(values, setError) => {

@@ -1,4 +1,4 @@
-/** Query keys of plates (assemblies), and of the pickers the plate form uses. */
+/** Query keys of plates (assemblies), and of the tray picker the plate form uses. */
 export const assemblyKeys = {
   all: ['assemblies'] as const,
   lists: () => [...assemblyKeys.all, 'list'] as const,
@@ -6,5 +6,4 @@ export const assemblyKeys = {
   details: () => [...assemblyKeys.all, 'detail'] as const,
   detail: (id: number) => [...assemblyKeys.details(), id] as const,
   trayOptions: () => [...assemblyKeys.all, 'tray-options'] as const,
-  ingredientOptions: (q: string) => [...assemblyKeys.all, 'ingredient-options', q] as const,
 };

@@ -1,9 +1,10 @@
-import { useState } from 'react';
-import { useFieldArray, useForm, type UseFormSetError } from 'react-hook-form';
+import { useMemo, useState } from 'react';
+import { useFieldArray, useForm, useWatch, type UseFormReturn, type UseFormSetError } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import { createAssemblySchema, type AssemblyDto, type AssemblyInput, type AssemblyValues } from '@shared/schemas/assemblies.schema';
-import { ingredientOptionsQuery, trayOptionsQuery } from '../api/assemblies.queries';
+import { trayOptionsQuery } from '../api/assemblies.queries';
+import { IngredientCombobox, unitAfterPick, unitChoices, type PickedIngredient } from '@/features/trays/components/ingredient-combobox';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
@@ -22,60 +23,60 @@ export function assemblyToInput(a: AssemblyDto): AssemblyInput {
   };
 }
 
-/** Picks an ingredient by searching the library. */
-function IngredientPicker({ label, value, initialName, onPick, error }: { label: string; value?: number; initialName?: string; onPick: (id: number, name: string) => void; error?: string }) {
-  const [q, setQ] = useState(initialName ?? '');
-  const [open, setOpen] = useState(false);
-  const results = useQuery(ingredientOptionsQuery(q));
-  return (
-    <div className="relative">
-      <TextField
-        label={label}
-        value={q}
-        error={error}
-        hint={value ? undefined : 'Type to search the library'}
-        onChange={(e) => {
-          setQ(e.target.value);
-          setOpen(true);
-        }}
-        role="combobox"
-        aria-expanded={open}
-        aria-autocomplete="list"
-      />
-      {open && results.data && results.data.length > 0 && (
-        <ul role="listbox" className="absolute z-20 mt-1 max-h-60 w-full overflow-auto rounded-lg border border-line-strong bg-paper-card shadow-tray">
-          {results.data.map((r) => (
-            <li key={r.id} role="option" aria-selected={r.id === value}>
-              <button
-                type="button"
-                className="w-full px-3 py-2 text-left hover:bg-paper-deep focus:bg-paper-deep"
-                onClick={() => {
-                  onPick(r.id, r.name);
-                  setQ(r.name);
-                  setOpen(false);
-                }}
-              >
-                {r.name}
-              </button>
-            </li>
-          ))}
-        </ul>
-      )}
-    </div>
-  );
-}
-
 const linesToSteps = (t: string) => t.split('\n').map((s) => s.trim()).filter(Boolean);
 
 interface Props {
   initial: AssemblyInput;
   names?: Record<number, string>;
+  /** The plate's own base trays by id (an archived one is no longer among the options but stays choosable here). */
+  trayNames?: Record<number, string>;
   busy?: boolean;
   formError?: string | null;
   onSubmit: (v: AssemblyValues, setError: UseFormSetError<AssemblyInput>) => void;
 }
 
-export function AssemblyForm({ initial, names = {}, busy, formError, onSubmit }: Props) {
+type PlateForm = UseFormReturn<AssemblyInput, unknown, AssemblyValues>;
+
+/** One add-on: the library's combobox, an amount, a unit the ingredient can be weighed in, a note. */
+function AddOnRow({ form, index: i, initialName, onRemove }: { form: PlateForm; index: number; initialName?: string; onRemove: () => void }) {
+  const [facts, setFacts] = useState<PickedIngredient | null>(null);
+  const id = useWatch({ control: form.control, name: `addOns.${i}.ingredientId` }) as number;
+  const unit = useWatch({ control: form.control, name: `addOns.${i}.unit` }) as string;
+  const [name, setName] = useState(initialName ?? '');
+  const units = useMemo(() => unitChoices(facts, unit), [facts, unit]);
+  const err = form.formState.errors.addOns?.[i];
+  return (
+    <div className="grid items-end gap-2 sm:grid-cols-[2fr_1fr_1fr_1fr_auto]">
+      <IngredientCombobox
+        label="Ingredient"
+        value={id ? { id, name } : null}
+        error={err?.ingredientId?.message}
+        onPick={(ing) => {
+          setFacts(ing);
+          setName(ing.name);
+          form.setValue(`addOns.${i}.ingredientId`, ing.id, { shouldDirty: true, shouldValidate: true });
+          const current = form.getValues(`addOns.${i}.unit`) ?? '';
+          const next = unitAfterPick(ing, current);
+          if (next !== current) form.setValue(`addOns.${i}.unit`, next, { shouldDirty: true });
+        }}
+      />
+      <TextField label="Amount" error={err?.amountText?.message} {...form.register(`addOns.${i}.amountText`)} />
+      <SelectField label="Unit" error={err?.unit?.message} {...form.register(`addOns.${i}.unit`)} value={unit}>
+        {units.map((u) => (
+          <option key={u.code} value={u.code}>
+            {u.label}
+          </option>
+        ))}
+      </SelectField>
+      <TextField label="Note" error={err?.note?.message} {...form.register(`addOns.${i}.note`)} />
+      <Button type="button" variant="ghost" onClick={onRemove} aria-label={`Remove add-on ${i + 1}`}>
+        Remove
+      </Button>
+    </div>
+  );
+}
+
+export function AssemblyForm({ initial, names = {}, trayNames = {}, busy, formError, onSubmit }: Props) {
   const form = useForm<AssemblyInput, unknown, AssemblyValues>({ resolver: zodResolver(createAssemblySchema), defaultValues: initial });
   const trays = useFieldArray({ control: form.control, name: 'trays' });
   const addOns = useFieldArray({ control: form.control, name: 'addOns' });
@@ -103,9 +104,20 @@ export function AssemblyForm({ initial, names = {}, busy, formError, onSubmit }:
         {err.trays?.message && <Notice tone="block" title={err.trays.message} />}
         {trays.fields.map((f, i) => (
           <div key={f.id} className="grid items-end gap-2 sm:grid-cols-[2fr_1fr_auto]">
-            <SelectField label="Base tray" error={err.trays?.[i]?.trayId?.message} {...form.register(`trays.${i}.trayId`, { valueAsNumber: true })}>
+            {/* Controlled by the watched value: the tray shows once the options have loaded, not only if they came first. */}
+            <SelectField
+              label="Base tray"
+              error={err.trays?.[i]?.trayId?.message}
+              {...form.register(`trays.${i}.trayId`, { valueAsNumber: true })}
+              value={Number.isFinite(Number(watchedTrays?.[i]?.trayId)) && Number(watchedTrays?.[i]?.trayId) > 0 ? String(watchedTrays?.[i]?.trayId) : ''}
+            >
               <option value="">Choose…</option>
-              {(trayOptions.data ?? []).map((t) => (
+              {[
+                ...(trayOptions.data ?? []),
+                ...Object.entries(trayNames)
+                  .filter(([id]) => !(trayOptions.data ?? []).some((t) => t.id === Number(id)))
+                  .map(([id, name]) => ({ id: Number(id), name: `${name} (archived)` })),
+              ].map((t) => (
                 <option key={t.id} value={t.id}>
                   {t.name}
                 </option>
@@ -127,24 +139,10 @@ export function AssemblyForm({ initial, names = {}, busy, formError, onSubmit }:
       <fieldset className="flex flex-col gap-2">
         <legend className="font-bold">Add-ons</legend>
         {addOns.fields.map((f, i) => (
-          <div key={f.id} className="grid items-end gap-2 sm:grid-cols-[2fr_1fr_1fr_1fr_auto]">
-            <IngredientPicker
-              label="Ingredient"
-              value={form.getValues(`addOns.${i}.ingredientId`) as number | undefined}
-              initialName={names[form.getValues(`addOns.${i}.ingredientId`) as number]}
-              error={err.addOns?.[i]?.ingredientId?.message}
-              onPick={(id) => form.setValue(`addOns.${i}.ingredientId`, id, { shouldValidate: true })}
-            />
-            <TextField label="Amount" error={err.addOns?.[i]?.amountText?.message} {...form.register(`addOns.${i}.amountText`)} />
-            <TextField label="Unit" hint="g, Tbsp, cup, slice…" error={err.addOns?.[i]?.unit?.message} {...form.register(`addOns.${i}.unit`)} />
-            <TextField label="Note" error={err.addOns?.[i]?.note?.message} {...form.register(`addOns.${i}.note`)} />
-            <Button type="button" variant="ghost" onClick={() => addOns.remove(i)} aria-label={`Remove add-on ${i + 1}`}>
-              Remove
-            </Button>
-          </div>
+          <AddOnRow key={f.id} form={form} index={i} initialName={names[form.getValues(`addOns.${i}.ingredientId`) as number]} onRemove={() => addOns.remove(i)} />
         ))}
         <div>
-          <Button type="button" variant="secondary" size="sm" onClick={() => addOns.append({ ingredientId: 0, amountText: '1', unit: 'Tbsp', note: '' })}>
+          <Button type="button" variant="secondary" size="sm" onClick={() => addOns.append({ ingredientId: 0, amountText: '1', unit: 'g', note: '' })}>
             Add an add-on
           </Button>
         </div>

@@ -1,6 +1,7 @@
 import { useEffect, useId, useRef, useState, type KeyboardEvent } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { IngredientDto } from '@shared/schemas/ingredients.schema';
+import { UNIT_OPTIONS } from '@shared/domain/units';
 import { ingredientSearchQuery } from '../api/trays.queries';
 
 export interface PickedIngredient {
@@ -8,6 +9,27 @@ export interface PickedIngredient {
   name: string;
   pieceNames: string[];
   hasDensity: boolean;
+}
+
+/**
+ * The units a line of this ingredient can be typed in: its pieces, then mass, then volume when it has a density
+ * (every standard unit while the ingredient is not known yet); a current unit outside them stays first.
+ */
+export function unitChoices(facts: PickedIngredient | null | undefined, current?: string): { code: string; label: string }[] {
+  const std = UNIT_OPTIONS.filter((u) => u.kind !== 'volume' || !facts || facts.hasDensity).map((u) => ({ code: u.code, label: u.label }));
+  const pieces = (facts?.pieceNames ?? []).map((p) => ({ code: p, label: `${p} (piece)` }));
+  const all = [...pieces, ...std];
+  if (current && !all.some((u) => u.code === current)) all.unshift({ code: current, label: current });
+  return all;
+}
+
+/**
+ * The unit a line takes when its ingredient is picked: its piece (a large egg first) when the line still has the
+ * default grams and the ingredient is counted in pieces; otherwise the unit stays, so a typed amount keeps its meaning.
+ */
+export function unitAfterPick(ing: PickedIngredient, current: string): string {
+  if (current === 'g' && ing.pieceNames.length) return ing.pieceNames.includes('large') ? 'large' : ing.pieceNames[0]!;
+  return current;
 }
 
 export function pickedFrom(dto: IngredientDto): PickedIngredient {

@@ -4,7 +4,6 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { DEFAULT_BAKE_RULES } from '@shared/domain/bake-rules-defaults';
 import { STORAGE_DEFAULTS, REHEAT_MIN_C, REHEAT_MIN_F } from '@shared/domain/eat-by';
 import { STANDARD_PANS, STANDARD_PAN_CODES } from '@shared/domain/scaling';
-import { UNIT_OPTIONS } from '@shared/domain/units';
 import type { RecipeCalcInput } from '@shared/schemas/ingredients.schema';
 import {
   PAN_LININGS,
@@ -19,7 +18,7 @@ import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Card, Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { ApiError } from '@/lib/problem';
-import { IngredientCombobox, type PickedIngredient } from './ingredient-combobox';
+import { IngredientCombobox, unitAfterPick, unitChoices, type PickedIngredient } from './ingredient-combobox';
 import { NutritionPreview } from './nutrition-preview';
 import { emptyTrayValues, trayToValues } from './tray-form-values';
 
@@ -178,13 +177,7 @@ function LineRow(props: {
   const err = form.formState.errors.lines?.[i];
   const id = useWatch({ control: form.control, name: `lines.${i}.ingredientId` }) as number;
   const unit = useWatch({ control: form.control, name: `lines.${i}.unit` }) as string;
-  const units = useMemo(() => {
-    const std = UNIT_OPTIONS.filter((u) => u.kind !== 'volume' || !facts || facts.hasDensity).map((u) => ({ code: u.code, label: u.label }));
-    const pieces = (facts?.pieceNames ?? []).map((p) => ({ code: p, label: `${p} (piece)` }));
-    const all = [...pieces, ...std];
-    if (unit && !all.some((u) => u.code === unit)) all.unshift({ code: unit, label: unit });
-    return all;
-  }, [facts, unit]);
+  const units = useMemo(() => unitChoices(facts, unit), [facts, unit]);
   return (
     <li className="grid gap-2 rounded-lg border border-line p-3 sm:grid-cols-2 sm:items-start">
       <IngredientCombobox
@@ -194,9 +187,8 @@ function LineRow(props: {
         onPick={(ing) => {
           props.onPick(ing);
           form.setValue(`lines.${i}.ingredientId`, ing.id, { shouldDirty: true, shouldValidate: true });
-          if (ing.pieceNames.length && form.getValues(`lines.${i}.unit`) === 'g') {
-            form.setValue(`lines.${i}.unit`, ing.pieceNames.includes('large') ? 'large' : ing.pieceNames[0], { shouldDirty: true });
-          }
+          const next = unitAfterPick(ing, form.getValues(`lines.${i}.unit`));
+          if (next !== form.getValues(`lines.${i}.unit`)) form.setValue(`lines.${i}.unit`, next, { shouldDirty: true });
         }}
       />
       <TextField label="Amount" inputMode="text" error={err?.amountText?.message} {...form.register(`lines.${i}.amountText`)} />
