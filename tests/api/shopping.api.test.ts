@@ -235,6 +235,10 @@ describe('the prep week\'s shopping list', () => {
     await parser.destroy();
     expect(text).toContain('Dairy and eggs');
     expect(text).toContain('3 × dozen large eggs');
+    // Prices on paper as on screen: 3 dozen at $3.99 = $11.97; cheese 34 oz → 5 packages of 8 oz at $3.99 = $19.95.
+    expect(text).toContain('$11.97');
+    expect(text).toContain('$19.95');
+    expect(text).toContain('Total: $31.92');
   });
 
   it("writes amounts in the reader's measure system: the list, the pantry and the PDF", async () => {

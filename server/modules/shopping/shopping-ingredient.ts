@@ -41,7 +41,8 @@ export function toShoppingIngredient(row: IIngredient): ShoppingRow {
             label: row.purchaseLabel?.trim() || `${Number(row.purchaseAmount)} ${purchaseUnit}`,
             size: row.purchaseAmount,
             unit: purchaseUnit,
-            price: row.priceCents === null || row.priceCents === undefined ? null : new Decimal(row.priceCents),
+            // The domain prices a package in currency units ('3.99'); the library stores cents.
+            price: row.priceCents === null || row.priceCents === undefined ? null : new Decimal(row.priceCents).div(100),
           }
         : null,
   };

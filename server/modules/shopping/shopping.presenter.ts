@@ -9,6 +9,8 @@ import type { ComputedShoppingList } from './shopping.service.js';
 const UNCHECKED: ShoppingCheckDto = { checked: false, checkedBy: null, checkedAt: null };
 
 const n2 = (d: Decimal) => d.toDecimalPlaces(2, Decimal.ROUND_HALF_UP).toNumber();
+/** Currency units (the domain's costs) as whole cents for the answer. */
+const cents = (d: Decimal) => d.times(100).toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toNumber();
 
 export function aisleLabel(aisle: string): string {
   if (aisle === OTHER_AISLE) return 'Other';
@@ -40,7 +42,7 @@ function presentItem(item: ShoppingItem, computed: ComputedShoppingList, check: 
           spareText: baseAmountText(p.spare, ing, system),
         }
       : null,
-    costCents: item.cost ? item.cost.toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toNumber() : null,
+    costCents: item.cost ? cents(item.cost) : null,
     check,
   };
 }
@@ -66,7 +68,7 @@ export function presentShoppingList(
     aisles,
     itemCount: items.length,
     checkedCount: items.filter((i) => i.check.checked).length,
-    totalCostCents: computed.list.totalCost.toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toNumber(),
+    totalCostCents: cents(computed.list.totalCost),
     costComplete: computed.list.costComplete,
     problems: computed.problems,
     bought: opts.bought ?? null,
