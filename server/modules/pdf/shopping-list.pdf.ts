@@ -50,7 +50,7 @@ export async function renderShoppingListPdf(list: ShoppingList, meta: ShoppingLi
       item.fromPantry.gt(0) ? amount(item, item.fromPantry) : '',
       amount(item, item.toBuy),
       item.purchase && item.toBuy.gt(0) ? `${item.purchase.packages} × ${item.purchase.label}` : item.toBuy.gt(0) ? 'as needed' : 'nothing',
-      item.cost ? `${cur}${fixed(item.cost, 2)}` : '',
+      item.cost && item.cost.gt(0) ? `${cur}${fixed(item.cost, 2)}` : '',
     ]);
     table(doc, COLUMNS, rows);
   }
