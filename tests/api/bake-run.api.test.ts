@@ -1,3 +1,4 @@
+import { PDFParse } from 'pdf-parse';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import { monitorEventLoopDelay } from 'node:perf_hooks';
@@ -273,6 +274,12 @@ describe('the bake run of a prep week', () => {
     const pdf = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.pdf`).buffer(true).expect(200);
     expect(pdf.headers['content-type']).toBe('application/pdf');
     expect(Buffer.from(pdf.body).subarray(0, 5).toString()).toBe('%PDF-');
+    // The title names the prep day as people write it (Sunday 4 January 2026), not as an ISO date.
+    const parser = new PDFParse({ data: new Uint8Array(Buffer.from(pdf.body)) });
+    const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+    await parser.destroy();
+    expect(text).toContain('prep Sun 4 Jan');
+    expect(text).not.toContain('prep 2026-01-04');
     const ics = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.ics`).expect(200);
     expect(ics.headers['content-type']).toMatch(/text\/calendar/);
     // RFC 5545 floating local times: preheat at 09:30 (just in time for the 09:42 start).

@@ -16,6 +16,7 @@ import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { renderBakeRunPdf } from '../pdf/bake-run.pdf.js';
+import { shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import * as setup from './bake-setup.service.js';
 import * as runs from './bake-run.service.js';
 import { bakeRunIcs } from './bake-run-ics.js';
@@ -113,7 +114,7 @@ export function bakeRunRoutes() {
       const ws = await emOf(req).findOneOrFail(Workspace, { id: actorOf(req).workspaceId });
       const { filename, buffer } = await renderBakeRunPdf(run, {
         businessName: ws.name,
-        title: `Bake run, ${dto.weekName}, prep ${dto.prepDate}`,
+        title: `Bake run, ${dto.weekName}, prep ${shortDate(dto.prepDate as IsoDate)}`,
         filename: `bake-run-${dto.prepDate}.pdf`,
       });
       res.setHeader('content-type', 'application/pdf');
