@@ -127,7 +127,7 @@ export function bakeRunRoutes() {
     allow('coach', 'assistant'),
     validated({ params: weekIdParam, query: prepDateQuery }, async ({ params, query }, req, res) => {
       const { dto, run } = await plannedRun(req, params.weekId, query.prepDate);
-      const text = bakeRunIcs(run, { calendarName: `Bake run ${dto.prepDate}`, uidPrefix: `week${dto.weekId}-${dto.prepDate}` });
+      const text = bakeRunIcs(run, { calendarName: `Bake run, prep ${shortDate(dto.prepDate as IsoDate)}`, uidPrefix: `week${dto.weekId}-${dto.prepDate}` });
       res.setHeader('content-type', 'text/calendar; charset=utf-8');
       res.setHeader('content-disposition', `attachment; filename="bake-run-${dto.prepDate}.ics"`);
       res.send(text);
