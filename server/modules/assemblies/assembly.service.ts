@@ -3,11 +3,9 @@ import { parseAmount } from '@shared/domain/units.js';
 import type { AssemblyDto, AssemblyValues, PlatePreviewDto, PlatePreviewValues, UpdateAssemblyValues } from '@shared/schemas/assemblies.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
-import { Tray } from '../trays/tray.entity.js';
-import { gramsOfLine, loadTrayIngredients } from '../trays/tray-nutrition.js';
 import { Assembly, AssemblyItem, type IAssembly } from './assembly.entity.js';
 import { presentAssembly } from './assembly.presenter.js';
-import { addOnGrams, loadPlateContext, plateFacts, type PlateItemRow, type PlateRow } from './plate-facts.js';
+import { addOnGrams, computePlateFacts, loadPlateContext, type PlateItemRow, type PlateRow } from './plate-facts.js';
 import { preparedRows } from '../../db/prepared.js';
 
 /**
@@ -67,26 +65,45 @@ export async function getAssembly(em: EntityManager, actor: Actor, id: number): 
   return presentAssembly(a, await loadPlateContext(em, actor, [a]));
 }
 
-/** Trays must be the workspace's, add-ons usable ingredients whose amount can be weighed. */
+/** A plate's parts as the rows plate facts read (not saved: negative ids, no plate id). */
+function draftOf(v: Pick<AssemblyValues, 'trays' | 'addOns'>): PlateRow {
+  const items: PlateItemRow[] = [
+    ...v.trays.map((t, i) => ({ id: -1 - i, position: i, tray: { id: t.trayId }, portions: String(t.portions), amountText: '', unit: '' })),
+    ...v.addOns.map((x, j) => ({
+      id: -1 - v.trays.length - j,
+      position: v.trays.length + j,
+      ingredient: { id: x.ingredientId },
+      amountText: x.amountText,
+      amount: parseAmount(x.amountText).value.toString(),
+      unit: x.unit,
+      note: x.note ?? '',
+    })),
+  ];
+  return { id: 0, name: '', version: 0, updatedAt: new Date(0), items };
+}
+
+/**
+ * Trays must be the workspace's, add-ons usable ingredients whose amount can be weighed: checked against the plate
+ * context the parts load (the trays of the workspace, the usable ingredients), which the caller may go on using.
+ */
 async function checkValues(em: EntityManager, actor: Actor, v: Pick<AssemblyValues, 'trays' | 'addOns'>) {
+  const draft = draftOf(v);
+  const ctx = await loadPlateContext(em, actor, [draft]);
   const errors: Record<string, string[]> = {};
-  const trayIds = v.trays.map((t) => t.trayId);
-  const trays = trayIds.length ? await em.find(Tray, { id: { $in: trayIds }, workspace: actor.workspaceId }) : [];
-  const known = new Set(trays.map((t) => t.id));
   v.trays.forEach((t, i) => {
-    if (!known.has(t.trayId)) errors[`trays.${i}.trayId`] = ['This base tray does not exist in your workspace'];
+    if (!ctx.trays.has(t.trayId)) errors[`trays.${i}.trayId`] = ['This base tray does not exist in your workspace'];
   });
-  const ingredients = await loadTrayIngredients(em, actor, v.addOns.map((a) => a.ingredientId));
+  const addOnRows = draft.items.filter((i) => i.ingredient);
   v.addOns.forEach((a, i) => {
-    const ing = ingredients.get(a.ingredientId);
+    const ing = ctx.ingredients.get(a.ingredientId);
     if (!ing) {
       errors[`addOns.${i}.ingredientId`] = ['This ingredient does not exist in your library'];
       return;
     }
-    const grams = gramsOfLine({ ingredientId: a.ingredientId, amount: parseAmount(a.amountText).value, unit: a.unit }, ing);
-    if (grams === null) errors[`addOns.${i}.unit`] = [`${ing.name} has no weight for "${a.unit}": pick grams or a unit it knows`];
+    if (addOnGrams(addOnRows[i]!, ctx) === null) errors[`addOns.${i}.unit`] = [`${ing.name} has no weight for "${a.unit}": pick grams or a unit it knows`];
   });
   if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
+  return { draft, addOnRows, ctx };
 }
 
 function writeItems(em: EntityManager, a: IAssembly, v: AssemblyValues) {
@@ -109,30 +126,16 @@ function writeItems(em: EntityManager, a: IAssembly, v: AssemblyValues) {
 
 /**
  * The numbers of a plate being edited, before it is saved: the same checks and facts as a saved plate (a 400 names
- * the part that cannot be used), nothing written.
+ * the part that cannot be used), nothing written. Computed without the facts memo: a draft is asked once.
  */
 export async function previewAssembly(em: EntityManager, actor: Actor, v: PlatePreviewValues): Promise<PlatePreviewDto> {
-  await checkValues(em, actor, v);
-  const items: PlateItemRow[] = [
-    ...v.trays.map((t, i) => ({ id: -1 - i, position: i, tray: { id: t.trayId }, portions: String(t.portions), amountText: '', unit: '' })),
-    ...v.addOns.map((x, j) => ({
-      id: -1 - v.trays.length - j,
-      position: v.trays.length + j,
-      ingredient: { id: x.ingredientId },
-      amountText: x.amountText,
-      amount: parseAmount(x.amountText).value.toString(),
-      unit: x.unit,
-      note: x.note ?? '',
-    })),
-  ];
-  const draft: PlateRow = { id: 0, name: '', version: 0, updatedAt: new Date(0), items };
-  const ctx = await loadPlateContext(em, actor, [draft]);
-  const facts = plateFacts(draft, ctx);
+  const { draft, addOnRows, ctx } = await checkValues(em, actor, v);
+  const facts = computePlateFacts(draft, ctx);
   return {
     macros: facts.macros,
     allergens: facts.allergens,
     complete: facts.complete,
-    addOnGrams: items.filter((i) => i.ingredient).map((i) => addOnGrams(i, ctx)?.toDecimalPlaces(1).toNumber() ?? null),
+    addOnGrams: addOnRows.map((i) => addOnGrams(i, ctx)?.toDecimalPlaces(1).toNumber() ?? null),
   };
 }
 
