@@ -16,6 +16,7 @@ import {
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
+import { cmOf, feetInches, kgOf, perLb, poundsOf } from '@shared/domain/body-measures';
 import { useMe } from '@/features/auth/hooks/use-me';
 
 export const emptyClient: CreateClientInput = {
@@ -107,35 +108,6 @@ function TargetsPreview({ values }: { values: Partial<CreateClientInput> }) {
     </div>
   );
 }
-
-/** Centimetres per inch and kilograms per pound, exact by definition (NIST Handbook 44, Appendix C). */
-const CM_PER_IN = 2.54;
-const KG_PER_LB = 0.45359237;
-const round = (v: number, dp: number) => Math.round(v * 10 ** dp) / 10 ** dp;
-
-/** Stored centimetres as feet and inches (inches to 0.5), for a US reader; blank when not a number. */
-export function feetInches(cm: string): { ft: string; in: string } {
-  const total = Number(cm) / CM_PER_IN;
-  if (!cm.trim() || !Number.isFinite(total)) return { ft: '', in: '' };
-  const halfInches = Math.round(total * 2) / 2;
-  return { ft: String(Math.floor(halfInches / 12)), in: String(halfInches - 12 * Math.floor(halfInches / 12)) };
-}
-
-/** Feet and inches as typed → centimetres to 0.01 (what the profile stores); '' when neither is a number. */
-export function cmOf(ft: string, inches: string): string {
-  const f = ft.trim() ? Number(ft) : 0;
-  const i = inches.trim() ? Number(inches) : 0;
-  if ((!ft.trim() && !inches.trim()) || !Number.isFinite(f) || !Number.isFinite(i)) return '';
-  return String(round((f * 12 + i) * CM_PER_IN, 2));
-}
-
-export const poundsOf = (kg: string) => (kg.trim() && Number.isFinite(Number(kg)) ? String(round(Number(kg) / KG_PER_LB, 1)) : '');
-/** Protein per kg of body weight as per lb (× 0.45359237 kg/lb), to 0.01; '' when not a number. */
-export const perLb = (gPerKg: unknown) => {
-  const v = Number(gPerKg);
-  return String(gPerKg ?? '').trim() && Number.isFinite(v) && v > 0 ? String(round(v * KG_PER_LB, 2)) : '';
-};
-export const kgOf = (lb: string) => (lb.trim() && Number.isFinite(Number(lb)) ? String(round(Number(lb) * KG_PER_LB, 2)) : '');
 
 /**
  * Height in feet and inches and weight in pounds for a coach who works in US measures; the profile keeps
