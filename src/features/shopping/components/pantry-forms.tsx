@@ -23,18 +23,23 @@ const MASS = ['g', 'kg', 'oz', 'lb'];
 const GRAMS_PER_OZ = GRAMS_PER_UNIT.oz.toNumber();
 const VOLUME = ['ml', 'l', 'tsp', 'tbsp', 'cup', 'pint', 'quart'];
 
+/** The piece a count-bought item is bought in (eggs: "large"), or null when it is bought by mass or volume. */
+function purchasePiece(ing: Pick<IngredientDto, 'purchase'> | null): string | null {
+  const unit = ing?.purchase?.unit;
+  return unit && !MASS.includes(unit) && !VOLUME.includes(unit) ? unit : null;
+}
+
 /** Units an ingredient can be counted in: mass always, volume with a density, its pieces. */
 export function unitsFor(ing: Pick<IngredientDto, 'densityGPerMl' | 'pieceWeights' | 'purchase'> | null): string[] {
   if (!ing) return MASS;
   const pieces = Object.keys(ing.pieceWeights ?? {});
-  const purchasePiece = ing.purchase && !MASS.includes(ing.purchase.unit) && !VOLUME.includes(ing.purchase.unit) ? [ing.purchase.unit] : [];
-  return [...new Set([...purchasePiece, ...pieces, ...MASS, ...(ing.densityGPerMl ? VOLUME : [])])];
+  const bought = purchasePiece(ing);
+  return [...new Set([...(bought ? [bought] : []), ...pieces, ...MASS, ...(ing.densityGPerMl ? VOLUME : [])])];
 }
 
 /** The unit a new pantry amount starts in: the piece a count-bought item is bought in, else the reader's mass unit. */
 export function startingUnit(ing: Pick<IngredientDto, 'purchase'> | null, system: 'us' | 'metric'): string {
-  if (ing?.purchase && !MASS.includes(ing.purchase.unit) && !VOLUME.includes(ing.purchase.unit)) return ing.purchase.unit;
-  return system === 'metric' ? 'g' : 'oz';
+  return purchasePiece(ing) ?? (system === 'metric' ? 'g' : 'oz');
 }
 
 export function AddPantryItem() {
@@ -112,7 +117,7 @@ export function PantryRow({ item }: { item: PantryItemDto }) {
   const update = useUpdatePantryItem();
   const remove = useDeletePantryItem();
   const { unitSystem } = useMe();
-  const start = startingAmount(item, unitSystem);
+  const [start] = useState(() => startingAmount(item, unitSystem));
   const [amount, setAmount] = useState(start.amount);
   const [unit, setUnit] = useState(start.unit);
   const [error, setError] = useState<string | null>(null);
