@@ -83,16 +83,16 @@ export const UNIT_OPTIONS: readonly UnitOption[] = [
 
 export const UNIT_CODES: readonly StandardUnit[] = UNIT_OPTIONS.map((u) => u.code);
 
-const SYMBOLS: ReadonlyMap<string, string> = new Map(UNIT_OPTIONS.map((u) => [u.code, u.symbol]));
+const OPTION_OF: ReadonlyMap<string, UnitOption> = new Map(UNIT_OPTIONS.map((u) => [u.code, u]));
 
 /** A unit as people write it: the symbol of a standard unit ("mL", "fl oz"), a piece name as stored. */
 export function unitSymbol(unit: UnitCode): string {
-  return SYMBOLS.get(unit) ?? unit;
+  return OPTION_OF.get(unit)?.symbol ?? unit;
 }
 
 /**
  * An amount as typed with its unit, for people to read before an ingredient's name: standard units by their symbol
- * ("1 fl oz", "250 mL", "1 L"), `each` as a count ("2 ×"), a piece name as stored ("1/4 avocado", "2 slices").
+ * ("1 fl oz", "250 mL", "1 L"), `each` as a count ("2 ×"), a piece name as stored ("1/4 avocado", "2 slice").
  */
 export function amountWithUnit(amountText: string, unit: UnitCode): string {
   const amount = amountText.trim();
@@ -108,8 +108,6 @@ function foodNoun(name: string): string {
   return name.split(/[,(]/, 1)[0]!.toLowerCase().split(/[\s-]+/).filter(Boolean).at(-1) ?? '';
 }
 
-const SYSTEM_OF: ReadonlyMap<string, MeasureSystem | 'any'> = new Map(UNIT_OPTIONS.map((u) => [u.code, u.system]));
-
 /**
  * A typed mass or volume in the reader's other measure system, as a kitchen amount ("3 oz" → "85 g" for a metric
  * reader, "100 g" → "3 ½ oz" for a US one); null when there is nothing to convert: a piece, a unit already of the
@@ -117,7 +115,7 @@ const SYSTEM_OF: ReadonlyMap<string, MeasureSystem | 'any'> = new Map(UNIT_OPTIO
  */
 export function amountInSystem(amountText: string, unit: UnitCode, system: MeasureSystem): string | null {
   const code = unit.trim().toLowerCase();
-  const from = SYSTEM_OF.get(code);
+  const from = OPTION_OF.get(code)?.system;
   if (from === undefined || from === 'any' || from === system) return null;
   let parsed: ParsedAmount;
   try {
