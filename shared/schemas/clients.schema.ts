@@ -84,7 +84,12 @@ export type CreateClientInput = z.input<typeof createClientSchema>;
 export type CreateClientData = z.output<typeof createClientSchema>;
 
 export const updateClientSchema = z
-  .object({ ...clientFields, version: z.number().int().positive() })
+  .object({
+    ...clientFields,
+    /** true archives the client (they leave the list and new weeks), false restores them. */
+    archived: z.boolean(),
+    version: z.number().int().positive(),
+  })
   .partial()
   .required({ version: true })
   .refine(sharesWithinDay, { path: ['slotShares'], message: 'The meal shares add up to more than the whole day' });
@@ -98,6 +103,8 @@ export interface ClientSummaryDto {
   id: number;
   name: string;
   householdMultiplier: string;
+  /** When the coach archived the client (ISO time), else null. */
+  archivedAt: string | null;
 }
 
 export interface ClientTargetsDto extends MacroTargets {

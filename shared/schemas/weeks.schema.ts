@@ -114,6 +114,8 @@ export interface BoardClientDto {
   dislikes: string[];
   /** Targets for the board's meal slots (their share of the day). */
   targets: MacroTargets;
+  /** Archived since: on this board only because they have plates on it. */
+  archived: boolean;
 }
 
 export interface BoardCellDto {

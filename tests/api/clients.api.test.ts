@@ -77,7 +77,7 @@ describe('client profiles and targets', () => {
     await makeClient(coach, { name: 'Ada', householdMultiplier: '3', healthNotes: 'private' });
     const assistant = await member(app, coach, 'assistant');
     const res = await assistant.agent.get('/api/clients').expect(200);
-    expect(res.body).toEqual([{ id: expect.any(Number), name: 'Ada', householdMultiplier: '3' }]);
+    expect(res.body).toEqual([{ id: expect.any(Number), name: 'Ada', householdMultiplier: '3', archivedAt: null }]);
     const one = await assistant.agent.get(`/api/clients/${res.body[0].id}`);
     expect(one.status).toBe(403);
   });
@@ -146,5 +146,33 @@ describe('client profiles and targets', () => {
     expect(await sql('select id from client where id = $1', [c.id])).toEqual([]);
     const [m] = await sql<{ client_id: number | null }>('select client_id from membership where user_id = $1', [linked.userId]);
     expect(m.client_id).toBeNull();
+  });
+
+  it('archives a client with the version read (409 on a stale one) and restores them; an archived client cannot be invited', async () => {
+    const coach = await coachWorkspace(app);
+    const c = await makeClient(coach, { name: 'Pia' });
+    const before = Date.now();
+    const archived = await coach.agent.patch(`/api/clients/${c.id}`).send({ archived: true, version: c.version }).expect(200);
+    expect(Date.parse(archived.body.archivedAt)).toBeGreaterThanOrEqual(before - 1000);
+    expect(archived.body.version).toBe(c.version + 1);
+    // The list keeps them, marked (the page shows them on request); the home's count leaves them out.
+    const list = await coach.agent.get('/api/clients').expect(200);
+    expect(list.body.find((x: { id: number }) => x.id === c.id).archivedAt).toBe(archived.body.archivedAt);
+    const glance = await coach.agent.get('/api/weeks/glance').expect(200);
+    expect(glance.body.setup.clients).toBe(0);
+    // Archiving again keeps the first date.
+    const again = await coach.agent.patch(`/api/clients/${c.id}`).send({ archived: true, version: archived.body.version }).expect(200);
+    expect(again.body.archivedAt).toBe(archived.body.archivedAt);
+    // A stale version is refused, and changes nothing.
+    const stale = await coach.agent.patch(`/api/clients/${c.id}`).send({ archived: false, version: c.version }).expect(409);
+    expect(stale.body.current.archivedAt).toBe(archived.body.archivedAt);
+    const invite = await coach.agent.post('/api/invitations').send({ email: 'pia@example.test', role: 'client', clientId: c.id }).expect(400);
+    expect(invite.body.errors).toEqual({ clientId: ['Pia is archived: restore them before inviting them'] });
+    expect(await sql('select id from invitation where client_id = $1', [c.id])).toEqual([]);
+    const restored = await coach.agent.patch(`/api/clients/${c.id}`).send({ archived: false, version: again.body.version }).expect(200);
+    expect(restored.body.archivedAt).toBeNull();
+    expect((await coach.agent.get('/api/weeks/glance').expect(200)).body.setup.clients).toBe(1);
+    const bad = await coach.agent.patch(`/api/clients/${c.id}`).send({ archived: 'yes', version: restored.body.version }).expect(400);
+    expect(Object.keys(bad.body.errors)).toEqual(['archived']);
   });
 });

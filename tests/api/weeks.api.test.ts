@@ -314,6 +314,52 @@ describe('the week board', () => {
     expect(next.body.cells.map((c: { date: string }) => c.date).sort()).toEqual(['2026-01-12', '2026-01-13']);
   });
 
+  it('an archived client stays on the weeks where they have plates, leaves the others and copied weeks', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach);
+    const other = await makeClient(coach, { name: 'Still coached' });
+    const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id, [DAYS[0], DAYS[1]]);
+    expect(filled.status).toBe(200);
+    const profile = (await coach.agent.get(`/api/clients/${client.id}`).expect(200)).body;
+    await coach.agent.patch(`/api/clients/${client.id}`).send({ archived: true, version: profile.version }).expect(200);
+
+    // The week they eat from keeps them, marked, with their plates and portions counted.
+    const kept = (await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body;
+    const ids = kept.clients.map((c: { id: number; archived: boolean }) => [c.id, c.archived]);
+    expect(ids).toEqual(expect.arrayContaining([[client.id, true], [other.id, false]]));
+    expect(kept.cells).toHaveLength(2);
+    expect(kept.inventory[0]).toMatchObject({ needed: 2 });
+    // Their plates there can still change (moved to another day).
+    const moved = await coach.agent
+      .put(`/api/weeks/${week.id}/cells`)
+      .send({ version: kept.week.version, cells: [{ clientId: client.id, date: DAYS[1], slot: 'breakfast', assemblyId: null }, { clientId: client.id, date: DAYS[2], slot: 'breakfast', assemblyId: plate.id }] })
+      .expect(200);
+    expect(moved.body.cells.map((c: { date: string }) => c.date).sort()).toEqual([DAYS[0], DAYS[2]]);
+
+    // A copied week leaves them out; on a week without their plates they are not on the board and cannot be placed.
+    const next = (await coach.agent.post(`/api/weeks/${week.id}/copy`).send({ startDate: '2026-01-12', prepDate: '2026-01-11' }).expect(201)).body;
+    expect(next.cells).toEqual([]);
+    expect(next.clients.map((c: { id: number }) => c.id)).toEqual([other.id]);
+    const refused = await fillWeek(coach, next.week.id, next.week.version, client.id, plate.id, ['2026-01-12']);
+    expect(refused.status).toBe(400);
+    expect(refused.body.errors).toEqual({ 'cells.0.clientId': ['This client is not in your workspace, or is archived (restore them to plan their plates)'] });
+    expect(await sql('select id from week_cell where week_id = $1', [next.week.id])).toEqual([]);
+
+    // With their last plate there gone they leave that board too; the answer to the edit is what a read gives.
+    const cleared = await coach.agent
+      .put(`/api/weeks/${week.id}/cells`)
+      .send({ version: moved.body.week.version, cells: [DAYS[0], DAYS[2]].map((date) => ({ clientId: client.id, date, slot: 'breakfast', assemblyId: null })) })
+      .expect(200);
+    expect(cleared.body.clients.map((c: { id: number }) => c.id)).toEqual([other.id]);
+    expect((await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body).toEqual(cleared.body);
+
+    // Restored, they are back on every board.
+    const archived = (await coach.agent.get(`/api/clients/${client.id}`).expect(200)).body;
+    await coach.agent.patch(`/api/clients/${client.id}`).send({ archived: false, version: archived.version }).expect(200);
+    const back = (await coach.agent.get(`/api/weeks/${next.week.id}`).expect(200)).body;
+    expect(back.clients.map((c: { id: number }) => c.id).sort()).toEqual([client.id, other.id].sort());
+  });
+
   it('flags a dislike typed as people say it against the library name of an ingredient in the tray', async () => {
     const coach = await coachWorkspace(app);
     const { plate, week, ing } = await setup(coach);

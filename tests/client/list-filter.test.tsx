@@ -12,6 +12,7 @@ const client = (id: number, name: string, allergens: string[] = [], dislikes: st
   allergens,
   dislikes,
   account: null,
+  archivedAt: null as string | null,
 });
 const clients = [
   client(1, 'Tomás Ferreira'),
@@ -48,5 +49,24 @@ describe('the clients list', () => {
     renderInApp(<ClientsPage />);
     await waitFor(() => expect(rows()).toHaveLength(3));
     expect(screen.queryByLabelText('Find a client')).toBeNull();
+  });
+
+  it('leaves archived clients out until the coach asks for them, marked', async () => {
+    const list = [...clients.slice(0, 3), { ...client(9, 'Olga Paused'), archivedAt: '2026-11-20T09:00:00.000Z' }];
+    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(list)));
+    renderInApp(<ClientsPage />);
+    await waitFor(() => expect(rows()).toHaveLength(3));
+    expect(rows()).not.toContain('Olga Paused');
+    fireEvent.click(screen.getByLabelText('Show archived clients (1)'));
+    expect(rows()).toContain('Olga Paused');
+    const row = screen.getAllByRole('row').find((r) => r.textContent?.includes('Olga Paused'))!;
+    expect(row.textContent).toContain('Archived');
+  });
+
+  it('says so when every client is archived', async () => {
+    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse([{ ...client(9, 'Olga Paused'), archivedAt: '2026-11-20T09:00:00.000Z' }])));
+    renderInApp(<ClientsPage />);
+    await waitFor(() => expect(screen.getByText('Every client is archived. Show them above, or add a new client.')).toBeTruthy());
+    expect(screen.queryAllByRole('row')).toHaveLength(0);
   });
 });

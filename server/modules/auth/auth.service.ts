@@ -126,6 +126,7 @@ export async function createInvitation(
     if (input.role !== 'client') throw ValidationError.field('clientId', 'Only a client invitation links a client profile');
     const [client] = await loadClients(em, actor.workspaceId, [input.clientId]);
     if (!client) throw ValidationError.field('clientId', 'No such client in your workspace');
+    if (client.archivedAt) throw ValidationError.field('clientId', `${client.name} is archived: restore them before inviting them`);
   }
   const existing = await em.findOne(Membership, { workspace: actor.workspaceId, user: { email: input.email } });
   if (existing) {

@@ -36,6 +36,11 @@ export const Client = defineEntity({
     dislikes: p.json<string[]>().default('[]'),
     /** Coach only. */
     healthNotes: p.text().default(''),
+    /**
+     * When the coach archived the client (they paused or left), else null. An archived client leaves the client list
+     * and the boards of weeks they have no plates in; past weeks and published plans keep them.
+     */
+    archivedAt: p.datetime().nullable(),
     version: p.integer().version(),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
@@ -64,5 +69,6 @@ export type ClientFacts = Pick<
   | 'slotShares'
   | 'allergens'
   | 'dislikes'
+  | 'archivedAt'
   | 'version'
 >;

@@ -85,8 +85,13 @@ export function computePlannedTargets(client: ClientFacts, mealSlots: readonly s
   return { targetKcal: r(day.targetKcal, 0), netCarbCapG: r(day.netCarbCapG, 1), proteinG: r(day.proteinG, 1), fatG: r(day.fatG, 1) };
 }
 
-export function presentClientSummary(c: Pick<ClientFacts, 'id' | 'name' | 'householdMultiplier'>): ClientSummaryDto {
-  return { id: c.id, name: c.name, householdMultiplier: new Decimal(c.householdMultiplier).toString() };
+export function presentClientSummary(c: Pick<ClientFacts, 'id' | 'name' | 'householdMultiplier' | 'archivedAt'>): ClientSummaryDto {
+  return {
+    id: c.id,
+    name: c.name,
+    householdMultiplier: new Decimal(c.householdMultiplier).toString(),
+    archivedAt: c.archivedAt ? new Date(c.archivedAt).toISOString() : null,
+  };
 }
 
 export function presentClientSelf(c: IClient, mealSlots: readonly string[]): ClientSelfDto {

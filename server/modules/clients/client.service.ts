@@ -25,20 +25,25 @@ export async function findClient(em: EntityManager, actor: Actor, id: number): P
 }
 
 /**
- * A workspace's clients as plain rows, by name (what the week board reads: a board holds every client, and
- * hydrating each as a managed entity cost more than computing the board). One prepared statement; writes go
+ * The clients a week's board shows, as plain rows, by name: every client not archived, and an archived one who has
+ * plates on that week (a past week keeps the people it fed). Plain rows because a board holds every client, and
+ * hydrating each as a managed entity cost more than computing the board. One prepared statement; writes go
  * through the Client entity.
  */
-export async function loadClientFacts(em: EntityManager, workspaceId: number): Promise<ClientFacts[]> {
+export async function loadClientFacts(em: EntityManager, workspaceId: number, weekId: number): Promise<ClientFacts[]> {
   return preparedRows<ClientFacts>(
     em,
     'trayline_client_facts',
     `select id, name, email, household_multiplier as "householdMultiplier", sex, age_years as "ageYears",
             height_cm as "heightCm", weight_kg as "weightKg", activity, goal, goal_adjustment as "goalAdjustment",
             net_carb_cap_g as "netCarbCapG", protein_g_per_kg as "proteinGPerKg", target_mode as "targetMode",
-            manual_targets as "manualTargets", slot_shares as "slotShares", allergens, dislikes, version
-       from client where workspace_id = $1 order by name asc, id asc`,
-    [workspaceId],
+            manual_targets as "manualTargets", slot_shares as "slotShares", allergens, dislikes,
+            archived_at as "archivedAt", version
+       from client
+      where workspace_id = $1
+        and (archived_at is null or exists (select 1 from week_cell wc where wc.week_id = $2 and wc.client_id = client.id))
+      order by name asc, id asc`,
+    [workspaceId, weekId],
   );
 }
 
@@ -126,6 +131,9 @@ export async function updateClient(em: EntityManager, actor: Actor, id: number, 
     throw ValidationError.field('manualTargets', 'Type the daily targets, or let Trayline compute them');
   }
   em.assign(row, next);
+  // Archiving keeps the first date; restoring clears it.
+  if (input.archived === true && !row.archivedAt) row.archivedAt = new Date();
+  if (input.archived === false) row.archivedAt = null;
   await em.flush();
   return getClient(em, actor, id);
 }

@@ -167,7 +167,7 @@ async function loadBoardParts(em: EntityManager, actor: Actor, weekId: number) {
   const settings = boardSettings(em, actor.workspaceId);
   const [{ slots }, clients, assemblies, cells, trays, ctx] = await Promise.all([
     settings,
-    loadClientFacts(em, actor.workspaceId),
+    loadClientFacts(em, actor.workspaceId, weekId),
     loadPlateRows(em, actor.workspaceId),
     loadCellRows(em, actor.workspaceId, weekId),
     loadWeekTrayRows(em, actor.workspaceId, weekId),
@@ -259,6 +259,7 @@ export function presentBoard(d: BoardData, result: BoardResult = computeBoard(bo
       allergens: (c.allergens ?? []) as AllergenCode[],
       dislikes: c.dislikes ?? [],
       targets: targetsOf(d, c),
+      archived: c.archivedAt != null,
     })),
     plates: platesDto,
     cells: d.cells.map((c) => cellAnswer(cellDto(c))),

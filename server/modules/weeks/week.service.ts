@@ -178,7 +178,7 @@ function checkCells(d: BoardData, cells: PutCells['cells']) {
   const seen = new Set<string>();
   cells.forEach((c, i) => {
     const at = `cells.${i}`;
-    if (!clients.has(c.clientId)) errors[`${at}.clientId`] = ['This client is not in your workspace'];
+    if (!clients.has(c.clientId)) errors[`${at}.clientId`] = ['This client is not in your workspace, or is archived (restore them to plan their plates)'];
     if (!days.has(c.date)) errors[`${at}.date`] = ['This day is not on the board of this week'];
     if (!d.slots.includes(c.slot)) errors[`${at}.slot`] = [`Meal slots of this workspace: ${d.slots.join(', ')}`];
     if (c.prepDate && !prepDates.has(c.prepDate)) errors[`${at}.prepDate`] = ['Not a prep date of this week'];
@@ -275,7 +275,10 @@ function withEditedCells(data: BoardData, version: number, cells: PutCells['cell
   }));
   // In the order the board reads them (day, then id), as a fresh read would give them.
   const all = [...kept, ...placed].sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : a.id - b.id));
-  return { ...data, week: { ...data.week, version }, cells: all };
+  // An archived client is on the board through their plates: with the last one gone, they leave it (as on a read).
+  const planned = new Set(all.map((c) => c.client.id));
+  const clients = data.clients.filter((c) => !c.archivedAt || planned.has(c.id));
+  return { ...data, week: { ...data.week, version }, clients, cells: all };
 }
 
 /** Replaces the week's tray counts. */
@@ -340,7 +343,7 @@ export async function copyDay(em: EntityManager, actor: Actor, id: number, v: Co
   });
 }
 
-/** A new week with the same board shifted to a new start date, and the same tray counts. */
+/** A new week with the same board shifted to a new start date (archived clients left out), and the same tray counts. */
 export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: CopyWeek): Promise<BoardAnswer> {
   const source = await findWeek(em, actor, id);
   checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
@@ -350,7 +353,8 @@ export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: C
     await tx.flush();
     const mapPrep = (d: IsoDate | null | undefined): IsoDate | null =>
       d && d === source.secondPrepDate ? (v.secondPrepDate ?? null) : null;
-    for (const c of await tx.find(WeekCell, { week: source.id })) {
+    // Archived clients stay behind: a copied week plans the people still coached.
+    for (const c of await tx.find(WeekCell, { week: source.id, client: { archivedAt: null } })) {
       tx.create(WeekCell, {
         week: w.id,
         client: c.client.id,
@@ -389,7 +393,7 @@ async function setupCounts(em: EntityManager, workspaceId: number): Promise<Setu
     'trayline_setup_counts',
     `select (select count(*) from tray where workspace_id = $1 and not archived)::int as trays,
             (select count(*) from assembly where workspace_id = $1)::int as plates,
-            (select count(*) from client where workspace_id = $1)::int as clients,
+            (select count(*) from client where workspace_id = $1 and archived_at is null)::int as clients,
             (select count(*) from oven where workspace_id = $1)::int as ovens,
             (select count(*) from week where workspace_id = $1)::int as weeks`,
     [workspaceId],

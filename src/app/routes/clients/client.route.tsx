@@ -15,11 +15,23 @@ import { errorMessage, isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 
+/** What archiving a client does, said where the coach archives and on an archived profile. */
+const ARCHIVE_MEANS =
+  'An archived client leaves the client list and the boards of weeks without their plates, and copied weeks leave them out; past weeks and the plans they were sent keep them. Restore them any time.';
+
 function InviteCard({ client }: { client: ClientDto }) {
   const invite = useInviteClient(client.id);
   const [email, setEmail] = useState(client.email ?? '');
   const [link, setLink] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
+  if (client.archivedAt && !client.account) {
+    return (
+      <Card>
+        <h2 className="mb-2 text-xl">Invite to “My plates”</h2>
+        <p>Restore {client.name} to invite them.</p>
+      </Card>
+    );
+  }
   if (client.account) {
     return (
       <Card>
@@ -75,23 +87,62 @@ export function Component() {
   const navigate = useNavigate();
   const [formError, setFormError] = useState<string | null>(null);
   const [stale, setStale] = useState(false);
+  const [archiveError, setArchiveError] = useState<string | null>(null);
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   const client = q.data as ClientDto;
   const slots = Object.keys(client.targets.slots);
+  const onStale = () => {
+    setStale(true);
+    q.refetch();
+  };
+  const setArchived = (archived: boolean) => {
+    setArchiveError(null);
+    setStale(false);
+    update.mutate(
+      { archived, version: client.version },
+      { onError: (e) => (isApiError(e, 409) ? onStale() : setArchiveError(errorMessage(e))) },
+    );
+  };
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title={client.name} lead={`Daily targets: ${client.targets.targetKcal} kcal · net carbs ≤ ${client.targets.netCarbCapG} g · protein ${client.targets.proteinG} g · fat ${client.targets.fatG} g`}>
+        {client.archivedAt ? (
+          <Button variant="secondary" busy={update.isPending} onClick={() => setArchived(false)}>
+            Restore
+          </Button>
+        ) : (
+          <Button
+            variant="secondary"
+            busy={update.isPending}
+            onClick={() => {
+              if (window.confirm(`Archive ${client.name}? ${ARCHIVE_MEANS}`)) setArchived(true);
+            }}
+          >
+            Archive
+          </Button>
+        )}
         <Button
           variant="danger"
           busy={del.isPending}
           onClick={() => {
-            if (window.confirm(`Delete ${client.name}? Their cells on week boards go too.`)) del.mutate(id, { onSuccess: () => navigate(paths.clients) });
+            const ask = `Delete ${client.name} for good? Their plates on every week board go too.${client.archivedAt ? '' : ' To keep their history, archive them instead.'}`;
+            if (window.confirm(ask)) del.mutate(id, { onSuccess: () => navigate(paths.clients) });
           }}
         >
           Delete
         </Button>
       </PageHeader>
+      {client.archivedAt && (
+        <Notice tone="info" title={`Archived on ${new Date(client.archivedAt).toLocaleDateString(undefined, { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' })}`}>
+          {ARCHIVE_MEANS}
+        </Notice>
+      )}
+      {archiveError && (
+        <Notice tone="block" title="Not changed">
+          {archiveError}
+        </Notice>
+      )}
       <DemoNotice>An invented demo client: measurements, targets and notes are made up and are not advice.</DemoNotice>
       {stale && (
         <Notice tone="warn" title="Someone else changed this profile">
@@ -113,11 +164,7 @@ export function Component() {
               { ...values, version: client.version },
               {
                 onError: (e) => {
-                  if (isApiError(e, 409)) {
-                    setStale(true);
-                    q.refetch();
-                    return;
-                  }
+                  if (isApiError(e, 409)) return onStale();
                   setFormError(applyServerErrors(e, setError));
                 },
               },

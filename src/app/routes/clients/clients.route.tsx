@@ -16,16 +16,30 @@ import { filterByText } from '@/lib/words';
 
 const isFull = (c: ClientListItemDto): c is ClientDto => 'targets' in c;
 
-/** The clients as a table, with a filter box once the list is long. */
-function ClientList({ clients }: { clients: ClientListItemDto[] }) {
+/**
+ * The clients as a table, with a filter box once the list is long. Archived clients are left out until the coach
+ * asks for them (a switch that says how many there are).
+ */
+function ClientList({ clients: all }: { clients: ClientListItemDto[] }) {
   const [find, setFind] = useState('');
+  const [withArchived, setWithArchived] = useState(false);
+  const archived = all.filter((c) => c.archivedAt).length;
+  const clients = withArchived ? all : all.filter((c) => !c.archivedAt);
   const shown = filterByText(clients, find, (c) => [c.name, ...(isFull(c) ? [...c.allergens.map(allergenLabel), ...c.dislikes] : [])]);
   return (
     <>
       {clients.length >= FILTER_FROM && (
         <ListFilter label="Find a client" placeholder="name, allergen or dislike" value={find} onChange={setFind} shown={shown.length} total={clients.length} className="mb-3" />
       )}
-      {shown.length === 0 ? (
+      {archived > 0 && (
+        <label className="mb-3 flex w-fit items-center gap-2 text-sm">
+          <input type="checkbox" className="h-4 w-4" checked={withArchived} onChange={(e) => setWithArchived(e.target.checked)} />
+          Show archived clients ({archived})
+        </label>
+      )}
+      {clients.length === 0 ? (
+        <p className="text-ink-soft">Every client is archived. Show them above, or add a new client.</p>
+      ) : shown.length === 0 ? (
         <p className="text-ink-soft">No client matches “{find.trim()}”.</p>
       ) : (
         <div className="overflow-x-auto">
@@ -48,6 +62,7 @@ function ClientList({ clients }: { clients: ClientListItemDto[] }) {
                     <Link className="font-bold underline" to={paths.client(c.id)}>
                       {c.name}
                     </Link>
+                    {c.archivedAt && <span className="ml-2 rounded bg-paper-deep px-1 text-xs font-bold text-ink-soft">Archived</span>}
                   </td>
                   <td className="num text-right">{c.householdMultiplier}</td>
                   {isFull(c) ? (

@@ -156,8 +156,16 @@ export function Component() {
       </div>
 
       {board.clients.length === 0 || board.plates.length === 0 ? (
-        <EmptyState title={board.clients.length === 0 ? 'No clients yet' : 'No plates yet'}>
-          {board.clients.length === 0 ? <Link to={paths.clients} className="underline">Add clients</Link> : <Link to={paths.plates} className="underline">Make plates</Link>} to fill the board.
+        <EmptyState title={board.clients.length === 0 ? 'No clients to plan' : 'No plates yet'}>
+          {board.clients.length === 0 ? (
+            <>
+              <Link to={paths.clients} className="underline">Add clients</Link> (or restore archived ones) to fill the board.
+            </>
+          ) : (
+            <>
+              <Link to={paths.plates} className="underline">Make plates</Link> to fill the board.
+            </>
+          )}
         </EmptyState>
       ) : (
         <Card>

@@ -143,6 +143,11 @@ const ClientRow = memo(function ClientRow({ client, days, slots, plates, cells, 
     <tr>
       <th scope="row" className="sticky left-0 z-10 w-36 min-w-36 border-r border-line bg-paper-card px-1 pr-2 text-left align-top text-sm">
         <span className="font-bold">{client.name}</span>
+        {client.archived && (
+          <span className="block text-xs text-ink-faint" title="Archived: on this week because they have plates on it">
+            (archived)
+          </span>
+        )}
         <span className="num block text-xs text-ink-faint">
           ×{client.householdMultiplier} · {client.targets.targetKcal} kcal · ≤{client.targets.netCarbCapG} g
         </span>

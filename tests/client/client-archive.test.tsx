@@ -1,0 +1,90 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { MemoryRouter, Route, Routes } from 'react-router-dom';
+import { Component as ClientPage } from '@/app/routes/clients/client.route';
+import { jsonResponse, queryClientFor, signedIn } from './render';
+
+// An invented client profile, as the coach reads it (GET /api/clients/:id).
+const profile = (overrides: Record<string, unknown> = {}) => ({
+  id: 7,
+  name: 'Olga Paused',
+  householdMultiplier: '1',
+  archivedAt: null,
+  email: null,
+  sex: 'female',
+  ageYears: 41,
+  heightCm: '165',
+  weightKg: '70',
+  activity: 'light',
+  goal: 'maintain',
+  goalAdjustment: null,
+  netCarbCapG: '20',
+  proteinGPerKg: '1.5',
+  targetMode: 'computed',
+  manualTargets: null,
+  slotShares: {},
+  allergens: [],
+  dislikes: [],
+  healthNotes: '',
+  targets: {
+    mode: 'computed', reeKcal: 1370, tdeeKcal: 1884, targetKcal: 1884, netCarbCapG: 20, proteinG: 105, fatG: 150, notes: [],
+    slots: { breakfast: { targetKcal: 565, netCarbCapG: 6, proteinG: 31.5, fatG: 45, share: 0.3 } },
+  },
+  account: null,
+  invitation: null,
+  createdAt: '2026-11-01T08:00:00.000Z',
+  updatedAt: '2026-11-01T08:00:00.000Z',
+  version: 3,
+  ...overrides,
+});
+
+function renderProfile() {
+  return render(
+    <MemoryRouter initialEntries={['/clients/7']}>
+      <QueryClientProvider client={queryClientFor(signedIn())}>
+        <Routes>
+          <Route path="/clients/:clientId" element={<ClientPage />} />
+        </Routes>
+      </QueryClientProvider>
+    </MemoryRouter>,
+  );
+}
+
+afterEach(() => vi.unstubAllGlobals());
+
+describe('archiving a client from their profile', () => {
+  it('asks first, sends the version read, then shows since when and offers Restore', async () => {
+    const archived = profile({ archivedAt: '2026-12-02T10:00:00.000Z', version: 4 });
+    const calls: { method: string; url: string; body: unknown }[] = [];
+    let current = profile();
+    vi.stubGlobal('confirm', vi.fn(() => true));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string, init?: RequestInit) => {
+        const method = init?.method ?? 'GET';
+        calls.push({ method, url, body: init?.body ? JSON.parse(String(init.body)) : undefined });
+        if (url.includes('/deliveries')) return jsonResponse({ clientId: 7, items: [] });
+        if (method === 'PATCH') current = archived;
+        return jsonResponse(current);
+      }),
+    );
+    renderProfile();
+    fireEvent.click(await screen.findByRole('button', { name: 'Archive' }));
+    expect(vi.mocked(window.confirm).mock.calls[0][0]).toMatch(/^Archive Olga Paused\? An archived client leaves the client list/);
+    await screen.findByRole('button', { name: 'Restore' });
+    expect(calls.find((c) => c.method === 'PATCH')).toEqual({ method: 'PATCH', url: '/api/clients/7', body: { archived: true, version: 3 } });
+    expect(screen.getByText(/^Archived on /)).toBeTruthy();
+    expect(screen.getByText('Restore Olga Paused to invite them.')).toBeTruthy();
+  });
+
+  it('does nothing when the coach changes their mind', async () => {
+    const fetchMock = vi.fn(async (url: string, _init?: RequestInit) => (url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : jsonResponse(profile())));
+    vi.stubGlobal('confirm', vi.fn(() => false));
+    vi.stubGlobal('fetch', fetchMock);
+    renderProfile();
+    fireEvent.click(await screen.findByRole('button', { name: 'Archive' }));
+    await waitFor(() => expect(window.confirm).toHaveBeenCalled());
+    expect(fetchMock.mock.calls.some(([, init]) => (init as RequestInit | undefined)?.method === 'PATCH')).toBe(false);
+  });
+});
