@@ -1,5 +1,5 @@
-import { describe, expect, it, vi } from 'vitest';
-import { fireEvent, screen } from '@testing-library/react';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { Component as WeeksPage } from '@/app/routes/weeks/weeks.route';
 import { jsonResponse, queryClientFor, renderInApp, signedIn } from './render';
 
@@ -29,4 +29,41 @@ describe('new week form', () => {
     fireEvent.change(field('First day of the board'), { target: { value: '2026-12-28' } });
     expect(field('Prep day').value).toBe('2026-12-19');
   });
+
+  it('copies an earlier week when the coach starts from it: its second prep day moves to the same day of the new board', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 11, 2, 9), toFake: ['Date'] });
+    // An invented earlier week: board Mon 30 Nov – Sun 6 Dec, prep Sun 29 Nov and Wed 2 Dec.
+    const earlier = {
+      id: 4, name: 'Week of 30 Nov', startDate: '2026-11-30', endDate: '2026-12-06', prepDate: '2026-11-29', secondPrepDate: '2026-12-02',
+      publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 14, version: 3,
+    };
+    const posts: { url: string; body: unknown }[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string, init?: RequestInit) => {
+        if (init?.method === 'POST') {
+          posts.push({ url, body: JSON.parse(String(init.body)) });
+          return jsonResponse({ week: { ...earlier, id: 9 }, days: [], slots: [], prepDates: [], clients: [], plates: [], cells: [], trays: [], checks: [], inventory: [], cautions: [] }, 201);
+        }
+        return jsonResponse([earlier]);
+      }),
+    );
+    renderInApp(<WeeksPage />, queryClientFor(coach));
+    const from = (await screen.findByLabelText('Start from')) as HTMLSelectElement;
+    expect(field('Second prep day').value).toBe('');
+    fireEvent.change(from, { target: { value: '4' } });
+    expect(field('Second prep day').value).toBe('2026-12-09');
+    expect(screen.getByText(/Archived clients stay behind/)).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Copy' }));
+    await waitFor(() => expect(posts).toHaveLength(1));
+    expect(posts[0]).toEqual({
+      url: '/api/weeks/4/copy',
+      body: { name: '', startDate: '2026-12-07', prepDate: '2026-12-06', secondPrepDate: '2026-12-09' },
+    });
+  });
+});
+
+afterEach(() => {
+  vi.useRealTimers();
+  vi.unstubAllGlobals();
 });

@@ -103,6 +103,9 @@ export function Component() {
         <Link to={paths.weeks} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline">
           All weeks
         </Link>
+        <Link to={`${paths.weeks}?from=${board.week.id}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline">
+          Copy to a new week
+        </Link>
         <Button
           busy={publish.isPending}
           disabled={busy || blocks.length > 0 || board.cells.length === 0}

@@ -1,12 +1,13 @@
 import { useState } from 'react';
-import { Link, useNavigate } from 'react-router-dom';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { addDays, isIsoDate } from '@shared/domain/iso-date';
+import { addDays, daysBetween, isIsoDate } from '@shared/domain/iso-date';
+import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { weeksQuery, localToday } from '@/features/weeks/api/weeks.queries';
-import { useCreateWeek } from '@/features/weeks/api/use-week-mutations';
+import { useCopyWeek, useCreateWeek } from '@/features/weeks/api/use-week-mutations';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { SelectField, TextField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { isApiError, errorMessage } from '@/lib/problem';
 import { paths } from '@/config/paths';
@@ -17,13 +18,28 @@ function nextMonday(today: string): string {
   return addDays(today, ((8 - d) % 7) || 7);
 }
 
+/** The source week's second prep day moved to the new board: the same day of the week, when it falls on the board. */
+function shiftedSecondPrep(source: WeekSummaryDto, startDate: string): string {
+  if (!source.secondPrepDate || !isIsoDate(startDate)) return '';
+  return addDays(source.secondPrepDate, daysBetween(source.startDate, startDate));
+}
+
 export function Component() {
   const me = useMe();
   const list = useQuery(weeksQuery());
   const create = useCreateWeek();
+  const copy = useCopyWeek();
   const navigate = useNavigate();
+  const [params] = useSearchParams();
   const start = nextMonday(localToday());
   const [form, setForm] = useState({ name: '', startDate: start, prepDate: addDays(start, -1), secondPrepDate: '' });
+  // "Copy to a new week" on a board opens this page with ?from=<id>: the form starts from that week.
+  const [fromId, setFromId] = useState(params.get('from') ?? '');
+  const source = list.data?.find((w) => String(w.id) === fromId) ?? null;
+  const [secondPicked, setSecondPicked] = useState(false);
+  // A copied week with two prep days gets its second one on the same day of the new week until the coach picks one.
+  const secondPrepDate = source && !secondPicked && !form.secondPrepDate ? shiftedSecondPrep(source, form.startDate) : form.secondPrepDate;
+  const saving = create.isPending || copy.isPending;
   // The prep day follows the first day of the board (the day before) until the coach picks one.
   const [prepPicked, setPrepPicked] = useState(false);
   const [errors, setErrors] = useState<Record<string, string[]>>({});
@@ -41,16 +57,16 @@ export function Component() {
               e.preventDefault();
               setErrors({});
               setFormError(null);
-              create.mutate(
-                { ...form, secondPrepDate: form.secondPrepDate || null },
-                {
-                  onSuccess: (b) => navigate(paths.week(b.week.id)),
-                  onError: (err) => {
-                    if (isApiError(err, 400)) setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k.replace(/^body\./, ''), v])));
-                    else setFormError(errorMessage(err));
-                  },
+              const input = { ...form, secondPrepDate: secondPrepDate || null };
+              const done = {
+                onSuccess: (b: { week: { id: number } }) => navigate(paths.week(b.week.id)),
+                onError: (err: unknown) => {
+                  if (isApiError(err, 400)) setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k.replace(/^body\./, ''), v])));
+                  else setFormError(errorMessage(err));
                 },
-              );
+              };
+              if (source) copy.mutate({ ...input, fromId: source.id }, done);
+              else create.mutate(input, done);
             }}
           >
             <TextField label="Name (optional)" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} />
@@ -65,10 +81,30 @@ export function Component() {
                 setForm({ ...form, prepDate: e.target.value });
               }}
             />
-            <TextField label="Second prep day" type="date" value={form.secondPrepDate} error={errors.secondPrepDate?.[0]} onChange={(e) => setForm({ ...form, secondPrepDate: e.target.value })} />
-            <Button type="submit" busy={create.isPending}>
-              Create
+            <TextField label="Second prep day" type="date" value={secondPrepDate} error={errors.secondPrepDate?.[0]} onChange={(e) => {
+                setSecondPicked(true);
+                setForm({ ...form, secondPrepDate: e.target.value });
+              }}
+            />
+            <Button type="submit" busy={saving}>
+              {source ? 'Copy' : 'Create'}
             </Button>
+            {(list.data?.length ?? 0) > 0 && (
+              <SelectField
+                label="Start from"
+                className="sm:col-span-3"
+                value={source ? fromId : ''}
+                onChange={(e) => setFromId(e.target.value)}
+                hint={source ? 'Its plates move to the same days of the new board, with its tray counts. Archived clients stay behind.' : undefined}
+              >
+                <option value="">An empty board</option>
+                {list.data?.map((w) => (
+                  <option key={w.id} value={w.id}>
+                    A copy of {w.name} ({dayLabel(w.startDate)} – {dayLabel(w.endDate)})
+                  </option>
+                ))}
+              </SelectField>
+            )}
           </form>
           {formError && <Notice tone="block" title={formError} />}
         </Card>

@@ -52,10 +52,11 @@ export function useCreateWeek() {
   });
 }
 
-export function useCopyWeek(id: number) {
+/** A new week from another one's board and tray counts (POST /api/weeks/:id/copy). */
+export function useCopyWeek() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: CopyWeekInput) => api.post<BoardAnswer>(`/weeks/${id}/copy`, input).then(expandBoard),
+    mutationFn: ({ fromId, ...input }: CopyWeekInput & { fromId: number }) => api.post<BoardAnswer>(`/weeks/${fromId}/copy`, input).then(expandBoard),
     meta: { form: true },
     onSuccess: (board) => {
       qc.setQueryData(weekKeys.detail(board.week.id), board);
