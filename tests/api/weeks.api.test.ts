@@ -431,6 +431,28 @@ describe('publishing and the client view', () => {
     expect(data.publishedAt?.toISOString()).toBe(at.toISOString());
   });
 
+  it('deletes a published week with everything hung on it; its client then has no published plan; another workspace gets 404', async () => {
+    const coach = await coachWorkspace(app);
+    const other = await coachWorkspace(app);
+    const { plate, client, week, ing } = await setup(coach, { fridgeDays: 7 });
+    const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id, [DAYS[0]]);
+    const counted = await coach.agent.post(`/api/weeks/${week.id}/trays/cover`).send({ version: filled.body.week.version }).expect(200);
+    await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: counted.body.week.version }).expect(200);
+    await coach.agent.put(`/api/weeks/${week.id}/shopping/checks/${ing.id}`).send({ checked: true }).expect(200);
+    const me = await member(app, coach, 'client', { clientId: client.id });
+    expect((await me.agent.get('/api/weeks/mine?today=2026-01-05').expect(200)).body).toMatchObject({ weekId: week.id });
+
+    await other.agent.delete(`/api/weeks/${week.id}`).expect(404);
+    await coach.agent.delete(`/api/weeks/${week.id}`).expect(204);
+    for (const table of ['week', 'week_cell', 'week_tray', 'week_publication', 'shopping_check']) {
+      const column = table === 'week' ? 'id' : 'week_id';
+      expect(await sql(`select 1 from ${table} where ${column} = $1`, [week.id])).toEqual([]);
+    }
+    expect((await me.agent.get('/api/weeks/mine?today=2026-01-05').expect(200)).body).toBeNull();
+    await coach.agent.get(`/api/weeks/${week.id}`).expect(404);
+    await coach.agent.delete(`/api/weeks/${week.id}`).expect(404);
+  });
+
   it('keeps the board from assistants and other workspaces; the home glance counts problems', async () => {
     const coach = await coachWorkspace(app);
     const other = await coachWorkspace(app);

@@ -177,4 +177,17 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await expect(timeline.getByRole('listitem', { name: new RegExp(trayName) }).first()).toBeVisible();
   await expectNoSeriousA11yViolations(page, 'bake run');
   await page.screenshot({ path: `${SHOTS}/coach-drafts-week.png`, fullPage: true });
+
+  // 7. The next week starts as a copy of this one (Dana's plates come along); a week made by mistake is deleted.
+  await page.goto(weekUrl);
+  await page.getByRole('link', { name: 'Copy to a new week' }).click();
+  await expect(page.getByLabel('Start from')).toHaveValue(weekUrl.split('/').pop()!);
+  await page.getByLabel('First day of the board').fill('2027-01-04');
+  await page.getByRole('button', { name: 'Copy', exact: true }).click();
+  await expect(page.getByRole('heading', { name: 'Week of Mon 4 Jan' })).toBeVisible();
+  await expect(page.getByRole('button', { name: new RegExp(`^Dana Whitlock, .*, breakfast: ${plateName}`) }).first()).toBeVisible();
+  page.once('dialog', (d) => void d.accept());
+  await page.getByRole('button', { name: 'Delete week' }).click();
+  await expect(page).toHaveURL(/\/weeks$/);
+  await expect(page.getByRole('link', { name: 'Week of Mon 4 Jan' })).toHaveCount(0);
 });

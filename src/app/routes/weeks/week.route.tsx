@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { Link, useParams } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { allergenConflicts } from '@shared/domain/allergens';
 import { flatWarnings } from '@shared/domain/week-check';
@@ -7,7 +7,7 @@ import type { BoardDto, CellInput } from '@shared/schemas/weeks.schema';
 import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import { boardQuery } from '@/features/weeks/api/weeks.queries';
 import { weekKeys } from '@/features/weeks/api/weeks.keys';
-import { useCopyDay, useCoverTrays, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek } from '@/features/weeks/api/use-week-mutations';
+import { useCopyDay, useCoverTrays, useDeleteWeek, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek } from '@/features/weeks/api/use-week-mutations';
 import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/weeks/components/board-grid';
 import { InventoryPanel } from '@/features/weeks/components/inventory-panel';
 import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
@@ -230,8 +230,47 @@ export function Component() {
         }} />
       </Card>
 
+      <DeleteWeek board={board} />
+
       <Cautions topic="food-safety" compact />
     </div>
+  );
+}
+
+/** Deleting a week: its board, tray counts, shopping marks and publications go (asked first, saying what clients lose). */
+function DeleteWeek({ board }: { board: BoardDto }) {
+  const del = useDeleteWeek();
+  const navigate = useNavigate();
+  const [error, setError] = useState<string | null>(null);
+  const published = board.week.publishedVersion !== null;
+  const ask = published
+    ? `Delete ${board.week.name}? It is published: its clients stop seeing these plates. The board, tray counts and shopping marks go too. This cannot be undone.`
+    : `Delete ${board.week.name}? Its board, tray counts and shopping marks go. This cannot be undone.`;
+  return (
+    <Card>
+      <h2 className="mb-2 text-xl">Delete this week</h2>
+      <p className="mb-3 text-sm text-ink-soft">
+        {published ? 'Published: clients see this week until it is deleted. ' : ''}To plan another week like it, copy it to a new week instead.
+      </p>
+      <Button
+        variant="danger"
+        busy={del.isPending}
+        onClick={() => {
+          if (!window.confirm(ask)) return;
+          setError(null);
+          del.mutate(board.week.id, { onSuccess: () => navigate(paths.weeks), onError: (e) => setError(errorMessage(e)) });
+        }}
+      >
+        Delete week
+      </Button>
+      {error && (
+        <div className="mt-3">
+          <Notice tone="block" title="Not deleted">
+            {error}
+          </Notice>
+        </div>
+      )}
+    </Card>
   );
 }
 

@@ -69,6 +69,10 @@ export function useDeleteWeek() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (id: number) => api.delete<void>(`/weeks/${id}`),
-    onSuccess: () => qc.invalidateQueries({ queryKey: weekKeys.all }),
+    // The board is gone: drop it rather than read it again (a 404 on the page being left); lists and glances refresh.
+    onSuccess: (_done, id) => {
+      qc.removeQueries({ queryKey: weekKeys.detail(id), exact: true });
+      return qc.invalidateQueries({ queryKey: weekKeys.all, predicate: (q) => q.queryKey[1] !== 'detail' });
+    },
   });
 }
