@@ -228,3 +228,11 @@ export interface WeekSnapshot {
   prepDates: IsoDate[];
   clients: Record<string, { days: MyDayDto[]; trayIds: number[] }>;
 }
+
+/** One published version of a week (GET /api/weeks/:id/publications), newest first. */
+export interface WeekPublicationDto {
+  number: number;
+  publishedAt: string;
+  /** Who published it (their name), null when that account is gone. */
+  publishedBy: string | null;
+}

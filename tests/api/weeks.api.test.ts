@@ -418,8 +418,14 @@ describe('publishing and the client view', () => {
     const now = await me.agent.get('/api/weeks/mine?today=2026-01-05').expect(200);
     expect(now.body.publishedVersion).toBe(2);
     expect(now.body.days).toHaveLength(3);
-    const pubs = await sql<{ number: number }>('select number from week_publication where week_id = $1 order by number', [week.id]);
-    expect(pubs).toEqual([{ number: 1 }, { number: 2 }]);
+    const pubs = await sql<{ number: number; at: Date }>('select number, published_at as at from week_publication where week_id = $1 order by number', [week.id]);
+    expect(pubs.map((p) => p.number)).toEqual([1, 2]);
+    // The history the board shows: newest first, when, by whom.
+    const history = await coach.agent.get(`/api/weeks/${week.id}/publications`).expect(200);
+    const [coachRow] = await sql<{ name: string }>('select name from app_user where id = $1', [coach.userId]);
+    expect(history.body).toEqual(
+      [...pubs].reverse().map((p) => ({ number: p.number, publishedAt: p.at.toISOString(), publishedBy: coachRow.name })),
+    );
 
     // The time of the current publication, as the board read and the reads behind the shopping list and labels give it.
     const [{ at }] = await sql<{ at: Date }>('select published_at as at from week_publication where week_id = $1 and number = 2', [week.id]);

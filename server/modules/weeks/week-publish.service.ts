@@ -5,7 +5,7 @@ import { addDays, compareIsoDates, type IsoDate } from '@shared/domain/iso-date.
 import { cellKey, computeBoard, type BoardResult } from '@shared/domain/week-board.js';
 import { worded } from '@shared/domain/week-check.js';
 import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
-import type { MyDayDto, MyPlateDto, MyWeekDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
+import type { MyDayDto, MyPlateDto, MyWeekDto, WeekPublicationDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
 import type { BoardAnswer } from '@shared/schemas/board-answer.js';
 import type { Actor } from '../../http/authz.js';
 import { Conflict, StaleEdit } from '../../http/errors.js';
@@ -13,6 +13,7 @@ import { AssemblyItem } from '../assemblies/assembly.entity.js';
 import { Week, WeekPublication, WeekTray, type IWeek, type IWeekPublication } from './week.entity.js';
 import { boardInput, findWeek, getBoard, loadBoardData, presentBoard, prepDatesOf, type BoardData } from './week-board.service.js';
 import { todayIso } from './week.service.js';
+import { preparedRows } from '../../db/prepared.js';
 
 const r1 = (d: Decimal) => d.toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber();
 
@@ -110,10 +111,18 @@ export async function publishWeek(em: EntityManager, actor: Actor, id: number, v
   return getBoard(em, actor, id);
 }
 
-export async function listPublications(em: EntityManager, actor: Actor, id: number) {
+/** A week's published versions, newest first, with who published each (by name). */
+export async function listPublications(em: EntityManager, actor: Actor, id: number): Promise<WeekPublicationDto[]> {
   const week = await findWeek(em, actor, id);
-  const rows = await em.find(WeekPublication, { week: week.id }, { fields: ['number', 'publishedAt', 'publishedBy'], orderBy: { number: 'desc' } });
-  return rows.map((p) => ({ number: p.number, publishedAt: p.publishedAt.toISOString(), publishedBy: p.publishedBy }));
+  const rows = await preparedRows<{ number: number; publishedAt: string | Date; publishedBy: string | null }>(
+    em,
+    'trayline_week_publications',
+    `select p.number, p.published_at as "publishedAt", u.name as "publishedBy"
+       from week_publication p left join app_user u on u.id = p.published_by
+      where p.week_id = $1 order by p.number desc`,
+    [week.id],
+  );
+  return rows.map((r) => ({ ...r, publishedAt: new Date(r.publishedAt).toISOString() }));
 }
 
 /** Latest publication of the workspace's most recent published weeks (by start date). */

@@ -10,6 +10,7 @@ import { weekKeys } from '@/features/weeks/api/weeks.keys';
 import { useCopyDay, useCoverTrays, useDeleteWeek, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek } from '@/features/weeks/api/use-week-mutations';
 import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/weeks/components/board-grid';
 import { InventoryPanel } from '@/features/weeks/components/inventory-panel';
+import { PublishedVersions } from '@/features/weeks/components/published-versions';
 import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
 import { Button } from '@/components/ui/button';
 import { DayOptions, SelectField, TextField } from '@/components/ui/field';
@@ -175,6 +176,11 @@ export function Component() {
           <BoardGrid board={board} busy={busy} onEdit={(edit) => sendCells(edit)} />
         </Card>
       )}
+
+      <Card>
+        <h2 className="mb-3 text-xl">Published versions</h2>
+        <PublishedVersions board={board} />
+      </Card>
 
       <Card>
         <h2 className="mb-3 text-xl">Send plans</h2>

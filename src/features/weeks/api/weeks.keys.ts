@@ -5,6 +5,8 @@ export const weekKeys = {
   list: () => [...weekKeys.lists()] as const,
   details: () => [...weekKeys.all, 'detail'] as const,
   detail: (id: number) => [...weekKeys.details(), id] as const,
+  /** A week's published versions; the key holds the current version, so a new publication reads them again. */
+  publications: (id: number, current: number | null) => [...weekKeys.all, 'publications', id, current] as const,
   glance: (today: string) => [...weekKeys.all, 'glance', today] as const,
   mine: (today: string) => [...weekKeys.all, 'mine', today] as const,
 };

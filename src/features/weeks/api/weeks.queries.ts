@@ -1,5 +1,5 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { GlanceDto, MyWeekDto, WeekSummaryDto } from '@shared/schemas/weeks.schema';
+import type { GlanceDto, MyWeekDto, WeekPublicationDto, WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import { api, qs } from '@/lib/api-client';
 import { weekKeys } from './weeks.keys';
@@ -20,3 +20,6 @@ export const glanceQuery = (today: string) =>
 
 export const myWeekQuery = (today: string) =>
   queryOptions({ queryKey: weekKeys.mine(today), queryFn: () => api.get<MyWeekDto | null>(`/weeks/mine${qs({ today })}`) });
+
+export const publicationsQuery = (id: number, current: number | null) =>
+  queryOptions({ queryKey: weekKeys.publications(id, current), queryFn: () => api.get<WeekPublicationDto[]>(`/weeks/${id}/publications`) });
