@@ -5,6 +5,7 @@ import { trayQuery } from '@/features/trays/api/trays.queries';
 import { useDeleteTray, useDuplicateTray, useUpdateTray } from '@/features/trays/api/use-tray-mutations';
 import { TrayEditor } from '@/features/trays/components/tray-editor';
 import { PortionCard } from '@/features/trays/components/portion-card';
+import { TrayShopping } from '@/features/shopping/components/tray-shopping';
 import { ScalePanel } from '@/features/trays/components/scale-panel';
 import { RecipeCard } from '@/features/trays/components/recipe-card';
 import { PhotoUpload } from '@/features/trays/components/photo-upload';
@@ -102,6 +103,10 @@ export function Component() {
             <PhotoUpload tray={tray} canEdit={isCoach} />
           </Card>
           <PortionCard trayId={tray.id} />
+          <Card className="print:hidden">
+            <h2 className="mb-3 text-xl">To buy for this tray</h2>
+            <TrayShopping trayId={tray.id} />
+          </Card>
         </div>
       </div>
       {view === 'edit' && isCoach && (

@@ -7,6 +7,8 @@ export const shoppingKeys = {
   list: (weekId: number) => [...shoppingKeys.lists(), weekId] as const,
   /** Mutation key of the check marks of one week (to know when the last tap has settled). */
   checks: (weekId: number) => [...shoppingKeys.all, 'checks', weekId] as const,
+  /** A list for trays × counts given directly (POST /api/shopping/preview). */
+  preview: (trays: readonly { trayId: number; count: number }[]) => [...shoppingKeys.all, 'preview', trays] as const,
   currentWeek: () => [...shoppingKeys.all, 'current-week'] as const,
   labels: () => [...shoppingKeys.all, 'labels'] as const,
   labelSheet: (weekId: number, layout: LabelSheetCode, prepDate: string | null) =>

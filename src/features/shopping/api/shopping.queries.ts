@@ -37,3 +37,11 @@ export const pantryIngredientSearchQuery = (q: string) =>
 /** Export addresses (plain links: the browser downloads them with the session cookie). */
 export const shoppingCsvUrl = (weekId: number) => `/api/weeks/${weekId}/shopping.csv`;
 export const shoppingPdfUrl = (weekId: number) => `/api/weeks/${weekId}/shopping.pdf`;
+
+/** What trays × counts ask the shop for, after the pantry (a read: nothing is written). */
+export const shoppingPreviewQuery = (trays: { trayId: number; count: number }[]) =>
+  queryOptions({
+    queryKey: shoppingKeys.preview(trays),
+    queryFn: () => api.post<ShoppingListDto>('/shopping/preview', { trays }),
+    placeholderData: keepPreviousData,
+  });

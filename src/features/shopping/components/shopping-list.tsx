@@ -4,7 +4,7 @@ import { useSetCheck } from '../api/use-shopping-mutations';
 
 export const money = (cents: number) => `$${(cents / 100).toFixed(2)}`;
 
-function buyText(item: ShoppingItemDto): string {
+export function buyText(item: ShoppingItemDto): string {
   if (item.toBuy <= 0) return 'From the pantry';
   if (item.purchase) return `${item.purchase.packages} × ${item.purchase.label}`;
   return item.toBuyText;
