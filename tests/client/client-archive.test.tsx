@@ -3,30 +3,16 @@ import { fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { MemoryRouter, Route, Routes } from 'react-router-dom';
 import { Component as ClientPage } from '@/app/routes/clients/client.route';
+import { emptyClient } from '@/features/clients/components/client-form';
 import { jsonResponse, queryClientFor, signedIn } from './render';
 
-// An invented client profile, as the coach reads it (GET /api/clients/:id).
+// An invented client profile, as the coach reads it (GET /api/clients/:id): the new-client form's starting values.
 const profile = (overrides: Record<string, unknown> = {}) => ({
+  ...emptyClient,
   id: 7,
   name: 'Olga Paused',
-  householdMultiplier: '1',
   archivedAt: null,
   email: null,
-  sex: 'female',
-  ageYears: 41,
-  heightCm: '165',
-  weightKg: '70',
-  activity: 'light',
-  goal: 'maintain',
-  goalAdjustment: null,
-  netCarbCapG: '20',
-  proteinGPerKg: '1.5',
-  targetMode: 'computed',
-  manualTargets: null,
-  slotShares: {},
-  allergens: [],
-  dislikes: [],
-  healthNotes: '',
   targets: {
     mode: 'computed', reeKcal: 1370, tdeeKcal: 1884, targetKcal: 1884, netCarbCapG: 20, proteinG: 105, fatG: 150, notes: [],
     slots: { breakfast: { targetKcal: 565, netCarbCapG: 6, proteinG: 31.5, fatG: 45, share: 0.3 } },

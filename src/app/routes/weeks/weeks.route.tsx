@@ -69,6 +69,22 @@ export function Component() {
               else create.mutate(input, done);
             }}
           >
+            {(list.data?.length ?? 0) > 0 && (
+              <SelectField
+                label="Start from"
+                className="sm:col-span-5 sm:max-w-xl"
+                value={source ? fromId : ''}
+                onChange={(e) => setFromId(e.target.value)}
+                hint={source ? 'Its plates move to the same days of the new board, with its tray counts. Archived clients stay behind.' : undefined}
+              >
+                <option value="">An empty board</option>
+                {list.data?.map((w) => (
+                  <option key={w.id} value={w.id}>
+                    A copy of {w.name} ({dayLabel(w.startDate)} – {dayLabel(w.endDate)})
+                  </option>
+                ))}
+              </SelectField>
+            )}
             <TextField label="Name (optional)" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} />
             <TextField label="First day of the board" type="date" value={form.startDate} error={errors.startDate?.[0]} onChange={(e) => {
                 const startDate = e.target.value;
@@ -89,22 +105,6 @@ export function Component() {
             <Button type="submit" busy={saving}>
               {source ? 'Copy' : 'Create'}
             </Button>
-            {(list.data?.length ?? 0) > 0 && (
-              <SelectField
-                label="Start from"
-                className="sm:col-span-3"
-                value={source ? fromId : ''}
-                onChange={(e) => setFromId(e.target.value)}
-                hint={source ? 'Its plates move to the same days of the new board, with its tray counts. Archived clients stay behind.' : undefined}
-              >
-                <option value="">An empty board</option>
-                {list.data?.map((w) => (
-                  <option key={w.id} value={w.id}>
-                    A copy of {w.name} ({dayLabel(w.startDate)} – {dayLabel(w.endDate)})
-                  </option>
-                ))}
-              </SelectField>
-            )}
           </form>
           {formError && <Notice tone="block" title={formError} />}
         </Card>
