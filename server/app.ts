@@ -53,7 +53,11 @@ export function createApp({ orm, pool, env, mail, logger, schema = schemaGate(or
         return id;
       },
       autoLogging: { ignore: (req) => req.url === '/api/health' },
-      serializers: { req: (req) => ({ id: req.id, method: req.method, url: req.url }) },
+      // A request line says what was asked and how it went; never a header (the session cookie is a credential).
+      serializers: {
+        req: (req) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res) => ({ statusCode: res.statusCode }),
+      },
     }),
   );
   app.use(
