@@ -46,7 +46,7 @@ export function ErrorState({ error, retry }: { error: unknown; retry?: () => voi
 type Tone = 'warn' | 'block' | 'info' | 'cold';
 const tones: Record<Tone, { box: string; icon: string }> = {
   warn: { box: 'border-caution bg-caution-50 text-ink', icon: '⚠' },
-  block: { box: 'border-signal bg-signal-50 text-ink', icon: '⛔' },
+  block: { box: 'border-signal bg-signal-50 text-ink', icon: '✖' },
   info: { box: 'border-line-strong bg-paper-card text-ink', icon: 'ℹ' },
   cold: { box: 'border-frost bg-frost-50 text-ink', icon: '❄' },
 };

@@ -5,7 +5,7 @@ const LOOK: Record<OutboxStatus, { icon: string; label: string; cls: string }> =
   sending: { icon: '↗', label: 'Sending', cls: 'border-frost bg-frost-50 text-ink' },
   sent: { icon: '✓', label: 'Sent', cls: 'border-herb bg-paper-card text-ink' },
   retrying: { icon: '↻', label: 'Retrying', cls: 'border-caution bg-caution-50 text-ink' },
-  failed: { icon: '⛔', label: 'Failed', cls: 'border-signal bg-signal-50 text-ink' },
+  failed: { icon: '✖', label: 'Failed', cls: 'border-signal bg-signal-50 text-ink' },
 };
 
 /** A status as icon + word (never colour alone). */

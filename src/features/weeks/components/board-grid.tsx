@@ -89,7 +89,7 @@ function Cell({ id, slot, cell, plateName, kcal, flags, selected, isOver, onSele
           {cell.storage === 'frozen' && <span className="text-frost-700">❄ frozen</span>}
           {flags.length > 0 && (
             <span className={blocked ? 'font-bold text-signal-700' : 'text-caution-700'}>
-              {blocked ? '⛔' : '⚠'} {flags.length}
+              {blocked ? '✖' : '⚠'} {flags.length}
             </span>
           )}
         </>
@@ -381,7 +381,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
           <ul className="mt-3 flex flex-col gap-1 text-sm" aria-label="Problems of this cell">
             {selFlags.map((w, i) => (
               <li key={i} className={w.severity === 'block' ? 'font-bold text-signal-700' : 'text-caution-700'}>
-                {w.severity === 'block' ? '⛔' : '⚠'} {w.message}
+                {w.severity === 'block' ? '✖' : '⚠'} {w.message}
               </li>
             ))}
           </ul>
@@ -479,7 +479,7 @@ export function AllergenOverridePrompt({ message, busy, onConfirm, onCancel }: {
   const [reason, setReason] = useState('');
   return (
     <div role="alertdialog" aria-label="Allergen conflict" className="flex flex-col gap-3 rounded-tray border-2 border-signal bg-signal-50 p-4">
-      <p className="font-bold">⛔ {message}</p>
+      <p className="font-bold">✖ {message}</p>
       <TextField label="Reason to override (kept with the plan)" value={reason} onChange={(e) => setReason(e.target.value)} />
       <div className="flex gap-2">
         <Button variant="danger" disabled={reason.trim().length < 3} busy={busy} onClick={() => onConfirm(reason.trim())}>
