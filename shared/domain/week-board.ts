@@ -25,6 +25,19 @@ export function prepDatesOf(w: { prepDate: IsoDate; secondPrepDate?: IsoDate | n
   return [w.prepDate, ...(w.secondPrepDate ? [w.secondPrepDate] : [])].sort(compareIsoDates);
 }
 
+/**
+ * A week's shopping trips: its prep dates when it has two (each is shopped from a list of its own: its trays and the
+ * plates it supplies), else none (one prep day: the whole week's list is the trip).
+ */
+export function tripDatesOf(w: { prepDate: IsoDate; secondPrepDate?: IsoDate | null }): IsoDate[] {
+  return w.secondPrepDate ? prepDatesOf(w) : [];
+}
+
+/** The trip to shop for next: the first of a week's trips on or after `today`, else null (the whole week's list). */
+export function nextTripOf(w: { prepDate: IsoDate; secondPrepDate?: IsoDate | null }, today: IsoDate): IsoDate | null {
+  return tripDatesOf(w).find((d) => compareIsoDates(d, today) >= 0) ?? null;
+}
+
 export interface BoardClient {
   id: number;
   householdMultiplier: string;

@@ -85,7 +85,23 @@ export const checkParams = z.object({
   ingredientId: z.coerce.number().int().positive(),
 });
 
-export const checkBodySchema = z.object({ checked: z.boolean({ message: 'Say whether the item is checked (true or false)' }) });
+/** A prep date as YYYY-MM-DD. */
+const prepDateField = z.string().refine(isIsoDate, { message: 'Give the prep date as YYYY-MM-DD' });
+
+/**
+ * Which list of a week: the whole week (no prep date) or, in a week with two prep days, the trip before one of them
+ * (what that prep day's trays and the plates it supplies need).
+ */
+export const shoppingListQuerySchema = z.object({ prepDate: prepDateField.optional() });
+export type ShoppingListQuery = z.input<typeof shoppingListQuerySchema>;
+
+export const checkBodySchema = z.object({
+  checked: z.boolean({ message: 'Say whether the item is checked (true or false)' }),
+  /** The trip's prep date; none for the whole week's list. */
+  prepDate: prepDateField.optional(),
+});
+
+export const markBoughtSchema = z.object({ prepDate: prepDateField.optional() }).default({});
 export type CheckBodyInput = z.input<typeof checkBodySchema>;
 
 /** Needs given directly (before or beside a prep week): trays × counts and add-on amounts. */
@@ -152,6 +168,10 @@ export interface ShoppingProblemDto {
 
 export interface ShoppingListDto {
   weekId: number | null;
+  /** The trip this list is for (its prep date), or null for the whole week. */
+  prepDate: string | null;
+  /** The week's prep dates when it has two (each has a trip list of its own), else empty. */
+  tripDates: string[];
   aisles: ShoppingAisleDto[];
   itemCount: number;
   checkedCount: number;
@@ -161,6 +181,8 @@ export interface ShoppingListDto {
   problems: ShoppingProblemDto[];
   /** When the list was marked bought (and the pantry updated), else null. */
   bought: { at: string; by: string | null } | null;
+  /** The week's other lists marked bought (a trip's prep date, or null for the whole week): the pantry has their food. */
+  alsoBought: { prepDate: string | null; at: string }[];
 }
 
 export interface MarkBoughtDto {

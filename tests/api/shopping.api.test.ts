@@ -126,6 +126,119 @@ describe('shopping list from trays × counts and add-ons', () => {
   });
 });
 
+describe('shopping trips: a week with two prep days has a list for each', () => {
+  /** The shopping week with a second prep day on Wed 01-07: 2 more trays baked then, plates on Thu and Fri from it. */
+  async function twoTripWeek(coach: Member) {
+    const w = await shoppingWeek(coach);
+    let board = (await coach.agent.get(`/api/weeks/${w.weekId}`).expect(200)).body;
+    board = (await coach.agent.patch(`/api/weeks/${w.weekId}`).send({ version: board.week.version, secondPrepDate: '2026-01-07' }).expect(200)).body;
+    board = (
+      await coach.agent
+        .put(`/api/weeks/${w.weekId}/trays`)
+        .send({ version: board.week.version, trays: [{ trayId: w.tray.id, prepDate: '2026-01-04', trayCount: 3 }, { trayId: w.tray.id, prepDate: '2026-01-07', trayCount: 2 }] })
+        .expect(200)
+    ).body;
+    await coach.agent
+      .put(`/api/weeks/${w.weekId}/cells`)
+      .send({ version: board.week.version, cells: ['2026-01-08', '2026-01-09'].map((date) => ({ clientId: w.client.id, date, slot: 'breakfast', assemblyId: w.plate.id })) })
+      .expect(200);
+    return w;
+  }
+
+  it('splits trays by their prep day and add-ons by the prep day that supplies the plate; the whole week adds both', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const w = await twoTripWeek(coach);
+    const week = (await assistant.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(200)).body;
+    const first = (await assistant.agent.get(`/api/weeks/${w.weekId}/shopping?prepDate=2026-01-04`).expect(200)).body;
+    const second = (await assistant.agent.get(`/api/weeks/${w.weekId}/shopping?prepDate=2026-01-07`).expect(200)).body;
+    expect([week.prepDate, first.prepDate, second.prepDate]).toEqual([null, '2026-01-04', '2026-01-07']);
+    expect(week.tripDates).toEqual(['2026-01-04', '2026-01-07']);
+    // Eggs: 12 per tray; 3 trays on Sun, 2 on Wed (a dozen is 12).
+    expect([week, first, second].map((l) => itemOf(l, w.eggs.id).needed)).toEqual([60, 36, 24]);
+    expect(itemOf(second, w.eggs.id).purchase.packages).toBe(2);
+    // Cheese: 10 oz per tray, plus 1 oz × household of 2 per plate: Mon and Tue from Sunday, Thu and Fri from Wednesday.
+    const oz = (n: number) => Qty(n, 'oz').to('g').scalar;
+    expect(itemOf(first, w.cheese.id).needed).toBeCloseTo(oz(30 + 4), 2);
+    expect(itemOf(second, w.cheese.id).needed).toBeCloseTo(oz(20 + 4), 2);
+    expect(itemOf(week, w.cheese.id).needed).toBeCloseTo(oz(50 + 8), 2);
+  });
+
+  it('the pantry serves the first trip first; once that trip is bought, the second reads what the pantry holds', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await twoTripWeek(coach);
+    await coach.agent.post('/api/pantry').send({ ingredientId: w.eggs.id, amount: '30', unit: 'large' }).expect(201);
+    const list = async (prepDate: string) => (await coach.agent.get(`/api/weeks/${w.weekId}/shopping?prepDate=${prepDate}`).expect(200)).body;
+    // 36 eggs on Sunday: 30 from the pantry, 6 to buy → 1 dozen, 6 spare. Wednesday's 24 find the pantry taken.
+    expect(itemOf(await list('2026-01-04'), w.eggs.id)).toMatchObject({ fromPantry: 30, toBuy: 6, purchase: { packages: 1, spare: 6 } });
+    expect(itemOf(await list('2026-01-07'), w.eggs.id)).toMatchObject({ fromPantry: 0, toBuy: 24, purchase: { packages: 2 } });
+    const bought = await coach.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).send({ prepDate: '2026-01-04' }).expect(200);
+    expect(bought.body.pantry.find((p: { ingredientId: number }) => p.ingredientId === w.eggs.id)).toMatchObject({ before: 30, after: 6 });
+    // Now the pantry holds the 6 spare eggs, and Wednesday's list uses them.
+    expect(itemOf(await list('2026-01-07'), w.eggs.id)).toMatchObject({ fromPantry: 6, toBuy: 18, purchase: { packages: 2, spare: 6 } });
+    expect((await list('2026-01-04')).bought).toMatchObject({ by: expect.any(String) });
+    // The other lists say so (the pantry they count on now holds what that trip bought).
+    const whole = (await coach.agent.get(`/api/weeks/${w.weekId}/shopping`).expect(200)).body;
+    expect(whole.alsoBought).toEqual([{ prepDate: '2026-01-04', at: expect.any(String) }]);
+    expect((await list('2026-01-07')).alsoBought).toEqual(whole.alsoBought);
+    expect((await list('2026-01-04')).alsoBought).toEqual([]);
+    // The whole week counts the same food: it can no longer be marked bought.
+    const refused = await coach.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).send({}).expect(409);
+    expect(refused.body.detail).toMatch(/prep day's list of this week was marked bought already/);
+    expect(await sql('select trip from shopping_purchase where week_id = $1', [w.weekId])).toEqual([{ trip: 1 }]);
+  });
+
+  it('keeps check marks per list, and answers 400 naming prepDate for a day that is not a trip', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const w = await twoTripWeek(coach);
+    await assistant.agent.put(`/api/weeks/${w.weekId}/shopping/checks/${w.eggs.id}`).send({ checked: true, prepDate: '2026-01-07' }).expect(200);
+    const checked = async (q: string) => itemOf((await assistant.agent.get(`/api/weeks/${w.weekId}/shopping${q}`).expect(200)).body, w.eggs.id).check.checked;
+    expect([await checked(''), await checked('?prepDate=2026-01-04'), await checked('?prepDate=2026-01-07')]).toEqual([false, false, true]);
+
+    const bad = await assistant.agent.get(`/api/weeks/${w.weekId}/shopping?prepDate=2026-01-05`).expect(400);
+    expect(bad.body.errors).toEqual({ prepDate: ['Not a prep day of this week (2026-01-04 or 2026-01-07)'] });
+    const malformed = await assistant.agent.put(`/api/weeks/${w.weekId}/shopping/checks/${w.eggs.id}`).send({ checked: true, prepDate: 'Sunday' }).expect(400);
+    expect(Object.keys(malformed.body.errors)).toEqual(['prepDate']);
+    const single = await shoppingWeek(coach);
+    const one = await assistant.agent.get(`/api/weeks/${single.weekId}/shopping?prepDate=2026-01-04`).expect(400);
+    expect(one.body.errors).toEqual({ prepDate: ['This week has one prep day: its list is the whole week'] });
+    expect((await assistant.agent.get(`/api/weeks/${single.weekId}/shopping`).expect(200)).body.tripDates).toEqual([]);
+  });
+
+  it("refuses a trip's purchase once the whole week's list is bought, and answers a repeated one with its record", async () => {
+    const coach = await coachWorkspace(app);
+    const w = await twoTripWeek(coach);
+    const first = await coach.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).expect(200);
+    expect(first.body.applied).toBe(true);
+    const again = await coach.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).send({}).expect(200);
+    expect(again.body).toEqual({ ...first.body, applied: false });
+    const refused = await coach.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).send({ prepDate: '2026-01-07' }).expect(409);
+    expect(refused.body.detail).toBe("The whole week's list was marked bought already: the pantry has it");
+    expect(await sql('select trip from shopping_purchase where week_id = $1', [w.weekId])).toEqual([{ trip: 0 }]);
+  });
+
+  it("exports a trip's list as CSV and PDF under the trip's name", async () => {
+    const coach = await coachWorkspace(app);
+    const w = await twoTripWeek(coach);
+    const csv = await coach.agent.get(`/api/weeks/${w.weekId}/shopping.csv?prepDate=2026-01-07`).expect(200);
+    expect(csv.headers['content-disposition']).toContain('shopping-list-prep-2026-01-07.csv');
+    const rows = Papa.parse<Record<string, string>>(csv.text, { header: true, skipEmptyLines: true }).data;
+    expect(rows.find((r) => r.Item === w.eggs.name)).toMatchObject({ Needed: '24', Packages: '2' });
+    const pdf = await coach.agent.get(`/api/weeks/${w.weekId}/shopping.pdf?prepDate=2026-01-07`).buffer(true).parse((res, done) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => done(null, Buffer.concat(chunks)));
+    });
+    expect(pdf.status).toBe(200);
+    const parser = new PDFParse({ data: new Uint8Array(pdf.body as Buffer) });
+    const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+    await parser.destroy();
+    expect(text).toContain('Shopping list for prep Wed 7 Jan, week of Mon 5 Jan');
+    expect(text).toContain('2 × dozen large eggs');
+  });
+});
+
 describe('the prep week\'s shopping list', () => {
   it('adds every tray count and every plate add-on (× household multiplier), rounded to packages', async () => {
     const coach = await coachWorkspace(app);

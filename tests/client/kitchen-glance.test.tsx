@@ -11,7 +11,7 @@ const list = (over: Record<string, unknown> = {}) => ({ weekId: 7, aisles: [], i
 function show(current: unknown, shopping: unknown = list()) {
   vi.stubGlobal(
     'fetch',
-    vi.fn(async (url: string) => (url === '/api/weeks/current' ? json(current) : url === '/api/weeks/7/shopping' ? json(shopping) : json(null))),
+    vi.fn(async (url: string) => (url === '/api/weeks/current' ? json(current) : url.startsWith('/api/weeks/7/shopping') ? json(shopping) : json(null))),
   );
   renderInApp(<KitchenGlance />);
 }
@@ -25,7 +25,9 @@ describe('kitchen glance', () => {
     const bar = await screen.findByRole('progressbar', { name: 'In the trolley' });
     expect(bar.getAttribute('aria-valuenow')).toBe('5');
     expect(bar.getAttribute('aria-valuemax')).toBe('12');
-    expect(screen.getByRole('link', { name: 'Shopping list' }).getAttribute('href')).toBe('/weeks/7/shopping');
+    // Two prep days: the list of the next one (Wednesday's trip).
+    expect(screen.getByRole('link', { name: `Shopping list for prep ${dayLabel('2026-01-07')}` }).getAttribute('href')).toBe('/weeks/7/shopping?for=2026-01-07');
+    expect(vi.mocked(fetch).mock.calls.map(([u]) => u)).toContain('/api/weeks/7/shopping?prepDate=2026-01-07');
     expect(screen.getByRole('link', { name: 'Bake run' }).getAttribute('href')).toBe('/weeks/7/bake-run');
     expect(screen.getByRole('link', { name: 'Labels' }).getAttribute('href')).toBe('/weeks/7/labels');
     expect(screen.queryByText('Not published yet')).toBeNull();
@@ -37,6 +39,14 @@ describe('kitchen glance', () => {
     expect(await screen.findByText(`Next prep day: ${dayLabel('2026-01-04', true)} (today)`)).toBeTruthy();
     expect(await screen.findByText(/^Marked bought .*: the pantry is up to date\.$/)).toBeTruthy();
     expect(screen.getByText('Not published yet')).toBeTruthy();
+  });
+
+  it("links the whole week's list when the week has one prep day", async () => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 3, 9), toFake: ['Date'] });
+    show({ ...week, secondPrepDate: null });
+    expect((await screen.findByRole('link', { name: 'Shopping list' })).getAttribute('href')).toBe('/weeks/7/shopping');
+    expect(await screen.findByRole('progressbar', { name: 'In the trolley' })).toBeTruthy();
+    expect(vi.mocked(fetch).mock.calls.map(([u]) => u)).toContain('/api/weeks/7/shopping');
   });
 
   it('shows the empty state when the coach has planned no week', async () => {

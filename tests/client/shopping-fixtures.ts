@@ -21,6 +21,9 @@ export const shoppingItem = (ingredientId: number, checked = false): ShoppingIte
 /** Week 7's shopping list with these items, none checked yet. */
 export const shoppingList = (items: ShoppingItemDto[]): ShoppingListDto => ({
   weekId: 7,
+  prepDate: null,
+  tripDates: [],
+  alsoBought: [],
   aisles: [{ aisle: 'dairy-eggs', label: 'Dairy and eggs', items }],
   itemCount: items.length,
   checkedCount: 0,

@@ -9,8 +9,8 @@ import { shortDate } from '@shared/domain/iso-date.js';
 import { weekShoppingExport } from './shopping-week.service.js';
 
 /** The week's list as a PDF through the shared renderer (aisle codes shown as the store aisle's name). */
-export async function shoppingPdf(em: EntityManager, actor: Actor, weekId: number) {
-  const { week, computed } = await weekShoppingExport(em, actor, weekId);
+export async function shoppingPdf(em: EntityManager, actor: Actor, weekId: number, prepDate?: string) {
+  const { week, computed } = await weekShoppingExport(em, actor, weekId, prepDate);
   const ws = await em.findOneOrFail(Workspace, actor.workspaceId, { fields: ['name'] });
   const list: ShoppingList = {
     ...computed.list,
@@ -18,8 +18,8 @@ export async function shoppingPdf(em: EntityManager, actor: Actor, weekId: numbe
   };
   return renderShoppingListPdf(list, {
     businessName: ws.name,
-    title: `Shopping list, week of ${shortDate(week.startDate)}`,
-    filename: `shopping-list-${week.startDate}.pdf`,
+    title: prepDate ? `Shopping list for prep ${shortDate(prepDate)}, week of ${shortDate(week.startDate)}` : `Shopping list, week of ${shortDate(week.startDate)}`,
+    filename: `shopping-list-${prepDate ? `prep-${prepDate}` : week.startDate}.pdf`,
     amountText: (item, value) => baseAmountText(value, computed.ingredients.get(Number(item.ingredientId))!, measureOf(actor)),
   });
 }

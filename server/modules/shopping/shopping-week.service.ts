@@ -3,9 +3,10 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { UniqueConstraintViolationException } from '@mikro-orm/core';
 import type { MarkBoughtDto, ShoppingCheckDto, ShoppingListDto, ShoppingNeedsValues } from '@shared/schemas/shopping.schema.js';
 import { measureOf, type Actor } from '../../http/authz.js';
-import { NotFound } from '../../http/errors.js';
+import { Conflict, NotFound, ValidationError } from '../../http/errors.js';
 import { User } from '../auth/user.entity.js';
-import { findWeek, loadBoardData, type BoardData } from '../weeks/week-board.service.js';
+import { findWeek, loadBoardData, prepDatesOf, type BoardData } from '../weeks/week-board.service.js';
+import { cellPrepDate, tripDatesOf } from '@shared/domain/week-board.js';
 import { itemsOf as assemblyItemsOf } from '../assemblies/plate-facts.js';
 import type { IWeek } from '../weeks/week.entity.js';
 import { listWeeks, pickWeek, todayIso } from '../weeks/week.service.js';
@@ -18,16 +19,35 @@ import { ShoppingCheck, ShoppingPurchase, type IShoppingPurchase } from './shopp
 import { presentShoppingList } from './shopping.presenter.js';
 import { computeShoppingList, itemsOf, type ComputedShoppingList } from './shopping.service.js';
 
+/** Which list: 0 for the whole week, else the trip's number (1, 2); a 400 naming prepDate for a date not a trip's. */
+function tripOf(week: IWeek, prepDate: IsoDate | undefined): number {
+  if (prepDate === undefined) return 0;
+  const dates = tripDatesOf(week);
+  const i = dates.indexOf(prepDate);
+  if (i < 0) {
+    throw ValidationError.field(
+      'prepDate',
+      dates.length ? `Not a prep day of this week (${dates.join(' or ')})` : 'This week has one prep day: its list is the whole week',
+    );
+  }
+  return i + 1;
+}
+
 /**
- * What a prep week asks the shop for: every tray count of every prep date (× the tray's lines), and every add-on
- * of every plate on the board (× the client's household multiplier).
+ * What a prep week asks the shop for: the tray counts of every prep date (× the tray's lines) and the add-ons of
+ * every plate on the board (× the client's household multiplier). For one trip (`prepDate`): that prep date's tray
+ * counts and the add-ons of the plates it supplies (a cell's own prep date, else the latest one on or before its day).
  */
-export function weekNeeds(data: BoardData): ShoppingNeedsValues {
-  const trays = data.trays.filter((t) => t.trayCount > 0).map((t) => ({ trayId: t.tray.id, count: t.trayCount }));
+export function weekNeeds(data: BoardData, prepDate?: IsoDate): ShoppingNeedsValues {
+  const trays = data.trays
+    .filter((t) => t.trayCount > 0 && (!prepDate || t.prepDate === prepDate))
+    .map((t) => ({ trayId: t.tray.id, count: t.trayCount }));
   const plates = new Map(data.assemblies.map((a) => [a.id, a]));
   const multipliers = new Map(data.clients.map((c) => [c.id, new Decimal(c.householdMultiplier ?? 1)]));
+  const prepDates = prepDatesOf(data.week);
   const addOns: ShoppingNeedsValues['addOns'] = [];
   for (const cell of data.cells) {
+    if (prepDate && cellPrepDate({ date: cell.date, prepDate: cell.prepDate ?? null }, prepDates) !== prepDate) continue;
     const plate = plates.get(cell.assembly.id);
     if (!plate) continue;
     const times = multipliers.get(cell.client.id) ?? new Decimal(1);
@@ -39,9 +59,24 @@ export function weekNeeds(data: BoardData): ShoppingNeedsValues {
   return { trays, addOns };
 }
 
-async function computeForWeek(em: EntityManager, actor: Actor, week: IWeek): Promise<ComputedShoppingList> {
+/**
+ * A list of the week: the whole week (trip 0), or one trip. The pantry serves the trips in order: a later trip's
+ * list leaves out what an earlier trip not yet bought takes from it (once that trip is marked bought, the pantry
+ * itself says what is left).
+ */
+async function computeForWeek(em: EntityManager, actor: Actor, week: IWeek, trip: number): Promise<ComputedShoppingList> {
   const data = await loadBoardData(em, actor, week);
-  return computeShoppingList(em, actor, weekNeeds(data));
+  if (trip === 0) return computeShoppingList(em, actor, weekNeeds(data));
+  const dates = tripDatesOf(week);
+  const held = new Map<string, Decimal>();
+  for (let earlier = 1; earlier < trip; earlier++) {
+    if (await em.findOne(ShoppingPurchase, { week: week.id, trip: earlier }, { fields: ['id'] })) continue;
+    const before = await computeShoppingList(em, actor, weekNeeds(data, dates[earlier - 1]), held);
+    for (const item of itemsOf(before.list)) {
+      if (item.fromPantry.gt(0)) held.set(item.ingredientId, (held.get(item.ingredientId) ?? new Decimal(0)).plus(item.fromPantry));
+    }
+  }
+  return computeShoppingList(em, actor, weekNeeds(data, dates[trip - 1]), held);
 }
 
 async function userNames(em: EntityManager, ids: readonly number[]): Promise<Map<number, string>> {
@@ -51,8 +86,8 @@ async function userNames(em: EntityManager, ids: readonly number[]): Promise<Map
   return new Map(users.map((u) => [u.id, u.name]));
 }
 
-async function checksOf(em: EntityManager, weekId: number): Promise<Map<number, ShoppingCheckDto>> {
-  const rows = await em.find(ShoppingCheck, { week: weekId });
+async function checksOf(em: EntityManager, weekId: number, trip: number): Promise<Map<number, ShoppingCheckDto>> {
+  const rows = await em.find(ShoppingCheck, { week: weekId, trip });
   const names = await userNames(em, rows.filter((r) => r.checkedBy).map((r) => r.checkedBy!.id));
   return new Map(
     rows.map((r) => [
@@ -72,22 +107,36 @@ async function boughtOf(em: EntityManager, purchase: IShoppingPurchase | null) {
   return { at: purchase.boughtAt.toISOString(), by: purchase.boughtBy ? (names.get(purchase.boughtBy.id) ?? null) : null };
 }
 
-/** The week's list: computed now from the board, the tray counts and the pantry, with the check marks. */
-export async function weekShoppingList(em: EntityManager, actor: Actor, weekId: number): Promise<ShoppingListDto> {
+/** A list of the week (the whole week, or the trip before `prepDate`): computed now, with its check marks. */
+export async function weekShoppingList(em: EntityManager, actor: Actor, weekId: number, prepDate?: IsoDate): Promise<ShoppingListDto> {
   const week = await findWeek(em, actor, weekId);
-  const [computed, checks, purchase] = await Promise.all([
-    computeForWeek(em, actor, week),
-    checksOf(em, week.id),
-    em.findOne(ShoppingPurchase, { week: week.id }),
+  const trip = tripOf(week, prepDate);
+  const [computed, checks, purchases] = await Promise.all([
+    computeForWeek(em, actor, week, trip),
+    checksOf(em, week.id, trip),
+    em.find(ShoppingPurchase, { week: week.id }, { orderBy: { trip: 'asc' } }),
   ]);
-  return presentShoppingList(computed, { weekId: week.id, system: measureOf(actor), checks, bought: await boughtOf(em, purchase) });
+  const dates = tripDatesOf(week);
+  return presentShoppingList(computed, {
+    weekId: week.id,
+    prepDate: prepDate ?? null,
+    tripDates: dates,
+    system: measureOf(actor),
+    checks,
+    bought: await boughtOf(em, purchases.find((p) => p.trip === trip) ?? null),
+    alsoBought: purchases
+      .filter((p) => p.trip !== trip)
+      .map((p) => ({ prepDate: p.trip === 0 ? null : (dates[p.trip - 1] ?? null), at: p.boughtAt.toISOString() })),
+  });
 }
 
-/** The computed list of a week (domain objects, for the CSV and PDF exports). */
-export async function weekShoppingExport(em: EntityManager, actor: Actor, weekId: number) {
+/** A computed list of a week (domain objects, for the CSV and PDF exports). */
+export async function weekShoppingExport(em: EntityManager, actor: Actor, weekId: number, prepDate?: IsoDate) {
   const week = await findWeek(em, actor, weekId);
-  const [computed, checks] = await Promise.all([computeForWeek(em, actor, week), checksOf(em, week.id)]);
-  return { week, computed, dto: presentShoppingList(computed, { weekId: week.id, system: measureOf(actor), checks }) };
+  const trip = tripOf(week, prepDate);
+  const [computed, checks] = await Promise.all([computeForWeek(em, actor, week, trip), checksOf(em, week.id, trip)]);
+  const dto = presentShoppingList(computed, { weekId: week.id, prepDate: prepDate ?? null, tripDates: tripDatesOf(week), system: measureOf(actor), checks });
+  return { week, computed, dto };
 }
 
 /**
@@ -101,19 +150,21 @@ export async function setCheck(
   weekId: number,
   ingredientId: number,
   checked: boolean,
+  prepDate?: IsoDate,
 ): Promise<ShoppingCheckDto & { ingredientId: number }> {
   const week = await findWeek(em, actor, weekId);
+  const trip = tripOf(week, prepDate);
   if (!(await loadShoppingIngredients(em, actor, [ingredientId])).has(ingredientId)) throw new NotFound('Ingredient');
   const knex = em.getKnex();
   await knex.raw(
-    `insert into shopping_check (workspace_id, week_id, ingredient_id, checked, checked_by_id, checked_at)
-     values (?, ?, ?, ?, ?, now())
-     on conflict (week_id, ingredient_id) do update
+    `insert into shopping_check (workspace_id, week_id, trip, ingredient_id, checked, checked_by_id, checked_at)
+     values (?, ?, ?, ?, ?, ?, now())
+     on conflict (week_id, trip, ingredient_id) do update
        set checked = excluded.checked, checked_by_id = excluded.checked_by_id, checked_at = excluded.checked_at
        where shopping_check.checked is distinct from excluded.checked`,
-    [actor.workspaceId, week.id, ingredientId, checked, checked ? actor.userId : null],
+    [actor.workspaceId, week.id, trip, ingredientId, checked, checked ? actor.userId : null],
   );
-  const row = await em.fork().findOneOrFail(ShoppingCheck, { week: week.id, ingredient: ingredientId });
+  const row = await em.fork().findOneOrFail(ShoppingCheck, { week: week.id, trip, ingredient: ingredientId });
   const names = await userNames(em, row.checkedBy ? [row.checkedBy.id] : []);
   return {
     ingredientId,
@@ -132,15 +183,25 @@ function presentPurchase(p: IShoppingPurchase, applied: boolean): MarkBoughtDto 
 }
 
 /**
- * Marks the week's list bought: for every item, the pantry keeps what the list did not use plus the spare of the
- * packages bought (new amount = on hand − used from the pantry + spare, never below zero). Once per week: the
- * first call records the change; any later call returns that record and changes nothing.
+ * Marks a list bought (the whole week's, or a trip's): for every item, the pantry keeps what the list did not use
+ * plus the spare of the packages bought (new amount = on hand − used from the pantry + spare, never below zero).
+ * Once per list: the first call records the change; any later call returns that record and changes nothing. The
+ * whole week and its trips count the same food: once one kind is bought, the other is refused (409).
  */
-export async function markBought(em: EntityManager, actor: Actor, weekId: number): Promise<MarkBoughtDto> {
+export async function markBought(em: EntityManager, actor: Actor, weekId: number, prepDate?: IsoDate): Promise<MarkBoughtDto> {
   const week = await findWeek(em, actor, weekId);
-  const done = await em.findOne(ShoppingPurchase, { week: week.id });
+  const trip = tripOf(week, prepDate);
+  const done = await em.findOne(ShoppingPurchase, { week: week.id, trip });
   if (done) return presentPurchase(done, false);
-  const computed = await computeForWeek(em, actor, week);
+  const other = await em.findOne(ShoppingPurchase, { week: week.id, trip: trip === 0 ? { $ne: 0 } : 0 });
+  if (other) {
+    throw new Conflict(
+      trip === 0
+        ? "A prep day's list of this week was marked bought already: mark the other prep day's list bought instead of the whole week"
+        : "The whole week's list was marked bought already: the pantry has it",
+    );
+  }
+  const computed = await computeForWeek(em, actor, week, trip);
   try {
     return await em.transactional(async (tx) => {
       const rows = await tx.find(PantryItem, { workspace: actor.workspaceId });
@@ -165,6 +226,7 @@ export async function markBought(em: EntityManager, actor: Actor, weekId: number
       const purchase = tx.create(ShoppingPurchase, {
         workspace: actor.workspaceId,
         week: week.id,
+        trip,
         boughtBy: actor.userId,
         changes,
       });
@@ -174,7 +236,7 @@ export async function markBought(em: EntityManager, actor: Actor, weekId: number
   } catch (e) {
     // Two "mark bought" at once: the unique week row lets one through; the other reports the recorded one.
     if (!(e instanceof UniqueConstraintViolationException)) throw e;
-    const recorded = await em.fork().findOneOrFail(ShoppingPurchase, { week: week.id });
+    const recorded = await em.fork().findOneOrFail(ShoppingPurchase, { week: week.id, trip });
     return presentPurchase(recorded, false);
   }
 }

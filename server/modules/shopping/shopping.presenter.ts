@@ -51,10 +51,14 @@ export function presentShoppingList(
   computed: ComputedShoppingList,
   opts: {
     weekId: number | null;
+    /** The trip's prep date (null: the whole week) and the week's trip dates (see ShoppingListDto). */
+    prepDate?: string | null;
+    tripDates?: string[];
     /** The reader's measure preference for the written amounts (`neededText`, `toBuyText`, `spareText`). */
     system: MeasureSystem;
     checks?: ReadonlyMap<number, ShoppingCheckDto>;
     bought?: { at: string; by: string | null } | null;
+    alsoBought?: { prepDate: string | null; at: string }[];
   },
 ): ShoppingListDto {
   const aisles = computed.list.aisles.map((g) => ({
@@ -65,6 +69,8 @@ export function presentShoppingList(
   const items = aisles.flatMap((a) => a.items);
   return {
     weekId: opts.weekId,
+    prepDate: opts.prepDate ?? null,
+    tripDates: opts.tripDates ?? [],
     aisles,
     itemCount: items.length,
     checkedCount: items.filter((i) => i.check.checked).length,
@@ -72,5 +78,6 @@ export function presentShoppingList(
     costComplete: computed.list.costComplete,
     problems: computed.problems,
     bought: opts.bought ?? null,
+    alsoBought: opts.alsoBought ?? [],
   };
 }

@@ -2,6 +2,8 @@ import { Router } from 'express';
 import {
   checkBodySchema,
   checkParams,
+  markBoughtSchema,
+  shoppingListQuerySchema,
   labelsQuerySchema,
   shoppingNeedsSchema,
   weekIdParams,
@@ -36,17 +38,19 @@ export function shoppingRoutes(opts: { publicUrl: string }) {
   r.get(
     '/weeks/:weekId/shopping',
     allow('coach', 'assistant'),
-    validated({ params: weekIdParams }, ({ params }, req) => weekShoppingList(emOf(req), actorOf(req), params.weekId)),
+    validated({ params: weekIdParams, query: shoppingListQuerySchema }, ({ params, query }, req) =>
+      weekShoppingList(emOf(req), actorOf(req), params.weekId, query.prepDate),
+    ),
   );
 
   r.get(
     '/weeks/:weekId/shopping.csv',
     allow('coach', 'assistant'),
-    validated({ params: weekIdParams }, async ({ params }, req, res) => {
-      const { week, dto } = await weekShoppingExport(emOf(req), actorOf(req), params.weekId);
+    validated({ params: weekIdParams, query: shoppingListQuerySchema }, async ({ params, query }, req, res) => {
+      const { week, dto } = await weekShoppingExport(emOf(req), actorOf(req), params.weekId, query.prepDate);
       res
         .type('text/csv; charset=utf-8')
-        .attachment(`shopping-list-${week.startDate}.csv`)
+        .attachment(`shopping-list-${query.prepDate ? `prep-${query.prepDate}` : week.startDate}.csv`)
         .send(shoppingCsv(dto));
     }),
   );
@@ -54,8 +58,8 @@ export function shoppingRoutes(opts: { publicUrl: string }) {
   r.get(
     '/weeks/:weekId/shopping.pdf',
     allow('coach', 'assistant'),
-    validated({ params: weekIdParams }, async ({ params }, req, res) => {
-      const pdf = await shoppingPdf(emOf(req), actorOf(req), params.weekId);
+    validated({ params: weekIdParams, query: shoppingListQuerySchema }, async ({ params, query }, req, res) => {
+      const pdf = await shoppingPdf(emOf(req), actorOf(req), params.weekId, query.prepDate);
       res.type('application/pdf').attachment(pdf.filename).send(pdf.buffer);
     }),
   );
@@ -65,15 +69,18 @@ export function shoppingRoutes(opts: { publicUrl: string }) {
     '/weeks/:weekId/shopping/checks/:ingredientId',
     allow('coach', 'assistant'),
     validated({ params: checkParams, body: checkBodySchema }, ({ params, body }, req) =>
-      setCheck(emOf(req), actorOf(req), params.weekId, params.ingredientId, body.checked),
+      setCheck(emOf(req), actorOf(req), params.weekId, params.ingredientId, body.checked, body.prepDate),
     ),
   );
 
-  // Once per week: updates the pantry; a second call changes nothing and answers the recorded change.
+  // Once per list (the whole week, or a trip): updates the pantry; a second call changes nothing and answers the
+  // recorded change.
   r.post(
     '/weeks/:weekId/shopping/bought',
     allow('coach', 'assistant'),
-    validated({ params: weekIdParams }, ({ params }, req) => markBought(emOf(req), actorOf(req), params.weekId)),
+    validated({ params: weekIdParams, body: markBoughtSchema }, ({ params, body }, req) =>
+      markBought(emOf(req), actorOf(req), params.weekId, body.prepDate),
+    ),
   );
 
   r.get(

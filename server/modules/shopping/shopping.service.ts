@@ -78,6 +78,8 @@ export async function computeShoppingList(
   em: EntityManager,
   actor: Actor,
   input: ShoppingNeedsInput,
+  /** Pantry amounts already promised to another list (ingredient id → amount in its base unit): not used here. */
+  held: ReadonlyMap<string, Decimal> = new Map(),
 ): Promise<ComputedShoppingList> {
   const parsed = shoppingNeedsSchema.parse(input);
   const raw: ShoppingNeed[] = [
@@ -105,10 +107,15 @@ export async function computeShoppingList(
     }
     needs.push({ ...need, unit: normalizeUnit(need.unit) });
   }
-  const pantry: PantryStock[] = rawStock.filter((s) => {
-    const ing = ingredients.get(Number(s.ingredientId));
-    return ing !== undefined && convertible(ing, s.amount, s.unit) === null;
-  });
+  const pantry: PantryStock[] = rawStock
+    .filter((s) => {
+      const ing = ingredients.get(Number(s.ingredientId));
+      return ing !== undefined && convertible(ing, s.amount, s.unit) === null;
+    })
+    .map((s) => {
+      const promised = held.get(String(s.ingredientId));
+      return promised ? { ...s, amount: Decimal.max(new Decimal(s.amount).minus(promised), 0) } : s;
+    });
   const list = buildShoppingList({ needs, ingredients: [...ingredients.values()], pantry, aisleOrder: AISLE_ORDER });
   return { list, ingredients, problems };
 }

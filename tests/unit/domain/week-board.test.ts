@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { cellEatBy, computeBoard, coveringBatches, weekTitle, type BoardInput } from '@shared/domain/week-board';
+import { cellEatBy, computeBoard, coveringBatches, nextTripOf, tripDatesOf, weekTitle, type BoardInput } from '@shared/domain/week-board';
 import { checkWeek, type CheckCell, type DayCheckInput } from '@shared/domain/week-check';
 import { portionCount } from '@shared/domain/inventory';
 import { addDays } from '@shared/domain/iso-date';
@@ -142,5 +142,22 @@ describe('weekTitle', () => {
     expect(weekTitle({ name: 'Holiday week', startDate: '2026-12-07' })).toBe('Holiday week');
     expect(weekTitle({ name: '', startDate: '2026-12-07' })).toBe('Week of Mon 7 Dec');
     expect(weekTitle({ name: null, startDate: '2026-12-07' })).toBe('Week of Mon 7 Dec');
+  });
+});
+
+describe('shopping trips', () => {
+  // Invented dates: a week prepped on Sun 4 Jan and Wed 7 Jan 2026.
+  const two = { prepDate: '2026-01-04', secondPrepDate: '2026-01-07' };
+  it('a week with two prep days has a trip for each, in date order; one prep day has none (its list is the week)', () => {
+    expect(tripDatesOf(two)).toEqual(['2026-01-04', '2026-01-07']);
+    expect(tripDatesOf({ prepDate: '2026-01-07', secondPrepDate: '2026-01-04' })).toEqual(['2026-01-04', '2026-01-07']);
+    expect(tripDatesOf({ prepDate: '2026-01-04', secondPrepDate: null })).toEqual([]);
+  });
+  it('the next trip is the first on or after today; none once both are past or with one prep day', () => {
+    expect(nextTripOf(two, '2026-01-03')).toBe('2026-01-04');
+    expect(nextTripOf(two, '2026-01-04')).toBe('2026-01-04');
+    expect(nextTripOf(two, '2026-01-05')).toBe('2026-01-07');
+    expect(nextTripOf(two, '2026-01-08')).toBeNull();
+    expect(nextTripOf({ prepDate: '2026-01-04' }, '2026-01-03')).toBeNull();
   });
 });

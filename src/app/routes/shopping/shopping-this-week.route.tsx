@@ -1,7 +1,9 @@
+import { nextTripOf } from '@shared/domain/week-board';
 import { CurrentWeekRedirect } from '@/features/shopping/components/current-week-redirect';
+import { localToday } from '@/features/weeks/api/weeks.queries';
 import { paths } from '@/config/paths';
 
-/** "Shopping list" in the navigation: this week's list. */
+/** "Shopping list" in the navigation: this week's list (in a week with two prep days, the next prep day's). */
 export function Component() {
-  return <CurrentWeekRedirect to={(id) => paths.shopping(id)} what="shopping list" />;
+  return <CurrentWeekRedirect to={(w) => paths.shopping(w.id, nextTripOf(w, localToday()))} what="shopping list" />;
 }

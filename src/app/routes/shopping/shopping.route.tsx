@@ -1,4 +1,4 @@
-import { Link, useParams } from 'react-router-dom';
+import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { shoppingCsvUrl, shoppingListQuery, shoppingPdfUrl } from '@/features/shopping/api/shopping.queries';
 import { useMarkBought } from '@/features/shopping/api/use-shopping-mutations';
@@ -6,22 +6,55 @@ import { money, ShoppingList } from '@/features/shopping/components/shopping-lis
 import { Button } from '@/components/ui/button';
 import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton, Progress } from '@/components/ui/states';
 import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/problem';
+import { dayLabel } from '@/lib/dates';
 
 const linkButton =
   'inline-flex min-h-11 items-center justify-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
 
+const tripButton = (on: boolean) =>
+  `inline-flex min-h-11 items-center rounded-lg border px-3 font-bold ${on ? 'border-ink bg-ink text-paper-card' : 'border-line-strong bg-paper-card text-ink hover:bg-paper-deep'}`;
+
+/**
+ * A week with two prep days is shopped twice: the whole week's list, or the trip before each prep day (`?for=` the
+ * prep date), each with its own check marks.
+ */
+function TripChoice({ weekId, tripDates, prepDate }: { weekId: number; tripDates: string[]; prepDate: string | null }) {
+  return (
+    <nav aria-label="Which list" className="flex flex-col gap-2 print:hidden">
+      <div className="flex flex-wrap gap-2">
+        <Link to={paths.shopping(weekId)} className={tripButton(prepDate === null)} aria-current={prepDate === null ? 'page' : undefined}>
+          Whole week
+        </Link>
+        {tripDates.map((d) => (
+          <Link key={d} to={paths.shopping(weekId, d)} className={tripButton(prepDate === d)} aria-current={prepDate === d ? 'page' : undefined}>
+            For prep {dayLabel(d)}
+          </Link>
+        ))}
+      </div>
+      <p className="text-sm text-ink-soft">
+        Two prep days: shop for each from its own list (its trays and the plates it supplies). The pantry goes to the
+        first trip first. Each list keeps its own check marks.
+      </p>
+    </nav>
+  );
+}
+
 /** The week's shopping list: phone-first for the assistant (big tap targets, aisle groups, checked items sink). */
 export function Component() {
   const weekId = Number(useParams().weekId);
-  const q = useQuery(shoppingListQuery(weekId));
-  const bought = useMarkBought(weekId);
+  const [params] = useSearchParams();
+  const prepDate = params.get('for') || null;
+  const q = useQuery(shoppingListQuery(weekId, prepDate));
+  const bought = useMarkBought(weekId, prepDate);
 
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   const list = q.data;
+  const trip = list.prepDate ? `the list for prep ${dayLabel(list.prepDate)}` : list.tripDates.length ? "the whole week's list" : 'the list';
 
   const markBought = () => {
-    if (window.confirm('Mark everything bought? The pantry keeps the spare of each package and gives up what this list used. This happens once per week.')) {
+    if (window.confirm(`Mark everything on ${trip} bought? The pantry keeps the spare of each package and gives up what this list used. This happens once per list.`)) {
       bought.mutate();
     }
   };
@@ -29,7 +62,7 @@ export function Component() {
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-5 print:max-w-none">
       <PageHeader
-        title="Shopping list"
+        title={list.prepDate ? `Shopping list for prep ${dayLabel(list.prepDate)}` : 'Shopping list'}
         lead={
           <span className="num">
             {list.checkedCount} of {list.itemCount} checked · estimated {money(list.totalCostCents)}
@@ -40,16 +73,24 @@ export function Component() {
         <Button variant="secondary" onClick={() => window.print()}>
           Print
         </Button>
-        <a className={linkButton} href={shoppingCsvUrl(weekId)} download>
+        <a className={linkButton} href={shoppingCsvUrl(weekId, list.prepDate)} download>
           CSV
         </a>
-        <a className={linkButton} href={shoppingPdfUrl(weekId)} download>
+        <a className={linkButton} href={shoppingPdfUrl(weekId, list.prepDate)} download>
           PDF
         </a>
         <Link className={linkButton} to={paths.pantry}>
           Pantry
         </Link>
       </PageHeader>
+
+      {list.tripDates.length > 0 && <TripChoice weekId={weekId} tripDates={list.tripDates} prepDate={list.prepDate} />}
+      {list.alsoBought.length > 0 && (
+        <Notice tone="warn" title="Another list of this week was marked bought">
+          {list.alsoBought.map((b) => `${b.prepDate ? `The list for prep ${dayLabel(b.prepDate)}` : "The whole week's list"} on ${new Date(b.at).toLocaleString()}`).join('; ')}
+          . The pantry now holds what it bought, and this list counts on it.
+        </Notice>
+      )}
 
       <div className="print:hidden">
         <Progress value={list.checkedCount} max={list.itemCount} label="Checked off" />
@@ -85,6 +126,11 @@ export function Component() {
               Mark all bought and update the pantry
             </Button>
           )
+        )}
+        {bought.isError && (
+          <Notice tone="block" title="Not marked bought">
+            {errorMessage(bought.error)}
+          </Notice>
         )}
         <p className="text-sm text-ink-faint">
           Packages are rounded up; costs are estimates from the ingredient library's prices. Keep cold food cold on the

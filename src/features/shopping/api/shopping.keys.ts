@@ -4,9 +4,12 @@ import type { LabelSheetCode } from '@shared/domain/label-sheets';
 export const shoppingKeys = {
   all: ['shopping'] as const,
   lists: () => [...shoppingKeys.all, 'list'] as const,
-  list: (weekId: number) => [...shoppingKeys.lists(), weekId] as const,
-  /** Mutation key of the check marks of one week (to know when the last tap has settled). */
-  checks: (weekId: number) => [...shoppingKeys.all, 'checks', weekId] as const,
+  /** Every list of one week (the whole week and its trips). */
+  weekLists: (weekId: number) => [...shoppingKeys.lists(), weekId] as const,
+  /** One list: the whole week (no prep date) or the trip before that prep day. */
+  list: (weekId: number, prepDate: string | null = null) => [...shoppingKeys.weekLists(weekId), prepDate ?? 'week'] as const,
+  /** Mutation key of the check marks of one list (to know when the last tap has settled). */
+  checks: (weekId: number, prepDate: string | null = null) => [...shoppingKeys.all, 'checks', weekId, prepDate ?? 'week'] as const,
   /** A list for trays × counts given directly (POST /api/shopping/preview). */
   preview: (trays: readonly { trayId: number; count: number }[]) => [...shoppingKeys.all, 'preview', trays] as const,
   currentWeek: () => [...shoppingKeys.all, 'current-week'] as const,

@@ -6,11 +6,14 @@ import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { api, qs } from '@/lib/api-client';
 import { pantryKeys, shoppingKeys } from './shopping.keys';
 
-/** The week's list; refreshed every 15 s so two people shopping see each other's marks. */
-export const shoppingListQuery = (weekId: number) =>
+/**
+ * A list of the week (the whole week, or the trip before `prepDate`); refreshed every 15 s so two people shopping
+ * see each other's marks.
+ */
+export const shoppingListQuery = (weekId: number, prepDate: string | null = null) =>
   queryOptions({
-    queryKey: shoppingKeys.list(weekId),
-    queryFn: () => api.get<ShoppingListDto>(`/weeks/${weekId}/shopping`),
+    queryKey: shoppingKeys.list(weekId, prepDate),
+    queryFn: () => api.get<ShoppingListDto>(`/weeks/${weekId}/shopping${qs({ prepDate: prepDate ?? undefined })}`),
     refetchInterval: 15_000,
   });
 
@@ -35,8 +38,8 @@ export const pantryIngredientSearchQuery = (q: string) =>
   });
 
 /** Export addresses (plain links: the browser downloads them with the session cookie). */
-export const shoppingCsvUrl = (weekId: number) => `/api/weeks/${weekId}/shopping.csv`;
-export const shoppingPdfUrl = (weekId: number) => `/api/weeks/${weekId}/shopping.pdf`;
+export const shoppingCsvUrl = (weekId: number, prepDate: string | null = null) => `/api/weeks/${weekId}/shopping.csv${qs({ prepDate: prepDate ?? undefined })}`;
+export const shoppingPdfUrl = (weekId: number, prepDate: string | null = null) => `/api/weeks/${weekId}/shopping.pdf${qs({ prepDate: prepDate ?? undefined })}`;
 
 /** What trays × counts ask the shop for, after the pantry (a read: nothing is written). */
 export const shoppingPreviewQuery = (trays: { trayId: number; count: number }[]) =>

@@ -18,12 +18,16 @@ function withCheck(list: ShoppingListDto, ingredientId: number, check: ShoppingC
  * server refuses; the list is re-read only when the last pending tap has settled (so a slow answer never undoes a
  * newer tap).
  */
-export function useSetCheck(weekId: number) {
+export function useSetCheck(weekId: number, prepDate: string | null = null) {
   const qc = useQueryClient();
-  const key = shoppingKeys.list(weekId);
+  const key = shoppingKeys.list(weekId, prepDate);
   return useMutation({
-    mutationKey: shoppingKeys.checks(weekId),
-    mutationFn: (v: CheckVars) => api.put<ShoppingCheckDto & { ingredientId: number }>(`/weeks/${weekId}/shopping/checks/${v.ingredientId}`, { checked: v.checked }),
+    mutationKey: shoppingKeys.checks(weekId, prepDate),
+    mutationFn: (v: CheckVars) =>
+      api.put<ShoppingCheckDto & { ingredientId: number }>(`/weeks/${weekId}/shopping/checks/${v.ingredientId}`, {
+        checked: v.checked,
+        ...(prepDate ? { prepDate } : {}),
+      }),
     onMutate: async (v) => {
       await qc.cancelQueries({ queryKey: key });
       const previous = qc.getQueryData<ShoppingListDto>(key);
@@ -42,19 +46,20 @@ export function useSetCheck(weekId: number) {
       if (now) qc.setQueryData<ShoppingListDto>(key, withCheck(now, saved.ingredientId, saved));
     },
     onSettled: () => {
-      if (qc.isMutating({ mutationKey: shoppingKeys.checks(weekId) }) === 1) return qc.invalidateQueries({ queryKey: key });
+      if (qc.isMutating({ mutationKey: shoppingKeys.checks(weekId, prepDate) }) === 1) return qc.invalidateQueries({ queryKey: key });
     },
   });
 }
 
-/** Marks the list bought (once per week): updates the pantry. */
-export function useMarkBought(weekId: number) {
+/** Marks a list bought (once per list): updates the pantry, which every list of the week reads. */
+export function useMarkBought(weekId: number, prepDate: string | null = null) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: () => api.post<MarkBoughtDto>(`/weeks/${weekId}/shopping/bought`),
+    mutationFn: () => api.post<MarkBoughtDto>(`/weeks/${weekId}/shopping/bought`, prepDate ? { prepDate } : {}),
+    meta: { silent: true },
     onSuccess: () =>
       Promise.all([
-        qc.invalidateQueries({ queryKey: shoppingKeys.list(weekId) }),
+        qc.invalidateQueries({ queryKey: shoppingKeys.weekLists(weekId) }),
         qc.invalidateQueries({ queryKey: pantryKeys.lists() }),
       ]),
   });

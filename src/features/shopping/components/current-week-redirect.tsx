@@ -1,10 +1,11 @@
 import { Navigate } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { EmptyState, ErrorState, PageSkeleton } from '@/components/ui/states';
+import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { currentWeekQuery } from '../api/shopping.queries';
 
 /** Sends the person to this week's page (the week covering today, else the next, else the latest). */
-export function CurrentWeekRedirect({ to, what }: { to: (weekId: number) => string; what: string }) {
+export function CurrentWeekRedirect({ to, what }: { to: (week: WeekSummaryDto) => string; what: string }) {
   const q = useQuery(currentWeekQuery());
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
@@ -15,5 +16,5 @@ export function CurrentWeekRedirect({ to, what }: { to: (weekId: number) => stri
       </EmptyState>
     );
   }
-  return <Navigate to={to(q.data.id)} replace />;
+  return <Navigate to={to(q.data)} replace />;
 }

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { compareIsoDates } from '@shared/domain/iso-date';
-import { prepDatesOf } from '@shared/domain/week-board';
+import { nextTripOf, prepDatesOf } from '@shared/domain/week-board';
 import { Card, EmptyState, Notice, Progress, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { TileLink } from '@/components/ui/tile-link';
@@ -9,8 +9,8 @@ import { dayLabel, nextPrepDayTitle } from '@/lib/dates';
 import { localToday } from '@/features/weeks/api/weeks.queries';
 import { currentWeekQuery, shoppingListQuery } from '../api/shopping.queries';
 
-function ShoppingProgress({ weekId }: { weekId: number }) {
-  const q = useQuery(shoppingListQuery(weekId));
+function ShoppingProgress({ weekId, prepDate }: { weekId: number; prepDate: string | null }) {
+  const q = useQuery(shoppingListQuery(weekId, prepDate));
   return (
     <QueryView query={q} loading={<Skeleton className="h-10 w-full" label="Loading the shopping list" />}>
       {(list) =>
@@ -41,6 +41,8 @@ export function KitchenGlance() {
         const week = w!;
         // The prep days still to come (today included).
         const ahead = prepDatesOf(week).filter((d) => compareIsoDates(d, today) >= 0);
+        // A week with two prep days is shopped per prep day: the next one's list.
+        const trip = nextTripOf(week, today);
         return (
           <Card>
             <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
@@ -52,10 +54,10 @@ export function KitchenGlance() {
                 {ahead.length > 1 && `Then ${dayLabel(ahead[1], true)}.`}
               </Notice>
               <div className="flex flex-col gap-2 rounded-lg border border-line-strong bg-paper-card p-3">
-                <Link to={paths.shopping(week.id)} className="font-bold underline">
-                  Shopping list
+                <Link to={paths.shopping(week.id, trip)} className="font-bold underline">
+                  {trip ? `Shopping list for prep ${dayLabel(trip)}` : 'Shopping list'}
                 </Link>
-                <ShoppingProgress weekId={week.id} />
+                <ShoppingProgress weekId={week.id} prepDate={trip} />
               </div>
             </div>
             {!week.publishedVersion && (

@@ -78,7 +78,7 @@ function AisleGroup({ aisle, onToggle }: { aisle: ShoppingAisleDto; onToggle: (i
 }
 
 export function ShoppingList({ list, weekId }: { list: ShoppingListDto; weekId: number }) {
-  const setCheck = useSetCheck(weekId);
+  const setCheck = useSetCheck(weekId, list.prepDate);
   const toggle = (item: ShoppingItemDto, checked: boolean) => setCheck.mutate({ ingredientId: item.ingredientId, checked });
   return (
     <div className="flex flex-col gap-6 print:gap-3">
