@@ -1,10 +1,8 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { fireEvent, render, screen, waitFor } from '@testing-library/react';
-import { QueryClientProvider } from '@tanstack/react-query';
-import { MemoryRouter, Route, Routes } from 'react-router-dom';
+import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { Component as ClientPage } from '@/app/routes/clients/client.route';
 import { emptyClient } from '@/features/clients/components/client-form';
-import { jsonResponse, queryClientFor, signedIn } from './render';
+import { jsonResponse, renderAtRoute } from './render';
 
 // An invented client profile, as the coach reads it (GET /api/clients/:id): the new-client form's starting values.
 const profile = (overrides: Record<string, unknown> = {}) => ({
@@ -25,17 +23,7 @@ const profile = (overrides: Record<string, unknown> = {}) => ({
   ...overrides,
 });
 
-function renderProfile() {
-  return render(
-    <MemoryRouter initialEntries={['/clients/7']}>
-      <QueryClientProvider client={queryClientFor(signedIn())}>
-        <Routes>
-          <Route path="/clients/:clientId" element={<ClientPage />} />
-        </Routes>
-      </QueryClientProvider>
-    </MemoryRouter>,
-  );
-}
+const renderProfile = () => renderAtRoute(<ClientPage />, '/clients/:clientId', '/clients/7');
 
 afterEach(() => vi.unstubAllGlobals());
 

@@ -1,7 +1,7 @@
 import type { ReactElement } from 'react';
 import { render } from '@testing-library/react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { MemoryRouter } from 'react-router-dom';
+import { MemoryRouter, Route, Routes } from 'react-router-dom';
 import type { MeDto } from '@shared/schemas/auth.schema';
 import { meQuery } from '@/features/auth/api/auth.queries';
 
@@ -43,4 +43,17 @@ export function queryClientFor(me: MeDto): QueryClient {
   const qc = testQueryClient();
   qc.setQueryData(meQuery().queryKey, me);
   return qc;
+}
+
+/** Renders a page that reads its route's params: `element` under `path`, opened at `url`, signed in as `me`. */
+export function renderAtRoute(element: ReactElement, path: string, url: string, me: MeDto = signedIn()) {
+  return render(
+    <MemoryRouter initialEntries={[url]}>
+      <QueryClientProvider client={queryClientFor(me)}>
+        <Routes>
+          <Route path={path} element={element} />
+        </Routes>
+      </QueryClientProvider>
+    </MemoryRouter>,
+  );
 }

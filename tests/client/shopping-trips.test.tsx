@@ -1,25 +1,13 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { fireEvent, render, screen, waitFor } from '@testing-library/react';
-import { QueryClientProvider } from '@tanstack/react-query';
-import { MemoryRouter, Route, Routes } from 'react-router-dom';
+import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { Component as ShoppingPage } from '@/app/routes/shopping/shopping.route';
 import { shoppingItem, shoppingList } from './shopping-fixtures';
-import { jsonResponse, queryClientFor, signedIn } from './render';
+import { jsonResponse, renderAtRoute, signedIn } from './render';
 
 // Week 7 with two invented prep days, Sun 4 Jan and Wed 7 Jan 2026.
 const TRIPS = ['2026-01-04', '2026-01-07'];
 
-function renderAt(url: string) {
-  return render(
-    <MemoryRouter initialEntries={[url]}>
-      <QueryClientProvider client={queryClientFor(signedIn({ role: 'assistant' }))}>
-        <Routes>
-          <Route path="/weeks/:weekId/shopping" element={<ShoppingPage />} />
-        </Routes>
-      </QueryClientProvider>
-    </MemoryRouter>,
-  );
-}
+const renderAt = (url: string) => renderAtRoute(<ShoppingPage />, '/weeks/:weekId/shopping', url, signedIn({ role: 'assistant' }));
 
 afterEach(() => vi.unstubAllGlobals());
 
