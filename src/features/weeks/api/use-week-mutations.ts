@@ -7,6 +7,7 @@ import type {
   CreateWeekInput,
   PutTraysInput,
   UpdateWeekInput,
+  WeekSummaryDto,
 } from '@shared/schemas/weeks.schema';
 import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import { api } from '@/lib/api-client';
@@ -72,6 +73,8 @@ export function useDeleteWeek() {
     // The board is gone: drop it rather than read it again (a 404 on the page being left); lists and glances refresh.
     onSuccess: (_done, id) => {
       qc.removeQueries({ queryKey: weekKeys.detail(id), exact: true });
+      // The list the page goes back to leaves the week out at once, not after its refetch.
+      qc.setQueryData<WeekSummaryDto[]>(weekKeys.list(), (weeks) => weeks?.filter((w) => w.id !== id));
       return qc.invalidateQueries({ queryKey: weekKeys.all, predicate: (q) => q.queryKey[1] !== 'detail' });
     },
   });
