@@ -11,15 +11,13 @@ import {
   weekIdParam,
 } from '@shared/schemas/bake-setup.schema.js';
 import { actorOf, allow } from '../../http/authz.js';
-import { Conflict } from '../../http/errors.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
-import { Workspace } from '../workspaces/workspace.entity.js';
-import { renderBakeRunPdf } from '../pdf/bake-run.pdf.js';
-import { shortDate, type IsoDate } from '@shared/domain/iso-date.js';
+import { shortDate } from '@shared/domain/iso-date.js';
 import * as setup from './bake-setup.service.js';
 import * as runs from './bake-run.service.js';
 import { bakeRunIcs } from './bake-run-ics.js';
+import { bakeRunPdf, plannedBakeRun } from './bake-run-files.js';
 
 /** Bake rules and ovens (coach writes, assistant reads), the stateless calculator and a prep week's bake run. */
 export function bakeRunRoutes() {
@@ -100,23 +98,11 @@ export function bakeRunRoutes() {
     ),
   );
 
-  const plannedRun = async (req: Parameters<typeof emOf>[0], weekId: number, prepDate?: string) => {
-    const dto = await runs.getWeekBakeRun(emOf(req), actorOf(req), weekId, prepDate);
-    if (!dto.run) throw new Conflict(`Nothing to plan yet: ${dto.problems.join(' ')}`, { problems: dto.problems });
-    return { dto, run: dto.run };
-  };
-
   r.get(
     '/weeks/:weekId/bake-run.pdf',
     allow('coach', 'assistant'),
     validated({ params: weekIdParam, query: prepDateQuery }, async ({ params, query }, req, res) => {
-      const { dto, run } = await plannedRun(req, params.weekId, query.prepDate);
-      const ws = await emOf(req).findOneOrFail(Workspace, { id: actorOf(req).workspaceId });
-      const { filename, buffer } = await renderBakeRunPdf(run, {
-        businessName: ws.name,
-        title: `Bake run, ${dto.weekName}, prep ${shortDate(dto.prepDate as IsoDate)}`,
-        filename: `bake-run-${dto.prepDate}.pdf`,
-      });
+      const { filename, buffer } = await bakeRunPdf(emOf(req), actorOf(req), params.weekId, query.prepDate);
       res.setHeader('content-type', 'application/pdf');
       res.setHeader('content-disposition', `attachment; filename="${filename}"`);
       res.send(buffer);
@@ -126,8 +112,8 @@ export function bakeRunRoutes() {
     '/weeks/:weekId/bake-run.ics',
     allow('coach', 'assistant'),
     validated({ params: weekIdParam, query: prepDateQuery }, async ({ params, query }, req, res) => {
-      const { dto, run } = await plannedRun(req, params.weekId, query.prepDate);
-      const text = bakeRunIcs(run, { calendarName: `Bake run, prep ${shortDate(dto.prepDate as IsoDate)}`, uidPrefix: `week${dto.weekId}-${dto.prepDate}` });
+      const { dto, run } = await plannedBakeRun(emOf(req), actorOf(req), params.weekId, query.prepDate);
+      const text = bakeRunIcs(run, { calendarName: `Bake run, prep ${shortDate(dto.prepDate)}`, uidPrefix: `week${dto.weekId}-${dto.prepDate}` });
       res.setHeader('content-type', 'text/calendar; charset=utf-8');
       res.setHeader('content-disposition', `attachment; filename="bake-run-${dto.prepDate}.ics"`);
       res.send(text);

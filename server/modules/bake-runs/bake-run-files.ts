@@ -1,0 +1,26 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { shortDate, type IsoDate } from '@shared/domain/iso-date.js';
+import type { WeekBakeRunDto } from '@shared/schemas/bake-setup.schema.js';
+import type { Actor } from '../../http/authz.js';
+import { Conflict } from '../../http/errors.js';
+import { Workspace } from '../workspaces/workspace.entity.js';
+import { renderBakeRunPdf } from '../pdf/bake-run.pdf.js';
+import { getWeekBakeRun } from './bake-run.service.js';
+
+/** A prep date's planned bake run; a 409 saying why when there is nothing to plan yet (no trays, no ovens). */
+export async function plannedBakeRun(em: EntityManager, actor: Actor, weekId: number, prepDate?: string) {
+  const dto = await getWeekBakeRun(em, actor, weekId, prepDate);
+  if (!dto.run) throw new Conflict(`Nothing to plan yet: ${dto.problems.join(' ')}`, { problems: dto.problems });
+  return { dto: dto as WeekBakeRunDto & { prepDate: IsoDate }, run: dto.run };
+}
+
+/** The bake run of a prep date as a PDF (the download, and the prep-day e-mail's attachment). */
+export async function bakeRunPdf(em: EntityManager, actor: Actor, weekId: number, prepDate?: string) {
+  const { dto, run } = await plannedBakeRun(em, actor, weekId, prepDate);
+  const ws = await em.findOneOrFail(Workspace, { id: actor.workspaceId }, { fields: ['name'] });
+  return renderBakeRunPdf(run, {
+    businessName: ws.name,
+    title: `Bake run, ${dto.weekName}, prep ${shortDate(dto.prepDate)}`,
+    filename: `bake-run-${dto.prepDate}.pdf`,
+  });
+}
