@@ -15,6 +15,7 @@ import { trayRoutes } from './trays/trays.routes.js';
 import { bakeRunRoutes } from './bake-runs/bake-run.routes.js';
 import { pantryRoutes } from './shopping/pantry.routes.js';
 import { shoppingRoutes } from './shopping/shopping.routes.js';
+import { prepDayMailRoutes } from './kitchen-mail/prep-day-mail.routes.js';
 
 export interface ModuleDeps {
   orm: Orm;
@@ -25,5 +26,5 @@ export interface ModuleDeps {
 }
 
 export function apiModules(deps: ModuleDeps): Router[] {
-  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), shoppingRoutes({ publicUrl: deps.env.PUBLIC_URL }), weekMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), bakeRunRoutes(), mailRoutes({ mail: deps.mail, env: deps.env })];
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), shoppingRoutes({ publicUrl: deps.env.PUBLIC_URL }), weekMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), prepDayMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), bakeRunRoutes(), mailRoutes({ mail: deps.mail, env: deps.env })];
 }

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-export const MAIL_KINDS = ['invitation', 'password-reset', 'week-plan', 'shopping-list', 'bake-run'] as const;
+export const MAIL_KINDS = ['invitation', 'password-reset', 'week-plan', 'shopping-list', 'bake-run', 'prep-day'] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];
 
 export const OUTBOX_STATUSES = ['queued', 'sending', 'sent', 'failed', 'retrying'] as const;

@@ -158,6 +158,11 @@ export const MATRIX: Record<string, MatrixRow> = {
   'GET /api/weeks/mine/plan.pdf': R(['client']),
   'GET /api/weeks/mine/thaw-reminders.ics': R(['client']),
   'POST /api/weeks/:weekId/send': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/send`, body: () => ({ note: 'Matrix' }), crossWorkspace: true }),
+  'POST /api/weeks/:weekId/prep-day-mail': R(['coach'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.week}/prep-day-mail`,
+    body: () => ({ prepDate: '1999-01-04' }),
+    crossWorkspace: true,
+  }),
   'GET /api/weeks/:weekId/clients/:clientId/plan.pdf': R(['coach'], {
     path: (ctx) => `/api/weeks/${ctx.ids.week}/clients/${ctx.ids.client}/plan.pdf`,
     crossWorkspace: true,

@@ -70,3 +70,17 @@ export function weekPlanMail(p: {
     html: layout(lines, p.link ? { href: p.link, label: 'Open my plates' } : undefined),
   };
 }
+
+/** To a kitchen assistant: a prep day's shopping list and bake run, attached as PDFs. */
+export function prepDayMail(p: { businessName: string; name: string; prepLabel: string; weekName: string; note?: string | null; link?: string }): MailBody {
+  const lines = [
+    `Hello ${p.name},`,
+    `the shopping list and the bake run for prep day ${p.prepLabel} (${p.weekName}) are attached as PDFs. They show the plan as it is when this e-mail leaves; Trayline always has the latest.`,
+    ...(p.note ? [`A note from ${p.businessName}:\n${p.note}`] : []),
+  ];
+  return {
+    subject: `${p.businessName}: prep day ${p.prepLabel}, shopping list and bake run`,
+    text: `${lines.join('\n\n')}${p.link ? `\n\nOpen the shopping list: ${p.link}` : ''}\n`,
+    html: layout(lines, p.link ? { href: p.link, label: 'Open the shopping list' } : undefined),
+  };
+}

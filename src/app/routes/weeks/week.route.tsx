@@ -12,6 +12,7 @@ import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/wee
 import { InventoryPanel } from '@/features/weeks/components/inventory-panel';
 import { PublishedVersions } from '@/features/weeks/components/published-versions';
 import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
+import { PrepDayMailPanel } from '@/features/week-mail/components/prep-day-mail-panel';
 import { Button } from '@/components/ui/button';
 import { DayOptions, SelectField, TextField } from '@/components/ui/field';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
@@ -185,6 +186,11 @@ export function Component() {
       <Card>
         <h2 className="mb-3 text-xl">Send plans</h2>
         <SendPlansPanel board={board} />
+      </Card>
+
+      <Card>
+        <h2 className="mb-3 text-xl">Prep-day papers for the kitchen</h2>
+        <PrepDayMailPanel board={board} />
       </Card>
 
       <Card>

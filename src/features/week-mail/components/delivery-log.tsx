@@ -14,6 +14,7 @@ const KIND_WORDS: Record<string, string> = {
   'password-reset': 'Password reset',
   'shopping-list': 'Shopping list',
   'bake-run': 'Bake run',
+  'prep-day': 'Prep-day papers',
 };
 
 /** "Plans sent": the e-mails of one client, newest first, with their status (refreshes while some wait). */

@@ -1,0 +1,86 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import { PDFParse } from 'pdf-parse';
+import type { Orm } from '@server/db/orm.js';
+import { attachmentRenderer } from '@server/modules/mail/attachment-registry.js';
+import { testApp } from '../support/test-app.js';
+import { coachWorkspace, makeOven, member } from '../support/factories.js';
+import { shoppingWeek } from '../support/shopping-week.js';
+import { sql } from '../support/db.js';
+
+let app: Express;
+let orm: Orm;
+beforeAll(async () => {
+  ({ app, orm } = await testApp());
+});
+
+const pdfText = async (buffer: Buffer) => {
+  const parser = new PDFParse({ data: new Uint8Array(buffer) });
+  const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+  await parser.destroy();
+  return text;
+};
+
+type OutboxRow = { to: string; kind: string; subject: string; week_id: number; attachments: { pdf: string; payload: Record<string, unknown> }[] };
+
+describe("e-mailing a prep day's papers to the kitchen", () => {
+  it('queues one e-mail per assistant with the shopping list and the bake run, rendered for that reader; a repeated request queues nothing', async () => {
+    const coach = await coachWorkspace(app);
+    const kit = await member(app, coach, 'assistant');
+    const lee = await member(app, coach, 'assistant');
+    // Lee reads metric amounts; the papers are written for each reader.
+    await lee.agent.patch('/api/auth/me').send({ unitSystem: 'metric' }).expect(200);
+    await makeOven(coach);
+    const w = await shoppingWeek(coach);
+    const requestId = '0b6c9a52-3f1e-4c1a-9d7e-2a4b5c6d7e8f';
+    const sent = await coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04', requestId }).expect(202);
+    expect(sent.body).toEqual({
+      queued: 2,
+      recipients: [
+        { name: 'assistant person', email: kit.email },
+        { name: 'assistant person', email: lee.email },
+      ],
+      repeated: false,
+    });
+    const again = await coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04', requestId }).expect(200);
+    expect(again.body).toMatchObject({ queued: 0, repeated: true });
+
+    const rows = await sql<OutboxRow>("select \"to\", kind, subject, week_id, attachments from outbox where workspace_id = $1 and kind = 'prep-day' order by id", [coach.workspaceId]);
+    expect(rows.map((r) => r.to)).toEqual([kit.email, lee.email]);
+    expect(rows[0]).toMatchObject({ week_id: w.weekId, subject: expect.stringContaining('prep day Sun 4 Jan, shopping list and bake run') });
+    expect(rows[0].attachments.map((a) => a.pdf)).toEqual(['prep-day-shopping', 'prep-day-bake-run']);
+
+    // What the mail job attaches when each e-mail leaves.
+    const render = (kind: string, payload: Record<string, unknown>) => attachmentRenderer(kind)!(orm.em.fork(), payload);
+    const kitList = await pdfText((await render('prep-day-shopping', rows[0].attachments[0].payload)).buffer);
+    expect(kitList).toContain('Shopping list, week of Mon 5 Jan');
+    // 3 trays × 10 oz + 1 oz × 2 portions × 2 days = 34 oz of cheese: "2 lb 2 oz" for Kit, grams for Lee.
+    expect(kitList).toContain('2 lb 2 oz');
+    const leeList = await pdfText((await render('prep-day-shopping', rows[1].attachments[0].payload)).buffer);
+    expect(leeList).toMatch(/964 g/);
+    const bake = await render('prep-day-bake-run', rows[0].attachments[1].payload);
+    expect(bake.filename).toBe('bake-run-2026-01-04.pdf');
+    expect(await pdfText(bake.buffer)).toContain('Bake run, Week of Mon 5 Jan, prep Sun 4 Jan');
+
+    // Someone who left the workspace gets no papers: the render fails, so the mail is marked failed rather than sent.
+    await sql('delete from membership where user_id = $1', [lee.userId]);
+    await expect(render('prep-day-shopping', rows[1].attachments[0].payload)).rejects.toThrow(/no longer in this workspace/);
+  });
+
+  it('says why it cannot send: a day that is not a prep day (400), nothing to bake (409), no assistant (409); other workspaces get 404', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await shoppingWeek(coach);
+    const notPrep = await coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-05' }).expect(400);
+    expect(notPrep.body.errors).toEqual({ prepDate: ['Not a prep day of this week (2026-01-04)'] });
+    const noOven = await coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04' }).expect(409);
+    expect(noOven.body.detail).toContain('No ovens');
+    await makeOven(coach);
+    const nobody = await coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04' }).expect(409);
+    expect(nobody.body.detail).toBe('No kitchen assistant in this workspace yet: invite one from Team first');
+    expect(await sql("select id from outbox where workspace_id = $1 and kind = 'prep-day'", [coach.workspaceId])).toEqual([]);
+    const other = await coachWorkspace(app);
+    await other.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04' }).expect(404);
+    const bad = await coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: 'Sunday', requestId: 'x' }).expect(400);
+    expect(Object.keys(bad.body.errors).sort()).toEqual(['prepDate', 'requestId']);
+  });
+});
