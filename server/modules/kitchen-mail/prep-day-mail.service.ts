@@ -1,4 +1,3 @@
-import { createHash } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
@@ -10,13 +9,10 @@ import { Outbox } from '../mail/outbox.entity.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { findWeek } from '../weeks/week-board.service.js';
 import { prepDayMail } from '../mail/mail-templates.js';
-import { newBatchId, queueMail, type MailQueue } from '../mail/mail.service.js';
+import { mailKey, newBatchId, queueMail, requestBatchId, type MailQueue } from '../mail/mail.service.js';
 import { plannedBakeRun } from '../bake-runs/bake-run-files.js';
 import { PREP_DAY_BAKE_RUN_PDF, PREP_DAY_SHOPPING_PDF, type PrepDayPayload } from './prep-day-mail.js';
 
-const hex = (s: string) => createHash('sha256').update(s).digest('hex');
-/** A batch id in the shape of a UUID (the outbox groups a batch's mails by it). */
-const uuidShaped = (h: string) => `${h.slice(0, 8)}-${h.slice(8, 12)}-5${h.slice(13, 16)}-a${h.slice(17, 20)}-${h.slice(20, 32)}`;
 
 /**
  * E-mails a prep day's shopping list and bake run (PDFs rendered when each mail leaves) to every kitchen assistant
@@ -42,7 +38,7 @@ export async function sendPrepDay(
   const recipients = members.map((m) => ({ userId: m.user.id, name: m.user.unwrap().name, email: m.user.unwrap().email }));
   if (!recipients.length) throw new Conflict('No kitchen assistant in this workspace yet: invite one from Team first');
   const note = input.note?.trim() || null;
-  const batchId = input.requestId ? uuidShaped(hex(`prep-day|${actor.workspaceId}|${week.id}|${input.requestId}`)) : newBatchId();
+  const batchId = input.requestId ? requestBatchId(`prep-day|${actor.workspaceId}|${week.id}|${input.requestId}`) : newBatchId();
 
   return em.transactional(async (tx) => {
     const answer = (queued: number) => ({ queued, recipients: recipients.map(({ name, email }) => ({ name, email })), repeated: queued === 0 });
@@ -67,7 +63,7 @@ export async function sendPrepDay(
           { pdf: PREP_DAY_SHOPPING_PDF, payload: spec },
           { pdf: PREP_DAY_BAKE_RUN_PDF, payload: spec },
         ],
-        idempotencyKey: `pd-${hex(`${batchId}|${r.userId}`).slice(0, 48)}`,
+        idempotencyKey: mailKey('pd', `${batchId}|${r.userId}`),
       });
     }
     return answer(recipients.length);

@@ -1,4 +1,4 @@
-import { randomUUID } from 'node:crypto';
+import { createHash, randomUUID } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Knex } from '@mikro-orm/knex';
 import type PgBoss from 'pg-boss';
@@ -112,5 +112,16 @@ export async function queueMail(em: EntityManager, queue: MailQueue, input: Queu
 
 /** A batch id for mails queued together (e.g. a week sent to every client). */
 export const newBatchId = (): string => randomUUID();
+
+const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
+
+/** A UUID-shaped batch id derived from what identifies a request (the same request → the same batch). */
+export function requestBatchId(identity: string): string {
+  const h = sha256(identity);
+  return `${h.slice(0, 8)}-${h.slice(8, 12)}-5${h.slice(13, 16)}-a${h.slice(17, 20)}-${h.slice(20, 32)}`;
+}
+
+/** An idempotency key from what identifies one e-mail: `prefix-` and 48 hex digits. */
+export const mailKey = (prefix: string, identity: string): string => `${prefix}-${sha256(identity).slice(0, 48)}`;
 
 export const messageIdOf = (idempotencyKey: string) => `<${idempotencyKey}@trayline>`;

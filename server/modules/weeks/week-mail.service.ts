@@ -1,9 +1,8 @@
-import { createHash } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { DeliveryLogDto, SendWeekResultDto, SkipReason } from '@shared/schemas/week-mail.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { Conflict, NotFound } from '../../http/errors.js';
-import { newBatchId, queueMail, type MailQueue } from '../mail/mail.service.js';
+import { mailKey, newBatchId, queueMail, requestBatchId, type MailQueue } from '../mail/mail.service.js';
 import { weekPlanMail } from '../mail/mail-templates.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { presentOutbox } from '../mail/outbox.service.js';
@@ -21,17 +20,14 @@ import { weekTitle } from '@shared/domain/week-board.js';
 /** Seconds in which the same send (same week version, note and clients) without a requestId counts as a repeat. */
 export const REPEAT_WINDOW_SECONDS = 15;
 
-const hex = (s: string) => createHash('sha256').update(s).digest('hex');
-
 /** A UUID-shaped id derived from the request (same workspace, week and requestId → same batch). */
 export function batchIdFor(workspaceId: number, weekId: number, requestId: string): string {
-  const h = hex(`week-send|${workspaceId}|${weekId}|${requestId}`);
-  return `${h.slice(0, 8)}-${h.slice(8, 12)}-5${h.slice(13, 16)}-a${h.slice(17, 20)}-${h.slice(20, 32)}`;
+  return requestBatchId(`week-send|${workspaceId}|${weekId}|${requestId}`);
 }
 
 /** One e-mail per (week, publication version, client, batch): queueing it twice queues nothing. */
 export function deliveryKey(weekId: number, version: number, clientId: number, batchId: string): string {
-  return `wp-${hex(`${weekId}|${version}|${clientId}|${batchId}`).slice(0, 48)}`;
+  return mailKey('wp', `${weekId}|${version}|${clientId}|${batchId}`);
 }
 
 interface Recipient {
