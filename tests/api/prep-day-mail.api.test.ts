@@ -21,7 +21,7 @@ const pdfText = async (buffer: Buffer) => {
   return text;
 };
 
-type OutboxRow = { to: string; kind: string; subject: string; week_id: number; attachments: { pdf: string; payload: Record<string, unknown> }[] };
+type OutboxRow = { to: string; kind: string; subject: string; text: string; week_id: number; attachments: { pdf: string; payload: Record<string, unknown> }[] };
 
 describe("e-mailing a prep day's papers to the kitchen", () => {
   it('queues one e-mail per assistant with the shopping list and the bake run, rendered for that reader; a repeated request queues nothing', async () => {
@@ -45,9 +45,11 @@ describe("e-mailing a prep day's papers to the kitchen", () => {
     const again = await coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04', requestId }).expect(200);
     expect(again.body).toMatchObject({ queued: 0, repeated: true });
 
-    const rows = await sql<OutboxRow>("select \"to\", kind, subject, week_id, attachments from outbox where workspace_id = $1 and kind = 'prep-day' order by id", [coach.workspaceId]);
+    const rows = await sql<OutboxRow>("select \"to\", kind, subject, text, week_id, attachments from outbox where workspace_id = $1 and kind = 'prep-day' order by id", [coach.workspaceId]);
     expect(rows.map((r) => r.to)).toEqual([kit.email, lee.email]);
     expect(rows[0]).toMatchObject({ week_id: w.weekId, subject: expect.stringContaining('prep day Sun 4 Jan, shopping list and bake run') });
+    // One prep day: the link opens the week's list.
+    expect(rows[0].text).toContain(`Open the shopping list: http://127.0.0.1:8080/weeks/${w.weekId}/shopping\n`);
     expect(rows[0].attachments.map((a) => a.pdf)).toEqual(['prep-day-shopping', 'prep-day-bake-run']);
 
     // What the mail job attaches when each e-mail leaves.

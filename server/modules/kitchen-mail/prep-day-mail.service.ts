@@ -1,6 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { shortDate, type IsoDate } from '@shared/domain/iso-date.js';
-import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
+import { prepDatesOf, tripDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import type { PrepDayMailResultDto, SendPrepDayInput } from '@shared/schemas/prep-day-mail.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { Conflict, ValidationError } from '../../http/errors.js';
@@ -44,7 +44,9 @@ export async function sendPrepDay(
     const answer = (queued: number) => ({ queued, recipients: recipients.map(({ name, email }) => ({ name, email })), repeated: queued === 0 });
     if ((await tx.count(Outbox, { workspace: actor.workspaceId, batchId })) > 0) return answer(0);
     const ws = await tx.findOneOrFail(Workspace, actor.workspaceId, { fields: ['name'] });
-    const link = `${publicUrl.replace(/\/$/, '')}/shopping`;
+    // The list the papers print: the trip's in a week with two prep days, else the week's.
+    const trip = tripDatesOf(week).includes(input.prepDate) ? `?for=${input.prepDate}` : '';
+    const link = `${publicUrl.replace(/\/$/, '')}/weeks/${week.id}/shopping${trip}`;
     for (const r of recipients) {
       const body = prepDayMail({ businessName: ws.name, name: r.name, prepLabel: shortDate(input.prepDate), weekName: weekTitle(week), note, link });
       const payload: PrepDayPayload = { workspaceId: actor.workspaceId, weekId: week.id, prepDate: input.prepDate, userId: r.userId };
