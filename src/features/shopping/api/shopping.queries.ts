@@ -13,7 +13,7 @@ import { pantryKeys, shoppingKeys } from './shopping.keys';
 export const shoppingListQuery = (weekId: number, prepDate: string | null = null) =>
   queryOptions({
     queryKey: shoppingKeys.list(weekId, prepDate),
-    queryFn: () => api.get<ShoppingListDto>(`/weeks/${weekId}/shopping${qs({ prepDate: prepDate ?? undefined })}`),
+    queryFn: () => api.get<ShoppingListDto>(`/weeks/${weekId}/shopping${qs({ prepDate })}`),
     refetchInterval: 15_000,
   });
 
@@ -38,8 +38,8 @@ export const pantryIngredientSearchQuery = (q: string) =>
   });
 
 /** Export addresses (plain links: the browser downloads them with the session cookie). */
-export const shoppingCsvUrl = (weekId: number, prepDate: string | null = null) => `/api/weeks/${weekId}/shopping.csv${qs({ prepDate: prepDate ?? undefined })}`;
-export const shoppingPdfUrl = (weekId: number, prepDate: string | null = null) => `/api/weeks/${weekId}/shopping.pdf${qs({ prepDate: prepDate ?? undefined })}`;
+export const shoppingCsvUrl = (weekId: number, prepDate: string | null = null) => `/api/weeks/${weekId}/shopping.csv${qs({ prepDate })}`;
+export const shoppingPdfUrl = (weekId: number, prepDate: string | null = null) => `/api/weeks/${weekId}/shopping.pdf${qs({ prepDate })}`;
 
 /** What trays × counts ask the shop for, after the pantry (a read: nothing is written). */
 export const shoppingPreviewQuery = (trays: { trayId: number; count: number }[]) =>
