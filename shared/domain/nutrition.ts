@@ -211,14 +211,27 @@ function factsText(v: NutrientsPer100g): string {
 /** The additive nutrients in `grams` of an ingredient (massG = grams). */
 export function nutrientsForGrams(per100g: NutrientsPer100g, grams: Num): NutrientSums {
   const g = grams instanceof Decimal ? grams : new Decimal(grams);
-  const key = `${g.toString()}|${factsText(per100g)}`;
-  let sums = PRODUCTS.get(key);
+  // A frozen row (the library rows a request shares) keys its products by grams alone; any other by its text too.
+  const byRow = Object.isFrozen(per100g) ? productsByRow(per100g) : undefined;
+  const key = byRow ? g.toString() : `${g.toString()}|${factsText(per100g)}`;
+  const cache = byRow ?? PRODUCTS;
+  let sums = cache.get(key);
   if (sums === undefined) {
-    sums = Object.freeze(productsOf(per100g, g));
-    if (PRODUCTS.size >= PARSED_LIMIT) PRODUCTS.clear();
-    PRODUCTS.set(key, sums);
+    sums = productsOf(per100g, g);
+    Object.defineProperty(sums, SCALED, { value: scaledOf(sums), enumerable: false });
+    Object.freeze(sums);
+    if (cache.size >= PARSED_LIMIT) cache.clear();
+    cache.set(key, sums);
   }
   return sums;
+}
+
+/** Products of one frozen per-100 g row, by grams (the row's text would give the same products: it cannot change). */
+const FROZEN_ROW_PRODUCTS = new WeakMap<NutrientsPer100g, Map<string, NutrientSums>>();
+function productsByRow(per100g: NutrientsPer100g): Map<string, NutrientSums> {
+  let m = FROZEN_ROW_PRODUCTS.get(per100g);
+  if (m === undefined) FROZEN_ROW_PRODUCTS.set(per100g, (m = new Map()));
+  return m;
 }
 
 function productsOf(per100g: NutrientsPer100g, g: Decimal): NutrientSums {
@@ -247,11 +260,60 @@ export function addSums(a: NutrientSums, b: NutrientSums): NutrientSums {
   return out;
 }
 
-/** `into += b` field by field (for a running total the caller owns; the shared zero is never changed). */
-function addInto(into: NutrientSums, b: NutrientSums): void {
+/**
+ * Exact sums of many products without a Decimal addition per term. A product (nutrientsForGrams) also carries each
+ * field as a whole number of 10^-8 units when it has at most 8 decimal places and is small enough (SCALED_TERM_MAX):
+ * such whole numbers add exactly in floating point while the running total stays within 2^53, so the sum is the
+ * exact decimal sum, the same Decimal a chain of `plus` gives (every such sum has at most 16 significant digits,
+ * inside decimal.js's 20). Terms without it (more places, larger values, sums not from nutrientsForGrams) are added
+ * as Decimals; a running total past SCALED_FLUSH moves into the Decimal part first.
+ */
+const SCALED = Symbol('trayline.scaledSums');
+const SCALE_PLACES = 8;
+const SCALE = new Decimal(10).pow(SCALE_PLACES);
+const SCALED_TERM_MAX = Math.floor(Number.MAX_SAFE_INTEGER / 4096);
+const SCALED_FLUSH = Math.floor(Number.MAX_SAFE_INTEGER / 2);
+type Scaled = Readonly<Record<keyof NutrientSums, number>>;
+
+/** Each field as a whole number of 10^-8, or NaN where it has more places or is too large to add exactly. */
+function scaledOf(s: NutrientSums): Scaled {
+  const out = {} as Record<keyof NutrientSums, number>;
   for (const k of SUM_KEYS) {
-    const v = b[k];
-    if (v !== ZERO) into[k] = into[k] === ZERO ? v : into[k].plus(v);
+    const v = s[k];
+    out[k] = v === ZERO ? 0 : v.decimalPlaces() <= SCALE_PLACES && v.abs().times(SCALE).lte(SCALED_TERM_MAX) ? v.times(SCALE).toNumber() : NaN;
+  }
+  return Object.freeze(out);
+}
+
+/** A running total: whole 10^-8 units per field (exact) plus a Decimal part for the terms that cannot be scaled. */
+class ExactTotal {
+  private readonly units = new Float64Array(SUM_KEYS.length);
+  private readonly rest: NutrientSums = zeroSums();
+
+  add(b: NutrientSums): void {
+    const scaled = (b as NutrientSums & { [SCALED]?: Scaled })[SCALED];
+    for (let i = 0; i < SUM_KEYS.length; i++) {
+      const k = SUM_KEYS[i];
+      const u = scaled ? scaled[k] : NaN;
+      if (u === u) {
+        if (u === 0) continue;
+        if (Math.abs(this.units[i]) > SCALED_FLUSH) this.flush(i);
+        this.units[i] += u;
+      } else if (b[k] !== ZERO) {
+        this.rest[k] = this.rest[k] === ZERO ? b[k] : this.rest[k].plus(b[k]);
+      }
+    }
+  }
+
+  private flush(i: number): void {
+    const k = SUM_KEYS[i];
+    this.rest[k] = this.rest[k].plus(new Decimal(this.units[i]).div(SCALE));
+    this.units[i] = 0;
+  }
+
+  sums(): NutrientSums {
+    for (let i = 0; i < SUM_KEYS.length; i++) if (this.units[i] !== 0) this.flush(i);
+    return { ...this.rest };
   }
 }
 
@@ -325,13 +387,14 @@ function checkOptions(options: RecipeOptions): { portions: number; yieldFactor: 
  */
 export function computeRecipeExact(lines: readonly RecipeLine[], options: RecipeOptions = {}): RecipeExact {
   const { portions, yieldFactor, rule } = checkOptions(options);
-  const raw = zeroSums();
+  const total = new ExactTotal();
   const results = lines.map((line) => {
     const grams = toGrams(line.amount, line.unit, line.ingredient);
     const nutrients = nutrientsForGrams(line.ingredient.per100g, grams);
-    addInto(raw, nutrients);
+    total.add(nutrients);
     return { ingredient: line.ingredient.name, grams, nutrients };
   });
+  const raw = total.sums();
   const cooked: NutrientSums = { ...raw, massG: raw.massG.times(yieldFactor) };
   const perPortion = scaleSums(cooked, new Decimal(1).div(portions));
   return {

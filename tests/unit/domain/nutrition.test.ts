@@ -267,6 +267,50 @@ describe('recipe totals and portions', () => {
   });
 });
 
+describe('recipe totals are exact decimal sums', () => {
+  // The reference: every line's product worked out here from the inputs' text with decimal.js (value × grams ÷ 100),
+  // added with decimal.js `plus`. The totals must equal it digit for digit, whether a line has few decimal places
+  // (added as whole 10^-8 units), many (added as Decimals) or is very large.
+  const value = fc.stringMatching(/^(0|[1-9]\d{0,3})(\.\d{1,4})?$/);
+  const per100g = fc.record({ kcal: value, fatG: value, proteinG: value, carbsG: value, sodiumMg: value });
+  const grams = fc.oneof(
+    fc.stringMatching(/^[1-9]\d{0,3}(\.\d{1,2})?$/),
+    fc.stringMatching(/^[1-9]\d{0,3}\.\d{5,7}$/),
+    fc.stringMatching(/^[1-9]\d{7,9}$/),
+  );
+
+  it('property: totals equal the decimal.js sum of the lines, for 1 to 120 lines (fast-check)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.record({ facts: per100g, grams, frozen: fc.boolean() }), { minLength: 1, maxLength: 120 }), (ls) => {
+        const lines: RecipeLine[] = ls.map((l) => ({
+          ingredient: { name: 'food', per100g: l.frozen ? Object.freeze({ ...l.facts }) : l.facts },
+          amount: l.grams,
+          unit: 'g',
+        }));
+        const r = computeRecipeExact(lines);
+        for (const k of ['kcal', 'fatG', 'proteinG', 'carbsG', 'sodiumMg', 'massG'] as const) {
+          const want = ls.reduce(
+            (sum, l) => sum.plus(k === 'massG' ? new Decimal(l.grams) : new Decimal(l.facts[k]).times(l.grams).div(100)),
+            new Decimal(0),
+          );
+          expect(`${k} ${r.total[k].toString()}`).toBe(`${k} ${want.toString()}`);
+        }
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('a running total past 2^53 units of 10^-8 stays exact (worked example: 10 000 lines of 9 999.999 999 99 g)', () => {
+    const ingredient: NutritionIngredient = { name: 'heavy', per100g: Object.freeze({ kcal: '900', fatG: '100', proteinG: '0', carbsG: '0' }) };
+    const r = computeRecipeExact(Array.from({ length: 10_000 }, () => ({ ingredient, amount: '9999.99999999', unit: 'g' as const })));
+    // 10 000 × 9 999.999 999 99 g = 99 999 999.999 9 g (9 999 999 999 990 000 units of 10^-8: past 2^53, where a
+    // double no longer holds every whole number); × 9 kcal/g = 899 999 999.999 1 kcal (worked by hand).
+    expect(r.total.massG.toString()).toBe('99999999.9999');
+    expect(r.total.fatG.toString()).toBe('99999999.9999');
+    expect(r.total.kcal.toString()).toBe('899999999.9991');
+  });
+});
+
 describe('products kept by their inputs (nutrientsForGrams)', () => {
   // Each product is value × grams ÷ 100, worked out here with decimal.js from the inputs' text.
   const expected = (per100g: Record<string, string>, grams: string) =>
