@@ -188,6 +188,31 @@ describe('shopping trips: a week with two prep days has a list for each', () => 
     expect(await sql('select trip from shopping_purchase where week_id = $1', [w.weekId])).toEqual([{ trip: 1 }]);
   });
 
+  it("keeps the second prep day once a prep day's list is bought (409 saying what to do), and moves it freely", async () => {
+    const coach = await coachWorkspace(app);
+    const w = await twoTripWeek(coach);
+    await coach.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).send({ prepDate: '2026-01-04' }).expect(200);
+    const version = async () => (await coach.agent.get(`/api/weeks/${w.weekId}`).expect(200)).body.week.version;
+    const before = await version();
+    const refused = await coach.agent.patch(`/api/weeks/${w.weekId}`).send({ version: before, secondPrepDate: null }).expect(409);
+    expect(refused.body.detail).toMatch(/^The shopping list for prep Sun 4 Jan was marked bought, so this week keeps its two prep days\./);
+    expect(await sql('select second_prep_date::text as d from week where id = $1', [w.weekId])).toEqual([{ d: '2026-01-07' }]);
+    expect(await version()).toBe(before);
+    // Moving the second prep day keeps its list (trips go by number): allowed.
+    const moved = await coach.agent.patch(`/api/weeks/${w.weekId}`).send({ version: before, secondPrepDate: '2026-01-06' }).expect(200);
+    expect(moved.body.prepDates).toEqual(['2026-01-04', '2026-01-06']);
+    // A week that lost its second prep day before this was refused: "bought" on its whole week says how to go on.
+    await sql('update week set second_prep_date = null where id = $1', [w.weekId]);
+    const stuck = await coach.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).send({}).expect(409);
+    expect(stuck.body.detail).toBe(
+      "A prep day's list of this week was marked bought while it had two prep days: add the second prep day back to mark the rest bought",
+    );
+    // A week whose prep-day lists were never bought drops its second prep day as before.
+    const other = await twoTripWeek(coach);
+    const v = (await coach.agent.get(`/api/weeks/${other.weekId}`).expect(200)).body.week.version;
+    await coach.agent.patch(`/api/weeks/${other.weekId}`).send({ version: v, secondPrepDate: null }).expect(200);
+  });
+
   it('keeps check marks per list, and answers 400 naming prepDate for a day that is not a trip', async () => {
     const coach = await coachWorkspace(app);
     const assistant = await member(app, coach, 'assistant');

@@ -196,9 +196,12 @@ export async function markBought(em: EntityManager, actor: Actor, weekId: number
   const other = await em.findOne(ShoppingPurchase, { week: week.id, trip: trip === 0 ? { $ne: 0 } : 0 });
   if (other) {
     throw new Conflict(
-      trip === 0
-        ? "A prep day's list of this week was marked bought already: mark the other prep day's list bought instead of the whole week"
-        : "The whole week's list was marked bought already: the pantry has it",
+      trip !== 0
+        ? "The whole week's list was marked bought already: the pantry has it"
+        : tripDatesOf(week).length
+          ? "A prep day's list of this week was marked bought already: mark the other prep day's list bought instead of the whole week"
+          : // Only in weeks that lost their second prep day before that was refused (updateWeek keeps it now).
+            "A prep day's list of this week was marked bought while it had two prep days: add the second prep day back to mark the rest bought",
     );
   }
   const computed = await computeForWeek(em, actor, week, trip);

@@ -1,7 +1,7 @@
 import { LockMode } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
-import { addDays, compareIsoDates, daysBetween, type IsoDate } from '@shared/domain/iso-date.js';
+import { addDays, compareIsoDates, daysBetween, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, coveringBatches } from '@shared/domain/week-board.js';
 import type { GlanceDto, SetupCountsDto, WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
 import { preparedRows } from '../../db/prepared.js';
@@ -16,7 +16,7 @@ import type {
   updateWeekSchema,
 } from '@shared/schemas/weeks.schema.js';
 import type { Actor } from '../../http/authz.js';
-import { StaleEdit, ValidationError } from '../../http/errors.js';
+import { Conflict, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Tray } from '../trays/tray.entity.js';
 import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell } from './week.entity.js';
 import {
@@ -134,6 +134,7 @@ export async function updateWeek(em: EntityManager, actor: Actor, id: number, v:
   const prepDate = v.prepDate ?? week.prepDate;
   const second = v.secondPrepDate === undefined ? week.secondPrepDate : v.secondPrepDate;
   checkPrepDates(week.startDate, prepDate, second);
+  if (week.secondPrepDate && !second) await keepTripsBought(em, week);
   return commitWeekEdit(em, actor, week, async (tx, w) => {
     // Counts and cell choices follow their prep date when it moves.
     const moves: [IsoDate | null | undefined, IsoDate | null][] = [
@@ -154,6 +155,24 @@ export async function updateWeek(em: EntityManager, actor: Actor, id: number, v:
     w.prepDate = prepDate;
     w.secondPrepDate = second ?? null;
   });
+}
+
+/**
+ * A week with two prep days has a shopping list per prep day; once one of them is marked bought, its food is in the
+ * kitchen and its pantry change recorded. Dropping the second prep day would fold both lists into one whole-week list
+ * that no longer knows what was bought: refused (409), saying what to do instead.
+ */
+async function keepTripsBought(em: EntityManager, week: IWeek): Promise<void> {
+  const bought = await em.getConnection().execute<{ trip: number }[]>(
+    'select trip from shopping_purchase where week_id = ? and trip > 0 order by trip',
+    [week.id],
+  );
+  if (!bought.length) return;
+  const dates = [week.prepDate, week.secondPrepDate];
+  const which = bought.map((b) => `prep ${shortDate(dates[b.trip - 1] ?? week.prepDate)}`).join(' and ');
+  throw new Conflict(
+    `The shopping list for ${which} was marked bought, so this week keeps its two prep days. To bake everything on the first, set the second prep day's tray counts to 0 and have its plates take their portions from the first.`,
+  );
 }
 
 export async function deleteWeek(em: EntityManager, actor: Actor, id: number): Promise<void> {

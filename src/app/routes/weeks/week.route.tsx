@@ -11,10 +11,11 @@ import { useCopyDay, useCoverTrays, useDeleteWeek, usePublishWeek, usePutCells, 
 import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/weeks/components/board-grid';
 import { InventoryPanel } from '@/features/weeks/components/inventory-panel';
 import { PublishedVersions } from '@/features/weeks/components/published-versions';
+import { PrepDates } from '@/features/weeks/components/prep-dates';
 import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
 import { PrepDayMailPanel } from '@/features/week-mail/components/prep-day-mail-panel';
 import { Button } from '@/components/ui/button';
-import { DayOptions, SelectField, TextField } from '@/components/ui/field';
+import { DayOptions, SelectField } from '@/components/ui/field';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { errorMessage, isApiError } from '@/lib/problem';
@@ -236,8 +237,12 @@ export function Component() {
 
       <Card>
         <h2 className="mb-3 text-xl">Prep days</h2>
-        <PrepDates board={board} busy={update.isPending} onSave={(prepDate, secondPrepDate) => {
-          const run = (version: number) => update.mutate({ version, prepDate, secondPrepDate }, { onError: onFail({ kind: 'other', label: 'change the prep days', run }) });
+        <PrepDates board={board} busy={update.isPending} error={update.error} onSave={(prepDate, secondPrepDate) => {
+          const run = (version: number) =>
+            update.mutate({ version, prepDate, secondPrepDate }, {
+              // A stale version goes to the merge prompt; any other refusal is shown in this card, beside its fields.
+              onError: (e) => isApiError(e, 409) && e.problem.code === 'stale_version' && onFail({ kind: 'other', label: 'change the prep days', run })(e),
+            });
           withVersion('prep', run);
         }} />
       </Card>
@@ -283,25 +288,5 @@ function DeleteWeek({ board }: { board: BoardDto }) {
         </div>
       )}
     </Card>
-  );
-}
-
-function PrepDates({ board, busy, onSave }: { board: BoardDto; busy: boolean; onSave: (prep: string, second: string | null) => void }) {
-  const [prep, setPrep] = useState(board.week.prepDate);
-  const [second, setSecond] = useState(board.week.secondPrepDate ?? '');
-  return (
-    <form
-      className="grid items-end gap-3 sm:grid-cols-[1fr_1fr_auto]"
-      onSubmit={(e) => {
-        e.preventDefault();
-        onSave(prep, second || null);
-      }}
-    >
-      <TextField label="Prep day" type="date" value={prep} onChange={(e) => setPrep(e.target.value)} />
-      <TextField label="Second prep day (optional)" type="date" value={second} onChange={(e) => setSecond(e.target.value)} hint="Fresher portions for the end of the week" />
-      <Button type="submit" variant="secondary" busy={busy}>
-        Save prep days
-      </Button>
-    </form>
   );
 }

@@ -1,0 +1,47 @@
+import { useState } from 'react';
+import type { BoardDto } from '@shared/schemas/weeks.schema';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/states';
+import { errorMessage, isApiError } from '@/lib/problem';
+
+/**
+ * The week's prep days. `error` is the last save's failure: a field's 400 shows under that field, any other refusal
+ * (such as a prep day's list already bought) in the card; a stale version is the board's merge prompt, not shown here.
+ */
+export function PrepDates({ board, busy, error, onSave }: { board: BoardDto; busy: boolean; error: unknown; onSave: (prep: string, second: string | null) => void }) {
+  const [prep, setPrep] = useState(board.week.prepDate);
+  const [second, setSecond] = useState(board.week.secondPrepDate ?? '');
+  const stale = isApiError(error, 409) && error.problem.code === 'stale_version';
+  const fields = isApiError(error, 400) ? error.fieldErrors : {};
+  const refusal = error && !stale && !fields.prepDate && !fields.secondPrepDate ? (isApiError(error) ? error.message : errorMessage(error)) : null;
+  return (
+    <form
+      className="grid items-end gap-3 sm:grid-cols-[1fr_1fr_auto]"
+      onSubmit={(e) => {
+        e.preventDefault();
+        onSave(prep, second || null);
+      }}
+    >
+      <TextField label="Prep day" type="date" value={prep} error={fields.prepDate?.[0]} onChange={(e) => setPrep(e.target.value)} />
+      <TextField
+        label="Second prep day (optional)"
+        type="date"
+        value={second}
+        error={fields.secondPrepDate?.[0]}
+        onChange={(e) => setSecond(e.target.value)}
+        hint="Fresher portions for the end of the week"
+      />
+      <Button type="submit" variant="secondary" busy={busy}>
+        Save prep days
+      </Button>
+      {refusal && (
+        <div className="sm:col-span-3">
+          <Notice tone="block" title="Prep days not changed">
+            {refusal}
+          </Notice>
+        </div>
+      )}
+    </form>
+  );
+}
