@@ -9,7 +9,7 @@ import { boardQuery } from '@/features/weeks/api/weeks.queries';
 import { weekKeys } from '@/features/weeks/api/weeks.keys';
 import { useCopyDay, useCoverTrays, useDeleteWeek, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek } from '@/features/weeks/api/use-week-mutations';
 import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/weeks/components/board-grid';
-import { InventoryPanel } from '@/features/weeks/components/inventory-panel';
+import { InventoryPanel, portionSummary } from '@/features/weeks/components/inventory-panel';
 import { PublishedVersions } from '@/features/weeks/components/published-versions';
 import { PrepDates } from '@/features/weeks/components/prep-dates';
 import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
@@ -93,7 +93,7 @@ export function Component() {
 
   const blocks = warnings.filter((w) => w.severity === 'block');
   const warns = warnings.filter((w) => w.severity === 'warn');
-  const short = board.inventory.reduce((s, t) => s + t.short, 0);
+  const portions = portionSummary(board);
 
   return (
     <div className="flex flex-col gap-5">
@@ -158,7 +158,9 @@ export function Component() {
               ))}
           {warns.length > 3 && <p>…and {warns.length - 3} more, flagged on the board.</p>}
         </Notice>
-        <Notice tone={short ? 'warn' : 'info'} title={short ? `${counted(short, 'portion')} short` : 'Every portion is baked'} />
+        <Notice tone={portions.tone} title={portions.title}>
+          {portions.detail}
+        </Notice>
       </div>
 
       {board.clients.length === 0 || board.plates.length === 0 ? (

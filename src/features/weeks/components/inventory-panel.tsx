@@ -2,6 +2,40 @@ import { useState } from 'react';
 import type { BoardDto, PutTraysInput } from '@shared/schemas/weeks.schema';
 import { Button } from '@/components/ui/button';
 import { dayLabel } from '@/lib/dates';
+import { counted } from '@/lib/words';
+
+/**
+ * The board's one-line portion count: what is short, else whether the trays bake more than the board needs. A tray
+ * count above the trays that cover its prep day's need bakes whole trays nobody eats (a copied week, plates moved
+ * away); the spare of the last tray is the cut plan's and is not counted as extra.
+ */
+export function portionSummary(board: Pick<BoardDto, 'inventory' | 'trays'>): { tone: 'warn' | 'info'; title: string; detail?: string } {
+  const short = board.inventory.reduce((s, t) => s + t.short, 0);
+  if (short) return { tone: 'warn', title: `${counted(short, 'portion')} short` };
+  const counts = new Map(board.trays.map((t) => [`${t.trayId}|${t.prepDate}`, t.trayCount]));
+  let extraTrays = 0;
+  for (const t of board.inventory) {
+    for (const p of t.byPrepDate) {
+      if (p.traysToCover === null) continue;
+      extraTrays += Math.max(0, (counts.get(`${t.trayId}|${p.prepDate}`) ?? 0) - p.traysToCover);
+    }
+  }
+  const needed = board.inventory.reduce((s, t) => s + t.needed, 0);
+  if (!needed) {
+    return extraTrays
+      ? { tone: 'warn', title: `${counted(extraTrays, 'tray')} to bake, no plate uses them`, detail: 'Place plates on the board, or set the tray counts to 0.' }
+      : { tone: 'info', title: 'No portions needed yet', detail: 'Place plates on the board to count portions.' };
+  }
+  const spare = board.inventory.reduce((s, t) => s + t.spare, 0);
+  if (extraTrays) {
+    return {
+      tone: 'warn',
+      title: `Every portion is baked, with ${counted(extraTrays, 'tray')} more than the board needs`,
+      detail: `${counted(spare, 'spare portion')} in all. "Set tray counts to cover the need" bakes only what the plates use.`,
+    };
+  }
+  return { tone: 'info', title: 'Every portion is baked', detail: spare ? `${counted(spare, 'spare portion')} from cutting whole trays.` : undefined };
+}
 
 /** Portions needed (cells × household) against portions baked (tray counts × cut plan), per tray and prep day. */
 export function InventoryPanel({ board, busy, onCover, onSave }: { board: BoardDto; busy: boolean; onCover: () => void; onSave: (trays: PutTraysInput['trays']) => void }) {
