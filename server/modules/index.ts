@@ -7,6 +7,7 @@ import type { MailQueue } from './mail/mail.service.js';
 import { mailRoutes } from './mail/mail.routes.js';
 import { ingredientRoutes } from './ingredients/ingredient.routes.js';
 import { workspaceSettingsRoutes } from './workspaces/workspace-settings.routes.js';
+import { memberRoutes } from './workspaces/members.routes.js';
 import { clientRoutes } from './clients/client.routes.js';
 import { assemblyRoutes } from './assemblies/assembly.routes.js';
 import { weekRoutes } from './weeks/week.routes.js';
@@ -26,5 +27,5 @@ export interface ModuleDeps {
 }
 
 export function apiModules(deps: ModuleDeps): Router[] {
-  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), shoppingRoutes({ publicUrl: deps.env.PUBLIC_URL }), weekMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), prepDayMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), pantryRoutes(), bakeRunRoutes(), mailRoutes({ mail: deps.mail, env: deps.env })];
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), shoppingRoutes({ publicUrl: deps.env.PUBLIC_URL }), weekMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), prepDayMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), memberRoutes(), pantryRoutes(), bakeRunRoutes(), mailRoutes({ mail: deps.mail, env: deps.env })];
 }

@@ -67,6 +67,22 @@ export interface MeDto {
   tempUnit: (typeof TEMP_UNITS)[number];
 }
 
+/** Someone with access to the workspace (the Team page; the prep-day papers choose assistants from these). */
+export interface MemberDto {
+  /** The membership's id (DELETE /api/members/:id removes this access). */
+  id: number;
+  userId: number;
+  name: string;
+  email: string;
+  role: Role;
+  /** For a client member: their client profile and its name. */
+  clientId: number | null;
+  clientName: string | null;
+  joinedAt: string;
+  /** The person asking. */
+  you: boolean;
+}
+
 export interface InvitationDto {
   id: number;
   email: string;

@@ -30,3 +30,6 @@ export function filterByText<T>(items: readonly T[], query: string, texts: (item
     return words.every((w) => hay.includes(w));
   });
 }
+
+/** Each role as people read it on screens. */
+export const ROLE_WORDS = { coach: 'Coach', assistant: 'Kitchen assistant', client: 'Client' } as const;

@@ -1,6 +1,6 @@
 import type { Express } from 'express';
 import type { Access } from '@server/http/authz.js';
-import { clientInput, ingredientInput, makeAssembly, makeIngredient, makeTray, makeWeek, trayInput, type Member } from './factories.js';
+import { clientInput, ingredientInput, makeAssembly, makeIngredient, makeTray, makeWeek, member, trayInput, type Member } from './factories.js';
 import { fakeCaughtMailFor } from './mail-support.js';
 
 /**
@@ -70,6 +70,17 @@ export const MATRIX: Record<string, MatrixRow> = {
     },
     // A DELETE that succeeds for the coach would make later calls 404; the coach runs last among allowed roles.
     path: (ctx) => `/api/invitations/${ctx.ids.invitation}`,
+    crossWorkspace: true,
+  }),
+  // The team (who has access; ending someone's access)
+  'GET /api/members': R(['coach']),
+  'DELETE /api/members/:id': R(['coach'], {
+    prepare: async (ctx) => {
+      const extra = await member(ctx.app, ctx.coachA, 'assistant');
+      const list = await ctx.coachA.agent.get('/api/members');
+      ctx.ids.member = (list.body as { id: number; userId: number }[]).find((m) => m.userId === extra.userId)!.id;
+    },
+    path: (ctx) => `/api/members/${ctx.ids.member}`,
     crossWorkspace: true,
   }),
   'GET /api/invitations/:token': R('public', { path: () => '/api/invitations/unknown-token-unknown-token' }),

@@ -19,7 +19,7 @@ import { PgRateLimitStore } from '../../http/rate-limit-store.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import * as auth from './auth.service.js';
-import { authenticateLocal, signIn, signOut } from './passport.js';
+import { NO_WORKSPACE, authenticateLocal, signIn, signOut } from './passport.js';
 import type { IInvitation } from './user.entity.js';
 import type { MailQueue } from '../mail/mail.service.js';
 
@@ -63,7 +63,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
     validated({ body: loginSchema }, async ({ body }, req, res) => {
       req.body = body; // normalised e-mail for passport-local
       const { actor, message } = await authenticateLocal(req, res, () => undefined);
-      if (!actor) throw message === 'This account has no workspace' ? new Forbidden(message) : new BadCredentials();
+      if (!actor) throw message === NO_WORKSPACE ? new Forbidden(message) : new BadCredentials();
       await signIn(req, actor);
       return auth.me(emOf(req), actor);
     }),

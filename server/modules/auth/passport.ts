@@ -15,6 +15,9 @@ declare global {
   }
 }
 
+/** Sign-in refusal for right credentials without any workspace (removed from their team, say). */
+export const NO_WORKSPACE = 'This account has no access to a workspace any more: ask your coach for a new invitation';
+
 let configured = false;
 
 /**
@@ -30,7 +33,7 @@ export function configurePassport() {
       checkCredentials(em, email, password)
         .then(async (userId) => {
           const actor = await loadActor(em, userId);
-          done(null, actor ?? false, actor ? undefined : { message: 'This account has no workspace' });
+          done(null, actor ?? false, actor ? undefined : { message: NO_WORKSPACE });
         })
         .catch((err) => (err?.code === 'bad_credentials' ? done(null, false, { message: err.message }) : done(err)));
     }),

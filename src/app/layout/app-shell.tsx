@@ -5,8 +5,8 @@ import { useLogout } from '@/features/auth/api/use-auth-mutations';
 import { PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { NAV, NAV_GROUPS, type NavItem } from '../nav';
+import { ROLE_WORDS } from '@/lib/words';
 
-const ROLE_WORDS = { coach: 'Coach', assistant: 'Kitchen assistant', client: 'Client' } as const;
 
 /**
  * The signed-in frame: a grouped side rail on wide screens, a top bar with a drawer on phones.

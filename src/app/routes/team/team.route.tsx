@@ -3,15 +3,18 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import { createInvitationSchema, type CreateInvitationInput } from '@shared/schemas/auth.schema';
-import { invitationsQuery } from '@/features/auth/api/auth.queries';
 import { useCreateInvitation, useRevokeInvitation } from '@/features/auth/api/use-auth-mutations';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
+import { ROLE_WORDS } from '@/lib/words';
+import { invitationsQuery, meQuery } from '@/features/auth/api/auth.queries';
+import { TeamMembers } from '@/features/auth/components/team-members';
 
 export function Component() {
   const list = useQuery(invitationsQuery());
+  const me = useQuery(meQuery());
   const create = useCreateInvitation();
   const revoke = useRevokeInvitation();
   const [link, setLink] = useState<string | null>(null);
@@ -33,6 +36,10 @@ export function Component() {
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title="Team & invitations" lead="Invite your kitchen assistant. Clients are invited from their profile." />
+      <Card>
+        <h2 className="mb-3 text-xl">People with access</h2>
+        <TeamMembers workspaceName={me.data?.workspaceName ?? 'this workspace'} />
+      </Card>
       <Card>
         <h2 className="mb-3 text-xl">Invite someone</h2>
         <form onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-[2fr_1fr_auto] sm:items-end">
@@ -77,7 +84,7 @@ export function Component() {
                 {data.map((inv) => (
                   <tr key={inv.id} className="border-b border-line">
                     <td className="py-2">{inv.email}</td>
-                    <td>{inv.role}</td>
+                    <td>{ROLE_WORDS[inv.role]}</td>
                     <td>{inv.acceptedAt ? 'Joined' : new Date(inv.expiresAt) < new Date() ? 'Expired' : 'Waiting'}</td>
                     <td className="text-right">
                       {!inv.acceptedAt && (

@@ -2,5 +2,6 @@ export const authKeys = {
   all: ['auth'] as const,
   me: () => [...authKeys.all, 'me'] as const,
   invitations: () => [...authKeys.all, 'invitations'] as const,
+  members: () => [...authKeys.all, 'members'] as const,
   invitation: (token: string) => [...authKeys.all, 'invitation', token] as const,
 };

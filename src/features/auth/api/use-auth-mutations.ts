@@ -90,3 +90,12 @@ export function useRevokeInvitation() {
     onSuccess: () => qc.invalidateQueries({ queryKey: authKeys.invitations() }),
   });
 }
+
+/** Ends someone's access to the workspace; the list of people (and invitations, which show who joined) read again. */
+export function useRemoveMember() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => api.delete<void>(`/members/${id}`),
+    onSuccess: () => qc.invalidateQueries({ queryKey: authKeys.members() }),
+  });
+}

@@ -1,0 +1,26 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { actorOf, allow } from '../../http/authz.js';
+import { emOf } from '../../http/request-context.js';
+import { validated } from '../../http/validate.js';
+import { listMembers, removeMember } from './members.service.js';
+
+const memberIdParams = z.object({ id: z.coerce.number().int().positive() });
+
+/** The coach's team: who has access to the workspace, and ending someone's access. */
+export function memberRoutes() {
+  const r = Router();
+  r.get(
+    '/members',
+    allow('coach'),
+    validated({}, (_i, req) => listMembers(emOf(req), actorOf(req))),
+  );
+  r.delete(
+    '/members/:id',
+    allow('coach'),
+    validated({ params: memberIdParams }, async ({ params }, req) => {
+      await removeMember(emOf(req), actorOf(req), params.id);
+    }),
+  );
+  return r;
+}

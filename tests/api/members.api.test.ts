@@ -1,0 +1,60 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import { testApp, agentFor } from '../support/test-app.js';
+import { PASSWORD, coachWorkspace, makeClient, member } from '../support/factories.js';
+import { sql } from '../support/db.js';
+
+let app: Express;
+beforeAll(async () => {
+  app = (await testApp()).app;
+});
+
+describe('the team: who has access, and ending it', () => {
+  it('lists the coach, then assistants, then clients (with their profile), and marks who is asking', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const client = await makeClient(coach);
+    const clientMember = await member(app, coach, 'client', { clientId: client.id });
+    const list = (await coach.agent.get('/api/members').expect(200)).body;
+    expect(list.map((m: { role: string }) => m.role)).toEqual(['coach', 'assistant', 'client']);
+    expect(list[0]).toMatchObject({ userId: coach.userId, email: coach.email, you: true, clientId: null });
+    expect(list[1]).toMatchObject({ userId: assistant.userId, email: assistant.email, you: false });
+    expect(list[2]).toMatchObject({ userId: clientMember.userId, clientId: client.id, clientName: client.name });
+    expect(Date.parse(list[1].joinedAt)).not.toBeNaN();
+    // Another workspace sees only its own people.
+    const other = await coachWorkspace(app);
+    expect((await other.agent.get('/api/members').expect(200)).body.map((m: { userId: number }) => m.userId)).toEqual([other.userId]);
+  });
+
+  it('removes an assistant: their next request is signed out, they cannot sign in, and what they did stays', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    await assistant.agent.get('/api/clients').expect(200);
+    const id = (await coach.agent.get('/api/members').expect(200)).body.find((m: { userId: number }) => m.userId === assistant.userId).id;
+    await coach.agent.delete(`/api/members/${id}`).expect(204);
+    await assistant.agent.get('/api/clients').expect(401);
+    expect(await sql(`select count(*)::int as n from session where sess->'passport'->>'user' = $1`, [String(assistant.userId)])).toEqual([{ n: 0 }]);
+    const again = agentFor(app);
+    const login = await again.post('/api/auth/login').set('x-trayline-csrf', '1').send({ email: assistant.email, password: PASSWORD }).expect(403);
+    expect(login.body.detail).toBe('This account has no access to a workspace any more: ask your coach for a new invitation');
+    expect(await sql('select count(*)::int as n from app_user where id = $1', [assistant.userId])).toEqual([{ n: 1 }]);
+    expect((await coach.agent.get('/api/members').expect(200)).body.map((m: { role: string }) => m.role)).toEqual(['coach']);
+    // A second removal, an unknown id and another workspace's member are "not found".
+    await coach.agent.delete(`/api/members/${id}`).expect(404);
+    const other = await coachWorkspace(app);
+    const theirs = await member(app, other, 'assistant');
+    const theirId = (await other.agent.get('/api/members').expect(200)).body.find((m: { userId: number }) => m.userId === theirs.userId).id;
+    await coach.agent.delete(`/api/members/${theirId}`).expect(404);
+    await theirs.agent.get('/api/clients').expect(200);
+  });
+
+  it("refuses to remove a coach (409) and answers 400 naming the id for a bad one", async () => {
+    const coach = await coachWorkspace(app);
+    const own = (await coach.agent.get('/api/members').expect(200)).body[0];
+    const refused = await coach.agent.delete(`/api/members/${own.id}`).expect(409);
+    expect(refused.body.detail).toBe("A coach's access cannot be removed from the Team page");
+    await coach.agent.get('/api/members').expect(200);
+    const bad = await coach.agent.delete('/api/members/abc').expect(400);
+    expect(Object.keys(bad.body.errors)).toEqual(['id']);
+  });
+});

@@ -1,0 +1,63 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
+import type { MemberDto } from '@shared/schemas/auth.schema';
+import { TeamMembers } from '@/features/auth/components/team-members';
+import { jsonResponse, renderInApp } from './render';
+
+// An invented team: the coach (asking), one kitchen assistant, one client member.
+const person = (id: number, name: string, role: MemberDto['role'], more: Partial<MemberDto> = {}): MemberDto => ({
+  id, userId: 100 + id, name, email: `${name.split(' ')[0].toLowerCase()}@example.test`, role, clientId: null, clientName: null,
+  joinedAt: '2026-11-02T09:00:00.000Z', you: false, ...more,
+});
+const team = [person(1, 'Ada Coach', 'coach', { you: true }), person(2, 'Lee Prep', 'assistant'), person(3, 'Olga Client', 'client', { clientId: 7, clientName: 'Olga Client' })];
+
+afterEach(() => vi.unstubAllGlobals());
+
+describe('people with access (Team page)', () => {
+  it('lists everyone with their role, and offers "Remove access" for all but the coach', async () => {
+    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(team)));
+    renderInApp(<TeamMembers workspaceName="Example Prep" />);
+    const rows = (await screen.findAllByRole('row')).slice(1);
+    expect(rows.map((r) => within(r).getAllByRole('cell')[2].textContent)).toEqual(['Coach', 'Kitchen assistant', 'Client']);
+    expect(within(rows[0]).getByText('(you)')).toBeTruthy();
+    expect(within(rows[0]).queryByRole('button')).toBeNull();
+    expect(screen.getAllByRole('button', { name: /^Remove .*'s access$/ })).toHaveLength(2);
+  });
+
+  it('asks first, then removes the access and reads the list again', async () => {
+    let current = team;
+    const calls: string[] = [];
+    vi.stubGlobal('confirm', vi.fn(() => true));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string, init?: RequestInit) => {
+        calls.push(`${init?.method ?? 'GET'} ${url}`);
+        if (init?.method === 'DELETE') {
+          current = team.filter((m) => m.id !== 2);
+          return new Response(null, { status: 204 });
+        }
+        return jsonResponse(current);
+      }),
+    );
+    renderInApp(<TeamMembers workspaceName="Example Prep" />);
+    fireEvent.click(await screen.findByRole('button', { name: "Remove Lee Prep's access" }));
+    expect(vi.mocked(window.confirm).mock.calls[0][0]).toMatch(/^Remove Lee Prep's access to Example Prep\? They are signed out/);
+    await waitFor(() => expect(screen.queryByText('Lee Prep')).toBeNull());
+    expect(calls).toEqual(['GET /api/members', 'DELETE /api/members/2', 'GET /api/members']);
+  });
+
+  it('does nothing when the coach changes their mind, and shows a refusal', async () => {
+    const fetchMock = vi.fn(async (_url: string, init?: RequestInit) =>
+      init?.method === 'DELETE' ? jsonResponse({ title: 'Conflict', status: 409, detail: "A coach's access cannot be removed from the Team page" }, 409) : jsonResponse(team),
+    );
+    vi.stubGlobal('fetch', fetchMock);
+    vi.stubGlobal('confirm', vi.fn(() => false));
+    renderInApp(<TeamMembers workspaceName="Example Prep" />);
+    fireEvent.click(await screen.findByRole('button', { name: "Remove Olga Client's access" }));
+    expect(fetchMock.mock.calls.some(([, init]) => init?.method === 'DELETE')).toBe(false);
+    vi.stubGlobal('confirm', vi.fn(() => true));
+    fireEvent.click(screen.getByRole('button', { name: "Remove Olga Client's access" }));
+    expect(await screen.findByText("A coach's access cannot be removed from the Team page")).toBeTruthy();
+    expect(screen.getByText('Access not removed')).toBeTruthy();
+  });
+});
