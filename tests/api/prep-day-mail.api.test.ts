@@ -37,8 +37,8 @@ describe("e-mailing a prep day's papers to the kitchen", () => {
     expect(sent.body).toEqual({
       queued: 2,
       recipients: [
-        { name: 'assistant person', email: kit.email },
-        { name: 'assistant person', email: lee.email },
+        { name: 'assistant person', email: kit.email, account: true },
+        { name: 'assistant person', email: lee.email, account: true },
       ],
       repeated: false,
     });
@@ -78,11 +78,68 @@ describe("e-mailing a prep day's papers to the kitchen", () => {
     expect(noOven.body.detail).toContain('No ovens');
     await makeOven(coach);
     const nobody = await coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04' }).expect(409);
-    expect(nobody.body.detail).toBe('No kitchen assistant in this workspace yet: invite one from Team first');
+    expect(nobody.body.detail).toBe('No kitchen assistant in this workspace yet: invite one from Team, or give an e-mail address to send to');
     expect(await sql("select id from outbox where workspace_id = $1 and kind = 'prep-day'", [coach.workspaceId])).toEqual([]);
     const other = await coachWorkspace(app);
     await other.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04' }).expect(404);
     const bad = await coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: 'Sunday', requestId: 'x' }).expect(400);
     expect(Object.keys(bad.body.errors).sort()).toEqual(['prepDate', 'requestId']);
+  });
+
+  it('sends to the assistants chosen and to addresses without an account (papers in the sender\'s measures, no link)', async () => {
+    const coach = await coachWorkspace(app);
+    const kit = await member(app, coach, 'assistant');
+    const lee = await member(app, coach, 'assistant');
+    await lee.agent.patch('/api/auth/me').send({ unitSystem: 'metric' }).expect(200);
+    await makeOven(coach);
+    const w = await shoppingWeek(coach);
+    const sent = await coach.agent
+      .post(`/api/weeks/${w.weekId}/prep-day-mail`)
+      .send({ prepDate: '2026-01-04', assistantIds: [lee.userId], alsoTo: [' Kitchen@Example.test ', 'kitchen@example.test', lee.email] })
+      .expect(202);
+    // Kit is not chosen; the shared inbox once (addresses compare without case); Lee once.
+    expect(sent.body).toEqual({
+      queued: 2,
+      recipients: [
+        { name: 'assistant person', email: lee.email, account: true },
+        { name: 'kitchen@example.test', email: 'kitchen@example.test', account: false },
+      ],
+      repeated: false,
+    });
+    const rows = await sql<OutboxRow>("select \"to\", kind, subject, text, week_id, attachments from outbox where workspace_id = $1 and kind = 'prep-day' order by id", [coach.workspaceId]);
+    expect(rows.map((r) => r.to)).toEqual([lee.email, 'kitchen@example.test']);
+    expect(rows.map((r) => r.to)).not.toContain(kit.email);
+    expect(rows[1].text).toMatch(/^Hello,\n\nthe shopping list and the bake run for prep day Sun 4 Jan .* as it is when this e-mail leaves\.\n/);
+    expect(rows[1].text).not.toContain('Open the shopping list');
+    expect(rows[0].text).toContain('Open the shopping list');
+    // The shared inbox's papers are the coach's (US measures); Lee's are metric.
+    const render = (kind: string, payload: Record<string, unknown>) => attachmentRenderer(kind)!(orm.em.fork(), payload);
+    expect(rows[1].attachments[0].payload).toMatchObject({ userId: coach.userId });
+    expect(await pdfText((await render('prep-day-shopping', rows[1].attachments[0].payload)).buffer)).toContain('2 lb 2 oz');
+    expect(await pdfText((await render('prep-day-shopping', rows[0].attachments[0].payload)).buffer)).toMatch(/964 g/);
+  });
+
+  it('answers 400 naming the field: someone who is not an assistant, a bad address, nobody chosen', async () => {
+    const coach = await coachWorkspace(app);
+    const kit = await member(app, coach, 'assistant');
+    const client = await member(app, coach, 'client');
+    await makeOven(coach);
+    const w = await shoppingWeek(coach);
+    const send = (body: Record<string, unknown>) => coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04', ...body });
+    const notAssistant = await send({ assistantIds: [kit.userId, client.userId] }).expect(400);
+    expect(notAssistant.body.errors).toEqual({ 'assistantIds.1': ['Not a kitchen assistant of this workspace'] });
+    const badAddress = await send({ alsoTo: ['kitchen'] }).expect(400);
+    expect(Object.keys(badAddress.body.errors)).toEqual(['alsoTo.0']);
+    const tooMany = await send({ alsoTo: ['a', 'b', 'c', 'd', 'e', 'f'].map((x) => `${x}@example.test`) }).expect(400);
+    expect(Object.keys(tooMany.body.errors)).toEqual(['alsoTo']);
+    const nobody = await send({ assistantIds: [], alsoTo: [] }).expect(400);
+    expect(nobody.body.errors).toEqual({ assistantIds: ['Choose at least one kitchen assistant, or give an e-mail address'] });
+    expect(await sql("select id from outbox where workspace_id = $1 and kind = 'prep-day'", [coach.workspaceId])).toEqual([]);
+    // With no assistant at all, an address alone is enough.
+    const solo = await coachWorkspace(app);
+    await makeOven(solo);
+    const sw = await shoppingWeek(solo);
+    const only = await solo.agent.post(`/api/weeks/${sw.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04', alsoTo: ['kitchen@example.test'] }).expect(202);
+    expect(only.body.queued).toBe(1);
   });
 });

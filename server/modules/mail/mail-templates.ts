@@ -72,10 +72,11 @@ export function weekPlanMail(p: {
 }
 
 /** To a kitchen assistant: a prep day's shopping list and bake run, attached as PDFs. */
-export function prepDayMail(p: { businessName: string; name: string; prepLabel: string; weekName: string; note?: string | null; link?: string }): MailBody {
+/** `name` and `link` are absent for an address that has no account (a kitchen's shared inbox). */
+export function prepDayMail(p: { businessName: string; name?: string | null; prepLabel: string; weekName: string; note?: string | null; link?: string }): MailBody {
   const lines = [
-    `Hello ${p.name},`,
-    `the shopping list and the bake run for prep day ${p.prepLabel} (${p.weekName}) are attached as PDFs. They show the plan as it is when this e-mail leaves; Trayline always has the latest.`,
+    p.name ? `Hello ${p.name},` : 'Hello,',
+    `the shopping list and the bake run for prep day ${p.prepLabel} (${p.weekName}) are attached as PDFs. They show the plan as it is when this e-mail leaves${p.link ? '; Trayline always has the latest' : ''}.`,
     ...(p.note ? [`A note from ${p.businessName}:\n${p.note}`] : []),
   ];
   return {
