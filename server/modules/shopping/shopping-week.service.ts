@@ -17,7 +17,7 @@ import { pantryAmount } from './pantry.service.js';
 import { loadShoppingIngredients } from './shopping-ingredient.js';
 import { ShoppingCheck, ShoppingPurchase, type IShoppingPurchase } from './shopping.entity.js';
 import { presentShoppingList } from './shopping.presenter.js';
-import { computeShoppingList, itemsOf, type ComputedShoppingList } from './shopping.service.js';
+import { computeLaterShoppingList, computeShoppingList, itemsOf, type ComputedShoppingList } from './shopping.service.js';
 
 /** Which list: 0 for the whole week, else the trip's number (1, 2); a 400 naming prepDate for a date not a trip's. */
 function tripOf(week: IWeek, prepDate: IsoDate | undefined): number {
@@ -68,15 +68,11 @@ async function computeForWeek(em: EntityManager, actor: Actor, week: IWeek, trip
   const data = await loadBoardData(em, actor, week);
   if (trip === 0) return computeShoppingList(em, actor, weekNeeds(data));
   const dates = tripDatesOf(week);
-  const held = new Map<string, Decimal>();
-  for (let earlier = 1; earlier < trip; earlier++) {
-    if (await em.findOne(ShoppingPurchase, { week: week.id, trip: earlier }, { fields: ['id'] })) continue;
-    const before = await computeShoppingList(em, actor, weekNeeds(data, dates[earlier - 1]), held);
-    for (const item of itemsOf(before.list)) {
-      if (item.fromPantry.gt(0)) held.set(item.ingredientId, (held.get(item.ingredientId) ?? new Decimal(0)).plus(item.fromPantry));
-    }
-  }
-  return computeShoppingList(em, actor, weekNeeds(data, dates[trip - 1]), held);
+  const bought = new Set(
+    (await em.find(ShoppingPurchase, { week: week.id, trip: { $gte: 1, $lt: trip } }, { fields: ['trip'] })).map((p) => p.trip),
+  );
+  const earlier = dates.slice(0, trip - 1).map((d, i) => ({ input: weekNeeds(data, d), takesPantry: !bought.has(i + 1) }));
+  return computeLaterShoppingList(em, actor, earlier, weekNeeds(data, dates[trip - 1]));
 }
 
 async function userNames(em: EntityManager, ids: readonly number[]): Promise<Map<number, string>> {

@@ -43,53 +43,64 @@ function convertible(ing: ShoppingRow, amount: Decimal.Value, unit: string): str
   }
 }
 
-/** Every tray line × its tray count, as needs (amounts as stored per tray, in the line's unit). */
+/**
+ * Every tray line × its tray count, as needs (amounts as stored per tray, in the line's unit), for each of `lists`
+ * (one read of the trays for all of them). A tray not in the workspace is a 400 naming `trays.N.trayId` of the
+ * first list that asks for it.
+ */
 async function trayNeeds(
   em: EntityManager,
   actor: Actor,
-  trays: readonly { trayId: number; count: number }[],
-): Promise<ShoppingNeed[]> {
-  const counts = new Map<number, number>();
-  for (const t of trays) counts.set(t.trayId, (counts.get(t.trayId) ?? 0) + t.count);
-  if (!counts.size) return [];
-  const rows = await em.find(Tray, { id: { $in: [...counts.keys()] }, workspace: actor.workspaceId }, { populate: ['lines'] });
+  lists: readonly (readonly { trayId: number; count: number }[])[],
+): Promise<ShoppingNeed[][]> {
+  const ids = new Set(lists.flatMap((trays) => trays.map((t) => t.trayId)));
+  if (!ids.size) return lists.map(() => []);
+  const rows = await em.find(Tray, { id: { $in: [...ids] }, workspace: actor.workspaceId }, { populate: ['lines'] });
   const found = new Set(rows.map((r) => r.id));
-  const errors: Record<string, string[]> = {};
-  trays.forEach((t, i) => {
-    if (!found.has(t.trayId)) errors[`trays.${i}.trayId`] = [`No base tray with id ${t.trayId} in your workspace`];
-  });
-  if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
-  const needs: ShoppingNeed[] = [];
-  for (const tray of rows) {
-    const count = counts.get(tray.id) ?? 0;
-    if (count <= 0) continue;
-    for (const line of tray.lines.getItems()) {
-      needs.push({ ingredientId: String(line.ingredient.id), amount: new Decimal(line.amount).times(count), unit: line.unit });
+  return lists.map((trays) => {
+    const errors: Record<string, string[]> = {};
+    trays.forEach((t, i) => {
+      if (!found.has(t.trayId)) errors[`trays.${i}.trayId`] = [`No base tray with id ${t.trayId} in your workspace`];
+    });
+    if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
+    const counts = new Map<number, number>();
+    for (const t of trays) counts.set(t.trayId, (counts.get(t.trayId) ?? 0) + t.count);
+    const needs: ShoppingNeed[] = [];
+    for (const tray of rows) {
+      const count = counts.get(tray.id) ?? 0;
+      if (count <= 0) continue;
+      for (const line of tray.lines.getItems()) {
+        needs.push({ ingredientId: String(line.ingredient.id), amount: new Decimal(line.amount).times(count), unit: line.unit });
+      }
     }
-  }
-  return needs;
+    return needs;
+  });
+}
+
+/** What several lists are built from, read once: each list's needs, the pantry, and every ingredient either names. */
+interface ShoppingInputs {
+  raws: ShoppingNeed[][];
+  rawStock: PantryStock[];
+  ingredients: Map<number, ShoppingRow>;
+}
+
+async function loadShoppingInputs(em: EntityManager, actor: Actor, inputs: readonly ShoppingNeedsInput[]): Promise<ShoppingInputs> {
+  const parsed = inputs.map((i) => shoppingNeedsSchema.parse(i));
+  const trays = await trayNeeds(em, actor, parsed.map((p) => p.trays));
+  const raws = parsed.map((p, i) => [
+    ...trays[i],
+    ...p.addOns.map((a) => ({ ingredientId: String(a.ingredientId), amount: a.amount, unit: a.unit })),
+  ]);
+  const { stock: rawStock } = await pantryStock(em, actor);
+  const ids = [...raws.flat(), ...rawStock].map((n) => Number(n.ingredientId));
+  return { raws, rawStock, ingredients: await loadShoppingIngredients(em, actor, ids) };
 }
 
 /**
- * The shopping list for trays × counts plus add-on amounts, minus the workspace's pantry. Lines whose unit the
- * ingredient cannot be converted from are left out and named in `problems` (never counted as zero silently).
+ * One list from loaded inputs, minus the pantry. Lines whose unit the ingredient cannot be converted from are left
+ * out and named in `problems` (never counted as zero silently).
  */
-export async function computeShoppingList(
-  em: EntityManager,
-  actor: Actor,
-  input: ShoppingNeedsInput,
-  /** Pantry amounts already promised to another list (ingredient id → amount in its base unit): not used here. */
-  held: ReadonlyMap<string, Decimal> = new Map(),
-): Promise<ComputedShoppingList> {
-  const parsed = shoppingNeedsSchema.parse(input);
-  const raw: ShoppingNeed[] = [
-    ...(await trayNeeds(em, actor, parsed.trays)),
-    ...parsed.addOns.map((a) => ({ ingredientId: String(a.ingredientId), amount: a.amount, unit: a.unit })),
-  ];
-  const { stock: rawStock } = await pantryStock(em, actor);
-  const ids = [...raw, ...rawStock].map((n) => Number(n.ingredientId));
-  const ingredients = await loadShoppingIngredients(em, actor, ids);
-
+function buildList(raw: readonly ShoppingNeed[], { rawStock, ingredients }: ShoppingInputs, held: ReadonlyMap<string, Decimal>): ComputedShoppingList {
   const problems: ShoppingProblemDto[] = [];
   const needs: ShoppingNeed[] = [];
   for (const need of raw) {
@@ -118,6 +129,37 @@ export async function computeShoppingList(
     });
   const list = buildShoppingList({ needs, ingredients: [...ingredients.values()], pantry, aisleOrder: AISLE_ORDER });
   return { list, ingredients, problems };
+}
+
+/**
+ * The shopping list for trays × counts plus add-on amounts, minus the workspace's pantry. Lines whose unit the
+ * ingredient cannot be converted from are left out and named in `problems` (never counted as zero silently).
+ */
+export async function computeShoppingList(em: EntityManager, actor: Actor, input: ShoppingNeedsInput): Promise<ComputedShoppingList> {
+  const loaded = await loadShoppingInputs(em, actor, [input]);
+  return buildList(loaded.raws[0], loaded, new Map());
+}
+
+/**
+ * The last of several lists that share the pantry in order (a week's trips): each earlier list marked `takesPantry`
+ * holds what it takes from the pantry, and the later ones see only the rest. One read of trays, pantry and
+ * ingredients for all of them.
+ */
+export async function computeLaterShoppingList(
+  em: EntityManager,
+  actor: Actor,
+  earlier: readonly { input: ShoppingNeedsInput; takesPantry: boolean }[],
+  input: ShoppingNeedsInput,
+): Promise<ComputedShoppingList> {
+  const taking = earlier.filter((e) => e.takesPantry);
+  const loaded = await loadShoppingInputs(em, actor, [...taking.map((e) => e.input), input]);
+  const held = new Map<string, Decimal>();
+  taking.forEach((_, i) => {
+    for (const item of itemsOf(buildList(loaded.raws[i], loaded, held).list)) {
+      if (item.fromPantry.gt(0)) held.set(item.ingredientId, (held.get(item.ingredientId) ?? new Decimal(0)).plus(item.fromPantry));
+    }
+  });
+  return buildList(loaded.raws[taking.length], loaded, held);
 }
 
 /** The whole list as items, for callers that only need the numbers. */
