@@ -23,15 +23,20 @@ const pdfText = async (buffer: Buffer) => {
 
 type OutboxRow = { to: string; kind: string; subject: string; text: string; week_id: number; attachments: { pdf: string; payload: Record<string, unknown> }[] };
 
+/** A workspace with an oven, the shopping week, and two kitchen assistants: Kit (US measures) and Lee (metric). */
+async function kitchenOfTwo() {
+  const coach = await coachWorkspace(app);
+  const kit = await member(app, coach, 'assistant');
+  const lee = await member(app, coach, 'assistant');
+  // Lee reads metric amounts; the papers are written for each reader.
+  await lee.agent.patch('/api/auth/me').send({ unitSystem: 'metric' }).expect(200);
+  await makeOven(coach);
+  return { coach, kit, lee, w: await shoppingWeek(coach) };
+}
+
 describe("e-mailing a prep day's papers to the kitchen", () => {
   it('queues one e-mail per assistant with the shopping list and the bake run, rendered for that reader; a repeated request queues nothing', async () => {
-    const coach = await coachWorkspace(app);
-    const kit = await member(app, coach, 'assistant');
-    const lee = await member(app, coach, 'assistant');
-    // Lee reads metric amounts; the papers are written for each reader.
-    await lee.agent.patch('/api/auth/me').send({ unitSystem: 'metric' }).expect(200);
-    await makeOven(coach);
-    const w = await shoppingWeek(coach);
+    const { coach, kit, lee, w } = await kitchenOfTwo();
     const requestId = '0b6c9a52-3f1e-4c1a-9d7e-2a4b5c6d7e8f';
     const sent = await coach.agent.post(`/api/weeks/${w.weekId}/prep-day-mail`).send({ prepDate: '2026-01-04', requestId }).expect(202);
     expect(sent.body).toEqual({
@@ -87,12 +92,7 @@ describe("e-mailing a prep day's papers to the kitchen", () => {
   });
 
   it('sends to the assistants chosen and to addresses without an account (papers in the sender\'s measures, no link)', async () => {
-    const coach = await coachWorkspace(app);
-    const kit = await member(app, coach, 'assistant');
-    const lee = await member(app, coach, 'assistant');
-    await lee.agent.patch('/api/auth/me').send({ unitSystem: 'metric' }).expect(200);
-    await makeOven(coach);
-    const w = await shoppingWeek(coach);
+    const { coach, kit, lee, w } = await kitchenOfTwo();
     const sent = await coach.agent
       .post(`/api/weeks/${w.weekId}/prep-day-mail`)
       .send({ prepDate: '2026-01-04', assistantIds: [lee.userId], alsoTo: [' Kitchen@Example.test ', 'kitchen@example.test', lee.email] })
