@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { MemberDto } from '@shared/schemas/auth.schema';
 import { TeamMembers } from '@/features/auth/components/team-members';
-import { jsonResponse, renderInApp } from './render';
+import { jsonResponse, renderInApp, signedIn } from './render';
 
 // An invented team: the coach (asking), one kitchen assistant, one client member.
 const person = (id: number, name: string, role: MemberDto['role'], more: Partial<MemberDto> = {}): MemberDto => ({
@@ -59,5 +59,25 @@ describe('people with access (Team page)', () => {
     fireEvent.click(screen.getByRole('button', { name: "Remove Olga Client's access" }));
     expect(await screen.findByText("A coach's access cannot be removed from the Team page")).toBeTruthy();
     expect(screen.getByText('Access not removed')).toBeTruthy();
+  });
+});
+
+describe('the Team page', () => {
+  it("says when someone who joined by invitation has had their access removed since", async () => {
+    const { Component: TeamPage } = await import('@/app/routes/team/team.route');
+    const invitation = (id: number, email: string) => ({ id, email, role: 'assistant', expiresAt: '2026-11-16T09:00:00.000Z', acceptedAt: '2026-11-03T09:00:00.000Z' });
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string) => {
+        if (url === '/api/invitations') return jsonResponse([invitation(9, 'Lee@example.test'), invitation(8, 'sam@example.test')]);
+        if (url === '/api/members') return jsonResponse(team);
+        if (url === '/api/auth/me') return jsonResponse(signedIn());
+        throw new Error(`unexpected ${url}`);
+      }),
+    );
+    renderInApp(<TeamPage />);
+    const lee = (await screen.findByText('Lee@example.test')).closest('tr')!;
+    await waitFor(() => expect(within(lee).getByText('Joined')).toBeTruthy());
+    expect(within(screen.getByText('sam@example.test').closest('tr')!).getByText('Joined; access removed since')).toBeTruthy();
   });
 });

@@ -9,12 +9,15 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { ROLE_WORDS } from '@/lib/words';
-import { invitationsQuery, meQuery } from '@/features/auth/api/auth.queries';
+import { invitationsQuery, meQuery, membersQuery } from '@/features/auth/api/auth.queries';
 import { TeamMembers } from '@/features/auth/components/team-members';
 
 export function Component() {
   const list = useQuery(invitationsQuery());
   const me = useQuery(meQuery());
+  const members = useQuery(membersQuery());
+  // An accepted invitation whose person no longer has access (removed above): said so, not "Joined".
+  const stillIn = (email: string) => !members.data || members.data.some((m) => m.email.toLowerCase() === email.toLowerCase());
   const create = useCreateInvitation();
   const revoke = useRevokeInvitation();
   const [link, setLink] = useState<string | null>(null);
@@ -85,7 +88,7 @@ export function Component() {
                   <tr key={inv.id} className="border-b border-line">
                     <td className="py-2">{inv.email}</td>
                     <td>{ROLE_WORDS[inv.role]}</td>
-                    <td>{inv.acceptedAt ? 'Joined' : new Date(inv.expiresAt) < new Date() ? 'Expired' : 'Waiting'}</td>
+                    <td>{inv.acceptedAt ? (stillIn(inv.email) ? 'Joined' : 'Joined; access removed since') : new Date(inv.expiresAt) < new Date() ? 'Expired' : 'Waiting'}</td>
                     <td className="text-right">
                       {!inv.acceptedAt && (
                         <Button size="sm" variant="ghost" onClick={() => revoke.mutate(inv.id)}>
