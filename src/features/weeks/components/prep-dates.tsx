@@ -17,7 +17,7 @@ export function PrepDates({ board, busy, error, onSave }: { board: BoardDto; bus
   const refusal = error && !stale && !fields.prepDate && !fields.secondPrepDate ? (isApiError(error) ? error.message : errorMessage(error)) : null;
   return (
     <form
-      className="grid items-end gap-3 sm:grid-cols-[1fr_1fr_auto]"
+      className="grid items-start gap-3 sm:grid-cols-[1fr_1fr_auto]"
       onSubmit={(e) => {
         e.preventDefault();
         onSave(prep, second || null);
@@ -32,9 +32,12 @@ export function PrepDates({ board, busy, error, onSave }: { board: BoardDto; bus
         onChange={(e) => setSecond(e.target.value)}
         hint="Fresher portions for the end of the week"
       />
-      <Button type="submit" variant="secondary" busy={busy}>
-        Save prep days
-      </Button>
+      {/* Level with the date inputs (below their labels), whatever the hints and errors under them. */}
+      <div className="sm:pt-6">
+        <Button type="submit" variant="secondary" busy={busy}>
+          Save prep days
+        </Button>
+      </div>
       {refusal && (
         <div className="sm:col-span-3">
           <Notice tone="block" title="Prep days not changed">
