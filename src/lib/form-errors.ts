@@ -1,8 +1,9 @@
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
-import { ApiError } from './problem';
+import { ApiError, markShown } from './problem';
 
 /** Copies a 400's field errors onto react-hook-form fields; returns the message left for the form as a whole. */
 export function applyServerErrors<T extends FieldValues>(err: unknown, setError: UseFormSetError<T>): string | null {
+  markShown(err); // on the form: no toast repeats it
   if (!(err instanceof ApiError)) return err instanceof Error ? err.message : 'Something went wrong';
   const fields = err.problem.errors ?? {};
   let placed = false;

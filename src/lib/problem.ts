@@ -17,7 +17,21 @@ export function isApiError(e: unknown, status?: number): e is ApiError {
   return e instanceof ApiError && (status === undefined || e.status === status);
 }
 
+/** Errors a page shows itself, beside the form or action that failed: the app-wide toast leaves them out. */
+const shownInline = new WeakSet<object>();
+
+/** Says this error is shown on the page (errorMessage and applyServerErrors say so themselves). */
+export function markShown(e: unknown): void {
+  if (e !== null && typeof e === 'object') shownInline.add(e);
+}
+
+export function wasShown(e: unknown): boolean {
+  return e !== null && typeof e === 'object' && shownInline.has(e);
+}
+
+/** The error's message, for the page to show (which marks it shown: no toast repeats it). */
 export function errorMessage(e: unknown): string {
+  markShown(e);
   if (e instanceof ApiError) return e.message;
   if (e instanceof Error) return e.message;
   return 'Something went wrong';

@@ -11,7 +11,7 @@ import { TextField } from '@/components/ui/field';
 import { Card, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { applyServerErrors } from '@/lib/form-errors';
-import { errorMessage, isApiError } from '@/lib/problem';
+import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 
@@ -59,7 +59,10 @@ function InviteCard({ client }: { client: ClientDto }) {
           setError(null);
           invite.mutate(email, {
             onSuccess: (inv) => setLink(inv.link ?? null),
-            onError: (err) => setError(isApiError(err) ? (Object.values(err.fieldErrors)[0]?.[0] ?? err.message) : errorMessage(err)),
+            onError: (err) => {
+              markShown(err);
+              setError(isApiError(err) ? (Object.values(err.fieldErrors)[0]?.[0] ?? err.message) : errorMessage(err));
+            },
           });
         }}
       >
@@ -101,7 +104,13 @@ export function Component() {
     setStale(false);
     update.mutate(
       { archived, version: client.version },
-      { onError: (e) => (isApiError(e, 409) ? onStale() : setArchiveError(errorMessage(e))) },
+      {
+        onError: (e) => {
+          markShown(e);
+          if (isApiError(e, 409)) onStale();
+          else setArchiveError(errorMessage(e));
+        },
+      },
     );
   };
   return (
@@ -164,6 +173,7 @@ export function Component() {
               { ...values, version: client.version },
               {
                 onError: (e) => {
+                  markShown(e);
                   if (isApiError(e, 409)) return onStale();
                   setFormError(applyServerErrors(e, setError));
                 },

@@ -9,7 +9,7 @@ import { PlateMacros } from '@/features/assemblies/components/plate-macros';
 import { Button, EditDeleteButtons } from '@/components/ui/button';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
-import { errorMessage, isApiError } from '@/lib/problem';
+import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
@@ -33,8 +33,10 @@ function Editor({ plate, onDone }: { plate: AssemblyDto | null; onDone: () => vo
           setFormError(null);
           save.mutate(plate ? { ...values, version: plate.version } : values, {
             onSuccess: onDone,
-            onError: (e) =>
-              setFormError(isApiError(e, 409) ? 'Someone else changed this plate: close and open it again to see their version.' : applyServerErrors(e, setError)),
+            onError: (e) => {
+              markShown(e);
+              setFormError(isApiError(e, 409) ? 'Someone else changed this plate: close and open it again to see their version.' : applyServerErrors(e, setError));
+            },
           });
         }}
       />
@@ -104,7 +106,12 @@ export function Component() {
                             onEdit={() => setEditing(p)}
                             onDelete={() => {
                               setError(null);
-                              del.mutate(p.id, { onError: (e) => setError(isApiError(e, 409) ? `${p.name} is on a week board: take it off first.` : errorMessage(e)) });
+                              del.mutate(p.id, {
+                                onError: (e) => {
+                                  markShown(e);
+                                  setError(isApiError(e, 409) ? `${p.name} is on a week board: take it off first.` : errorMessage(e));
+                                },
+                              });
                             }}
                           />
                         )}

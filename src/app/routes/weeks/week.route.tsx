@@ -18,7 +18,7 @@ import { Button } from '@/components/ui/button';
 import { DayOptions, SelectField } from '@/components/ui/field';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
-import { errorMessage, isApiError } from '@/lib/problem';
+import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { agrees, counted } from '@/lib/words';
 import { dayLabel } from '@/lib/dates';
@@ -51,6 +51,7 @@ export function Component() {
 
   /** A 409 loads their board and keeps ours pending: the coach chooses (merge prompt), never a silent overwrite. */
   const onFail = (pending: Pending) => (e: unknown) => {
+    markShown(e); // the merge prompt, the allergen prompt or the notice below says it
     if (isApiError(e, 409) && e.problem.code === 'stale_version') {
       const current = e.problem.current as BoardAnswer | undefined;
       if (current) qc.setQueryData(weekKeys.detail(id), expandBoard(current));
@@ -243,7 +244,10 @@ export function Component() {
           const run = (version: number) =>
             update.mutate({ version, prepDate, secondPrepDate }, {
               // A stale version goes to the merge prompt; any other refusal is shown in this card, beside its fields.
-              onError: (e) => isApiError(e, 409) && e.problem.code === 'stale_version' && onFail({ kind: 'other', label: 'change the prep days', run })(e),
+              onError: (e) => {
+                markShown(e);
+                if (isApiError(e, 409) && e.problem.code === 'stale_version') onFail({ kind: 'other', label: 'change the prep days', run })(e);
+              },
             });
           withVersion('prep', run);
         }} />

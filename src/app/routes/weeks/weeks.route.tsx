@@ -9,7 +9,7 @@ import { useMe } from '@/features/auth/hooks/use-me';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
-import { isApiError, errorMessage } from '@/lib/problem';
+import { isApiError, errorMessage, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { dayLabel } from '@/lib/dates';
 
@@ -61,6 +61,7 @@ export function Component() {
               const done = {
                 onSuccess: (b: { week: { id: number } }) => navigate(paths.week(b.week.id)),
                 onError: (err: unknown) => {
+                  markShown(err);
                   if (isApiError(err, 400)) setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k.replace(/^body\./, ''), v])));
                   else setFormError(errorMessage(err));
                 },

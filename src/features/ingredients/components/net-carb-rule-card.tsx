@@ -4,7 +4,7 @@ import { toast } from 'sonner';
 import type { NetCarbRuleKind } from '@shared/domain/nutrition';
 import { Button } from '@/components/ui/button';
 import { Card, Notice, QueryView, Skeleton } from '@/components/ui/states';
-import { isApiError } from '@/lib/problem';
+import { isApiError, markShown } from '@/lib/problem';
 import { workspaceSettingsQuery } from '../api/ingredients.queries';
 import { useUpdateWorkspaceSettings } from '../api/use-ingredient-mutations';
 
@@ -39,6 +39,7 @@ export function NetCarbRuleCard() {
                   onSuccess: () => toast.success('Net-carb rule saved; every net-carb number now uses it'),
                   onError: (err) => {
                     if (isApiError(err, 409)) {
+                      markShown(err); // the stale notice says it
                       setStale(true);
                       void settings.refetch();
                     }

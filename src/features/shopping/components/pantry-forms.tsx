@@ -13,7 +13,7 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
-import { errorMessage, isApiError } from '@/lib/problem';
+import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { GRAMS_PER_UNIT, unitSymbol } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { pantryIngredientSearchQuery } from '../api/shopping.queries';
@@ -127,8 +127,10 @@ export function PantryRow({ item }: { item: PantryItemDto }) {
     update.mutate(
       { id: item.id, amount, unit, version: item.version },
       {
-        onError: (e) =>
-          setError(isApiError(e, 409) ? 'Someone changed this since you opened it: the current amount is shown.' : errorMessage(e)),
+        onError: (e) => {
+          markShown(e);
+          setError(isApiError(e, 409) ? 'Someone changed this since you opened it: the current amount is shown.' : errorMessage(e));
+        },
       },
     );
   };

@@ -9,7 +9,7 @@ import { outboxBusy, outboxQuery } from '@/features/mail/api/mail.queries';
 import { Button } from '@/components/ui/button';
 import { TextAreaField } from '@/components/ui/field';
 import { ErrorState, Notice, Progress, Skeleton } from '@/components/ui/states';
-import { errorMessage, isApiError } from '@/lib/problem';
+import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { clientPlanPdfUrl } from '../api/week-mail.queries';
 import { useSendWeek } from '../api/use-send-week';
@@ -82,7 +82,10 @@ export function SendPlansPanel({ board }: { board: BoardDto }) {
       { clientIds, note: note.trim() || undefined, requestId: crypto.randomUUID() },
       {
         onSuccess: (r) => setResult(r),
-        onError: (e) => setError(isApiError(e) ? (Object.values(e.fieldErrors)[0]?.[0] ?? e.message) : errorMessage(e)),
+        onError: (e) => {
+          markShown(e);
+          setError(isApiError(e) ? (Object.values(e.fieldErrors)[0]?.[0] ?? e.message) : errorMessage(e));
+        },
       },
     );
   };
