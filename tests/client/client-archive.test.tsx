@@ -61,4 +61,12 @@ describe('archiving a client from their profile', () => {
     await waitFor(() => expect(window.confirm).toHaveBeenCalled());
     expect(fetchMock.mock.calls.some(([, init]) => (init as RequestInit | undefined)?.method === 'PATCH')).toBe(false);
   });
+
+  it('says an archived client with an account can still sign in, and where to end that', async () => {
+    const archived = profile({ archivedAt: '2026-12-02T10:00:00.000Z', account: { email: 'olga@example.test', name: 'Olga Paused' } });
+    vi.stubGlobal('fetch', vi.fn(async (url: string) => (url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : jsonResponse(archived))));
+    renderProfile();
+    expect(await screen.findByText(/Olga Paused can still sign in \(olga@example\.test\) and see the weeks they are on/)).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Team page' }).getAttribute('href')).toBe('/team');
+  });
 });

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useNavigate, useParams } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import type { ClientDto } from '@shared/schemas/clients.schema';
 import { clientQuery } from '@/features/clients/api/clients.queries';
@@ -145,6 +145,15 @@ export function Component() {
       {client.archivedAt && (
         <Notice tone="info" title={`Archived on ${new Date(client.archivedAt).toLocaleDateString(undefined, { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' })}`}>
           {ARCHIVE_MEANS}
+          {client.account && (
+            <p className="mt-2">
+              {client.name} can still sign in ({client.account.email}) and see the weeks they are on. To end that, remove their access on the{' '}
+              <Link to={paths.team} className="underline">
+                Team page
+              </Link>
+              .
+            </p>
+          )}
         </Notice>
       )}
       {archiveError && (
