@@ -17,9 +17,12 @@ describe('people with access (Team page)', () => {
   it('lists everyone with their role, and offers "Remove access" for all but the coach', async () => {
     vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(team)));
     renderInApp(<TeamMembers workspaceName="Example Prep" />);
-    const rows = (await screen.findAllByRole('row')).slice(1);
-    expect(rows.map((r) => within(r).getAllByRole('cell')[2].textContent)).toEqual(['Coach', 'Kitchen assistant', 'Client']);
-    expect(within(rows[0]).getByText('(you)')).toBeTruthy();
+    const rows = within(await screen.findByRole('list', { name: 'People with access' })).getAllByRole('listitem');
+    expect(rows.map((r) => r.textContent)).toEqual([
+      'Ada Coach (you)Coach · ada@example.test · joined Nov 2, 2026',
+      "Lee PrepKitchen assistant · lee@example.test · joined Nov 2, 2026Remove access",
+      "Olga ClientClient · olga@example.test · joined Nov 2, 2026Remove access",
+    ]);
     expect(within(rows[0]).queryByRole('button')).toBeNull();
     expect(screen.getAllByRole('button', { name: /^Remove .*'s access$/ })).toHaveLength(2);
   });

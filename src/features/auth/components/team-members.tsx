@@ -30,52 +30,38 @@ export function TeamMembers({ workspaceName }: { workspaceName: string }) {
     >
       {(data) => (
         <div className="flex flex-col gap-3">
-          <div className="overflow-x-auto">
-            <table className="w-full text-left">
-              <thead>
-                <tr className="border-b border-line text-sm text-ink-faint">
-                  <th className="py-2">Name</th>
-                  <th>E-mail</th>
-                  <th>Role</th>
-                  <th>Joined</th>
-                  <th><span className="sr-only">Actions</span></th>
-                </tr>
-              </thead>
-              <tbody>
-                {data.map((m) => (
-                  <tr key={m.id} className="border-b border-line">
-                    <td className="py-2 font-bold">
-                      {m.name}
-                      {m.you && <span className="font-normal text-ink-soft"> (you)</span>}
-                    </td>
-                    <td className="break-all">{m.email}</td>
-                    <td>
-                      {ROLE_WORDS[m.role]}
-                      {m.clientName && m.clientName !== m.name && <span className="text-ink-soft"> · profile {m.clientName}</span>}
-                    </td>
-                    <td className="num">{joined(m.joinedAt)}</td>
-                    <td className="text-right">
-                      {m.role !== 'coach' && (
-                        <Button
-                          size="sm"
-                          variant="ghost"
-                          busy={remove.isPending && remove.variables === m.id}
-                          aria-label={`Remove ${m.name}'s access`}
-                          onClick={() => {
-                            if (!window.confirm(removeQuestion(m, workspaceName))) return;
-                            setError(null);
-                            remove.mutate(m.id, { onError: (e) => setError(errorMessage(e)) });
-                          }}
-                        >
-                          Remove access
-                        </Button>
-                      )}
-                    </td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <ul aria-label="People with access" className="flex flex-col">
+            {data.map((m) => (
+              <li key={m.id} className="flex flex-wrap items-center justify-between gap-x-4 gap-y-1 border-b border-line py-2">
+                <div className="min-w-0">
+                  <p className="font-bold">
+                    {m.name}
+                    {m.you && <span className="font-normal text-ink-soft"> (you)</span>}
+                  </p>
+                  <p className="text-sm text-ink-soft">
+                    <span className="text-ink">{ROLE_WORDS[m.role]}</span>
+                    {m.clientName && m.clientName !== m.name && <> · profile {m.clientName}</>} · <span className="break-all">{m.email}</span> · joined{' '}
+                    <span className="num">{joined(m.joinedAt)}</span>
+                  </p>
+                </div>
+                {m.role !== 'coach' && (
+                  <Button
+                    size="sm"
+                    variant="ghost"
+                    busy={remove.isPending && remove.variables === m.id}
+                    aria-label={`Remove ${m.name}'s access`}
+                    onClick={() => {
+                      if (!window.confirm(removeQuestion(m, workspaceName))) return;
+                      setError(null);
+                      remove.mutate(m.id, { onError: (e) => setError(errorMessage(e)) });
+                    }}
+                  >
+                    Remove access
+                  </Button>
+                )}
+              </li>
+            ))}
+          </ul>
           {error && (
             <Notice tone="block" title="Access not removed">
               {error}
