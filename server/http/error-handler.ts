@@ -70,6 +70,10 @@ export function errorHandler() {
             ? 'The request body is too large'
             : 'The request body could not be read';
       body = problem(status, err.type === 'entity.too.large' ? 'too_large' : 'bad_body', detail);
+    } else if (isOutOfRange(err)) {
+      // The schemas bound ids and versions (shared/schemas/ids.ts); a number that still reaches a column too small
+      // for it is the request's fault, not the server's.
+      body = problem(400, 'out_of_range', 'A number in the request is out of range');
     } else if (err instanceof ConnectionException || isConnectionError(err)) {
       req.log?.warn({ err }, 'database unavailable');
       body = problem(503, 'db_unavailable', 'The database is not reachable; try again shortly', { requestId });
@@ -87,6 +91,12 @@ export function errorHandler() {
 function isBodyParserError(err: unknown): err is { status?: number; type?: string } {
   return !!err && typeof err === 'object' && 'type' in err && typeof (err as { type: unknown }).type === 'string' &&
     String((err as { type: string }).type).startsWith('entity.');
+}
+
+/** PostgreSQL's numeric_value_out_of_range (22003), as the driver or MikroORM's wrapper carries it. */
+function isOutOfRange(err: unknown): boolean {
+  const e = err as { code?: string; cause?: { code?: string } } | null;
+  return e?.code === '22003' || e?.cause?.code === '22003';
 }
 
 function isConnectionError(err: unknown): boolean {

@@ -2,11 +2,12 @@ import { z } from 'zod';
 import type { AllergenCode } from '../domain/allergens';
 import type { NutrientNumbers } from '../domain/nutrition';
 import { trayLineSchema } from './trays.schema';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 /** Plates (assemblies): portions of base trays plus add-ons from the ingredient library. */
 
 export const assemblyTrayItemSchema = z.object({
-  trayId: z.coerce.number({ message: 'Choose a base tray' }).int().positive({ message: 'Choose a base tray' }),
+  trayId: z.coerce.number({ message: 'Choose a base tray' }).int().positive({ message: 'Choose a base tray' }).max(PG_INT_MAX, TOO_LARGE),
   /** Portions of the tray on one plate (1, 2, 0.5…). */
   portions: z.coerce
     .number({ message: 'Enter the portions as a number' })
@@ -38,14 +39,14 @@ export type AssemblyInput = z.input<typeof createAssemblySchema>;
 export type AssemblyValues = z.output<typeof createAssemblySchema>;
 
 export const updateAssemblySchema = assemblyValuesSchema
-  .extend({ version: z.number().int().positive() })
+  .extend({ version: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE) })
   .refine((v) => v.trays.length + v.addOns.length > 0, {
     path: ['trays'],
     message: 'Add at least one base tray portion or one add-on',
   });
 export type UpdateAssemblyValues = z.output<typeof updateAssemblySchema>;
 
-export const assemblyIdParams = z.object({ id: z.coerce.number().int().positive() });
+export const assemblyIdParams = z.object({ id: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
 
 /** The plate editor's live numbers: the parts of an unsaved plate (nothing is written). */
 export const platePreviewSchema = assemblyValuesSchema.pick({ trays: true, addOns: true });

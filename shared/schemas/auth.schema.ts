@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 export const ROLES = ['coach', 'assistant', 'client'] as const;
 export const roleSchema = z.enum(ROLES);
@@ -29,7 +30,7 @@ export const createInvitationSchema = z.object({
   email,
   role: z.enum(['assistant', 'client']),
   /** For a client invitation: the client profile this person will see. */
-  clientId: z.number().int().positive().optional(),
+  clientId: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE).optional(),
 });
 export type CreateInvitationInput = z.infer<typeof createInvitationSchema>;
 

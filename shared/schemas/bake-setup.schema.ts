@@ -9,8 +9,9 @@ import { z } from 'zod';
 import type { BakeRunResult } from '../domain/bake-run-types';
 import { isLocalDateTime } from '../domain/bake-run-time';
 import { celsiusToFahrenheit } from '../domain/temperature';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
-const version = z.number().int().positive();
+const version = z.number().int().positive().max(PG_INT_MAX, TOO_LARGE);
 const wholeMinutes = (what: string) =>
   z
     .number({ message: `${what} must be a number.` })
@@ -108,8 +109,8 @@ export const ovenUpdateSchema = z
   .transform(({ maxC, maxF, ...rest }) => ({ ...rest, maxF: toF(maxF, maxC) ?? 500 }));
 export type OvenUpdateValues = z.output<typeof ovenUpdateSchema>;
 
-export const idParams = z.object({ id: z.coerce.number().int().positive() });
-export const weekIdParam = z.object({ weekId: z.coerce.number().int().positive() });
+export const idParams = z.object({ id: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
+export const weekIdParam = z.object({ weekId: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
 export const prepDateQuery = z.object({
   prepDate: z
     .string()
@@ -127,7 +128,7 @@ export const bakeRunSettingsSchema = z.object({
     .record(z.string().regex(/^\d+$/, { message: 'Key by tray id.' }), z.number().int().min(0, { message: 'Cannot be negative.' }).max(600))
     .default({}),
   /** The ovens to use (workspace ids); empty → every oven of the workspace. */
-  ovenIds: z.array(z.number().int().positive()).max(20).default([]),
+  ovenIds: z.array(z.number().int().positive().max(PG_INT_MAX, TOO_LARGE)).max(20).default([]),
   version: version.optional(),
 });
 export type BakeRunSettingsValues = z.output<typeof bakeRunSettingsSchema>;
@@ -141,7 +142,7 @@ export type BakeRunSettingsInput = z.input<typeof bakeRunSettingsSchema>;
 export const calcBakeRunRequestSchema = z
   .object({
     trays: z
-      .array(z.looseObject({ ruleId: z.number().int().positive({ message: 'Give a bake rule id.' }).optional() }), {
+      .array(z.looseObject({ ruleId: z.number().int().positive({ message: 'Give a bake rule id.' }).max(PG_INT_MAX, TOO_LARGE).optional() }), {
         message: 'Give the trays to bake.',
       })
       .min(1, { message: 'At least one tray.' })

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import type { ActivityLevel, Goal, MacroTargets, Sex, TargetNote } from '../domain/targets';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 /** Client profiles: inputs and DTOs. Body measurements, targets and health notes are for the coach (and the client). */
 
@@ -88,7 +89,7 @@ export const updateClientSchema = z
     ...clientFields,
     /** true archives the client (they leave the list and new weeks), false restores them. */
     archived: z.boolean(),
-    version: z.number().int().positive(),
+    version: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE),
   })
   .partial()
   .required({ version: true })
@@ -96,7 +97,7 @@ export const updateClientSchema = z
 export type UpdateClientInput = z.input<typeof updateClientSchema>;
 export type UpdateClientData = z.output<typeof updateClientSchema>;
 
-export const clientIdParams = z.object({ id: z.coerce.number().int().positive() });
+export const clientIdParams = z.object({ id: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
 
 /** What an assistant may see: a name and how many portions a plate is. */
 export interface ClientSummaryDto {

@@ -4,6 +4,7 @@ import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { NET_CARB_RULES, type AtwaterCheck, type NetCarbRuleKind, type NutrientNumbers } from '../domain/nutrition';
 import { AmountParseError, isMassUnit, isVolumeUnit, parseAmount, unitKind, UnknownUnitError } from '../domain/units';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 /** Ingredient library, recipe calculation and the net-carb setting: inputs (zod) and DTOs for API and client. */
 
@@ -238,7 +239,7 @@ export type IngredientInput = z.input<typeof ingredientInputSchema>;
 export type IngredientValues = z.output<typeof ingredientInputSchema>;
 
 export const ingredientUpdateSchema = ingredientFields
-  .extend({ version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }) })
+  .extend({ version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }).max(PG_INT_MAX, TOO_LARGE) })
   .superRefine(crossCheck);
 export type IngredientUpdateInput = z.input<typeof ingredientUpdateSchema>;
 export type IngredientUpdateValues = z.output<typeof ingredientUpdateSchema>;
@@ -269,7 +270,7 @@ export type IngredientListQuery = z.input<typeof ingredientListQuerySchema>;
 /** The list filters with their defaults filled in (what the client keeps and sends). */
 export type IngredientListParams = z.output<typeof ingredientListQuerySchema>;
 
-export const ingredientIdParams = z.object({ id: z.coerce.number().int().positive({ message: 'Not an ingredient id' }) });
+export const ingredientIdParams = z.object({ id: z.coerce.number().int().positive({ message: 'Not an ingredient id' }).max(PG_INT_MAX, TOO_LARGE) });
 
 // ---------------------------------------------------------------------------------------------------------------
 // Recipe calculation
@@ -279,7 +280,7 @@ export const ingredientIdParams = z.object({ id: z.coerce.number().int().positiv
 const CANONICAL_POSITIVE = /^(?:[1-9]\d*(?:\.\d*[1-9])?|0\.\d*[1-9])$/;
 
 export const recipeItemSchema = z.object({
-  ingredientId: z.coerce.number({ message: 'Choose an ingredient' }).int().positive({ message: 'Choose an ingredient' }),
+  ingredientId: z.coerce.number({ message: 'Choose an ingredient' }).int().positive({ message: 'Choose an ingredient' }).max(PG_INT_MAX, TOO_LARGE),
   /** The amount as typed ('1 1/2', '¾', '1-2' → midpoint) or a number. */
   amount: z.union([z.string(), z.number()]).transform((v, ctx) => {
     // Already a canonical positive decimal ("250", "12.5"): it is its own exact value (the form sends these).
@@ -327,7 +328,7 @@ export const NET_CARB_RULE_KINDS = NET_CARB_RULES.map((r) => r.kind) as [NetCarb
 
 export const workspaceSettingsUpdateSchema = z.object({
   netCarbRule: z.enum(NET_CARB_RULE_KINDS, { message: 'Choose a net-carb rule' }),
-  version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }),
+  version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }).max(PG_INT_MAX, TOO_LARGE),
 });
 export type WorkspaceSettingsUpdateInput = z.input<typeof workspaceSettingsUpdateSchema>;
 

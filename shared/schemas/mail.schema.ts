@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 export const MAIL_KINDS = ['invitation', 'password-reset', 'week-plan', 'shopping-list', 'bake-run', 'prep-day'] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];
@@ -6,7 +7,7 @@ export type MailKind = (typeof MAIL_KINDS)[number];
 export const OUTBOX_STATUSES = ['queued', 'sending', 'sent', 'failed', 'retrying'] as const;
 export type OutboxStatus = (typeof OUTBOX_STATUSES)[number];
 
-const id = z.coerce.number().int().positive();
+const id = z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE);
 
 export const outboxListQuerySchema = z.object({
   page: z.coerce.number().int().min(1).default(1),

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { isIsoDate } from '../domain/iso-date';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 export const PREP_NOTE_MAX = 1000;
 export const PREP_ALSO_TO_MAX = 5;
@@ -9,7 +10,7 @@ export const sendPrepDaySchema = z.object({
   prepDate: z.string().refine(isIsoDate, { message: 'Give the prep date as YYYY-MM-DD' }),
   note: z.string().trim().max(PREP_NOTE_MAX, { message: `At most ${PREP_NOTE_MAX} characters` }).optional(),
   /** The kitchen assistants (user ids) to send to; absent: every assistant of the workspace. */
-  assistantIds: z.array(z.number().int().positive()).max(50).optional(),
+  assistantIds: z.array(z.number().int().positive().max(PG_INT_MAX, TOO_LARGE)).max(50).optional(),
   /**
    * Addresses without an account (a kitchen's shared inbox): their papers are in the sender's measures and their
    * e-mail has no link into Trayline.

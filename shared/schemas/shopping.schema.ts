@@ -7,6 +7,7 @@ import { isIsoDate } from '../domain/iso-date';
 import { LABEL_SHEET_CODES } from '../domain/label-sheets';
 import type { AllergenCode } from '../domain/allergens';
 import type { LabelSheetCode } from '../domain/label-sheets';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 const PLAIN_DECIMAL = /^(?:\d+(?:\.\d*)?|\.\d+)$/;
 
@@ -38,7 +39,7 @@ const unitField = z.string({ message: 'Choose a unit' }).trim().min(1, { message
 // ---------------------------------------------------------------------------------------------------------------
 
 export const pantryCreateSchema = z.object({
-  ingredientId: z.coerce.number({ message: 'Choose an ingredient' }).int().positive({ message: 'Choose an ingredient' }),
+  ingredientId: z.coerce.number({ message: 'Choose an ingredient' }).int().positive({ message: 'Choose an ingredient' }).max(PG_INT_MAX, TOO_LARGE),
   amount: amountField,
   /** Any unit the ingredient can be converted from (g, oz, cup with a density, a piece name…). */
   unit: unitField,
@@ -49,12 +50,12 @@ export type PantryCreateValues = z.output<typeof pantryCreateSchema>;
 export const pantryUpdateSchema = z.object({
   amount: amountField,
   unit: unitField,
-  version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }),
+  version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }).max(PG_INT_MAX, TOO_LARGE),
 });
 export type PantryUpdateInput = z.input<typeof pantryUpdateSchema>;
 export type PantryUpdateValues = z.output<typeof pantryUpdateSchema>;
 
-export const pantryIdParams = z.object({ id: z.coerce.number().int().positive() });
+export const pantryIdParams = z.object({ id: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
 
 export interface PantryItemDto {
   id: number;
@@ -78,11 +79,11 @@ export interface PantryListDto {
 // Shopping list
 // ---------------------------------------------------------------------------------------------------------------
 
-export const weekIdParams = z.object({ weekId: z.coerce.number().int().positive() });
+export const weekIdParams = z.object({ weekId: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
 
 export const checkParams = z.object({
-  weekId: z.coerce.number().int().positive(),
-  ingredientId: z.coerce.number().int().positive(),
+  weekId: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE),
+  ingredientId: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE),
 });
 
 /** A prep date as YYYY-MM-DD. */
@@ -107,11 +108,11 @@ export type CheckBodyInput = z.input<typeof checkBodySchema>;
 /** Needs given directly (before or beside a prep week): trays × counts and add-on amounts. */
 export const shoppingNeedsSchema = z.object({
   trays: z
-    .array(z.object({ trayId: z.coerce.number().int().positive(), count: z.coerce.number().int().min(0).max(1000) }))
+    .array(z.object({ trayId: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE), count: z.coerce.number().int().min(0).max(1000) }))
     .max(200)
     .default([]),
   addOns: z
-    .array(z.object({ ingredientId: z.coerce.number().int().positive(), amount: amountField, unit: unitField }))
+    .array(z.object({ ingredientId: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE), amount: amountField, unit: unitField }))
     .max(2000)
     .default([]),
 });

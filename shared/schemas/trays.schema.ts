@@ -5,6 +5,7 @@ import { DEFAULT_BAKE_RULES, type BakeRuleCategory } from '../domain/bake-rules-
 import { parseAmount } from '../domain/units';
 import type { NutrientNumbers } from '../domain/nutrition';
 import type { EnergyShares } from '../domain/nutrition';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 /** Base trays: inputs (zod) and response DTOs, shared by the API and the client. */
 
@@ -66,7 +67,7 @@ export const cutPlanSchema = z.discriminatedUnion('kind', [
 export type CutPlanInput = z.infer<typeof cutPlanSchema>;
 
 export const trayLineSchema = z.object({
-  ingredientId: z.coerce.number({ message: 'Choose an ingredient' }).int().positive({ message: 'Choose an ingredient' }),
+  ingredientId: z.coerce.number({ message: 'Choose an ingredient' }).int().positive({ message: 'Choose an ingredient' }).max(PG_INT_MAX, TOO_LARGE),
   /** The amount as typed: 2, 1.5, 1 1/2, 1½, a range 1-2 (its midpoint is used). */
   amountText: z
     .string()
@@ -132,12 +133,12 @@ export const createTraySchema = trayInputSchema;
 export type CreateTrayInput = TrayInput;
 
 export const updateTraySchema = trayInputSchema.extend({
-  version: z.coerce.number().int().min(1),
+  version: z.coerce.number().int().min(1).max(PG_INT_MAX, TOO_LARGE),
   archived: z.boolean().optional(),
 });
 export type UpdateTrayInput = z.input<typeof updateTraySchema>;
 
-export const trayIdParams = z.object({ id: z.coerce.number().int().positive() });
+export const trayIdParams = z.object({ id: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
 
 const allergenList = z
   .union([z.string(), z.array(z.string())])

@@ -1,10 +1,11 @@
 import { z } from 'zod';
 import type { OutboxItemDto } from './mail.schema';
 import { isoDate } from './weeks.schema';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 /** Sending a published prep week to clients (e-mail with the week-plan PDF) and the delivery log. */
 
-const id = z.coerce.number().int().positive();
+const id = z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE);
 
 export const weekSendParams = z.object({ weekId: id });
 export const weekClientPlanParams = z.object({ weekId: id, clientId: id });
@@ -17,7 +18,7 @@ export const NOTE_MAX = 1000;
 
 export const sendWeekSchema = z.object({
   /** Omitted: every client on the published board that has an e-mail. */
-  clientIds: z.array(z.number().int().positive()).min(1).max(500).optional(),
+  clientIds: z.array(z.number().int().positive().max(PG_INT_MAX, TOO_LARGE)).min(1).max(500).optional(),
   /** The coach's personal note, in the e-mail and on the PDF. */
   note: z.string().trim().max(NOTE_MAX, { message: `At most ${NOTE_MAX} characters` }).optional(),
   /**

@@ -7,11 +7,12 @@ import type { MacroTargets } from '../domain/targets';
 import type { CellResult } from '../domain/week-board';
 import type { DayTotals, WordedWarning } from '../domain/week-check';
 import type { AssemblyDto, PlateMacrosDto } from './assemblies.schema';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 /** Prep weeks, the week board, publishing. */
 
 export const isoDate = z.string().refine(isIsoDate, { message: 'Use a date like 2026-01-04' });
-const version = z.number().int().positive();
+const version = z.number().int().positive().max(PG_INT_MAX, TOO_LARGE);
 const allergen = z.enum(ALLERGEN_CODES as unknown as [AllergenCode, ...AllergenCode[]]);
 
 export const WEEK_DAYS = 7;
@@ -44,11 +45,11 @@ export const allergenOverrideSchema = z.object({
 });
 
 export const cellInputSchema = z.object({
-  clientId: z.number().int().positive(),
+  clientId: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE),
   date: isoDate,
   slot: z.string().trim().min(1).max(40),
   /** null empties the cell. */
-  assemblyId: z.number().int().positive().nullable(),
+  assemblyId: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE).nullable(),
   /** Take the portions from this prep date (null = the default: the latest on or before the day). */
   prepDate: isoDate.nullable().optional(),
   storage: z.enum(['fridge', 'frozen']).default('fridge'),
@@ -62,7 +63,7 @@ export type PutCellsInput = z.input<typeof putCellsSchema>;
 export const putTraysSchema = z.object({
   version,
   trays: z
-    .array(z.object({ trayId: z.number().int().positive(), prepDate: isoDate, trayCount: z.number().int().min(0).max(200) }))
+    .array(z.object({ trayId: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE), prepDate: isoDate, trayCount: z.number().int().min(0).max(200) }))
     .max(200),
 });
 export type PutTraysInput = z.input<typeof putTraysSchema>;
@@ -74,7 +75,7 @@ export const copyDaySchema = z.object({
   fromDate: isoDate,
   toDate: isoDate,
   /** Only this client's row; all clients when missing. */
-  clientId: z.number().int().positive().optional(),
+  clientId: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE).optional(),
 });
 export type CopyDayInput = z.input<typeof copyDaySchema>;
 
@@ -86,7 +87,7 @@ export const copyWeekSchema = z.object({
 });
 export type CopyWeekInput = z.input<typeof copyWeekSchema>;
 
-export const weekIdParams = z.object({ id: z.coerce.number().int().positive() });
+export const weekIdParams = z.object({ id: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
 
 export type WeekStatus = 'draft' | 'published';
 

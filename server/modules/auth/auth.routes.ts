@@ -22,6 +22,7 @@ import * as auth from './auth.service.js';
 import { NO_WORKSPACE, authenticateLocal, signIn, signOut } from './passport.js';
 import type { IInvitation } from './user.entity.js';
 import type { MailQueue } from '../mail/mail.service.js';
+import { PG_INT_MAX, TOO_LARGE } from '@shared/schemas/ids.js';
 
 const FIFTEEN_MIN = 15 * 60_000;
 
@@ -164,7 +165,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
     }),
   );
 
-  const idParams = z.object({ id: z.coerce.number().int().positive() });
+  const idParams = z.object({ id: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
   r.delete(
     '/invitations/:id',
     allow('coach'),

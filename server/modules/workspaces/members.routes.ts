@@ -4,8 +4,9 @@ import { actorOf, allow } from '../../http/authz.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import { listMembers, removeMember } from './members.service.js';
+import { PG_INT_MAX, TOO_LARGE } from '@shared/schemas/ids.js';
 
-const memberIdParams = z.object({ id: z.coerce.number().int().positive() });
+const memberIdParams = z.object({ id: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
 
 /** The coach's team: who has access to the workspace, and ending someone's access. */
 export function memberRoutes() {

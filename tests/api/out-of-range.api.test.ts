@@ -1,0 +1,57 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import express from 'express';
+import request from 'supertest';
+import { errorHandler } from '@server/http/error-handler.js';
+import { testApp } from '../support/test-app.js';
+import { coachWorkspace, type Member } from '../support/factories.js';
+import { listApiRoutes } from '../support/routes.js';
+
+// 2^31 − 1 is the largest PostgreSQL `integer` (PostgreSQL manual, "Numeric Types": integer, −2147483648 to
+// +2147483647); ids and versions are such integers.
+const PAST_INTEGER = 2_147_483_648;
+
+let app: Express;
+let coach: Member;
+beforeAll(async () => {
+  app = (await testApp()).app;
+  coach = await coachWorkspace(app);
+});
+
+describe('numbers past the database integer range', () => {
+  it('every route with an id in its path answers 400 naming it (or 404), never 500', async () => {
+    const routes = listApiRoutes(app).filter((r) => /:(\w*[iI]d)\b/.test(r.path));
+    expect(routes.length).toBeGreaterThan(20);
+    const answers: string[] = [];
+    for (const r of routes) {
+      const path = r.path.replace(/:(\w*[iI]d)\b/g, String(PAST_INTEGER));
+      const m = r.method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
+      const res = await coach.agent[m](path).set('x-trayline-csrf', '1').send({});
+      answers.push(`${r.method} ${r.path} ${res.status}`);
+      if (res.status === 400) expect(Object.keys(res.body.errors ?? {}).length, `${r.method} ${r.path}`).toBeGreaterThan(0);
+    }
+    expect(answers.filter((a) => !/ (400|403|404)$/.test(a))).toEqual([]);
+  });
+
+  it('ids and versions in bodies are 400s naming the field', async () => {
+    const calc = await coach.agent
+      .post('/api/calc/recipe')
+      .set('x-trayline-csrf', '1')
+      .send({ items: [{ ingredientId: PAST_INTEGER, amount: '5', unit: 'g' }], portions: 1 })
+      .expect(400);
+    expect(Object.keys(calc.body.errors)).toEqual(['items.0.ingredientId']);
+    const week = (await coach.agent.post('/api/weeks').set('x-trayline-csrf', '1').send({ name: 'Range week', startDate: '2027-01-04', prepDate: '2027-01-03' }).expect(201)).body;
+    const stale = await coach.agent.patch(`/api/weeks/${week.week.id}`).set('x-trayline-csrf', '1').send({ version: PAST_INTEGER, name: 'x' }).expect(400);
+    expect(Object.keys(stale.body.errors)).toEqual(['version']);
+  });
+
+  it("the error handler answers PostgreSQL's out-of-range error (22003) with a 400, as a last line behind the schemas", async () => {
+    const probe = express();
+    probe.get('/boom', () => {
+      throw Object.assign(new Error('value "99999999999" is out of range for type integer'), { code: '22003' });
+    });
+    probe.use(errorHandler());
+    const res = await request(probe).get('/boom').expect(400);
+    expect(res.body).toMatchObject({ status: 400, code: 'out_of_range', detail: 'A number in the request is out of range' });
+  });
+});
