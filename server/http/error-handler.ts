@@ -70,10 +70,13 @@ export function errorHandler() {
             ? 'The request body is too large'
             : 'The request body could not be read';
       body = problem(status, err.type === 'entity.too.large' ? 'too_large' : 'bad_body', detail);
-    } else if (isOutOfRange(err)) {
+    } else if (pgCode(err) === '22003') {
       // The schemas bound ids and versions (shared/schemas/ids.ts); a number that still reaches a column too small
       // for it is the request's fault, not the server's.
       body = problem(400, 'out_of_range', 'A number in the request is out of range');
+    } else if (pgCode(err) === '22021' || pgCode(err) === '22P05') {
+      // Text PostgreSQL cannot store (validated() refuses NUL characters first, naming the field).
+      body = problem(400, 'bad_text', 'Some text in the request cannot be stored');
     } else if (err instanceof ConnectionException || isConnectionError(err)) {
       req.log?.warn({ err }, 'database unavailable');
       body = problem(503, 'db_unavailable', 'The database is not reachable; try again shortly', { requestId });
@@ -93,10 +96,11 @@ function isBodyParserError(err: unknown): err is { status?: number; type?: strin
     String((err as { type: string }).type).startsWith('entity.');
 }
 
-/** PostgreSQL's numeric_value_out_of_range (22003), as the driver or MikroORM's wrapper carries it. */
-function isOutOfRange(err: unknown): boolean {
-  const e = err as { code?: string; cause?: { code?: string } } | null;
-  return e?.code === '22003' || e?.cause?.code === '22003';
+/** A PostgreSQL error code (SQLSTATE), as the driver or MikroORM's wrapper carries it. */
+function pgCode(err: unknown): string | undefined {
+  const e = err as { code?: unknown; cause?: { code?: unknown } } | null;
+  const code = e?.code ?? e?.cause?.code;
+  return typeof code === 'string' ? code : undefined;
 }
 
 function isConnectionError(err: unknown): boolean {

@@ -1,12 +1,41 @@
 import type { NextFunction, Request, Response } from 'express';
 import type { z } from 'zod';
+import { ValidationError } from './errors.js';
 
 type Schemas = { body?: z.ZodType; params?: z.ZodType; query?: z.ZodType };
 type Out<S, K extends keyof S> = S[K] extends z.ZodType ? z.output<S[K]> : undefined;
 export type Valid<S extends Schemas> = { body: Out<S, 'body'>; params: Out<S, 'params'>; query: Out<S, 'query'> };
 
+/**
+ * The path of the first text holding a NUL character (U+0000), or null. PostgreSQL's text cannot store it, so such a
+ * request would fail in the database; it is a 400 naming the field instead.
+ */
+function nulPath(value: unknown, path: string[] = []): string[] | null {
+  if (!hasNul(value)) return null;
+  if (typeof value === 'string') return path;
+  for (const [k, v] of Object.entries(value as object)) {
+    const found = nulPath(v, [...path, k]);
+    if (found) return found;
+  }
+  return null;
+}
+
+/** The quick test (every request's input passes here): no paths built, no arrays copied. */
+function hasNul(value: unknown): boolean {
+  if (typeof value === 'string') return value.indexOf('\u0000') !== -1;
+  if (value === null || typeof value !== 'object') return false;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) if (hasNul(value[i])) return true;
+    return false;
+  }
+  for (const k in value) if (hasNul((value as Record<string, unknown>)[k])) return true;
+  return false;
+}
+
 /** Marks a zod error with where it came from, so the 400 names `body.field` etc. */
 function parseIn<T extends z.ZodType>(where: 'body' | 'params' | 'query', schema: T, value: unknown): z.output<T> {
+  const nul = nulPath(value);
+  if (nul) throw ValidationError.field(nul.length ? nul.join('.') : where, 'Text cannot hold a NUL character');
   const result = schema.safeParse(value);
   if (!result.success) {
     (result.error as unknown as { where: string }).where = where;

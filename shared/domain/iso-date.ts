@@ -10,6 +10,8 @@
 export type IsoDate = string;
 
 const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
+const MIN_YEAR = 1900;
+const MAX_YEAR = 2999;
 const MS_PER_DAY = 86_400_000;
 
 /**
@@ -21,13 +23,17 @@ const CACHE_LIMIT = 4_096;
 const parsed = new Map<string, number>();
 const written = new Map<number, IsoDate>();
 
-/** True when `value` is a real calendar date written 'YYYY-MM-DD' (so '2025-02-30' is false). */
+/**
+ * True when `value` is a real calendar date written 'YYYY-MM-DD' (so '2025-02-30' is false), in the years 1900 to
+ * 2999: the dates of plans, far enough from year 9999 that a week's arithmetic stays in four-digit years.
+ */
 export function isIsoDate(value: unknown): value is IsoDate {
   if (typeof value !== 'string') return false;
   if (parsed.has(value)) return true;
   const match = ISO_DATE.exec(value);
   if (!match) return false;
   const [, y, m, d] = match.map(Number);
+  if (y < MIN_YEAR || y > MAX_YEAR) return false;
   const date = new Date(0);
   date.setUTCFullYear(y, m - 1, d);
   return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d;

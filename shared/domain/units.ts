@@ -447,6 +447,10 @@ function parseSingle(part: string, text: string): Decimal {
  *   and text keeps what was typed. A range must go up (`2-1` is refused).
  * Negative amounts and anything else throw AmountParseError with a message that can be shown as is.
  */
+/** The largest amount a recipe line, add-on, pantry row or shopping need may hold, in any unit. */
+export const MAX_AMOUNT = 1_000_000;
+export const MAX_AMOUNT_MESSAGE = 'The amount must be at most 1,000,000';
+
 export function parseAmount(input: string): ParsedAmount {
   const text = String(input ?? '').replace(/\u00a0/g, ' ').trim().replace(/\s+/g, ' ');
   if (text === '') throw new AmountParseError(text, 'Enter an amount.');

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { NET_CARB_RULES, type AtwaterCheck, type NetCarbRuleKind, type NutrientNumbers } from '../domain/nutrition';
-import { AmountParseError, isMassUnit, isVolumeUnit, parseAmount, unitKind, UnknownUnitError } from '../domain/units';
+import { AmountParseError, isMassUnit, isVolumeUnit, MAX_AMOUNT, MAX_AMOUNT_MESSAGE, parseAmount, unitKind, UnknownUnitError } from '../domain/units';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 /** Ingredient library, recipe calculation and the net-carb setting: inputs (zod) and DTOs for API and client. */
@@ -284,11 +284,23 @@ export const recipeItemSchema = z.object({
   /** The amount as typed ('1 1/2', '¾', '1-2' → midpoint) or a number. */
   amount: z.union([z.string(), z.number()]).transform((v, ctx) => {
     // Already a canonical positive decimal ("250", "12.5"): it is its own exact value (the form sends these).
-    if (typeof v === 'string' && CANONICAL_POSITIVE.test(v)) return v;
+    if (typeof v === 'string' && CANONICAL_POSITIVE.test(v)) {
+      // Seven or more whole digits may pass the largest amount (a cheap test first: this is every keystroke's path).
+      const wholeDigits = v.includes('.') ? v.indexOf('.') : v.length;
+      if (wholeDigits >= 7 && new Decimal(v).gt(MAX_AMOUNT)) {
+        ctx.addIssue({ code: 'custom', message: MAX_AMOUNT_MESSAGE });
+        return z.NEVER;
+      }
+      return v;
+    }
     try {
       const parsed = parseAmount(String(v));
       if (parsed.value.lte(0)) {
         ctx.addIssue({ code: 'custom', message: 'The amount must be above 0' });
+        return z.NEVER;
+      }
+      if (parsed.value.gt(MAX_AMOUNT)) {
+        ctx.addIssue({ code: 'custom', message: MAX_AMOUNT_MESSAGE });
         return z.NEVER;
       }
       return parsed.value.toFixed();

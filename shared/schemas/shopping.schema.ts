@@ -4,6 +4,7 @@
 import Decimal from 'decimal.js';
 import { z } from 'zod';
 import { isIsoDate } from '../domain/iso-date';
+import { MAX_AMOUNT, MAX_AMOUNT_MESSAGE } from '../domain/units';
 import { LABEL_SHEET_CODES } from '../domain/label-sheets';
 import type { AllergenCode } from '../domain/allergens';
 import type { LabelSheetCode } from '../domain/label-sheets';
@@ -25,8 +26,8 @@ export const amountField = z
       return z.NEVER;
     }
     const d = new Decimal(s);
-    if (d.gt(1_000_000)) {
-      ctx.addIssue({ code: 'custom', message: 'The amount must be at most 1,000,000' });
+    if (d.gt(MAX_AMOUNT)) {
+      ctx.addIssue({ code: 'custom', message: MAX_AMOUNT_MESSAGE });
       return z.NEVER;
     }
     return d.toDecimalPlaces(4, Decimal.ROUND_HALF_UP).toFixed();

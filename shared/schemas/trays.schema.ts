@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { DEFAULT_BAKE_RULES, type BakeRuleCategory } from '../domain/bake-rules-defaults';
-import { parseAmount } from '../domain/units';
+import { MAX_AMOUNT, MAX_AMOUNT_MESSAGE, parseAmount } from '../domain/units';
 import type { NutrientNumbers } from '../domain/nutrition';
 import type { EnergyShares } from '../domain/nutrition';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
@@ -76,7 +76,9 @@ export const trayLineSchema = z.object({
     .max(40)
     .superRefine((text, ctx) => {
       try {
-        if (parseAmount(text).value.lte(0)) ctx.addIssue({ code: 'custom', message: 'The amount must be above 0' });
+        const { value } = parseAmount(text);
+        if (value.lte(0)) ctx.addIssue({ code: 'custom', message: 'The amount must be above 0' });
+        else if (value.gt(MAX_AMOUNT)) ctx.addIssue({ code: 'custom', message: MAX_AMOUNT_MESSAGE });
       } catch (e) {
         ctx.addIssue({ code: 'custom', message: e instanceof Error ? e.message : 'Could not read this amount' });
       }

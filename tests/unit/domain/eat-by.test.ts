@@ -115,7 +115,9 @@ describe('eat-by date: prep date is day 0, eat-by = prep + fridge days', () => {
     );
   });
 
-  it.each(['2025-02-30', '2025-13-01', '25-01-05', '2025-1-5', ''])('rejects %s', (bad) => {
+  // Plan dates run from 1900 to 2999 (common practice for this app, no source: far from year 9999, where adding days
+  // would leave four-digit years).
+  it.each(['2025-02-30', '2025-13-01', '25-01-05', '2025-1-5', '', '9999-12-31', '0000-01-01', '1899-12-31', '3000-01-01'])('rejects %s', (bad) => {
     expect(() => eatByDate(bad, 4)).toThrow(RangeError);
   });
 

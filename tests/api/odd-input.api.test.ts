@@ -4,7 +4,7 @@ import express from 'express';
 import request from 'supertest';
 import { errorHandler } from '@server/http/error-handler.js';
 import { testApp } from '../support/test-app.js';
-import { coachWorkspace, type Member } from '../support/factories.js';
+import { coachWorkspace, makeIngredient, type Member } from '../support/factories.js';
 import { listApiRoutes } from '../support/routes.js';
 
 // 2^31 − 1 is the largest PostgreSQL `integer` (PostgreSQL manual, "Numeric Types": integer, −2147483648 to
@@ -55,3 +55,40 @@ describe('numbers past the database integer range', () => {
     expect(res.body).toMatchObject({ status: 400, code: 'out_of_range', detail: 'A number in the request is out of range' });
   });
 });
+
+describe('text, amounts and dates the database or the calendar cannot hold', () => {
+  it('a NUL character in a query, a body or a nested field is a 400 naming it', async () => {
+    const q = await coach.agent.get('/api/ingredients?q=egg%00').expect(400);
+    expect(q.body.errors).toEqual({ q: ['Text cannot hold a NUL character'] });
+    const body = await coach.agent.post('/api/clients').set('x-trayline-csrf', '1').send({ name: 'Nul\u0000 client' }).expect(400);
+    expect(body.body.errors).toEqual({ name: ['Text cannot hold a NUL character'] });
+    const nested = await coach.agent
+      .post('/api/calc/recipe')
+      .set('x-trayline-csrf', '1')
+      .send({ items: [{ ingredientId: 1, amount: '5', unit: 'g\u0000' }], portions: 1 })
+      .expect(400);
+    expect(Object.keys(nested.body.errors)).toEqual(['items.0.unit']);
+  });
+
+  it('an amount past 1,000,000 (in any unit) is a 400 naming it, typed or canonical', async () => {
+    const ingredient = await makeIngredient(coach);
+    for (const amount of ['9'.repeat(400), '1000000.5', '2 000 000']) {
+      const res = await coach.agent
+        .post('/api/calc/recipe')
+        .set('x-trayline-csrf', '1')
+        .send({ items: [{ ingredientId: ingredient.id, amount, unit: 'g' }], portions: 1 });
+      expect(res.status, amount).toBe(400);
+      expect(Object.keys(res.body.errors), amount).toEqual(['items.0.amount']);
+    }
+    // The largest allowed amount still computes.
+    await coach.agent.post('/api/calc/recipe').set('x-trayline-csrf', '1').send({ items: [{ ingredientId: ingredient.id, amount: '1000000', unit: 'g' }], portions: 1 }).expect(200);
+  });
+
+  it('a week dated in year 9999 or year 0 is a 400 naming the date', async () => {
+    for (const [startDate, prepDate] of [['9999-12-27', '9999-12-26'], ['0000-01-03', '0000-01-02']]) {
+      const res = await coach.agent.post('/api/weeks').set('x-trayline-csrf', '1').send({ name: 'Odd week', startDate, prepDate }).expect(400);
+      expect(Object.keys(res.body.errors).sort()).toEqual(['prepDate', 'startDate']);
+    }
+  });
+});
+
