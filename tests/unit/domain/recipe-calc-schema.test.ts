@@ -9,16 +9,30 @@ const amountOf = (amount: string | number) =>
 
 describe('recipe calculation input: amounts', () => {
   it('property: an amount already written as decimal.js writes it comes back as it is, as parseAmount reads it (fast-check)', () => {
-    // Positive decimals up to 6 places: their canonical text (Decimal#toFixed) takes the short path.
+    // Positive decimals up to 6 places and up to the largest amount (1,000,000): their canonical text
+    // (Decimal#toFixed) takes the short path.
     const positive = fc
-      .tuple(fc.bigInt({ min: 1n, max: 10n ** 12n }), fc.integer({ min: 0, max: 6 }))
-      .map(([units, places]) => new Decimal(units.toString()).div(new Decimal(10).pow(places)).toFixed());
+      .integer({ min: 0, max: 6 })
+      .chain((places) =>
+        fc.bigInt({ min: 1n, max: 10n ** BigInt(6 + places) }).map((units) => new Decimal(units.toString()).div(new Decimal(10).pow(places)).toFixed()),
+      );
     fc.assert(
       fc.property(positive, (text) => {
         const r = amountOf(text);
         expect(r.success).toBe(true);
         expect(r.success && r.data.items[0].amount).toBe(text);
         expect(parseAmount(text).value.toFixed()).toBe(text);
+      }),
+    );
+  });
+
+  it('property: an amount past 1,000,000, canonical or typed, is refused naming the amount (fast-check)', () => {
+    const past = fc.bigInt({ min: 1n, max: 10n ** 30n }).map((extra) => new Decimal(10).pow(6).plus(new Decimal(extra.toString()).div(1000)).toFixed());
+    fc.assert(
+      fc.property(past, fc.boolean(), (text, typed) => {
+        const r = amountOf(typed ? ` ${text} ` : text);
+        expect(r.success).toBe(false);
+        expect(!r.success && r.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`)).toEqual(['items.0.amount: The amount must be at most 1,000,000']);
       }),
     );
   });
