@@ -92,3 +92,25 @@ describe('text, amounts and dates the database or the calendar cannot hold', () 
   });
 });
 
+
+describe('bodies of the wrong shape', () => {
+  it('no route answers 5xx to an empty, a list, a text or a deeply nested body', async () => {
+    const deep: Record<string, unknown> = {};
+    let at = deep;
+    for (let i = 0; i < 60; i++) at = (at.x = {}) as Record<string, unknown>;
+    const bodies: unknown[] = [{}, [], 'text', 42, null, deep, { version: 'x', id: -1, name: 7, items: {}, cells: 'x', trays: [null] }];
+    const failures: string[] = [];
+    for (const r of listApiRoutes(app).filter((x) => x.method !== 'GET' && x.method !== 'DELETE')) {
+      // Signing out or in would change the session the other calls use.
+      if (r.path.startsWith('/api/auth/')) continue;
+      const path = r.path.replace(/:(\w*[iI]d)\b/g, '1').replace(/:token\b/, 'unknown-token-unknown-token');
+      const m = r.method.toLowerCase() as 'post' | 'put' | 'patch';
+      for (const body of bodies) {
+        const req = coach.agent[m](path).set('x-trayline-csrf', '1').set('content-type', 'application/json');
+        const res = await req.send(JSON.stringify(body));
+        if (res.status >= 500) failures.push(`${r.method} ${r.path} ${JSON.stringify(body).slice(0, 40)} → ${res.status} ${res.body?.detail ?? ''}`);
+      }
+    }
+    expect(failures).toEqual([]);
+  });
+});
