@@ -14,3 +14,9 @@ export function dayLabel(iso: string, longWeekday = false): string {
 export function nextPrepDayTitle(date: string, today: string): string {
   return `Next prep day: ${dayLabel(date, true)}${date === today ? ' (today)' : ''}`;
 }
+
+/** Today on this device, as a calendar date (what "today's plate" means to the person holding the phone). */
+export function localToday(): string {
+  const d = new Date();
+  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
+}

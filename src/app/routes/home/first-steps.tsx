@@ -3,7 +3,8 @@ import { useQuery } from '@tanstack/react-query';
 import type { SetupCountsDto } from '@shared/schemas/weeks.schema';
 import { Card, ErrorState, Progress, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
-import { glanceQuery, localToday } from '@/features/weeks/api/weeks.queries';
+import { glanceQuery } from '@/features/weeks/api/weeks.queries';
+import { localToday } from '@/lib/dates';
 
 interface Step {
   count: keyof SetupCountsDto;

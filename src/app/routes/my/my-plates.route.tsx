@@ -5,7 +5,8 @@ import { thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat
 import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
 import type { MyPlateDto } from '@shared/schemas/weeks.schema';
-import { localToday, myWeekQuery } from '@/features/weeks/api/weeks.queries';
+import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
+import { localToday } from '@/lib/dates';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/week-mail/api/week-mail.queries';

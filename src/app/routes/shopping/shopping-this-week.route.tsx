@@ -1,6 +1,6 @@
 import { nextTripOf } from '@shared/domain/week-board';
 import { CurrentWeekRedirect } from '@/features/shopping/components/current-week-redirect';
-import { localToday } from '@/features/weeks/api/weeks.queries';
+import { localToday } from '@/lib/dates';
 import { paths } from '@/config/paths';
 
 /** "Shopping list" in the navigation: this week's list (in a week with two prep days, the next prep day's). */

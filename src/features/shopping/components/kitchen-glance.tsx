@@ -6,7 +6,7 @@ import { Card, EmptyState, Notice, Progress, QueryView, Skeleton } from '@/compo
 import { paths } from '@/config/paths';
 import { TileLink } from '@/components/ui/tile-link';
 import { dayLabel, nextPrepDayTitle } from '@/lib/dates';
-import { localToday } from '@/features/weeks/api/weeks.queries';
+import { localToday } from '@/lib/dates';
 import { currentWeekQuery, shoppingListQuery } from '../api/shopping.queries';
 
 function ShoppingProgress({ weekId, prepDate }: { weekId: number; prepDate: string | null }) {

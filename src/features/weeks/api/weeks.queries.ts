@@ -4,12 +4,6 @@ import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import { api, qs } from '@/lib/api-client';
 import { weekKeys } from './weeks.keys';
 
-/** Today on this device, as a calendar date (what "today's plate" means to the person holding the phone). */
-export function localToday(): string {
-  const d = new Date();
-  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
-}
-
 export const weeksQuery = () => queryOptions({ queryKey: weekKeys.list(), queryFn: () => api.get<WeekSummaryDto[]>('/weeks') });
 
 export const boardQuery = (id: number) =>

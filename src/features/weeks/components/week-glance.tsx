@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { glanceQuery, localToday } from '../api/weeks.queries';
+import { glanceQuery } from '../api/weeks.queries';
+import { localToday } from '@/lib/dates';
 import { Card, ErrorState, Notice, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { agrees, counted } from '@/lib/words';
