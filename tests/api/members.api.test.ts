@@ -48,6 +48,21 @@ describe('the team: who has access, and ending it', () => {
     await theirs.agent.get('/api/clients').expect(200);
   });
 
+  it('gives access back through a new invitation: the same account joins with its own password', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const id = (await coach.agent.get('/api/members').expect(200)).body.find((m: { userId: number }) => m.userId === assistant.userId).id;
+    await coach.agent.delete(`/api/members/${id}`).expect(204);
+    const inv = await coach.agent.post('/api/invitations').send({ email: assistant.email, role: 'assistant' }).expect(201);
+    const token = String(inv.body.link).split('/invite/')[1];
+    const back = agentFor(app);
+    const wrong = await back.post(`/api/invitations/${token}/accept`).set('x-trayline-csrf', '1').send({ name: 'Someone else', password: 'not-their-password' }).expect(400);
+    expect(wrong.body.errors).toEqual({ password: ['This e-mail already has an account: enter its password to join'] });
+    const joined = await back.post(`/api/invitations/${token}/accept`).set('x-trayline-csrf', '1').send({ name: 'ignored', password: PASSWORD }).expect(200);
+    expect(joined.body).toMatchObject({ id: assistant.userId, role: 'assistant', workspaceId: coach.workspaceId });
+    await back.get('/api/clients').expect(200);
+  });
+
   it("refuses to remove a coach (409) and answers 400 naming the id for a bad one", async () => {
     const coach = await coachWorkspace(app);
     const own = (await coach.agent.get('/api/members').expect(200)).body[0];
