@@ -1,16 +1,12 @@
 import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
-import type { MeDto } from '@shared/schemas/auth.schema';
 import { ClientForm, emptyClient } from '@/features/clients/components/client-form';
-import { queryClientFor, renderInApp, signedIn } from './render';
-
-const coach = (unitSystem: MeDto['unitSystem']) => signedIn({ unitSystem });
+import { renderInApp } from './render';
 
 describe('height and weight in US measures', () => {
   it("a US coach types feet, inches and pounds; the profile gets centimetres and kilograms", async () => {
-    const qc = queryClientFor(coach('us'));
     const onSubmit = vi.fn();
-    renderInApp(<ClientForm initial={{ ...emptyClient, name: 'Ana Example' }} submitLabel="Save client" onSubmit={onSubmit} />, qc);
+    renderInApp(<ClientForm initial={{ ...emptyClient, name: 'Ana Example' }} submitLabel="Save client" unitSystem="us" onSubmit={onSubmit} />);
     fireEvent.change(screen.getByLabelText('Height (ft)'), { target: { value: '5' } });
     fireEvent.change(screen.getByLabelText('Height (in)'), { target: { value: '6' } });
     fireEvent.change(screen.getByLabelText('Weight (lb)'), { target: { value: '163' } });
@@ -24,8 +20,7 @@ describe('height and weight in US measures', () => {
   });
 
   it('a metric coach types centimetres and kilograms', () => {
-    const qc = queryClientFor(coach('metric'));
-    renderInApp(<ClientForm initial={emptyClient} submitLabel="Save client" onSubmit={vi.fn()} />, qc);
+    renderInApp(<ClientForm initial={emptyClient} submitLabel="Save client" unitSystem="metric" onSubmit={vi.fn()} />);
     expect((screen.getByLabelText('Height (cm)') as HTMLInputElement).value).toBe('165');
     expect((screen.getByLabelText('Weight (kg)') as HTMLInputElement).value).toBe('70');
     expect(screen.queryByLabelText('Weight (lb)')).toBeNull();

@@ -11,7 +11,7 @@ const cream = { id: 12, name: 'Cream, example', densityGPerMl: 1.01, pieceWeight
 
 async function show(unitSystem: MeDto['unitSystem']) {
   vi.stubGlobal('fetch', vi.fn(async () => jsonResponse({ items: [eggs, cream], total: 2, page: 1, pageSize: 20 })));
-  renderInApp(<AddPantryItem />, queryClientFor(assistant(unitSystem)));
+  renderInApp(<AddPantryItem unitSystem={unitSystem} />, queryClientFor(assistant(unitSystem)));
   await waitFor(() => expect(screen.getByRole('option', { name: 'Eggs, example' })).toBeTruthy());
 }
 

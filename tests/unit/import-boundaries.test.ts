@@ -47,9 +47,6 @@ const featureOf = (p: string) => /^src\/features\/([^/]+)\//.exec(p)?.[1] ?? nul
 const KNOWN_CROSSINGS = new Set([
   // The ingredient picker (with its search query) is the trays feature's; the plate form reuses it.
   'assemblies -> trays',
-  // The signed-in person's measure preference.
-  'clients -> auth',
-  'shopping -> auth',
   // Sending week plans and prep-day papers composes the outbox, the clients and the team.
   'week-mail -> mail',
   'week-mail -> clients',

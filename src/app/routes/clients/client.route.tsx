@@ -14,6 +14,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
+import { useMe } from '@/features/auth/hooks/use-me';
 
 /** What archiving a client does, said where the coach archives and on an archived profile. */
 const ARCHIVE_MEANS =
@@ -85,6 +86,7 @@ function InviteCard({ client }: { client: ClientDto }) {
 export function Component() {
   const id = Number(useParams().clientId);
   const q = useQuery(clientQuery(id));
+  const me = useMe();
   const update = useUpdateClient(id);
   const del = useDeleteClient();
   const navigate = useNavigate();
@@ -169,6 +171,7 @@ export function Component() {
       )}
       <Card>
         <ClientForm
+          unitSystem={me.unitSystem}
           key={client.version}
           initial={clientToInput(client)}
           slots={slots}

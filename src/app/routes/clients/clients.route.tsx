@@ -13,6 +13,7 @@ import { paths } from '@/config/paths';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
 import { filterByText } from '@/lib/words';
+import { useMe } from '@/features/auth/hooks/use-me';
 
 const isFull = (c: ClientListItemDto): c is ClientDto => 'targets' in c;
 
@@ -88,6 +89,7 @@ function ClientList({ clients: all }: { clients: ClientListItemDto[] }) {
 
 export function Component() {
   const list = useQuery(clientsQuery());
+  const me = useMe();
   const create = useCreateClient();
   const navigate = useNavigate();
   const [adding, setAdding] = useState(false);
@@ -104,6 +106,7 @@ export function Component() {
         <Card>
           <h2 className="mb-3 text-xl">New client</h2>
           <ClientForm
+            unitSystem={me.unitSystem}
             initial={emptyClient}
             submitLabel="Save client"
             busy={create.isPending}

@@ -1,17 +1,19 @@
 import { useQuery } from '@tanstack/react-query';
 import { pantryQuery } from '@/features/shopping/api/shopping.queries';
 import { AddPantryItem, PantryRow } from '@/features/shopping/components/pantry-forms';
+import { useMe } from '@/features/auth/hooks/use-me';
 import { Card, EmptyState, PageHeader, QueryView } from '@/components/ui/states';
 
 /** What the kitchen has on hand: the shopping list subtracts it before rounding to packages. */
 export function Component() {
   const q = useQuery(pantryQuery());
+  const { unitSystem } = useMe();
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-5">
       <PageHeader title="Pantry" lead="What is on hand. Shopping lists buy only the rest, and 'mark bought' keeps the spare." />
       <Card>
         <h2 className="mb-3 text-xl">Add what you have</h2>
-        <AddPantryItem />
+        <AddPantryItem unitSystem={unitSystem} />
       </Card>
       <QueryView
         query={q}
@@ -21,7 +23,7 @@ export function Component() {
         {(d) => (
           <ul className="flex flex-col gap-2" aria-label="On hand">
             {d.items.map((item) => (
-              <PantryRow key={`${item.id}-${item.version}`} item={item} />
+              <PantryRow key={`${item.id}-${item.version}`} item={item} unitSystem={unitSystem} />
             ))}
           </ul>
         )}

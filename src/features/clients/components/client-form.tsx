@@ -17,7 +17,6 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { cmOf, feetInches, kgOf, perLb, poundsOf } from '@shared/domain/body-measures';
-import { useMe } from '@/features/auth/hooks/use-me';
 
 export const emptyClient: CreateClientInput = {
   name: '',
@@ -169,16 +168,17 @@ interface Props {
   busy?: boolean;
   submitLabel: string;
   formError?: string | null;
+  /** The coach's measures: height and weight are typed in feet, inches and pounds (US) or centimetres and kilograms. */
+  unitSystem: 'us' | 'metric';
   onSubmit: (values: CreateClientData, setError: ReturnType<typeof useForm<CreateClientInput, unknown, CreateClientData>>['setError']) => void;
 }
 
-export function ClientForm({ initial, slots = [], busy, submitLabel, formError, onSubmit }: Props) {
+export function ClientForm({ initial, slots = [], busy, submitLabel, formError, unitSystem, onSubmit }: Props) {
   const form = useForm<CreateClientInput, unknown, CreateClientData>({ resolver: zodResolver(createClientSchema), defaultValues: initial });
   const { register, formState, control } = form;
   const values = useWatch({ control }) as Partial<CreateClientInput>;
   const err = formState.errors;
   const manual = values.targetMode === 'manual';
-  const { unitSystem } = useMe();
   return (
     <form noValidate onSubmit={form.handleSubmit((v) => onSubmit(v, form.setError))} className="flex flex-col gap-5">
       <fieldset className="grid gap-4 sm:grid-cols-2">

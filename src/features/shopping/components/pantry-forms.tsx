@@ -15,7 +15,6 @@ import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { GRAMS_PER_UNIT, unitSymbol } from '@shared/domain/units';
-import { useMe } from '@/features/auth/hooks/use-me';
 import { pantryIngredientSearchQuery } from '../api/shopping.queries';
 import { useCreatePantryItem, useDeletePantryItem, useUpdatePantryItem } from '../api/use-pantry-mutations';
 
@@ -42,11 +41,11 @@ export function startingUnit(ing: Pick<IngredientDto, 'purchase'> | null, system
   return purchasePiece(ing) ?? (system === 'metric' ? 'g' : 'oz');
 }
 
-export function AddPantryItem() {
+/** `unitSystem`: the reader's measures (a new amount starts in ounces or grams). */
+export function AddPantryItem({ unitSystem }: { unitSystem: 'us' | 'metric' }) {
   const [search, setSearch] = useState('');
   const results = useQuery(pantryIngredientSearchQuery(search.trim()));
   const create = useCreatePantryItem();
-  const { unitSystem } = useMe();
   const [formError, setFormError] = useState<string | null>(null);
   const empty = { ingredientId: '' as unknown as number, amount: '', unit: startingUnit(null, unitSystem) };
   const form = useForm<PantryCreateInput, unknown, PantryCreateValues>({
@@ -113,10 +112,9 @@ export function startingAmount(item: Pick<PantryItemDto, 'amount' | 'unit'>, sys
 }
 
 /** One pantry row: change the amount (in any unit the ingredient knows) or remove it. */
-export function PantryRow({ item }: { item: PantryItemDto }) {
+export function PantryRow({ item, unitSystem }: { item: PantryItemDto; unitSystem: 'us' | 'metric' }) {
   const update = useUpdatePantryItem();
   const remove = useDeletePantryItem();
-  const { unitSystem } = useMe();
   const [start] = useState(() => startingAmount(item, unitSystem));
   const [amount, setAmount] = useState(start.amount);
   const [unit, setUnit] = useState(start.unit);
