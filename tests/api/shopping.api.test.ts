@@ -243,6 +243,18 @@ describe('shopping trips: a week with two prep days has a list for each', () => 
     expect(await sql('select trip from shopping_purchase where week_id = $1', [w.weekId])).toEqual([{ trip: 0 }]);
   });
 
+  it('lets only one of a whole-week and a trip purchase made at the same moment through', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const w = await twoTripWeek(coach);
+    const answers = await Promise.all([
+      coach.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).send({}),
+      assistant.agent.post(`/api/weeks/${w.weekId}/shopping/bought`).send({ prepDate: '2026-01-04' }),
+    ]);
+    expect(answers.map((a) => a.status).sort()).toEqual([200, 409]);
+    expect(await sql('select count(*)::int as n from shopping_purchase where week_id = $1', [w.weekId])).toEqual([{ n: 1 }]);
+  });
+
   it("exports a trip's list as CSV and PDF under the trip's name", async () => {
     const coach = await coachWorkspace(app);
     const w = await twoTripWeek(coach);

@@ -179,6 +179,25 @@ function presentPurchase(p: IShoppingPurchase, applied: boolean): MarkBoughtDto 
 }
 
 /**
+ * The whole week and its trips count the same food: a purchase of the other kind refuses this one (409). Checked
+ * inside the purchase's transaction with the week row locked, so a whole-week and a trip purchase made at the same
+ * moment cannot both pass (the unique (week, trip) row only stops two of the same list).
+ */
+async function refuseOtherKind(tx: EntityManager, week: IWeek, trip: number): Promise<void> {
+  await tx.getConnection().execute('select id from week where id = ? for update', [week.id], 'all', tx.getTransactionContext());
+  const other = await tx.findOne(ShoppingPurchase, { week: week.id, trip: trip === 0 ? { $ne: 0 } : 0 }, { fields: ['id'] });
+  if (!other) return;
+  throw new Conflict(
+    trip !== 0
+      ? "The whole week's list was marked bought already: the pantry has it"
+      : tripDatesOf(week).length
+        ? "A prep day's list of this week was marked bought already: mark the other prep day's list bought instead of the whole week"
+        : // Only in weeks that lost their second prep day before that was refused (updateWeek keeps it now).
+          "A prep day's list of this week was marked bought while it had two prep days: add the second prep day back to mark the rest bought",
+  );
+}
+
+/**
  * Marks a list bought (the whole week's, or a trip's): for every item, the pantry keeps what the list did not use
  * plus the spare of the packages bought (new amount = on hand − used from the pantry + spare, never below zero).
  * Once per list: the first call records the change; any later call returns that record and changes nothing. The
@@ -189,20 +208,10 @@ export async function markBought(em: EntityManager, actor: Actor, weekId: number
   const trip = tripOf(week, prepDate);
   const done = await em.findOne(ShoppingPurchase, { week: week.id, trip });
   if (done) return presentPurchase(done, false);
-  const other = await em.findOne(ShoppingPurchase, { week: week.id, trip: trip === 0 ? { $ne: 0 } : 0 });
-  if (other) {
-    throw new Conflict(
-      trip !== 0
-        ? "The whole week's list was marked bought already: the pantry has it"
-        : tripDatesOf(week).length
-          ? "A prep day's list of this week was marked bought already: mark the other prep day's list bought instead of the whole week"
-          : // Only in weeks that lost their second prep day before that was refused (updateWeek keeps it now).
-            "A prep day's list of this week was marked bought while it had two prep days: add the second prep day back to mark the rest bought",
-    );
-  }
   const computed = await computeForWeek(em, actor, week, trip);
   try {
     return await em.transactional(async (tx) => {
+      await refuseOtherKind(tx, week, trip);
       const rows = await tx.find(PantryItem, { workspace: actor.workspaceId });
       const byIngredient = new Map(rows.map((r) => [r.ingredient.id, r]));
       const changes: IShoppingPurchase['changes'] = [];
