@@ -16,7 +16,7 @@ import { loadClients } from '../clients/client.service.js';
 import { Invitation, Membership, PasswordReset, User, type IUser } from './user.entity.js';
 import { burnVerify, hashPassword, verifyPassword } from './passwords.js';
 import { hashToken, newToken } from './tokens.js';
-import { queueMail, RESET_QUEUE, type MailQueue, type ResetJobData } from '../mail/mail.service.js';
+import { appLink, queueMail, RESET_QUEUE, type MailQueue, type ResetJobData } from '../mail/mail.service.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { invitationMail, passwordResetMail } from '../mail/mail-templates.js';
 
@@ -133,7 +133,7 @@ export async function createInvitation(
     throw new ValidationError('Already a member', { email: ['This person is already a member of your workspace'] });
   }
   const { token, hash } = newToken();
-  const link = `${publicUrl.replace(/\/$/, '')}/invite/${token}`;
+  const link = appLink(publicUrl, `/invite/${token}`);
   // The invitation and its e-mail (outbox row + send job) are committed together or not at all.
   const inv = await em.transactional(async (tx) => {
     const row = tx.create(Invitation, {
@@ -250,7 +250,7 @@ export async function issuePasswordReset(em: EntityManager, email: string, publi
       expiresAt: new Date(Date.now() + PASSWORD_RESET_MINUTES * 60_000),
     });
     await tx.flush();
-    const link = `${publicUrl.replace(/\/$/, '')}/reset-password/${token}`;
+    const link = appLink(publicUrl, `/reset-password/${token}`);
     await queueMail(tx, mail, {
       workspaceId: null,
       kind: 'password-reset',

@@ -9,7 +9,7 @@ import { Outbox } from '../mail/outbox.entity.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { findWeek } from '../weeks/week-board.service.js';
 import { prepDayMail } from '../mail/mail-templates.js';
-import { mailKey, newBatchId, queueMail, requestBatchId, type MailQueue } from '../mail/mail.service.js';
+import { appLink, mailKey, newBatchId, queueMail, requestBatchId, type MailQueue } from '../mail/mail.service.js';
 import { plannedBakeRun } from '../bake-runs/bake-run-files.js';
 import { PREP_DAY_BAKE_RUN_PDF, PREP_DAY_SHOPPING_PDF, type PrepDayPayload } from './prep-day-mail.js';
 
@@ -89,7 +89,7 @@ export async function sendPrepDay(
     const ws = await tx.findOneOrFail(Workspace, actor.workspaceId, { fields: ['name'] });
     // The list the papers print: the trip's in a week with two prep days, else the week's.
     const trip = tripDatesOf(week).includes(input.prepDate) ? `?for=${input.prepDate}` : '';
-    const link = `${publicUrl.replace(/\/$/, '')}/weeks/${week.id}/shopping${trip}`;
+    const link = appLink(publicUrl, `/weeks/${week.id}/shopping${trip}`);
     for (const r of recipients) {
       const body = prepDayMail({
         businessName: ws.name,

@@ -124,4 +124,7 @@ export function requestBatchId(identity: string): string {
 /** An idempotency key from what identifies one e-mail: `prefix-` and 48 hex digits. */
 export const mailKey = (prefix: string, identity: string): string => `${prefix}-${sha256(identity).slice(0, 48)}`;
 
+/** A link into the app for an e-mail: `appLink('https://x.test/', '/my-plates')` → "https://x.test/my-plates". */
+export const appLink = (publicUrl: string, path: string): string => `${publicUrl.replace(/\/$/, '')}${path}`;
+
 export const messageIdOf = (idempotencyKey: string) => `<${idempotencyKey}@trayline>`;

@@ -2,7 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import type { DeliveryLogDto, SendWeekResultDto, SkipReason } from '@shared/schemas/week-mail.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { Conflict, NotFound } from '../../http/errors.js';
-import { mailKey, newBatchId, queueMail, requestBatchId, type MailQueue } from '../mail/mail.service.js';
+import { appLink, mailKey, newBatchId, queueMail, requestBatchId, type MailQueue } from '../mail/mail.service.js';
 import { weekPlanMail } from '../mail/mail-templates.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { presentOutbox } from '../mail/outbox.service.js';
@@ -100,7 +100,7 @@ export async function sendWeek(
 
     const ws = await tx.findOneOrFail(Workspace, actor.workspaceId);
     const weekLabel = longDate(pub.snapshot.startDate);
-    const link = `${opts.publicUrl.replace(/\/$/, '')}/my-plates`;
+    const link = appLink(opts.publicUrl, '/my-plates');
     for (const r of recipients) {
       // A frozen plate in this client's plan: their thaw reminders go along as a calendar file.
       const thaw = thawTasks(pub.snapshot.clients[String(r.clientId)]?.days ?? []).length > 0;
