@@ -9,15 +9,17 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { ROLE_WORDS } from '@/lib/words';
-import { invitationsQuery, meQuery, membersQuery } from '@/features/auth/api/auth.queries';
+import { invitationsQuery, membersQuery } from '@/features/auth/api/auth.queries';
+import { useMe } from '@/features/auth/hooks/use-me';
 import { TeamMembers } from '@/features/auth/components/team-members';
 
 export function Component() {
   const list = useQuery(invitationsQuery());
-  const me = useQuery(meQuery());
+  const me = useMe();
   const members = useQuery(membersQuery());
   // An accepted invitation whose person no longer has access (removed above): said so, not "Joined".
-  const stillIn = (email: string) => !members.data || members.data.some((m) => m.email.toLowerCase() === email.toLowerCase());
+  const memberEmails = members.data && new Set(members.data.map((m) => m.email.toLowerCase()));
+  const stillIn = (email: string) => !memberEmails || memberEmails.has(email.toLowerCase());
   const create = useCreateInvitation();
   const revoke = useRevokeInvitation();
   const [link, setLink] = useState<string | null>(null);
@@ -41,7 +43,7 @@ export function Component() {
       <PageHeader title="Team & invitations" lead="Invite your kitchen assistant. Clients are invited from their profile." />
       <Card>
         <h2 className="mb-3 text-xl">People with access</h2>
-        <TeamMembers workspaceName={me.data?.workspaceName ?? 'this workspace'} />
+        <TeamMembers workspaceName={me.workspaceName} />
       </Card>
       <Card>
         <h2 className="mb-3 text-xl">Invite someone</h2>

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { MemberDto } from '@shared/schemas/auth.schema';
 import { Button } from '@/components/ui/button';
-import { EmptyState, Notice, QueryView, Skeleton } from '@/components/ui/states';
+import { Notice, QueryView, Skeleton } from '@/components/ui/states';
 import { errorMessage } from '@/lib/problem';
 import { ROLE_WORDS } from '@/lib/words';
 import { membersQuery } from '../api/auth.queries';
@@ -24,9 +24,8 @@ export function TeamMembers({ workspaceName }: { workspaceName: string }) {
   return (
     <QueryView
       query={list}
+      // Never empty: the coach asking is on it.
       loading={<Skeleton className="h-20 w-full" />}
-      isEmpty={(data) => data.length === 0}
-      empty={<EmptyState title="No one yet">Invite your kitchen assistant below.</EmptyState>}
     >
       {(data) => (
         <div className="flex flex-col gap-3">

@@ -4,6 +4,9 @@ import { Button } from '@/components/ui/button';
 import { dayLabel } from '@/lib/dates';
 import { counted } from '@/lib/words';
 
+/** Each base tray's count per prep day, keyed "trayId|prepDate". */
+const trayCounts = (board: Pick<BoardDto, 'trays'>) => new Map(board.trays.map((t) => [`${t.trayId}|${t.prepDate}`, t.trayCount]));
+
 /**
  * The board's one-line portion count: what is short, else whether the trays bake more than the board needs. A tray
  * count above the trays that cover its prep day's need bakes whole trays nobody eats (a copied week, plates moved
@@ -12,7 +15,7 @@ import { counted } from '@/lib/words';
 export function portionSummary(board: Pick<BoardDto, 'inventory' | 'trays'>): { tone: 'warn' | 'info'; title: string; detail?: string } {
   const short = board.inventory.reduce((s, t) => s + t.short, 0);
   if (short) return { tone: 'warn', title: `${counted(short, 'portion')} short` };
-  const counts = new Map(board.trays.map((t) => [`${t.trayId}|${t.prepDate}`, t.trayCount]));
+  const counts = trayCounts(board);
   let extraTrays = 0;
   for (const t of board.inventory) {
     for (const p of t.byPrepDate) {
@@ -41,7 +44,7 @@ export function portionSummary(board: Pick<BoardDto, 'inventory' | 'trays'>): { 
 export function InventoryPanel({ board, busy, onCover, onSave }: { board: BoardDto; busy: boolean; onCover: () => void; onSave: (trays: PutTraysInput['trays']) => void }) {
   const names = new Map(board.trays.map((t) => [t.trayId, t.name]));
   for (const p of board.plates) for (const t of p.trays) names.set(t.trayId, t.trayName);
-  const counts = new Map(board.trays.map((t) => [`${t.trayId}|${t.prepDate}`, t.trayCount]));
+  const counts = trayCounts(board);
   const [draft, setDraft] = useState<Record<string, string>>({});
   const rows = board.inventory.flatMap((t) => t.byPrepDate.map((p) => ({ trayId: Number(t.trayId), ...p })));
   const save = () => {
