@@ -135,15 +135,14 @@ function buildList(raw: readonly ShoppingNeed[], { rawStock, ingredients }: Shop
  * The shopping list for trays × counts plus add-on amounts, minus the workspace's pantry. Lines whose unit the
  * ingredient cannot be converted from are left out and named in `problems` (never counted as zero silently).
  */
-export async function computeShoppingList(em: EntityManager, actor: Actor, input: ShoppingNeedsInput): Promise<ComputedShoppingList> {
-  const loaded = await loadShoppingInputs(em, actor, [input]);
-  return buildList(loaded.raws[0], loaded, new Map());
+export function computeShoppingList(em: EntityManager, actor: Actor, input: ShoppingNeedsInput): Promise<ComputedShoppingList> {
+  return computeLaterShoppingList(em, actor, [], input);
 }
 
 /**
  * The last of several lists that share the pantry in order (a week's trips): each earlier list marked `takesPantry`
  * holds what it takes from the pantry, and the later ones see only the rest. One read of trays, pantry and
- * ingredients for all of them.
+ * ingredients for all of them. With no earlier list, it is the list alone (computeShoppingList).
  */
 export async function computeLaterShoppingList(
   em: EntityManager,
