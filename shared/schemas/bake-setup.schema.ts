@@ -132,6 +132,18 @@ export const bakeRunSettingsSchema = z.object({
   version: version.optional(),
 });
 export type BakeRunSettingsValues = z.output<typeof bakeRunSettingsSchema>;
+
+/**
+ * PUT /api/weeks/:weekId/bake-run/start: the time the run really started on prep day (the kitchen started late or
+ * early), for the coach or the assistant; only the start moves, the rest of the settings stay. `version` as above.
+ */
+export const bakeRunStartSchema = z.object({
+  prepDate: prepDateQuery.shape.prepDate,
+  start: bakeRunSettingsSchema.shape.start,
+  version: version.optional(),
+});
+export type BakeRunStartValues = z.output<typeof bakeRunStartSchema>;
+export type BakeRunStartInput = z.input<typeof bakeRunStartSchema>;
 export type BakeRunSettingsInput = z.input<typeof bakeRunSettingsSchema>;
 
 /**

@@ -271,6 +271,10 @@ describe('the bake run of a prep week', () => {
     expect(Object.keys(badOven.body.errors)).toEqual(['ovenIds']);
     await coach.agent.get(`/api/weeks/${week.id}/bake-run?prepDate=2026-01-09`).expect(400);
 
+    // A start on another day than the prep day is refused, naming the field.
+    const otherDay = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ ...settings, start: '2026-01-05T09:30', version: 2 }).expect(400);
+    expect(Object.keys(otherDay.body.errors)).toEqual(['start']);
+
     const pdf = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.pdf`).buffer(true).expect(200);
     expect(pdf.headers['content-type']).toBe('application/pdf');
     expect(Buffer.from(pdf.body).subarray(0, 5).toString()).toBe('%PDF-');
@@ -286,5 +290,49 @@ describe('the bake run of a prep week', () => {
     expect(ics.text).toMatch(/BEGIN:VCALENDAR/);
     expect(ics.text).toMatch(/DTSTART:20260104T093000/);
     expect(ics.text).toMatch(/BEGIN:VALARM/);
+  });
+});
+
+describe('moving a run to the time the kitchen really started', () => {
+  it('the assistant moves the start on prep day; the plan shifts, the other settings stay, a stale version is a 409', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const tray = await makeTray(coach);
+    const { week } = await makeWeek(coach);
+    await coach.agent
+      .put(`/api/weeks/${week.id}/trays`)
+      .send({ version: week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 2 }] })
+      .expect(200);
+    await makeOven(coach, { name: 'Left', racks: 2, traysPerRack: 1 });
+
+    // No settings saved yet: the move creates them with the defaults (one cook, every oven, the rules' hands-on).
+    const moved = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ prepDate: '2026-01-04', start: '2026-01-04T08:40' }).expect(200);
+    expect(moved.body.settings).toEqual({ prepDate: '2026-01-04', start: '2026-01-04T08:40', cooks: 1, handsOnMinutes: {}, ovenIds: [], version: 1 });
+    // The worked example of the test above (start 08:00: in 08:12 and 08:20, out 08:39 and 08:47), 40 minutes later.
+    expect(moved.body.run.trays.map((t: { inAt: string; outAt: string }) => [t.inAt, t.outAt])).toEqual([
+      ['2026-01-04T08:52', '2026-01-04T09:19'],
+      ['2026-01-04T09:00', '2026-01-04T09:27'],
+    ]);
+    expect(moved.body.run.sessionMinutes).toBe(47);
+
+    // The coach's cooks stay when the start moves again.
+    await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ start: '2026-01-04T08:40', cooks: 2, version: 1 }).expect(200);
+    const again = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ start: '2026-01-04T09:05', version: 2 }).expect(200);
+    expect(again.body.settings).toMatchObject({ start: '2026-01-04T09:05', cooks: 2, version: 3 });
+
+    // A stale version (someone moved it meanwhile), or none while settings exist: 409 with the current settings.
+    const stale = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ start: '2026-01-04T09:10', version: 2 }).expect(409);
+    expect(stale.body).toMatchObject({ code: 'stale_version', currentVersion: 3, current: { start: '2026-01-04T09:05' } });
+    await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ start: '2026-01-04T09:10' }).expect(409);
+    // Another day, a prep day the week does not have, a start that is not a time: 400 naming the field.
+    const otherDay = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ start: '2026-01-05T09:10', version: 3 }).expect(400);
+    expect(Object.keys(otherDay.body.errors)).toEqual(['start']);
+    expect(otherDay.body.errors.start[0]).toMatch(/Sunday 4 January 2026/);
+    const badDay = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ prepDate: '2026-01-06', start: '2026-01-06T09:10', version: 3 }).expect(400);
+    expect(Object.keys(badDay.body.errors)).toEqual(['prepDate']);
+    const notTime = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ start: 'nine', version: 3 }).expect(400);
+    expect(Object.keys(notTime.body.errors)).toEqual(['start']);
+    const [row] = await sql<{ start: string; cooks: number; version: number }>('select start, cooks, version from bake_run_setting where week_id = $1', [week.id]);
+    expect(row).toEqual({ start: '2026-01-04T09:05', cooks: 2, version: 3 });
   });
 });

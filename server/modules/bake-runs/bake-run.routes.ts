@@ -3,6 +3,7 @@ import {
   bakeRuleCreateSchema,
   bakeRuleUpdateSchema,
   bakeRunSettingsSchema,
+  bakeRunStartSchema,
   calcBakeRunRequestSchema,
   idParams,
   ovenCreateSchema,
@@ -95,6 +96,14 @@ export function bakeRunRoutes() {
     allow('coach'),
     validated({ params: weekIdParam, body: bakeRunSettingsSchema }, ({ params, body }, req) =>
       runs.putWeekBakeRunSettings(emOf(req), actorOf(req), params.weekId, body),
+    ),
+  );
+
+  r.put(
+    '/weeks/:weekId/bake-run/start',
+    allow('coach', 'assistant'),
+    validated({ params: weekIdParam, body: bakeRunStartSchema }, ({ params, body }, req) =>
+      runs.moveWeekBakeRunStart(emOf(req), actorOf(req), params.weekId, body),
     ),
   );
 

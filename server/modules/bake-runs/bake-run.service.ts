@@ -5,9 +5,11 @@ import { planBakeRunOffThread } from '../../lib/bake-run-pool.js';
 import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-run-types.js';
 import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
+import { longDate } from '@shared/domain/iso-date.js';
 import type {
   BakeRunSettingsDto,
   BakeRunSettingsValues,
+  BakeRunStartValues,
   CalcBakeRunRequest,
   WeekBakeRunDto,
   WeekBakeTrayDto,
@@ -202,6 +204,41 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
   };
 }
 
+/** A run starts on its own prep day: a start on another day is a slip of the date picker (its timers would never show). */
+function startOnPrepDay(start: string, prepDate: string): void {
+  if (start.slice(0, 10) !== prepDate)
+    throw ValidationError.field('start', `The run starts on its prep day, ${longDate(prepDate)}: keep that date and change the time.`);
+}
+
+/**
+ * PUT /api/weeks/:weekId/bake-run/start: moves the run to the time the kitchen really started (coach or assistant,
+ * on prep day); cooks, ovens and hands-on minutes stay. A stale version is a 409 like the settings' own.
+ */
+export async function moveWeekBakeRunStart(em: EntityManager, actor: Actor, weekId: number, v: BakeRunStartValues): Promise<WeekBakeRunDto> {
+  const week = await findWeek(em, actor, weekId);
+  const prepDate = pickPrepDate(week, v.prepDate);
+  startOnPrepDay(v.start, prepDate);
+  const row = await em.findOne(BakeRunSetting, { week: week.id, prepDate });
+  if (row) {
+    if (v.version !== row.version) throw new StaleEdit(row.version, presentSettings(prepDate, row));
+    row.start = v.start;
+  } else {
+    if (v.version !== undefined) throw new StaleEdit(null, presentSettings(prepDate, null));
+    const defaults = presentSettings(prepDate, null);
+    em.create(BakeRunSetting, {
+      workspace: actor.workspaceId,
+      week: week.id,
+      prepDate,
+      start: v.start,
+      cooks: defaults.cooks,
+      handsOnMinutes: defaults.handsOnMinutes,
+      ovenIds: defaults.ovenIds,
+    });
+  }
+  await em.flush();
+  return getWeekBakeRun(em, actor, weekId, prepDate);
+}
+
 function describeIssues(error: ZodError, trays: BakeTray[]): string[] {
   return [
     ...new Set(
@@ -228,6 +265,7 @@ export async function putWeekBakeRunSettings(
     const missing = v.ovenIds.filter((id) => !known.has(id));
     if (missing.length) throw ValidationError.field('ovenIds', `No oven with id ${missing.join(', ')} in your workspace.`);
   }
+  startOnPrepDay(v.start, prepDate);
   const row = await em.findOne(BakeRunSetting, { week: week.id, prepDate });
   if (row) {
     if (v.version !== row.version) throw new StaleEdit(row.version, presentSettings(prepDate, row));

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { bakeRunFiles, ovensQuery, weekBakeRunQuery } from '@/features/bake-runs/api/bake-runs.queries';
-import { useSaveBakeRunSettings } from '@/features/bake-runs/api/use-bake-run-mutations';
+import { useMoveBakeRunStart, useSaveBakeRunSettings } from '@/features/bake-runs/api/use-bake-run-mutations';
 import { BakeRunSettingsForm } from '@/features/bake-runs/components/bake-run-settings-form';
 import { BakeRunView, UnitToggle } from '@/features/bake-runs/components/bake-run-view';
 import type { TempUnit } from '@/features/bake-runs/components/temperature';
@@ -15,7 +15,10 @@ import { dayLabel } from '@/lib/dates';
 
 const linkClass = 'inline-flex min-h-11 items-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
 
-/** A prep week's bake run: the coach sets start, cooks, ovens and hands-on minutes; everyone reads the plan. */
+/**
+ * A prep week's bake run: the coach sets start, cooks, ovens and hands-on minutes; everyone reads the plan; on prep
+ * day whoever runs the bake moves the start to when the kitchen really started.
+ */
 export function Component() {
   const me = useMe();
   const weekId = Number(useParams().weekId);
@@ -25,6 +28,7 @@ export function Component() {
   const q = useQuery(weekBakeRunQuery(weekId, prepDate));
   const ovens = useQuery({ ...ovensQuery(), enabled: me.role === 'coach' });
   const save = useSaveBakeRunSettings(weekId);
+  const moveStart = useMoveBakeRunStart(weekId);
 
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
@@ -92,7 +96,22 @@ export function Component() {
           )}
         </EmptyState>
       )}
-      {dto.run && <BakeRunView run={dto.run} unit={unit} />}
+      {dto.run && (
+        <BakeRunView
+          run={dto.run}
+          unit={unit}
+          move={{
+            saving: moveStart.isPending,
+            error: moveStart.error,
+            onMove: (start) =>
+              moveStart.mutate({ prepDate: dto.prepDate, start, ...(dto.settings.version === null ? {} : { version: dto.settings.version }) }),
+            onReload: () => {
+              moveStart.reset();
+              q.refetch();
+            },
+          }}
+        />
+      )}
       {dto.run === null && dto.problems.length === 0 && <Notice tone="info">No plan.</Notice>}
     </div>
   );

@@ -5,6 +5,7 @@ import type {
   BakeRuleCreateInput,
   BakeRuleDto,
   BakeRunSettingsInput,
+  BakeRunStartInput,
   OvenCreateInput,
   OvenDto,
   WeekBakeRunDto,
@@ -27,6 +28,19 @@ export function useSaveBakeRunSettings(weekId: number) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: BakeRunSettingsInput) => api.put<WeekBakeRunDto>(`/weeks/${weekId}/bake-run/settings`, body),
+    meta: { form: true, silent: true },
+    onSuccess: (dto) => {
+      qc.setQueryData(bakeRunsKeys.weekRun(weekId, dto.prepDate), dto);
+      return qc.invalidateQueries({ queryKey: bakeRunsKeys.weekRuns() });
+    },
+  });
+}
+
+/** Moves a week's run to the time the kitchen really started (coach or assistant, on prep day). */
+export function useMoveBakeRunStart(weekId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: BakeRunStartInput) => api.put<WeekBakeRunDto>(`/weeks/${weekId}/bake-run/start`, body),
     meta: { form: true, silent: true },
     onSuccess: (dto) => {
       qc.setQueryData(bakeRunsKeys.weekRun(weekId, dto.prepDate), dto);

@@ -1,5 +1,9 @@
 import { useEffect, useRef, useState } from 'react';
 import type { BakeRunResult } from '@shared/domain/bake-run-types';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/states';
+import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { describeEvent } from './bake-run-sheet';
 import { localMinutes, nowLocalMinutes, type TempUnit } from './temperature';
 
@@ -31,8 +35,75 @@ function beep() {
 
 const TIMED = new Set(['preheat', 'setpoint-change', 'tray-in', 'first-check']);
 
+/** Moving a saved run to the time the kitchen really started (the week's run page gives it; the planner does not). */
+export interface MoveStart {
+  saving: boolean;
+  error: unknown;
+  /** The new start, "YYYY-MM-DDTHH:mm" on the run's day. */
+  onMove: (start: string) => void;
+  onReload: () => void;
+}
+
+const hhmm = (d: Date) => `${String(d.getHours()).padStart(2, '0')}:${String(d.getMinutes()).padStart(2, '0')}`;
+
+/** "Started at another time?": a time on the run's day; the timers, timeline and run sheet follow the new start. */
+function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
+  const [time, setTime] = useState(() => hhmm(new Date()));
+  const [movedTo, setMovedTo] = useState<string | null>(null);
+  const planned = run.start.slice(11, 16);
+  const stale = isApiError(move.error, 409);
+  const fieldError = isApiError(move.error, 400) ? move.error.fieldErrors.start?.[0] ?? errorMessage(move.error) : undefined;
+  if (stale) markShown(move.error);
+  // The answer is the new plan: the move is done once its start is the time asked for.
+  const done = movedTo !== null && movedTo === planned && !move.saving && !move.error;
+  return (
+    <details className="rounded-lg border border-line p-3">
+      <summary className="min-h-11 cursor-pointer py-2 font-bold">Started at another time?</summary>
+      <form
+        className="mt-2 flex flex-wrap items-end gap-3"
+        aria-label="Move the start"
+        onSubmit={(e) => {
+          e.preventDefault();
+          setMovedTo(time);
+          move.onMove(`${run.start.slice(0, 10)}T${time}`);
+        }}
+      >
+        <TextField
+          label="Started at"
+          type="time"
+          required
+          value={time}
+          onChange={(e) => setTime(e.target.value)}
+          error={fieldError}
+          hint={`Planned ${planned}. Every time on this page, the run sheet, the PDF and the calendar move with it.`}
+          className="w-44"
+        />
+        <Button type="submit" busy={move.saving}>
+          Move the plan
+        </Button>
+      </form>
+      <p role="status" className="mt-2 text-base">
+        {done ? `The plan now starts at ${planned}.` : ''}
+      </p>
+      {stale && (
+        <Notice tone="warn" title="Someone changed this run meanwhile">
+          <p>Load their version, then move the start again if it is still needed.</p>
+          <Button type="button" variant="secondary" onClick={move.onReload}>
+            Load their version
+          </Button>
+        </Notice>
+      )}
+      {move.error && !stale && !isApiError(move.error, 400) ? (
+        <Notice tone="block" title="Start not moved">
+          {errorMessage(move.error)}
+        </Notice>
+      ) : null}
+    </details>
+  );
+}
+
 /** On prep day: the next steps with a countdown (check and out times first), optional sound when one is due. */
-export function BakeRunTimers({ run, unit, nowMinute }: { run: BakeRunResult; unit: TempUnit; nowMinute: number }) {
+export function BakeRunTimers({ run, unit, nowMinute, move }: { run: BakeRunResult; unit: TempUnit; nowMinute: number; move?: MoveStart }) {
   const [sound, setSound] = useState(false);
   const rung = useRef(new Set<string>());
   const names = new Map(run.trays.map((t) => [t.id, t.name]));
@@ -71,6 +142,7 @@ export function BakeRunTimers({ run, unit, nowMinute }: { run: BakeRunResult; un
           })}
         </ul>
       )}
+      {move && <MoveStartForm run={run} move={move} />}
     </section>
   );
 }

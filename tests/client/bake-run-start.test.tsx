@@ -1,0 +1,60 @@
+import { describe, expect, it, vi } from 'vitest';
+import { fireEvent, render, screen } from '@testing-library/react';
+import type { BakeRunResult } from '@shared/domain/bake-run-types';
+import { BakeRunTimers, type MoveStart } from '@/features/bake-runs/components/bake-run-timers';
+import { ApiError } from '@/lib/problem';
+
+
+// An invented run (only the fields the timers card reads): one tray in at 08:12, checked at 08:30.
+const runAt = (start: string) =>
+  ({
+    start,
+    trays: [{ id: 't1', name: 'Egg slab' }],
+    events: [
+      { kind: 'tray-in', minute: 12, trayId: 't1', oven: 'Left', tempF: 350 },
+      { kind: 'first-check', minute: 30, trayId: 't1', oven: 'Left', tempF: 350 },
+    ],
+  }) as unknown as BakeRunResult;
+const problem = (status: number, code: string, detail: string, errors?: Record<string, string[]>) =>
+  new ApiError({ type: 'about:blank', title: 'Refused', status, code, detail, ...(errors ? { errors } : {}) });
+const move = (over: Partial<MoveStart> = {}): MoveStart => ({ saving: false, error: null, onMove: vi.fn(), onReload: vi.fn(), ...over });
+
+describe('moving a run to when the kitchen really started', () => {
+  it('sends the typed time on the run’s day, and says so once the plan starts there', () => {
+    const m = move();
+    const { rerender } = render(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={5} move={m} />);
+    fireEvent.click(screen.getByText('Started at another time?'));
+    expect(screen.getByText(/Planned 08:00/)).toBeTruthy();
+    fireEvent.change(screen.getByLabelText(/Started at/), { target: { value: '08:40' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Move the plan' }));
+    expect(m.onMove).toHaveBeenCalledWith('2026-01-04T08:40');
+    // The answer is the plan from 08:40.
+    rerender(<BakeRunTimers run={runAt('2026-01-04T08:40')} unit="F" nowMinute={0} move={m} />);
+    expect(screen.getByRole('status').textContent).toBe('The plan now starts at 08:40.');
+  });
+
+  it('puts a refused time under the field, and a stale run behind a reload', () => {
+    const reload = vi.fn();
+    const { unmount } = render(
+      <BakeRunTimers
+        run={runAt('2026-01-04T08:00')}
+        unit="F"
+        nowMinute={5}
+        move={move({ error: problem(400, 'validation', 'Invalid', { start: ['The run starts on its prep day, Sunday 4 January 2026: keep that date and change the time.'] }) })}
+      />,
+    );
+    expect(screen.getByLabelText(/Started at/).getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByText(/keep that date and change the time/)).toBeTruthy();
+    unmount();
+    render(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={5} move={move({ error: problem(409, 'stale_version', 'Someone else changed this'), onReload: reload })} />);
+    expect(screen.getByText('Someone changed this run meanwhile')).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Load their version' }));
+    expect(reload).toHaveBeenCalled();
+    expect(screen.queryByText('Start not moved')).toBeNull();
+  });
+
+  it('is not offered where the run is not saved (the planner gives no move)', () => {
+    render(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={5} />);
+    expect(screen.queryByText('Started at another time?')).toBeNull();
+  });
+});
