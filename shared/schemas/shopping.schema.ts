@@ -222,10 +222,18 @@ export interface ContainerLabelDto {
   kind: 'plate' | 'spare';
   /** "Client name" or the tray name for a container that is not assigned to a client. */
   title: string;
+  /** The plate's name, or "Spare portion". */
   subtitle: string;
+  /** The day and meal slot the plate is planned for (null for a spare portion); pages write the day their way. */
+  planned: { date: string; slot: string } | null;
+  /** Portions in the container when the client's household multiplier is not 1 ("2", "1.5"); else null. */
+  portions: string | null;
   madeOn: string;
   eatBy: string;
+  /** Fridge portions that keep in the freezer: freeze by this day at the latest. */
   freezeBy: string | null;
+  /** A plate frozen on prep day: best quality until this day in the freezer (it thaws the evening before its day). */
+  frozenBestBy: string | null;
   reheat: string | null;
   macros: LabelMacrosDto | null;
   allergens: AllergenCode[];

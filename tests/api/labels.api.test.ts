@@ -34,10 +34,11 @@ describe('container labels', () => {
     expect(res.body.labels).toHaveLength(3);
     expect(res.body.labels.map((l: { kind: string }) => l.kind)).toEqual(['plate', 'plate', 'spare']);
     const [mon, tue, spare] = res.body.labels;
-    expect(mon.subtitle).toContain('2026-01-05 breakfast');
-    expect(tue.subtitle).toContain('2026-01-06 breakfast');
+    expect(mon).toMatchObject({ planned: { date: '2026-01-05', slot: 'breakfast' }, portions: null });
+    expect(tue).toMatchObject({ planned: { date: '2026-01-06', slot: 'breakfast' }, portions: null });
+    expect(mon.subtitle).toBe(tue.subtitle);
     // Eat-by = prep date + fridge days (shared/domain/eat-by.ts rule: the prep date is day 0): 01-04 + 4 = 01-08.
-    expect(mon).toMatchObject({ madeOn: '2026-01-04', eatBy: '2026-01-08', freezeBy: '2026-01-08' });
+    expect(mon).toMatchObject({ madeOn: '2026-01-04', eatBy: '2026-01-08', freezeBy: '2026-01-08', frozenBestBy: null });
     expect(mon.reheat).toMatch(/165 °F/);
     expect(mon.url).toBe('http://127.0.0.1:8080/my-plates?date=2026-01-05');
     expect(mon.qr).toMatch(/^data:image\/svg\+xml;base64,/);
@@ -47,6 +48,7 @@ describe('container labels', () => {
     expect(spare).toMatchObject({
       title: w.tray.name,
       subtitle: 'Spare portion',
+      planned: null,
       eatBy: '2026-01-08',
       macros: { calories: '50', fat: '5 g', carbohydrate: 'less than 1 g', protein: '3 g', netCarbs: 'less than 1 g' },
       allergens: ['milk'],
@@ -58,6 +60,28 @@ describe('container labels', () => {
     // carbohydrate 0.7 + 0.567 = 1.27 g → 1 g; protein 2.6 + 5.67 = 8.27 g → 8 g.
     expect(mon.macros).toEqual({ calories: '150', fat: '13 g', carbohydrate: '1 g', protein: '8 g', netCarbs: '1 g' });
     expect(mon.title).toBe((await coach.agent.get(`/api/clients/${w.client.id}`)).body.name);
+  });
+
+  it('says how many portions a household container holds, and a frozen plate’s best-quality day instead of a freeze-by', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await shoppingWeek(coach, { multiplier: '2', tray: { storage: { fridgeDays: 4, freezerWeeks: 8 } } });
+    const board = (await coach.agent.get(`/api/weeks/${w.weekId}`).expect(200)).body;
+    await coach.agent
+      .put(`/api/weeks/${w.weekId}/cells`)
+      .send({
+        version: board.week.version,
+        cells: [
+          { clientId: w.client.id, date: '2026-01-05', slot: 'breakfast', assemblyId: w.plate.id },
+          { clientId: w.client.id, date: '2026-01-06', slot: 'breakfast', assemblyId: w.plate.id, storage: 'frozen' },
+        ],
+      })
+      .expect(200);
+    const res = await coach.agent.get(`/api/weeks/${w.weekId}/labels?prepDate=2026-01-04`).expect(200);
+    const [mon, tue] = res.body.labels;
+    expect(mon).toMatchObject({ portions: '2', eatBy: '2026-01-08', freezeBy: '2026-01-08', frozenBestBy: null });
+    // Frozen on prep day: eaten on its day (thawed the evening before); best quality for the tray's 8 freezer weeks,
+    // 2026-01-04 + 56 days = 2026-03-01 (worked by hand).
+    expect(tue).toMatchObject({ portions: '2', planned: { date: '2026-01-06', slot: 'breakfast' }, eatBy: '2026-01-06', freezeBy: null, frozenBestBy: '2026-03-01' });
   });
 
   it('names bad input (prep date outside the week, unknown layout), scopes the week, and refuses clients', async () => {

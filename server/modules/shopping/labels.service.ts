@@ -100,14 +100,13 @@ export async function weekLabels(
       sort: `0|${cell.date}|${slotRank(cell.slot)}|${client.name}`,
       kind: 'plate',
       title: client.name,
-      subtitle: `${plate.name} · ${cell.date} ${cell.slot}${multiplier.eq(1) ? '' : ` · ${multiplier.toString()} portions`}`,
+      subtitle: plate.name,
+      planned: { date: cell.date, slot: cell.slot },
+      portions: multiplier.eq(1) ? null : multiplier.toString(),
       madeOn: prepDate,
       eatBy: frozen ? cell.date : eatBy,
-      freezeBy: frozen
-        ? `Frozen; best quality by ${freezerQualityDate(prepDate, Math.max(freezerWeeks, 0))}`
-        : freezerWeeks > 0 && trays.length
-          ? eatBy
-          : null,
+      freezeBy: !frozen && freezerWeeks > 0 && trays.length ? eatBy : null,
+      frozenBestBy: frozen ? freezerQualityDate(prepDate, Math.max(freezerWeeks, 0)) : null,
       reheat: plate.reheatSteps?.[0] ?? trays.find((t) => t.reheatSteps.length)?.reheatSteps[0] ?? null,
       macros: facts.complete ? labelMacros(facts.vector) : null,
       allergens: facts.allergens,
@@ -129,9 +128,12 @@ export async function weekLabels(
         kind: 'spare',
         title: tray.name,
         subtitle: 'Spare portion',
+        planned: null,
+        portions: null,
         madeOn: prepDate,
         eatBy,
         freezeBy: tray.freezerWeeks > 0 ? eatBy : null,
+        frozenBestBy: null,
         reheat: tray.reheatSteps[0] ?? null,
         macros,
         allergens: tray.allergens,

@@ -9,11 +9,28 @@ function Label({ label, small }: { label: ContainerLabelDto; small: boolean }) {
     <div className={`flex h-full gap-[2%] overflow-hidden p-[4%] leading-tight text-black ${small ? 'text-[6.5pt]' : 'text-[8.5pt]'}`}>
       <div className="flex min-w-0 flex-1 flex-col gap-[1px]">
         <p className={`truncate font-bold ${small ? 'text-[8pt]' : 'text-[11pt]'}`}>{label.title}</p>
-        <p className="truncate">{label.subtitle}</p>
+        <p className="truncate">
+          {label.planned && (
+            <b>
+              {dayLabel(label.planned.date)} {label.planned.slot} ·{' '}
+            </b>
+          )}
+          {label.portions && <b>{label.portions} portions · </b>}
+          {label.subtitle}
+        </p>
         <p>
           Made <b>{dayLabel(label.madeOn)}</b> · Eat by <b>{dayLabel(label.eatBy)}</b>
         </p>
-        {label.freezeBy && <p>{label.freezeBy.startsWith('Frozen') ? label.freezeBy : <>Freeze by <b>{dayLabel(label.freezeBy)}</b></>}</p>}
+        {label.freezeBy && (
+          <p>
+            Freeze by <b>{dayLabel(label.freezeBy)}</b>
+          </p>
+        )}
+        {label.frozenBestBy && (
+          <p>
+            Frozen; best quality by <b>{dayLabel(label.frozenBestBy)}</b>
+          </p>
+        )}
         <p className="truncate">
           Reheat: {label.reheat ?? 'until hot'} — to {REHEAT_MIN_F} °F ({REHEAT_MIN_C} °C)
         </p>
