@@ -45,8 +45,6 @@ const featureOf = (p: string) => /^src\/features\/([^/]+)\//.exec(p)?.[1] ?? nul
  * src/components/domain, or composed in the route): the list may only shrink.
  */
 const KNOWN_CROSSINGS = new Set([
-  // The ingredient picker (with its search query) is the trays feature's; the plate form reuses it.
-  'assemblies -> trays',
   // Sending week plans and prep-day papers composes the outbox, the clients and the team.
   'week-mail -> mail',
   'week-mail -> clients',

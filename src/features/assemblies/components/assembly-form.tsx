@@ -4,7 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import { createAssemblySchema, type AssemblyDto, type AssemblyInput, type AssemblyValues } from '@shared/schemas/assemblies.schema';
 import { trayOptionsQuery } from '../api/assemblies.queries';
-import { IngredientCombobox, unitAfterPick, unitChoices, type PickedIngredient } from '@/features/trays/components/ingredient-combobox';
+import { IngredientCombobox, unitAfterPick, unitChoices, type PickedIngredient } from '@/components/domain/ingredient-combobox';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';

@@ -8,5 +8,4 @@ export const traysKeys = {
   details: () => [...traysKeys.all, 'detail'] as const,
   detail: (id: number) => [...traysKeys.details(), id] as const,
   portionCard: (id: number) => [...traysKeys.detail(id), 'portion-card'] as const,
-  ingredientSearch: (q: string) => [...traysKeys.all, 'ingredient-search', q] as const,
 };

@@ -1,5 +1,4 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
-import type { IngredientListDto } from '@shared/schemas/ingredients.schema';
 import type { ListTraysQuery, PortionCardDto, TrayDto, TraySummaryDto } from '@shared/schemas/trays.schema';
 import { api, qs } from '@/lib/api-client';
 import { traysKeys } from './trays.keys';
@@ -26,11 +25,3 @@ export const trayQuery = (id: number) =>
 export const portionCardQuery = (id: number) =>
   queryOptions({ queryKey: traysKeys.portionCard(id), queryFn: () => api.get<PortionCardDto>(`/trays/${id}/portion-card`) });
 
-/** The ingredient combobox: the library's search (GET /api/ingredients?q=), first 10 matches. */
-export const ingredientSearchQuery = (q: string) =>
-  queryOptions({
-    queryKey: traysKeys.ingredientSearch(q),
-    queryFn: () => api.get<IngredientListDto>(`/ingredients${qs({ q, pageSize: 10 })}`),
-    staleTime: 60_000,
-    placeholderData: keepPreviousData,
-  });

@@ -18,7 +18,7 @@ import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Card, Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { ApiError } from '@/lib/problem';
-import { IngredientCombobox, unitAfterPick, unitChoices, type PickedIngredient } from './ingredient-combobox';
+import { IngredientCombobox, unitAfterPick, unitChoices, type PickedIngredient } from '@/components/domain/ingredient-combobox';
 import { NutritionPreview } from './nutrition-preview';
 import { emptyTrayValues, trayToValues } from './tray-form-values';
 

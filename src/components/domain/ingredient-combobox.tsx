@@ -1,8 +1,17 @@
 import { useEffect, useId, useRef, useState, type KeyboardEvent } from 'react';
-import { useQuery } from '@tanstack/react-query';
-import type { IngredientDto } from '@shared/schemas/ingredients.schema';
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { IngredientDto, IngredientListDto } from '@shared/schemas/ingredients.schema';
 import { UNIT_OPTIONS } from '@shared/domain/units';
-import { ingredientSearchQuery } from '../api/trays.queries';
+import { api, qs } from '@/lib/api-client';
+
+/** The combobox's search of the library (GET /api/ingredients?q=), first 10 matches. */
+export const ingredientSearchQuery = (q: string) =>
+  queryOptions({
+    queryKey: ['ingredient-search', q] as const,
+    queryFn: () => api.get<IngredientListDto>(`/ingredients${qs({ q, pageSize: 10 })}`),
+    staleTime: 60_000,
+    placeholderData: keepPreviousData,
+  });
 
 export interface PickedIngredient {
   id: number;
