@@ -4,7 +4,6 @@ import type { Caution } from '../domain/eat-by';
 import type { TrayTally } from '../domain/inventory';
 import { isIsoDate, type IsoDate } from '../domain/iso-date';
 import type { MacroTargets } from '../domain/targets';
-import type { CellResult } from '../domain/week-board';
 import type { DayTotals, WordedWarning } from '../domain/week-check';
 import type { AssemblyDto, PlateMacrosDto } from './assemblies.schema';
 import { PG_INT_MAX, TOO_LARGE } from './ids';

@@ -14,7 +14,7 @@ afterEach(() => vi.unstubAllGlobals());
 
 describe('deleting a week', () => {
   it('drops it from the cached list and its board at once, before any list read answers', async () => {
-    const fetchMock = vi.fn((url: string, init?: RequestInit) =>
+    const fetchMock = vi.fn((_url: string, init?: RequestInit) =>
       init?.method === 'DELETE' ? Promise.resolve(new Response(null, { status: 204 })) : new Promise<Response>(() => undefined),
     );
     vi.stubGlobal('fetch', fetchMock);

@@ -1,7 +1,6 @@
 import Decimal from 'decimal.js';
 import { toNutrientNumbers } from '@shared/domain/nutrition.js';
 import type { AssemblyDto } from '@shared/schemas/assemblies.schema.js';
-import type { IAssembly } from './assembly.entity.js';
 import { addOnGrams, itemsOf, plateFacts, type PlateContext, type PlateLike } from './plate-facts.js';
 
 export function presentAssembly(a: PlateLike, ctx: PlateContext): AssemblyDto {

@@ -184,7 +184,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
   r.post(
     '/invitations/:token/accept',
     allow('public'),
-    validated({ params: tokenParams, body: acceptInvitationSchema }, async ({ params, body }, req, res) => {
+    validated({ params: tokenParams, body: acceptInvitationSchema }, async ({ params, body }, req) => {
       const em = emOf(req);
       const userId = await auth.acceptInvitation(em, params.token, body);
       const actor = (await auth.loadActor(em, userId))!;

@@ -206,9 +206,9 @@ export async function computeParsedRecipeForActor(em: EntityManager, actor: Acto
     exact = computeRecipeExact(lines, { portions: parsed.portions, yieldFactor: parsed.yieldFactor, netCarbRule: rule });
   } catch (first) {
     if (!(first instanceof UnitConversionError)) throw first;
-    parsed.items.forEach((item, i) => {
+    lines.forEach((line, i) => {
       try {
-        computeRecipeExact([lines[i]]);
+        computeRecipeExact([line]);
       } catch (e) {
         if (!(e instanceof UnitConversionError)) throw e;
         errors[`items.${i}.unit`] = [`${e.message} Add it to the ingredient, or use grams.`];
