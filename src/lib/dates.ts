@@ -10,6 +10,13 @@ export function dayLabel(iso: string, longWeekday = false): string {
   return (longWeekday ? long : short).format(new Date(`${iso}T12:00:00Z`));
 }
 
+const moment = new Intl.DateTimeFormat(undefined, { weekday: 'short', day: 'numeric', month: 'short', hour: 'numeric', minute: '2-digit' });
+
+/** When something happened ("Wed, Dec 2, 3:13 PM"), on this device's clock: every page writes a moment this way. */
+export function momentLabel(iso: string): string {
+  return moment.format(new Date(iso));
+}
+
 /** "Next prep day: Wednesday, Dec 9", with "(today)" when it is the reader's today. */
 export function nextPrepDayTitle(date: string, today: string): string {
   return `Next prep day: ${dayLabel(date, true)}${date === today ? ' (today)' : ''}`;

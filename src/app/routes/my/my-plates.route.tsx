@@ -6,7 +6,7 @@ import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
 import type { MyPlateDto } from '@shared/schemas/weeks.schema';
 import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
-import { localToday } from '@/lib/dates';
+import { localToday, momentLabel } from '@/lib/dates';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/week-mail/api/week-mail.queries';
@@ -166,7 +166,7 @@ export function Component() {
           ))}
         </ul>
         <p className="mt-2 text-xs text-ink-faint">
-          Version {week.publishedVersion}, published {new Date(week.publishedAt).toLocaleString()}.
+          Version {week.publishedVersion}, published {momentLabel(week.publishedAt)}.
         </p>
       </Card>
       <Cautions compact />

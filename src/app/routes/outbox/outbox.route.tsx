@@ -11,6 +11,7 @@ import { SelectField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, Progress, QueryView, Skeleton } from '@/components/ui/states';
 import { errorMessage } from '@/lib/problem';
 import { paths } from '@/config/paths';
+import { momentLabel } from '@/lib/dates';
 
 const KIND_WORDS: Record<MailKind, string> = {
   invitation: 'Invitation',
@@ -23,8 +24,6 @@ const KIND_WORDS: Record<MailKind, string> = {
 
 /** What each attachment kind is, in words (an unknown kind shows as stored). */
 const ATTACHMENT_WORDS: Record<string, string> = { 'week-plan': 'the week plan (PDF)', 'week-thaw-reminders': 'thaw reminders (calendar)' };
-
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 export function Component() {
   const [page, setPage] = useState(1);
@@ -57,7 +56,7 @@ export function Component() {
           <div className="flex flex-col gap-4">
             {activeBatches.map((b) => (
               <div key={b.batchId} className="flex flex-col gap-1">
-                <Progress value={b.sent} max={b.total} label={`Batch of ${when(b.createdAt)}: sent`} />
+                <Progress value={b.sent} max={b.total} label={`Batch of ${momentLabel(b.createdAt)}: sent`} />
                 <p className="text-sm text-ink-soft">
                   <span className="num">{b.pending}</span> waiting · <span className="num">{b.failed}</span> failed
                 </p>
@@ -131,8 +130,8 @@ export function Component() {
                         {m.lastError && m.status !== 'sent' && <p className="text-sm text-signal-700">Last error: {m.lastError}</p>}
                       </td>
                       <td className="py-2 pr-3 text-sm">
-                        {when(m.createdAt)}
-                        {m.sentAt && <span className="block text-ink-faint">sent {when(m.sentAt)}</span>}
+                        {momentLabel(m.createdAt)}
+                        {m.sentAt && <span className="block text-ink-faint">sent {momentLabel(m.sentAt)}</span>}
                       </td>
                       <td className="num py-2 pr-3">{m.attempts}</td>
                       <td className="py-2">

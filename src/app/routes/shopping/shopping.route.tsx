@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button';
 import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton, Progress } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { errorMessage } from '@/lib/problem';
-import { dayLabel } from '@/lib/dates';
+import { dayLabel, momentLabel } from '@/lib/dates';
 
 const linkButton =
   'inline-flex min-h-11 items-center justify-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
@@ -87,7 +87,7 @@ export function Component() {
       {list.tripDates.length > 0 && <TripChoice weekId={weekId} tripDates={list.tripDates} prepDate={list.prepDate} />}
       {list.alsoBought.length > 0 && (
         <Notice tone="warn" title="Another list of this week was marked bought">
-          {list.alsoBought.map((b) => `${b.prepDate ? `The list for prep ${dayLabel(b.prepDate)}` : "The whole week's list"} on ${new Date(b.at).toLocaleString()}`).join('; ')}
+          {list.alsoBought.map((b) => `${b.prepDate ? `The list for prep ${dayLabel(b.prepDate)}` : "The whole week's list"} on ${momentLabel(b.at)}`).join('; ')}
           . The pantry now holds what it bought, and this list counts on it.
         </Notice>
       )}
@@ -117,7 +117,7 @@ export function Component() {
       <div className="flex flex-col gap-3 border-t border-line pt-4 print:hidden">
         {list.bought ? (
           <Notice tone="info" title="Marked bought">
-            The pantry was updated on {new Date(list.bought.at).toLocaleString()}
+            The pantry was updated on {momentLabel(list.bought.at)}
             {list.bought.by ? ` by ${list.bought.by}` : ''}.
           </Notice>
         ) : (

@@ -5,8 +5,7 @@ import { EmptyState, ErrorState, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { deliveriesQuery } from '../api/week-mail.queries';
 import { counted } from '@/lib/words';
-
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { momentLabel } from '@/lib/dates';
 
 const KIND_WORDS: Record<string, string> = {
   'week-plan': 'Week plan',
@@ -42,11 +41,11 @@ export function DeliveryLog({ clientId }: { clientId: number }) {
               ) : null}
             </p>
             <p className="text-sm text-ink-soft">
-              To {m.to} · queued <time dateTime={m.createdAt}>{when(m.createdAt)}</time>
+              To {m.to} · queued <time dateTime={m.createdAt}>{momentLabel(m.createdAt)}</time>
               {m.sentAt && (
                 <>
                   {' · sent '}
-                  <time dateTime={m.sentAt}>{when(m.sentAt)}</time>
+                  <time dateTime={m.sentAt}>{momentLabel(m.sentAt)}</time>
                 </>
               )}
               {m.attachments.length > 0 && ` · ${counted(m.attachments.length, 'attachment')}`}

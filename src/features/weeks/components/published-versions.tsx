@@ -2,9 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import type { BoardDto } from '@shared/schemas/weeks.schema';
 import { ErrorState, Skeleton } from '@/components/ui/states';
 import { publicationsQuery } from '../api/weeks.queries';
-
-const when = (iso: string) =>
-  new Date(iso).toLocaleString(undefined, { weekday: 'short', month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
+import { momentLabel } from '@/lib/dates';
 
 /** The week's published versions, newest first: when, by whom, and which one clients see now. */
 export function PublishedVersions({ board }: { board: BoardDto }) {
@@ -22,7 +20,7 @@ export function PublishedVersions({ board }: { board: BoardDto }) {
         {q.data.map((p) => (
           <li key={p.number} className="flex flex-wrap justify-between gap-x-4 py-2">
             <span>
-              <span className="font-bold">Version {p.number}</span> · {when(p.publishedAt)}
+              <span className="font-bold">Version {p.number}</span> · {momentLabel(p.publishedAt)}
               {p.publishedBy ? ` · ${p.publishedBy}` : ''}
             </span>
             {p.number === current && <span className="font-bold">Clients see this one</span>}
