@@ -397,8 +397,24 @@ const RE_GLYPH = new RegExp(`^(\\d+)?\\s*([${GLYPHS}])$`);
 const RE_MIXED = /^(\d+)\s+(\d+)\s*\/\s*(\d+)$/;
 const RE_FRACTION = /^(\d+)\s*\/\s*(\d+)$/;
 const RE_DECIMAL = /^(?:\d+(?:\.\d*)?|\.\d+)$/;
-const RE_DECIMAL_COMMA = /^\d+,\d{1,2}$/;
 const RE_THOUSANDS = /^\d{1,3}(?:,\d{3})+$/;
+
+/**
+ * Number text with a decimal comma written with a point: "12,5" → "12.5", "0,125" → "0.125", "1,2345" → "1.2345".
+ * A comma before groups of exactly three digits ("1,717", "12,000") is ambiguous: a US thousands separator or a
+ * decimal comma? Read either way the value is off by a factor of a thousand, so it is refused (null), never guessed.
+ * Text without a comma comes back as it is (the caller checks it is a number).
+ */
+export function decimalCommaToPoint(text: string): string | null {
+  if (!text.includes(',')) return text;
+  if (RE_THOUSANDS.test(text) && !text.startsWith('0,')) return null;
+  return /^\d+,\d+$/.test(text) ? text.replace(',', '.') : text;
+}
+
+/** Why a number such as "1,717" is refused (decimalCommaToPoint gave null). */
+export function ambiguousCommaMessage(text: string): string {
+  return `"${text}" is ambiguous: write ${text.replace(/,/g, '')} for a whole number or use a point for decimals.`;
+}
 
 function hint(text: string): string {
   return `Could not read "${text}" as an amount. Try 2, 1.5, 1,5, 1 1/2, 1½ or a range like 1-2.`;
@@ -427,20 +443,15 @@ function parseSingle(part: string, text: string): Decimal {
   if (m) return fraction(m[1], m[2], m[3], text);
   m = RE_FRACTION.exec(s);
   if (m) return fraction(undefined, m[1], m[2], text);
-  if (RE_DECIMAL.test(s)) return new Decimal(s.endsWith('.') ? s.slice(0, -1) : s);
-  if (RE_DECIMAL_COMMA.test(s)) return new Decimal(s.replace(',', '.'));
-  if (RE_THOUSANDS.test(s)) {
-    throw new AmountParseError(
-      text,
-      `"${s}" is ambiguous: write ${s.replace(/,/g, '')} for a whole number or use a point for decimals.`,
-    );
-  }
+  const plain = decimalCommaToPoint(s);
+  if (plain === null) throw new AmountParseError(text, ambiguousCommaMessage(s));
+  if (RE_DECIMAL.test(plain)) return new Decimal(plain.endsWith('.') ? plain.slice(0, -1) : plain);
   throw new AmountParseError(text, hint(text));
 }
 
 /**
  * Reads an amount as people type it.
- * - `2`, `1.5`, `.5`, `1,5` (a decimal comma takes one or two digits; `1,500` is refused as ambiguous)
+ * - `2`, `1.5`, `.5`, `1,5`, `0,125` (a decimal comma; `1,500` is refused as ambiguous: see decimalCommaToPoint)
  * - `1/2`, `1 1/2`, `1-1/2` (whole, hyphen, proper fraction: the US mixed-number habit, not a range)
  * - `½`, `1½`, `1 ½` (Unicode vulgar fractions; the fraction slash ⁄ works like /)
  * - ranges `1-2`, `1–2`, `1—2`, `1 to 2`, `½-1`, `1-1 1/2`: value is the midpoint, min and max are kept,

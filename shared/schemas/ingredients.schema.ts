@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { NET_CARB_RULES, type AtwaterCheck, type NetCarbRuleKind, type NutrientNumbers } from '../domain/nutrition';
-import { AmountParseError, isMassUnit, isVolumeUnit, MAX_AMOUNT, MAX_AMOUNT_MESSAGE, parseAmount, unitKind, UnknownUnitError } from '../domain/units';
+import { ambiguousCommaMessage, AmountParseError, decimalCommaToPoint, isMassUnit, isVolumeUnit, MAX_AMOUNT, MAX_AMOUNT_MESSAGE, parseAmount, unitKind, UnknownUnitError } from '../domain/units';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 /** Ingredient library, recipe calculation and the net-carb setting: inputs (zod) and DTOs for API and client. */
@@ -67,7 +67,12 @@ function decimalField<B extends Blank>(
     .union([z.string(), z.number(), z.null()])
     .optional()
     .transform((v, ctx) => {
-      const s = v === null || v === undefined ? '' : typeof v === 'number' ? String(v) : v.trim().replace(/^(\d*),(\d+)$/, '$1.$2');
+      const typed = v === null || v === undefined ? '' : typeof v === 'number' ? String(v) : v.trim();
+      const s = decimalCommaToPoint(typed);
+      if (s === null) {
+        ctx.addIssue({ code: 'custom', message: `${capital(label)}: ${ambiguousCommaMessage(typed)}` });
+        return z.NEVER;
+      }
       if (s === '') {
         if (blank === 'zero') return '0';
         if (blank === 'null') return null;

@@ -4,7 +4,7 @@
 import Decimal from 'decimal.js';
 import { z } from 'zod';
 import { isIsoDate } from '../domain/iso-date';
-import { MAX_AMOUNT, MAX_AMOUNT_MESSAGE } from '../domain/units';
+import { ambiguousCommaMessage, decimalCommaToPoint, MAX_AMOUNT, MAX_AMOUNT_MESSAGE } from '../domain/units';
 import { LABEL_SHEET_CODES } from '../domain/label-sheets';
 import type { AllergenCode } from '../domain/allergens';
 import type { LabelSheetCode } from '../domain/label-sheets';
@@ -16,7 +16,12 @@ const PLAIN_DECIMAL = /^(?:\d+(?:\.\d*)?|\.\d+)$/;
 export const amountField = z
   .union([z.string(), z.number()], { message: 'Enter an amount' })
   .transform((v, ctx) => {
-    const s = typeof v === 'number' ? String(v) : v.trim().replace(/^(\d*),(\d+)$/, '$1.$2');
+    const typed = typeof v === 'number' ? String(v) : v.trim();
+    const s = decimalCommaToPoint(typed);
+    if (s === null) {
+      ctx.addIssue({ code: 'custom', message: ambiguousCommaMessage(typed) });
+      return z.NEVER;
+    }
     if (s === '') {
       ctx.addIssue({ code: 'custom', message: 'Enter an amount' });
       return z.NEVER;

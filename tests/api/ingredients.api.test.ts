@@ -262,6 +262,21 @@ line name",dairy,100,5,1,10,3,0,100,,,,,,,,nowhere,label`,
     expect(await ownCount(coachA.workspaceId)).toBe(before);
   });
 
+  it('reads a decimal comma (a semicolon file from a spreadsheet), and refuses "1,717" rather than guess a thousand-fold', async () => {
+    // Bacon's sodium as a US table writes it (1,717 mg per 100 g) would be 1.717 mg read as a decimal comma, and
+    // 1717 mg read as a thousands separator: the file says which, or nothing is imported.
+    const semi = header.replace(/,/g, ';');
+    const ambiguous = [semi, `Comma bacon;meat;417;39,69;13,3;12,62;1,28;0;1,717;;;;;;;;;package label`].join('\n');
+    const res = await coachA.agent.post('/api/ingredients/import').attach('file', Buffer.from(ambiguous), { filename: 'eu.csv', contentType: 'text/csv' }).expect(400);
+    expect(res.body.report).toEqual([{ line: 2, column: 'sodium_mg', reason: expect.stringMatching(/"1,717" is ambiguous: write 1717/) }]);
+    const plain = [semi, `Comma bacon;meat;417;39,69;13,3;12,62;1,28;0;1717;;;;;;;;;package label`].join('\n');
+    await coachA.agent.post('/api/ingredients/import').attach('file', Buffer.from(plain), { filename: 'eu.csv', contentType: 'text/csv' }).expect(201);
+    const [row] = await sql<{ fat_g: string; sodium_mg: string }>(`select fat_g, sodium_mg from ingredient where name = 'Comma bacon' and workspace_id = $1`, [
+      coachA.workspaceId,
+    ]);
+    expect(row).toEqual({ fat_g: '39.6900', sodium_mg: '1717.0000' });
+  });
+
   it('reports a missing required column and an unknown one on line 1', async () => {
     const res = await coachA.agent
       .post('/api/ingredients/import')

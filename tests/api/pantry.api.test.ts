@@ -35,6 +35,12 @@ describe('pantry', () => {
     expect(edited.body.amount).toBeCloseTo(Qty(8, 'oz').to('g').scalar, 3);
     expect(edited.body.version).toBe(2);
 
+    // "1,500 g" on hand: a US thousands separator or a decimal comma? Refused, naming the field (it read 1.5 g).
+    const ambiguous = await assistant.agent.patch(`/api/pantry/${created.body.id}`).send({ amount: '1,500', unit: 'g', version: 2 }).expect(400);
+    expect(ambiguous.body.errors.amount[0]).toMatch(/"1,500" is ambiguous: write 1500/);
+    const comma = await assistant.agent.patch(`/api/pantry/${created.body.id}`).send({ amount: '226,8', unit: 'g', version: 2 }).expect(200);
+    expect(comma.body.amount).toBe(226.8);
+
     const list = await coach.agent.get('/api/pantry').expect(200);
     expect(list.body.items.map((i: { id: number }) => i.id)).toEqual([created.body.id]);
 
