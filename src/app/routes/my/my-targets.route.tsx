@@ -5,6 +5,7 @@ import { useMe } from '@/features/auth/hooks/use-me';
 import { Card, EmptyState, ErrorState, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
+import { SlotShares } from '@/features/clients/components/slot-shares';
 
 function Linked({ clientId }: { clientId: number }) {
   const q = useQuery(clientQuery(clientId));
@@ -30,14 +31,7 @@ function Linked({ clientId }: { clientId: number }) {
             </div>
           ))}
         </dl>
-        <p className="mt-3 text-sm text-ink-soft">Per day. Your plates:</p>
-        <ul className="mt-1 flex flex-col gap-1 text-sm">
-          {Object.entries(t.slots).map(([slot, s]) => (
-            <li key={slot} className="num">
-              <span className="capitalize">{slot}</span>: {s.targetKcal} kcal · ≤ {s.netCarbCapG} g net carbs · {s.proteinG} g protein
-            </li>
-          ))}
-        </ul>
+        <SlotShares day={t} slots={t.slots} />
       </Card>
       <Card>
         <h2 className="mb-2 text-xl">What your coach plans around</h2>
