@@ -220,17 +220,25 @@ describe('ovens', () => {
   });
 });
 
+/**
+ * A workspace with an assistant and a week baking two of the factory tray on its prep day, 2026-01-04 (egg-slab,
+ * 350 °F, 25–30 min, its own values; the default egg-slab rule: hands-on 10 min).
+ */
+async function twoTrayWeek() {
+  const coach = await coachWorkspace(app);
+  const assistant = await member(app, coach, 'assistant');
+  const tray = await makeTray(coach);
+  const { week } = await makeWeek(coach);
+  await coach.agent
+    .put(`/api/weeks/${week.id}/trays`)
+    .send({ version: week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 2 }] })
+    .expect(200);
+  return { coach, assistant, tray, week };
+}
+
 describe('the bake run of a prep week', () => {
   it('plans the week’s tray counts in the workspace ovens; settings with a version; PDF and iCal', async () => {
-    const coach = await coachWorkspace(app);
-    const assistant = await member(app, coach, 'assistant');
-    // The factory tray: egg-slab, 350 °F, 25–30 min (its own values); the default egg-slab rule: hands-on 10 min.
-    const tray = await makeTray(coach);
-    const { week } = await makeWeek(coach);
-    await coach.agent
-      .put(`/api/weeks/${week.id}/trays`)
-      .send({ version: week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 2 }] })
-      .expect(200);
+    const { coach, assistant, tray, week } = await twoTrayWeek();
 
     const empty = await assistant.agent.get(`/api/weeks/${week.id}/bake-run`).expect(200);
     expect(empty.body.run).toBeNull();
@@ -295,14 +303,7 @@ describe('the bake run of a prep week', () => {
 
 describe('moving a run to the time the kitchen really started', () => {
   it('the assistant moves the start on prep day; the plan shifts, the other settings stay, a stale version is a 409', async () => {
-    const coach = await coachWorkspace(app);
-    const assistant = await member(app, coach, 'assistant');
-    const tray = await makeTray(coach);
-    const { week } = await makeWeek(coach);
-    await coach.agent
-      .put(`/api/weeks/${week.id}/trays`)
-      .send({ version: week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 2 }] })
-      .expect(200);
+    const { coach, assistant, week } = await twoTrayWeek();
     await makeOven(coach, { name: 'Left', racks: 2, traysPerRack: 1 });
 
     // No settings saved yet: the move creates them with the defaults (one cook, every oven, the rules' hands-on).
