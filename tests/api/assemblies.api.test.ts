@@ -118,6 +118,9 @@ describe('plates (assemblies)', () => {
       .expect(200);
     const del = await coach.agent.delete(`/api/assemblies/${plate.id}`).expect(409);
     expect(del.body.code).toBe('in_use');
+    // It says where the plate is planned (the week has no name: "Week of" its first day, Mon 5 Jan 2026).
+    expect(del.body.detail).toBe(`"${plate.name}" is planned for 1 meal on the board of Week of Mon 5 Jan: take it off that board first, or keep it.`);
+    expect(await sql('select id from assembly where id = $1', [plate.id])).toHaveLength(1);
     const unused = await makeAssembly(coach, tray.id);
     await coach.agent.delete(`/api/assemblies/${unused.id}`).expect(204);
     expect(await sql('select id from assembly where id = $1', [unused.id])).toEqual([]);

@@ -2,7 +2,8 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { parseAmount } from '@shared/domain/units.js';
 import type { AssemblyDto, AssemblyValues, PlatePreviewDto, PlatePreviewValues, UpdateAssemblyValues } from '@shared/schemas/assemblies.schema.js';
 import type { Actor } from '../../http/authz.js';
-import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
+import { HttpError, NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
+import { weekTitle } from '@shared/domain/week-board.js';
 import { Assembly, AssemblyItem, type IAssembly } from './assembly.entity.js';
 import { presentAssembly } from './assembly.presenter.js';
 import { addOnGrams, computePlateFacts, loadPlateContext, type PlateItemRow, type PlateRow } from './plate-facts.js';
@@ -175,8 +176,35 @@ export async function updateAssembly(em: EntityManager, actor: Actor, id: number
   return getAssembly(em, actor, id);
 }
 
+/** The weeks whose boards plan a plate, earliest first, with how many meals each. */
+async function plateUses(em: EntityManager, workspaceId: number, assemblyId: number) {
+  return em.getConnection().execute<{ name: string | null; startDate: string; meals: number }[]>(
+    `select w.name, w.start_date as "startDate", count(*)::int as meals
+       from week_cell c join week w on w.id = c.week_id
+      where c.assembly_id = ? and w.workspace_id = ?
+      group by w.id, w.name, w.start_date order by w.start_date asc`,
+    [assemblyId, workspaceId],
+    'all',
+    em.getTransactionContext(),
+  );
+}
+
+/**
+ * Deletes a plate no week plans. A plate on a board (a past week's too: clients' published plans name it) is a 409
+ * that says where, instead of the database's bare refusal.
+ */
 export async function deleteAssembly(em: EntityManager, actor: Actor, id: number): Promise<void> {
   const a = await findAssembly(em, actor, id);
+  const uses = await plateUses(em, actor.workspaceId, a.id);
+  if (uses.length) {
+    const meals = uses.reduce((n, u) => n + u.meals, 0);
+    const weeks = uses.map((u) => weekTitle(u)).join(', ');
+    throw new HttpError(
+      409,
+      'in_use',
+      `"${a.name}" is planned for ${meals} meal${meals === 1 ? '' : 's'} on ${uses.length === 1 ? 'the board of' : 'the boards of'} ${weeks}: take it off ${uses.length === 1 ? 'that board' : 'those boards'} first, or keep it.`,
+    );
+  }
   await em.transactional(async (tx) => {
     await tx.nativeDelete(AssemblyItem, { assembly: a.id });
     await tx.nativeDelete(Assembly, { id: a.id, workspace: actor.workspaceId });

@@ -105,13 +105,10 @@ export function Component() {
                             className="mt-auto flex gap-2"
                             onEdit={() => setEditing(p)}
                             onDelete={() => {
+                              if (!window.confirm(`Delete the plate "${p.name}"? A plate planned on a week board is kept.`)) return;
                               setError(null);
-                              del.mutate(p.id, {
-                                onError: (e) => {
-                                  markShown(e);
-                                  setError(isApiError(e, 409) ? `${p.name} is on a week board: take it off first.` : errorMessage(e));
-                                },
-                              });
+                              // A plate on a board is refused with where it is planned (the server's words).
+                              del.mutate(p.id, { onError: (e) => setError(errorMessage(e)) });
                             }}
                           />
                         )}
