@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import Decimal from 'decimal.js';
 import type { Express } from 'express';
 import { testApp } from '../support/test-app.js';
-import { coachWorkspace, ingredientInput, makeIngredient, member, uniq, type Member } from '../support/factories.js';
+import { coachWorkspace, ingredientInput, makeAssembly, makeIngredient, makeTray, member, trayInput, uniq, type Member } from '../support/factories.js';
 import { sql } from '../support/db.js';
 import { seedReferenceIngredients } from '@server/db/seeders/ingredient-seed.js';
 import { SEED_INGREDIENTS } from '@server/db/seeders/data/ingredients.data.js';
@@ -201,18 +201,21 @@ describe('workspace-own ingredients (CRUD, isolation, locking)', () => {
     expect(row.kcal).toBe('300.0000');
   });
 
-  it('409 when a row that references the ingredient exists (a tray line stands in), and the row stays', async () => {
-    const ing = await makeIngredient(coachA);
-    // A stand-in for a base tray's line: any table with a foreign key to ingredient (no cascade) blocks the delete.
-    await sql('create table if not exists test_ingredient_ref (id serial primary key, ingredient_id int not null references ingredient(id))');
-    try {
-      await sql('insert into test_ingredient_ref (ingredient_id) values ($1)', [ing.id]);
-      const res = await coachA.agent.delete(`/api/ingredients/${ing.id}`).expect(409);
-      expect(res.body.detail).toMatch(/used by a base tray/);
-      expect(await sql('select id from ingredient where id = $1', [ing.id])).toHaveLength(1);
-    } finally {
-      await sql('drop table if exists test_ingredient_ref');
-    }
+  it('409 naming the base trays and plates that use the ingredient, and the row stays', async () => {
+    const onTray = await makeIngredient(coachA);
+    const tray = await makeTray(coachA, {}, onTray.id);
+    const res = await coachA.agent.delete(`/api/ingredients/${onTray.id}`).expect(409);
+    expect(res.body).toMatchObject({ code: 'in_use', detail: `"${onTray.name}" cannot be deleted while base tray "${tray.name}" uses it: take it out there first.` });
+    // Only a plate's add-on uses this one: the message says so (it said "a base tray" whatever used it).
+    const addOn = await makeIngredient(coachA);
+    const plate = await makeAssembly(coachA, tray.id, { addOns: [{ ingredientId: addOn.id, amountText: '1', unit: 'oz', note: '' }] });
+    const res2 = await coachA.agent.delete(`/api/ingredients/${addOn.id}`).expect(409);
+    expect(res2.body.detail).toBe(`"${addOn.name}" cannot be deleted while plate "${plate.name}" uses it: take it out there first.`);
+    // Used by both: both named.
+    await coachA.agent.post('/api/trays').send(trayInput(addOn.id, { name: 'Second tray' })).expect(201);
+    const res3 = await coachA.agent.delete(`/api/ingredients/${addOn.id}`).expect(409);
+    expect(res3.body.detail).toBe(`"${addOn.name}" cannot be deleted while base tray "Second tray" and plate "${plate.name}" use it: take it out there first.`);
+    expect(await sql('select id from ingredient where id = any($1)', [[onTray.id, addOn.id]])).toHaveLength(2);
   });
 });
 

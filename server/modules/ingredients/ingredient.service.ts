@@ -355,13 +355,30 @@ export async function deleteIngredient(em: EntityManager, actor: Actor, id: numb
     });
   } catch (e) {
     if (e instanceof ForeignKeyConstraintViolationException) {
-      throw new Conflict(`"${row.name}" is used by a base tray, so it cannot be deleted. Remove it from the tray first.`, {
+      const users = await usersOf(em, actor.workspaceId, row.id);
+      throw new Conflict(`"${row.name}" cannot be deleted while ${users.words} ${users.count === 1 ? 'uses' : 'use'} it: take it out there first.`, {
         code: 'in_use',
       });
     }
     throw e;
   }
   em.clear();
+}
+
+/** The base trays and plates that name an ingredient, in words ("base tray "A" and plate "B""); a few, then a count. */
+async function usersOf(em: EntityManager, workspaceId: number, ingredientId: number): Promise<{ words: string; count: number }> {
+  const rows = await em.getConnection().execute<{ kind: 'tray' | 'plate'; name: string }[]>(
+    `select distinct 'tray' as kind, t.name from tray_line l join tray t on t.id = l.tray_id where l.ingredient_id = ? and t.workspace_id = ?
+     union
+     select distinct 'plate' as kind, a.name from assembly_item ai join assembly a on a.id = ai.assembly_id where ai.ingredient_id = ? and a.workspace_id = ?
+     order by kind desc, name asc`,
+    [ingredientId, workspaceId, ingredientId, workspaceId],
+  );
+  if (!rows.length) return { words: 'a base tray or a plate', count: 1 };
+  const named = rows.slice(0, 3).map((r) => `${r.kind === 'tray' ? 'base tray' : 'plate'} "${r.name}"`);
+  const more = rows.length - named.length;
+  const words = more > 0 ? `${named.join(', ')} and ${more} more` : named.length > 1 ? `${named.slice(0, -1).join(', ')} and ${named[named.length - 1]}` : named[0];
+  return { words, count: rows.length };
 }
 
 /** "Copy to my library": a workspace-own copy of a shared (or own) row, named "<name> (copy)" when taken. */

@@ -71,7 +71,7 @@ function EditOwn({ ingredient }: { ingredient: IngredientDto }) {
         >
           Delete ingredient
         </Button>
-        <p className="mt-1 text-sm text-ink-faint">An ingredient used by a base tray cannot be deleted.</p>
+        <p className="mt-1 text-sm text-ink-faint">An ingredient used by a base tray or a plate cannot be deleted.</p>
       </div>
     </>
   );
