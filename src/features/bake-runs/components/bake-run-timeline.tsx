@@ -94,7 +94,8 @@ export function BakeRunTimeline({ run, unit, nowMinute }: { run: BakeRunResult; 
     return `${String(Math.floor(t / 60)).padStart(2, '0')}:${String(t % 60).padStart(2, '0')}`;
   };
   return (
-    <figure className="overflow-x-auto rounded-tray border border-line bg-paper-card p-3" aria-label="Bake run timeline">
+    // tabIndex: a phone scrolls the timeline sideways; a keyboard reaches it to scroll it with the arrow keys.
+    <figure tabIndex={0} className="overflow-x-auto rounded-tray border border-line bg-paper-card p-3" aria-label="Bake run timeline">
       <div className="flex" style={{ minWidth: width + 110 }}>
         <div className="w-[110px] shrink-0">
           <div className="h-7" />

@@ -71,7 +71,7 @@ export function BakeRunView({ run, unit, move }: { run: BakeRunResult; unit: Tem
       </section>
       <section className="flex flex-col gap-2">
         <h2 className="text-xl">Trays</h2>
-        <div className="overflow-x-auto">
+        <div className="overflow-x-auto" role="region" aria-label="Trays of the run" tabIndex={0}>
           <table className="w-full text-left text-base">
             <thead className="text-sm text-ink-soft">
               <tr>
