@@ -31,7 +31,7 @@ export function AtwaterFlag({ check, long = false }: { check: AtwaterCheck; long
     );
   }
   return (
-    <span title={title} className="inline-flex items-center gap-1 text-sm font-bold text-caution">
+    <span title={title} className="inline-flex items-center gap-1 text-sm font-bold text-caution-700">
       <span aria-hidden>⚠</span> {long ? `Check energy: ${title}` : 'Check energy'}
     </span>
   );

@@ -42,7 +42,7 @@ export function TrayCard({ tray }: { tray: TraySummaryDto }) {
             ))}
           </dl>
         ) : (
-          <p className="text-sm text-caution">⚠ A line cannot be weighed: open the tray to fix it.</p>
+          <p className="text-sm text-caution-700">⚠ A line cannot be weighed: open the tray to fix it.</p>
         )}
         {tray.allergens.length > 0 && (
           <p className="text-sm">
