@@ -24,10 +24,11 @@ export function useCalcBakeRun() {
   });
 }
 
-export function useSaveBakeRunSettings(weekId: number) {
+/** A saved change to a week's run (its settings, or its start): PUT `path`, then the answer is the run to show. */
+function useRunChange<B>(weekId: number, path: 'settings' | 'start') {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: BakeRunSettingsInput) => api.put<WeekBakeRunDto>(`/weeks/${weekId}/bake-run/settings`, body),
+    mutationFn: (body: B) => api.put<WeekBakeRunDto>(`/weeks/${weekId}/bake-run/${path}`, body),
     meta: { form: true, silent: true },
     onSuccess: (dto) => {
       qc.setQueryData(bakeRunsKeys.weekRun(weekId, dto.prepDate), dto);
@@ -36,18 +37,10 @@ export function useSaveBakeRunSettings(weekId: number) {
   });
 }
 
+export const useSaveBakeRunSettings = (weekId: number) => useRunChange<BakeRunSettingsInput>(weekId, 'settings');
+
 /** Moves a week's run to the time the kitchen really started (coach or assistant, on prep day). */
-export function useMoveBakeRunStart(weekId: number) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (body: BakeRunStartInput) => api.put<WeekBakeRunDto>(`/weeks/${weekId}/bake-run/start`, body),
-    meta: { form: true, silent: true },
-    onSuccess: (dto) => {
-      qc.setQueryData(bakeRunsKeys.weekRun(weekId, dto.prepDate), dto);
-      return qc.invalidateQueries({ queryKey: bakeRunsKeys.weekRuns() });
-    },
-  });
-}
+export const useMoveBakeRunStart = (weekId: number) => useRunChange<BakeRunStartInput>(weekId, 'start');
 
 type RuleBody = Omit<BakeRuleCreateInput, 'category'> & { category?: string; version?: number };
 
