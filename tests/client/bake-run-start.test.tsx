@@ -19,6 +19,38 @@ const problem = (status: number, code: string, detail: string, errors?: Record<s
   new ApiError({ type: 'about:blank', title: 'Refused', status, code, detail, ...(errors ? { errors } : {}) });
 const move = (over: Partial<MoveStart> = {}): MoveStart => ({ saving: false, error: null, onMove: vi.fn(), onReload: vi.fn(), ...over });
 
+describe('now and next on prep day', () => {
+  it('counts down to a tray’s time out and to the cooling deadlines too, not only to checks', () => {
+    const run = {
+      start: '2026-01-04T08:00',
+      trays: [{ id: 't1', name: 'Egg slab' }],
+      events: [
+        { kind: 'first-check', minute: 30, trayId: 't1', oven: 'Left', tempF: 350 },
+        { kind: 'tray-out', minute: 35, trayId: 't1', oven: 'Left', tempF: 350 },
+        { kind: 'cool-to-70-by', minute: 155, trayId: 't1', oven: 'Left', tempF: 70 },
+        { kind: 'fridge-41-by', minute: 395, trayId: 't1', oven: 'Left', tempF: 41 },
+      ],
+    } as unknown as BakeRunResult;
+    render(<BakeRunTimers run={run} unit="F" nowMinute={33} />);
+    const items = screen.getAllByRole('listitem').map((li) => li.textContent?.replace(/\s+/g, ' '));
+    // The check 3 minutes ago has dropped off (past events stay 2 minutes); the rest count down.
+    expect(items).toEqual(['in 2 minEgg slab out', 'in 122 minEgg slab at 70 °F or below by now', 'in 362 minEgg slab at 41 °F or below, in the fridge, by now']);
+  });
+
+  it('a tray taken out at its check time is one line, the check', () => {
+    const run = {
+      start: '2026-01-04T08:00',
+      trays: [{ id: 't1', name: 'Egg slab' }],
+      events: [
+        { kind: 'first-check', minute: 30, trayId: 't1', oven: 'Left', tempF: 350 },
+        { kind: 'tray-out', minute: 30, trayId: 't1', oven: 'Left', tempF: 350 },
+      ],
+    } as unknown as BakeRunResult;
+    render(<BakeRunTimers run={run} unit="F" nowMinute={20} />);
+    expect(screen.getAllByRole('listitem').map((li) => li.textContent)).toEqual(['in 10 minCheck Egg slab']);
+  });
+});
+
 describe('moving a run to when the kitchen really started', () => {
   it('sends the typed time on the run’s day, and says so once the plan starts there', () => {
     const m = move();

@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
-import type { BakeRunResult } from '@shared/domain/bake-run-types';
+import type { BakeEventKind, BakeRunResult } from '@shared/domain/bake-run-types';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
@@ -33,7 +33,10 @@ function beep() {
   }
 }
 
-const TIMED = new Set(['preheat', 'setpoint-change', 'tray-in', 'first-check']);
+/** Steps with a countdown: the oven's, the trays' (in, check, out) and the cooling deadlines of the food code. */
+const TIMED = new Set<BakeEventKind>(['preheat', 'setpoint-change', 'tray-in', 'first-check', 'tray-out', 'cool-to-70-by', 'fridge-41-by']);
+/** Steps the sound announces when they are due: a tray to check or to take out. */
+const RUNG = new Set<BakeEventKind>(['first-check', 'tray-out']);
 
 /** Moving a saved run to the time the kitchen really started (the week's run page gives it; the planner does not). */
 export interface MoveStart {
@@ -102,18 +105,22 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
   );
 }
 
-/** On prep day: the next steps with a countdown (check and out times first), optional sound when one is due. */
+/** On prep day: the next steps with a countdown (ovens, trays in, checks, out, cooling deadlines), optional sound at checks and outs. */
 export function BakeRunTimers({ run, unit, nowMinute, move }: { run: BakeRunResult; unit: TempUnit; nowMinute: number; move?: MoveStart }) {
   const [sound, setSound] = useState(false);
   const rung = useRef(new Set<string>());
   const names = new Map(run.trays.map((t) => [t.id, t.name]));
   const trayName = (id: string | null) => (id ? names.get(id) ?? id : '');
-  const upcoming = run.events.filter((e) => TIMED.has(e.kind) && e.minute >= nowMinute - 2).slice(0, 4);
+  // A tray taken out at its check time is one step: "Check …" (the run sheet leaves such an "out" line out too).
+  const checks = new Set(run.events.filter((e) => e.kind === 'first-check').map((e) => `${e.trayId}@${e.minute}`));
+  const upcoming = run.events
+    .filter((e) => TIMED.has(e.kind) && e.minute >= nowMinute - 2 && !(e.kind === 'tray-out' && checks.has(`${e.trayId}@${e.minute}`)))
+    .slice(0, 4);
   useEffect(() => {
     if (!sound) return;
     for (const e of run.events) {
       const key = `${e.kind}-${e.trayId}-${e.minute}`;
-      if (e.kind === 'first-check' && e.minute === nowMinute && !rung.current.has(key)) {
+      if (RUNG.has(e.kind) && e.minute === nowMinute && !rung.current.has(key)) {
         rung.current.add(key);
         beep();
       }
@@ -124,7 +131,7 @@ export function BakeRunTimers({ run, unit, nowMinute, move }: { run: BakeRunResu
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h2 className="text-xl">Now and next</h2>
         <label className="flex min-h-11 items-center gap-2 text-base">
-          <input type="checkbox" className="h-5 w-5" checked={sound} onChange={(e) => setSound(e.target.checked)} /> Sound at check times
+          <input type="checkbox" className="h-5 w-5" checked={sound} onChange={(e) => setSound(e.target.checked)} /> Sound at checks and outs
         </label>
       </div>
       {upcoming.length === 0 ? (
