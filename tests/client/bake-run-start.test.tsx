@@ -85,6 +85,21 @@ describe('moving a run to when the kitchen really started', () => {
     expect(screen.queryByText('Start not moved')).toBeNull();
   });
 
+  it('offers the time it is when the question is opened, not when the page was', () => {
+    vi.useFakeTimers({ toFake: ['Date'] });
+    try {
+      vi.setSystemTime(new Date(2026, 0, 4, 7, 50));
+      render(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={-10} move={move()} />);
+      vi.setSystemTime(new Date(2026, 0, 4, 8, 22));
+      const details = screen.getByText('Started at another time?').closest('details')!;
+      details.open = true;
+      fireEvent(details, new Event('toggle'));
+      expect((screen.getByLabelText(/Started at/) as HTMLInputElement).value).toBe('08:22');
+    } finally {
+      vi.useRealTimers();
+    }
+  });
+
   it('is not offered where the run is not saved (the planner gives no move)', () => {
     render(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={5} />);
     expect(screen.queryByText('Started at another time?')).toBeNull();

@@ -52,6 +52,9 @@ const hhmm = (d: Date) => `${String(d.getHours()).padStart(2, '0')}:${String(d.g
 /** "Started at another time?": a time on the run's day; the timers, timeline and run sheet follow the new start. */
 function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
   const [time, setTime] = useState(() => hhmm(new Date()));
+  // The time offered is "now" when the question is opened (the page may have been open since before the start),
+  // until the person types their own.
+  const typed = useRef(false);
   const [movedTo, setMovedTo] = useState<string | null>(null);
   const planned = run.start.slice(11, 16);
   const stale = isApiError(move.error, 409);
@@ -60,7 +63,12 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
   // The answer is the new plan: the move is done once its start is the time asked for.
   const done = movedTo !== null && movedTo === planned && !move.saving && !move.error;
   return (
-    <details className="rounded-lg border border-line p-3">
+    <details
+      className="rounded-lg border border-line p-3"
+      onToggle={(e) => {
+        if (e.currentTarget.open && !typed.current) setTime(hhmm(new Date()));
+      }}
+    >
       <summary className="min-h-11 cursor-pointer py-2 font-bold">Started at another time?</summary>
       <form
         className="mt-2 flex flex-wrap items-end gap-3"
@@ -76,7 +84,10 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
           type="time"
           required
           value={time}
-          onChange={(e) => setTime(e.target.value)}
+          onChange={(e) => {
+            typed.current = true;
+            setTime(e.target.value);
+          }}
           error={fieldError}
           hint={`Planned ${planned}. Every time on this page, the run sheet, the PDF and the calendar move with it.`}
           className="w-44"
