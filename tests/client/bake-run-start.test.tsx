@@ -4,33 +4,19 @@ import type { BakeRunResult } from '@shared/domain/bake-run-types';
 import { BakeRunTimers, type MoveStart } from '@/features/bake-runs/components/bake-run-timers';
 import { ApiError } from '@/lib/problem';
 
-
-// An invented run (only the fields the timers card reads): one tray in at 08:12, checked at 08:30.
-const runAt = (start: string) =>
-  ({
-    start,
-    trays: [{ id: 't1', name: 'Egg slab' }],
-    events: [
-      { kind: 'tray-in', minute: 12, trayId: 't1', oven: 'Left', tempF: 350 },
-      { kind: 'first-check', minute: 30, trayId: 't1', oven: 'Left', tempF: 350 },
-    ],
-  }) as unknown as BakeRunResult;
+// Invented runs (only the fields the timers card reads) of one tray, "Egg slab", in the left oven.
+const step = (kind: string, minute: number, tempF = 350) => ({ kind, minute, trayId: 't1', oven: 'Left', tempF });
+const runOf = (events: ReturnType<typeof step>[], start = '2026-01-04T08:00') =>
+  ({ start, trays: [{ id: 't1', name: 'Egg slab' }], events }) as unknown as BakeRunResult;
+/** In at 08:12, checked at 08:30, from `start`. */
+const runAt = (start: string) => runOf([step('tray-in', 12), step('first-check', 30)], start);
 const problem = (status: number, code: string, detail: string, errors?: Record<string, string[]>) =>
   new ApiError({ type: 'about:blank', title: 'Refused', status, code, detail, ...(errors ? { errors } : {}) });
 const move = (over: Partial<MoveStart> = {}): MoveStart => ({ saving: false, error: null, onMove: vi.fn(), onReload: vi.fn(), ...over });
 
 describe('now and next on prep day', () => {
   it('counts down to a tray’s time out and to the cooling deadlines too, not only to checks', () => {
-    const run = {
-      start: '2026-01-04T08:00',
-      trays: [{ id: 't1', name: 'Egg slab' }],
-      events: [
-        { kind: 'first-check', minute: 30, trayId: 't1', oven: 'Left', tempF: 350 },
-        { kind: 'tray-out', minute: 35, trayId: 't1', oven: 'Left', tempF: 350 },
-        { kind: 'cool-to-70-by', minute: 155, trayId: 't1', oven: 'Left', tempF: 70 },
-        { kind: 'fridge-41-by', minute: 395, trayId: 't1', oven: 'Left', tempF: 41 },
-      ],
-    } as unknown as BakeRunResult;
+    const run = runOf([step('first-check', 30), step('tray-out', 35), step('cool-to-70-by', 155, 70), step('fridge-41-by', 395, 41)]);
     render(<BakeRunTimers run={run} unit="F" nowMinute={33} />);
     const items = screen.getAllByRole('listitem').map((li) => li.textContent?.replace(/\s+/g, ' '));
     // The check 3 minutes ago has dropped off (past events stay 2 minutes); the rest count down.
@@ -38,14 +24,7 @@ describe('now and next on prep day', () => {
   });
 
   it('a tray taken out at its check time is one line, the check', () => {
-    const run = {
-      start: '2026-01-04T08:00',
-      trays: [{ id: 't1', name: 'Egg slab' }],
-      events: [
-        { kind: 'first-check', minute: 30, trayId: 't1', oven: 'Left', tempF: 350 },
-        { kind: 'tray-out', minute: 30, trayId: 't1', oven: 'Left', tempF: 350 },
-      ],
-    } as unknown as BakeRunResult;
+    const run = runOf([step('first-check', 30), step('tray-out', 30)]);
     render(<BakeRunTimers run={run} unit="F" nowMinute={20} />);
     expect(screen.getAllByRole('listitem').map((li) => li.textContent)).toEqual(['in 10 minCheck Egg slab']);
   });
