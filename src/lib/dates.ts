@@ -22,8 +22,7 @@ export function nextPrepDayTitle(date: string, today: string): string {
   return `Next prep day: ${dayLabel(date, true)}${date === today ? ' (today)' : ''}`;
 }
 
-/** Today on this device, as a calendar date (what "today's plate" means to the person holding the phone). */
-export function localToday(): string {
-  const d = new Date();
+/** Today on this device (or the day of `d` on its clock), as a calendar date: what "today's plate" means to the person holding the phone. */
+export function localToday(d: Date = new Date()): string {
   return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
 }

@@ -12,12 +12,9 @@ import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton, QueryVi
 import { isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { counted } from '@/lib/words';
-import { dayLabel } from '@/lib/dates';
+import { dayLabel, localToday } from '@/lib/dates';
 
-function todayAt8(): string {
-  const d = new Date();
-  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}T08:00`;
-}
+const todayAt8 = () => `${localToday()}T08:00`;
 
 /** The bake-run hub: open a prep week's run, or try an ad-hoc run from bake rules and tray counts. */
 export function Component() {

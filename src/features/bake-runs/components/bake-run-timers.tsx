@@ -5,7 +5,8 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { describeEvent } from './bake-run-sheet';
-import { localMinutes, nowLocalMinutes, type TempUnit } from './temperature';
+import { localToday } from '@/lib/dates';
+import { clock, localMinutes, nowLocalMinutes, type TempUnit } from './temperature';
 
 /** Minutes since the run's start on the device clock, or null when today is not the run's day. Ticks every 15 s. */
 export function useRunMinute(run: BakeRunResult | null): number | null {
@@ -16,8 +17,7 @@ export function useRunMinute(run: BakeRunResult | null): number | null {
   }, []);
   if (!run) return null;
   const minute = nowLocalMinutes(now) - localMinutes(run.start);
-  const today = `${now.getFullYear()}-${String(now.getMonth() + 1).padStart(2, '0')}-${String(now.getDate()).padStart(2, '0')}`;
-  return today === run.start.slice(0, 10) ? minute : null;
+  return localToday(now) === run.start.slice(0, 10) ? minute : null;
 }
 
 function beep() {
@@ -56,7 +56,7 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
   // until the person types their own.
   const typed = useRef(false);
   const [movedTo, setMovedTo] = useState<string | null>(null);
-  const planned = run.start.slice(11, 16);
+  const planned = clock(run.start);
   const stale = isApiError(move.error, 409);
   const fieldError = isApiError(move.error, 400) ? move.error.fieldErrors.start?.[0] ?? errorMessage(move.error) : undefined;
   if (stale) markShown(move.error);
