@@ -396,7 +396,8 @@ const GLYPHS = Object.keys(VULGAR_FRACTIONS).join('');
 const RE_GLYPH = new RegExp(`^(\\d+)?\\s*([${GLYPHS}])$`);
 const RE_MIXED = /^(\d+)\s+(\d+)\s*\/\s*(\d+)$/;
 const RE_FRACTION = /^(\d+)\s*\/\s*(\d+)$/;
-const RE_DECIMAL = /^(?:\d+(?:\.\d*)?|\.\d+)$/;
+/** A plain decimal of 0 or more written with a point ("2", "1.5", ".5", "3."): what number text must be once its comma is read. */
+export const PLAIN_DECIMAL = /^(?:\d+(?:\.\d*)?|\.\d+)$/;
 const RE_THOUSANDS = /^\d{1,3}(?:,\d{3})+$/;
 
 /**
@@ -445,7 +446,7 @@ function parseSingle(part: string, text: string): Decimal {
   if (m) return fraction(undefined, m[1], m[2], text);
   const plain = decimalCommaToPoint(s);
   if (plain === null) throw new AmountParseError(text, ambiguousCommaMessage(s));
-  if (RE_DECIMAL.test(plain)) return new Decimal(plain.endsWith('.') ? plain.slice(0, -1) : plain);
+  if (PLAIN_DECIMAL.test(plain)) return new Decimal(plain.endsWith('.') ? plain.slice(0, -1) : plain);
   throw new AmountParseError(text, hint(text));
 }
 

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { NET_CARB_RULES, type AtwaterCheck, type NetCarbRuleKind, type NutrientNumbers } from '../domain/nutrition';
-import { ambiguousCommaMessage, AmountParseError, decimalCommaToPoint, isMassUnit, isVolumeUnit, MAX_AMOUNT, MAX_AMOUNT_MESSAGE, parseAmount, unitKind, UnknownUnitError } from '../domain/units';
+import { ambiguousCommaMessage, AmountParseError, decimalCommaToPoint, isMassUnit, isVolumeUnit, MAX_AMOUNT, MAX_AMOUNT_MESSAGE, parseAmount, PLAIN_DECIMAL, unitKind, UnknownUnitError } from '../domain/units';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 /** Ingredient library, recipe calculation and the net-carb setting: inputs (zod) and DTOs for API and client. */
@@ -54,7 +54,6 @@ export const STORE_AISLE_LABELS: Record<StoreAisleCode, string> = {
 // Decimal fields: typed text or numbers in, a plain decimal string out (exact; the server stores numeric(12,4)).
 // ---------------------------------------------------------------------------------------------------------------
 
-const PLAIN_DECIMAL = /^(?:\d+(?:\.\d*)?|\.\d+)$/;
 
 type Blank = 'required' | 'zero' | 'null';
 

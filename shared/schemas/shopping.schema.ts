@@ -4,13 +4,12 @@
 import Decimal from 'decimal.js';
 import { z } from 'zod';
 import { isIsoDate } from '../domain/iso-date';
-import { ambiguousCommaMessage, decimalCommaToPoint, MAX_AMOUNT, MAX_AMOUNT_MESSAGE } from '../domain/units';
+import { ambiguousCommaMessage, decimalCommaToPoint, MAX_AMOUNT, MAX_AMOUNT_MESSAGE, PLAIN_DECIMAL } from '../domain/units';
 import { LABEL_SHEET_CODES } from '../domain/label-sheets';
 import type { AllergenCode } from '../domain/allergens';
 import type { LabelSheetCode } from '../domain/label-sheets';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 
-const PLAIN_DECIMAL = /^(?:\d+(?:\.\d*)?|\.\d+)$/;
 
 /** An amount typed as text or a number: a plain decimal string of 0 or more, at most 4 decimals. */
 export const amountField = z
