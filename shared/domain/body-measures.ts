@@ -5,13 +5,13 @@
  */
 import Decimal from 'decimal.js';
 import { CM_PER_INCH } from './scaling';
-import { GRAMS_PER_UNIT } from './units';
+import { decimalCommaToPoint, GRAMS_PER_UNIT } from './units';
 
 const KG_PER_LB = GRAMS_PER_UNIT.lb.div(1000);
 
-/** A typed number, or null for blank or non-numeric text. */
+/** A typed number (a decimal comma read as a point), or null for blank, ambiguous or non-numeric text. */
 function typed(text: unknown): Decimal | null {
-  const t = String(text ?? '').trim();
+  const t = decimalCommaToPoint(String(text ?? '').trim());
   if (!t) return null;
   try {
     const d = new Decimal(t);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { typedNumber } from './typed-number';
 import type { AllergenCode } from '../domain/allergens';
 import type { NutrientNumbers } from '../domain/nutrition';
 import { trayLineSchema } from './trays.schema';
@@ -9,11 +10,14 @@ import { PG_INT_MAX, TOO_LARGE } from './ids';
 export const assemblyTrayItemSchema = z.object({
   trayId: z.coerce.number({ message: 'Choose a base tray' }).int().positive({ message: 'Choose a base tray' }).max(PG_INT_MAX, TOO_LARGE),
   /** Portions of the tray on one plate (1, 2, 0.5…). */
-  portions: z.coerce
-    .number({ message: 'Enter the portions as a number' })
-    .refine((v) => v > 0, { message: 'Portions must be above 0' })
-    .refine((v) => v <= 12, { message: 'At most 12 portions' })
-    .refine((v) => Number.isInteger(v * 4), { message: 'Use quarters of a portion at most (0.25, 0.5…)' }),
+  portions: typedNumber(
+    'Portions',
+    z.coerce
+      .number({ message: 'Enter the portions as a number' })
+      .refine((v) => v > 0, { message: 'Portions must be above 0' })
+      .refine((v) => v <= 12, { message: 'At most 12 portions' })
+      .refine((v) => Number.isInteger(v * 4), { message: 'Use quarters of a portion at most (0.25, 0.5…)' }),
+  ),
 });
 export type AssemblyTrayItemInput = z.input<typeof assemblyTrayItemSchema>;
 

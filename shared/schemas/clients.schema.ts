@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { typedNumber } from './typed-number';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import type { ActivityLevel, Goal, MacroTargets, Sex, TargetNote } from '../domain/targets';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
@@ -23,11 +24,14 @@ export const GOAL_LABELS: Record<Goal, string> = { lose: 'Lose weight', maintain
 
 /** A decimal typed as text or number, kept as a string (exact decimals end to end). */
 const decimalText = (label: string, min: number, max: number) =>
-  z
-    .union([z.number(), z.string().trim()])
-    .transform((v) => String(v))
-    .refine((v) => /^\d+(\.\d+)?$/.test(v), { message: `${label}: enter a number` })
-    .refine((v) => Number(v) >= min && Number(v) <= max, { message: `${label} must be between ${min} and ${max}` });
+  typedNumber(
+    label,
+    z
+      .union([z.number(), z.string()])
+      .transform((v) => String(v))
+      .refine((v) => /^\d+(\.\d+)?$/.test(v), { message: `${label}: enter a number` })
+      .refine((v) => Number(v) >= min && Number(v) <= max, { message: `${label} must be between ${min} and ${max}` }),
+  );
 
 const optionalEmail = z
   .union([z.literal(''), z.string().trim().toLowerCase().pipe(z.email({ message: 'Enter a valid e-mail address' }))])

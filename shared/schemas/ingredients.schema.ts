@@ -1,5 +1,6 @@
 import Decimal from 'decimal.js';
 import { z } from 'zod';
+import { typedNumber } from './typed-number';
 import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { NET_CARB_RULES, type AtwaterCheck, type NetCarbRuleKind, type NutrientNumbers } from '../domain/nutrition';
@@ -320,18 +321,21 @@ export const recipeItemSchema = z.object({
 export const recipeCalcSchema = z.object({
   items: z.array(recipeItemSchema).min(1, { message: 'Add at least one ingredient' }).max(100, { message: 'At most 100 ingredients' }),
   portions: z.coerce.number().int({ message: 'Portions must be a whole number' }).min(1, { message: 'At least 1 portion' }).max(10_000),
-  yieldFactor: z
-    .union([z.string(), z.number()])
-    .optional()
-    .transform((v, ctx) => {
-      if (v === undefined || v === '') return undefined;
-      const s = String(v).trim();
-      if (!PLAIN_DECIMAL.test(s) || new Decimal(s).lte(0) || new Decimal(s).gt(5)) {
-        ctx.addIssue({ code: 'custom', message: 'The cooked-yield factor must be a number above 0 and at most 5' });
-        return z.NEVER;
-      }
-      return new Decimal(s).toFixed();
-    }),
+  yieldFactor: typedNumber(
+    'The cooked-yield factor',
+    z
+      .union([z.string(), z.number()])
+      .optional()
+      .transform((v, ctx) => {
+        if (v === undefined || v === '') return undefined;
+        const s = String(v).trim();
+        if (!PLAIN_DECIMAL.test(s) || new Decimal(s).lte(0) || new Decimal(s).gt(5)) {
+          ctx.addIssue({ code: 'custom', message: 'The cooked-yield factor must be a number above 0 and at most 5' });
+          return z.NEVER;
+        }
+        return new Decimal(s).toFixed();
+      }),
+  ),
 });
 export type RecipeCalcInput = z.input<typeof recipeCalcSchema>;
 export type RecipeCalcValues = z.output<typeof recipeCalcSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { typedNumber } from './typed-number';
 import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { DEFAULT_BAKE_RULES, type BakeRuleCategory } from '../domain/bake-rules-defaults';
@@ -25,10 +26,13 @@ export const PAN_LINING_LABELS: Record<PanLining, string> = {
 export const BAKE_CATEGORIES = DEFAULT_BAKE_RULES.map((r) => r.category) as [BakeRuleCategory, ...BakeRuleCategory[]];
 
 const positiveDecimal = (what: string, max: number) =>
-  z.coerce
-    .number({ message: `Enter ${what} as a number` })
-    .refine((v) => Number.isFinite(v) && v > 0, { message: `${what} must be above 0` })
-    .refine((v) => v <= max, { message: `${what} must be at most ${max}` });
+  typedNumber(
+    what,
+    z.coerce
+      .number({ message: `Enter ${what} as a number` })
+      .refine((v) => Number.isFinite(v) && v > 0, { message: `${what} must be above 0` })
+      .refine((v) => v <= max, { message: `${what} must be at most ${max}` }),
+  );
 
 export const panInputSchema = z
   .object({

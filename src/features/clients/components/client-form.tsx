@@ -17,6 +17,7 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { cmOf, feetInches, kgOf, perLb, poundsOf } from '@shared/domain/body-measures';
+import { decimalCommaToPoint } from '@shared/domain/units';
 
 export const emptyClient: CreateClientInput = {
   name: '',
@@ -62,19 +63,22 @@ export function clientToInput(c: ClientDto): CreateClientInput {
   };
 }
 
+/** A number field's text as the schema reads it (a decimal comma as a point; '' when ambiguous). */
+const asTyped = (v: unknown) => decimalCommaToPoint(String(v ?? '').trim()) ?? '';
+
 /** Live preview of the computed targets with the shared Mifflin–St Jeor code (the server computes the same). */
 function TargetsPreview({ values }: { values: Partial<CreateClientInput> }) {
   const preview = useMemo(() => {
     try {
       return computeTargets({
         sex: values.sex as Sex,
-        weightKg: String(values.weightKg ?? ''),
-        heightCm: String(values.heightCm ?? ''),
+        weightKg: asTyped(values.weightKg),
+        heightCm: asTyped(values.heightCm),
         ageYears: Number(values.ageYears),
         activity: values.activity as ActivityLevel,
         goal: values.goal as Goal,
-        netCarbCapG: String(values.netCarbCapG ?? '20'),
-        proteinGPerKg: String(values.proteinGPerKg ?? '1.5'),
+        netCarbCapG: asTyped(values.netCarbCapG ?? '20'),
+        proteinGPerKg: asTyped(values.proteinGPerKg ?? '1.5'),
         goalAdjustment: values.goalAdjustment ?? undefined,
       });
     } catch {
