@@ -50,6 +50,22 @@ export const updateAssemblySchema = assemblyValuesSchema
   });
 export type UpdateAssemblyValues = z.output<typeof updateAssemblySchema>;
 
+/** Archive a plate or bring it back (PUT /api/assemblies/:id/archived). */
+export const archiveAssemblySchema = z.object({
+  archived: z.boolean({ message: 'Say whether the plate is archived (true or false)' }),
+  version: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE),
+});
+export type ArchiveAssemblyInput = z.input<typeof archiveAssemblySchema>;
+export type ArchiveAssemblyValues = z.output<typeof archiveAssemblySchema>;
+
+/** DELETE /api/assemblies/:id of a plate some board plans: archived instead (204 with no body when it was deleted). */
+export interface DeleteAssemblyDto {
+  archived: true;
+  /** Where it is planned, e.g. "13 meals on the board of Demo week". */
+  plannedOn: string;
+  plate: AssemblyDto;
+}
+
 export const assemblyIdParams = z.object({ id: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE) });
 
 /** The plate editor's live numbers: the parts of an unsaved plate (nothing is written). */
@@ -108,6 +124,8 @@ export interface AssemblyDto {
   /** False when a line lacks a fact to be weighed (its nutrients are left out). */
   complete: boolean;
   allergens: AllergenCode[];
+  /** Out of the plates list and the board's pickers; boards and plans that name it keep it. */
+  archived: boolean;
   version: number;
   updatedAt: string;
 }

@@ -99,7 +99,7 @@ describe('plates (assemblies)', () => {
     expect(late.body).toMatchObject({ code: 'stale_version', currentVersion: plate.version + 1, current: { name: 'Renamed' } });
   });
 
-  it('keeps plates per workspace, lets the assistant read them, and refuses to delete a plate on a board', async () => {
+  it('keeps plates per workspace, lets the assistant read them, and archives a plate on a board instead of deleting it', async () => {
     const coach = await coachWorkspace(app);
     const other = await coachWorkspace(app);
     const tray = await makeTray(coach);
@@ -116,13 +116,60 @@ describe('plates (assemblies)', () => {
       .put(`/api/weeks/${board.week.id}/cells`)
       .send({ version: board.week.version, cells: [{ clientId: client.id, date: '2026-01-05', slot: 'breakfast', assemblyId: plate.id }] })
       .expect(200);
-    const del = await coach.agent.delete(`/api/assemblies/${plate.id}`).expect(409);
-    expect(del.body.code).toBe('in_use');
-    // It says where the plate is planned (the week has no name: "Week of" its first day, Mon 5 Jan 2026).
-    expect(del.body.detail).toBe(`"${plate.name}" is planned for 1 meal on the board of Week of Mon 5 Jan: take it off that board first, or keep it.`);
+    // A plate on a board is archived instead of deleted, and the answer says where it is planned (the week has no
+    // name: "Week of" its first day, Mon 5 Jan 2026).
+    const del = await coach.agent.delete(`/api/assemblies/${plate.id}`).expect(200);
+    expect(del.body).toMatchObject({ archived: true, plannedOn: '1 meal on the board of Week of Mon 5 Jan', plate: { id: plate.id, archived: true } });
+    expect(await sql('select archived from assembly where id = $1', [plate.id])).toEqual([{ archived: true }]);
     expect(await sql('select id from assembly where id = $1', [plate.id])).toHaveLength(1);
     const unused = await makeAssembly(coach, tray.id);
     await coach.agent.delete(`/api/assemblies/${unused.id}`).expect(204);
     expect(await sql('select id from assembly where id = $1', [unused.id])).toEqual([]);
+  });
+
+  it('archives a plate: the board keeps its cells, a new cell cannot use it, and restoring brings it back', async () => {
+    const coach = await coachWorkspace(app);
+    const tray = await makeTray(coach);
+    const plate = await makeAssembly(coach, tray.id);
+    const [ann, bo] = [await makeClient(coach), await makeClient(coach)];
+    const board = await makeWeek(coach);
+    const planned = await coach.agent
+      .put(`/api/weeks/${board.week.id}/cells`)
+      .send({ version: board.week.version, cells: [{ clientId: ann.id, date: '2026-01-05', slot: 'breakfast', assemblyId: plate.id }] })
+      .expect(200);
+
+    const archived = await coach.agent.put(`/api/assemblies/${plate.id}/archived`).send({ archived: true, version: plate.version }).expect(200);
+    expect(archived.body).toMatchObject({ id: plate.id, archived: true, version: plate.version + 1 });
+    // The same request again with the old version is a stale edit (409), not a second change.
+    const late = await coach.agent.put(`/api/assemblies/${plate.id}/archived`).send({ archived: false, version: plate.version }).expect(409);
+    expect(late.body).toMatchObject({ code: 'stale_version', currentVersion: plate.version + 1, current: { archived: true } });
+    // Bad input names the field and changes nothing.
+    const bad = await coach.agent.put(`/api/assemblies/${plate.id}/archived`).send({ archived: 'yes', version: archived.body.version }).expect(400);
+    expect(JSON.stringify(bad.body)).toContain('archived');
+    expect(await sql('select archived, version from assembly where id = $1', [plate.id])).toEqual([{ archived: true, version: plate.version + 1 }]);
+
+    // The board still shows it with its cell; the list marks it archived; the setup counts leave it out.
+    const week = await coach.agent.get(`/api/weeks/${board.week.id}`).expect(200);
+    expect(week.body.cells).toEqual([expect.objectContaining({ clientId: ann.id, assemblyId: plate.id })]);
+    expect(week.body.plates.find((p: { id: number }) => p.id === plate.id)).toMatchObject({ archived: true });
+    expect((await coach.agent.get('/api/assemblies').expect(200)).body.find((p: { id: number }) => p.id === plate.id).archived).toBe(true);
+
+    // The planned cell keeps it through a change of storage; a new cell with it is refused naming the cell.
+    const kept = await coach.agent
+      .put(`/api/weeks/${board.week.id}/cells`)
+      .send({ version: planned.body.week.version, cells: [{ clientId: ann.id, date: '2026-01-05', slot: 'breakfast', assemblyId: plate.id, storage: 'frozen' }] })
+      .expect(200);
+    const refused = await coach.agent
+      .put(`/api/weeks/${board.week.id}/cells`)
+      .send({ version: kept.body.week.version, cells: [{ clientId: bo.id, date: '2026-01-06', slot: 'breakfast', assemblyId: plate.id }] })
+      .expect(400);
+    expect(refused.body.errors['cells.0.assemblyId']).toEqual([`${plate.name} is archived: restore it on the Plates page to plan it again`]);
+
+    const restored = await coach.agent.put(`/api/assemblies/${plate.id}/archived`).send({ archived: false, version: archived.body.version }).expect(200);
+    expect(restored.body.archived).toBe(false);
+    await coach.agent
+      .put(`/api/weeks/${board.week.id}/cells`)
+      .send({ version: kept.body.week.version, cells: [{ clientId: bo.id, date: '2026-01-06', slot: 'breakfast', assemblyId: plate.id }] })
+      .expect(200);
   });
 });

@@ -130,6 +130,11 @@ export const MATRIX: Record<string, MatrixRow> = {
     body: (ctx) => ({ version: 1, name: 'Matrix plate', trays: [{ trayId: ctx.ids.tray7, portions: 1 }] }),
     crossWorkspace: true,
   }),
+  'PUT /api/assemblies/:id/archived': R(['coach'], {
+    path: (ctx) => `/api/assemblies/${ctx.ids.assembly}/archived`,
+    body: () => ({ archived: false, version: 1 }),
+    crossWorkspace: true,
+  }),
   'DELETE /api/assemblies/:id': R(['coach'], { path: (ctx) => `/api/assemblies/${ctx.ids.assemblyToDelete}`, crossWorkspace: true }),
   // Prep weeks and the week board (issue 7)
   'GET /api/weeks/mine': R(['client']),

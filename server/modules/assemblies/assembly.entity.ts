@@ -16,6 +16,8 @@ export const Assembly = defineEntity({
     items: () => p.oneToMany(AssemblyItem).mappedBy('assembly').orderBy({ position: 'asc' }).orphanRemoval(),
     assemblySteps: p.json<string[]>().default('[]'),
     reheatSteps: p.json<string[]>().default('[]'),
+    /** Out of the plates list and the board's pickers; the boards and plans that name it keep it. */
+    archived: p.boolean().default(false),
     version: p.integer().version(),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),

@@ -42,6 +42,7 @@ export function presentAssembly(a: PlateLike, ctx: PlateContext): AssemblyDto {
     macros: facts.macros,
     complete: facts.complete,
     allergens: facts.allergens,
+    archived: a.archived ?? false,
     version: a.version,
     updatedAt: a.updatedAt.toISOString(),
   };

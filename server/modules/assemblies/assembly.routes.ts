@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { assemblyIdParams, createAssemblySchema, platePreviewSchema, updateAssemblySchema } from '@shared/schemas/assemblies.schema.js';
+import { archiveAssemblySchema, assemblyIdParams, createAssemblySchema, platePreviewSchema, updateAssemblySchema } from '@shared/schemas/assemblies.schema.js';
 import { actorOf, allow } from '../../http/authz.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
@@ -42,13 +42,20 @@ export function assemblyRoutes() {
     ),
   );
 
-  // A plate used on a week board cannot be deleted (409 in_use).
+  // Archive or restore: out of the plates list and the board's pickers; boards that plan it keep it.
+  r.put(
+    '/assemblies/:id/archived',
+    allow('coach'),
+    validated({ params: assemblyIdParams, body: archiveAssemblySchema }, ({ params, body }, req) =>
+      plates.archiveAssembly(emOf(req), actorOf(req), params.id, body),
+    ),
+  );
+
+  // 204 when deleted; 200 with { archived: true, plannedOn } when a week board plans it and it was archived instead.
   r.delete(
     '/assemblies/:id',
     allow('coach'),
-    validated({ params: assemblyIdParams }, async ({ params }, req) => {
-      await plates.deleteAssembly(emOf(req), actorOf(req), params.id);
-    }),
+    validated({ params: assemblyIdParams }, async ({ params }, req) => (await plates.deleteAssembly(emOf(req), actorOf(req), params.id)) ?? undefined),
   );
 
   return r;

@@ -1,8 +1,8 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { parseAmount } from '@shared/domain/units.js';
-import type { AssemblyDto, AssemblyValues, PlatePreviewDto, PlatePreviewValues, UpdateAssemblyValues } from '@shared/schemas/assemblies.schema.js';
+import type { ArchiveAssemblyValues, AssemblyDto, DeleteAssemblyDto, AssemblyValues, PlatePreviewDto, PlatePreviewValues, UpdateAssemblyValues } from '@shared/schemas/assemblies.schema.js';
 import type { Actor } from '../../http/authz.js';
-import { HttpError, NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
+import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { weekTitle } from '@shared/domain/week-board.js';
 import { Assembly, AssemblyItem, type IAssembly } from './assembly.entity.js';
 import { presentAssembly } from './assembly.presenter.js';
@@ -19,7 +19,7 @@ export async function loadPlateRows(em: EntityManager, workspaceId: number): Pro
     preparedRows<Omit<PlateRow, 'items' | 'updatedAt'> & { updatedAt: string | Date }>(
       em,
       'trayline_plate_rows',
-      `select id, name, description, assembly_steps as "assemblySteps", reheat_steps as "reheatSteps", version, updated_at as "updatedAt"
+      `select id, name, description, assembly_steps as "assemblySteps", reheat_steps as "reheatSteps", archived, version, updated_at as "updatedAt"
          from assembly where workspace_id = $1 order by name asc, id asc`,
       [workspaceId],
     ),
@@ -176,6 +176,18 @@ export async function updateAssembly(em: EntityManager, actor: Actor, id: number
   return getAssembly(em, actor, id);
 }
 
+/** Archives a plate (out of the plates list and the board's pickers) or restores it; a stale version is a 409. */
+export async function archiveAssembly(em: EntityManager, actor: Actor, id: number, v: ArchiveAssemblyValues): Promise<AssemblyDto> {
+  const a = await findAssembly(em, actor, id);
+  if (a.version !== v.version) throw new StaleEdit(a.version, await getAssembly(em, actor, id));
+  if (a.archived !== v.archived) {
+    a.archived = v.archived;
+    a.updatedAt = new Date();
+    await em.flush();
+  }
+  return getAssembly(em, actor, id);
+}
+
 /** The weeks whose boards plan a plate, earliest first, with how many meals each. */
 async function plateUses(em: EntityManager, workspaceId: number, assemblyId: number) {
   return em.getConnection().execute<{ name: string | null; startDate: string; meals: number }[]>(
@@ -190,23 +202,29 @@ async function plateUses(em: EntityManager, workspaceId: number, assemblyId: num
 }
 
 /**
- * Deletes a plate no week plans. A plate on a board (a past week's too: clients' published plans name it) is a 409
- * that says where, instead of the database's bare refusal.
+ * Deletes a plate no week plans. A plate on a board (a past week's too: clients' published plans name it) is archived
+ * instead, and the answer says where it is planned.
  */
-export async function deleteAssembly(em: EntityManager, actor: Actor, id: number): Promise<void> {
+export async function deleteAssembly(em: EntityManager, actor: Actor, id: number): Promise<DeleteAssemblyDto | null> {
   const a = await findAssembly(em, actor, id);
   const uses = await plateUses(em, actor.workspaceId, a.id);
   if (uses.length) {
     const meals = uses.reduce((n, u) => n + u.meals, 0);
     const weeks = uses.map((u) => weekTitle(u)).join(', ');
-    throw new HttpError(
-      409,
-      'in_use',
-      `"${a.name}" is planned for ${meals} meal${meals === 1 ? '' : 's'} on ${uses.length === 1 ? 'the board of' : 'the boards of'} ${weeks}: take it off ${uses.length === 1 ? 'that board' : 'those boards'} first, or keep it.`,
-    );
+    if (!a.archived) {
+      a.archived = true;
+      a.updatedAt = new Date();
+      await em.flush();
+    }
+    return {
+      archived: true,
+      plannedOn: `${meals} meal${meals === 1 ? '' : 's'} on ${uses.length === 1 ? 'the board of' : 'the boards of'} ${weeks}`,
+      plate: await getAssembly(em, actor, a.id),
+    };
   }
   await em.transactional(async (tx) => {
     await tx.nativeDelete(AssemblyItem, { assembly: a.id });
     await tx.nativeDelete(Assembly, { id: a.id, workspace: actor.workspaceId });
   });
+  return null;
 }

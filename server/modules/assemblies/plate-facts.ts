@@ -84,6 +84,7 @@ export interface PlateRow {
   description?: string | null;
   assemblySteps?: string[] | null;
   reheatSteps?: string[] | null;
+  archived?: boolean;
   version: number;
   updatedAt: Date;
   items: PlateItemRow[];

@@ -194,6 +194,8 @@ function checkCells(d: BoardData, cells: PutCells['cells']) {
   const prepDates = new Set(prepDatesOf(d.week));
   const clients = new Map(d.clients.map((c) => [c.id, c]));
   const plates = new Set(d.assemblies.map((a) => a.id));
+  // A cell that already plans an archived plate keeps it (a change of storage or prep day); a new one cannot use it.
+  const planned = new Map(d.cells.map((c) => [cellKey({ clientId: c.client.id, date: c.date, slot: c.slot }), c.assembly.id]));
   const seen = new Set<string>();
   cells.forEach((c, i) => {
     const at = `cells.${i}`;
@@ -209,9 +211,13 @@ function checkCells(d: BoardData, cells: PutCells['cells']) {
       errors[`${at}.assemblyId`] = ['This plate does not exist in your workspace'];
       return;
     }
+    const plate = d.assemblies.find((a) => a.id === c.assemblyId)!;
+    if (plate.archived && planned.get(key) !== plate.id) {
+      errors[`${at}.assemblyId`] = [`${plate.name} is archived: restore it on the Plates page to plan it again`];
+      return;
+    }
     const client = clients.get(c.clientId);
     if (!client) return;
-    const plate = d.assemblies.find((a) => a.id === c.assemblyId)!;
     const plateAllergens = boardPlateAllergens(d, plate.id);
     const conflicts = allergenConflicts(plateAllergens, (client.allergens ?? []) as AllergenCode[]);
     const overridden = new Set(c.allergenOverrides.map((o) => o.allergen));
@@ -411,7 +417,7 @@ async function setupCounts(em: EntityManager, workspaceId: number): Promise<Setu
     em,
     'trayline_setup_counts',
     `select (select count(*) from tray where workspace_id = $1 and not archived)::int as trays,
-            (select count(*) from assembly where workspace_id = $1)::int as plates,
+            (select count(*) from assembly where workspace_id = $1 and not archived)::int as plates,
             (select count(*) from client where workspace_id = $1 and archived_at is null)::int as clients,
             (select count(*) from oven where workspace_id = $1)::int as ovens,
             (select count(*) from week where workspace_id = $1)::int as weeks`,

@@ -3,10 +3,11 @@ import { useQuery } from '@tanstack/react-query';
 import type { AssemblyDto } from '@shared/schemas/assemblies.schema';
 import { amountAndName } from '@shared/domain/units';
 import { assembliesQuery } from '@/features/assemblies/api/assemblies.queries';
-import { useDeleteAssembly, useSaveAssembly } from '@/features/assemblies/api/use-assembly-mutations';
+import { useArchiveAssembly, useDeleteAssembly, useSaveAssembly } from '@/features/assemblies/api/use-assembly-mutations';
 import { AssemblyForm, assemblyToInput, emptyAssembly } from '@/features/assemblies/components/assembly-form';
 import { PlateMacros } from '@/features/assemblies/components/plate-macros';
 import { Button, EditDeleteButtons } from '@/components/ui/button';
+import { SelectField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
@@ -44,14 +45,34 @@ function Editor({ plate, onDone }: { plate: AssemblyDto | null; onDone: () => vo
   );
 }
 
+/** What archiving does, said where the coach archives. */
+const ARCHIVE_MEANS = 'An archived plate leaves this list and the week board’s pickers; the boards and plans that name it keep it. Restore it any time.';
+
 export function Component() {
   const me = useMe();
   const list = useQuery(assembliesQuery());
   const del = useDeleteAssembly();
+  const archive = useArchiveAssembly();
   const [editing, setEditing] = useState<AssemblyDto | 'new' | null>(null);
   const [error, setError] = useState<string | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
   const [find, setFind] = useState('');
+  const [show, setShow] = useState<'current' | 'archived'>('current');
   const coach = me.role === 'coach';
+  const setArchived = (p: AssemblyDto, archived: boolean) => {
+    setError(null);
+    setNotice(null);
+    archive.mutate(
+      { id: p.id, archived, version: p.version },
+      {
+        onSuccess: () => setNotice(archived ? `Archived “${p.name}”. ${ARCHIVE_MEANS}` : `Restored “${p.name}”: it is back in the list and the board’s pickers.`),
+        onError: (e) => {
+          markShown(e);
+          setError(isApiError(e, 409) ? 'Someone else changed this plate meanwhile: the list now shows their version; try again.' : errorMessage(e));
+        },
+      },
+    );
+  };
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title="Plates" lead="Portions of base trays plus add-ons, with their macros, allergens and steps.">
@@ -60,6 +81,11 @@ export function Component() {
       <DemoNotice>These plates are invented demo data for trying Trayline; their numbers come from the demo base trays.</DemoNotice>
       {editing && <Editor plate={editing === 'new' ? null : editing} onDone={() => setEditing(null)} />}
       {error && <Notice tone="block" title={error} />}
+      {notice && (
+        <p role="status" className="rounded-lg border border-line bg-paper-card p-3 text-sm">
+          {notice}
+        </p>
+      )}
       <QueryView
         query={list}
         loading={<Skeleton className="h-40 w-full" />}
@@ -70,21 +96,39 @@ export function Component() {
           </EmptyState>
         }
       >
-        {(data) => {
+        {(all) => {
+          const archivedCount = all.filter((p) => p.archived).length;
+          const view = archivedCount ? show : 'current';
+          const data = all.filter((p) => p.archived === (view === 'archived'));
           const shown = filterByText(data, find, (p) => [p.name, ...p.allergens.map(allergenLabel), ...p.trays.map((t) => t.trayName), ...p.addOns.map((x) => x.ingredientName)]);
           return (
             <>
-              {data.length >= FILTER_FROM && (
-                <ListFilter label="Find a plate" placeholder="name, base tray, add-on or allergen" value={find} onChange={setFind} shown={shown.length} total={data.length} />
+              {(archivedCount > 0 || data.length >= FILTER_FROM) && (
+                <div className="flex flex-wrap items-end gap-3">
+                  {archivedCount > 0 && (
+                    <SelectField label="Show" value={view} onChange={(e) => setShow(e.target.value as 'current' | 'archived')} className="max-w-xs">
+                      <option value="current">Current plates ({all.length - archivedCount})</option>
+                      <option value="archived">Archived plates ({archivedCount})</option>
+                    </SelectField>
+                  )}
+                  {data.length >= FILTER_FROM && (
+                    <ListFilter label="Find a plate" placeholder="name, base tray, add-on or allergen" value={find} onChange={setFind} shown={shown.length} total={data.length} />
+                  )}
+                </div>
               )}
-              {shown.length === 0 ? (
+              {data.length === 0 ? (
+                <p className="text-ink-soft">{view === 'archived' ? 'No archived plates.' : 'Every plate is archived: choose “Archived plates” to restore one, or make a new plate.'}</p>
+              ) : shown.length === 0 ? (
                 <p className="text-ink-soft">No plate matches “{find.trim()}”.</p>
               ) : (
                 <ul className="grid gap-4 md:grid-cols-2">
                   {shown.map((p) => (
                     <li key={p.id}>
                       <Card className="flex h-full flex-col gap-2">
-                        <h2 className="text-xl">{p.name}</h2>
+                        <h2 className="text-xl">
+                          {p.name}
+                          {p.archived && <span className="ml-2 rounded bg-paper-deep px-1 align-middle text-xs font-bold text-ink-soft">Archived</span>}
+                        </h2>
                         <PlateMacros macros={p.macros} allergens={p.allergens} />
                         {!p.complete && <Notice tone="warn" title="Some parts could not be weighed: their nutrients are left out." />}
                         <ul className="list-disc pl-5 text-sm">
@@ -100,17 +144,25 @@ export function Component() {
                           ))}
                         </ul>
                         {coach && (
-                          <EditDeleteButtons
-                            name={p.name}
-                            className="mt-auto flex gap-2"
-                            onEdit={() => setEditing(p)}
-                            onDelete={() => {
-                              if (!window.confirm(`Delete the plate "${p.name}"? A plate planned on a week board is kept.`)) return;
-                              setError(null);
-                              // A plate on a board is refused with where it is planned (the server's words).
-                              del.mutate(p.id, { onError: (e) => setError(errorMessage(e)) });
-                            }}
-                          />
+                          <div className="mt-auto flex flex-wrap gap-2">
+                            <EditDeleteButtons
+                              name={p.name}
+                              onEdit={() => setEditing(p)}
+                              onDelete={() => {
+                                if (!window.confirm(`Delete the plate "${p.name}"? A plate planned on a week board is archived instead.`)) return;
+                                setError(null);
+                                setNotice(null);
+                                del.mutate(p.id, {
+                                  // A plate on a board is archived instead: say where it is planned (the server's words).
+                                  onSuccess: (res) => res?.archived && setNotice(`“${p.name}” is planned for ${res.plannedOn}, so it was archived instead. ${ARCHIVE_MEANS}`),
+                                  onError: (e) => setError(errorMessage(e)),
+                                });
+                              }}
+                            />
+                            <Button size="sm" variant="ghost" busy={archive.isPending && archive.variables?.id === p.id} onClick={() => setArchived(p, !p.archived)} aria-label={`${p.archived ? 'Restore' : 'Archive'} ${p.name}`}>
+                              {p.archived ? 'Restore' : 'Archive'}
+                            </Button>
+                          </div>
                         )}
                       </Card>
                     </li>

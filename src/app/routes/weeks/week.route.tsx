@@ -164,7 +164,7 @@ export function Component() {
         </Notice>
       </div>
 
-      {board.clients.length === 0 || board.plates.length === 0 ? (
+      {board.clients.length === 0 || (board.cells.length === 0 && board.plates.every((p) => p.archived)) ? (
         <EmptyState title={board.clients.length === 0 ? 'No clients to plan' : 'No plates yet'}>
           {board.clients.length === 0 ? (
             <>
@@ -172,7 +172,7 @@ export function Component() {
             </>
           ) : (
             <>
-              <Link to={paths.plates} className="underline">Make plates</Link> to fill the board.
+              <Link to={paths.plates} className="underline">Make plates</Link> (or restore archived ones) to fill the board.
             </>
           )}
         </EmptyState>

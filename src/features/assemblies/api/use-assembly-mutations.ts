@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { AssemblyDto, AssemblyInput, PlatePreviewDto, PlatePreviewInput } from '@shared/schemas/assemblies.schema';
+import type { ArchiveAssemblyInput, AssemblyDto, AssemblyInput, DeleteAssemblyDto, PlatePreviewDto, PlatePreviewInput } from '@shared/schemas/assemblies.schema';
 import { api } from '@/lib/api-client';
 import { assemblyKeys } from './assemblies.keys';
 
@@ -16,11 +16,21 @@ export function useSaveAssembly(id: number | null) {
   });
 }
 
+/** Deletes a plate; one a week board plans is archived instead (the answer says where it is planned). */
 export function useDeleteAssembly() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.delete<void>(`/assemblies/${id}`),
+    mutationFn: (id: number) => api.delete<DeleteAssemblyDto | undefined>(`/assemblies/${id}`),
     onSuccess: () => qc.invalidateQueries({ queryKey: assemblyKeys.all }),
+  });
+}
+
+/** Archives a plate or restores it (a stale version is a 409 with the current plate). */
+export function useArchiveAssembly() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, ...body }: ArchiveAssemblyInput & { id: number }) => api.put<AssemblyDto>(`/assemblies/${id}/archived`, body),
+    onSettled: () => qc.invalidateQueries({ queryKey: assemblyKeys.all }),
   });
 }
 

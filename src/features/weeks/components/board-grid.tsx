@@ -200,7 +200,9 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor));
   const [selected, setSelected] = useState<string | null>(null);
   const [findPlate, setFindPlate] = useState('');
-  const palette = filterByText(board.plates, findPlate, (p) => [p.name, ...p.allergens.map(allergenLabel)]);
+  // Archived plates stay on the cells that plan them but are not offered for new ones.
+  const offered = useMemo(() => board.plates.filter((p) => !p.archived), [board.plates]);
+  const palette = filterByText(offered, findPlate, (p) => [p.name, ...p.allergens.map(allergenLabel)]);
   const onSelect = useCallback((id: string) => setSelected((s) => (s === id ? null : id)), []);
   const plates = useMemo(() => new Map(board.plates.map((p) => [p.id, p])), [board.plates]);
   const cells = useMemo(() => new Map(board.cells.map((c) => [cellId(c.clientId, c.date, c.slot), c])), [board.cells]);
@@ -323,11 +325,14 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
         <div className="grid gap-3 sm:grid-cols-3">
           <SelectField label="Plate" value={selCell?.assemblyId ?? ''} disabled={busy} onChange={(e) => place(selClient.id, sel[2], sel[3], e.target.value ? Number(e.target.value) : null)}>
             <option value="">Empty</option>
-            {board.plates.map((p) => (
-              <option key={p.id} value={p.id}>
-                {p.name}
-              </option>
-            ))}
+            {board.plates
+              .filter((p) => !p.archived || p.id === selCell?.assemblyId)
+              .map((p) => (
+                <option key={p.id} value={p.id}>
+                  {p.name}
+                  {p.archived ? ' (archived)' : ''}
+                </option>
+              ))}
           </SelectField>
           {selCell && (
             <>
@@ -411,8 +416,8 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
         <aside className="2xl:w-56 2xl:shrink-0" aria-label="Plates">
           <h2 className="mb-2 text-lg font-bold">Plates</h2>
           <p className="mb-2 text-xs text-ink-faint">Drag onto a cell (or focus, press Space, move with the arrow keys, Space to drop).</p>
-          {board.plates.length >= FILTER_FROM && (
-            <ListFilter label="Find a plate" placeholder="name or allergen" value={findPlate} onChange={setFindPlate} shown={palette.length} total={board.plates.length} className="mb-2" />
+          {offered.length >= FILTER_FROM && (
+            <ListFilter label="Find a plate" placeholder="name or allergen" value={findPlate} onChange={setFindPlate} shown={palette.length} total={offered.length} className="mb-2" />
           )}
           <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3 2xl:flex 2xl:flex-col">
             {palette.map((p) => (
