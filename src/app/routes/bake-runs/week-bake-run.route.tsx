@@ -64,7 +64,7 @@ export function Component() {
       )}
       {me.role === 'coach' && ovens.data && (
         <BakeRunSettingsForm
-          key={`${dto.prepDate}-${dto.settings.version}`}
+          key={dto.prepDate}
           dto={dto}
           allOvens={ovens.data}
           saving={save.isPending}
