@@ -143,6 +143,23 @@ export const bakeRunStartSchema = z.object({
   version: version.optional(),
 });
 export type BakeRunStartValues = z.output<typeof bakeRunStartSchema>;
+
+/**
+ * PUT /api/weeks/:weekId/bake-run/kitchen: the kitchen as it is on prep day (an oven out of order, a cook missing),
+ * for the coach or the assistant: the ovens that work and the cooks who came. The start, the hands-on minutes and the
+ * bake rules stay. `version` as above.
+ */
+export const bakeRunKitchenSchema = z.object({
+  prepDate: prepDateQuery.shape.prepDate,
+  cooks: bakeRunSettingsSchema.shape.cooks,
+  ovenIds: z
+    .array(z.number().int().positive().max(PG_INT_MAX, TOO_LARGE))
+    .min(1, { message: 'At least one oven has to work to bake.' })
+    .max(20),
+  version: version.optional(),
+});
+export type BakeRunKitchenValues = z.output<typeof bakeRunKitchenSchema>;
+export type BakeRunKitchenInput = z.input<typeof bakeRunKitchenSchema>;
 export type BakeRunStartInput = z.input<typeof bakeRunStartSchema>;
 export type BakeRunSettingsInput = z.input<typeof bakeRunSettingsSchema>;
 

@@ -337,3 +337,46 @@ describe('moving a run to the time the kitchen really started', () => {
     expect(row).toEqual({ start: '2026-01-04T09:05', cooks: 2, version: 3 });
   });
 });
+
+describe('the kitchen as it is on prep day', () => {
+  it('the assistant takes a broken oven out and sets the cooks who came; the start stays; bad input and stale versions change nothing', async () => {
+    const { coach, assistant, tray, week } = await twoTrayWeek();
+    const left = await makeOven(coach, { name: 'Left', racks: 2, traysPerRack: 1 });
+    const right = await makeOven(coach, { name: 'Right', racks: 2, traysPerRack: 1 });
+    const planned = await coach.agent
+      .put(`/api/weeks/${week.id}/bake-run/settings`)
+      .send({ start: '2026-01-04T08:00', cooks: 2, handsOnMinutes: { [String(tray.id)]: 10 }, ovenIds: [] })
+      .expect(200);
+    // Worked by hand (rules as in the first test): two cooks prep both trays by 08:10, both ovens preheat 12 min:
+    // one tray in each oven at 08:12, 25 min uncrowded → out 08:37, a 37-minute session.
+    expect(planned.body.run.sessionMinutes).toBe(37);
+    expect(planned.body.run.ovens.filter((o: { setPoints: unknown[] }) => o.setPoints.length).map((o: { name: string }) => o.name).sort()).toEqual(['Left', 'Right']);
+
+    // Prep day: the right oven is out of order. Both trays go into the left one at 08:12, crowded (+10 %, common
+    // practice, no source): 25 × 1.1 = 27.5 min → out at the first whole minute, 08:40.
+    const down = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 2, ovenIds: [left.id], version: 1 }).expect(200);
+    expect(down.body.settings).toMatchObject({ start: '2026-01-04T08:00', cooks: 2, ovenIds: [left.id], handsOnMinutes: { [String(tray.id)]: 10 }, version: 2 });
+    expect(down.body.ovens.map((o: { name: string }) => o.name)).toEqual(['Left']);
+    expect(down.body.run.sessionMinutes).toBe(40);
+    expect(down.body.run.trays.map((t: { inAt: string; outAt: string }) => [t.inAt, t.outAt])).toEqual([
+      ['2026-01-04T08:12', '2026-01-04T08:40'],
+      ['2026-01-04T08:12', '2026-01-04T08:40'],
+    ]);
+
+    // The oven is mended: every oven is stored as "every oven" (an oven added later counts too).
+    const mended = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 2, ovenIds: [right.id, left.id], version: 2 }).expect(200);
+    expect(mended.body.settings).toMatchObject({ ovenIds: [], version: 3 });
+
+    // No oven, an oven of no one's, no cooks: 400 naming the field; a stale version: 409 with the current settings.
+    const none = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 2, ovenIds: [], version: 3 }).expect(400);
+    expect(none.body.errors.ovenIds).toEqual(['At least one oven has to work to bake.']);
+    const unknown = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 2, ovenIds: [999999], version: 3 }).expect(400);
+    expect(Object.keys(unknown.body.errors)).toEqual(['ovenIds']);
+    const noCook = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 0, ovenIds: [left.id], version: 3 }).expect(400);
+    expect(Object.keys(noCook.body.errors)).toEqual(['cooks']);
+    const stale = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 1, ovenIds: [left.id], version: 2 }).expect(409);
+    expect(stale.body).toMatchObject({ code: 'stale_version', currentVersion: 3, current: { cooks: 2, ovenIds: [] } });
+    const [row] = await sql<{ cooks: number; oven_ids: number[]; version: number }>('select cooks, oven_ids, version from bake_run_setting where week_id = $1', [week.id]);
+    expect(row).toEqual({ cooks: 2, oven_ids: [], version: 3 });
+  });
+});

@@ -1,7 +1,7 @@
 import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, render, screen } from '@testing-library/react';
 import type { BakeRunResult } from '@shared/domain/bake-run-types';
-import { BakeRunTimers, type MoveStart } from '@/features/bake-runs/components/bake-run-timers';
+import { BakeRunTimers, type KitchenChange, type MoveStart } from '@/features/bake-runs/components/bake-run-timers';
 import { ApiError } from '@/lib/problem';
 
 // Invented runs (only the fields the timers card reads) of one tray, "Egg slab", in the left oven.
@@ -82,5 +82,66 @@ describe('moving a run to when the kitchen really started', () => {
   it('is not offered where the run is not saved (the planner gives no move)', () => {
     render(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={5} />);
     expect(screen.queryByText('Started at another time?')).toBeNull();
+  });
+});
+
+describe('the kitchen as it is on prep day', () => {
+  const ovens = [{ id: 1, name: 'Left' }, { id: 2, name: 'Right' }];
+  const kitchenOf = (over: Partial<KitchenChange> = {}): KitchenChange => ({
+    allOvens: ovens,
+    ovenIds: [1, 2],
+    cooks: 2,
+    version: 3,
+    saving: false,
+    error: null,
+    onChange: vi.fn(),
+    onReload: vi.fn(),
+    ...over,
+  });
+  const box = (name: string) => screen.getByRole('checkbox', { name }) as HTMLInputElement;
+
+  it('sends the ovens that work and the cooks who came, from the version shown, and says what the plan now uses', () => {
+    const k = kitchenOf();
+    const { rerender } = render(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={-20} kitchen={k} />);
+    fireEvent.click(screen.getByText('An oven down or a cook missing?'));
+    fireEvent.click(box('Right'));
+    fireEvent.change(screen.getByLabelText('Cooks here today'), { target: { value: '1' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Plan again' }));
+    expect(k.onChange).toHaveBeenCalledWith(1, [1], 3);
+    // The answer: the run now uses the left oven and one cook (version 4).
+    rerender(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={-20} kitchen={{ ...k, ovenIds: [1], cooks: 1, version: 4 }} />);
+    expect(screen.getByText('Planned again with Left and one cook.')).toBeTruthy();
+    expect(box('Right').checked).toBe(false);
+  });
+
+  it('follows a change saved elsewhere while nothing is ticked, and keeps the person’s own choice otherwise', () => {
+    const k = kitchenOf();
+    const { rerender } = render(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={-20} kitchen={k} />);
+    rerender(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={-20} kitchen={{ ...k, cooks: 3, version: 4 }} />);
+    expect((screen.getByLabelText('Cooks here today') as HTMLInputElement).value).toBe('3');
+    fireEvent.click(box('Left'));
+    rerender(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={-20} kitchen={{ ...k, cooks: 1, version: 5 }} />);
+    expect(box('Left').checked).toBe(false);
+    expect((screen.getByLabelText('Cooks here today') as HTMLInputElement).value).toBe('3');
+    fireEvent.click(screen.getByRole('button', { name: 'Plan again' }));
+    // Sent against version 4, the one its choice started from: the server answers 409 rather than overwrite 5.
+    expect(k.onChange).toHaveBeenCalledWith(3, [2], 4);
+  });
+
+  it('names a refused oven choice and puts a stale run behind a reload', () => {
+    const reload = vi.fn();
+    const { unmount } = render(
+      <BakeRunTimers
+        run={runAt('2026-01-04T08:00')}
+        unit="F"
+        nowMinute={-20}
+        kitchen={kitchenOf({ error: problem(400, 'validation', 'Invalid', { ovenIds: ['At least one oven has to work to bake.'] }) })}
+      />,
+    );
+    expect(screen.getByRole('alert').textContent).toBe('⚠ At least one oven has to work to bake.');
+    unmount();
+    render(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={-20} kitchen={kitchenOf({ error: problem(409, 'stale_version', 'Stale'), onReload: reload })} />);
+    fireEvent.click(screen.getByRole('button', { name: 'Load their version' }));
+    expect(reload).toHaveBeenCalled();
   });
 });

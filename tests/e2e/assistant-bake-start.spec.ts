@@ -30,3 +30,22 @@ test('on prep day the assistant moves the bake run to when the kitchen really st
   const moved = (await (await page.request.get(`/api/weeks/${weekId}/bake-run`)).json()) as { settings: { start: string } };
   expect(moved.settings.start).toBe(`${run.prepDate}T08:35`);
 });
+
+test('on prep day the assistant takes an oven that is out of order out of the run', async ({ page }) => {
+  await signIn(page, 'assistant@trayline.test');
+  const weeks = (await (await page.request.get('/api/weeks')).json()) as { id: number; publishedVersion: number | null }[];
+  const weekId = (weeks.find((w) => w.publishedVersion !== null) ?? weeks[0]).id;
+  const run = (await (await page.request.get(`/api/weeks/${weekId}/bake-run`)).json()) as { prepDate: string; ovens: { name: string }[] };
+  expect(run.ovens.map((o) => o.name)).toEqual(['Left oven', 'Right oven']);
+  await page.clock.setFixedTime(new Date(`${run.prepDate}T07:40:00Z`));
+  await page.goto(`/weeks/${weekId}/bake-run`);
+  await page.locator('summary', { hasText: 'An oven down or a cook missing?' }).click();
+  await page.getByRole('checkbox', { name: 'Right oven' }).uncheck();
+  await page.getByRole('button', { name: 'Plan again' }).click();
+  await expect(page.getByRole('status').filter({ hasText: /^Planned again with Left oven and / })).toBeVisible();
+  await expectNoSeriousA11yViolations(page, 'bake run, an oven down');
+  await page.getByRole('region', { name: 'Timers' }).screenshot({ path: `${SHOTS}/assistant-oven-down.png` });
+  const after = (await (await page.request.get(`/api/weeks/${weekId}/bake-run`)).json()) as { ovens: { name: string }[]; run: { ovens: { name: string; setPoints: unknown[] }[] } };
+  expect(after.ovens.map((o) => o.name)).toEqual(['Left oven']);
+  expect(after.run.ovens.filter((o) => o.setPoints.length).map((o) => o.name)).toEqual(['Left oven']);
+});

@@ -371,6 +371,11 @@ export const MATRIX: Record<string, MatrixRow> = {
     body: () => ({ start: '2026-01-04T08:30', version: 999 }),
     crossWorkspace: true,
   }),
+  'PUT /api/weeks/:weekId/bake-run/kitchen': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run/kitchen`,
+    body: () => ({ cooks: 1, ovenIds: [1], version: 999 }),
+    crossWorkspace: true,
+  }),
   'GET /api/weeks/:weekId/bake-run.pdf': R(['coach', 'assistant'], {
     path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run.pdf`,
     crossWorkspace: true,

@@ -3,6 +3,7 @@ import {
   bakeRuleCreateSchema,
   bakeRuleUpdateSchema,
   bakeRunSettingsSchema,
+  bakeRunKitchenSchema,
   bakeRunStartSchema,
   calcBakeRunRequestSchema,
   idParams,
@@ -104,6 +105,14 @@ export function bakeRunRoutes() {
     allow('coach', 'assistant'),
     validated({ params: weekIdParam, body: bakeRunStartSchema }, ({ params, body }, req) =>
       runs.moveWeekBakeRunStart(emOf(req), actorOf(req), params.weekId, body),
+    ),
+  );
+
+  r.put(
+    '/weeks/:weekId/bake-run/kitchen',
+    allow('coach', 'assistant'),
+    validated({ params: weekIdParam, body: bakeRunKitchenSchema }, ({ params, body }, req) =>
+      runs.setWeekBakeRunKitchen(emOf(req), actorOf(req), params.weekId, body),
     ),
   );
 

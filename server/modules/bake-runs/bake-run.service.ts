@@ -7,6 +7,7 @@ import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-
 import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
 import { longDate } from '@shared/domain/iso-date.js';
 import type {
+  BakeRunKitchenValues,
   BakeRunSettingsDto,
   BakeRunSettingsValues,
   BakeRunStartValues,
@@ -211,17 +212,24 @@ function startOnPrepDay(start: string, prepDate: string): void {
 }
 
 /**
- * PUT /api/weeks/:weekId/bake-run/start: moves the run to the time the kitchen really started (coach or assistant,
- * on prep day); cooks, ovens and hands-on minutes stay. A stale version is a 409 like the settings' own.
+ * Changes part of a prep day's saved settings (the rest stays; with none saved yet, the defaults fill it). A stale
+ * version is a 409 like the settings' own.
  */
-export async function moveWeekBakeRunStart(em: EntityManager, actor: Actor, weekId: number, v: BakeRunStartValues): Promise<WeekBakeRunDto> {
+async function changeDaySettings(
+  em: EntityManager,
+  actor: Actor,
+  weekId: number,
+  v: { prepDate?: string; version?: number },
+  change: (prepDate: string) => Partial<Pick<BakeRunSettingsDto, 'start' | 'cooks' | 'ovenIds'>> | Promise<Partial<Pick<BakeRunSettingsDto, 'start' | 'cooks' | 'ovenIds'>>>,
+): Promise<WeekBakeRunDto> {
+  // The week first: another workspace's week is a 404 whatever else the request says.
   const week = await findWeek(em, actor, weekId);
   const prepDate = pickPrepDate(week, v.prepDate);
-  startOnPrepDay(v.start, prepDate);
+  const changed = await change(prepDate);
   const row = await em.findOne(BakeRunSetting, { week: week.id, prepDate });
   if (row) {
     if (v.version !== row.version) throw new StaleEdit(row.version, presentSettings(prepDate, row));
-    row.start = v.start;
+    em.assign(row, changed);
   } else {
     if (v.version !== undefined) throw new StaleEdit(null, presentSettings(prepDate, null));
     const defaults = presentSettings(prepDate, null);
@@ -229,14 +237,41 @@ export async function moveWeekBakeRunStart(em: EntityManager, actor: Actor, week
       workspace: actor.workspaceId,
       week: week.id,
       prepDate,
-      start: v.start,
+      start: defaults.start,
       cooks: defaults.cooks,
       handsOnMinutes: defaults.handsOnMinutes,
       ovenIds: defaults.ovenIds,
+      ...changed,
     });
   }
   await em.flush();
   return getWeekBakeRun(em, actor, weekId, prepDate);
+}
+
+/**
+ * PUT /api/weeks/:weekId/bake-run/start: moves the run to the time the kitchen really started (coach or assistant,
+ * on prep day); cooks, ovens and hands-on minutes stay.
+ */
+export function moveWeekBakeRunStart(em: EntityManager, actor: Actor, weekId: number, v: BakeRunStartValues): Promise<WeekBakeRunDto> {
+  return changeDaySettings(em, actor, weekId, v, (prepDate) => {
+    startOnPrepDay(v.start, prepDate);
+    return { start: v.start };
+  });
+}
+
+/**
+ * PUT /api/weeks/:weekId/bake-run/kitchen: the ovens that work and the cooks who came on prep day (coach or
+ * assistant); the start and hands-on minutes stay. Every oven of the workspace is stored as "every oven".
+ */
+export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: number, v: BakeRunKitchenValues): Promise<WeekBakeRunDto> {
+  return changeDaySettings(em, actor, weekId, v, async () => {
+    const ovens = await loadOvens(em, actor.workspaceId);
+    const known = new Set(ovens.map((o) => o.id));
+    const missing = v.ovenIds.filter((id) => !known.has(id));
+    if (missing.length) throw ValidationError.field('ovenIds', `No oven with id ${missing.join(', ')} in your workspace.`);
+    const chosen = [...new Set(v.ovenIds)];
+    return { cooks: v.cooks, ovenIds: chosen.length === ovens.length ? [] : chosen };
+  });
 }
 
 function describeIssues(error: ZodError, trays: BakeTray[]): string[] {

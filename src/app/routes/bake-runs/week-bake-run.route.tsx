@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { bakeRunFiles, ovensQuery, weekBakeRunQuery } from '@/features/bake-runs/api/bake-runs.queries';
-import { useMoveBakeRunStart, useSaveBakeRunSettings } from '@/features/bake-runs/api/use-bake-run-mutations';
+import { useMoveBakeRunStart, useSaveBakeRunSettings, useSetBakeRunKitchen } from '@/features/bake-runs/api/use-bake-run-mutations';
 import { BakeRunSettingsForm } from '@/features/bake-runs/components/bake-run-settings-form';
 import { BakeRunView, UnitToggle } from '@/features/bake-runs/components/bake-run-view';
 import type { TempUnit } from '@/features/bake-runs/components/temperature';
@@ -26,9 +26,10 @@ export function Component() {
   const prepDate = params.get('prepDate') ?? undefined;
   const [unit, setUnit] = useState<TempUnit>(me.tempUnit);
   const q = useQuery(weekBakeRunQuery(weekId, prepDate));
-  const ovens = useQuery({ ...ovensQuery(), enabled: me.role === 'coach' });
+  const ovens = useQuery(ovensQuery());
   const save = useSaveBakeRunSettings(weekId);
   const moveStart = useMoveBakeRunStart(weekId);
+  const kitchen = useSetBakeRunKitchen(weekId);
 
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
@@ -110,6 +111,23 @@ export function Component() {
               q.refetch();
             },
           }}
+          kitchen={
+            ovens.data
+              ? {
+                  allOvens: ovens.data,
+                  ovenIds: dto.ovens.map((o) => o.id),
+                  cooks: dto.settings.cooks,
+                  version: dto.settings.version,
+                  saving: kitchen.isPending,
+                  error: kitchen.error,
+                  onChange: (cooks, ovenIds, version) => kitchen.mutate({ prepDate: dto.prepDate, cooks, ovenIds, ...(version === null ? {} : { version }) }),
+                  onReload: () => {
+                    kitchen.reset();
+                    q.refetch();
+                  },
+                }
+              : undefined
+          }
         />
       )}
       {dto.run === null && dto.problems.length === 0 && <Notice tone="info">No plan.</Notice>}

@@ -4,6 +4,7 @@ import type { BakeRunRequestBody } from '@shared/schemas/bake-run.schema';
 import type {
   BakeRuleCreateInput,
   BakeRuleDto,
+  BakeRunKitchenInput,
   BakeRunSettingsInput,
   BakeRunStartInput,
   OvenCreateInput,
@@ -25,7 +26,7 @@ export function useCalcBakeRun() {
 }
 
 /** A saved change to a week's run (its settings, or its start): PUT `path`, then the answer is the run to show. */
-function useRunChange<B>(weekId: number, path: 'settings' | 'start') {
+function useRunChange<B>(weekId: number, path: 'settings' | 'start' | 'kitchen') {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: B) => api.put<WeekBakeRunDto>(`/weeks/${weekId}/bake-run/${path}`, body),
@@ -41,6 +42,9 @@ export const useSaveBakeRunSettings = (weekId: number) => useRunChange<BakeRunSe
 
 /** Moves a week's run to the time the kitchen really started (coach or assistant, on prep day). */
 export const useMoveBakeRunStart = (weekId: number) => useRunChange<BakeRunStartInput>(weekId, 'start');
+
+/** The kitchen as it is on prep day: the ovens that work and the cooks who came (coach or assistant). */
+export const useSetBakeRunKitchen = (weekId: number) => useRunChange<BakeRunKitchenInput>(weekId, 'kitchen');
 
 type RuleBody = Omit<BakeRuleCreateInput, 'category'> & { category?: string; version?: number };
 

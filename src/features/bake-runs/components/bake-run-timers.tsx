@@ -116,8 +116,133 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
   );
 }
 
+/** Changing the kitchen a saved run plans with (the week's run page gives it; the planner does not). */
+export interface KitchenChange {
+  /** Every oven of the workspace. */
+  allOvens: { id: number; name: string }[];
+  /** The ovens the run uses now. */
+  ovenIds: number[];
+  cooks: number;
+  /** The saved settings' version these come from (null before any are saved). */
+  version: number | null;
+  saving: boolean;
+  error: unknown;
+  /** `version`: the one the person's choice started from (a change saved meanwhile makes it a 409). */
+  onChange: (cooks: number, ovenIds: number[], version: number | null) => void;
+  onReload: () => void;
+}
+
+const kitchenKey = (cooks: number | string, ovenIds: readonly number[]) => `${cooks}|${[...ovenIds].sort((a, b) => a - b).join()}`;
+
+/**
+ * "An oven down or a cook missing?": the ovens that work and the cooks who came today; the run is planned again from
+ * its start with them. Meant for before the first tray goes in: the new plan does not know which trays are already out.
+ */
+function KitchenForm({ kitchen }: { kitchen: KitchenChange }) {
+  const [ovenIds, setOvenIds] = useState(kitchen.ovenIds);
+  const [cooks, setCooks] = useState(String(kitchen.cooks));
+  const [sent, setSent] = useState(false);
+  // What the checkboxes started from: a change saved elsewhere replaces them unless the person changed them.
+  const [base, setBase] = useState({ key: kitchenKey(kitchen.cooks, kitchen.ovenIds), version: kitchen.version });
+  const adopt = () => {
+    setOvenIds(kitchen.ovenIds);
+    setCooks(String(kitchen.cooks));
+    setBase({ key: kitchenKey(kitchen.cooks, kitchen.ovenIds), version: kitchen.version });
+  };
+  if (base.version !== kitchen.version) {
+    const untouched = kitchenKey(cooks, ovenIds) === base.key;
+    const ownAnswer = sent && !kitchen.error && kitchenKey(cooks, ovenIds) === kitchenKey(kitchen.cooks, kitchen.ovenIds);
+    if (untouched || ownAnswer) adopt();
+  }
+  const stale = isApiError(kitchen.error, 409);
+  const fieldErrors = isApiError(kitchen.error, 400) ? kitchen.error.fieldErrors : {};
+  if (stale) markShown(kitchen.error);
+  const done = sent && !kitchen.saving && !kitchen.error;
+  const names = kitchen.allOvens.filter((o) => kitchen.ovenIds.includes(o.id)).map((o) => o.name);
+  return (
+    <details className="rounded-lg border border-line p-3">
+      <summary className="min-h-11 cursor-pointer py-2 font-bold">An oven down or a cook missing?</summary>
+      <form
+        className="mt-2 flex flex-col gap-3"
+        aria-label="Today's kitchen"
+        onSubmit={(e) => {
+          e.preventDefault();
+          setSent(true);
+          kitchen.onChange(Number(cooks), ovenIds, base.version);
+        }}
+      >
+        <fieldset className="flex flex-col gap-1">
+          <legend className="text-sm font-bold">Ovens that work today</legend>
+          <div className="flex flex-wrap gap-x-5">
+            {kitchen.allOvens.map((o) => (
+              <label key={o.id} className="flex min-h-11 items-center gap-2 text-base">
+                <input
+                  type="checkbox"
+                  className="h-5 w-5"
+                  checked={ovenIds.includes(o.id)}
+                  onChange={(e) => setOvenIds((ids) => (e.target.checked ? [...ids, o.id] : ids.filter((i) => i !== o.id)))}
+                />
+                {o.name}
+              </label>
+            ))}
+          </div>
+          {fieldErrors.ovenIds && (
+            <p role="alert" className="text-sm font-bold text-signal">
+              ⚠ {fieldErrors.ovenIds[0]}
+            </p>
+          )}
+        </fieldset>
+        <TextField label="Cooks here today" type="number" inputMode="numeric" min={1} max={50} required value={cooks} onChange={(e) => setCooks(e.target.value)} error={fieldErrors.cooks?.[0]} className="w-44" />
+        <p className="text-sm text-ink-soft">The run is planned again from its start: do this before the first tray goes in.</p>
+        <div>
+          <Button type="submit" busy={kitchen.saving}>
+            Plan again
+          </Button>
+        </div>
+      </form>
+      <p role="status" className="mt-2 text-base">
+        {done ? `Planned again with ${names.join(' and ')} and ${kitchen.cooks === 1 ? 'one cook' : `${kitchen.cooks} cooks`}.` : ''}
+      </p>
+      {stale && (
+        <Notice tone="warn" title="Someone changed this run meanwhile">
+          <p>Load their version, then change the kitchen again if it is still needed.</p>
+          <Button
+            type="button"
+            variant="secondary"
+            onClick={() => {
+              // What is on screen now; the reload's newer version then replaces it (nothing is typed over it).
+              setSent(false);
+              adopt();
+              kitchen.onReload();
+            }}
+          >
+            Load their version
+          </Button>
+        </Notice>
+      )}
+      {kitchen.error && !stale && !isApiError(kitchen.error, 400) ? (
+        <Notice tone="block" title="Not planned again">
+          {errorMessage(kitchen.error)}
+        </Notice>
+      ) : null}
+    </details>
+  );
+}
+
 /** On prep day: the next steps with a countdown (ovens, trays in, checks, out, cooling deadlines), optional sound at checks and outs. */
-export function BakeRunTimers({ run, unit, nowMinute, move }: { run: BakeRunResult; unit: TempUnit; nowMinute: number; move?: MoveStart }) {
+export function BakeRunTimers({
+  run,
+  unit,
+  nowMinute,
+  move,
+  kitchen,
+}: {
+  run: BakeRunResult;
+  unit: TempUnit;
+  nowMinute: number;
+  move?: MoveStart;
+  kitchen?: KitchenChange;
+}) {
   const [sound, setSound] = useState(false);
   const rung = useRef(new Set<string>());
   const names = new Map(run.trays.map((t) => [t.id, t.name]));
@@ -161,6 +286,7 @@ export function BakeRunTimers({ run, unit, nowMinute, move }: { run: BakeRunResu
         </ul>
       )}
       {move && <MoveStartForm run={run} move={move} />}
+      {kitchen && <KitchenForm kitchen={kitchen} />}
     </section>
   );
 }

@@ -2,7 +2,7 @@ import type { BakeRunResult } from '@shared/domain/bake-run-types';
 import { Notice } from '@/components/ui/states';
 import { BakeRunSheet } from './bake-run-sheet';
 import { BakeRunTimeline } from './bake-run-timeline';
-import { BakeRunTimers, useRunMinute, type MoveStart } from './bake-run-timers';
+import { BakeRunTimers, useRunMinute, type KitchenChange, type MoveStart } from './bake-run-timers';
 import { BAND_CLASS, clock, formatTemp, type TempUnit } from './temperature';
 
 /** °F / °C toggle, starting from the person's preference (a local choice, not saved). */
@@ -44,7 +44,7 @@ function Legend({ unit }: { unit: TempUnit }) {
 }
 
 /** A planned bake run: summary, timers on prep day, the timeline, the trays and the run sheet, the cautions. */
-export function BakeRunView({ run, unit, move }: { run: BakeRunResult; unit: TempUnit; move?: MoveStart }) {
+export function BakeRunView({ run, unit, move, kitchen }: { run: BakeRunResult; unit: TempUnit; move?: MoveStart; kitchen?: KitchenChange }) {
   const nowMinute = useRunMinute(run);
   return (
     <div className="flex flex-col gap-5">
@@ -61,7 +61,7 @@ export function BakeRunView({ run, unit, move }: { run: BakeRunResult; unit: Tem
           </div>
         ))}
       </dl>
-      {nowMinute !== null && <BakeRunTimers run={run} unit={unit} nowMinute={nowMinute} move={move} />}
+      {nowMinute !== null && <BakeRunTimers run={run} unit={unit} nowMinute={nowMinute} move={move} kitchen={kitchen} />}
       <section className="flex flex-col gap-2">
         <div className="flex flex-wrap items-center justify-between gap-2">
           <h2 className="text-xl">Timeline</h2>
