@@ -82,7 +82,8 @@ export function Component() {
       {editing && <Editor plate={editing === 'new' ? null : editing} onDone={() => setEditing(null)} />}
       {error && <Notice tone="block" title={error} />}
       {notice && (
-        <p role="status" className="rounded-lg border border-line bg-paper-card p-3 text-sm">
+        // Scrolled into view: the card that was clicked may be far down the list (or gone from it).
+        <p role="status" ref={(el) => el?.scrollIntoView?.({ block: 'nearest' })} className="scroll-mt-20 rounded-lg border border-line bg-paper-card p-3 text-sm">
           {notice}
         </p>
       )}
