@@ -28,11 +28,18 @@ export type RegisterInput = z.infer<typeof registerSchema>;
 
 export const createInvitationSchema = z.object({
   email,
-  role: z.enum(['assistant', 'client']),
+  /** A second coach has every right the first has (health notes included); a kitchen assistant never sees them. */
+  role: z.enum(['coach', 'assistant', 'client'], { message: 'Choose coach, kitchen assistant or client' }),
   /** For a client invitation: the client profile this person will see. */
   clientId: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE).optional(),
 });
 export type CreateInvitationInput = z.infer<typeof createInvitationSchema>;
+
+/** PATCH /api/members/:id: a team member's role (a client's access stays tied to their profile). */
+export const changeMemberRoleSchema = z.object({
+  role: z.enum(['coach', 'assistant'], { message: 'Choose coach or kitchen assistant' }),
+});
+export type ChangeMemberRoleInput = z.infer<typeof changeMemberRoleSchema>;
 
 export const acceptInvitationSchema = z.object({ name: personName, password });
 export type AcceptInvitationInput = z.infer<typeof acceptInvitationSchema>;

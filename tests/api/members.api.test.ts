@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import { testApp, agentFor } from '../support/test-app.js';
-import { PASSWORD, coachWorkspace, makeClient, member } from '../support/factories.js';
+import { PASSWORD, coachWorkspace, makeClient, member, type Member } from '../support/factories.js';
 import { sql } from '../support/db.js';
 
 let app: Express;
@@ -63,13 +63,75 @@ describe('the team: who has access, and ending it', () => {
     await back.get('/api/clients').expect(200);
   });
 
-  it("refuses to remove a coach (409) and answers 400 naming the id for a bad one", async () => {
+  it("refuses to remove one's own access (409) and answers 400 naming the id for a bad one", async () => {
     const coach = await coachWorkspace(app);
     const own = (await coach.agent.get('/api/members').expect(200)).body[0];
     const refused = await coach.agent.delete(`/api/members/${own.id}`).expect(409);
-    expect(refused.body.detail).toBe("A coach's access cannot be removed from the Team page");
+    expect(refused.body.detail).toBe('You cannot remove your own access: another coach of the workspace can');
     await coach.agent.get('/api/members').expect(200);
     const bad = await coach.agent.delete('/api/members/abc').expect(400);
     expect(Object.keys(bad.body.errors)).toEqual(['id']);
+  });
+});
+
+describe('a second coach, and changing roles', () => {
+  const idOf = async (coach: Member, userId: number) =>
+    ((await coach.agent.get('/api/members').expect(200)).body as { id: number; userId: number }[]).find((m) => m.userId === userId)!.id;
+
+  it('a coach invited as coach sees what the first sees (health notes too) and can plan', async () => {
+    const first = await coachWorkspace(app);
+    const client = await makeClient(first, { healthNotes: 'Demo note: takes a blood-pressure medicine' });
+    const second = await member(app, first, 'coach');
+    expect(second.role).toBe('coach');
+    expect((await second.agent.get(`/api/clients/${client.id}`).expect(200)).body.healthNotes).toBe('Demo note: takes a blood-pressure medicine');
+    await second.agent.get('/api/members').expect(200);
+    const list = (await first.agent.get('/api/members').expect(200)).body as { role: string }[];
+    expect(list.map((m) => m.role)).toEqual(['coach', 'coach']);
+  });
+
+  it('makes an assistant a coach and back; the change applies from their next request', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    await assistant.agent.get('/api/members').expect(403);
+    const id = await idOf(coach, assistant.userId);
+    const promoted = await coach.agent.patch(`/api/members/${id}`).send({ role: 'coach' }).expect(200);
+    expect(promoted.body).toMatchObject({ id, role: 'coach', userId: assistant.userId });
+    await assistant.agent.get('/api/members').expect(200);
+    expect((await assistant.agent.get('/api/auth/me').expect(200)).body.role).toBe('coach');
+    await coach.agent.patch(`/api/members/${id}`).send({ role: 'assistant' }).expect(200);
+    await assistant.agent.get('/api/members').expect(403);
+    // The same role again changes nothing and answers the member.
+    expect((await coach.agent.patch(`/api/members/${id}`).send({ role: 'assistant' }).expect(200)).body.role).toBe('assistant');
+  });
+
+  it('keeps a coach: the last one cannot step down; with two, one steps down or removes the other', async () => {
+    const first = await coachWorkspace(app);
+    const ownId = await idOf(first, first.userId);
+    const alone = await first.agent.patch(`/api/members/${ownId}`).send({ role: 'assistant' }).expect(409);
+    expect(alone.body.detail).toBe('The workspace needs a coach: make someone else a coach first');
+    const second = await member(app, first, 'coach');
+    await first.agent.patch(`/api/members/${ownId}`).send({ role: 'assistant' }).expect(200);
+    // The first is now a kitchen assistant; the second, the workspace's only coach, cannot step down either.
+    await first.agent.get('/api/members').expect(403);
+    const secondId = await idOf(second, second.userId);
+    await second.agent.patch(`/api/members/${secondId}`).send({ role: 'assistant' }).expect(409);
+    await second.agent.patch(`/api/members/${ownId}`).send({ role: 'coach' }).expect(200);
+    await second.agent.delete(`/api/members/${ownId}`).expect(204);
+    await first.agent.get('/api/members').expect(401);
+    expect(await sql(`select count(*)::int as n from membership where workspace_id = $1 and role = 'coach'`, [first.workspaceId])).toEqual([{ n: 1 }]);
+  });
+
+  it("refuses a client's role change, a role it does not know, and another workspace's member", async () => {
+    const coach = await coachWorkspace(app);
+    const client = await makeClient(coach);
+    const clientMember = await member(app, coach, 'client', { clientId: client.id });
+    const id = await idOf(coach, clientMember.userId);
+    const tied = await coach.agent.patch(`/api/members/${id}`).send({ role: 'coach' }).expect(400);
+    expect(Object.keys(tied.body.errors)).toEqual(['role']);
+    const unknown = await coach.agent.patch(`/api/members/${id}`).send({ role: 'owner' }).expect(400);
+    expect(unknown.body.errors.role).toEqual(['Choose coach or kitchen assistant']);
+    expect(await sql('select role from membership where id = $1', [id])).toEqual([{ role: 'client' }]);
+    const other = await coachWorkspace(app);
+    await other.agent.patch(`/api/members/${id}`).send({ role: 'assistant' }).expect(404);
   });
 });

@@ -14,14 +14,14 @@ const team = [person(1, 'Ada Coach', 'coach', { you: true }), person(2, 'Lee Pre
 afterEach(() => vi.unstubAllGlobals());
 
 describe('people with access (Team page)', () => {
-  it('lists everyone with their role, and offers "Remove access" for all but the coach', async () => {
+  it('lists everyone with their role; a coach or assistant can change role, and anyone but you can be removed', async () => {
     vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(team)));
     renderInApp(<TeamMembers workspaceName="Example Prep" />);
     const rows = within(await screen.findByRole('list', { name: 'People with access' })).getAllByRole('listitem');
     expect(rows.map((r) => r.textContent)).toEqual([
       'Ada Coach (you)Coach · ada@example.test · joined Nov 2, 2026',
-      "Lee PrepKitchen assistant · lee@example.test · joined Nov 2, 2026Remove access",
-      "Olga ClientClient · olga@example.test · joined Nov 2, 2026Remove access",
+      'Lee PrepKitchen assistant · lee@example.test · joined Nov 2, 2026Make coachRemove access',
+      'Olga ClientClient · olga@example.test · joined Nov 2, 2026Remove access',
     ]);
     expect(within(rows[0]).queryByRole('button')).toBeNull();
     expect(screen.getAllByRole('button', { name: /^Remove .*'s access$/ })).toHaveLength(2);
@@ -51,7 +51,7 @@ describe('people with access (Team page)', () => {
 
   it('does nothing when the coach changes their mind, and shows a refusal', async () => {
     const fetchMock = vi.fn(async (_url: string, init?: RequestInit) =>
-      init?.method === 'DELETE' ? jsonResponse({ title: 'Conflict', status: 409, detail: "A coach's access cannot be removed from the Team page" }, 409) : jsonResponse(team),
+      init?.method === 'DELETE' ? jsonResponse({ title: 'Conflict', status: 409, detail: 'You cannot remove your own access: another coach of the workspace can' }, 409) : jsonResponse(team),
     );
     vi.stubGlobal('fetch', fetchMock);
     vi.stubGlobal('confirm', vi.fn(() => false));
@@ -60,8 +60,47 @@ describe('people with access (Team page)', () => {
     expect(fetchMock.mock.calls.some(([, init]) => init?.method === 'DELETE')).toBe(false);
     vi.stubGlobal('confirm', vi.fn(() => true));
     fireEvent.click(screen.getByRole('button', { name: "Remove Olga Client's access" }));
-    expect(await screen.findByText("A coach's access cannot be removed from the Team page")).toBeTruthy();
+    expect(await screen.findByText('You cannot remove your own access: another coach of the workspace can')).toBeTruthy();
     expect(screen.getByText('Access not removed')).toBeTruthy();
+  });
+});
+
+describe('changing a role', () => {
+  it('asks first, naming what the person will see, then makes the assistant a coach and reads the list again', async () => {
+    let current = team;
+    const calls: string[] = [];
+    vi.stubGlobal('confirm', vi.fn(() => true));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string, init?: RequestInit) => {
+        calls.push(`${init?.method ?? 'GET'} ${url}${init?.body ? ` ${String(init.body)}` : ''}`);
+        if (init?.method === 'PATCH') {
+          current = team.map((m) => (m.id === 2 ? { ...m, role: 'coach' as const } : m));
+          return jsonResponse(current[1]);
+        }
+        return jsonResponse(current);
+      }),
+    );
+    renderInApp(<TeamMembers workspaceName="Example Prep" />);
+    fireEvent.click(await screen.findByRole('button', { name: 'Make Lee Prep a coach' }));
+    expect(vi.mocked(window.confirm).mock.calls[0][0]).toBe("Make Lee Prep a coach? They get everything you have: clients' profiles with health notes, planning, publishing, the team.");
+    expect(await screen.findByRole('button', { name: 'Make Lee Prep a kitchen assistant' })).toBeTruthy();
+    expect(calls).toEqual(['GET /api/members', 'PATCH /api/members/2 {"role":"coach"}', 'GET /api/members']);
+  });
+
+  it('shows the refusal when the workspace would lose its last coach', async () => {
+    const two = [team[0], person(4, 'Bea Coach', 'coach')];
+    vi.stubGlobal('confirm', vi.fn(() => true));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init?: RequestInit) =>
+        init?.method === 'PATCH' ? jsonResponse({ title: 'Conflict', status: 409, detail: 'The workspace needs a coach: make someone else a coach first' }, 409) : jsonResponse(two),
+      ),
+    );
+    renderInApp(<TeamMembers workspaceName="Example Prep" />);
+    fireEvent.click(await screen.findByRole('button', { name: 'Make Bea Coach a kitchen assistant' }));
+    expect(await screen.findByText('The workspace needs a coach: make someone else a coach first')).toBeTruthy();
+    expect(screen.getByText('Role not changed')).toBeTruthy();
   });
 });
 

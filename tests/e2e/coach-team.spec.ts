@@ -1,7 +1,7 @@
 import { expect, test } from '@playwright/test';
 import { SHOTS, expectNoSeriousA11yViolations, signIn } from './support';
 
-test('the coach invites a kitchen assistant, sees them among the people with access, and removes that access', async ({ page, browser }) => {
+test('the coach invites a kitchen assistant, sees them among the people with access, makes them a coach, and removes that access', async ({ page, browser }) => {
   const email = `helper-${Date.now().toString(36)}@example.test`;
   await signIn(page, 'coach@trayline.test');
   await page.goto('/team');
@@ -27,6 +27,14 @@ test('the coach invites a kitchen assistant, sees them among the people with acc
   await expect(invitation).toContainText('Joined');
   await expectNoSeriousA11yViolations(page, 'team');
   await page.screenshot({ path: `${SHOTS}/coach-team.png`, fullPage: true });
+
+  // Made a coach: asked first; at their next step they have the coach's pages (the week at a glance, not the kitchen's).
+  await expect(helper.getByRole('heading', { name: 'This week in the kitchen' })).toBeVisible();
+  page.once('dialog', (d) => void d.accept());
+  await row.getByRole('button', { name: 'Make Robin Helper a coach' }).click();
+  await expect(row.getByRole('button', { name: 'Make Robin Helper a kitchen assistant' })).toBeVisible();
+  await helper.reload();
+  await expect(helper.getByRole('heading', { name: 'This week at a glance' })).toBeVisible();
 
   // Removing the access: asked first, then they are signed out at their next step.
   page.once('dialog', (d) => void d.accept());

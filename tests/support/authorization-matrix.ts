@@ -74,6 +74,11 @@ export const MATRIX: Record<string, MatrixRow> = {
   }),
   // The team (who has access; ending someone's access)
   'GET /api/members': R(['coach']),
+  'PATCH /api/members/:id': R(['coach'], {
+    path: (ctx) => `/api/members/${ctx.ids.member}`,
+    body: () => ({ role: 'assistant' }),
+    crossWorkspace: true,
+  }),
   'DELETE /api/members/:id': R(['coach'], {
     prepare: async (ctx) => {
       const extra = await member(ctx.app, ctx.coachA, 'assistant');

@@ -29,7 +29,7 @@ export async function coachWorkspace(app: Express, name = uniq('coach')): Promis
 export async function member(
   app: Express,
   coach: Member,
-  role: 'assistant' | 'client',
+  role: 'coach' | 'assistant' | 'client',
   extra: { clientId?: number } = {},
 ): Promise<Member> {
   const email = `${uniq(role)}@example.test`;

@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { MemberDto, Role } from '@shared/schemas/auth.schema.js';
 import type { Actor } from '../../http/authz.js';
-import { Conflict, NotFound } from '../../http/errors.js';
+import { Conflict, NotFound, ValidationError } from '../../http/errors.js';
 
 interface MemberRow {
   id: number;
@@ -40,30 +40,68 @@ export async function listMembers(em: EntityManager, actor: Actor): Promise<Memb
     .sort((a, b) => (ROLE_ORDER[a.role] ?? 9) - (ROLE_ORDER[b.role] ?? 9) || a.name.localeCompare(b.name) || a.id - b.id);
 }
 
+/** The member row of this workspace, locked for the change (404 outside the workspace). */
+async function lockMember(conn: ReturnType<EntityManager['getConnection']>, ctx: unknown, workspaceId: number, id: number) {
+  const [row] = await conn.execute<{ user_id: number; role: string }[]>(
+    'select user_id, role from membership where id = ? and workspace_id = ? for update',
+    [id, workspaceId],
+    'all',
+    ctx as never,
+  );
+  if (!row) throw new NotFound('Member');
+  return { userId: Number(row.user_id), role: row.role as Role };
+}
+
+/** How many coaches the workspace has, their rows locked (two coaches demoting each other at once cannot both pass). */
+async function lockedCoachCount(conn: ReturnType<EntityManager['getConnection']>, ctx: unknown, workspaceId: number): Promise<number> {
+  const rows = await conn.execute<{ id: number }[]>(
+    `select id from membership where workspace_id = ? and role = 'coach' order by id for update`,
+    [workspaceId],
+    'all',
+    ctx as never,
+  );
+  return rows.length;
+}
+
+/**
+ * Makes a team member a coach or a kitchen assistant. The change applies from their next request (each request reads
+ * the membership with the session). A client's access stays tied to their profile; the workspace keeps a coach.
+ */
+export async function changeMemberRole(em: EntityManager, actor: Actor, id: number, role: 'coach' | 'assistant'): Promise<MemberDto> {
+  await em.transactional(async (tx) => {
+    const conn = tx.getConnection();
+    const ctx = tx.getTransactionContext();
+    const coaches = await lockedCoachCount(conn, ctx, actor.workspaceId);
+    const row = await lockMember(conn, ctx, actor.workspaceId, id);
+    if (row.role === 'client') throw ValidationError.field('role', "A client's access is tied to their client profile: invite them again with another e-mail as a coach or kitchen assistant");
+    if (row.role === role) return;
+    if (row.role === 'coach' && coaches <= 1) throw new Conflict('The workspace needs a coach: make someone else a coach first');
+    await conn.execute('update membership set role = ? where id = ?', [role, id], 'run', ctx);
+  });
+  const member = (await listMembers(em, actor)).find((m) => m.id === id);
+  if (!member) throw new NotFound('Member');
+  return member;
+}
+
 /**
  * Ends someone's access to the workspace (a kitchen assistant who left, a client who stopped): their membership goes,
  * and with it every page and API answer of this workspace from their next request on (each request reads the
  * membership with the session). When they belong to no other workspace, their sessions end too. Their account,
- * and what they did (check marks, purchases, sent mail), stay. A coach's access cannot be removed here.
+ * and what they did (check marks, purchases, sent mail), stay. A coach removes another coach, never themselves (so
+ * the workspace always keeps one).
  */
 export async function removeMember(em: EntityManager, actor: Actor, id: number): Promise<void> {
   await em.transactional(async (tx) => {
     const conn = tx.getConnection();
     const ctx = tx.getTransactionContext();
-    const [row] = await conn.execute<{ user_id: number; role: string }[]>(
-      'select user_id, role from membership where id = ? and workspace_id = ? for update',
-      [id, actor.workspaceId],
-      'all',
-      ctx,
-    );
-    if (!row) throw new NotFound('Member');
-    if (row.role === 'coach') throw new Conflict("A coach's access cannot be removed from the Team page");
+    const row = await lockMember(conn, ctx, actor.workspaceId, id);
+    if (row.userId === actor.userId) throw new Conflict('You cannot remove your own access: another coach of the workspace can');
     await conn.execute('delete from membership where id = ?', [id], 'run', ctx);
-    const [left] = await conn.execute<{ n: number }[]>('select count(*)::int as n from membership where user_id = ?', [row.user_id], 'all', ctx);
+    const [left] = await conn.execute<{ n: number }[]>('select count(*)::int as n from membership where user_id = ?', [row.userId], 'all', ctx);
     if (left.n === 0) {
       await conn.execute(
         `delete from session where (sess->'passport'->>'user') = ?`,
-        [String(row.user_id)],
+        [String(row.userId)],
         'run',
         ctx,
       );

@@ -40,7 +40,7 @@ export function Component() {
   });
   return (
     <div className="flex flex-col gap-6">
-      <PageHeader title="Team & invitations" lead="Invite your kitchen assistant. Clients are invited from their profile." />
+      <PageHeader title="Team & invitations" lead="Invite your kitchen assistant or a second coach. Clients are invited from their profile." />
       <Card>
         <h2 className="mb-3 text-xl">People with access</h2>
         <TeamMembers workspaceName={me.workspaceName} />
@@ -51,6 +51,7 @@ export function Component() {
           <TextField label="E-mail" type="email" error={form.formState.errors.email?.message} {...form.register('email')} />
           <SelectField label="Role" error={form.formState.errors.role?.message} {...form.register('role')}>
             <option value="assistant">Kitchen assistant</option>
+            <option value="coach">Coach (everything, health notes included)</option>
             <option value="client">Client</option>
           </SelectField>
           <Button type="submit" busy={create.isPending}>

@@ -6,6 +6,7 @@ import type {
   InvitationDto,
   LoginInput,
   MeDto,
+  MemberDto,
   RegisterInput,
   UpdatePreferencesInput,
 } from '@shared/schemas/auth.schema';
@@ -97,5 +98,14 @@ export function useRemoveMember() {
   return useMutation({
     mutationFn: (id: number) => api.delete<void>(`/members/${id}`),
     onSuccess: () => qc.invalidateQueries({ queryKey: authKeys.members() }),
+  });
+}
+
+/** Makes a team member a coach or a kitchen assistant (from their next request). */
+export function useChangeMemberRole() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, role }: { id: number; role: 'coach' | 'assistant' }) => api.patch<MemberDto>(`/members/${id}`, { role }),
+    onSettled: () => qc.invalidateQueries({ queryKey: authKeys.members() }),
   });
 }

@@ -6,7 +6,7 @@ import { Notice, QueryView, Skeleton } from '@/components/ui/states';
 import { errorMessage } from '@/lib/problem';
 import { ROLE_WORDS } from '@/lib/words';
 import { membersQuery } from '../api/auth.queries';
-import { useRemoveMember } from '../api/use-auth-mutations';
+import { useChangeMemberRole, useRemoveMember } from '../api/use-auth-mutations';
 
 const joined = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
 
@@ -16,11 +16,19 @@ export function removeQuestion(m: Pick<MemberDto, 'name' | 'role'>, workspaceNam
   return `Remove ${m.name}'s access to ${workspaceName}? They are signed out and can no longer open it. Their account and what they did (check marks, purchases) stay. ${back}`;
 }
 
-/** Everyone with access to the workspace, and "Remove access" for anyone but a coach. */
+/** What a change of role does, asked before it happens. */
+export function roleQuestion(m: Pick<MemberDto, 'name' | 'role'>): string {
+  return m.role === 'coach'
+    ? `Make ${m.name} a kitchen assistant? From their next click they see the kitchen pages only: no client's body measurements, targets or health notes.`
+    : `Make ${m.name} a coach? They get everything you have: clients' profiles with health notes, planning, publishing, the team.`;
+}
+
+/** Everyone with access to the workspace: a coach or kitchen assistant can change role; anyone but you can be removed. */
 export function TeamMembers({ workspaceName }: { workspaceName: string }) {
   const list = useQuery(membersQuery());
   const remove = useRemoveMember();
-  const [error, setError] = useState<string | null>(null);
+  const changeRole = useChangeMemberRole();
+  const [error, setError] = useState<{ title: string; detail: string } | null>(null);
   return (
     <QueryView
       query={list}
@@ -43,27 +51,44 @@ export function TeamMembers({ workspaceName }: { workspaceName: string }) {
                     <span className="num">{joined(m.joinedAt)}</span>
                   </p>
                 </div>
-                {m.role !== 'coach' && (
-                  <Button
-                    size="sm"
-                    variant="ghost"
-                    busy={remove.isPending && remove.variables === m.id}
-                    aria-label={`Remove ${m.name}'s access`}
-                    onClick={() => {
-                      if (!window.confirm(removeQuestion(m, workspaceName))) return;
-                      setError(null);
-                      remove.mutate(m.id, { onError: (e) => setError(errorMessage(e)) });
-                    }}
-                  >
-                    Remove access
-                  </Button>
+                {!m.you && (
+                  <div className="flex flex-wrap gap-2">
+                    {m.role !== 'client' && (
+                      <Button
+                        size="sm"
+                        variant="ghost"
+                        busy={changeRole.isPending && changeRole.variables?.id === m.id}
+                        aria-label={m.role === 'coach' ? `Make ${m.name} a kitchen assistant` : `Make ${m.name} a coach`}
+                        onClick={() => {
+                          if (!window.confirm(roleQuestion(m))) return;
+                          setError(null);
+                          changeRole.mutate({ id: m.id, role: m.role === 'coach' ? 'assistant' : 'coach' }, { onError: (e) => setError({ title: 'Role not changed', detail: errorMessage(e) }) });
+                        }}
+                      >
+                        {m.role === 'coach' ? 'Make kitchen assistant' : 'Make coach'}
+                      </Button>
+                    )}
+                    <Button
+                      size="sm"
+                      variant="ghost"
+                      busy={remove.isPending && remove.variables === m.id}
+                      aria-label={`Remove ${m.name}'s access`}
+                      onClick={() => {
+                        if (!window.confirm(removeQuestion(m, workspaceName))) return;
+                        setError(null);
+                        remove.mutate(m.id, { onError: (e) => setError({ title: 'Access not removed', detail: errorMessage(e) }) });
+                      }}
+                    >
+                      Remove access
+                    </Button>
+                  </div>
                 )}
               </li>
             ))}
           </ul>
           {error && (
-            <Notice tone="block" title="Access not removed">
-              {error}
+            <Notice tone="block" title={error.title}>
+              {error.detail}
             </Notice>
           )}
         </div>
