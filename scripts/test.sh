@@ -30,6 +30,9 @@ status=0
 # Whole-project type check (the client, the server, shared/, the tests and the scripts): one check in the count.
 log "type check (tsc)"
 if node_modules/.bin/tsc -p tsconfig.json --noEmit; then echo "type check: passed" >"$out/checks.txt"; else echo "type check: failed" >"$out/checks.txt"; status=1; fi
+# Lint (scripts/eslint.config.mjs: the recommended JavaScript and TypeScript rules, the rules of hooks): one check.
+log "lint (eslint)"
+if node_modules/.bin/eslint -c scripts/eslint.config.mjs --max-warnings 0 src server shared tests scripts; then echo "lint: passed" >>"$out/checks.txt"; else echo "lint: failed" >>"$out/checks.txt"; status=1; fi
 
 log "unit, client and API suites (vitest)"
 node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$out/vitest.json" || status=1

@@ -38,7 +38,6 @@ export function zodToErrors(err: ZodError, where?: string): Record<string, strin
 
 /** The one error middleware: every failure becomes an RFC 9457 problem; no stack in any body. */
 export function errorHandler() {
-  // eslint-disable-next-line @typescript-eslint/no-unused-vars
   return (err: unknown, req: Request, res: Response, _next: NextFunction) => {
     const requestId = String(req.id ?? '');
     let body: Problem;

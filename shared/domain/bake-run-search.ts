@@ -480,7 +480,7 @@ export function exactPlan(
     usedA.length = 0;
     unusedA.length = 0;
     for (let o = 0; o < m; o++) {
-      let a = 0;
+      let a: number;
       if (lens[o] > 0) a = ovSlot[o];
       else {
         let p = Infinity;

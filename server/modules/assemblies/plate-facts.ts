@@ -187,7 +187,7 @@ export const trayFacts: (t: TrayRow, ingredients: Map<number, TrayIngredient>, r
 );
 
 export function computeTrayFacts(t: TrayRow, ingredients: Map<number, TrayIngredient>, rule: NetCarbRule): TrayFacts {
-  let portionsPerTray: number | null = null;
+  let portionsPerTray: number | null;
   try {
     portionsPerTray = portionsOf(cutPlanOf(t));
   } catch {

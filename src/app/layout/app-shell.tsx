@@ -1,4 +1,4 @@
-import { Suspense, useEffect, useState } from 'react';
+import { Suspense, useState } from 'react';
 import { NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { useLogout } from '@/features/auth/api/use-auth-mutations';
@@ -18,7 +18,12 @@ export function AppShell() {
   const navigate = useNavigate();
   const location = useLocation();
   const [open, setOpen] = useState(false);
-  useEffect(() => setOpen(false), [location.pathname]);
+  // The drawer closes when the page changes (state adjusted while rendering, as React documents).
+  const [shownPath, setShownPath] = useState(location.pathname);
+  if (shownPath !== location.pathname) {
+    setShownPath(location.pathname);
+    setOpen(false);
+  }
   const items = NAV.filter((n) => n.roles.includes(me.role));
   const signOut = () => logout.mutate(undefined, { onSuccess: () => navigate(paths.signIn) });
   const nav = <NavGroups items={items} />;

@@ -79,9 +79,12 @@ export function IngredientCombobox({ label, value, onPick, error, hideLabel }: P
   const search = useQuery({ ...ingredientSearchQuery(q), enabled: open && q.length >= 1 });
   const items = search.data?.items ?? [];
 
-  useEffect(() => {
+  // Closed, the box shows the chosen ingredient's name (again after a pick, a reset or an Escape).
+  const [synced, setSynced] = useState({ name: value?.name, open });
+  if (synced.name !== value?.name || synced.open !== open) {
+    setSynced({ name: value?.name, open });
     if (!open) setText(value?.name ?? '');
-  }, [value?.name, open]);
+  }
 
   const pick = (dto: IngredientDto) => {
     onPick(pickedFrom(dto));

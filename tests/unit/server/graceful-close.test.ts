@@ -5,7 +5,11 @@ import { gracefulClose } from '@server/lib/graceful-close.js';
 
 const open: http.Server[] = [];
 afterEach(() => {
-  for (const s of open.splice(0)) if (s.listening) s.closeAllConnections(), s.close();
+  for (const s of open.splice(0)) {
+    if (!s.listening) continue;
+    s.closeAllConnections();
+    s.close();
+  }
 });
 
 /** A server whose handler is given; resolves once it listens on a free loopback port. */

@@ -34,7 +34,8 @@ export function Component() {
 
   const data = outbox.data;
   const busy = outboxBusy(data);
-  const activeBatches = (data?.batches ?? []).filter((b) => b.pending > 0 || Date.now() - new Date(b.createdAt).getTime() < 10 * 60_000);
+  // Recent: within 10 minutes of when the page read the outbox (it reads again while anything is sending).
+  const activeBatches = (data?.batches ?? []).filter((b) => b.pending > 0 || outbox.dataUpdatedAt - new Date(b.createdAt).getTime() < 10 * 60_000);
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
 
   return (

@@ -84,8 +84,8 @@ export function AssemblyForm({ initial, names = {}, trayNames = {}, busy, formEr
   const [steps, setSteps] = useState((initial.assemblySteps ?? []).join('\n'));
   const [reheat, setReheat] = useState((initial.reheatSteps ?? []).join('\n'));
   const err = form.formState.errors;
-  const watchedTrays = form.watch('trays');
-  const watchedAddOns = form.watch('addOns');
+  const watchedTrays = useWatch({ control: form.control, name: 'trays' });
+  const watchedAddOns = useWatch({ control: form.control, name: 'addOns' });
   return (
     <form
       noValidate

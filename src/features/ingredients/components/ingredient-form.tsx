@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useFieldArray, useForm } from 'react-hook-form';
+import { useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { MAJOR_ALLERGENS } from '@shared/domain/allergens';
 import {
@@ -94,7 +94,7 @@ export function IngredientForm({
     resolver: zodResolver(ingredientInputSchema),
     defaultValues: initial,
   });
-  const { register, formState, watch, setValue, control } = form;
+  const { register, formState, setValue, control } = form;
   const pieces = useFieldArray({ control, name: 'pieceWeights' as never });
   const errors = formState.errors as Record<string, unknown>;
   const errorAt = (path: string): string | undefined => {
@@ -102,7 +102,7 @@ export function IngredientForm({
     for (const part of path.split('.')) cur = (cur as Record<string, unknown> | undefined)?.[part];
     return (cur as { message?: string } | undefined)?.message;
   };
-  const purchase = watch('purchase');
+  const purchase = useWatch({ control, name: 'purchase' });
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);

@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { useId, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import type { NetCarbRuleKind } from '@shared/domain/nutrition';
@@ -15,9 +15,12 @@ export function NetCarbRuleCard() {
   const save = useUpdateWorkspaceSettings();
   const [choice, setChoice] = useState<NetCarbRuleKind | null>(null);
   const [stale, setStale] = useState(false);
-  useEffect(() => {
+  // The saved rule becomes the choice whenever it is read (again).
+  const [readData, setReadData] = useState(settings.data);
+  if (readData !== settings.data) {
+    setReadData(settings.data);
     if (settings.data) setChoice(settings.data.netCarbRule);
-  }, [settings.data]);
+  }
 
   return (
     <Card>

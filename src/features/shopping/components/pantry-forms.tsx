@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import type { IngredientDto } from '@shared/schemas/ingredients.schema';
@@ -52,7 +52,7 @@ export function AddPantryItem({ unitSystem }: { unitSystem: 'us' | 'metric' }) {
     resolver: zodResolver(pantryCreateSchema),
     defaultValues: empty,
   });
-  const chosenId = Number(form.watch('ingredientId'));
+  const chosenId = Number(useWatch({ control: form.control, name: 'ingredientId' }));
   const chosen = results.data?.items.find((i) => i.id === chosenId) ?? null;
   const ingredientField = form.register('ingredientId', {
     // A newly chosen ingredient starts in its own unit (eggs in "large"), not in the last one's.

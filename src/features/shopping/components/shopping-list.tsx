@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import type { ShoppingAisleDto, ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
 import { useSetCheck } from '../api/use-shopping-mutations';
 
@@ -15,7 +15,11 @@ function ItemRow({ item, onToggle }: { item: ShoppingItemDto; onToggle: (checked
   // controlled checkbox would spring back meanwhile. Any new mark for this item (optimistic, saved or rolled back)
   // replaces the tap.
   const [tapped, setTapped] = useState<boolean | null>(null);
-  useEffect(() => setTapped(null), [item.check]);
+  const [shownCheck, setShownCheck] = useState(item.check);
+  if (shownCheck !== item.check) {
+    setShownCheck(item.check);
+    setTapped(null);
+  }
   const checked = tapped ?? item.check.checked;
   const covered = item.toBuy <= 0;
   return (
