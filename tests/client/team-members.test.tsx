@@ -13,6 +13,29 @@ const team = [person(1, 'Ada Coach', 'coach', { you: true }), person(2, 'Lee Pre
 
 afterEach(() => vi.unstubAllGlobals());
 
+/**
+ * The API as the Team list sees it, with "yes" to every question: GET answers the team; a change (DELETE, PATCH)
+ * answers what `change` gives and the team reads as it says from then on. Returns the calls made, with their bodies.
+ */
+function stubTeamApi(change: () => { team: MemberDto[]; answer: Response }) {
+  let current = team;
+  const calls: string[] = [];
+  vi.stubGlobal('confirm', vi.fn(() => true));
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (url: string, init?: RequestInit) => {
+      calls.push(`${init?.method ?? 'GET'} ${url}${init?.body ? ` ${String(init.body)}` : ''}`);
+      if (init?.method && init.method !== 'GET') {
+        const next = change();
+        current = next.team;
+        return next.answer;
+      }
+      return jsonResponse(current);
+    }),
+  );
+  return calls;
+}
+
 describe('people with access (Team page)', () => {
   it('lists everyone with their role; a coach or assistant can change role, and anyone but you can be removed', async () => {
     vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(team)));
@@ -28,20 +51,7 @@ describe('people with access (Team page)', () => {
   });
 
   it('asks first, then removes the access and reads the list again', async () => {
-    let current = team;
-    const calls: string[] = [];
-    vi.stubGlobal('confirm', vi.fn(() => true));
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async (url: string, init?: RequestInit) => {
-        calls.push(`${init?.method ?? 'GET'} ${url}`);
-        if (init?.method === 'DELETE') {
-          current = team.filter((m) => m.id !== 2);
-          return new Response(null, { status: 204 });
-        }
-        return jsonResponse(current);
-      }),
-    );
+    const calls = stubTeamApi(() => ({ team: team.filter((m) => m.id !== 2), answer: new Response(null, { status: 204 }) }));
     renderInApp(<TeamMembers workspaceName="Example Prep" />);
     fireEvent.click(await screen.findByRole('button', { name: "Remove Lee Prep's access" }));
     expect(vi.mocked(window.confirm).mock.calls[0][0]).toMatch(/^Remove Lee Prep's access to Example Prep\? They are signed out/);
@@ -51,7 +61,8 @@ describe('people with access (Team page)', () => {
 
   it('does nothing when the coach changes their mind, and shows a refusal', async () => {
     const fetchMock = vi.fn(async (_url: string, init?: RequestInit) =>
-      init?.method === 'DELETE' ? jsonResponse({ title: 'Conflict', status: 409, detail: 'You cannot remove your own access: another coach of the workspace can' }, 409) : jsonResponse(team),
+      // Another coach removed them meanwhile.
+      init?.method === 'DELETE' ? jsonResponse({ title: 'Not Found', status: 404, detail: 'Member not found' }, 404) : jsonResponse(team),
     );
     vi.stubGlobal('fetch', fetchMock);
     vi.stubGlobal('confirm', vi.fn(() => false));
@@ -60,27 +71,15 @@ describe('people with access (Team page)', () => {
     expect(fetchMock.mock.calls.some(([, init]) => init?.method === 'DELETE')).toBe(false);
     vi.stubGlobal('confirm', vi.fn(() => true));
     fireEvent.click(screen.getByRole('button', { name: "Remove Olga Client's access" }));
-    expect(await screen.findByText('You cannot remove your own access: another coach of the workspace can')).toBeTruthy();
+    expect(await screen.findByText('Member not found')).toBeTruthy();
     expect(screen.getByText('Access not removed')).toBeTruthy();
   });
 });
 
 describe('changing a role', () => {
   it('asks first, naming what the person will see, then makes the assistant a coach and reads the list again', async () => {
-    let current = team;
-    const calls: string[] = [];
-    vi.stubGlobal('confirm', vi.fn(() => true));
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async (url: string, init?: RequestInit) => {
-        calls.push(`${init?.method ?? 'GET'} ${url}${init?.body ? ` ${String(init.body)}` : ''}`);
-        if (init?.method === 'PATCH') {
-          current = team.map((m) => (m.id === 2 ? { ...m, role: 'coach' as const } : m));
-          return jsonResponse(current[1]);
-        }
-        return jsonResponse(current);
-      }),
-    );
+    const promoted = team.map((m) => (m.id === 2 ? { ...m, role: 'coach' as const } : m));
+    const calls = stubTeamApi(() => ({ team: promoted, answer: jsonResponse(promoted[1]) }));
     renderInApp(<TeamMembers workspaceName="Example Prep" />);
     fireEvent.click(await screen.findByRole('button', { name: 'Make Lee Prep a coach' }));
     expect(vi.mocked(window.confirm).mock.calls[0][0]).toBe("Make Lee Prep a coach? They get everything you have: clients' profiles with health notes, planning, publishing, the team.");

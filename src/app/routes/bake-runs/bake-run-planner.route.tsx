@@ -13,6 +13,7 @@ import { isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { counted } from '@/lib/words';
 import { dayLabel, localToday } from '@/lib/dates';
+import { OvenChecks } from '@/features/bake-runs/components/oven-checks';
 
 const todayAt8 = () => `${localToday()}T08:00`;
 
@@ -112,21 +113,13 @@ export function Component() {
             <TextField label="Start" type="datetime-local" value={start} onChange={(e) => setStart(e.target.value)} error={fieldErrors.start?.[0]} />
             <TextField label="Cooks" type="number" min={1} max={50} value={cooks} onChange={(e) => setCooks(e.target.value)} error={fieldErrors.cooks?.[0]} />
           </div>
-          <fieldset className="flex flex-wrap gap-4">
-            <legend className="mb-1 text-sm font-bold">Ovens</legend>
-            {ovens.data.map((o) => (
-              <label key={o.id} className="flex min-h-11 items-center gap-2">
-                <input
-                  type="checkbox"
-                  className="h-5 w-5"
-                  checked={ovenIds.includes(o.id)}
-                  onChange={(e) => setChosenOvens(e.target.checked ? [...ovenIds, o.id] : ovenIds.filter((i) => i !== o.id))}
-                />
-                {o.name} ({o.racks} × {o.traysPerRack}
-                {o.convection ? ', convection' : ''})
-              </label>
-            ))}
-          </fieldset>
+          <OvenChecks
+            legend="Ovens"
+            ovens={ovens.data}
+            chosen={ovenIds}
+            onChange={setChosenOvens}
+            detail={(o) => ` (${o.racks} × ${o.traysPerRack}${o.convection ? ', convection' : ''})`}
+          />
           <fieldset className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
             <legend className="mb-1 text-sm font-bold">Trays per bake rule</legend>
             {rules.data.map((r) => (

@@ -3,6 +3,7 @@ import type { BakeRunSettingsInput, OvenDto, WeekBakeRunDto } from '@shared/sche
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
+import { OvenChecks } from './oven-checks';
 import { isApiError } from '@/lib/problem';
 
 interface Props {
@@ -90,23 +91,7 @@ export function BakeRunSettingsForm({ dto, allOvens, saving, error, onSave, onRe
         <TextField label="Start" type="datetime-local" value={start} onChange={(e) => set('start', e.target.value)} error={fieldErrors.start?.[0]} required />
         <TextField label="Cooks" type="number" min={1} max={50} value={cooks} onChange={(e) => set('cooks', e.target.value)} error={fieldErrors.cooks?.[0]} required />
       </div>
-      <fieldset className="flex flex-col gap-2">
-        <legend className="text-sm font-bold">Ovens</legend>
-        <div className="flex flex-wrap gap-4">
-          {allOvens.map((o) => (
-            <label key={o.id} className="flex min-h-11 items-center gap-2">
-              <input
-                type="checkbox"
-                className="h-5 w-5"
-                checked={ovenIds.includes(o.id)}
-                onChange={(e) => set('ovenIds', (ids) => (e.target.checked ? [...ids, o.id] : ids.filter((i) => i !== o.id)))}
-              />
-              {o.name}
-            </label>
-          ))}
-        </div>
-        {fieldErrors.ovenIds && <p className="text-sm font-bold text-signal">⚠ {fieldErrors.ovenIds[0]}</p>}
-      </fieldset>
+      <OvenChecks legend="Ovens" ovens={allOvens} chosen={ovenIds} onChange={(ids) => set('ovenIds', ids)} error={fieldErrors.ovenIds?.[0]} />
       {dto.trays.length > 0 && (
         <fieldset className="grid gap-3 sm:grid-cols-3">
           <legend className="mb-1 text-sm font-bold">Hands-on minutes per tray (mixing, lining)</legend>

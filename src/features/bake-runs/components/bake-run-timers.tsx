@@ -5,6 +5,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { describeEvent } from './bake-run-sheet';
+import { OvenChecks } from './oven-checks';
 import { localToday } from '@/lib/dates';
 import { clock, localMinutes, nowLocalMinutes, type TempUnit } from './temperature';
 
@@ -49,6 +50,29 @@ export interface MoveStart {
 
 const hhmm = (d: Date) => `${String(d.getHours()).padStart(2, '0')}:${String(d.getMinutes()).padStart(2, '0')}`;
 
+/**
+ * Why a change of the day's run was not made: someone changed the run meanwhile (409: load their version, then redo
+ * it), or another failure. A refused field (400) is said beside the field instead.
+ */
+function ChangeRefused({ error, redo, notDone, onReload }: { error: unknown; redo: string; notDone: string; onReload: () => void }) {
+  if (isApiError(error, 409)) {
+    markShown(error);
+    return (
+      <Notice tone="warn" title="Someone changed this run meanwhile">
+        <p>Load their version, then {redo} again if it is still needed.</p>
+        <Button type="button" variant="secondary" onClick={onReload}>
+          Load their version
+        </Button>
+      </Notice>
+    );
+  }
+  return error && !isApiError(error, 400) ? (
+    <Notice tone="block" title={notDone}>
+      {errorMessage(error)}
+    </Notice>
+  ) : null;
+}
+
 /** "Started at another time?": a time on the run's day; the timers, timeline and run sheet follow the new start. */
 function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
   const [time, setTime] = useState(() => hhmm(new Date()));
@@ -57,9 +81,7 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
   const typed = useRef(false);
   const [movedTo, setMovedTo] = useState<string | null>(null);
   const planned = clock(run.start);
-  const stale = isApiError(move.error, 409);
   const fieldError = isApiError(move.error, 400) ? move.error.fieldErrors.start?.[0] ?? errorMessage(move.error) : undefined;
-  if (stale) markShown(move.error);
   // The answer is the new plan: the move is done once its start is the time asked for.
   const done = movedTo !== null && movedTo === planned && !move.saving && !move.error;
   return (
@@ -99,19 +121,7 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
       <p role="status" className="mt-2 text-base">
         {done ? `The plan now starts at ${planned}.` : ''}
       </p>
-      {stale && (
-        <Notice tone="warn" title="Someone changed this run meanwhile">
-          <p>Load their version, then move the start again if it is still needed.</p>
-          <Button type="button" variant="secondary" onClick={move.onReload}>
-            Load their version
-          </Button>
-        </Notice>
-      )}
-      {move.error && !stale && !isApiError(move.error, 400) ? (
-        <Notice tone="block" title="Start not moved">
-          {errorMessage(move.error)}
-        </Notice>
-      ) : null}
+      <ChangeRefused error={move.error} redo="move the start" notDone="Start not moved" onReload={move.onReload} />
     </details>
   );
 }
@@ -154,9 +164,7 @@ function KitchenForm({ kitchen }: { kitchen: KitchenChange }) {
     const ownAnswer = sent && !kitchen.error && kitchenKey(cooks, ovenIds) === kitchenKey(kitchen.cooks, kitchen.ovenIds);
     if (untouched || ownAnswer) adopt();
   }
-  const stale = isApiError(kitchen.error, 409);
   const fieldErrors = isApiError(kitchen.error, 400) ? kitchen.error.fieldErrors : {};
-  if (stale) markShown(kitchen.error);
   const done = sent && !kitchen.saving && !kitchen.error;
   const names = kitchen.allOvens.filter((o) => kitchen.ovenIds.includes(o.id)).map((o) => o.name);
   return (
@@ -171,27 +179,7 @@ function KitchenForm({ kitchen }: { kitchen: KitchenChange }) {
           kitchen.onChange(Number(cooks), ovenIds, base.version);
         }}
       >
-        <fieldset className="flex flex-col gap-1">
-          <legend className="text-sm font-bold">Ovens that work today</legend>
-          <div className="flex flex-wrap gap-x-5">
-            {kitchen.allOvens.map((o) => (
-              <label key={o.id} className="flex min-h-11 items-center gap-2 text-base">
-                <input
-                  type="checkbox"
-                  className="h-5 w-5"
-                  checked={ovenIds.includes(o.id)}
-                  onChange={(e) => setOvenIds((ids) => (e.target.checked ? [...ids, o.id] : ids.filter((i) => i !== o.id)))}
-                />
-                {o.name}
-              </label>
-            ))}
-          </div>
-          {fieldErrors.ovenIds && (
-            <p role="alert" className="text-sm font-bold text-signal">
-              ⚠ {fieldErrors.ovenIds[0]}
-            </p>
-          )}
-        </fieldset>
+        <OvenChecks legend="Ovens that work today" ovens={kitchen.allOvens} chosen={ovenIds} onChange={setOvenIds} error={fieldErrors.ovenIds?.[0]} className="flex flex-col gap-1 text-base" />
         <TextField label="Cooks here today" type="number" inputMode="numeric" min={1} max={50} required value={cooks} onChange={(e) => setCooks(e.target.value)} error={fieldErrors.cooks?.[0]} className="w-44" />
         <p className="text-sm text-ink-soft">The run is planned again from its start: do this before the first tray goes in.</p>
         <div>
@@ -203,28 +191,17 @@ function KitchenForm({ kitchen }: { kitchen: KitchenChange }) {
       <p role="status" className="mt-2 text-base">
         {done ? `Planned again with ${names.join(' and ')} and ${kitchen.cooks === 1 ? 'one cook' : `${kitchen.cooks} cooks`}.` : ''}
       </p>
-      {stale && (
-        <Notice tone="warn" title="Someone changed this run meanwhile">
-          <p>Load their version, then change the kitchen again if it is still needed.</p>
-          <Button
-            type="button"
-            variant="secondary"
-            onClick={() => {
-              // What is on screen now; the reload's newer version then replaces it (nothing is typed over it).
-              setSent(false);
-              adopt();
-              kitchen.onReload();
-            }}
-          >
-            Load their version
-          </Button>
-        </Notice>
-      )}
-      {kitchen.error && !stale && !isApiError(kitchen.error, 400) ? (
-        <Notice tone="block" title="Not planned again">
-          {errorMessage(kitchen.error)}
-        </Notice>
-      ) : null}
+      <ChangeRefused
+        error={kitchen.error}
+        redo="change the kitchen"
+        notDone="Not planned again"
+        onReload={() => {
+          // What is on screen now; the reload's newer version then replaces it (nothing is typed over it).
+          setSent(false);
+          adopt();
+          kitchen.onReload();
+        }}
+      />
     </details>
   );
 }
