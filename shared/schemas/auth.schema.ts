@@ -75,6 +75,21 @@ export interface MeDto {
   tempUnit: (typeof TEMP_UNITS)[number];
 }
 
+/** One of the workspaces a person belongs to (GET /api/auth/workspaces): someone may work for two coaches. */
+export interface MyWorkspaceDto {
+  workspaceId: number;
+  name: string;
+  role: Role;
+  isDemo: boolean;
+  /** The workspace this session works in. */
+  current: boolean;
+}
+
+/** PUT /api/auth/workspace: work in another of one's workspaces. */
+export const chooseWorkspaceSchema = z.object({
+  workspaceId: z.number({ message: 'Choose a workspace' }).int().positive().max(PG_INT_MAX, TOO_LARGE),
+});
+
 /** Someone with access to the workspace (the Team page; the prep-day papers choose assistants from these). */
 export interface MemberDto {
   /** The membership's id (DELETE /api/members/:id removes this access). */

@@ -135,3 +135,47 @@ describe('a second coach, and changing roles', () => {
     await other.agent.patch(`/api/members/${id}`).send({ role: 'assistant' }).expect(404);
   });
 });
+
+describe('someone who works for two coaches', () => {
+  it('lands in the workspace that invited them, lists both, switches between them, and sees only the chosen one', async () => {
+    const first = await coachWorkspace(app);
+    const second = await coachWorkspace(app);
+    const firstClient = await makeClient(first);
+    const secondClient = await makeClient(second);
+    const helper = await member(app, first, 'assistant');
+    await helper.agent.get('/api/clients').expect(200);
+
+    // The second coach invites the same e-mail; the existing account joins with its own password.
+    const inv = await second.agent.post('/api/invitations').send({ email: helper.email, role: 'assistant' }).expect(201);
+    const token = String(inv.body.link).split('/invite/')[1];
+    const joined = await helper.agent.post(`/api/invitations/${token}/accept`).set('x-trayline-csrf', '1').send({ name: 'ignored', password: PASSWORD }).expect(200);
+    expect(joined.body.workspaceId).toBe(second.workspaceId);
+    const ids = async () => ((await helper.agent.get('/api/clients').expect(200)).body as { id: number }[]).map((c) => c.id);
+    expect(await ids()).toEqual([secondClient.id]);
+
+    const list = (await helper.agent.get('/api/auth/workspaces').expect(200)).body as { workspaceId: number; role: string; current: boolean }[];
+    expect(list.map((w) => [w.workspaceId, w.role, w.current]).sort()).toEqual(
+      [
+        [first.workspaceId, 'assistant', false],
+        [second.workspaceId, 'assistant', true],
+      ].sort(),
+    );
+
+    const back = await helper.agent.put('/api/auth/workspace').send({ workspaceId: first.workspaceId }).expect(200);
+    expect(back.body).toMatchObject({ workspaceId: first.workspaceId, role: 'assistant' });
+    // The choice lives in the session (PostgreSQL): every later request works in the first workspace.
+    expect(await ids()).toEqual([firstClient.id]);
+    expect((await helper.agent.get('/api/auth/me').expect(200)).body.workspaceId).toBe(first.workspaceId);
+
+    // A workspace they do not belong to: 400 naming the field, and nothing changes.
+    const stranger = await coachWorkspace(app);
+    const refused = await helper.agent.put('/api/auth/workspace').send({ workspaceId: stranger.workspaceId }).expect(400);
+    expect(refused.body.errors).toEqual({ workspaceId: ['You are not a member of that workspace'] });
+    expect(await ids()).toEqual([firstClient.id]);
+
+    // Removed from the chosen workspace: the next request works in the one left.
+    const id = ((await first.agent.get('/api/members').expect(200)).body as { id: number; userId: number }[]).find((m) => m.userId === helper.userId)!.id;
+    await first.agent.delete(`/api/members/${id}`).expect(204);
+    expect(await ids()).toEqual([secondClient.id]);
+  });
+});

@@ -73,6 +73,9 @@ export const MATRIX: Record<string, MatrixRow> = {
     crossWorkspace: true,
   }),
   // The team (who has access; ending someone's access)
+  // Someone in several workspaces chooses one (any signed-in person; their own memberships only)
+  'GET /api/auth/workspaces': R('signed-in'),
+  'PUT /api/auth/workspace': R('signed-in', { body: () => ({ workspaceId: 1 }) }),
   'GET /api/members': R(['coach']),
   'PATCH /api/members/:id': R(['coach'], {
     path: (ctx) => `/api/members/${ctx.ids.member}`,

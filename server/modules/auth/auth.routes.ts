@@ -5,6 +5,7 @@ import { z } from 'zod';
 import {
   acceptInvitationSchema,
   changePasswordSchema,
+  chooseWorkspaceSchema,
   requestPasswordResetSchema,
   resetPasswordSchema,
   createInvitationSchema,
@@ -106,6 +107,24 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
     }),
   );
 
+  // Someone who belongs to several workspaces (an assistant working for two coaches) chooses the one to work in.
+  r.get(
+    '/auth/workspaces',
+    allow('signed-in'),
+    validated({}, (_i, req) => auth.listMyWorkspaces(emOf(req), actorOf(req))),
+  );
+  r.put(
+    '/auth/workspace',
+    allow('signed-in'),
+    validated({ body: chooseWorkspaceSchema }, async ({ body }, req) => {
+      const actor = await auth.actorIn(emOf(req), actorOf(req), body.workspaceId);
+      req.session.workspaceId = actor.workspaceId;
+      req.user = actor;
+      req.actor = actor;
+      return auth.me(emOf(req), actor);
+    }),
+  );
+
   r.post(
     '/auth/password',
     allow('signed-in'),
@@ -186,9 +205,11 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
     allow('public'),
     validated({ params: tokenParams, body: acceptInvitationSchema }, async ({ params, body }, req) => {
       const em = emOf(req);
-      const userId = await auth.acceptInvitation(em, params.token, body);
-      const actor = (await auth.loadActor(em, userId))!;
+      const { userId, workspaceId } = await auth.acceptInvitation(em, params.token, body);
+      // Someone who already works elsewhere lands in the workspace that invited them.
+      const actor = (await auth.loadActor(em, userId, workspaceId))!;
       await signIn(req, actor);
+      req.session.workspaceId = workspaceId;
       return auth.me(em, actor);
     }),
   );

@@ -7,6 +7,7 @@ import type {
   ChangePasswordInput,
   CreateInvitationInput,
   MeDto,
+  MyWorkspaceDto,
   RegisterInput,
   Role,
   UpdatePreferencesInput,
@@ -24,14 +25,15 @@ const INVITATION_DAYS = 14;
 const PASSWORD_RESET_MINUTES = 60;
 
 /**
- * The actor of a user: their (first) membership decides workspace and role. Every authenticated request needs
- * it, so it is one plain SQL join read straight into the Actor (no entities hydrated into the identity map); the
- * session store reads it in the same query as the session (session-store.ts).
+ * The actor of a user: the membership of the workspace the session chose (someone who works for two coaches picks
+ * one), else their first, decides workspace and role. Every authenticated request needs it, so it is one plain SQL
+ * join read straight into the Actor (no entities hydrated into the identity map); the session store reads it in the
+ * same query as the session (session-store.ts). A chosen workspace the person has left falls back to the first.
  */
-export const ACTOR_SQL = (userIdExpr: string) =>
+export const ACTOR_SQL = (userIdExpr: string, workspaceIdExpr = 'null::int') =>
   `select u.id as user_id, u.email, u.name, u.unit_system, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version
      from membership m join app_user u on u.id = m.user_id left join nutrition_stamp ns on ns.workspace_id = m.workspace_id
-    where m.user_id = ${userIdExpr} order by m.id asc limit 1`;
+    where m.user_id = ${userIdExpr} order by coalesce(m.workspace_id = ${workspaceIdExpr}, false) desc, m.id asc limit 1`;
 
 export interface ActorRow {
   user_id: number;
@@ -57,10 +59,36 @@ export function actorFromRow(m: ActorRow): Actor {
   };
 }
 
-export async function loadActor(em: EntityManager, userId: number): Promise<Actor | null> {
+export async function loadActor(em: EntityManager, userId: number, workspaceId?: number | null): Promise<Actor | null> {
   if (!Number.isSafeInteger(userId)) return null;
-  const rows = await em.getConnection().execute<ActorRow[]>(ACTOR_SQL('?'), [userId], 'all', em.getTransactionContext());
+  const chosen = workspaceId != null && Number.isSafeInteger(workspaceId) ? workspaceId : null;
+  const rows = await em.getConnection().execute<ActorRow[]>(ACTOR_SQL('?', '?::int'), [userId, chosen], 'all', em.getTransactionContext());
   return rows[0] ? actorFromRow(rows[0]) : null;
+}
+
+/** Every workspace the person belongs to, by name, with their role there and which one this session works in. */
+export async function listMyWorkspaces(em: EntityManager, actor: Actor): Promise<MyWorkspaceDto[]> {
+  const rows = await em.getConnection().execute<{ workspace_id: number; name: string; role: string; is_demo: boolean }[]>(
+    `select m.workspace_id, w.name, m.role, w.is_demo from membership m join workspace w on w.id = m.workspace_id
+      where m.user_id = ? order by w.name asc, m.workspace_id asc`,
+    [actor.userId],
+    'all',
+    em.getTransactionContext(),
+  );
+  return rows.map((r) => ({
+    workspaceId: Number(r.workspace_id),
+    name: r.name,
+    role: r.role as Role,
+    isDemo: r.is_demo,
+    current: Number(r.workspace_id) === actor.workspaceId,
+  }));
+}
+
+/** The actor in another of the person's workspaces; a workspace they do not belong to is a 400 naming the field. */
+export async function actorIn(em: EntityManager, actor: Actor, workspaceId: number): Promise<Actor> {
+  const next = await loadActor(em, actor.userId, workspaceId);
+  if (!next || next.workspaceId !== workspaceId) throw ValidationError.field('workspaceId', 'You are not a member of that workspace');
+  return next;
 }
 
 /** The signed-in person and their workspace: one prepared statement (every page load of the app asks for it). */
@@ -184,7 +212,8 @@ export async function peekInvitation(em: EntityManager, token: string) {
   return { email: inv.email, role: inv.role as Role, workspaceName: inv.workspace.unwrap().name };
 }
 
-export async function acceptInvitation(em: EntityManager, token: string, input: AcceptInvitationInput): Promise<number> {
+/** Joins the invitation's workspace (a new account, or an existing one with its password): the user and that workspace. */
+export async function acceptInvitation(em: EntityManager, token: string, input: AcceptInvitationInput): Promise<{ userId: number; workspaceId: number }> {
   return em.transactional(async (tx) => {
     const inv = await openInvitation(tx, token);
     let user: IUser | null = await tx.findOne(User, { email: inv.email });
@@ -201,7 +230,7 @@ export async function acceptInvitation(em: EntityManager, token: string, input: 
     tx.create(Membership, { user, workspace: inv.workspace, role: inv.role, clientId: inv.clientId ?? null });
     inv.acceptedAt = new Date();
     await tx.flush();
-    return user.id;
+    return { userId: user.id, workspaceId: inv.workspace.id };
   });
 }
 

@@ -7,6 +7,13 @@ import type { Actor } from '../../http/authz.js';
 import { checkCredentials, loadActor } from './auth.service.js';
 import { preloadedActor } from './session-store.js';
 
+declare module 'express-session' {
+  interface SessionData {
+    /** The workspace this session works in, for someone who belongs to several (else their first). */
+    workspaceId?: number;
+  }
+}
+
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
@@ -43,7 +50,7 @@ export function configurePassport() {
     const userId = Number(id);
     const preloaded = preloadedActor(req, userId);
     if (preloaded) return done(null, preloaded);
-    loadActor(req.em!, userId)
+    loadActor(req.em!, userId, req.session?.workspaceId)
       .then((actor) => done(null, actor ?? false))
       .catch(done);
   });

@@ -22,7 +22,10 @@ interface SessionPreload {
  */
 const SESSION_GET_SQL = `select s.sess, extract(epoch from s.expire)::float8 as expire_s, a.*
    from session s
-   left join lateral (${ACTOR_SQL(`case when (s.sess->'passport'->>'user') ~ '^[0-9]{1,15}$' then (s.sess->'passport'->>'user')::bigint end`)}) a on true
+   left join lateral (${ACTOR_SQL(
+     `case when (s.sess->'passport'->>'user') ~ '^[0-9]{1,15}$' then (s.sess->'passport'->>'user')::bigint end`,
+     `case when (s.sess->>'workspaceId') ~ '^[0-9]{1,9}$' then (s.sess->>'workspaceId')::int end`,
+   )}) a on true
   where s.sid = $1 and s.expire >= now()`;
 
 const PRELOAD = Symbol('trayline.sessionPreload');

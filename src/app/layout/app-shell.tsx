@@ -1,4 +1,5 @@
 import { Suspense, useState } from 'react';
+import { WorkspaceSwitch } from '@/features/auth/components/workspace-switch';
 import { NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { useLogout } from '@/features/auth/api/use-auth-mutations';
@@ -47,6 +48,9 @@ export function AppShell() {
       </header>
       {open && (
         <div id="phone-nav" className="no-print fixed inset-x-0 top-[57px] bottom-0 z-30 overflow-y-auto bg-paper p-4 md:hidden">
+          <div className="mb-3">
+            <WorkspaceSwitch current={me.workspaceName} />
+          </div>
           <nav aria-label="Main">{nav}</nav>
           <SignOut name={me.name} role={ROLE_WORDS[me.role]} onSignOut={signOut} />
         </div>
@@ -54,7 +58,7 @@ export function AppShell() {
       {/* Wide side rail */}
       <aside className="no-print sticky top-0 hidden h-screen flex-col gap-4 overflow-y-auto border-r border-line bg-paper-deep/60 px-3 py-4 md:flex">
         <Brand />
-        <p className="px-2 text-xs text-ink-faint">{me.workspaceName}</p>
+        <WorkspaceSwitch current={me.workspaceName} />
         <nav aria-label="Main" className="flex-1">
           {nav}
         </nav>

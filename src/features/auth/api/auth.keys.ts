@@ -3,5 +3,6 @@ export const authKeys = {
   me: () => [...authKeys.all, 'me'] as const,
   invitations: () => [...authKeys.all, 'invitations'] as const,
   members: () => [...authKeys.all, 'members'] as const,
+  workspaces: () => [...authKeys.all, 'workspaces'] as const,
   invitation: (token: string) => [...authKeys.all, 'invitation', token] as const,
 };

@@ -1,5 +1,5 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { InvitationDto, MeDto, MemberDto, Role } from '@shared/schemas/auth.schema';
+import type { InvitationDto, MeDto, MemberDto, MyWorkspaceDto, Role } from '@shared/schemas/auth.schema';
 import { api } from '@/lib/api-client';
 import { isApiError } from '@/lib/problem';
 import { authKeys } from './auth.keys';
@@ -21,6 +21,10 @@ export const meQuery = () =>
 
 export const invitationsQuery = () =>
   queryOptions({ queryKey: authKeys.invitations(), queryFn: () => api.get<InvitationDto[]>('/invitations') });
+
+/** The workspaces the signed-in person belongs to (someone may work for two coaches). */
+export const myWorkspacesQuery = () =>
+  queryOptions({ queryKey: authKeys.workspaces(), queryFn: () => api.get<MyWorkspaceDto[]>('/auth/workspaces'), staleTime: 5 * 60_000 });
 
 /** Everyone with access to the workspace (coach only): the Team page, the prep-day papers' recipients. */
 export const membersQuery = () => queryOptions({ queryKey: authKeys.members(), queryFn: () => api.get<MemberDto[]>('/members') });
