@@ -167,6 +167,11 @@ describe('someone who works for two coaches', () => {
     expect(await ids()).toEqual([firstClient.id]);
     expect((await helper.agent.get('/api/auth/me').expect(200)).body.workspaceId).toBe(first.workspaceId);
 
+    // A new sign-in (another device) works where they chose last.
+    const phone = agentFor(app);
+    const signedIn = await phone.post('/api/auth/login').set('x-trayline-csrf', '1').send({ email: helper.email, password: PASSWORD }).expect(200);
+    expect(signedIn.body.workspaceId).toBe(first.workspaceId);
+
     // A workspace they do not belong to: 400 naming the field, and nothing changes.
     const stranger = await coachWorkspace(app);
     const refused = await helper.agent.put('/api/auth/workspace').send({ workspaceId: stranger.workspaceId }).expect(400);
@@ -177,5 +182,7 @@ describe('someone who works for two coaches', () => {
     const id = ((await first.agent.get('/api/members').expect(200)).body as { id: number; userId: number }[]).find((m) => m.userId === helper.userId)!.id;
     await first.agent.delete(`/api/members/${id}`).expect(204);
     expect(await ids()).toEqual([secondClient.id]);
+    const later = agentFor(app);
+    expect((await later.post('/api/auth/login').set('x-trayline-csrf', '1').send({ email: helper.email, password: PASSWORD }).expect(200)).body.workspaceId).toBe(second.workspaceId);
   });
 });

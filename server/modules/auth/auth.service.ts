@@ -26,14 +26,16 @@ const PASSWORD_RESET_MINUTES = 60;
 
 /**
  * The actor of a user: the membership of the workspace the session chose (someone who works for two coaches picks
- * one), else their first, decides workspace and role. Every authenticated request needs it, so it is one plain SQL
+ * one), else of the one they chose last (a new sign-in), else their first, decides workspace and role. Every authenticated request needs it, so it is one plain SQL
  * join read straight into the Actor (no entities hydrated into the identity map); the session store reads it in the
  * same query as the session (session-store.ts). A chosen workspace the person has left falls back to the first.
  */
 export const ACTOR_SQL = (userIdExpr: string, workspaceIdExpr = 'null::int') =>
   `select u.id as user_id, u.email, u.name, u.unit_system, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version
      from membership m join app_user u on u.id = m.user_id left join nutrition_stamp ns on ns.workspace_id = m.workspace_id
-    where m.user_id = ${userIdExpr} order by coalesce(m.workspace_id = ${workspaceIdExpr}, false) desc, m.id asc limit 1`;
+    where m.user_id = ${userIdExpr}
+    order by coalesce(m.workspace_id = ${workspaceIdExpr}, false) desc, coalesce(m.workspace_id = u.last_workspace_id, false) desc, m.id asc
+    limit 1`;
 
 export interface ActorRow {
   user_id: number;
@@ -84,10 +86,14 @@ export async function listMyWorkspaces(em: EntityManager, actor: Actor): Promise
   }));
 }
 
-/** The actor in another of the person's workspaces; a workspace they do not belong to is a 400 naming the field. */
+/**
+ * The actor in another of the person's workspaces, remembered as their last choice (their next sign-in works there);
+ * a workspace they do not belong to is a 400 naming the field, and nothing is remembered.
+ */
 export async function actorIn(em: EntityManager, actor: Actor, workspaceId: number): Promise<Actor> {
   const next = await loadActor(em, actor.userId, workspaceId);
   if (!next || next.workspaceId !== workspaceId) throw ValidationError.field('workspaceId', 'You are not a member of that workspace');
+  await em.getConnection().execute('update app_user set last_workspace_id = ? where id = ?', [workspaceId, actor.userId], 'run', em.getTransactionContext());
   return next;
 }
 
@@ -228,6 +234,8 @@ export async function acceptInvitation(em: EntityManager, token: string, input: 
       user = tx.create(User, { email: inv.email, name: input.name, passwordHash: await hashPassword(input.password) });
     }
     tx.create(Membership, { user, workspace: inv.workspace, role: inv.role, clientId: inv.clientId ?? null });
+    // Their next sign-in works in the workspace they just joined (they choose another from the menu).
+    user.lastWorkspaceId = inv.workspace.id;
     inv.acceptedAt = new Date();
     await tx.flush();
     return { userId: user.id, workspaceId: inv.workspace.id };

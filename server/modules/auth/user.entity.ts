@@ -12,6 +12,8 @@ export const User = defineEntity({
     passwordHash: p.string().length(255).hidden(),
     unitSystem: p.string().length(10).default('us'),
     tempUnit: p.string().length(1).default('F'),
+    /** The workspace last chosen (someone in several): a new sign-in works there while they are still a member. */
+    lastWorkspaceId: p.integer().nullable(),
     version: p.integer().version(),
     createdAt: p.datetime().onCreate(() => new Date()),
   },
