@@ -26,9 +26,10 @@ const PASSWORD_RESET_MINUTES = 60;
 
 /**
  * The actor of a user: the membership of the workspace the session chose (someone who works for two coaches picks
- * one), else of the one they chose last (a new sign-in), else their first, decides workspace and role. Every authenticated request needs it, so it is one plain SQL
- * join read straight into the Actor (no entities hydrated into the identity map); the session store reads it in the
- * same query as the session (session-store.ts). A chosen workspace the person has left falls back to the first.
+ * one), else of the one they chose last (a new sign-in), else their first, decides workspace and role; a workspace
+ * they have left since falls through to the next. Every authenticated request needs it, so it is one plain SQL join
+ * read straight into the Actor (no entities hydrated into the identity map); the session store reads it in the same
+ * query as the session (session-store.ts).
  */
 export const ACTOR_SQL = (userIdExpr: string, workspaceIdExpr = 'null::int') =>
   `select u.id as user_id, u.email, u.name, u.unit_system, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version
