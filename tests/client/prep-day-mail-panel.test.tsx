@@ -2,8 +2,10 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import type { BoardDto } from '@shared/schemas/weeks.schema';
 import type { MemberDto } from '@shared/schemas/auth.schema';
-import { PrepDayMailPanel, addressesOf } from '@/features/week-mail/components/prep-day-mail-panel';
+import { PrepDayMailPanel, addressesOf } from '@/features/mail/components/prep-day-mail-panel';
 import { jsonResponse, renderInApp } from './render';
+import { useQuery } from '@tanstack/react-query';
+import { membersQuery } from '@/features/auth/api/auth.queries';
 
 // An invented week 4 with two prep days (only the fields the panel reads), and an invented team.
 const board = { week: { id: 4 }, prepDates: ['2026-01-04', '2026-01-07'] } as unknown as BoardDto;
@@ -29,12 +31,16 @@ const posts = (fetchMock: ReturnType<typeof vi.fn>) =>
   fetchMock.mock.calls
     .filter(([, init]) => (init as RequestInit | undefined)?.method === 'POST')
     .map(([url, init]) => ({ url, body: JSON.parse(String((init as RequestInit).body)) as Record<string, unknown> }));
+/** The panel as the week page gives it: the team read through the API. */
+function PanelOnPage({ board: b }: { board: BoardDto }) {
+  return <PrepDayMailPanel board={b} team={useQuery(membersQuery())} />;
+}
 const sendButton = () => screen.getByRole('button', { name: 'E-mail the shopping list and bake run' });
 
 describe('prep-day papers for the kitchen', () => {
   it('sends the chosen prep day to every assistant by default, one request id per press, and says who it went to', async () => {
     const fetchMock = fakeApi([jsonResponse(sentTo('Kit', 'Lee'), 202), jsonResponse(sentTo('Kit', 'Lee'), 202)]);
-    renderInApp(<PrepDayMailPanel board={board} />);
+    renderInApp(<PanelOnPage board={board} />);
     expect((await screen.findByRole('checkbox', { name: /Kit/ }) as HTMLInputElement).checked).toBe(true);
     expect(screen.queryByRole('checkbox', { name: /Olga|Ada/ })).toBeNull();
     fireEvent.change(screen.getByLabelText('For prep day'), { target: { value: '2026-01-07' } });
@@ -54,7 +60,7 @@ describe('prep-day papers for the kitchen', () => {
     const fetchMock = fakeApi([
       jsonResponse({ queued: 2, recipients: [{ name: 'Lee', email: 'lee@example.test', account: true }, { name: 'kitchen@example.test', email: 'kitchen@example.test', account: false }], repeated: false }, 202),
     ]);
-    renderInApp(<PrepDayMailPanel board={board} />);
+    renderInApp(<PanelOnPage board={board} />);
     fireEvent.click(await screen.findByRole('checkbox', { name: /Kit/ }));
     fireEvent.change(screen.getByLabelText('Other addresses (optional)'), { target: { value: 'kitchen@example.test, ' } });
     fireEvent.click(sendButton());
@@ -65,7 +71,7 @@ describe('prep-day papers for the kitchen', () => {
 
   it('puts a bad address\'s error under the field, naming it', async () => {
     fakeApi([jsonResponse({ type: 'about:blank', title: 'Invalid', status: 400, code: 'validation', detail: 'Invalid', errors: { 'alsoTo.1': ['Enter a valid e-mail address'] } }, 400)]);
-    renderInApp(<PrepDayMailPanel board={board} />);
+    renderInApp(<PanelOnPage board={board} />);
     await screen.findByRole('checkbox', { name: /Kit/ });
     fireEvent.change(screen.getByLabelText('Other addresses (optional)'), { target: { value: 'kitchen@example.test, kitchen' } });
     fireEvent.click(sendButton());
@@ -81,7 +87,7 @@ describe('prep-day papers for the kitchen', () => {
       ],
       jsonResponse({ type: 'about:blank', title: 'Unavailable', status: 503, detail: 'Down' }, 503),
     );
-    renderInApp(<PrepDayMailPanel board={board} />);
+    renderInApp(<PanelOnPage board={board} />);
     expect(await screen.findByText('The team could not be read: every kitchen assistant gets it.')).toBeTruthy();
     fireEvent.click(sendButton());
     expect(await screen.findByText(/^No kitchen assistant in this workspace yet/)).toBeTruthy();

@@ -2,7 +2,9 @@ import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { jsonResponse as json, renderInApp } from './render';
 import type { BoardDto } from '@shared/schemas/weeks.schema';
-import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
+import { SendPlansPanel } from '@/features/mail/components/send-plans-panel';
+import { useQuery } from '@tanstack/react-query';
+import { clientsQuery } from '@/features/clients/api/clients.queries';
 
 // Invented names and addresses for the check.
 const clients = [
@@ -18,6 +20,10 @@ const board = (over: Partial<BoardDto['week']> = {}) =>
       { clientId: 2, date: '2026-01-05', slot: 'breakfast', assemblyId: 1, prepDate: null, storage: 'fridge', allergenOverrides: [] },
     ],
   }) as unknown as BoardDto;
+/** The panel as the week page gives it: the clients read through the API. */
+function PanelOnPage({ board: b }: { board: BoardDto }) {
+  return <SendPlansPanel board={b} clients={useQuery(clientsQuery())} />;
+}
 function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Response) {
   const calls: { url: string; body: Record<string, unknown> | null }[] = [];
   vi.stubGlobal(
@@ -33,7 +39,7 @@ function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Respo
       return json({ type: 'about:blank', title: 'Not found', status: 404, code: 'not_found', detail: url }, 404);
     }),
   );
-  renderInApp(<SendPlansPanel board={b} />);
+  renderInApp(<PanelOnPage board={b} />);
   return calls;
 }
 

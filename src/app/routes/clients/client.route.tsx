@@ -5,7 +5,7 @@ import type { ClientDto } from '@shared/schemas/clients.schema';
 import { clientQuery } from '@/features/clients/api/clients.queries';
 import { useDeleteClient, useInviteClient, useUpdateClient } from '@/features/clients/api/use-client-mutations';
 import { ClientForm, clientToInput } from '@/features/clients/components/client-form';
-import { DeliveryLog } from '@/features/week-mail/components/delivery-log';
+import { DeliveryLog } from '@/features/mail/components/delivery-log';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Card, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';

@@ -9,7 +9,7 @@ import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
 import { localToday, momentLabel } from '@/lib/dates';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
-import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/week-mail/api/week-mail.queries';
+import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/mail/api/week-mail.queries';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { counted } from '@/lib/words';
 import { dayLabel } from '@/lib/dates';

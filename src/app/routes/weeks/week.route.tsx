@@ -12,8 +12,10 @@ import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/wee
 import { InventoryPanel, portionSummary } from '@/features/weeks/components/inventory-panel';
 import { PublishedVersions } from '@/features/weeks/components/published-versions';
 import { PrepDates } from '@/features/weeks/components/prep-dates';
-import { SendPlansPanel } from '@/features/week-mail/components/send-plans-panel';
-import { PrepDayMailPanel } from '@/features/week-mail/components/prep-day-mail-panel';
+import { SendPlansPanel } from '@/features/mail/components/send-plans-panel';
+import { clientsQuery } from '@/features/clients/api/clients.queries';
+import { membersQuery } from '@/features/auth/api/auth.queries';
+import { PrepDayMailPanel } from '@/features/mail/components/prep-day-mail-panel';
 import { Button } from '@/components/ui/button';
 import { DayOptions, SelectField } from '@/components/ui/field';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
@@ -35,6 +37,9 @@ export function Component() {
   const copyDay = useCopyDay(id);
   const publish = usePublishWeek(id);
   const update = useUpdateWeek(id);
+  // The sending panels' people: the clients to send plans to, the team to send prep-day papers to.
+  const clients = useQuery(clientsQuery());
+  const team = useQuery(membersQuery());
   const [conflict, setConflict] = useState<Pending | null>(null);
   const [allergen, setAllergen] = useState<{ edit: CellEdit; message: string } | null>(null);
   const [error, setError] = useState<string | null>(null);
@@ -189,12 +194,12 @@ export function Component() {
 
       <Card>
         <h2 className="mb-3 text-xl">Send plans</h2>
-        <SendPlansPanel board={board} />
+        <SendPlansPanel board={board} clients={clients} />
       </Card>
 
       <Card>
         <h2 className="mb-3 text-xl">Prep-day papers for the kitchen</h2>
-        <PrepDayMailPanel board={board} />
+        <PrepDayMailPanel board={board} team={team} />
       </Card>
 
       <Card>

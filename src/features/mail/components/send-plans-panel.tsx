@@ -1,11 +1,10 @@
 import { useId, useState } from 'react';
 import { Link } from 'react-router-dom';
-import { useQuery } from '@tanstack/react-query';
-import type { ClientDto } from '@shared/schemas/clients.schema';
+import { useQuery, type UseQueryResult } from '@tanstack/react-query';
+import type { ClientDto, ClientListItemDto } from '@shared/schemas/clients.schema';
 import type { BoardDto } from '@shared/schemas/weeks.schema';
 import { NOTE_MAX, SKIP_REASON_TEXT, type SendWeekResultDto } from '@shared/schemas/week-mail.schema';
-import { clientsQuery } from '@/features/clients/api/clients.queries';
-import { outboxBusy, outboxQuery } from '@/features/mail/api/mail.queries';
+import { outboxBusy, outboxQuery } from '../api/mail.queries';
 import { Button } from '@/components/ui/button';
 import { TextAreaField } from '@/components/ui/field';
 import { ErrorState, Notice, Progress, Skeleton } from '@/components/ui/states';
@@ -40,10 +39,9 @@ function BatchProgress({ result }: { result: SendWeekResultDto }) {
 
 /**
  * "Send plans": e-mail the week's PUBLISHED plan (PDF attached) to all clients on the board or to some, with a
- * personal note; then a live progress bar of the batch.
+ * personal note; then a live progress bar of the batch. `clients`: the workspace's clients (the page reads them).
  */
-export function SendPlansPanel({ board }: { board: BoardDto }) {
-  const clients = useQuery(clientsQuery());
+export function SendPlansPanel({ board, clients }: { board: BoardDto; clients: UseQueryResult<ClientListItemDto[]> }) {
   const send = useSendWeek(board.week.id);
   const [mode, setMode] = useState<'all' | 'some'>('all');
   const [chosen, setChosen] = useState<Set<number>>(new Set());

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { SendWeekInput, SendWeekResultDto } from '@shared/schemas/week-mail.schema';
 import { api } from '@/lib/api-client';
-import { mailKeys } from '@/features/mail/api/mail.keys';
+import { mailKeys } from './mail.keys';
 import { weekMailKeys } from './week-mail.keys';
 
 /** Queues the week's published plan to clients; the outbox and delivery logs then refresh. */

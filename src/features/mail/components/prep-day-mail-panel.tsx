@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { useQuery } from '@tanstack/react-query';
+import type { UseQueryResult } from '@tanstack/react-query';
+import type { MemberDto } from '@shared/schemas/auth.schema';
 import type { BoardDto } from '@shared/schemas/weeks.schema';
 import { PREP_ALSO_TO_MAX, PREP_NOTE_MAX, type PrepDayMailResultDto } from '@shared/schemas/prep-day-mail.schema';
 import { Button } from '@/components/ui/button';
@@ -8,7 +9,6 @@ import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { errorMessage, isApiError } from '@/lib/problem';
 import { counted } from '@/lib/words';
-import { membersQuery } from '@/features/auth/api/auth.queries';
 import { paths } from '@/config/paths';
 import { dayLabel } from '@/lib/dates';
 import { useSendPrepDay } from '../api/use-send-prep-day';
@@ -19,11 +19,11 @@ export const addressesOf = (text: string) => text.split(/[\s,;]+/).filter(Boolea
 /**
  * E-mails a prep day's shopping list and bake run (PDFs made when each mail leaves, in each reader's measures) to
  * the kitchen assistants chosen (all by default) and to other addresses (a kitchen's shared inbox). One request id
- * per press of Send: a retry after a lost answer queues nothing twice.
+ * per press of Send: a retry after a lost answer queues nothing twice. `team`: the workspace's people (the page reads
+ * them).
  */
-export function PrepDayMailPanel({ board }: { board: BoardDto }) {
+export function PrepDayMailPanel({ board, team }: { board: BoardDto; team: UseQueryResult<MemberDto[]> }) {
   const send = useSendPrepDay(board.week.id);
-  const team = useQuery(membersQuery());
   const assistants = (team.data ?? []).filter((m) => m.role === 'assistant');
   const [prepDate, setPrepDate] = useState(board.prepDates[0]);
   const [note, setNote] = useState('');

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { OutboxStatusBadge } from '@/features/mail/components/outbox-status';
+import { OutboxStatusBadge } from './outbox-status';
 import { EmptyState, ErrorState, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { deliveriesQuery } from '../api/week-mail.queries';
