@@ -30,7 +30,7 @@ describe('the bake-run settings form when someone else changes the run', () => {
     // The assistant moved the start on prep day; the page's query brought version 4.
     again(runAt('2026-01-04T08:40', 4));
     expect(field('Start').value).toBe('2026-01-04T08:40');
-    expect(screen.queryByText('Someone else changed these settings')).toBeNull();
+    expect(screen.queryByText('These settings were changed meanwhile')).toBeNull();
   });
 
   it('keeps edits in progress, says so, and saves them against the version they started from', () => {
@@ -39,11 +39,11 @@ describe('the bake-run settings form when someone else changes the run', () => {
     again(runAt('2026-01-04T08:40', 4));
     expect(field('Cooks').value).toBe('3');
     expect(field('Start').value).toBe('2026-01-04T08:00');
-    expect(screen.getByText('Someone else changed these settings')).toBeTruthy();
+    expect(screen.getByText('These settings were changed meanwhile')).toBeTruthy();
     fireEvent.click(screen.getByRole('button', { name: 'Save and plan' }));
     // Version 3: the server answers 409 instead of overwriting the moved start.
     expect(onSave).toHaveBeenCalledWith(expect.objectContaining({ cooks: 3, start: '2026-01-04T08:00', version: 3 }));
-    fireEvent.click(screen.getByRole('button', { name: 'Load their version' }));
+    fireEvent.click(screen.getByRole('button', { name: 'Load the saved settings' }));
     expect(onReload).toHaveBeenCalled();
     expect(field('Start').value).toBe('2026-01-04T08:40');
     expect(field('Cooks').value).toBe('2');
@@ -55,7 +55,7 @@ describe('the bake-run settings form when someone else changes the run', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Save and plan' }));
     expect(onSave).toHaveBeenCalledWith(expect.objectContaining({ cooks: 3, version: 3 }));
     again(runAt('2026-01-04T08:00', 4, 3));
-    expect(screen.queryByText('Someone else changed these settings')).toBeNull();
+    expect(screen.queryByText('These settings were changed meanwhile')).toBeNull();
     expect(field('Cooks').value).toBe('3');
     // The next save starts from version 4.
     fireEvent.click(screen.getByRole('button', { name: 'Save and plan' }));
@@ -70,6 +70,6 @@ describe('the bake-run settings form when someone else changes the run', () => {
     again(runAt('2026-01-04T08:00', 3), stale);
     again(runAt('2026-01-04T08:40', 4), stale);
     expect(field('Cooks').value).toBe('4');
-    expect(screen.getByText('Someone else changed these settings')).toBeTruthy();
+    expect(screen.getByText('These settings were changed meanwhile')).toBeTruthy();
   });
 });

@@ -61,7 +61,7 @@ export function BakeRunSettingsForm({ dto, allOvens, saving, error, onSave, onRe
     setFields(next.fields);
     setSubmitted(null);
   }
-  const loadTheirs = () => {
+  const loadSaved = () => {
     const next = { version: dto.settings.version, fields: fieldsOf(dto, allOvens) };
     setLoaded(next);
     setFields(next.fields);
@@ -110,10 +110,13 @@ export function BakeRunSettingsForm({ dto, allOvens, saving, error, onSave, onRe
         </fieldset>
       )}
       {stale && (
-        <Notice tone="warn" title="Someone else changed these settings">
-          <p className="mb-2 text-sm">Your changes are still here; loading their version replaces them.</p>
-          <Button type="button" variant="secondary" size="sm" onClick={loadTheirs}>
-            Load their version
+        <Notice tone="warn" title="These settings were changed meanwhile">
+          <p className="mb-2 text-sm">
+            The run was changed since you began here (on prep day its start, ovens or cooks are changed from Now and next). Your
+            changes are still here; loading the saved settings replaces them.
+          </p>
+          <Button type="button" variant="secondary" size="sm" onClick={loadSaved}>
+            Load the saved settings
           </Button>
         </Notice>
       )}
