@@ -1,11 +1,11 @@
 import { Suspense, useState } from 'react';
 import { WorkspaceSwitch } from '@/features/auth/components/workspace-switch';
-import { NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
+import { Link, NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { useLogout } from '@/features/auth/api/use-auth-mutations';
 import { PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
-import { NAV, NAV_GROUPS, type NavItem } from '../nav';
+import { NAV, NAV_GROUPS, navItemActive, type NavItem } from '../nav';
 import { ROLE_WORDS } from '@/lib/words';
 
 
@@ -79,6 +79,7 @@ export function AppShell() {
 }
 
 function NavGroups({ items }: { items: NavItem[] }) {
+  const { pathname } = useLocation();
   return (
     <div className="flex flex-col gap-4">
       {NAV_GROUPS.map((g) => {
@@ -88,21 +89,23 @@ function NavGroups({ items }: { items: NavItem[] }) {
           <div key={g.id}>
             <p className="mb-1 px-2 text-xs font-bold uppercase tracking-wider text-ink-faint">{g.label}</p>
             <ul className="flex flex-col gap-0.5">
-              {inGroup.map((item) => (
-                <li key={item.to}>
-                  <NavLink
-                    to={item.to}
-                    end={item.to === paths.home}
-                    className={({ isActive }) =>
-                      `flex min-h-11 items-center rounded-lg px-3 font-bold md:min-h-9 ${
-                        isActive ? 'bg-ink text-paper-card' : 'text-ink hover:bg-paper-deep'
-                      }`
-                    }
-                  >
-                    {item.label}
-                  </NavLink>
-                </li>
-              ))}
+              {inGroup.map((item) => {
+                // The page's item: a week's bake run, shopping list and labels belong to theirs, not to Week board.
+                const active = navItemActive(item, pathname);
+                return (
+                  <li key={item.to}>
+                    <Link
+                      to={item.to}
+                      aria-current={active ? 'page' : undefined}
+                      className={`flex min-h-11 items-center rounded-lg px-3 font-bold md:min-h-9 ${
+                        active ? 'bg-ink text-paper-card' : 'text-ink hover:bg-paper-deep'
+                      }`}
+                    >
+                      {item.label}
+                    </Link>
+                  </li>
+                );
+              })}
             </ul>
           </div>
         );
