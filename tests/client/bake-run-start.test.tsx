@@ -108,6 +108,8 @@ describe('the kitchen as it is on prep day', () => {
     fireEvent.change(screen.getByLabelText('Cooks here today'), { target: { value: '1' } });
     fireEvent.click(screen.getByRole('button', { name: 'Plan again' }));
     expect(k.onChange).toHaveBeenCalledWith(1, [1], 3);
+    // Sent, not yet answered: nothing claims it is planned again.
+    expect(screen.queryByText(/^Planned again/)).toBeNull();
     // The answer: the run now uses the left oven and one cook (version 4).
     rerender(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={-20} kitchen={{ ...k, ovenIds: [1], cooks: 1, version: 4 }} />);
     expect(screen.getByText('Planned again with Left and one cook.')).toBeTruthy();

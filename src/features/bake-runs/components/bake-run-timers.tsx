@@ -151,7 +151,8 @@ const kitchenKey = (cooks: number | string, ovenIds: readonly number[]) => `${co
 function KitchenForm({ kitchen }: { kitchen: KitchenChange }) {
   const [ovenIds, setOvenIds] = useState(kitchen.ovenIds);
   const [cooks, setCooks] = useState(String(kitchen.cooks));
-  const [sent, setSent] = useState(false);
+  /** What "Plan again" sent (cooks and ovens), until the person starts over. */
+  const [sent, setSent] = useState<string | null>(null);
   // What the checkboxes started from: a change saved elsewhere replaces them unless the person changed them.
   const [base, setBase] = useState({ key: kitchenKey(kitchen.cooks, kitchen.ovenIds), version: kitchen.version });
   const adopt = () => {
@@ -161,11 +162,12 @@ function KitchenForm({ kitchen }: { kitchen: KitchenChange }) {
   };
   if (base.version !== kitchen.version) {
     const untouched = kitchenKey(cooks, ovenIds) === base.key;
-    const ownAnswer = sent && !kitchen.error && kitchenKey(cooks, ovenIds) === kitchenKey(kitchen.cooks, kitchen.ovenIds);
+    const ownAnswer = sent !== null && !kitchen.error && kitchenKey(cooks, ovenIds) === kitchenKey(kitchen.cooks, kitchen.ovenIds);
     if (untouched || ownAnswer) adopt();
   }
   const fieldErrors = isApiError(kitchen.error, 400) ? kitchen.error.fieldErrors : {};
-  const done = sent && !kitchen.saving && !kitchen.error;
+  // Done once the run shown is planned with what was sent (not merely once the request left).
+  const done = sent !== null && sent === kitchenKey(kitchen.cooks, kitchen.ovenIds) && !kitchen.saving && !kitchen.error;
   const names = kitchen.allOvens.filter((o) => kitchen.ovenIds.includes(o.id)).map((o) => o.name);
   return (
     <details className="rounded-lg border border-line p-3">
@@ -175,7 +177,7 @@ function KitchenForm({ kitchen }: { kitchen: KitchenChange }) {
         aria-label="Today's kitchen"
         onSubmit={(e) => {
           e.preventDefault();
-          setSent(true);
+          setSent(kitchenKey(cooks, ovenIds));
           kitchen.onChange(Number(cooks), ovenIds, base.version);
         }}
       >
@@ -197,7 +199,7 @@ function KitchenForm({ kitchen }: { kitchen: KitchenChange }) {
         notDone="Not planned again"
         onReload={() => {
           // What is on screen now; the reload's newer version then replaces it (nothing is typed over it).
-          setSent(false);
+          setSent(null);
           adopt();
           kitchen.onReload();
         }}
