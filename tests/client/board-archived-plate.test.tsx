@@ -45,7 +45,10 @@ describe('the week board and an archived plate', () => {
     expect(within(palette).getByText('Egg cup plate')).toBeTruthy();
 
     // The Monday cell still shows it, and its picker names it as archived.
-    fireEvent.click(screen.getByRole('button', { name: /Mon.*: Old frittata plate/ }));
+    // The cell says the plate is archived, in its words and its name for a screen reader.
+    const monday = screen.getByRole('button', { name: /Mon.*: Old frittata plate \(archived\)$/ });
+    expect(monday.textContent).toContain('Old frittata plate (archived)');
+    fireEvent.click(monday);
     const picker = screen.getByLabelText('Plate') as HTMLSelectElement;
     expect([...picker.options].map((o) => o.text)).toEqual(['Empty', 'Old frittata plate (archived)', 'Egg cup plate']);
 

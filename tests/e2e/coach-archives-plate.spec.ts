@@ -15,9 +15,9 @@ test('the coach retires a plate the demo week plans: archived, off the board’s
   await expect(page.getByRole('status')).toContainText('so it was archived instead');
   await expect(page.getByRole('heading', { name: plate })).toHaveCount(0);
 
-  // The board: its cells still show the plate; the palette no longer offers it.
+  // The board: its cells still show the plate, marked archived; the palette no longer offers it.
   await page.goto(`/weeks/${weekId}`);
-  await expect(page.getByRole('button', { name: new RegExp(`: ${plate}`) }).first()).toBeVisible();
+  await expect(page.getByRole('button', { name: new RegExp(`: ${plate} \\(archived\\)`) }).first()).toBeVisible();
   await expect(page.getByRole('complementary', { name: 'Plates' }).getByText(plate)).toHaveCount(0);
 
   // Restored from the archived list, by keyboard.

@@ -162,9 +162,10 @@ const ClientRow = memo(function ClientRow({ client, days, slots, plates, cells, 
                 const id = cellId(client.id, date, slot);
                 const cell = cells[d * slots.length + k];
                 const plate = cell ? plates.get(cell.assemblyId) : undefined;
+                // A plate archived since it was planned stays on its cell, marked (no new cell can take it).
                 const flags = (day?.warnings ?? []).filter((w) => 'slot' in w && w.slot === slot);
                 return (
-                  <Cell key={slot} id={id} slot={slots.length > 1 ? slot : undefined} cell={cell} plateName={plate?.name} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} isOver={over === id} onSelect={onSelect} where={cellWhere(client.name, date, slot)} />
+                  <Cell key={slot} id={id} slot={slots.length > 1 ? slot : undefined} cell={cell} plateName={plate && (plate.archived ? `${plate.name} (archived)` : plate.name)} kcal={plate?.macros.kcal} flags={flags} selected={selected === id} isOver={over === id} onSelect={onSelect} where={cellWhere(client.name, date, slot)} />
                 );
               })}
               {day && (
