@@ -165,11 +165,21 @@ describe('plates (assemblies)', () => {
       .expect(400);
     expect(refused.body.errors['cells.0.assemblyId']).toEqual([`${plate.name} is archived: restore it on the Plates page to plan it again`]);
 
+    // Copies leave it behind: no new cell takes an archived plate (a copied day replaces the target day; a copied week
+    // starts without it).
+    const tuesday = await coach.agent
+      .post(`/api/weeks/${board.week.id}/copy-day`)
+      .send({ version: kept.body.week.version, fromDate: '2026-01-05', toDate: '2026-01-06' })
+      .expect(200);
+    expect(tuesday.body.cells.map((c: { date: string }) => c.date)).toEqual(['2026-01-05']);
+    const copiedWeek = await coach.agent.post(`/api/weeks/${board.week.id}/copy`).send({ startDate: '2026-01-12', prepDate: '2026-01-11' }).expect(201);
+    expect(copiedWeek.body.cells).toEqual([]);
+
     const restored = await coach.agent.put(`/api/assemblies/${plate.id}/archived`).send({ archived: false, version: archived.body.version }).expect(200);
     expect(restored.body.archived).toBe(false);
     await coach.agent
       .put(`/api/weeks/${board.week.id}/cells`)
-      .send({ version: kept.body.week.version, cells: [{ clientId: bo.id, date: '2026-01-06', slot: 'breakfast', assemblyId: plate.id }] })
+      .send({ version: tuesday.body.week.version, cells: [{ clientId: bo.id, date: '2026-01-06', slot: 'breakfast', assemblyId: plate.id }] })
       .expect(200);
   });
 });

@@ -342,7 +342,10 @@ export async function coverTrays(em: EntityManager, actor: Actor, id: number, ve
   return replaceTrays(em, actor, week, batches);
 }
 
-/** Copies one day's cells (all clients, or one) onto another day of the same week, replacing what was there. */
+/**
+ * Copies one day's cells (all clients, or one) onto another day of the same week, replacing what was there. A plate
+ * archived since stays behind (no new cell takes it), as in a copied week.
+ */
 export async function copyDay(em: EntityManager, actor: Actor, id: number, v: CopyDay): Promise<BoardAnswer> {
   const week = await openForEdit(em, actor, id, v.version);
   const days = weekDays(week);
@@ -351,7 +354,7 @@ export async function copyDay(em: EntityManager, actor: Actor, id: number, v: Co
   if (v.fromDate === v.toDate) throw ValidationError.field('toDate', 'Pick another day to copy to');
   const filter = v.clientId ? { client: v.clientId } : {};
   return commitWeekEdit(em, actor, week, async (tx, w) => {
-    const from = await tx.find(WeekCell, { week: w.id, date: v.fromDate, ...filter });
+    const from = await tx.find(WeekCell, { week: w.id, date: v.fromDate, assembly: { archived: false }, ...filter });
     await tx.nativeDelete(WeekCell, { week: w.id, date: v.toDate, ...filter });
     for (const c of from) {
       tx.create(WeekCell, {
@@ -368,7 +371,10 @@ export async function copyDay(em: EntityManager, actor: Actor, id: number, v: Co
   });
 }
 
-/** A new week with the same board shifted to a new start date (archived clients left out), and the same tray counts. */
+/**
+ * A new week with the same board shifted to a new start date, and the same tray counts. Archived clients and archived
+ * plates stay behind: a copied week plans the people still coached, with the plates still served.
+ */
 export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: CopyWeek): Promise<BoardAnswer> {
   const source = await findWeek(em, actor, id);
   checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
@@ -378,8 +384,7 @@ export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: C
     await tx.flush();
     const mapPrep = (d: IsoDate | null | undefined): IsoDate | null =>
       d && d === source.secondPrepDate ? (v.secondPrepDate ?? null) : null;
-    // Archived clients stay behind: a copied week plans the people still coached.
-    for (const c of await tx.find(WeekCell, { week: source.id, client: { archivedAt: null } })) {
+    for (const c of await tx.find(WeekCell, { week: source.id, client: { archivedAt: null }, assembly: { archived: false } })) {
       tx.create(WeekCell, {
         week: w.id,
         client: c.client.id,

@@ -203,7 +203,8 @@ export function Component() {
       </Card>
 
       <Card>
-        <h2 className="mb-3 text-xl">Copy a day</h2>
+        <h2 className="mb-1 text-xl">Copy a day</h2>
+        <p className="mb-3 text-sm text-ink-soft">Every client's plates of one day onto another; archived plates stay behind.</p>
         <form
           className="grid items-end gap-3 sm:grid-cols-[1fr_1fr_auto]"
           onSubmit={(e) => {

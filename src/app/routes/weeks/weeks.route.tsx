@@ -77,7 +77,7 @@ export function Component() {
                 className="sm:col-span-5 sm:max-w-xl"
                 value={source ? fromId : ''}
                 onChange={(e) => setFromId(e.target.value)}
-                hint={source ? 'Its plates move to the same days of the new board, with its tray counts. Archived clients stay behind.' : undefined}
+                hint={source ? 'Its plates move to the same days of the new board, with its tray counts. Archived clients and archived plates stay behind.' : undefined}
               >
                 <option value="">An empty board</option>
                 {list.data?.map((w) => (
