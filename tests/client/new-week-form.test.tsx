@@ -53,7 +53,7 @@ describe('new week form', () => {
     expect(field('Second prep day').value).toBe('');
     fireEvent.change(from, { target: { value: '4' } });
     expect(field('Second prep day').value).toBe('2026-12-09');
-    expect(screen.getByText(/Archived clients stay behind/)).toBeTruthy();
+    expect(screen.getByText(/Archived clients and archived plates stay behind/)).toBeTruthy();
     fireEvent.click(screen.getByRole('button', { name: 'Copy' }));
     await waitFor(() => expect(posts).toHaveLength(1));
     expect(posts[0]).toEqual({
