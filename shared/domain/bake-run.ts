@@ -56,7 +56,8 @@ export const BAKE_RUN_CAUTIONS: readonly string[] = Object.freeze([
   'Follow your local food code and licensed professionals; they take precedence over this plan.',
 ]);
 
-const KIND_ORDER: Record<BakeEventKind, number> = {
+/** Order of events at the same minute (a tray out before the oven changes, hands-on before the tray goes in). */
+export const KIND_ORDER: Record<BakeEventKind, number> = {
   'first-check': 0,
   'tray-out': 1,
   'cooling-start': 2,

@@ -156,6 +156,13 @@ export const bakeRunKitchenSchema = z.object({
     .array(z.number().int().positive().max(PG_INT_MAX, TOO_LARGE))
     .min(1, { message: 'At least one oven has to work to bake.' })
     .max(20),
+  /**
+   * The trays already out of the oven (their ids in the run, e.g. "12-1"): they stay as planned and the rest is
+   * planned from `from`. Empty: the whole day is planned from its start again. Absent: what was said before stays.
+   */
+  out: z.array(z.string().regex(/^\d{1,9}-\d{1,3}$/, { message: 'Give the trays by their id in the run.' })).max(200).optional(),
+  /** When the rest starts ("YYYY-MM-DDTHH:mm" on the prep day); needed with trays out. */
+  from: z.string().refine(isLocalDateTime, { message: 'Give the time to plan the rest from, "YYYY-MM-DDTHH:mm".' }).optional(),
   version: version.optional(),
 });
 export type BakeRunKitchenValues = z.output<typeof bakeRunKitchenSchema>;
@@ -224,6 +231,8 @@ export interface BakeRunSettingsDto {
   cooks: number;
   handsOnMinutes: Record<string, number>;
   ovenIds: number[];
+  /** Planned again part-way through the day: when the rest starts and the trays already out; null otherwise. */
+  done: { from: string; out: string[] } | null;
   /** null until the coach saves settings (the defaults are shown). */
   version: number | null;
 }

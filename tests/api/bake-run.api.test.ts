@@ -247,7 +247,7 @@ describe('the bake run of a prep week', () => {
 
     const oven = await makeOven(coach, { name: 'Left', racks: 2, traysPerRack: 1 });
     const got = await assistant.agent.get(`/api/weeks/${week.id}/bake-run`).expect(200);
-    expect(got.body.settings).toEqual({ prepDate: '2026-01-04', start: '2026-01-04T08:00', cooks: 1, handsOnMinutes: {}, ovenIds: [], version: null });
+    expect(got.body.settings).toEqual({ prepDate: '2026-01-04', start: '2026-01-04T08:00', cooks: 1, handsOnMinutes: {}, ovenIds: [], done: null, version: null });
     expect(got.body.trays).toEqual([expect.objectContaining({ trayId: tray.id, trayCount: 2, tempF: 350, minMinutes: 25, handsOnMinutes: 10 })]);
     // Worked by hand: one cook preps 10 + 10 min (ready 08:10 and 08:20); preheat ceil(280 / 25) = 12 min.
     // Tray 1 in 08:12. Tray 2 in 08:20: both in, each progresses 1 / (1 + 0.10) per minute (crowding +10 %,
@@ -308,7 +308,7 @@ describe('moving a run to the time the kitchen really started', () => {
 
     // No settings saved yet: the move creates them with the defaults (one cook, every oven, the rules' hands-on).
     const moved = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ prepDate: '2026-01-04', start: '2026-01-04T08:40' }).expect(200);
-    expect(moved.body.settings).toEqual({ prepDate: '2026-01-04', start: '2026-01-04T08:40', cooks: 1, handsOnMinutes: {}, ovenIds: [], version: 1 });
+    expect(moved.body.settings).toEqual({ prepDate: '2026-01-04', start: '2026-01-04T08:40', cooks: 1, handsOnMinutes: {}, ovenIds: [], done: null, version: 1 });
     // The worked example of the test above (start 08:00: in 08:12 and 08:20, out 08:39 and 08:47), 40 minutes later.
     expect(moved.body.run.trays.map((t: { inAt: string; outAt: string }) => [t.inAt, t.outAt])).toEqual([
       ['2026-01-04T08:52', '2026-01-04T09:19'],
@@ -378,5 +378,132 @@ describe('the kitchen as it is on prep day', () => {
     expect(stale.body).toMatchObject({ code: 'stale_version', currentVersion: 3, current: { cooks: 2, ovenIds: [] } });
     const [row] = await sql<{ cooks: number; oven_ids: number[]; version: number }>('select cooks, oven_ids, version from bake_run_setting where week_id = $1', [week.id]);
     expect(row).toEqual({ cooks: 2, oven_ids: [], version: 3 });
+  });
+});
+
+type PlannedTray = { id: string; oven: string; inAt: string; outAt: string };
+const timesOf = (trays: PlannedTray[]) => trays.map((t) => [t.id, t.oven, t.inAt, t.outAt]);
+
+describe('planning the rest of the day again part-way through', () => {
+  it('keeps the trays already out as planned, with their cooling deadlines, and plans the rest from the time given', async () => {
+    const { coach, assistant, tray, week } = await twoTrayWeek();
+    const left = await makeOven(coach, { name: 'Left', racks: 1, traysPerRack: 1 });
+    const right = await makeOven(coach, { name: 'Right', racks: 1, traysPerRack: 1 });
+    const planned = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ start: '2026-01-04T08:00', cooks: 1, ovenIds: [] }).expect(200);
+    // Worked by hand (rules as in the first test: 350 °F, 25 min, hands-on 10 min, preheat ceil(280 / 25) = 12 min),
+    // one tray per oven: the cook preps the first tray 08:00–08:10 and the second 08:10–08:20; the first goes in at
+    // 08:12 (its oven ready), out 08:37; the second in the other oven at 08:20, out 08:45.
+    const before: PlannedTray[] = planned.body.run.trays;
+    expect(before.map((t) => [t.inAt, t.outAt])).toEqual([
+      ['2026-01-04T08:12', '2026-01-04T08:37'],
+      ['2026-01-04T08:20', '2026-01-04T08:45'],
+    ]);
+    const [first, second] = before;
+    expect(first.id).not.toBe(second.id);
+
+    // 08:40: the second tray's oven fails with the tray in it (spoiled); the first tray came out at 08:37.
+    const working = second.oven === 'Left' ? right : left;
+    const again = await assistant.agent
+      .put(`/api/weeks/${week.id}/bake-run/kitchen`)
+      .send({ cooks: 1, ovenIds: [working.id], out: [first.id], from: '2026-01-04T08:40', version: 1 })
+      .expect(200);
+    expect(again.body.settings).toMatchObject({ start: '2026-01-04T08:00', done: { from: '2026-01-04T08:40', out: [first.id] }, version: 2 });
+    // The first tray as it was; the second from 08:40 in the working oven: prepped again 08:40–08:50, the oven
+    // preheated from cold (12 min) → in at 08:52, out 09:17, 77 minutes after the day's start.
+    const run = again.body.run;
+    expect(run.start).toBe('2026-01-04T08:00');
+    expect(timesOf(run.trays)).toEqual([
+      [first.id, first.oven, '2026-01-04T08:12', '2026-01-04T08:37'],
+      [second.id, working.name, '2026-01-04T08:52', '2026-01-04T09:17'],
+    ]);
+    expect(run.trays.map((t: { inMinute: number; outMinute: number }) => [t.inMinute, t.outMinute])).toEqual([
+      [12, 37],
+      [52, 77],
+    ]);
+    expect(run).toMatchObject({ sessionMinutes: 77, endAt: '2026-01-04T09:17' });
+    // The lower bound is the rest's own, counted from 08:40: the planner's bound for that one tray alone from 08:40.
+    const t = again.body.trays[0];
+    const alone = await coach.agent
+      .post('/api/calc/bake-run')
+      .send({
+        start: '2026-01-04T08:40',
+        cooks: 1,
+        ambientF: 70,
+        ovens: [ovenInput({ name: working.name, racks: 1, traysPerRack: 1 })],
+        trays: [{ id: 'rest', name: 'rest', tempF: t.tempF, minMinutes: t.minMinutes, maxMinutes: t.maxMinutes, handsOnMinutes: t.handsOnMinutes }],
+      })
+      .expect(200);
+    expect(alone.body.sessionMinutes).toBe(37);
+    expect(run.lowerBoundMinutes).toBe(40 + alone.body.lowerBoundMinutes);
+    expect(run.gapPct).toBe(Number((((77 - run.lowerBoundMinutes) / run.lowerBoundMinutes) * 100).toFixed(1)));
+    // The kept tray's cooling deadlines still run: 135 → 70 °F within 2 h and → 41 °F within 6 h of coming out
+    // (FDA Food Code 2022 §3-501.14(A)).
+    const deadlines = run.events
+      .filter((e: { trayId: string; kind: string }) => e.trayId === first.id && (e.kind === 'cool-to-70-by' || e.kind === 'fridge-41-by'))
+      .map((e: { kind: string; at: string; minute: number }) => [e.kind, e.at, e.minute]);
+    expect(deadlines).toEqual([
+      ['cool-to-70-by', '2026-01-04T10:37', 157],
+      ['fridge-41-by', '2026-01-04T14:37', 397],
+    ]);
+    // The first tray baked in the oven still working (the other had the second tray); the words say what happened.
+    expect(first.oven).toBe(working.name);
+    expect(run.ovens.map((o: { name: string }) => o.name)).toEqual([working.name]);
+    expect(run.cautions[0]).toMatch(/^Planned again from 08:40: 1 tray already out is kept as planned/);
+    const minutes = run.events.map((e: { minute: number }) => e.minute);
+    expect(minutes).toEqual([...minutes].sort((a, b) => a - b));
+    // The run sheet PDF and the calendar follow.
+    await assistant.agent.get(`/api/weeks/${week.id}/bake-run.pdf`).expect(200);
+    const ics = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.ics`).expect(200);
+    expect(ics.text).toMatch(/DTSTART:20260104T085200/);
+    expect(ics.text).toMatch(/DTSTART:20260104T081200/);
+    // Another read gives the same plan (it is stored, not kept in the process).
+    const read = await coach.agent.get(`/api/weeks/${week.id}/bake-run`).expect(200);
+    expect(timesOf(read.body.run.trays)).toEqual(timesOf(run.trays));
+
+    // Refused, nothing written: no time for the rest, a time on another day or before the start, a tray the run
+    // does not have, and moving the day's start past the rest's.
+    const noFrom = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 1, ovenIds: [working.id], out: [first.id], version: 2 }).expect(400);
+    expect(Object.keys(noFrom.body.errors)).toEqual(['from']);
+    const otherDay = await assistant.agent
+      .put(`/api/weeks/${week.id}/bake-run/kitchen`)
+      .send({ cooks: 1, ovenIds: [working.id], out: [first.id], from: '2026-01-05T08:40', version: 2 })
+      .expect(400);
+    expect(Object.keys(otherDay.body.errors)).toEqual(['from']);
+    const early = await assistant.agent
+      .put(`/api/weeks/${week.id}/bake-run/kitchen`)
+      .send({ cooks: 1, ovenIds: [working.id], out: [first.id], from: '2026-01-04T07:40', version: 2 })
+      .expect(400);
+    expect(early.body.errors.from[0]).toMatch(/starts at 08:00/);
+    const stranger = await assistant.agent
+      .put(`/api/weeks/${week.id}/bake-run/kitchen`)
+      .send({ cooks: 1, ovenIds: [working.id], out: [`${tray.id}-9`], from: '2026-01-04T08:40', version: 2 })
+      .expect(400);
+    expect(stranger.body.errors.out[0]).toMatch(new RegExp(`No tray ${tray.id}-9`));
+    const badId = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 1, ovenIds: [working.id], out: ['first'], from: '2026-01-04T08:40', version: 2 }).expect(400);
+    expect(Object.keys(badId.body.errors)).toEqual(['out.0']);
+    const late = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ start: '2026-01-04T08:45', version: 2 }).expect(400);
+    expect(late.body.errors.start[0]).toMatch(/08:40 at the latest/);
+    await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ start: '2026-01-04T08:45', cooks: 1, version: 2 }).expect(400);
+    const [row] = await sql<{ version: number; done: { from: string } }>('select version, done from bake_run_setting where week_id = $1', [week.id]);
+    expect(row).toMatchObject({ version: 2, done: { from: '2026-01-04T08:40' } });
+
+    // Without `out`, what was said stays (a cook arrives: two cooks now).
+    const cook = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 2, ovenIds: [working.id], version: 2 }).expect(200);
+    expect(cook.body.settings.done).toEqual({ from: '2026-01-04T08:40', out: [first.id] });
+
+    // Both out (09:17): the day's plan is what happened, the cooling deadlines of both still counted.
+    const all = await assistant.agent
+      .put(`/api/weeks/${week.id}/bake-run/kitchen`)
+      .send({ cooks: 2, ovenIds: [working.id], out: [first.id, second.id], from: '2026-01-04T09:20', version: 3 })
+      .expect(200);
+    expect(timesOf(all.body.run.trays)).toEqual(timesOf(run.trays));
+    expect(all.body.run.cautions[0]).toMatch(/^Every tray is out of the oven: 2 trays already out are kept as planned/);
+    expect(all.body.run.events.filter((e: { kind: string }) => e.kind === 'fridge-41-by')).toHaveLength(2);
+    expect(all.body.run.sessionMinutes).toBe(77);
+
+    // `out: []`: the whole day planned from its start again, with the kitchen as it is now.
+    const fresh = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 2, ovenIds: [left.id, right.id], out: [], version: 4 }).expect(200);
+    expect(fresh.body.settings).toMatchObject({ done: null, ovenIds: [], version: 5 });
+    expect(fresh.body.run.trays.every((t: PlannedTray) => t.inAt < '2026-01-04T08:40')).toBe(true);
   });
 });

@@ -1,6 +1,7 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { Week } from '../weeks/week.entity.js';
+import type { BakeRunDone } from '@shared/domain/bake-run-resume.js';
 
 /**
  * A workspace's bake rule for one food category (seeded from DEFAULT_BAKE_RULES on the first read, then the coach's).
@@ -79,6 +80,8 @@ export const BakeRunSetting = defineEntity({
     /** Base tray id → hands-on minutes for one tray of it. */
     handsOnMinutes: p.json<Record<string, number>>().default('{}'),
     ovenIds: p.json<number[]>().default('[]'),
+    /** Planned again part-way through the day: the trays already out (as planned) and when the rest starts; else null. */
+    done: p.json<BakeRunDone>().nullable(),
     version: p.integer().version(),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),

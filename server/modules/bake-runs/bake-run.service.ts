@@ -6,6 +6,8 @@ import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-run-types.js';
 import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
 import { longDate } from '@shared/domain/iso-date.js';
+import { resumeRun, takeDone, type BakeRunDone } from '@shared/domain/bake-run-resume.js';
+import { resolveBakeRunRules } from '@shared/domain/bake-run-model.js';
 import type {
   BakeRunKitchenValues,
   BakeRunSettingsDto,
@@ -116,8 +118,16 @@ function pickPrepDate(w: IWeek, wanted: string | undefined): string {
 
 function presentSettings(prepDate: string, row: IBakeRunSetting | null): BakeRunSettingsDto {
   return row
-    ? { prepDate, start: row.start, cooks: row.cooks, handsOnMinutes: { ...row.handsOnMinutes }, ovenIds: [...row.ovenIds], version: row.version }
-    : { prepDate, start: `${prepDate}T08:00`, cooks: 1, handsOnMinutes: {}, ovenIds: [], version: null };
+    ? {
+        prepDate,
+        start: row.start,
+        cooks: row.cooks,
+        handsOnMinutes: { ...row.handsOnMinutes },
+        ovenIds: [...row.ovenIds],
+        done: row.done ? { from: row.done.from, out: row.done.trays.map((t) => t.id) } : null,
+        version: row.version,
+      }
+    : { prepDate, start: `${prepDate}T08:00`, cooks: 1, handsOnMinutes: {}, ovenIds: [], done: null, version: null };
 }
 
 /** The tray rows of the run: the week's tray counts × each base tray's bake values and its category's rule. */
@@ -170,6 +180,11 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
   const [rules, allOvens] = await Promise.all([loadBakeRules(em, actor.workspaceId), loadOvens(em, actor.workspaceId)]);
   const ovens = settings.ovenIds.length ? allOvens.filter((o) => settings.ovenIds.includes(o.id)) : allOvens;
   const { list, schedulerTrays, used } = await weekTrays(em, week, prepDate, settings, rules);
+  // Planned again part-way: the trays already out stay as planned (those the week still bakes), the rest is planned.
+  const ids = new Set(schedulerTrays.map((t) => t.id));
+  const kept = row?.done ? { from: row.done.from, ...takeDone(row.done, [...ids]) } : null;
+  const done: BakeRunDone | null = kept && kept.trays.length ? kept : null;
+  const toBake = done ? schedulerTrays.filter((t) => !done.trays.some((d) => d.id === t.id)) : schedulerTrays;
   const problems: string[] = [];
   if (schedulerTrays.length === 0) problems.push('No trays to bake on this prep date: set the tray counts of the week first.');
   if (ovens.length === 0) problems.push('No ovens: add your ovens under "Bake rules & ovens".');
@@ -177,19 +192,24 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
   let run: BakeRunResult | null = null;
   if (problems.length === 0) {
     const derived = runRulesFrom(used);
-    const parsed = bakeRunInputSchema.safeParse({
-      start: settings.start,
-      cooks: settings.cooks,
-      ambientF: 70,
-      ovens: ovens.map(ovenInput),
-      trays: schedulerTrays,
-      rules: derived.rules,
-    } satisfies BakeRunRequestBody);
-    if (parsed.success) {
-      const planned = await planBakeRunOffThread(parsed.data);
-      run = { ...planned, cautions: [...derived.cautions, ...planned.cautions] };
+    if (done && toBake.length === 0) {
+      run = resumeRun(settings.start, done, null, resolveBakeRunRules(derived.rules));
     } else {
-      problems.push(...describeIssues(parsed.error, schedulerTrays));
+      const parsed = bakeRunInputSchema.safeParse({
+        start: done ? done.from : settings.start,
+        cooks: settings.cooks,
+        ambientF: 70,
+        ovens: ovens.map(ovenInput),
+        trays: toBake,
+        rules: derived.rules,
+      } satisfies BakeRunRequestBody);
+      if (parsed.success) {
+        const planned = await planBakeRunOffThread(parsed.data);
+        const whole = { ...planned, cautions: [...derived.cautions, ...planned.cautions] };
+        run = done ? resumeRun(settings.start, done, whole, whole.rules) : whole;
+      } else {
+        problems.push(...describeIssues(parsed.error, toBake));
+      }
     }
   }
   return {
@@ -211,6 +231,17 @@ function startOnPrepDay(start: string, prepDate: string): void {
     throw ValidationError.field('start', `The run starts on its prep day, ${longDate(prepDate)}: keep that date and change the time.`);
 }
 
+/** Once the rest of the day is planned from a time, the day's start cannot move past it. */
+function startBeforeRest(start: string, row: IBakeRunSetting | null): void {
+  if (row?.done && start > row.done.from)
+    throw ValidationError.field(
+      'start',
+      `The rest of this run is planned from ${row.done.from.slice(11)} (trays already out): the start can be ${row.done.from.slice(11)} at the latest.`,
+    );
+}
+
+type DayChange = Partial<Pick<IBakeRunSetting, 'start' | 'cooks' | 'ovenIds' | 'done'>>;
+
 /**
  * Changes part of a prep day's saved settings (the rest stays; with none saved yet, the defaults fill it). A stale
  * version is a 409 like the settings' own.
@@ -220,7 +251,7 @@ async function changeDaySettings(
   actor: Actor,
   weekId: number,
   v: { prepDate?: string; version?: number },
-  change: (prepDate: string) => Partial<Pick<BakeRunSettingsDto, 'start' | 'cooks' | 'ovenIds'>> | Promise<Partial<Pick<BakeRunSettingsDto, 'start' | 'cooks' | 'ovenIds'>>>,
+  change: (prepDate: string) => DayChange | Promise<DayChange>,
 ): Promise<WeekBakeRunDto> {
   // The week first: another workspace's week is a 404 whatever else the request says.
   const week = await findWeek(em, actor, weekId);
@@ -253,8 +284,9 @@ async function changeDaySettings(
  * on prep day); cooks, ovens and hands-on minutes stay.
  */
 export function moveWeekBakeRunStart(em: EntityManager, actor: Actor, weekId: number, v: BakeRunStartValues): Promise<WeekBakeRunDto> {
-  return changeDaySettings(em, actor, weekId, v, (prepDate) => {
+  return changeDaySettings(em, actor, weekId, v, async (prepDate) => {
     startOnPrepDay(v.start, prepDate);
+    startBeforeRest(v.start, await em.findOne(BakeRunSetting, { week: weekId, prepDate }));
     return { start: v.start };
   });
 }
@@ -262,15 +294,32 @@ export function moveWeekBakeRunStart(em: EntityManager, actor: Actor, weekId: nu
 /**
  * PUT /api/weeks/:weekId/bake-run/kitchen: the ovens that work and the cooks who came on prep day (coach or
  * assistant); the start and hands-on minutes stay. Every oven of the workspace is stored as "every oven".
+ *
+ * Part-way through the day, `out` names the trays already out of the oven: they are kept as the plan the kitchen
+ * followed had them (read here, before the change), and the rest is planned from `from`. `out: []` plans the whole
+ * day from its start again; without `out`, what was said before stays.
  */
 export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: number, v: BakeRunKitchenValues): Promise<WeekBakeRunDto> {
-  return changeDaySettings(em, actor, weekId, v, async () => {
+  return changeDaySettings(em, actor, weekId, v, async (prepDate) => {
     const ovens = await loadOvens(em, actor.workspaceId);
     const known = new Set(ovens.map((o) => o.id));
     const missing = v.ovenIds.filter((id) => !known.has(id));
     if (missing.length) throw ValidationError.field('ovenIds', `No oven with id ${missing.join(', ')} in your workspace.`);
     const chosen = [...new Set(v.ovenIds)];
-    return { cooks: v.cooks, ovenIds: chosen.length === ovens.length ? [] : chosen };
+    const change: DayChange = { cooks: v.cooks, ovenIds: chosen.length === ovens.length ? [] : chosen };
+    if (v.out === undefined) return change;
+    if (v.out.length === 0) return { ...change, done: null };
+    if (v.from === undefined) throw ValidationError.field('from', 'Say when the rest of the run starts (the trays still to bake).');
+    if (v.from.slice(0, 10) !== prepDate)
+      throw ValidationError.field('from', `The rest is baked on the prep day, ${longDate(prepDate)}: keep that date and change the time.`);
+    const current = await getWeekBakeRun(em, actor, weekId, prepDate);
+    if (!current.run) throw ValidationError.field('out', `There is no plan to take trays out of yet: ${current.problems.join(' ')}`);
+    if (v.from < current.settings.start)
+      throw ValidationError.field('from', `The run starts at ${current.settings.start.slice(11)}: plan the rest from then or later.`);
+    const inRun = new Set(current.run.trays.map((t) => t.id));
+    const unknown = v.out.filter((id) => !inRun.has(id));
+    if (unknown.length) throw ValidationError.field('out', `No tray ${unknown.join(', ')} in this run.`);
+    return { ...change, done: { from: v.from, ...takeDone(current.run, [...new Set(v.out)]) } };
   });
 }
 
@@ -302,6 +351,7 @@ export async function putWeekBakeRunSettings(
   }
   startOnPrepDay(v.start, prepDate);
   const row = await em.findOne(BakeRunSetting, { week: week.id, prepDate });
+  startBeforeRest(v.start, row);
   if (row) {
     if (v.version !== row.version) throw new StaleEdit(row.version, presentSettings(prepDate, row));
     em.assign(row, { start: v.start, cooks: v.cooks, handsOnMinutes: v.handsOnMinutes, ovenIds: [...new Set(v.ovenIds)] });

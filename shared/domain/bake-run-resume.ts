@@ -1,0 +1,100 @@
+import Decimal from 'decimal.js';
+import type { BakeEvent, BakeOvenPlan, BakeRunResult, BakeRunRules, BakeTrayPlan } from './bake-run-types.js';
+import { BAKE_RUN_CAUTIONS, KIND_ORDER } from './bake-run.js';
+import { addLocalMinutes, parseLocalMinutes } from './bake-run-time.js';
+
+/**
+ * A run planned again part-way through prep day (an oven failed at ten, a cook went home): the trays already out of
+ * the oven are kept as they were planned (their times, oven and rack, and their cooling deadlines, which still run),
+ * and only the trays still to bake are planned, from the time the kitchen gives.
+ */
+export interface BakeRunDone {
+  /** When the rest is planned from, local "YYYY-MM-DDTHH:mm". */
+  from: string;
+  /** The trays already out, as planned before (local times are what count; their minutes are re-counted). */
+  trays: BakeTrayPlan[];
+  /** Those trays' own steps: hands-on, in, check, out and the cooling deadlines. */
+  events: BakeEvent[];
+}
+
+/** The trays `ids` of a run with their own steps, to keep when the rest is planned again. */
+export function takeDone(run: Pick<BakeRunResult, 'trays' | 'events'>, ids: readonly string[]): Pick<BakeRunDone, 'trays' | 'events'> {
+  const wanted = new Set(ids);
+  return {
+    trays: run.trays.filter((t) => wanted.has(t.id)),
+    events: run.events.filter((e) => e.trayId !== null && wanted.has(e.trayId)),
+  };
+}
+
+/** Whole minutes from one local reading to another. */
+export function minutesBetween(from: string, to: string): number {
+  const a = parseLocalMinutes(from);
+  const b = parseLocalMinutes(to);
+  if (a === null || b === null) throw new RangeError(`Not a local date-time "YYYY-MM-DDTHH:mm": ${a === null ? from : to}`);
+  return b - a;
+}
+
+function retimeTray(t: BakeTrayPlan, start: string, ovenIndex: number): BakeTrayPlan {
+  const m = (at: string) => minutesBetween(start, at);
+  return {
+    ...t,
+    ovenIndex,
+    inMinute: m(t.inAt),
+    outMinute: m(t.outAt),
+    pullByMinute: m(t.pullByAt),
+    prep: t.prep && { ...t.prep, startMinute: m(t.prep.startAt), endMinute: m(t.prep.endAt) },
+  };
+}
+
+function retimeOven(o: BakeOvenPlan, start: string): BakeOvenPlan {
+  const m = (at: string) => minutesBetween(start, at);
+  return {
+    ...o,
+    setPoints: o.setPoints.map((sp) => ({ ...sp, changeMinute: m(sp.changeAt), readyMinute: m(sp.readyAt), endMinute: m(sp.endAt) })),
+  };
+}
+
+const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+
+/**
+ * The day's run as one plan again: the trays already out (as planned) and the rest (planned from `done.from`, or
+ * null when nothing is left to bake), every minute counted from the day's `start`. Ovens that baked only kept trays
+ * (an oven that has since failed) keep a lane with no set points. The lower bound is the rest's, from `done.from`.
+ */
+export function resumeRun(start: string, done: BakeRunDone, rest: BakeRunResult | null, rules: BakeRunRules): BakeRunResult {
+  const ovens = (rest?.ovens ?? []).map((o) => retimeOven(o, start));
+  for (const t of done.trays) if (!ovens.some((o) => o.name === t.oven)) ovens.push({ name: t.oven, setPoints: [] });
+  const ovenIndex = new Map(ovens.map((o, i) => [o.name, i]));
+  const trays = [...done.trays, ...(rest?.trays ?? [])]
+    .map((t) => retimeTray(t, start, ovenIndex.get(t.oven) ?? 0))
+    .sort((a, b) => a.inMinute - b.inMinute || a.ovenIndex - b.ovenIndex || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  const events = [...done.events, ...(rest?.events ?? [])]
+    .map((e) => ({ ...e, minute: minutesBetween(start, e.at) }))
+    .sort((a, b) => a.minute - b.minute || KIND_ORDER[a.kind] - KIND_ORDER[b.kind]);
+  const session = Math.max(0, ...trays.map((t) => t.outMinute));
+  const offset = minutesBetween(start, done.from);
+  const bound = rest ? offset + rest.lowerBoundMinutes : session;
+  const gapPct =
+    bound > 0 ? new Decimal(session).minus(bound).dividedBy(bound).times(100).toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber() : 0;
+  const kept = plural(done.trays.length, 'tray already out is', 'trays already out are');
+  const said = rest
+    ? `Planned again from ${done.from.slice(11)}: ${kept} kept as planned (their cooling deadlines still run); ` +
+      `${plural(rest.trays.length, 'tray is', 'trays are')} planned from then, each oven from cold, so one that is already hot is ready sooner.`
+    : `Every tray is out of the oven: ${kept} kept as planned (their cooling deadlines still run).`;
+  return {
+    start,
+    trays,
+    events,
+    ovens,
+    sessionMinutes: session,
+    endAt: addLocalMinutes(start, session),
+    lowerBoundMinutes: bound,
+    lowerBoundParts: rest ? rest.lowerBoundParts : [],
+    gapPct: Math.max(0, gapPct),
+    method: rest ? rest.method : 'exact',
+    provenOptimal: rest ? rest.provenOptimal : false,
+    evaluations: rest ? rest.evaluations : 0,
+    rules: rest ? rest.rules : rules,
+    cautions: [said, ...(rest ? rest.cautions : BAKE_RUN_CAUTIONS)],
+  };
+}
