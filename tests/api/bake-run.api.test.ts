@@ -452,7 +452,11 @@ describe('planning the rest of the day again part-way through', () => {
     const minutes = run.events.map((e: { minute: number }) => e.minute);
     expect(minutes).toEqual([...minutes].sort((a, b) => a - b));
     // The run sheet PDF and the calendar follow.
-    await assistant.agent.get(`/api/weeks/${week.id}/bake-run.pdf`).expect(200);
+    const pdf = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.pdf`).buffer(true).expect(200);
+    const parser = new PDFParse({ data: new Uint8Array(Buffer.from(pdf.body)) });
+    const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+    await parser.destroy();
+    expect(text).toContain('Planned again at 08:40: one tray already out is kept as planned, with their cooling deadlines; the one tray still to bake is planned from 08:40.');
     const ics = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.ics`).expect(200);
     expect(ics.text).toMatch(/DTSTART:20260104T085200/);
     expect(ics.text).toMatch(/DTSTART:20260104T081200/);

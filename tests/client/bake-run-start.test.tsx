@@ -7,7 +7,7 @@ import { ApiError } from '@/lib/problem';
 // Invented runs (only the fields the timers card reads) of one tray, "Egg slab", in the left oven.
 const step = (kind: string, minute: number, tempF = 350) => ({ kind, minute, trayId: 't1', oven: 'Left', tempF });
 const runOf = (events: ReturnType<typeof step>[], start = '2026-01-04T08:00') =>
-  ({ start, trays: [{ id: 't1', name: 'Egg slab' }], events }) as unknown as BakeRunResult;
+  ({ start, trays: [{ id: 't1', name: 'Egg slab', outAt: `${start.slice(0, 10)}T08:30`, outMinute: 30 }], events }) as unknown as BakeRunResult;
 /** In at 08:12, checked at 08:30, from `start`. */
 const runAt = (start: string) => runOf([step('tray-in', 12), step('first-check', 30)], start);
 const problem = (status: number, code: string, detail: string, errors?: Record<string, string[]>) =>
@@ -91,6 +91,7 @@ describe('the kitchen as it is on prep day', () => {
     allOvens: ovens,
     ovenIds: [1, 2],
     cooks: 2,
+    done: null,
     version: 3,
     saving: false,
     error: null,
@@ -107,7 +108,7 @@ describe('the kitchen as it is on prep day', () => {
     fireEvent.click(box('Right'));
     fireEvent.change(screen.getByLabelText('Cooks here today'), { target: { value: '1' } });
     fireEvent.click(screen.getByRole('button', { name: 'Plan again' }));
-    expect(k.onChange).toHaveBeenCalledWith(1, [1], 3);
+    expect(k.onChange).toHaveBeenCalledWith(1, [1], 3, { out: [] });
     // Sent, not yet answered: nothing claims it is planned again.
     expect(screen.queryByText(/^Planned again/)).toBeNull();
     // The answer: the run now uses the left oven and one cook (version 4).
@@ -127,7 +128,7 @@ describe('the kitchen as it is on prep day', () => {
     expect((screen.getByLabelText('Cooks here today') as HTMLInputElement).value).toBe('3');
     fireEvent.click(screen.getByRole('button', { name: 'Plan again' }));
     // Sent against version 4, the one its choice started from: the server answers 409 rather than overwrite 5.
-    expect(k.onChange).toHaveBeenCalledWith(3, [2], 4);
+    expect(k.onChange).toHaveBeenCalledWith(3, [2], 4, { out: [] });
   });
 
   it('names a refused oven choice and puts a stale run behind a reload', () => {
@@ -145,5 +146,74 @@ describe('the kitchen as it is on prep day', () => {
     render(<BakeRunTimers run={runAt('2026-01-04T08:00')} unit="F" nowMinute={-20} kitchen={kitchenOf({ error: problem(409, 'stale_version', 'Stale'), onReload: reload })} />);
     fireEvent.click(screen.getByRole('button', { name: 'Load their version' }));
     expect(reload).toHaveBeenCalled();
+  });
+
+  // Part-way through the day (invented run): the slabs came out at 08:37 and 08:45; the crackers went into the left
+  // oven at 09:40 and are due at 10:15.
+  const midDay = {
+    start: '2026-01-04T08:00',
+    trays: [
+      { id: '7-1', name: 'Egg slab (1/2)', oven: 'Left', inMinute: 12, outAt: '2026-01-04T08:37', outMinute: 37 },
+      { id: '9-1', name: 'Seed crackers', oven: 'Left', inMinute: 100, outAt: '2026-01-04T10:15', outMinute: 135 },
+      { id: '7-2', name: 'Egg slab (2/2)', oven: 'Right', inMinute: 20, outAt: '2026-01-04T08:45', outMinute: 45 },
+    ],
+    events: [step('tray-in', 100)],
+  } as unknown as BakeRunResult;
+
+  it('part-way through, offers the trays planned out by now ticked and plans the rest from a time', () => {
+    vi.useFakeTimers({ toFake: ['Date'] });
+    vi.setSystemTime(new Date(2026, 0, 4, 9, 50));
+    try {
+      const k = kitchenOf();
+      const { rerender } = render(<BakeRunTimers run={midDay} unit="F" nowMinute={110} kitchen={k} />);
+      const details = screen.getByText('An oven down or a cook missing?').closest('details')!;
+      details.open = true;
+      fireEvent(details, new Event('toggle'));
+      // Ticked, in the order they come out: the slabs out by 09:50, and the crackers baking in an oven that works
+      // (they stay in): the rest waits until they come out.
+      const trays = () => (screen.getAllByRole('checkbox').slice(3) as HTMLInputElement[]).map((b) => [b.parentElement?.textContent, b.checked]); // after the sound and the two ovens
+      expect(trays()).toEqual([
+        ['Egg slab (1/2) · out 08:37', true],
+        ['Egg slab (2/2) · out 08:45', true],
+        ['Seed crackers · out 10:15', true],
+      ]);
+      expect((screen.getByLabelText('Plan the rest from') as HTMLInputElement).value).toBe('10:15');
+      // The left oven is what broke down: the crackers in it are baked again, the rest is planned from now.
+      fireEvent.click(box('Left'));
+      expect(trays()[2]).toEqual(['Seed crackers · out 10:15', false]);
+      expect((screen.getByLabelText('Plan the rest from') as HTMLInputElement).value).toBe('09:50');
+      fireEvent.click(screen.getByRole('button', { name: 'Plan again' }));
+      expect(k.onChange).toHaveBeenCalledWith(2, [2], 3, { out: ['7-1', '7-2'], from: '2026-01-04T09:50' });
+      // The answer says what the plan now is.
+      rerender(
+        <BakeRunTimers run={midDay} unit="F" nowMinute={110} kitchen={{ ...k, ovenIds: [2], version: 4, done: { from: '2026-01-04T09:50', out: ['7-1', '7-2'] } }} />,
+      );
+      expect(screen.getByRole('status').textContent).toBe('Planned again with Right and 2 cooks from 09:50; 2 trays already out kept as planned.');
+    } finally {
+      vi.useRealTimers();
+    }
+  });
+
+  it('unticking every tray plans the day from its start again; a refused time is said under its field', () => {
+    const k = kitchenOf({ done: { from: '2026-01-04T09:50', out: ['7-1'] } });
+    const { unmount } = render(<BakeRunTimers run={midDay} unit="F" nowMinute={-5} kitchen={k} />);
+    fireEvent.click(screen.getByText('An oven down or a cook missing?'));
+    expect(box('Egg slab (1/2) · out 08:37').checked).toBe(true);
+    expect(box('Egg slab (2/2) · out 08:45').checked).toBe(false);
+    expect((screen.getByLabelText('Plan the rest from') as HTMLInputElement).value).toBe('09:50');
+    fireEvent.click(box('Egg slab (1/2) · out 08:37'));
+    expect(screen.getByText('Nothing ticked: the day is planned again from its start, 08:00.')).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Plan again' }));
+    expect(k.onChange).toHaveBeenCalledWith(2, [1, 2], 3, { out: [] });
+    unmount();
+    render(
+      <BakeRunTimers
+        run={midDay}
+        unit="F"
+        nowMinute={110}
+        kitchen={kitchenOf({ done: { from: '2026-01-04T07:50', out: ['7-1'] }, error: problem(400, 'validation', 'Invalid', { from: ['The run starts at 08:00: plan the rest from then or later.'] }) })}
+      />,
+    );
+    expect(screen.getByRole('alert').textContent).toBe('⚠ The run starts at 08:00: plan the rest from then or later.');
   });
 });

@@ -49,3 +49,38 @@ test('on prep day the assistant takes an oven that is out of order out of the ru
   expect(after.ovens.map((o) => o.name)).toEqual(['Left oven']);
   expect(after.run.ovens.filter((o) => o.setPoints.length).map((o) => o.name)).toEqual(['Left oven']);
 });
+
+test('mid-morning the assistant plans the rest of the day again, keeping the trays already out', async ({ page }) => {
+  await signIn(page, 'assistant@trayline.test');
+  const weeks = (await (await page.request.get('/api/weeks')).json()) as { id: number; publishedVersion: number | null }[];
+  const weekId = (weeks.find((w) => w.publishedVersion !== null) ?? weeks[0]).id;
+  type Tray = { id: string; outAt: string; outMinute: number };
+  const before = (await (await page.request.get(`/api/weeks/${weekId}/bake-run`)).json()) as { prepDate: string; run: { trays: Tray[] } };
+  // The phone's clock: when the third tray of the plan comes out.
+  const third = [...before.run.trays].sort((a, b) => a.outMinute - b.outMinute)[2];
+  await page.clock.setFixedTime(new Date(`${third.outAt}:00Z`));
+  await page.goto(`/weeks/${weekId}/bake-run`);
+  await page.locator('summary', { hasText: 'An oven down or a cook missing?' }).click();
+  const out = page.getByRole('group', { name: 'Trays already out of the oven' });
+  // The trays out by now (and any still baking in an oven that works) are offered ticked; the rest from then.
+  const ticked = await out.getByRole('checkbox', { checked: true }).count();
+  expect(ticked).toBeGreaterThanOrEqual(3);
+  const from = await page.getByLabel('Plan the rest from').inputValue();
+  expect(from >= third.outAt.slice(11)).toBe(true);
+  await page.getByRole('button', { name: 'Plan again' }).click();
+  await expect(page.getByRole('status').filter({ hasText: new RegExp(`from ${from}; ${ticked} trays already out kept as planned\\.$`) })).toBeVisible();
+  await expect(page.getByText(`Planned again from ${from}`, { exact: true })).toBeVisible();
+  await expectNoSeriousA11yViolations(page, 'bake run, planned again part-way');
+  await page.getByRole('region', { name: 'Timers' }).screenshot({ path: `${SHOTS}/assistant-replan-midday.png` });
+
+  // Everyone reads the same day: the trays out as they were planned, with their cooling deadlines still counted.
+  const after = (await (await page.request.get(`/api/weeks/${weekId}/bake-run`)).json()) as {
+    settings: { done: { from: string; out: string[] } };
+    run: { trays: Tray[]; events: { kind: string; trayId: string | null }[] };
+  };
+  expect(after.settings.done).toEqual({ from: `${before.prepDate}T${from}`, out: expect.any(Array) });
+  expect(after.settings.done.out).toHaveLength(ticked);
+  expect(after.settings.done.out).toContain(third.id);
+  expect(after.run.trays.find((t) => t.id === third.id)?.outAt).toBe(third.outAt);
+  expect(after.run.events.filter((e) => e.trayId === third.id && e.kind === 'fridge-41-by')).toHaveLength(1);
+});

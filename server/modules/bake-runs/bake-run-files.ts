@@ -22,5 +22,6 @@ export async function bakeRunPdf(em: EntityManager, actor: Actor, weekId: number
     businessName: ws.name,
     title: `Bake run, ${dto.weekName}, prep ${shortDate(dto.prepDate)}`,
     filename: `bake-run-${dto.prepDate}.pdf`,
+    replanned: dto.settings.done && { from: dto.settings.done.from, kept: dto.settings.done.out.length },
   });
 }

@@ -10,6 +10,8 @@ export interface BakeRunPdfMeta {
   /** e.g. "Bake run, Sun 6 Dec". */
   title: string;
   filename?: string;
+  /** Planned again part-way through the day: when the rest starts and how many trays were already out. */
+  replanned?: { from: string; kept: number } | null;
 }
 
 const deg = (f: number | null | undefined) => (f == null ? '' : `${f} °F (${toCelsiusRounded(f)} °C)`);
@@ -49,7 +51,19 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
   const trayName = (id: string | null) => (id ? names.get(id) ?? id : '');
   heading(doc, meta.title, 20);
   paragraph(doc, `${longDate(run.start.slice(0, 10))}: start ${clock(run.start)}, last tray out ${clock(run.endAt)} (${run.sessionMinutes} minutes).`);
-  paragraph(doc, run.provenOptimal ? 'This is the shortest plan among those the scheduler considers.' : `Within ${run.gapPct}% of the lower bound (${run.lowerBoundMinutes} minutes).`, { size: 9 });
+  if (meta.replanned) {
+    const { from, kept } = meta.replanned;
+    const left = run.trays.length - kept;
+    const rest = left > 0 ? `${left === 1 ? 'the one tray still to bake is' : `the ${left} still to bake are`} planned from ${clock(from)}` : 'every tray is out';
+    paragraph(doc, `Planned again at ${clock(from)}: ${kept === 1 ? 'one tray already out is' : `${kept} trays already out are`} kept as planned, with their cooling deadlines; ${rest}.`);
+  }
+  paragraph(
+    doc,
+    run.provenOptimal
+      ? `${meta.replanned ? 'The rest is' : 'This is'} the shortest plan among those the scheduler considers.`
+      : `Within ${run.gapPct}% of the lower bound (${run.lowerBoundMinutes} minutes).`,
+    { size: 9 },
+  );
   doc.moveDown(0.5);
 
   heading(doc, 'Ovens', 14);

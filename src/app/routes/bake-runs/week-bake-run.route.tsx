@@ -97,6 +97,13 @@ export function Component() {
           )}
         </EmptyState>
       )}
+      {dto.run && dto.settings.done && (
+        <Notice tone="info" title={`Planned again from ${dto.settings.done.from.slice(11)}`}>
+          {dto.settings.done.out.length === 1 ? 'One tray already out is' : `${dto.settings.done.out.length} trays already out are`} kept as
+          planned, with their cooling deadlines; {dto.run.trays.length > dto.settings.done.out.length ? 'the rest is planned from then.' : 'every tray is out.'}{' '}
+          To plan the whole day from its start again, untick them under "An oven down or a cook missing?" on prep day.
+        </Notice>
+      )}
       {dto.run && (
         <BakeRunView
           run={dto.run}
@@ -117,10 +124,12 @@ export function Component() {
                   allOvens: ovens.data,
                   ovenIds: dto.ovens.map((o) => o.id),
                   cooks: dto.settings.cooks,
+                  done: dto.settings.done,
                   version: dto.settings.version,
                   saving: kitchen.isPending,
                   error: kitchen.error,
-                  onChange: (cooks, ovenIds, version) => kitchen.mutate({ prepDate: dto.prepDate, cooks, ovenIds, ...(version === null ? {} : { version }) }),
+                  onChange: (cooks, ovenIds, version, progress) =>
+                    kitchen.mutate({ prepDate: dto.prepDate, cooks, ovenIds, ...progress, ...(version === null ? {} : { version }) }),
                   onReload: () => {
                     kitchen.reset();
                     q.refetch();

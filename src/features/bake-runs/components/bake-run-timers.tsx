@@ -133,57 +133,182 @@ export interface KitchenChange {
   /** The ovens the run uses now. */
   ovenIds: number[];
   cooks: number;
+  /** Planned again part-way: when the rest starts and the trays already out (null: the day from its start). */
+  done: { from: string; out: string[] } | null;
   /** The saved settings' version these come from (null before any are saved). */
   version: number | null;
   saving: boolean;
   error: unknown;
-  /** `version`: the one the person's choice started from (a change saved meanwhile makes it a 409). */
-  onChange: (cooks: number, ovenIds: number[], version: number | null) => void;
+  /**
+   * `version`: the one the person's choice started from (a change saved meanwhile makes it a 409). `out`: the trays
+   * already out of the oven (none: the day from its start), `from` ("YYYY-MM-DDTHH:mm"): when the rest starts.
+   */
+  onChange: (cooks: number, ovenIds: number[], version: number | null, progress: { out: string[]; from?: string }) => void;
   onReload: () => void;
 }
 
-const kitchenKey = (cooks: number | string, ovenIds: readonly number[]) => `${cooks}|${[...ovenIds].sort((a, b) => a - b).join()}`;
+interface KitchenState {
+  cooks: number | string;
+  ovenIds: readonly number[];
+  out: readonly string[];
+  /** "HH:mm" (only counts with trays out). */
+  from: string;
+}
+
+const kitchenKey = (k: KitchenState) =>
+  [k.cooks, [...k.ovenIds].sort((a, b) => a - b).join(), [...k.out].sort().join(), k.out.length ? k.from : ''].join('|');
+
+const savedKitchen = (kitchen: KitchenChange): KitchenState => ({
+  cooks: kitchen.cooks,
+  ovenIds: kitchen.ovenIds,
+  out: kitchen.done?.out ?? [],
+  from: kitchen.done?.from.slice(11) ?? '',
+});
 
 /**
- * "An oven down or a cook missing?": the ovens that work and the cooks who came today; the run is planned again from
- * its start with them. Meant for before the first tray goes in: the new plan does not know which trays are already out.
+ * "An oven down or a cook missing?": the ovens that work and the cooks who came today. Before the first tray goes in,
+ * the day is planned again from its start; part-way through, the trays already out are ticked (those planned out by
+ * now are offered ticked), they stay as planned, and the rest is planned from a time (now, or when the last ticked
+ * tray comes out).
  */
-function KitchenForm({ kitchen }: { kitchen: KitchenChange }) {
-  const [ovenIds, setOvenIds] = useState(kitchen.ovenIds);
-  const [cooks, setCooks] = useState(String(kitchen.cooks));
-  /** What "Plan again" sent (cooks and ovens), until the person starts over. */
+function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run: BakeRunResult; nowMinute: number }) {
+  const saved = savedKitchen(kitchen);
+  const [form, setForm] = useState<KitchenState>(saved);
+  const [fromTyped, setFromTyped] = useState(false);
+  /** The tray ticks were offered on opening (not yet changed by hand): they follow the ovens ticked. */
+  const [offered, setOffered] = useState(false);
+  /** What "Plan again" sent, until the person starts over. */
   const [sent, setSent] = useState<string | null>(null);
-  // What the checkboxes started from: a change saved elsewhere replaces them unless the person changed them.
-  const [base, setBase] = useState({ key: kitchenKey(kitchen.cooks, kitchen.ovenIds), version: kitchen.version });
+  // What the form started from: a change saved elsewhere replaces it unless the person changed it.
+  const [base, setBase] = useState({ key: kitchenKey(saved), version: kitchen.version });
   const adopt = () => {
-    setOvenIds(kitchen.ovenIds);
-    setCooks(String(kitchen.cooks));
-    setBase({ key: kitchenKey(kitchen.cooks, kitchen.ovenIds), version: kitchen.version });
+    setForm(saved);
+    setFromTyped(false);
+    setOffered(false);
+    setBase({ key: kitchenKey(saved), version: kitchen.version });
   };
   if (base.version !== kitchen.version) {
-    const untouched = kitchenKey(cooks, ovenIds) === base.key;
-    const ownAnswer = sent !== null && !kitchen.error && kitchenKey(cooks, ovenIds) === kitchenKey(kitchen.cooks, kitchen.ovenIds);
+    const untouched = kitchenKey(form) === base.key;
+    const ownAnswer = sent !== null && !kitchen.error && kitchenKey(form) === kitchenKey(saved);
     if (untouched || ownAnswer) adopt();
   }
+  const outAtOf = new Map(run.trays.map((t) => [t.id, t.outAt]));
+  /** The rest starts now, or when the last tray ticked comes out if that is later. */
+  const suggestedFrom = (out: readonly string[]) =>
+    [hhmm(new Date()), ...out.map((id) => outAtOf.get(id)?.slice(11) ?? '')].reduce((a, b) => (b > a ? b : a));
+  const setOut = (out: string[]) => setForm((f) => ({ ...f, out, from: fromTyped ? f.from : suggestedFrom(out) }));
+  const ovenName = new Map(kitchen.allOvens.map((o) => [o.id, o.name]));
+  /**
+   * The trays to offer ticked: those said before, those planned out by now, and those baking now in an oven ticked
+   * as working (they stay in; the rest then waits until they come out). A tray in an oven that is down is baked again.
+   */
+  const offer = (ovenIds: readonly number[]) => {
+    const working = new Set(ovenIds.map((id) => ovenName.get(id)));
+    const due = run.trays.filter((t) => t.outMinute <= nowMinute || (t.inMinute <= nowMinute && working.has(t.oven)));
+    return [...new Set([...saved.out, ...due.map((t) => t.id)])];
+  };
   const fieldErrors = isApiError(kitchen.error, 400) ? kitchen.error.fieldErrors : {};
   // Done once the run shown is planned with what was sent (not merely once the request left).
-  const done = sent !== null && sent === kitchenKey(kitchen.cooks, kitchen.ovenIds) && !kitchen.saving && !kitchen.error;
+  const done = sent !== null && sent === kitchenKey(saved) && !kitchen.saving && !kitchen.error;
   const names = kitchen.allOvens.filter((o) => kitchen.ovenIds.includes(o.id)).map((o) => o.name);
+  const cooksSaid = kitchen.cooks === 1 ? 'one cook' : `${kitchen.cooks} cooks`;
+  const keptSaid = kitchen.done
+    ? ` from ${kitchen.done.from.slice(11)}; ${kitchen.done.out.length === 1 ? 'one tray' : `${kitchen.done.out.length} trays`} already out kept as planned`
+    : '';
+  const trays = [...run.trays].sort((a, b) => a.outMinute - b.outMinute);
   return (
-    <details className="rounded-lg border border-line p-3">
+    <details
+      className="rounded-lg border border-line p-3"
+      onToggle={(e) => {
+        // Opened part-way through the day: the trays out by now are offered ticked (unless the person has changed
+        // something already).
+        if (!e.currentTarget.open || kitchenKey(form) !== base.key) return;
+        const out = offer(form.ovenIds);
+        if (out.length !== form.out.length) {
+          setOut(out);
+          setOffered(true);
+        }
+      }}
+    >
       <summary className="min-h-11 cursor-pointer py-2 font-bold">An oven down or a cook missing?</summary>
       <form
         className="mt-2 flex flex-col gap-3"
         aria-label="Today's kitchen"
         onSubmit={(e) => {
           e.preventDefault();
-          setSent(kitchenKey(cooks, ovenIds));
-          kitchen.onChange(Number(cooks), ovenIds, base.version);
+          setSent(kitchenKey(form));
+          kitchen.onChange(
+            Number(form.cooks),
+            [...form.ovenIds],
+            base.version,
+            form.out.length ? { out: [...form.out], from: `${run.start.slice(0, 10)}T${form.from}` } : { out: [] },
+          );
         }}
       >
-        <OvenChecks legend="Ovens that work today" ovens={kitchen.allOvens} chosen={ovenIds} onChange={setOvenIds} error={fieldErrors.ovenIds?.[0]} className="flex flex-col gap-1 text-base" />
-        <TextField label="Cooks here today" type="number" inputMode="numeric" min={1} max={50} required value={cooks} onChange={(e) => setCooks(e.target.value)} error={fieldErrors.cooks?.[0]} className="w-44" />
-        <p className="text-sm text-ink-soft">The run is planned again from its start: do this before the first tray goes in.</p>
+        <OvenChecks
+          legend="Ovens that work today"
+          ovens={kitchen.allOvens}
+          chosen={[...form.ovenIds]}
+          onChange={(ovenIds) => {
+            setForm((f) => ({ ...f, ovenIds }));
+            if (offered) setOut(offer(ovenIds));
+          }}
+          error={fieldErrors.ovenIds?.[0]}
+          className="flex flex-col gap-1 text-base"
+        />
+        <TextField
+          label="Cooks here today"
+          type="number"
+          inputMode="numeric"
+          min={1}
+          max={50}
+          required
+          value={form.cooks}
+          onChange={(e) => setForm((f) => ({ ...f, cooks: e.target.value }))}
+          error={fieldErrors.cooks?.[0]}
+          className="w-44"
+        />
+        <fieldset className="flex flex-col gap-1 text-base" aria-describedby="trays-out-hint">
+          <legend className="font-bold">Trays already out of the oven</legend>
+          <p id="trays-out-hint" className="text-sm text-ink-soft">
+            Ticked trays stay as planned, and their cooling deadlines still run. A tray still baking in an oven that works
+            stays ticked, and the rest waits until it comes out; one in an oven that is down is baked again.
+          </p>
+          {trays.map((t) => (
+            <label key={t.id} className="flex min-h-11 items-center gap-2">
+              <input
+                type="checkbox"
+                className="h-5 w-5"
+                checked={form.out.includes(t.id)}
+                onChange={(e) => {
+                  setOffered(false);
+                  setOut(e.target.checked ? [...form.out, t.id] : form.out.filter((id) => id !== t.id));
+                }}
+              />
+              <span>
+                {t.name} <span className="num text-ink-soft">· out {clock(t.outAt)}</span>
+              </span>
+            </label>
+          ))}
+          {fieldErrors.out && <p className="font-bold text-signal-700">⚠ {fieldErrors.out[0]}</p>}
+        </fieldset>
+        {form.out.length > 0 ? (
+          <TextField
+            label="Plan the rest from"
+            type="time"
+            required
+            value={form.from}
+            onChange={(e) => {
+              setFromTyped(true);
+              setForm((f) => ({ ...f, from: e.target.value }));
+            }}
+            error={fieldErrors.from?.[0]}
+            hint="Every oven is planned from cold again, so one that is already hot is ready sooner."
+            className="w-44"
+          />
+        ) : (
+          <p className="text-sm text-ink-soft">Nothing ticked: the day is planned again from its start, {clock(run.start)}.</p>
+        )}
         <div>
           <Button type="submit" busy={kitchen.saving}>
             Plan again
@@ -191,7 +316,7 @@ function KitchenForm({ kitchen }: { kitchen: KitchenChange }) {
         </div>
       </form>
       <p role="status" className="mt-2 text-base">
-        {done ? `Planned again with ${names.join(' and ')} and ${kitchen.cooks === 1 ? 'one cook' : `${kitchen.cooks} cooks`}.` : ''}
+        {done ? `Planned again with ${names.join(' and ')} and ${cooksSaid}${keptSaid}.` : ''}
       </p>
       <ChangeRefused
         error={kitchen.error}
@@ -265,7 +390,7 @@ export function BakeRunTimers({
         </ul>
       )}
       {move && <MoveStartForm run={run} move={move} />}
-      {kitchen && <KitchenForm kitchen={kitchen} />}
+      {kitchen && <KitchenForm kitchen={kitchen} run={run} nowMinute={nowMinute} />}
     </section>
   );
 }
