@@ -12,12 +12,12 @@ import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/wee
 import { InventoryPanel, portionSummary } from '@/features/weeks/components/inventory-panel';
 import { PublishedVersions } from '@/features/weeks/components/published-versions';
 import { PrepDates } from '@/features/weeks/components/prep-dates';
+import { CopyDayCard } from '@/features/weeks/components/copy-day-card';
 import { SendPlansPanel } from '@/features/mail/components/send-plans-panel';
 import { clientsQuery } from '@/features/clients/api/clients.queries';
 import { membersQuery } from '@/features/auth/api/auth.queries';
 import { PrepDayMailPanel } from '@/features/mail/components/prep-day-mail-panel';
 import { Button } from '@/components/ui/button';
-import { DayOptions, SelectField } from '@/components/ui/field';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
@@ -43,8 +43,6 @@ export function Component() {
   const [conflict, setConflict] = useState<Pending | null>(null);
   const [allergen, setAllergen] = useState<{ edit: CellEdit; message: string } | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const [copyFrom, setCopyFrom] = useState('');
-  const [copyTo, setCopyTo] = useState('');
   const busy = putCells.isPending || putTrays.isPending || cover.isPending || copyDay.isPending || publish.isPending || update.isPending;
 
   // The week's problem list, blocks first: built once per board answer from the day checks.
@@ -202,31 +200,15 @@ export function Component() {
         <PrepDayMailPanel board={board} team={team} />
       </Card>
 
-      <Card>
-        <h2 className="mb-1 text-xl">Copy a day</h2>
-        <p className="mb-3 text-sm text-ink-soft">Every client's plates of one day onto another; archived plates stay behind.</p>
-        <form
-          className="grid items-end gap-3 sm:grid-cols-[1fr_1fr_auto]"
-          onSubmit={(e) => {
-            e.preventDefault();
-            if (!copyFrom || !copyTo) return;
-            const run = (version: number) => copyDay.mutate({ version, fromDate: copyFrom, toDate: copyTo }, { onError: onFail({ kind: 'other', label: `copy ${dayLabel(copyFrom)} to ${dayLabel(copyTo)}`, run }) });
-            withVersion('copy', run);
-          }}
-        >
-          <SelectField label="From" value={copyFrom} onChange={(e) => setCopyFrom(e.target.value)}>
-            <option value="">Choose…</option>
-            <DayOptions days={board.days} />
-          </SelectField>
-          <SelectField label="To (replaces that day)" value={copyTo} onChange={(e) => setCopyTo(e.target.value)}>
-            <option value="">Choose…</option>
-            <DayOptions days={board.days} />
-          </SelectField>
-          <Button type="submit" variant="secondary" busy={copyDay.isPending} disabled={!copyFrom || !copyTo || copyFrom === copyTo}>
-            Copy day
-          </Button>
-        </form>
-      </Card>
+      <CopyDayCard
+        board={board}
+        busy={copyDay.isPending}
+        onCopy={(fromDate, toDate, done) => {
+          const run = (version: number) =>
+            copyDay.mutate({ version, fromDate, toDate }, { onSuccess: done, onError: onFail({ kind: 'other', label: `copy ${dayLabel(fromDate)} to ${dayLabel(toDate)}`, run }) });
+          withVersion('copy', run);
+        }}
+      />
 
       <Card>
         <h2 className="mb-3 text-xl">Portion count</h2>
