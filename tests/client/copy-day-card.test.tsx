@@ -19,7 +19,7 @@ describe('copying a day', () => {
     expect(copyDaySummary(board, '2026-01-06', '2026-01-05')).toBe('Copied Tue, Jan 6 to Mon, Jan 5: Mon, Jan 5 has no meals now. 1 meal stayed behind: "Radish hash plate" is archived.');
     const noneArchived = { ...board, plates: board.plates.map((p) => ({ ...p, archived: false })) };
     expect(copyDaySummary(noneArchived, '2026-01-05', '2026-01-06')).toBe('Copied Mon, Jan 5 to Tue, Jan 6: 3 meals.');
-    const both = { ...board, cells: [...board.cells, cell(9, '2026-01-05', 'breakfast', 3), cell(9, '2026-01-05', 'lunch', 3)] };
+    const both = { ...board, cells: [...board.cells, cell(9, '2026-01-05', 'breakfast', 3), cell(9, '2026-01-05', 'lunch', 3)] } as unknown as BoardDto;
     expect(copyDaySummary(both, '2026-01-05', '2026-01-06')).toBe(
       'Copied Mon, Jan 5 to Tue, Jan 6: 2 meals. 3 meals stayed behind: "Old frittata plate" and "Radish hash plate" are archived.',
     );
