@@ -30,7 +30,8 @@ test('a kitchen assistant who works for two coaches picks the workspace on a pho
   // By keyboard to the demo's (listed by name, it comes after "Birch Lane…"): the app starts again at home there.
   await choice.focus();
   await Promise.all([page.waitForEvent('load'), page.keyboard.press('ArrowDown')]);
-  await expect(page.getByRole('link', { name: /Shopping list for prep/ })).toBeVisible();
+  // (The demo's week, whatever the day: the next prep day may be past late in the week.)
+  await expect(page.getByText('Demo week')).toBeVisible();
   expect((await (await page.request.get('/api/auth/me')).json()).workspaceName).toBe('Oat & Ember Prep (demo)');
   // Remembered: the next sign-in works in the demo's workspace again (the journeys after this one expect it).
   await page.context().clearCookies();
