@@ -34,6 +34,13 @@ export interface BoardDayAnswer {
 
 export type BoardAnswer = Omit<BoardDto, 'cells' | 'checks'> & { cells: BoardCellAnswer[]; checks: BoardDayAnswer[] };
 
+/** What a copied week says besides its board: the meals it copied and those left behind (archived client or plate). */
+export interface WeekCopied {
+  meals: number;
+  leftBehind: number;
+}
+export type CopyWeekAnswer = BoardAnswer & { copied: WeekCopied };
+
 /** A cell for the answer (defaults left out). */
 export function cellAnswer(c: BoardCellDto): BoardCellAnswer {
   const out: BoardCellAnswer = { clientId: c.clientId, date: c.date, slot: c.slot, assemblyId: c.assemblyId };

@@ -174,6 +174,7 @@ describe('plates (assemblies)', () => {
     expect(tuesday.body.cells.map((c: { date: string }) => c.date)).toEqual(['2026-01-05']);
     const copiedWeek = await coach.agent.post(`/api/weeks/${board.week.id}/copy`).send({ startDate: '2026-01-12', prepDate: '2026-01-11' }).expect(201);
     expect(copiedWeek.body.cells).toEqual([]);
+    expect(copiedWeek.body.copied).toEqual({ meals: 0, leftBehind: 1 });
 
     const restored = await coach.agent.put(`/api/assemblies/${plate.id}/archived`).send({ archived: false, version: archived.body.version }).expect(200);
     expect(restored.body.archived).toBe(false);

@@ -312,6 +312,8 @@ describe('the week board', () => {
       .expect(201);
     expect(next.body.week.id).not.toBe(week.id);
     expect(next.body.cells.map((c: { date: string }) => c.date).sort()).toEqual(['2026-01-12', '2026-01-13']);
+    // The copy says what came over: both meals, none left behind.
+    expect(next.body.copied).toEqual({ meals: 2, leftBehind: 0 });
   });
 
   it('an archived client stays on the weeks where they have plates, leaves the others and copied weeks', async () => {
@@ -339,6 +341,7 @@ describe('the week board', () => {
     // A copied week leaves them out; on a week without their plates they are not on the board and cannot be placed.
     const next = (await coach.agent.post(`/api/weeks/${week.id}/copy`).send({ startDate: '2026-01-12', prepDate: '2026-01-11' }).expect(201)).body;
     expect(next.cells).toEqual([]);
+    expect(next.copied).toEqual({ meals: 0, leftBehind: 2 });
     expect(next.clients.map((c: { id: number }) => c.id)).toEqual([other.id]);
     const refused = await fillWeek(coach, next.week.id, next.week.version, client.id, plate.id, ['2026-01-12']);
     expect(refused.status).toBe(400);

@@ -1,6 +1,9 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { MemoryRouter, Route, Routes } from 'react-router-dom';
+import { QueryClientProvider } from '@tanstack/react-query';
 import { Component as WeeksPage } from '@/app/routes/weeks/weeks.route';
+import { Component as WeekPage } from '@/app/routes/weeks/week.route';
 import { jsonResponse, queryClientFor, renderInApp, signedIn } from './render';
 
 // The coach's "New week" form; an invented coach, "today" pinned with fake timers (Wednesday 2 December 2026).
@@ -60,6 +63,37 @@ describe('new week form', () => {
       url: '/api/weeks/4/copy',
       body: { name: '', startDate: '2026-12-07', prepDate: '2026-12-06', secondPrepDate: '2026-12-09' },
     });
+  });
+
+  it('opens the copied week saying what came over and what stayed behind', async () => {
+    const earlier = {
+      id: 4, name: 'Week of 30 Nov', startDate: '2026-11-30', endDate: '2026-12-06', prepDate: '2026-11-29', secondPrepDate: null,
+      publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 14, version: 3,
+    };
+    const copy = { id: 9, name: 'Week of 7 Dec', startDate: '2026-12-07', endDate: '2026-12-13', prepDate: '2026-12-06', secondPrepDate: null, publishedVersion: null, publishedAt: null, changedSincePublished: false, cellCount: 12, version: 1 };
+    const board = { week: copy, days: ['2026-12-07'], slots: ['breakfast'], prepDates: ['2026-12-06'], clients: [], plates: [], cells: [], trays: [], checks: [], inventory: [], cautions: [] };
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string, init?: RequestInit) => {
+        if (init?.method === 'POST') return jsonResponse({ ...board, copied: { meals: 12, leftBehind: 2 } }, 201);
+        if (url === '/api/weeks/9') return jsonResponse(board);
+        return jsonResponse(url === '/api/weeks' ? [earlier] : []);
+      }),
+    );
+    render(
+      <MemoryRouter initialEntries={['/weeks']}>
+        <QueryClientProvider client={queryClientFor(coach)}>
+          <Routes>
+            <Route path="/weeks" element={<WeeksPage />} />
+            <Route path="/weeks/:weekId" element={<WeekPage />} />
+          </Routes>
+        </QueryClientProvider>
+      </MemoryRouter>,
+    );
+    fireEvent.change(await screen.findByLabelText('Start from'), { target: { value: '4' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Copy' }));
+    expect(await screen.findByText('Copied from Week of 30 Nov')).toBeTruthy();
+    expect(screen.getByText(/^12 meals came over, with the tray counts\. 2 meals stayed behind: their client or plate is archived\.$/)).toBeTruthy();
   });
 });
 

@@ -5,7 +5,7 @@ import { addDays, compareIsoDates, daysBetween, shortDate, type IsoDate } from '
 import { cellKey, computeBoard, coveringBatches } from '@shared/domain/week-board.js';
 import type { GlanceDto, SetupCountsDto, WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
 import { preparedRows } from '../../db/prepared.js';
-import type { BoardAnswer } from '@shared/schemas/board-answer.js';
+import type { BoardAnswer, CopyWeekAnswer } from '@shared/schemas/board-answer.js';
 import type { z } from 'zod';
 import type {
   copyDaySchema,
@@ -375,16 +375,18 @@ export async function copyDay(em: EntityManager, actor: Actor, id: number, v: Co
  * A new week with the same board shifted to a new start date, and the same tray counts. Archived clients and archived
  * plates stay behind: a copied week plans the people still coached, with the plates still served.
  */
-export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: CopyWeek): Promise<BoardAnswer> {
+export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: CopyWeek): Promise<CopyWeekAnswer> {
   const source = await findWeek(em, actor, id);
   checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
   const shift = daysBetween(source.startDate, v.startDate);
-  const newId = await em.transactional(async (tx) => {
+  const { newId, copied } = await em.transactional(async (tx) => {
     const w = newWeek(tx, actor, v);
     await tx.flush();
     const mapPrep = (d: IsoDate | null | undefined): IsoDate | null =>
       d && d === source.secondPrepDate ? (v.secondPrepDate ?? null) : null;
-    for (const c of await tx.find(WeekCell, { week: source.id, client: { archivedAt: null }, assembly: { archived: false } })) {
+    const cells = await tx.find(WeekCell, { week: source.id, client: { archivedAt: null }, assembly: { archived: false } });
+    const all = await tx.count(WeekCell, { week: source.id });
+    for (const c of cells) {
       tx.create(WeekCell, {
         week: w.id,
         client: c.client.id,
@@ -401,10 +403,10 @@ export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: C
       tx.create(WeekTray, { week: w.id, tray: t.tray.id, prepDate, trayCount: t.trayCount } as never);
     }
     await tx.flush();
-    return w.id;
+    return { newId: w.id, copied: { meals: cells.length, leftBehind: all - cells.length } };
   });
   em.clear();
-  return getBoard(em, actor, newId);
+  return { ...(await getBoard(em, actor, newId)), copied };
 }
 
 // ── Home page ───────────────────────────────────────────────────────────────────────────────────────

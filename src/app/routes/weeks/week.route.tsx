@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { Link, useNavigate, useParams } from 'react-router-dom';
+import { Link, useLocation, useNavigate, useParams } from 'react-router-dom';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { allergenConflicts } from '@shared/domain/allergens';
 import { flatWarnings } from '@shared/domain/week-check';
@@ -7,7 +7,7 @@ import type { BoardDto, CellInput } from '@shared/schemas/weeks.schema';
 import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import { boardQuery } from '@/features/weeks/api/weeks.queries';
 import { weekKeys } from '@/features/weeks/api/weeks.keys';
-import { useCopyDay, useCoverTrays, useDeleteWeek, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek } from '@/features/weeks/api/use-week-mutations';
+import { useCopyDay, useCoverTrays, useDeleteWeek, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek, type WeekPageState } from '@/features/weeks/api/use-week-mutations';
 import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/weeks/components/board-grid';
 import { InventoryPanel, portionSummary } from '@/features/weeks/components/inventory-panel';
 import { PublishedVersions } from '@/features/weeks/components/published-versions';
@@ -29,6 +29,7 @@ type Pending = { kind: 'cells'; edit: CellEdit } | { kind: 'other'; label: strin
 
 export function Component() {
   const id = Number(useParams().weekId);
+  const copied = (useLocation().state as WeekPageState | null)?.copied;
   const qc = useQueryClient();
   const q = useQuery(boardQuery(id));
   const putCells = usePutCells(id);
@@ -121,6 +122,13 @@ export function Component() {
           {board.week.publishedVersion ? 'Publish a new version' : 'Publish to clients'}
         </Button>
       </PageHeader>
+
+      {copied && (
+        <Notice tone="info" title={`Copied from ${copied.from}`}>
+          {counted(copied.meals, 'meal')} came over, with the tray counts.
+          {copied.leftBehind > 0 && ` ${counted(copied.leftBehind, 'meal')} stayed behind: ${agrees(copied.leftBehind, 'its', 'their')} client or plate is archived.`}
+        </Notice>
+      )}
 
       {conflict && (
         <Notice tone="warn" title="Someone else changed this week since you opened it">

@@ -5,7 +5,7 @@ import { addDays, daysBetween, isIsoDate } from '@shared/domain/iso-date';
 import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { weeksQuery } from '@/features/weeks/api/weeks.queries';
 import { localToday } from '@/lib/dates';
-import { useCopyWeek, useCreateWeek } from '@/features/weeks/api/use-week-mutations';
+import { useCopyWeek, useCreateWeek, type WeekPageState } from '@/features/weeks/api/use-week-mutations';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -59,16 +59,21 @@ export function Component() {
               setErrors({});
               setFormError(null);
               const input = { ...form, secondPrepDate: secondPrepDate || null };
-              const done = {
-                onSuccess: (b: { week: { id: number } }) => navigate(paths.week(b.week.id)),
-                onError: (err: unknown) => {
-                  markShown(err);
-                  if (isApiError(err, 400)) setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k.replace(/^body\./, ''), v])));
-                  else setFormError(errorMessage(err));
-                },
+              const onError = (err: unknown) => {
+                markShown(err);
+                if (isApiError(err, 400)) setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k.replace(/^body\./, ''), v])));
+                else setFormError(errorMessage(err));
               };
-              if (source) copy.mutate({ ...input, fromId: source.id }, done);
-              else create.mutate(input, done);
+              if (source)
+                copy.mutate(
+                  { ...input, fromId: source.id },
+                  {
+                    // The new board says what came over and what stayed behind.
+                    onSuccess: ({ board, copied }) => navigate(paths.week(board.week.id), { state: { copied: { ...copied, from: source.name } } satisfies WeekPageState }),
+                    onError,
+                  },
+                );
+              else create.mutate(input, { onSuccess: (b) => navigate(paths.week(b.week.id)), onError });
             }}
           >
             {(list.data?.length ?? 0) > 0 && (

@@ -9,7 +9,7 @@ import type {
   UpdateWeekInput,
   WeekSummaryDto,
 } from '@shared/schemas/weeks.schema';
-import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
+import { expandBoard, type BoardAnswer, type CopyWeekAnswer, type WeekCopied } from '@shared/schemas/board-answer';
 import { api } from '@/lib/api-client';
 import { weekKeys } from './weeks.keys';
 
@@ -54,12 +54,18 @@ export function useCreateWeek() {
 }
 
 /** A new week from another one's board and tray counts (POST /api/weeks/:id/copy). */
+/** What a week's page is opened with: a week just copied says what came over (router state, not the address). */
+export interface WeekPageState {
+  copied?: WeekCopied & { from: string };
+}
+
 export function useCopyWeek() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ fromId, ...input }: CopyWeekInput & { fromId: number }) => api.post<BoardAnswer>(`/weeks/${fromId}/copy`, input).then(expandBoard),
+    mutationFn: ({ fromId, ...input }: CopyWeekInput & { fromId: number }) =>
+      api.post<CopyWeekAnswer>(`/weeks/${fromId}/copy`, input).then(({ copied, ...answer }) => ({ board: expandBoard(answer), copied })),
     meta: { form: true },
-    onSuccess: (board) => {
+    onSuccess: ({ board }) => {
       qc.setQueryData(weekKeys.detail(board.week.id), board);
       return qc.invalidateQueries({ queryKey: weekKeys.lists() });
     },
