@@ -451,3 +451,44 @@ describe('workspace settings: the net-carb rule', () => {
     expect(bad.body.errors).toHaveProperty('netCarbRule');
   });
 });
+
+describe('GET /api/ingredients.csv (the coach’s own ingredients, in the import’s columns)', () => {
+  it('exports what the import reads back: another workspace importing the file gets the same ingredients', async () => {
+    const coach = await coachWorkspace(app);
+    const other = await coachWorkspace(app);
+    // Two invented ingredients with every column filled, and a name a spreadsheet would run as a formula.
+    const header = 'name,category,kcal,fat_g,sat_fat_g,protein_g,carbs_g,fiber_g,sugars_g,erythritol_g,allulose_g,other_polyols_g,sodium_mg,density_g_per_ml,piece_weights,allergens,purchase_amount,purchase_unit,purchase_label,price_cents,aisle,source,note';
+    const csv = [
+      header,
+      `"Seed bread, sliced (demo)",wraps-breads,265.5,18.25,2.1,11,12.75,8.5,0.8,0,0,1.25,320,0.45,slice:32; heel:20,"sesame; egg",1,each,"1 loaf, 14 slices",799,bakery,package label,"keep frozen, slice from frozen"`,
+      `=Sweet drops (demo),sweeteners,0,0,0,0,100,0,0,60,30,0,5,1.1,,,60,ml,2 fl oz bottle,1099,baking,package label,`,
+    ].join('\r\n');
+    const imported = await coach.agent.post('/api/ingredients/import').attach('file', Buffer.from(csv), { filename: 'mine.csv', contentType: 'text/csv' });
+    expect(imported.body.report ?? []).toEqual([]);
+
+    const res = await coach.agent.get('/api/ingredients.csv').expect(200);
+    expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
+    expect(res.headers['content-disposition']).toBe('attachment; filename=ingredients.csv');
+    const lines = res.text.split('\r\n');
+    expect(lines[0]).toBe(header);
+    // Ordered by name; a formula-like cell is escaped (OWASP CSV injection: a leading quote), decimals as typed.
+    expect(lines.slice(1)).toEqual([
+      `"'=Sweet drops (demo)",sweeteners,0,0,0,0,100,0,0,60,30,0,5,1.1,,,60,ml,2 fl oz bottle,1099,baking,package label,`,
+      `"Seed bread, sliced (demo)",wraps-breads,265.5,18.25,2.1,11,12.75,8.5,0.8,0,0,1.25,320,0.45,heel:20; slice:32,egg; sesame,1,each,"1 loaf, 14 slices",799,bakery,package label,"keep frozen, slice from frozen"`,
+    ]);
+    // (Piece weights in the order PostgreSQL's jsonb keeps keys: shorter names first.)
+    // Only the coach's own rows: no shared reference row, nothing of another workspace.
+    expect(lines).toHaveLength(3);
+
+    // Read back by another workspace's import: the same values (the escaped name keeps its leading quote).
+    await other.agent.post('/api/ingredients/import').attach('file', Buffer.from(res.text), { filename: 'ingredients.csv', contentType: 'text/csv' }).expect(201);
+    const cols = 'name, category, kcal, fat_g, sat_fat_g, protein_g, carbs_g, fiber_g, sugars_g, erythritol_g, allulose_g, other_polyols_g, sodium_mg, density_g_per_ml, piece_weights, allergens, purchase_amount, purchase_unit, purchase_label, price_cents, aisle, source, note';
+    const mine = await sql(`select ${cols} from ingredient where workspace_id = $1 order by name`, [coach.workspaceId]);
+    const theirs = await sql(`select ${cols} from ingredient where workspace_id = $1 order by name`, [other.workspaceId]);
+    expect(theirs).toEqual(mine.map((row) => ({ ...row, name: (row as { name: string }).name.replace(/^=/, "'=") })));
+
+    // The assistant and the client may not take the library away.
+    await (await member(app, coach, 'assistant')).agent.get('/api/ingredients.csv').expect(403);
+  });
+});
+

@@ -196,6 +196,7 @@ export const MATRIX: Record<string, MatrixRow> = {
   'GET /api/ingredients': R(['coach', 'assistant']),
   'POST /api/ingredients': R(['coach'], { body: () => ingredientInput() }),
   'POST /api/ingredients/import': R(['coach']),
+  'GET /api/ingredients.csv': R(['coach']),
   'GET /api/ingredients/:id': R(['coach', 'assistant'], {
     prepare: async (ctx) => {
       const res = await ctx.coachA.agent.post('/api/ingredients').send(ingredientInput());

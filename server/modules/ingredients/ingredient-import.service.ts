@@ -1,4 +1,5 @@
 import Papa from 'papaparse';
+import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { MAJOR_ALLERGENS } from '@shared/domain/allergens.js';
 import {
@@ -225,4 +226,47 @@ export async function importIngredientsCsv(em: EntityManager, actor: Actor, buff
     return rows.map((r) => r.id);
   });
   return { created: ids.length, ids };
+}
+
+const plain = (v: string | number | null | undefined): string => (v === null || v === undefined ? '' : new Decimal(v).toString());
+
+/**
+ * The workspace's own ingredients as a CSV the import reads back (the same columns, per 100 g; piece weights as
+ * "large:50; slice:28", allergens by code), ordered by name: a copy of the coach's data to keep, or to import into
+ * another workspace. Cells a spreadsheet would run as a formula are escaped. The reference rows everyone shares are
+ * not included.
+ */
+export async function exportIngredientsCsv(em: EntityManager, actor: Actor): Promise<string> {
+  const rows = await em.find(Ingredient, { workspace: actor.workspaceId }, { orderBy: { name: 'asc', id: 'asc' } });
+  const data = rows.map((r) => {
+    const cells: Record<ImportColumn, string | number> = {
+      name: r.name,
+      category: r.category,
+      kcal: plain(r.kcal),
+      fat_g: plain(r.fatG),
+      sat_fat_g: plain(r.satFatG),
+      protein_g: plain(r.proteinG),
+      carbs_g: plain(r.carbsG),
+      fiber_g: plain(r.fiberG),
+      sugars_g: plain(r.sugarsG),
+      erythritol_g: plain(r.erythritolG),
+      allulose_g: plain(r.alluloseG),
+      other_polyols_g: plain(r.otherPolyolsG),
+      sodium_mg: plain(r.sodiumMg),
+      density_g_per_ml: plain(r.densityGPerMl),
+      piece_weights: Object.entries(r.pieceWeights ?? {})
+        .map(([name, grams]) => `${name}:${plain(grams)}`)
+        .join('; '),
+      allergens: (r.allergens ?? []).join('; '),
+      purchase_amount: plain(r.purchaseAmount),
+      purchase_unit: r.purchaseUnit ?? '',
+      purchase_label: r.purchaseLabel ?? '',
+      price_cents: r.priceCents ?? '',
+      aisle: r.aisle ?? '',
+      source: r.source,
+      note: r.note ?? '',
+    };
+    return IMPORT_COLUMNS.map((c) => cells[c]);
+  });
+  return Papa.unparse({ fields: [...IMPORT_COLUMNS], data }, { escapeFormulae: true, newline: '\r\n' });
 }

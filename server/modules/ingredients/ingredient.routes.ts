@@ -11,7 +11,7 @@ import { actorOf, allow } from '../../http/authz.js';
 import { HttpError, ValidationError } from '../../http/errors.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
-import { importIngredientsCsv } from './ingredient-import.service.js';
+import { exportIngredientsCsv, importIngredientsCsv } from './ingredient-import.service.js';
 import {
   computeParsedRecipeForActor,
   copyIngredient,
@@ -76,6 +76,14 @@ export function ingredientRoutes() {
       const result = await importIngredientsCsv(emOf(req), actorOf(req), req.file.buffer);
       res.status(201);
       return result;
+    }),
+  );
+
+  r.get(
+    '/ingredients.csv',
+    allow('coach'),
+    validated({}, async (_i, req, res) => {
+      res.type('text/csv; charset=utf-8').attachment('ingredients.csv').send(await exportIngredientsCsv(emOf(req), actorOf(req)));
     }),
   );
 

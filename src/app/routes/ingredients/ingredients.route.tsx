@@ -148,6 +148,14 @@ export function Component() {
         <Card>
           <h2 className="mb-3 text-xl">Import from a CSV file</h2>
           <IngredientImport />
+          <h2 className="mb-2 mt-6 text-xl">Keep a copy</h2>
+          <p className="text-sm text-ink-soft">
+            Your own ingredients (not the shared library) as a CSV in the same columns, to keep or to import into another
+            workspace.{' '}
+            <a href="/api/ingredients.csv" download className="font-bold underline">
+              Download my ingredients (CSV)
+            </a>
+          </p>
         </Card>
       )}
       {!isCoach && <Notice tone="info">Only the coach can add or change ingredients.</Notice>}
