@@ -83,4 +83,11 @@ test('mid-morning the assistant plans the rest of the day again, keeping the tra
   expect(after.settings.done.out).toContain(third.id);
   expect(after.run.trays.find((t) => t.id === third.id)?.outAt).toBe(third.outAt);
   expect(after.run.events.filter((e) => e.trayId === third.id && e.kind === 'fridge-41-by')).toHaveLength(1);
+
+  // Said by mistake: one button plans the whole day from its start again.
+  await page.getByRole('button', { name: 'Plan the whole day from its start again' }).click();
+  await expect(page.getByText(`Planned again from ${from}`, { exact: true })).toBeHidden();
+  const whole = (await (await page.request.get(`/api/weeks/${weekId}/bake-run`)).json()) as { settings: { done: unknown }; run: { trays: Tray[] } };
+  expect(whole.settings.done).toBeNull();
+  expect(whole.run.trays).toHaveLength(before.run.trays.length);
 });

@@ -11,6 +11,7 @@ import { Button } from '@/components/ui/button';
 import { DayOptions, SelectField } from '@/components/ui/field';
 import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
+import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { dayLabel } from '@/lib/dates';
 
 const linkClass = 'inline-flex min-h-11 items-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
@@ -30,6 +31,7 @@ export function Component() {
   const save = useSaveBakeRunSettings(weekId);
   const moveStart = useMoveBakeRunStart(weekId);
   const kitchen = useSetBakeRunKitchen(weekId);
+  const [restartError, setRestartError] = useState<unknown>(null);
 
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
@@ -100,8 +102,43 @@ export function Component() {
       {dto.run && dto.settings.done && (
         <Notice tone="info" title={`Planned again from ${dto.settings.done.from.slice(11)}`}>
           {dto.settings.done.out.length === 1 ? 'One tray already out is' : `${dto.settings.done.out.length} trays already out are`} kept as
-          planned, with their cooling deadlines; {dto.run.trays.length > dto.settings.done.out.length ? 'the rest is planned from then.' : 'every tray is out.'}{' '}
-          To plan the whole day from its start again, untick them under "An oven down or a cook missing?" on prep day.
+          planned, with their cooling deadlines; {dto.run.trays.length > dto.settings.done.out.length ? 'the rest is planned from then.' : 'every tray is out.'}
+          <div className="mt-2">
+            <Button
+              size="sm"
+              variant="secondary"
+              busy={kitchen.isPending}
+              onClick={() => {
+                setRestartError(null);
+                kitchen.mutate(
+                  {
+                    prepDate: dto.prepDate,
+                    cooks: dto.settings.cooks,
+                    ovenIds: dto.ovens.map((o) => o.id),
+                    out: [],
+                    ...(dto.settings.version === null ? {} : { version: dto.settings.version }),
+                  },
+                  {
+                    onError: (e) => {
+                      markShown(e);
+                      setRestartError(e);
+                      if (isApiError(e, 409)) q.refetch();
+                    },
+                  },
+                );
+              }}
+            >
+              Plan the whole day from its start again
+            </Button>
+          </div>
+          {restartError !== null && (
+            <p role="alert" className="mt-2 font-bold text-signal-700">
+              ⚠{' '}
+              {isApiError(restartError, 409)
+                ? 'Someone changed this run meanwhile: this page now shows their version. Try again if it is still needed.'
+                : errorMessage(restartError)}
+            </p>
+          )}
         </Notice>
       )}
       {dto.run && (
@@ -127,9 +164,12 @@ export function Component() {
                   done: dto.settings.done,
                   version: dto.settings.version,
                   saving: kitchen.isPending,
-                  error: kitchen.error,
-                  onChange: (cooks, ovenIds, version, progress) =>
-                    kitchen.mutate({ prepDate: dto.prepDate, cooks, ovenIds, ...progress, ...(version === null ? {} : { version }) }),
+                  // A failure of "Plan the whole day from its start again" is said beside that button.
+                  error: kitchen.error === restartError ? null : kitchen.error,
+                  onChange: (cooks, ovenIds, version, progress) => {
+                    setRestartError(null);
+                    kitchen.mutate({ prepDate: dto.prepDate, cooks, ovenIds, ...progress, ...(version === null ? {} : { version }) });
+                  },
                   onReload: () => {
                     kitchen.reset();
                     q.refetch();
