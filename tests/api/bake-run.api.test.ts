@@ -505,6 +505,16 @@ describe('planning the rest of the day again part-way through', () => {
     expect(all.body.run.events.filter((e: { kind: string }) => e.kind === 'fridge-41-by')).toHaveLength(2);
     expect(all.body.run.sessionMinutes).toBe(77);
 
+    // The coach lowers the tray count to one: the second tray is neither baked nor counted as out any more.
+    const board = (await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body;
+    await coach.agent
+      .put(`/api/weeks/${week.id}/trays`)
+      .send({ version: board.week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 1 }] })
+      .expect(200);
+    const fewer = await assistant.agent.get(`/api/weeks/${week.id}/bake-run`).expect(200);
+    expect(fewer.body.settings.done).toEqual({ from: '2026-01-04T09:20', out: [`${tray.id}-1`] });
+    expect(fewer.body.run.trays.map((t: PlannedTray) => t.id)).toEqual([`${tray.id}-1`]);
+
     // `out: []`: the whole day planned from its start again, with the kitchen as it is now.
     const fresh = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 2, ovenIds: [left.id, right.id], out: [], version: 4 }).expect(200);
     expect(fresh.body.settings).toMatchObject({ done: null, ovenIds: [], version: 5 });

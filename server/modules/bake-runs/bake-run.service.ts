@@ -217,7 +217,8 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
     weekName: weekTitle(week),
     prepDate,
     prepDates: prepDatesOf(week),
-    settings,
+    // The trays still counted as out: those of the week's trays (a tray count lowered since drops the others).
+    settings: { ...settings, done: done ? { from: done.from, out: done.trays.map((t) => t.id) } : null },
     trays: list,
     ovens: ovens.map(presentOven),
     run,
