@@ -6,7 +6,9 @@
  *   h_i        hands-on minutes;                     C   number of cooks;
  *   need_io    progress the tray needs in oven o;    wall_io = ceil(need_io) (progress per minute is ≤ 1);
  *   pre_io     ceil((lo_io − ambient) / heat_o): minutes to heat from ambient to the LOWEST set point tray i
- *              accepts in oven o (any set point it bakes at is at least lo_io);
+ *              accepts in oven o (any set point it bakes at is at least lo_io); for an oven already on at
+ *              start_o, the minutes to move from start_o to the nearer edge of [lo_io, hi_io] (heating or
+ *              cooling, 0 inside): the oven's temperature moves at most heat_o or cool_o °F per minute;
  *   tail_i = min_o wall_io,  work_i = min_o need_io,  start_i = max(h_i, min_o pre_io);
  *   R_o = max over k ≤ capacity_o of k / (1 + c·(k − 1)): the most progress per minute oven o can hand out
  *         (k trays each gain 1 / (1 + c·(k − 1)) per minute).
@@ -14,7 +16,7 @@
  *
  * (A) one tray: T ≥ max_i min_o (max(h_i, pre_io) + wall_io).
  *     Proof: tray i goes in after its prep (≥ h_i, prep starts at ≥ 0) and after its oven reached a set point
- *     ≥ lo_io (≥ pre_io, the oven starts at ambient and heats at most heat_o °F per minute); it then stays in at
+ *     acceptable for it (≥ pre_io, the oven starts at ambient or start_o and moves at its rates); it then stays in at
  *     least wall_io minutes.
  * (B) cooks and tails: for every θ, with S = {i : tail_i ≥ θ}: T ≥ ceil(Σ_S h_i / C) + θ.
  *     Proof: the C cooks together do at most C minutes of prep per minute from minute 0, so the last tray of S to
@@ -32,14 +34,14 @@
  *     n − j + 1 smallest work_i. Oven o hands out at most R_o progress per minute and only after
  *     a_o = max(τ_j, q_o), q_o = min_i pre_io; so T is at least the smallest T with Σ_o R_o·(T − a_o)⁺ ≥ W_j.
  * (E) throughput with the hottest preheat: the same with τ = 0 and W = all work, except that one oven must bake
- *     tray i: it spends ≥ pre_io minutes heating (an oven bakes only at a set point, never while heating), so its
+ *     tray i: it spends ≥ pre_io minutes heating or cooling (an oven bakes only at a set point, never while it changes), so its
  *     a_o is pre_io. For each tray i take the best oven for it (min over o); the bound is the max over i.
  * (F) temperature bands: take pairwise disjoint bands [x, y] of the temperature axis and let s(band) be the
  *     trays whose window [tempF − tol, tempF + tol] lies inside the band. In one oven, trays of different bands
  *     never bake together (no set point serves both; a convection offset shifts every window of that oven by
  *     the same amount, and the cap at maxF only narrows windows). Let τ_ob be the minutes oven o spends at set
  *     points of band b: Σ_o τ_ob ≥ g(b) = max(max tail in b, work of b / max_o R_o). Each oven also spends
- *     ≥ q_o minutes heating if it bakes anything, and ≥ pre_io if it bakes tray i. Over the set U of ovens that
+ *     ≥ q_o minutes heating (or cooling, when on at the start) if it bakes anything, and ≥ pre_io if it bakes tray i. Over the set U of ovens that
  *     bake something: |U|·T ≥ Σ_b g(b) + Σ_U q_o + max_i min_o (pre_io − q_o). U is unknown, so the bound is the
  *     minimum over all U (see bestOverOvenSets). The bands are chosen by dynamic programming over window end
  *     points to maximise Σ_b g(b). With one oven this is "heat to the hottest, then bake each temperature group

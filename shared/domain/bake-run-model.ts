@@ -135,6 +135,8 @@ export function findBakeRunIssues(input: BakeRunInput): BakeRunIssue[] {
       if (!Number.isInteger(oven[key]) || oven[key] < 1) add(['ovens', o, key], 'Must be a whole number of at least 1.');
     for (const key of ['heatFPerMin', 'coolFPerMin', 'maxF'] as const)
       if (!positive(oven[key])) add(['ovens', o, key], 'Must be more than 0.');
+    if (oven.startF !== undefined && !(Number.isFinite(oven.startF) && oven.startF >= 0 && oven.startF <= oven.maxF))
+      add(['ovens', o, 'startF'], 'The oven cannot start above its maximum (or below 0 °F).');
   });
   if (input.trays.length === 0) add(['trays'], 'At least one tray.');
   input.trays.forEach((tray, i) => {
@@ -183,6 +185,25 @@ export function preheatMinutes(ambientF: number, toF: number, oven: Pick<BakeOve
   return toF > ambientF ? changeoverMinutes(ambientF, toF, { heatFPerMin: oven.heatFPerMin, coolFPerMin: 1 }) : 0;
 }
 
+/**
+ * Minutes before an oven can first be at `toF`: preheated from the kitchen's temperature, or, for an oven already
+ * on at `startF`, changed from there (heating or cooling).
+ */
+export function firstSetPointMinutes(ambientF: number, toF: number, oven: Pick<BakeOven, 'heatFPerMin' | 'coolFPerMin' | 'startF'>): number {
+  return oven.startF === undefined ? preheatMinutes(ambientF, toF, oven) : changeoverMinutes(oven.startF, toF, oven);
+}
+
+/**
+ * Minutes before an oven can first be at a set point in [lowF, highF] (a tray's window): the preheat to its low
+ * edge from the kitchen's temperature, or, for an oven already on at `startF`, the change to the nearer edge.
+ */
+export function firstWindowMinutes(ambientF: number, lowF: number, highF: number, oven: Pick<BakeOven, 'heatFPerMin' | 'coolFPerMin' | 'startF'>): number {
+  if (oven.startF === undefined) return preheatMinutes(ambientF, lowF, oven);
+  if (oven.startF < lowF) return changeoverMinutes(oven.startF, lowF, oven);
+  if (oven.startF > highF) return changeoverMinutes(oven.startF, highF, oven);
+  return 0;
+}
+
 /** Crowding multiplier for k trays in an oven: 1 + c·(k − 1). */
 export function crowdingFactor(k: number, rules: Pick<BakeRunRules, 'crowdingPerExtraTray'>): number {
   return new Decimal(rules.crowdingPerExtraTray).times(k - 1).plus(1).toNumber();
@@ -217,7 +238,7 @@ export interface PreparedBakeRun {
   /** Distinct block set points per oven, the set point class of each tray, and tables over classes. */
   setPoint: Float64Array[];
   spOf: Int32Array[];
-  /** preheatSp[o][a]: ambient → class a; changeSp[o][a·K + b]: class a → class b. */
+  /** preheatSp[o][a]: ambient (or the oven's `startF`) → class a; changeSp[o][a·K + b]: class a → class b. */
   preheatSp: Int32Array[];
   changeSp: Int32Array[];
   /** joinsSp[o][a·n + i] = 1 when tray i can bake at set point class a. */
@@ -280,14 +301,14 @@ export function prepareBakeRun(input: BakeRunInput): PreparedBakeRun {
       nd[i] = needMin.toNumber();
       ndMax[i] = timeFactor.times(tray.maxMinutes).toNumber();
       wall[i] = needMin.ceil().toNumber();
-      pLow[i] = preheatMinutes(ambientF, Math.min(l[i], oven.maxF), oven);
+      pLow[i] = firstWindowMinutes(ambientF, Math.min(l[i], oven.maxF), Math.min(h[i], oven.maxF), oven);
       const point = Decimal.min(adj, oven.maxF).toNumber();
       let idx = points.indexOf(point);
       if (idx < 0) idx = points.push(point) - 1;
       sp[i] = idx;
     });
     const k = points.length;
-    const pre = Int32Array.from(points, (p) => preheatMinutes(ambientF, p, oven));
+    const pre = Int32Array.from(points, (p) => firstSetPointMinutes(ambientF, p, oven));
     const change = new Int32Array(k * k);
     for (let a = 0; a < k; a++)
       for (let b = 0; b < k; b++) change[a * k + b] = changeoverMinutes(points[a], points[b], oven);

@@ -25,6 +25,11 @@ export interface BakeOven {
   coolFPerMin: number;
   /** Highest set point the oven reaches, °F. */
   maxF: number;
+  /**
+   * The oven's temperature when the run starts, °F, when it is already on (the rest of a prep day planned again
+   * while it is hot); absent: it starts at the kitchen's `ambientF` and is preheated.
+   */
+  startF?: number;
 }
 
 export interface BakeTray {
@@ -148,6 +153,8 @@ export interface BakeTrayPlan {
 
 export interface BakeSetPointPlan {
   tempF: number;
+  /** The first set point of an oven that was already on (`startF`): the temperature it changed from. */
+  fromF?: number;
   /** Preheat or changeover start (local time) and its minute; `ready*` when the oven is at temperature. */
   changeAt: string;
   changeMinute: number;

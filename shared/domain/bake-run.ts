@@ -133,7 +133,11 @@ function buildResult(
       const tempF = prep.setPoint[o][block.sp];
       let changeMinute = block.changeStart;
       let readyMinute = block.ready;
-      if (b === 0) {
+      const startF = prep.ovens[o].startF;
+      if (b === 0 && startF !== undefined) {
+        // An oven already on: its first set point is a change from where it is, made at once.
+        push(changeMinute, 'setpoint-change', o, null, tempF, { fromF: startF });
+      } else if (b === 0) {
         // Preheat just in time: ready when the first tray goes in (never later than the simulated readiness).
         readyMinute = trace.inT[seq[0]];
         changeMinute = readyMinute - prep.preheatSp[o][block.sp];
@@ -146,6 +150,7 @@ function buildResult(
       for (const i of seq.slice(block.from, block.to)) setOf[i] = tempF;
       return {
         tempF,
+        ...(b === 0 && startF !== undefined ? { fromF: startF } : {}),
         changeAt: at(changeMinute),
         changeMinute,
         readyAt: at(readyMinute),

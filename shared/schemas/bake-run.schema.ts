@@ -21,6 +21,7 @@ export const bakeOvenSchema = z.object({
   heatFPerMin: z.number().positive({ message: 'The heating rate must be more than 0.' }).max(200),
   coolFPerMin: z.number().positive({ message: 'The cooling rate must be more than 0.' }).max(200),
   maxF: z.number().positive().max(1000),
+  startF: z.number().min(0).max(1000).optional(),
 });
 
 export const bakeTraySchema = z

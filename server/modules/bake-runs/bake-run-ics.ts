@@ -19,7 +19,7 @@ export function bakeRunIcs(run: BakeRunResult, meta: { calendarName: string; uid
 
   for (const oven of run.ovens) {
     oven.setPoints.forEach((sp, i) => {
-      const what = i === 0 ? `Preheat ${oven.name} to ${deg(sp.tempF)}` : `${oven.name}: change to ${deg(sp.tempF)}`;
+      const what = i === 0 && sp.fromF === undefined ? `Preheat ${oven.name} to ${deg(sp.tempF)}` : `${oven.name}: change to ${deg(sp.tempF)}`;
       add(`oven-${oven.name}-${i}`, sp.changeAt, sp.readyAt === sp.changeAt ? sp.changeAt : sp.readyAt, what);
     });
   }

@@ -22,7 +22,7 @@ function what(e: BakeEvent, trayName: (id: string | null) => string): string {
     case 'preheat':
       return `Preheat to ${deg(e.tempF)}`;
     case 'setpoint-change':
-      return `Change set point from ${deg(e.fromF)} to ${deg(e.tempF)}`;
+      return e.fromF === e.tempF ? `Stays at ${deg(e.tempF)}` : `Change set point from ${deg(e.fromF)} to ${deg(e.tempF)}`;
     case 'ready':
       return `Oven at ${deg(e.tempF)}`;
     case 'hands-on-start':

@@ -43,9 +43,13 @@ export function checkBakeRun(input: BakeRunInput, result: BakeRunResult): string
   for (const oven of input.ovens) {
     const evs = result.events.filter((e) => e.oven === oven.name && e.trayId === null);
     const list: Segment[] = [];
-    let current = input.ambientF;
+    // An oven already on (startF) starts there and is never "preheated"; the others start at the kitchen's temperature.
+    let current = oven.startF ?? input.ambientF;
     let changeAt = -1;
     let target = NaN;
+    if (oven.startF !== undefined && evs[0]?.kind === 'preheat') problems.push(`${oven.name}: preheated, but it was on at ${oven.startF}`);
+    if (oven.startF !== undefined && evs[0]?.kind === 'setpoint-change' && evs[0].fromF !== oven.startF)
+      problems.push(`${oven.name}: first change from ${evs[0].fromF}, but it was at ${oven.startF}`);
     for (const e of evs) {
       if (e.kind === 'preheat' || e.kind === 'setpoint-change') {
         if (e.kind === 'preheat' && list.length > 0) problems.push(`${oven.name}: second preheat`);

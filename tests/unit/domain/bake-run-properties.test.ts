@@ -1,5 +1,5 @@
 /**
- * Properties of the bake-run scheduler on random runs (fast-check):
+ * Properties of the bake-run scheduler on random runs (fast-check), with ovens cold or already on:
  * - every plan obeys the model (independent checker: capacity, set point within tolerance and steady while a tray
  *   is in, at least the adjusted minimum bake with crowding counted minute by minute and a pull at the first
  *   minute it is reached, cooks one task at a time, prep before the oven, events in time order);
@@ -26,6 +26,8 @@ const ovenArb = fc.record({
   heatFPerMin: fc.constantFrom(10, 12.5, 20, 25, 30),
   coolFPerMin: fc.constantFrom(8, 10, 15),
   maxF: fc.constantFrom(450, 500, 550),
+  // An oven already on when the run starts (a day planned again part-way), or cold.
+  startF: fc.option(fc.constantFrom(300, 350, 400, 425, 450), { nil: undefined }),
 });
 
 const trayArb = fc.record({
@@ -50,7 +52,7 @@ function runArb(maxTrays: number, maxOvens: number): fc.Arbitrary<BakeRunInput> 
       start: '2026-12-06T08:00',
       cooks,
       ambientF,
-      ovens: ovens.map((o, k) => ({ name: `Oven ${k + 1}`, ...o })),
+      ovens: ovens.map(({ startF, ...o }, k) => ({ name: `Oven ${k + 1}`, ...o, ...(startF === undefined ? {} : { startF }) })),
       trays: trays.map(({ extra, toleranceF, ...t }, k) => ({
         id: `t${String(k).padStart(2, '0')}`,
         name: `Tray ${k}`,

@@ -282,3 +282,48 @@ describe('input errors', () => {
     }
   });
 });
+
+describe('an oven already on when the run starts (the rest of a day planned again)', () => {
+  // One place, heat 25 °F/min, cool 15 °F/min, a 350 °F tray of 20 min (±10 °F), nothing to prep. Worked by hand:
+  //   on at 350: no change → in at 0, out at 20 (cold, it would preheat ceil(280/25) = 12 and end at 32);
+  //   on at 425: cool 75/15 = 5 → in at 5, out at 25; the bound: reach 360 from 425 takes ceil(65/15) = 5, + 20 = 25;
+  //   on at 300: heat 50/25 = 2 → in at 2, out at 22.
+  const input = (startF?: number) => run([oven(startF === undefined ? {} : { startF })], [tray('mild', 350, 20)]);
+
+  it.each([
+    [350, 0, 20, 'stays'],
+    [425, 5, 25, 'cools'],
+    [300, 2, 22, 'heats'],
+  ])('on at %i °F: in at minute %i, out at %i (it %s)', (startF, inMinute, outMinute) => {
+    const r = planBakeRun(input(startF));
+    expect(checkBakeRun(input(startF), r)).toEqual([]);
+    expect([byId(r, 'mild').inMinute, byId(r, 'mild').outMinute]).toEqual([inMinute, outMinute]);
+    // A change from where it is, never a preheat; the set point says where it came from.
+    const first = r.events.find((e) => e.trayId === null)!;
+    expect(first).toMatchObject({ kind: 'setpoint-change', minute: 0, fromF: startF, tempF: 350 });
+    expect(r.events.some((e) => e.kind === 'preheat')).toBe(false);
+    expect(r.ovens[0].setPoints[0]).toMatchObject({ tempF: 350, fromF: startF, changeMinute: 0, readyMinute: inMinute });
+    expect(r.lowerBoundMinutes).toBeLessThanOrEqual(r.sessionMinutes);
+  });
+
+  it('the bound counts the cooling of a hot oven (on at 425: 5 + 20 = 25, the plan is the shortest)', () => {
+    const r = planBakeRun(input(425));
+    expect(r.lowerBoundMinutes).toBe(25);
+    expect(r.provenOptimal).toBe(true);
+  });
+
+  it('cold, the same tray is preheated (unchanged): in at 12, out at 32', () => {
+    const r = planBakeRun(input());
+    expect([byId(r, 'mild').inMinute, byId(r, 'mild').outMinute]).toEqual([12, 32]);
+    expect(r.events[0]).toMatchObject({ kind: 'preheat', tempF: 350 });
+  });
+
+  it('an oven cannot start above its maximum (400 naming ovens.0.startF)', () => {
+    expect(() => planBakeRun(run([oven({ startF: 600 })], [tray('mild', 350, 20)]))).toThrow(BakeRunInputError);
+    try {
+      planBakeRun(run([oven({ startF: 600 })], [tray('mild', 350, 20)]));
+    } catch (e) {
+      expect((e as BakeRunInputError).issues.map((i) => i.path)).toContainEqual(['ovens', 0, 'startF']);
+    }
+  });
+});

@@ -8,7 +8,7 @@ export function describeEvent(e: BakeEvent, trayName: (id: string | null) => str
     case 'preheat':
       return `Preheat ${e.oven} to ${t(e.tempF)}`;
     case 'setpoint-change':
-      return `${e.oven}: change from ${t(e.fromF)} to ${t(e.tempF)}`;
+      return e.fromF === e.tempF ? `${e.oven}: stays at ${t(e.tempF)}` : `${e.oven}: change from ${t(e.fromF)} to ${t(e.tempF)}`;
     case 'ready':
       return `${e.oven} at ${t(e.tempF)}`;
     case 'hands-on-start':

@@ -37,8 +37,8 @@ export function timelineLanes(run: BakeRunResult, unit: TempUnit): Lane[] {
           row: 0,
           from: sp.changeMinute,
           to: sp.readyMinute,
-          label: `${i === 0 ? 'Preheat' : 'Change'} ${formatTemp(sp.tempF, unit)}`,
-          title: `${o.name}: ${i === 0 ? 'preheat' : 'change'} to ${formatTemp(sp.tempF, unit)}, ${clock(sp.changeAt)}–${clock(sp.readyAt)}`,
+          label: `${i === 0 && sp.fromF === undefined ? 'Preheat' : 'Change'} ${formatTemp(sp.tempF, unit)}`,
+          title: `${o.name}: ${i === 0 && sp.fromF === undefined ? 'preheat' : 'change'} to ${formatTemp(sp.tempF, unit)}, ${clock(sp.changeAt)}–${clock(sp.readyAt)}`,
           className: 'border-2 border-dashed border-oven-4 bg-paper-card text-ink',
         })),
       ...run.trays
