@@ -2,6 +2,7 @@ import Decimal from 'decimal.js';
 import type { BakeEvent, BakeOvenPlan, BakeRunResult, BakeRunRules, BakeTrayPlan } from './bake-run-types.js';
 import { BAKE_RUN_CAUTIONS, KIND_ORDER } from './bake-run.js';
 import { addLocalMinutes, parseLocalMinutes } from './bake-run-time.js';
+import { toCelsiusRounded } from './temperature.js';
 
 /**
  * A run planned again part-way through prep day (an oven failed at ten, a cook went home): the trays already out of
@@ -15,6 +16,22 @@ export interface BakeRunDone {
   trays: BakeTrayPlan[];
   /** Those trays' own steps: hands-on, in, check, out and the cooling deadlines. */
   events: BakeEvent[];
+  /** The ovens at a set point at `from` (by name, °F): the rest starts them there instead of preheating them. */
+  ovenF?: Record<string, number>;
+}
+
+/**
+ * The ovens of a plan that are at a set point at local time `at` (ready, and not yet past the last tray of that set
+ * point), with that set point. An oven changing temperature then, or done with its trays, is left out (its
+ * temperature is not known: the rest plans it from the kitchen's temperature).
+ */
+export function ovensAt(run: Pick<BakeRunResult, 'ovens'>, at: string): Record<string, number> {
+  const out: Record<string, number> = {};
+  for (const o of run.ovens) {
+    const sp = o.setPoints.find((s) => s.readyAt <= at && at <= s.endAt);
+    if (sp) out[o.name] = sp.tempF;
+  }
+  return out;
 }
 
 /** The trays `ids` of a run with their own steps, to keep when the rest is planned again. */
@@ -56,6 +73,13 @@ function retimeOven(o: BakeOvenPlan, start: string): BakeOvenPlan {
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
+function hotSaid(ovenF: Record<string, number> | undefined): string {
+  const hot = Object.entries(ovenF ?? {});
+  if (hot.length === 0) return 'each oven from cold (one still hot is ready sooner)';
+  const names = hot.map(([name, f]) => `${name} from ${f} °F (${toCelsiusRounded(f)} °C)`).join(', ');
+  return `${names} (on at that time), any other oven from cold`;
+}
+
 /**
  * The day's run as one plan again: the trays already out (as planned) and the rest (planned from `done.from`, or
  * null when nothing is left to bake), every minute counted from the day's `start`. Ovens that baked only kept trays
@@ -79,7 +103,7 @@ export function resumeRun(start: string, done: BakeRunDone, rest: BakeRunResult 
   const kept = plural(done.trays.length, 'tray already out is', 'trays already out are');
   const said = rest
     ? `Planned again from ${done.from.slice(11)}: ${kept} kept as planned (their cooling deadlines still run); ` +
-      `${plural(rest.trays.length, 'tray is', 'trays are')} planned from then, each oven from cold, so one that is already hot is ready sooner.`
+      `${plural(rest.trays.length, 'tray is', 'trays are')} planned from then, ${hotSaid(done.ovenF)}.`
     : `Every tray is out of the oven: ${kept} kept as planned (their cooling deadlines still run).`;
   return {
     start,

@@ -520,4 +520,33 @@ describe('planning the rest of the day again part-way through', () => {
     expect(fresh.body.settings).toMatchObject({ done: null, ovenIds: [], version: 5 });
     expect(fresh.body.run.trays.every((t: PlannedTray) => t.inAt < '2026-01-04T08:40')).toBe(true);
   });
+
+  it('an oven still at its set point when the rest starts is not preheated again', async () => {
+    const { coach, assistant, week } = await twoTrayWeek();
+    await makeOven(coach, { name: 'Left', racks: 1, traysPerRack: 1 });
+    await makeOven(coach, { name: 'Right', racks: 1, traysPerRack: 1 });
+    const planned = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ start: '2026-01-04T08:00', cooks: 1, ovenIds: [] }).expect(200);
+    // As in the test above: the first tray 08:12–08:37 in one oven, the second 08:20–08:45 in the other.
+    const [first, second] = planned.body.run.trays as PlannedTray[];
+    const ovens = (await coach.agent.get('/api/ovens').expect(200)).body as { id: number; name: string }[];
+    const working = ovens.find((o) => o.name === first.oven)!;
+
+    // 08:30: the second tray's oven fails with it inside; the first stays in its oven until 08:37, so the rest is
+    // planned from 08:37, when that oven is still at 350 °F. Worked by hand: the second tray is prepped again
+    // 08:37–08:47 and goes straight in (no preheat: cold, it would wait for ceil(280 / 25) = 12 minutes, until 08:49),
+    // out at 08:47 + 25 = 09:12.
+    const hot = await assistant.agent
+      .put(`/api/weeks/${week.id}/bake-run/kitchen`)
+      .send({ cooks: 1, ovenIds: [working.id], out: [first.id], from: '2026-01-04T08:37', version: 1 })
+      .expect(200);
+    expect(timesOf(hot.body.run.trays)).toEqual([
+      [first.id, first.oven, '2026-01-04T08:12', '2026-01-04T08:37'],
+      [second.id, first.oven, '2026-01-04T08:47', '2026-01-04T09:12'],
+    ]);
+    const setPoints = hot.body.run.ovens.find((o: { name: string }) => o.name === first.oven).setPoints;
+    expect(setPoints).toEqual([expect.objectContaining({ tempF: 350, fromF: 350, changeAt: '2026-01-04T08:37', readyAt: '2026-01-04T08:37' })]);
+    expect(hot.body.run.events.some((e: { kind: string }) => e.kind === 'preheat')).toBe(false);
+    expect(hot.body.run.cautions[0]).toContain(`${first.oven} from 350 °F (177 °C) (on at that time), any other oven from cold`);
+  });
 });
+

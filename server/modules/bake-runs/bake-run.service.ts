@@ -6,7 +6,7 @@ import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-run-types.js';
 import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
 import { longDate } from '@shared/domain/iso-date.js';
-import { resumeRun, takeDone, type BakeRunDone } from '@shared/domain/bake-run-resume.js';
+import { ovensAt, resumeRun, takeDone, type BakeRunDone } from '@shared/domain/bake-run-resume.js';
 import { resolveBakeRunRules } from '@shared/domain/bake-run-model.js';
 import type {
   BakeRunKitchenValues,
@@ -182,7 +182,7 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
   const { list, schedulerTrays, used } = await weekTrays(em, week, prepDate, settings, rules);
   // Planned again part-way: the trays already out stay as planned (those the week still bakes), the rest is planned.
   const ids = new Set(schedulerTrays.map((t) => t.id));
-  const kept = row?.done ? { from: row.done.from, ...takeDone(row.done, [...ids]) } : null;
+  const kept = row?.done ? { from: row.done.from, ovenF: row.done.ovenF, ...takeDone(row.done, [...ids]) } : null;
   const done: BakeRunDone | null = kept && kept.trays.length ? kept : null;
   const toBake = done ? schedulerTrays.filter((t) => !done.trays.some((d) => d.id === t.id)) : schedulerTrays;
   const problems: string[] = [];
@@ -195,18 +195,21 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
     if (done && toBake.length === 0) {
       run = resumeRun(settings.start, done, null, resolveBakeRunRules(derived.rules));
     } else {
+      // Planned again part-way: an oven at a set point then starts the rest from it (if it still can reach it).
+      const hot = Object.entries(done?.ovenF ?? {}).filter(([name, f]) => ovens.some((o) => o.name === name && f <= num(o.maxF)));
+      const startOf = new Map(hot);
       const parsed = bakeRunInputSchema.safeParse({
         start: done ? done.from : settings.start,
         cooks: settings.cooks,
         ambientF: 70,
-        ovens: ovens.map(ovenInput),
+        ovens: ovens.map((o) => (startOf.has(o.name) ? { ...ovenInput(o), startF: startOf.get(o.name) } : ovenInput(o))),
         trays: toBake,
         rules: derived.rules,
       } satisfies BakeRunRequestBody);
       if (parsed.success) {
         const planned = await planBakeRunOffThread(parsed.data);
         const whole = { ...planned, cautions: [...derived.cautions, ...planned.cautions] };
-        run = done ? resumeRun(settings.start, done, whole, whole.rules) : whole;
+        run = done ? resumeRun(settings.start, { ...done, ovenF: Object.fromEntries(hot) }, whole, whole.rules) : whole;
       } else {
         problems.push(...describeIssues(parsed.error, toBake));
       }
@@ -320,7 +323,10 @@ export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: n
     const inRun = new Set(current.run.trays.map((t) => t.id));
     const unknown = v.out.filter((id) => !inRun.has(id));
     if (unknown.length) throw ValidationError.field('out', `No tray ${unknown.join(', ')} in this run.`);
-    return { ...change, done: { from: v.from, ...takeDone(current.run, [...new Set(v.out)]) } };
+    // The ovens that work and are at a set point at `from` in the plan the kitchen followed start the rest there.
+    const working = new Set(ovens.filter((o) => chosen.includes(o.id)).map((o) => o.name));
+    const ovenF = Object.fromEntries(Object.entries(ovensAt(current.run, v.from)).filter(([name]) => working.has(name)));
+    return { ...change, done: { from: v.from, ...takeDone(current.run, [...new Set(v.out)]), ovenF } };
   });
 }
 

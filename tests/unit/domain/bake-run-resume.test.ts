@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { FOOD_CODE_COOLING, planBakeRun } from '@shared/domain/bake-run';
 import { resolveBakeRunRules } from '@shared/domain/bake-run-model';
-import { minutesBetween, resumeRun, takeDone } from '@shared/domain/bake-run-resume';
+import { minutesBetween, ovensAt, resumeRun, takeDone } from '@shared/domain/bake-run-resume';
 import { addLocalMinutes } from '@shared/domain/bake-run-time';
 import type { BakeOven, BakeRunInput, BakeRunResult, BakeTray } from '@shared/domain/bake-run-types';
 import { checkBakeRun } from './bake-run-check';
@@ -90,7 +90,7 @@ describe('planning the rest of a prep day again', () => {
     expect(joined.lowerBoundMinutes).toBe(offset + rest.lowerBoundMinutes);
     expect(joined.sessionMinutes).toBeGreaterThanOrEqual(joined.lowerBoundMinutes);
     expect(joined.cautions[0]).toBe(
-      `Planned again from ${from.slice(11)}: 1 tray already out is kept as planned (their cooling deadlines still run); 3 trays are planned from then, each oven from cold, so one that is already hot is ready sooner.`,
+      `Planned again from ${from.slice(11)}: 1 tray already out is kept as planned (their cooling deadlines still run); 3 trays are planned from then, each oven from cold (one still hot is ready sooner).`,
     );
     expect(joined.cautions.slice(1)).toEqual(rest.cautions);
   });
@@ -104,6 +104,23 @@ describe('planning the rest of a prep day again', () => {
     expect(consistent(all)).toEqual([]);
     expect(all).toMatchObject({ lowerBoundMinutes: whole.sessionMinutes, gapPct: 0, provenOptimal: false });
     expect(all.cautions[0]).toMatch(/^Every tray is out of the oven: 4 trays already out are kept as planned/);
+  });
+
+  it('knows which ovens are at a set point at a time: ready, and not past the last tray of it', () => {
+    const left = whole.ovens.find((o) => o.setPoints.length)!;
+    const sp = left.setPoints[0];
+    expect(ovensAt(whole, sp.readyAt)).toMatchObject({ [left.name]: sp.tempF });
+    expect(ovensAt(whole, sp.endAt)).toMatchObject({ [left.name]: sp.tempF });
+    // Before it is ready (preheating or changing) its temperature is not known.
+    if (sp.changeMinute < sp.readyMinute) expect(ovensAt(whole, addLocalMinutes(sp.readyAt, -1))[left.name]).toBeUndefined();
+    // Past its last set point it is done (switched off or cooling): not counted as on.
+    const last = left.setPoints[left.setPoints.length - 1];
+    expect(ovensAt(whole, addLocalMinutes(last.endAt, 1))[left.name]).toBeUndefined();
+  });
+
+  it('says which ovens start the rest hot', () => {
+    const hot = resumeRun(day.start, { ...kept, ovenF: { Right: 350 } }, rest, rest.rules);
+    expect(hot.cautions[0]).toMatch(/planned from then, Right from 350 °F \(177 °C\) \(on at that time\), any other oven from cold\.$/);
   });
 
   it('counts minutes across midnight (a run that goes on past it)', () => {

@@ -303,7 +303,7 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
               setForm((f) => ({ ...f, from: e.target.value }));
             }}
             error={fieldErrors.from?.[0]}
-            hint="Every oven is planned from cold again, so one that is already hot is ready sooner."
+            hint="An oven still at its set point then starts from it; any other is planned from cold."
             className="w-44"
           />
         ) : (
