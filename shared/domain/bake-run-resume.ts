@@ -43,6 +43,27 @@ export function takeDone(run: Pick<BakeRunResult, 'trays' | 'events'>, ids: read
   };
 }
 
+/**
+ * A kept tray that came out at another time than planned (`outAt`, local): its time out, its check and its cooling
+ * steps move with it, so the cooling deadlines count from when it really came out (FDA Food Code §3-501.14: 2 h to
+ * 70 °F, 6 h in all to 41 °F); its prep and its time in stay.
+ */
+export function movedOut(done: Pick<BakeRunDone, 'trays' | 'events'>, id: string, outAt: string): Pick<BakeRunDone, 'trays' | 'events'> {
+  const tray = done.trays.find((t) => t.id === id);
+  if (!tray) return done;
+  const delta = minutesBetween(tray.outAt, outAt);
+  if (delta === 0) return done;
+  const moves = new Set<BakeEvent['kind']>(['first-check', 'tray-out', 'cooling-start', 'cool-to-70-by', 'fridge-41-by']);
+  return {
+    trays: done.trays.map((t) =>
+      t.id === id ? { ...t, outAt, outMinute: t.outMinute + delta, bakeMinutes: t.bakeMinutes + delta } : t,
+    ),
+    events: done.events.map((e) =>
+      e.trayId === id && moves.has(e.kind) ? { ...e, at: addLocalMinutes(e.at, delta), minute: e.minute + delta } : e,
+    ),
+  };
+}
+
 /** Whole minutes from one local reading to another. */
 export function minutesBetween(from: string, to: string): number {
   const a = parseLocalMinutes(from);

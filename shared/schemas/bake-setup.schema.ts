@@ -161,6 +161,16 @@ export const bakeRunKitchenSchema = z.object({
    * planned from `from`. Empty: the whole day is planned from its start again. Absent: what was said before stays.
    */
   out: z.array(z.string().regex(/^\d{1,9}-\d{1,3}$/, { message: 'Give the trays by their id in the run.' })).max(200).optional(),
+  /**
+   * A tray of `out` that came out at another time than planned: its id → when ("YYYY-MM-DDTHH:mm"); its cooling
+   * deadlines count from then.
+   */
+  outAt: z
+    .record(
+      z.string().regex(/^\d{1,9}-\d{1,3}$/, { message: 'Give the trays by their id in the run.' }),
+      z.string().refine(isLocalDateTime, { message: 'Give the time it came out, "YYYY-MM-DDTHH:mm".' }),
+    )
+    .optional(),
   /** When the rest starts ("YYYY-MM-DDTHH:mm" on the prep day); needed with trays out. */
   from: z.string().refine(isLocalDateTime, { message: 'Give the time to plan the rest from, "YYYY-MM-DDTHH:mm".' }).optional(),
   version: version.optional(),

@@ -548,5 +548,42 @@ describe('planning the rest of the day again part-way through', () => {
     expect(hot.body.run.events.some((e: { kind: string }) => e.kind === 'preheat')).toBe(false);
     expect(hot.body.run.cautions[0]).toContain(`${first.oven} from 350 °F (177 °C) (on at that time), any other oven from cold`);
   });
+
+  it('a tray that came out at another time keeps that time, and its cooling deadlines count from it', async () => {
+    const { coach, assistant, week } = await twoTrayWeek();
+    await makeOven(coach, { name: 'Left', racks: 1, traysPerRack: 1 });
+    await makeOven(coach, { name: 'Right', racks: 1, traysPerRack: 1 });
+    const planned = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ start: '2026-01-04T08:00', cooks: 1, ovenIds: [] }).expect(200);
+    const [first, second] = planned.body.run.trays as PlannedTray[];
+    const ovenIds = ((await coach.agent.get('/api/ovens').expect(200)).body as { id: number }[]).map((o) => o.id);
+    const send = (body: Record<string, unknown>) => assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 1, ovenIds, from: '2026-01-04T08:50', version: 1, ...body });
+
+    // Refused, naming the tray's time: a tray not ticked as out, a time before it went in (08:12), another day.
+    const notOut = await send({ out: [first.id], outAt: { [second.id]: '2026-01-04T08:48' } }).expect(400);
+    expect(Object.keys(notOut.body.errors)).toEqual([`outAt.${second.id}`]);
+    const beforeIn = await send({ out: [first.id], outAt: { [first.id]: '2026-01-04T08:05' } }).expect(400);
+    expect(beforeIn.body.errors[`outAt.${first.id}`][0]).toMatch(/went in at 08:12/);
+    await send({ out: [first.id], outAt: { [first.id]: '2026-01-05T08:41' } }).expect(400);
+
+    // The first tray came out at 08:41, four minutes after its planned 08:37: in at 08:12 still, 29 minutes in, and
+    // its cooling deadlines 2 h and 6 h after 08:41 (FDA Food Code §3-501.14), not after 08:37.
+    const moved = await send({ out: [first.id], outAt: { [first.id]: '2026-01-04T08:41' } }).expect(200);
+    const kept = moved.body.run.trays.find((t: PlannedTray) => t.id === first.id);
+    expect(kept).toMatchObject({ inAt: '2026-01-04T08:12', outAt: '2026-01-04T08:41', inMinute: 12, outMinute: 41, bakeMinutes: 29 });
+    const steps = moved.body.run.events
+      .filter((e: { trayId: string }) => e.trayId === first.id)
+      .map((e: { kind: string; at: string }) => [e.kind, e.at.slice(11)]);
+    expect(steps).toEqual(
+      expect.arrayContaining([
+        ['tray-in', '08:12'],
+        ['tray-out', '08:41'],
+        ['cool-to-70-by', '10:41'],
+        ['fridge-41-by', '14:41'],
+      ]),
+    );
+    // Said again later (the same time), nothing moves further.
+    const again = await send({ out: [first.id], outAt: { [first.id]: '2026-01-04T08:41' }, version: 2 }).expect(200);
+    expect(again.body.run.trays.find((t: PlannedTray) => t.id === first.id).outAt).toBe('2026-01-04T08:41');
+  });
 });
 

@@ -194,6 +194,30 @@ describe('the kitchen as it is on prep day', () => {
     }
   });
 
+  it('sends the time a ticked tray really came out, only where it differs from the plan', () => {
+    vi.useFakeTimers({ toFake: ['Date'] });
+    vi.setSystemTime(new Date(2026, 0, 4, 9, 50));
+    try {
+      const k = kitchenOf();
+      render(<BakeRunTimers run={midDay} unit="F" nowMinute={110} kitchen={k} />);
+      const details = screen.getByText('An oven down or a cook missing?').closest('details')!;
+      details.open = true;
+      fireEvent(details, new Event('toggle'));
+      fireEvent.click(screen.getByText('A tray came out at another time?'));
+      // Each ticked tray offers its planned time out.
+      expect((screen.getByLabelText('Egg slab (2/2) came out at') as HTMLInputElement).value).toBe('08:45');
+      fireEvent.change(screen.getByLabelText('Egg slab (1/2) came out at'), { target: { value: '08:41' } });
+      fireEvent.click(screen.getByRole('button', { name: 'Plan again' }));
+      expect(k.onChange).toHaveBeenCalledWith(2, [1, 2], 3, {
+        out: ['7-1', '9-1', '7-2'], // in the run's order
+        from: '2026-01-04T10:15',
+        outAt: { '7-1': '2026-01-04T08:41' },
+      });
+    } finally {
+      vi.useRealTimers();
+    }
+  });
+
   it('unticking every tray plans the day from its start again; a refused time is said under its field', () => {
     const k = kitchenOf({ done: { from: '2026-01-04T09:50', out: ['7-1'] } });
     const { unmount } = render(<BakeRunTimers run={midDay} unit="F" nowMinute={-5} kitchen={k} />);

@@ -6,7 +6,7 @@ import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-run-types.js';
 import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
 import { longDate } from '@shared/domain/iso-date.js';
-import { ovensAt, resumeRun, takeDone, type BakeRunDone } from '@shared/domain/bake-run-resume.js';
+import { movedOut, ovensAt, resumeRun, takeDone, type BakeRunDone } from '@shared/domain/bake-run-resume.js';
 import { resolveBakeRunRules } from '@shared/domain/bake-run-model.js';
 import type {
   BakeRunKitchenValues,
@@ -326,7 +326,16 @@ export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: n
     // The ovens that work and are at a set point at `from` in the plan the kitchen followed start the rest there.
     const working = new Set(ovens.filter((o) => chosen.includes(o.id)).map((o) => o.name));
     const ovenF = Object.fromEntries(Object.entries(ovensAt(current.run, v.from)).filter(([name]) => working.has(name)));
-    return { ...change, done: { from: v.from, ...takeDone(current.run, [...new Set(v.out)]), ovenF } };
+    const ids = [...new Set(v.out)];
+    let kept = takeDone(current.run, ids);
+    for (const [id, at] of Object.entries(v.outAt ?? {})) {
+      const tray = kept.trays.find((t) => t.id === id);
+      if (!tray) throw ValidationError.field(`outAt.${id}`, 'Tick this tray as out to give the time it came out.');
+      if (at.slice(0, 10) !== prepDate) throw ValidationError.field(`outAt.${id}`, `It came out on the prep day, ${longDate(prepDate)}: change the time only.`);
+      if (at < tray.inAt) throw ValidationError.field(`outAt.${id}`, `${tray.name} went in at ${tray.inAt.slice(11)}: it came out after that.`);
+      kept = movedOut(kept, id, at);
+    }
+    return { ...change, done: { from: v.from, ...kept, ovenF } };
   });
 }
 

@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { FOOD_CODE_COOLING, planBakeRun } from '@shared/domain/bake-run';
 import { resolveBakeRunRules } from '@shared/domain/bake-run-model';
-import { minutesBetween, ovensAt, resumeRun, takeDone } from '@shared/domain/bake-run-resume';
+import { minutesBetween, movedOut, ovensAt, resumeRun, takeDone } from '@shared/domain/bake-run-resume';
 import { addLocalMinutes } from '@shared/domain/bake-run-time';
 import type { BakeOven, BakeRunInput, BakeRunResult, BakeTray } from '@shared/domain/bake-run-types';
 import { checkBakeRun } from './bake-run-check';
@@ -121,6 +121,25 @@ describe('planning the rest of a prep day again', () => {
   it('says which ovens start the rest hot', () => {
     const hot = resumeRun(day.start, { ...kept, ovenF: { Right: 350 } }, rest, rest.rules);
     expect(hot.cautions[0]).toMatch(/planned from then, Right from 350 °F \(177 °C\) \(on at that time\), any other oven from cold\.$/);
+  });
+
+  it('moves a kept tray that came out at another time: its out, check and cooling steps, not its prep or its time in', () => {
+    const later = addLocalMinutes(first.outAt, 6);
+    const moved = movedOut(kept, first.id, later);
+    const tray = moved.trays.find((t) => t.id === first.id)!;
+    expect(tray).toMatchObject({ inAt: first.inAt, outAt: later, outMinute: first.outMinute + 6, bakeMinutes: first.bakeMinutes + 6 });
+    const at = (kind: string) => moved.events.find((e) => e.trayId === first.id && e.kind === kind)?.at;
+    expect([at('tray-in'), at('tray-out'), at('cool-to-70-by'), at('fridge-41-by')]).toEqual([
+      first.inAt,
+      later,
+      addLocalMinutes(later, 120),
+      addLocalMinutes(later, 360),
+    ]);
+    // The same time again changes nothing; an unknown tray leaves it as it is.
+    expect(movedOut(moved, first.id, later)).toEqual(moved);
+    expect(movedOut(kept, 'nope', later)).toBe(kept);
+    // Joined into the day, the minutes agree with the readings.
+    expect(consistent(resumeRun(day.start, { from, ...moved }, rest, rest.rules))).toEqual([]);
   });
 
   it('counts minutes across midnight (a run that goes on past it)', () => {

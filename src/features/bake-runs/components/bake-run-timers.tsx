@@ -143,7 +143,12 @@ export interface KitchenChange {
    * `version`: the one the person's choice started from (a change saved meanwhile makes it a 409). `out`: the trays
    * already out of the oven (none: the day from its start), `from` ("YYYY-MM-DDTHH:mm"): when the rest starts.
    */
-  onChange: (cooks: number, ovenIds: number[], version: number | null, progress: { out: string[]; from?: string }) => void;
+  onChange: (
+    cooks: number,
+    ovenIds: number[],
+    version: number | null,
+    progress: { out: string[]; from?: string; outAt?: Record<string, string> },
+  ) => void;
   onReload: () => void;
 }
 
@@ -177,6 +182,8 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
   const [fromTyped, setFromTyped] = useState(false);
   /** The tray ticks were offered on opening (not yet changed by hand): they follow the ovens ticked. */
   const [offered, setOffered] = useState(false);
+  /** Ticked trays that came out at another time than planned: id → "HH:mm" typed. */
+  const [outAt, setOutAt] = useState<Record<string, string>>({});
   /** What "Plan again" sent, until the person starts over. */
   const [sent, setSent] = useState<string | null>(null);
   // What the form started from: a change saved elsewhere replaces it unless the person changed it.
@@ -185,6 +192,7 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
     setForm(saved);
     setFromTyped(false);
     setOffered(false);
+    setOutAt({});
     setBase({ key: kitchenKey(saved), version: kitchen.version });
   };
   if (base.version !== kitchen.version) {
@@ -237,11 +245,16 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
         onSubmit={(e) => {
           e.preventDefault();
           setSent(kitchenKey(form));
+          const day = run.start.slice(0, 10);
+          // Only the times changed from the plan's, for trays still ticked.
+          const moved = Object.entries(outAt).filter(([id, t]) => form.out.includes(id) && t && t !== clock(outAtOf.get(id) ?? ''));
           kitchen.onChange(
             Number(form.cooks),
             [...form.ovenIds],
             base.version,
-            form.out.length ? { out: [...form.out], from: `${run.start.slice(0, 10)}T${form.from}` } : { out: [] },
+            form.out.length
+              ? { out: [...form.out], from: `${day}T${form.from}`, ...(moved.length ? { outAt: Object.fromEntries(moved.map(([id, t]) => [id, `${day}T${t}`])) } : {}) }
+              : { out: [] },
           );
         }}
       >
@@ -291,6 +304,27 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
             </label>
           ))}
           {fieldErrors.out && <p className="font-bold text-signal-700">⚠ {fieldErrors.out[0]}</p>}
+          {form.out.length > 0 && (
+            <details className="mt-1" open={Object.keys(fieldErrors).some((k) => k.startsWith('outAt.')) || undefined}>
+              <summary className="min-h-11 cursor-pointer py-2">A tray came out at another time?</summary>
+              <p className="text-sm text-ink-soft">Its cooling deadlines then count from when it really came out.</p>
+              <div className="mt-2 flex flex-col gap-2">
+                {trays
+                  .filter((t) => form.out.includes(t.id))
+                  .map((t) => (
+                    <TextField
+                      key={t.id}
+                      label={`${t.name} came out at`}
+                      type="time"
+                      value={outAt[t.id] ?? clock(t.outAt)}
+                      onChange={(e) => setOutAt((o) => ({ ...o, [t.id]: e.target.value }))}
+                      error={fieldErrors[`outAt.${t.id}`]?.[0]}
+                      className="max-w-xs"
+                    />
+                  ))}
+              </div>
+            </details>
+          )}
         </fieldset>
         {form.out.length > 0 ? (
           <TextField
