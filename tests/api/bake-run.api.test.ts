@@ -384,12 +384,21 @@ describe('the kitchen as it is on prep day', () => {
 type PlannedTray = { id: string; oven: string; inAt: string; outAt: string };
 const timesOf = (trays: PlannedTray[]) => trays.map((t) => [t.id, t.oven, t.inAt, t.outAt]);
 
+/**
+ * Two trays, two one-place ovens ("Left", "Right"), one cook, from 08:00 (settings version 1). Worked by hand in the
+ * first test below: the first tray 08:12–08:37 in one oven, the second 08:20–08:45 in the other.
+ */
+async function twoOvenDay() {
+  const day = await twoTrayWeek();
+  const ovens = [await makeOven(day.coach, { name: 'Left', racks: 1, traysPerRack: 1 }), await makeOven(day.coach, { name: 'Right', racks: 1, traysPerRack: 1 })];
+  const planned = await day.coach.agent.put(`/api/weeks/${day.week.id}/bake-run/settings`).send({ start: '2026-01-04T08:00', cooks: 1, ovenIds: [] }).expect(200);
+  const [first, second] = planned.body.run.trays as PlannedTray[];
+  return { ...day, ovens, planned, first, second };
+}
+
 describe('planning the rest of the day again part-way through', () => {
   it('keeps the trays already out as planned, with their cooling deadlines, and plans the rest from the time given', async () => {
-    const { coach, assistant, tray, week } = await twoTrayWeek();
-    const left = await makeOven(coach, { name: 'Left', racks: 1, traysPerRack: 1 });
-    const right = await makeOven(coach, { name: 'Right', racks: 1, traysPerRack: 1 });
-    const planned = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ start: '2026-01-04T08:00', cooks: 1, ovenIds: [] }).expect(200);
+    const { coach, assistant, tray, week, planned, ovens: [left, right] } = await twoOvenDay();
     // Worked by hand (rules as in the first test: 350 °F, 25 min, hands-on 10 min, preheat ceil(280 / 25) = 12 min),
     // one tray per oven: the cook preps the first tray 08:00–08:10 and the second 08:10–08:20; the first goes in at
     // 08:12 (its oven ready), out 08:37; the second in the other oven at 08:20, out 08:45.
@@ -522,13 +531,7 @@ describe('planning the rest of the day again part-way through', () => {
   });
 
   it('an oven still at its set point when the rest starts is not preheated again', async () => {
-    const { coach, assistant, week } = await twoTrayWeek();
-    await makeOven(coach, { name: 'Left', racks: 1, traysPerRack: 1 });
-    await makeOven(coach, { name: 'Right', racks: 1, traysPerRack: 1 });
-    const planned = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ start: '2026-01-04T08:00', cooks: 1, ovenIds: [] }).expect(200);
-    // As in the test above: the first tray 08:12–08:37 in one oven, the second 08:20–08:45 in the other.
-    const [first, second] = planned.body.run.trays as PlannedTray[];
-    const ovens = (await coach.agent.get('/api/ovens').expect(200)).body as { id: number; name: string }[];
+    const { assistant, week, first, second, ovens } = await twoOvenDay();
     const working = ovens.find((o) => o.name === first.oven)!;
 
     // 08:30: the second tray's oven fails with it inside; the first stays in its oven until 08:37, so the rest is
@@ -550,12 +553,8 @@ describe('planning the rest of the day again part-way through', () => {
   });
 
   it('a tray that came out at another time keeps that time, and its cooling deadlines count from it', async () => {
-    const { coach, assistant, week } = await twoTrayWeek();
-    await makeOven(coach, { name: 'Left', racks: 1, traysPerRack: 1 });
-    await makeOven(coach, { name: 'Right', racks: 1, traysPerRack: 1 });
-    const planned = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ start: '2026-01-04T08:00', cooks: 1, ovenIds: [] }).expect(200);
-    const [first, second] = planned.body.run.trays as PlannedTray[];
-    const ovenIds = ((await coach.agent.get('/api/ovens').expect(200)).body as { id: number }[]).map((o) => o.id);
+    const { assistant, week, first, second, ovens } = await twoOvenDay();
+    const ovenIds = ovens.map((o) => o.id);
     const send = (body: Record<string, unknown>) => assistant.agent.put(`/api/weeks/${week.id}/bake-run/kitchen`).send({ cooks: 1, ovenIds, from: '2026-01-04T08:50', version: 1, ...body });
 
     // Refused, naming the tray's time: a tray not ticked as out, a time before it went in (08:12), another day.
