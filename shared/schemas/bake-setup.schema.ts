@@ -144,6 +144,9 @@ export const bakeRunStartSchema = z.object({
 });
 export type BakeRunStartValues = z.output<typeof bakeRunStartSchema>;
 
+/** A tray of a week's run by its id there: base tray id and its number, e.g. "12-1". */
+const runTrayId = z.string().regex(/^\d{1,9}-\d{1,3}$/, { message: 'Give the trays by their id in the run.' });
+
 /**
  * PUT /api/weeks/:weekId/bake-run/kitchen: the kitchen as it is on prep day (an oven out of order, a cook missing),
  * for the coach or the assistant: the ovens that work and the cooks who came. The start, the hands-on minutes and the
@@ -160,14 +163,14 @@ export const bakeRunKitchenSchema = z.object({
    * The trays already out of the oven (their ids in the run, e.g. "12-1"): they stay as planned and the rest is
    * planned from `from`. Empty: the whole day is planned from its start again. Absent: what was said before stays.
    */
-  out: z.array(z.string().regex(/^\d{1,9}-\d{1,3}$/, { message: 'Give the trays by their id in the run.' })).max(200).optional(),
+  out: z.array(runTrayId).max(200).optional(),
   /**
    * A tray of `out` that came out at another time than planned: its id → when ("YYYY-MM-DDTHH:mm"); its cooling
    * deadlines count from then.
    */
   outAt: z
     .record(
-      z.string().regex(/^\d{1,9}-\d{1,3}$/, { message: 'Give the trays by their id in the run.' }),
+      runTrayId,
       z.string().refine(isLocalDateTime, { message: 'Give the time it came out, "YYYY-MM-DDTHH:mm".' }),
     )
     .optional(),

@@ -184,7 +184,8 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
   const ids = new Set(schedulerTrays.map((t) => t.id));
   const kept = row?.done ? { from: row.done.from, ovenF: row.done.ovenF, ...takeDone(row.done, [...ids]) } : null;
   const done: BakeRunDone | null = kept && kept.trays.length ? kept : null;
-  const toBake = done ? schedulerTrays.filter((t) => !done.trays.some((d) => d.id === t.id)) : schedulerTrays;
+  const outIds = new Set(done?.trays.map((t) => t.id));
+  const toBake = schedulerTrays.filter((t) => !outIds.has(t.id));
   const problems: string[] = [];
   if (schedulerTrays.length === 0) problems.push('No trays to bake on this prep date: set the tray counts of the week first.');
   if (ovens.length === 0) problems.push('No ovens: add your ovens under "Bake rules & ovens".');
@@ -255,13 +256,13 @@ async function changeDaySettings(
   actor: Actor,
   weekId: number,
   v: { prepDate?: string; version?: number },
-  change: (prepDate: string) => DayChange | Promise<DayChange>,
+  change: (prepDate: string, row: IBakeRunSetting | null) => DayChange | Promise<DayChange>,
 ): Promise<WeekBakeRunDto> {
   // The week first: another workspace's week is a 404 whatever else the request says.
   const week = await findWeek(em, actor, weekId);
   const prepDate = pickPrepDate(week, v.prepDate);
-  const changed = await change(prepDate);
   const row = await em.findOne(BakeRunSetting, { week: week.id, prepDate });
+  const changed = await change(prepDate, row);
   if (row) {
     if (v.version !== row.version) throw new StaleEdit(row.version, presentSettings(prepDate, row));
     em.assign(row, changed);
@@ -288,9 +289,9 @@ async function changeDaySettings(
  * on prep day); cooks, ovens and hands-on minutes stay.
  */
 export function moveWeekBakeRunStart(em: EntityManager, actor: Actor, weekId: number, v: BakeRunStartValues): Promise<WeekBakeRunDto> {
-  return changeDaySettings(em, actor, weekId, v, async (prepDate) => {
+  return changeDaySettings(em, actor, weekId, v, (prepDate, row) => {
     startOnPrepDay(v.start, prepDate);
-    startBeforeRest(v.start, await em.findOne(BakeRunSetting, { week: weekId, prepDate }));
+    startBeforeRest(v.start, row);
     return { start: v.start };
   });
 }
