@@ -4,6 +4,7 @@ import { toCelsiusRounded } from '@shared/domain/temperature.js';
 import { cautionsBlock, createDoc, finishDoc, heading, paragraph, table } from './pdf-document.js';
 import { clock } from './pdf-format.js';
 import { longDate } from '@shared/domain/iso-date.js';
+import { replannedSummary } from '@shared/domain/bake-run-words.js';
 
 export interface BakeRunPdfMeta {
   businessName: string;
@@ -53,9 +54,7 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
   paragraph(doc, `${longDate(run.start.slice(0, 10))}: start ${clock(run.start)}, last tray out ${clock(run.endAt)} (${run.sessionMinutes} minutes).`);
   if (meta.replanned) {
     const { from, kept } = meta.replanned;
-    const left = run.trays.length - kept;
-    const rest = left > 0 ? `${left === 1 ? 'the one tray still to bake is' : `the ${left} still to bake are`} planned from ${clock(from)}` : 'every tray is out';
-    paragraph(doc, `Planned again at ${clock(from)}: ${kept === 1 ? 'one tray already out is' : `${kept} trays already out are`} kept as planned, with their cooling deadlines; ${rest}.`);
+    paragraph(doc, `Planned again at ${clock(from)}: ${replannedSummary(from, kept, run.trays.length)}.`);
   }
   paragraph(
     doc,

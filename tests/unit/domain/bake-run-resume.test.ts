@@ -9,6 +9,7 @@ import { FOOD_CODE_COOLING, planBakeRun } from '@shared/domain/bake-run';
 import { resolveBakeRunRules } from '@shared/domain/bake-run-model';
 import { minutesBetween, movedOut, ovensAt, resumeRun, takeDone } from '@shared/domain/bake-run-resume';
 import { addLocalMinutes } from '@shared/domain/bake-run-time';
+import { replannedSummary } from '@shared/domain/bake-run-words';
 import type { BakeOven, BakeRunInput, BakeRunResult, BakeTray } from '@shared/domain/bake-run-types';
 import { checkBakeRun } from './bake-run-check';
 
@@ -140,6 +141,12 @@ describe('planning the rest of a prep day again', () => {
     expect(movedOut(kept, 'nope', later)).toBe(kept);
     // Joined into the day, the minutes agree with the readings.
     expect(consistent(resumeRun(day.start, { from, ...moved }, rest, rest.rules))).toEqual([]);
+  });
+
+  it('says in words what a day planned again is (the page and the run sheet)', () => {
+    expect(replannedSummary('2026-01-04T09:18', 7, 10)).toBe('7 trays already out are kept as planned, with their cooling deadlines; the 3 still to bake are planned from 09:18');
+    expect(replannedSummary('2026-01-04T08:40', 1, 2)).toBe('one tray already out is kept as planned, with their cooling deadlines; the one tray still to bake is planned from 08:40');
+    expect(replannedSummary('2026-01-04T09:20', 2, 2)).toBe('2 trays already out are kept as planned, with their cooling deadlines; every tray is out');
   });
 
   it('counts minutes across midnight (a run that goes on past it)', () => {

@@ -11,7 +11,8 @@ import { Button } from '@/components/ui/button';
 import { DayOptions, SelectField } from '@/components/ui/field';
 import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
-import { errorMessage, isApiError, markShown } from '@/lib/problem';
+import { replannedSummary } from '@shared/domain/bake-run-words';
+import { errorMessage, isApiError } from '@/lib/problem';
 import { dayLabel } from '@/lib/dates';
 
 const linkClass = 'inline-flex min-h-11 items-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
@@ -31,12 +32,14 @@ export function Component() {
   const save = useSaveBakeRunSettings(weekId);
   const moveStart = useMoveBakeRunStart(weekId);
   const kitchen = useSetBakeRunKitchen(weekId);
-  const [restartError, setRestartError] = useState<unknown>(null);
+  // "Plan the whole day from its start again": the same change, its own pending state and failure.
+  const restart = useSetBakeRunKitchen(weekId);
 
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   const dto = q.data;
   const files = bakeRunFiles(weekId, dto.prepDate);
+  const replanned = dto.run && dto.settings.done ? replannedSummary(dto.settings.done.from, dto.settings.done.out.length, dto.run.trays.length) : '';
   return (
     <div className="flex flex-col gap-5">
       <PageHeader title="Bake run" lead={`${dto.weekName}, prep day ${dayLabel(dto.prepDate, true)}`}>
@@ -101,16 +104,15 @@ export function Component() {
       )}
       {dto.run && dto.settings.done && (
         <Notice tone="info" title={`Planned again from ${dto.settings.done.from.slice(11)}`}>
-          {dto.settings.done.out.length === 1 ? 'One tray already out is' : `${dto.settings.done.out.length} trays already out are`} kept as
-          planned, with their cooling deadlines; {dto.run.trays.length > dto.settings.done.out.length ? 'the rest is planned from then.' : 'every tray is out.'}
+          {replanned.charAt(0).toUpperCase()}
+          {replanned.slice(1)}.
           <div className="mt-2">
             <Button
               size="sm"
               variant="secondary"
-              busy={kitchen.isPending}
-              onClick={() => {
-                setRestartError(null);
-                kitchen.mutate(
+              busy={restart.isPending}
+              onClick={() =>
+                restart.mutate(
                   {
                     prepDate: dto.prepDate,
                     cooks: dto.settings.cooks,
@@ -118,25 +120,19 @@ export function Component() {
                     out: [],
                     ...(dto.settings.version === null ? {} : { version: dto.settings.version }),
                   },
-                  {
-                    onError: (e) => {
-                      markShown(e);
-                      setRestartError(e);
-                      if (isApiError(e, 409)) q.refetch();
-                    },
-                  },
-                );
-              }}
+                  { onError: (e) => isApiError(e, 409) && q.refetch() },
+                )
+              }
             >
               Plan the whole day from its start again
             </Button>
           </div>
-          {restartError !== null && (
+          {restart.error && (
             <p role="alert" className="mt-2 font-bold text-signal-700">
               ⚠{' '}
-              {isApiError(restartError, 409)
+              {isApiError(restart.error, 409)
                 ? 'Someone changed this run meanwhile: this page now shows their version. Try again if it is still needed.'
-                : errorMessage(restartError)}
+                : errorMessage(restart.error)}
             </p>
           )}
         </Notice>
@@ -164,12 +160,9 @@ export function Component() {
                   done: dto.settings.done,
                   version: dto.settings.version,
                   saving: kitchen.isPending,
-                  // A failure of "Plan the whole day from its start again" is said beside that button.
-                  error: kitchen.error === restartError ? null : kitchen.error,
-                  onChange: (cooks, ovenIds, version, progress) => {
-                    setRestartError(null);
-                    kitchen.mutate({ prepDate: dto.prepDate, cooks, ovenIds, ...progress, ...(version === null ? {} : { version }) });
-                  },
+                  error: kitchen.error,
+                  onChange: (cooks, ovenIds, version, progress) =>
+                    kitchen.mutate({ prepDate: dto.prepDate, cooks, ovenIds, ...progress, ...(version === null ? {} : { version }) }),
                   onReload: () => {
                     kitchen.reset();
                     q.refetch();
