@@ -33,8 +33,9 @@ describe('copying a day', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Copy day' }));
     expect(onCopy).toHaveBeenCalledWith('2026-01-05', '2026-01-06', expect.any(Function));
     expect(screen.getByRole('status').textContent).toBe('');
-    const done = onCopy.mock.calls[0][2] as () => void;
-    act(() => done());
+    // The server's answer: the day copied from is as it was.
+    const done = onCopy.mock.calls[0][2] as (answer: BoardDto) => void;
+    act(() => done(board));
     expect(screen.getByRole('status').textContent).toBe('Copied Mon, Jan 5 to Tue, Jan 6: 2 meals. 1 meal stayed behind: "Old frittata plate" is archived.');
     fireEvent.change(screen.getByLabelText('From'), { target: { value: '2026-01-06' } });
     expect(screen.getByRole('status').textContent).toBe('');

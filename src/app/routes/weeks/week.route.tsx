@@ -213,7 +213,7 @@ export function Component() {
         busy={copyDay.isPending}
         onCopy={(fromDate, toDate, done) => {
           const run = (version: number) =>
-            copyDay.mutate({ version, fromDate, toDate }, { onSuccess: done, onError: onFail({ kind: 'other', label: `copy ${dayLabel(fromDate)} to ${dayLabel(toDate)}`, run }) });
+            copyDay.mutate({ version, fromDate, toDate }, { onSuccess: (answer) => done(answer), onError: onFail({ kind: 'other', label: `copy ${dayLabel(fromDate)} to ${dayLabel(toDate)}`, run }) });
           withVersion('copy', run);
         }}
       />

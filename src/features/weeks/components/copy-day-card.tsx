@@ -9,8 +9,8 @@ import { agrees, counted } from '@/lib/words';
 const names = new Intl.ListFormat('en-US', { style: 'long', type: 'conjunction' });
 
 /**
- * What copying one day onto another does, worked out from the board before the copy: how many meals go over, and
- * which stay behind because their plate is archived (the server leaves them out too).
+ * What copying one day onto another did, read from the board the copy answered with (the day copied from is as it
+ * was): how many meals went over, and which stayed behind because their plate is archived (the server leaves them out).
  */
 export function copyDaySummary(board: Pick<BoardDto, 'cells' | 'plates'>, from: string, to: string): string {
   const cells = board.cells.filter((c) => c.date === from);
@@ -32,8 +32,8 @@ export function CopyDayCard({
 }: {
   board: BoardDto;
   busy: boolean;
-  /** Sends the copy; `done` is called once the server has made it. */
-  onCopy: (fromDate: string, toDate: string, done: () => void) => void;
+  /** Sends the copy; `done` is called with the board the server answered once it has made it. */
+  onCopy: (fromDate: string, toDate: string, done: (answer: BoardDto) => void) => void;
 }) {
   const [from, setFrom] = useState('');
   const [to, setTo] = useState('');
@@ -48,9 +48,8 @@ export function CopyDayCard({
         onSubmit={(e) => {
           e.preventDefault();
           if (!from || !to) return;
-          const summary = copyDaySummary(board, from, to);
           setSaid('');
-          onCopy(from, to, () => setSaid(summary));
+          onCopy(from, to, (answer) => setSaid(copyDaySummary(answer, from, to)));
         }}
       >
         <SelectField
