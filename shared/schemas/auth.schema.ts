@@ -1,11 +1,11 @@
 import { z } from 'zod';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { emailAddress as email } from './email';
 
 export const ROLES = ['coach', 'assistant', 'client'] as const;
 export const roleSchema = z.enum(ROLES);
 export type Role = z.infer<typeof roleSchema>;
 
-const email = z.string().trim().toLowerCase().pipe(z.email({ message: 'Enter a valid e-mail address' }));
 const password = z
   .string()
   .min(10, { message: 'Use at least 10 characters' })

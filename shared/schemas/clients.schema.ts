@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { optionalEmailAddress as optionalEmail } from './email';
 import { typedNumber } from './typed-number';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import type { ActivityLevel, Goal, MacroTargets, Sex, TargetNote } from '../domain/targets';
@@ -33,11 +34,6 @@ const decimalText = (label: string, min: number, max: number) =>
       .refine((v) => Number(v) >= min && Number(v) <= max, { message: `${label} must be between ${min} and ${max}` }),
   );
 
-const optionalEmail = z
-  .union([z.literal(''), z.string().trim().toLowerCase().pipe(z.email({ message: 'Enter a valid e-mail address' }))])
-  .nullable()
-  .optional()
-  .transform((v) => (v ? v : null));
 
 const allergenSchema = z.enum(ALLERGEN_CODES as unknown as [AllergenCode, ...AllergenCode[]]);
 const term = z.string().trim().min(1).max(80);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { emailAddress } from './email';
 import { isIsoDate } from '../domain/iso-date';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 
@@ -16,7 +17,7 @@ export const sendPrepDaySchema = z.object({
    * e-mail has no link into Trayline.
    */
   alsoTo: z
-    .array(z.string().trim().toLowerCase().pipe(z.email({ message: 'Enter a valid e-mail address' })))
+    .array(emailAddress)
     .max(PREP_ALSO_TO_MAX, { message: `At most ${PREP_ALSO_TO_MAX} addresses` })
     .optional(),
   /** One id per press of "Send" (a UUID the page makes): the same request sent again queues nothing new. */

@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import type { Express } from 'express';
@@ -118,8 +119,31 @@ describe('abuse protection', () => {
     }
     const blocked = await agentFor(app).post('/api/auth/login').send({ email: coach.email, password: PASSWORD });
     expect(blocked.status).toBe(429);
-    const [row] = await sql<{ hits: number }>("select hits from rate_limit_hit where key = $1", [`login-email:${coach.email}`]);
+    // Keyed by the address's SHA-256, not the address: the table holds no e-mail addresses.
+    const hashed = createHash('sha256').update(coach.email.toLowerCase()).digest('hex');
+    const [row] = await sql<{ hits: number }>("select hits from rate_limit_hit where key = $1", [`login-email:${hashed}`]);
     expect(row.hits).toBeGreaterThanOrEqual(10);
+    const addresses = await sql<{ n: number }>("select count(*)::int as n from rate_limit_hit where key like '%@%'");
+    expect(addresses[0].n).toBe(0);
+  });
+
+  it('an e-mail of thousands of characters is a 400 naming it at sign-in, sign-up and password reset, never a 500', async () => {
+    // RFC 5321 §4.5.3.1.3: a path is at most 256 octets, so an address at most 254 characters.
+    const long = `${'a'.repeat(5000)}@example.test`;
+    const justOver = `${'a'.repeat(255 - '@example.test'.length)}@example.test`;
+    expect(justOver).toHaveLength(255);
+    for (const address of [long, justOver]) {
+      const login = await agentFor(app).post('/api/auth/login').send({ email: address, password: 'wrong-password' }).expect(400);
+      expect(Object.keys(login.body.errors)).toEqual(['email']);
+      const reset = await agentFor(app).post('/api/auth/password-reset').set('x-trayline-csrf', '1').send({ email: address }).expect(400);
+      expect(Object.keys(reset.body.errors)).toEqual(['email']);
+      const register = await agentFor(app)
+        .post('/api/auth/register')
+        .set('x-trayline-csrf', '1')
+        .send({ email: address, password: 'a-long-password-1', name: 'Long', businessName: 'Long' })
+        .expect(400);
+      expect(Object.keys(register.body.errors)).toEqual(['email']);
+    }
   });
 
   it('refuses a cookie-authenticated write without the CSRF header', async () => {

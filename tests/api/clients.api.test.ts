@@ -72,6 +72,19 @@ describe('client profiles and targets', () => {
     expect(Object.keys(res.body.errors)).toEqual(expect.arrayContaining(['weightKg', 'allergens.0']));
   });
 
+  it("an e-mail past SMTP's 254 characters is a 400 naming it (RFC 5321 §4.5.3.1.3); 254 is accepted", async () => {
+    const coach = await coachWorkspace(app);
+    const at = (n: number) => `${'a'.repeat(n - '@example.test'.length)}@example.test`;
+    const res = await coach.agent.post('/api/clients').send(clientInput({ email: at(255) })).expect(400);
+    expect(res.body.errors).toEqual({ email: ['Use at most 254 characters'] });
+    const wrong = await coach.agent.post('/api/clients').send(clientInput({ email: 'not-an-address' })).expect(400);
+    expect(wrong.body.errors).toEqual({ email: ['Enter a valid e-mail address'] });
+    const none = await coach.agent.post('/api/clients').send(clientInput({ email: '  ' })).expect(201);
+    expect(none.body.email).toBeNull();
+    const ok = await coach.agent.post('/api/clients').send(clientInput({ email: at(254) })).expect(201);
+    expect(ok.body.email).toBe(at(254));
+  });
+
   it('gives assistants names and portions per plate only', async () => {
     const coach = await coachWorkspace(app);
     await makeClient(coach, { name: 'Ada', householdMultiplier: '3', healthNotes: 'private' });

@@ -1,4 +1,5 @@
-import { Router } from 'express';
+import { createHash } from 'node:crypto';
+import { Router, type Request } from 'express';
 import rateLimit, { ipKeyGenerator } from 'express-rate-limit';
 import type { Pool } from 'pg';
 import { z } from 'zod';
@@ -38,11 +39,20 @@ function presentInvitation(inv: IInvitation, link?: string): InvitationDto {
   };
 }
 
+/**
+ * The per-e-mail rate-limit key: a SHA-256 of the address as sign-in normalises it. Short whatever was typed (a
+ * key of thousands of characters cannot outgrow the table's column), and the table holds no e-mail addresses.
+ */
+export function emailLimitKey(req: Request): string {
+  const typed = String(req.body?.email ?? '').trim().toLowerCase();
+  return typed ? createHash('sha256').update(typed).digest('hex') : 'none';
+}
+
 export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: string; mail: MailQueue; resetLimit?: number }) {
   const r = Router();
 
   // Login: 429 after `loginLimit` failures in 15 minutes, counted per e-mail and per IP, in PostgreSQL.
-  const limiter = (prefix: string, limit: number, key: (req: import('express').Request) => string) =>
+  const limiter = (prefix: string, limit: number, key: (req: Request) => string) =>
     rateLimit({
       windowMs: FIFTEEN_MIN,
       limit,
@@ -53,7 +63,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
       keyGenerator: key,
       handler: (_req, _res, next) => next(new TooMany('Too many failed sign-ins; wait 15 minutes and try again')),
     });
-  const byEmail = limiter('login-email', opts.loginLimit, (req) => String(req.body?.email ?? '').trim().toLowerCase() || 'none');
+  const byEmail = limiter('login-email', opts.loginLimit, emailLimitKey);
   // Per IP a wider limit (ten times the per-e-mail one): it stops spraying many e-mails from one address.
   const byIp = limiter('login-ip', opts.loginLimit * 10, (req) => ipKeyGenerator(req.ip ?? '0.0.0.0'));
 
@@ -151,7 +161,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
 
   // Password reset requests: every request counts (not only failures), per e-mail and per IP, in PostgreSQL.
   const resetLimit = opts.resetLimit ?? 5;
-  const resetLimiter = (prefix: string, limit: number, key: (req: import('express').Request) => string) =>
+  const resetLimiter = (prefix: string, limit: number, key: (req: Request) => string) =>
     rateLimit({
       windowMs: FIFTEEN_MIN,
       limit,
@@ -161,7 +171,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
       keyGenerator: key,
       handler: (_req, _res, next) => next(new TooMany('Too many password reset requests; wait 15 minutes and try again')),
     });
-  const resetByEmail = resetLimiter('reset-email', resetLimit, (req) => String(req.body?.email ?? '').trim().toLowerCase() || 'none');
+  const resetByEmail = resetLimiter('reset-email', resetLimit, emailLimitKey);
   const resetByIp = resetLimiter('reset-ip', resetLimit * 10, (req) => ipKeyGenerator(req.ip ?? '0.0.0.0'));
 
   r.post(
