@@ -262,7 +262,9 @@ export type IngredientSort = (typeof INGREDIENT_SORTS)[number];
 export const ingredientListQuerySchema = z.object({
   q: z.string().trim().max(100, { message: 'At most 100 characters' }).default(''),
   category: z
-    .union([z.enum(INGREDIENT_CATEGORIES, { message: 'Not a category' }), z.literal('')])
+    // '' (the filter's "any category") is one of the enum's values, not a union's branch: a wrong category is
+    // answered "Not a category", not a union's "Invalid input".
+    .enum(['', ...INGREDIENT_CATEGORIES], { message: 'Not a category' })
     .optional()
     .transform((v) => v || undefined),
   /** all: shared reference rows and the workspace's own; mine: own only; shared: reference rows only. */

@@ -91,6 +91,10 @@ describe('GET /api/ingredients (search, paging, sort)', () => {
     const kcals = fats.body.items.map((i: { per100g: { kcal: number } }) => i.per100g.kcal);
     expect(kcals).toEqual([...kcals].sort((a, b) => b - a));
     for (const i of fats.body.items) expect(i.category).toBe('fats-oils');
+    const any = await coachA.agent.get('/api/ingredients?category=&pageSize=1').expect(200);
+    expect(any.body.total).toBeGreaterThan(fats.body.total);
+    const wrong = await coachA.agent.get('/api/ingredients?category=cheese').expect(400);
+    expect(wrong.body.errors).toEqual({ category: ['Not a category'] });
   });
 
   it('flags a seeded row whose stored kcal is far from 4-9-4 (cocoa powder) and not whole eggs', async () => {
