@@ -208,9 +208,11 @@ describe('shopping trips: a week with two prep days has a list for each', () => 
       "A prep day's list of this week was marked bought while it had two prep days: add the second prep day back to mark the rest bought",
     );
     // A week whose prep-day lists were never bought drops its second prep day as before.
-    const other = await twoTripWeek(coach);
-    const v = (await coach.agent.get(`/api/weeks/${other.weekId}`).expect(200)).body.week.version;
-    await coach.agent.patch(`/api/weeks/${other.weekId}`).send({ version: v, secondPrepDate: null }).expect(200);
+    // (The same days, so in a workspace of its own: a day is on one board only.)
+    const elsewhere = await coachWorkspace(app);
+    const other = await twoTripWeek(elsewhere);
+    const v = (await elsewhere.agent.get(`/api/weeks/${other.weekId}`).expect(200)).body.week.version;
+    await elsewhere.agent.patch(`/api/weeks/${other.weekId}`).send({ version: v, secondPrepDate: null }).expect(200);
   });
 
   it('keeps check marks per list, and answers 400 naming prepDate for a day that is not a trip', async () => {
@@ -225,10 +227,13 @@ describe('shopping trips: a week with two prep days has a list for each', () => 
     expect(bad.body.errors).toEqual({ prepDate: ['Not a prep day of this week (2026-01-04 or 2026-01-07)'] });
     const malformed = await assistant.agent.put(`/api/weeks/${w.weekId}/shopping/checks/${w.eggs.id}`).send({ checked: true, prepDate: 'Sunday' }).expect(400);
     expect(Object.keys(malformed.body.errors)).toEqual(['prepDate']);
-    const single = await shoppingWeek(coach);
-    const one = await assistant.agent.get(`/api/weeks/${single.weekId}/shopping?prepDate=2026-01-04`).expect(400);
+    // A one-prep-day week of the same days: in a workspace of its own (a day is on one board only).
+    const elsewhere = await coachWorkspace(app);
+    const single = await shoppingWeek(elsewhere);
+    const helper = await member(app, elsewhere, 'assistant');
+    const one = await helper.agent.get(`/api/weeks/${single.weekId}/shopping?prepDate=2026-01-04`).expect(400);
     expect(one.body.errors).toEqual({ prepDate: ['This week has one prep day: its list is the whole week'] });
-    expect((await assistant.agent.get(`/api/weeks/${single.weekId}/shopping`).expect(200)).body.tripDates).toEqual([]);
+    expect((await helper.agent.get(`/api/weeks/${single.weekId}/shopping`).expect(200)).body.tripDates).toEqual([]);
   });
 
   it("refuses a trip's purchase once the whole week's list is bought, and answers a repeated one with its record", async () => {

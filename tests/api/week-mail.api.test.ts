@@ -244,13 +244,15 @@ describe('sending a week', () => {
   });
 
   it('refuses an unpublished week (409), a client (403), another workspace (404) and a note over 1000 characters (400)', async () => {
-    const coach = await coachWorkspace(app);
-    const draft = await publishedWeek(coach, { publish: false });
-    const refused = await coach.agent.post(`/api/weeks/${draft.weekId}/send`).send({}).expect(409);
+    // The draft in a workspace of its own: the published week below plans the same days (one board per day).
+    const drafter = await coachWorkspace(app);
+    const draft = await publishedWeek(drafter, { publish: false });
+    const refused = await drafter.agent.post(`/api/weeks/${draft.weekId}/send`).send({}).expect(409);
     expect(refused.body.detail ?? refused.body.title).toMatch(/publish/i);
     const [n] = await sql<{ n: string }>('select count(*) as n from outbox where week_id = $1', [draft.weekId]);
     expect(n.n).toBe('0');
 
+    const coach = await coachWorkspace(app);
     const w = await publishedWeek(coach);
     const client = await member(app, coach, 'client', { clientId: w.ana.id });
     await client.agent.post(`/api/weeks/${w.weekId}/send`).send({}).expect(403);

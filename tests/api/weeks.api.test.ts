@@ -386,6 +386,35 @@ describe('the week board', () => {
   });
 });
 
+describe('one board per day', () => {
+  it('refuses a new week or a copy that shares a day with another week of the workspace (400 naming startDate); the next day is free', async () => {
+    const coach = await coachWorkspace(app);
+    await makeWeek(coach, { name: 'Week one' }); // Mon 2026-01-05 … Sun 01-11
+    const later = await coach.agent.post('/api/weeks').send({ startDate: '2026-01-08', prepDate: '2026-01-07' }).expect(400);
+    expect(later.body.errors).toEqual({
+      startDate: ['"Week one" already plans Mon 5 Jan – Sun 11 Jan; a day is on one board only. Start this week on Mon 12 Jan or later.'],
+    });
+    const earlier = await coach.agent.post('/api/weeks').send({ startDate: '2025-12-30', prepDate: '2025-12-29' }).expect(400);
+    expect(earlier.body.errors.startDate[0]).toMatch(/Start this week on Mon 29 Dec or earlier\.$/);
+    // Sun 2026-01-11 is the first week's last day: a board from the Monday after, and from the Tuesday before it, fit.
+    const next = await coach.agent.post('/api/weeks').send({ startDate: '2026-01-12', prepDate: '2026-01-11' }).expect(201);
+    await coach.agent.post('/api/weeks').send({ startDate: '2025-12-29', prepDate: '2025-12-28' }).expect(201);
+    const copy = await coach.agent.post(`/api/weeks/${next.body.week.id}/copy`).send({ startDate: '2026-01-18', prepDate: '2026-01-17' }).expect(400);
+    expect(copy.body.errors.startDate[0]).toMatch(/^"Week of Mon 12 Jan" already plans Mon 12 Jan – Sun 18 Jan;/);
+    expect((await coach.agent.get('/api/weeks').expect(200)).body).toHaveLength(3);
+    // Another workspace plans its own days.
+    await makeWeek(await coachWorkspace(app));
+  });
+
+  it('two weeks of the same days created at the same moment: exactly one lands', async () => {
+    const coach = await coachWorkspace(app);
+    const body = { startDate: '2026-03-02', prepDate: '2026-03-01' };
+    const answers = await Promise.all([1, 2, 3].map(() => coach.agent.post('/api/weeks').send(body)));
+    expect(answers.map((a) => a.status).sort()).toEqual([201, 400, 400]);
+    expect(await sql('select count(*)::int as n from week where workspace_id = $1', [coach.workspaceId])).toEqual([{ n: 1 }]);
+  });
+});
+
 describe('publishing and the client view', () => {
   it('a client reads only their own published plates; edits stay hidden until the next publication', async () => {
     const coach = await coachWorkspace(app);

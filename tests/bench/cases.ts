@@ -1,3 +1,5 @@
+import { addDays } from '../../shared/domain/iso-date.js';
+
 export interface BenchContext {
   base: string;
   cookie: string;
@@ -153,7 +155,15 @@ async function makeBigWeek(ctx: BenchContext): Promise<number> {
     plateIds.push(p.id);
   }
   type Board = { week: { id: number; version: number }; days: string[]; slots: string[] };
-  const board = await postJson<Board>(ctx, '/api/weeks', { name: 'Bench week', startDate: '2026-12-07', prepDate: '2026-12-06', secondPrepDate: '2026-12-09' });
+  // The day after the workspace's last week (a day is on one board only; the demo week moves with the calendar).
+  const existing = await getJson<{ endDate: string }[]>(ctx, '/api/weeks');
+  const startDate = addDays(existing.map((w) => w.endDate).sort().at(-1) ?? '2026-12-06', 1);
+  const board = await postJson<Board>(ctx, '/api/weeks', {
+    name: 'Bench week',
+    startDate,
+    prepDate: addDays(startDate, -1),
+    secondPrepDate: addDays(startDate, 2),
+  });
   const slots = board.slots.slice(0, 2);
   const cells = clientIds.flatMap((clientId, ci) =>
     board.days.flatMap((date, di) => slots.map((slot, si) => ({ clientId, date, slot, assemblyId: plateIds[(ci + di * 2 + si) % plateIds.length] }))),

@@ -24,6 +24,36 @@ describe('new week form', () => {
     expect(field('Prep day').value).toBe('2026-12-06');
   });
 
+  it("skips a week a board plans already (a day is on one board only), and shows the server's refusal under the first day", async () => {
+    vi.useFakeTimers({ now: new Date(2026, 11, 2, 9), toFake: ['Date'] });
+    // An invented next week, already planned: Mon 7 – Sun 13 Dec.
+    const planned = {
+      id: 5, name: 'Next week', startDate: '2026-12-07', endDate: '2026-12-13', prepDate: '2026-12-05', secondPrepDate: null,
+      publishedVersion: null, publishedAt: null, changedSincePublished: false, cellCount: 0, version: 1,
+    };
+    const refusal = '"Next week" already plans Mon 7 Dec – Sun 13 Dec; a day is on one board only. Start this week on Mon 14 Dec or later.';
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init?: RequestInit) =>
+        init?.method === 'POST'
+          ? jsonResponse({ type: 'about:blank', title: 'Bad request', status: 400, code: 'validation', detail: refusal, errors: { startDate: [refusal] } }, 400)
+          : jsonResponse([planned]),
+      ),
+    );
+    renderInApp(<WeeksPage />, queryClientFor(coach));
+    await screen.findByLabelText('Start from');
+    expect(field('First day of the board').value).toBe('2026-12-14');
+    expect(field('Prep day').value).toBe('2026-12-13');
+    // A copy of it: its prep day falls on the same day of the week (a Saturday, two days before the board).
+    fireEvent.change(screen.getByLabelText('Start from'), { target: { value: '5' } });
+    expect(field('Prep day').value).toBe('2026-12-12');
+    fireEvent.change(screen.getByLabelText('Start from'), { target: { value: '' } });
+    fireEvent.change(field('First day of the board'), { target: { value: '2026-12-09' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Create' }));
+    expect(await screen.findByText(refusal)).toBeTruthy();
+    expect(field('First day of the board').getAttribute('aria-invalid')).toBe('true');
+  });
+
   it('moves the prep day with the first day of the board until the coach picks one', () => {
     show();
     fireEvent.change(field('First day of the board'), { target: { value: '2026-12-21' } });

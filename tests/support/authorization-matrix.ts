@@ -151,8 +151,9 @@ export const MATRIX: Record<string, MatrixRow> = {
   'POST /api/weeks': R(['coach'], { body: () => ({ startDate: '2026-03-02', prepDate: '2026-03-01' }) }),
   'GET /api/weeks/:id': R(['coach'], {
     prepare: async (ctx) => {
-      ctx.ids.week = (await makeWeek(ctx.coachA)).week.id;
-      ctx.ids.weekToDelete = (await makeWeek(ctx.coachA)).week.id;
+      // A day is on one board only: the matrix's weeks start on different Mondays (the bake-run week has Jan 5).
+      ctx.ids.week = (await makeWeek(ctx.coachA, { startDate: '2026-01-19', prepDate: '2026-01-18' })).week.id;
+      ctx.ids.weekToDelete = (await makeWeek(ctx.coachA, { startDate: '2026-01-12', prepDate: '2026-01-11' })).week.id;
     },
     path: (ctx) => `/api/weeks/${ctx.ids.week}`,
     crossWorkspace: true,
@@ -161,19 +162,19 @@ export const MATRIX: Record<string, MatrixRow> = {
   'DELETE /api/weeks/:id': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.weekToDelete}`, crossWorkspace: true }),
   'PUT /api/weeks/:id/cells': R(['coach'], {
     path: (ctx) => `/api/weeks/${ctx.ids.week}/cells`,
-    body: () => ({ version: 999, cells: [{ clientId: 1, date: '2026-01-05', slot: 'breakfast', assemblyId: null }] }),
+    body: () => ({ version: 999, cells: [{ clientId: 1, date: '2026-01-19', slot: 'breakfast', assemblyId: null }] }),
     crossWorkspace: true,
   }),
   'PUT /api/weeks/:id/trays': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/trays`, body: () => ({ version: 999, trays: [] }), crossWorkspace: true }),
   'POST /api/weeks/:id/trays/cover': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/trays/cover`, body: () => ({ version: 999 }), crossWorkspace: true }),
   'POST /api/weeks/:id/copy-day': R(['coach'], {
     path: (ctx) => `/api/weeks/${ctx.ids.week}/copy-day`,
-    body: () => ({ version: 999, fromDate: '2026-01-05', toDate: '2026-01-06' }),
+    body: () => ({ version: 999, fromDate: '2026-01-19', toDate: '2026-01-20' }),
     crossWorkspace: true,
   }),
   'POST /api/weeks/:id/copy': R(['coach'], {
     path: (ctx) => `/api/weeks/${ctx.ids.week}/copy`,
-    body: () => ({ startDate: '2026-02-02', prepDate: '2026-02-01' }),
+    body: () => ({ startDate: '2026-02-16', prepDate: '2026-02-15' }),
     crossWorkspace: true,
   }),
   'POST /api/weeks/:id/publish': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/publish`, body: () => ({ version: 999 }), crossWorkspace: true }),

@@ -2,7 +2,8 @@ import { LockMode } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
 import { addDays, compareIsoDates, daysBetween, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
-import { cellKey, computeBoard, coveringBatches } from '@shared/domain/week-board.js';
+import { cellKey, computeBoard, coveringBatches, weekTitle } from '@shared/domain/week-board.js';
+import { BOARD_DAYS } from '@shared/domain/week-days.js';
 import type { GlanceDto, SetupCountsDto, WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
 import { preparedRows } from '../../db/prepared.js';
 import type { BoardAnswer, CopyWeekAnswer } from '@shared/schemas/board-answer.js';
@@ -73,6 +74,29 @@ function checkPrepDates(startDate: IsoDate, prepDate: IsoDate, second: IsoDate |
   if (Object.keys(errors).length) throw new ValidationError(Object.values(errors)[0][0], errors);
 }
 
+/** The advisory lock (with the workspace id) that new weeks of one workspace take while they check their days. */
+const WEEK_DAYS_LOCK = 7302;
+
+/**
+ * A day is on one board only: a new week may not share a day with another week of the workspace (two boards for
+ * one day would leave the client's page, the shopping list and the bake run to guess which one counts). Checked
+ * under a per-workspace lock held to the end of the transaction, so two weeks created at once cannot both pass.
+ */
+async function checkDaysFree(tx: EntityManager, actor: Actor, startDate: IsoDate): Promise<void> {
+  await tx.getConnection().execute('select pg_advisory_xact_lock(?, ?)', [WEEK_DAYS_LOCK, actor.workspaceId], 'all', tx.getTransactionContext());
+  const other = await tx.findOne(
+    Week,
+    { workspace: actor.workspaceId, startDate: { $gt: addDays(startDate, -BOARD_DAYS), $lt: addDays(startDate, BOARD_DAYS) } },
+    { orderBy: { startDate: 'asc' } },
+  );
+  if (!other) return;
+  const after = compareIsoDates(other.startDate, startDate) <= 0;
+  const message =
+    `"${weekTitle(other)}" already plans ${shortDate(other.startDate)} – ${shortDate(addDays(other.startDate, BOARD_DAYS - 1))}; a day is on one board only. ` +
+    (after ? `Start this week on ${shortDate(addDays(other.startDate, BOARD_DAYS))} or later.` : `Start this week on ${shortDate(addDays(other.startDate, -BOARD_DAYS))} or earlier.`);
+  throw new ValidationError(message, { startDate: [message] });
+}
+
 /** A new week row of the workspace (not flushed). */
 function newWeek(em: EntityManager, actor: Actor, v: CreateWeek): IWeek {
   return em.create(Week, {
@@ -86,9 +110,14 @@ function newWeek(em: EntityManager, actor: Actor, v: CreateWeek): IWeek {
 
 export async function createWeek(em: EntityManager, actor: Actor, v: CreateWeek): Promise<BoardAnswer> {
   checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
-  const w = newWeek(em, actor, v);
-  await em.flush();
-  return getBoard(em, actor, w.id);
+  const id = await em.transactional(async (tx) => {
+    await checkDaysFree(tx, actor, v.startDate);
+    const w = newWeek(tx, actor, v);
+    await tx.flush();
+    return w.id;
+  });
+  em.clear();
+  return getBoard(em, actor, id);
 }
 
 async function stale(em: EntityManager, actor: Actor, week: Pick<IWeek, 'id' | 'version'>): Promise<never> {
@@ -380,6 +409,7 @@ export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: C
   checkPrepDates(v.startDate, v.prepDate, v.secondPrepDate);
   const shift = daysBetween(source.startDate, v.startDate);
   const { newId, copied } = await em.transactional(async (tx) => {
+    await checkDaysFree(tx, actor, v.startDate);
     const w = newWeek(tx, actor, v);
     await tx.flush();
     const mapPrep = (d: IsoDate | null | undefined): IsoDate | null =>

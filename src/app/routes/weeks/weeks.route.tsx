@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { addDays, daysBetween, isIsoDate } from '@shared/domain/iso-date';
+import { firstFreeMonday } from '@shared/domain/week-days';
 import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { weeksQuery } from '@/features/weeks/api/weeks.queries';
 import { localToday } from '@/lib/dates';
@@ -14,15 +15,10 @@ import { isApiError, errorMessage, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { dayLabel } from '@/lib/dates';
 
-function nextMonday(today: string): string {
-  const d = new Date(`${today}T12:00:00Z`).getUTCDay();
-  return addDays(today, ((8 - d) % 7) || 7);
-}
-
-/** The source week's second prep day moved to the new board: the same day of the week, when it falls on the board. */
-function shiftedSecondPrep(source: WeekSummaryDto, startDate: string): string {
-  if (!source.secondPrepDate || !isIsoDate(startDate)) return '';
-  return addDays(source.secondPrepDate, daysBetween(source.startDate, startDate));
+/** A date of the source week moved to the new board: the same day of the week. */
+function shifted(source: WeekSummaryDto, date: string | null, startDate: string): string {
+  if (!date || !isIsoDate(startDate)) return '';
+  return addDays(date, daysBetween(source.startDate, startDate));
 }
 
 export function Component() {
@@ -32,17 +28,19 @@ export function Component() {
   const copy = useCopyWeek();
   const navigate = useNavigate();
   const [params] = useSearchParams();
-  const start = nextMonday(localToday());
-  const [form, setForm] = useState({ name: '', startDate: start, prepDate: addDays(start, -1), secondPrepDate: '' });
+  const [form, setForm] = useState({ name: '', startDate: '', prepDate: '', secondPrepDate: '' });
   // "Copy to a new week" on a board opens this page with ?from=<id>: the form starts from that week.
   const [fromId, setFromId] = useState(params.get('from') ?? '');
   const source = list.data?.find((w) => String(w.id) === fromId) ?? null;
-  const [secondPicked, setSecondPicked] = useState(false);
-  // A copied week with two prep days gets its second one on the same day of the new week until the coach picks one.
-  const secondPrepDate = source && !secondPicked && !form.secondPrepDate ? shiftedSecondPrep(source, form.startDate) : form.secondPrepDate;
-  const saving = create.isPending || copy.isPending;
-  // The prep day follows the first day of the board (the day before) until the coach picks one.
+  // Until the coach picks them: the board starts on the first Monday no week plans yet; a copy's prep days fall on
+  // the same days of the week as its source's, a new board's the day before it starts.
+  const [startPicked, setStartPicked] = useState(false);
   const [prepPicked, setPrepPicked] = useState(false);
+  const [secondPicked, setSecondPicked] = useState(false);
+  const startDate = startPicked ? form.startDate : firstFreeMonday(localToday(), list.data ?? []);
+  const prepDate = prepPicked ? form.prepDate : source ? shifted(source, source.prepDate, startDate) : isIsoDate(startDate) ? addDays(startDate, -1) : '';
+  const secondPrepDate = secondPicked ? form.secondPrepDate : source ? shifted(source, source.secondPrepDate, startDate) : '';
+  const saving = create.isPending || copy.isPending;
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [formError, setFormError] = useState<string | null>(null);
   return (
@@ -58,7 +56,7 @@ export function Component() {
               e.preventDefault();
               setErrors({});
               setFormError(null);
-              const input = { ...form, secondPrepDate: secondPrepDate || null };
+              const input = { name: form.name, startDate, prepDate, secondPrepDate: secondPrepDate || null };
               const onError = (err: unknown) => {
                 markShown(err);
                 if (isApiError(err, 400)) setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k.replace(/^body\./, ''), v])));
@@ -93,13 +91,12 @@ export function Component() {
               </SelectField>
             )}
             <TextField label="Name (optional)" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} />
-            <TextField label="First day of the board" type="date" value={form.startDate} error={errors.startDate?.[0]} onChange={(e) => {
-                const startDate = e.target.value;
-                const follows = !prepPicked && isIsoDate(startDate);
-                setForm({ ...form, startDate, prepDate: follows ? addDays(startDate, -1) : form.prepDate });
+            <TextField label="First day of the board" type="date" value={startDate} error={errors.startDate?.[0]} onChange={(e) => {
+                setStartPicked(true);
+                setForm({ ...form, startDate: e.target.value });
               }}
             />
-            <TextField label="Prep day" type="date" value={form.prepDate} error={errors.prepDate?.[0]} onChange={(e) => {
+            <TextField label="Prep day" type="date" value={prepDate} error={errors.prepDate?.[0]} onChange={(e) => {
                 setPrepPicked(true);
                 setForm({ ...form, prepDate: e.target.value });
               }}
