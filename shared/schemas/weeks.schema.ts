@@ -174,8 +174,19 @@ export interface SetupCountsDto {
   weeks: number;
 }
 
+/** The week after the glance's week, as the home page names it. */
+export interface NextWeekDto {
+  id: number;
+  name: string;
+  startDate: IsoDate;
+  cellCount: number;
+  publishedVersion: number | null;
+}
+
 export interface GlanceDto {
   week: WeekSummaryDto | null;
+  /** The first week of the workspace starting after the glance's week (null: nothing planned after it yet). */
+  nextWeek: NextWeekDto | null;
   warnings: number;
   blocks: number;
   portionsShort: number;

@@ -34,6 +34,21 @@ describe('week glance', () => {
     expect(screen.getByText('None blocks publishing')).toBeTruthy();
   });
 
+  it('names the week planned after it, with its state and plates', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 8, 9), toFake: ['Date'] });
+    show(glance({ nextWeek: { id: 8, name: 'Week of Jan 12', startDate: '2026-01-12', cellCount: 1, publishedVersion: null } }));
+    const next = await screen.findByRole('link', { name: 'Week of Jan 12' });
+    expect(next.getAttribute('href')).toBe('/weeks/8');
+    expect(next.parentElement!.textContent).toBe('After it: Week of Jan 12 · draft · 1 plate placed');
+  });
+
+  it('offers to plan the next week from this one when nothing comes after it', async () => {
+    show(glance({ nextWeek: null }));
+    const plan = await screen.findByRole('link', { name: 'Plan the next week from this one' });
+    expect(plan.getAttribute('href')).toBe('/weeks?from=7');
+    expect(screen.getByText(/^Nothing planned after this week yet\./)).toBeTruthy();
+  });
+
   it('shows nothing when no week is planned', async () => {
     const fetch = show(glance({ week: null, nextPrepDate: null }));
     await vi.waitFor(() => expect(fetch).toHaveBeenCalled());

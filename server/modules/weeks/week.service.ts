@@ -466,7 +466,8 @@ async function setupCounts(em: EntityManager, workspaceId: number): Promise<Setu
 export async function glance(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<GlanceDto> {
   const [weeks, setup] = await Promise.all([em.find(Week, { workspace: actor.workspaceId }), setupCounts(em, actor.workspaceId)]);
   const week = pickWeek(weeks, today);
-  if (!week) return { week: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup };
+  if (!week) return { week: null, nextWeek: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup };
+  const after = weeks.filter((w) => compareIsoDates(w.startDate, week.startDate) > 0).sort((a, b) => compareIsoDates(a.startDate, b.startDate))[0];
   const data = await loadBoardData(em, actor, week);
   const result = computeBoard(boardInput(data));
   const nextPrepDate =
@@ -476,6 +477,15 @@ export async function glance(em: EntityManager, actor: Actor, today: IsoDate = t
       .sort(compareIsoDates)[0] ?? null;
   return {
     week: presentWeekSummary(data.week, data.cells.length, data.publishedAt),
+    nextWeek: after
+      ? {
+          id: after.id,
+          name: weekTitle(after),
+          startDate: after.startDate,
+          cellCount: await em.count(WeekCell, { week: after.id }),
+          publishedVersion: after.publishedVersion ?? null,
+        }
+      : null,
     warnings: result.warnings.filter((w) => w.severity === 'warn').length,
     blocks: result.warnings.filter((w) => w.severity === 'block').length,
     portionsShort: result.inventory.reduce((s, t) => s + t.short, 0),

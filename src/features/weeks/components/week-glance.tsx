@@ -30,6 +30,24 @@ export function WeekGlance() {
         <Notice tone={g.portionsShort ? 'warn' : 'info'} title={g.portionsShort ? `${counted(g.portionsShort, 'portion')} short` : 'No portion short'} />
         <Notice tone="cold" title={g.nextPrepDate ? nextPrepDayTitle(g.nextPrepDate, today) : 'No prep day ahead'} />
       </div>
+      <p className="mt-3">
+        {g.nextWeek ? (
+          <>
+            After it:{' '}
+            <Link to={paths.week(g.nextWeek.id)} className="font-bold underline">
+              {g.nextWeek.name}
+            </Link>{' '}
+            · {g.nextWeek.publishedVersion ? `published v${g.nextWeek.publishedVersion}` : 'draft'} · {counted(g.nextWeek.cellCount, 'plate')} placed
+          </>
+        ) : (
+          <>
+            Nothing planned after this week yet.{' '}
+            <Link to={`${paths.weeks}?from=${g.week.id}`} className="inline-flex min-h-11 items-center font-bold underline">
+              Plan the next week from this one
+            </Link>
+          </>
+        )}
+      </p>
     </Card>
   );
 }
