@@ -22,3 +22,29 @@ export function firstFreeMonday(today: IsoDate, weeks: readonly { startDate: Iso
   for (let i = 0; i < 520 && weeks.some((w) => boardsShareADay(w.startDate, start)); i++) start = addDays(start, BOARD_DAYS);
   return start;
 }
+
+/** The week covering `today`, else the next one to start, else the latest (null when there is none). */
+export function pickWeek<T extends { startDate: IsoDate }>(weeks: readonly T[], today: IsoDate): T | null {
+  const sorted = [...weeks].sort((a, b) => daysBetween(b.startDate, a.startDate));
+  const current = sorted.find((w) => daysBetween(w.startDate, today) >= 0 && daysBetween(w.startDate, today) < BOARD_DAYS);
+  return current ?? sorted.find((w) => daysBetween(today, w.startDate) > 0) ?? sorted[sorted.length - 1] ?? null;
+}
+
+/**
+ * The kitchen's week: the one whose next prep day (today included) comes first, whichever board it is on (from
+ * Thursday the kitchen shops for next week's Sunday); with no prep day ahead, `pickWeek`'s.
+ */
+export function kitchenWeek<T extends { startDate: IsoDate; prepDate: IsoDate; secondPrepDate?: IsoDate | null }>(
+  weeks: readonly T[],
+  today: IsoDate,
+): T | null {
+  let best: { week: T; date: IsoDate } | null = null;
+  for (const week of weeks) {
+    for (const date of [week.prepDate, week.secondPrepDate]) {
+      if (!date || daysBetween(today, date) < 0) continue;
+      const sooner = !best || daysBetween(date, best.date) > 0 || (date === best.date && daysBetween(week.startDate, best.week.startDate) > 0);
+      if (sooner) best = { week, date };
+    }
+  }
+  return best?.week ?? pickWeek(weeks, today);
+}

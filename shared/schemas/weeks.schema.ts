@@ -14,7 +14,6 @@ export const isoDate = z.string().refine(isIsoDate, { message: 'Use a date like 
 const version = z.number().int().positive().max(PG_INT_MAX, TOO_LARGE);
 const allergen = z.enum(ALLERGEN_CODES as unknown as [AllergenCode, ...AllergenCode[]]);
 
-export const WEEK_DAYS = 7;
 
 export const createWeekSchema = z
   .object({

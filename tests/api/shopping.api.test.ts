@@ -4,7 +4,7 @@ import Qty from 'js-quantities';
 import Papa from 'papaparse';
 import { PDFParse } from 'pdf-parse';
 import { testApp } from '../support/test-app.js';
-import { coachWorkspace, EGGS_BY_THE_DOZEN, makeIngredient, makeTray, member, type Member } from '../support/factories.js';
+import { coachWorkspace, EGGS_BY_THE_DOZEN, makeIngredient, makeTray, makeWeek, member, type Member } from '../support/factories.js';
 import { sql } from '../support/db.js';
 import { shoppingWeek } from '../support/shopping-week.js';
 
@@ -454,5 +454,12 @@ describe('the prep week\'s shopping list', () => {
     const current = await assistant.agent.get('/api/weeks/current').expect(200);
     expect(current.body).toMatchObject({ id: w.weekId, startDate: '2026-01-05' });
     expect((await other.agent.get('/api/weeks/current').expect(200)).body).toBeNull();
+    // The kitchen's week is the one of the next prep day: on Thursday 8 Jan, next week's (prep Sun 11 Jan).
+    const next = await makeWeek(coach, { startDate: '2026-01-12', prepDate: '2026-01-11' });
+    const thursday = await assistant.agent.get('/api/weeks/current?today=2026-01-08').expect(200);
+    expect(thursday.body).toMatchObject({ id: next.week.id, prepDate: '2026-01-11' });
+    expect((await assistant.agent.get('/api/weeks/current?today=2026-01-04').expect(200)).body.id).toBe(w.weekId);
+    const bad = await assistant.agent.get('/api/weeks/current?today=Thursday').expect(400);
+    expect(Object.keys(bad.body.errors)).toEqual(['today']);
   });
 });

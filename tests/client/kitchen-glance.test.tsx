@@ -11,7 +11,7 @@ const list = (over: Record<string, unknown> = {}) => ({ weekId: 7, aisles: [], i
 function show(current: unknown, shopping: unknown = list()) {
   vi.stubGlobal(
     'fetch',
-    vi.fn(async (url: string) => (url === '/api/weeks/current' ? json(current) : url.startsWith('/api/weeks/7/shopping') ? json(shopping) : json(null))),
+    vi.fn(async (url: string) => (url.startsWith('/api/weeks/current?') ? json(current) : url.startsWith('/api/weeks/7/shopping') ? json(shopping) : json(null))),
   );
   renderInApp(<KitchenGlance />);
 }
@@ -20,6 +20,8 @@ describe('kitchen glance', () => {
   it('names the next prep day still to come, the shopping progress, and links the week’s bake run and labels', async () => {
     vi.useFakeTimers({ now: new Date(2026, 0, 5, 9), toFake: ['Date'] });
     show(week);
+    // The kitchen's week for the device's day.
+    await vi.waitFor(() => expect(vi.mocked(fetch).mock.calls.map(([u]) => u)).toContain('/api/weeks/current?today=2026-01-05'));
     // Sunday's prep is past on Monday: Wednesday's is next.
     expect(await screen.findByText(`Next prep day: ${dayLabel('2026-01-07', true)}`)).toBeTruthy();
     const bar = await screen.findByRole('progressbar', { name: 'In the trolley' });

@@ -54,7 +54,7 @@ test('the assistant checks two items on the shopping list (they sink, strike thr
   // Home: the kitchen's week shows the same progress, the next prep day and the way to the bake run.
   await page.emulateMedia({ media: 'screen' });
   await page.goto('/');
-  await expect(page.getByRole('heading', { name: 'This week in the kitchen' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'In the kitchen' })).toBeVisible();
   await expect(page.getByRole('progressbar', { name: 'In the trolley' })).toHaveAttribute('aria-valuenow', '2');
   await expect(page.getByText(/^(Next prep day: .+|No prep day ahead this week)$/)).toBeVisible();
   await expect(page.getByRole('link', { name: 'Bake run' }).first()).toBeVisible();

@@ -29,7 +29,7 @@ test('the coach invites a kitchen assistant, sees them among the people with acc
   await page.screenshot({ path: `${SHOTS}/coach-team.png`, fullPage: true });
 
   // Made a coach: asked first; at their next step they have the coach's pages (the week at a glance, not the kitchen's).
-  await expect(helper.getByRole('heading', { name: 'This week in the kitchen' })).toBeVisible();
+  await expect(helper.getByRole('heading', { name: 'In the kitchen' })).toBeVisible();
   page.once('dialog', (d) => void d.accept());
   await row.getByRole('button', { name: 'Make Robin Helper a coach' }).click();
   await expect(row.getByRole('button', { name: 'Make Robin Helper a kitchen assistant' })).toBeVisible();

@@ -9,7 +9,8 @@ import { findWeek, loadBoardData, prepDatesOf, type BoardData } from '../weeks/w
 import { cellPrepDate, tripDatesOf } from '@shared/domain/week-board.js';
 import { itemsOf as assemblyItemsOf } from '../assemblies/plate-facts.js';
 import type { IWeek } from '../weeks/week.entity.js';
-import { listWeeks, pickWeek, todayIso } from '../weeks/week.service.js';
+import { listWeeks, todayIso } from '../weeks/week.service.js';
+import { kitchenWeek } from '@shared/domain/week-days.js';
 import type { IsoDate } from '@shared/domain/iso-date.js';
 import type { WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
 import { PantryItem } from './pantry.entity.js';
@@ -249,8 +250,10 @@ export async function markBought(em: EntityManager, actor: Actor, weekId: number
   }
 }
 
-/** The week covering today, else the next, else the latest: the assistant's "this week". */
+/**
+ * The kitchen's week: the one of the next prep day (today included), whichever board it is on; with no prep day
+ * ahead, the week covering today, else the next, else the latest.
+ */
 export async function currentWeek(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<WeekSummaryDto | null> {
-  const weeks = await listWeeks(em, actor);
-  return pickWeek(weeks, today);
+  return kitchenWeek(await listWeeks(em, actor), today);
 }

@@ -1,4 +1,6 @@
 import { Router } from 'express';
+import { z } from 'zod';
+import { isoDate } from '@shared/schemas/weeks.schema.js';
 import {
   checkBodySchema,
   checkParams,
@@ -28,11 +30,12 @@ export function shoppingRoutes(opts: { publicUrl: string }) {
     validated({ body: shoppingNeedsSchema }, ({ body }, req) => shoppingListFor(emOf(req), actorOf(req), body)),
   );
 
-  // The week covering today, else the next one, else the latest (null when there is none). Before '/weeks/:id'.
+  // The kitchen's week (kitchenWeek: the one of the next prep day, else the week covering today, else the next, else
+  // the latest; null when there is none), for `today` as the person's device has it. Before '/weeks/:id'.
   r.get(
     '/weeks/current',
     allow('coach', 'assistant'),
-    validated({}, async (_i, req) => (await currentWeek(emOf(req), actorOf(req))) ?? null),
+    validated({ query: z.object({ today: isoDate.optional() }) }, async ({ query }, req) => (await currentWeek(emOf(req), actorOf(req), query.today)) ?? null),
   );
 
   r.get(

@@ -5,7 +5,8 @@ import { cellKey, computeBoard, prepDatesOf, weekTitle, type BoardInput, type Bo
 import type { AllergenCode } from '@shared/domain/allergens.js';
 import type { MacroTargets } from '@shared/domain/targets.js';
 import type { AssemblyDto } from '@shared/schemas/assemblies.schema.js';
-import { WEEK_DAYS, type BoardCellDto, type WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
+import { type BoardCellDto, type WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
+import { BOARD_DAYS } from '@shared/domain/week-days.js';
 import { cellAnswer, dayAnswer, type BoardAnswer } from '@shared/schemas/board-answer.js';
 import type { Actor } from '../../http/authz.js';
 import { NotFound } from '../../http/errors.js';
@@ -21,7 +22,7 @@ import type { ClientFacts } from '../clients/client.entity.js';
 import { Week, type IWeek, type IWeekCell } from './week.entity.js';
 
 export function weekDays(w: Pick<IWeek, 'startDate'>): IsoDate[] {
-  return Array.from({ length: WEEK_DAYS }, (_, i) => addDays(w.startDate, i));
+  return Array.from({ length: BOARD_DAYS }, (_, i) => addDays(w.startDate, i));
 }
 
 export { prepDatesOf };
@@ -37,7 +38,7 @@ export function presentWeekSummary(w: BoardWeek, cellCount: number, publishedAt:
     id: w.id,
     name: weekTitle(w),
     startDate: w.startDate,
-    endDate: addDays(w.startDate, WEEK_DAYS - 1),
+    endDate: addDays(w.startDate, BOARD_DAYS - 1),
     prepDate: w.prepDate,
     secondPrepDate: w.secondPrepDate ?? null,
     publishedVersion: w.publishedVersion ?? null,

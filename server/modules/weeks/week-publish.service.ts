@@ -4,6 +4,7 @@ import { CAUTIONS } from '@shared/domain/eat-by.js';
 import { addDays, compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, type BoardResult } from '@shared/domain/week-board.js';
 import { worded } from '@shared/domain/week-check.js';
+import { pickWeek } from '@shared/domain/week-days.js';
 import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
 import type { MyDayDto, MyPlateDto, MyWeekDto, WeekPublicationDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
 import type { BoardAnswer } from '@shared/schemas/board-answer.js';
@@ -142,11 +143,7 @@ async function latestPublications(em: EntityManager, workspaceId: number, limit:
 export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<MyWeekDto | null> {
   if (actor.clientId === null) return null;
   const weeks = await em.find(Week, { workspace: actor.workspaceId, publishedVersion: { $ne: null } }, { fields: ['id', 'startDate', 'publishedVersion'] });
-  const sorted = [...weeks].sort((a, b) => compareIsoDates(a.startDate, b.startDate));
-  const current =
-    sorted.find((w) => compareIsoDates(w.startDate, today) <= 0 && compareIsoDates(today, addDays(w.startDate, 6)) <= 0) ??
-    sorted.find((w) => compareIsoDates(w.startDate, today) > 0) ??
-    sorted[sorted.length - 1];
+  const current = pickWeek(weeks, today);
   if (!current) return null;
   const pub = await em.findOne(WeekPublication, { week: current.id, number: current.publishedVersion! });
   if (!pub) return null;

@@ -3,7 +3,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
 import { addDays, compareIsoDates, daysBetween, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, coveringBatches, weekTitle } from '@shared/domain/week-board.js';
-import { BOARD_DAYS } from '@shared/domain/week-days.js';
+import { BOARD_DAYS, pickWeek } from '@shared/domain/week-days.js';
 import type { GlanceDto, SetupCountsDto, WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
 import { preparedRows } from '../../db/prepared.js';
 import type { BoardAnswer, CopyWeekAnswer } from '@shared/schemas/board-answer.js';
@@ -440,13 +440,6 @@ export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: C
 }
 
 // ── Home page ───────────────────────────────────────────────────────────────────────────────────────
-
-/** The week covering `today`, else the next one, else the latest. */
-export function pickWeek<T extends { startDate: IsoDate }>(weeks: readonly T[], today: IsoDate): T | null {
-  const sorted = [...weeks].sort((a, b) => compareIsoDates(a.startDate, b.startDate));
-  const current = sorted.find((w) => compareIsoDates(w.startDate, today) <= 0 && compareIsoDates(today, addDays(w.startDate, 6)) <= 0);
-  return current ?? sorted.find((w) => compareIsoDates(w.startDate, today) > 0) ?? sorted[sorted.length - 1] ?? null;
-}
 
 /** How many active base trays, plates, clients, ovens and prep weeks the workspace has (one statement). */
 async function setupCounts(em: EntityManager, workspaceId: number): Promise<SetupCountsDto> {

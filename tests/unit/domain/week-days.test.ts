@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { boardsShareADay, firstFreeMonday, nextMonday } from '@shared/domain/week-days';
+import { boardsShareADay, firstFreeMonday, kitchenWeek, nextMonday, pickWeek } from '@shared/domain/week-days';
 
 // The weekday of a date read independently of the project's date code: ECMAScript's Intl.DateTimeFormat (ECMA-402).
 const weekday = (iso: string) => new Intl.DateTimeFormat('en-US', { weekday: 'long', timeZone: 'UTC' }).format(new Date(`${iso}T12:00:00Z`));
@@ -35,5 +35,31 @@ describe('the Monday a new board starts on', () => {
     expect(boardsShareADay('2026-12-07', '2026-12-14')).toBe(false);
     expect(boardsShareADay('2026-12-14', '2026-12-08')).toBe(true);
     expect(boardsShareADay('2026-12-14', '2026-12-07')).toBe(false);
+  });
+});
+
+describe('which week a page is about', () => {
+  // Invented weeks: this one (Mon 30 Nov, prep Sun 29 Nov and Wed 2 Dec) and the next (Mon 7 Dec, prep Sat 5 Dec).
+  const thisWeek = { id: 1, startDate: '2026-11-30', prepDate: '2026-11-29', secondPrepDate: '2026-12-02' };
+  const nextWeek = { id: 2, startDate: '2026-12-07', prepDate: '2026-12-05', secondPrepDate: null };
+  const ids = (w: { id: number } | null) => w?.id ?? null;
+
+  it("the coach's and the client's: the week covering today, else the next to start, else the latest", () => {
+    expect(ids(pickWeek([nextWeek, thisWeek], '2026-12-03'))).toBe(1);
+    expect(ids(pickWeek([nextWeek, thisWeek], '2026-12-06'))).toBe(1); // Sunday: the last day of this board
+    expect(ids(pickWeek([nextWeek, thisWeek], '2026-12-07'))).toBe(2);
+    expect(ids(pickWeek([nextWeek, thisWeek], '2026-11-20'))).toBe(1); // before both: the next to start
+    expect(ids(pickWeek([nextWeek, thisWeek], '2027-01-20'))).toBe(2); // after both: the latest
+    expect(pickWeek([], '2026-12-03')).toBeNull();
+  });
+
+  it("the kitchen's: the week of the next prep day, today included, whichever board it is on", () => {
+    expect(ids(kitchenWeek([nextWeek, thisWeek], '2026-11-29'))).toBe(1); // prep day today
+    expect(ids(kitchenWeek([nextWeek, thisWeek], '2026-11-30'))).toBe(1); // Wednesday's prep is next
+    expect(ids(kitchenWeek([nextWeek, thisWeek], '2026-12-02'))).toBe(1);
+    expect(ids(kitchenWeek([nextWeek, thisWeek], '2026-12-03'))).toBe(2); // Thursday: next week's Saturday
+    expect(ids(kitchenWeek([thisWeek], '2026-12-03'))).toBe(1); // nothing ahead: the week covering today
+    expect(ids(kitchenWeek([nextWeek, thisWeek], '2026-12-08'))).toBe(2);
+    expect(kitchenWeek([], '2026-12-03')).toBeNull();
   });
 });

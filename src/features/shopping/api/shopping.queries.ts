@@ -17,8 +17,9 @@ export const shoppingListQuery = (weekId: number, prepDate: string | null = null
     refetchInterval: 15_000,
   });
 
-export const currentWeekQuery = () =>
-  queryOptions({ queryKey: shoppingKeys.currentWeek(), queryFn: () => api.get<WeekSummaryDto | null>('/weeks/current') });
+/** The kitchen's week for the device's day: the one of the next prep day (see kitchenWeek). */
+export const currentWeekQuery = (today: string) =>
+  queryOptions({ queryKey: shoppingKeys.currentWeek(today), queryFn: () => api.get<WeekSummaryDto | null>(`/weeks/current${qs({ today })}`) });
 
 export const labelSheetQuery = (weekId: number, layout: LabelSheetCode, prepDate: string | null) =>
   queryOptions({

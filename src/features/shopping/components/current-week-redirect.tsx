@@ -3,10 +3,11 @@ import { useQuery } from '@tanstack/react-query';
 import { EmptyState, ErrorState, PageSkeleton } from '@/components/ui/states';
 import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { currentWeekQuery } from '../api/shopping.queries';
+import { localToday } from '@/lib/dates';
 
-/** Sends the person to this week's page (the week covering today, else the next, else the latest). */
+/** Sends the person to the kitchen's week's page (the week of the next prep day; see kitchenWeek). */
 export function CurrentWeekRedirect({ to, what }: { to: (week: WeekSummaryDto) => string; what: string }) {
-  const q = useQuery(currentWeekQuery());
+  const q = useQuery(currentWeekQuery(localToday()));
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   if (!q.data) {

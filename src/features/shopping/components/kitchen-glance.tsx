@@ -26,10 +26,13 @@ function ShoppingProgress({ weekId, prepDate }: { weekId: number; prepDate: stri
   );
 }
 
-/** The kitchen's "this week": the next prep day, how far the shopping is, and the week's bake run and labels. */
+/**
+ * The kitchen's week (the one of the next prep day, whichever board it is on): that prep day, how far its shopping
+ * is, and the week's bake run and labels.
+ */
 export function KitchenGlance() {
-  const q = useQuery(currentWeekQuery());
   const today = localToday();
+  const q = useQuery(currentWeekQuery(today));
   return (
     <QueryView
       query={q}
@@ -46,7 +49,7 @@ export function KitchenGlance() {
         return (
           <Card>
             <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
-              <h2 className="text-xl">This week in the kitchen</h2>
+              <h2 className="text-xl">In the kitchen</h2>
               <span className="text-ink-soft">{week.name}</span>
             </div>
             <div className="grid gap-3 sm:grid-cols-2">
