@@ -226,7 +226,21 @@ export interface MyWeekDto {
   startDate: IsoDate;
   endDate: IsoDate;
   days: MyDayDto[];
+  /**
+   * The next published week after this one, with the client's days on it (null: none yet). A frozen plate on its
+   * first day thaws on this week's last evening, and the client can look ahead once it is published.
+   */
+  next: MyNextWeekDto | null;
   cautions: readonly Caution[];
+}
+
+export interface MyNextWeekDto {
+  weekId: number;
+  name: string;
+  publishedVersion: number;
+  startDate: IsoDate;
+  endDate: IsoDate;
+  days: MyDayDto[];
 }
 
 /** The stored snapshot of one publication: every client's days, as clients will read them. */

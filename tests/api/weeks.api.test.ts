@@ -416,6 +416,39 @@ describe('one board per day', () => {
 });
 
 describe('publishing and the client view', () => {
+  it("a client also reads the next published week: its days, and a frozen first-day plate's thaw on this week's last evening", async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach, { fridgeDays: 7 });
+    const other = await makeClient(coach, { name: 'Other' });
+    const a = await fillWeek(coach, week.id, week.version, client.id, plate.id, [DAYS[0]]);
+    await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: a.body.week.version }).expect(200);
+    const me = await member(app, coach, 'client', { clientId: client.id });
+    const mine = async (today: string) => (await me.agent.get(`/api/weeks/mine?today=${today}`).expect(200)).body;
+    expect((await mine('2026-01-11')).next).toBeNull();
+
+    // Next week (Mon 12 Jan): Monday's breakfast frozen (it thaws in the fridge on the evening before), Tuesday's not.
+    const next = (await makeWeek(coach, { startDate: '2026-01-12', prepDate: '2026-01-11' })).week;
+    const cell = (clientId: number, date: string, storage: string) => ({ clientId, date, slot: 'breakfast', assemblyId: plate.id, storage });
+    const filled = await coach.agent
+      .put(`/api/weeks/${next.id}/cells`)
+      .send({ version: next.version, cells: [cell(client.id, '2026-01-12', 'frozen'), cell(client.id, '2026-01-13', 'fridge'), cell(other.id, '2026-01-12', 'fridge')] })
+      .expect(200);
+    // A draft is not the client's to read.
+    expect((await mine('2026-01-11')).next).toBeNull();
+    await coach.agent.post(`/api/weeks/${next.id}/publish`).send({ version: filled.body.week.version }).expect(200);
+
+    const sunday = await mine('2026-01-11');
+    expect(sunday.weekId).toBe(week.id);
+    expect(sunday.next).toMatchObject({ weekId: next.id, name: 'Week of Mon 12 Jan', startDate: '2026-01-12', endDate: '2026-01-18', publishedVersion: 1 });
+    expect(sunday.next.days.map((d: { date: string }) => d.date)).toEqual(['2026-01-12', '2026-01-13']);
+    expect(sunday.next.days[0].plates[0]).toMatchObject({ name: plate.name, storage: 'frozen', thawOn: '2026-01-11' });
+    // Only their own: the other client's plate is not in it.
+    expect(sunday.next.days[0].plates).toHaveLength(1);
+    // From Monday next week is the client's week, with nothing after it.
+    const monday = await mine('2026-01-12');
+    expect([monday.weekId, monday.next]).toEqual([next.id, null]);
+  });
+
   it('a client reads only their own published plates; edits stay hidden until the next publication', async () => {
     const coach = await coachWorkspace(app);
     const { tray, plate, client, week } = await setup(coach, { fridgeDays: 7 });

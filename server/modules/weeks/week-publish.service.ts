@@ -145,9 +145,14 @@ export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = t
   const weeks = await em.find(Week, { workspace: actor.workspaceId, publishedVersion: { $ne: null } }, { fields: ['id', 'startDate', 'publishedVersion'] });
   const current = pickWeek(weeks, today);
   if (!current) return null;
-  const pub = await em.findOne(WeekPublication, { week: current.id, number: current.publishedVersion! });
+  const after = weeks.filter((w) => compareIsoDates(w.startDate, current.startDate) > 0).sort((a, b) => compareIsoDates(a.startDate, b.startDate))[0];
+  const [pub, nextPub] = await Promise.all([
+    em.findOne(WeekPublication, { week: current.id, number: current.publishedVersion! }),
+    after ? em.findOne(WeekPublication, { week: after.id, number: after.publishedVersion! }) : null,
+  ]);
   if (!pub) return null;
   const mine = pub.snapshot.clients[String(actor.clientId)];
+  const nextDays = nextPub?.snapshot.clients[String(actor.clientId)]?.days ?? [];
   return {
     weekId: current.id,
     name: pub.snapshot.name,
@@ -156,6 +161,17 @@ export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = t
     startDate: pub.snapshot.startDate,
     endDate: pub.snapshot.endDate,
     days: mine?.days ?? [],
+    next:
+      nextPub && nextDays.length
+        ? {
+            weekId: nextPub.snapshot.weekId,
+            name: nextPub.snapshot.name,
+            publishedVersion: nextPub.number,
+            startDate: nextPub.snapshot.startDate,
+            endDate: nextPub.snapshot.endDate,
+            days: nextDays,
+          }
+        : null,
     cautions: CAUTIONS,
   };
 }

@@ -4,7 +4,7 @@ import { allergenLabel } from '@shared/domain/allergens';
 import { thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
 import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
-import type { MyPlateDto } from '@shared/schemas/weeks.schema';
+import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema';
 import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
 import { localToday, momentLabel } from '@/lib/dates';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
@@ -113,7 +113,7 @@ export function Component() {
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   const week = q.data;
-  if (!week || week.days.length === 0) {
+  if (!week || (week.days.length === 0 && !week.next)) {
     return (
       <div className="flex flex-col gap-6">
         <PageHeader title="My plates" />
@@ -121,16 +121,43 @@ export function Component() {
       </div>
     );
   }
-  const day = week.days.find((d) => d.date === (picked ?? today)) ?? (picked ? undefined : week.days.find((d) => d.date >= today) ?? week.days[0]);
-  const thaws = thawTasks(week.days);
+  // The next published week's days too: the client can look ahead, and a frozen plate on its first day thaws on
+  // this week's last evening.
+  const allDays = [...week.days, ...(week.next?.days ?? [])];
+  const day = allDays.find((d) => d.date === (picked ?? today)) ?? (picked ? undefined : allDays.find((d) => d.date >= today) ?? allDays[0]);
+  const thaws = thawTasks(allDays);
   const shownDate = day?.date ?? picked ?? today;
+  const dayButton = (d: MyDayDto) => (
+    <li key={d.date}>
+      <button
+        type="button"
+        onClick={() => {
+          setPicked(d.date);
+          // The day's plates are drawn above this list: bring them into view.
+          window.scrollTo({ top: 0, behavior: 'smooth' });
+        }}
+        aria-current={d.date === day?.date ? 'date' : undefined}
+        className={`flex min-h-11 w-full items-center justify-between gap-2 px-2 py-2 text-left ${d.date === day?.date ? 'bg-paper-deep font-bold' : ''}`}
+      >
+        <span>
+          {dayLabel(d.date)}
+          {d.date === today && <span className="ml-1 text-xs text-herb-700">today</span>}
+          {thaws.some((t) => t.thawOn === d.date) && <span className="ml-1 text-xs text-frost-700">❄ thaw tonight</span>}
+          <span className="block text-sm font-normal text-ink-soft">{d.plates.map((p) => p.name).join(' · ')}</span>
+        </span>
+        <span className="num text-sm">{Math.round(d.totals.kcal)} kcal · {d.totals.netCarbsG} g net</span>
+      </button>
+    </li>
+  );
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-5">
       <PageHeader title={day?.date === today ? "Today's plate" : 'My plates'} lead={day ? dayLabel(day.date, true) : undefined}>
-        <a href={`${myPlanPdfUrl}?today=${today}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline" download>
-          Download my week (PDF)
-        </a>
-        {thaws.length > 0 && (
+        {week.days.length > 0 && (
+          <a href={`${myPlanPdfUrl}?today=${today}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline" download>
+            Download my week (PDF)
+          </a>
+        )}
+        {thawTasks(week.days).length > 0 && (
           <a href={`${myThawRemindersUrl}?today=${today}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline" download>
             Thaw reminders for my calendar
           </a>
@@ -139,36 +166,24 @@ export function Component() {
       <DemoNotice>A demo account: this plan and its people are invented for trying Trayline.</DemoNotice>
       <ThawTonight tasks={thaws.filter((t) => t.thawOn === shownDate)} date={shownDate} isToday={shownDate === today} />
       {day ? day.plates.map((p) => <PlateCard key={p.slot} plate={p} />) : <EmptyState title="Nothing planned that day" />}
+      {week.days.length > 0 && (
       <Card>
         <h2 className="mb-2 text-xl">The week at a glance</h2>
-        <ul className="flex flex-col divide-y divide-line">
-          {week.days.map((d) => (
-            <li key={d.date}>
-              <button
-                type="button"
-                onClick={() => {
-                  setPicked(d.date);
-                  // The day's plates are drawn above this list: bring them into view.
-                  window.scrollTo({ top: 0, behavior: 'smooth' });
-                }}
-                aria-current={d.date === day?.date ? 'date' : undefined}
-                className={`flex min-h-11 w-full items-center justify-between gap-2 px-2 py-2 text-left ${d.date === day?.date ? 'bg-paper-deep font-bold' : ''}`}
-              >
-                <span>
-                  {dayLabel(d.date)}
-                  {d.date === today && <span className="ml-1 text-xs text-herb-700">today</span>}
-                  {thaws.some((t) => t.thawOn === d.date) && <span className="ml-1 text-xs text-frost-700">❄ thaw tonight</span>}
-                  <span className="block text-sm font-normal text-ink-soft">{d.plates.map((p) => p.name).join(' · ')}</span>
-                </span>
-                <span className="num text-sm">{Math.round(d.totals.kcal)} kcal · {d.totals.netCarbsG} g net</span>
-              </button>
-            </li>
-          ))}
-        </ul>
+        <ul className="flex flex-col divide-y divide-line">{week.days.map(dayButton)}</ul>
         <p className="mt-2 text-xs text-ink-faint">
           Version {week.publishedVersion}, published {momentLabel(week.publishedAt)}.
         </p>
       </Card>
+      )}
+      {week.next && (
+        <Card>
+          <h2 className="mb-1 text-xl">Next week</h2>
+          <p className="mb-2 text-sm text-ink-soft">
+            {week.next.name}, from {dayLabel(week.next.startDate, true)}: published, so it is what your coach plans for you.
+          </p>
+          <ul className="flex flex-col divide-y divide-line">{week.next.days.map(dayButton)}</ul>
+        </Card>
+      )}
       <Cautions compact />
     </div>
   );
