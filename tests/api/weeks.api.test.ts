@@ -447,6 +447,12 @@ describe('publishing and the client view', () => {
     // From Monday next week is the client's week, with nothing after it.
     const monday = await mine('2026-01-12');
     expect([monday.weekId, monday.next]).toEqual([next.id, null]);
+    // Next week's own files, asked for from its first day (the page's links): its plan and its thaw reminder.
+    const pdf = await me.agent.get('/api/weeks/mine/plan.pdf?today=2026-01-12').expect(200);
+    expect(pdf.headers['content-type']).toMatch(/^application\/pdf/);
+    const ics = await me.agent.get('/api/weeks/mine/thaw-reminders.ics?today=2026-01-12').expect(200);
+    const events = new ICAL.Component(ICAL.parse(ics.text)).getAllSubcomponents('vevent');
+    expect(events.map((e) => e.getFirstPropertyValue('dtstart')?.toString().slice(0, 10))).toEqual(['2026-01-11']);
   });
 
   it('a client reads only their own published plates; edits stay hidden until the next publication', async () => {

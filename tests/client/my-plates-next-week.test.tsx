@@ -38,8 +38,10 @@ describe("a client's plates with next week published", () => {
     expect(within(ahead as HTMLElement).getByText(/^Week of Mon 12 Jan, from /)).toBeTruthy();
     fireEvent.click(within(ahead as HTMLElement).getByRole('button', { name: /Bacon cup/ }));
     expect(screen.getByRole('heading', { level: 2, name: 'Bacon cup' })).toBeTruthy();
-    // The calendar file is this week's own (none here: no frozen plate on it).
+    // The calendar file is this week's own (none here: no frozen plate on it); next week's files are its own.
     expect(screen.queryByRole('link', { name: 'Thaw reminders for my calendar' })).toBeNull();
+    expect(screen.getByRole('link', { name: 'Download next week (PDF)' }).getAttribute('href')).toBe('/api/weeks/mine/plan.pdf?today=2026-01-12');
+    expect(screen.getByRole('link', { name: 'Its thaw reminders for my calendar' }).getAttribute('href')).toBe('/api/weeks/mine/thaw-reminders.ics?today=2026-01-12');
   });
 
   it('shows next week alone when this week has no plates for them', async () => {

@@ -42,7 +42,7 @@ async function keyboardDrag(page: Page, item: Locator, target: Locator) {
   await expect(page.getByText(`dropped on ${where}.`)).toBeAttached();
 }
 
-test('the coach drafts a week: base tray, plate, board (keyboard drag and cell panel), warning cleared, published, bake run', async ({ page }) => {
+test('the coach drafts a week: base tray, plate, board (keyboard drag and cell panel), warning cleared, published, bake run', async ({ page, browser, baseURL }) => {
   test.setTimeout(120_000);
   const trayName = unique('E2E cheddar egg slab');
   const plateName = unique('E2E cheddar slab plate');
@@ -169,6 +169,17 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await page.keyboard.press('Enter');
   await expect(page.getByText(/published v1/)).toBeVisible();
   await page.screenshot({ path: `${SHOTS}/coach-drafts-week-board.png`, fullPage: true });
+
+  // 6b. Dana, on her phone, can look ahead: the new week is published and comes after the demo week she is on.
+  const phone = await browser.newContext({ baseURL, viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+  const dana = await phone.newPage();
+  await signIn(dana, 'client1@trayline.test');
+  const ahead = dana.locator('div').filter({ has: dana.getByRole('heading', { level: 2, name: 'Next week' }) }).last();
+  await expect(ahead.getByText(new RegExp(`^${weekName}, from `))).toBeVisible();
+  await ahead.getByRole('button', { name: new RegExp(plateName) }).first().click();
+  await expect(dana.getByRole('heading', { level: 2, name: plateName }).first()).toBeVisible();
+  await expectNoSeriousA11yViolations(dana, 'my plates with next week');
+  await phone.close();
 
   await page.goto(`${weekUrl}/bake-run`);
   await expect(page.getByRole('heading', { name: 'Bake run' })).toBeVisible();

@@ -182,6 +182,17 @@ export function Component() {
             {week.next.name}, from {dayLabel(week.next.startDate, true)}: published, so it is what your coach plans for you.
           </p>
           <ul className="flex flex-col divide-y divide-line">{week.next.days.map(dayButton)}</ul>
+          {/* Its own files: the plan and thaw reminders of the week that starts then. */}
+          <p className="mt-2 flex flex-wrap gap-x-2">
+            <a href={`${myPlanPdfUrl}?today=${week.next.startDate}`} className="inline-flex min-h-11 items-center font-bold underline" download>
+              Download next week (PDF)
+            </a>
+            {thawTasks(week.next.days).length > 0 && (
+              <a href={`${myThawRemindersUrl}?today=${week.next.startDate}`} className="inline-flex min-h-11 items-center font-bold underline" download>
+                Its thaw reminders for my calendar
+              </a>
+            )}
+          </p>
         </Card>
       )}
       <Cautions compact />
