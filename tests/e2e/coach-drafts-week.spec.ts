@@ -94,6 +94,7 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await page.goto('/weeks');
   await expectNoSeriousA11yViolations(page, 'prep weeks');
   await page.getByLabel('Name (optional)').fill(weekName);
+  const startDate = await page.getByLabel('First day of the board').inputValue();
   await page.getByRole('button', { name: 'Create' }).click();
   await expect(page).toHaveURL(/\/weeks\/\d+$/);
   await expect(page.getByRole('heading', { name: weekName })).toBeVisible();
@@ -193,12 +194,16 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await page.goto(weekUrl);
   await page.getByRole('link', { name: 'Copy to a new week' }).click();
   await expect(page.getByLabel('Start from')).toHaveValue(weekUrl.split('/').pop()!);
-  await page.getByLabel('First day of the board').fill('2027-01-04');
+  // Five weeks after the new one (a day is on one board only; dates follow the calendar the run has).
+  const copyStart = new Date(Date.parse(`${startDate}T12:00:00Z`) + 35 * 86_400_000);
+  const part = (o: Intl.DateTimeFormatOptions) => copyStart.toLocaleDateString('en-US', { ...o, timeZone: 'UTC' });
+  const copyTitle = `Week of ${part({ weekday: 'short' })} ${part({ day: 'numeric' })} ${part({ month: 'short' })}`;
+  await page.getByLabel('First day of the board').fill(copyStart.toISOString().slice(0, 10));
   await page.getByRole('button', { name: 'Copy', exact: true }).click();
-  await expect(page.getByRole('heading', { name: 'Week of Mon 4 Jan' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: copyTitle })).toBeVisible();
   await expect(page.getByRole('button', { name: new RegExp(`^Dana Whitlock, .*, breakfast: ${plateName}`) }).first()).toBeVisible();
   page.once('dialog', (d) => void d.accept());
   await page.getByRole('button', { name: 'Delete week' }).click();
   await expect(page).toHaveURL(/\/weeks$/);
-  await expect(page.getByRole('link', { name: 'Week of Mon 4 Jan' })).toHaveCount(0);
+  await expect(page.getByRole('link', { name: copyTitle })).toHaveCount(0);
 });
