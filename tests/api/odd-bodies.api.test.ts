@@ -4,6 +4,7 @@ import type request from 'supertest';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, member, type Member } from '../support/factories.js';
 import { MATRIX, type MatrixContext } from '../support/authorization-matrix.js';
+import { listApiRoutes } from '../support/routes.js';
 
 /**
  * Every route, called by a role its matrix row allows, with bodies and queries no form would send: the answer is
@@ -11,10 +12,11 @@ import { MATRIX, type MatrixContext } from '../support/authorization-matrix.js';
  * own body with each field (to three levels down) replaced in turn by an odd value, plus whole bodies of the wrong
  * shape. Found this way: a 5 000-character e-mail at sign-in was a 500 (the rate-limit key outgrew its column).
  */
+let app: Express;
 let ctx: MatrixContext;
 let roles: Record<'coach' | 'assistant' | 'client', Member>;
 beforeAll(async () => {
-  const app: Express = (await testApp()).app;
+  app = (await testApp()).app;
   const coach = await coachWorkspace(app);
   roles = { coach, assistant: await member(app, coach, 'assistant'), client: await member(app, coach, 'client') };
   ctx = { app, coachA: coach, coachB: await coachWorkspace(app), ids: {} };
@@ -77,4 +79,25 @@ describe('odd bodies and queries', () => {
       expect(wrong).toEqual([]);
     }, 60_000);
   }
+});
+
+describe('odd path parameters', () => {
+  // Each ":param" of every route replaced by tokens no link makes: never a 5xx, and a 400 says what.
+  const ODD_PARAMS = ['abc', '1.5', '-1', '0', '%00', '1e3', '%F0%9F%8D%B3', 'x'.repeat(300), '01'];
+  it('every route with a path parameter answers 400, 403 or 404 (never a 5xx) to them', async () => {
+    const routes = listApiRoutes(app).filter((r) => r.path.includes(':') && r.path !== '/api/auth/logout');
+    expect(routes.length).toBeGreaterThan(20);
+    const wrong: string[] = [];
+    for (const r of routes) {
+      const row = MATRIX[`${r.method} ${r.path}`];
+      const who = allowedRole(row.access)!;
+      const m = r.method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
+      for (const odd of ODD_PARAMS) {
+        const p = r.path.replace(/:\w+/g, odd);
+        const res = await who.agent[m](p).set('x-trayline-csrf', '1').send({});
+        if (res.status >= 500 || (res.status === 400 && !res.body?.errors && !res.body?.detail)) wrong.push(`${res.status} ${r.method} ${p}`);
+      }
+    }
+    expect(wrong).toEqual([]);
+  }, 120_000);
 });
