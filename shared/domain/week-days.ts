@@ -30,6 +30,13 @@ export function pickWeek<T extends { startDate: IsoDate }>(weeks: readonly T[], 
   return current ?? sorted.find((w) => daysBetween(today, w.startDate) > 0) ?? sorted[sorted.length - 1] ?? null;
 }
 
+/** The first week to start after `week` (null when none does). */
+export function weekAfter<T extends { startDate: IsoDate }>(weeks: readonly T[], week: { startDate: IsoDate }): T | null {
+  let next: T | null = null;
+  for (const w of weeks) if (daysBetween(week.startDate, w.startDate) > 0 && (!next || daysBetween(w.startDate, next.startDate) > 0)) next = w;
+  return next;
+}
+
 /**
  * The kitchen's week: the one whose next prep day (today included) comes first, whichever board it is on (from
  * Thursday the kitchen shops for next week's Sunday); with no prep day ahead, `pickWeek`'s.

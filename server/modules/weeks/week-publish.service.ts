@@ -4,7 +4,7 @@ import { CAUTIONS } from '@shared/domain/eat-by.js';
 import { addDays, compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, type BoardResult } from '@shared/domain/week-board.js';
 import { worded } from '@shared/domain/week-check.js';
-import { pickWeek } from '@shared/domain/week-days.js';
+import { pickWeek, weekAfter } from '@shared/domain/week-days.js';
 import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
 import type { MyDayDto, MyPlateDto, MyWeekDto, WeekPublicationDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
 import type { BoardAnswer } from '@shared/schemas/board-answer.js';
@@ -145,7 +145,7 @@ export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = t
   const weeks = await em.find(Week, { workspace: actor.workspaceId, publishedVersion: { $ne: null } }, { fields: ['id', 'startDate', 'publishedVersion'] });
   const current = pickWeek(weeks, today);
   if (!current) return null;
-  const after = weeks.filter((w) => compareIsoDates(w.startDate, current.startDate) > 0).sort((a, b) => compareIsoDates(a.startDate, b.startDate))[0];
+  const after = weekAfter(weeks, current);
   const [pub, nextPub] = await Promise.all([
     em.findOne(WeekPublication, { week: current.id, number: current.publishedVersion! }),
     after ? em.findOne(WeekPublication, { week: after.id, number: after.publishedVersion! }) : null,

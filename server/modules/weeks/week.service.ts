@@ -3,7 +3,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
 import { addDays, compareIsoDates, daysBetween, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, coveringBatches, weekTitle } from '@shared/domain/week-board.js';
-import { BOARD_DAYS, pickWeek } from '@shared/domain/week-days.js';
+import { BOARD_DAYS, pickWeek, weekAfter } from '@shared/domain/week-days.js';
 import type { GlanceDto, SetupCountsDto, WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
 import { preparedRows } from '../../db/prepared.js';
 import type { BoardAnswer, CopyWeekAnswer } from '@shared/schemas/board-answer.js';
@@ -460,7 +460,7 @@ export async function glance(em: EntityManager, actor: Actor, today: IsoDate = t
   const [weeks, setup] = await Promise.all([em.find(Week, { workspace: actor.workspaceId }), setupCounts(em, actor.workspaceId)]);
   const week = pickWeek(weeks, today);
   if (!week) return { week: null, nextWeek: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup };
-  const after = weeks.filter((w) => compareIsoDates(w.startDate, week.startDate) > 0).sort((a, b) => compareIsoDates(a.startDate, b.startDate))[0];
+  const after = weekAfter(weeks, week);
   const data = await loadBoardData(em, actor, week);
   const result = computeBoard(boardInput(data));
   const nextPrepDate =

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { boardsShareADay, firstFreeMonday, kitchenWeek, nextMonday, pickWeek } from '@shared/domain/week-days';
+import { boardsShareADay, firstFreeMonday, kitchenWeek, nextMonday, pickWeek, weekAfter } from '@shared/domain/week-days';
 
 // The weekday of a date read independently of the project's date code: ECMAScript's Intl.DateTimeFormat (ECMA-402).
 const weekday = (iso: string) => new Intl.DateTimeFormat('en-US', { weekday: 'long', timeZone: 'UTC' }).format(new Date(`${iso}T12:00:00Z`));
@@ -51,6 +51,13 @@ describe('which week a page is about', () => {
     expect(ids(pickWeek([nextWeek, thisWeek], '2026-11-20'))).toBe(1); // before both: the next to start
     expect(ids(pickWeek([nextWeek, thisWeek], '2027-01-20'))).toBe(2); // after both: the latest
     expect(pickWeek([], '2026-12-03')).toBeNull();
+  });
+
+  it('the week after one: the first to start after it, whatever the order given', () => {
+    const later = { id: 3, startDate: '2026-12-21', prepDate: '2026-12-20', secondPrepDate: null };
+    expect(ids(weekAfter([later, nextWeek, thisWeek], thisWeek))).toBe(2);
+    expect(ids(weekAfter([later, nextWeek, thisWeek], nextWeek))).toBe(3);
+    expect(weekAfter([later, nextWeek, thisWeek], later)).toBeNull();
   });
 
   it("the kitchen's: the week of the next prep day, today included, whichever board it is on", () => {
