@@ -54,6 +54,24 @@ describe('new week form', () => {
     expect(field('First day of the board').getAttribute('aria-invalid')).toBe('true');
   });
 
+  it("lists each week with its kitchen pages: an assistant reaches last week's labels, not the board", async () => {
+    const last = {
+      id: 4, name: 'Week of 30 Nov', startDate: '2026-11-30', endDate: '2026-12-06', prepDate: '2026-11-29', secondPrepDate: null,
+      publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 14, version: 3,
+    };
+    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse([last])));
+    renderInApp(<WeeksPage />, queryClientFor(signedIn({ role: 'assistant' })));
+    const pages = await screen.findByRole('list', { name: 'Week of 30 Nov: kitchen pages' });
+    const hrefs = Array.from(pages.querySelectorAll('a')).map((a) => [a.textContent, a.getAttribute('href')]);
+    expect(hrefs).toEqual([
+      ['Shopping list', '/weeks/4/shopping'],
+      ['Bake run', '/weeks/4/bake-run'],
+      ['Labels', '/weeks/4/labels'],
+    ]);
+    expect(screen.queryByRole('link', { name: 'Week of 30 Nov' })).toBeNull();
+    expect(screen.queryByRole('heading', { name: 'New week' })).toBeNull();
+  });
+
   it('moves the prep day with the first day of the board until the coach picks one', () => {
     show();
     fireEvent.change(field('First day of the board'), { target: { value: '2026-12-21' } });

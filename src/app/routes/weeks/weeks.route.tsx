@@ -137,6 +137,20 @@ export function Component() {
                       {dayLabel(w.startDate)} – {dayLabel(w.endDate)} · prep {dayLabel(w.prepDate)}
                       {w.secondPrepDate ? ` and ${dayLabel(w.secondPrepDate)}` : ''} · <span className="num">{w.cellCount}</span> plates placed
                     </p>
+                    {/* Any week's kitchen pages, not only the one the kitchen is on now (last Sunday's labels on Monday). */}
+                    <ul className="flex flex-wrap gap-x-3 text-sm" aria-label={`${w.name}: kitchen pages`}>
+                      {[
+                        { to: paths.shopping(w.id), label: 'Shopping list' },
+                        { to: paths.bakeRun(w.id), label: 'Bake run' },
+                        { to: paths.labels(w.id), label: 'Labels' },
+                      ].map((l) => (
+                        <li key={l.label}>
+                          <Link to={l.to} className="inline-flex min-h-11 items-center underline">
+                            {l.label}
+                          </Link>
+                        </li>
+                      ))}
+                    </ul>
                   </div>
                   <span className="text-sm">
                     {w.publishedVersion ? `Published v${w.publishedVersion}${w.changedSincePublished ? ' (changed since)' : ''}` : 'Draft'}
