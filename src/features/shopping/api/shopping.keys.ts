@@ -12,7 +12,8 @@ export const shoppingKeys = {
   checks: (weekId: number, prepDate: string | null = null) => [...shoppingKeys.all, 'checks', weekId, prepDate ?? 'week'] as const,
   /** A list for trays × counts given directly (POST /api/shopping/preview). */
   preview: (trays: readonly { trayId: number; count: number }[]) => [...shoppingKeys.all, 'preview', trays] as const,
-  currentWeek: (today: string) => [...shoppingKeys.all, 'current-week', today] as const,
+  /** Under the weeks' prefix, not the shopping one: a change to any week reads the kitchen's week again. */
+  currentWeek: (today: string) => ['weeks', 'kitchen', today] as const,
   labels: () => [...shoppingKeys.all, 'labels'] as const,
   labelSheet: (weekId: number, layout: LabelSheetCode, prepDate: string | null) =>
     [...shoppingKeys.labels(), weekId, layout, prepDate ?? ''] as const,

@@ -1,4 +1,4 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type {
   BoardDto,
   CellInput,
@@ -13,6 +13,15 @@ import { expandBoard, type BoardAnswer, type CopyWeekAnswer, type WeekCopied } f
 import { api } from '@/lib/api-client';
 import { weekKeys } from './weeks.keys';
 
+/**
+ * After a week changes, everything that sums weeks up is read again: the lists, the coach's glance (its warnings, the
+ * week after), the client's week and the kitchen's week (the shopping feature keeps that under the weeks' prefix).
+ * Boards are not: each write puts its own answer in the cache.
+ */
+function refreshSummaries(qc: QueryClient) {
+  return qc.invalidateQueries({ queryKey: weekKeys.all, predicate: (q) => q.queryKey[1] !== 'detail' });
+}
+
 /** Every board write answers the new board: put it in the cache. A 409 is handled by the board (merge prompt). */
 function useBoardWrite<T>(id: number, send: (input: T) => Promise<BoardDto>) {
   const qc = useQueryClient();
@@ -21,7 +30,7 @@ function useBoardWrite<T>(id: number, send: (input: T) => Promise<BoardDto>) {
     meta: { silent: true },
     onSuccess: (board) => {
       qc.setQueryData(weekKeys.detail(id), board);
-      return qc.invalidateQueries({ queryKey: weekKeys.lists() });
+      return refreshSummaries(qc);
     },
   });
 }
@@ -48,7 +57,7 @@ export function useCreateWeek() {
     meta: { form: true },
     onSuccess: (board) => {
       qc.setQueryData(weekKeys.detail(board.week.id), board);
-      return qc.invalidateQueries({ queryKey: weekKeys.lists() });
+      return refreshSummaries(qc);
     },
   });
 }
@@ -67,7 +76,7 @@ export function useCopyWeek() {
     meta: { form: true },
     onSuccess: ({ board }) => {
       qc.setQueryData(weekKeys.detail(board.week.id), board);
-      return qc.invalidateQueries({ queryKey: weekKeys.lists() });
+      return refreshSummaries(qc);
     },
   });
 }
@@ -81,7 +90,7 @@ export function useDeleteWeek() {
       qc.removeQueries({ queryKey: weekKeys.detail(id), exact: true });
       // The list the page goes back to leaves the week out at once, not after its refetch.
       qc.setQueryData<WeekSummaryDto[]>(weekKeys.list(), (weeks) => weeks?.filter((w) => w.id !== id));
-      return qc.invalidateQueries({ queryKey: weekKeys.all, predicate: (q) => q.queryKey[1] !== 'detail' });
+      return refreshSummaries(qc);
     },
   });
 }
