@@ -23,6 +23,21 @@ export function firstFreeMonday(today: IsoDate, weeks: readonly { startDate: Iso
   return start;
 }
 
+/**
+ * The nearest first day for a new board clear of every week, stepping from a week it would clash with: 'later' gives
+ * the first start after that week (and after any week right behind it), 'earlier' the last start before it.
+ */
+export function clearStart(weeks: readonly { startDate: IsoDate }[], clash: { startDate: IsoDate }, way: 'later' | 'earlier'): IsoDate {
+  const step = way === 'later' ? BOARD_DAYS : -BOARD_DAYS;
+  let start = addDays(clash.startDate, step);
+  for (let i = 0; i < 520; i++) {
+    const next = weeks.find((w) => boardsShareADay(w.startDate, start));
+    if (!next) break;
+    start = addDays(next.startDate, step);
+  }
+  return start;
+}
+
 /** The week covering `today`, else the next one to start, else the latest (null when there is none). */
 export function pickWeek<T extends { startDate: IsoDate }>(weeks: readonly T[], today: IsoDate): T | null {
   const sorted = [...weeks].sort((a, b) => daysBetween(b.startDate, a.startDate));

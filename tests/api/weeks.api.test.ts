@@ -402,6 +402,9 @@ describe('one board per day', () => {
     const copy = await coach.agent.post(`/api/weeks/${next.body.week.id}/copy`).send({ startDate: '2026-01-18', prepDate: '2026-01-17' }).expect(400);
     expect(copy.body.errors.startDate[0]).toMatch(/^"Week of Mon 12 Jan" already plans Mon 12 Jan – Sun 18 Jan;/);
     expect((await coach.agent.get('/api/weeks').expect(200)).body).toHaveLength(3);
+    // With the weeks of 29 Dec, 5 Jan and 12 Jan planned, a start inside 5 Jan's is pointed past all three.
+    const crowded = await coach.agent.post('/api/weeks').send({ startDate: '2026-01-07', prepDate: '2026-01-06' }).expect(400);
+    expect(crowded.body.errors.startDate[0]).toMatch(/^"Week one" already plans Mon 5 Jan – Sun 11 Jan; .* Start this week on Mon 19 Jan or later\.$/);
     // Another workspace plans its own days.
     await makeWeek(await coachWorkspace(app));
   });

@@ -3,7 +3,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
 import { addDays, compareIsoDates, daysBetween, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, coveringBatches, weekTitle } from '@shared/domain/week-board.js';
-import { BOARD_DAYS, pickWeek, weekAfter } from '@shared/domain/week-days.js';
+import { BOARD_DAYS, boardsShareADay, clearStart, pickWeek, weekAfter } from '@shared/domain/week-days.js';
 import type { GlanceDto, SetupCountsDto, WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
 import { preparedRows } from '../../db/prepared.js';
 import type { BoardAnswer, CopyWeekAnswer } from '@shared/schemas/board-answer.js';
@@ -84,16 +84,14 @@ const WEEK_DAYS_LOCK = 7302;
  */
 async function checkDaysFree(tx: EntityManager, actor: Actor, startDate: IsoDate): Promise<void> {
   await tx.getConnection().execute('select pg_advisory_xact_lock(?, ?)', [WEEK_DAYS_LOCK, actor.workspaceId], 'all', tx.getTransactionContext());
-  const other = await tx.findOne(
-    Week,
-    { workspace: actor.workspaceId, startDate: { $gt: addDays(startDate, -BOARD_DAYS), $lt: addDays(startDate, BOARD_DAYS) } },
-    { orderBy: { startDate: 'asc' } },
-  );
+  const weeks = await tx.find(Week, { workspace: actor.workspaceId }, { fields: ['id', 'name', 'startDate'], orderBy: { startDate: 'asc' } });
+  const other = weeks.find((w) => boardsShareADay(w.startDate, startDate));
   if (!other) return;
-  const after = compareIsoDates(other.startDate, startDate) <= 0;
+  // The nearest start clear of every week, on the side of the clash the coach asked for.
+  const way = compareIsoDates(other.startDate, startDate) <= 0 ? 'later' : 'earlier';
   const message =
     `"${weekTitle(other)}" already plans ${shortDate(other.startDate)} – ${shortDate(addDays(other.startDate, BOARD_DAYS - 1))}; a day is on one board only. ` +
-    (after ? `Start this week on ${shortDate(addDays(other.startDate, BOARD_DAYS))} or later.` : `Start this week on ${shortDate(addDays(other.startDate, -BOARD_DAYS))} or earlier.`);
+    `Start this week on ${shortDate(clearStart(weeks, other, way))} or ${way}.`;
   throw new ValidationError(message, { startDate: [message] });
 }
 

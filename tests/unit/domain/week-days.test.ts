@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { boardsShareADay, firstFreeMonday, kitchenWeek, nextMonday, pickWeek, weekAfter } from '@shared/domain/week-days';
+import { boardsShareADay, clearStart, firstFreeMonday, kitchenWeek, nextMonday, pickWeek, weekAfter } from '@shared/domain/week-days';
 
 // The weekday of a date read independently of the project's date code: ECMAScript's Intl.DateTimeFormat (ECMA-402).
 const weekday = (iso: string) => new Intl.DateTimeFormat('en-US', { weekday: 'long', timeZone: 'UTC' }).format(new Date(`${iso}T12:00:00Z`));
@@ -28,6 +28,15 @@ describe('the Monday a new board starts on', () => {
     // A board starting on a Wednesday covers Wed … Tue: the Monday of its second week is taken, the next is free.
     expect(firstFreeMonday('2026-12-03', [{ startDate: '2026-12-09' }])).toBe('2026-12-21');
     expect(firstFreeMonday('2026-12-03', [{ startDate: '2026-12-01' }])).toBe('2026-12-14');
+  });
+
+  it('a refused start is pointed to the nearest clear one, past weeks right behind or before the clash', () => {
+    const weeks = [{ startDate: '2026-12-07' }, { startDate: '2026-12-14' }, { startDate: '2026-11-30' }];
+    expect(clearStart(weeks, { startDate: '2026-12-07' }, 'later')).toBe('2026-12-21');
+    expect(clearStart(weeks, { startDate: '2026-12-07' }, 'earlier')).toBe('2026-11-23');
+    expect(clearStart([{ startDate: '2026-12-07' }], { startDate: '2026-12-07' }, 'later')).toBe('2026-12-14');
+    // A board starting on a Thursday blocks until the Wednesday after: the next clear start is that Thursday.
+    expect(clearStart([{ startDate: '2026-12-07' }, { startDate: '2026-12-17' }], { startDate: '2026-12-07' }, 'later')).toBe('2026-12-24');
   });
 
   it('two boards share a day when their first days are under seven days apart', () => {
