@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import type { OutboxItemDto } from './mail.schema';
-import { isoDate } from './weeks.schema';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 
 /** Sending a published prep week to clients (e-mail with the week-plan PDF) and the delivery log. */
@@ -11,8 +10,6 @@ export const weekSendParams = z.object({ weekId: id });
 export const weekClientPlanParams = z.object({ weekId: id, clientId: id });
 export const clientDeliveriesParams = z.object({ clientId: id });
 
-/** The client's "today" (their device's date), to pick the same week "my plates" shows. */
-export const myPlanQuery = z.object({ today: isoDate.optional() });
 
 export const NOTE_MAX = 1000;
 

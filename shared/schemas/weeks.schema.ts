@@ -11,6 +11,9 @@ import { PG_INT_MAX, TOO_LARGE } from './ids';
 /** Prep weeks, the week board, publishing. */
 
 export const isoDate = z.string().refine(isIsoDate, { message: 'Use a date like 2026-01-04' });
+
+/** The person's "today" (their device's date), for the routes that pick a week by it. */
+export const todayQuery = z.object({ today: isoDate.optional() });
 const version = z.number().int().positive().max(PG_INT_MAX, TOO_LARGE);
 const allergen = z.enum(ALLERGEN_CODES as unknown as [AllergenCode, ...AllergenCode[]]);
 

@@ -1,6 +1,5 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { isoDate } from '@shared/schemas/weeks.schema.js';
+import { todayQuery } from '@shared/schemas/weeks.schema.js';
 import {
   checkBodySchema,
   checkParams,
@@ -35,7 +34,7 @@ export function shoppingRoutes(opts: { publicUrl: string }) {
   r.get(
     '/weeks/current',
     allow('coach', 'assistant'),
-    validated({ query: z.object({ today: isoDate.optional() }) }, async ({ query }, req) => (await currentWeek(emOf(req), actorOf(req), query.today)) ?? null),
+    validated({ query: todayQuery }, async ({ query }, req) => (await currentWeek(emOf(req), actorOf(req), query.today)) ?? null),
   );
 
   r.get(

@@ -1,7 +1,6 @@
 import { Router } from 'express';
 import {
   clientDeliveriesParams,
-  myPlanQuery,
   deliveriesQuerySchema,
   sendWeekSchema,
   weekClientPlanParams,
@@ -12,6 +11,7 @@ import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import type { MailQueue } from '../mail/mail.service.js';
 import type { RenderedAttachment } from '../mail/attachment-registry.js';
+import { todayQuery } from '@shared/schemas/weeks.schema.js';
 import { clientDeliveries, coachPlanPdf, myPlanPdf, sendWeek } from './week-mail.service.js';
 import { myWeek } from './week-publish.service.js';
 import { thawRemindersFile } from './week-mail.js';
@@ -32,14 +32,14 @@ export function weekMailRoutes(deps: { mail: MailQueue; publicUrl: string }) {
   r.get(
     '/weeks/mine/plan.pdf',
     allow('client'),
-    validated({ query: myPlanQuery }, async ({ query }, req, res) => sendAttachment(res, await myPlanPdf(emOf(req), actorOf(req), query.today))),
+    validated({ query: todayQuery }, async ({ query }, req, res) => sendAttachment(res, await myPlanPdf(emOf(req), actorOf(req), query.today))),
   );
 
   // The signed-in client's thaw reminders (the evening before each frozen plate of their current week), for a calendar.
   r.get(
     '/weeks/mine/thaw-reminders.ics',
     allow('client'),
-    validated({ query: myPlanQuery }, async ({ query }, req, res) => {
+    validated({ query: todayQuery }, async ({ query }, req, res) => {
       const week = await myWeek(emOf(req), actorOf(req), query.today);
       if (!week) throw new NotFound('Published week');
       sendAttachment(res, thawRemindersFile(week, week.days));

@@ -1,10 +1,9 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import {
   copyDaySchema,
   copyWeekSchema,
   createWeekSchema,
-  isoDate,
+  todayQuery,
   putCellsSchema,
   putTraysSchema,
   updateWeekSchema,
@@ -18,7 +17,6 @@ import * as weeks from './week.service.js';
 import { getBoard } from './week-board.service.js';
 import { listPublications, myWeek, publishWeek } from './week-publish.service.js';
 
-const todayQuery = z.object({ today: isoDate.optional() });
 
 export function weekRoutes() {
   const r = Router();
