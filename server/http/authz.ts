@@ -1,3 +1,4 @@
+import { DEFAULT_DATE_ORDER, type DateOrder } from '@shared/domain/iso-date.js';
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { Forbidden, NotFound, Unauthorized } from './errors.js';
 import type { Role } from '@shared/schemas/auth.schema.js';
@@ -25,7 +26,12 @@ export interface Actor {
    * library rows a process read under this stamp are still what the database holds. Absent when not read.
    */
   nutritionVersion?: string | null;
+  /** How the workspace writes dates in words, read with the person (absent where an actor is made without it). */
+  dateOrder?: DateOrder;
 }
+
+/** How the actor's workspace writes dates (month-day unless the coach chose day-month). */
+export const datesOf = (actor: Pick<Actor, 'dateOrder'>): DateOrder => actor.dateOrder ?? DEFAULT_DATE_ORDER;
 
 /** The measure system the actor's amounts are written in (US customary unless they chose metric). */
 export const measureOf = (actor: Pick<Actor, 'unitSystem'>): 'us' | 'metric' => actor.unitSystem ?? 'us';

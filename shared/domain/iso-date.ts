@@ -90,16 +90,44 @@ const WEEKDAYS = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Frida
 const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
 
 /**
- * "Monday 7 December 2026" from "2026-12-07": a calendar date in words for printed plans, e-mails and the
- * sentences of the week check (always English; the pages use the reader's locale, src/lib/dates.ts).
+ * How a workspace writes dates in words (a coach's setting: the pages, printed plans, labels, e-mails and messages
+ * all follow it): 'month-day' ("Mon, Dec 7"; as en-US writes them) or 'day-month' ("Mon 7 Dec"; as en-GB does).
  */
-export function longDate(iso: IsoDate): string {
+export const DATE_ORDERS = ['month-day', 'day-month'] as const;
+export type DateOrder = (typeof DATE_ORDERS)[number];
+export const DEFAULT_DATE_ORDER: DateOrder = 'month-day';
+
+/** A stored value as a DateOrder (anything but 'day-month' reads as the default). */
+export const toDateOrder = (v: string | null | undefined): DateOrder => (v === 'day-month' ? 'day-month' : DEFAULT_DATE_ORDER);
+
+function parts(iso: IsoDate) {
   const [y, m, d] = iso.split('-').map(Number);
-  return `${WEEKDAYS[weekdayOf(iso)]} ${d} ${MONTHS[m - 1]} ${y}`;
+  return { y, month: MONTHS[m - 1], d, weekday: WEEKDAYS[weekdayOf(iso)] };
 }
 
-/** "Wed 9 Dec" from "2026-12-09" (as longDate, short). */
-export function shortDate(iso: IsoDate): string {
-  const [, m, d] = iso.split('-').map(Number);
-  return `${WEEKDAYS[weekdayOf(iso)].slice(0, 3)} ${d} ${MONTHS[m - 1].slice(0, 3)}`;
+/**
+ * A calendar date in full words for printed plans and e-mails: "Monday, December 7, 2026" (month-day) or
+ * "Monday 7 December 2026" (day-month). Always English.
+ */
+export function longDate(iso: IsoDate, order: DateOrder): string {
+  const { y, month, d, weekday } = parts(iso);
+  return order === 'day-month' ? `${weekday} ${d} ${month} ${y}` : `${weekday}, ${month} ${d}, ${y}`;
+}
+
+/** "Wed, Dec 9" (month-day) or "Wed 9 Dec" (day-month) from "2026-12-09": a day in a list, a title or a sentence. */
+export function shortDate(iso: IsoDate, order: DateOrder): string {
+  const { month, d, weekday } = parts(iso);
+  return order === 'day-month' ? `${weekday.slice(0, 3)} ${d} ${month.slice(0, 3)}` : `${weekday.slice(0, 3)}, ${month.slice(0, 3)} ${d}`;
+}
+
+/** "Wednesday, Dec 9" (month-day) or "Wednesday 9 Dec" (day-month): a day's heading, its weekday in full. */
+export function dayHeading(iso: IsoDate, order: DateOrder): string {
+  const { month, d, weekday } = parts(iso);
+  return order === 'day-month' ? `${weekday} ${d} ${month.slice(0, 3)}` : `${weekday}, ${month.slice(0, 3)} ${d}`;
+}
+
+/** "Dec 7, 2026" (month-day) or "7 Dec 2026" (day-month): a date with its year and no weekday (when someone joined). */
+export function dateWithYear(iso: IsoDate, order: DateOrder): string {
+  const { y, month, d } = parts(iso);
+  return order === 'day-month' ? `${d} ${month.slice(0, 3)} ${y}` : `${month.slice(0, 3)} ${d}, ${y}`;
 }

@@ -10,14 +10,14 @@
  */
 import { eatByRemedies, portionStatus, supplyingPrepDate, type EatByRemedy, type PortionStatusKind } from './eat-by';
 import { portionCount, type BoardCell, type BoardPortion, type TrayTally } from './inventory';
-import { compareIsoDates, shortDate, type IsoDate } from './iso-date';
+import { compareIsoDates, shortDate, type DateOrder, type IsoDate } from './iso-date';
 import type { AllergenCode } from './allergens';
 import type { MacroTargets } from './targets';
 import { checkWeek, type AllergenOverride, type CellMacros, type CellPortion, type CheckCell, type DayCheck, type WeekWarning } from './week-check';
 
-/** What a week is called where a person reads it: its name, or "Week of Mon 7 Dec" when it has none. */
-export function weekTitle(w: { name?: string | null; startDate: IsoDate }): string {
-  return w.name || `Week of ${shortDate(w.startDate)}`;
+/** What a week is called where a person reads it: its name, or "Week of Mon, Dec 7" when it has none. */
+export function weekTitle(w: { name?: string | null; startDate: IsoDate }, order: DateOrder): string {
+  return w.name || `Week of ${shortDate(w.startDate, order)}`;
 }
 
 /** A week's prep days (one or two), earliest first. */

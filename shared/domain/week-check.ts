@@ -15,7 +15,7 @@
 import Decimal from 'decimal.js';
 import { allergenConflicts, allergenLabel, type AllergenCode } from './allergens';
 import { freezerQualityDate, portionStatus } from './eat-by';
-import { compareIsoDates, shortDate, type IsoDate } from './iso-date';
+import { compareIsoDates, shortDate, type DateOrder, type IsoDate } from './iso-date';
 import type { MacroTargets } from './targets';
 
 export type Severity = 'block' | 'warn';
@@ -100,7 +100,7 @@ export type WordedWarning = WeekWarning & { message: string };
  * A warning's sentence, from its kind and values: the one wording of each problem. The week check gives facts only;
  * whoever shows a warning to a person words it with this (`worded`).
  */
-export function warningMessage(w: WarningData, date: IsoDate): string {
+export function warningMessage(w: WarningData, date: IsoDate, order: DateOrder): string {
   switch (w.kind) {
     case 'net-carbs-over':
       return `Net carbs ${w.actualG} g are over the ${w.capG} g cap.`;
@@ -115,17 +115,17 @@ export function warningMessage(w: WarningData, date: IsoDate): string {
     case 'dislike':
       return w.matched && w.matched !== w.term ? `The client dislikes ${w.term} (${w.matched}).` : `The client dislikes ${w.term}.`;
     case 'before-prep':
-      return `Planned on ${shortDate(date)}, before its tray is made on ${shortDate(w.prepDate)}.`;
+      return `Planned on ${shortDate(date, order)}, before its tray is made on ${shortDate(w.prepDate, order)}.`;
     case 'past-freezer-quality':
-      return `Frozen portion planned after its freezer quality limit (${shortDate(w.qualityUntil)}).`;
+      return `Frozen portion planned after its freezer quality limit (${shortDate(w.qualityUntil, order)}).`;
     case 'past-eat-by':
-      return `Past its eat-by date: prepped ${shortDate(w.prepDate)}, eat by ${shortDate(w.eatBy)}.`;
+      return `Past its eat-by date: prepped ${shortDate(w.prepDate, order)}, eat by ${shortDate(w.eatBy, order)}.`;
   }
 }
 
 /** A warning with its sentence (warningMessage, the one wording). */
-export function worded(w: WeekWarning): WordedWarning {
-  return { ...w, message: warningMessage(w, w.date) };
+export function worded(w: WeekWarning, order: DateOrder): WordedWarning {
+  return { ...w, message: warningMessage(w, w.date, order) };
 }
 
 export interface DayTotals {

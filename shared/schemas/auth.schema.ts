@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 import { emailAddress as email } from './email';
+import { DATE_ORDERS, type DateOrder } from '../domain/iso-date';
 
 export const ROLES = ['coach', 'assistant', 'client'] as const;
 export const roleSchema = z.enum(ROLES);
@@ -23,6 +24,8 @@ export const registerSchema = z.object({
   email,
   password,
   businessName: z.string().trim().min(1, { message: 'Enter your business name' }).max(120),
+  /** How the new workspace writes dates (the sign-up form sends its device's order; a setting afterwards). */
+  dateOrder: z.enum(DATE_ORDERS, { message: 'Choose how dates are written: month-day or day-month' }).optional(),
 });
 export type RegisterInput = z.infer<typeof registerSchema>;
 
@@ -73,6 +76,8 @@ export interface MeDto {
   clientId: number | null;
   unitSystem: (typeof UNIT_SYSTEMS)[number];
   tempUnit: (typeof TEMP_UNITS)[number];
+  /** How the workspace writes dates in words (the coach's setting; every page and document follows it). */
+  dateOrder: DateOrder;
 }
 
 /** One of the workspaces a person belongs to (GET /api/auth/workspaces): someone may work for two coaches. */

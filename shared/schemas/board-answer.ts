@@ -80,7 +80,7 @@ export function expandBoard(a: BoardAnswer): BoardDto {
       clientId: d.clientId,
       date: d.date,
       totals: d.totals,
-      warnings: (d.warnings ?? []).map((w) => ({ ...w, clientId: String(d.clientId), date: d.date, message: warningMessage(w, d.date) }) as WordedWarning),
+      warnings: (d.warnings ?? []).map((w) => ({ ...w, clientId: String(d.clientId), date: d.date, message: warningMessage(w, d.date, a.dateOrder) }) as WordedWarning),
     })),
   };
 }

@@ -6,6 +6,7 @@ import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { NET_CARB_RULES, type AtwaterCheck, type NetCarbRuleKind, type NutrientNumbers } from '../domain/nutrition';
 import { ambiguousCommaMessage, AmountParseError, decimalCommaToPoint, isMassUnit, isVolumeUnit, MAX_AMOUNT, MAX_AMOUNT_MESSAGE, parseAmount, PLAIN_DECIMAL, unitKind, UnknownUnitError } from '../domain/units';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { DATE_ORDERS, type DateOrder } from '../domain/iso-date';
 
 /** Ingredient library, recipe calculation and the net-carb setting: inputs (zod) and DTOs for API and client. */
 
@@ -343,13 +344,14 @@ export type RecipeCalcInput = z.input<typeof recipeCalcSchema>;
 export type RecipeCalcValues = z.output<typeof recipeCalcSchema>;
 
 // ---------------------------------------------------------------------------------------------------------------
-// Workspace settings (the net-carb rule)
+// Workspace settings (the net-carb rule, how dates are written)
 // ---------------------------------------------------------------------------------------------------------------
 
 export const NET_CARB_RULE_KINDS = NET_CARB_RULES.map((r) => r.kind) as [NetCarbRuleKind, ...NetCarbRuleKind[]];
 
 export const workspaceSettingsUpdateSchema = z.object({
-  netCarbRule: z.enum(NET_CARB_RULE_KINDS, { message: 'Choose a net-carb rule' }),
+  netCarbRule: z.enum(NET_CARB_RULE_KINDS, { message: 'Choose a net-carb rule' }).optional(),
+  dateOrder: z.enum(DATE_ORDERS, { message: 'Choose how dates are written: month-day or day-month' }).optional(),
   version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }).max(PG_INT_MAX, TOO_LARGE),
 });
 export type WorkspaceSettingsUpdateInput = z.input<typeof workspaceSettingsUpdateSchema>;
@@ -361,6 +363,8 @@ export const NET_CARB_HELP =
 
 export interface WorkspaceSettingsDto {
   netCarbRule: NetCarbRuleKind;
+  /** How every page and document of the workspace writes dates in words. */
+  dateOrder: DateOrder;
   netCarbRules: Array<{ kind: NetCarbRuleKind; label: string; formula: string }>;
   help: string;
   version: number;

@@ -1,3 +1,4 @@
+import type { DateOrder } from '../domain/iso-date';
 /**
  * Plain data the PDF renderers take. The server modules that own the rows (week board, shopping list, bake run)
  * build these objects; the renderers in server/modules/pdf/ only lay them out.
@@ -50,6 +51,8 @@ export interface WeekPlanPdfData {
   clientName: string;
   /** ISO date of the week's first day. */
   weekStart: string;
+  /** How the workspace writes dates (absent: month-day). */
+  dateOrder?: DateOrder;
   targets: PdfTargets;
   /**
    * What the targets cover, when not the whole day: e.g. "breakfast and lunch, 50 % of your day" (the board plans

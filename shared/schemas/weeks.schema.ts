@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import type { Caution } from '../domain/eat-by';
 import type { TrayTally } from '../domain/inventory';
-import { isIsoDate, type IsoDate } from '../domain/iso-date';
+import { isIsoDate, type DateOrder, type IsoDate } from '../domain/iso-date';
 import type { MacroTargets } from '../domain/targets';
 import type { DayTotals, WordedWarning } from '../domain/week-check';
 import type { AssemblyDto, PlateMacrosDto } from './assemblies.schema';
@@ -150,6 +150,8 @@ export interface BoardDayDto {
 /** The week board as pages read it. The API sends it as a `BoardAnswer` (board-answer.ts); `expandBoard` gives this. */
 export interface BoardDto {
   week: WeekSummaryDto;
+  /** How the workspace writes dates in words (the warnings' sentences follow it). */
+  dateOrder: DateOrder;
   days: IsoDate[];
   slots: string[];
   prepDates: IsoDate[];

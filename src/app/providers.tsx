@@ -5,11 +5,16 @@ import { Toaster } from 'sonner';
 import { createQueryClient } from '@/lib/query-client';
 import { onUnauthorized } from '@/lib/api-client';
 import { authKeys } from '@/features/auth/api/auth.keys';
+import { followDateOrder } from '@/features/auth/api/auth.queries';
 import { paths } from '@/config/paths';
 import { createRouter } from './router';
 
 export function AppProviders() {
-  const [queryClient] = useState(createQueryClient);
+  const [queryClient] = useState(() => {
+    const qc = createQueryClient();
+    followDateOrder(qc);
+    return qc;
+  });
   const [router] = useState(() => createRouter(queryClient));
   useEffect(
     () =>

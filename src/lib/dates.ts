@@ -1,20 +1,48 @@
-/**
- * Day labels for ISO dates ("Mon, Dec 7"; long: "Monday, Dec 7"), in the reader's locale. The formatters are made
- * once: `toLocaleDateString` builds a new Intl.DateTimeFormat on every call, which a 60-client week board (840 cells,
- * each named by its day) paid for hundreds of milliseconds on every render.
- */
-const short = new Intl.DateTimeFormat(undefined, { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' });
-const long = new Intl.DateTimeFormat(undefined, { weekday: 'long', day: 'numeric', month: 'short', timeZone: 'UTC' });
+import { dateWithYear, dayHeading, DEFAULT_DATE_ORDER, shortDate, type DateOrder } from '@shared/domain/iso-date';
 
-export function dayLabel(iso: string, longWeekday = false): string {
-  return (longWeekday ? long : short).format(new Date(`${iso}T12:00:00Z`));
+/**
+ * How this workspace writes dates ("Mon, Dec 7" or "Mon 7 Dec"; the coach's setting, read with the signed-in person:
+ * `followDateOrder` in auth.queries.ts keeps it). Pages, printed labels, PDFs and e-mails all write dates this way.
+ */
+let order: DateOrder = DEFAULT_DATE_ORDER;
+
+export function setDateOrder(next: DateOrder): void {
+  order = next;
 }
 
-const moment = new Intl.DateTimeFormat(undefined, { weekday: 'short', day: 'numeric', month: 'short', hour: 'numeric', minute: '2-digit' });
+export function currentDateOrder(): DateOrder {
+  return order;
+}
 
-/** When something happened ("Wed, Dec 2, 3:13 PM"), on this device's clock: every page writes a moment this way. */
+/** A day in words: "Mon, Dec 7" (long: "Monday, Dec 7"), or "Mon 7 Dec" ("Monday 7 Dec"), as the workspace writes dates. */
+export function dayLabel(iso: string, longWeekday = false): string {
+  return longWeekday ? dayHeading(iso, order) : shortDate(iso, order);
+}
+
+/** An instant's day on this device's clock with its year: "Dec 7, 2026" or "7 Dec 2026". */
+export function dateWithYearLabel(instant: string): string {
+  return dateWithYear(localToday(new Date(instant)), order);
+}
+
+/** An instant's day on this device's clock: "Mon, Dec 7" (long: "Monday, Dec 7"). */
+export function instantDayLabel(instant: string, longWeekday = false): string {
+  return dayLabel(localToday(new Date(instant)), longWeekday);
+}
+
+/** The order this device's locale writes a day and its month in (en-US: month first; en-GB: day first). */
+export function deviceDateOrder(): DateOrder {
+  const parts = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' }).formatToParts(new Date(Date.UTC(2026, 11, 7, 12)));
+  const day = parts.findIndex((p) => p.type === 'day');
+  const month = parts.findIndex((p) => p.type === 'month');
+  return day >= 0 && month >= 0 && day < month ? 'day-month' : 'month-day';
+}
+
+const time = new Intl.DateTimeFormat(undefined, { hour: 'numeric', minute: '2-digit' });
+
+/** When something happened ("Wed, Dec 2, 3:13 PM"), on this device's clock (its time in the device's own style). */
 export function momentLabel(iso: string): string {
-  return moment.format(new Date(iso));
+  const d = new Date(iso);
+  return `${dayLabel(localToday(d))}, ${time.format(d)}`;
 }
 
 /** "Next prep day: Wednesday, Dec 9", with "(today)" when it is the reader's today. */

@@ -117,9 +117,9 @@ describe('plates (assemblies)', () => {
       .send({ version: board.week.version, cells: [{ clientId: client.id, date: '2026-01-05', slot: 'breakfast', assemblyId: plate.id }] })
       .expect(200);
     // A plate on a board is archived instead of deleted, and the answer says where it is planned (the week has no
-    // name: "Week of" its first day, Mon 5 Jan 2026).
+    // name: "Week of" its first day, Mon, Jan 5 2026).
     const del = await coach.agent.delete(`/api/assemblies/${plate.id}`).expect(200);
-    expect(del.body).toMatchObject({ archived: true, plannedOn: '1 meal on the board of Week of Mon 5 Jan', plate: { id: plate.id, archived: true } });
+    expect(del.body).toMatchObject({ archived: true, plannedOn: '1 meal on the board of Week of Mon, Jan 5', plate: { id: plate.id, archived: true } });
     expect(await sql('select archived from assembly where id = $1', [plate.id])).toEqual([{ archived: true }]);
     expect(await sql('select id from assembly where id = $1', [plate.id])).toHaveLength(1);
     const unused = await makeAssembly(coach, tray.id);

@@ -286,11 +286,11 @@ describe('the bake run of a prep week', () => {
     const pdf = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.pdf`).buffer(true).expect(200);
     expect(pdf.headers['content-type']).toBe('application/pdf');
     expect(Buffer.from(pdf.body).subarray(0, 5).toString()).toBe('%PDF-');
-    // The title names the prep day as people write it (Sunday 4 January 2026), not as an ISO date.
+    // The title names the prep day as people write it (Sunday, January 4, 2026), not as an ISO date.
     const parser = new PDFParse({ data: new Uint8Array(Buffer.from(pdf.body)) });
     const text = (await parser.getText()).text.replace(/\s+/g, ' ');
     await parser.destroy();
-    expect(text).toContain('prep Sun 4 Jan');
+    expect(text).toContain('prep Sun, Jan 4');
     expect(text).not.toContain('prep 2026-01-04');
     const ics = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.ics`).expect(200);
     expect(ics.headers['content-type']).toMatch(/text\/calendar/);
@@ -328,7 +328,7 @@ describe('moving a run to the time the kitchen really started', () => {
     // Another day, a prep day the week does not have, a start that is not a time: 400 naming the field.
     const otherDay = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ start: '2026-01-05T09:10', version: 3 }).expect(400);
     expect(Object.keys(otherDay.body.errors)).toEqual(['start']);
-    expect(otherDay.body.errors.start[0]).toMatch(/Sunday 4 January 2026/);
+    expect(otherDay.body.errors.start[0]).toMatch(/Sunday, January 4, 2026/);
     const badDay = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ prepDate: '2026-01-06', start: '2026-01-06T09:10', version: 3 }).expect(400);
     expect(Object.keys(badDay.body.errors)).toEqual(['prepDate']);
     const notTime = await assistant.agent.put(`/api/weeks/${week.id}/bake-run/start`).send({ start: 'nine', version: 3 }).expect(400);

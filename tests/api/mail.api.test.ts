@@ -146,7 +146,7 @@ describe('PDF attachments', () => {
       workspaceId: coach.workspaceId,
       kind: 'week-plan',
       to,
-      subject: 'Your plates for the week of Mon 7 Dec',
+      subject: 'Your plates for the week of Mon, Dec 7',
       text: 'Attached.',
       clientId: null,
       note: 'Enjoy!',

@@ -52,7 +52,7 @@ describe("e-mailing a prep day's papers to the kitchen", () => {
 
     const rows = await sql<OutboxRow>("select \"to\", kind, subject, text, week_id, attachments from outbox where workspace_id = $1 and kind = 'prep-day' order by id", [coach.workspaceId]);
     expect(rows.map((r) => r.to)).toEqual([kit.email, lee.email]);
-    expect(rows[0]).toMatchObject({ week_id: w.weekId, subject: expect.stringContaining('prep day Sun 4 Jan, shopping list and bake run') });
+    expect(rows[0]).toMatchObject({ week_id: w.weekId, subject: expect.stringContaining('prep day Sun, Jan 4, shopping list and bake run') });
     // One prep day: the link opens the week's list.
     expect(rows[0].text).toContain(`Open the shopping list: http://127.0.0.1:8080/weeks/${w.weekId}/shopping\n`);
     expect(rows[0].attachments.map((a) => a.pdf)).toEqual(['prep-day-shopping', 'prep-day-bake-run']);
@@ -60,14 +60,14 @@ describe("e-mailing a prep day's papers to the kitchen", () => {
     // What the mail job attaches when each e-mail leaves.
     const render = (kind: string, payload: Record<string, unknown>) => attachmentRenderer(kind)!(orm.em.fork(), payload);
     const kitList = await pdfText((await render('prep-day-shopping', rows[0].attachments[0].payload)).buffer);
-    expect(kitList).toContain('Shopping list, week of Mon 5 Jan');
+    expect(kitList).toContain('Shopping list, week of Mon, Jan 5');
     // 3 trays × 10 oz + 1 oz × 2 portions × 2 days = 34 oz of cheese: "2 lb 2 oz" for Kit, grams for Lee.
     expect(kitList).toContain('2 lb 2 oz');
     const leeList = await pdfText((await render('prep-day-shopping', rows[1].attachments[0].payload)).buffer);
     expect(leeList).toMatch(/964 g/);
     const bake = await render('prep-day-bake-run', rows[0].attachments[1].payload);
     expect(bake.filename).toBe('bake-run-2026-01-04.pdf');
-    expect(await pdfText(bake.buffer)).toContain('Bake run, Week of Mon 5 Jan, prep Sun 4 Jan');
+    expect(await pdfText(bake.buffer)).toContain('Bake run, Week of Mon, Jan 5, prep Sun, Jan 4');
 
     // Someone who left the workspace gets no papers: the render fails, so the mail is marked failed rather than sent.
     await sql('delete from membership where user_id = $1', [lee.userId]);
@@ -109,7 +109,7 @@ describe("e-mailing a prep day's papers to the kitchen", () => {
     const rows = await sql<OutboxRow>("select \"to\", kind, subject, text, week_id, attachments from outbox where workspace_id = $1 and kind = 'prep-day' order by id", [coach.workspaceId]);
     expect(rows.map((r) => r.to)).toEqual([lee.email, 'kitchen@example.test']);
     expect(rows.map((r) => r.to)).not.toContain(kit.email);
-    expect(rows[1].text).toMatch(/^Hello,\n\nthe shopping list and the bake run for prep day Sun 4 Jan .* as it is when this e-mail leaves\.\n/);
+    expect(rows[1].text).toMatch(/^Hello,\n\nthe shopping list and the bake run for prep day Sun, Jan 4 .* as it is when this e-mail leaves\.\n/);
     expect(rows[1].text).not.toContain('Open the shopping list');
     expect(rows[0].text).toContain('Open the shopping list');
     // The shared inbox's papers are the coach's (US measures); Lee's are metric.

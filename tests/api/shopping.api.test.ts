@@ -195,7 +195,7 @@ describe('shopping trips: a week with two prep days has a list for each', () => 
     const version = async () => (await coach.agent.get(`/api/weeks/${w.weekId}`).expect(200)).body.week.version;
     const before = await version();
     const refused = await coach.agent.patch(`/api/weeks/${w.weekId}`).send({ version: before, secondPrepDate: null }).expect(409);
-    expect(refused.body.detail).toMatch(/^The shopping list for prep Sun 4 Jan was marked bought, so this week keeps its two prep days\./);
+    expect(refused.body.detail).toMatch(/^The shopping list for prep Sun, Jan 4 was marked bought, so this week keeps its two prep days\./);
     expect(await sql('select second_prep_date::text as d from week where id = $1', [w.weekId])).toEqual([{ d: '2026-01-07' }]);
     expect(await version()).toBe(before);
     // Moving the second prep day keeps its list (trips go by number): allowed.
@@ -276,7 +276,7 @@ describe('shopping trips: a week with two prep days has a list for each', () => 
     const parser = new PDFParse({ data: new Uint8Array(pdf.body as Buffer) });
     const text = (await parser.getText()).text.replace(/\s+/g, ' ');
     await parser.destroy();
-    expect(text).toContain('Shopping list for prep Wed 7 Jan, week of Mon 5 Jan');
+    expect(text).toContain('Shopping list for prep Wed, Jan 7, week of Mon, Jan 5');
     expect(text).toContain('2 × dozen large eggs');
   });
 });
@@ -454,7 +454,7 @@ describe('the prep week\'s shopping list', () => {
     const current = await assistant.agent.get('/api/weeks/current').expect(200);
     expect(current.body).toMatchObject({ id: w.weekId, startDate: '2026-01-05' });
     expect((await other.agent.get('/api/weeks/current').expect(200)).body).toBeNull();
-    // The kitchen's week is the one of the next prep day: on Thursday 8 Jan, next week's (prep Sun 11 Jan).
+    // The kitchen's week is the one of the next prep day: on Thursday 8 Jan, next week's (prep Sun, Jan 11).
     const next = await makeWeek(coach, { startDate: '2026-01-12', prepDate: '2026-01-11' });
     const thursday = await assistant.agent.get('/api/weeks/current?today=2026-01-08').expect(200);
     expect(thursday.body).toMatchObject({ id: next.week.id, prepDate: '2026-01-11' });

@@ -202,7 +202,7 @@ describe('sending a week', () => {
     expect(log.body.items.map((i: { kind: string }) => i.kind).sort()).toEqual(['invitation', 'week-plan']);
     const plan = log.body.items.find((i: { kind: string }) => i.kind === 'week-plan');
     expect(plan).toMatchObject({ id: anaRow.id, to: w.ana.email, weekId: w.weekId, status: 'sent', note: 'Drink water, sleep well.', attachments: ['week-plan'] });
-    expect(plan.weekName).toBe('Week of Mon 5 Jan'); // an unnamed week: its start day in words (2026-01-05 was a Monday)
+    expect(plan.weekName).toBe('Week of Mon, Jan 5'); // an unnamed week: its start day in words (2026-01-05 was a Monday)
   });
 
   it('to chosen clients: skips those without an e-mail, without plates or not in the workspace', async () => {

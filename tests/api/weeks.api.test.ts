@@ -172,7 +172,7 @@ describe('eat-by on the board', () => {
       ['2026-01-10T19:00:00', 'floating'],
     ]);
     expect(events.every((e) => e.summary === `Move tomorrow's ${plate.name} to the fridge`)).toBe(true);
-    expect(events[0].description).toContain('For breakfast on Friday 9 January 2026');
+    expect(events[0].description).toContain('For breakfast on Friday, January 9, 2026');
     expect(events.every((e) => e.component.getAllSubcomponents('valarm').length === 1)).toBe(true);
     const bad = await me.agent.get('/api/weeks/mine/thaw-reminders.ics?today=someday').expect(400);
     expect(Object.keys(bad.body.errors)).toEqual(['today']);
@@ -392,19 +392,19 @@ describe('one board per day', () => {
     await makeWeek(coach, { name: 'Week one' }); // Mon 2026-01-05 … Sun 01-11
     const later = await coach.agent.post('/api/weeks').send({ startDate: '2026-01-08', prepDate: '2026-01-07' }).expect(400);
     expect(later.body.errors).toEqual({
-      startDate: ['"Week one" already plans Mon 5 Jan – Sun 11 Jan; a day is on one board only. Start this week on Mon 12 Jan or later.'],
+      startDate: ['"Week one" already plans Mon, Jan 5 – Sun, Jan 11; a day is on one board only. Start this week on Mon, Jan 12 or later.'],
     });
     const earlier = await coach.agent.post('/api/weeks').send({ startDate: '2025-12-30', prepDate: '2025-12-29' }).expect(400);
-    expect(earlier.body.errors.startDate[0]).toMatch(/Start this week on Mon 29 Dec or earlier\.$/);
+    expect(earlier.body.errors.startDate[0]).toMatch(/Start this week on Mon, Dec 29 or earlier\.$/);
     // Sun 2026-01-11 is the first week's last day: a board from the Monday after, and from the Tuesday before it, fit.
     const next = await coach.agent.post('/api/weeks').send({ startDate: '2026-01-12', prepDate: '2026-01-11' }).expect(201);
     await coach.agent.post('/api/weeks').send({ startDate: '2025-12-29', prepDate: '2025-12-28' }).expect(201);
     const copy = await coach.agent.post(`/api/weeks/${next.body.week.id}/copy`).send({ startDate: '2026-01-18', prepDate: '2026-01-17' }).expect(400);
-    expect(copy.body.errors.startDate[0]).toMatch(/^"Week of Mon 12 Jan" already plans Mon 12 Jan – Sun 18 Jan;/);
+    expect(copy.body.errors.startDate[0]).toMatch(/^"Week of Mon, Jan 12" already plans Mon, Jan 12 – Sun, Jan 18;/);
     expect((await coach.agent.get('/api/weeks').expect(200)).body).toHaveLength(3);
     // With the weeks of 29 Dec, 5 Jan and 12 Jan planned, a start inside 5 Jan's is pointed past all three.
     const crowded = await coach.agent.post('/api/weeks').send({ startDate: '2026-01-07', prepDate: '2026-01-06' }).expect(400);
-    expect(crowded.body.errors.startDate[0]).toMatch(/^"Week one" already plans Mon 5 Jan – Sun 11 Jan; .* Start this week on Mon 19 Jan or later\.$/);
+    expect(crowded.body.errors.startDate[0]).toMatch(/^"Week one" already plans Mon, Jan 5 – Sun, Jan 11; .* Start this week on Mon, Jan 19 or later\.$/);
     // Another workspace plans its own days.
     await makeWeek(await coachWorkspace(app));
   });
@@ -429,7 +429,7 @@ describe('publishing and the client view', () => {
     const mine = async (today: string) => (await me.agent.get(`/api/weeks/mine?today=${today}`).expect(200)).body;
     expect((await mine('2026-01-11')).next).toBeNull();
 
-    // Next week (Mon 12 Jan): Monday's breakfast frozen (it thaws in the fridge on the evening before), Tuesday's not.
+    // Next week (Mon, Jan 12): Monday's breakfast frozen (it thaws in the fridge on the evening before), Tuesday's not.
     const next = (await makeWeek(coach, { startDate: '2026-01-12', prepDate: '2026-01-11' })).week;
     const cell = (clientId: number, date: string, storage: string) => ({ clientId, date, slot: 'breakfast', assemblyId: plate.id, storage });
     const filled = await coach.agent
@@ -442,7 +442,7 @@ describe('publishing and the client view', () => {
 
     const sunday = await mine('2026-01-11');
     expect(sunday.weekId).toBe(week.id);
-    expect(sunday.next).toMatchObject({ weekId: next.id, name: 'Week of Mon 12 Jan', startDate: '2026-01-12', endDate: '2026-01-18', publishedVersion: 1 });
+    expect(sunday.next).toMatchObject({ weekId: next.id, name: 'Week of Mon, Jan 12', startDate: '2026-01-12', endDate: '2026-01-18', publishedVersion: 1 });
     expect(sunday.next.days.map((d: { date: string }) => d.date)).toEqual(['2026-01-12', '2026-01-13']);
     expect(sunday.next.days[0].plates[0]).toMatchObject({ name: plate.name, storage: 'frozen', thawOn: '2026-01-11' });
     // Only their own: the other client's plate is not in it.
@@ -559,7 +559,7 @@ describe('publishing and the client view', () => {
     const copy = await coach.agent.post(`/api/weeks/${week.id}/copy`).send({ startDate: '2026-01-12', prepDate: '2026-01-11' }).expect(201);
     const later = await coach.agent.get('/api/weeks/glance?today=2026-01-08').expect(200);
     expect(later.body.week.id).toBe(week.id);
-    expect(later.body.nextWeek).toEqual({ id: copy.body.week.id, name: 'Week of Mon 12 Jan', startDate: '2026-01-12', cellCount: 7, publishedVersion: null });
+    expect(later.body.nextWeek).toEqual({ id: copy.body.week.id, name: 'Week of Mon, Jan 12', startDate: '2026-01-12', cellCount: 7, publishedVersion: null });
     // On the copy's own days it is the glance's week, with nothing after it.
     const then = await coach.agent.get('/api/weeks/glance?today=2026-01-13').expect(200);
     expect([then.body.week.id, then.body.nextWeek]).toEqual([copy.body.week.id, null]);

@@ -33,6 +33,7 @@ export function signedIn(overrides: Partial<MeDto> = {}): MeDto {
     workspaceIsDemo: false,
     clientId: null,
     unitSystem: 'us',
+    dateOrder: 'month-day',
     tempUnit: 'F',
     ...overrides,
   };

@@ -196,8 +196,8 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await expect(page.getByLabel('Start from')).toHaveValue(weekUrl.split('/').pop()!);
   // Five weeks after the new one (a day is on one board only; dates follow the calendar the run has).
   const copyStart = new Date(Date.parse(`${startDate}T12:00:00Z`) + 35 * 86_400_000);
-  const part = (o: Intl.DateTimeFormatOptions) => copyStart.toLocaleDateString('en-US', { ...o, timeZone: 'UTC' });
-  const copyTitle = `Week of ${part({ weekday: 'short' })} ${part({ day: 'numeric' })} ${part({ month: 'short' })}`;
+  // The demo workspace writes dates month first, as en-US does ("Week of Mon, Jan 11").
+  const copyTitle = `Week of ${copyStart.toLocaleDateString('en-US', { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' })}`;
   await page.getByLabel('First day of the board').fill(copyStart.toISOString().slice(0, 10));
   await page.getByRole('button', { name: 'Copy', exact: true }).click();
   await expect(page.getByRole('heading', { name: copyTitle })).toBeVisible();

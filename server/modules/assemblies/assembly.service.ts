@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { parseAmount } from '@shared/domain/units.js';
 import type { ArchiveAssemblyValues, AssemblyDto, DeleteAssemblyDto, AssemblyValues, PlatePreviewDto, PlatePreviewValues, UpdateAssemblyValues } from '@shared/schemas/assemblies.schema.js';
-import type { Actor } from '../../http/authz.js';
+import { datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { weekTitle } from '@shared/domain/week-board.js';
 import { Assembly, AssemblyItem, type IAssembly } from './assembly.entity.js';
@@ -210,7 +210,7 @@ export async function deleteAssembly(em: EntityManager, actor: Actor, id: number
   const uses = await plateUses(em, actor.workspaceId, a.id);
   if (uses.length) {
     const meals = uses.reduce((n, u) => n + u.meals, 0);
-    const weeks = uses.map((u) => weekTitle(u)).join(', ');
+    const weeks = uses.map((u) => weekTitle(u, datesOf(actor))).join(', ');
     if (!a.archived) {
       a.archived = true;
       a.updatedAt = new Date();

@@ -1,3 +1,4 @@
+import { toDateOrder } from '@shared/domain/iso-date.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Actor } from '../../http/authz.js';
 import { preparedRows } from '../../db/prepared.js';
@@ -32,8 +33,8 @@ const PASSWORD_RESET_MINUTES = 60;
  * query as the session (session-store.ts).
  */
 export const ACTOR_SQL = (userIdExpr: string, workspaceIdExpr = 'null::int') =>
-  `select u.id as user_id, u.email, u.name, u.unit_system, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version
-     from membership m join app_user u on u.id = m.user_id left join nutrition_stamp ns on ns.workspace_id = m.workspace_id
+  `select u.id as user_id, u.email, u.name, u.unit_system, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version, w.date_order
+     from membership m join app_user u on u.id = m.user_id join workspace w on w.id = m.workspace_id left join nutrition_stamp ns on ns.workspace_id = m.workspace_id
     where m.user_id = ${userIdExpr}
     order by coalesce(m.workspace_id = ${workspaceIdExpr}, false) desc, coalesce(m.workspace_id = u.last_workspace_id, false) desc, m.id asc
     limit 1`;
@@ -47,6 +48,7 @@ export interface ActorRow {
   workspace_id: number;
   client_id: number | null;
   nutrition_version: string | null;
+  date_order: string;
 }
 
 export function actorFromRow(m: ActorRow): Actor {
@@ -59,6 +61,7 @@ export function actorFromRow(m: ActorRow): Actor {
     workspaceId: Number(m.workspace_id),
     clientId: m.client_id == null ? null : Number(m.client_id),
     nutritionVersion: m.nutrition_version ?? null,
+    dateOrder: toDateOrder(m.date_order),
   };
 }
 
@@ -100,10 +103,10 @@ export async function actorIn(em: EntityManager, actor: Actor, workspaceId: numb
 
 /** The signed-in person and their workspace: one prepared statement (every page load of the app asks for it). */
 export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
-  const [row] = await preparedRows<{ id: number; email: string; name: string; unitSystem: string; tempUnit: string; workspaceName: string; workspaceIsDemo: boolean }>(
+  const [row] = await preparedRows<{ id: number; email: string; name: string; unitSystem: string; tempUnit: string; workspaceName: string; workspaceIsDemo: boolean; dateOrder: string }>(
     em,
     'trayline_me',
-    `select u.id, u.email, u.name, u.unit_system as "unitSystem", u.temp_unit as "tempUnit", w.name as "workspaceName", w.is_demo as "workspaceIsDemo"
+    `select u.id, u.email, u.name, u.unit_system as "unitSystem", u.temp_unit as "tempUnit", w.name as "workspaceName", w.is_demo as "workspaceIsDemo", w.date_order as "dateOrder"
        from app_user u, workspace w where u.id = $1 and w.id = $2`,
     [actor.userId, actor.workspaceId],
   );
@@ -119,6 +122,7 @@ export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
     clientId: actor.clientId,
     unitSystem: row.unitSystem as MeDto['unitSystem'],
     tempUnit: row.tempUnit as MeDto['tempUnit'],
+    dateOrder: toDateOrder(row.dateOrder),
   };
 }
 
@@ -141,7 +145,7 @@ export async function register(em: EntityManager, input: RegisterInput): Promise
         email: ['An account with this e-mail already exists; sign in instead'],
       });
     }
-    const ws = tx.create(Workspace, { name: input.businessName });
+    const ws = tx.create(Workspace, { name: input.businessName, ...(input.dateOrder ? { dateOrder: input.dateOrder } : {}) });
     const user = tx.create(User, { email: input.email, name: input.name, passwordHash });
     tx.create(Membership, { user, workspace: ws, role: 'coach' });
     await tx.flush();

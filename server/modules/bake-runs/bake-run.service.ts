@@ -5,7 +5,7 @@ import { planBakeRunOffThread } from '../../lib/bake-run-pool.js';
 import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-run-types.js';
 import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
-import { longDate } from '@shared/domain/iso-date.js';
+import { longDate, type DateOrder } from '@shared/domain/iso-date.js';
 import { movedOut, ovensAt, resumeRun, takeDone, type BakeRunDone } from '@shared/domain/bake-run-resume.js';
 import { resolveBakeRunRules } from '@shared/domain/bake-run-model.js';
 import type {
@@ -17,7 +17,7 @@ import type {
   WeekBakeRunDto,
   WeekBakeTrayDto,
 } from '@shared/schemas/bake-setup.schema.js';
-import type { Actor } from '../../http/authz.js';
+import { datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
 import { Tray } from '../trays/tray.entity.js';
@@ -218,7 +218,7 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
   }
   return {
     weekId: week.id,
-    weekName: weekTitle(week),
+    weekName: weekTitle(week, datesOf(actor)),
     prepDate,
     prepDates: prepDatesOf(week),
     // The trays still counted as out: those of the week's trays (a tray count lowered since drops the others).
@@ -231,9 +231,9 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
 }
 
 /** A run starts on its own prep day: a start on another day is a slip of the date picker (its timers would never show). */
-function startOnPrepDay(start: string, prepDate: string): void {
+function startOnPrepDay(start: string, prepDate: string, order: DateOrder): void {
   if (start.slice(0, 10) !== prepDate)
-    throw ValidationError.field('start', `The run starts on its prep day, ${longDate(prepDate)}: keep that date and change the time.`);
+    throw ValidationError.field('start', `The run starts on its prep day, ${longDate(prepDate, order)}: keep that date and change the time.`);
 }
 
 /** Once the rest of the day is planned from a time, the day's start cannot move past it. */
@@ -290,7 +290,7 @@ async function changeDaySettings(
  */
 export function moveWeekBakeRunStart(em: EntityManager, actor: Actor, weekId: number, v: BakeRunStartValues): Promise<WeekBakeRunDto> {
   return changeDaySettings(em, actor, weekId, v, (prepDate, row) => {
-    startOnPrepDay(v.start, prepDate);
+    startOnPrepDay(v.start, prepDate, datesOf(actor));
     startBeforeRest(v.start, row);
     return { start: v.start };
   });
@@ -316,7 +316,7 @@ export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: n
     if (v.out.length === 0) return { ...change, done: null };
     if (v.from === undefined) throw ValidationError.field('from', 'Say when the rest of the run starts (the trays still to bake).');
     if (v.from.slice(0, 10) !== prepDate)
-      throw ValidationError.field('from', `The rest is baked on the prep day, ${longDate(prepDate)}: keep that date and change the time.`);
+      throw ValidationError.field('from', `The rest is baked on the prep day, ${longDate(prepDate, datesOf(actor))}: keep that date and change the time.`);
     const current = await getWeekBakeRun(em, actor, weekId, prepDate);
     if (!current.run) throw ValidationError.field('out', `There is no plan to take trays out of yet: ${current.problems.join(' ')}`);
     if (v.from < current.settings.start)
@@ -332,7 +332,7 @@ export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: n
     for (const [id, at] of Object.entries(v.outAt ?? {})) {
       const tray = kept.trays.find((t) => t.id === id);
       if (!tray) throw ValidationError.field(`outAt.${id}`, 'Tick this tray as out to give the time it came out.');
-      if (at.slice(0, 10) !== prepDate) throw ValidationError.field(`outAt.${id}`, `It came out on the prep day, ${longDate(prepDate)}: change the time only.`);
+      if (at.slice(0, 10) !== prepDate) throw ValidationError.field(`outAt.${id}`, `It came out on the prep day, ${longDate(prepDate, datesOf(actor))}: change the time only.`);
       if (at < tray.inAt) throw ValidationError.field(`outAt.${id}`, `${tray.name} went in at ${tray.inAt.slice(11)}: it came out after that.`);
       kept = movedOut(kept, id, at);
     }
@@ -366,7 +366,7 @@ export async function putWeekBakeRunSettings(
     const missing = v.ovenIds.filter((id) => !known.has(id));
     if (missing.length) throw ValidationError.field('ovenIds', `No oven with id ${missing.join(', ')} in your workspace.`);
   }
-  startOnPrepDay(v.start, prepDate);
+  startOnPrepDay(v.start, prepDate, datesOf(actor));
   const row = await em.findOne(BakeRunSetting, { week: week.id, prepDate });
   startBeforeRest(v.start, row);
   if (row) {

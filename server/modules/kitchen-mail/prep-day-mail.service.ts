@@ -2,7 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import { prepDatesOf, tripDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import type { PrepDayMailResultDto, SendPrepDayInput } from '@shared/schemas/prep-day-mail.schema.js';
-import type { Actor } from '../../http/authz.js';
+import { datesOf, type Actor } from '../../http/authz.js';
 import { Conflict, ValidationError } from '../../http/errors.js';
 import { Membership } from '../auth/user.entity.js';
 import { Outbox } from '../mail/outbox.entity.js';
@@ -94,8 +94,8 @@ export async function sendPrepDay(
       const body = prepDayMail({
         businessName: ws.name,
         name: r.name,
-        prepLabel: shortDate(input.prepDate),
-        weekName: weekTitle(week),
+        prepLabel: shortDate(input.prepDate, datesOf(actor)),
+        weekName: weekTitle(week, datesOf(actor)),
         note,
         // Someone without an account could not open it.
         link: r.name === null ? undefined : link,

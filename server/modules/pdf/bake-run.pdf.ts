@@ -3,7 +3,7 @@ import { CAUTIONS } from '@shared/domain/eat-by.js';
 import { toCelsiusRounded } from '@shared/domain/temperature.js';
 import { cautionsBlock, createDoc, finishDoc, heading, paragraph, table } from './pdf-document.js';
 import { clock } from './pdf-format.js';
-import { longDate } from '@shared/domain/iso-date.js';
+import { DEFAULT_DATE_ORDER, longDate, type DateOrder } from '@shared/domain/iso-date.js';
 import { replannedSummary } from '@shared/domain/bake-run-words.js';
 
 export interface BakeRunPdfMeta {
@@ -11,6 +11,8 @@ export interface BakeRunPdfMeta {
   /** e.g. "Bake run, Sun 6 Dec". */
   title: string;
   filename?: string;
+  /** How the workspace writes dates (absent: month-day). */
+  dateOrder?: DateOrder;
   /** Planned again part-way through the day: when the rest starts and how many trays were already out. */
   replanned?: { from: string; kept: number } | null;
 }
@@ -51,7 +53,7 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
   const names = new Map(run.trays.map((t) => [t.id, t.name]));
   const trayName = (id: string | null) => (id ? names.get(id) ?? id : '');
   heading(doc, meta.title, 20);
-  paragraph(doc, `${longDate(run.start.slice(0, 10))}: start ${clock(run.start)}, last tray out ${clock(run.endAt)} (${run.sessionMinutes} minutes).`);
+  paragraph(doc, `${longDate(run.start.slice(0, 10), meta.dateOrder ?? DEFAULT_DATE_ORDER)}: start ${clock(run.start)}, last tray out ${clock(run.endAt)} (${run.sessionMinutes} minutes).`);
   if (meta.replanned) {
     const { from, kept } = meta.replanned;
     paragraph(doc, `Planned again at ${clock(from)}: ${replannedSummary(from, kept, run.trays.length)}.`);

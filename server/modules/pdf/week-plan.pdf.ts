@@ -3,7 +3,7 @@ import { CAUTIONS } from '@shared/domain/eat-by.js';
 import type { PdfMacros, PdfTargets, WeekPlanPdfData } from '@shared/schemas/pdf.schema.js';
 import { cautionsBlock, createDoc, finishDoc, heading, list, paragraph, table, type Column } from './pdf-document.js';
 import { capitalize, fixed, signed } from './pdf-format.js';
-import { longDate, shortDate } from '@shared/domain/iso-date.js';
+import { DEFAULT_DATE_ORDER, longDate, shortDate } from '@shared/domain/iso-date.js';
 
 /** The macro columns in the order every Trayline table shows them (kcal 0 dp, grams 1 dp). */
 const MACROS: { key: keyof PdfMacros; target?: keyof PdfTargets; label: string; dp: number; cap?: boolean }[] = [
@@ -33,14 +33,15 @@ function targetLine(t: PdfTargets, cover?: string | null): string {
 
 /** The client's week: per day a macro table (plates, day total, target, difference), then each plate's steps. */
 export async function renderWeekPlanPdf(data: WeekPlanPdfData): Promise<{ filename: string; buffer: Buffer }> {
+  const order = data.dateOrder ?? DEFAULT_DATE_ORDER;
   const meta = {
     businessName: data.businessName,
-    title: `${data.clientName}: week of ${shortDate(data.weekStart)}`,
+    title: `${data.clientName}: week of ${shortDate(data.weekStart, order)}`,
     subject: 'Prep week plan',
   };
   const doc = createDoc(meta);
   heading(doc, `${data.clientName}: your week`, 22);
-  paragraph(doc, `Week of ${longDate(data.weekStart)}`);
+  paragraph(doc, `Week of ${longDate(data.weekStart, order)}`);
   paragraph(doc, targetLine(data.targets, data.targetsCover));
   if (data.note) {
     doc.moveDown(0.4);
@@ -49,7 +50,7 @@ export async function renderWeekPlanPdf(data: WeekPlanPdfData): Promise<{ filena
   }
   for (const day of data.days) {
     doc.moveDown(0.8);
-    heading(doc, longDate(day.date), 16);
+    heading(doc, longDate(day.date, order), 16);
     const rows = day.slots.map((s) => [
       capitalize(s.slot),
       s.plateName,
@@ -74,7 +75,7 @@ export async function renderWeekPlanPdf(data: WeekPlanPdfData): Promise<{ filena
     table(doc, COLUMNS, rows, styles);
     for (const s of day.slots) {
       paragraph(doc, `${capitalize(s.slot)}: ${s.plateName}`, { bold: true, size: 11 });
-      if (s.eatBy) paragraph(doc, `Eat by ${longDate(s.eatBy)}.`);
+      if (s.eatBy) paragraph(doc, `Eat by ${longDate(s.eatBy, order)}.`);
       for (const n of s.notes ?? []) paragraph(doc, n);
       list(doc, 'Assemble', s.assemblySteps);
       list(doc, 'Reheat', s.reheatSteps);

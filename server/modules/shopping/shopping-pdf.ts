@@ -1,6 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { ShoppingList } from '@shared/domain/shopping.js';
-import { measureOf, type Actor } from '../../http/authz.js';
+import { datesOf, measureOf, type Actor } from '../../http/authz.js';
 import { renderShoppingListPdf } from '../pdf/shopping-list.pdf.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { aisleLabel } from './shopping.presenter.js';
@@ -16,9 +16,10 @@ export async function shoppingPdf(em: EntityManager, actor: Actor, weekId: numbe
     ...computed.list,
     aisles: computed.list.aisles.map((a) => ({ ...a, aisle: aisleLabel(a.aisle) })),
   };
+  const order = datesOf(actor);
   return renderShoppingListPdf(list, {
     businessName: ws.name,
-    title: prepDate ? `Shopping list for prep ${shortDate(prepDate)}, week of ${shortDate(week.startDate)}` : `Shopping list, week of ${shortDate(week.startDate)}`,
+    title: prepDate ? `Shopping list for prep ${shortDate(prepDate, order)}, week of ${shortDate(week.startDate, order)}` : `Shopping list, week of ${shortDate(week.startDate, order)}`,
     filename: `shopping-list-${prepDate ? `prep-${prepDate}` : week.startDate}.pdf`,
     amountText: (item, value) => baseAmountText(value, computed.ingredients.get(Number(item.ingredientId))!, measureOf(actor)),
   });

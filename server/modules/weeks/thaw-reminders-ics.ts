@@ -2,7 +2,7 @@ import ical, { ICalAlarmType } from 'ical-generator';
 import { FRIDGE_MAX_C, FRIDGE_MAX_F, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by.js';
 import { addLocalMinutes } from '@shared/domain/bake-run-time.js';
 import { floating } from '../../lib/ics.js';
-import { longDate } from '@shared/domain/iso-date.js';
+import { longDate, type DateOrder } from '@shared/domain/iso-date.js';
 
 /** Minutes a thaw reminder event lasts in the calendar (moving a box takes a minute; 15 shows as a block). */
 const THAW_EVENT_MINUTES = 15;
@@ -13,7 +13,7 @@ const THAW_EVENT_MINUTES = 15;
  * Event ids name the week, the day and the slot (not the published version): importing a newer version's file updates
  * the same events instead of adding twins.
  */
-export function thawRemindersIcs(tasks: readonly ThawTask[], meta: { calendarName: string; uidPrefix: string }): string {
+export function thawRemindersIcs(tasks: readonly ThawTask[], meta: { calendarName: string; uidPrefix: string; dateOrder: DateOrder }): string {
   const cal = ical({ name: meta.calendarName, prodId: { company: 'Trayline', product: 'thaw-reminders', language: 'EN' } });
   for (const t of tasks) {
     const start = `${t.thawOn}T${THAW_REMINDER_TIME}`;
@@ -24,8 +24,8 @@ export function thawRemindersIcs(tasks: readonly ThawTask[], meta: { calendarNam
       floating: true,
       summary: `Move tomorrow's ${t.name} to the fridge`,
       description:
-        `For ${t.slot} on ${longDate(t.eatOn)}. Thaw it in the refrigerator at ${FRIDGE_MAX_F} °F (${FRIDGE_MAX_C} °C) or ` +
-        `below, never on the counter. Eat it by ${longDate(t.eatByAfterThaw)} at the latest.`,
+        `For ${t.slot} on ${longDate(t.eatOn, meta.dateOrder)}. Thaw it in the refrigerator at ${FRIDGE_MAX_F} °F (${FRIDGE_MAX_C} °C) or ` +
+        `below, never on the counter. Eat it by ${longDate(t.eatByAfterThaw, meta.dateOrder)} at the latest.`,
     });
     event.createAlarm({ type: ICalAlarmType.display, trigger: 0, description: `Move tomorrow's ${t.name} to the fridge` });
   }

@@ -1,6 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { CAUTIONS } from '@shared/domain/eat-by.js';
-import { addDays, type IsoDate } from '@shared/domain/iso-date.js';
+import { addDays, type DateOrder, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, prepDatesOf, weekTitle, type BoardInput, type BoardResult } from '@shared/domain/week-board.js';
 import type { AllergenCode } from '@shared/domain/allergens.js';
 import type { MacroTargets } from '@shared/domain/targets.js';
@@ -8,7 +8,7 @@ import type { AssemblyDto } from '@shared/schemas/assemblies.schema.js';
 import { type BoardCellDto, type WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
 import { BOARD_DAYS } from '@shared/domain/week-days.js';
 import { cellAnswer, dayAnswer, type BoardAnswer } from '@shared/schemas/board-answer.js';
-import type { Actor } from '../../http/authz.js';
+import { datesOf, type Actor } from '../../http/authz.js';
 import { NotFound } from '../../http/errors.js';
 import { preparedRows } from '../../db/prepared.js';
 import { loadPlateRows } from '../assemblies/assembly.service.js';
@@ -33,10 +33,10 @@ export async function findWeek(em: EntityManager, actor: Actor, id: number): Pro
   return w;
 }
 
-export function presentWeekSummary(w: BoardWeek, cellCount: number, publishedAt: Date | null): WeekSummaryDto {
+export function presentWeekSummary(w: BoardWeek, cellCount: number, publishedAt: Date | null, order: DateOrder): WeekSummaryDto {
   return {
     id: w.id,
-    name: weekTitle(w),
+    name: weekTitle(w, order),
     startDate: w.startDate,
     endDate: addDays(w.startDate, BOARD_DAYS - 1),
     prepDate: w.prepDate,
@@ -135,6 +135,8 @@ export interface BoardData {
   trays: BoardTrayRow[];
   ctx: PlateContext;
   publishedAt: Date | null;
+  /** How the workspace writes dates (the week's title when it has no name). */
+  dateOrder: DateOrder;
 }
 
 /** The workspace settings a board reads: meal slots and the net-carb rule (one row). */
@@ -174,7 +176,7 @@ async function loadBoardParts(em: EntityManager, actor: Actor, weekId: number) {
     loadWeekTrayRows(em, actor.workspaceId, weekId),
     loadWorkspacePlateContext(em, actor.workspaceId, weekId, settings.then((s) => s.rule)),
   ]);
-  return { slots, clients, assemblies, cells, trays, ctx };
+  return { slots, clients, assemblies, cells, trays, ctx, dateOrder: datesOf(actor) };
 }
 
 /** A board's data for a week already read (e.g. locked for an edit, in its transaction). */
@@ -249,7 +251,8 @@ export function boardInput(d: BoardData, cells: readonly BoardCellDto[] = d.cell
 export function presentBoard(d: BoardData, result: BoardResult = computeBoard(boardInput(d))): BoardAnswer {
   const platesDto: AssemblyDto[] = d.assemblies.map((a) => presentAssembly(a, d.ctx));
   return {
-    week: presentWeekSummary(d.week, d.cells.length, d.publishedAt),
+    week: presentWeekSummary(d.week, d.cells.length, d.publishedAt, d.dateOrder),
+    dateOrder: d.dateOrder,
     days: weekDays(d.week),
     slots: d.slots,
     prepDates: prepDatesOf(d.week),

@@ -1,12 +1,12 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { DeliveryLogDto, SendWeekResultDto, SkipReason } from '@shared/schemas/week-mail.schema.js';
-import type { Actor } from '../../http/authz.js';
+import { datesOf, type Actor } from '../../http/authz.js';
 import { Conflict, NotFound } from '../../http/errors.js';
 import { appLink, mailKey, newBatchId, queueMail, requestBatchId, type MailQueue } from '../mail/mail.service.js';
 import { weekPlanMail } from '../mail/mail-templates.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { presentOutbox } from '../mail/outbox.service.js';
-import { longDate } from '@shared/domain/iso-date.js';
+import { longDate, toDateOrder } from '@shared/domain/iso-date.js';
 import { Client } from '../clients/client.entity.js';
 import { findClient } from '../clients/client.service.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
@@ -99,7 +99,7 @@ export async function sendWeek(
     }
 
     const ws = await tx.findOneOrFail(Workspace, actor.workspaceId);
-    const weekLabel = longDate(pub.snapshot.startDate);
+    const weekLabel = longDate(pub.snapshot.startDate, toDateOrder(ws.dateOrder));
     const link = appLink(opts.publicUrl, '/my-plates');
     for (const r of recipients) {
       // A frozen plate in this client's plan: their thaw reminders go along as a calendar file.
@@ -136,7 +136,7 @@ export async function clientDeliveries(em: EntityManager, actor: Actor, clientId
   const rows = await em.find(Outbox, { workspace: actor.workspaceId, clientId: client.id }, { orderBy: { id: 'desc' }, limit });
   const weekIds = [...new Set(rows.map((r) => r.weekId).filter((w): w is number => w != null))];
   const weeks = weekIds.length ? await em.find(Week, { id: { $in: weekIds }, workspace: actor.workspaceId }, { fields: ['id', 'name', 'startDate'] }) : [];
-  const names = new Map(weeks.map((w) => [w.id, weekTitle(w)]));
+  const names = new Map(weeks.map((w) => [w.id, weekTitle(w, datesOf(actor))]));
   return {
     clientId: client.id,
     items: rows.map((r) => ({ ...presentOutbox(r), weekName: r.weekId != null ? (names.get(r.weekId) ?? null) : null })),

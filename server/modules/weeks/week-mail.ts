@@ -9,7 +9,7 @@ import { NotFound } from '../../http/errors.js';
 import { registerAttachment, type RenderedAttachment } from '../mail/attachment-registry.js';
 import { thawRemindersIcs } from './thaw-reminders-ics.js';
 import { renderWeekPlanPdf } from '../pdf/week-plan.pdf.js';
-import { longDate } from '@shared/domain/iso-date.js';
+import { longDate, toDateOrder, type DateOrder } from '@shared/domain/iso-date.js';
 import { Client, type IClient } from '../clients/client.entity.js';
 import { plannedTargets, slotShares } from '../clients/client.presenter.js';
 import { mealSlotsOf } from '../clients/client.service.js';
@@ -36,9 +36,9 @@ function macros(m: MyPlateDto['macros']): PdfMacros {
   return { kcal: m.kcal, fatG: m.fatG, proteinG: m.proteinG, netCarbsG: m.netCarbsG, carbsG: m.carbsG };
 }
 
-function plateNotes(p: MyPlateDto, system?: MeasureSystem): string[] {
+function plateNotes(p: MyPlateDto, order: DateOrder, system?: MeasureSystem): string[] {
   const notes: string[] = [];
-  if (p.storage === 'frozen' && p.thawOn) notes.push(`Frozen: move it from the freezer to the fridge on the evening of ${longDate(p.thawOn)}.`);
+  if (p.storage === 'frozen' && p.thawOn) notes.push(`Frozen: move it from the freezer to the fridge on the evening of ${longDate(p.thawOn, order)}.`);
   if (p.allergens.length) notes.push(`Contains: ${p.allergens.map(allergenLabel).join(', ')}.`);
   if (p.addOns.length) notes.push(`Add: ${p.addOns.map((a) => amountAndName(a.amountText, a.unit, a.name, system)).join('; ')}.`);
   return notes;
@@ -48,7 +48,7 @@ function plateNotes(p: MyPlateDto, system?: MeasureSystem): string[] {
  * The snapshot's days as the PDF lays them out; portions per plate = the client's household multiplier. With the
  * client's measure system, add-ons typed in the other one also give the client's amount.
  */
-export function pdfDays(days: readonly MyDayDto[], householdMultiplier: Decimal.Value, system?: MeasureSystem): WeekPlanPdfDay[] {
+export function pdfDays(days: readonly MyDayDto[], householdMultiplier: Decimal.Value, order: DateOrder, system?: MeasureSystem): WeekPlanPdfDay[] {
   const portions = new Decimal(householdMultiplier).toString();
   return days.map((d) => ({
     date: d.date,
@@ -60,7 +60,7 @@ export function pdfDays(days: readonly MyDayDto[], householdMultiplier: Decimal.
       reheatSteps: p.reheatSteps.length ? p.reheatSteps : [...new Set(p.trays.flatMap((t) => t.reheatSteps))],
       macros: macros(p.macros),
       eatBy: p.eatBy,
-      notes: plateNotes(p, system),
+      notes: plateNotes(p, order, system),
     })),
     totals: macros(d.totals),
   }));
@@ -113,9 +113,10 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
       businessName: ws.name,
       clientName: client.name,
       weekStart: pub.snapshot.startDate,
+      dateOrder: toDateOrder(ws.dateOrder),
       targets: { kcal: t.targetKcal, fatG: t.fatG, proteinG: t.proteinG, netCarbsG: t.netCarbCapG },
       targetsCover: targetsCover(client, slots),
-      days: pdfDays(mine.days, client.householdMultiplier, system),
+      days: pdfDays(mine.days, client.householdMultiplier, toDateOrder(ws.dateOrder), system),
       note: p.note ?? null,
       cautions: CAUTIONS.map((c) => ({ text: c.text, source: c.source })),
     },
@@ -127,19 +128,20 @@ export async function renderPublishedPlan(em: EntityManager, p: WeekPlanPayload,
 }
 
 /** A client's thaw reminders for a published week, as a calendar file (the download and the plan e-mail's). */
-export function thawRemindersFile(week: { weekId: number; name: string; startDate: string }, days: readonly MyDayDto[]): RenderedAttachment {
+export function thawRemindersFile(week: { weekId: number; name: string; startDate: string }, days: readonly MyDayDto[], order: DateOrder): RenderedAttachment {
   return {
     filename: `thaw-reminders-${week.startDate}.ics`,
-    buffer: Buffer.from(thawRemindersIcs(thawTasks(days), { calendarName: `Thaw reminders, ${week.name}`, uidPrefix: `week${week.weekId}-thaw` })),
+    buffer: Buffer.from(thawRemindersIcs(thawTasks(days), { calendarName: `Thaw reminders, ${week.name}`, uidPrefix: `week${week.weekId}-thaw`, dateOrder: order })),
     contentType: 'text/calendar; charset=utf-8',
   };
 }
 
 /** The thaw reminders of one client's published plan, rendered when the plan e-mail leaves. */
 export async function renderThawReminders(em: EntityManager, p: WeekPlanPayload): Promise<RenderedAttachment> {
-  const pub = await em.findOne(WeekPublication, { week: p.weekId, number: p.publicationVersion });
+  const pub = await em.findOne(WeekPublication, { week: p.weekId, number: p.publicationVersion }, { populate: ['workspace'] });
   if (!pub) throw new NotFound('Published week');
-  return thawRemindersFile({ weekId: p.weekId, name: pub.snapshot.name, startDate: pub.snapshot.startDate }, pub.snapshot.clients[String(p.clientId)]?.days ?? []);
+  const days = pub.snapshot.clients[String(p.clientId)]?.days ?? [];
+  return thawRemindersFile({ weekId: p.weekId, name: pub.snapshot.name, startDate: pub.snapshot.startDate }, days, toDateOrder(pub.workspace.$.dateOrder));
 }
 
 function payloadOf(raw: Record<string, unknown>): WeekPlanPayload {

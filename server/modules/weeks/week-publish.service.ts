@@ -93,7 +93,7 @@ export async function publishWeek(em: EntityManager, actor: Actor, id: number, v
   const data = await loadBoardData(em, actor, week);
   const result = computeBoard(boardInput(data));
   // The refusal is read by a person: its problems come worded.
-  const blocks = result.warnings.filter((w) => w.severity === 'block').map(worded);
+  const blocks = result.warnings.filter((w) => w.severity === 'block').map((w) => worded(w, data.dateOrder));
   if (blocks.length) {
     throw new Conflict(`${blocks.length === 1 ? '1 problem' : `${blocks.length} problems`} must be solved before publishing: ${blocks[0].message}`, { blocks });
   }

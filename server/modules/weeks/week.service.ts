@@ -1,7 +1,7 @@
 import { LockMode } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
-import { addDays, compareIsoDates, daysBetween, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
+import { addDays, compareIsoDates, daysBetween, shortDate, type DateOrder, type IsoDate } from '@shared/domain/iso-date.js';
 import { cellKey, computeBoard, coveringBatches, weekTitle } from '@shared/domain/week-board.js';
 import { BOARD_DAYS, boardsShareADay, clearStart, pickWeek, weekAfter } from '@shared/domain/week-days.js';
 import type { GlanceDto, SetupCountsDto, WeekSummaryDto } from '@shared/schemas/weeks.schema.js';
@@ -16,7 +16,7 @@ import type {
   putTraysSchema,
   updateWeekSchema,
 } from '@shared/schemas/weeks.schema.js';
-import type { Actor } from '../../http/authz.js';
+import { datesOf, type Actor } from '../../http/authz.js';
 import { Conflict, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Tray } from '../trays/tray.entity.js';
 import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell } from './week.entity.js';
@@ -58,7 +58,7 @@ export async function listWeeks(em: EntityManager, actor: Actor): Promise<WeekSu
   const countOf = new Map(counts.map((r) => [Number(r.week_id), Number(r.n)]));
   const pubs = await em.find(WeekPublication, { week: { $in: ids } }, { fields: ['week', 'number', 'publishedAt'] });
   const pubAt = new Map(pubs.map((p) => [`${p.week.id}|${p.number}`, p.publishedAt]));
-  return weeks.map((w) => presentWeekSummary(w, countOf.get(w.id) ?? 0, pubAt.get(`${w.id}|${w.publishedVersion}`) ?? null));
+  return weeks.map((w) => presentWeekSummary(w, countOf.get(w.id) ?? 0, pubAt.get(`${w.id}|${w.publishedVersion}`) ?? null, datesOf(actor)));
 }
 
 // ── Writing the week itself ─────────────────────────────────────────────────────────────────────────
@@ -89,9 +89,10 @@ async function checkDaysFree(tx: EntityManager, actor: Actor, startDate: IsoDate
   if (!other) return;
   // The nearest start clear of every week, on the side of the clash the coach asked for.
   const way = compareIsoDates(other.startDate, startDate) <= 0 ? 'later' : 'earlier';
+  const order = datesOf(actor);
   const message =
-    `"${weekTitle(other)}" already plans ${shortDate(other.startDate)} – ${shortDate(addDays(other.startDate, BOARD_DAYS - 1))}; a day is on one board only. ` +
-    `Start this week on ${shortDate(clearStart(weeks, other, way))} or ${way}.`;
+    `"${weekTitle(other, order)}" already plans ${shortDate(other.startDate, order)} – ${shortDate(addDays(other.startDate, BOARD_DAYS - 1), order)}; a day is on one board only. ` +
+    `Start this week on ${shortDate(clearStart(weeks, other, way), order)} or ${way}.`;
   throw new ValidationError(message, { startDate: [message] });
 }
 
@@ -161,7 +162,7 @@ export async function updateWeek(em: EntityManager, actor: Actor, id: number, v:
   const prepDate = v.prepDate ?? week.prepDate;
   const second = v.secondPrepDate === undefined ? week.secondPrepDate : v.secondPrepDate;
   checkPrepDates(week.startDate, prepDate, second);
-  if (week.secondPrepDate && !second) await keepTripsBought(em, week);
+  if (week.secondPrepDate && !second) await keepTripsBought(em, week, datesOf(actor));
   return commitWeekEdit(em, actor, week, async (tx, w) => {
     // Counts and cell choices follow their prep date when it moves.
     const moves: [IsoDate | null | undefined, IsoDate | null][] = [
@@ -189,14 +190,14 @@ export async function updateWeek(em: EntityManager, actor: Actor, id: number, v:
  * kitchen and its pantry change recorded. Dropping the second prep day would fold both lists into one whole-week list
  * that no longer knows what was bought: refused (409), saying what to do instead.
  */
-async function keepTripsBought(em: EntityManager, week: IWeek): Promise<void> {
+async function keepTripsBought(em: EntityManager, week: IWeek, order: DateOrder): Promise<void> {
   const bought = await em.getConnection().execute<{ trip: number }[]>(
     'select trip from shopping_purchase where week_id = ? and trip > 0 order by trip',
     [week.id],
   );
   if (!bought.length) return;
   const dates = [week.prepDate, week.secondPrepDate];
-  const which = bought.map((b) => `prep ${shortDate(dates[b.trip - 1] ?? week.prepDate)}`).join(' and ');
+  const which = bought.map((b) => `prep ${shortDate(dates[b.trip - 1] ?? week.prepDate, order)}`).join(' and ');
   throw new Conflict(
     `The shopping list for ${which} was marked bought, so this week keeps its two prep days. To bake everything on the first, set the second prep day's tray counts to 0 and have its plates take their portions from the first.`,
   );
@@ -467,11 +468,11 @@ export async function glance(em: EntityManager, actor: Actor, today: IsoDate = t
       .filter((d) => compareIsoDates(d, today) >= 0)
       .sort(compareIsoDates)[0] ?? null;
   return {
-    week: presentWeekSummary(data.week, data.cells.length, data.publishedAt),
+    week: presentWeekSummary(data.week, data.cells.length, data.publishedAt, data.dateOrder),
     nextWeek: after
       ? {
           id: after.id,
-          name: weekTitle(after),
+          name: weekTitle(after, data.dateOrder),
           startDate: after.startDate,
           cellCount: await em.count(WeekCell, { week: after.id }),
           publishedVersion: after.publishedVersion ?? null,

@@ -5,7 +5,7 @@ import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import { getWorkspaceSettings, updateWorkspaceSettings } from './workspace-settings.service.js';
 
-/** The coach's workspace settings (the net-carb rule). */
+/** The coach's workspace settings (the net-carb rule, how dates are written). */
 export function workspaceSettingsRoutes() {
   const r = Router();
   r.get(

@@ -1,3 +1,4 @@
+import { toDateOrder } from '@shared/domain/iso-date.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { NET_CARB_RULES } from '@shared/domain/nutrition.js';
 import {
@@ -14,6 +15,7 @@ import { toNetCarbRule } from '../ingredients/ingredient.service.js';
 function present(ws: IWorkspace): WorkspaceSettingsDto {
   return {
     netCarbRule: toNetCarbRule(ws.netCarbRule).kind,
+    dateOrder: toDateOrder(ws.dateOrder),
     netCarbRules: NET_CARB_RULES.map((r) => ({ ...r })),
     help: NET_CARB_HELP,
     version: ws.version,
@@ -24,7 +26,7 @@ export async function getWorkspaceSettings(em: EntityManager, actor: Actor): Pro
   return present(await em.findOneOrFail(Workspace, actor.workspaceId));
 }
 
-/** Changes the net-carb rule; a stale version is 409 with the current settings. */
+/** Changes the net-carb rule and how dates are written (each when given); a stale version is 409 with the current settings. */
 export async function updateWorkspaceSettings(
   em: EntityManager,
   actor: Actor,
@@ -33,7 +35,8 @@ export async function updateWorkspaceSettings(
   const v = workspaceSettingsUpdateSchema.parse(input);
   const ws = await em.findOneOrFail(Workspace, actor.workspaceId);
   if (ws.version !== v.version) throw new StaleEdit(ws.version, present(ws));
-  ws.netCarbRule = v.netCarbRule;
+  if (v.netCarbRule) ws.netCarbRule = v.netCarbRule;
+  if (v.dateOrder) ws.dateOrder = v.dateOrder;
   await em.flush();
   return present(ws);
 }

@@ -9,6 +9,8 @@ export const Workspace = defineEntity({
     name: p.string().length(120),
     /** Net-carb rule: 'half-other-polyols' (default), 'full', 'fiber-only'. */
     netCarbRule: p.string().length(40).default('half-other-polyols'),
+    /** How dates are written in words (shared/domain/iso-date.ts DATE_ORDERS): 'month-day' (default) or 'day-month'. */
+    dateOrder: p.string().length(10).default('month-day'),
     /** Meal slots of the week board, in order. */
     mealSlots: p.json<string[]>().default(JSON.stringify(['breakfast'])),
     isDemo: p.boolean().default(false),

@@ -23,9 +23,9 @@ const { days } = checkWeek([
 ]);
 
 describe('board answer: day checks', () => {
-  const full = days.map((d) => ({ clientId: Number(d.clientId), date: d.date, totals: d.totals, warnings: d.warnings.map(worded) }));
+  const full = days.map((d) => ({ clientId: Number(d.clientId), date: d.date, totals: d.totals, warnings: d.warnings.map((w) => worded(w, 'month-day')) }));
   const answer = days.map((d) => dayAnswer(Number(d.clientId), d.date, d.totals, d.warnings));
-  const expanded = expandBoard({ cells: [], checks: answer } as unknown as BoardAnswer).checks;
+  const expanded = expandBoard({ cells: [], checks: answer, dateOrder: 'month-day' } as unknown as BoardAnswer).checks;
 
   it('covers every warning kind', () => {
     expect(new Set(days.flatMap((d) => d.warnings.map((w) => w.kind)))).toEqual(
@@ -49,11 +49,16 @@ describe('board answer: day checks', () => {
     ['protein-short', 'Protein 10 g is below the 36 g floor (target 40 g).'],
     ['energy-over', 'Energy 600 kcal is over 550 kcal (target 500 kcal).'],
     ['dislike', 'The client dislikes mushroom.'],
-    ['before-prep', 'Planned on Sat 4 Jan, before its tray is made on Sun 5 Jan.'],
-    ['past-eat-by', 'Past its eat-by date: prepped Sun 5 Jan, eat by Thu 9 Jan.'],
-    ['past-freezer-quality', 'Frozen portion planned after its freezer quality limit (Sun 2 Mar).'],
+    ['before-prep', 'Planned on Sat, Jan 4, before its tray is made on Sun, Jan 5.'],
+    ['past-eat-by', 'Past its eat-by date: prepped Sun, Jan 5, eat by Thu, Jan 9.'],
+    ['past-freezer-quality', 'Frozen portion planned after its freezer quality limit (Sun, Mar 2).'],
   ])('words %s as the board page shows it', (kind, sentence) => {
     expect(expanded.flatMap((d) => d.warnings).find((w) => w.kind === kind)?.message).toBe(sentence);
+  });
+
+  it("words dates as the workspace writes them (the answer's dateOrder)", () => {
+    const dayFirst = expandBoard({ cells: [], checks: answer, dateOrder: 'day-month' } as unknown as BoardAnswer).checks;
+    expect(dayFirst.flatMap((d) => d.warnings).find((w) => w.kind === 'past-eat-by')?.message).toBe('Past its eat-by date: prepped Sun 5 Jan, eat by Thu 9 Jan.');
   });
 
   it('words allergens blocked and allowed by the coach', () => {

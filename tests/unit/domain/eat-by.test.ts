@@ -26,7 +26,7 @@ import {
   supplyingPrepDate,
   type FoodCategory,
 } from '@shared/domain/eat-by';
-import { addDays, daysBetween, isIsoDate, longDate, shortDate, weekdayOf } from '@shared/domain/iso-date';
+import { addDays, dateWithYear, dayHeading, daysBetween, DEFAULT_DATE_ORDER, isIsoDate, longDate, shortDate, toDateOrder, weekdayOf } from '@shared/domain/iso-date';
 
 // convert-units (general-purpose npm library, no type declarations) as the outside °F → °C reference.
 const require = createRequire(import.meta.url);
@@ -260,21 +260,54 @@ describe('thawTasks (a client week: what to move to the fridge, which evening)',
   });
 });
 
-describe('dates in words (printed plans, e-mails, the week check sentences)', () => {
-  it('property: the weekday and the day agree with the JavaScript Date of the same UTC calendar day (fast-check)', () => {
-    const names = ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'];
+describe('dates in words (pages, printed plans, e-mails, the week check sentences)', () => {
+  // Outside reference: ECMA-402 Intl.DateTimeFormat with CLDR data (Node's ICU). Month first follows en-US exactly;
+  // day first takes en-GB's weekday, day and month names (en-GB puts a comma after the weekday in the long form and,
+  // in recent CLDR, writes September "Sept": our day-first words keep "Mon 7 Sep" and "Monday 7 September 2026").
+  const us = (o: Intl.DateTimeFormatOptions) => new Intl.DateTimeFormat('en-US', { ...o, timeZone: 'UTC' });
+  const usShort = us({ weekday: 'short', month: 'short', day: 'numeric' });
+  const usLong = us({ weekday: 'long', month: 'long', day: 'numeric', year: 'numeric' });
+  const usHeading = us({ weekday: 'long', month: 'short', day: 'numeric' });
+  const usYear = us({ month: 'short', day: 'numeric', year: 'numeric' });
+  const gb = new Intl.DateTimeFormat('en-GB', { weekday: 'long', month: 'long', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
+
+  it('property: month first reads as en-US writes the same UTC calendar day (fast-check, every day of ten years)', () => {
     fc.assert(
       fc.property(fc.integer({ min: 0, max: 3650 }), (n) => {
         const iso = addDays('2024-01-01', n);
-        const js = new Date(`${iso}T00:00:00Z`);
-        expect(shortDate(iso).split(' ')).toEqual([names[js.getUTCDay()], String(js.getUTCDate()), js.toLocaleString('en-US', { month: 'short', timeZone: 'UTC' })]);
-        expect(longDate(iso).endsWith(` ${js.getUTCFullYear()}`)).toBe(true);
+        const js = new Date(`${iso}T12:00:00Z`);
+        expect(shortDate(iso, 'month-day')).toBe(usShort.format(js));
+        expect(longDate(iso, 'month-day')).toBe(usLong.format(js));
+        expect(dayHeading(iso, 'month-day')).toBe(usHeading.format(js));
+        expect(dateWithYear(iso, 'month-day')).toBe(usYear.format(js));
+      }),
+    );
+  });
+
+  it("property: day first has en-GB's weekday, day, month and year, in that order (fast-check)", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 3650 }), (n) => {
+        const iso = addDays('2024-01-01', n);
+        const part = Object.fromEntries(gb.formatToParts(new Date(`${iso}T12:00:00Z`)).map((p) => [p.type, p.value]));
+        expect(longDate(iso, 'day-month')).toBe(`${part.weekday} ${part.day} ${part.month} ${part.year}`);
+        expect(shortDate(iso, 'day-month')).toBe(`${part.weekday.slice(0, 3)} ${part.day} ${part.month.slice(0, 3)}`);
+        expect(dayHeading(iso, 'day-month')).toBe(`${part.weekday} ${part.day} ${part.month.slice(0, 3)}`);
+        expect(dateWithYear(iso, 'day-month')).toBe(`${part.day} ${part.month.slice(0, 3)} ${part.year}`);
       }),
     );
   });
 
   it('2025-01-05 was a Sunday (a worked calendar fact, also used above) and leap day 2028-02-29 a Tuesday', () => {
-    expect(shortDate('2025-01-05')).toBe('Sun 5 Jan');
-    expect(longDate('2028-02-29')).toBe('Tuesday 29 February 2028');
+    expect(shortDate('2025-01-05', 'day-month')).toBe('Sun 5 Jan');
+    expect(shortDate('2025-01-05', 'month-day')).toBe('Sun, Jan 5');
+    expect(longDate('2028-02-29', 'day-month')).toBe('Tuesday 29 February 2028');
+    expect(longDate('2028-02-29', 'month-day')).toBe('Tuesday, February 29, 2028');
+  });
+
+  it('reads a stored setting: anything but day-month is the default, month first', () => {
+    expect(toDateOrder('day-month')).toBe('day-month');
+    expect(toDateOrder('month-day')).toBe('month-day');
+    expect(toDateOrder(null)).toBe(DEFAULT_DATE_ORDER);
+    expect(toDateOrder('sideways')).toBe('month-day');
   });
 });

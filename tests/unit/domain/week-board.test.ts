@@ -138,10 +138,10 @@ describe('computeBoard shares the work of cells alike without changing any answe
 });
 
 describe('weekTitle', () => {
-  it('is the week name, or its start day in words when it has none (2026-12-07 is a Monday)', () => {
-    expect(weekTitle({ name: 'Holiday week', startDate: '2026-12-07' })).toBe('Holiday week');
-    expect(weekTitle({ name: '', startDate: '2026-12-07' })).toBe('Week of Mon 7 Dec');
-    expect(weekTitle({ name: null, startDate: '2026-12-07' })).toBe('Week of Mon 7 Dec');
+  it('is the week name, or its start day in words when it has none, as the workspace writes dates (2026-12-07 is a Monday)', () => {
+    expect(weekTitle({ name: 'Holiday week', startDate: '2026-12-07' }, 'day-month')).toBe('Holiday week');
+    expect(weekTitle({ name: '', startDate: '2026-12-07' }, 'month-day')).toBe('Week of Mon, Dec 7');
+    expect(weekTitle({ name: null, startDate: '2026-12-07' }, 'day-month')).toBe('Week of Mon 7 Dec');
   });
 });
 

@@ -74,7 +74,7 @@ describe('macro limits at their boundaries (sums are exact decimals)', () => {
   it('reports the numbers behind a macro warning', () => {
     const [w] = checkDay(day({ cells: macroCells('proteinG', [0.1, 64.1, 25.7]) })).warnings;
     expect(w).toMatchObject({ kind: 'protein-short', actualG: 89.9, targetG: 100, floorG: 90, clientId: 'c1', date: '2025-01-07' });
-    expect(worded(w).message).toContain('89.9 g');
+    expect(worded(w, 'month-day').message).toContain('89.9 g');
   });
 
   it('macros with more than three decimals are still summed exactly (0.0001 + 19.9999 is the 20 g cap)', () => {
@@ -166,7 +166,7 @@ describe('allergens (block unless overridden with a reason)', () => {
     const allergen = result.warnings.filter((w) => w.kind === 'allergen');
     expect(allergen).toHaveLength(1);
     expect(allergen[0]).toMatchObject({ allergen: 'milk', slot: 'dinner', severity, overridden });
-    expect(worded(allergen[0]).message).toContain('Milk');
+    expect(worded(allergen[0], 'month-day').message).toContain('Milk');
   });
 });
 
@@ -209,7 +209,7 @@ describe('dislikes', () => {
 
   it('words the warning with the dislike and the plate term that holds it', () => {
     const [w] = checkDay(day({ targets: { ...targets, proteinG: 0 }, clientDislikes: ['Onions'], cells: [cell({ terms: ['Egg slab', 'Onions, red, raw'] })] })).warnings;
-    expect(worded(w).message).toBe('The client dislikes onions (onions, red, raw).');
+    expect(worded(w, 'month-day').message).toBe('The client dislikes onions (onions, red, raw).');
   });
 
   it.each([

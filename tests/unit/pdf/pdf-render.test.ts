@@ -73,8 +73,9 @@ describe('client week PDF', () => {
     // Difference against the targets: 1067.4 − 1800 = −732.6 → "−733"; net carbs 10.55 ≤ 20 → "within".
     expect(flat).toContain('−733');
     expect(flat).toContain('within');
-    expect(flat).toContain('Eat by Thursday 10 December 2026');
-    expect(flat).toContain('Monday 7 December 2026');
+    // Dates as the workspace writes them: month first unless it chose day first.
+    expect(flat).toContain('Eat by Thursday, December 10, 2026');
+    expect(flat).toContain('Week of Monday, December 7, 2026');
     // Glyphs present in Atkinson Hyperlegible come through as themselves.
     expect(flat).toContain('½ square');
     expect(flat).toContain('¼ avocado');
@@ -82,6 +83,14 @@ describe('client week PDF', () => {
     for (const c of CAUTIONS) expect(flat).toContain(c.source);
     for (let p = 1; p <= pages; p++) expect(flat).toContain(`Page ${p} of ${pages}`);
     expect(flat.split('Oat & Ember Prep').length - 1).toBeGreaterThanOrEqual(pages);
+  });
+
+  it('writes dates day first for a workspace that chose it', async () => {
+    const { buffer } = await renderWeekPlanPdf({ ...week, dateOrder: 'day-month', days: week.days.slice(0, 4) });
+    const flat = (await textOf(buffer)).text.replace(/\s+/g, ' ');
+    expect(flat).toContain('Eat by Thursday 10 December 2026');
+    expect(flat).toContain('Week of Monday 7 December 2026');
+    expect(flat).not.toContain('December 7, 2026');
   });
 
   it('falls back to ASCII words for a glyph the font lacks (→ is not in Atkinson Hyperlegible)', async () => {

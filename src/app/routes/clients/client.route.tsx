@@ -15,6 +15,7 @@ import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { useMe } from '@/features/auth/hooks/use-me';
+import { dateWithYearLabel, instantDayLabel } from '@/lib/dates';
 
 /** What archiving a client does, said where the coach archives and on an archived profile. */
 const ARCHIVE_MEANS =
@@ -49,7 +50,7 @@ function InviteCard({ client }: { client: ClientDto }) {
       {client.invitation && !link && (
         <p className="mb-3 text-sm">
           Invited <strong>{client.invitation.email}</strong>; not joined yet. The link works until{' '}
-          {new Date(client.invitation.expiresAt).toLocaleDateString(undefined, { weekday: 'long', month: 'short', day: 'numeric' })}. Invite again
+          {instantDayLabel(client.invitation.expiresAt, true)}. Invite again
           to send a new link.
         </p>
       )}
@@ -145,7 +146,7 @@ export function Component() {
         </Button>
       </PageHeader>
       {client.archivedAt && (
-        <Notice tone="info" title={`Archived on ${new Date(client.archivedAt).toLocaleDateString(undefined, { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' })}`}>
+        <Notice tone="info" title={`Archived on ${dateWithYearLabel(client.archivedAt)}`}>
           {ARCHIVE_MEANS}
           {client.account && (
             <p className="mt-2">

@@ -1,4 +1,6 @@
-import { queryOptions } from '@tanstack/react-query';
+import { queryOptions, type QueryClient } from '@tanstack/react-query';
+import { DEFAULT_DATE_ORDER } from '@shared/domain/iso-date';
+import { setDateOrder } from '@/lib/dates';
 import type { InvitationDto, MeDto, MemberDto, MyWorkspaceDto, Role } from '@shared/schemas/auth.schema';
 import { api } from '@/lib/api-client';
 import { isApiError } from '@/lib/problem';
@@ -35,3 +37,17 @@ export const invitationQuery = (token: string) =>
     queryFn: () => api.get<{ email: string; role: Role; workspaceName: string }>(`/invitations/${token}`),
     retry: false,
   });
+
+/**
+ * Keeps the pages' date words (src/lib/dates.ts) on the workspace's setting: whenever the signed-in person is read
+ * or replaced (sign-in, a workspace switch, the coach changing the setting), the order follows. Returns the unsubscribe.
+ */
+export function followDateOrder(qc: QueryClient): () => void {
+  const key = JSON.stringify(authKeys.me());
+  return qc.getQueryCache().subscribe((event) => {
+    if (event.type !== 'updated' && event.type !== 'added') return;
+    if (JSON.stringify(event.query.queryKey) !== key) return;
+    const me = event.query.state.data as MeDto | null | undefined;
+    setDateOrder(me?.dateOrder ?? DEFAULT_DATE_ORDER);
+  });
+}

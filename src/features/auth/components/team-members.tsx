@@ -5,10 +5,11 @@ import { Button } from '@/components/ui/button';
 import { Notice, QueryView, Skeleton } from '@/components/ui/states';
 import { errorMessage } from '@/lib/problem';
 import { ROLE_WORDS } from '@/lib/words';
+import { dateWithYearLabel } from '@/lib/dates';
 import { membersQuery } from '../api/auth.queries';
 import { useChangeMemberRole, useRemoveMember } from '../api/use-auth-mutations';
 
-const joined = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+const joined = dateWithYearLabel;
 
 /** What ending someone's access does, asked before it happens. */
 export function removeQuestion(m: Pick<MemberDto, 'name' | 'role'>, workspaceName: string): string {

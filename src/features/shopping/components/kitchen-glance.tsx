@@ -5,8 +5,7 @@ import { nextTripOf, prepDatesOf } from '@shared/domain/week-board';
 import { Card, EmptyState, Notice, Progress, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { TileLink } from '@/components/ui/tile-link';
-import { dayLabel, nextPrepDayTitle } from '@/lib/dates';
-import { localToday } from '@/lib/dates';
+import { dayLabel, instantDayLabel, localToday, nextPrepDayTitle } from '@/lib/dates';
 import { currentWeekQuery, shoppingListQuery } from '../api/shopping.queries';
 
 function ShoppingProgress({ weekId, prepDate }: { weekId: number; prepDate: string | null }) {
@@ -15,7 +14,7 @@ function ShoppingProgress({ weekId, prepDate }: { weekId: number; prepDate: stri
     <QueryView query={q} loading={<Skeleton className="h-10 w-full" label="Loading the shopping list" />}>
       {(list) =>
         list.bought ? (
-          <p>Marked bought {new Date(list.bought.at).toLocaleDateString(undefined, { weekday: 'short', day: 'numeric', month: 'short' })}: the pantry is up to date.</p>
+          <p>Marked bought {instantDayLabel(list.bought.at)}: the pantry is up to date.</p>
         ) : list.itemCount === 0 ? (
           <p>Nothing to buy yet.</p>
         ) : (

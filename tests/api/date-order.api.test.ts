@@ -1,0 +1,110 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import { PDFParse } from 'pdf-parse';
+import { testApp, agentFor } from '../support/test-app.js';
+import { coachWorkspace, makeWeek, member, PASSWORD, uniq, type Member } from '../support/factories.js';
+import { shoppingWeek } from '../support/shopping-week.js';
+
+// How a workspace writes dates in words. Calendar facts (outside reference: ECMA-402 Intl with CLDR data, checked in
+// tests/unit/domain/eat-by.test.ts): 2026-01-05 was a Monday, 2026-01-04 a Sunday.
+
+let app: Express;
+beforeAll(async () => {
+  ({ app } = await testApp());
+});
+
+async function pdfTextOf(agent: Member['agent'], url: string): Promise<string> {
+  const res = await agent
+    .get(url)
+    .buffer(true)
+    .parse((r, done) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => done(null, Buffer.concat(chunks)));
+    })
+    .expect(200);
+  const parser = new PDFParse({ data: new Uint8Array(res.body as Buffer) });
+  const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+  await parser.destroy();
+  return text;
+}
+
+async function setOrder(coach: Member, dateOrder: string) {
+  const s = await coach.agent.get('/api/workspace/settings').expect(200);
+  return coach.agent.patch('/api/workspace/settings').send({ dateOrder, version: s.body.version });
+}
+
+describe('dates in words, as the workspace writes them', () => {
+  it('is month first by default; the coach switches the whole workspace to day first (pages read it from /me)', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    expect((await coach.agent.get('/api/workspace/settings').expect(200)).body.dateOrder).toBe('month-day');
+    expect((await assistant.agent.get('/api/auth/me').expect(200)).body.dateOrder).toBe('month-day');
+    const board = await makeWeek(coach, { name: '' });
+    const before = await coach.agent.get('/api/weeks').expect(200);
+    expect(before.body.find((w: { id: number }) => w.id === board.week.id).name).toBe('Week of Mon, Jan 5');
+
+    const changed = await setOrder(coach, 'day-month');
+    expect(changed.status).toBe(200);
+    expect(changed.body).toMatchObject({ dateOrder: 'day-month', netCarbRule: 'half-other-polyols' });
+    // Everyone in the workspace, on their next request: the assistant too.
+    expect((await assistant.agent.get('/api/auth/me').expect(200)).body.dateOrder).toBe('day-month');
+    const after = await assistant.agent.get('/api/weeks').expect(200);
+    expect(after.body.find((w: { id: number }) => w.id === board.week.id).name).toBe('Week of Mon 5 Jan');
+    const detail = await coach.agent.get(`/api/weeks/${board.week.id}`).expect(200);
+    expect(detail.body).toMatchObject({ dateOrder: 'day-month', week: { name: 'Week of Mon 5 Jan' } });
+    // The server's own sentences follow it (the one-board refusal).
+    const clash = await coach.agent.post('/api/weeks').send({ startDate: '2026-01-07', prepDate: '2026-01-06' }).expect(400);
+    expect(clash.body.errors.startDate[0]).toBe(
+      '"Week of Mon 5 Jan" already plans Mon 5 Jan – Sun 11 Jan; a day is on one board only. Start this week on Mon 12 Jan or later.',
+    );
+  });
+
+  it('prints the shopping list in the chosen words', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await shoppingWeek(coach);
+    expect(await pdfTextOf(coach.agent, `/api/weeks/${w.weekId}/shopping.pdf`)).toContain('Shopping list, week of Mon, Jan 5');
+    await setOrder(coach, 'day-month').then((r) => expect(r.status).toBe(200));
+    const text = await pdfTextOf(coach.agent, `/api/weeks/${w.weekId}/shopping.pdf`);
+    expect(text).toContain('Shopping list, week of Mon 5 Jan');
+    expect(text).not.toContain('Jan 5');
+  });
+
+  it('keeps the net-carb rule when only the date order changes, and the other way round', async () => {
+    const coach = await coachWorkspace(app);
+    await setOrder(coach, 'day-month').then((r) => expect(r.status).toBe(200));
+    const s = await coach.agent.get('/api/workspace/settings').expect(200);
+    const rule = await coach.agent.patch('/api/workspace/settings').send({ netCarbRule: 'full', version: s.body.version }).expect(200);
+    expect(rule.body).toMatchObject({ netCarbRule: 'full', dateOrder: 'day-month' });
+  });
+
+  it('refuses an unknown order (400 naming dateOrder) and a stale version (409), changing nothing', async () => {
+    const coach = await coachWorkspace(app);
+    const bad = await setOrder(coach, 'year-first');
+    expect(bad.status).toBe(400);
+    expect(bad.body.errors.dateOrder[0]).toBe('Choose how dates are written: month-day or day-month');
+    const s = await coach.agent.get('/api/workspace/settings').expect(200);
+    await coach.agent.patch('/api/workspace/settings').send({ dateOrder: 'day-month', version: s.body.version }).expect(200);
+    const stale = await coach.agent.patch('/api/workspace/settings').send({ dateOrder: 'month-day', version: s.body.version });
+    expect(stale.status).toBe(409);
+    expect((await coach.agent.get('/api/workspace/settings').expect(200)).body.dateOrder).toBe('day-month');
+    // Only the coach sets it.
+    const assistant = await member(app, coach, 'assistant');
+    await assistant.agent.patch('/api/workspace/settings').send({ dateOrder: 'month-day', version: 1 }).expect(403);
+  });
+
+  it('starts a new workspace in the order its coach signs up with (the form sends the device order)', async () => {
+    const name = uniq('coach');
+    const agent = agentFor(app);
+    await agent
+      .post('/api/auth/register')
+      .send({ name, email: `${name}@example.test`, password: PASSWORD, businessName: `${name} kitchen`, dateOrder: 'day-month' })
+      .expect(201);
+    expect((await agent.get('/api/auth/me').expect(200)).body.dateOrder).toBe('day-month');
+    const bad = await agentFor(app)
+      .post('/api/auth/register')
+      .send({ name, email: `${uniq('coach')}@example.test`, password: PASSWORD, businessName: 'x', dateOrder: 'sideways' });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.errors)).toEqual(['dateOrder']);
+  });
+});
