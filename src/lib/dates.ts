@@ -29,9 +29,9 @@ export function instantDayLabel(instant: string, longWeekday = false): string {
   return dayLabel(localToday(new Date(instant)), longWeekday);
 }
 
-/** The order this device's locale writes a day and its month in (en-US: month first; en-GB: day first). */
-export function deviceDateOrder(): DateOrder {
-  const parts = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' }).formatToParts(new Date(Date.UTC(2026, 11, 7, 12)));
+/** The order this device's locale (or `locale`) writes a day and its month in (en-US: month first; en-GB: day first). */
+export function deviceDateOrder(locale?: string): DateOrder {
+  const parts = new Intl.DateTimeFormat(locale, { day: 'numeric', month: 'short' }).formatToParts(new Date(Date.UTC(2026, 11, 7, 12)));
   const day = parts.findIndex((p) => p.type === 'day');
   const month = parts.findIndex((p) => p.type === 'month');
   return day >= 0 && month >= 0 && day < month ? 'day-month' : 'month-day';

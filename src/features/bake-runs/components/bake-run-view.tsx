@@ -71,7 +71,34 @@ export function BakeRunView({ run, unit, move, kitchen }: { run: BakeRunResult; 
       </section>
       <section className="flex flex-col gap-2">
         <h2 className="text-xl">Trays</h2>
-        <div className="overflow-x-auto" role="region" aria-label="Trays of the run" tabIndex={0}>
+        {/* On a phone each tray is a card (seven columns do not fit a hand-held screen); wider screens get the table. */}
+        <ul className="flex flex-col gap-2 sm:hidden" aria-label="Trays of the run">
+          {run.trays.map((t) => (
+            <li key={t.id} className="rounded-lg border border-line bg-paper-card p-3">
+              <p className="font-bold">{t.name}</p>
+              <p className="text-sm text-ink-soft">
+                {t.oven} · rack {t.rack} · <span className="num">{formatTemp(t.tempF, unit)}</span>
+              </p>
+              <dl className="num mt-1 grid grid-cols-3 gap-2 text-base">
+                <div>
+                  <dt className="text-sm text-ink-soft">In</dt>
+                  <dd>{clock(t.inAt)}</dd>
+                </div>
+                <div>
+                  <dt className="text-sm text-ink-soft">Check / out</dt>
+                  <dd>
+                    {clock(t.outAt)} <span className="text-sm text-ink-soft">({t.bakeMinutes} min)</span>
+                  </dd>
+                </div>
+                <div>
+                  <dt className="text-sm text-ink-soft">Pull by</dt>
+                  <dd>{clock(t.pullByAt)}</dd>
+                </div>
+              </dl>
+            </li>
+          ))}
+        </ul>
+        <div className="hidden overflow-x-auto sm:block" role="region" aria-label="Trays of the run, as a table" tabIndex={0}>
           <table className="w-full text-left text-base">
             <thead className="text-sm text-ink-soft">
               <tr>
