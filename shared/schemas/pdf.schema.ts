@@ -1,4 +1,5 @@
 import type { DateOrder } from '../domain/iso-date';
+import type { ReheatGroup } from '../domain/reheat';
 /**
  * Plain data the PDF renderers take. The server modules that own the rows (week board, shopping list, bake run)
  * build these objects; the renderers in server/modules/pdf/ only lay them out.
@@ -29,7 +30,8 @@ export interface WeekPlanPdfSlot {
   /** Portions of this plate eaten in this slot (usually 1; a household multiplier can raise it). */
   portions: number | string;
   assemblySteps: string[];
-  reheatSteps: string[];
+  /** How to reheat it, in groups (shared/domain/reheat.ts `reheatGroups`). */
+  reheat: ReheatGroup[];
   macros: PdfMacros;
   /** ISO date (YYYY-MM-DD) of the earliest eat-by of the portions on this plate. */
   eatBy: string | null;

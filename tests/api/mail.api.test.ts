@@ -130,7 +130,7 @@ describe('PDF attachments', () => {
                 plateName: 'Zucchini egg bake',
                 portions: 1,
                 assemblySteps: ['Plate one square.'],
-                reheatSteps: ['Microwave until 165 °F.'],
+                reheat: [{ trays: [], steps: ['Microwave until 165 °F.'] }],
                 macros: { kcal: 388, fatG: '29.5', proteinG: '22.1', netCarbsG: '5.2', carbsG: '7.0' },
                 eatBy: '2026-12-09',
               },

@@ -1,5 +1,6 @@
 import Decimal from 'decimal.js';
-import { CAUTIONS } from '@shared/domain/eat-by.js';
+import { CAUTIONS, REHEAT_MIN_C, REHEAT_MIN_F } from '@shared/domain/eat-by.js';
+import { reheatGroupTitle } from '@shared/domain/reheat.js';
 import type { PdfMacros, PdfTargets, WeekPlanPdfData } from '@shared/schemas/pdf.schema.js';
 import { cautionsBlock, createDoc, finishDoc, heading, list, paragraph, table, type Column } from './pdf-document.js';
 import { capitalize, fixed, signed } from './pdf-format.js';
@@ -78,7 +79,11 @@ export async function renderWeekPlanPdf(data: WeekPlanPdfData): Promise<{ filena
       if (s.eatBy) paragraph(doc, `Eat by ${longDate(s.eatBy, order)}.`);
       for (const n of s.notes ?? []) paragraph(doc, n);
       list(doc, 'Assemble', s.assemblySteps);
-      list(doc, 'Reheat', s.reheatSteps);
+      for (const g of s.reheat) {
+        const title = reheatGroupTitle(g, s.reheat.length);
+        list(doc, title ? `Reheat: ${title}` : 'Reheat', g.steps);
+      }
+      paragraph(doc, `Heat until every part reaches ${REHEAT_MIN_F} °F (${REHEAT_MIN_C} °C).`);
       doc.moveDown(0.3);
     }
   }

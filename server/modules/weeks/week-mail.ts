@@ -3,6 +3,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { amountAndName, type MeasureSystem } from '@shared/domain/units.js';
 import { allergenLabel } from '@shared/domain/allergens.js';
 import { CAUTIONS, thawTasks } from '@shared/domain/eat-by.js';
+import { reheatGroups } from '@shared/domain/reheat.js';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema.js';
 import type { PdfMacros, WeekPlanPdfData, WeekPlanPdfDay } from '@shared/schemas/pdf.schema.js';
 import { NotFound } from '../../http/errors.js';
@@ -57,7 +58,7 @@ export function pdfDays(days: readonly MyDayDto[], householdMultiplier: Decimal.
       plateName: p.name,
       portions,
       assemblySteps: p.assemblySteps,
-      reheatSteps: p.reheatSteps.length ? p.reheatSteps : [...new Set(p.trays.flatMap((t) => t.reheatSteps))],
+      reheat: reheatGroups(p),
       macros: macros(p.macros),
       eatBy: p.eatBy,
       notes: plateNotes(p, order, system),

@@ -38,7 +38,7 @@ const week: WeekPlanPdfData = {
         plateName: `Spinach frittata square ${i + 1}`,
         portions: 1,
         assemblySteps: ['Take one frittata square from the fridge.', 'Add ¼ avocado, sliced.'],
-        reheatSteps: ['Microwave covered 60 s, turn, 30 s more, until 165 °F (74 °C).'],
+        reheat: [{ trays: [], steps: ['Microwave covered 60 s, turn, 30 s more, until 165 °F (74 °C).'] }],
         macros: { kcal: '412.4', fatG: '33.25', proteinG: '21.6', netCarbsG: '4.35', carbsG: '7.9' },
         eatBy: '2026-12-10',
       },
@@ -47,7 +47,11 @@ const week: WeekPlanPdfData = {
         plateName: `Sheet-pan chicken thighs ${i + 1}`,
         portions: '1.5',
         assemblySteps: ['Two thighs with ¾ cup roasted broccoli.'],
-        reheatSteps: ['Oven 350 °F for 12 minutes.'],
+        // A plate of two trays without steps of its own: each tray's steps under its name.
+        reheat: [
+          { trays: ['Chicken thighs'], steps: ['Oven 350 °F for 12 minutes.'] },
+          { trays: ['Roasted broccoli'], steps: ['Toss in a hot pan for 2 minutes.'] },
+        ],
         macros: { kcal: '655', fatG: '48.1', proteinG: '47.4', netCarbsG: '6.2', carbsG: '9.8' },
         eatBy: '2026-12-11',
       },
@@ -73,6 +77,10 @@ describe('client week PDF', () => {
     // Difference against the targets: 1067.4 − 1800 = −732.6 → "−733"; net carbs 10.55 ≤ 20 → "within".
     expect(flat).toContain('−733');
     expect(flat).toContain('within');
+    // Reheating in groups: one plate's own steps under "Reheat"; two trays' under their names, then the 165 °F line.
+    expect(flat).toContain('Reheat 1. Microwave covered 60 s');
+    expect(flat).toContain('Reheat: Chicken thighs 1. Oven 350 °F for 12 minutes. Reheat: Roasted broccoli 1. Toss in a hot pan for 2 minutes.');
+    expect(flat).toContain('Heat until every part reaches 165 °F (74 °C).');
     // Dates as the workspace writes them: month first unless it chose day first.
     expect(flat).toContain('Eat by Thursday, December 10, 2026');
     expect(flat).toContain('Week of Monday, December 7, 2026');

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { allergenLabel } from '@shared/domain/allergens';
-import { thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
+import { REHEAT_MIN_C, REHEAT_MIN_F, thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
 import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema';
@@ -13,6 +13,7 @@ import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/mail/api/week-mail.
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { counted } from '@/lib/words';
 import { dayLabel } from '@/lib/dates';
+import { reheatGroups, reheatGroupTitle, type ReheatSource } from '@shared/domain/reheat';
 
 function Macros({ m }: { m: MyPlateDto['macros'] }) {
   return (
@@ -73,16 +74,34 @@ function PlateCard({ plate }: { plate: MyPlateDto }) {
           </ol>
         </section>
       )}
-      <section>
-        <h3 className="font-bold">Reheat</h3>
-        <ol className="list-decimal pl-5">
-          {[...plate.reheatSteps, ...plate.trays.flatMap((t) => t.reheatSteps)].map((s, i) => (
-            <li key={i}>{s}</li>
-          ))}
-          <li>Heat until every part reaches 165 °F (74 °C).</li>
-        </ol>
-      </section>
+      <Reheat plate={plate} />
     </Card>
+  );
+}
+
+/** How to reheat the plate: the plate's own steps, or each tray's under its name (shared/domain/reheat.ts). */
+function Reheat({ plate }: { plate: ReheatSource }) {
+  const groups = reheatGroups(plate);
+  return (
+    <section className="flex flex-col gap-1">
+      <h3 className="font-bold">Reheat</h3>
+      {groups.map((g, n) => {
+        const title = reheatGroupTitle(g, groups.length);
+        return (
+          <div key={n}>
+            {title && <h4 className="font-bold text-ink-soft">{title}</h4>}
+            <ol className="list-decimal pl-5">
+              {g.steps.map((s, i) => (
+                <li key={i}>{s}</li>
+              ))}
+            </ol>
+          </div>
+        );
+      })}
+      <p>
+        Heat until every part reaches {REHEAT_MIN_F} °F ({REHEAT_MIN_C} °C).
+      </p>
+    </section>
   );
 }
 

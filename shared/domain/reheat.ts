@@ -1,0 +1,44 @@
+/**
+ * How a plate is reheated, in groups a person follows one at a time (the client's page and their plan PDF).
+ *
+ * The plate's own steps, when the coach wrote some, are how that plate is reheated: they are the one group. Else
+ * each tray's steps are a group of their own, named by the tray (trays with the very same steps share a group):
+ * read one after the other as a single numbered list, "reheat in a pan" then "reheat in the oven" looked like two
+ * reheats of the same food.
+ */
+export interface ReheatGroup {
+  /** The trays these steps are for; empty for the plate's own steps. */
+  trays: string[];
+  steps: string[];
+}
+
+export interface ReheatSource {
+  reheatSteps: readonly string[];
+  trays: readonly { name: string; reheatSteps: readonly string[] }[];
+}
+
+export function reheatGroups(plate: ReheatSource): ReheatGroup[] {
+  if (plate.reheatSteps.length) return [{ trays: [], steps: [...plate.reheatSteps] }];
+  const groups: ReheatGroup[] = [];
+  const byKey = new Map<string, ReheatGroup>();
+  for (const t of plate.trays) {
+    if (!t.reheatSteps.length) continue;
+    const key = JSON.stringify(t.reheatSteps);
+    const same = byKey.get(key);
+    if (same) {
+      if (!same.trays.includes(t.name)) same.trays.push(t.name);
+      continue;
+    }
+    const group = { trays: [t.name], steps: [...t.reheatSteps] };
+    byKey.set(key, group);
+    groups.push(group);
+  }
+  return groups;
+}
+
+const names = new Intl.ListFormat('en-US', { style: 'long', type: 'conjunction' });
+
+/** A group's heading when the plate has more than one ("Oven bacon", "Ham and Salami"); null when it needs none. */
+export function reheatGroupTitle(group: ReheatGroup, groupCount: number): string | null {
+  return groupCount > 1 && group.trays.length ? names.format(group.trays) : null;
+}
