@@ -1,10 +1,10 @@
 /**
  * How a plate is reheated, in groups a person follows one at a time (the client's page and their plan PDF).
  *
- * The plate's own steps, when the coach wrote some, are how that plate is reheated: they are the one group. Else
- * each tray's steps are a group of their own, named by the tray (trays with the very same steps share a group):
- * read one after the other as a single numbered list, "reheat in a pan" then "reheat in the oven" looked like two
- * reheats of the same food.
+ * Each tray's steps are a group of their own, named by the tray (trays with the very same steps share a group), and
+ * the plate's own steps, when the coach wrote some, come last as "The whole plate". Read one after the other as a
+ * single numbered list, "reheat in a pan" then "reheat in the oven" looked like two reheats of the same food. Nothing
+ * is dropped: a plate's finishing step ("crisp the wrap in a pan") must not hide its trays' steps to 165 °F.
  */
 export interface ReheatGroup {
   /** The trays these steps are for; empty for the plate's own steps. */
@@ -18,7 +18,6 @@ export interface ReheatSource {
 }
 
 export function reheatGroups(plate: ReheatSource): ReheatGroup[] {
-  if (plate.reheatSteps.length) return [{ trays: [], steps: [...plate.reheatSteps] }];
   const groups: ReheatGroup[] = [];
   const byKey = new Map<string, ReheatGroup>();
   for (const t of plate.trays) {
@@ -33,12 +32,14 @@ export function reheatGroups(plate: ReheatSource): ReheatGroup[] {
     byKey.set(key, group);
     groups.push(group);
   }
+  if (plate.reheatSteps.length) groups.push({ trays: [], steps: [...plate.reheatSteps] });
   return groups;
 }
 
 const names = new Intl.ListFormat('en-US', { style: 'long', type: 'conjunction' });
 
-/** A group's heading when the plate has more than one ("Oven bacon", "Ham and Salami"); null when it needs none. */
+/** A group's heading when the plate has more than one ("Oven bacon", "Ham and Salami", "The whole plate"); else null. */
 export function reheatGroupTitle(group: ReheatGroup, groupCount: number): string | null {
-  return groupCount > 1 && group.trays.length ? names.format(group.trays) : null;
+  if (groupCount < 2) return null;
+  return group.trays.length ? names.format(group.trays) : 'The whole plate';
 }

@@ -87,8 +87,8 @@ const DEMO_PLATES: { name: string; description: string; parts: Part[]; assemblyS
     name: 'Almond batter squares with Greek yogurt',
     description: 'Demo plate: two lightly sweet batter squares with a pot of whole-milk Greek yogurt and cinnamon.',
     parts: [['Cream-cheese almond batter slab', 2], ['greek-yogurt-whole', '1/2', 'cup'], ['cinnamon', '1/4', 'tsp', 'on the yogurt']],
-    assemblySteps: ['Warm the squares briefly.', 'Pack the yogurt cold, apart, dusted with cinnamon.'],
-    reheatSteps: ['Microwave the squares 20–30 seconds; they should be warm, not hot.'],
+    assemblySteps: ['Reheat the squares (below).', 'Pack the yogurt cold, apart, dusted with cinnamon.'],
+    reheatSteps: ['Microwave the squares 20–30 seconds, until hot all the way through; let them stand a minute.'],
   },
   {
     name: 'Bacon, ham and roasted radish plate',

@@ -5,10 +5,16 @@ import { reheatGroups, reheatGroupTitle } from '@shared/domain/reheat';
 const tray = (name: string, reheatSteps: string[]) => ({ name, reheatSteps });
 
 describe('reheating a plate, in groups', () => {
-  it("uses the plate's own steps when the coach wrote some, as one group without a heading", () => {
-    const groups = reheatGroups({ reheatSteps: ['Oven 350 °F, 8 minutes, covered'], trays: [tray('Oven bacon', ['Dry pan 30 s'])] });
-    expect(groups).toEqual([{ trays: [], steps: ['Oven 350 °F, 8 minutes, covered'] }]);
-    expect(reheatGroupTitle(groups[0], groups.length)).toBeNull();
+  it("keeps the trays' steps when the plate has its own, which come last as the whole plate's", () => {
+    const groups = reheatGroups({ reheatSteps: ['Crisp the wrap in a dry pan, 30 s a side'], trays: [tray('Egg slab', ['Microwave covered until 165 °F'])] });
+    expect(groups).toEqual([
+      { trays: ['Egg slab'], steps: ['Microwave covered until 165 °F'] },
+      { trays: [], steps: ['Crisp the wrap in a dry pan, 30 s a side'] },
+    ]);
+    expect(groups.map((g) => reheatGroupTitle(g, groups.length))).toEqual(['Egg slab', 'The whole plate']);
+    const own = reheatGroups({ reheatSteps: ['Oven 350 °F, 8 minutes, covered'], trays: [tray('Ham', [])] });
+    expect(own).toEqual([{ trays: [], steps: ['Oven 350 °F, 8 minutes, covered'] }]);
+    expect(reheatGroupTitle(own[0], own.length)).toBeNull();
   });
 
   it("gives each tray's steps under its name, trays with the same steps together, trays without steps left out", () => {
