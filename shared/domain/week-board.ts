@@ -20,6 +20,11 @@ export function weekTitle(w: { name?: string | null; startDate: IsoDate }, order
   return w.name || `Week of ${shortDate(w.startDate, order)}`;
 }
 
+/** A published week's title as the workspace writes dates now (`name` as published, for snapshots without `ownName`). */
+export function snapshotTitle(s: { name: string; ownName?: string; startDate: IsoDate }, order: DateOrder): string {
+  return s.ownName === undefined ? s.name : weekTitle({ name: s.ownName, startDate: s.startDate }, order);
+}
+
 /** A week's prep days (one or two), earliest first. */
 export function prepDatesOf(w: { prepDate: IsoDate; secondPrepDate?: IsoDate | null }): IsoDate[] {
   return [w.prepDate, ...(w.secondPrepDate ? [w.secondPrepDate] : [])].sort(compareIsoDates);

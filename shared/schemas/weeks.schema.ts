@@ -251,7 +251,13 @@ export interface MyNextWeekDto {
 /** The stored snapshot of one publication: every client's days, as clients will read them. */
 export interface WeekSnapshot {
   weekId: number;
+  /** The week's title when it was published ("Week of Mon, Dec 7" for a week without a name of its own). */
   name: string;
+  /**
+   * The week's own name ('' when it had none): readers write the title with `snapshotTitle`, so an unnamed week
+   * follows the workspace's date setting. Absent in snapshots published before it was kept.
+   */
+  ownName?: string;
   startDate: IsoDate;
   endDate: IsoDate;
   prepDates: IsoDate[];

@@ -1,8 +1,9 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import { PDFParse } from 'pdf-parse';
+import ICAL from 'ical.js';
 import { testApp, agentFor } from '../support/test-app.js';
-import { coachWorkspace, makeWeek, member, PASSWORD, uniq, type Member } from '../support/factories.js';
+import { coachWorkspace, makeAssembly, makeClient, makeIngredient, makeTray, makeWeek, member, PASSWORD, uniq, type Member } from '../support/factories.js';
 import { shoppingWeek } from '../support/shopping-week.js';
 
 // How a workspace writes dates in words. Calendar facts (outside reference: ECMA-402 Intl with CLDR data, checked in
@@ -68,6 +69,36 @@ describe('dates in words, as the workspace writes them', () => {
     const text = await pdfTextOf(coach.agent, `/api/weeks/${w.weekId}/shopping.pdf`);
     expect(text).toContain('Shopping list, week of Mon 5 Jan');
     expect(text).not.toContain('Jan 5');
+  });
+
+  it("a client's published week, its plan PDF and thaw reminders follow the setting without publishing again", async () => {
+    const coach = await coachWorkspace(app);
+    const ing = await makeIngredient(coach);
+    const tray = await makeTray(coach, { storage: { fridgeDays: 7, freezerWeeks: 8 } }, ing.id);
+    const plate = await makeAssembly(coach, tray.id);
+    const client = await makeClient(coach);
+    const board = await makeWeek(coach, { name: '' });
+    const filled = await coach.agent
+      .put(`/api/weeks/${board.week.id}/cells`)
+      .send({ version: board.week.version, cells: [{ clientId: client.id, date: '2026-01-06', slot: 'breakfast', assemblyId: plate.id, storage: 'frozen' }] })
+      .expect(200);
+    await coach.agent.post(`/api/weeks/${board.week.id}/publish`).send({ version: filled.body.week.version }).expect(200);
+    const dana = await member(app, coach, 'client', { clientId: client.id });
+    const mine = async () => (await dana.agent.get('/api/weeks/mine?today=2026-01-05').expect(200)).body;
+    expect((await mine()).name).toBe('Week of Mon, Jan 5');
+    expect(await pdfTextOf(dana.agent, '/api/weeks/mine/plan.pdf?today=2026-01-05')).toContain('Week of Monday, January 5, 2026');
+
+    await setOrder(coach, 'day-month').then((r) => expect(r.status).toBe(200));
+    expect((await mine()).name).toBe('Week of Mon 5 Jan');
+    const pdf = await pdfTextOf(dana.agent, '/api/weeks/mine/plan.pdf?today=2026-01-05');
+    expect(pdf).toContain('Week of Monday 5 January 2026');
+    expect(pdf).toContain('on the evening of Monday 5 January 2026');
+    const ics = await dana.agent.get('/api/weeks/mine/thaw-reminders.ics?today=2026-01-05').expect(200);
+    // Read with ical.js (an RFC 5545 parser), not by string matching.
+    const cal = new ICAL.Component(ICAL.parse(ics.text));
+    expect(cal.getFirstPropertyValue('x-wr-calname')).toBe('Thaw reminders, Week of Mon 5 Jan');
+    const [event] = cal.getAllSubcomponents('vevent').map((v) => new ICAL.Event(v));
+    expect(event.description).toMatch(/^For breakfast on Tuesday 6 January 2026\. .* Eat it by Wednesday 7 January 2026 at the latest\.$/);
   });
 
   it('keeps the net-carb rule when only the date order changes, and the other way round', async () => {

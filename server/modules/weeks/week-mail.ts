@@ -4,6 +4,7 @@ import { amountAndName, type MeasureSystem } from '@shared/domain/units.js';
 import { allergenLabel } from '@shared/domain/allergens.js';
 import { CAUTIONS, thawTasks } from '@shared/domain/eat-by.js';
 import { reheatGroups } from '@shared/domain/reheat.js';
+import { snapshotTitle } from '@shared/domain/week-board.js';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema.js';
 import type { PdfMacros, WeekPlanPdfData, WeekPlanPdfDay } from '@shared/schemas/pdf.schema.js';
 import { NotFound } from '../../http/errors.js';
@@ -108,7 +109,7 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
   const system = account ? (account.user.$.unitSystem === 'metric' ? 'metric' : 'us') : undefined;
   return {
     client,
-    weekName: pub.snapshot.name,
+    weekName: snapshotTitle(pub.snapshot, toDateOrder(ws.dateOrder)),
     startDate: pub.snapshot.startDate,
     data: {
       businessName: ws.name,
@@ -142,7 +143,8 @@ export async function renderThawReminders(em: EntityManager, p: WeekPlanPayload)
   const pub = await em.findOne(WeekPublication, { week: p.weekId, number: p.publicationVersion }, { populate: ['workspace'] });
   if (!pub) throw new NotFound('Published week');
   const days = pub.snapshot.clients[String(p.clientId)]?.days ?? [];
-  return thawRemindersFile({ weekId: p.weekId, name: pub.snapshot.name, startDate: pub.snapshot.startDate }, days, toDateOrder(pub.workspace.$.dateOrder));
+  const order = toDateOrder(pub.workspace.$.dateOrder);
+  return thawRemindersFile({ weekId: p.weekId, name: snapshotTitle(pub.snapshot, order), startDate: pub.snapshot.startDate }, days, order);
 }
 
 function payloadOf(raw: Record<string, unknown>): WeekPlanPayload {

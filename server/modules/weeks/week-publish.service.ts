@@ -2,13 +2,13 @@ import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { CAUTIONS } from '@shared/domain/eat-by.js';
 import { addDays, compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
-import { cellKey, computeBoard, type BoardResult } from '@shared/domain/week-board.js';
+import { cellKey, computeBoard, snapshotTitle, type BoardResult } from '@shared/domain/week-board.js';
 import { worded } from '@shared/domain/week-check.js';
 import { pickWeek, weekAfter } from '@shared/domain/week-days.js';
 import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
 import type { MyDayDto, MyPlateDto, MyWeekDto, WeekPublicationDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
 import type { BoardAnswer } from '@shared/schemas/board-answer.js';
-import type { Actor } from '../../http/authz.js';
+import { datesOf, type Actor } from '../../http/authz.js';
 import { Conflict, StaleEdit } from '../../http/errors.js';
 import { AssemblyItem } from '../assemblies/assembly.entity.js';
 import { Week, WeekPublication, WeekTray, type IWeek, type IWeekPublication } from './week.entity.js';
@@ -75,6 +75,7 @@ export function buildSnapshot(d: BoardData, board: BoardAnswer, result: BoardRes
   return {
     weekId: d.week.id,
     name: board.week.name,
+    ownName: d.week.name ?? '',
     startDate: board.week.startDate,
     endDate: board.week.endDate,
     prepDates: prepDatesOf(d.week),
@@ -155,7 +156,7 @@ export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = t
   const nextDays = nextPub?.snapshot.clients[String(actor.clientId)]?.days ?? [];
   return {
     weekId: current.id,
-    name: pub.snapshot.name,
+    name: snapshotTitle(pub.snapshot, datesOf(actor)),
     publishedVersion: pub.number,
     publishedAt: pub.publishedAt.toISOString(),
     startDate: pub.snapshot.startDate,
@@ -165,7 +166,7 @@ export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = t
       nextPub && nextDays.length
         ? {
             weekId: nextPub.snapshot.weekId,
-            name: nextPub.snapshot.name,
+            name: snapshotTitle(nextPub.snapshot, datesOf(actor)),
             publishedVersion: nextPub.number,
             startDate: nextPub.snapshot.startDate,
             endDate: nextPub.snapshot.endDate,
