@@ -57,3 +57,30 @@ describe('the week board and an archived plate', () => {
     expect([...(screen.getByLabelText('Plate') as HTMLSelectElement).options].map((o) => o.text)).toEqual(['Empty', 'Egg cup plate']);
   });
 });
+
+describe('one day of the board at a time', () => {
+  it('shows the whole week by default at a laptop, and a single day when chosen', () => {
+    render(<BoardGrid board={board} busy={false} onEdit={vi.fn()} />);
+    const grid = screen.getByRole('region', { name: /Week board/ });
+    expect(within(grid).getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['Client', 'Mon, Jan 5', 'Tue, Jan 6']);
+    fireEvent.change(screen.getByLabelText('Days shown'), { target: { value: '2026-01-06' } });
+    expect(within(grid).getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['Client', 'Tue, Jan 6']);
+    expect(within(grid).queryByRole('button', { name: /Mon.*Old frittata plate/ })).toBeNull();
+    expect(within(grid).getByRole('button', { name: /Tue.*: empty/ })).toBeTruthy();
+    fireEvent.change(screen.getByLabelText('Days shown'), { target: { value: '' } });
+    expect(within(grid).getAllByRole('columnheader')).toHaveLength(3);
+  });
+
+  it('starts on one day on a phone-sized screen (the first, when today is not on the board)', () => {
+    const matchMedia = vi.fn((q: string) => ({ matches: q === '(max-width: 639px)', media: q }) as unknown as MediaQueryList);
+    vi.stubGlobal('matchMedia', matchMedia);
+    try {
+      render(<BoardGrid board={board} busy={false} onEdit={vi.fn()} />);
+      const grid = screen.getByRole('region', { name: /Week board/ });
+      expect(within(grid).getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['Client', 'Mon, Jan 5']);
+      expect((screen.getByLabelText('Days shown') as HTMLSelectElement).value).toBe('2026-01-05');
+    } finally {
+      vi.unstubAllGlobals();
+    }
+  });
+});

@@ -18,7 +18,12 @@ import { cellEatBy } from '@shared/domain/week-board';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { counted, filterByText } from '@/lib/words';
-import { dayLabel } from '@/lib/dates';
+import { dayLabel, localToday } from '@/lib/dates';
+
+/** A phone-sized screen (Tailwind's sm breakpoint, 640 px): the board starts on one day there. */
+function narrowScreen(): boolean {
+  return typeof window !== 'undefined' && typeof window.matchMedia === 'function' && window.matchMedia('(max-width: 639px)').matches;
+}
 import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
 
 export const cellId = (clientId: number, date: string, slot: string) => `cell|${clientId}|${date}|${slot}`;
@@ -201,6 +206,9 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor));
   const [selected, setSelected] = useState<string | null>(null);
   const [findPlate, setFindPlate] = useState('');
+  // One day at a time or the whole week; a phone starts on one day (seven columns do not fit it), today's when on the board.
+  const [shownDay, setShownDay] = useState<string | null>(() => (narrowScreen() ? (board.days.includes(localToday()) ? localToday() : board.days[0]) : null));
+  const days = useMemo(() => (shownDay && board.days.includes(shownDay) ? [shownDay] : board.days), [shownDay, board.days]);
   // Archived plates stay on the cells that plan them but are not offered for new ones.
   const offered = useMemo(() => board.plates.filter((p) => !p.archived), [board.plates]);
   const palette = filterByText(offered, findPlate, (p) => [p.name, ...p.allergens.map(allergenLabel)]);
@@ -426,53 +434,71 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
             ))}
           </ul>
         </aside>
-        {/* The grid scrolls sideways inside its card; the client column stays put. Focusable so arrow keys scroll it. */}
-        <div
-          ref={gridBox}
-          role="region"
-          aria-label="Week board, scrolls sideways"
-          tabIndex={0}
-          className="min-w-0 flex-1 overflow-x-auto rounded-lg border border-line bg-paper-card pb-1"
-        >
-          <table className="w-full min-w-[60rem] border-separate border-spacing-1">
-            <caption className="caption-top px-1 pt-1 text-left text-xs text-ink-faint">
-              Targets under each name and each day's totals count the board's meals ({board.slots.join(', ')}): the client's share of the day for them.
-            </caption>
-            <thead>
-              <tr>
-                <th className="sticky left-0 z-20 bg-paper-card px-1 text-left text-sm">Client</th>
-                {board.days.map((d) => (
-                  <th key={d} className="text-left text-sm font-bold">
-                    {dayLabel(d)}
-                  </th>
+        <div className="flex min-w-0 flex-1 flex-col gap-2">
+          <SelectField
+            label="Days shown"
+            value={days.length === 1 ? days[0] : ''}
+            onChange={(e) => {
+              setShownDay(e.target.value || null);
+              setSelected(null);
+            }}
+            className="sm:max-w-xs"
+          >
+            <option value="">The whole week</option>
+            {board.days.map((d) => (
+              <option key={d} value={d}>
+                {dayLabel(d, true)} only
+              </option>
+            ))}
+          </SelectField>
+          {/* The grid scrolls sideways inside its card; the client column stays put. Focusable so arrow keys scroll it. */}
+          <div
+            ref={gridBox}
+            role="region"
+            aria-label="Week board, scrolls sideways"
+            tabIndex={0}
+            className="min-w-0 flex-1 overflow-x-auto rounded-lg border border-line bg-paper-card pb-1"
+          >
+            <table className={`w-full border-separate border-spacing-1 ${days.length > 1 ? 'min-w-[60rem]' : ''}`}>
+              <caption className="caption-top px-1 pt-1 text-left text-xs text-ink-faint">
+                Targets under each name and each day's totals count the board's meals ({board.slots.join(', ')}): the client's share of the day for them.
+              </caption>
+              <thead>
+                <tr>
+                  <th className="sticky left-0 z-20 bg-paper-card px-1 text-left text-sm">Client</th>
+                  {days.map((d) => (
+                    <th key={d} className="text-left text-sm font-bold">
+                      {dayLabel(d)}
+                    </th>
+                  ))}
+                </tr>
+              </thead>
+              <tbody>
+                {board.clients.map((client) => (
+                  <Fragment key={client.id}>
+                    <ClientRow
+                      client={client}
+                      days={days}
+                      slots={board.slots}
+                      plates={plates}
+                      cells={days.flatMap((date) => board.slots.map((slot) => cells.get(cellId(client.id, date, slot))))}
+                      checks={days.map((date) => checks.get(`${client.id}|${date}`))}
+                      selected={selected?.startsWith(`cell|${client.id}|`) ? selected : null}
+                      over={over?.startsWith(`cell|${client.id}|`) ? over : null}
+                      onSelect={onSelect}
+                    />
+                    {panel && selClient?.id === client.id && (
+                      <tr>
+                        <td colSpan={days.length + 1} className="p-0">
+                          {panel}
+                        </td>
+                      </tr>
+                    )}
+                  </Fragment>
                 ))}
-              </tr>
-            </thead>
-            <tbody>
-              {board.clients.map((client) => (
-                <Fragment key={client.id}>
-                  <ClientRow
-                    client={client}
-                    days={board.days}
-                    slots={board.slots}
-                    plates={plates}
-                    cells={board.days.flatMap((date) => board.slots.map((slot) => cells.get(cellId(client.id, date, slot))))}
-                    checks={board.days.map((date) => checks.get(`${client.id}|${date}`))}
-                    selected={selected?.startsWith(`cell|${client.id}|`) ? selected : null}
-                    over={over?.startsWith(`cell|${client.id}|`) ? over : null}
-                    onSelect={onSelect}
-                  />
-                  {panel && selClient?.id === client.id && (
-                    <tr>
-                      <td colSpan={board.days.length + 1} className="p-0">
-                        {panel}
-                      </td>
-                    </tr>
-                  )}
-                </Fragment>
-              ))}
-            </tbody>
-          </table>
+              </tbody>
+            </table>
+          </div>
         </div>
       </div>
 
