@@ -63,6 +63,7 @@ describe('one day of the board at a time', () => {
     render(<BoardGrid board={board} busy={false} onEdit={vi.fn()} />);
     const grid = screen.getByRole('region', { name: /Week board/ });
     expect(within(grid).getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['Client', 'Mon, Jan 5', 'Tue, Jan 6']);
+    expect(screen.getByRole('complementary', { name: 'Plates' }).querySelector('details')?.open).toBe(true);
     fireEvent.change(screen.getByLabelText('Days shown'), { target: { value: '2026-01-06' } });
     expect(within(grid).getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['Client', 'Tue, Jan 6']);
     expect(within(grid).queryByRole('button', { name: /Mon.*Old frittata plate/ })).toBeNull();
@@ -79,6 +80,8 @@ describe('one day of the board at a time', () => {
       const grid = screen.getByRole('region', { name: /Week board/ });
       expect(within(grid).getAllByRole('columnheader').map((h) => h.textContent)).toEqual(['Client', 'Mon, Jan 5']);
       expect((screen.getByLabelText('Days shown') as HTMLSelectElement).value).toBe('2026-01-05');
+      // The plates to drag are folded away (a cell is filled by tapping it there); at a laptop they are open.
+      expect(screen.getByRole('complementary', { name: 'Plates' }).querySelector('details')?.open).toBe(false);
     } finally {
       vi.unstubAllGlobals();
     }

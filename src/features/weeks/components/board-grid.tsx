@@ -207,7 +207,8 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const [selected, setSelected] = useState<string | null>(null);
   const [findPlate, setFindPlate] = useState('');
   // One day at a time or the whole week; a phone starts on one day (seven columns do not fit it), today's when on the board.
-  const [shownDay, setShownDay] = useState<string | null>(() => (narrowScreen() ? (board.days.includes(localToday()) ? localToday() : board.days[0]) : null));
+  const [startsNarrow] = useState(narrowScreen);
+  const [shownDay, setShownDay] = useState<string | null>(() => (startsNarrow ? (board.days.includes(localToday()) ? localToday() : board.days[0]) : null));
   const days = useMemo(() => (shownDay && board.days.includes(shownDay) ? [shownDay] : board.days), [shownDay, board.days]);
   // Archived plates stay on the cells that plan them but are not offered for new ones.
   const offered = useMemo(() => board.plates.filter((p) => !p.archived), [board.plates]);
@@ -423,16 +424,21 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
       </p>
       <div className="flex flex-col gap-4 2xl:flex-row">
         <aside className="2xl:w-56 2xl:shrink-0" aria-label="Plates">
-          <h2 className="mb-2 text-lg font-bold">Plates</h2>
-          <p className="mb-2 text-xs text-ink-faint">Drag onto a cell (or focus, press Space, move with the arrow keys, Space to drop).</p>
-          {offered.length >= FILTER_FROM && (
-            <ListFilter label="Find a plate" placeholder="name or allergen" value={findPlate} onChange={setFindPlate} shown={palette.length} total={offered.length} className="mb-2" />
-          )}
-          <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3 2xl:flex 2xl:flex-col">
-            {palette.map((p) => (
-              <PaletteItem key={p.id} id={p.id} name={p.name} detail={`${Math.round(p.macros.kcal)} kcal · ${p.macros.netCarbsG} g net · ${p.macros.proteinG} g P`} />
-            ))}
-          </ul>
+          {/* Folded on a phone, where a cell is filled by tapping it and picking a plate (the board stays in reach). */}
+          <details open={!startsNarrow}>
+            <summary className="mb-2 cursor-pointer">
+              <h2 className="inline text-lg font-bold">Plates</h2> <span className="text-sm text-ink-faint">({offered.length})</span>
+            </summary>
+            <p className="mb-2 text-xs text-ink-faint">Drag onto a cell (or focus, press Space, move with the arrow keys, Space to drop), or select a cell and pick one.</p>
+            {offered.length >= FILTER_FROM && (
+              <ListFilter label="Find a plate" placeholder="name or allergen" value={findPlate} onChange={setFindPlate} shown={palette.length} total={offered.length} className="mb-2" />
+            )}
+            <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3 2xl:flex 2xl:flex-col">
+              {palette.map((p) => (
+                <PaletteItem key={p.id} id={p.id} name={p.name} detail={`${Math.round(p.macros.kcal)} kcal · ${p.macros.netCarbsG} g net · ${p.macros.proteinG} g P`} />
+              ))}
+            </ul>
+          </details>
         </aside>
         <div className="flex min-w-0 flex-1 flex-col gap-2">
           <SelectField
