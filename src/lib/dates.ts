@@ -10,10 +10,6 @@ export function setDateOrder(next: DateOrder): void {
   order = next;
 }
 
-export function currentDateOrder(): DateOrder {
-  return order;
-}
-
 /** A day in words: "Mon, Dec 7" (long: "Monday, Dec 7"), or "Mon 7 Dec" ("Monday 7 Dec"), as the workspace writes dates. */
 export function dayLabel(iso: string, longWeekday = false): string {
   return longWeekday ? dayHeading(iso, order) : shortDate(iso, order);
