@@ -63,6 +63,8 @@ test('mid-morning the assistant plans the rest of the day again, keeping the tra
   await page.locator('summary', { hasText: 'An oven down or a cook missing?' }).click();
   const out = page.getByRole('group', { name: 'Trays already out of the oven' });
   // The trays out by now (and any still baking in an oven that works) are offered ticked; the rest from then.
+  // (count() does not wait: wait for the form's ticks first, or a slow render counts none.)
+  await expect(out.getByRole('checkbox', { checked: true }).first()).toBeVisible();
   const ticked = await out.getByRole('checkbox', { checked: true }).count();
   expect(ticked).toBeGreaterThanOrEqual(3);
   const from = await page.getByLabel('Plan the rest from').inputValue();
