@@ -1,3 +1,5 @@
+import { andList } from './words';
+
 /**
  * How a plate is reheated, in groups a person follows one at a time (the client's page and their plan PDF).
  *
@@ -36,10 +38,8 @@ export function reheatGroups(plate: ReheatSource): ReheatGroup[] {
   return groups;
 }
 
-const names = new Intl.ListFormat('en-US', { style: 'long', type: 'conjunction' });
-
 /** A group's heading when the plate has more than one ("Oven bacon", "Ham and Salami", "The whole plate"); else null. */
 export function reheatGroupTitle(group: ReheatGroup, groupCount: number): string | null {
   if (groupCount < 2) return null;
-  return group.trays.length ? names.format(group.trays) : 'The whole plate';
+  return group.trays.length ? andList(group.trays) : 'The whole plate';
 }

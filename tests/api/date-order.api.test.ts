@@ -101,6 +101,20 @@ describe('dates in words, as the workspace writes them', () => {
     expect(event.description).toMatch(/^For breakfast on Tuesday 6 January 2026\. .* Eat it by Wednesday 7 January 2026 at the latest\.$/);
   });
 
+  it("follows the workspace a person works in: switching workspaces switches the order", async () => {
+    const first = await coachWorkspace(app);
+    const second = await coachWorkspace(app);
+    await setOrder(second, 'day-month').then((r) => expect(r.status).toBe(200));
+    const helper = await member(app, first, 'assistant');
+    const inv = await second.agent.post('/api/invitations').send({ email: helper.email, role: 'assistant' }).expect(201);
+    const token = String(inv.body.link).split('/invite/')[1];
+    const joined = await helper.agent.post(`/api/invitations/${token}/accept`).send({ name: 'ignored', password: PASSWORD }).expect(200);
+    expect(joined.body).toMatchObject({ workspaceId: second.workspaceId, dateOrder: 'day-month' });
+    const back = await helper.agent.put('/api/auth/workspace').send({ workspaceId: first.workspaceId }).expect(200);
+    expect(back.body).toMatchObject({ workspaceId: first.workspaceId, dateOrder: 'month-day' });
+    expect((await helper.agent.get('/api/auth/me').expect(200)).body.dateOrder).toBe('month-day');
+  });
+
   it('keeps the net-carb rule when only the date order changes, and the other way round', async () => {
     const coach = await coachWorkspace(app);
     await setOrder(coach, 'day-month').then((r) => expect(r.status).toBe(200));

@@ -1,6 +1,6 @@
 import { toDateOrder } from '@shared/domain/iso-date.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import type { Actor } from '../../http/authz.js';
+import { datesOf, type Actor } from '../../http/authz.js';
 import { preparedRows } from '../../db/prepared.js';
 import { BadCredentials, Conflict, NotFound, ValidationError } from '../../http/errors.js';
 import type {
@@ -103,10 +103,10 @@ export async function actorIn(em: EntityManager, actor: Actor, workspaceId: numb
 
 /** The signed-in person and their workspace: one prepared statement (every page load of the app asks for it). */
 export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
-  const [row] = await preparedRows<{ id: number; email: string; name: string; unitSystem: string; tempUnit: string; workspaceName: string; workspaceIsDemo: boolean; dateOrder: string }>(
+  const [row] = await preparedRows<{ id: number; email: string; name: string; unitSystem: string; tempUnit: string; workspaceName: string; workspaceIsDemo: boolean }>(
     em,
     'trayline_me',
-    `select u.id, u.email, u.name, u.unit_system as "unitSystem", u.temp_unit as "tempUnit", w.name as "workspaceName", w.is_demo as "workspaceIsDemo", w.date_order as "dateOrder"
+    `select u.id, u.email, u.name, u.unit_system as "unitSystem", u.temp_unit as "tempUnit", w.name as "workspaceName", w.is_demo as "workspaceIsDemo"
        from app_user u, workspace w where u.id = $1 and w.id = $2`,
     [actor.userId, actor.workspaceId],
   );
@@ -122,7 +122,8 @@ export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
     clientId: actor.clientId,
     unitSystem: row.unitSystem as MeDto['unitSystem'],
     tempUnit: row.tempUnit as MeDto['tempUnit'],
-    dateOrder: toDateOrder(row.dateOrder),
+    // Read with the session (the actor statement), like the role.
+    dateOrder: datesOf(actor),
   };
 }
 

@@ -11,7 +11,7 @@ import { useUpdateWorkspaceSettings } from '@/features/ingredients/api/use-ingre
 /** A sample day for the choices (a Monday; any date shows the order). */
 const SAMPLE = '2026-12-07';
 
-export const DATE_ORDER_WORDS: Record<DateOrder, string> = {
+const DATE_ORDER_WORDS: Record<DateOrder, string> = {
   'month-day': `${shortDate(SAMPLE, 'month-day')} (month first)`,
   'day-month': `${shortDate(SAMPLE, 'day-month')} (day first)`,
 };

@@ -19,12 +19,18 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { counted, filterByText } from '@/lib/words';
 import { dayLabel, localToday } from '@/lib/dates';
+import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
 
 /** A phone-sized screen (Tailwind's sm breakpoint, 640 px): the board starts on one day there. */
 function narrowScreen(): boolean {
   return typeof window !== 'undefined' && typeof window.matchMedia === 'function' && window.matchMedia('(max-width: 639px)').matches;
 }
-import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
+
+/** The day a phone starts on: today when the board has it, else the board's first. */
+function startDay(days: readonly string[]): string {
+  const today = localToday();
+  return days.includes(today) ? today : days[0];
+}
 
 export const cellId = (clientId: number, date: string, slot: string) => `cell|${clientId}|${date}|${slot}`;
 
@@ -208,7 +214,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const [findPlate, setFindPlate] = useState('');
   // One day at a time or the whole week; a phone starts on one day (seven columns do not fit it), today's when on the board.
   const [startsNarrow] = useState(narrowScreen);
-  const [shownDay, setShownDay] = useState<string | null>(() => (startsNarrow ? (board.days.includes(localToday()) ? localToday() : board.days[0]) : null));
+  const [shownDay, setShownDay] = useState<string | null>(() => (startsNarrow ? startDay(board.days) : null));
   const days = useMemo(() => (shownDay && board.days.includes(shownDay) ? [shownDay] : board.days), [shownDay, board.days]);
   // Archived plates stay on the cells that plan them but are not offered for new ones.
   const offered = useMemo(() => board.plates.filter((p) => !p.archived), [board.plates]);

@@ -5,8 +5,7 @@ import { DayOptions, SelectField } from '@/components/ui/field';
 import { Card } from '@/components/ui/states';
 import { dayLabel } from '@/lib/dates';
 import { agrees, counted } from '@/lib/words';
-
-const names = new Intl.ListFormat('en-US', { style: 'long', type: 'conjunction' });
+import { andList } from '@shared/domain/words';
 
 /**
  * What copying one day onto another did, read from the board the copy answered with (the day copied from is as it
@@ -21,7 +20,7 @@ export function copyDaySummary(board: Pick<BoardDto, 'cells' | 'plates'>, from: 
     copied > 0 ? `Copied ${dayLabel(from)} to ${dayLabel(to)}: ${counted(copied, 'meal')}.` : `Copied ${dayLabel(from)} to ${dayLabel(to)}: ${dayLabel(to)} has no meals now.`;
   if (behind.length === 0) return said;
   const plates = [...new Set(behind.map((c) => `"${archived.get(c.assemblyId)}"`))];
-  return `${said} ${counted(behind.length, 'meal')} stayed behind: ${names.format(plates)} ${agrees(plates.length, 'is', 'are')} archived.`;
+  return `${said} ${counted(behind.length, 'meal')} stayed behind: ${andList(plates)} ${agrees(plates.length, 'is', 'are')} archived.`;
 }
 
 /** "Copy a day": every client's plates of one day onto another, replacing it; says what it copied. */
