@@ -8,8 +8,8 @@ import { Assembly, AssemblyItem } from '../modules/assemblies/assembly.entity.js
 import { Week, WeekCell, WeekPublication, WeekTray } from '../modules/weeks/week.entity.js';
 import { PantryItem } from '../modules/shopping/pantry.entity.js';
 import { ShoppingCheck, ShoppingPurchase } from '../modules/shopping/shopping.entity.js';
-import { BakeRule, BakeRunSetting, Oven } from '../modules/bake-runs/bake-run.entity.js';
+import { BakeRule, BakeRunSetting, CoolingRecord, Oven } from '../modules/bake-runs/bake-run.entity.js';
 import { Outbox } from '../modules/mail/outbox.entity.js';
 import { CaughtMail, CaughtMailAttachment } from '../modules/mail/caught-mail.entity.js';
 
-export const entities = [Workspace, User, Membership, Invitation, PasswordReset, Ingredient, Tray, TrayLine, TrayPhoto, Client, Assembly, AssemblyItem, Week, WeekTray, WeekCell, WeekPublication, PantryItem, ShoppingCheck, ShoppingPurchase, BakeRule, Oven, BakeRunSetting, Outbox, CaughtMail, CaughtMailAttachment];
+export const entities = [Workspace, User, Membership, Invitation, PasswordReset, Ingredient, Tray, TrayLine, TrayPhoto, Client, Assembly, AssemblyItem, Week, WeekTray, WeekCell, WeekPublication, PantryItem, ShoppingCheck, ShoppingPurchase, BakeRule, Oven, BakeRunSetting, CoolingRecord, Outbox, CaughtMail, CaughtMailAttachment];

@@ -36,16 +36,9 @@ import type { SearchOutcome } from './bake-run-search';
 import { tracePlan } from './bake-run-simulate';
 import type { BakePlan, PlanTrace } from './bake-run-simulate';
 import { formatLocalMinutes, parseLocalMinutes } from './bake-run-time';
+import { FOOD_CODE_COOLING } from './cooling';
 
-/** FDA Food Code §3-501.14 (cooling): 135 °F → 70 °F within 2 h, and → 41 °F within 6 h in total. */
-export const FOOD_CODE_COOLING = Object.freeze({
-  source: 'FDA Food Code §3-501.14 (cooling)',
-  startF: 135,
-  firstStageF: 70,
-  firstStageMinutes: 120,
-  finalF: 41,
-  totalMinutes: 360,
-});
+export { FOOD_CODE_COOLING } from './cooling';
 
 export const BAKE_RUN_CAUTIONS: readonly string[] = Object.freeze([
   'Cooling deadlines follow FDA Food Code §3-501.14 (135 °F to 70 °F within 2 hours, to 41 °F within 6 hours in ' +

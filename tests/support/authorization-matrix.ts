@@ -386,6 +386,20 @@ export const MATRIX: Record<string, MatrixRow> = {
     body: () => ({ cooks: 1, ovenIds: [1], version: 999 }),
     crossWorkspace: true,
   }),
+  'GET /api/weeks/:weekId/bake-run/cooling': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run/cooling`,
+    crossWorkspace: true,
+  }),
+  // A version no record has: allowed roles get a 409 and nothing is written.
+  'PUT /api/weeks/:weekId/bake-run/cooling/:runTrayId': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run/cooling/1-1`,
+    body: () => ({ outAt: '2026-01-04T10:00', version: 999 }),
+    crossWorkspace: true,
+  }),
+  'DELETE /api/weeks/:weekId/bake-run/cooling/:runTrayId': R(['coach', 'assistant'], {
+    path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run/cooling/1-1?version=999`,
+    crossWorkspace: true,
+  }),
   'GET /api/weeks/:weekId/bake-run.pdf': R(['coach', 'assistant'], {
     path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run.pdf`,
     crossWorkspace: true,

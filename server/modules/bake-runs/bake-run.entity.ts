@@ -88,3 +88,33 @@ export const BakeRunSetting = defineEntity({
   },
 });
 export type IBakeRunSetting = InferEntity<typeof BakeRunSetting>;
+
+/**
+ * The cooling record of one tray of a prep day's run (shared/domain/cooling.ts): when it came out, the food
+ * temperatures taken while it cooled (°F), a restart after a reheat, thrown away or not, and who wrote it down.
+ * Kept by the tray's id in the run ("12-1") with its name then: a record outlives a later change of the run.
+ */
+export const CoolingRecord = defineEntity({
+  name: 'CoolingRecord',
+  tableName: 'cooling_record',
+  uniques: [{ properties: ['week', 'prepDate', 'runTrayId'] }],
+  properties: {
+    id: p.integer().primary().autoincrement(),
+    workspace: () => p.manyToOne(Workspace).ref(),
+    week: () => p.manyToOne(Week).ref().deleteRule('cascade'),
+    prepDate: p.string().length(10),
+    runTrayId: p.string().length(16),
+    trayName: p.string().length(200),
+    /** Local "YYYY-MM-DDTHH:mm". */
+    outAt: p.string().length(16),
+    restartedAt: p.string().length(16).nullable(),
+    readings: p.json<{ at: string; tempF: number }[]>().default('[]'),
+    discarded: p.boolean().default(false),
+    note: p.text().default(''),
+    recordedBy: p.string().length(200),
+    version: p.integer().version(),
+    createdAt: p.datetime().onCreate(() => new Date()),
+    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+  },
+});
+export type ICoolingRecord = InferEntity<typeof CoolingRecord>;

@@ -20,6 +20,8 @@ import * as setup from './bake-setup.service.js';
 import * as runs from './bake-run.service.js';
 import { bakeRunIcs } from './bake-run-ics.js';
 import { bakeRunPdf, plannedBakeRun } from './bake-run-files.js';
+import { coolingDeleteQuery, coolingParams, coolingRecordSchema } from '@shared/schemas/cooling.schema.js';
+import * as cooling from './cooling.service.js';
 
 /** Bake rules and ovens (coach writes, assistant reads), the stateless calculator and a prep week's bake run. */
 export function bakeRunRoutes() {
@@ -114,6 +116,29 @@ export function bakeRunRoutes() {
     validated({ params: weekIdParam, body: bakeRunKitchenSchema }, ({ params, body }, req) =>
       runs.setWeekBakeRunKitchen(emOf(req), actorOf(req), params.weekId, body),
     ),
+  );
+
+  // The cooling record of the prep day's trays (coach or assistant: whoever runs the bake writes it down).
+  r.get(
+    '/weeks/:weekId/bake-run/cooling',
+    allow('coach', 'assistant'),
+    validated({ params: weekIdParam, query: prepDateQuery }, ({ params, query }, req) =>
+      cooling.listCooling(emOf(req), actorOf(req), params.weekId, query.prepDate),
+    ),
+  );
+  r.put(
+    '/weeks/:weekId/bake-run/cooling/:runTrayId',
+    allow('coach', 'assistant'),
+    validated({ params: coolingParams, body: coolingRecordSchema }, ({ params, body }, req) =>
+      cooling.putCooling(emOf(req), actorOf(req), params.weekId, params.runTrayId, body),
+    ),
+  );
+  r.delete(
+    '/weeks/:weekId/bake-run/cooling/:runTrayId',
+    allow('coach', 'assistant'),
+    validated({ params: coolingParams, query: coolingDeleteQuery }, async ({ params, query }, req) => {
+      await cooling.deleteCooling(emOf(req), actorOf(req), params.weekId, params.runTrayId, query);
+    }),
   );
 
   r.get(

@@ -5,6 +5,7 @@ import { cautionsBlock, createDoc, finishDoc, heading, paragraph, table } from '
 import { clock } from './pdf-format.js';
 import { DEFAULT_DATE_ORDER, longDate, type DateOrder } from '@shared/domain/iso-date.js';
 import { replannedSummary } from '@shared/domain/bake-run-words.js';
+import { checkCooling, clockFrom, FOOD_CODE_COOLING, type CoolingState, type RecordedCooling } from '@shared/domain/cooling.js';
 
 export interface BakeRunPdfMeta {
   businessName: string;
@@ -15,7 +16,27 @@ export interface BakeRunPdfMeta {
   dateOrder?: DateOrder;
   /** Planned again part-way through the day: when the rest starts and how many trays were already out. */
   replanned?: { from: string; kept: number } | null;
+  /** What the cooling record says so far (a sheet printed before the bake has none: its lines are written by hand). */
+  cooling?: readonly (RecordedCooling & { recordedBy?: string })[];
 }
+
+/** A record's result as the paper says it; a stage still running is left to write. */
+const RESULT: Record<CoolingState, string> = {
+  'to-70': '',
+  'to-41': '',
+  cooled: 'Cooled in time',
+  'missed-70': 'Missed 70 °F: reheat or throw away',
+  'missed-41': 'Missed 41 °F: throw away',
+  discarded: 'Thrown away',
+};
+
+/** Initials of the person who wrote a record down ("Kit Moreno" → "KM"). */
+const initials = (name: string | undefined) =>
+  (name ?? '')
+    .split(/\s+/)
+    .filter(Boolean)
+    .map((w) => w[0]!.toUpperCase())
+    .join('');
 
 const deg = (f: number | null | undefined) => (f == null ? '' : `${f} °F (${toCelsiusRounded(f)} °C)`);
 
@@ -107,6 +128,43 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
       { header: 'Minutes', width: 0.1, align: 'right' },
     ],
     run.trays.map((t) => [t.name, t.oven, `${t.rack} / ${t.position}`, deg(t.tempF), clock(t.inAt), clock(t.outAt), String(t.bakeMinutes)]),
+  );
+
+  heading(doc, 'Cooling record', 14);
+  paragraph(
+    doc,
+    `Write the time each tray comes out, then the food temperature in the thickest part as it cools. ${FOOD_CODE_COOLING.source}: ` +
+      `to ${deg(70)} within 2 hours and to ${deg(41)} or below within 6 hours in total; the clock here starts when the tray comes out. ` +
+      'Your local food code and inspector decide what to keep and for how long.',
+    { size: 9 },
+  );
+  const records = new Map((meta.cooling ?? []).map((r) => [r.runTrayId, r]));
+  table(
+    doc,
+    [
+      { header: 'Tray', width: 0.22 },
+      { header: 'Out', width: 0.07, align: 'right' },
+      { header: '70 °F by', width: 0.1, align: 'right' },
+      { header: '41 °F by', width: 0.1, align: 'right' },
+      { header: 'Readings (time, °F)', width: 0.27 },
+      { header: 'Result', width: 0.16 },
+      { header: 'Initials', width: 0.08, align: 'center' },
+    ],
+    [...run.trays]
+      .sort((a, b) => a.outMinute - b.outMinute)
+      .map((t) => {
+        const r = records.get(t.id);
+        // Blank lines to write on, the planned time out as a reminder.
+        if (!r) return [`${t.name}\n(planned out ${clock(t.outAt)})`, '', '', '', '\n\n', '', ''];
+        // Judged on what was written down only (the paper does not know the time it is read).
+        const c = checkCooling(r, r.outAt);
+        const readings = [...r.readings]
+          .sort((a, b) => (a.at < b.at ? -1 : 1))
+          .map((x) => `${clockFrom(x.at, r.outAt)} ${x.tempF} °F`)
+          .join(', ');
+        const restart = r.restartedAt ? `Reheated, cooling again from ${clockFrom(r.restartedAt, r.outAt)}. ` : '';
+        return [t.name, clock(r.outAt), clockFrom(c.by70, r.outAt), clockFrom(c.by41, r.outAt), `${restart}${readings}`, RESULT[c.state], initials(r.recordedBy)];
+      }),
   );
 
   const cooling = CAUTIONS.filter((c) => c.topic === 'food-safety').map((c) => ({ text: c.text, source: c.source }));

@@ -159,4 +159,39 @@ describe('bake-run sheet PDF', () => {
     expect(flat).toContain('425 °F (218 °C)');
     expect(flat).toContain('FDA Food Code §3-501.14');
   });
+
+  it('carries the cooling record: what was written down, judged on its readings, and lines to write on for the rest', async () => {
+    const run = planBakeRun({
+      start: '2026-12-06T08:00',
+      cooks: 1,
+      ambientF: 70,
+      ovens: [{ name: 'Left oven', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 10, maxF: 500 }],
+      trays: [
+        { id: 'a', name: 'Egg slab', tempF: 350, minMinutes: 25, maxMinutes: 30, handsOnMinutes: 0 },
+        { id: 'b', name: 'Radish tray', tempF: 350, minMinutes: 25, maxMinutes: 30, handsOnMinutes: 0 },
+        { id: 'c', name: 'Almond slab', tempF: 350, minMinutes: 25, maxMinutes: 30, handsOnMinutes: 0 },
+      ],
+    });
+    const record = (runTrayId: string, outAt: string, readings: { at: string; tempF: number }[]) => ({
+      runTrayId,
+      outAt: `2026-12-06T${outAt}`,
+      restartedAt: null,
+      readings: readings.map((r) => ({ ...r, at: `2026-12-06T${r.at}` })),
+      discarded: false,
+      recordedBy: 'Kit Moreno',
+    });
+    const cooling = [
+      // Made-up readings. FDA Food Code §3-501.14: 70 °F within 2 h of 08:40 (10:40), 41 °F within 6 h (14:40).
+      record('a', '08:40', [{ at: '10:20', tempF: 68 }, { at: '13:50', tempF: 40 }]),
+      // 74 °F at 10:50, past 10:45: the first stage is missed.
+      record('b', '08:45', [{ at: '10:50', tempF: 74 }]),
+    ];
+    const { buffer } = await renderBakeRunPdf(run, { businessName: 'Oat & Ember Prep', title: 'Bake run, Sun 6 Dec', cooling });
+    const flat = (await textOf(buffer)).text.replace(/\s+/g, ' ');
+    expect(flat).toContain('Cooling record');
+    expect(flat).toMatch(/Egg slab 08:40 10:40 14:40 10:20 68 °F, 13:50 40 °F Cooled in time KM/);
+    expect(flat).toMatch(/Radish tray 08:45 10:45 14:45 10:50 74 °F Missed 70 °F: reheat or throw away KM/);
+    // Not written down yet: its planned time out, and room to write.
+    expect(flat).toMatch(/Almond slab \(planned out \d\d:\d\d\)/);
+  });
 });

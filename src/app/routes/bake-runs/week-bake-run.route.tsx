@@ -5,6 +5,8 @@ import { bakeRunFiles, ovensQuery, weekBakeRunQuery } from '@/features/bake-runs
 import { useMoveBakeRunStart, useSaveBakeRunSettings, useSetBakeRunKitchen } from '@/features/bake-runs/api/use-bake-run-mutations';
 import { BakeRunSettingsForm } from '@/features/bake-runs/components/bake-run-settings-form';
 import { BakeRunView, UnitToggle } from '@/features/bake-runs/components/bake-run-view';
+import { CoolingRecord } from '@/features/bake-runs/components/cooling-record';
+import { coolingQuery } from '@/features/bake-runs/api/cooling';
 import type { TempUnit } from '@/features/bake-runs/components/temperature';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { Button } from '@/components/ui/button';
@@ -28,6 +30,8 @@ export function Component() {
   const prepDate = params.get('prepDate') ?? undefined;
   const [unit, setUnit] = useState<TempUnit>(me.tempUnit);
   const q = useQuery(weekBakeRunQuery(weekId, prepDate));
+  // The cooling record of the day shown (the section below reads the same query): the timers follow it.
+  const cooling = useQuery({ ...coolingQuery(weekId, q.data?.prepDate ?? ''), enabled: Boolean(q.data?.run) });
   const ovens = useQuery(ovensQuery());
   const save = useSaveBakeRunSettings(weekId);
   const moveStart = useMoveBakeRunStart(weekId);
@@ -141,6 +145,8 @@ export function Component() {
         <BakeRunView
           run={dto.run}
           unit={unit}
+          cooling={cooling.data?.records}
+          coolingRecord={<CoolingRecord weekId={weekId} run={dto.run} unit={unit} />}
           move={{
             saving: moveStart.isPending,
             error: moveStart.error,

@@ -1,5 +1,7 @@
 import { useEffect, useRef, useState } from 'react';
 import type { BakeEventKind, BakeRunResult } from '@shared/domain/bake-run-types';
+import { addLocalMinutes } from '@shared/domain/bake-run-time';
+import { eventsWithCooling, type RecordedCooling } from '@shared/domain/cooling';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
@@ -374,32 +376,36 @@ export function BakeRunTimers({
   nowMinute,
   move,
   kitchen,
+  cooling,
 }: {
   run: BakeRunResult;
   unit: TempUnit;
   nowMinute: number;
   move?: MoveStart;
   kitchen?: KitchenChange;
+  /** The cooling record: a tray written down as out has no check or time out to come, its deadlines count from it. */
+  cooling?: readonly RecordedCooling[];
 }) {
   const [sound, setSound] = useState(false);
+  const events = cooling?.length ? eventsWithCooling(run, cooling, addLocalMinutes(run.start, nowMinute)) : run.events;
   const rung = useRef(new Set<string>());
   const names = new Map(run.trays.map((t) => [t.id, t.name]));
   const trayName = (id: string | null) => (id ? names.get(id) ?? id : '');
   // A tray taken out at its check time is one step: "Check …" (the run sheet leaves such an "out" line out too).
-  const checks = new Set(run.events.filter((e) => e.kind === 'first-check').map((e) => `${e.trayId}@${e.minute}`));
-  const upcoming = run.events
+  const checks = new Set(events.filter((e) => e.kind === 'first-check').map((e) => `${e.trayId}@${e.minute}`));
+  const upcoming = events
     .filter((e) => TIMED.has(e.kind) && e.minute >= nowMinute - 2 && !(e.kind === 'tray-out' && checks.has(`${e.trayId}@${e.minute}`)))
     .slice(0, 4);
   useEffect(() => {
     if (!sound) return;
-    for (const e of run.events) {
+    for (const e of events) {
       const key = `${e.kind}-${e.trayId}-${e.minute}`;
       if (RUNG.has(e.kind) && e.minute === nowMinute && !rung.current.has(key)) {
         rung.current.add(key);
         beep();
       }
     }
-  }, [sound, nowMinute, run.events]);
+  }, [sound, nowMinute, events]);
   return (
     <section aria-label="Timers" className="no-print flex flex-col gap-2 rounded-tray border-2 border-oven-4 bg-paper-card p-4" aria-live="polite">
       <div className="flex flex-wrap items-center justify-between gap-2">

@@ -1,4 +1,6 @@
+import type { ReactNode } from 'react';
 import type { BakeRunResult } from '@shared/domain/bake-run-types';
+import type { RecordedCooling } from '@shared/domain/cooling';
 import { Notice } from '@/components/ui/states';
 import { BakeRunSheet } from './bake-run-sheet';
 import { BakeRunTimeline } from './bake-run-timeline';
@@ -43,8 +45,27 @@ function Legend({ unit }: { unit: TempUnit }) {
   );
 }
 
-/** A planned bake run: summary, timers on prep day, the timeline, the trays and the run sheet, the cautions. */
-export function BakeRunView({ run, unit, move, kitchen }: { run: BakeRunResult; unit: TempUnit; move?: MoveStart; kitchen?: KitchenChange }) {
+/**
+ * A planned bake run: summary, timers on prep day, the cooling record (a saved run), the timeline, the trays and the
+ * run sheet, the cautions.
+ */
+export function BakeRunView({
+  run,
+  unit,
+  move,
+  kitchen,
+  cooling,
+  coolingRecord,
+}: {
+  run: BakeRunResult;
+  unit: TempUnit;
+  move?: MoveStart;
+  kitchen?: KitchenChange;
+  /** What the cooling record says so far (the timers follow it). */
+  cooling?: readonly RecordedCooling[];
+  /** The cooling record's section, shown below the timers. */
+  coolingRecord?: ReactNode;
+}) {
   const nowMinute = useRunMinute(run);
   return (
     <div className="flex flex-col gap-5">
@@ -61,7 +82,8 @@ export function BakeRunView({ run, unit, move, kitchen }: { run: BakeRunResult; 
           </div>
         ))}
       </dl>
-      {nowMinute !== null && <BakeRunTimers run={run} unit={unit} nowMinute={nowMinute} move={move} kitchen={kitchen} />}
+      {nowMinute !== null && <BakeRunTimers run={run} unit={unit} nowMinute={nowMinute} move={move} kitchen={kitchen} cooling={cooling} />}
+      {coolingRecord}
       <section className="flex flex-col gap-2">
         <div className="flex flex-wrap items-center justify-between gap-2">
           <h2 className="text-xl">Timeline</h2>

@@ -1,0 +1,89 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { prepDatesOf } from '@shared/domain/week-board.js';
+import { longDate } from '@shared/domain/iso-date.js';
+import type { CoolingListDto, CoolingRecordDto, CoolingRecordValues } from '@shared/schemas/cooling.schema.js';
+import { datesOf, type Actor } from '../../http/authz.js';
+import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
+import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
+import { Tray } from '../trays/tray.entity.js';
+import { CoolingRecord, type ICoolingRecord } from './bake-run.entity.js';
+
+function present(r: ICoolingRecord): CoolingRecordDto {
+  return {
+    runTrayId: r.runTrayId,
+    trayName: r.trayName,
+    outAt: r.outAt,
+    restartedAt: r.restartedAt ?? null,
+    readings: r.readings.map((x) => ({ at: x.at, tempF: x.tempF })),
+    discarded: r.discarded,
+    note: r.note,
+    recordedBy: r.recordedBy,
+    updatedAt: r.updatedAt.toISOString(),
+    version: r.version,
+  };
+}
+
+/** The week (of the actor's workspace: another's is a 404) and the prep date asked for (one of the week's). */
+async function weekAndDate(em: EntityManager, actor: Actor, weekId: number, wanted: string | undefined): Promise<{ week: IWeek; prepDate: string }> {
+  const week = await em.findOne(Week, { id: weekId, workspace: actor.workspaceId });
+  if (!week) throw new NotFound('Week');
+  const dates = prepDatesOf(week);
+  if (wanted !== undefined && !dates.includes(wanted)) throw ValidationError.field('prepDate', `This week's prep dates are ${dates.join(' and ')}.`);
+  return { week, prepDate: wanted ?? week.prepDate };
+}
+
+/** GET /api/weeks/:weekId/bake-run/cooling: the prep day's cooling records (coach or assistant), by time out. */
+export async function listCooling(em: EntityManager, actor: Actor, weekId: number, wanted?: string): Promise<CoolingListDto> {
+  const { week, prepDate } = await weekAndDate(em, actor, weekId, wanted);
+  const rows = await em.find(CoolingRecord, { week: week.id, prepDate }, { orderBy: { outAt: 'asc', runTrayId: 'asc' } });
+  return { weekId: week.id, prepDate, records: rows.map(present) };
+}
+
+/** The name the run gives tray `runTrayId` ("12-2" → "Chive egg slab (2/3)"), or a 404 when the run has no such tray. */
+async function runTrayName(em: EntityManager, week: IWeek, prepDate: string, runTrayId: string): Promise<string> {
+  const [trayId, k] = runTrayId.split('-').map(Number);
+  const row = await em.findOne(WeekTray, { week: week.id, prepDate, tray: trayId });
+  const tray = row && row.trayCount >= k ? await em.findOne(Tray, { id: trayId }) : null;
+  if (!row || !tray) throw new NotFound('Tray of this run');
+  return row.trayCount > 1 ? `${tray.name} (${k}/${row.trayCount})` : tray.name;
+}
+
+/**
+ * PUT /api/weeks/:weekId/bake-run/cooling/:runTrayId: writes down one tray's cooling (coach or assistant). The first
+ * write creates the record (no `version`); later ones replace it whole and need the version read (409 when stale).
+ */
+export async function putCooling(em: EntityManager, actor: Actor, weekId: number, runTrayId: string, v: CoolingRecordValues): Promise<CoolingRecordDto> {
+  const { week, prepDate } = await weekAndDate(em, actor, weekId, v.prepDate);
+  if (v.outAt.slice(0, 10) !== prepDate)
+    throw ValidationError.field('outAt', `It came out on the prep day, ${longDate(prepDate, datesOf(actor))}: keep that date and change the time.`);
+  const row = await em.findOne(CoolingRecord, { week: week.id, prepDate, runTrayId });
+  const fields = {
+    outAt: v.outAt,
+    restartedAt: v.restartedAt,
+    readings: v.readings,
+    discarded: v.discarded,
+    note: v.note,
+    recordedBy: actor.name,
+  };
+  if (row) {
+    if (v.version !== row.version) throw new StaleEdit(row.version, present(row));
+    em.assign(row, fields);
+    await em.flush();
+    return present(row);
+  }
+  if (v.version !== undefined) throw new StaleEdit(null);
+  const trayName = await runTrayName(em, week, prepDate, runTrayId);
+  const created = em.create(CoolingRecord, { workspace: actor.workspaceId, week: week.id, prepDate, runTrayId, trayName, ...fields });
+  await em.flush();
+  return present(created);
+}
+
+/** DELETE /api/weeks/:weekId/bake-run/cooling/:runTrayId: a record written by mistake (coach or assistant). */
+export async function deleteCooling(em: EntityManager, actor: Actor, weekId: number, runTrayId: string, q: { prepDate?: string; version: number }): Promise<void> {
+  const { week, prepDate } = await weekAndDate(em, actor, weekId, q.prepDate);
+  const row = await em.findOne(CoolingRecord, { week: week.id, prepDate, runTrayId });
+  if (!row) throw new NotFound('Cooling record');
+  if (q.version !== row.version) throw new StaleEdit(row.version, present(row));
+  em.remove(row);
+  await em.flush();
+}

@@ -1,0 +1,180 @@
+/**
+ * The cooling record of a baked tray: when it really came out of the oven, the food temperatures taken while it
+ * cooled, and whether it met the Food Code's two cooling stages in time (FDA Food Code §3-501.14: from 135 °F to
+ * 70 °F within 2 hours, and to 41 °F or below within 6 hours in total).
+ *
+ * The clock starts when the tray comes out (earlier than the Food Code's start at 135 °F: the safe side), or when
+ * cooling was started again after a reheat. A stage counts as met by the first reading at or below its limit taken
+ * by its deadline; a later reading does not mend a missed stage.
+ *
+ * What to do when a stage is missed is common practice in kitchens' cooling logs (from memory, no single source):
+ * food not at 70 °F within 2 hours is reheated to 165 °F and cooled again from the start, or thrown away; food not at
+ * 41 °F within 6 hours is thrown away. The local food code decides; the words say so.
+ */
+import type { BakeEvent, BakeRunResult } from './bake-run-types';
+import { addLocalMinutes, parseLocalMinutes } from './bake-run-time';
+import { toCelsiusRounded } from './temperature';
+
+/** FDA Food Code §3-501.14 (cooling): 135 °F → 70 °F within 2 h, and → 41 °F within 6 h in total. */
+export const FOOD_CODE_COOLING = Object.freeze({
+  source: 'FDA Food Code §3-501.14 (cooling)',
+  startF: 135,
+  firstStageF: 70,
+  firstStageMinutes: 120,
+  finalF: 41,
+  totalMinutes: 360,
+});
+
+/** A food temperature taken while the tray cooled (probe in the thickest part). */
+export interface CoolingReading {
+  /** Local "YYYY-MM-DDTHH:mm". */
+  at: string;
+  /** °F (stored in °F; a reading given in °C is converted). */
+  tempF: number;
+}
+
+/** What was written down for one tray. */
+export interface CoolingEntry {
+  /** When it came out of the oven, local "YYYY-MM-DDTHH:mm". */
+  outAt: string;
+  /** Reheated to 165 °F and cooled again from this time (local), or null. */
+  restartedAt: string | null;
+  readings: readonly CoolingReading[];
+  /** Thrown away. */
+  discarded: boolean;
+}
+
+export type CoolingState = 'to-70' | 'to-41' | 'cooled' | 'missed-70' | 'missed-41' | 'discarded';
+
+export interface CoolingCheck {
+  state: CoolingState;
+  /** When the cooling clock started: the time out, or the restart after a reheat. */
+  from: string;
+  /** 70 °F or below by (local). */
+  by70: string;
+  /** 41 °F or below by (local). */
+  by41: string;
+  /** The reading that met each stage in time (local), or null. */
+  reached70At: string | null;
+  reached41At: string | null;
+  /** The latest reading counted (at or after `from`), or null. */
+  last: CoolingReading | null;
+  /** 'ok' while on time or done, 'block' when a stage is missed, 'info' once thrown away. */
+  tone: 'ok' | 'block' | 'info';
+  /** What to do now, in words (both temperature scales). */
+  said: string;
+}
+
+const F70 = FOOD_CODE_COOLING.firstStageF;
+const F41 = FOOD_CODE_COOLING.finalF;
+const both = (f: number) => `${f} °F (${toCelsiusRounded(f)} °C)`;
+
+/** "HH:mm", with "the next day" when `at` falls on a later date than `day`. */
+export function clockFrom(at: string, day: string): string {
+  return at.slice(0, 10) > day.slice(0, 10) ? `${at.slice(11)} the next day` : at.slice(11);
+}
+
+function minutesOf(at: string): number {
+  const m = parseLocalMinutes(at);
+  if (m === null) throw new RangeError(`Not a local date-time "YYYY-MM-DDTHH:mm": ${at}`);
+  return m;
+}
+
+/**
+ * Where one tray's cooling stands at local time `now`: the stage it is in, its deadlines, and what to do. Readings
+ * before `from` (before a restart) are kept in the record but not counted.
+ */
+export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
+  const from = entry.restartedAt ?? entry.outAt;
+  const by70 = addLocalMinutes(from, FOOD_CODE_COOLING.firstStageMinutes);
+  const by41 = addLocalMinutes(from, FOOD_CODE_COOLING.totalMinutes);
+  const start = minutesOf(from);
+  const counted = entry.readings
+    .filter((r) => minutesOf(r.at) >= start)
+    .slice()
+    .sort((a, b) => minutesOf(a.at) - minutesOf(b.at));
+  const last = counted.at(-1) ?? null;
+  // "Now" is at least the latest reading (a device clock behind the thermometer's note does not undo it).
+  const nowM = Math.max(minutesOf(now), last ? minutesOf(last.at) : -Infinity);
+  const m70 = minutesOf(by70);
+  const m41 = minutesOf(by41);
+  const hit70 = counted.find((r) => r.tempF <= F70);
+  const reached70At = hit70 && minutesOf(hit70.at) <= m70 ? hit70.at : null;
+  const hit41 = reached70At ? counted.find((r) => r.tempF <= F41) : undefined;
+  const reached41At = hit41 && minutesOf(hit41.at) <= m41 ? hit41.at : null;
+  const day = from;
+  const base = { from, by70, by41, reached70At, reached41At, last };
+  if (entry.discarded) return { ...base, state: 'discarded', tone: 'info', said: 'Thrown away.' };
+  if (!reached70At && (nowM > m70 || hit70)) {
+    return {
+      ...base,
+      state: 'missed-70',
+      tone: 'block',
+      said:
+        `Not at ${both(F70)} by ${clockFrom(by70, day)}, 2 hours after ${entry.restartedAt ? 'cooling started again' : 'it came out'}. ` +
+        (entry.restartedAt
+          ? 'It has been reheated once already: throw it away'
+          : `Reheat it to ${both(165)} and start cooling again, or throw it away`) +
+        ' (common practice; your local food code decides).',
+    };
+  }
+  if (!reached70At) {
+    return {
+      ...base,
+      state: 'to-70',
+      tone: 'ok',
+      said: `Cool to ${both(F70)} or below by ${clockFrom(by70, day)}, then to ${both(F41)} or below by ${clockFrom(by41, day)}.`,
+    };
+  }
+  if (reached41At) {
+    return {
+      ...base,
+      state: 'cooled',
+      tone: 'ok',
+      said: `Cooled in time: ${both(F70)} reached by ${clockFrom(reached70At, day)}, ${both(F41)} by ${clockFrom(reached41At, day)}.`,
+    };
+  }
+  if (nowM > m41 || hit41) {
+    return {
+      ...base,
+      state: 'missed-41',
+      tone: 'block',
+      said: `Not at ${both(F41)} by ${clockFrom(by41, day)}, 6 hours after ${entry.restartedAt ? 'cooling started again' : 'it came out'}: throw it away (common practice; your local food code decides).`,
+    };
+  }
+  return {
+    ...base,
+    state: 'to-41',
+    tone: 'ok',
+    said: `${both(F70)} reached at ${clockFrom(reached70At, day)}. Next: ${both(F41)} or below by ${clockFrom(by41, day)} (in the fridge).`,
+  };
+}
+
+/** A tray's record as the run's timers read it: its id in the run and what was written down. */
+export interface RecordedCooling extends CoolingEntry {
+  runTrayId: string;
+}
+
+/**
+ * The run's steps with what the cooling record says: a tray written down as out no longer has its check and time out
+ * to come, and its cooling deadlines count from when it really came out (or started cooling again); a tray cooled in
+ * time or thrown away has no deadline left. Trays without a record keep their planned steps.
+ */
+export function eventsWithCooling(run: Pick<BakeRunResult, 'start' | 'events'>, records: readonly RecordedCooling[], now: string): BakeEvent[] {
+  const byTray = new Map(records.map((r) => [r.runTrayId, r]));
+  const start = minutesOf(run.start);
+  const gone = new Set<BakeEvent['kind']>(['first-check', 'tray-out', 'cooling-start', 'cool-to-70-by', 'fridge-41-by']);
+  const out: BakeEvent[] = run.events.filter((e) => !(e.trayId !== null && byTray.has(e.trayId) && gone.has(e.kind)));
+  for (const r of records) {
+    const planned = run.events.find((e) => e.trayId === r.runTrayId && e.kind === 'cool-to-70-by');
+    if (!planned) continue;
+    const check = checkCooling(r, now);
+    const source = FOOD_CODE_COOLING.source;
+    const push = (kind: BakeEvent['kind'], at: string, tempF: number) =>
+      out.push({ at, minute: minutesOf(at) - start, kind, oven: planned.oven, trayId: r.runTrayId, tempF, source });
+    if (check.state === 'to-70' || check.state === 'missed-70') push('cool-to-70-by', check.by70, F70);
+    if (check.state === 'to-70' || check.state === 'to-41' || check.state === 'missed-41') push('fridge-41-by', check.by41, F41);
+  }
+  // A stable sort: the deadlines added go after the planned steps of the same minute (their kinds come last anyway).
+  return out.sort((a, b) => a.minute - b.minute);
+}

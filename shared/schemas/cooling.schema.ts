@@ -1,0 +1,91 @@
+/**
+ * The cooling record of a prep day's trays (shared/domain/cooling.ts): request schemas and DTOs. Food temperatures
+ * are stored in °F; a reading takes °F (`tempF`) or °C (`tempC`), converted with °F = °C × 9/5 + 32 (NIST SP 811).
+ */
+import { z } from 'zod';
+import { isLocalDateTime, parseLocalMinutes } from '../domain/bake-run-time';
+import { celsiusToFahrenheit } from '../domain/temperature';
+import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { prepDateQuery, weekIdParam } from './bake-setup.schema';
+
+const localTime = (what: string) => z.string().refine(isLocalDateTime, { message: `${what} must be a local date-time "YYYY-MM-DDTHH:mm".` });
+
+/** A tray of a week's run by its id there: base tray id and its number, e.g. "12-1". */
+export const coolingParams = weekIdParam.extend({
+  runTrayId: z.string().regex(/^[1-9]\d{0,8}-[1-9]\d{0,2}$/, { message: 'Give the tray by its id in the run, e.g. "12-1".' }),
+});
+
+/** A reading as typed: when, and the food temperature in °F or in °C. */
+const readingInput = z
+  .object({
+    at: localTime('The time of a reading'),
+    tempF: z.number({ message: 'A temperature is a number.' }).min(-40, { message: 'Below −40 °F: check the reading.' }).max(250, { message: 'Above 250 °F: check the reading.' }).optional(),
+    tempC: z.number({ message: 'A temperature is a number.' }).min(-40, { message: 'Below −40 °C: check the reading.' }).max(121, { message: 'Above 121 °C: check the reading.' }).optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.tempF !== undefined && v.tempC !== undefined)
+      ctx.addIssue({ code: 'custom', path: ['tempF'], message: 'Give the temperature in tempF or in tempC, not both.' });
+    if (v.tempF === undefined && v.tempC === undefined) ctx.addIssue({ code: 'custom', path: ['tempF'], message: 'Give the food temperature.' });
+  })
+  .transform((v) => ({
+    at: v.at,
+    // Kept to a hundredth of a degree: a reading in °C converts exactly (× 1.8 + 32), thermometers show tenths.
+    tempF: v.tempF ?? celsiusToFahrenheit(v.tempC as number).toDecimalPlaces(2).toNumber(),
+  }));
+
+const minutes = (at: string) => parseLocalMinutes(at) ?? 0;
+
+/**
+ * PUT /api/weeks/:weekId/bake-run/cooling/:runTrayId: what was written down for one tray (coach or assistant).
+ * `version` is required once the tray has a record (omit it the first time); a stale one is a 409.
+ */
+export const coolingRecordSchema = z
+  .object({
+    prepDate: prepDateQuery.shape.prepDate,
+    version: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE).optional(),
+    outAt: localTime('The time out'),
+    restartedAt: localTime('The time cooling started again').nullable().default(null),
+    readings: z.array(readingInput).max(48, { message: 'At most 48 readings for one tray.' }).default([]),
+    discarded: z.boolean().default(false),
+    note: z.string().trim().max(500, { message: 'Keep the note under 500 characters.' }).default(''),
+  })
+  .superRefine((v, ctx) => {
+    const out = minutes(v.outAt);
+    // A record covers the 6 hours of cooling and a while after: readings beyond a day are another day's.
+    const within = (at: string) => minutes(at) >= out && minutes(at) <= out + 24 * 60;
+    if (v.restartedAt !== null && !within(v.restartedAt))
+      ctx.addIssue({ code: 'custom', path: ['restartedAt'], message: `Cooling started again after the tray came out at ${v.outAt.slice(11)} (within a day).` });
+    v.readings.forEach((r, i) => {
+      if (!within(r.at))
+        ctx.addIssue({ code: 'custom', path: ['readings', i, 'at'], message: `Taken after the tray came out at ${v.outAt.slice(11)} (within a day).` });
+    });
+  });
+export type CoolingRecordValues = z.output<typeof coolingRecordSchema>;
+export type CoolingRecordInput = z.input<typeof coolingRecordSchema>;
+
+/** DELETE …/cooling/:runTrayId?prepDate=&version=: a record written by mistake (the tray is not out yet). */
+export const coolingDeleteQuery = prepDateQuery.extend({
+  version: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE),
+});
+
+export interface CoolingRecordDto {
+  runTrayId: string;
+  /** The tray's name in the run when it was written down, e.g. "Chive egg slab (2/3)". */
+  trayName: string;
+  outAt: string;
+  restartedAt: string | null;
+  readings: { at: string; tempF: number }[];
+  discarded: boolean;
+  note: string;
+  /** Who wrote it down last (their name then). */
+  recordedBy: string;
+  updatedAt: string;
+  version: number;
+}
+
+/** GET /api/weeks/:weekId/bake-run/cooling?prepDate=: the prep day's records, by time out. */
+export interface CoolingListDto {
+  weekId: number;
+  prepDate: string;
+  records: CoolingRecordDto[];
+}

@@ -1,0 +1,41 @@
+import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CoolingListDto, CoolingRecordDto, CoolingRecordInput } from '@shared/schemas/cooling.schema';
+import { api, qs } from '@/lib/api-client';
+import { bakeRunsKeys } from './bake-runs.keys';
+
+/** The prep day's cooling record (coach or assistant). Read again every minute: two phones in one kitchen. */
+export const coolingQuery = (weekId: number, prepDate: string) =>
+  queryOptions({
+    queryKey: bakeRunsKeys.cooling(weekId, prepDate),
+    queryFn: () => api.get<CoolingListDto>(`/weeks/${weekId}/bake-run/cooling${qs({ prepDate })}`),
+    refetchInterval: 60_000,
+  });
+
+/** Writes down one tray's cooling (the whole record; `version` once it exists). */
+export function useSaveCooling(weekId: number, prepDate: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ runTrayId, ...body }: CoolingRecordInput & { runTrayId: string }) =>
+      api.put<CoolingRecordDto>(`/weeks/${weekId}/bake-run/cooling/${encodeURIComponent(runTrayId)}`, { ...body, prepDate }),
+    meta: { form: true, silent: true },
+    onSuccess: (saved) => {
+      qc.setQueryData<CoolingListDto>(bakeRunsKeys.cooling(weekId, prepDate), (list) =>
+        list ? { ...list, records: [...list.records.filter((r) => r.runTrayId !== saved.runTrayId), saved] } : list,
+      );
+      return qc.invalidateQueries({ queryKey: bakeRunsKeys.cooling(weekId, prepDate) });
+    },
+    // Someone else wrote it meanwhile: show theirs (the person then adds their change again).
+    onError: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.cooling(weekId, prepDate) }),
+  });
+}
+
+/** Clears a record written by mistake (the tray is not out yet). */
+export function useClearCooling(weekId: number, prepDate: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ runTrayId, version }: { runTrayId: string; version: number }) =>
+      api.delete<void>(`/weeks/${weekId}/bake-run/cooling/${encodeURIComponent(runTrayId)}${qs({ prepDate, version })}`),
+    meta: { silent: true },
+    onSettled: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.cooling(weekId, prepDate) }),
+  });
+}

@@ -1,0 +1,368 @@
+import { useEffect, useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import type { BakeRunResult, BakeTrayPlan } from '@shared/domain/bake-run-types';
+import { checkCooling, clockFrom, type CoolingCheck } from '@shared/domain/cooling';
+import type { CoolingRecordDto, CoolingRecordInput } from '@shared/schemas/cooling.schema';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { ErrorState, Notice } from '@/components/ui/states';
+import { coolingQuery, useClearCooling, useSaveCooling } from '../api/cooling';
+import { errorMessage, isApiError, markShown } from '@/lib/problem';
+import { localToday } from '@/lib/dates';
+import { clock, formatTemp, type TempUnit } from './temperature';
+
+const pad = (n: number) => String(n).padStart(2, '0');
+/** The device clock as a local "YYYY-MM-DDTHH:mm". */
+export const nowLocal = (d = new Date()) => `${localToday(d)}T${pad(d.getHours())}:${pad(d.getMinutes())}`;
+
+/** The device clock, read again every `ms`. */
+function useNow(ms: number): string {
+  const [now, setNow] = useState(() => nowLocal());
+  useEffect(() => {
+    const id = window.setInterval(() => setNow(nowLocal()), ms);
+    return () => window.clearInterval(id);
+  }, [ms]);
+  return now;
+}
+
+/** "HH:mm" typed for a reading, as a local date-time: on the day the tray came out, or the next day when earlier. */
+export function readingAt(time: string, outAt: string): string {
+  const day = outAt.slice(0, 10);
+  if (time >= outAt.slice(11)) return `${day}T${time}`;
+  const next = new Date(`${day}T00:00:00Z`);
+  next.setUTCDate(next.getUTCDate() + 1);
+  return `${next.toISOString().slice(0, 10)}T${time}`;
+}
+
+/** Writes the tray's whole record again with `change`; `done` once it is saved. */
+type Write = (input: CoolingRecordInput, done?: () => void) => void;
+
+/** The record as the API takes it again (the whole record is written each time). */
+const asInput = (r: CoolingRecordDto): CoolingRecordInput => ({
+  outAt: r.outAt,
+  restartedAt: r.restartedAt,
+  readings: r.readings.map((x) => ({ at: x.at, tempF: x.tempF })),
+  discarded: r.discarded,
+  note: r.note,
+  version: r.version,
+});
+
+const TONE_CLASS: Record<CoolingCheck['tone'], string> = {
+  ok: 'text-ink',
+  block: 'font-bold text-signal-700',
+  info: 'text-ink-soft',
+};
+
+/** Why a write did not land: someone wrote the tray down meanwhile (their record now shows), or another failure. */
+function Refused({ error }: { error: unknown }) {
+  if (!error || isApiError(error, 400)) return null;
+  if (isApiError(error, 409)) {
+    markShown(error);
+    return (
+      <p role="alert" className="font-bold text-signal-700">
+        ⚠ Someone wrote this tray down meanwhile: their record shows now. Add your change again if it is still needed.
+      </p>
+    );
+  }
+  return (
+    <p role="alert" className="font-bold text-signal-700">
+      ⚠ Not saved: {errorMessage(error)}
+    </p>
+  );
+}
+
+/** A tray not written down yet: out now, or at another time. */
+function NotOut({ tray, day, save, busy }: { tray: BakeTrayPlan; day: string; save: Write; busy: boolean }) {
+  // On the day: now; later (written down afterwards): the planned time, to change to what happened.
+  const [time, setTime] = useState(() => (localToday() === day ? clock(nowLocal()) : clock(tray.outAt)));
+  return (
+    <div className="no-print flex flex-wrap items-end gap-3">
+      {/* Out now: only on the prep day itself (a later day gives the time it came out). */}
+      {localToday() === day && (
+        <Button type="button" busy={busy} onClick={() => save({ outAt: nowLocal() })}>
+          Out now
+        </Button>
+      )}
+      <form
+        className="flex flex-wrap items-end gap-2"
+        aria-label={`Time out of ${tray.name}`}
+        onSubmit={(e) => {
+          e.preventDefault();
+          save({ outAt: `${day}T${time}` });
+        }}
+      >
+        <TextField label={localToday() === day ? 'Or came out at' : 'Came out at'} type="time" required value={time} onChange={(e) => setTime(e.target.value)} className="w-40" />
+        <Button type="submit" variant="secondary" busy={busy}>
+          Write down
+        </Button>
+      </form>
+    </div>
+  );
+}
+
+/** One tray's record: its state against the Food Code, its readings, and what can be written down next. */
+function Written({ record, unit, now, write: save, error, busy, onClear, clearing }: {
+  record: CoolingRecordDto;
+  unit: TempUnit;
+  now: string;
+  write: Write;
+  /** The last write's failure for this tray (a 400 shows beside its field). */
+  error: unknown;
+  busy: boolean;
+  onClear: () => void;
+  clearing: boolean;
+}) {
+  const check = checkCooling(record, now);
+  const [temp, setTemp] = useState('');
+  const [time, setTime] = useState('');
+  const [note, setNote] = useState(record.note);
+  const [restart, setRestart] = useState('');
+  const fieldErrors = isApiError(error, 400) ? error.fieldErrors : {};
+  const readingError = Object.entries(fieldErrors).find(([k]) => k.startsWith('readings.'))?.[1]?.[0];
+  const write = (change: Partial<CoolingRecordInput>, done?: () => void) => save({ ...asInput(record), ...change }, done);
+  const readings = [...record.readings].sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0));
+  return (
+    <div className="flex flex-col gap-2">
+      <p className="text-base">
+        Out at <span className="num font-bold">{clock(record.outAt)}</span>
+        {record.restartedAt && (
+          <>
+            {' '}
+            · reheated, cooling again from <span className="num font-bold">{clockFrom(record.restartedAt, record.outAt)}</span>
+          </>
+        )}
+        <span className="text-sm text-ink-soft"> · written down by {record.recordedBy}</span>
+      </p>
+      <p className={`text-base ${TONE_CLASS[check.tone]}`} role={check.tone === 'block' ? 'alert' : undefined}>
+        {check.tone === 'block' ? '⚠ ' : check.state === 'cooled' ? '✓ ' : ''}
+        {check.said}
+      </p>
+      {readings.length > 0 && (
+        <ol className="num flex flex-col gap-1 text-base" aria-label={`Readings of ${record.trayName}`}>
+          {readings.map((r, i) => (
+            <li key={`${r.at}-${i}`} className="flex min-h-9 items-center gap-3">
+              <span className="w-32">{clockFrom(r.at, record.outAt)}</span>
+              <span className="font-bold">{formatTemp(r.tempF, unit === 'C' ? 'C' : 'F')}</span>
+              {unit === 'C' && <span className="text-sm text-ink-soft">({formatTemp(r.tempF, 'F')})</span>}
+              <Button
+                size="sm"
+                variant="ghost"
+                className="no-print"
+                aria-label={`Remove the ${clock(r.at)} reading`}
+                disabled={busy}
+                onClick={() => {
+                  if (window.confirm(`Remove the ${clock(r.at)} reading of ${formatTemp(r.tempF, unit)}?`)) write({ readings: record.readings.filter((x) => x !== r) });
+                }}
+              >
+                Remove
+              </Button>
+            </li>
+          ))}
+        </ol>
+      )}
+      {check.state !== 'discarded' && check.state !== 'cooled' && (
+        <form
+          className="no-print flex flex-wrap items-end gap-2"
+          aria-label={`Add a reading for ${record.trayName}`}
+          onSubmit={(e) => {
+            e.preventDefault();
+            const value = Number(temp.replace(',', '.'));
+            const at = readingAt(time || clock(nowLocal()), record.outAt);
+            const reading = unit === 'C' ? { at, tempC: value } : { at, tempF: value };
+            write({ readings: [...record.readings, reading] }, () => {
+              setTemp('');
+              setTime('');
+            });
+          }}
+        >
+          <TextField
+            label={`Food temperature (°${unit})`}
+            type="number"
+            inputMode="decimal"
+            step="0.1"
+            required
+            value={temp}
+            onChange={(e) => setTemp(e.target.value)}
+            error={readingError}
+            className="w-44"
+          />
+          <TextField label="Taken at (empty: now)" type="time" value={time} onChange={(e) => setTime(e.target.value)} className="w-44" />
+          <Button type="submit" busy={busy}>
+            Add reading
+          </Button>
+        </form>
+      )}
+      <div className="no-print flex flex-wrap gap-2">
+        <Button type="button" variant={check.tone === 'block' ? 'danger' : 'ghost'} disabled={busy} onClick={() => write({ discarded: !record.discarded })}>
+          {record.discarded ? 'Not thrown away after all' : 'Thrown away'}
+        </Button>
+      </div>
+      {check.state === 'missed-70' && !record.restartedAt && (
+        <form
+          className="no-print flex flex-wrap items-end gap-2"
+          aria-label={`Reheated: ${record.trayName}`}
+          onSubmit={(e) => {
+            e.preventDefault();
+            write({ restartedAt: readingAt(restart || clock(nowLocal()), record.outAt) });
+          }}
+        >
+          <TextField
+            label="Reheated to 165 °F (74 °C), cooling again from (empty: now)"
+            type="time"
+            value={restart}
+            onChange={(e) => setRestart(e.target.value)}
+            error={fieldErrors.restartedAt?.[0]}
+            className="w-72"
+          />
+          <Button type="submit" variant="secondary" busy={busy}>
+            Cool again from then
+          </Button>
+        </form>
+      )}
+      <details className="no-print">
+        <summary className="min-h-11 cursor-pointer py-2">Note, or written down by mistake?</summary>
+        <form
+          className="mt-1 flex flex-wrap items-end gap-2"
+          aria-label={`Note for ${record.trayName}`}
+          onSubmit={(e) => {
+            e.preventDefault();
+            write({ note });
+          }}
+        >
+          <TextField label="Note" value={note} maxLength={500} onChange={(e) => setNote(e.target.value)} error={fieldErrors.note?.[0]} className="min-w-64 flex-1" />
+          <Button type="submit" variant="secondary" busy={busy}>
+            Save note
+          </Button>
+        </form>
+        <Button
+          type="button"
+          variant="ghost"
+          className="mt-2"
+          busy={clearing}
+          onClick={() => {
+            if (window.confirm(`Clear the cooling record of ${record.trayName}? Its time out and readings are removed.`)) onClear();
+          }}
+        >
+          Clear this record (not out yet)
+        </Button>
+      </details>
+      {record.note && <p className="text-sm text-ink-soft">Note: {record.note}</p>}
+    </div>
+  );
+}
+
+/**
+ * The cooling record of a prep day (FDA Food Code §3-501.14): each tray's time out, the food temperatures taken as it
+ * cools and where it stands; the timers count its deadlines from what is written here.
+ */
+export function CoolingRecord({ weekId, run, unit }: { weekId: number; run: BakeRunResult; unit: TempUnit }) {
+  const day = run.start.slice(0, 10);
+  const q = useQuery(coolingQuery(weekId, day));
+  const save = useSaveCooling(weekId, day);
+  const clear = useClearCooling(weekId, day);
+  const now = useNow(20_000);
+  const [saving, setSaving] = useState<string | null>(null);
+  const started = localToday() >= day;
+  const trays = [...run.trays].sort((a, b) => a.outMinute - b.outMinute || (a.id < b.id ? -1 : 1));
+  const inRun = new Set(trays.map((t) => t.id));
+  const byId = new Map((q.data?.records ?? []).map((r) => [r.runTrayId, r]));
+  const gone = (q.data?.records ?? []).filter((r) => !inRun.has(r.runTrayId));
+  const counts = trays.reduce(
+    (n, t) => {
+      const r = byId.get(t.id);
+      if (!r) return n;
+      const c = checkCooling(r, now);
+      return { out: n.out + 1, missed: n.missed + (c.tone === 'block' ? 1 : 0), cooled: n.cooled + (c.state === 'cooled' ? 1 : 0) };
+    },
+    { out: 0, missed: 0, cooled: 0 },
+  );
+  return (
+    <section className="flex flex-col gap-3" aria-labelledby="cooling-record-title">
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <h2 id="cooling-record-title" className="text-xl">
+          Cooling record
+        </h2>
+        {q.data && started && (
+          <p className="text-base text-ink-soft" role="status">
+            {counts.out} of {trays.length} out · {counts.cooled} cooled in time
+            {counts.missed > 0 && <span className="font-bold text-signal-700"> · {counts.missed} missed a deadline</span>}
+          </p>
+        )}
+      </div>
+      <p className="text-sm text-ink-soft">
+        Write down each tray as it comes out, then the food temperature in the thickest part as it cools. FDA Food Code
+        §3-501.14: to 70 °F (21 °C) within 2 hours and to 41 °F (5 °C) or below within 6 hours in total; the clock here
+        starts when the tray comes out. Your local food code and inspector decide what to keep and for how long.
+      </p>
+      {q.isPending ? (
+        <div className="h-24 animate-pulse rounded-lg bg-paper-deep" aria-label="Loading the cooling record" />
+      ) : q.isError ? (
+        <ErrorState error={q.error} retry={() => q.refetch()} />
+      ) : !started ? (
+        <Notice tone="info">Nothing to write down before prep day: on the day, each tray gets its line here as it comes out.</Notice>
+      ) : (
+        <>
+          <ul className="flex flex-col gap-3" aria-label="Trays cooling">
+            {trays.map((t) => {
+              const record = byId.get(t.id);
+              const busy = saving === t.id && save.isPending;
+              const write: Write = (input, done) => {
+                setSaving(t.id);
+                save.mutate({ runTrayId: t.id, ...input }, { onSuccess: () => done?.() });
+              };
+              return (
+                <li key={t.id} className="flex flex-col gap-2 rounded-lg border border-line bg-paper-card p-3">
+                  <div className="flex flex-wrap items-baseline justify-between gap-2">
+                    <h3 className="text-lg font-bold">{t.name}</h3>
+                    <span className="num text-sm text-ink-soft">
+                      {t.oven} · planned out {clock(t.outAt)}
+                    </span>
+                  </div>
+                  {record ? (
+                    <Written
+                      record={record}
+                      unit={unit}
+                      now={now}
+                      write={write}
+                      error={saving === t.id ? save.error : null}
+                      busy={busy}
+                      clearing={clear.isPending && clear.variables?.runTrayId === t.id}
+                      onClear={() => clear.mutate({ runTrayId: t.id, version: record.version })}
+                    />
+                  ) : (
+                    <NotOut
+                      tray={t}
+                      day={day}
+                      busy={busy}
+                      save={write}
+                    />
+                  )}
+                  {saving === t.id && <Refused error={save.error} />}
+                  {saving === t.id && isApiError(save.error, 400) && !Object.keys(save.error.fieldErrors).some((k) => k.startsWith('readings.') || k === 'note') && (
+                    <p role="alert" className="font-bold text-signal-700">
+                      ⚠ {errorMessage(save.error)}
+                    </p>
+                  )}
+                  {clear.error && clear.variables?.runTrayId === t.id && <Refused error={clear.error} />}
+                </li>
+              );
+            })}
+          </ul>
+          {gone.length > 0 && (
+            <div className="flex flex-col gap-1">
+              <h3 className="text-lg font-bold">No longer in the run</h3>
+              <p className="text-sm text-ink-soft">Written down before the week's tray counts changed; kept as written.</p>
+              <ul className="flex flex-col gap-1 text-base">
+                {gone.map((r) => (
+                  <li key={r.runTrayId}>
+                    {r.trayName}: out at <span className="num">{clock(r.outAt)}</span>. {checkCooling(r, now).said}
+                  </li>
+                ))}
+              </ul>
+            </div>
+          )}
+        </>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,127 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import { testApp } from '../support/test-app.js';
+import { coachWorkspace, makeTray, makeWeek, member } from '../support/factories.js';
+import { sql } from '../support/db.js';
+
+let app: Express;
+beforeAll(async () => {
+  app = (await testApp()).app;
+});
+
+/** A week whose first prep day (Sun Jan 4, 2026) bakes two trays of one base tray: run ids "<id>-1" and "<id>-2". */
+async function twoTrayWeek() {
+  const coach = await coachWorkspace(app);
+  const assistant = await member(app, coach, 'assistant');
+  const client = await member(app, coach, 'client');
+  const tray = await makeTray(coach);
+  const { week } = await makeWeek(coach);
+  await coach.agent
+    .put(`/api/weeks/${week.id}/trays`)
+    .send({ version: week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 2 }] })
+    .expect(200);
+  return { coach, assistant, client, tray, week, base: `/api/weeks/${week.id}/bake-run/cooling` };
+}
+
+describe('the cooling record of a prep day', () => {
+  it('the assistant writes down a tray out, then its readings; °C readings are kept in °F; a stale version is a 409', async () => {
+    const { assistant, coach, tray, week, base } = await twoTrayWeek();
+    expect((await assistant.agent.get(base).expect(200)).body).toEqual({ weekId: week.id, prepDate: '2026-01-04', records: [] });
+
+    const first = await assistant.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:10' }).expect(200);
+    expect(first.body).toMatchObject({
+      runTrayId: `${tray.id}-2`,
+      trayName: `${tray.name} (2/2)`,
+      outAt: '2026-01-04T10:10',
+      restartedAt: null,
+      readings: [],
+      discarded: false,
+      version: 1,
+    });
+    expect(first.body.recordedBy).toBeTruthy();
+
+    // 21 °C = 69.8 °F and 4.5 °C = 40.1 °F (NIST SP 811: °F = °C × 9/5 + 32).
+    const readings = [
+      { at: '2026-01-04T11:40', tempC: 21 },
+      { at: '2026-01-04T14:00', tempC: 4.5 },
+    ];
+    const second = await coach.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:10', readings, version: 1 }).expect(200);
+    expect(second.body.readings).toEqual([
+      { at: '2026-01-04T11:40', tempF: 69.8 },
+      { at: '2026-01-04T14:00', tempF: 40.1 },
+    ]);
+    expect(second.body.version).toBe(2);
+
+    // Someone else's older copy: refused, nothing changed, the current record in the answer.
+    const stale = await assistant.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:20', version: 1 }).expect(409);
+    expect(stale.body).toMatchObject({ code: 'stale_version', currentVersion: 2, current: { outAt: '2026-01-04T10:10' } });
+    // Writing again as if first (no version) is a 409 too: the record exists.
+    await assistant.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:20' }).expect(409);
+
+    const list = await assistant.agent.get(`${base}?prepDate=2026-01-04`).expect(200);
+    expect(list.body.records).toHaveLength(1);
+    expect(list.body.records[0]).toMatchObject({ outAt: '2026-01-04T10:10', version: 2 });
+  });
+
+  it('bad input is a 400 naming the field, and nothing is written', async () => {
+    const { assistant, tray, base } = await twoTrayWeek();
+    const bad = async (body: object, field: string, id = `${tray.id}-1`) => {
+      const res = await assistant.agent.put(`${base}/${id}`).send(body).expect(400);
+      expect(Object.keys(res.body.errors)).toContain(field);
+    };
+    await bad({}, 'outAt');
+    await bad({ outAt: '2026-01-04 10:10' }, 'outAt');
+    // Out on another day than the prep day.
+    await bad({ outAt: '2026-01-05T10:10' }, 'outAt');
+    // A reading before the tray came out, one with no temperature, one with both scales, one off the thermometer.
+    await bad({ outAt: '2026-01-04T10:10', readings: [{ at: '2026-01-04T09:00', tempF: 100 }] }, 'readings.0.at');
+    await bad({ outAt: '2026-01-04T10:10', readings: [{ at: '2026-01-04T11:00' }] }, 'readings.0.tempF');
+    await bad({ outAt: '2026-01-04T10:10', readings: [{ at: '2026-01-04T11:00', tempF: 60, tempC: 15 }] }, 'readings.0.tempF');
+    await bad({ outAt: '2026-01-04T10:10', readings: [{ at: '2026-01-04T11:00', tempF: 900 }] }, 'readings.0.tempF');
+    await bad({ outAt: '2026-01-04T10:10', restartedAt: '2026-01-04T09:00' }, 'restartedAt');
+    await bad({ outAt: '2026-01-04T10:10', note: 'x'.repeat(501) }, 'note');
+    await bad({ outAt: '2026-01-04T10:10', prepDate: '2026-01-09' }, 'prepDate');
+    await bad({ outAt: '2026-01-04T10:10' }, 'runTrayId', 'first');
+    const [{ n }] = await sql<{ n: string }>('select count(*) as n from cooling_record where week_id = (select week_id from week_tray where tray_id = $1 limit 1)', [tray.id]);
+    expect(Number(n)).toBe(0);
+  });
+
+  it('a tray the run does not bake is a 404; another workspace sees none of it; a client is refused', async () => {
+    const { assistant, client, tray, base } = await twoTrayWeek();
+    // Two trays are baked: a third is not in the run.
+    await assistant.agent.put(`${base}/${tray.id}-3`).send({ outAt: '2026-01-04T10:10' }).expect(404);
+    await assistant.agent.put(`${base}/${tray.id}-1`).send({ outAt: '2026-01-04T10:10' }).expect(200);
+    const other = await coachWorkspace(app);
+    await other.agent.get(base).expect(404);
+    await other.agent.put(`${base}/${tray.id}-1`).send({ outAt: '2026-01-04T10:30', version: 1 }).expect(404);
+    await client.agent.get(base).expect(403);
+    const [row] = await sql<{ out_at: string }>('select out_at from cooling_record where run_tray_id = $1', [`${tray.id}-1`]);
+    expect(row.out_at).toBe('2026-01-04T10:10');
+  });
+
+  it('a record written by mistake is cleared with its version; a stale one stays', async () => {
+    const { assistant, tray, base } = await twoTrayWeek();
+    await assistant.agent.put(`${base}/${tray.id}-1`).send({ outAt: '2026-01-04T10:10' }).expect(200);
+    await assistant.agent.delete(`${base}/${tray.id}-1?version=2`).expect(409);
+    const noVersion = await assistant.agent.delete(`${base}/${tray.id}-1`).expect(400);
+    expect(Object.keys(noVersion.body.errors)).toEqual(['version']);
+    await assistant.agent.delete(`${base}/${tray.id}-1?version=1`).expect(204);
+    expect((await assistant.agent.get(base).expect(200)).body.records).toEqual([]);
+    await assistant.agent.delete(`${base}/${tray.id}-1?version=1`).expect(404);
+  });
+
+  it('a record outlives the week’s tray count going down, and goes with the week', async () => {
+    const { coach, assistant, tray, week, base } = await twoTrayWeek();
+    await assistant.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:10' }).expect(200);
+    const [w] = await sql<{ version: number }>('select version from week where id = $1', [week.id]);
+    await coach.agent
+      .put(`/api/weeks/${week.id}/trays`)
+      .send({ version: w.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 1 }] })
+      .expect(200);
+    const list = await assistant.agent.get(base).expect(200);
+    expect(list.body.records.map((r: { trayName: string }) => r.trayName)).toEqual([`${tray.name} (2/2)`]);
+    await coach.agent.delete(`/api/weeks/${week.id}`).expect(204);
+    const [{ n }] = await sql<{ n: string }>('select count(*) as n from cooling_record where week_id = $1', [week.id]);
+    expect(Number(n)).toBe(0);
+  });
+});

@@ -1,0 +1,137 @@
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import type { BakeRunResult } from '@shared/domain/bake-run-types';
+import type { CoolingRecordDto } from '@shared/schemas/cooling.schema';
+import { CoolingRecord, readingAt } from '@/features/bake-runs/components/cooling-record';
+import { BakeRunTimers } from '@/features/bake-runs/components/bake-run-timers';
+import { jsonResponse, renderInApp } from './render';
+
+// An invented run of two trays (only the fields the cooling record and the timers read), prep day Sun Jan 4, 2026.
+const tray = (id: string, name: string, outAt: string, outMinute: number) => ({ id, name, oven: 'Left', outAt: `2026-01-04T${outAt}`, outMinute });
+const step = (kind: string, minute: number, trayId: string, tempF = 350) => ({
+  kind,
+  minute,
+  at: `2026-01-04T${String(8 + Math.floor(minute / 60)).padStart(2, '0')}:${String(minute % 60).padStart(2, '0')}`,
+  trayId,
+  oven: 'Left',
+  tempF,
+});
+const run = {
+  start: '2026-01-04T08:00',
+  trays: [tray('3-1', 'Egg slab (1/2)', '08:30', 30), tray('3-2', 'Egg slab (2/2)', '08:45', 45)],
+  events: [
+    step('first-check', 30, '3-1'),
+    step('tray-out', 30, '3-1'),
+    step('cool-to-70-by', 150, '3-1', 70),
+    step('fridge-41-by', 390, '3-1', 41),
+    step('first-check', 45, '3-2'),
+    step('cool-to-70-by', 165, '3-2', 70),
+    step('fridge-41-by', 405, '3-2', 41),
+  ].sort((a, b) => a.minute - b.minute),
+} as unknown as BakeRunResult;
+
+const record = (over: Partial<CoolingRecordDto> = {}): CoolingRecordDto => ({
+  runTrayId: '3-1',
+  trayName: 'Egg slab (1/2)',
+  outAt: '2026-01-04T08:36',
+  restartedAt: null,
+  readings: [],
+  discarded: false,
+  note: '',
+  recordedBy: 'Kit Moreno',
+  updatedAt: '2026-01-04T08:36:10.000Z',
+  version: 1,
+  ...over,
+});
+
+let records: CoolingRecordDto[] = [];
+const calls: [string, RequestInit | undefined][] = [];
+beforeEach(() => {
+  records = [];
+  calls.length = 0;
+  vi.useFakeTimers({ toFake: ['Date'] });
+  vi.setSystemTime(new Date(2026, 0, 4, 8, 40));
+  vi.stubGlobal(
+    'fetch',
+    vi.fn((url: string, init?: RequestInit) => {
+      calls.push([url, init]);
+      if (!init?.method || init.method === 'GET') return Promise.resolve(jsonResponse({ weekId: 7, prepDate: '2026-01-04', records }));
+      if (init.method === 'PUT') {
+        const body = JSON.parse(String(init.body));
+        if (body.readings?.some((r: { tempF?: number }) => (r.tempF ?? 0) > 250))
+          return Promise.resolve(jsonResponse({ status: 400, code: 'validation', detail: 'Invalid', errors: { 'readings.0.tempF': ['Above 250 °F: check the reading.'] } }, 400));
+        const saved = record({ ...body, readings: body.readings ?? [], runTrayId: url.split('/').pop(), version: (body.version ?? 0) + 1 });
+        records = [...records.filter((r) => r.runTrayId !== saved.runTrayId), saved];
+        return Promise.resolve(jsonResponse(saved));
+      }
+      return Promise.resolve(new Response(null, { status: 204 }));
+    }),
+  );
+});
+afterEach(() => {
+  vi.useRealTimers();
+  vi.unstubAllGlobals();
+});
+
+const puts = () => calls.filter(([, init]) => init?.method === 'PUT').map(([url, init]) => [url, JSON.parse(String(init!.body))]);
+
+describe('the cooling record on prep day', () => {
+  it('writes a tray down as out now, then a reading typed in °C, and says where it stands against the Food Code', async () => {
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="C" />);
+    const cards = await screen.findAllByRole('listitem');
+    fireEvent.click(within(cards[0]).getByRole('button', { name: 'Out now' }));
+    await waitFor(() => expect(puts()).toEqual([['/api/weeks/7/bake-run/cooling/3-1', { outAt: '2026-01-04T08:40', prepDate: '2026-01-04' }]]));
+    // 70 °F = 21 °C, 41 °F = 5 °C; deadlines 2 h and 6 h after 08:40 (FDA Food Code §3-501.14).
+    expect(await screen.findByText(/Cool to 70 °F \(21 °C\) or below by 10:40, then to 41 °F \(5 °C\) or below by 14:40/)).toBeTruthy();
+    fireEvent.change(screen.getByLabelText('Food temperature (°C)'), { target: { value: '20.5' } });
+    fireEvent.change(screen.getByLabelText(/Taken at/), { target: { value: '10:15' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Add reading' }));
+    await waitFor(() => expect(puts()).toHaveLength(2));
+    expect(puts()[1][1]).toMatchObject({ outAt: '2026-01-04T08:40', readings: [{ at: '2026-01-04T10:15', tempC: 20.5 }], version: 1 });
+    expect(screen.getByRole('status').textContent).toContain('1 of 2 out');
+  });
+
+  it('puts a refused reading under its field, and says a missed deadline with what to do', async () => {
+    records = [record({ readings: [{ at: '2026-01-04T10:30', tempF: 80 }] })];
+    vi.setSystemTime(new Date(2026, 0, 4, 10, 40));
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" />);
+    // Out 08:36: 70 °F was due by 10:36.
+    const alert = await screen.findByText(/Not at 70 °F \(21 °C\) by 10:36/);
+    expect(alert.textContent).toContain('Reheat it to 165 °F (74 °C) and start cooling again, or throw it away');
+    expect(screen.getByRole('status').textContent).toContain('1 missed a deadline');
+    fireEvent.change(screen.getByLabelText('Food temperature (°F)'), { target: { value: '900' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Add reading' }));
+    expect(await screen.findByText('Above 250 °F: check the reading.')).toBeTruthy();
+    // Reheated: cooling again from the time typed.
+    fireEvent.change(screen.getByLabelText(/cooling again from/), { target: { value: '10:50' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Cool again from then' }));
+    await waitFor(() => expect(puts().at(-1)![1]).toMatchObject({ restartedAt: '2026-01-04T10:50', version: 1 }));
+  });
+
+  it('before prep day there is nothing to write down', async () => {
+    vi.setSystemTime(new Date(2026, 0, 3, 18, 0));
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" />);
+    expect(await screen.findByText(/Nothing to write down before prep day/)).toBeTruthy();
+    expect(screen.queryByRole('button', { name: 'Out now' })).toBeNull();
+  });
+
+  it('a reading typed before the time out is taken as after midnight', () => {
+    expect(readingAt('23:10', '2026-01-04T20:30')).toBe('2026-01-04T23:10');
+    expect(readingAt('01:15', '2026-01-04T20:30')).toBe('2026-01-05T01:15');
+  });
+});
+
+describe('now and next follows the cooling record', () => {
+  it('a tray written down as out has no check left, and its deadlines count from when it came out', () => {
+    const lines = (cooling: CoolingRecordDto[]) => {
+      const { unmount } = render(<BakeRunTimers run={run} unit="F" nowMinute={40} cooling={cooling} />);
+      const out = screen.getAllByRole('listitem').map((li) => li.textContent?.replace(/\s+/g, ' '));
+      unmount();
+      return out;
+    };
+    // Planned: the second tray's check at 08:45, then the first tray's 70 °F deadline at 10:30.
+    expect(lines([])).toEqual(['in 5 minCheck Egg slab (2/2)', 'in 110 minEgg slab (1/2) at 70 °F or below by now', 'in 125 minEgg slab (2/2) at 70 °F or below by now', 'in 350 minEgg slab (1/2) at 41 °F or below, in the fridge, by now']);
+    // The first tray came out at 08:36: its deadlines are 10:36 and 14:36 (116 and 356 minutes from 08:40).
+    expect(lines([record()])).toEqual(['in 5 minCheck Egg slab (2/2)', 'in 116 minEgg slab (1/2) at 70 °F or below by now', 'in 125 minEgg slab (2/2) at 70 °F or below by now', 'in 356 minEgg slab (1/2) at 41 °F or below, in the fridge, by now']);
+  });
+});

@@ -1,0 +1,54 @@
+import { expect, test } from '@playwright/test';
+import { expectNoSeriousA11yViolations, signIn, SHOTS } from './support';
+
+test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, timezoneId: 'UTC' });
+
+test('on prep day the assistant writes a tray down as out and its temperatures as it cools', async ({ page }) => {
+  await signIn(page, 'assistant@trayline.test');
+  const weeks = (await (await page.request.get('/api/weeks')).json()) as { id: number; publishedVersion: number | null }[];
+  const weekId = (weeks.find((w) => w.publishedVersion !== null) ?? weeks[0]).id;
+  type Tray = { id: string; name: string; outMinute: number };
+  const dto = (await (await page.request.get(`/api/weeks/${weekId}/bake-run`)).json()) as { prepDate: string; run: { trays: Tray[] } };
+  const first = [...dto.run.trays].sort((a, b) => a.outMinute - b.outMinute || (a.id < b.id ? -1 : 1))[0];
+  // Start from no record of that tray (a run of this journey before leaves one).
+  const before = (await (await page.request.get(`/api/weeks/${weekId}/bake-run/cooling?prepDate=${dto.prepDate}`)).json()) as {
+    records: { runTrayId: string; version: number }[];
+  };
+  const old = before.records.find((r) => r.runTrayId === first.id);
+  if (old)
+    await page.request.delete(`/api/weeks/${weekId}/bake-run/cooling/${first.id}?prepDate=${dto.prepDate}&version=${old.version}`, {
+      headers: { 'x-trayline-csrf': '1' },
+    });
+
+  // The phone's clock: 09:30 on the prep day.
+  await page.clock.setFixedTime(new Date(`${dto.prepDate}T09:30:00Z`));
+  await page.goto(`/weeks/${weekId}/bake-run`);
+  const record = page.getByRole('region', { name: 'Cooling record' });
+  const card = record.getByRole('listitem').filter({ has: page.getByRole('heading', { name: first.name, exact: true }) });
+  await card.getByRole('button', { name: 'Out now' }).click();
+  // FDA Food Code §3-501.14 from 09:30: 70 °F by 11:30, 41 °F by 15:30.
+  await expect(card.getByText('Cool to 70 °F (21 °C) or below by 11:30, then to 41 °F (5 °C) or below by 15:30.')).toBeVisible();
+  // The timers count that tray's deadline from its real time out.
+  await expect(page.getByRole('region', { name: 'Timers' })).toBeVisible();
+
+  // A reading by keyboard: the temperature, the time, Enter.
+  await card.getByLabel('Food temperature (°F)').fill('66');
+  await card.getByLabel(/Taken at/).fill('10:50');
+  await card.getByLabel(/Taken at/).press('Enter');
+  await expect(card.getByText(/70 °F \(21 °C\) reached at 10:50\. Next: 41 °F \(5 °C\) or below by 15:30/)).toBeVisible();
+  // Trays written down before (a journey run earlier on this database) count too.
+  const inRun = new Set(dto.run.trays.map((t) => t.id));
+  const others = before.records.filter((r) => r.runTrayId !== first.id && inRun.has(r.runTrayId)).length;
+  await expect(record.getByRole('status')).toContainText(`${others + 1} of ${dto.run.trays.length} out`);
+  await expectNoSeriousA11yViolations(page, 'bake run, cooling record');
+  await card.screenshot({ path: `${SHOTS}/assistant-cooling.png` });
+
+  // Everyone reads it: the API has the record, in °F, written by the assistant.
+  const after = (await (await page.request.get(`/api/weeks/${weekId}/bake-run/cooling?prepDate=${dto.prepDate}`)).json()) as {
+    records: { runTrayId: string; outAt: string; readings: { at: string; tempF: number }[]; recordedBy: string }[];
+  };
+  expect(after.records.find((r) => r.runTrayId === first.id)).toMatchObject({
+    outAt: `${dto.prepDate}T09:30`,
+    readings: [{ at: `${dto.prepDate}T10:50`, tempF: 66 }],
+  });
+});

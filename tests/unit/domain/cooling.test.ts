@@ -1,0 +1,118 @@
+/**
+ * The cooling record against FDA Food Code §3-501.14 (../shared/reference/published-values.md §6: cooked food from
+ * 135 °F to 70 °F within 2 hours, and to 41 °F or less within a total of 6 hours; adopted verbatim in the Delaware and
+ * Oklahoma codes). The clock starts when the tray comes out (earlier than 135 °F: the safe side). What to do when a
+ * stage is missed (reheat to 165 °F and cool again, or throw away) is common practice, from memory: checked only for
+ * being said, with the local code deciding. Times and readings are made-up kitchen numbers.
+ */
+import { describe, expect, it } from 'vitest';
+import { checkCooling, clockFrom, eventsWithCooling, FOOD_CODE_COOLING, type CoolingEntry } from '@shared/domain/cooling';
+import { planBakeRun } from '@shared/domain/bake-run';
+import type { BakeRunInput } from '@shared/domain/bake-run-types';
+import { celsiusToFahrenheit } from '@shared/domain/temperature';
+
+const entry = (over: Partial<CoolingEntry> = {}): CoolingEntry => ({ outAt: '2026-01-04T10:10', restartedAt: null, readings: [], discarded: false, ...over });
+const at = (hhmm: string) => `2026-01-04T${hhmm}`;
+
+describe('the Food Code cooling stages', () => {
+  it('uses the Food Code limits: 70 °F in 2 h, 41 °F in 6 h in total', () => {
+    expect(FOOD_CODE_COOLING).toMatchObject({ startF: 135, firstStageF: 70, firstStageMinutes: 120, finalF: 41, totalMinutes: 360 });
+  });
+
+  it('counts both deadlines from the time out, and says them in °F and °C', () => {
+    const c = checkCooling(entry(), at('10:40'));
+    expect(c).toMatchObject({ state: 'to-70', tone: 'ok', from: at('10:10'), by70: at('12:10'), by41: at('16:10'), reached70At: null });
+    // 70 °F = 21.1 °C and 41 °F = 5 °C (NIST SP 811), rounded to whole degrees as the Food Code prints them.
+    expect(c.said).toBe('Cool to 70 °F (21 °C) or below by 12:10, then to 41 °F (5 °C) or below by 16:10.');
+  });
+
+  it('a reading at or below 70 °F by 2 hours meets the first stage; at or below 41 °F by 6 hours, the second', () => {
+    const first = checkCooling(entry({ readings: [{ at: at('11:00'), tempF: 95 }, { at: at('12:10'), tempF: 70 }] }), at('12:30'));
+    expect(first).toMatchObject({ state: 'to-41', reached70At: at('12:10') });
+    expect(first.said).toContain('Next: 41 °F (5 °C) or below by 16:10');
+    // Readings in °C as a thermometer shows them: 21 °C = 69.8 °F, 4.5 °C = 40.1 °F.
+    const readings = [
+      { at: at('11:40'), tempF: celsiusToFahrenheit(21).toNumber() },
+      { at: at('16:10'), tempF: celsiusToFahrenheit(4.5).toNumber() },
+    ];
+    const done = checkCooling(entry({ readings }), at('18:00'));
+    expect(done).toMatchObject({ state: 'cooled', tone: 'ok', reached70At: at('11:40'), reached41At: at('16:10') });
+    expect(done.said).toBe('Cooled in time: 70 °F (21 °C) reached by 11:40, 41 °F (5 °C) by 16:10.');
+  });
+
+  it('misses the first stage when 2 hours pass above 70 °F, and a later reading does not mend it', () => {
+    const late = checkCooling(entry({ readings: [{ at: at('12:00'), tempF: 74 }] }), at('12:11'));
+    expect(late).toMatchObject({ state: 'missed-70', tone: 'block' });
+    expect(late.said).toContain('Not at 70 °F (21 °C) by 12:10');
+    expect(late.said).toContain('Reheat it to 165 °F (74 °C) and start cooling again, or throw it away');
+    expect(late.said).toContain('your local food code decides');
+    // Still on time one minute before the deadline.
+    expect(checkCooling(entry({ readings: [{ at: at('12:00'), tempF: 74 }] }), at('12:10')).state).toBe('to-70');
+    const mended = checkCooling(entry({ readings: [{ at: at('12:11'), tempF: 60 }] }), at('12:11'));
+    expect(mended.state).toBe('missed-70');
+  });
+
+  it('misses the second stage when 6 hours pass above 41 °F', () => {
+    const c = checkCooling(entry({ readings: [{ at: at('11:30'), tempF: 68 }, { at: at('16:00'), tempF: 45 }] }), at('16:11'));
+    expect(c).toMatchObject({ state: 'missed-41', tone: 'block', reached70At: at('11:30') });
+    expect(c.said).toContain('Not at 41 °F (5 °C) by 16:10');
+    expect(c.said).toContain('throw it away');
+  });
+
+  it('cooling started again after a reheat counts from the restart, ignoring the readings before it; a second miss is thrown away', () => {
+    const readings = [
+      { at: at('12:00'), tempF: 80 },
+      { at: at('13:30'), tempF: 69 },
+    ];
+    const c = checkCooling(entry({ restartedAt: at('12:30'), readings }), at('13:40'));
+    expect(c).toMatchObject({ state: 'to-41', from: at('12:30'), by70: at('14:30'), by41: at('18:30'), reached70At: at('13:30') });
+    const again = checkCooling(entry({ restartedAt: at('12:30'), readings: [{ at: at('14:00'), tempF: 90 }] }), at('14:31'));
+    expect(again.state).toBe('missed-70');
+    expect(again.said).toContain('reheated once already: throw it away');
+  });
+
+  it('a deadline past midnight says the next day; a tray thrown away has no deadline left', () => {
+    const evening = checkCooling(entry({ outAt: at('20:30') }), at('20:40'));
+    expect(evening.by41).toBe('2026-01-05T02:30');
+    expect(evening.said).toContain('by 02:30 the next day');
+    expect(clockFrom('2026-01-04T22:30', at('20:30'))).toBe('22:30');
+    expect(checkCooling(entry({ discarded: true }), at('12:11'))).toMatchObject({ state: 'discarded', tone: 'info' });
+  });
+});
+
+describe('the run’s steps with the cooling record', () => {
+  const input: BakeRunInput = {
+    start: at('08:00'),
+    cooks: 1,
+    ambientF: 70,
+    ovens: [{ name: 'Left', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 15, maxF: 500 }],
+    trays: [
+      { id: '1-1', name: 'Slab (1/2)', tempF: 350, minMinutes: 25, maxMinutes: 30, handsOnMinutes: 0 },
+      { id: '1-2', name: 'Slab (2/2)', tempF: 350, minMinutes: 25, maxMinutes: 30, handsOnMinutes: 0 },
+    ],
+  };
+  const run = planBakeRun(input);
+  const kinds = (id: string, events = run.events) => events.filter((e) => e.trayId === id).map((e) => `${e.kind}@${e.at.slice(11)}`);
+
+  it('a tray written down as out loses its planned check and time out; its deadlines count from when it came out', () => {
+    const planned = run.trays.find((t) => t.id === '1-1')!;
+    const out = '2026-01-04T08:31';
+    expect(planned.outAt).not.toBe(out);
+    const events = eventsWithCooling(run, [{ runTrayId: '1-1', ...entry({ outAt: out }) }], at('08:40'));
+    expect(kinds('1-1', events).filter((k) => /check|tray-out|cool|fridge/.test(k))).toEqual(['cool-to-70-by@10:31', 'fridge-41-by@14:31']);
+    // The other tray keeps its planned steps; every step's minute agrees with its time; in time order.
+    expect(kinds('1-2', events)).toEqual(kinds('1-2'));
+    for (const e of events) expect(e.minute).toBe((Date.parse(`${e.at}Z`) - Date.parse(`${run.start}Z`)) / 60_000);
+    expect(events.map((e) => e.minute)).toEqual([...events.map((e) => e.minute)].sort((a, b) => a - b));
+  });
+
+  it('a tray at 70 °F keeps only the 41 °F deadline; cooled or thrown away, none', () => {
+    const r = (over: Partial<CoolingEntry>) => ({ runTrayId: '1-1', ...entry({ outAt: at('08:40'), ...over }) });
+    const at70 = eventsWithCooling(run, [r({ readings: [{ at: at('10:00'), tempF: 65 }] })], at('10:05'));
+    expect(kinds('1-1', at70).filter((k) => k.startsWith('cool') || k.startsWith('fridge'))).toEqual(['fridge-41-by@14:40']);
+    const cooled = eventsWithCooling(run, [r({ readings: [{ at: at('10:00'), tempF: 65 }, { at: at('13:00'), tempF: 40 }] })], at('13:05'));
+    expect(kinds('1-1', cooled).filter((k) => /cool|fridge|check|tray-out/.test(k))).toEqual([]);
+    const gone = eventsWithCooling(run, [r({ discarded: true })], at('10:05'));
+    expect(kinds('1-1', gone).filter((k) => /cool|fridge|check|tray-out/.test(k))).toEqual([]);
+  });
+});
