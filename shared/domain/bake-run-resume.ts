@@ -16,20 +16,34 @@ export interface BakeRunDone {
   trays: BakeTrayPlan[];
   /** Those trays' own steps: hands-on, in, check, out and the cooling deadlines. */
   events: BakeEvent[];
-  /** The ovens at a set point at `from` (by name, °F): the rest starts them there instead of preheating them. */
+  /** The ovens on at `from` (by name, °F, `ovensAt`): the rest starts them there instead of preheating them. */
   ovenF?: Record<string, number>;
 }
 
 /**
- * The ovens of a plan that are at a set point at local time `at` (ready, and not yet past the last tray of that set
- * point), with that set point. An oven changing temperature then, or done with its trays, is left out (its
- * temperature is not known: the rest plans it from the kitchen's temperature).
+ * The ovens of a plan that are on at local time `at`, with their temperature then (°F): at a set point (ready, up to
+ * the last tray of it, or waiting between two set points at the earlier one), or part-way through a preheat or a
+ * change, where the temperature is read off the same straight line the plan drew (from the earlier set point, the
+ * temperature the oven was on at, or the kitchen's `ambientF` for a preheat, to the new one between its change and
+ * ready times), rounded to a whole degree. An oven done with its last set point is left out (switched off or
+ * cooling: the rest plans it from the kitchen's temperature).
  */
-export function ovensAt(run: Pick<BakeRunResult, 'ovens'>, at: string): Record<string, number> {
+export function ovensAt(run: Pick<BakeRunResult, 'ovens'>, at: string, ambientF = 70): Record<string, number> {
   const out: Record<string, number> = {};
   for (const o of run.ovens) {
-    const sp = o.setPoints.find((s) => s.readyAt <= at && at <= s.endAt);
-    if (sp) out[o.name] = sp.tempF;
+    o.setPoints.forEach((sp, k) => {
+      const before = k === 0 ? sp.fromF ?? ambientF : o.setPoints[k - 1].tempF;
+      const next = o.setPoints[k + 1];
+      // Minutes from `at` to each of the set point's times (negative: already past).
+      const [change, ready, end] = [sp.changeAt, sp.readyAt, sp.endAt].map((t) => minutesBetween(at, t));
+      const nextChange = next ? minutesBetween(at, next.changeAt) : null;
+      if (ready <= 0 && (end >= 0 || (nextChange !== null && nextChange > 0))) out[o.name] = sp.tempF;
+      else if (change <= 0 && ready > 0) {
+        // Part of the way from `before` to the set point, as far along as the time is.
+        const part = new Decimal(-change).dividedBy(ready - change);
+        out[o.name] = new Decimal(sp.tempF).minus(before).times(part).plus(before).toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toNumber();
+      }
+    });
   }
   return out;
 }

@@ -324,7 +324,8 @@ export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: n
     const inRun = new Set(current.run.trays.map((t) => t.id));
     const unknown = v.out.filter((id) => !inRun.has(id));
     if (unknown.length) throw ValidationError.field('out', `No tray ${unknown.join(', ')} in this run.`);
-    // The ovens that work and are at a set point at `from` in the plan the kitchen followed start the rest there.
+    // The ovens that work and are on at `from` in the plan the kitchen followed (at a set point, or part-way through a
+    // preheat or change) start the rest at their temperature then.
     const working = new Set(ovens.filter((o) => chosen.includes(o.id)).map((o) => o.name));
     const ovenF = Object.fromEntries(Object.entries(ovensAt(current.run, v.from)).filter(([name]) => working.has(name)));
     const ids = [...new Set(v.out)];

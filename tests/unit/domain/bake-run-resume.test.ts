@@ -112,11 +112,39 @@ describe('planning the rest of a prep day again', () => {
     const sp = left.setPoints[0];
     expect(ovensAt(whole, sp.readyAt)).toMatchObject({ [left.name]: sp.tempF });
     expect(ovensAt(whole, sp.endAt)).toMatchObject({ [left.name]: sp.tempF });
-    // Before it is ready (preheating or changing) its temperature is not known.
-    if (sp.changeMinute < sp.readyMinute) expect(ovensAt(whole, addLocalMinutes(sp.readyAt, -1))[left.name]).toBeUndefined();
+    // Before it is ready (preheating or changing) it is on its way there: below the set point, above the kitchen.
+    if (sp.changeMinute < sp.readyMinute) {
+      const warming = ovensAt(whole, addLocalMinutes(sp.readyAt, -1))[left.name];
+      expect(warming).toBeGreaterThan(70);
+      expect(warming).toBeLessThan(sp.tempF);
+    }
     // Past its last set point it is done (switched off or cooling): not counted as on.
     const last = left.setPoints[left.setPoints.length - 1];
     expect(ovensAt(whole, addLocalMinutes(last.endAt, 1))[left.name]).toBeUndefined();
+  });
+
+  it('reads an oven part-way through a preheat or a change off the plan’s straight line (worked by hand)', () => {
+    // One oven heating 25 °F a minute from a 70 °F kitchen: 350 °F takes ceil(280 / 25) = 12 minutes (08:00–08:12);
+    // raising 350 → 425 °F takes 75 / 25 = 3 minutes. Made-up kitchen numbers (common practice, no source).
+    const one = planBakeRun({
+      start: '2026-01-04T08:00',
+      cooks: 1,
+      ambientF: 70,
+      ovens: [oven('Left')],
+      trays: [{ ...tray('slab', 350, 14), handsOnMinutes: 0 }, { ...tray('radish', 425, 14), handsOnMinutes: 0 }],
+      rules: { crowdingPerExtraTray: 0 },
+    });
+    const [low, high] = one.ovens[0].setPoints;
+    expect([low.tempF, low.changeAt, low.readyAt]).toEqual([350, '2026-01-04T08:00', '2026-01-04T08:12']);
+    // Six minutes into the preheat: 70 + 280 × 6 / 12 = 210 °F.
+    expect(ovensAt(one, '2026-01-04T08:06')).toEqual({ Left: 210 });
+    expect(high.tempF).toBe(425);
+    expect(minutesBetween(high.changeAt, high.readyAt)).toBe(3);
+    // One minute into the change: 350 + 75 × 1 / 3 = 375 °F; two minutes: 400 °F.
+    expect(ovensAt(one, addLocalMinutes(high.changeAt, 1))).toEqual({ Left: 375 });
+    expect(ovensAt(one, addLocalMinutes(high.changeAt, 2))).toEqual({ Left: 400 });
+    // A warmer kitchen preheats from higher: 90 + 260 × 6 / 12 = 220 °F.
+    expect(ovensAt(one, '2026-01-04T08:06', 90)).toEqual({ Left: 220 });
   });
 
   it('says which ovens start the rest hot', () => {

@@ -339,7 +339,7 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
               setForm((f) => ({ ...f, from: e.target.value }));
             }}
             error={fieldErrors.from?.[0]}
-            hint="An oven still at its set point then starts from it; any other is planned from cold."
+            hint="An oven still on then starts from where the plan has it (at its set point, or part-way through warming or cooling); one done with its trays is planned from cold."
             className="w-44"
           />
         ) : (
