@@ -584,5 +584,31 @@ describe('planning the rest of the day again part-way through', () => {
     const again = await send({ out: [first.id], outAt: { [first.id]: '2026-01-04T08:41' }, version: 2 }).expect(200);
     expect(again.body.run.trays.find((t: PlannedTray) => t.id === first.id).outAt).toBe('2026-01-04T08:41');
   });
+
+  it('a tray the cooling record has out at another time keeps that time when the rest is planned again', async () => {
+    const { assistant, week, first, ovens } = await twoOvenDay();
+    const ovenIds = ovens.map((o) => o.id);
+    // Written down as out at 08:33, four minutes before its planned 08:37 (taken out early: it was done).
+    await assistant.agent.put(`/api/weeks/${week.id}/bake-run/cooling/${first.id}`).send({ outAt: '2026-01-04T08:33' }).expect(200);
+    const planned = await assistant.agent
+      .put(`/api/weeks/${week.id}/bake-run/kitchen`)
+      .send({ cooks: 1, ovenIds, out: [first.id], from: '2026-01-04T08:50', version: 1 })
+      .expect(200);
+    // Its deadlines run from 08:33 (FDA Food Code §3-501.14: 2 h to 70 °F, 6 h to 41 °F), not from the planned 08:37.
+    expect(planned.body.run.trays.find((t: PlannedTray) => t.id === first.id)).toMatchObject({ inAt: '2026-01-04T08:12', outAt: '2026-01-04T08:33' });
+    const deadlines = planned.body.run.events
+      .filter((e: { trayId: string; kind: string }) => e.trayId === first.id && /cool-to|fridge/.test(e.kind))
+      .map((e: { kind: string; at: string }) => [e.kind, e.at.slice(11)]);
+    expect(deadlines).toEqual([
+      ['cool-to-70-by', '10:33'],
+      ['fridge-41-by', '14:33'],
+    ]);
+    // A time given with the change wins over the record's.
+    const given = await assistant.agent
+      .put(`/api/weeks/${week.id}/bake-run/kitchen`)
+      .send({ cooks: 1, ovenIds, out: [first.id], from: '2026-01-04T08:50', outAt: { [first.id]: '2026-01-04T08:35' }, version: 2 })
+      .expect(200);
+    expect(given.body.run.trays.find((t: PlannedTray) => t.id === first.id).outAt).toBe('2026-01-04T08:35');
+  });
 });
 

@@ -21,7 +21,7 @@ import { datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
 import { Tray } from '../trays/tray.entity.js';
-import { BakeRunSetting, BakeRule, type IBakeRule, type IBakeRunSetting } from './bake-run.entity.js';
+import { BakeRunSetting, BakeRule, CoolingRecord, type IBakeRule, type IBakeRunSetting } from './bake-run.entity.js';
 import { loadBakeRules, loadOvens, ovenInput, presentOven } from './bake-setup.service.js';
 
 const num = (v: string | number): number => new Decimal(v).toNumber();
@@ -301,7 +301,8 @@ export function moveWeekBakeRunStart(em: EntityManager, actor: Actor, weekId: nu
  * assistant); the start and hands-on minutes stay. Every oven of the workspace is stored as "every oven".
  *
  * Part-way through the day, `out` names the trays already out of the oven: they are kept as the plan the kitchen
- * followed had them (read here, before the change), and the rest is planned from `from`. `out: []` plans the whole
+ * followed had them (read here, before the change), at the time out `outAt` gives or the cooling record has, and the
+ * rest is planned from `from`. `out: []` plans the whole
  * day from its start again; without `out`, what was said before stays.
  */
 export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: number, v: BakeRunKitchenValues): Promise<WeekBakeRunDto> {
@@ -336,6 +337,12 @@ export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: n
       if (at.slice(0, 10) !== prepDate) throw ValidationError.field(`outAt.${id}`, `It came out on the prep day, ${longDate(prepDate, datesOf(actor))}: change the time only.`);
       if (at < tray.inAt) throw ValidationError.field(`outAt.${id}`, `${tray.name} went in at ${tray.inAt.slice(11)}: it came out after that.`);
       kept = movedOut(kept, id, at);
+    }
+    // A tray written down in the cooling record as out at another time keeps that time (a time given here wins).
+    const records = await em.find(CoolingRecord, { week: weekId, prepDate, runTrayId: { $in: ids } });
+    for (const r of records) {
+      const tray = kept.trays.find((t) => t.id === r.runTrayId);
+      if (tray && v.outAt?.[r.runTrayId] === undefined && r.outAt >= tray.inAt) kept = movedOut(kept, r.runTrayId, r.outAt);
     }
     return { ...change, done: { from: v.from, ...kept, ovenF } };
   });

@@ -309,7 +309,10 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
           {form.out.length > 0 && (
             <details className="mt-1" open={Object.keys(fieldErrors).some((k) => k.startsWith('outAt.')) || undefined}>
               <summary className="min-h-11 cursor-pointer py-2">A tray came out at another time?</summary>
-              <p className="text-sm text-ink-soft">Its cooling deadlines then count from when it really came out.</p>
+              <p className="text-sm text-ink-soft">
+                Its cooling deadlines then count from when it really came out. A tray written down in the cooling record
+                keeps the time written there unless you give another here.
+              </p>
               <div className="mt-2 flex flex-col gap-2">
                 {trays
                   .filter((t) => form.out.includes(t.id))
