@@ -196,6 +196,17 @@ export interface GlanceDto {
   portionsShort: number;
   nextPrepDate: IsoDate | null;
   setup: SetupCountsDto;
+  /**
+   * The week's cooling record where it went wrong, judged on its readings (shared/domain/cooling.ts): trays thrown
+   * away (their portions are still counted as baked until the coach changes the tray counts or the board) and trays
+   * whose readings missed a Food Code deadline.
+   */
+  cooling: { thrownAway: CoolingTrayDto[]; missed: CoolingTrayDto[] };
+}
+
+export interface CoolingTrayDto {
+  trayName: string;
+  prepDate: IsoDate;
 }
 
 /** What a client sees: their published plates. */

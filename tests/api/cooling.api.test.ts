@@ -110,6 +110,20 @@ describe('the cooling record of a prep day', () => {
     await assistant.agent.delete(`${base}/${tray.id}-1?version=1`).expect(404);
   });
 
+  it('the coach’s glance names the trays thrown away and those whose readings missed a deadline', async () => {
+    const { assistant, coach, tray, base } = await twoTrayWeek();
+    const today = '2026-01-05';
+    expect((await coach.agent.get(`/api/weeks/glance?today=${today}`).expect(200)).body.cooling).toEqual({ thrownAway: [], missed: [] });
+    await assistant.agent.put(`${base}/${tray.id}-1`).send({ outAt: '2026-01-04T10:00', discarded: true }).expect(200);
+    // 75 °F at 12:30, past 12:10 (2 h after 10:10): FDA Food Code §3-501.14's first stage is missed on paper.
+    await assistant.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:10', readings: [{ at: '2026-01-04T12:30', tempF: 75 }] }).expect(200);
+    const glance = await coach.agent.get(`/api/weeks/glance?today=${today}`).expect(200);
+    expect(glance.body.cooling).toEqual({
+      thrownAway: [{ trayName: `${tray.name} (1/2)`, prepDate: '2026-01-04' }],
+      missed: [{ trayName: `${tray.name} (2/2)`, prepDate: '2026-01-04' }],
+    });
+  });
+
   it('a record outlives the week’s tray count going down, and goes with the week', async () => {
     const { coach, assistant, tray, week, base } = await twoTrayWeek();
     await assistant.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:10' }).expect(200);

@@ -553,7 +553,16 @@ describe('publishing and the client view', () => {
     // workspace has none of them.
     expect(glance.body.setup).toEqual({ trays: 1, plates: 1, clients: 1, ovens: 0, weeks: 1 });
     const empty = await other.agent.get('/api/weeks/glance?today=2026-01-03').expect(200);
-    expect(empty.body).toEqual({ week: null, nextWeek: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup: { trays: 0, plates: 0, clients: 0, ovens: 0, weeks: 0 } });
+    expect(empty.body).toEqual({
+      week: null,
+      nextWeek: null,
+      warnings: 0,
+      blocks: 0,
+      portionsShort: 0,
+      nextPrepDate: null,
+      setup: { trays: 0, plates: 0, clients: 0, ovens: 0, weeks: 0 },
+      cooling: { thrownAway: [], missed: [] },
+    });
     // Nothing after this week yet; then a copy of it the week after, named with its state and plates.
     expect(glance.body.nextWeek).toBeNull();
     const copy = await coach.agent.post(`/api/weeks/${week.id}/copy`).send({ startDate: '2026-01-12', prepDate: '2026-01-11' }).expect(201);

@@ -49,6 +49,27 @@ describe('week glance', () => {
     expect(screen.getByText(/^Nothing planned after this week yet\./)).toBeTruthy();
   });
 
+  it('names the trays the cooling record has thrown away or past a deadline, with a link to that prep day’s record', async () => {
+    show(
+      glance({
+        cooling: {
+          thrownAway: [{ trayName: 'Egg slab (2/3)', prepDate: '2026-01-07' }],
+          missed: [{ trayName: 'Radish tray', prepDate: '2026-01-04' }],
+        },
+      }),
+    );
+    expect(await screen.findByText('Cooling record: 1 tray thrown away, 1 tray past a cooling deadline')).toBeTruthy();
+    const links = screen.getAllByRole('link', { name: 'cooling record' }).map((a) => a.getAttribute('href'));
+    expect(links).toEqual(['/weeks/7/bake-run?prepDate=2026-01-07', '/weeks/7/bake-run?prepDate=2026-01-04']);
+    expect(screen.getByText(/Egg slab \(2\/3\), prep .*: thrown away; its portions still count as baked/)).toBeTruthy();
+  });
+
+  it('says nothing of cooling when the record has no trouble', async () => {
+    show(glance({ cooling: { thrownAway: [], missed: [] } }));
+    await screen.findByText('2 warnings');
+    expect(screen.queryByText(/Cooling record/)).toBeNull();
+  });
+
   it('shows nothing when no week is planned', async () => {
     const fetch = show(glance({ week: null, nextPrepDate: null }));
     await vi.waitFor(() => expect(fetch).toHaveBeenCalled());

@@ -5,9 +5,37 @@ import { localToday } from '@/lib/dates';
 import { Card, ErrorState, Notice, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { agrees, counted } from '@/lib/words';
-import { nextPrepDayTitle } from '@/lib/dates';
+import { dayLabel, nextPrepDayTitle } from '@/lib/dates';
+import type { GlanceDto } from '@shared/schemas/weeks.schema';
 
-/** The coach's "this week at a glance": warnings, portions short, the next prep day. */
+/** Trays the cooling record has thrown away or past a deadline: the coach decides what to bake again or change. */
+function CoolingTrouble({ weekId, cooling }: { weekId: number; cooling: GlanceDto['cooling'] | undefined }) {
+  if (!cooling || cooling.thrownAway.length + cooling.missed.length === 0) return null;
+  const said = [
+    cooling.thrownAway.length ? `${counted(cooling.thrownAway.length, 'tray')} thrown away` : '',
+    cooling.missed.length ? `${counted(cooling.missed.length, 'tray')} past a cooling deadline` : '',
+  ].filter(Boolean);
+  const line = (t: GlanceDto['cooling']['missed'][number], what: string) => (
+    <li key={`${what}-${t.prepDate}-${t.trayName}`}>
+      {t.trayName}, prep {dayLabel(t.prepDate)}: {what} ·{' '}
+      <Link to={`${paths.bakeRun(weekId)}?prepDate=${t.prepDate}`} className="font-bold underline">
+        cooling record
+      </Link>
+    </li>
+  );
+  return (
+    <div className="mt-3">
+      <Notice tone="block" title={`Cooling record: ${said.join(', ')}`}>
+        <ul className="list-disc pl-4">
+          {cooling.thrownAway.map((t) => line(t, 'thrown away; its portions still count as baked until you change the tray counts or the board'))}
+          {cooling.missed.map((t) => line(t, 'its readings missed a Food Code deadline'))}
+        </ul>
+      </Notice>
+    </div>
+  );
+}
+
+/** The coach's "this week at a glance": warnings, portions short, the next prep day, cooling trouble. */
 export function WeekGlance() {
   const today = localToday();
   const q = useQuery(glanceQuery(today));
@@ -30,6 +58,7 @@ export function WeekGlance() {
         <Notice tone={g.portionsShort ? 'warn' : 'info'} title={g.portionsShort ? `${counted(g.portionsShort, 'portion')} short` : 'No portion short'} />
         <Notice tone="cold" title={g.nextPrepDate ? nextPrepDayTitle(g.nextPrepDate, today) : 'No prep day ahead'} />
       </div>
+      <CoolingTrouble weekId={g.week.id} cooling={g.cooling} />
       <p className="mt-3">
         {g.nextWeek ? (
           <>
