@@ -266,8 +266,11 @@ export function addSums(a: NutrientSums, b: NutrientSums): NutrientSums {
  * such whole numbers add exactly in floating point while the running total stays within 2^53, so the sum is the
  * exact decimal sum, the same Decimal a chain of `plus` gives (every such sum has at most 16 significant digits,
  * inside decimal.js's 20). Terms without it (more places, larger values, sums not from nutrientsForGrams) are added
- * as Decimals; a running total past SCALED_FLUSH moves into the Decimal part first.
+ * as Decimals at 60 significant digits (WIDE); a running total past SCALED_FLUSH moves there first. The total is
+ * the exact sum rounded once to decimal.js's 20 significant digits (half up): a chain of `plus` at 20 digits would
+ * round at every step, and a recipe of billions of grams with many decimal places could differ in its last digit.
  */
+const WIDE = Decimal.clone({ precision: 60 });
 const SCALED = Symbol('trayline.scaledSums');
 const SCALE_PLACES = 8;
 const SCALE = new Decimal(10).pow(SCALE_PLACES);
@@ -285,10 +288,11 @@ function scaledOf(s: NutrientSums): Scaled {
   return Object.freeze(out);
 }
 
-/** A running total: whole 10^-8 units per field (exact) plus a Decimal part for the terms that cannot be scaled. */
+/** A running total: whole 10^-8 units per field (exact) plus a wide Decimal part for the terms that cannot be scaled. */
 class ExactTotal {
   private readonly units = new Float64Array(SUM_KEYS.length);
-  private readonly rest: NutrientSums = zeroSums();
+  /** Per field, the Decimal part at WIDE's precision (null: nothing added there yet, the field stays the shared zero). */
+  private readonly rest: (Decimal | null)[] = SUM_KEYS.map(() => null);
 
   add(b: NutrientSums): void {
     const scaled = (b as NutrientSums & { [SCALED]?: Scaled })[SCALED];
@@ -300,20 +304,28 @@ class ExactTotal {
         if (Math.abs(this.units[i]) > SCALED_FLUSH) this.flush(i);
         this.units[i] += u;
       } else if (b[k] !== ZERO) {
-        this.rest[k] = this.rest[k] === ZERO ? b[k] : this.rest[k].plus(b[k]);
+        const r = this.rest[i];
+        this.rest[i] = r === null ? new WIDE(b[k]) : r.plus(b[k]);
       }
     }
   }
 
   private flush(i: number): void {
-    const k = SUM_KEYS[i];
-    this.rest[k] = this.rest[k].plus(new Decimal(this.units[i]).div(SCALE));
+    const part = new WIDE(this.units[i]).div(SCALE);
+    const r = this.rest[i];
+    this.rest[i] = r === null ? part : r.plus(part);
     this.units[i] = 0;
   }
 
   sums(): NutrientSums {
-    for (let i = 0; i < SUM_KEYS.length; i++) if (this.units[i] !== 0) this.flush(i);
-    return { ...this.rest };
+    const out = zeroSums() as Record<keyof NutrientSums, Decimal>;
+    for (let i = 0; i < SUM_KEYS.length; i++) {
+      if (this.units[i] !== 0) this.flush(i);
+      const r = this.rest[i];
+      // Back to decimal.js's own precision, rounded once (half up, its default).
+      if (r !== null) out[SUM_KEYS[i]] = new Decimal(r).toSignificantDigits(Decimal.precision, Decimal.ROUND_HALF_UP);
+    }
+    return out;
   }
 }
 

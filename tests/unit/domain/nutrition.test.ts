@@ -268,9 +268,12 @@ describe('recipe totals and portions', () => {
 });
 
 describe('recipe totals are exact decimal sums', () => {
-  // The reference: every line's product worked out here from the inputs' text with decimal.js (value × grams ÷ 100),
-  // added with decimal.js `plus`. The totals must equal it digit for digit, whether a line has few decimal places
-  // (added as whole 10^-8 units), many (added as Decimals) or is very large.
+  // The reference: every line's product worked out here from the inputs' text with decimal.js (value × grams ÷ 100)
+  // at 100 significant digits, added with `plus` at 100 digits (exact for these inputs), then rounded once to
+  // decimal.js's 20 significant digits, half up. The totals must equal it digit for digit, whether a line has few
+  // decimal places (added as whole 10^-8 units), many (added as Decimals) or is very large. (A reference added at 20
+  // digits rounds at every step: fast-check once found a 10^12-gram recipe whose last digit it got wrong.)
+  const Wide = Decimal.clone({ precision: 100 });
   const value = fc.stringMatching(/^(0|[1-9]\d{0,3})(\.\d{1,4})?$/);
   const per100g = fc.record({ kcal: value, fatG: value, proteinG: value, carbsG: value, sodiumMg: value });
   const grams = fc.oneof(
@@ -289,15 +292,27 @@ describe('recipe totals are exact decimal sums', () => {
         }));
         const r = computeRecipeExact(lines);
         for (const k of ['kcal', 'fatG', 'proteinG', 'carbsG', 'sodiumMg', 'massG'] as const) {
-          const want = ls.reduce(
-            (sum, l) => sum.plus(k === 'massG' ? new Decimal(l.grams) : new Decimal(l.facts[k]).times(l.grams).div(100)),
-            new Decimal(0),
-          );
+          const want = ls
+            .reduce((sum, l) => sum.plus(k === 'massG' ? new Wide(l.grams) : new Wide(l.facts[k]).times(l.grams).div(100)), new Wide(0))
+            .toSignificantDigits(20, Decimal.ROUND_HALF_UP);
           expect(`${k} ${r.total[k].toString()}`).toBe(`${k} ${want.toString()}`);
         }
       }),
       { numRuns: 300 },
     );
+  });
+
+  it('rounds the total once: two huge lines and two with many decimal places (the case fast-check found, worked by hand)', () => {
+    const food = (proteinG: string): NutritionIngredient => ({ name: 'food', per100g: { kcal: '0', fatG: '0', proteinG, carbsG: '0' } });
+    const r = computeRecipeExact([
+      { ingredient: food('3800'), amount: '5000000000', unit: 'g' },
+      { ingredient: food('0.0009'), amount: '1.04', unit: 'g' },
+      { ingredient: food('8800'), amount: '9500000000', unit: 'g' },
+      { ingredient: food('1.6'), amount: '1.000010', unit: 'g' },
+    ]);
+    // 190 000 000 000 + 0.000 009 36 + 836 000 000 000 + 0.016 000 16 = 1 026 000 000 000.016 009 52 exactly;
+    // to 20 significant digits, half up: 1 026 000 000 000.016 009 5 (adding at 20 digits in line order gives …096).
+    expect(r.total.proteinG.toString()).toBe('1026000000000.0160095');
   });
 
   it('a running total past 2^53 units of 10^-8 stays exact (worked example: 10 000 lines of 9 999.999 999 99 g)', () => {
