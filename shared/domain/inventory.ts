@@ -6,7 +6,9 @@
  * portion, a household of 1.5); the sum is rounded UP to whole portions per tray and prep date, since
  * a tray is cut into whole portions.
  *
- * Produced: tray count × portions per tray (from the cut plan), per prep date.
+ * Produced: tray count × portions per tray (from the cut plan), per prep date, less the trays thrown away (the
+ * cooling record's): their portions are not there to eat. The trays that cover a need count those thrown away too
+ * (the tray count that leaves enough once they are gone).
  *
  * With two prep dates a week, portions baked on the later date cannot cover plates before it, so the
  * counts are kept per prep date and a tray's `short` and `spare` are the sums over its prep dates
@@ -39,6 +41,8 @@ export interface TrayBatch {
   trayCount: number;
   /** Whole portions one tray is cut into (cut plan). */
   portionsPerTray: number;
+  /** Of those trays, how many were thrown away (0 when absent; at most the tray count). */
+  lostTrays?: number;
 }
 
 export interface InventoryInput {
@@ -60,12 +64,16 @@ export interface PortionTally {
 
 export interface PrepDateTally extends PortionTally {
   prepDate: IsoDate;
+  /** Trays thrown away on this prep date (not in `produced`). */
+  lostTrays: number;
   /** Whole trays that cover the need, or null when no cut plan is known for this tray. */
   traysToCover: number | null;
 }
 
 export interface TrayTally extends PortionTally {
   trayId: string;
+  /** Trays thrown away, over its prep dates. */
+  lostTrays: number;
   /** Sum of the per-prep-date proposals, or null when no cut plan is known. */
   traysToCover: number | null;
   byPrepDate: PrepDateTally[];
@@ -97,6 +105,8 @@ interface Bucket {
   /** Portions needed, as counts of each distinct exact (quantity × multiplier) product: summed once at the end. */
   needed: Map<Decimal, number>;
   produced: number;
+  /** Trays thrown away. */
+  lost: number;
   portionsPerTray: number | null;
 }
 
@@ -132,7 +142,7 @@ function bucketsByTray(input: InventoryInput): Map<string, Map<IsoDate, Bucket>>
     let byDate = trays.get(trayId);
     if (!byDate) trays.set(trayId, (byDate = new Map()));
     let b = byDate.get(prepDate);
-    if (!b) byDate.set(prepDate, (b = { needed: new Map(), produced: 0, portionsPerTray: null }));
+    if (!b) byDate.set(prepDate, (b = { needed: new Map(), produced: 0, lost: 0, portionsPerTray: null }));
     return b;
   };
   const product = productMemo();
@@ -149,8 +159,10 @@ function bucketsByTray(input: InventoryInput): Map<string, Map<IsoDate, Bucket>>
   for (const batch of input.batches) {
     const count = wholeCount(batch.trayCount, 'Tray count', 0);
     const perTray = wholeCount(batch.portionsPerTray, 'Portions per tray', 1);
+    const lost = Math.min(count, wholeCount(batch.lostTrays ?? 0, 'Trays thrown away', 0));
     const b = bucket(batch.trayId, batch.prepDate);
-    b.produced += count * perTray;
+    b.produced += (count - lost) * perTray;
+    b.lost += lost;
     b.portionsPerTray ??= perTray;
   }
   return trays;
@@ -177,7 +189,7 @@ export function portionCount(input: InventoryInput): TrayTally[] {
       .map(([prepDate, b]) => {
         const t = tally(neededExactOf(b), b.produced);
         const perTray = b.portionsPerTray ?? knownPerTray;
-        return { prepDate, ...t, traysToCover: perTray === null ? null : traysToCover(t.needed, perTray) };
+        return { prepDate, ...t, lostTrays: b.lost, traysToCover: perTray === null ? null : traysToCover(t.needed, perTray) + b.lost };
       });
     const sum = (pick: (t: PrepDateTally) => number) => byPrepDate.reduce((s, t) => s + pick(t), 0);
     result.push({
@@ -187,6 +199,7 @@ export function portionCount(input: InventoryInput): TrayTally[] {
       produced: sum((t) => t.produced),
       spare: sum((t) => t.spare),
       short: sum((t) => t.short),
+      lostTrays: sum((t) => t.lostTrays),
       traysToCover: knownPerTray === null ? null : sum((t) => t.traysToCover ?? 0),
       byPrepDate,
     });

@@ -86,6 +86,8 @@ export interface BoardBatch {
   trayId: number;
   prepDate: IsoDate;
   trayCount: number;
+  /** Of those, the trays the cooling record has thrown away (absent: none). */
+  lostTrays?: number;
 }
 
 export interface BoardInput {
@@ -290,6 +292,7 @@ export function computeBoard(input: BoardInput): BoardResult {
         prepDate: b.prepDate,
         trayCount: b.trayCount,
         portionsPerTray: input.trays.get(b.trayId)!.portionsPerTray!,
+        ...(b.lostTrays ? { lostTrays: b.lostTrays } : {}),
       })),
   });
 
@@ -311,7 +314,7 @@ export function coveringBatches(input: BoardInput): BoardBatch[] {
   }
   // Trays only in the batches (no cell needs them): 0.
   for (const b of input.batches) {
-    if (!out.some((o) => o.trayId === b.trayId && o.prepDate === b.prepDate)) out.push({ ...b, trayCount: 0 });
+    if (!out.some((o) => o.trayId === b.trayId && o.prepDate === b.prepDate)) out.push({ trayId: b.trayId, prepDate: b.prepDate, trayCount: 0 });
   }
   return out;
 }

@@ -198,8 +198,8 @@ export interface GlanceDto {
   setup: SetupCountsDto;
   /**
    * The week's cooling record where it went wrong, judged on its readings (shared/domain/cooling.ts): trays thrown
-   * away (their portions are still counted as baked until the coach changes the tray counts or the board) and trays
-   * whose readings missed a Food Code deadline.
+   * away (their portions no longer count as baked: see `portionsShort`) and trays whose readings missed a Food Code
+   * deadline.
    */
   cooling: { thrownAway: CoolingTrayDto[]; missed: CoolingTrayDto[] };
 }

@@ -124,6 +124,22 @@ describe('the cooling record of a prep day', () => {
     });
   });
 
+  it('a tray thrown away no longer counts as baked on the week board', async () => {
+    const { assistant, coach, tray, week, base } = await twoTrayWeek();
+    type Tally = { trayId: string; produced: number; lostTrays: number; byPrepDate: { prepDate: string; produced: number; lostTrays: number }[] };
+    const inventory = async () => ((await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body.inventory as Tally[]).find((t) => t.trayId === String(tray.id))!;
+    const before = await inventory();
+    expect(before.lostTrays).toBe(0);
+    const perTray = before.produced / 2;
+    expect(perTray).toBeGreaterThan(0);
+    await assistant.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:10', discarded: true }).expect(200);
+    // Two trays baked, one thrown away: one tray's portions left.
+    expect(await inventory()).toMatchObject({ produced: perTray, lostTrays: 1, byPrepDate: [{ prepDate: '2026-01-04', produced: perTray, lostTrays: 1 }] });
+    // Not thrown away after all: both count again.
+    await assistant.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:10', discarded: false, version: 1 }).expect(200);
+    expect(await inventory()).toMatchObject({ produced: 2 * perTray, lostTrays: 0 });
+  });
+
   it('a record outlives the week’s tray count going down, and goes with the week', async () => {
     const { coach, assistant, tray, week, base } = await twoTrayWeek();
     await assistant.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:10' }).expect(200);

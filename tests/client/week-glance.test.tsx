@@ -61,7 +61,7 @@ describe('week glance', () => {
     expect(await screen.findByText('Cooling record: 1 tray thrown away, 1 tray past a cooling deadline')).toBeTruthy();
     const links = screen.getAllByRole('link', { name: 'cooling record' }).map((a) => a.getAttribute('href'));
     expect(links).toEqual(['/weeks/7/bake-run?prepDate=2026-01-07', '/weeks/7/bake-run?prepDate=2026-01-04']);
-    expect(screen.getByText(/Egg slab \(2\/3\), prep .*: thrown away; its portions still count as baked/)).toBeTruthy();
+    expect(screen.getByText(/Egg slab \(2\/3\), prep .*: thrown away; its portions no longer count as baked/)).toBeTruthy();
   });
 
   it('says nothing of cooling when the record has no trouble', async () => {

@@ -104,18 +104,25 @@ export interface BoardTrayRow {
   tray: { id: number };
   prepDate: IsoDate;
   trayCount: number;
+  /** Of those trays, the ones the prep day's cooling record has thrown away (still in the run: number ≤ count). */
+  lostTrays: number;
 }
 
 async function loadWeekTrayRows(em: EntityManager, workspaceId: number, weekId: number): Promise<BoardTrayRow[]> {
-  const rows = await preparedRows<{ id: number; tray: number; prepDate: IsoDate; trayCount: number }>(
+  const rows = await preparedRows<{ id: number; tray: number; prepDate: IsoDate; trayCount: number; lostTrays: number }>(
     em,
     'trayline_week_trays',
-    `select t.id, t.tray_id as tray, t.prep_date as "prepDate", t.tray_count as "trayCount"
+    // Thrown away: cooling records of this tray's run ids ("<tray id>-<k>") on that prep date, k within the count.
+    `select t.id, t.tray_id as tray, t.prep_date as "prepDate", t.tray_count as "trayCount",
+            (select count(*) from cooling_record c
+              where c.week_id = t.week_id and c.prep_date = t.prep_date and c.discarded
+                and split_part(c.run_tray_id, '-', 1) = t.tray_id::text
+                and split_part(c.run_tray_id, '-', 2)::int <= t.tray_count)::int as "lostTrays"
        from week_tray t join week w on w.id = t.week_id
       where t.week_id = $1 and w.workspace_id = $2 order by t.id asc`,
     [weekId, workspaceId],
   );
-  return rows.map((r) => ({ id: r.id, tray: { id: r.tray }, prepDate: r.prepDate, trayCount: r.trayCount }));
+  return rows.map((r) => ({ id: r.id, tray: { id: r.tray }, prepDate: r.prepDate, trayCount: r.trayCount, lostTrays: r.lostTrays }));
 }
 
 /** The week fields a board reads (the Week entity, or a plain row read with the board). */
@@ -243,7 +250,7 @@ export function boardInput(d: BoardData, cells: readonly BoardCellDto[] = d.cell
       storage: c.storage,
       allergenOverrides: c.allergenOverrides,
     })),
-    batches: d.trays.map((t) => ({ trayId: t.tray.id, prepDate: t.prepDate, trayCount: t.trayCount })),
+    batches: d.trays.map((t) => ({ trayId: t.tray.id, prepDate: t.prepDate, trayCount: t.trayCount, ...(t.lostTrays ? { lostTrays: t.lostTrays } : {}) })),
   };
 }
 

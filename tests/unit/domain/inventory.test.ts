@@ -89,6 +89,24 @@ describe('portionCount: one prep date', () => {
   });
 });
 
+describe('portionCount: trays thrown away', () => {
+  const sunday = '2025-01-05';
+  // 40 portions of one tray needed (20 days × 2 portions), 3 trays of 16 baked, one thrown away (cooling missed).
+  const cells: BoardCell[] = Array.from({ length: 20 }, () => ({ date: '2025-01-06', householdMultiplier: 1, portions: [{ trayId: 'egg', quantity: 2 }] }));
+
+  it('3 trays of 16 with 1 thrown away: 2 × 16 = 32 baked for 40 needed, 8 short; covering takes ⌈40 / 16⌉ + 1 = 4 trays', () => {
+    const [egg] = portionCount({ prepDates: [sunday], cells, batches: [{ trayId: 'egg', prepDate: sunday, trayCount: 3, portionsPerTray: 16, lostTrays: 1 }] });
+    expect(egg).toMatchObject({ needed: 40, produced: 32, short: 8, spare: 0, lostTrays: 1, traysToCover: 4 });
+    expect(egg.byPrepDate[0]).toMatchObject({ produced: 32, short: 8, lostTrays: 1, traysToCover: 4 });
+  });
+
+  it('never counts more trays thrown away than were baked, nor fewer than none', () => {
+    const [egg] = portionCount({ prepDates: [sunday], cells, batches: [{ trayId: 'egg', prepDate: sunday, trayCount: 1, portionsPerTray: 16, lostTrays: 3 }] });
+    expect(egg).toMatchObject({ produced: 0, short: 40, lostTrays: 1 });
+    expect(() => portionCount({ prepDates: [sunday], cells, batches: [{ trayId: 'egg', prepDate: sunday, trayCount: 1, portionsPerTray: 16, lostTrays: -1 }] })).toThrow(RangeError);
+  });
+});
+
 describe('portionCount: two prep dates (Sunday and Wednesday)', () => {
   const prepDates = ['2025-01-08', '2025-01-05'];
   const cell = (date: string, quantity: number, prepDate?: string): BoardCell => ({
@@ -110,8 +128,8 @@ describe('portionCount: two prep dates (Sunday and Wednesday)', () => {
 
   it('splits needs by prep date: Sunday 4 cells × 2 = 8, Wednesday 2 cells × 2 = 4', () => {
     expect(egg.byPrepDate).toEqual([
-      { prepDate: '2025-01-05', neededExact: 8, needed: 8, produced: 6, spare: 0, short: 2, traysToCover: 2 },
-      { prepDate: '2025-01-08', neededExact: 4, needed: 4, produced: 6, spare: 2, short: 0, traysToCover: 1 },
+      { prepDate: '2025-01-05', neededExact: 8, needed: 8, produced: 6, spare: 0, short: 2, lostTrays: 0, traysToCover: 2 },
+      { prepDate: '2025-01-08', neededExact: 4, needed: 4, produced: 6, spare: 2, short: 0, lostTrays: 0, traysToCover: 1 },
     ]);
   });
 

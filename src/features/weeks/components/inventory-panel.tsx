@@ -40,7 +40,10 @@ export function portionSummary(board: Pick<BoardDto, 'inventory' | 'trays'>): { 
   return { tone: 'info', title: 'Every portion is baked', detail: spare ? `${counted(spare, 'spare portion')} from cutting whole trays.` : undefined };
 }
 
-/** Portions needed (cells × household) against portions baked (tray counts × cut plan), per tray and prep day. */
+/**
+ * Portions needed (cells × household) against portions baked (tray counts × cut plan, less the trays the cooling
+ * record has thrown away), per tray and prep day.
+ */
 export function InventoryPanel({ board, busy, onCover, onSave }: { board: BoardDto; busy: boolean; onCover: () => void; onSave: (trays: PutTraysInput['trays']) => void }) {
   const names = new Map(board.trays.map((t) => [t.trayId, t.name]));
   for (const p of board.plates) for (const t of p.trays) names.set(t.trayId, t.trayName);
@@ -85,7 +88,10 @@ export function InventoryPanel({ board, busy, onCover, onSave }: { board: BoardD
                       onChange={(e) => setDraft({ ...draft, [key]: e.target.value })}
                     />
                   </td>
-                  <td className="num text-right">{r.produced}</td>
+                  <td className="num text-right">
+                    {r.produced}
+                    {r.lostTrays > 0 && <span className="block text-xs text-signal-700">{counted(r.lostTrays, 'tray')} thrown away</span>}
+                  </td>
                   <td className={`num text-right font-bold ${r.short ? 'text-signal-700' : 'text-herb-700'}`}>
                     {r.short ? `⚠ ${r.short} short` : `${r.spare} spare`}
                   </td>

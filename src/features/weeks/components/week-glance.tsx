@@ -27,7 +27,7 @@ function CoolingTrouble({ weekId, cooling }: { weekId: number; cooling: GlanceDt
     <div className="mt-3">
       <Notice tone="block" title={`Cooling record: ${said.join(', ')}`}>
         <ul className="list-disc pl-4">
-          {cooling.thrownAway.map((t) => line(t, 'thrown away; its portions still count as baked until you change the tray counts or the board'))}
+          {cooling.thrownAway.map((t) => line(t, 'thrown away; its portions no longer count as baked'))}
           {cooling.missed.map((t) => line(t, 'its readings missed a Food Code deadline'))}
         </ul>
       </Notice>
