@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import { monitorEventLoopDelay } from 'node:perf_hooks';
 import { testApp } from '../support/test-app.js';
-import { coachWorkspace, makeOven, makeTray, makeWeek, member, ovenInput } from '../support/factories.js';
+import { coachWorkspace, makeOven, makeWeek, member, ovenInput, twoTrayWeek as twoTrayWeekOf } from '../support/factories.js';
 import { sql } from '../support/db.js';
 import { DEFAULT_BAKE_RULES } from '@shared/domain/bake-rules-defaults.js';
 
@@ -224,17 +224,7 @@ describe('ovens', () => {
  * A workspace with an assistant and a week baking two of the factory tray on its prep day, 2026-01-04 (egg-slab,
  * 350 °F, 25–30 min, its own values; the default egg-slab rule: hands-on 10 min).
  */
-async function twoTrayWeek() {
-  const coach = await coachWorkspace(app);
-  const assistant = await member(app, coach, 'assistant');
-  const tray = await makeTray(coach);
-  const { week } = await makeWeek(coach);
-  await coach.agent
-    .put(`/api/weeks/${week.id}/trays`)
-    .send({ version: week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 2 }] })
-    .expect(200);
-  return { coach, assistant, tray, week };
-}
+const twoTrayWeek = () => twoTrayWeekOf(app);
 
 describe('the bake run of a prep week', () => {
   it('plans the week’s tray counts in the workspace ovens; settings with a version; PDF and iCal', async () => {

@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import { testApp } from '../support/test-app.js';
-import { coachWorkspace, makeTray, makeWeek, member } from '../support/factories.js';
+import { coachWorkspace, member, twoTrayWeek as twoTrayWeekOf } from '../support/factories.js';
 import { sql } from '../support/db.js';
 
 let app: Express;
@@ -9,18 +9,11 @@ beforeAll(async () => {
   app = (await testApp()).app;
 });
 
-/** A week whose first prep day (Sun Jan 4, 2026) bakes two trays of one base tray: run ids "<id>-1" and "<id>-2". */
+/** A week whose first prep day (Sun Jan 4, 2026) bakes two trays of one base tray, a client, and its record's path. */
 async function twoTrayWeek() {
-  const coach = await coachWorkspace(app);
-  const assistant = await member(app, coach, 'assistant');
-  const client = await member(app, coach, 'client');
-  const tray = await makeTray(coach);
-  const { week } = await makeWeek(coach);
-  await coach.agent
-    .put(`/api/weeks/${week.id}/trays`)
-    .send({ version: week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 2 }] })
-    .expect(200);
-  return { coach, assistant, client, tray, week, base: `/api/weeks/${week.id}/bake-run/cooling` };
+  const day = await twoTrayWeekOf(app);
+  const client = await member(app, day.coach, 'client');
+  return { ...day, client, base: `/api/weeks/${day.week.id}/bake-run/cooling` };
 }
 
 describe('the cooling record of a prep day', () => {

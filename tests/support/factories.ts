@@ -164,3 +164,19 @@ export async function makeOven(coach: Member, overrides: Record<string, unknown>
   if (res.status !== 201) throw new Error(`makeOven: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body as { id: number; version: number; name: string } & Record<string, unknown>;
 }
+
+/**
+ * A coach's workspace with an assistant and a week whose first prep day (Sun Jan 4, 2026) bakes two trays of one
+ * base tray: their ids in the run are "<tray id>-1" and "<tray id>-2".
+ */
+export async function twoTrayWeek(app: Express) {
+  const coach = await coachWorkspace(app);
+  const assistant = await member(app, coach, 'assistant');
+  const tray = await makeTray(coach);
+  const { week } = await makeWeek(coach);
+  await coach.agent
+    .put(`/api/weeks/${week.id}/trays`)
+    .send({ version: week.version, trays: [{ trayId: tray.id, prepDate: '2026-01-04', trayCount: 2 }] })
+    .expect(200);
+  return { coach, assistant, tray, week };
+}
