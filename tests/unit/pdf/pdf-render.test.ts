@@ -140,12 +140,16 @@ describe('shopping list PDF', () => {
 });
 
 describe('bake-run sheet PDF', () => {
+  // One invented oven on an invented prep day (common practice rates, no source).
+  const oneOvenDay = {
+    start: '2026-12-06T08:00',
+    cooks: 1,
+    ambientF: 70,
+    ovens: [{ name: 'Left oven', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 10, maxF: 500 }],
+  };
   it('reads back ovens, trays, the timeline and the cooling cautions', async () => {
     const run = planBakeRun({
-      start: '2026-12-06T08:00',
-      cooks: 1,
-      ambientF: 70,
-      ovens: [{ name: 'Left oven', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 10, maxF: 500 }],
+      ...oneOvenDay,
       trays: [
         { id: 'fr', name: 'Spinach frittata', tempF: 350, minMinutes: 25, maxMinutes: 30, handsOnMinutes: 10, minInternalF: 160 },
         { id: 'ch', name: 'Chicken thighs', tempF: 425, minMinutes: 35, maxMinutes: 40, handsOnMinutes: 10, minInternalF: 165 },
@@ -162,10 +166,7 @@ describe('bake-run sheet PDF', () => {
 
   it('carries the cooling record: what was written down, judged on its readings, and lines to write on for the rest', async () => {
     const run = planBakeRun({
-      start: '2026-12-06T08:00',
-      cooks: 1,
-      ambientF: 70,
-      ovens: [{ name: 'Left oven', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 10, maxF: 500 }],
+      ...oneOvenDay,
       trays: [
         { id: 'a', name: 'Egg slab', tempF: 350, minMinutes: 25, maxMinutes: 30, handsOnMinutes: 0 },
         { id: 'b', name: 'Radish tray', tempF: 350, minMinutes: 25, maxMinutes: 30, handsOnMinutes: 0 },
