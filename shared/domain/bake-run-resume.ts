@@ -1,7 +1,7 @@
 import Decimal from 'decimal.js';
 import type { BakeEvent, BakeOvenPlan, BakeRunResult, BakeRunRules, BakeTrayPlan } from './bake-run-types.js';
 import { BAKE_RUN_CAUTIONS, KIND_ORDER } from './bake-run.js';
-import { addLocalMinutes, parseLocalMinutes } from './bake-run-time.js';
+import { addLocalMinutes, requireLocalMinutes } from './bake-run-time.js';
 import { toCelsiusRounded } from './temperature.js';
 
 /**
@@ -80,10 +80,7 @@ export function movedOut(done: Pick<BakeRunDone, 'trays' | 'events'>, id: string
 
 /** Whole minutes from one local reading to another. */
 export function minutesBetween(from: string, to: string): number {
-  const a = parseLocalMinutes(from);
-  const b = parseLocalMinutes(to);
-  if (a === null || b === null) throw new RangeError(`Not a local date-time "YYYY-MM-DDTHH:mm": ${a === null ? from : to}`);
-  return b - a;
+  return requireLocalMinutes(to) - requireLocalMinutes(from);
 }
 
 function retimeTray(t: BakeTrayPlan, start: string, ovenIndex: number): BakeTrayPlan {

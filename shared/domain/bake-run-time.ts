@@ -35,9 +35,14 @@ export function formatLocalMinutes(minutes: number): string {
   );
 }
 
+/** Minutes since 1970-01-01T00:00 of a local reading; throws on one that is not a valid local date-time. */
+export function requireLocalMinutes(text: string): number {
+  const m = parseLocalMinutes(text);
+  if (m === null) throw new RangeError(`Not a local date-time "YYYY-MM-DDTHH:mm": ${text}`);
+  return m;
+}
+
 /** `start` plus whole minutes, as a local reading. Throws on an invalid start. */
 export function addLocalMinutes(start: string, minutes: number): string {
-  const base = parseLocalMinutes(start);
-  if (base === null) throw new RangeError(`Not a local date-time "YYYY-MM-DDTHH:mm": ${start}`);
-  return formatLocalMinutes(base + minutes);
+  return formatLocalMinutes(requireLocalMinutes(start) + minutes);
 }

@@ -12,7 +12,7 @@
  * 41 °F within 6 hours is thrown away. The local food code decides; the words say so.
  */
 import type { BakeEvent, BakeRunResult } from './bake-run-types';
-import { addLocalMinutes, parseLocalMinutes } from './bake-run-time';
+import { addLocalMinutes, requireLocalMinutes } from './bake-run-time';
 import { toCelsiusRounded } from './temperature';
 
 /** FDA Food Code §3-501.14 (cooling): 135 °F → 70 °F within 2 h, and → 41 °F within 6 h in total. */
@@ -57,8 +57,6 @@ export interface CoolingCheck {
   /** The reading that met each stage in time (local), or null. */
   reached70At: string | null;
   reached41At: string | null;
-  /** The latest reading counted (at or after `from`), or null. */
-  last: CoolingReading | null;
   /** 'ok' while on time or done, 'block' when a stage is missed, 'info' once thrown away. */
   tone: 'ok' | 'block' | 'info';
   /** What to do now, in words (both temperature scales). */
@@ -74,12 +72,6 @@ export function clockFrom(at: string, day: string): string {
   return at.slice(0, 10) > day.slice(0, 10) ? `${at.slice(11)} the next day` : at.slice(11);
 }
 
-function minutesOf(at: string): number {
-  const m = parseLocalMinutes(at);
-  if (m === null) throw new RangeError(`Not a local date-time "YYYY-MM-DDTHH:mm": ${at}`);
-  return m;
-}
-
 /**
  * Where one tray's cooling stands at local time `now`: the stage it is in, its deadlines, and what to do. Readings
  * before `from` (before a restart) are kept in the record but not counted.
@@ -88,22 +80,20 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
   const from = entry.restartedAt ?? entry.outAt;
   const by70 = addLocalMinutes(from, FOOD_CODE_COOLING.firstStageMinutes);
   const by41 = addLocalMinutes(from, FOOD_CODE_COOLING.totalMinutes);
-  const start = minutesOf(from);
+  const start = requireLocalMinutes(from);
   const counted = entry.readings
-    .filter((r) => minutesOf(r.at) >= start)
-    .slice()
-    .sort((a, b) => minutesOf(a.at) - minutesOf(b.at));
+    .filter((r) => requireLocalMinutes(r.at) >= start)
+    .sort((a, b) => requireLocalMinutes(a.at) - requireLocalMinutes(b.at));
   const last = counted.at(-1) ?? null;
   // "Now" is at least the latest reading (a device clock behind the thermometer's note does not undo it).
-  const nowM = Math.max(minutesOf(now), last ? minutesOf(last.at) : -Infinity);
-  const m70 = minutesOf(by70);
-  const m41 = minutesOf(by41);
+  const nowM = Math.max(requireLocalMinutes(now), last ? requireLocalMinutes(last.at) : -Infinity);
+  const m70 = requireLocalMinutes(by70);
+  const m41 = requireLocalMinutes(by41);
   const hit70 = counted.find((r) => r.tempF <= F70);
-  const reached70At = hit70 && minutesOf(hit70.at) <= m70 ? hit70.at : null;
+  const reached70At = hit70 && requireLocalMinutes(hit70.at) <= m70 ? hit70.at : null;
   const hit41 = reached70At ? counted.find((r) => r.tempF <= F41) : undefined;
-  const reached41At = hit41 && minutesOf(hit41.at) <= m41 ? hit41.at : null;
-  const day = from;
-  const base = { from, by70, by41, reached70At, reached41At, last };
+  const reached41At = hit41 && requireLocalMinutes(hit41.at) <= m41 ? hit41.at : null;
+  const base = { from, by70, by41, reached70At, reached41At };
   if (entry.discarded) return { ...base, state: 'discarded', tone: 'info', said: 'Thrown away.' };
   if (!reached70At && (nowM > m70 || hit70)) {
     return {
@@ -111,7 +101,7 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       state: 'missed-70',
       tone: 'block',
       said:
-        `Not at ${both(F70)} by ${clockFrom(by70, day)}, 2 hours after ${entry.restartedAt ? 'cooling started again' : 'it came out'}. ` +
+        `Not at ${both(F70)} by ${clockFrom(by70, from)}, 2 hours after ${entry.restartedAt ? 'cooling started again' : 'it came out'}. ` +
         (entry.restartedAt
           ? 'It has been reheated once already: throw it away'
           : `Reheat it to ${both(165)} and start cooling again, or throw it away`) +
@@ -123,7 +113,7 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       ...base,
       state: 'to-70',
       tone: 'ok',
-      said: `Cool to ${both(F70)} or below by ${clockFrom(by70, day)}, then to ${both(F41)} or below by ${clockFrom(by41, day)}.`,
+      said: `Cool to ${both(F70)} or below by ${clockFrom(by70, from)}, then to ${both(F41)} or below by ${clockFrom(by41, from)}.`,
     };
   }
   if (reached41At) {
@@ -131,7 +121,7 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       ...base,
       state: 'cooled',
       tone: 'ok',
-      said: `Cooled in time: ${both(F70)} reached by ${clockFrom(reached70At, day)}, ${both(F41)} by ${clockFrom(reached41At, day)}.`,
+      said: `Cooled in time: ${both(F70)} reached by ${clockFrom(reached70At, from)}, ${both(F41)} by ${clockFrom(reached41At, from)}.`,
     };
   }
   if (nowM > m41 || hit41) {
@@ -139,15 +129,23 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       ...base,
       state: 'missed-41',
       tone: 'block',
-      said: `Not at ${both(F41)} by ${clockFrom(by41, day)}, 6 hours after ${entry.restartedAt ? 'cooling started again' : 'it came out'}: throw it away (common practice; your local food code decides).`,
+      said: `Not at ${both(F41)} by ${clockFrom(by41, from)}, 6 hours after ${entry.restartedAt ? 'cooling started again' : 'it came out'}: throw it away (common practice; your local food code decides).`,
     };
   }
   return {
     ...base,
     state: 'to-41',
     tone: 'ok',
-    said: `${both(F70)} reached at ${clockFrom(reached70At, day)}. Next: ${both(F41)} or below by ${clockFrom(by41, day)} (in the fridge).`,
+    said: `${both(F70)} reached at ${clockFrom(reached70At, from)}. Next: ${both(F41)} or below by ${clockFrom(by41, from)} (in the fridge).`,
   };
+}
+
+/**
+ * Where a record stands on what was written down alone, for a reader that does not know the kitchen's clock (the
+ * printed run sheet, the coach's glance): a deadline counts as missed only when a reading shows it.
+ */
+export function checkOnPaper(entry: CoolingEntry): CoolingCheck {
+  return checkCooling(entry, entry.outAt);
 }
 
 /** A tray's record as the run's timers read it: its id in the run and what was written down. */
@@ -162,7 +160,7 @@ export interface RecordedCooling extends CoolingEntry {
  */
 export function eventsWithCooling(run: Pick<BakeRunResult, 'start' | 'events'>, records: readonly RecordedCooling[], now: string): BakeEvent[] {
   const byTray = new Map(records.map((r) => [r.runTrayId, r]));
-  const start = minutesOf(run.start);
+  const start = requireLocalMinutes(run.start);
   const gone = new Set<BakeEvent['kind']>(['first-check', 'tray-out', 'cooling-start', 'cool-to-70-by', 'fridge-41-by']);
   const out: BakeEvent[] = run.events.filter((e) => !(e.trayId !== null && byTray.has(e.trayId) && gone.has(e.kind)));
   for (const r of records) {
@@ -171,7 +169,7 @@ export function eventsWithCooling(run: Pick<BakeRunResult, 'start' | 'events'>, 
     const check = checkCooling(r, now);
     const source = FOOD_CODE_COOLING.source;
     const push = (kind: BakeEvent['kind'], at: string, tempF: number) =>
-      out.push({ at, minute: minutesOf(at) - start, kind, oven: planned.oven, trayId: r.runTrayId, tempF, source });
+      out.push({ at, minute: requireLocalMinutes(at) - start, kind, oven: planned.oven, trayId: r.runTrayId, tempF, source });
     if (check.state === 'to-70' || check.state === 'missed-70') push('cool-to-70-by', check.by70, F70);
     if (check.state === 'to-70' || check.state === 'to-41' || check.state === 'missed-41') push('fridge-41-by', check.by41, F41);
   }

@@ -1,7 +1,9 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { prepDatesOf } from '@shared/domain/week-board.js';
-import { longDate } from '@shared/domain/iso-date.js';
+import { longDate, type IsoDate } from '@shared/domain/iso-date.js';
 import type { CoolingListDto, CoolingRecordDto, CoolingRecordValues } from '@shared/schemas/cooling.schema.js';
+import type { GlanceDto } from '@shared/schemas/weeks.schema.js';
+import { checkOnPaper } from '@shared/domain/cooling.js';
 import { datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
@@ -37,6 +39,19 @@ export async function listCooling(em: EntityManager, actor: Actor, weekId: numbe
   const { week, prepDate } = await weekAndDate(em, actor, weekId, wanted);
   const rows = await em.find(CoolingRecord, { week: week.id, prepDate }, { orderBy: { outAt: 'asc', runTrayId: 'asc' } });
   return { weekId: week.id, prepDate, records: rows.map(present) };
+}
+
+/**
+ * A week's cooling trouble for the coach's glance: the trays thrown away, and those whose readings missed a deadline
+ * (judged on paper: the glance does not know the kitchen's clock), by prep date and time out.
+ */
+export async function coolingTrouble(em: EntityManager, weekId: number): Promise<GlanceDto['cooling']> {
+  const rows = await em.find(CoolingRecord, { week: weekId }, { orderBy: { prepDate: 'asc', outAt: 'asc' } });
+  const named = (r: ICoolingRecord) => ({ trayName: r.trayName, prepDate: r.prepDate as IsoDate });
+  return {
+    thrownAway: rows.filter((r) => r.discarded).map(named),
+    missed: rows.filter((r) => !r.discarded && checkOnPaper(present(r)).tone === 'block').map(named),
+  };
 }
 
 /** The name the run gives tray `runTrayId` ("12-2" → "Chive egg slab (2/3)"), or a 404 when the run has no such tray. */

@@ -5,7 +5,7 @@ import { cautionsBlock, createDoc, finishDoc, heading, paragraph, table } from '
 import { clock } from './pdf-format.js';
 import { DEFAULT_DATE_ORDER, longDate, type DateOrder } from '@shared/domain/iso-date.js';
 import { replannedSummary } from '@shared/domain/bake-run-words.js';
-import { checkCooling, clockFrom, FOOD_CODE_COOLING, type CoolingState, type RecordedCooling } from '@shared/domain/cooling.js';
+import { checkOnPaper, clockFrom, FOOD_CODE_COOLING, type CoolingState, type RecordedCooling } from '@shared/domain/cooling.js';
 
 export interface BakeRunPdfMeta {
   businessName: string;
@@ -156,8 +156,7 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
         const r = records.get(t.id);
         // Blank lines to write on, the planned time out as a reminder.
         if (!r) return [`${t.name}\n(planned out ${clock(t.outAt)})`, '', '', '', '\n\n', '', ''];
-        // Judged on what was written down only (the paper does not know the time it is read).
-        const c = checkCooling(r, r.outAt);
+        const c = checkOnPaper(r);
         const readings = [...r.readings]
           .sort((a, b) => (a.at < b.at ? -1 : 1))
           .map((x) => `${clockFrom(x.at, r.outAt)} ${x.tempF} °F`)

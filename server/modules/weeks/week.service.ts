@@ -19,8 +19,7 @@ import type {
 import { datesOf, type Actor } from '../../http/authz.js';
 import { Conflict, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Tray } from '../trays/tray.entity.js';
-import { CoolingRecord, type ICoolingRecord } from '../bake-runs/bake-run.entity.js';
-import { checkCooling } from '@shared/domain/cooling.js';
+import { coolingTrouble } from '../bake-runs/cooling.service.js';
 import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell } from './week.entity.js';
 import {
   boardInput,
@@ -462,13 +461,8 @@ export async function glance(em: EntityManager, actor: Actor, today: IsoDate = t
   const week = pickWeek(weeks, today);
   if (!week) return { week: null, nextWeek: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup, cooling: { thrownAway: [], missed: [] } };
   const after = weekAfter(weeks, week);
-  const [data, coolingRows] = await Promise.all([
-    loadBoardData(em, actor, week),
-    em.find(CoolingRecord, { week: week.id }, { orderBy: { prepDate: 'asc', outAt: 'asc' } }),
-  ]);
+  const [data, cooling] = await Promise.all([loadBoardData(em, actor, week), coolingTrouble(em, week.id)]);
   const result = computeBoard(boardInput(data));
-  // Judged on the readings alone (the glance does not know the kitchen's clock): a deadline missed on paper.
-  const coolingTray = (r: ICoolingRecord) => ({ trayName: r.trayName, prepDate: r.prepDate as IsoDate });
   const nextPrepDate =
     weeks
       .flatMap((w) => prepDatesOf(w))
@@ -490,10 +484,7 @@ export async function glance(em: EntityManager, actor: Actor, today: IsoDate = t
     portionsShort: result.inventory.reduce((s, t) => s + t.short, 0),
     nextPrepDate,
     setup,
-    cooling: {
-      thrownAway: coolingRows.filter((r) => r.discarded).map(coolingTray),
-      missed: coolingRows.filter((r) => !r.discarded && checkCooling({ ...r, restartedAt: r.restartedAt ?? null }, r.outAt).tone === 'block').map(coolingTray),
-    },
+    cooling,
   };
 }
 

@@ -9,15 +9,21 @@ import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { describeEvent } from './bake-run-sheet';
 import { OvenChecks } from './oven-checks';
 import { localToday } from '@/lib/dates';
-import { clock, localMinutes, nowLocalMinutes, type TempUnit } from './temperature';
+import { clock, hhmm, localMinutes, nowLocalMinutes, type TempUnit } from './temperature';
+
+/** The device clock, read again every `ms`. */
+export function useDeviceClock(ms: number): Date {
+  const [now, setNow] = useState(() => new Date());
+  useEffect(() => {
+    const id = window.setInterval(() => setNow(new Date()), ms);
+    return () => window.clearInterval(id);
+  }, [ms]);
+  return now;
+}
 
 /** Minutes since the run's start on the device clock, or null when today is not the run's day. Ticks every 15 s. */
 export function useRunMinute(run: BakeRunResult | null): number | null {
-  const [now, setNow] = useState(() => new Date());
-  useEffect(() => {
-    const id = window.setInterval(() => setNow(new Date()), 15_000);
-    return () => window.clearInterval(id);
-  }, []);
+  const now = useDeviceClock(15_000);
   if (!run) return null;
   const minute = nowLocalMinutes(now) - localMinutes(run.start);
   return localToday(now) === run.start.slice(0, 10) ? minute : null;
@@ -50,7 +56,6 @@ export interface MoveStart {
   onReload: () => void;
 }
 
-const hhmm = (d: Date) => `${String(d.getHours()).padStart(2, '0')}:${String(d.getMinutes()).padStart(2, '0')}`;
 
 /**
  * Why a change of the day's run was not made: someone changed the run meanwhile (409: load their version, then redo

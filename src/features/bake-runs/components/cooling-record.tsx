@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useMemo, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { BakeRunResult, BakeTrayPlan } from '@shared/domain/bake-run-types';
 import { checkCooling, clockFrom, type CoolingCheck } from '@shared/domain/cooling';
@@ -9,30 +9,18 @@ import { ErrorState, Notice } from '@/components/ui/states';
 import { coolingQuery, useClearCooling, useSaveCooling } from '../api/cooling';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { localToday } from '@/lib/dates';
-import { clock, formatTemp, type TempUnit } from './temperature';
-
-const pad = (n: number) => String(n).padStart(2, '0');
-/** The device clock as a local "YYYY-MM-DDTHH:mm". */
-export const nowLocal = (d = new Date()) => `${localToday(d)}T${pad(d.getHours())}:${pad(d.getMinutes())}`;
-
-/** The device clock, read again every `ms`. */
-function useNow(ms: number): string {
-  const [now, setNow] = useState(() => nowLocal());
-  useEffect(() => {
-    const id = window.setInterval(() => setNow(nowLocal()), ms);
-    return () => window.clearInterval(id);
-  }, [ms]);
-  return now;
-}
+import { addDays } from '@shared/domain/iso-date';
+import { clock, formatTemp, nowLocal, type TempUnit } from './temperature';
+import { useDeviceClock } from './bake-run-timers';
 
 /** "HH:mm" typed for a reading, as a local date-time: on the day the tray came out, or the next day when earlier. */
 export function readingAt(time: string, outAt: string): string {
   const day = outAt.slice(0, 10);
-  if (time >= outAt.slice(11)) return `${day}T${time}`;
-  const next = new Date(`${day}T00:00:00Z`);
-  next.setUTCDate(next.getUTCDate() + 1);
-  return `${next.toISOString().slice(0, 10)}T${time}`;
+  return time >= outAt.slice(11) ? `${day}T${time}` : `${addDays(day, 1)}T${time}`;
 }
+
+/** Fields a tray's own form shows a refusal beside; any other refusal is said under the tray. */
+const SAID_BESIDE = (field: string) => field.startsWith('readings.') || field === 'note' || field === 'restartedAt';
 
 /** Writes the tray's whole record again with `change`; `done` once it is saved. */
 type Write = (input: CoolingRecordInput, done?: () => void) => void;
@@ -101,10 +89,11 @@ function NotOut({ tray, day, save, busy }: { tray: BakeTrayPlan; day: string; sa
 }
 
 /** One tray's record: its state against the Food Code, its readings, and what can be written down next. */
-function Written({ record, unit, now, write: save, error, busy, onClear, clearing }: {
+function Written({ record, check, unit, write: save, error, busy, onClear, clearing }: {
   record: CoolingRecordDto;
+  /** Where it stands now (checkCooling). */
+  check: CoolingCheck;
   unit: TempUnit;
-  now: string;
   write: Write;
   /** The last write's failure for this tray (a 400 shows beside its field). */
   error: unknown;
@@ -112,7 +101,6 @@ function Written({ record, unit, now, write: save, error, busy, onClear, clearin
   onClear: () => void;
   clearing: boolean;
 }) {
-  const check = checkCooling(record, now);
   const [temp, setTemp] = useState('');
   const [time, setTime] = useState('');
   const [note, setNote] = useState(record.note);
@@ -260,22 +248,25 @@ export function CoolingRecord({ weekId, run, unit }: { weekId: number; run: Bake
   const q = useQuery(coolingQuery(weekId, day));
   const save = useSaveCooling(weekId, day);
   const clear = useClearCooling(weekId, day);
-  const now = useNow(20_000);
-  const [saving, setSaving] = useState<string | null>(null);
+  const now = nowLocal(useDeviceClock(20_000));
+  // The tray the last write was for (its pending state and its refusal show on that tray only).
+  const saving = save.variables?.runTrayId ?? null;
   const started = localToday() >= day;
   const trays = [...run.trays].sort((a, b) => a.outMinute - b.outMinute || (a.id < b.id ? -1 : 1));
   const inRun = new Set(trays.map((t) => t.id));
-  const byId = new Map((q.data?.records ?? []).map((r) => [r.runTrayId, r]));
-  const gone = (q.data?.records ?? []).filter((r) => !inRun.has(r.runTrayId));
-  const counts = trays.reduce(
-    (n, t) => {
-      const r = byId.get(t.id);
-      if (!r) return n;
-      const c = checkCooling(r, now);
-      return { out: n.out + 1, missed: n.missed + (c.tone === 'block' ? 1 : 0), cooled: n.cooled + (c.state === 'cooled' ? 1 : 0) };
-    },
-    { out: 0, missed: 0, cooled: 0 },
-  );
+  const records = q.data?.records;
+  const byId = useMemo(() => new Map((records ?? []).map((r) => [r.runTrayId, r])), [records]);
+  // Each record judged once per tick of the clock (the count, the tray's line and the list below read it).
+  const checks = useMemo(() => new Map((records ?? []).map((r) => [r.runTrayId, checkCooling(r, now)])), [records, now]);
+  const gone = (records ?? []).filter((r) => !inRun.has(r.runTrayId));
+  const counts = { out: 0, missed: 0, cooled: 0 };
+  for (const t of trays) {
+    const c = checks.get(t.id);
+    if (!c) continue;
+    counts.out++;
+    if (c.tone === 'block') counts.missed++;
+    if (c.state === 'cooled') counts.cooled++;
+  }
   return (
     <section className="flex flex-col gap-3" aria-labelledby="cooling-record-title">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -306,10 +297,7 @@ export function CoolingRecord({ weekId, run, unit }: { weekId: number; run: Bake
             {trays.map((t) => {
               const record = byId.get(t.id);
               const busy = saving === t.id && save.isPending;
-              const write: Write = (input, done) => {
-                setSaving(t.id);
-                save.mutate({ runTrayId: t.id, ...input }, { onSuccess: () => done?.() });
-              };
+              const write: Write = (input, done) => save.mutate({ runTrayId: t.id, ...input }, { onSuccess: () => done?.() });
               return (
                 <li key={t.id} className="flex flex-col gap-2 rounded-lg border border-line bg-paper-card p-3">
                   <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -321,8 +309,8 @@ export function CoolingRecord({ weekId, run, unit }: { weekId: number; run: Bake
                   {record ? (
                     <Written
                       record={record}
+                      check={checks.get(t.id)!}
                       unit={unit}
-                      now={now}
                       write={write}
                       error={saving === t.id ? save.error : null}
                       busy={busy}
@@ -338,7 +326,7 @@ export function CoolingRecord({ weekId, run, unit }: { weekId: number; run: Bake
                     />
                   )}
                   {saving === t.id && <Refused error={save.error} />}
-                  {saving === t.id && isApiError(save.error, 400) && !Object.keys(save.error.fieldErrors).some((k) => k.startsWith('readings.') || k === 'note') && (
+                  {saving === t.id && isApiError(save.error, 400) && !Object.keys(save.error.fieldErrors).some(SAID_BESIDE) && (
                     <p role="alert" className="font-bold text-signal-700">
                       ⚠ {errorMessage(save.error)}
                     </p>
@@ -355,7 +343,7 @@ export function CoolingRecord({ weekId, run, unit }: { weekId: number; run: Bake
               <ul className="flex flex-col gap-1 text-base">
                 {gone.map((r) => (
                   <li key={r.runTrayId}>
-                    {r.trayName}: out at <span className="num">{clock(r.outAt)}</span>. {checkCooling(r, now).said}
+                    {r.trayName}: out at <span className="num">{clock(r.outAt)}</span>. {checks.get(r.runTrayId)?.said}
                   </li>
                 ))}
               </ul>

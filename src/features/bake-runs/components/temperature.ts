@@ -1,3 +1,4 @@
+import { localToday } from '@/lib/dates';
 import { toCelsiusRounded } from '@shared/domain/temperature';
 
 export type TempUnit = 'F' | 'C';
@@ -35,6 +36,12 @@ export function localMinutes(local: string): number {
   const [h, mi] = t.split(':').map(Number);
   return Math.round(Date.UTC(y, m - 1, day, h, mi) / 60_000);
 }
+
+/** The device clock's "HH:mm". */
+export const hhmm = (d: Date) => `${String(d.getHours()).padStart(2, '0')}:${String(d.getMinutes()).padStart(2, '0')}`;
+
+/** The device clock as a local "YYYY-MM-DDTHH:mm". */
+export const nowLocal = (d = new Date()) => `${localToday(d)}T${hhmm(d)}`;
 
 /** The device's local clock as the same reading. */
 export function nowLocalMinutes(now: Date): number {
