@@ -65,7 +65,11 @@ export type CoolingRecordInput = z.input<typeof coolingRecordSchema>;
 
 /** DELETE …/cooling/:runTrayId?prepDate=&version=: a record written by mistake (the tray is not out yet). */
 export const coolingDeleteQuery = prepDateQuery.extend({
-  version: z.coerce.number().int().positive().max(PG_INT_MAX, TOO_LARGE),
+  version: z.coerce
+    .number({ message: 'Give the version of the record you read (e.g. ?version=3).' })
+    .int({ message: 'The version is a whole number.' })
+    .positive({ message: 'The version is a whole number from 1.' })
+    .max(PG_INT_MAX, TOO_LARGE),
 });
 
 export interface CoolingRecordDto {

@@ -98,6 +98,7 @@ describe('the cooling record of a prep day', () => {
     await assistant.agent.delete(`${base}/${tray.id}-1?version=2`).expect(409);
     const noVersion = await assistant.agent.delete(`${base}/${tray.id}-1`).expect(400);
     expect(Object.keys(noVersion.body.errors)).toEqual(['version']);
+    expect(noVersion.body.errors.version[0]).toMatch(/^Give the version of the record you read/);
     await assistant.agent.delete(`${base}/${tray.id}-1?version=1`).expect(204);
     expect((await assistant.agent.get(base).expect(200)).body.records).toEqual([]);
     await assistant.agent.delete(`${base}/${tray.id}-1?version=1`).expect(404);
