@@ -176,3 +176,26 @@ export function eventsWithCooling(run: Pick<BakeRunResult, 'start' | 'events'>, 
   // A stable sort: the deadlines added go after the planned steps of the same minute (their kinds come last anyway).
   return out.sort((a, b) => a.minute - b.minute);
 }
+
+/**
+ * How long after a tray's planned time out the cooling record asks for it (common practice, no source: a check can
+ * keep a tray in a few minutes longer than planned).
+ */
+export const WRITE_DOWN_AFTER_MINUTES = 5;
+
+/**
+ * The trays the plan had out at least `after` minutes before `nowMinute` (minutes from the run's start) that the
+ * cooling record does not have yet, by planned time out: still in the oven, or out and not written down (their
+ * cooling deadlines then run from the planned time, which may be later than the real one).
+ */
+export function notWrittenDown<T extends { id: string; outMinute: number }>(
+  trays: readonly T[],
+  records: readonly { runTrayId: string }[],
+  nowMinute: number,
+  after = WRITE_DOWN_AFTER_MINUTES,
+): T[] {
+  const written = new Set(records.map((r) => r.runTrayId));
+  return trays
+    .filter((t) => !written.has(t.id) && nowMinute - t.outMinute >= after)
+    .sort((a, b) => a.outMinute - b.outMinute || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+}

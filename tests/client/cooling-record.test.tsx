@@ -4,6 +4,7 @@ import type { BakeRunResult } from '@shared/domain/bake-run-types';
 import type { CoolingRecordDto } from '@shared/schemas/cooling.schema';
 import { CoolingRecord, readingAt } from '@/features/bake-runs/components/cooling-record';
 import { BakeRunTimers } from '@/features/bake-runs/components/bake-run-timers';
+import { minutesSpan } from '@/features/bake-runs/components/temperature';
 import { jsonResponse, renderInApp } from './render';
 
 // An invented run of two trays (only the fields the cooling record and the timers read), prep day Sun Jan 4, 2026.
@@ -133,5 +134,39 @@ describe('now and next follows the cooling record', () => {
     expect(lines([])).toEqual(['in 5 minCheck Egg slab (2/2)', 'in 110 minEgg slab (1/2) at 70 °F or below by now', 'in 125 minEgg slab (2/2) at 70 °F or below by now', 'in 350 minEgg slab (1/2) at 41 °F or below, in the fridge, by now']);
     // The first tray came out at 08:36: its deadlines are 10:36 and 14:36 (116 and 356 minutes from 08:40).
     expect(lines([record()])).toEqual(['in 5 minCheck Egg slab (2/2)', 'in 116 minEgg slab (1/2) at 70 °F or below by now', 'in 125 minEgg slab (2/2) at 70 °F or below by now', 'in 356 minEgg slab (1/2) at 41 °F or below, in the fridge, by now']);
+  });
+});
+
+describe('trays due out and not written down', () => {
+  const text = (el: HTMLElement) => (el.textContent ?? '').replace(/\s+/g, ' ');
+  it('now and next names them, with their planned time out and the way to the cooling record', () => {
+    // 08:40: the first tray was planned out at 08:30 (10 minutes ago), the second at 08:45.
+    const { unmount } = render(<BakeRunTimers run={run} unit="F" nowMinute={40} cooling={[]} />);
+    const note = screen.getByRole('note');
+    expect(text(note)).toContain('Due out by now, not in the cooling record: Egg slab (1/2) (planned out 08:30).');
+    expect(within(note).getByRole('link', { name: 'Go to the cooling record' }).getAttribute('href')).toBe('#cooling-record-title');
+    unmount();
+    // Written down: nothing to ask. No cooling record on the page (the planner's try-out run): nothing either.
+    for (const cooling of [[record()], undefined]) {
+      const r = render(<BakeRunTimers run={run} unit="F" nowMinute={40} cooling={cooling} />);
+      expect(screen.queryByText(/not in the cooling record/)).toBeNull();
+      r.unmount();
+    }
+  });
+
+  it('the cooling record marks the tray due out, and not the one still to come, and offers its planned time out', async () => {
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" />);
+    const list = await screen.findByRole('list', { name: 'Trays cooling' });
+    const [first, second] = within(list).getAllByRole('listitem');
+    expect(text(first)).toContain('Left · planned out 08:30 · ⚠ due 10 min ago');
+    expect(text(second)).toContain('Left · planned out 08:45');
+    expect(text(second)).not.toContain('due');
+    // Its time out is offered as planned (one tap when it came out then); the tray still to come offers now.
+    expect((within(first).getByLabelText('Or came out at') as HTMLInputElement).value).toBe('08:30');
+    expect((within(second).getByLabelText('Or came out at') as HTMLInputElement).value).toBe('08:40');
+  });
+
+  it('says a long wait in hours and minutes', () => {
+    expect([minutesSpan(10), minutesSpan(60), minutesSpan(125)]).toEqual(['10 min', '1 h', '2 h 5 min']);
   });
 });

@@ -7,7 +7,7 @@ test('on prep day the assistant writes a tray down as out and its temperatures a
   await signIn(page, 'assistant@trayline.test');
   const weeks = (await (await page.request.get('/api/weeks')).json()) as { id: number; publishedVersion: number | null }[];
   const weekId = (weeks.find((w) => w.publishedVersion !== null) ?? weeks[0]).id;
-  type Tray = { id: string; name: string; outMinute: number };
+  type Tray = { id: string; name: string; outAt: string; outMinute: number };
   const dto = (await (await page.request.get(`/api/weeks/${weekId}/bake-run`)).json()) as { prepDate: string; run: { trays: Tray[] } };
   const first = [...dto.run.trays].sort((a, b) => a.outMinute - b.outMinute || (a.id < b.id ? -1 : 1))[0];
   // Start from no record of that tray (a run of this journey before leaves one).
@@ -25,11 +25,18 @@ test('on prep day the assistant writes a tray down as out and its temperatures a
   await page.goto(`/weeks/${weekId}/bake-run`);
   const record = page.getByRole('region', { name: 'Cooling record' });
   const card = record.getByRole('listitem').filter({ has: page.getByRole('heading', { name: first.name, exact: true }) });
+  // A tray planned out 5 minutes ago or more and not written down is named in the timers until it is.
+  const asked = `${first.name} (planned out ${first.outAt.slice(11)})`;
+  const timers = page.getByRole('region', { name: 'Timers' });
+  // (The demo's run starts at 08:00, its first tray out well before 09:25.)
+  expect(first.outAt <= `${dto.prepDate}T09:25`).toBe(true);
+  await expect(timers.getByRole('note')).toContainText(asked);
   await card.getByRole('button', { name: 'Out now' }).click();
   // FDA Food Code §3-501.14 from 09:30: 70 °F by 11:30, 41 °F by 15:30.
   await expect(card.getByText('Cool to 70 °F (21 °C) or below by 11:30, then to 41 °F (5 °C) or below by 15:30.')).toBeVisible();
-  // The timers count that tray's deadline from its real time out.
-  await expect(page.getByRole('region', { name: 'Timers' })).toBeVisible();
+  // The timers count that tray's deadline from its real time out, and no longer ask for it.
+  await expect(timers).toBeVisible();
+  await expect(timers.getByText(asked, { exact: false })).toHaveCount(0);
 
   // A reading by keyboard: the temperature, the time, Enter.
   await card.getByLabel('Food temperature (°F)').fill('66');

@@ -6,7 +6,7 @@
  * being said, with the local code deciding. Times and readings are made-up kitchen numbers.
  */
 import { describe, expect, it } from 'vitest';
-import { checkCooling, clockFrom, eventsWithCooling, FOOD_CODE_COOLING, type CoolingEntry } from '@shared/domain/cooling';
+import { checkCooling, clockFrom, eventsWithCooling, FOOD_CODE_COOLING, notWrittenDown, WRITE_DOWN_AFTER_MINUTES, type CoolingEntry } from '@shared/domain/cooling';
 import { planBakeRun } from '@shared/domain/bake-run';
 import type { BakeRunInput } from '@shared/domain/bake-run-types';
 import { celsiusToFahrenheit } from '@shared/domain/temperature';
@@ -114,5 +114,30 @@ describe('the run’s steps with the cooling record', () => {
     expect(kinds('1-1', cooled).filter((k) => /cool|fridge|check|tray-out/.test(k))).toEqual([]);
     const gone = eventsWithCooling(run, [r({ discarded: true })], at('10:05'));
     expect(kinds('1-1', gone).filter((k) => /cool|fridge|check|tray-out/.test(k))).toEqual([]);
+  });
+});
+
+describe('trays due out that the cooling record does not have', () => {
+  // The 5-minute grace is common practice (no source): a check can keep a tray in a little longer than planned.
+  const trays = [
+    { id: '2-1', outMinute: 41 },
+    { id: '1-1', outMinute: 33 },
+    { id: '1-2', outMinute: 33 },
+    { id: '3-1', outMinute: 65 },
+  ];
+
+  it('names the trays planned out at least the grace ago and not written down, by planned time out', () => {
+    expect(WRITE_DOWN_AFTER_MINUTES).toBe(5);
+    // 08:50 on a run from 08:00: trays planned out at 08:33 and 08:41 are due; the 09:05 one is not.
+    expect(notWrittenDown(trays, [], 50).map((t) => t.id)).toEqual(['1-1', '1-2', '2-1']);
+    expect(notWrittenDown(trays, [{ runTrayId: '1-2' }], 50).map((t) => t.id)).toEqual(['1-1', '2-1']);
+  });
+
+  it('leaves a tray alone until the grace has passed, and asks nothing once every tray due is written down', () => {
+    expect(notWrittenDown(trays, [], 37).map((t) => t.id)).toEqual([]);
+    expect(notWrittenDown(trays, [], 38).map((t) => t.id)).toEqual(['1-1', '1-2']);
+    expect(notWrittenDown(trays, [{ runTrayId: '1-1' }, { runTrayId: '1-2' }, { runTrayId: '2-1' }], 60)).toEqual([]);
+    // A record of a tray no longer in the run does not stand in for one that is.
+    expect(notWrittenDown(trays, [{ runTrayId: '9-1' }], 40).map((t) => t.id)).toEqual(['1-1', '1-2']);
   });
 });

@@ -1,7 +1,7 @@
 import { useEffect, useRef, useState } from 'react';
 import type { BakeEventKind, BakeRunResult } from '@shared/domain/bake-run-types';
 import { addLocalMinutes } from '@shared/domain/bake-run-time';
-import { eventsWithCooling, type RecordedCooling } from '@shared/domain/cooling';
+import { eventsWithCooling, notWrittenDown, type RecordedCooling } from '@shared/domain/cooling';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
@@ -377,6 +377,20 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
   );
 }
 
+const LATE_NAMED = 3;
+
+/** Trays due out by now that the cooling record does not have: still in the oven, or out and not written down. */
+function NotWrittenDown({ trays }: { trays: readonly { id: string; name: string; outAt: string }[] }) {
+  const named = trays.slice(0, LATE_NAMED).map((t) => `${t.name} (planned out ${clock(t.outAt)})`);
+  const more = trays.length - named.length;
+  return (
+    <Notice tone="warn" title={`Due out by now, not in the cooling record: ${named.join(', ')}${more > 0 ? ` and ${more} more` : ''}.`}>
+      Still in the oven? Check it and pull it. Already out? Write down when it came out: its cooling deadlines count from
+      then. <a href="#cooling-record-title" className="font-bold underline">Go to the cooling record</a>
+    </Notice>
+  );
+}
+
 /** On prep day: the next steps with a countdown (ovens, trays in, checks, out, cooling deadlines), optional sound at checks and outs. */
 export function BakeRunTimers({
   run,
@@ -401,6 +415,8 @@ export function BakeRunTimers({
   const trayName = (id: string | null) => (id ? names.get(id) ?? id : '');
   // A tray taken out at its check time is one step: "Check …" (the run sheet leaves such an "out" line out too).
   const checks = new Set(events.filter((e) => e.kind === 'first-check').map((e) => `${e.trayId}@${e.minute}`));
+  // Due out by now and not in the cooling record (only where the page has one): pull it, or write it down.
+  const late = cooling ? notWrittenDown(run.trays, cooling, nowMinute) : [];
   const upcoming = events
     .filter((e) => TIMED.has(e.kind) && e.minute >= nowMinute - 2 && !(e.kind === 'tray-out' && checks.has(`${e.trayId}@${e.minute}`)))
     .slice(0, 4);
@@ -422,6 +438,7 @@ export function BakeRunTimers({
           <input type="checkbox" className="h-5 w-5" checked={sound} onChange={(e) => setSound(e.target.checked)} /> Sound at checks and outs
         </label>
       </div>
+      {late.length > 0 && <NotWrittenDown trays={late} />}
       {upcoming.length === 0 ? (
         <p className="text-lg">Every step of this run is done.</p>
       ) : (

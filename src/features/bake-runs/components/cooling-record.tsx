@@ -1,7 +1,8 @@
 import { useMemo, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { BakeRunResult, BakeTrayPlan } from '@shared/domain/bake-run-types';
-import { checkCooling, clockFrom, type CoolingCheck } from '@shared/domain/cooling';
+import { checkCooling, clockFrom, notWrittenDown, type CoolingCheck } from '@shared/domain/cooling';
+import { requireLocalMinutes } from '@shared/domain/bake-run-time';
 import type { CoolingRecordDto, CoolingRecordInput } from '@shared/schemas/cooling.schema';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -10,7 +11,7 @@ import { coolingQuery, useClearCooling, useSaveCooling } from '../api/cooling';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { localToday } from '@/lib/dates';
 import { addDays } from '@shared/domain/iso-date';
-import { clock, formatTemp, nowLocal, type TempUnit } from './temperature';
+import { clock, formatTemp, minutesSpan, nowLocal, type TempUnit } from './temperature';
 import { useDeviceClock } from './bake-run-timers';
 
 /** "HH:mm" typed for a reading, as a local date-time: on the day the tray came out, or the next day when earlier. */
@@ -61,8 +62,9 @@ function Refused({ error }: { error: unknown }) {
 
 /** A tray not written down yet: out now, or at another time. */
 function NotOut({ tray, day, save, busy }: { tray: BakeTrayPlan; day: string; save: Write; busy: boolean }) {
-  // On the day: now; later (written down afterwards): the planned time, to change to what happened.
-  const [time, setTime] = useState(() => (localToday() === day ? clock(nowLocal()) : clock(tray.outAt)));
+  // On the day, before its planned time out: now (pulled early); once that time has passed, or on a later day
+  // (written down afterwards): the planned time, to change to what happened.
+  const [time, setTime] = useState(() => (localToday() === day && nowLocal() < tray.outAt ? clock(nowLocal()) : clock(tray.outAt)));
   return (
     <div className="no-print flex flex-wrap items-end gap-3">
       {/* Out now: only on the prep day itself (a later day gives the time it came out). */}
@@ -259,6 +261,9 @@ export function CoolingRecord({ weekId, run, unit }: { weekId: number; run: Bake
   // Each record judged once per tick of the clock (the count, the tray's line and the list below read it).
   const checks = useMemo(() => new Map((records ?? []).map((r) => [r.runTrayId, checkCooling(r, now)])), [records, now]);
   const gone = (records ?? []).filter((r) => !inRun.has(r.runTrayId));
+  // On the prep day: the trays due out by now that are not written down yet (the timers above name them too).
+  const nowMinute = localToday() === day ? requireLocalMinutes(now) - requireLocalMinutes(run.start) : null;
+  const late = new Set(nowMinute === null || !records ? [] : notWrittenDown(trays, records, nowMinute).map((t) => t.id));
   const counts = { out: 0, missed: 0, cooled: 0 };
   for (const t of trays) {
     const c = checks.get(t.id);
@@ -304,6 +309,9 @@ export function CoolingRecord({ weekId, run, unit }: { weekId: number; run: Bake
                     <h3 className="text-lg font-bold">{t.name}</h3>
                     <span className="num text-sm text-ink-soft">
                       {t.oven} · planned out {clock(t.outAt)}
+                      {late.has(t.id) && nowMinute !== null && (
+                        <span className="font-bold text-signal-700"> · ⚠ due {minutesSpan(nowMinute - t.outMinute)} ago</span>
+                      )}
                     </span>
                   </div>
                   {record ? (

@@ -29,6 +29,13 @@ export const BAND_CLASS: Record<1 | 2 | 3 | 4 | 5, string> = {
 
 export const clock = (local: string) => local.slice(11, 16);
 
+/** A span of whole minutes in words: "17 min", "2 h", "2 h 5 min". */
+export function minutesSpan(minutes: number): string {
+  const h = Math.floor(minutes / 60);
+  const m = minutes % 60;
+  return h === 0 ? `${m} min` : m === 0 ? `${h} h` : `${h} h ${m} min`;
+}
+
 /** Minutes of a local "YYYY-MM-DDTHH:mm" since the epoch reading (kitchen clock, no time zone). */
 export function localMinutes(local: string): number {
   const [d, t] = local.split('T');
