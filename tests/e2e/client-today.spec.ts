@@ -1,16 +1,29 @@
 import fs from 'node:fs/promises';
-import { expect, test } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import { expectNoSeriousA11yViolations, signIn, SHOTS } from './support';
 
 // The demo week is seeded from the Monday of the current UTC week through Sunday, with every client's first slot
-// planned each day (server/db/seeders/week-demo.ts). The browser runs in UTC too, so "today" is always on it.
+// planned each day (server/db/seeders/week-demo.ts). The browser runs in UTC too, so "today" is on it, unless this
+// run crossed Sunday midnight after the seed: then the phone's clock stays on the demo week's last day.
 test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, timezoneId: 'UTC' });
+
+/** Fixes the phone's clock: now when it is in the client's week, else noon on the week's last day (UTC). */
+async function clockInTheWeek(page: Page): Promise<Date> {
+  const week = (await (await page.request.get('/api/weeks/mine')).json()) as { startDate: string; endDate: string };
+  const now = new Date();
+  const day = now.toISOString().slice(0, 10);
+  const at = day >= week.startDate && day <= week.endDate ? now : new Date(`${week.endDate}T12:00:00Z`);
+  await page.clock.setFixedTime(at);
+  return at;
+}
 
 test("a client on a phone sees today's plate with its macros and eat-by", async ({ page }) => {
   await signIn(page, 'client1@trayline.test');
   await expect(page).toHaveURL(/\/my-plates$/);
+  const now = await clockInTheWeek(page);
+  await page.reload();
   await expect(page.getByRole('heading', { level: 1, name: "Today's plate" })).toBeVisible();
-  const today = new Date().toLocaleDateString('en-US', { weekday: 'long', day: 'numeric', month: 'short', timeZone: 'UTC' });
+  const today = now.toLocaleDateString('en-US', { weekday: 'long', day: 'numeric', month: 'short', timeZone: 'UTC' });
   await expect(page.getByText(today, { exact: true })).toBeVisible();
 
   // The first plate card: its name, the four macros (each a number with its term) and the eat-by (or thaw) note.
