@@ -27,5 +27,5 @@ export interface ModuleDeps {
 }
 
 export function apiModules(deps: ModuleDeps): Router[] {
-  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), shoppingRoutes({ publicUrl: deps.env.PUBLIC_URL }), weekMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), prepDayMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), memberRoutes(), pantryRoutes(), bakeRunRoutes(), mailRoutes({ mail: deps.mail, env: deps.env })];
+  return [trayRoutes({ filesDir: deps.env.FILES_DIR }), clientRoutes(), assemblyRoutes(), shoppingRoutes({ publicUrl: deps.env.PUBLIC_URL }), weekMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), prepDayMailRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), weekRoutes(), ingredientRoutes(), workspaceSettingsRoutes(), memberRoutes(), pantryRoutes(), bakeRunRoutes({ mail: deps.mail, publicUrl: deps.env.PUBLIC_URL }), mailRoutes({ mail: deps.mail, env: deps.env })];
 }

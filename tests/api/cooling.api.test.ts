@@ -118,6 +118,48 @@ describe('the cooling record of a prep day', () => {
     });
   });
 
+  it('a tray written down as thrown away is e-mailed to each coach who did not write it, once', async () => {
+    const { assistant, coach, tray, week, base } = await twoTrayWeek();
+    const second = await member(app, coach, 'coach');
+    type Row = { to: string; subject: string; text: string; html: string };
+    const mails = () =>
+      sql<Row>(`select "to", subject, text, html from outbox where week_id = $1 and kind = 'tray-thrown-away' order by id`, [week.id]);
+    const path = `${base}/${tray.id}-1`;
+    // Out at 10:10, 75 °F at 12:30: past 12:10, FDA Food Code §3-501.14's first stage (70 °F within 2 hours) missed.
+    const reading = [{ at: '2026-01-04T12:30', tempF: 75 }];
+    await assistant.agent.put(path).send({ outAt: '2026-01-04T10:10', readings: reading }).expect(200);
+    expect(await mails()).toEqual([]);
+    await assistant.agent
+      .put(path)
+      .send({ outAt: '2026-01-04T10:10', readings: reading, discarded: true, note: 'Left on the rack too long.', version: 1 })
+      .expect(200);
+    const sent = await mails();
+    expect(sent.map((m) => m.to).sort()).toEqual([coach.email, second.email].sort());
+    for (const m of sent) {
+      expect(m.subject).toBe(`${coach.email.split('@')[0]} kitchen: ${tray.name} (1/2) thrown away on prep day Sun, Jan 4`);
+      // 75 °F = 23.9 °C, said to the whole degree (NIST SP 811: °C = (°F − 32) × 5/9).
+      expect(m.text).toContain('It came out at 10:10.');
+      expect(m.text).toContain('Temperatures written down: 12:30 75 °F (24 °C).');
+      expect(m.text).toContain('Not at 70 °F (21 °C) by 12:10, 2 hours after it came out.');
+      expect(m.text).toContain('Note in the cooling record:\nLeft on the rack too long.');
+      expect(m.text).toContain(`/weeks/${week.id}`);
+      expect(m.html).toContain('Left on the rack too long.');
+    }
+    // Kept after all, then thrown away again: no second e-mail about the same record.
+    await assistant.agent.put(path).send({ outAt: '2026-01-04T10:10', readings: reading, discarded: false, version: 2 }).expect(200);
+    await assistant.agent.put(path).send({ outAt: '2026-01-04T10:10', readings: reading, discarded: true, version: 3 }).expect(200);
+    expect(await mails()).toHaveLength(2);
+    // A coach who throws a tray away is not told of it; the other coach is. Written as thrown away at once: told too.
+    await second.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:20', discarded: true }).expect(200);
+    const after = await mails();
+    expect(after).toHaveLength(3);
+    expect(after[2]).toMatchObject({ to: coach.email });
+    expect(after[2].text).toContain('No temperature was written down for it.');
+    // The outbox shows it in words of its own.
+    const outbox = await coach.agent.get('/api/outbox?kind=tray-thrown-away').expect(200);
+    expect(outbox.body.items.map((i: { kind: string }) => i.kind)).toEqual(['tray-thrown-away', 'tray-thrown-away', 'tray-thrown-away']);
+  });
+
   it('a tray thrown away no longer counts as baked on the week board', async () => {
     const { assistant, coach, tray, week, base } = await twoTrayWeek();
     type Tally = { trayId: string; produced: number; lostTrays: number; byPrepDate: { prepDate: string; produced: number; lostTrays: number }[] };

@@ -78,7 +78,7 @@ const puts = () => calls.filter(([, init]) => init?.method === 'PUT').map(([url,
 
 describe('the cooling record on prep day', () => {
   it('writes a tray down as out now, then a reading typed in °C, and says where it stands against the Food Code', async () => {
-    renderInApp(<CoolingRecord weekId={7} run={run} unit="C" />);
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="C" role="assistant" />);
     const cards = await screen.findAllByRole('listitem');
     fireEvent.click(within(cards[0]).getByRole('button', { name: 'Out now' }));
     await waitFor(() => expect(puts()).toEqual([['/api/weeks/7/bake-run/cooling/3-1', { outAt: '2026-01-04T08:40', prepDate: '2026-01-04' }]]));
@@ -95,7 +95,7 @@ describe('the cooling record on prep day', () => {
   it('puts a refused reading under its field, and says a missed deadline with what to do', async () => {
     records = [record({ readings: [{ at: '2026-01-04T10:30', tempF: 80 }] })];
     vi.setSystemTime(new Date(2026, 0, 4, 10, 40));
-    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" />);
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />);
     // Out 08:36: 70 °F was due by 10:36.
     const alert = await screen.findByText(/Not at 70 °F \(21 °C\) by 10:36/);
     expect(alert.textContent).toContain('Reheat it to 165 °F (74 °C) and start cooling again, or throw it away');
@@ -109,9 +109,22 @@ describe('the cooling record on prep day', () => {
     await waitFor(() => expect(puts().at(-1)![1]).toMatchObject({ restartedAt: '2026-01-04T10:50', version: 1 }));
   });
 
+  it('throws a tray away, and says its portions no longer count and who is told', async () => {
+    records = [record()];
+    const { unmount } = renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />);
+    fireEvent.click(await screen.findByRole('button', { name: 'Thrown away' }));
+    await waitFor(() => expect(puts()).toEqual([['/api/weeks/7/bake-run/cooling/3-1', expect.objectContaining({ discarded: true, version: 1 })]]));
+    expect(await screen.findByText(/the coach gets an e-mail about it\./)).toBeTruthy();
+    expect(screen.getByRole('button', { name: 'Not thrown away after all' })).toBeTruthy();
+    unmount();
+    // The coach reads that the other coaches are told (the one who wrote it is not).
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="coach" />);
+    expect(await screen.findByText(/any other coach of the team gets an e-mail about it\./)).toBeTruthy();
+  });
+
   it('before prep day there is nothing to write down', async () => {
     vi.setSystemTime(new Date(2026, 0, 3, 18, 0));
-    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" />);
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />);
     expect(await screen.findByText(/Nothing to write down before prep day/)).toBeTruthy();
     expect(screen.queryByRole('button', { name: 'Out now' })).toBeNull();
   });
@@ -155,7 +168,7 @@ describe('trays due out and not written down', () => {
   });
 
   it('the cooling record marks the tray due out, and not the one still to come, and offers its planned time out', async () => {
-    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" />);
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />);
     const list = await screen.findByRole('list', { name: 'Trays cooling' });
     const [first, second] = within(list).getAllByRole('listitem');
     expect(text(first)).toContain('Left · planned out 08:30 · ⚠ due 10 min ago');

@@ -24,7 +24,8 @@ import { coolingDeleteQuery, coolingParams, coolingRecordSchema } from '@shared/
 import * as cooling from './cooling.service.js';
 
 /** Bake rules and ovens (coach writes, assistant reads), the stateless calculator and a prep week's bake run. */
-export function bakeRunRoutes() {
+/** `alerts`: where a tray written down as thrown away is told to the coaches (the mail queue, the app's address). */
+export function bakeRunRoutes(alerts: cooling.CoolingAlerts) {
   const r = Router();
 
   r.get('/bake-rules', allow('coach', 'assistant'), validated({}, (_i, req) => setup.listBakeRules(emOf(req), actorOf(req))));
@@ -130,7 +131,7 @@ export function bakeRunRoutes() {
     '/weeks/:weekId/bake-run/cooling/:runTrayId',
     allow('coach', 'assistant'),
     validated({ params: coolingParams, body: coolingRecordSchema }, ({ params, body }, req) =>
-      cooling.putCooling(emOf(req), actorOf(req), params.weekId, params.runTrayId, body),
+      cooling.putCooling(emOf(req), actorOf(req), params.weekId, params.runTrayId, body, alerts),
     ),
   );
   r.delete(

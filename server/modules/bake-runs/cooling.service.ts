@@ -1,14 +1,26 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { prepDatesOf } from '@shared/domain/week-board.js';
-import { longDate, type IsoDate } from '@shared/domain/iso-date.js';
+import { longDate, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import type { CoolingListDto, CoolingRecordDto, CoolingRecordValues } from '@shared/schemas/cooling.schema.js';
 import type { GlanceDto } from '@shared/schemas/weeks.schema.js';
-import { checkOnPaper } from '@shared/domain/cooling.js';
+import { checkOnPaper, clockFrom } from '@shared/domain/cooling.js';
+import { toCelsiusRounded } from '@shared/domain/temperature.js';
+import { weekTitle } from '@shared/domain/week-board.js';
 import { datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
 import { Tray } from '../trays/tray.entity.js';
 import { CoolingRecord, type ICoolingRecord } from './bake-run.entity.js';
+import { Membership } from '../auth/user.entity.js';
+import { Workspace } from '../workspaces/workspace.entity.js';
+import { trayThrownAwayMail } from '../mail/mail-templates.js';
+import { appLink, mailKey, queueMail, requestBatchId, type MailQueue } from '../mail/mail.service.js';
+
+/** Where a thrown-away tray is told: the mail queue and the app's address for the link. */
+export interface CoolingAlerts {
+  mail: MailQueue;
+  publicUrl: string;
+}
 
 function present(r: ICoolingRecord): CoolingRecordDto {
   return {
@@ -67,11 +79,17 @@ async function runTrayName(em: EntityManager, week: IWeek, prepDate: string, run
  * PUT /api/weeks/:weekId/bake-run/cooling/:runTrayId: writes down one tray's cooling (coach or assistant). The first
  * write creates the record (no `version`); later ones replace it whole and need the version read (409 when stale).
  */
-export async function putCooling(em: EntityManager, actor: Actor, weekId: number, runTrayId: string, v: CoolingRecordValues): Promise<CoolingRecordDto> {
+export async function putCooling(
+  em: EntityManager,
+  actor: Actor,
+  weekId: number,
+  runTrayId: string,
+  v: CoolingRecordValues,
+  alerts?: CoolingAlerts,
+): Promise<CoolingRecordDto> {
   const { week, prepDate } = await weekAndDate(em, actor, weekId, v.prepDate);
   if (v.outAt.slice(0, 10) !== prepDate)
     throw ValidationError.field('outAt', `It came out on the prep day, ${longDate(prepDate, datesOf(actor))}: keep that date and change the time.`);
-  const row = await em.findOne(CoolingRecord, { week: week.id, prepDate, runTrayId });
   const fields = {
     outAt: v.outAt,
     restartedAt: v.restartedAt,
@@ -80,17 +98,70 @@ export async function putCooling(em: EntityManager, actor: Actor, weekId: number
     note: v.note,
     recordedBy: actor.name,
   };
-  if (row) {
-    if (v.version !== row.version) throw new StaleEdit(row.version, present(row));
-    em.assign(row, fields);
-    await em.flush();
-    return present(row);
+  // The record and, when it newly says "thrown away", the coaches' e-mails: both or neither.
+  return em.transactional(async (tx) => {
+    const row = await tx.findOne(CoolingRecord, { week: week.id, prepDate, runTrayId });
+    if (row) {
+      if (v.version !== row.version) throw new StaleEdit(row.version, present(row));
+      const wasDiscarded = row.discarded;
+      tx.assign(row, fields);
+      await tx.flush();
+      if (row.discarded && !wasDiscarded && alerts) await tellCoaches(tx, actor, week, row, alerts);
+      return present(row);
+    }
+    if (v.version !== undefined) throw new StaleEdit(null);
+    const trayName = await runTrayName(tx, week, prepDate, runTrayId);
+    const created = tx.create(CoolingRecord, { workspace: actor.workspaceId, week: week.id, prepDate, runTrayId, trayName, ...fields });
+    await tx.flush();
+    if (created.discarded && alerts) await tellCoaches(tx, actor, week, created, alerts);
+    return present(created);
+  });
+}
+
+/**
+ * A tray written down as thrown away: an e-mail to each coach of the workspace but the one who wrote it (its portions
+ * no longer count as baked; the coach decides what to bake or change). Once per record and coach, however often the
+ * record is marked thrown away again.
+ */
+async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoolingRecord, alerts: CoolingAlerts): Promise<void> {
+  const coaches = await em.find(Membership, { workspace: actor.workspaceId, role: 'coach' }, { populate: ['user'], orderBy: { id: 'asc' } });
+  const to = coaches.map((m) => m.user.unwrap()).filter((u) => u.id !== actor.userId);
+  if (!to.length) return;
+  const ws = await em.findOneOrFail(Workspace, actor.workspaceId, { fields: ['name'] });
+  const order = datesOf(actor);
+  const paper = checkOnPaper({ ...present(r), discarded: false });
+  const readings = [...r.readings]
+    .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
+    .map((x) => `${clockFrom(x.at, r.outAt)} ${x.tempF} °F (${toCelsiusRounded(x.tempF)} °C)`);
+  const batchId = requestBatchId(`tray-thrown-away|${r.id}`);
+  for (const coach of to) {
+    const body = trayThrownAwayMail({
+      businessName: ws.name,
+      name: coach.name,
+      trayName: r.trayName,
+      prepLabel: shortDate(r.prepDate as IsoDate, order),
+      weekName: weekTitle(week, order),
+      recordedBy: r.recordedBy,
+      outAt: clockFrom(r.outAt, r.outAt),
+      restartedAt: r.restartedAt ? clockFrom(r.restartedAt, r.outAt) : null,
+      readings,
+      // A deadline its readings show as missed is why, most often; said as the cooling record says it.
+      standing: paper.tone === 'block' ? paper.said : null,
+      note: r.note || null,
+      link: appLink(alerts.publicUrl, `/weeks/${week.id}`),
+    });
+    await queueMail(em, alerts.mail, {
+      workspaceId: actor.workspaceId,
+      kind: 'tray-thrown-away',
+      to: coach.email,
+      subject: body.subject,
+      text: body.text,
+      html: body.html,
+      weekId: week.id,
+      batchId,
+      idempotencyKey: mailKey('tta', `${r.id}|u${coach.id}`),
+    });
   }
-  if (v.version !== undefined) throw new StaleEdit(null);
-  const trayName = await runTrayName(em, week, prepDate, runTrayId);
-  const created = em.create(CoolingRecord, { workspace: actor.workspaceId, week: week.id, prepDate, runTrayId, trayName, ...fields });
-  await em.flush();
-  return present(created);
 }
 
 /** DELETE /api/weeks/:weekId/bake-run/cooling/:runTrayId: a record written by mistake (coach or assistant). */

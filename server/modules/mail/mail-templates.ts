@@ -85,3 +85,41 @@ export function prepDayMail(p: { businessName: string; name?: string | null; pre
     html: layout(lines, p.link ? { href: p.link, label: 'Open the shopping list' } : undefined),
   };
 }
+
+/**
+ * To a coach: a tray of a prep day was written down as thrown away in the cooling record. Its portions no longer
+ * count as baked; the coach decides whether to bake it again or change the plates that needed it.
+ */
+export function trayThrownAwayMail(p: {
+  businessName: string;
+  name: string;
+  trayName: string;
+  prepLabel: string;
+  weekName: string;
+  recordedBy: string;
+  /** "08:33", and "10:50" when it was reheated and cooled again from then. */
+  outAt: string;
+  restartedAt?: string | null;
+  /** "10:45 75 °F (24 °C)", in the order taken. */
+  readings: string[];
+  /** Where it stood on its readings when thrown away (the cooling check's words), if anything is to be said. */
+  standing?: string | null;
+  note?: string | null;
+  link: string;
+}): MailBody {
+  const lines = [
+    `Hello ${p.name},`,
+    `${p.recordedBy} wrote down ${p.trayName} as thrown away on prep day ${p.prepLabel} (${p.weekName}). It came out at ${p.outAt}${
+      p.restartedAt ? `, was reheated and cooled again from ${p.restartedAt}` : ''
+    }.`,
+    p.readings.length ? `Temperatures written down: ${p.readings.join('; ')}.` : 'No temperature was written down for it.',
+    ...(p.standing ? [p.standing] : []),
+    ...(p.note ? [`Note in the cooling record:\n${p.note}`] : []),
+    'Its portions no longer count as baked: the week board shows what is now short, and "Set tray counts to cover the need" adds a tray for it. Bake it again, or change the plates that needed it.',
+  ];
+  return {
+    subject: `${p.businessName}: ${p.trayName} thrown away on prep day ${p.prepLabel}`,
+    text: `${lines.join('\n\n')}\n\nOpen the week board: ${p.link}\n`,
+    html: layout(lines, { href: p.link, label: 'Open the week board' }),
+  };
+}

@@ -146,7 +146,7 @@ export function Component() {
           run={dto.run}
           unit={unit}
           cooling={cooling.data?.records}
-          coolingRecord={<CoolingRecord weekId={weekId} run={dto.run} unit={unit} />}
+          coolingRecord={<CoolingRecord weekId={weekId} run={dto.run} unit={unit} role={me.role === 'coach' ? 'coach' : 'assistant'} />}
           move={{
             saving: moveStart.isPending,
             error: moveStart.error,

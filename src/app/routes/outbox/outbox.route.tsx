@@ -1,10 +1,10 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { OUTBOX_STATUSES, type MailKind, type OutboxStatus } from '@shared/schemas/mail.schema';
+import { OUTBOX_STATUSES, type OutboxStatus } from '@shared/schemas/mail.schema';
 import { outboxBusy, outboxQuery } from '@/features/mail/api/mail.queries';
 import { useRetryOutbox } from '@/features/mail/api/use-retry-outbox';
-import { OutboxStatusBadge } from '@/features/mail/components/outbox-status';
+import { MAIL_KIND_WORDS, OutboxStatusBadge } from '@/features/mail/components/outbox-status';
 import { Button } from '@/components/ui/button';
 import { Pager } from '@/components/ui/pager';
 import { SelectField } from '@/components/ui/field';
@@ -12,15 +12,6 @@ import { Card, EmptyState, Notice, PageHeader, Progress, QueryView, Skeleton } f
 import { errorMessage } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { momentLabel } from '@/lib/dates';
-
-const KIND_WORDS: Record<MailKind, string> = {
-  invitation: 'Invitation',
-  'password-reset': 'Password reset',
-  'week-plan': 'Week plan',
-  'shopping-list': 'Shopping list',
-  'bake-run': 'Bake run',
-  'prep-day': 'Prep-day papers',
-};
 
 /** What each attachment kind is, in words (an unknown kind shows as stored). */
 const ATTACHMENT_WORDS: Record<string, string> = { 'week-plan': 'the week plan (PDF)', 'week-thaw-reminders': 'thaw reminders (calendar)' };
@@ -125,7 +116,7 @@ export function Component() {
                       <td className="py-2 pr-3"><OutboxStatusBadge status={m.status} /></td>
                       <td className="py-2 pr-3 break-all">{m.to}</td>
                       <td className="py-2 pr-3">
-                        <p className="font-bold">{KIND_WORDS[m.kind]}</p>
+                        <p className="font-bold">{MAIL_KIND_WORDS[m.kind] ?? m.kind}</p>
                         <p className="text-sm text-ink-soft">{m.subject}</p>
                         {m.attachments.length > 0 && <p className="text-sm text-ink-faint">Attached: {m.attachments.map((k) => ATTACHMENT_WORDS[k] ?? k).join(', ')}</p>}
                         {m.lastError && m.status !== 'sent' && <p className="text-sm text-signal-700">Last error: {m.lastError}</p>}

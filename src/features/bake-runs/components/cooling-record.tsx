@@ -20,6 +20,9 @@ export function readingAt(time: string, outAt: string): string {
   return time >= outAt.slice(11) ? `${day}T${time}` : `${addDays(day, 1)}T${time}`;
 }
 
+/** Who writes the record: the coach or the kitchen assistant. */
+export type CoolingReader = 'coach' | 'assistant';
+
 /** Fields a tray's own form shows a refusal beside; any other refusal is said under the tray. */
 const SAID_BESIDE = (field: string) => field.startsWith('readings.') || field === 'note' || field === 'restartedAt';
 
@@ -91,8 +94,10 @@ function NotOut({ tray, day, save, busy }: { tray: BakeTrayPlan; day: string; sa
 }
 
 /** One tray's record: its state against the Food Code, its readings, and what can be written down next. */
-function Written({ record, check, unit, write: save, error, busy, onClear, clearing }: {
+function Written({ record, check, unit, write: save, error, busy, onClear, clearing, role }: {
   record: CoolingRecordDto;
+  /** Who reads the page: a tray thrown away by the assistant is e-mailed to the coach. */
+  role: CoolingReader;
   /** Where it stands now (checkCooling). */
   check: CoolingCheck;
   unit: TempUnit;
@@ -149,6 +154,12 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
             </li>
           ))}
         </ol>
+      )}
+      {record.discarded && (
+        <p className="text-sm text-ink-soft">
+          Its portions no longer count as baked: the week board shows what is short
+          {role === 'assistant' ? ', and the coach gets an e-mail about it.' : '; any other coach of the team gets an e-mail about it.'}
+        </p>
       )}
       {check.state !== 'discarded' && check.state !== 'cooled' && (
         <form
@@ -245,7 +256,7 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
  * The cooling record of a prep day (FDA Food Code §3-501.14): each tray's time out, the food temperatures taken as it
  * cools and where it stands; the timers count its deadlines from what is written here.
  */
-export function CoolingRecord({ weekId, run, unit }: { weekId: number; run: BakeRunResult; unit: TempUnit }) {
+export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run: BakeRunResult; unit: TempUnit; role: CoolingReader }) {
   const day = run.start.slice(0, 10);
   const q = useQuery(coolingQuery(weekId, day));
   const save = useSaveCooling(weekId, day);
@@ -317,6 +328,7 @@ export function CoolingRecord({ weekId, run, unit }: { weekId: number; run: Bake
                   {record ? (
                     <Written
                       record={record}
+                      role={role}
                       check={checks.get(t.id)!}
                       unit={unit}
                       write={write}

@@ -1,20 +1,11 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { OutboxStatusBadge } from './outbox-status';
+import { MAIL_KIND_WORDS, OutboxStatusBadge } from './outbox-status';
 import { EmptyState, ErrorState, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { deliveriesQuery } from '../api/week-mail.queries';
 import { counted } from '@/lib/words';
 import { momentLabel } from '@/lib/dates';
-
-const KIND_WORDS: Record<string, string> = {
-  'week-plan': 'Week plan',
-  invitation: 'Invitation',
-  'password-reset': 'Password reset',
-  'shopping-list': 'Shopping list',
-  'bake-run': 'Bake run',
-  'prep-day': 'Prep-day papers',
-};
 
 /** "Plans sent": the e-mails of one client, newest first, with their status (refreshes while some wait). */
 export function DeliveryLog({ clientId }: { clientId: number }) {
@@ -30,7 +21,7 @@ export function DeliveryLog({ clientId }: { clientId: number }) {
         <li key={m.id} className="flex flex-col gap-1 rounded-lg bg-paper p-3 sm:flex-row sm:items-center sm:justify-between">
           <div className="min-w-0">
             <p className="font-bold">
-              {KIND_WORDS[m.kind] ?? m.kind}
+              {MAIL_KIND_WORDS[m.kind] ?? m.kind}
               {m.weekId && m.weekName ? (
                 <>
                   {' · '}

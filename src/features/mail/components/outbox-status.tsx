@@ -1,4 +1,15 @@
-import type { OutboxStatus } from '@shared/schemas/mail.schema';
+import type { MailKind, OutboxStatus } from '@shared/schemas/mail.schema';
+
+/** What each kind of e-mail is, in words (the outbox and a client's delivery log). */
+export const MAIL_KIND_WORDS: Record<MailKind, string> = {
+  invitation: 'Invitation',
+  'password-reset': 'Password reset',
+  'week-plan': 'Week plan',
+  'shopping-list': 'Shopping list',
+  'bake-run': 'Bake run',
+  'prep-day': 'Prep-day papers',
+  'tray-thrown-away': 'Tray thrown away',
+};
 
 const LOOK: Record<OutboxStatus, { icon: string; label: string; cls: string }> = {
   queued: { icon: '…', label: 'Queued', cls: 'border-line-strong bg-paper-deep text-ink' },
