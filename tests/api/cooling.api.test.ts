@@ -140,7 +140,7 @@ describe('the cooling record of a prep day', () => {
       // 75 °F = 23.9 °C, said to the whole degree (NIST SP 811: °C = (°F − 32) × 5/9).
       expect(m.text).toContain('It came out at 10:10.');
       expect(m.text).toContain('Temperatures written down: 12:30 75 °F (24 °C).');
-      expect(m.text).toContain('Not at 70 °F (21 °C) by 12:10, 2 hours after it came out.');
+      expect(m.text).toContain('It was not at 70 °F (21 °C) by 12:10, 2 hours after it came out (FDA Food Code §3-501.14).');
       expect(m.text).toContain('Note in the cooling record:\nLeft on the rack too long.');
       expect(m.text).toContain(`/weeks/${week.id}`);
       expect(m.html).toContain('Left on the rack too long.');
@@ -155,9 +155,21 @@ describe('the cooling record of a prep day', () => {
     expect(after).toHaveLength(3);
     expect(after[2]).toMatchObject({ to: coach.email });
     expect(after[2].text).toContain('No temperature was written down for it.');
+    // Cleared as written by mistake and written again: a new record, told again. 65 °F at 11:00 meets the first stage;
+    // 50 °F at 16:40 is past 16:20, 6 hours after 10:20: the second stage (41 °F) is missed.
+    await second.agent.delete(`${base}/${tray.id}-2?prepDate=2026-01-04&version=1`).expect(204);
+    const late = [
+      { at: '2026-01-04T11:00', tempF: 65 },
+      { at: '2026-01-04T16:40', tempF: 50 },
+    ];
+    await second.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:20', readings: late, discarded: true }).expect(200);
+    const again = await mails();
+    expect(again).toHaveLength(4);
+    expect(again[3].text).toContain('Temperatures written down: 11:00 65 °F (18 °C); 16:40 50 °F (10 °C).');
+    expect(again[3].text).toContain('It was not at 41 °F (5 °C) by 16:20, 6 hours after it came out (FDA Food Code §3-501.14).');
     // The outbox shows it in words of its own.
     const outbox = await coach.agent.get('/api/outbox?kind=tray-thrown-away').expect(200);
-    expect(outbox.body.items.map((i: { kind: string }) => i.kind)).toEqual(['tray-thrown-away', 'tray-thrown-away', 'tray-thrown-away']);
+    expect(outbox.body.items.map((i: { kind: string }) => i.kind)).toEqual(Array(4).fill('tray-thrown-away'));
   });
 
   it('a tray thrown away no longer counts as baked on the week board', async () => {

@@ -3,7 +3,7 @@ import { prepDatesOf } from '@shared/domain/week-board.js';
 import { longDate, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import type { CoolingListDto, CoolingRecordDto, CoolingRecordValues } from '@shared/schemas/cooling.schema.js';
 import type { GlanceDto } from '@shared/schemas/weeks.schema.js';
-import { checkOnPaper, clockFrom } from '@shared/domain/cooling.js';
+import { checkOnPaper, clockFrom, FOOD_CODE_COOLING, type CoolingCheck } from '@shared/domain/cooling.js';
 import { toCelsiusRounded } from '@shared/domain/temperature.js';
 import { weekTitle } from '@shared/domain/week-board.js';
 import { datesOf, type Actor } from '../../http/authz.js';
@@ -14,7 +14,7 @@ import { CoolingRecord, type ICoolingRecord } from './bake-run.entity.js';
 import { Membership } from '../auth/user.entity.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { trayThrownAwayMail } from '../mail/mail-templates.js';
-import { appLink, mailKey, queueMail, requestBatchId, type MailQueue } from '../mail/mail.service.js';
+import { appLink, mailKey, queueMail, type MailQueue } from '../mail/mail.service.js';
 
 /** Where a thrown-away tray is told: the mail queue and the app's address for the link. */
 export interface CoolingAlerts {
@@ -118,6 +118,16 @@ export async function putCooling(
   });
 }
 
+/** "It was not at 70 °F (21 °C) by 10:35, 2 hours after it came out (FDA Food Code §3-501.14)." or null. */
+function missedOnPaper(paper: CoolingCheck, r: ICoolingRecord): string | null {
+  const since = r.restartedAt ? 'cooling started again' : 'it came out';
+  const at = (f: number) => `${f} °F (${toCelsiusRounded(f)} °C)`;
+  const { firstStageF, finalF } = FOOD_CODE_COOLING;
+  if (paper.state === 'missed-70') return `It was not at ${at(firstStageF)} by ${clockFrom(paper.by70, r.outAt)}, 2 hours after ${since} (FDA Food Code §3-501.14).`;
+  if (paper.state === 'missed-41') return `It was not at ${at(finalF)} by ${clockFrom(paper.by41, r.outAt)}, 6 hours after ${since} (FDA Food Code §3-501.14).`;
+  return null;
+}
+
 /**
  * A tray written down as thrown away: an e-mail to each coach of the workspace but the one who wrote it (its portions
  * no longer count as baked; the coach decides what to bake or change). Once per record and coach, however often the
@@ -133,7 +143,6 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
   const readings = [...r.readings]
     .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
     .map((x) => `${clockFrom(x.at, r.outAt)} ${x.tempF} °F (${toCelsiusRounded(x.tempF)} °C)`);
-  const batchId = requestBatchId(`tray-thrown-away|${r.id}`);
   for (const coach of to) {
     const body = trayThrownAwayMail({
       businessName: ws.name,
@@ -145,8 +154,8 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
       outAt: clockFrom(r.outAt, r.outAt),
       restartedAt: r.restartedAt ? clockFrom(r.restartedAt, r.outAt) : null,
       readings,
-      // A deadline its readings show as missed is why, most often; said as the cooling record says it.
-      standing: paper.tone === 'block' ? paper.said : null,
+      // A deadline its readings show as missed is why, most often.
+      standing: missedOnPaper(paper, r),
       note: r.note || null,
       link: appLink(alerts.publicUrl, `/weeks/${week.id}`),
     });
@@ -158,7 +167,6 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
       text: body.text,
       html: body.html,
       weekId: week.id,
-      batchId,
       idempotencyKey: mailKey('tta', `${r.id}|u${coach.id}`),
     });
   }
