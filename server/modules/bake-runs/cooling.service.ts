@@ -1,11 +1,10 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { prepDatesOf } from '@shared/domain/week-board.js';
+import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import { longDate, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import type { CoolingListDto, CoolingRecordDto, CoolingRecordValues } from '@shared/schemas/cooling.schema.js';
 import type { GlanceDto } from '@shared/schemas/weeks.schema.js';
 import { checkOnPaper, clockFrom, FOOD_CODE_COOLING, type CoolingCheck } from '@shared/domain/cooling.js';
 import { toCelsiusRounded } from '@shared/domain/temperature.js';
-import { weekTitle } from '@shared/domain/week-board.js';
 import { datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
