@@ -118,12 +118,12 @@ describe('the cooling record of a prep day', () => {
     });
   });
 
-  it('a tray written down as thrown away is e-mailed to each coach who did not write it, once', async () => {
+  it('a tray written down as thrown away, or kept after all, is e-mailed to each coach who did not write it, once a change', async () => {
     const { assistant, coach, tray, week, base } = await twoTrayWeek();
     const second = await member(app, coach, 'coach');
     type Row = { to: string; subject: string; text: string; html: string };
     const mails = () =>
-      sql<Row>(`select "to", subject, text, html from outbox where week_id = $1 and kind = 'tray-thrown-away' order by id`, [week.id]);
+      sql<Row>(`select "to", subject, text, html from outbox where week_id = $1 and kind = 'cooling-record' order by id`, [week.id]);
     const path = `${base}/${tray.id}-1`;
     // Out at 10:10, 75 °F at 12:30: past 12:10, FDA Food Code §3-501.14's first stage (70 °F within 2 hours) missed.
     const reading = [{ at: '2026-01-04T12:30', tempF: 75 }];
@@ -145,16 +145,28 @@ describe('the cooling record of a prep day', () => {
       expect(m.text).toContain(`/weeks/${week.id}`);
       expect(m.html).toContain('Left on the rack too long.');
     }
-    // Kept after all, then thrown away again: no second e-mail about the same record.
-    await assistant.agent.put(path).send({ outAt: '2026-01-04T10:10', readings: reading, discarded: false, version: 2 }).expect(200);
-    await assistant.agent.put(path).send({ outAt: '2026-01-04T10:10', readings: reading, discarded: true, version: 3 }).expect(200);
+    // A note saved on the thrown-away record changes nothing to tell.
+    await assistant.agent
+      .put(path)
+      .send({ outAt: '2026-01-04T10:10', readings: reading, discarded: true, note: 'Left on the rack.', version: 2 })
+      .expect(200);
     expect(await mails()).toHaveLength(2);
+    // Kept after all: the coaches are told its portions count again; thrown away again: told again.
+    await assistant.agent.put(path).send({ outAt: '2026-01-04T10:10', readings: reading, discarded: false, version: 3 }).expect(200);
+    const kept = (await mails()).slice(2);
+    expect(kept).toHaveLength(2);
+    for (const m of kept) {
+      expect(m.subject).toBe(`${coach.email.split('@')[0]} kitchen: ${tray.name} (1/2) not thrown away after all (prep day Sun, Jan 4)`);
+      expect(m.text).toContain('Its portions count as baked again.');
+    }
+    await assistant.agent.put(path).send({ outAt: '2026-01-04T10:10', readings: reading, discarded: true, version: 4 }).expect(200);
+    expect((await mails()).filter((m) => m.subject.includes('(1/2) thrown away'))).toHaveLength(4);
     // A coach who throws a tray away is not told of it; the other coach is. Written as thrown away at once: told too.
     await second.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:20', discarded: true }).expect(200);
     const after = await mails();
-    expect(after).toHaveLength(3);
-    expect(after[2]).toMatchObject({ to: coach.email });
-    expect(after[2].text).toContain('No temperature was written down for it.');
+    expect(after).toHaveLength(7);
+    expect(after[6]).toMatchObject({ to: coach.email });
+    expect(after[6].text).toContain('No temperature was written down for it.');
     // Cleared as written by mistake and written again: a new record, told again. 65 °F at 11:00 meets the first stage;
     // 50 °F at 16:40 is past 16:20, 6 hours after 10:20: the second stage (41 °F) is missed.
     await second.agent.delete(`${base}/${tray.id}-2?prepDate=2026-01-04&version=1`).expect(204);
@@ -164,12 +176,12 @@ describe('the cooling record of a prep day', () => {
     ];
     await second.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:20', readings: late, discarded: true }).expect(200);
     const again = await mails();
-    expect(again).toHaveLength(4);
-    expect(again[3].text).toContain('Temperatures written down: 11:00 65 °F (18 °C); 16:40 50 °F (10 °C).');
-    expect(again[3].text).toContain('It was not at 41 °F (5 °C) by 16:20, 6 hours after it came out (FDA Food Code §3-501.14).');
+    expect(again).toHaveLength(8);
+    expect(again[7].text).toContain('Temperatures written down: 11:00 65 °F (18 °C); 16:40 50 °F (10 °C).');
+    expect(again[7].text).toContain('It was not at 41 °F (5 °C) by 16:20, 6 hours after it came out (FDA Food Code §3-501.14).');
     // The outbox shows it in words of its own.
-    const outbox = await coach.agent.get('/api/outbox?kind=tray-thrown-away').expect(200);
-    expect(outbox.body.items.map((i: { kind: string }) => i.kind)).toEqual(Array(4).fill('tray-thrown-away'));
+    const outbox = await coach.agent.get('/api/outbox?kind=cooling-record').expect(200);
+    expect(outbox.body.items.map((i: { kind: string }) => i.kind)).toEqual(Array(8).fill('cooling-record'));
   });
 
   it('a tray thrown away no longer counts as baked on the week board', async () => {

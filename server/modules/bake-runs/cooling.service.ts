@@ -12,7 +12,7 @@ import { Tray } from '../trays/tray.entity.js';
 import { CoolingRecord, type ICoolingRecord } from './bake-run.entity.js';
 import { Membership } from '../auth/user.entity.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
-import { trayThrownAwayMail } from '../mail/mail-templates.js';
+import { trayKeptMail, trayThrownAwayMail } from '../mail/mail-templates.js';
 import { appLink, mailKey, queueMail, type MailQueue } from '../mail/mail.service.js';
 
 /** Where a thrown-away tray is told: the mail queue and the app's address for the link. */
@@ -105,7 +105,7 @@ export async function putCooling(
       const wasDiscarded = row.discarded;
       tx.assign(row, fields);
       await tx.flush();
-      if (row.discarded && !wasDiscarded && alerts) await tellCoaches(tx, actor, week, row, alerts);
+      if (row.discarded !== wasDiscarded && alerts) await tellCoaches(tx, actor, week, row, alerts);
       return present(row);
     }
     if (v.version !== undefined) throw new StaleEdit(null);
@@ -128,9 +128,9 @@ function missedOnPaper(paper: CoolingCheck, r: ICoolingRecord): string | null {
 }
 
 /**
- * A tray written down as thrown away: an e-mail to each coach of the workspace but the one who wrote it (its portions
- * no longer count as baked; the coach decides what to bake or change). Once per record and coach, however often the
- * record is marked thrown away again.
+ * A tray written down as thrown away, or as kept after all: an e-mail to each coach of the workspace but the one who
+ * wrote it (its portions no longer count as baked, or count again; the coach decides what to bake or change). One
+ * per change of the record (its version) and coach: a job retried sends nothing twice.
  */
 async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoolingRecord, alerts: CoolingAlerts): Promise<void> {
   const coaches = await em.find(Membership, { workspace: actor.workspaceId, role: 'coach' }, { populate: ['user'], orderBy: { id: 'asc' } });
@@ -138,35 +138,40 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
   if (!to.length) return;
   const ws = await em.findOneOrFail(Workspace, actor.workspaceId, { fields: ['name'] });
   const order = datesOf(actor);
+  const said = {
+    businessName: ws.name,
+    trayName: r.trayName,
+    prepLabel: shortDate(r.prepDate as IsoDate, order),
+    weekName: weekTitle(week, order),
+    recordedBy: r.recordedBy,
+    link: appLink(alerts.publicUrl, `/weeks/${week.id}`),
+  };
   const paper = checkOnPaper({ ...present(r), discarded: false });
   const readings = [...r.readings]
     .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
     .map((x) => `${clockFrom(x.at, r.outAt)} ${x.tempF} °F (${toCelsiusRounded(x.tempF)} °C)`);
   for (const coach of to) {
-    const body = trayThrownAwayMail({
-      businessName: ws.name,
-      name: coach.name,
-      trayName: r.trayName,
-      prepLabel: shortDate(r.prepDate as IsoDate, order),
-      weekName: weekTitle(week, order),
-      recordedBy: r.recordedBy,
-      outAt: clockFrom(r.outAt, r.outAt),
-      restartedAt: r.restartedAt ? clockFrom(r.restartedAt, r.outAt) : null,
-      readings,
-      // A deadline its readings show as missed is why, most often.
-      standing: missedOnPaper(paper, r),
-      note: r.note || null,
-      link: appLink(alerts.publicUrl, `/weeks/${week.id}`),
-    });
+    const body = r.discarded
+      ? trayThrownAwayMail({
+          ...said,
+          name: coach.name,
+          outAt: clockFrom(r.outAt, r.outAt),
+          restartedAt: r.restartedAt ? clockFrom(r.restartedAt, r.outAt) : null,
+          readings,
+          // A deadline its readings show as missed is why, most often.
+          standing: missedOnPaper(paper, r),
+          note: r.note || null,
+        })
+      : trayKeptMail({ ...said, name: coach.name });
     await queueMail(em, alerts.mail, {
       workspaceId: actor.workspaceId,
-      kind: 'tray-thrown-away',
+      kind: 'cooling-record',
       to: coach.email,
       subject: body.subject,
       text: body.text,
       html: body.html,
       weekId: week.id,
-      idempotencyKey: mailKey('tta', `${r.id}|u${coach.id}`),
+      idempotencyKey: mailKey('tta', `${r.id}|v${r.version}|u${coach.id}`),
     });
   }
 }

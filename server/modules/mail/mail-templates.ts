@@ -123,3 +123,17 @@ export function trayThrownAwayMail(p: {
     html: layout(lines, { href: p.link, label: 'Open the week board' }),
   };
 }
+
+/** To a coach: a tray written down as thrown away was marked as kept after all (its portions count again). */
+export function trayKeptMail(p: { businessName: string; name: string; trayName: string; prepLabel: string; weekName: string; recordedBy: string; link: string }): MailBody {
+  const lines = [
+    `Hello ${p.name},`,
+    `${p.recordedBy} changed the cooling record: ${p.trayName} of prep day ${p.prepLabel} (${p.weekName}) is not thrown away after all.`,
+    'Its portions count as baked again. If you already added a tray or changed plates for it, check the week board.',
+  ];
+  return {
+    subject: `${p.businessName}: ${p.trayName} not thrown away after all (prep day ${p.prepLabel})`,
+    text: `${lines.join('\n\n')}\n\nOpen the week board: ${p.link}\n`,
+    html: layout(lines, { href: p.link, label: 'Open the week board' }),
+  };
+}

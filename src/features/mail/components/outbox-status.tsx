@@ -8,7 +8,7 @@ export const MAIL_KIND_WORDS: Record<MailKind, string> = {
   'shopping-list': 'Shopping list',
   'bake-run': 'Bake run',
   'prep-day': 'Prep-day papers',
-  'tray-thrown-away': 'Tray thrown away',
+  'cooling-record': 'Cooling record: tray thrown away or kept',
 };
 
 const LOOK: Record<OutboxStatus, { icon: string; label: string; cls: string }> = {
