@@ -447,7 +447,7 @@ export function BakeRunTimers({
             const left = e.minute - nowMinute;
             return (
               <li key={i} className={`flex items-baseline gap-3 text-xl ${left <= 0 ? 'font-bold text-signal-700' : ''}`}>
-                <span className="num w-28 shrink-0">{left > 0 ? `in ${left} min` : left === 0 ? '⏰ now' : `⚠ ${-left} min ago`}</span>
+                <span className="num w-28 shrink-0">{left > 0 ? `in ${left} min` : left === 0 ? '⚠ now' : `⚠ ${-left} min ago`}</span>
                 <span>{describeEvent(e, trayName, unit)}</span>
               </li>
             );
