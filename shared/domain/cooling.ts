@@ -65,7 +65,11 @@ export interface CoolingCheck {
 
 const F70 = FOOD_CODE_COOLING.firstStageF;
 const F41 = FOOD_CODE_COOLING.finalF;
-const both = (f: number) => `${f} °F (${toCelsiusRounded(f)} °C)`;
+/** A temperature in both scales, as the record and its e-mails say it: "70 °F (21 °C)". */
+export const bothScales = (f: number) => `${f} °F (${toCelsiusRounded(f)} °C)`;
+
+/** What the cooling deadlines count from, in words: "it came out", or "cooling started again" after a reheat. */
+export const countedFrom = (entry: { restartedAt?: string | null }) => (entry.restartedAt ? 'cooling started again' : 'it came out');
 
 /** "HH:mm", with "the next day" when `at` falls on a later date than `day`. */
 export function clockFrom(at: string, day: string): string {
@@ -101,10 +105,10 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       state: 'missed-70',
       tone: 'block',
       said:
-        `Not at ${both(F70)} by ${clockFrom(by70, from)}, 2 hours after ${entry.restartedAt ? 'cooling started again' : 'it came out'}. ` +
+        `Not at ${bothScales(F70)} by ${clockFrom(by70, from)}, 2 hours after ${countedFrom(entry)}. ` +
         (entry.restartedAt
           ? 'It has been reheated once already: throw it away'
-          : `Reheat it to ${both(165)} and start cooling again, or throw it away`) +
+          : `Reheat it to ${bothScales(165)} and start cooling again, or throw it away`) +
         ' (common practice; your local food code decides).',
     };
   }
@@ -113,7 +117,7 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       ...base,
       state: 'to-70',
       tone: 'ok',
-      said: `Cool to ${both(F70)} or below by ${clockFrom(by70, from)}, then to ${both(F41)} or below by ${clockFrom(by41, from)}.`,
+      said: `Cool to ${bothScales(F70)} or below by ${clockFrom(by70, from)}, then to ${bothScales(F41)} or below by ${clockFrom(by41, from)}.`,
     };
   }
   if (reached41At) {
@@ -121,7 +125,7 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       ...base,
       state: 'cooled',
       tone: 'ok',
-      said: `Cooled in time: ${both(F70)} reached by ${clockFrom(reached70At, from)}, ${both(F41)} by ${clockFrom(reached41At, from)}.`,
+      said: `Cooled in time: ${bothScales(F70)} reached by ${clockFrom(reached70At, from)}, ${bothScales(F41)} by ${clockFrom(reached41At, from)}.`,
     };
   }
   if (nowM > m41 || hit41) {
@@ -129,14 +133,14 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       ...base,
       state: 'missed-41',
       tone: 'block',
-      said: `Not at ${both(F41)} by ${clockFrom(by41, from)}, 6 hours after ${entry.restartedAt ? 'cooling started again' : 'it came out'}: throw it away (common practice; your local food code decides).`,
+      said: `Not at ${bothScales(F41)} by ${clockFrom(by41, from)}, 6 hours after ${countedFrom(entry)}: throw it away (common practice; your local food code decides).`,
     };
   }
   return {
     ...base,
     state: 'to-41',
     tone: 'ok',
-    said: `${both(F70)} reached at ${clockFrom(reached70At, from)}. Next: ${both(F41)} or below by ${clockFrom(by41, from)} (in the fridge).`,
+    said: `${bothScales(F70)} reached at ${clockFrom(reached70At, from)}. Next: ${bothScales(F41)} or below by ${clockFrom(by41, from)} (in the fridge).`,
   };
 }
 

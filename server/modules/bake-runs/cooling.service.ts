@@ -3,8 +3,7 @@ import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import { longDate, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import type { CoolingListDto, CoolingRecordDto, CoolingRecordValues } from '@shared/schemas/cooling.schema.js';
 import type { GlanceDto } from '@shared/schemas/weeks.schema.js';
-import { checkOnPaper, clockFrom, FOOD_CODE_COOLING, type CoolingCheck } from '@shared/domain/cooling.js';
-import { toCelsiusRounded } from '@shared/domain/temperature.js';
+import { bothScales, checkOnPaper, clockFrom, countedFrom, FOOD_CODE_COOLING, type CoolingCheck } from '@shared/domain/cooling.js';
 import { datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
@@ -119,11 +118,11 @@ export async function putCooling(
 
 /** "It was not at 70 °F (21 °C) by 10:35, 2 hours after it came out (FDA Food Code §3-501.14)." or null. */
 function missedOnPaper(paper: CoolingCheck, r: ICoolingRecord): string | null {
-  const since = r.restartedAt ? 'cooling started again' : 'it came out';
-  const at = (f: number) => `${f} °F (${toCelsiusRounded(f)} °C)`;
   const { firstStageF, finalF } = FOOD_CODE_COOLING;
-  if (paper.state === 'missed-70') return `It was not at ${at(firstStageF)} by ${clockFrom(paper.by70, r.outAt)}, 2 hours after ${since} (FDA Food Code §3-501.14).`;
-  if (paper.state === 'missed-41') return `It was not at ${at(finalF)} by ${clockFrom(paper.by41, r.outAt)}, 6 hours after ${since} (FDA Food Code §3-501.14).`;
+  if (paper.state === 'missed-70')
+    return `It was not at ${bothScales(firstStageF)} by ${clockFrom(paper.by70, r.outAt)}, 2 hours after ${countedFrom(r)} (FDA Food Code §3-501.14).`;
+  if (paper.state === 'missed-41')
+    return `It was not at ${bothScales(finalF)} by ${clockFrom(paper.by41, r.outAt)}, 6 hours after ${countedFrom(r)} (FDA Food Code §3-501.14).`;
   return null;
 }
 
@@ -149,7 +148,7 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
   const paper = checkOnPaper({ ...present(r), discarded: false });
   const readings = [...r.readings]
     .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
-    .map((x) => `${clockFrom(x.at, r.outAt)} ${x.tempF} °F (${toCelsiusRounded(x.tempF)} °C)`);
+    .map((x) => `${clockFrom(x.at, r.outAt)} ${bothScales(x.tempF)}`);
   for (const coach of to) {
     const body = r.discarded
       ? trayThrownAwayMail({
