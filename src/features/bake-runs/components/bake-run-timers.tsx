@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import type { BakeEventKind, BakeRunResult } from '@shared/domain/bake-run-types';
-import { addLocalMinutes } from '@shared/domain/bake-run-time';
+import { addLocalMinutes, requireLocalMinutes } from '@shared/domain/bake-run-time';
 import { eventsWithCooling, notWrittenDown, type RecordedCooling } from '@shared/domain/cooling';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -9,7 +9,7 @@ import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { describeEvent } from './bake-run-sheet';
 import { OvenChecks } from './oven-checks';
 import { localToday } from '@/lib/dates';
-import { clock, hhmm, localMinutes, nowLocalMinutes, type TempUnit } from './temperature';
+import { clock, hhmm, nowLocal, type TempUnit } from './temperature';
 
 /** The device clock, read again every `ms`. */
 export function useDeviceClock(ms: number): Date {
@@ -25,7 +25,7 @@ export function useDeviceClock(ms: number): Date {
 export function useRunMinute(run: BakeRunResult | null): number | null {
   const now = useDeviceClock(15_000);
   if (!run) return null;
-  const minute = nowLocalMinutes(now) - localMinutes(run.start);
+  const minute = requireLocalMinutes(nowLocal(now)) - requireLocalMinutes(run.start);
   return localToday(now) === run.start.slice(0, 10) ? minute : null;
 }
 

@@ -2,7 +2,6 @@ import { useMemo, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { BakeRunResult, BakeTrayPlan } from '@shared/domain/bake-run-types';
 import { checkCooling, clockFrom, notWrittenDown, type CoolingCheck } from '@shared/domain/cooling';
-import { requireLocalMinutes } from '@shared/domain/bake-run-time';
 import type { CoolingRecordDto, CoolingRecordInput } from '@shared/schemas/cooling.schema';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -12,7 +11,7 @@ import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { localToday } from '@/lib/dates';
 import { addDays } from '@shared/domain/iso-date';
 import { clock, formatTemp, minutesSpan, nowLocal, type TempUnit } from './temperature';
-import { useDeviceClock } from './bake-run-timers';
+import { useDeviceClock, useRunMinute } from './bake-run-timers';
 
 /** "HH:mm" typed for a reading, as a local date-time: on the day the tray came out, or the next day when earlier. */
 export function readingAt(time: string, outAt: string): string {
@@ -273,7 +272,7 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
   const checks = useMemo(() => new Map((records ?? []).map((r) => [r.runTrayId, checkCooling(r, now)])), [records, now]);
   const gone = (records ?? []).filter((r) => !inRun.has(r.runTrayId));
   // On the prep day: the trays due out by now that are not written down yet (the timers above name them too).
-  const nowMinute = localToday() === day ? requireLocalMinutes(now) - requireLocalMinutes(run.start) : null;
+  const nowMinute = useRunMinute(run);
   const late = new Set(nowMinute === null || !records ? [] : notWrittenDown(trays, records, nowMinute).map((t) => t.id));
   const counts = { out: 0, missed: 0, cooled: 0 };
   for (const t of trays) {

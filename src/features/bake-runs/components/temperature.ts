@@ -36,21 +36,8 @@ export function minutesSpan(minutes: number): string {
   return h === 0 ? `${m} min` : m === 0 ? `${h} h` : `${h} h ${m} min`;
 }
 
-/** Minutes of a local "YYYY-MM-DDTHH:mm" since the epoch reading (kitchen clock, no time zone). */
-export function localMinutes(local: string): number {
-  const [d, t] = local.split('T');
-  const [y, m, day] = d.split('-').map(Number);
-  const [h, mi] = t.split(':').map(Number);
-  return Math.round(Date.UTC(y, m - 1, day, h, mi) / 60_000);
-}
-
 /** The device clock's "HH:mm". */
 export const hhmm = (d: Date) => `${String(d.getHours()).padStart(2, '0')}:${String(d.getMinutes()).padStart(2, '0')}`;
 
 /** The device clock as a local "YYYY-MM-DDTHH:mm". */
 export const nowLocal = (d = new Date()) => `${localToday(d)}T${hhmm(d)}`;
-
-/** The device's local clock as the same reading. */
-export function nowLocalMinutes(now: Date): number {
-  return Math.floor(Date.UTC(now.getFullYear(), now.getMonth(), now.getDate(), now.getHours(), now.getMinutes(), now.getSeconds()) / 60_000);
-}
