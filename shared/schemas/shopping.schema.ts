@@ -245,6 +245,21 @@ export interface ContainerLabelDto {
   /** Address the QR code points at, and the QR code as a data URL (SVG). */
   url: string;
   qr: string;
+  /** Trays of this plate that the prep day is short of (screen only: the container may not be fillable). */
+  shortTrays: string[];
+}
+
+/** A tray the prep day has fewer portions of than its plates need. */
+export interface ShortTrayDto {
+  trayId: number;
+  trayName: string;
+  /** Whole portions short on this prep day. */
+  portions: number;
+  /** Trays of it the cooling record has thrown away on this prep day, and the trays set for it. */
+  lostTrays: number;
+  trayCount: number;
+  /** Plate labels of this prep day that use it. */
+  plateLabels: number;
 }
 
 export interface LabelSheetDto {
@@ -252,4 +267,6 @@ export interface LabelSheetDto {
   prepDate: string | null;
   prepDates: string[];
   labels: ContainerLabelDto[];
+  /** Trays short on this prep day (thrown away, or fewer trays set than the plates need); empty when all are covered. */
+  short: ShortTrayDto[];
 }

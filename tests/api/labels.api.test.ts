@@ -84,6 +84,41 @@ describe('container labels', () => {
     expect(tue).toMatchObject({ portions: '2', planned: { date: '2026-01-06', slot: 'breakfast' }, eatBy: '2026-01-06', freezeBy: null, frozenBestBy: '2026-03-01' });
   });
 
+  it('marks the plates of a tray the prep day is short of: trays thrown away in the cooling record, or too few set', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    // One portion per tray (cut into 1 piece), a plate on Mon and Tue, household multiplier 1: 2 portions needed.
+    const w = await shoppingWeek(coach, { multiplier: '1', trayCount: 3, tray: { cutPlan: { kind: 'pieces', pieces: 1 } } });
+    const labels = async () => (await assistant.agent.get(`/api/weeks/${w.weekId}/labels?prepDate=2026-01-04`).expect(200)).body;
+    const covered = await labels();
+    expect(covered.short).toEqual([]);
+    expect(covered.labels.map((l: { shortTrays: string[] }) => l.shortTrays)).toEqual([[], [], []]);
+
+    // Two of the three trays thrown away: 1 portion for 2 plates → 1 short; no spare; both plates marked.
+    const cooling = `/api/weeks/${w.weekId}/bake-run/cooling`;
+    for (const k of [1, 2]) {
+      await assistant.agent.put(`${cooling}/${w.tray.id}-${k}`).send({ outAt: '2026-01-04T10:00', discarded: true }).expect(200);
+    }
+    const lost = await labels();
+    expect(lost.short).toEqual([{ trayId: w.tray.id, trayName: w.tray.name, portions: 1, lostTrays: 2, trayCount: 3, plateLabels: 2 }]);
+    expect(lost.labels.map((l: { kind: string; shortTrays: string[] }) => [l.kind, l.shortTrays])).toEqual([
+      ['plate', [w.tray.name]],
+      ['plate', [w.tray.name]],
+    ]);
+
+    // Kept after all, and the coach sets one tray for two plates: short by 1 with nothing thrown away.
+    for (const k of [1, 2]) {
+      await assistant.agent.put(`${cooling}/${w.tray.id}-${k}`).send({ outAt: '2026-01-04T10:00', discarded: false, version: 1 }).expect(200);
+    }
+    const board = (await coach.agent.get(`/api/weeks/${w.weekId}`).expect(200)).body;
+    await coach.agent
+      .put(`/api/weeks/${w.weekId}/trays`)
+      .send({ version: board.week.version, trays: [{ trayId: w.tray.id, prepDate: '2026-01-04', trayCount: 1 }] })
+      .expect(200);
+    const few = await labels();
+    expect(few.short).toEqual([{ trayId: w.tray.id, trayName: w.tray.name, portions: 1, lostTrays: 0, trayCount: 1, plateLabels: 2 }]);
+  });
+
   it('names bad input (prep date outside the week, unknown layout), scopes the week, and refuses clients', async () => {
     const coach = await coachWorkspace(app);
     const other = await coachWorkspace(app);

@@ -20,6 +20,7 @@ const label: ContainerLabelDto = {
   allergenText: 'Contains: Milk',
   url: 'http://example.test/my-plates?date=2026-01-06',
   qr: 'data:image/svg+xml;base64,PHN2Zy8+',
+  shortTrays: [],
 };
 
 describe('a container label', () => {

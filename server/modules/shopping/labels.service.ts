@@ -7,7 +7,14 @@ import { compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
 import { labelCarbohydrate, labelPanel } from '@shared/domain/label-rounding.js';
 import { toVector, type NutrientVector } from '@shared/domain/nutrition.js';
 import { cellPrepDate, computeBoard } from '@shared/domain/week-board.js';
-import { labelsQuerySchema, type ContainerLabelDto, type LabelMacrosDto, type LabelSheetDto, type LabelsQuery } from '@shared/schemas/shopping.schema.js';
+import {
+  labelsQuerySchema,
+  type ContainerLabelDto,
+  type LabelMacrosDto,
+  type LabelSheetDto,
+  type LabelsQuery,
+  type ShortTrayDto,
+} from '@shared/schemas/shopping.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { ValidationError } from '../../http/errors.js';
 import { plateFacts } from '../assemblies/plate-facts.js';
@@ -81,6 +88,17 @@ export async function weekLabels(
     const i = data.slots.indexOf(slot);
     return String(i < 0 ? 99 : i).padStart(2, '0');
   };
+  // Trays this prep day has fewer portions of than its plates need (thrown away, or too few trays set): the plates
+  // that use them may not all be fillable. Which ones go without is the coach's choice on the week board.
+  const short: ShortTrayDto[] = [];
+  for (const tally of result.inventory) {
+    const day = tally.byPrepDate.find((b) => b.prepDate === prepDate);
+    const tray = data.ctx.trays.get(Number(tally.trayId));
+    if (!day || !tray || day.short <= 0) continue;
+    const trayCount = data.trays.filter((t) => t.tray.id === tray.id && t.prepDate === prepDate).reduce((n, t) => n + t.trayCount, 0);
+    short.push({ trayId: tray.id, trayName: tray.name, portions: day.short, lostTrays: day.lostTrays, trayCount, plateLabels: 0 });
+  }
+  const shortById = new Map(short.map((t) => [t.trayId, t]));
   const drafts: Draft[] = [];
 
   for (const cell of data.cells) {
@@ -96,6 +114,8 @@ export async function weekLabels(
     const eatBy = minDate(portions.map((p) => p.eatBy)) ?? cell.date;
     const freezerWeeks = trays.length ? Math.min(...trays.map((t) => t.freezerWeeks)) : 0;
     const multiplier = new Decimal(client.householdMultiplier ?? 1);
+    const shortTrays = [...new Set(facts.trays.map((t) => shortById.get(t.trayId)).filter((t) => t !== undefined))];
+    for (const t of shortTrays) t.plateLabels += 1;
     drafts.push({
       sort: `0|${cell.date}|${slotRank(cell.slot)}|${client.name}`,
       kind: 'plate',
@@ -112,6 +132,7 @@ export async function weekLabels(
       allergens: facts.allergens,
       allergenText: allergenText(facts.allergens),
       url: `${base}/my-plates?date=${cell.date}`,
+      shortTrays: shortTrays.map((t) => t.trayName),
     });
   }
 
@@ -139,11 +160,12 @@ export async function weekLabels(
         allergens: tray.allergens,
         allergenText: allergenText(tray.allergens),
         url: `${base}/trays/${tray.id}`,
+        shortTrays: [],
       });
     }
   }
 
   drafts.sort((a, b) => a.sort.localeCompare(b.sort));
   const labels = await Promise.all(drafts.map(async ({ sort: _sort, ...d }) => ({ ...d, qr: await qrDataUrl(d.url) })));
-  return { layout: q.layout, prepDate, prepDates, labels };
+  return { layout: q.layout, prepDate, prepDates, labels, short: short.sort((a, b) => a.trayName.localeCompare(b.trayName)) };
 }

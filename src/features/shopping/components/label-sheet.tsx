@@ -82,6 +82,12 @@ export function LabelSheet({ layout, labels }: { layout: LabelSheetCode; labels:
                   }}
                 >
                   <Label label={label} small={layout === 'a4-3x7'} />
+                  {label.shortTrays.length > 0 && (
+                    // On screen only: the prep day is short of a tray this plate uses.
+                    <p className="no-print absolute -top-2.5 right-2 max-w-[90%] truncate rounded border border-caution bg-caution-50 px-1.5 text-xs font-bold text-ink">
+                      ⚠ Short: {label.shortTrays.join(', ')}
+                    </p>
+                  )}
                 </div>
               );
             })}
