@@ -29,7 +29,7 @@ export function AppShell() {
   const signOut = () => logout.mutate(undefined, { onSuccess: () => navigate(paths.signIn) });
   const nav = <NavGroups items={items} />;
   return (
-    <div className="min-h-screen md:grid md:grid-cols-[15rem_minmax(0,1fr)]">
+    <div className="min-h-screen md:grid md:grid-cols-[15rem_minmax(0,1fr)] print:block">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-paper-card focus:p-2">
         Skip to content
       </a>
