@@ -1,4 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
+import { PDFParse } from 'pdf-parse';
 import { expectNoSeriousA11yViolations, signIn, SHOTS } from './support';
 
 test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
@@ -50,6 +51,19 @@ test('the assistant checks two items on the shopping list (they sink, strike thr
   await expect(page.getByRole('button', { name: 'Print' })).toBeHidden();
   await expect(page.getByRole('heading', { level: 1, name: /^Shopping list/ })).toBeVisible();
   await page.screenshot({ path: `${SHOTS}/assistant-shopping.png`, fullPage: true });
+  // On paper (US Letter): an item takes one line where it fits and an aisle runs on to the next page rather than
+  // starting a page of its own, so the demo's first two aisles share page 1; every item is printed once.
+  const aisles = await page.locator('section > h2').evaluateAll((hs) => hs.map((h) => (h.firstChild?.textContent ?? '').trim()));
+  const items = await page.locator('section li label > span.flex > span.font-bold').allTextContents();
+  const parser = new PDFParse({ data: new Uint8Array(await page.pdf({ format: 'Letter' })) });
+  const printed = await parser.getText();
+  await parser.destroy();
+  const flat = (t: string) => t.replace(/\s+/g, ' ');
+  expect(aisles.length).toBeGreaterThan(1);
+  expect(flat(printed.pages[0].text)).toContain(aisles[0]);
+  expect(flat(printed.pages[0].text)).toContain(aisles[1]);
+  const all = flat(printed.text);
+  for (const item of items) expect(all.split(flat(item)).length - 1, item).toBeGreaterThanOrEqual(1);
 
   // Home: the kitchen's week shows the same progress, the next prep day and the way to the bake run.
   await page.emulateMedia({ media: 'screen' });

@@ -23,7 +23,7 @@ function ItemRow({ item, onToggle }: { item: ShoppingItemDto; onToggle: (checked
   const checked = tapped ?? item.check.checked;
   const covered = item.toBuy <= 0;
   return (
-    <li>
+    <li className="break-inside-avoid">
       <label
         className={`flex min-h-14 cursor-pointer items-start gap-3 rounded-lg border px-3 py-3 print:min-h-0 print:border-0 print:py-1 ${
           checked ? 'border-line bg-paper-deep text-ink-faint' : 'border-line-strong bg-paper-card'
@@ -41,9 +41,10 @@ function ItemRow({ item, onToggle }: { item: ShoppingItemDto; onToggle: (checked
         <span aria-hidden className="hidden print:inline">
           ☐
         </span>
-        <span className="flex min-w-0 flex-1 flex-col">
+        {/* On paper an item takes one line where it fits (name, what to buy, the need), so a list fills fewer pages. */}
+        <span className="flex min-w-0 flex-1 flex-col print:flex-row print:flex-wrap print:items-baseline print:gap-x-3">
           <span className={`font-bold ${checked ? 'line-through' : ''}`}>{item.name}</span>
-          <span className={`num text-lg ${checked ? 'line-through' : ''} ${covered ? 'text-herb-700' : ''}`}>{buyText(item)}</span>
+          <span className={`num text-lg print:text-base ${checked ? 'line-through' : ''} ${covered ? 'text-herb-700' : ''}`}>{buyText(item)}</span>
           <span className="num text-sm text-ink-soft">
             need {item.neededText}
             {item.fromPantry > 0 && ` · pantry covers ${item.fromPantry === item.needed ? 'all' : 'part'}`}
@@ -67,8 +68,9 @@ function AisleGroup({ aisle, onToggle }: { aisle: ShoppingAisleDto; onToggle: (i
   const ordered = [...aisle.items.filter((i) => !i.check.checked), ...aisle.items.filter((i) => i.check.checked)];
   const left = aisle.items.filter((i) => !i.check.checked).length;
   return (
-    <section aria-labelledby={`aisle-${aisle.aisle}`} className="break-inside-avoid">
-      <h2 id={`aisle-${aisle.aisle}`} className="mb-2 flex items-baseline justify-between text-xl">
+    // On paper an aisle may run on to the next page (an item never splits, a heading never ends a page).
+    <section aria-labelledby={`aisle-${aisle.aisle}`}>
+      <h2 id={`aisle-${aisle.aisle}`} className="mb-2 flex break-after-avoid items-baseline justify-between text-xl">
         {aisle.label}
         <span className="num font-sans text-sm text-ink-faint print:hidden">{left ? `${left} left` : 'done'}</span>
       </h2>
