@@ -58,7 +58,8 @@ export function LabelSheet({ layout, labels }: { layout: LabelSheetCode; labels:
   return (
     <>
       <style>{`@page { size: ${sheet.page.cssSize}; margin: 0; } @media print { #main { padding: 0 !important; margin: 0 !important; max-width: none !important; } .label-page { box-shadow: none !important; margin: 0 !important; break-after: page; } .label-page:last-child { break-after: auto; } }`}</style>
-      <p className="no-print text-sm text-ink-faint md:hidden">The sheets are at real size: scroll sideways to see a whole sheet.</p>
+      {/* A Letter sheet (816 px) is wider than the content column below xl (the side rail takes 15rem). */}
+      <p className="no-print text-sm text-ink-faint xl:hidden">The sheets are at real size: scroll sideways to see a whole sheet.</p>
       {/* Sheets centre with auto margins, so a sheet wider than a phone still scrolls to its left edge. */}
       <div role="region" aria-label="Label sheets at real size" tabIndex={0} className="flex flex-col items-start gap-6 overflow-x-auto pb-2 print:block print:gap-0 print:pb-0">
         {pages.map((page, p) => (
