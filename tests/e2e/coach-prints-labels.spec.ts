@@ -47,3 +47,19 @@ test('the coach prints a prep day’s labels: one page per sheet, each sheet who
   expect(first).not.toContain('Bake rules');
   expect(text.pages[text.pages.length - 1].text.trim()).not.toBe('');
 });
+
+test('the coach prints a base tray’s recipe card from the editor: the recipe comes first on paper, the editor not at all', async ({ page }) => {
+  await signIn(page, 'coach@trayline.test');
+  await page.goto('/trays');
+  await page.getByRole('link', { name: /egg slab/i }).first().click();
+  await expect(page.getByRole('tab', { name: 'Edit', selected: true })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Portion card' })).toBeVisible();
+  const parser = new PDFParse({ data: new Uint8Array(await page.pdf({ format: 'Letter' })) });
+  const text = await parser.getText();
+  await parser.destroy();
+  const first = text.pages[0].text.replace(/\s+/g, ' ');
+  expect(first).toContain('Recipe card');
+  expect(first).toContain('Ingredients');
+  expect(text.text.indexOf('Recipe card')).toBeLessThan(text.text.indexOf('Portion card'));
+  expect(text.text).not.toContain('Print recipe card');
+});

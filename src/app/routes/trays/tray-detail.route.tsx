@@ -84,6 +84,12 @@ export function Component() {
       </PageHeader>
       {notice && <Notice tone="info" title={notice} />}
       {tray.isDemo && <Notice tone="info" title="Demo tray">Invented for trying Trayline; amounts and times are illustrative.</Notice>}
+      {view === 'edit' && isCoach && (
+        // On paper the recipe card comes first, as it does in the card view (the editor does not print).
+        <div className="hidden print:block">
+          <RecipeCard tray={tray} system={me.unitSystem} />
+        </div>
+      )}
       <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
         <div className={`flex flex-col gap-6 ${view === 'edit' && isCoach ? 'print:hidden' : ''}`}>
           {view === 'edit' && isCoach ? (
@@ -109,11 +115,6 @@ export function Component() {
           </Card>
         </div>
       </div>
-      {view === 'edit' && isCoach && (
-        <div className="hidden print:block">
-          <RecipeCard tray={tray} system={me.unitSystem} />
-        </div>
-      )}
       <ScalePanel tray={tray} system={me.unitSystem} />
     </div>
   );
