@@ -1,4 +1,5 @@
 import { DEFAULT_DATE_ORDER, type DateOrder } from '@shared/domain/iso-date.js';
+import { DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { Forbidden, NotFound, Unauthorized } from './errors.js';
 import type { Role } from '@shared/schemas/auth.schema.js';
@@ -28,10 +29,15 @@ export interface Actor {
   nutritionVersion?: string | null;
   /** How the workspace writes dates in words, read with the person (absent where an actor is made without it). */
   dateOrder?: DateOrder;
+  /** How the workspace writes a time of day, read with the person (absent where an actor is made without it). */
+  clock?: ClockStyle;
 }
 
 /** How the actor's workspace writes dates (month-day unless the coach chose day-month). */
 export const datesOf = (actor: Pick<Actor, 'dateOrder'>): DateOrder => actor.dateOrder ?? DEFAULT_DATE_ORDER;
+
+/** How the actor's workspace writes a time of day (24-hour unless the coach chose 12-hour). */
+export const clockOf = (actor: Pick<Actor, 'clock'>): ClockStyle => actor.clock ?? DEFAULT_CLOCK;
 
 /** The measure system the actor's amounts are written in (US customary unless they chose metric). */
 export const measureOf = (actor: Pick<Actor, 'unitSystem'>): 'us' | 'metric' => actor.unitSystem ?? 'us';

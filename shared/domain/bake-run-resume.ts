@@ -2,6 +2,7 @@ import Decimal from 'decimal.js';
 import type { BakeEvent, BakeOvenPlan, BakeRunResult, BakeRunRules, BakeTrayPlan } from './bake-run-types.js';
 import { BAKE_RUN_CAUTIONS, KIND_ORDER } from './bake-run.js';
 import { addLocalMinutes, requireLocalMinutes } from './bake-run-time.js';
+import { clockText, DEFAULT_CLOCK, type ClockStyle } from './clock.js';
 import { toCelsiusRounded } from './temperature.js';
 
 /**
@@ -117,7 +118,13 @@ function hotSaid(ovenF: Record<string, number> | undefined): string {
  * null when nothing is left to bake), every minute counted from the day's `start`. Ovens that baked only kept trays
  * (an oven that has since failed) keep a lane with no set points. The lower bound is the rest's, from `done.from`.
  */
-export function resumeRun(start: string, done: BakeRunDone, rest: BakeRunResult | null, rules: BakeRunRules): BakeRunResult {
+export function resumeRun(
+  start: string,
+  done: BakeRunDone,
+  rest: BakeRunResult | null,
+  rules: BakeRunRules,
+  style: ClockStyle = DEFAULT_CLOCK,
+): BakeRunResult {
   const ovens = (rest?.ovens ?? []).map((o) => retimeOven(o, start));
   for (const t of done.trays) if (!ovens.some((o) => o.name === t.oven)) ovens.push({ name: t.oven, setPoints: [] });
   const ovenIndex = new Map(ovens.map((o, i) => [o.name, i]));
@@ -134,7 +141,7 @@ export function resumeRun(start: string, done: BakeRunDone, rest: BakeRunResult 
     bound > 0 ? new Decimal(session).minus(bound).dividedBy(bound).times(100).toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber() : 0;
   const kept = plural(done.trays.length, 'tray already out is', 'trays already out are');
   const said = rest
-    ? `Planned again from ${done.from.slice(11)}: ${kept} kept as planned (their cooling deadlines still run); ` +
+    ? `Planned again from ${clockText(done.from, style)}: ${kept} kept as planned (their cooling deadlines still run); ` +
       `${plural(rest.trays.length, 'tray is', 'trays are')} planned from then, ${hotSaid(done.ovenF)}.`
     : `Every tray is out of the oven: ${kept} kept as planned (their cooling deadlines still run).`;
   return {

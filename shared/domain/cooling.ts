@@ -11,6 +11,7 @@
  * food not at 70 °F within 2 hours is reheated to 165 °F and cooled again from the start, or thrown away; food not at
  * 41 °F within 6 hours is thrown away. The local food code decides; the words say so.
  */
+import { clockText, DEFAULT_CLOCK, type ClockStyle } from './clock';
 import type { BakeEvent, BakeRunResult } from './bake-run-types';
 import { addLocalMinutes, requireLocalMinutes } from './bake-run-time';
 import { toCelsiusRounded } from './temperature';
@@ -71,16 +72,17 @@ export const bothScales = (f: number) => `${f} °F (${toCelsiusRounded(f)} °C)`
 /** What the cooling deadlines count from, in words: "it came out", or "cooling started again" after a reheat. */
 export const countedFrom = (entry: { restartedAt?: string | null }) => (entry.restartedAt ? 'cooling started again' : 'it came out');
 
-/** "HH:mm", with "the next day" when `at` falls on a later date than `day`. */
-export function clockFrom(at: string, day: string): string {
-  return at.slice(0, 10) > day.slice(0, 10) ? `${at.slice(11)} the next day` : at.slice(11);
+/** The time of `at` as the workspace writes it, with "the next day" when it falls on a later date than `day`. */
+export function clockFrom(at: string, day: string, style: ClockStyle = DEFAULT_CLOCK): string {
+  const time = clockText(at, style);
+  return at.slice(0, 10) > day.slice(0, 10) ? `${time} the next day` : time;
 }
 
 /**
  * Where one tray's cooling stands at local time `now`: the stage it is in, its deadlines, and what to do. Readings
  * before `from` (before a restart) are kept in the record but not counted.
  */
-export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
+export function checkCooling(entry: CoolingEntry, now: string, style: ClockStyle = DEFAULT_CLOCK): CoolingCheck {
   const from = entry.restartedAt ?? entry.outAt;
   const by70 = addLocalMinutes(from, FOOD_CODE_COOLING.firstStageMinutes);
   const by41 = addLocalMinutes(from, FOOD_CODE_COOLING.totalMinutes);
@@ -105,7 +107,7 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       state: 'missed-70',
       tone: 'block',
       said:
-        `Not at ${bothScales(F70)} by ${clockFrom(by70, from)}, 2 hours after ${countedFrom(entry)}. ` +
+        `Not at ${bothScales(F70)} by ${clockFrom(by70, from, style)}, 2 hours after ${countedFrom(entry)}. ` +
         (entry.restartedAt
           ? 'It has been reheated once already: throw it away'
           : `Reheat it to ${bothScales(165)} and start cooling again, or throw it away`) +
@@ -117,7 +119,7 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       ...base,
       state: 'to-70',
       tone: 'ok',
-      said: `Cool to ${bothScales(F70)} or below by ${clockFrom(by70, from)}, then to ${bothScales(F41)} or below by ${clockFrom(by41, from)}.`,
+      said: `Cool to ${bothScales(F70)} or below by ${clockFrom(by70, from, style)}, then to ${bothScales(F41)} or below by ${clockFrom(by41, from, style)}.`,
     };
   }
   if (reached41At) {
@@ -125,7 +127,7 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       ...base,
       state: 'cooled',
       tone: 'ok',
-      said: `Cooled in time: ${bothScales(F70)} reached by ${clockFrom(reached70At, from)}, ${bothScales(F41)} by ${clockFrom(reached41At, from)}.`,
+      said: `Cooled in time: ${bothScales(F70)} reached by ${clockFrom(reached70At, from, style)}, ${bothScales(F41)} by ${clockFrom(reached41At, from, style)}.`,
     };
   }
   if (nowM > m41 || hit41) {
@@ -133,14 +135,14 @@ export function checkCooling(entry: CoolingEntry, now: string): CoolingCheck {
       ...base,
       state: 'missed-41',
       tone: 'block',
-      said: `Not at ${bothScales(F41)} by ${clockFrom(by41, from)}, 6 hours after ${countedFrom(entry)}: throw it away (common practice; your local food code decides).`,
+      said: `Not at ${bothScales(F41)} by ${clockFrom(by41, from, style)}, 6 hours after ${countedFrom(entry)}: throw it away (common practice; your local food code decides).`,
     };
   }
   return {
     ...base,
     state: 'to-41',
     tone: 'ok',
-    said: `${bothScales(F70)} reached at ${clockFrom(reached70At, from)}. Next: ${bothScales(F41)} or below by ${clockFrom(by41, from)} (in the fridge).`,
+    said: `${bothScales(F70)} reached at ${clockFrom(reached70At, from, style)}. Next: ${bothScales(F41)} or below by ${clockFrom(by41, from, style)} (in the fridge).`,
   };
 }
 

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 import { emailAddress as email } from './email';
 import { DATE_ORDERS, type DateOrder } from '../domain/iso-date';
+import { CLOCK_STYLES, type ClockStyle } from '../domain/clock';
 
 export const ROLES = ['coach', 'assistant', 'client'] as const;
 export const roleSchema = z.enum(ROLES);
@@ -26,6 +27,8 @@ export const registerSchema = z.object({
   businessName: z.string().trim().min(1, { message: 'Enter your business name' }).max(120),
   /** How the new workspace writes dates (the sign-up form sends its device's order; a setting afterwards). */
   dateOrder: z.enum(DATE_ORDERS, { message: 'Choose how dates are written: month-day or day-month' }).optional(),
+  /** How the new workspace writes times (the sign-up form sends its device's style; a setting afterwards). */
+  clock: z.enum(CLOCK_STYLES, { message: 'Choose how times are written: 24h or 12h' }).optional(),
 });
 export type RegisterInput = z.infer<typeof registerSchema>;
 
@@ -78,6 +81,8 @@ export interface MeDto {
   tempUnit: (typeof TEMP_UNITS)[number];
   /** How the workspace writes dates in words (the coach's setting; every page and document follows it). */
   dateOrder: DateOrder;
+  /** How the workspace writes a time of day (the coach's setting; every page and document follows it). */
+  clock: ClockStyle;
 }
 
 /** One of the workspaces a person belongs to (GET /api/auth/workspaces): someone may work for two coaches. */

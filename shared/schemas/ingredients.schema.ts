@@ -7,6 +7,7 @@ import { NET_CARB_RULES, type AtwaterCheck, type NetCarbRuleKind, type NutrientN
 import { ambiguousCommaMessage, AmountParseError, decimalCommaToPoint, isMassUnit, isVolumeUnit, MAX_AMOUNT, MAX_AMOUNT_MESSAGE, parseAmount, PLAIN_DECIMAL, unitKind, UnknownUnitError } from '../domain/units';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 import { DATE_ORDERS, type DateOrder } from '../domain/iso-date';
+import { CLOCK_STYLES, type ClockStyle } from '../domain/clock';
 
 /** Ingredient library, recipe calculation and the net-carb setting: inputs (zod) and DTOs for API and client. */
 
@@ -352,6 +353,7 @@ export const NET_CARB_RULE_KINDS = NET_CARB_RULES.map((r) => r.kind) as [NetCarb
 export const workspaceSettingsUpdateSchema = z.object({
   netCarbRule: z.enum(NET_CARB_RULE_KINDS, { message: 'Choose a net-carb rule' }).optional(),
   dateOrder: z.enum(DATE_ORDERS, { message: 'Choose how dates are written: month-day or day-month' }).optional(),
+  clock: z.enum(CLOCK_STYLES, { message: 'Choose how times are written: 24h or 12h' }).optional(),
   version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }).max(PG_INT_MAX, TOO_LARGE),
 });
 export type WorkspaceSettingsUpdateInput = z.input<typeof workspaceSettingsUpdateSchema>;
@@ -365,6 +367,8 @@ export interface WorkspaceSettingsDto {
   netCarbRule: NetCarbRuleKind;
   /** How every page and document of the workspace writes dates in words. */
   dateOrder: DateOrder;
+  /** How every page and document of the workspace writes a time of day. */
+  clock: ClockStyle;
   netCarbRules: Array<{ kind: NetCarbRuleKind; label: string; formula: string }>;
   help: string;
   version: number;

@@ -1,4 +1,5 @@
 import { dateWithYear, dayHeading, DEFAULT_DATE_ORDER, shortDate, type DateOrder } from '@shared/domain/iso-date';
+import { clockSpan, clockText, DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock';
 
 /**
  * How this workspace writes dates ("Mon, Dec 7" or "Mon 7 Dec"; the coach's setting, read with the signed-in person:
@@ -8,6 +9,34 @@ let order: DateOrder = DEFAULT_DATE_ORDER;
 
 export function setDateOrder(next: DateOrder): void {
   order = next;
+}
+
+/** How this workspace writes a time of day ("13:45" or "1:45 PM"; the coach's setting, kept like the date order). */
+let clockStyle: ClockStyle = DEFAULT_CLOCK;
+
+export function setClockStyle(next: ClockStyle): void {
+  clockStyle = next;
+}
+
+/** A time of day ("HH:MM" or a local "YYYY-MM-DDTHH:MM") as the workspace writes it: "13:45" or "1:45 PM". */
+export function timeLabel(time: string): string {
+  return clockText(time, clockStyle);
+}
+
+/** A span of one day, "08:00–09:33" or "8:00–9:33 AM". */
+export function timeSpanLabel(from: string, to: string): string {
+  return clockSpan(from, to, clockStyle);
+}
+
+/** The workspace's clock style, for shared words that write times (cooling checks, replanned summaries). */
+export function currentClockStyle(): ClockStyle {
+  return clockStyle;
+}
+
+/** The style this device's locale (or `locale`) writes times in (en-US: 12-hour; en-GB: 24-hour). */
+export function deviceClockStyle(locale?: string): ClockStyle {
+  const cycle = new Intl.DateTimeFormat(locale, { hour: 'numeric' }).resolvedOptions().hourCycle;
+  return cycle === 'h11' || cycle === 'h12' ? '12h' : '24h';
 }
 
 /** A day in words: "Mon, Dec 7" (long: "Monday, Dec 7"), or "Mon 7 Dec" ("Monday 7 Dec"), as the workspace writes dates. */
@@ -33,12 +62,15 @@ export function deviceDateOrder(locale?: string): DateOrder {
   return day >= 0 && month >= 0 && day < month ? 'day-month' : 'month-day';
 }
 
-const time = new Intl.DateTimeFormat(undefined, { hour: 'numeric', minute: '2-digit' });
-
-/** When something happened ("Wed, Dec 2, 3:13 PM"), on this device's clock (its time in the device's own style). */
+/** When something happened ("Wed, Dec 2, 3:13 PM" or "Wed, Dec 2, 15:13"), on this device's clock. */
 export function momentLabel(iso: string): string {
   const d = new Date(iso);
-  return `${dayLabel(localToday(d))}, ${time.format(d)}`;
+  return `${dayLabel(localToday(d))}, ${timeLabel(localHhmm(d))}`;
+}
+
+/** The time of `d` on this device's clock, "HH:MM". */
+export function localHhmm(d: Date): string {
+  return `${String(d.getHours()).padStart(2, '0')}:${String(d.getMinutes()).padStart(2, '0')}`;
 }
 
 /** "Next prep day: Wednesday, Dec 9", with "(today)" when it is the reader's today. */

@@ -34,6 +34,7 @@ export function signedIn(overrides: Partial<MeDto> = {}): MeDto {
     clientId: null,
     unitSystem: 'us',
     dateOrder: 'month-day',
+    clock: '24h',
     tempUnit: 'F',
     ...overrides,
   };

@@ -1,6 +1,7 @@
 import { toDateOrder } from '@shared/domain/iso-date.js';
+import { toClockStyle } from '@shared/domain/clock.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { datesOf, type Actor } from '../../http/authz.js';
+import { clockOf, datesOf, type Actor } from '../../http/authz.js';
 import { preparedRows } from '../../db/prepared.js';
 import { BadCredentials, Conflict, NotFound, ValidationError } from '../../http/errors.js';
 import type {
@@ -33,7 +34,7 @@ const PASSWORD_RESET_MINUTES = 60;
  * query as the session (session-store.ts).
  */
 export const ACTOR_SQL = (userIdExpr: string, workspaceIdExpr = 'null::int') =>
-  `select u.id as user_id, u.email, u.name, u.unit_system, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version, w.date_order
+  `select u.id as user_id, u.email, u.name, u.unit_system, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version, w.date_order, w.clock
      from membership m join app_user u on u.id = m.user_id join workspace w on w.id = m.workspace_id left join nutrition_stamp ns on ns.workspace_id = m.workspace_id
     where m.user_id = ${userIdExpr}
     order by coalesce(m.workspace_id = ${workspaceIdExpr}, false) desc, coalesce(m.workspace_id = u.last_workspace_id, false) desc, m.id asc
@@ -49,6 +50,7 @@ export interface ActorRow {
   client_id: number | null;
   nutrition_version: string | null;
   date_order: string;
+  clock: string;
 }
 
 export function actorFromRow(m: ActorRow): Actor {
@@ -62,6 +64,7 @@ export function actorFromRow(m: ActorRow): Actor {
     clientId: m.client_id == null ? null : Number(m.client_id),
     nutritionVersion: m.nutrition_version ?? null,
     dateOrder: toDateOrder(m.date_order),
+    clock: toClockStyle(m.clock),
   };
 }
 
@@ -124,6 +127,7 @@ export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
     tempUnit: row.tempUnit as MeDto['tempUnit'],
     // Read with the session (the actor statement), like the role.
     dateOrder: datesOf(actor),
+    clock: clockOf(actor),
   };
 }
 
@@ -146,7 +150,9 @@ export async function register(em: EntityManager, input: RegisterInput): Promise
         email: ['An account with this e-mail already exists; sign in instead'],
       });
     }
-    const ws = tx.create(Workspace, { name: input.businessName, ...(input.dateOrder ? { dateOrder: input.dateOrder } : {}) });
+    const ws = tx.create(Workspace, { name: input.businessName, ...(input.dateOrder ? { dateOrder: input.dateOrder } : {}),
+      ...(input.clock ? { clock: input.clock } : {}),
+    });
     const user = tx.create(User, { email: input.email, name: input.name, passwordHash });
     tx.create(Membership, { user, workspace: ws, role: 'coach' });
     await tx.flush();

@@ -2,6 +2,7 @@ import ical, { ICalAlarmRelatesTo, ICalAlarmType } from 'ical-generator';
 import type { BakeRunResult } from '@shared/domain/bake-run-types.js';
 import { toCelsiusRounded } from '@shared/domain/temperature.js';
 import { floating } from '../../lib/ics.js';
+import { clockText, DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
 
 const deg = (f: number | null | undefined) => (f == null ? '' : `${f} °F (${toCelsiusRounded(f)} °C)`);
 
@@ -11,7 +12,7 @@ const deg = (f: number | null | undefined) => (f == null ? '' : `${f} °F (${toC
  * no time zone), one event per preheat or set-point change, per cook's hands-on task, per tray in the oven (with
  * a reminder at the planned first check) and per food-safety cooling deadline (FDA Food Code §3-501.14).
  */
-export function bakeRunIcs(run: BakeRunResult, meta: { calendarName: string; uidPrefix: string }): string {
+export function bakeRunIcs(run: BakeRunResult, meta: { calendarName: string; uidPrefix: string; clock?: ClockStyle }): string {
   const cal = ical({ name: meta.calendarName, prodId: { company: 'Trayline', product: 'bake-run', language: 'EN' } });
   const names = new Map(run.trays.map((t) => [t.id, t.name]));
   const add = (uid: string, start: string, end: string, summary: string, description = '') =>
@@ -30,7 +31,7 @@ export function bakeRunIcs(run: BakeRunResult, meta: { calendarName: string; uid
       t.inAt,
       t.outAt,
       `${t.name} in ${t.oven}, rack ${t.rack}, ${deg(t.tempF)}`,
-      `First check and out at the end; pull by ${t.pullByAt.slice(11)} at the latest.`,
+      `First check and out at the end; pull by ${clockText(t.pullByAt, meta.clock ?? DEFAULT_CLOCK)} at the latest.`,
     );
     e.createAlarm({ type: ICalAlarmType.display, trigger: 0, relatesTo: ICalAlarmRelatesTo.end, description: `Check ${t.name} (${t.oven})` });
   }

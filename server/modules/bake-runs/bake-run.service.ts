@@ -6,6 +6,7 @@ import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-run-types.js';
 import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
 import { longDate, type DateOrder } from '@shared/domain/iso-date.js';
+import { clockText, type ClockStyle } from '@shared/domain/clock.js';
 import { movedOut, ovensAt, resumeRun, takeDone, type BakeRunDone } from '@shared/domain/bake-run-resume.js';
 import { resolveBakeRunRules } from '@shared/domain/bake-run-model.js';
 import type {
@@ -17,7 +18,7 @@ import type {
   WeekBakeRunDto,
   WeekBakeTrayDto,
 } from '@shared/schemas/bake-setup.schema.js';
-import { datesOf, type Actor } from '../../http/authz.js';
+import { clockOf, datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
 import { Tray } from '../trays/tray.entity.js';
@@ -194,7 +195,7 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
   if (problems.length === 0) {
     const derived = runRulesFrom(used);
     if (done && toBake.length === 0) {
-      run = resumeRun(settings.start, done, null, resolveBakeRunRules(derived.rules));
+      run = resumeRun(settings.start, done, null, resolveBakeRunRules(derived.rules), clockOf(actor));
     } else {
       // Planned again part-way: an oven at a set point then starts the rest from it (if it still can reach it).
       const hot = Object.entries(done?.ovenF ?? {}).filter(([name, f]) => ovens.some((o) => o.name === name && f <= num(o.maxF)));
@@ -210,7 +211,7 @@ export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: nu
       if (parsed.success) {
         const planned = await planBakeRunOffThread(parsed.data);
         const whole = { ...planned, cautions: [...derived.cautions, ...planned.cautions] };
-        run = done ? resumeRun(settings.start, { ...done, ovenF: Object.fromEntries(hot) }, whole, whole.rules) : whole;
+        run = done ? resumeRun(settings.start, { ...done, ovenF: Object.fromEntries(hot) }, whole, whole.rules, clockOf(actor)) : whole;
       } else {
         problems.push(...describeIssues(parsed.error, toBake));
       }
@@ -237,11 +238,11 @@ function startOnPrepDay(start: string, prepDate: string, order: DateOrder): void
 }
 
 /** Once the rest of the day is planned from a time, the day's start cannot move past it. */
-function startBeforeRest(start: string, row: IBakeRunSetting | null): void {
+function startBeforeRest(start: string, row: IBakeRunSetting | null, style: ClockStyle): void {
   if (row?.done && start > row.done.from)
     throw ValidationError.field(
       'start',
-      `The rest of this run is planned from ${row.done.from.slice(11)} (trays already out): the start can be ${row.done.from.slice(11)} at the latest.`,
+      `The rest of this run is planned from ${clockText(row.done.from, style)} (trays already out): the start can be ${clockText(row.done.from, style)} at the latest.`,
     );
 }
 
@@ -291,7 +292,7 @@ async function changeDaySettings(
 export function moveWeekBakeRunStart(em: EntityManager, actor: Actor, weekId: number, v: BakeRunStartValues): Promise<WeekBakeRunDto> {
   return changeDaySettings(em, actor, weekId, v, (prepDate, row) => {
     startOnPrepDay(v.start, prepDate, datesOf(actor));
-    startBeforeRest(v.start, row);
+    startBeforeRest(v.start, row, clockOf(actor));
     return { start: v.start };
   });
 }
@@ -321,7 +322,7 @@ export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: n
     const current = await getWeekBakeRun(em, actor, weekId, prepDate);
     if (!current.run) throw ValidationError.field('out', `There is no plan to take trays out of yet: ${current.problems.join(' ')}`);
     if (v.from < current.settings.start)
-      throw ValidationError.field('from', `The run starts at ${current.settings.start.slice(11)}: plan the rest from then or later.`);
+      throw ValidationError.field('from', `The run starts at ${clockText(current.settings.start, clockOf(actor))}: plan the rest from then or later.`);
     const inRun = new Set(current.run.trays.map((t) => t.id));
     const unknown = v.out.filter((id) => !inRun.has(id));
     if (unknown.length) throw ValidationError.field('out', `No tray ${unknown.join(', ')} in this run.`);
@@ -335,7 +336,7 @@ export function setWeekBakeRunKitchen(em: EntityManager, actor: Actor, weekId: n
       const tray = kept.trays.find((t) => t.id === id);
       if (!tray) throw ValidationError.field(`outAt.${id}`, 'Tick this tray as out to give the time it came out.');
       if (at.slice(0, 10) !== prepDate) throw ValidationError.field(`outAt.${id}`, `It came out on the prep day, ${longDate(prepDate, datesOf(actor))}: change the time only.`);
-      if (at < tray.inAt) throw ValidationError.field(`outAt.${id}`, `${tray.name} went in at ${tray.inAt.slice(11)}: it came out after that.`);
+      if (at < tray.inAt) throw ValidationError.field(`outAt.${id}`, `${tray.name} went in at ${clockText(tray.inAt, clockOf(actor))}: it came out after that.`);
       kept = movedOut(kept, id, at);
     }
     // A tray written down in the cooling record as out at another time keeps that time (a time given here wins).
@@ -376,7 +377,7 @@ export async function putWeekBakeRunSettings(
   }
   startOnPrepDay(v.start, prepDate, datesOf(actor));
   const row = await em.findOne(BakeRunSetting, { week: week.id, prepDate });
-  startBeforeRest(v.start, row);
+  startBeforeRest(v.start, row, clockOf(actor));
   if (row) {
     if (v.version !== row.version) throw new StaleEdit(row.version, presentSettings(prepDate, row));
     em.assign(row, { start: v.start, cooks: v.cooks, handsOnMinutes: v.handsOnMinutes, ovenIds: [...new Set(v.ovenIds)] });

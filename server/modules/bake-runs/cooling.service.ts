@@ -4,7 +4,8 @@ import { longDate, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import type { CoolingListDto, CoolingRecordDto, CoolingRecordValues } from '@shared/schemas/cooling.schema.js';
 import type { GlanceDto } from '@shared/schemas/weeks.schema.js';
 import { bothScales, checkOnPaper, clockFrom, countedFrom, FOOD_CODE_COOLING, type CoolingCheck } from '@shared/domain/cooling.js';
-import { datesOf, type Actor } from '../../http/authz.js';
+import type { ClockStyle } from '@shared/domain/clock.js';
+import { clockOf, datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
 import { Tray } from '../trays/tray.entity.js';
@@ -117,12 +118,12 @@ export async function putCooling(
 }
 
 /** "It was not at 70 °F (21 °C) by 10:35, 2 hours after it came out (FDA Food Code §3-501.14)." or null. */
-function missedOnPaper(paper: CoolingCheck, r: ICoolingRecord): string | null {
+function missedOnPaper(paper: CoolingCheck, r: ICoolingRecord, style: ClockStyle): string | null {
   const { firstStageF, finalF } = FOOD_CODE_COOLING;
   if (paper.state === 'missed-70')
-    return `It was not at ${bothScales(firstStageF)} by ${clockFrom(paper.by70, r.outAt)}, 2 hours after ${countedFrom(r)} (FDA Food Code §3-501.14).`;
+    return `It was not at ${bothScales(firstStageF)} by ${clockFrom(paper.by70, r.outAt, style)}, 2 hours after ${countedFrom(r)} (FDA Food Code §3-501.14).`;
   if (paper.state === 'missed-41')
-    return `It was not at ${bothScales(finalF)} by ${clockFrom(paper.by41, r.outAt)}, 6 hours after ${countedFrom(r)} (FDA Food Code §3-501.14).`;
+    return `It was not at ${bothScales(finalF)} by ${clockFrom(paper.by41, r.outAt, style)}, 6 hours after ${countedFrom(r)} (FDA Food Code §3-501.14).`;
   return null;
 }
 
@@ -137,6 +138,7 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
   if (!to.length) return;
   const ws = await em.findOneOrFail(Workspace, actor.workspaceId, { fields: ['name'] });
   const order = datesOf(actor);
+  const style = clockOf(actor);
   const said = {
     businessName: ws.name,
     trayName: r.trayName,
@@ -148,17 +150,17 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
   const paper = checkOnPaper({ ...present(r), discarded: false });
   const readings = [...r.readings]
     .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
-    .map((x) => `${clockFrom(x.at, r.outAt)} ${bothScales(x.tempF)}`);
+    .map((x) => `${clockFrom(x.at, r.outAt, style)} ${bothScales(x.tempF)}`);
   for (const coach of to) {
     const body = r.discarded
       ? trayThrownAwayMail({
           ...said,
           name: coach.name,
-          outAt: clockFrom(r.outAt, r.outAt),
-          restartedAt: r.restartedAt ? clockFrom(r.restartedAt, r.outAt) : null,
+          outAt: clockFrom(r.outAt, r.outAt, style),
+          restartedAt: r.restartedAt ? clockFrom(r.restartedAt, r.outAt, style) : null,
           readings,
           // A deadline its readings show as missed is why, most often.
-          standing: missedOnPaper(paper, r),
+          standing: missedOnPaper(paper, r, style),
           note: r.note || null,
         })
       : trayKeptMail({ ...said, name: coach.name });

@@ -2,10 +2,10 @@ import type { BakeEvent, BakeRunResult } from '@shared/domain/bake-run-types.js'
 import { CAUTIONS } from '@shared/domain/eat-by.js';
 import { toCelsiusRounded } from '@shared/domain/temperature.js';
 import { cautionsBlock, createDoc, finishDoc, heading, paragraph, table } from './pdf-document.js';
-import { clock } from './pdf-format.js';
 import { DEFAULT_DATE_ORDER, longDate, type DateOrder } from '@shared/domain/iso-date.js';
 import { replannedSummary } from '@shared/domain/bake-run-words.js';
 import { checkOnPaper, clockFrom, FOOD_CODE_COOLING, type CoolingState, type RecordedCooling } from '@shared/domain/cooling.js';
+import { clockText, DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
 
 export interface BakeRunPdfMeta {
   businessName: string;
@@ -14,6 +14,8 @@ export interface BakeRunPdfMeta {
   filename?: string;
   /** How the workspace writes dates (absent: month-day). */
   dateOrder?: DateOrder;
+  /** How the workspace writes a time of day (absent: 24-hour). */
+  clock?: ClockStyle;
   /** Planned again part-way through the day: when the rest starts and how many trays were already out. */
   replanned?: { from: string; kept: number } | null;
   /** What the cooling record says so far (a sheet printed before the bake has none: its lines are written by hand). */
@@ -40,7 +42,7 @@ const initials = (name: string | undefined) =>
 
 const deg = (f: number | null | undefined) => (f == null ? '' : `${f} °F (${toCelsiusRounded(f)} °C)`);
 
-function what(e: BakeEvent, trayName: (id: string | null) => string): string {
+function what(e: BakeEvent, trayName: (id: string | null) => string, clock: (local: string) => string): string {
   const tray = trayName(e.trayId);
   switch (e.kind) {
     case 'preheat':
@@ -73,11 +75,13 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
   const doc = createDoc({ businessName: meta.businessName, title: meta.title, subject: 'Bake run' });
   const names = new Map(run.trays.map((t) => [t.id, t.name]));
   const trayName = (id: string | null) => (id ? names.get(id) ?? id : '');
+  const style = meta.clock ?? DEFAULT_CLOCK;
+  const clock = (local: string) => clockText(local, style);
   heading(doc, meta.title, 20);
   paragraph(doc, `${longDate(run.start.slice(0, 10), meta.dateOrder ?? DEFAULT_DATE_ORDER)}: start ${clock(run.start)}, last tray out ${clock(run.endAt)} (${run.sessionMinutes} minutes).`);
   if (meta.replanned) {
     const { from, kept } = meta.replanned;
-    paragraph(doc, `Planned again at ${clock(from)}: ${replannedSummary(from, kept, run.trays.length)}.`);
+    paragraph(doc, `Planned again at ${clock(from)}: ${replannedSummary(from, kept, run.trays.length, style)}.`);
   }
   paragraph(
     doc,
@@ -112,7 +116,7 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
       { header: 'Oven', width: 0.16 },
       { header: 'What', width: 0.74 },
     ],
-    run.events.map((e) => [clock(e.at), e.oven ?? '', what(e, trayName)]),
+    run.events.map((e) => [clock(e.at), e.oven ?? '', what(e, trayName, clock)]),
   );
 
   heading(doc, 'Trays', 14);
@@ -142,8 +146,8 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
   table(
     doc,
     [
-      { header: 'Tray', width: 0.22 },
-      { header: 'Out', width: 0.07, align: 'right' },
+      { header: 'Tray', width: 0.2 },
+      { header: 'Out', width: 0.09, align: 'right' },
       { header: '70 °F by', width: 0.1, align: 'right' },
       { header: '41 °F by', width: 0.1, align: 'right' },
       { header: 'Readings (time, °F)', width: 0.27 },
@@ -159,10 +163,10 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
         const c = checkOnPaper(r);
         const readings = [...r.readings]
           .sort((a, b) => (a.at < b.at ? -1 : 1))
-          .map((x) => `${clockFrom(x.at, r.outAt)} ${x.tempF} °F`)
+          .map((x) => `${clockFrom(x.at, r.outAt, style)} ${x.tempF} °F`)
           .join(', ');
-        const restart = r.restartedAt ? `Reheated, cooling again from ${clockFrom(r.restartedAt, r.outAt)}. ` : '';
-        return [t.name, clock(r.outAt), clockFrom(c.by70, r.outAt), clockFrom(c.by41, r.outAt), `${restart}${readings}`, RESULT[c.state], initials(r.recordedBy)];
+        const restart = r.restartedAt ? `Reheated, cooling again from ${clockFrom(r.restartedAt, r.outAt, style)}. ` : '';
+        return [t.name, clock(r.outAt), clockFrom(c.by70, r.outAt, style), clockFrom(c.by41, r.outAt, style), `${restart}${readings}`, RESULT[c.state], initials(r.recordedBy)];
       }),
   );
 

@@ -14,11 +14,6 @@ export function signed(value: Decimal.Value, dp: number): string {
   return d.isPositive() && !d.isZero() ? `+${fixed(d, dp)}` : fixed(d, dp);
 }
 
-/** "HH:mm" from a local "YYYY-MM-DDTHH:mm". */
-export function clock(localDateTime: string): string {
-  return localDateTime.slice(11, 16);
-}
-
 export function capitalize(s: string): string {
   return s.charAt(0).toUpperCase() + s.slice(1);
 }

@@ -1,4 +1,5 @@
 import { toDateOrder } from '@shared/domain/iso-date.js';
+import { toClockStyle } from '@shared/domain/clock.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { NET_CARB_RULES } from '@shared/domain/nutrition.js';
 import {
@@ -16,6 +17,7 @@ function present(ws: IWorkspace): WorkspaceSettingsDto {
   return {
     netCarbRule: toNetCarbRule(ws.netCarbRule).kind,
     dateOrder: toDateOrder(ws.dateOrder),
+    clock: toClockStyle(ws.clock),
     netCarbRules: NET_CARB_RULES.map((r) => ({ ...r })),
     help: NET_CARB_HELP,
     version: ws.version,
@@ -26,7 +28,7 @@ export async function getWorkspaceSettings(em: EntityManager, actor: Actor): Pro
   return present(await em.findOneOrFail(Workspace, actor.workspaceId));
 }
 
-/** Changes the net-carb rule and how dates are written (each when given); a stale version is 409 with the current settings. */
+/** Changes the net-carb rule, how dates and times are written (each when given); a stale version is 409 with the current settings. */
 export async function updateWorkspaceSettings(
   em: EntityManager,
   actor: Actor,
@@ -37,6 +39,7 @@ export async function updateWorkspaceSettings(
   if (ws.version !== v.version) throw new StaleEdit(ws.version, present(ws));
   if (v.netCarbRule) ws.netCarbRule = v.netCarbRule;
   if (v.dateOrder) ws.dateOrder = v.dateOrder;
+  if (v.clock) ws.clock = v.clock;
   await em.flush();
   return present(ws);
 }

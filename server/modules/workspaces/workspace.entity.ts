@@ -11,6 +11,8 @@ export const Workspace = defineEntity({
     netCarbRule: p.string().length(40).default('half-other-polyols'),
     /** How dates are written in words (shared/domain/iso-date.ts DATE_ORDERS): 'month-day' (default) or 'day-month'. */
     dateOrder: p.string().length(10).default('month-day'),
+    /** How a time of day is written (shared/domain/clock.ts CLOCK_STYLES): '24h' (default) or '12h'. */
+    clock: p.string().length(4).default('24h'),
     /** Meal slots of the week board, in order. */
     mealSlots: p.json<string[]>().default(JSON.stringify(['breakfast'])),
     isDemo: p.boolean().default(false),

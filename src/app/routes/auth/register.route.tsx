@@ -9,7 +9,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
-import { deviceDateOrder } from '@/lib/dates';
+import { deviceClockStyle, deviceDateOrder } from '@/lib/dates';
 import { AuthLayout } from './auth-layout';
 
 export function Component() {
@@ -23,7 +23,7 @@ export function Component() {
   const e = form.formState.errors;
   const onSubmit = form.handleSubmit((values) => {
     setFormError(null);
-    register.mutate({ ...values, dateOrder: deviceDateOrder() }, {
+    register.mutate({ ...values, dateOrder: deviceDateOrder(), clock: deviceClockStyle() }, {
       onSuccess: () => navigate(paths.home),
       onError: (err) => setFormError(applyServerErrors(err, form.setError)),
     });

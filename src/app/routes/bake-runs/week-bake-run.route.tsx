@@ -15,7 +15,7 @@ import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/comp
 import { paths } from '@/config/paths';
 import { replannedSummary } from '@shared/domain/bake-run-words';
 import { errorMessage, isApiError } from '@/lib/problem';
-import { dayLabel } from '@/lib/dates';
+import { currentClockStyle, dayLabel, timeLabel } from '@/lib/dates';
 
 const linkClass = 'inline-flex min-h-11 items-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
 
@@ -43,7 +43,7 @@ export function Component() {
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   const dto = q.data;
   const files = bakeRunFiles(weekId, dto.prepDate);
-  const replanned = dto.run && dto.settings.done ? replannedSummary(dto.settings.done.from, dto.settings.done.out.length, dto.run.trays.length) : '';
+  const replanned = dto.run && dto.settings.done ? replannedSummary(dto.settings.done.from, dto.settings.done.out.length, dto.run.trays.length, currentClockStyle()) : '';
   return (
     <div className="flex flex-col gap-5">
       <PageHeader title="Bake run" lead={`${dto.weekName}, prep day ${dayLabel(dto.prepDate, true)}`}>
@@ -107,7 +107,7 @@ export function Component() {
         </EmptyState>
       )}
       {dto.run && dto.settings.done && (
-        <Notice tone="info" title={`Planned again from ${dto.settings.done.from.slice(11)}`}>
+        <Notice tone="info" title={`Planned again from ${timeLabel(dto.settings.done.from)}`}>
           {replanned.charAt(0).toUpperCase()}
           {replanned.slice(1)}.
           <div className="mt-2">

@@ -6,7 +6,7 @@ import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema';
 import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
-import { localToday, momentLabel } from '@/lib/dates';
+import { localToday, momentLabel, timeLabel } from '@/lib/dates';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/mail/api/week-mail.queries';
@@ -105,9 +105,6 @@ function Reheat({ plate }: { plate: ReheatSource }) {
   );
 }
 
-/** "19:00" as the phone's locale writes a time of day ("7:00 PM" in the US). */
-const clockTime = (hhmm: string) => new Date(`2000-01-01T${hhmm}:00`).toLocaleTimeString(undefined, { hour: 'numeric', minute: '2-digit' });
-
 /** The evening's job: frozen plates of the next day to move to the fridge (the reminder the plan promises). */
 function ThawTonight({ tasks, date, isToday }: { tasks: ThawTask[]; date: string; isToday: boolean }) {
   if (tasks.length === 0) return null;
@@ -120,7 +117,7 @@ function ThawTonight({ tasks, date, isToday }: { tasks: ThawTask[]; date: string
           </li>
         ))}
       </ul>
-      <p>Around {clockTime(THAW_REMINDER_TIME)}: thaw in the refrigerator, never on the counter.</p>
+      <p>Around {timeLabel(THAW_REMINDER_TIME)}: thaw in the refrigerator, never on the counter.</p>
     </Notice>
   );
 }

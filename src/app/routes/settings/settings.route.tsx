@@ -10,7 +10,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { Card, Notice, PageHeader } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { NetCarbRuleCard } from '@/features/ingredients/components/net-carb-rule-card';
-import { DateOrderCard } from './date-order-card';
+import { DatesTimesCard } from './dates-times-card';
 
 export function Component() {
   const me = useMe();
@@ -56,7 +56,7 @@ export function Component() {
           </SelectField>
         </div>
       </Card>
-      {me.role === 'coach' && <DateOrderCard />}
+      {me.role === 'coach' && <DatesTimesCard />}
       {me.role === 'coach' && <NetCarbRuleCard />}
       <Card>
         <h2 className="mb-3 text-xl">Password</h2>

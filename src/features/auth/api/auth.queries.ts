@@ -1,6 +1,7 @@
 import { queryOptions, type QueryClient } from '@tanstack/react-query';
 import { DEFAULT_DATE_ORDER } from '@shared/domain/iso-date';
-import { setDateOrder } from '@/lib/dates';
+import { setClockStyle, setDateOrder } from '@/lib/dates';
+import { DEFAULT_CLOCK } from '@shared/domain/clock';
 import type { InvitationDto, MeDto, MemberDto, MyWorkspaceDto, Role } from '@shared/schemas/auth.schema';
 import { api } from '@/lib/api-client';
 import { isApiError } from '@/lib/problem';
@@ -39,8 +40,8 @@ export const invitationQuery = (token: string) =>
   });
 
 /**
- * Keeps the pages' date words (src/lib/dates.ts) on the workspace's setting: whenever the signed-in person is read
- * or replaced (sign-in, a workspace switch, the coach changing the setting), the order follows. Returns the unsubscribe.
+ * Keeps the pages' date and time words (src/lib/dates.ts) on the workspace's settings: whenever the signed-in person
+ * is read or replaced (sign-in, a workspace switch, the coach changing a setting), the order and the clock follow. Returns the unsubscribe.
  */
 export function followDateOrder(qc: QueryClient): () => void {
   const key = JSON.stringify(authKeys.me());
@@ -49,5 +50,6 @@ export function followDateOrder(qc: QueryClient): () => void {
     if (JSON.stringify(event.query.queryKey) !== key) return;
     const me = event.query.state.data as MeDto | null | undefined;
     setDateOrder(me?.dateOrder ?? DEFAULT_DATE_ORDER);
+    setClockStyle(me?.clock ?? DEFAULT_CLOCK);
   });
 }

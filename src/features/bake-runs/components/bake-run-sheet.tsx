@@ -1,5 +1,6 @@
 import type { BakeEvent, BakeRunResult } from '@shared/domain/bake-run-types';
-import { clock, formatTemp, type TempUnit } from './temperature';
+import { formatTemp, type TempUnit } from './temperature';
+import { timeLabel } from '@/lib/dates';
 
 export function describeEvent(e: BakeEvent, trayName: (id: string | null) => string, unit: TempUnit): string {
   const tray = trayName(e.trayId);
@@ -12,7 +13,7 @@ export function describeEvent(e: BakeEvent, trayName: (id: string | null) => str
     case 'ready':
       return `${e.oven} at ${t(e.tempF)}`;
     case 'hands-on-start':
-      return `Cook ${e.cook ?? 1}: prepare ${tray}${e.untilAt ? ` (until ${clock(e.untilAt)})` : ''}`;
+      return `Cook ${e.cook ?? 1}: prepare ${tray}${e.untilAt ? ` (until ${timeLabel(e.untilAt)})` : ''}`;
     case 'tray-in':
       return `${tray} in (${e.oven}, ${t(e.tempF)})`;
     case 'first-check':
@@ -56,7 +57,7 @@ export function BakeRunSheet({ run, unit, nowMinute }: { run: BakeRunResult; uni
         const cold = e.kind === 'cool-to-70-by' || e.kind === 'fridge-41-by';
         return (
           <li key={i} className={`flex items-start gap-3 px-3 py-3 text-lg sm:text-base ${done ? 'text-ink-faint' : ''} ${cold ? 'bg-frost-50' : ''}`}>
-            <span className="num w-16 shrink-0 font-bold">{clock(e.at)}</span>
+            <span className="num w-20 shrink-0 whitespace-nowrap font-bold">{timeLabel(e.at)}</span>
             <span aria-hidden className="w-16 shrink-0 pt-0.5 text-xs font-bold tracking-wide text-ink-soft">
               {TAG[e.kind] ?? ''}
             </span>

@@ -1,5 +1,6 @@
 import type { BakeRunResult } from '@shared/domain/bake-run-types';
-import { BAND_CLASS, clock, formatTemp, tempBand, type TempUnit } from './temperature';
+import { BAND_CLASS, formatTemp, tempBand, type TempUnit } from './temperature';
+import { timeLabel, timeSpanLabel } from '@/lib/dates';
 
 interface Bar {
   key: string;
@@ -38,7 +39,7 @@ export function timelineLanes(run: BakeRunResult, unit: TempUnit): Lane[] {
           from: sp.changeMinute,
           to: sp.readyMinute,
           label: `${i === 0 && sp.fromF === undefined ? 'Preheat' : 'Change'} ${formatTemp(sp.tempF, unit)}`,
-          title: `${o.name}: ${i === 0 && sp.fromF === undefined ? 'preheat' : 'change'} to ${formatTemp(sp.tempF, unit)}, ${clock(sp.changeAt)}–${clock(sp.readyAt)}`,
+          title: `${o.name}: ${i === 0 && sp.fromF === undefined ? 'preheat' : 'change'} to ${formatTemp(sp.tempF, unit)}, ${timeSpanLabel(sp.changeAt, sp.readyAt)}`,
           className: 'border-2 border-dashed border-oven-4 bg-paper-card text-ink',
         })),
       ...run.trays
@@ -49,7 +50,7 @@ export function timelineLanes(run: BakeRunResult, unit: TempUnit): Lane[] {
           from: t.inMinute,
           to: t.outMinute,
           label: `${formatTemp(t.tempF, unit)} · ${t.name}`,
-          title: `${t.name}: ${clock(t.inAt)}–${clock(t.outAt)}, rack ${t.rack}, ${formatTemp(t.tempF, unit)}`,
+          title: `${t.name}: ${timeSpanLabel(t.inAt, t.outAt)}, rack ${t.rack}, ${formatTemp(t.tempF, unit)}`,
           className: BAND_CLASS[tempBand(t.tempF)],
         })),
     ],
@@ -67,7 +68,7 @@ export function timelineLanes(run: BakeRunResult, unit: TempUnit): Lane[] {
         from: t.prep!.startMinute,
         to: t.prep!.endMinute,
         label: `Prep ${t.name}`,
-        title: `Cook ${c + 1}: prepare ${t.name}, ${clock(t.prep!.startAt)}–${clock(t.prep!.endAt)}`,
+        title: `Cook ${c + 1}: prepare ${t.name}, ${timeSpanLabel(t.prep!.startAt, t.prep!.endAt)}`,
         className: 'bg-herb-50 text-ink border border-herb',
       })),
   }));
@@ -91,7 +92,7 @@ export function BakeRunTimeline({ run, unit, nowMinute }: { run: BakeRunResult; 
   const startMin = Number(run.start.slice(11, 13)) * 60 + Number(run.start.slice(14, 16));
   const tickLabel = (m: number) => {
     const t = (((startMin + m) % 1440) + 1440) % 1440;
-    return `${String(Math.floor(t / 60)).padStart(2, '0')}:${String(t % 60).padStart(2, '0')}`;
+    return timeLabel(`${String(Math.floor(t / 60)).padStart(2, '0')}:${String(t % 60).padStart(2, '0')}`);
   };
   return (
     // tabIndex: a phone scrolls the timeline sideways; a keyboard reaches it to scroll it with the arrow keys.
@@ -108,7 +109,7 @@ export function BakeRunTimeline({ run, unit, nowMinute }: { run: BakeRunResult; 
         <div className="relative" style={{ width }}>
           <div className="relative h-7 border-b border-line text-xs text-ink-faint">
             {ticks.map((m) => (
-              <span key={m} className="num absolute -translate-x-1/2" style={{ left: x(m) }}>
+              <span key={m} className="num absolute -translate-x-1/2 whitespace-nowrap" style={{ left: x(m) }}>
                 {tickLabel(m)}
               </span>
             ))}

@@ -8,7 +8,7 @@ import { Notice } from '@/components/ui/states';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { describeEvent } from './bake-run-sheet';
 import { OvenChecks } from './oven-checks';
-import { localToday } from '@/lib/dates';
+import { localToday, timeLabel } from '@/lib/dates';
 import { clock, hhmm, nowLocal, type TempUnit } from './temperature';
 
 /** The device clock, read again every `ms`. */
@@ -118,7 +118,7 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
             setTime(e.target.value);
           }}
           error={fieldError}
-          hint={`Planned ${planned}. Every time on this page, the run sheet, the PDF and the calendar move with it.`}
+          hint={`Planned ${timeLabel(planned)}. Every time on this page, the run sheet, the PDF and the calendar move with it.`}
           className="w-44"
         />
         <Button type="submit" busy={move.saving}>
@@ -126,7 +126,7 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
         </Button>
       </form>
       <p role="status" className="mt-2 text-base">
-        {done ? `The plan now starts at ${planned}.` : ''}
+        {done ? `The plan now starts at ${timeLabel(planned)}.` : ''}
       </p>
       <ChangeRefused error={move.error} redo="move the start" notDone="Start not moved" onReload={move.onReload} />
     </details>
@@ -228,7 +228,7 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
   const names = kitchen.allOvens.filter((o) => kitchen.ovenIds.includes(o.id)).map((o) => o.name);
   const cooksSaid = kitchen.cooks === 1 ? 'one cook' : `${kitchen.cooks} cooks`;
   const keptSaid = kitchen.done
-    ? ` from ${kitchen.done.from.slice(11)}; ${kitchen.done.out.length === 1 ? 'one tray' : `${kitchen.done.out.length} trays`} already out kept as planned`
+    ? ` from ${timeLabel(kitchen.done.from)}; ${kitchen.done.out.length === 1 ? 'one tray' : `${kitchen.done.out.length} trays`} already out kept as planned`
     : '';
   const trays = [...run.trays].sort((a, b) => a.outMinute - b.outMinute);
   return (
@@ -306,7 +306,7 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
                 }}
               />
               <span>
-                {t.name} <span className="num text-ink-soft">· out {clock(t.outAt)}</span>
+                {t.name} <span className="num text-ink-soft">· out {timeLabel(t.outAt)}</span>
               </span>
             </label>
           ))}
@@ -351,7 +351,7 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
             className="w-44"
           />
         ) : (
-          <p className="text-sm text-ink-soft">Nothing ticked: the day is planned again from its start, {clock(run.start)}.</p>
+          <p className="text-sm text-ink-soft">Nothing ticked: the day is planned again from its start, {timeLabel(run.start)}.</p>
         )}
         <div>
           <Button type="submit" busy={kitchen.saving}>
@@ -381,7 +381,7 @@ const LATE_NAMED = 3;
 
 /** Trays due out by now that the cooling record does not have: still in the oven, or out and not written down. */
 function NotWrittenDown({ trays }: { trays: readonly { id: string; name: string; outAt: string }[] }) {
-  const named = trays.slice(0, LATE_NAMED).map((t) => `${t.name} (planned out ${clock(t.outAt)})`);
+  const named = trays.slice(0, LATE_NAMED).map((t) => `${t.name} (planned out ${timeLabel(t.outAt)})`);
   const more = trays.length - named.length;
   return (
     <Notice tone="warn" title={`Due out by now, not in the cooling record: ${named.join(', ')}${more > 0 ? ` and ${more} more` : ''}.`}>

@@ -5,7 +5,8 @@ import { Notice } from '@/components/ui/states';
 import { BakeRunSheet } from './bake-run-sheet';
 import { BakeRunTimeline } from './bake-run-timeline';
 import { BakeRunTimers, useRunMinute, type KitchenChange, type MoveStart } from './bake-run-timers';
-import { BAND_CLASS, clock, formatTemp, type TempUnit } from './temperature';
+import { BAND_CLASS, formatTemp, type TempUnit } from './temperature';
+import { timeLabel } from '@/lib/dates';
 
 /** °F / °C toggle, starting from the person's preference (a local choice, not saved). */
 export function UnitToggle({ unit, onChange }: { unit: TempUnit; onChange: (u: TempUnit) => void }) {
@@ -71,8 +72,8 @@ export function BakeRunView({
     <div className="flex flex-col gap-5">
       <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
         {[
-          ['Start', clock(run.start)],
-          ['Last tray out', clock(run.endAt)],
+          ['Start', timeLabel(run.start)],
+          ['Last tray out', timeLabel(run.endAt)],
           ['Session', `${run.sessionMinutes} min`],
           ['Lower bound', `${run.lowerBoundMinutes} min (${run.provenOptimal ? 'shortest plan' : `within ${run.gapPct}%`})`],
         ].map(([k, v]) => (
@@ -104,17 +105,17 @@ export function BakeRunView({
               <dl className="num mt-1 grid grid-cols-3 gap-2 text-base">
                 <div>
                   <dt className="text-sm text-ink-soft">In</dt>
-                  <dd>{clock(t.inAt)}</dd>
+                  <dd>{timeLabel(t.inAt)}</dd>
                 </div>
                 <div>
                   <dt className="text-sm text-ink-soft">Check / out</dt>
                   <dd>
-                    {clock(t.outAt)} <span className="text-sm text-ink-soft">({t.bakeMinutes} min)</span>
+                    {timeLabel(t.outAt)} <span className="text-sm text-ink-soft">({t.bakeMinutes} min)</span>
                   </dd>
                 </div>
                 <div>
                   <dt className="text-sm text-ink-soft">Pull by</dt>
-                  <dd>{clock(t.pullByAt)}</dd>
+                  <dd>{timeLabel(t.pullByAt)}</dd>
                 </div>
               </dl>
             </li>
@@ -140,11 +141,11 @@ export function BakeRunView({
                   <td className="p-2">{t.oven}</td>
                   <td className="num p-2">{t.rack}</td>
                   <td className="num p-2">{formatTemp(t.tempF, unit)}</td>
-                  <td className="num p-2">{clock(t.inAt)}</td>
+                  <td className="num p-2">{timeLabel(t.inAt)}</td>
                   <td className="num p-2">
-                    {clock(t.outAt)} <span className="text-sm text-ink-soft">({t.bakeMinutes} min)</span>
+                    {timeLabel(t.outAt)} <span className="text-sm text-ink-soft">({t.bakeMinutes} min)</span>
                   </td>
-                  <td className="num p-2">{clock(t.pullByAt)}</td>
+                  <td className="num p-2">{timeLabel(t.pullByAt)}</td>
                 </tr>
               ))}
             </tbody>

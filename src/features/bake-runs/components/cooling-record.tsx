@@ -8,7 +8,7 @@ import { TextField } from '@/components/ui/field';
 import { ErrorState, Notice } from '@/components/ui/states';
 import { coolingQuery, useClearCooling, useSaveCooling } from '../api/cooling';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
-import { localToday } from '@/lib/dates';
+import { currentClockStyle, localToday, timeLabel } from '@/lib/dates';
 import { addDays } from '@shared/domain/iso-date';
 import { clock, formatTemp, minutesSpan, nowLocal, type TempUnit } from './temperature';
 import { useDeviceClock, useRunMinute } from './bake-run-timers';
@@ -118,11 +118,11 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
   return (
     <div className="flex flex-col gap-2">
       <p className="text-base">
-        Out at <span className="num font-bold">{clock(record.outAt)}</span>
+        Out at <span className="num font-bold">{timeLabel(record.outAt)}</span>
         {record.restartedAt && (
           <>
             {' '}
-            · reheated, cooling again from <span className="num font-bold">{clockFrom(record.restartedAt, record.outAt)}</span>
+            · reheated, cooling again from <span className="num font-bold">{clockFrom(record.restartedAt, record.outAt, currentClockStyle())}</span>
           </>
         )}
         <span className="text-sm text-ink-soft"> · written down by {record.recordedBy}</span>
@@ -135,17 +135,17 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
         <ol className="num flex flex-col gap-1 text-base" aria-label={`Readings of ${record.trayName}`}>
           {readings.map((r, i) => (
             <li key={`${r.at}-${i}`} className="flex min-h-9 items-center gap-3">
-              <span className="w-32">{clockFrom(r.at, record.outAt)}</span>
+              <span className="w-32">{clockFrom(r.at, record.outAt, currentClockStyle())}</span>
               <span className="font-bold">{formatTemp(r.tempF, unit === 'C' ? 'C' : 'F')}</span>
               {unit === 'C' && <span className="text-sm text-ink-soft">({formatTemp(r.tempF, 'F')})</span>}
               <Button
                 size="sm"
                 variant="ghost"
                 className="no-print"
-                aria-label={`Remove the ${clock(r.at)} reading`}
+                aria-label={`Remove the ${timeLabel(r.at)} reading`}
                 disabled={busy}
                 onClick={() => {
-                  if (window.confirm(`Remove the ${clock(r.at)} reading of ${formatTemp(r.tempF, unit)}?`)) write({ readings: record.readings.filter((x) => x !== r) });
+                  if (window.confirm(`Remove the ${timeLabel(r.at)} reading of ${formatTemp(r.tempF, unit)}?`)) write({ readings: record.readings.filter((x) => x !== r) });
                 }}
               >
                 Remove
@@ -269,7 +269,7 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
   const records = q.data?.records;
   const byId = useMemo(() => new Map((records ?? []).map((r) => [r.runTrayId, r])), [records]);
   // Each record judged once per tick of the clock (the count, the tray's line and the list below read it).
-  const checks = useMemo(() => new Map((records ?? []).map((r) => [r.runTrayId, checkCooling(r, now)])), [records, now]);
+  const checks = useMemo(() => new Map((records ?? []).map((r) => [r.runTrayId, checkCooling(r, now, currentClockStyle())])), [records, now]);
   const gone = (records ?? []).filter((r) => !inRun.has(r.runTrayId));
   // On the prep day: the trays due out by now that are not written down yet (the timers above name them too).
   const nowMinute = useRunMinute(run);
@@ -318,7 +318,7 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
                   <div className="flex flex-wrap items-baseline justify-between gap-2">
                     <h3 className="text-lg font-bold">{t.name}</h3>
                     <span className="num text-sm text-ink-soft">
-                      {t.oven} · planned out {clock(t.outAt)}
+                      {t.oven} · planned out {timeLabel(t.outAt)}
                       {late.has(t.id) && nowMinute !== null && (
                         <span className="font-bold text-signal-700"> · ⚠ due {minutesSpan(nowMinute - t.outMinute)} ago</span>
                       )}
@@ -362,7 +362,7 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
               <ul className="flex flex-col gap-1 text-base">
                 {gone.map((r) => (
                   <li key={r.runTrayId}>
-                    {r.trayName}: out at <span className="num">{clock(r.outAt)}</span>. {checks.get(r.runTrayId)?.said}
+                    {r.trayName}: out at <span className="num">{timeLabel(r.outAt)}</span>. {checks.get(r.runTrayId)?.said}
                   </li>
                 ))}
               </ul>

@@ -1,4 +1,4 @@
-import { localToday } from '@/lib/dates';
+import { localHhmm, localToday } from '@/lib/dates';
 import { toCelsiusRounded } from '@shared/domain/temperature';
 
 export type TempUnit = 'F' | 'C';
@@ -27,6 +27,7 @@ export const BAND_CLASS: Record<1 | 2 | 3 | 4 | 5, string> = {
   5: 'bg-oven-5 text-paper-card',
 };
 
+/** The "HH:mm" of a local date-time, as a time input takes it (words for people: timeLabel in src/lib/dates.ts). */
 export const clock = (local: string) => local.slice(11, 16);
 
 /** A span of whole minutes in words: "17 min", "2 h", "2 h 5 min". */
@@ -37,7 +38,7 @@ export function minutesSpan(minutes: number): string {
 }
 
 /** The device clock's "HH:mm". */
-export const hhmm = (d: Date) => `${String(d.getHours()).padStart(2, '0')}:${String(d.getMinutes()).padStart(2, '0')}`;
+export const hhmm = localHhmm;
 
 /** The device clock as a local "YYYY-MM-DDTHH:mm". */
 export const nowLocal = (d = new Date()) => `${localToday(d)}T${hhmm(d)}`;

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { ShoppingAisleDto, ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
 import { useSetCheck } from '../api/use-shopping-mutations';
+import { localHhmm, timeLabel } from '@/lib/dates';
 
 export const money = (cents: number) => `$${(cents / 100).toFixed(2)}`;
 
@@ -53,7 +54,7 @@ function ItemRow({ item, onToggle }: { item: ShoppingItemDto; onToggle: (checked
           {checked && item.check.checkedBy && (
             <span className="text-xs text-ink-faint print:hidden">
               ✓ {item.check.checkedBy}
-              {item.check.checkedAt && ` at ${new Date(item.check.checkedAt).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' })}`}
+              {item.check.checkedAt && ` at ${timeLabel(localHhmm(new Date(item.check.checkedAt)))}`}
             </span>
           )}
         </span>
