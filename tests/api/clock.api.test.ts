@@ -1,8 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
-import { PDFParse } from 'pdf-parse';
 import ICAL from 'ical.js';
 import { testApp, agentFor } from '../support/test-app.js';
+import { pdfTextOf } from '../support/pdf-text.js';
 import { coachWorkspace, makeOven, member, PASSWORD, twoTrayWeek, uniq, type Member } from '../support/factories.js';
 import { sql } from '../support/db.js';
 
@@ -13,14 +13,6 @@ let app: Express;
 beforeAll(async () => {
   ({ app } = await testApp());
 });
-
-async function pdfTextOf(agent: Member['agent'], url: string): Promise<string> {
-  const res = await agent.get(url).buffer(true).expect(200);
-  const parser = new PDFParse({ data: new Uint8Array(Buffer.from(res.body)) });
-  const text = (await parser.getText()).text.replace(/\s+/g, ' ');
-  await parser.destroy();
-  return text;
-}
 
 async function setClock(coach: Member, clock: string) {
   const s = await coach.agent.get('/api/workspace/settings').expect(200);

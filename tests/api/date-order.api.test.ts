@@ -1,8 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
-import { PDFParse } from 'pdf-parse';
 import ICAL from 'ical.js';
 import { testApp, agentFor } from '../support/test-app.js';
+import { pdfTextOf } from '../support/pdf-text.js';
 import { coachWorkspace, makeAssembly, makeClient, makeIngredient, makeTray, makeWeek, member, PASSWORD, uniq, type Member } from '../support/factories.js';
 import { shoppingWeek } from '../support/shopping-week.js';
 
@@ -13,22 +13,6 @@ let app: Express;
 beforeAll(async () => {
   ({ app } = await testApp());
 });
-
-async function pdfTextOf(agent: Member['agent'], url: string): Promise<string> {
-  const res = await agent
-    .get(url)
-    .buffer(true)
-    .parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    })
-    .expect(200);
-  const parser = new PDFParse({ data: new Uint8Array(res.body as Buffer) });
-  const text = (await parser.getText()).text.replace(/\s+/g, ' ');
-  await parser.destroy();
-  return text;
-}
 
 async function setOrder(coach: Member, dateOrder: string) {
   const s = await coach.agent.get('/api/workspace/settings').expect(200);

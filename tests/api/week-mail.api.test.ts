@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import ICAL from 'ical.js';
-import { PDFParse } from 'pdf-parse';
+import { pdfText } from '../support/pdf-text.js';
 import { shoppingWeek } from '../support/shopping-week.js';
 import type { Orm } from '@server/db/orm.js';
 import { startMailCatcher, type MailCatcher } from '@server/modules/mail/mail-catcher.js';
@@ -83,13 +83,6 @@ async function publishedWeek(coach: Member, opts: { publish?: boolean; anaSecond
     await coach.agent.post(`/api/weeks/${board.week.id}/publish`).send({ version: trays.body.week.version }).expect(200);
   }
   return { weekId: board.week.id, plateA, plateB, ana, ben, cy, dee };
-}
-
-async function pdfText(buf: Buffer | Uint8Array): Promise<string> {
-  const parser = new PDFParse({ data: new Uint8Array(buf) });
-  const text = (await parser.getText()).text.replace(/\s+/g, ' ');
-  await parser.destroy();
-  return text;
 }
 
 type Row = { id: number; to: string; client_id: number; status: string; batch_id: string; idempotency_key: string; note: string | null; attachments: { pdf: string; payload: Record<string, unknown> }[] };

@@ -1,19 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { render, screen, within } from '@testing-library/react';
-import { planBakeRun } from '@shared/domain/bake-run';
 import { BakeRunView } from '@/features/bake-runs/components/bake-run-view';
+import { twoTrayRun } from './bake-run-fixtures';
 
-// An invented run: two trays at 350 °F in one oven of two racks (rates are the scheduler's common-practice defaults).
-const run = planBakeRun({
-  start: '2026-12-06T08:00',
-  cooks: 1,
-  ambientF: 70,
-  ovens: [{ name: 'Left oven', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 15, maxF: 500 }],
-  trays: [
-    { id: 'a', name: 'Spinach egg slab', tempF: 350, minMinutes: 25, maxMinutes: 30, handsOnMinutes: 0 },
-    { id: 'b', name: 'Roasted radish tray', tempF: 350, minMinutes: 20, maxMinutes: 24, handsOnMinutes: 0 },
-  ],
-});
+const run = twoTrayRun;
 const clock = (iso: string) => iso.slice(11, 16);
 
 describe('the trays of a bake run', () => {

@@ -1,22 +1,12 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
-import { planBakeRun } from '@shared/domain/bake-run';
 import { BakeRunView } from '@/features/bake-runs/components/bake-run-view';
 import { DatesTimesCard } from '@/app/routes/settings/dates-times-card';
 import { deviceClockStyle, momentLabel, setClockStyle } from '@/lib/dates';
 import { jsonResponse, renderInApp } from './render';
+import { twoTrayRun } from './bake-run-fixtures';
 
-// An invented run: two trays at 350 °F in one oven of two racks, from 08:00 (as in bake-run-trays.test.tsx).
-const run = planBakeRun({
-  start: '2026-12-06T08:00',
-  cooks: 1,
-  ambientF: 70,
-  ovens: [{ name: 'Left oven', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 15, maxF: 500 }],
-  trays: [
-    { id: 'a', name: 'Spinach egg slab', tempF: 350, minMinutes: 25, maxMinutes: 30, handsOnMinutes: 0 },
-    { id: 'b', name: 'Roasted radish tray', tempF: 350, minMinutes: 20, maxMinutes: 24, handsOnMinutes: 0 },
-  ],
-});
+const run = twoTrayRun;
 
 afterEach(() => {
   setClockStyle('24h');
