@@ -49,15 +49,16 @@ export const coolingRecordSchema = z
     discarded: z.boolean().default(false),
     note: z.string().trim().max(500, { message: 'Keep the note under 500 characters.' }).default(''),
   })
+  // The words name no time: the record shows the time out beside the field, in the workspace's clock style.
   .superRefine((v, ctx) => {
     const out = minutes(v.outAt);
     // A record covers the 6 hours of cooling and a while after: readings beyond a day are another day's.
     const within = (at: string) => minutes(at) >= out && minutes(at) <= out + 24 * 60;
     if (v.restartedAt !== null && !within(v.restartedAt))
-      ctx.addIssue({ code: 'custom', path: ['restartedAt'], message: `Cooling started again after the tray came out at ${v.outAt.slice(11)} (within a day).` });
+      ctx.addIssue({ code: 'custom', path: ['restartedAt'], message: 'Cooling starts again after the tray came out, and within a day of it.' });
     v.readings.forEach((r, i) => {
       if (!within(r.at))
-        ctx.addIssue({ code: 'custom', path: ['readings', i, 'at'], message: `Taken after the tray came out at ${v.outAt.slice(11)} (within a day).` });
+        ctx.addIssue({ code: 'custom', path: ['readings', i, 'at'], message: 'A reading is taken after the tray came out, and within a day of it.' });
     });
   });
 export type CoolingRecordValues = z.output<typeof coolingRecordSchema>;
