@@ -63,3 +63,21 @@ test('the coach prints a base tray’s recipe card from the editor: the recipe c
   expect(text.text.indexOf('Recipe card')).toBeLessThan(text.text.indexOf('Portion card'));
   expect(text.text).not.toContain('Print recipe card');
 });
+
+test('the coach prints a prep day’s run sheet from the bake run: every tray on paper, no timeline cut off at the page edge', async ({ page }) => {
+  await signIn(page, 'coach@trayline.test');
+  // The demo's published week, read through the API as the coach.
+  const weeks = (await (await page.request.get('/api/weeks')).json()) as { id: number; publishedVersion: number | null }[];
+  await page.goto(`/weeks/${(weeks.find((w) => w.publishedVersion !== null) ?? weeks[0]).id}/bake-run`);
+  await expect(page.getByRole('heading', { level: 1, name: 'Bake run' })).toBeVisible();
+  const trays = page.getByRole('region', { name: 'Trays of the run, as a table' });
+  await expect(trays).toBeVisible();
+  const names = await trays.locator('tbody tr td:first-child').allTextContents();
+  expect(names.length).toBeGreaterThan(0);
+  const parser = new PDFParse({ data: new Uint8Array(await page.pdf({ format: 'Letter' })) });
+  const text = (await parser.getText()).text.replace(/\s+/g, ' ');
+  await parser.destroy();
+  expect(text).toContain('Run sheet');
+  expect(text).not.toContain('Timeline');
+  for (const name of names) expect(text).toContain(name);
+});

@@ -56,7 +56,7 @@ export function BakeRunSheet({ run, unit, nowMinute }: { run: BakeRunResult; uni
         const done = nowMinute !== null && e.minute < nowMinute;
         const cold = e.kind === 'cool-to-70-by' || e.kind === 'fridge-41-by';
         return (
-          <li key={i} className={`flex items-start gap-3 px-3 py-3 text-lg sm:text-base ${done ? 'text-ink-faint' : ''} ${cold ? 'bg-frost-50' : ''}`}>
+          <li key={i} className={`flex break-inside-avoid items-start gap-3 px-3 py-3 text-lg sm:text-base ${done ? 'text-ink-faint' : ''} ${cold ? 'bg-frost-50' : ''}`}>
             <span className="num w-20 shrink-0 whitespace-nowrap font-bold">{timeLabel(e.at)}</span>
             <span aria-hidden className="w-16 shrink-0 pt-0.5 text-xs font-bold tracking-wide text-ink-soft">
               {TAG[e.kind] ?? ''}

@@ -85,7 +85,8 @@ export function BakeRunView({
       </dl>
       {nowMinute !== null && <BakeRunTimers run={run} unit={unit} nowMinute={nowMinute} move={move} kitchen={kitchen} cooling={cooling} />}
       {coolingRecord}
-      <section className="flex flex-col gap-2">
+      {/* Not on paper: a long day is wider than the page and would print cut off; the trays and the run sheet carry it all. */}
+      <section className="flex flex-col gap-2 print:hidden">
         <div className="flex flex-wrap items-center justify-between gap-2">
           <h2 className="text-xl">Timeline</h2>
           <Legend unit={unit} />
@@ -97,7 +98,7 @@ export function BakeRunView({
         {/* On a phone each tray is a card (seven columns do not fit a hand-held screen); wider screens get the table. */}
         <ul className="flex flex-col gap-2 sm:hidden" aria-label="Trays of the run">
           {run.trays.map((t) => (
-            <li key={t.id} className="rounded-lg border border-line bg-paper-card p-3">
+            <li key={t.id} className="break-inside-avoid rounded-lg border border-line bg-paper-card p-3">
               <p className="font-bold">{t.name}</p>
               <p className="text-sm text-ink-soft">
                 {t.oven} · rack {t.rack} · <span className="num">{formatTemp(t.tempF, unit)}</span>
@@ -140,12 +141,12 @@ export function BakeRunView({
                   <td className="p-2 font-bold">{t.name}</td>
                   <td className="p-2">{t.oven}</td>
                   <td className="num p-2">{t.rack}</td>
-                  <td className="num p-2">{formatTemp(t.tempF, unit)}</td>
-                  <td className="num p-2">{timeLabel(t.inAt)}</td>
+                  <td className="num whitespace-nowrap p-2">{formatTemp(t.tempF, unit)}</td>
+                  <td className="num whitespace-nowrap p-2">{timeLabel(t.inAt)}</td>
                   <td className="num p-2">
-                    {timeLabel(t.outAt)} <span className="text-sm text-ink-soft">({t.bakeMinutes} min)</span>
+                    <span className="whitespace-nowrap">{timeLabel(t.outAt)}</span> <span className="whitespace-nowrap text-sm text-ink-soft">({t.bakeMinutes} min)</span>
                   </td>
-                  <td className="num p-2">{timeLabel(t.pullByAt)}</td>
+                  <td className="num whitespace-nowrap p-2">{timeLabel(t.pullByAt)}</td>
                 </tr>
               ))}
             </tbody>

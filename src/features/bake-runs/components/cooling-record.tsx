@@ -314,7 +314,7 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
               const busy = saving === t.id && save.isPending;
               const write: Write = (input, done) => save.mutate({ runTrayId: t.id, ...input }, { onSuccess: () => done?.() });
               return (
-                <li key={t.id} className="flex flex-col gap-2 rounded-lg border border-line bg-paper-card p-3">
+                <li key={t.id} className="flex break-inside-avoid flex-col gap-2 rounded-lg border border-line bg-paper-card p-3">
                   <div className="flex flex-wrap items-baseline justify-between gap-2">
                     <h3 className="text-lg font-bold">{t.name}</h3>
                     <span className="num text-sm text-ink-soft">
