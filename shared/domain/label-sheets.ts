@@ -81,10 +81,20 @@ export function labelPosition(sheet: LabelSheet, index: number): { page: number;
   };
 }
 
-/** Splits labels into pages of one sheet each. */
-export function pagesOf<T>(labels: readonly T[], sheet: LabelSheet): T[][] {
+/**
+ * Splits labels into pages of one sheet each. `skip` places on the first sheet are left empty (null): a sheet used in
+ * part before starts at its first unused label (counted row by row, as `labelPosition` places them).
+ */
+export function pagesOf<T>(labels: readonly T[], sheet: LabelSheet, skip = 0): (T | null)[][] {
   const per = labelsPerSheet(sheet);
-  const pages: T[][] = [];
-  for (let i = 0; i < labels.length; i += per) pages.push(labels.slice(i, i + per));
+  if (!Number.isInteger(skip) || skip < 0 || skip >= per) throw new RangeError(`Labels to skip must be 0 to ${per - 1}: ${skip}`);
+  const placed: (T | null)[] = [...Array<null>(labels.length ? skip : 0).fill(null), ...labels];
+  const pages: (T | null)[][] = [];
+  for (let i = 0; i < placed.length; i += per) pages.push(placed.slice(i, i + per));
   return pages;
+}
+
+/** Sheets that `count` labels take, the first `skip` places of the first sheet left empty. */
+export function sheetsFor(count: number, sheet: LabelSheet, skip = 0): number {
+  return count === 0 ? 0 : Math.ceil((count + skip) / labelsPerSheet(sheet));
 }

@@ -226,6 +226,8 @@ export interface ContainerLabelDto {
   kind: 'plate' | 'spare';
   /** "Client name" or the tray name for a container that is not assigned to a client. */
   title: string;
+  /** The client whose plate it is (null for a spare portion). */
+  clientId: number | null;
   /** The plate's name, or "Spare portion". */
   subtitle: string;
   /** The day and meal slot the plate is planned for (null for a spare portion); pages write the day their way. */

@@ -35,6 +35,8 @@ describe('container labels', () => {
     expect(res.body.labels.map((l: { kind: string }) => l.kind)).toEqual(['plate', 'plate', 'spare']);
     const [mon, tue, spare] = res.body.labels;
     expect(mon).toMatchObject({ planned: { date: '2026-01-05', slot: 'breakfast' }, portions: null });
+    // Whose it is, for printing one client's labels again; a spare portion is no one's.
+    expect([mon.clientId, tue.clientId, spare.clientId]).toEqual([w.client.id, w.client.id, null]);
     expect(tue).toMatchObject({ planned: { date: '2026-01-06', slot: 'breakfast' }, portions: null });
     expect(mon.subtitle).toBe(tue.subtitle);
     // Eat-by = prep date + fridge days (shared/domain/eat-by.ts rule: the prep date is day 0): 01-04 + 4 = 01-08.

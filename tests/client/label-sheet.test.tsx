@@ -7,6 +7,7 @@ import { LabelSheet } from '@/features/shopping/components/label-sheet';
 const label: ContainerLabelDto = {
   kind: 'plate',
   title: 'Ada Example',
+  clientId: 1,
   subtitle: 'Egg slab plate',
   planned: { date: '2026-01-06', slot: 'breakfast' },
   portions: '2',

@@ -1,7 +1,7 @@
 import Decimal from 'decimal.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { LABEL_SHEETS, LABEL_SHEET_CODES, labelPosition, labelsPerSheet, pagesOf, sheetExtent } from '@shared/domain/label-sheets';
+import { LABEL_SHEETS, LABEL_SHEET_CODES, labelPosition, labelsPerSheet, pagesOf, sheetExtent, sheetsFor } from '@shared/domain/label-sheets';
 
 // Page sizes: US Letter 8.5 × 11 in (ANSI/ASME Y14.1, "A" size); A4 210 × 297 mm (ISO 216).
 // The label grids (2 × 5 of 4 × 2 in; 3 × 7 of 63.5 × 38.1 mm) are common blank-label layouts: common practice, no source.
@@ -50,5 +50,27 @@ describe('label sheets', () => {
         }
       }),
     );
+  });
+
+  it('a sheet used in part before: the first places stay empty, the labels follow in order, the sheet count adds them (property)', () => {
+    fc.assert(
+      fc.property(fc.constantFrom(...LABEL_SHEET_CODES), fc.integer({ min: 0, max: 300 }), fc.nat(), (code, n, k) => {
+        const s = LABEL_SHEETS[code];
+        const skip = k % labelsPerSheet(s);
+        const labels = Array.from({ length: n }, (_, i) => i);
+        const pages = pagesOf(labels, s, skip);
+        expect(pages).toHaveLength(sheetsFor(n, s, skip));
+        const flat = pages.flat();
+        expect(flat.slice(0, n ? skip : 0).every((x) => x === null)).toBe(true);
+        expect(flat.filter((x) => x !== null)).toEqual(labels);
+        expect(pages.every((p) => p.length <= labelsPerSheet(s))).toBe(true);
+      }),
+    );
+    // Worked by hand: 4 labels from place 8 of a 2 × 5 Letter sheet: places 8, 9, 10, then place 1 of a second sheet.
+    const letter = LABEL_SHEETS['letter-2x5'];
+    expect(pagesOf(['a', 'b', 'c', 'd'], letter, 7).map((p) => p.length)).toEqual([10, 1]);
+    expect(sheetsFor(4, letter, 7)).toBe(2);
+    expect(sheetsFor(0, letter, 7)).toBe(0);
+    expect(() => pagesOf(['a'], letter, 10)).toThrow(RangeError);
   });
 });

@@ -1,6 +1,6 @@
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { LABEL_SHEETS, LABEL_SHEET_CODES, labelsPerSheet, type LabelSheetCode } from '@shared/domain/label-sheets';
+import { LABEL_SHEETS, LABEL_SHEET_CODES, labelsPerSheet, sheetsFor, type LabelSheet as SheetLayout, type LabelSheetCode } from '@shared/domain/label-sheets';
 import type { ContainerLabelDto, ShortTrayDto } from '@shared/schemas/shopping.schema';
 import { labelSheetQuery } from '@/features/shopping/api/shopping.queries';
 import { LabelSheet } from '@/features/shopping/components/label-sheet';
@@ -12,7 +12,30 @@ import { dayLabel } from '@/lib/dates';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/hooks/use-me';
 
-const labelsOf = (labels: ContainerLabelDto[], withSpares: boolean) => (withSpares ? labels : labels.filter((l) => l.kind === 'plate'));
+/** The labels to print: one client's plates, or every plate (and the spare portions when asked). */
+const labelsOf = (labels: ContainerLabelDto[], withSpares: boolean, clientId: number | null) =>
+  clientId !== null ? labels.filter((l) => l.clientId === clientId) : withSpares ? labels : labels.filter((l) => l.kind === 'plate');
+
+/** The clients with a plate label, by name (the choice of whose labels to print). */
+const clientsOf = (labels: ContainerLabelDto[]) =>
+  [...new Map(labels.filter((l) => l.clientId !== null).map((l) => [l.clientId!, l.title])).entries()].sort((a, b) => a[1].localeCompare(b[1]));
+
+const COLUMN_WORDS: Record<number, readonly string[]> = { 2: ['left', 'right'], 3: ['left', 'middle', 'right'] };
+
+/** "8 (row 4, right)": where a label place is on its sheet, counted row by row as the sheet is printed. */
+function placeWords(sheet: SheetLayout, place: number): string {
+  const row = Math.floor((place - 1) / sheet.columns) + 1;
+  const col = (place - 1) % sheet.columns;
+  return `${place} (row ${row}, ${COLUMN_WORDS[sheet.columns]?.[col] ?? `column ${col + 1}`})`;
+}
+
+/** The trays short on this prep day, as the labels shown use them (one client's: only their plates count). */
+function shortOf(short: ShortTrayDto[], shown: ContainerLabelDto[], clientId: number | null): ShortTrayDto[] {
+  if (clientId === null) return short;
+  return short
+    .map((t) => ({ ...t, plateLabels: shown.filter((l) => l.shortTrays.includes(t.trayName)).length }))
+    .filter((t) => t.plateLabels > 0);
+}
 
 /** Why a tray is short on this prep day, in the kitchen's words. */
 function shortWhy(t: ShortTrayDto): string {
@@ -63,7 +86,14 @@ export function Component() {
     : 'letter-2x5';
   const prepDate = params.get('prepDate');
   const withSpares = params.get('spares') !== '0';
+  const sheet = LABEL_SHEETS[layout];
+  // The first unused place of a sheet used in part before (1 = a new sheet); kept within the sheet chosen.
+  const start = Math.min(Math.max(Math.trunc(Number(params.get('start'))) || 1, 1), labelsPerSheet(sheet));
   const q = useQuery(labelSheetQuery(weekId, layout, prepDate));
+  // One client's labels: a client with a plate label this prep day (another address reads as everyone's).
+  const clients = q.data ? clientsOf(q.data.labels) : [];
+  const clientId = clients.find(([id]) => String(id) === params.get('client'))?.[0] ?? null;
+  const shown = q.data ? labelsOf(q.data.labels, withSpares, clientId) : [];
   const set = (k: string, v: string) => {
     const next = new URLSearchParams(params);
     next.set(k, v);
@@ -74,7 +104,7 @@ export function Component() {
     <div className="flex flex-col gap-5">
       <div className="no-print flex flex-col gap-4">
         <PageHeader title="Container labels" lead="One label per container: whose it is, when it was made, until when it is good.">
-          <Button onClick={() => window.print()} disabled={!q.data || labelsOf(q.data.labels, withSpares).length === 0}>
+          <Button onClick={() => window.print()} disabled={shown.length === 0}>
             Print labels
           </Button>
         </PageHeader>
@@ -86,10 +116,41 @@ export function Component() {
               </option>
             ))}
           </SelectField>
-          <label className="flex min-h-11 items-center gap-2 self-end font-bold">
-            <input type="checkbox" className="h-5 w-5 accent-herb" checked={withSpares} onChange={(e) => set('spares', e.target.checked ? '1' : '0')} />
-            Label spare portions too
-          </label>
+          <SelectField
+            label="Start at label"
+            value={String(start)}
+            onChange={(e) => set('start', e.target.value)}
+            hint="A sheet used before: its first unused label."
+            className="w-52"
+          >
+            {Array.from({ length: labelsPerSheet(sheet) }, (_, i) => (
+              <option key={i} value={i + 1}>
+                {i === 0 ? '1 (a new sheet)' : placeWords(sheet, i + 1)}
+              </option>
+            ))}
+          </SelectField>
+          {clients.length > 0 && (
+            <SelectField
+              label="Whose labels"
+              value={clientId === null ? '' : String(clientId)}
+              onChange={(e) => set('client', e.target.value)}
+              hint="One client's again, after a change to their plates."
+              className="w-60"
+            >
+              <option value="">Everyone's</option>
+              {clients.map(([id, name]) => (
+                <option key={id} value={id}>
+                  {name}
+                </option>
+              ))}
+            </SelectField>
+          )}
+          {clientId === null && (
+            <label className="flex min-h-11 items-center gap-2 self-end font-bold">
+              <input type="checkbox" className="h-5 w-5 accent-herb" checked={withSpares} onChange={(e) => set('spares', e.target.checked ? '1' : '0')} />
+              Label spare portions too
+            </label>
+          )}
           {q.data && q.data.prepDates.length > 1 && (
             <SelectField label="Prep day" value={q.data.prepDate ?? ''} onChange={(e) => set('prepDate', e.target.value)} className="w-48">
               <DayOptions days={q.data.prepDates} />
@@ -103,21 +164,21 @@ export function Component() {
       </div>
       <QueryView
         query={q}
-        isEmpty={(data) => labelsOf(data.labels, withSpares).length === 0}
+        isEmpty={(data) => labelsOf(data.labels, withSpares, clientId).length === 0}
         empty={<EmptyState title="No containers for this prep day">Fill the week board and set tray counts: each plate and each spare portion gets a label.</EmptyState>}
       >
         {(data) => (
           <>
-            {data.short.length > 0 && (
+            {shortOf(data.short, shown, clientId).length > 0 && (
               <div className="no-print">
-                <ShortNotice short={data.short} weekId={weekId} coach={coach} />
+                <ShortNotice short={shortOf(data.short, shown, clientId)} weekId={weekId} coach={coach} />
               </div>
             )}
             <p className="no-print num text-ink-soft">
-              {counted(labelsOf(data.labels, withSpares).length, 'label')} on{' '}
-              {counted(Math.ceil(labelsOf(data.labels, withSpares).length / labelsPerSheet(LABEL_SHEETS[layout])), 'sheet')}, prep day {data.prepDate ? dayLabel(data.prepDate, true) : 'not set'}
+              {counted(shown.length, 'label')} on {counted(sheetsFor(shown.length, sheet, start - 1), 'sheet')}
+              {start > 1 && `, the first from label ${start}`}, prep day {data.prepDate ? dayLabel(data.prepDate, true) : 'not set'}
             </p>
-            <LabelSheet layout={layout} labels={labelsOf(data.labels, withSpares)} />
+            <LabelSheet layout={layout} labels={shown} skip={start - 1} />
           </>
         )}
       </QueryView>

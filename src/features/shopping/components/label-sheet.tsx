@@ -50,11 +50,12 @@ function Label({ label, small }: { label: ContainerLabelDto; small: boolean }) {
 
 /**
  * The sheet at real size: one page per sheet, labels placed by the sheet's geometry. Print at 100 % (actual size).
+ * `skip` places of the first sheet are left blank (a sheet used in part before); the screen marks them as used.
  */
-export function LabelSheet({ layout, labels }: { layout: LabelSheetCode; labels: ContainerLabelDto[] }) {
+export function LabelSheet({ layout, labels, skip = 0 }: { layout: LabelSheetCode; labels: ContainerLabelDto[]; skip?: number }) {
   const sheet = LABEL_SHEETS[layout];
   const u = sheet.unit;
-  const pages = pagesOf(labels, sheet);
+  const pages = pagesOf(labels, sheet, skip);
   return (
     <>
       <style>{`@page { size: ${sheet.page.cssSize}; margin: 0; } @media print { #main { padding: 0 !important; margin: 0 !important; max-width: none !important; } .label-page { box-shadow: none !important; margin: 0 !important; break-after: page; } .label-page:last-child { break-after: auto; } }`}</style>
@@ -82,8 +83,12 @@ export function LabelSheet({ layout, labels }: { layout: LabelSheetCode; labels:
                     height: `${sheet.label.height}${u}`,
                   }}
                 >
-                  <Label label={label} small={layout === 'a4-3x7'} />
-                  {label.shortTrays.length > 0 && (
+                  {label === null ? (
+                    <p className="no-print flex h-full items-center justify-center bg-paper-deep/60 text-sm text-ink-faint">Already used</p>
+                  ) : (
+                    <Label label={label} small={layout === 'a4-3x7'} />
+                  )}
+                  {label !== null && label.shortTrays.length > 0 && (
                     // On screen only: the prep day is short of a tray this plate uses.
                     <p className="no-print absolute -top-2.5 right-2 max-w-[90%] truncate rounded border border-caution bg-caution-50 px-1.5 text-xs font-bold text-ink">
                       ⚠ Short: {label.shortTrays.join(', ')}
