@@ -81,7 +81,7 @@ describe('printing part of the labels', () => {
     vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(sheet([], four))));
     renderAtRoute(<LabelsPage />, '/weeks/:weekId/labels', '/weeks/7/labels?start=8', signedIn({ role: 'assistant' }));
     // 4 labels from place 8 of a 2 × 5 Letter sheet: places 8–10 of the first sheet, then one on a second.
-    expect(await screen.findByText(/^4 labels on 2 sheets, the first from label 8, prep day/)).toBeTruthy();
+    expect(await screen.findByText(/^4 labels on 2 sheets, the first from label 8, prep day .*\. Labels 2–10 of the last sheet stay unused: start there next time\.$/)).toBeTruthy();
     expect((screen.getByLabelText('Start at label') as HTMLSelectElement).selectedOptions[0].textContent).toBe('8 (row 4, right)');
     const used = screen.getAllByText('Already used');
     expect(used).toHaveLength(7);
@@ -120,5 +120,15 @@ describe('printing part of the labels', () => {
     fireEvent.change(screen.getByLabelText('Whose labels'), { target: { value: '2' } });
     expect(await screen.findByText(/^1 label on 1 sheet/)).toBeTruthy();
     expect(screen.queryByText('Not every container can be filled')).toBeNull();
+  });
+
+  it('says which labels of the last sheet stay unused, to start there next time (none when the sheet is full)', async () => {
+    const nine = Array.from({ length: 9 }, (_, i) => plate(`Client ${i + 1}`, [], i + 1));
+    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(sheet([], nine))));
+    const { unmount } = renderAtRoute(<LabelsPage />, '/weeks/:weekId/labels', '/weeks/7/labels', signedIn({ role: 'assistant' }));
+    expect(await screen.findByText(/^9 labels on 1 sheet, .* Label 10 of the last sheet stays unused: start there next time\.$/)).toBeTruthy();
+    unmount();
+    renderAtRoute(<LabelsPage />, '/weeks/:weekId/labels', '/weeks/7/labels?start=2', signedIn({ role: 'assistant' }));
+    expect(await screen.findByText(/^9 labels on 1 sheet, the first from label 2, prep day [^.]*\.$/)).toBeTruthy();
   });
 });

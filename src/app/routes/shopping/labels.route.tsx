@@ -37,6 +37,16 @@ function shortOf(short: ShortTrayDto[], shown: ContainerLabelDto[], clientId: nu
     .filter((t) => t.plateLabels > 0);
 }
 
+/** What stays unused on the last sheet: " Labels 8–10 of the last sheet stay unused: start there next time." */
+function leftOver(count: number, sheet: SheetLayout, skip: number): string {
+  const per = labelsPerSheet(sheet);
+  const used = (count + skip) % per;
+  if (count === 0 || used === 0) return '';
+  return used + 1 === per
+    ? ` Label ${per} of the last sheet stays unused: start there next time.`
+    : ` Labels ${used + 1}–${per} of the last sheet stay unused: start there next time.`;
+}
+
 /** Why a tray is short on this prep day, in the kitchen's words. */
 function shortWhy(t: ShortTrayDto): string {
   if (t.lostTrays > 0) return `${t.lostTrays} of its ${counted(t.trayCount, 'tray')} thrown away`;
@@ -176,7 +186,8 @@ export function Component() {
             )}
             <p className="no-print num text-ink-soft">
               {counted(shown.length, 'label')} on {counted(sheetsFor(shown.length, sheet, start - 1), 'sheet')}
-              {start > 1 && `, the first from label ${start}`}, prep day {data.prepDate ? dayLabel(data.prepDate, true) : 'not set'}
+              {start > 1 && `, the first from label ${start}`}, prep day {data.prepDate ? dayLabel(data.prepDate, true) : 'not set'}.
+              {leftOver(shown.length, sheet, start - 1)}
             </p>
             <LabelSheet layout={layout} labels={shown} skip={start - 1} />
           </>
