@@ -119,6 +119,11 @@ export function Component() {
           </Button>
         </PageHeader>
         <div className="flex flex-wrap gap-3">
+          {q.data && q.data.prepDates.length > 1 && (
+            <SelectField label="Prep day" value={q.data.prepDate ?? ''} onChange={(e) => set('prepDate', e.target.value)} className="w-48">
+              <DayOptions days={q.data.prepDates} />
+            </SelectField>
+          )}
           <SelectField label="Label sheet" value={layout} onChange={(e) => set('layout', e.target.value)} className="w-80">
             {LABEL_SHEET_CODES.map((c) => (
               <option key={c} value={c}>
@@ -160,11 +165,6 @@ export function Component() {
               <input type="checkbox" className="h-5 w-5 accent-herb" checked={withSpares} onChange={(e) => set('spares', e.target.checked ? '1' : '0')} />
               Label spare portions too
             </label>
-          )}
-          {q.data && q.data.prepDates.length > 1 && (
-            <SelectField label="Prep day" value={q.data.prepDate ?? ''} onChange={(e) => set('prepDate', e.target.value)} className="w-48">
-              <DayOptions days={q.data.prepDates} />
-            </SelectField>
           )}
         </div>
         <Notice tone="cold" title="Print at actual size">
