@@ -104,6 +104,7 @@ export function Component() {
   const clients = q.data ? clientsOf(q.data.labels) : [];
   const clientId = clients.find(([id]) => String(id) === params.get('client'))?.[0] ?? null;
   const shown = q.data ? labelsOf(q.data.labels, withSpares, clientId) : [];
+  const short = q.data ? shortOf(q.data.short, shown, clientId) : [];
   const set = (k: string, v: string) => {
     const next = new URLSearchParams(params);
     next.set(k, v);
@@ -174,14 +175,14 @@ export function Component() {
       </div>
       <QueryView
         query={q}
-        isEmpty={(data) => labelsOf(data.labels, withSpares, clientId).length === 0}
+        isEmpty={() => shown.length === 0}
         empty={<EmptyState title="No containers for this prep day">Fill the week board and set tray counts: each plate and each spare portion gets a label.</EmptyState>}
       >
         {(data) => (
           <>
-            {shortOf(data.short, shown, clientId).length > 0 && (
+            {short.length > 0 && (
               <div className="no-print">
-                <ShortNotice short={shortOf(data.short, shown, clientId)} weekId={weekId} coach={coach} />
+                <ShortNotice short={short} weekId={weekId} coach={coach} />
               </div>
             )}
             <p className="no-print num text-ink-soft">

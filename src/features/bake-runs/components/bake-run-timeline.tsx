@@ -1,6 +1,7 @@
 import type { BakeRunResult } from '@shared/domain/bake-run-types';
 import { BAND_CLASS, formatTemp, tempBand, type TempUnit } from './temperature';
 import { timeLabel, timeSpanLabel } from '@/lib/dates';
+import { addLocalMinutes } from '@shared/domain/bake-run-time';
 
 interface Bar {
   key: string;
@@ -89,11 +90,7 @@ export function BakeRunTimeline({ run, unit, nowMinute }: { run: BakeRunResult; 
   const x = (m: number) => (m - firstMinute) * pxPerMin;
   const ticks: number[] = [];
   for (let m = Math.ceil(firstMinute / 15) * 15; m <= run.sessionMinutes; m += 15) ticks.push(m);
-  const startMin = Number(run.start.slice(11, 13)) * 60 + Number(run.start.slice(14, 16));
-  const tickLabel = (m: number) => {
-    const t = (((startMin + m) % 1440) + 1440) % 1440;
-    return timeLabel(`${String(Math.floor(t / 60)).padStart(2, '0')}:${String(t % 60).padStart(2, '0')}`);
-  };
+  const tickLabel = (m: number) => timeLabel(addLocalMinutes(run.start, m));
   return (
     // tabIndex: a phone scrolls the timeline sideways; a keyboard reaches it to scroll it with the arrow keys.
     <figure tabIndex={0} className="overflow-x-auto rounded-tray border border-line bg-paper-card p-3" aria-label="Bake run timeline">

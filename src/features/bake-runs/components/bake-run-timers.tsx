@@ -8,8 +8,8 @@ import { Notice } from '@/components/ui/states';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { describeEvent } from './bake-run-sheet';
 import { OvenChecks } from './oven-checks';
-import { localToday, timeLabel } from '@/lib/dates';
-import { clock, hhmm, nowLocal, type TempUnit } from './temperature';
+import { localHhmm, localToday, timeLabel } from '@/lib/dates';
+import { clock, nowLocal, type TempUnit } from './temperature';
 
 /** The device clock, read again every `ms`. */
 export function useDeviceClock(ms: number): Date {
@@ -82,7 +82,7 @@ function ChangeRefused({ error, redo, notDone, onReload }: { error: unknown; red
 
 /** "Started at another time?": a time on the run's day; the timers, timeline and run sheet follow the new start. */
 function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
-  const [time, setTime] = useState(() => hhmm(new Date()));
+  const [time, setTime] = useState(() => localHhmm(new Date()));
   // The time offered is "now" when the question is opened (the page may have been open since before the start),
   // until the person types their own.
   const typed = useRef(false);
@@ -95,7 +95,7 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
     <details
       className="rounded-lg border border-line p-3"
       onToggle={(e) => {
-        if (e.currentTarget.open && !typed.current) setTime(hhmm(new Date()));
+        if (e.currentTarget.open && !typed.current) setTime(localHhmm(new Date()));
       }}
     >
       <summary className="min-h-11 cursor-pointer py-2 font-bold">Started at another time?</summary>
@@ -210,7 +210,7 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
   const outAtOf = new Map(run.trays.map((t) => [t.id, t.outAt]));
   /** The rest starts now, or when the last tray ticked comes out if that is later. */
   const suggestedFrom = (out: readonly string[]) =>
-    [hhmm(new Date()), ...out.map((id) => outAtOf.get(id)?.slice(11) ?? '')].reduce((a, b) => (b > a ? b : a));
+    [localHhmm(new Date()), ...out.map((id) => outAtOf.get(id)?.slice(11) ?? '')].reduce((a, b) => (b > a ? b : a));
   const setOut = (out: string[]) => setForm((f) => ({ ...f, out, from: fromTyped ? f.from : suggestedFrom(out) }));
   const ovenName = new Map(kitchen.allOvens.map((o) => [o.id, o.name]));
   /**

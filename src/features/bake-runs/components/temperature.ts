@@ -37,8 +37,5 @@ export function minutesSpan(minutes: number): string {
   return h === 0 ? `${m} min` : m === 0 ? `${h} h` : `${h} h ${m} min`;
 }
 
-/** The device clock's "HH:mm". */
-export const hhmm = localHhmm;
-
 /** The device clock as a local "YYYY-MM-DDTHH:mm". */
-export const nowLocal = (d = new Date()) => `${localToday(d)}T${hhmm(d)}`;
+export const nowLocal = (d = new Date()) => `${localToday(d)}T${localHhmm(d)}`;
