@@ -63,3 +63,26 @@ test.describe('on a phone', () => {
     await checkPages(page, ['/', '/my-plates', '/my-targets', '/settings']);
   });
 });
+
+// WCAG 2.2 2.4.7 (Focus Visible): whatever has the keyboard's focus shows it. axe does not judge focus, so the sign-in
+// page is walked with Tab and each stop's outline read (the style sheet's 3 px frost outline; the colour is checked
+// so an outline that resolves to nothing, or to the button's own colour, fails).
+test('the keyboard’s focus is visible on every stop of the sign-in page', async ({ page }) => {
+  await page.goto('/sign-in');
+  await expect(page.getByLabel('E-mail')).toBeVisible();
+  const stops: string[] = [];
+  for (let i = 0; i < 5; i++) {
+    await page.keyboard.press('Tab');
+    // Buttons ease their colours in (transition-colors): read the outline once it has settled.
+    await page.waitForTimeout(300);
+    const seen = await page.evaluate(() => {
+      const el = document.activeElement as HTMLElement;
+      const cs = getComputedStyle(el);
+      return { name: `${el.tagName} ${(el.textContent ?? '').trim() || el.getAttribute('name') || el.id}`, outline: `${cs.outlineStyle} ${cs.outlineWidth} ${cs.outlineColor}` };
+    });
+    stops.push(seen.name);
+    expect(seen.outline, seen.name).toBe('solid 3px rgb(43, 122, 140)');
+  }
+  expect(stops.some((s) => s.startsWith('BUTTON Sign in'))).toBe(true);
+  expect(stops.some((s) => s.startsWith('A '))).toBe(true);
+});
