@@ -3,6 +3,7 @@ import { PG_INT_MAX, TOO_LARGE } from './ids';
 import { emailAddress as email } from './email';
 import { DATE_ORDERS, type DateOrder } from '../domain/iso-date';
 import { CLOCK_STYLES, type ClockStyle } from '../domain/clock';
+import { TIME_ZONE_MAX } from '../domain/time-zone';
 
 export const ROLES = ['coach', 'assistant', 'client'] as const;
 export const roleSchema = z.enum(ROLES);
@@ -29,6 +30,11 @@ export const registerSchema = z.object({
   dateOrder: z.enum(DATE_ORDERS, { message: 'Choose how dates are written: month-day or day-month' }).optional(),
   /** How the new workspace writes times (the sign-up form sends its device's style; a setting afterwards). */
   clock: z.enum(CLOCK_STYLES, { message: 'Choose how times are written: 24h or 12h' }).optional(),
+  /**
+   * The device's time zone, the kitchen's until the coach changes it in Settings. Not typed by anyone: a name this
+   * server's engine does not know (a newer or older zone database than the browser's) is left unset, not refused.
+   */
+  timeZone: z.string().max(TIME_ZONE_MAX).optional().catch(undefined),
 });
 export type RegisterInput = z.infer<typeof registerSchema>;
 

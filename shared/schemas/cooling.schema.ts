@@ -93,4 +93,6 @@ export interface CoolingListDto {
   weekId: number;
   prepDate: string;
   records: CoolingRecordDto[];
+  /** The kitchen's time zone, or null: with it the server e-mails a missed deadline (the cooling watch). */
+  timeZone: string | null;
 }

@@ -8,6 +8,7 @@ import { ambiguousCommaMessage, AmountParseError, decimalCommaToPoint, isMassUni
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 import { DATE_ORDERS, type DateOrder } from '../domain/iso-date';
 import { CLOCK_STYLES, type ClockStyle } from '../domain/clock';
+import { canonicalTimeZone, TIME_ZONE_MAX } from '../domain/time-zone';
 
 /** Ingredient library, recipe calculation and the net-carb setting: inputs (zod) and DTOs for API and client. */
 
@@ -354,6 +355,17 @@ export const workspaceSettingsUpdateSchema = z.object({
   netCarbRule: z.enum(NET_CARB_RULE_KINDS, { message: 'Choose a net-carb rule' }).optional(),
   dateOrder: z.enum(DATE_ORDERS, { message: 'Choose how dates are written: month-day or day-month' }).optional(),
   clock: z.enum(CLOCK_STYLES, { message: 'Choose how times are written: 24h or 12h' }).optional(),
+  /** The kitchen's IANA time zone, or null to stop watching cooling deadlines. Stored in its canonical spelling. */
+  timeZone: z
+    .string({ message: 'Choose the kitchen\'s time zone from the list, such as America/Chicago' })
+    .max(TIME_ZONE_MAX, { message: 'Choose the kitchen\'s time zone from the list, such as America/Chicago' })
+    .transform((v, ctx) => {
+      const zone = canonicalTimeZone(v);
+      if (!zone) ctx.addIssue({ code: 'custom', message: `"${v.slice(0, TIME_ZONE_MAX)}" is not a time zone: choose one from the list, such as America/Chicago` });
+      return zone ?? v;
+    })
+    .nullable()
+    .optional(),
   version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }).max(PG_INT_MAX, TOO_LARGE),
 });
 export type WorkspaceSettingsUpdateInput = z.input<typeof workspaceSettingsUpdateSchema>;
@@ -369,6 +381,8 @@ export interface WorkspaceSettingsDto {
   dateOrder: DateOrder;
   /** How every page and document of the workspace writes a time of day. */
   clock: ClockStyle;
+  /** The kitchen's IANA time zone, or null while not set (then no cooling deadline is watched). */
+  timeZone: string | null;
   netCarbRules: Array<{ kind: NetCarbRuleKind; label: string; formula: string }>;
   help: string;
   version: number;

@@ -197,9 +197,9 @@ export interface GlanceDto {
   nextPrepDate: IsoDate | null;
   setup: SetupCountsDto;
   /**
-   * The week's cooling record where it went wrong, judged on its readings (shared/domain/cooling.ts): trays thrown
-   * away (their portions no longer count as baked: see `portionsShort`) and trays whose readings missed a Food Code
-   * deadline.
+   * The week's cooling record where it went wrong (shared/domain/cooling.ts): trays thrown away (their portions no
+   * longer count as baked: see `portionsShort`) and trays past a Food Code deadline with no reading showing it met
+   * (at the kitchen's time now when the workspace has a time zone, else on the readings alone).
    */
   cooling: { thrownAway: CoolingTrayDto[]; missed: CoolingTrayDto[] };
 }

@@ -19,7 +19,7 @@ async function twoTrayWeek() {
 describe('the cooling record of a prep day', () => {
   it('the assistant writes down a tray out, then its readings; °C readings are kept in °F; a stale version is a 409', async () => {
     const { assistant, coach, tray, week, base } = await twoTrayWeek();
-    expect((await assistant.agent.get(base).expect(200)).body).toEqual({ weekId: week.id, prepDate: '2026-01-04', records: [] });
+    expect((await assistant.agent.get(base).expect(200)).body).toEqual({ weekId: week.id, prepDate: '2026-01-04', records: [], timeZone: null });
 
     const first = await assistant.agent.put(`${base}/${tray.id}-2`).send({ outAt: '2026-01-04T10:10' }).expect(200);
     expect(first.body).toMatchObject({

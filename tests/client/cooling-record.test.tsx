@@ -46,9 +46,11 @@ const record = (over: Partial<CoolingRecordDto> = {}): CoolingRecordDto => ({
 });
 
 let records: CoolingRecordDto[] = [];
+let timeZone: string | null = null;
 const calls: [string, RequestInit | undefined][] = [];
 beforeEach(() => {
   records = [];
+  timeZone = null;
   calls.length = 0;
   vi.useFakeTimers({ toFake: ['Date'] });
   vi.setSystemTime(new Date(2026, 0, 4, 8, 40));
@@ -56,7 +58,7 @@ beforeEach(() => {
     'fetch',
     vi.fn((url: string, init?: RequestInit) => {
       calls.push([url, init]);
-      if (!init?.method || init.method === 'GET') return Promise.resolve(jsonResponse({ weekId: 7, prepDate: '2026-01-04', records }));
+      if (!init?.method || init.method === 'GET') return Promise.resolve(jsonResponse({ weekId: 7, prepDate: '2026-01-04', records, timeZone }));
       if (init.method === 'PUT') {
         const body = JSON.parse(String(init.body));
         if (body.readings?.some((r: { tempF?: number }) => (r.tempF ?? 0) > 250))
@@ -120,6 +122,19 @@ describe('the cooling record on prep day', () => {
     // The coach reads that the other coaches are told (the one who wrote it is not).
     renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="coach" />);
     expect(await screen.findByText(/any other coach of the team gets an e-mail about it\./)).toBeTruthy();
+  });
+
+  it('says whether a missed deadline is e-mailed: by the kitchen’s clock once it has a time zone; else the coach gets the way to Settings', async () => {
+    const { unmount } = renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="coach" />);
+    const off = await screen.findByText(/^Missed deadlines show on this page only/);
+    expect(within(off).getByRole('link', { name: 'Settings' }).getAttribute('href')).toBe('/settings');
+    unmount();
+    const again = renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />);
+    expect((await screen.findByText(/^Missed deadlines show on this page only/)).textContent).toContain('until the coach sets the kitchen’s time zone in Settings.');
+    again.unmount();
+    timeZone = 'America/Los_Angeles';
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />);
+    expect((await screen.findByText(/e-mailed to every coach and kitchen assistant/)).textContent).toContain('by the kitchen’s clock (America/Los Angeles), even with this page closed.');
   });
 
   it('before prep day there is nothing to write down', async () => {

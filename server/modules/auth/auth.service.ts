@@ -1,5 +1,6 @@
 import { toDateOrder } from '@shared/domain/iso-date.js';
 import { toClockStyle } from '@shared/domain/clock.js';
+import { canonicalTimeZone } from '@shared/domain/time-zone.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { clockOf, datesOf, type Actor } from '../../http/authz.js';
 import { preparedRows } from '../../db/prepared.js';
@@ -152,6 +153,7 @@ export async function register(em: EntityManager, input: RegisterInput): Promise
     }
     const ws = tx.create(Workspace, { name: input.businessName, ...(input.dateOrder ? { dateOrder: input.dateOrder } : {}),
       ...(input.clock ? { clock: input.clock } : {}),
+      timeZone: input.timeZone ? canonicalTimeZone(input.timeZone) : null,
     });
     const user = tx.create(User, { email: input.email, name: input.name, passwordHash });
     tx.create(Membership, { user, workspace: ws, role: 'coach' });

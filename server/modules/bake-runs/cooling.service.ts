@@ -3,7 +3,8 @@ import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import { longDate, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import type { CoolingListDto, CoolingRecordDto, CoolingRecordValues } from '@shared/schemas/cooling.schema.js';
 import type { GlanceDto } from '@shared/schemas/weeks.schema.js';
-import { bothScales, checkOnPaper, clockFrom, countedFrom, FOOD_CODE_COOLING, type CoolingCheck } from '@shared/domain/cooling.js';
+import { wallClockIn } from '@shared/domain/time-zone.js';
+import { bothScales, checkCooling, checkOnPaper, clockFrom, countedFrom, FOOD_CODE_COOLING, type CoolingCheck } from '@shared/domain/cooling.js';
 import type { ClockStyle } from '@shared/domain/clock.js';
 import { clockOf, datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
@@ -48,20 +49,30 @@ async function weekAndDate(em: EntityManager, actor: Actor, weekId: number, want
 /** GET /api/weeks/:weekId/bake-run/cooling: the prep day's cooling records (coach or assistant), by time out. */
 export async function listCooling(em: EntityManager, actor: Actor, weekId: number, wanted?: string): Promise<CoolingListDto> {
   const { week, prepDate } = await weekAndDate(em, actor, weekId, wanted);
-  const rows = await em.find(CoolingRecord, { week: week.id, prepDate }, { orderBy: { outAt: 'asc', runTrayId: 'asc' } });
-  return { weekId: week.id, prepDate, records: rows.map(present) };
+  const [rows, ws] = await Promise.all([
+    em.find(CoolingRecord, { week: week.id, prepDate }, { orderBy: { outAt: 'asc', runTrayId: 'asc' } }),
+    em.findOneOrFail(Workspace, actor.workspaceId, { fields: ['timeZone'] }),
+  ]);
+  return { weekId: week.id, prepDate, records: rows.map(present), timeZone: ws.timeZone ?? null };
 }
 
 /**
- * A week's cooling trouble for the coach's glance: the trays thrown away, and those whose readings missed a deadline
- * (judged on paper: the glance does not know the kitchen's clock), by prep date and time out.
+ * A week's cooling trouble for the coach's glance: the trays thrown away, and those past a deadline with no reading
+ * showing the stage met, by prep date and time out. With the kitchen's time zone they are judged at the kitchen's
+ * time now (a tray with no reading at all is past its deadline too); without it, on paper (only a reading can show
+ * a deadline missed).
  */
-export async function coolingTrouble(em: EntityManager, weekId: number): Promise<GlanceDto['cooling']> {
-  const rows = await em.find(CoolingRecord, { week: weekId }, { orderBy: { prepDate: 'asc', outAt: 'asc' } });
+export async function coolingTrouble(em: EntityManager, workspaceId: number, weekId: number, at: Date = new Date()): Promise<GlanceDto['cooling']> {
+  const [rows, ws] = await Promise.all([
+    em.find(CoolingRecord, { week: weekId }, { orderBy: { prepDate: 'asc', outAt: 'asc' } }),
+    em.findOneOrFail(Workspace, workspaceId, { fields: ['timeZone'] }),
+  ]);
+  const now = ws.timeZone ? wallClockIn(at, ws.timeZone) : null;
   const named = (r: ICoolingRecord) => ({ trayName: r.trayName, prepDate: r.prepDate as IsoDate });
+  const judged = (r: ICoolingRecord) => (now ? checkCooling(present(r), now) : checkOnPaper(present(r)));
   return {
     thrownAway: rows.filter((r) => r.discarded).map(named),
-    missed: rows.filter((r) => !r.discarded && checkOnPaper(present(r)).tone === 'block').map(named),
+    missed: rows.filter((r) => !r.discarded && judged(r).tone === 'block').map(named),
   };
 }
 

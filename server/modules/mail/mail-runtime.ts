@@ -6,10 +6,13 @@ import { MAIL_QUEUE, RESET_QUEUE, type MailJobData, type MailQueue, type ResetJo
 import { issuePasswordReset } from '../auth/auth.service.js';
 import { smtpSender, type MailSender, type SmtpSettings } from './mail-transport.js';
 import { sendOutboxRow } from './mail-worker.js';
+import { COOLING_WATCH_CRON, COOLING_WATCH_QUEUE, watchCooling } from '../bake-runs/cooling-watch.js';
 
 /**
  * pg-boss for e-mail, in the app's own database (schema `pgboss`): the `mail.send` queue, its worker and a
  * reconciler, and the `auth.password-reset` queue whose jobs turn a reset request into a token and an e-mail.
+ * Also the cooling watch (server/modules/bake-runs/cooling-watch.ts): a pg-boss schedule puts one `cooling.watch` job
+ * in the queue a minute, whichever instance's clock monitor gets there first, and one worker runs it.
  * Started by server/main.ts (with the workers) and by the API tests (queues only, or with workers pointed at an
  * in-process catcher). Every piece of state is in PostgreSQL; several instances can run at once.
  */
@@ -80,7 +83,8 @@ export function createMailRuntime(opts: StartMailOptions): MailRuntime {
     application_name: appName,
     max: 4,
     supervise: work,
-    schedule: false,
+    // The cooling watch's once-a-minute schedule is kept by the instances that work.
+    schedule: work,
     migrate: true,
     ...(opts.maintenanceIntervalSeconds ? { maintenanceIntervalSeconds: opts.maintenanceIntervalSeconds } : {}),
   });
@@ -103,6 +107,10 @@ export function createMailRuntime(opts: StartMailOptions): MailRuntime {
       await boss.updateQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...retry });
       await boss.createQueue(RESET_QUEUE, { name: RESET_QUEUE, ...retry });
       await boss.updateQueue(RESET_QUEUE, { name: RESET_QUEUE, ...retry });
+      // A watch job older than a minute is replaced by the next one: no retries piling up behind a slow run.
+      const watchQueue = { name: COOLING_WATCH_QUEUE, retryLimit: 1, retryDelay: 10, expireInSeconds: 60, deleteAfterSeconds: 3600 };
+      await boss.createQueue(COOLING_WATCH_QUEUE, watchQueue);
+      await boss.updateQueue(COOLING_WATCH_QUEUE, watchQueue);
       started = true;
       if (!work) return;
       pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 3, application_name: appName });
@@ -131,6 +139,11 @@ export function createMailRuntime(opts: StartMailOptions): MailRuntime {
           await issuePasswordReset(opts.orm.em.fork(), job.data.email, opts.publicUrl, runtime, job.id);
         },
       );
+      await boss.work(COOLING_WATCH_QUEUE, { batchSize: 1, pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 2 }, async () => {
+        const out = await watchCooling(opts.orm.em.fork(), { mail: runtime, publicUrl: opts.publicUrl });
+        if (out.queued) opts.logger?.info(out, 'cooling watch: missed deadlines e-mailed');
+      });
+      await boss.schedule(COOLING_WATCH_QUEUE, COOLING_WATCH_CRON, {}, { tz: 'UTC' });
       const p = pool;
       const every = (opts.reconcileEverySeconds ?? 60) * 1000;
       timer = setInterval(() => void reconcile(p, retry).catch((err) => opts.logger?.warn({ err }, 'reconcile failed')), every);

@@ -124,6 +124,45 @@ export function trayThrownAwayMail(p: {
   };
 }
 
+/**
+ * To each coach and kitchen assistant: a tray's cooling record passed a Food Code deadline with no reading showing
+ * the stage met (sent by the cooling watch, in the kitchen's time zone).
+ */
+export function coolingMissedMail(p: {
+  businessName: string;
+  name: string;
+  trayName: string;
+  prepLabel: string;
+  weekName: string;
+  /** "70 °F (21 °C)" or "41 °F (5 °C)". */
+  stage: string;
+  /** The deadline missed, "10:35". */
+  deadline: string;
+  /** "08:33", and "10:50" when cooling started again after a reheat. */
+  outAt: string;
+  restartedAt?: string | null;
+  readings: string[];
+  /** What to do (the cooling check's words). */
+  said: string;
+  link: string;
+}): MailBody {
+  const lines = [
+    `Hello ${p.name},`,
+    `${p.trayName} (prep day ${p.prepLabel}, ${p.weekName}) had to be at ${p.stage} or below by ${p.deadline}, and no temperature written down in its cooling record shows it was. It came out at ${p.outAt}${
+      p.restartedAt ? `, was reheated and cooled again from ${p.restartedAt}` : ''
+    }.`,
+    p.readings.length ? `Temperatures written down: ${p.readings.join('; ')}.` : 'No temperature was written down for it.',
+    p.said,
+    `If it was at ${p.stage} or below in time and the reading is only missing from the record, write it down there with the time it was taken. Until then, keep its portions apart and do not serve them.`,
+    'This is common practice for cooling logs; your local food code and inspector decide what to do.',
+  ];
+  return {
+    subject: `${p.businessName}: ${p.trayName} missed its cooling deadline (${p.stage} by ${p.deadline})`,
+    text: `${lines.join('\n\n')}\n\nOpen the cooling record: ${p.link}\n`,
+    html: layout(lines, { href: p.link, label: 'Open the cooling record' }),
+  };
+}
+
 /** To a coach: a tray written down as thrown away was marked as kept after all (its portions count again). */
 export function trayKeptMail(p: { businessName: string; name: string; trayName: string; prepLabel: string; weekName: string; recordedBy: string; link: string }): MailBody {
   const lines = [

@@ -461,7 +461,7 @@ export async function glance(em: EntityManager, actor: Actor, today: IsoDate = t
   const week = pickWeek(weeks, today);
   if (!week) return { week: null, nextWeek: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup, cooling: { thrownAway: [], missed: [] } };
   const after = weekAfter(weeks, week);
-  const [data, cooling] = await Promise.all([loadBoardData(em, actor, week), coolingTrouble(em, week.id)]);
+  const [data, cooling] = await Promise.all([loadBoardData(em, actor, week), coolingTrouble(em, actor.workspaceId, week.id)]);
   const result = computeBoard(boardInput(data));
   const nextPrepDate =
     weeks

@@ -18,6 +18,7 @@ function present(ws: IWorkspace): WorkspaceSettingsDto {
     netCarbRule: toNetCarbRule(ws.netCarbRule).kind,
     dateOrder: toDateOrder(ws.dateOrder),
     clock: toClockStyle(ws.clock),
+    timeZone: ws.timeZone ?? null,
     netCarbRules: NET_CARB_RULES.map((r) => ({ ...r })),
     help: NET_CARB_HELP,
     version: ws.version,
@@ -28,7 +29,7 @@ export async function getWorkspaceSettings(em: EntityManager, actor: Actor): Pro
   return present(await em.findOneOrFail(Workspace, actor.workspaceId));
 }
 
-/** Changes the net-carb rule, how dates and times are written (each when given); a stale version is 409 with the current settings. */
+/** Changes the net-carb rule, how dates and times are written, the kitchen's time zone (each when given); a stale version is 409 with the current settings. */
 export async function updateWorkspaceSettings(
   em: EntityManager,
   actor: Actor,
@@ -40,6 +41,7 @@ export async function updateWorkspaceSettings(
   if (v.netCarbRule) ws.netCarbRule = v.netCarbRule;
   if (v.dateOrder) ws.dateOrder = v.dateOrder;
   if (v.clock) ws.clock = v.clock;
+  if (v.timeZone !== undefined) ws.timeZone = v.timeZone;
   await em.flush();
   return present(ws);
 }

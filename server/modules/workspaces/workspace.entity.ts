@@ -13,6 +13,8 @@ export const Workspace = defineEntity({
     dateOrder: p.string().length(10).default('month-day'),
     /** How a time of day is written (shared/domain/clock.ts CLOCK_STYLES): '24h' (default) or '12h'. */
     clock: p.string().length(4).default('24h'),
+    /** The kitchen's IANA time zone (shared/domain/time-zone.ts), or null while not set: cooling deadlines are watched in it. */
+    timeZone: p.string().length(64).nullable(),
     /** Meal slots of the week board, in order. */
     mealSlots: p.json<string[]>().default(JSON.stringify(['breakfast'])),
     isDemo: p.boolean().default(false),

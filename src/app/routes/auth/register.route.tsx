@@ -10,6 +10,7 @@ import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
 import { deviceClockStyle, deviceDateOrder } from '@/lib/dates';
+import { deviceTimeZone } from '@shared/domain/time-zone';
 import { AuthLayout } from './auth-layout';
 
 export function Component() {
@@ -23,7 +24,7 @@ export function Component() {
   const e = form.formState.errors;
   const onSubmit = form.handleSubmit((values) => {
     setFormError(null);
-    register.mutate({ ...values, dateOrder: deviceDateOrder(), clock: deviceClockStyle() }, {
+    register.mutate({ ...values, dateOrder: deviceDateOrder(), clock: deviceClockStyle(), timeZone: deviceTimeZone() ?? undefined }, {
       onSuccess: () => navigate(paths.home),
       onError: (err) => setFormError(applyServerErrors(err, form.setError)),
     });

@@ -3,8 +3,11 @@ import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { DATE_ORDERS, shortDate, type DateOrder } from '@shared/domain/iso-date';
 import { CLOCK_STYLES, clockText, type ClockStyle } from '@shared/domain/clock';
+import { deviceTimeZone, timeZoneChoices, wallClockIn } from '@shared/domain/time-zone';
 import type { WorkspaceSettingsUpdateInput } from '@shared/schemas/ingredients.schema';
 import { SelectField } from '@/components/ui/field';
+import { Button } from '@/components/ui/button';
+import { dayLabel, timeLabel } from '@/lib/dates';
 import { Card, Notice, QueryView, Skeleton } from '@/components/ui/states';
 import { isApiError, markShown } from '@/lib/problem';
 import { workspaceSettingsQuery } from '@/features/ingredients/api/ingredients.queries';
@@ -23,6 +26,26 @@ const CLOCK_WORDS: Record<ClockStyle, string> = {
   '24h': `${clockText(SAMPLE_TIME, '24h')} (24-hour clock)`,
   '12h': `${clockText(SAMPLE_TIME, '12h')} (12-hour clock)`,
 };
+
+/** The zones grouped by their region ("America", "Europe", …; "UTC" and the like under "Other"), for a select. */
+function zoneGroups(current: string | null): Array<[string, string[]]> {
+  const zones = timeZoneChoices();
+  if (current && !zones.includes(current)) zones.push(current);
+  const groups = new Map<string, string[]>();
+  for (const z of zones) {
+    const region = z.includes('/') ? z.slice(0, z.indexOf('/')) : 'Other';
+    groups.set(region, [...(groups.get(region) ?? []), z]);
+  }
+  return [...groups.entries()].sort(([a], [b]) => (a === 'Other' ? 1 : b === 'Other' ? -1 : a.localeCompare(b)));
+}
+
+const placeOf = (zone: string) => (zone.includes('/') ? zone.slice(zone.indexOf('/') + 1) : zone).replace(/_/g, ' ').replace(/\//g, ' / ');
+
+/** "Thu, Dec 3, 15:12" in the kitchen's zone now, as the workspace writes dates and times. */
+function kitchenNow(zone: string): string {
+  const wall = wallClockIn(new Date(), zone);
+  return `${dayLabel(wall.slice(0, 10))}, ${timeLabel(wall)}`;
+}
 
 /**
  * How the workspace writes dates and times of day (coach only): every page, printed label, PDF, calendar file and
@@ -91,6 +114,32 @@ export function DatesTimesCard() {
                 </option>
               ))}
             </SelectField>
+            <SelectField
+              label="Kitchen time zone"
+              value={data.timeZone ?? ''}
+              disabled={save.isPending}
+              hint={
+                data.timeZone
+                  ? `Kitchen time now: ${kitchenNow(data.timeZone)}. Trayline watches the cooling record at this time and e-mails every coach and kitchen assistant when a tray passes a cooling deadline with no reading showing it cooled.`
+                  : 'Not set: cooling deadlines are watched only on the bake-run page while it is open. Set it to have Trayline e-mail every coach and kitchen assistant when a tray passes one with no reading showing it cooled.'
+              }
+              onChange={(e) => {
+                const timeZone = e.target.value || null;
+                change({ timeZone }, data.version, timeZone ? `Kitchen time zone: ${timeZone.replace(/_/g, ' ')}` : 'Kitchen time zone not set: the cooling watch is off');
+              }}
+            >
+              <option value="">Not set (no cooling e-mails)</option>
+              {zoneGroups(data.timeZone).map(([region, zones]) => (
+                <optgroup key={region} label={region}>
+                  {zones.map((z) => (
+                    <option key={z} value={z}>
+                      {region === 'Other' ? z : placeOf(z)}
+                    </option>
+                  ))}
+                </optgroup>
+              ))}
+            </SelectField>
+            <DeviceZoneOffer current={data.timeZone} disabled={save.isPending} choose={(timeZone) => change({ timeZone }, data.version, `Kitchen time zone: ${timeZone.replace(/_/g, ' ')}`)} />
             {stale && (
               <Notice tone="warn" title="Someone else changed the workspace settings">
                 The current choice is shown again; choose once more to apply yours.
@@ -100,5 +149,19 @@ export function DatesTimesCard() {
         )}
       </QueryView>
     </Card>
+  );
+}
+
+/** "This device is in America/Chicago: use it" when the device's zone is not the kitchen's (a coach setting it up from the kitchen). */
+function DeviceZoneOffer({ current, disabled, choose }: { current: string | null; disabled: boolean; choose: (zone: string) => void }) {
+  const device = deviceTimeZone();
+  if (!device || device === current) return null;
+  return (
+    <p className="flex flex-wrap items-center gap-2 text-sm text-ink-soft">
+      This device is in {device.replace(/_/g, ' ')}.
+      <Button type="button" variant="secondary" size="sm" disabled={disabled} onClick={() => choose(device)}>
+        Use this device’s time zone
+      </Button>
+    </p>
   );
 }

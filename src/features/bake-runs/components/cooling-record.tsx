@@ -1,5 +1,7 @@
 import { useMemo, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths';
 import type { BakeRunResult, BakeTrayPlan } from '@shared/domain/bake-run-types';
 import { checkCooling, clockFrom, notWrittenDown, type CoolingCheck } from '@shared/domain/cooling';
 import type { CoolingRecordDto, CoolingRecordInput } from '@shared/schemas/cooling.schema';
@@ -300,6 +302,7 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
         §3-501.14: to 70 °F (21 °C) within 2 hours and to 41 °F (5 °C) or below within 6 hours in total; the clock here
         starts when the tray comes out. Your local food code and inspector decide what to keep and for how long.
       </p>
+      {q.data && <WatchLine timeZone={q.data.timeZone} role={role} />}
       {q.isPending ? (
         <div className="h-24 animate-pulse rounded-lg bg-paper-deep" aria-label="Loading the cooling record" />
       ) : q.isError ? (
@@ -371,5 +374,32 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
         </>
       )}
     </section>
+  );
+}
+
+/** Whether a missed deadline is e-mailed (the server's cooling watch needs the kitchen's time zone). */
+function WatchLine({ timeZone, role }: { timeZone: string | null; role: CoolingReader }) {
+  if (timeZone)
+    return (
+      <p className="text-sm text-ink-soft">
+        A tray past a deadline with no reading showing it cooled is e-mailed to every coach and kitchen assistant, by the
+        kitchen’s clock ({timeZone.replace(/_/g, ' ')}), even with this page closed.
+      </p>
+    );
+  return (
+    <p className="text-sm text-ink-soft">
+      Missed deadlines show on this page only: they are not e-mailed until{' '}
+      {role === 'coach' ? (
+        <>
+          you set the kitchen’s time zone in{' '}
+          <Link to={paths.settings} className="font-bold underline">
+            Settings
+          </Link>
+        </>
+      ) : (
+        'the coach sets the kitchen’s time zone in Settings'
+      )}
+      .
+    </p>
   );
 }

@@ -28,7 +28,7 @@ function CoolingTrouble({ weekId, cooling }: { weekId: number; cooling: GlanceDt
       <Notice tone="block" title={`Cooling record: ${said.join(', ')}`}>
         <ul className="list-disc pl-4">
           {cooling.thrownAway.map((t) => line(t, 'thrown away; its portions no longer count as baked'))}
-          {cooling.missed.map((t) => line(t, 'its readings missed a Food Code deadline'))}
+          {cooling.missed.map((t) => line(t, 'no reading shows it cooled by its Food Code deadline'))}
         </ul>
       </Notice>
     </div>

@@ -1,0 +1,138 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { addDays, shortDate, toDateOrder, type IsoDate } from '@shared/domain/iso-date.js';
+import { toClockStyle } from '@shared/domain/clock.js';
+import { bothScales, checkCooling, clockFrom, FOOD_CODE_COOLING, type CoolingEntry } from '@shared/domain/cooling.js';
+import { requireLocalMinutes } from '@shared/domain/bake-run-time.js';
+import { wallClockIn } from '@shared/domain/time-zone.js';
+import { weekTitle } from '@shared/domain/week-board.js';
+import { CoolingRecord, type ICoolingRecord } from './bake-run.entity.js';
+import { Week } from '../weeks/week.entity.js';
+import { Membership } from '../auth/user.entity.js';
+import type { IWorkspace } from '../workspaces/workspace.entity.js';
+import { Outbox } from '../mail/outbox.entity.js';
+import { coolingMissedMail } from '../mail/mail-templates.js';
+import { appLink, mailKey, queueMail, type MailQueue } from '../mail/mail.service.js';
+
+/**
+ * The cooling watch: once a minute (a pg-boss schedule, server/modules/mail/mail-runtime.ts) the server reads its
+ * clock in each workspace's kitchen time zone and looks at the cooling records of recent prep days. A tray whose
+ * record passed a Food Code deadline (70 °F within 2 hours, 41 °F within 6 hours, FDA Food Code §3-501.14) with no
+ * reading showing the stage met, and not written down as thrown away, is e-mailed to every coach and kitchen
+ * assistant of the workspace: once per tray, stage and cooling start (a reheat and a new start is watched again).
+ * Every run is idempotent (the e-mails' keys), so several instances and a retried job send nothing twice.
+ *
+ * A workspace without a time zone is not watched (its kitchen's time is unknown). Deadlines missed more than
+ * WATCH_WINDOW_HOURS ago are not told (a server that was stopped for days does not send old news on start).
+ */
+export const COOLING_WATCH_QUEUE = 'cooling.watch';
+/** Every minute (the cron of the pg-boss schedule). */
+export const COOLING_WATCH_CRON = '* * * * *';
+export const WATCH_WINDOW_HOURS = 24;
+
+export interface CoolingWatchDeps {
+  mail: MailQueue;
+  publicUrl: string;
+}
+
+export interface CoolingWatchResult {
+  /** Records looked at (not thrown away, on a recent prep day of a workspace with a time zone). */
+  watched: number;
+  /** E-mails queued this run (ones queued by an earlier run are not counted). */
+  queued: number;
+}
+
+const entryOf = (r: ICoolingRecord): CoolingEntry => ({ outAt: r.outAt, restartedAt: r.restartedAt ?? null, readings: r.readings, discarded: r.discarded });
+
+/** The deadline a record has missed at kitchen time `now` (local) and the stage's temperature (°F), or null. */
+export function missedDeadline(entry: CoolingEntry, now: string): { stageF: number; deadline: string } | null {
+  const check = checkCooling(entry, now);
+  if (check.state === 'missed-70') return { stageF: FOOD_CODE_COOLING.firstStageF, deadline: check.by70 };
+  if (check.state === 'missed-41') return { stageF: FOOD_CODE_COOLING.finalF, deadline: check.by41 };
+  return null;
+}
+
+/** One run of the watch at instant `at` (the server's clock; tests pass their own). */
+export async function watchCooling(em: EntityManager, deps: CoolingWatchDeps, at: Date = new Date()): Promise<CoolingWatchResult> {
+  // Prep days from two days back to one ahead in UTC cover every zone's today and yesterday.
+  const utcToday = at.toISOString().slice(0, 10) as IsoDate;
+  const records = await em.find(
+    CoolingRecord,
+    { discarded: false, prepDate: { $gte: addDays(utcToday, -2), $lte: addDays(utcToday, 1) }, workspace: { timeZone: { $ne: null } } },
+    { populate: ['workspace'], orderBy: { id: 'asc' } },
+  );
+  let queued = 0;
+  for (const r of records) {
+    const ws = r.workspace.unwrap();
+    if (!ws.timeZone) continue;
+    const now = wallClockIn(at, ws.timeZone);
+    const missed = missedDeadline(entryOf(r), now);
+    if (!missed) continue;
+    if (requireLocalMinutes(now) - requireLocalMinutes(missed.deadline) > WATCH_WINDOW_HOURS * 60) continue;
+    queued += await tellKitchen(em, deps, ws, r, missed);
+  }
+  return { watched: records.length, queued };
+}
+
+/** What the kitchen does about a missed stage, in the cooling check's words (shared/domain/cooling.ts). */
+function whatToDo(stageF: number, reheated: boolean): string {
+  const code = ' (common practice; your local food code decides).';
+  if (stageF === FOOD_CODE_COOLING.finalF) return `Throw it away${code}`;
+  if (reheated) return `It has been reheated once already: throw it away${code}`;
+  return `Reheat it to ${bothScales(165)} and start cooling again, or throw it away${code}`;
+}
+
+async function tellKitchen(
+  em: EntityManager,
+  deps: CoolingWatchDeps,
+  ws: IWorkspace,
+  r: ICoolingRecord,
+  missed: { stageF: number; deadline: string },
+): Promise<number> {
+  const members = await em.find(
+    Membership,
+    { workspace: ws.id, role: { $in: ['coach', 'assistant'] } },
+    { populate: ['user'], orderBy: { id: 'asc' } },
+  );
+  if (!members.length) return 0;
+  const week = await em.findOneOrFail(Week, r.week.id);
+  const order = toDateOrder(ws.dateOrder);
+  const style = toClockStyle(ws.clock);
+  // The cooling clock's start: a reheat starts it again, and the watch tells of the new start's deadlines too.
+  const from = r.restartedAt ?? r.outAt;
+  const readings = [...r.readings]
+    .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
+    .map((x) => `${clockFrom(x.at, r.outAt, style)} ${bothScales(x.tempF)}`);
+  const query = r.prepDate === week.prepDate ? '' : `?prepDate=${r.prepDate}`;
+  let queued = 0;
+  for (const m of members) {
+    const user = m.user.unwrap();
+    const idempotencyKey = mailKey('cdm', `${r.id}|${from}|${missed.stageF}|u${user.id}`);
+    if (await em.count(Outbox, { idempotencyKey })) continue;
+    const body = coolingMissedMail({
+      businessName: ws.name,
+      name: user.name,
+      trayName: r.trayName,
+      prepLabel: shortDate(r.prepDate as IsoDate, order),
+      weekName: weekTitle(week, order),
+      stage: bothScales(missed.stageF),
+      deadline: clockFrom(missed.deadline, r.outAt, style),
+      outAt: clockFrom(r.outAt, r.outAt, style),
+      restartedAt: r.restartedAt ? clockFrom(r.restartedAt, r.outAt, style) : null,
+      readings,
+      said: whatToDo(missed.stageF, r.restartedAt != null),
+      link: appLink(deps.publicUrl, `/weeks/${week.id}/bake-run${query}#cooling-record-title`),
+    });
+    await queueMail(em, deps.mail, {
+      workspaceId: ws.id,
+      kind: 'cooling-missed',
+      to: user.email,
+      subject: body.subject,
+      text: body.text,
+      html: body.html,
+      weekId: week.id,
+      idempotencyKey,
+    });
+    queued += 1;
+  }
+  return queued;
+}
