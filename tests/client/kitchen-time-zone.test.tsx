@@ -55,7 +55,7 @@ describe('the kitchen time zone in Settings', () => {
     renderInApp(<DatesTimesCard />);
     const select = (await screen.findByLabelText('Kitchen time zone')) as HTMLSelectElement;
     expect(select.value).toBe('America/Chicago');
-    expect(screen.getByText(/^Kitchen time now: Sun, Jan 4, 12:05\. Trayline watches the cooling record/)).toBeTruthy();
+    expect(screen.getByText(/^Kitchen time now in America\/Chicago: Sun, Jan 4, 12:05\. Trayline watches the cooling record/)).toBeTruthy();
     fireEvent.change(select, { target: { value: '' } });
     await waitFor(() => expect(patches(calls)).toEqual([{ timeZone: null, version: 4 }]));
   });

@@ -45,7 +45,7 @@ test('a coach signs up from a Chicago laptop: the kitchen’s time zone is set; 
   await page.goto('/settings');
   const zone = page.getByLabel('Kitchen time zone');
   await expect(zone).toHaveValue(ZONE);
-  await expect(page.getByText(/^Kitchen time now: .+\. Trayline watches the cooling record at this time/)).toBeVisible();
+  await expect(page.getByText(/^Kitchen time now in America\/Chicago: .+\. Trayline watches the cooling record at this time/)).toBeVisible();
   await expect(page.getByRole('button', { name: 'Use this device’s time zone' })).toHaveCount(0);
   await expectNoSeriousA11yViolations(page, 'settings, kitchen time zone');
   await zone.scrollIntoViewIfNeeded();
