@@ -1,4 +1,5 @@
 import { expect, test, type APIRequestContext } from '@playwright/test';
+import { wallClockIn } from '../../shared/domain/time-zone';
 import { expectNoSeriousA11yViolations, SHOTS } from './support';
 
 // The coach's laptop is in the kitchen, in Chicago: a workspace opened on it starts in that zone.
@@ -7,15 +8,8 @@ test.use({ viewport: { width: 1366, height: 900 }, timezoneId: 'America/Chicago'
 const csrf = { 'x-trayline-csrf': '1' };
 const ZONE = 'America/Chicago';
 
-/** The kitchen's wall clock `minutesAgo` minutes ago, "YYYY-MM-DDTHH:mm" (ECMA-402 Intl in the kitchen's zone). */
-function kitchenClock(minutesAgo: number): string {
-  const parts = Object.fromEntries(
-    new Intl.DateTimeFormat('en-US', { timeZone: ZONE, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit' })
-      .formatToParts(new Date(Date.now() - minutesAgo * 60_000))
-      .map((p) => [p.type, p.value]),
-  );
-  return `${parts.year}-${parts.month}-${parts.day}T${parts.hour}:${parts.minute}`;
-}
+/** The kitchen's wall clock `minutesAgo` minutes ago, "YYYY-MM-DDTHH:mm". */
+const kitchenClock = (minutesAgo: number) => wallClockIn(new Date(Date.now() - minutesAgo * 60_000), ZONE);
 
 /** The Monday after an ISO date (the board of the prep day's week). */
 function mondayAfter(iso: string): string {
@@ -81,6 +75,9 @@ test('a coach signs up from a Chicago laptop: the kitchen’s time zone is set; 
   });
   const { week } = await json<{ week: { id: number; version: number } }>(page.request, 'post', '/api/weeks', { name: 'Cooling watch check', startDate, prepDate });
   await json(page.request, 'put', `/api/weeks/${week.id}/trays`, { version: week.version, trays: [{ trayId: tray.id, prepDate, trayCount: 1 }] });
+  // One oven and the day's run from midnight (before the tray came out, whatever the hour of the run).
+  await json(page.request, 'post', '/api/ovens', { name: 'Deck oven', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 15, maxF: 500 });
+  await json(page.request, 'put', `/api/weeks/${week.id}/bake-run/settings`, { start: `${prepDate}T00:00`, cooks: 1, ovenIds: [] });
   await json(page.request, 'put', `/api/weeks/${week.id}/bake-run/cooling/${tray.id}-1`, { outAt: out });
   await page.goto('/');
 
@@ -96,6 +93,19 @@ test('a coach signs up from a Chicago laptop: the kitchen’s time zone is set; 
   await expect(item.getByText('No temperature was written down for it.')).toBeVisible();
   await expectNoSeriousA11yViolations(page, 'caught mail, cooling watch');
   await page.screenshot({ path: `${SHOTS}/cooling-watch-mail.png`, fullPage: true });
+
+  // Its link, opened on a phone, lands on the cooling record (below the run's numbers), its heading clear of the top bar.
+  const link = /Open the cooling record: (\S+)/.exec((await item.textContent()) ?? '')?.[1];
+  expect(link).toMatch(new RegExp(`/weeks/${week.id}/bake-run#cooling-record-title$`));
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.goto(link!);
+  const heading = page.getByRole('heading', { name: 'Cooling record' });
+  await expect(heading).toBeInViewport();
+  await expect(page.getByRole('heading', { name: 'Watch-check egg slab' })).toBeInViewport();
+  expect(await page.evaluate(() => window.scrollY)).toBeGreaterThan(0);
+  const bar = await page.getByRole('banner').boundingBox();
+  expect((await heading.boundingBox())!.y).toBeGreaterThanOrEqual(bar ? bar.y + bar.height : 0);
+  await page.setViewportSize({ width: 1366, height: 900 });
 
   // The outbox names what it was.
   await page.goto('/outbox');

@@ -16,6 +16,7 @@ import { paths } from '@/config/paths';
 import { replannedSummary } from '@shared/domain/bake-run-words';
 import { errorMessage, isApiError } from '@/lib/problem';
 import { currentClockStyle, dayLabel, timeLabel } from '@/lib/dates';
+import { useScrollToHash } from '@/lib/use-scroll-to-hash';
 
 const linkClass = 'inline-flex min-h-11 items-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
 
@@ -38,6 +39,8 @@ export function Component() {
   const kitchen = useSetBakeRunKitchen(weekId);
   // "Plan the whole day from its start again": the same change, its own pending state and failure.
   const restart = useSetBakeRunKitchen(weekId);
+  // A link to a section (the cooling watch's e-mail: "#cooling-record-title") lands on it once the record is read.
+  useScrollToHash(cooling.isSuccess);
 
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
