@@ -4,13 +4,15 @@ import { meQuery } from '@/features/auth/api/auth.queries';
 import { paths } from '@/config/paths';
 import type { Role } from '@shared/schemas/auth.schema';
 
-/** Loader for the signed-in area: no session → sign-in, then back here. */
+/** Loader for the signed-in area: no session → sign-in, then back here (the section a link named too: "#…"). */
 export function requireSignedIn(qc: QueryClient) {
   return async ({ request }: LoaderFunctionArgs) => {
     const me = await qc.ensureQueryData(meQuery());
     if (!me) {
       const url = new URL(request.url);
-      throw redirect(`${paths.signIn}?next=${encodeURIComponent(url.pathname + url.search)}`);
+      // The router's request carries no fragment: on the page first opened (a link from an e-mail) the browser's has it.
+      const hash = url.hash || (typeof window !== 'undefined' && window.location.pathname === url.pathname ? window.location.hash : '');
+      throw redirect(`${paths.signIn}?next=${encodeURIComponent(url.pathname + url.search + hash)}`);
     }
     return null;
   };

@@ -23,7 +23,7 @@ export function AppProviders() {
         queryClient.setQueryData(authKeys.me(), null);
         const here = router.state.location;
         if (here.pathname !== paths.signIn) {
-          const next = encodeURIComponent(here.pathname + here.search);
+          const next = encodeURIComponent(here.pathname + here.search + here.hash);
           void router.navigate(`${paths.signIn}?next=${next}`);
         }
       }),

@@ -24,7 +24,7 @@ async function json<T>(request: APIRequestContext, method: 'get' | 'post' | 'put
   return (res.status() === 204 ? null : await res.json()) as T;
 }
 
-test('a coach signs up from a Chicago laptop: the kitchen’s time zone is set; a tray past its 2-hour cooling deadline is e-mailed with nobody on the page', async ({ page }) => {
+test('a coach signs up from a Chicago laptop: the kitchen’s time zone is set; a tray past its 2-hour cooling deadline is e-mailed with nobody on the page', async ({ page, browser }) => {
   test.setTimeout(180_000);
   const email = `rio.${Date.now().toString(36)}@example.test`;
   await page.goto('/register');
@@ -94,18 +94,25 @@ test('a coach signs up from a Chicago laptop: the kitchen’s time zone is set; 
   await expectNoSeriousA11yViolations(page, 'caught mail, cooling watch');
   await page.screenshot({ path: `${SHOTS}/cooling-watch-mail.png`, fullPage: true });
 
-  // Its link, opened on a phone, lands on the cooling record (below the run's numbers), its heading clear of the top bar.
+  // Its link, opened on a phone that is not signed in: sign in, and land on the cooling record (below the run's
+  // numbers), its heading clear of the top bar.
   const link = /Open the cooling record: (\S+)/.exec((await item.textContent()) ?? '')?.[1];
   expect(link).toMatch(new RegExp(`/weeks/${week.id}/bake-run#cooling-record-title$`));
-  await page.setViewportSize({ width: 390, height: 844 });
-  await page.goto(link!);
-  const heading = page.getByRole('heading', { name: 'Cooling record' });
+  const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, timezoneId: ZONE });
+  const reader = await phone.newPage();
+  await reader.goto(link!);
+  await reader.getByLabel('E-mail').fill(email);
+  await reader.getByLabel('Password').fill('a-long-password-1');
+  await reader.getByRole('button', { name: 'Sign in' }).click();
+  await expect(reader).toHaveURL(new RegExp(`/weeks/${week.id}/bake-run#cooling-record-title$`));
+  const heading = reader.getByRole('heading', { name: 'Cooling record' });
   await expect(heading).toBeInViewport();
-  await expect(page.getByRole('heading', { name: 'Watch-check egg slab' })).toBeInViewport();
-  expect(await page.evaluate(() => window.scrollY)).toBeGreaterThan(0);
-  const bar = await page.getByRole('banner').boundingBox();
+  await expect(reader.getByRole('heading', { name: 'Watch-check egg slab' })).toBeInViewport();
+  expect(await reader.evaluate(() => window.scrollY)).toBeGreaterThan(0);
+  const bar = await reader.getByRole('banner').boundingBox();
   expect((await heading.boundingBox())!.y).toBeGreaterThanOrEqual(bar ? bar.y + bar.height : 0);
-  await page.setViewportSize({ width: 1366, height: 900 });
+  await reader.screenshot({ path: `${SHOTS}/cooling-watch-link.png` });
+  await phone.close();
 
   // The outbox names what it was.
   await page.goto('/outbox');
