@@ -100,7 +100,7 @@ describe('the cooling watch', () => {
     expect(sent.map((m) => m.to)).not.toContain(client.email);
     const [first] = sent;
     expect(first.status).toBe('queued');
-    expect(first.subject).toMatch(/ missed its cooling deadline \(70 °F \(21 °C\) by 15:10\)$/);
+    expect(first.subject).toMatch(/ missed its cooling deadline: 70 °F \(21 °C\) by 15:10$/);
     expect(first.text).toContain('had to be at 70 °F (21 °C) or below by 15:10, and no temperature written down in its cooling record shows it was. It came out at 13:10.');
     expect(first.text).toContain('Temperatures written down: 13:40 120 °F (49 °C).');
     expect(first.text).toContain('Reheat it to 165 °F (74 °C) and start cooling again, or throw it away (common practice; your local food code decides).');
@@ -138,7 +138,7 @@ describe('the cooling watch', () => {
     await watch(chicago('19:11'));
     const final = (await mails(week.id)).slice(4);
     expect(final).toHaveLength(2);
-    expect(final[0].subject).toMatch(/missed its cooling deadline \(41 °F \(5 °C\) by 19:10\)$/);
+    expect(final[0].subject).toMatch(/missed its cooling deadline: 41 °F \(5 °C\) by 19:10$/);
     expect(final[0].text).toContain('\n\nThrow it away (common practice; your local food code decides).\n\n');
   });
 

@@ -157,7 +157,7 @@ export function coolingMissedMail(p: {
     'This is common practice for cooling logs; your local food code and inspector decide what to do.',
   ];
   return {
-    subject: `${p.businessName}: ${p.trayName} missed its cooling deadline (${p.stage} by ${p.deadline})`,
+    subject: `${p.businessName}: ${p.trayName} missed its cooling deadline: ${p.stage} by ${p.deadline}`,
     text: `${lines.join('\n\n')}\n\nOpen the cooling record: ${p.link}\n`,
     html: layout(lines, { href: p.link, label: 'Open the cooling record' }),
   };
