@@ -29,3 +29,10 @@ export function clockSpan(from: string, to: string, style: ClockStyle): string {
   if (style === '12h' && a.slice(-2) === b.slice(-2)) return `${a.slice(0, -3)}–${b}`;
   return `${a}–${b}`;
 }
+
+/** A span of whole minutes in words: "17 min", "2 h", "2 h 5 min". */
+export function minutesSpan(minutes: number): string {
+  const h = Math.floor(minutes / 60);
+  const m = minutes % 60;
+  return h === 0 ? `${m} min` : m === 0 ? `${h} h` : `${h} h ${m} min`;
+}

@@ -4,7 +4,7 @@ import type { Orm } from '@server/db/orm.js';
 import type { MailRuntime } from '@server/modules/mail/mail-runtime.js';
 import { watchCooling } from '@server/modules/bake-runs/cooling-watch.js';
 import { agentFor, testApp } from '../support/test-app.js';
-import { makeClient, member, PASSWORD, twoTrayWeek, uniq, type Member } from '../support/factories.js';
+import { makeClient, makeOven, member, PASSWORD, twoTrayWeek, uniq, type Member } from '../support/factories.js';
 import { sql } from '../support/db.js';
 
 // The cooling watch: FDA Food Code §3-501.14 (cooling): from 135 °F to 70 °F within 2 hours and to 41 °F within 6
@@ -170,5 +170,42 @@ describe('the cooling watch', () => {
     await settings(coach, { timeZone: 'America/Chicago' }).then((r) => expect(r.status).toBe(200));
     // The server's clock is long past Jan 4, 2026 15:10 in Chicago.
     expect((await glance()).body.cooling.missed).toEqual([{ trayName: expect.any(String), prepDate: '2026-01-04' }]);
+  });
+});
+
+describe('the cooling watch, for a tray forgotten in the record', () => {
+  it('on a prep day under way, e-mails the kitchen once about a tray planned out 30 minutes ago or more that the record does not have', async () => {
+    const day = await kitchenInChicago();
+    const { coach, assistant, week } = day;
+    // Two trays, two one-place ovens, one cook, from 08:00 (worked by hand in tests/api/bake-run.api.test.ts: one tray
+    // out at 08:37, the other at 08:45).
+    await makeOven(coach, { name: 'Left', racks: 1, traysPerRack: 1 });
+    await makeOven(coach, { name: 'Right', racks: 1, traysPerRack: 1 });
+    const planned = await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ start: '2026-01-04T08:00', cooks: 1, ovenIds: [] }).expect(200);
+    const trays = [...(planned.body.run.trays as { id: string; name: string; outAt: string }[])].sort((a, b) => (a.outAt < b.outAt ? -1 : 1));
+    expect(trays.map((t) => t.outAt)).toEqual(['2026-01-04T08:37', '2026-01-04T08:45']);
+    const [first, second] = trays;
+    // Nothing written down yet: the day may not have started (or was called off); the watch says nothing.
+    await watch(chicago('10:00'));
+    expect(await mails(week.id)).toEqual([]);
+    // The first tray out at 08:40, cooling on time.
+    await assistant.agent
+      .put(`/api/weeks/${week.id}/bake-run/cooling/${first.id}`)
+      .send({ outAt: '2026-01-04T08:40', readings: [{ at: '2026-01-04T09:00', tempF: 60 }] })
+      .expect(200);
+    await watch(chicago('09:14'));
+    expect(await mails(week.id)).toEqual([]);
+    await watch(chicago('09:15'));
+    const told = await mails(week.id);
+    expect(told.map((m) => m.to).sort()).toEqual([coach.email, assistant.email].sort());
+    expect(told[0].subject).toMatch(new RegExp(`: ${second.name.replace(/[()]/g, '\\$&')} is not in the cooling record \\(planned out 08:45\\)$`));
+    expect(told[0].text).toContain(`${second.name} (prep day Sun, Jan 4, `);
+    expect(told[0].text).toContain('was planned out of the oven at 08:45, 30 min ago, and its cooling record does not have it yet.');
+    expect(told[0].text).toContain(`/weeks/${week.id}/bake-run?prepDate=2026-01-04#cooling-record-title`);
+    // Once: later runs, and the tray written down, say nothing more.
+    await watch(chicago('09:40'));
+    await assistant.agent.put(`/api/weeks/${week.id}/bake-run/cooling/${second.id}`).send({ outAt: '2026-01-04T09:20', readings: [] }).expect(200);
+    await watch(chicago('09:41'));
+    expect(await mails(week.id)).toHaveLength(2);
   });
 });

@@ -4,7 +4,7 @@ import type { BakeRunResult } from '@shared/domain/bake-run-types';
 import type { CoolingRecordDto } from '@shared/schemas/cooling.schema';
 import { CoolingRecord, readingAt } from '@/features/bake-runs/components/cooling-record';
 import { BakeRunTimers } from '@/features/bake-runs/components/bake-run-timers';
-import { minutesSpan } from '@/features/bake-runs/components/temperature';
+import { minutesSpan } from '@shared/domain/clock';
 import { jsonResponse, renderInApp } from './render';
 
 // An invented run of two trays (only the fields the cooling record and the timers read), prep day Sun Jan 4, 2026.
@@ -134,7 +134,9 @@ describe('the cooling record on prep day', () => {
     again.unmount();
     timeZone = 'America/Los_Angeles';
     renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />);
-    expect((await screen.findByText(/e-mailed to every coach and kitchen assistant/)).textContent).toContain('by the kitchen’s clock (America/Los Angeles), even with this page closed.');
+    const watched = (await screen.findByText(/e-mailed to every coach and kitchen assistant/)).textContent;
+    expect(watched).toContain('or not written down 30 minutes after its planned time out,');
+    expect(watched).toContain('by the kitchen’s clock (America/Los Angeles), even with this page closed.');
   });
 
   it('before prep day there is nothing to write down', async () => {

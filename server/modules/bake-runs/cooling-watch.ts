@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { addDays, shortDate, toDateOrder, type IsoDate } from '@shared/domain/iso-date.js';
-import { toClockStyle } from '@shared/domain/clock.js';
-import { bothScales, checkCooling, clockFrom, FOOD_CODE_COOLING, type CoolingEntry } from '@shared/domain/cooling.js';
+import { bothScales, checkCooling, clockFrom, FOOD_CODE_COOLING, notWrittenDown, type CoolingEntry } from '@shared/domain/cooling.js';
+import { clockText, minutesSpan, toClockStyle } from '@shared/domain/clock.js';
 import { requireLocalMinutes } from '@shared/domain/bake-run-time.js';
 import { wallClockIn } from '@shared/domain/time-zone.js';
 import { weekTitle } from '@shared/domain/week-board.js';
@@ -10,7 +10,9 @@ import { Week } from '../weeks/week.entity.js';
 import { Membership } from '../auth/user.entity.js';
 import type { IWorkspace } from '../workspaces/workspace.entity.js';
 import { Outbox } from '../mail/outbox.entity.js';
-import { coolingMissedMail } from '../mail/mail-templates.js';
+import { coolingMissedMail, coolingNotWrittenMail } from '../mail/mail-templates.js';
+import type { Actor } from '../../http/authz.js';
+import { getWeekBakeRun } from './bake-run.service.js';
 import { appLink, mailKey, queueMail, type MailQueue } from '../mail/mail.service.js';
 
 /**
@@ -19,6 +21,9 @@ import { appLink, mailKey, queueMail, type MailQueue } from '../mail/mail.servic
  * record passed a Food Code deadline (70 °F within 2 hours, 41 °F within 6 hours, FDA Food Code §3-501.14) with no
  * reading showing the stage met, and not written down as thrown away, is e-mailed to every coach and kitchen
  * assistant of the workspace: once per tray, stage and cooling start (a reheat and a new start is watched again).
+ * It also watches for a tray forgotten in the record: on a prep day under way (at least one tray of the day written
+ * down), a tray the day's bake run planned out NOT_WRITTEN_AFTER_MINUTES ago or more that the record does not have
+ * is e-mailed to the same people, once per tray and planned time out.
  * Every run is idempotent (the e-mails' keys), so several instances and a retried job send nothing twice.
  *
  * A workspace without a time zone is not watched (its kitchen's time is unknown). Deadlines missed more than
@@ -28,6 +33,11 @@ export const COOLING_WATCH_QUEUE = 'cooling.watch';
 /** Every minute (the cron of the pg-boss schedule). */
 export const COOLING_WATCH_CRON = '* * * * *';
 export const WATCH_WINDOW_HOURS = 24;
+/**
+ * How long after its planned time out a tray missing from the cooling record is e-mailed (common practice, no
+ * source: longer than the page's own 5-minute prompt, so a check that keeps a tray in a little longer says nothing).
+ */
+export const NOT_WRITTEN_AFTER_MINUTES = 30;
 
 export interface CoolingWatchDeps {
   mail: MailQueue;
@@ -57,20 +67,86 @@ export async function watchCooling(em: EntityManager, deps: CoolingWatchDeps, at
   const utcToday = at.toISOString().slice(0, 10) as IsoDate;
   const records = await em.find(
     CoolingRecord,
-    { discarded: false, prepDate: { $gte: addDays(utcToday, -2), $lte: addDays(utcToday, 1) }, workspace: { timeZone: { $ne: null } } },
+    { prepDate: { $gte: addDays(utcToday, -2), $lte: addDays(utcToday, 1) }, workspace: { timeZone: { $ne: null } } },
     { populate: ['workspace'], orderBy: { id: 'asc' } },
   );
   let queued = 0;
+  // The prep days under way: today's in the kitchen with at least one tray written down.
+  const days = new Map<string, { ws: IWorkspace; weekId: number; prepDate: string; now: string; records: ICoolingRecord[] }>();
   for (const r of records) {
     const ws = r.workspace.unwrap();
     if (!ws.timeZone) continue;
     const now = wallClockIn(at, ws.timeZone);
+    if (r.prepDate === now.slice(0, 10)) {
+      const key = `${r.week.id}|${r.prepDate}`;
+      const day = days.get(key) ?? { ws, weekId: r.week.id, prepDate: r.prepDate, now, records: [] };
+      day.records.push(r);
+      days.set(key, day);
+    }
+    if (r.discarded) continue;
     const missed = missedDeadline(entryOf(r), now);
     if (!missed) continue;
     if (requireLocalMinutes(now) - requireLocalMinutes(missed.deadline) > WATCH_WINDOW_HOURS * 60) continue;
     queued += await tellKitchen(em, deps, ws, r, missed);
   }
-  return { watched: records.length, queued };
+  for (const day of days.values()) queued += await tellForgotten(em, deps, day);
+  return { watched: records.filter((r) => !r.discarded).length, queued };
+}
+
+/** The people a watch e-mail goes to: the workspace's coaches and kitchen assistants. */
+const kitchenOf = (em: EntityManager, workspaceId: number) =>
+  em.find(Membership, { workspace: workspaceId, role: { $in: ['coach', 'assistant'] } }, { populate: ['user'], orderBy: { id: 'asc' } });
+
+/**
+ * The trays of a prep day under way that its bake run planned out NOT_WRITTEN_AFTER_MINUTES ago or more and the
+ * cooling record does not have (the page names them after 5 minutes; this tells the kitchen with the page closed).
+ */
+async function tellForgotten(
+  em: EntityManager,
+  deps: CoolingWatchDeps,
+  day: { ws: IWorkspace; weekId: number; prepDate: string; now: string; records: ICoolingRecord[] },
+): Promise<number> {
+  const { ws } = day;
+  const order = toDateOrder(ws.dateOrder);
+  const style = toClockStyle(ws.clock);
+  // The run as the kitchen's pages read it (a start moved, a day planned again), by the workspace's own settings.
+  const reader: Actor = { userId: 0, email: '', name: 'cooling watch', role: 'coach', workspaceId: ws.id, clientId: null, dateOrder: order, clock: style };
+  const { run, weekName } = await getWeekBakeRun(em, reader, day.weekId, day.prepDate);
+  if (!run) return 0;
+  const nowMinute = requireLocalMinutes(day.now) - requireLocalMinutes(run.start);
+  const late = notWrittenDown(run.trays, day.records, nowMinute, NOT_WRITTEN_AFTER_MINUTES);
+  if (!late.length) return 0;
+  const members = await kitchenOf(em, ws.id);
+  let queued = 0;
+  for (const tray of late) {
+    for (const m of members) {
+      const user = m.user.unwrap();
+      const idempotencyKey = mailKey('cnw', `${day.weekId}|${day.prepDate}|${tray.id}|${tray.outAt}|u${user.id}`);
+      if (await em.count(Outbox, { idempotencyKey })) continue;
+      const body = coolingNotWrittenMail({
+        businessName: ws.name,
+        name: user.name,
+        trayName: tray.name,
+        prepLabel: shortDate(day.prepDate as IsoDate, order),
+        weekName,
+        plannedOut: clockText(tray.outAt, style),
+        late: minutesSpan(nowMinute - tray.outMinute),
+        link: appLink(deps.publicUrl, `/weeks/${day.weekId}/bake-run?prepDate=${day.prepDate}#cooling-record-title`),
+      });
+      await queueMail(em, deps.mail, {
+        workspaceId: ws.id,
+        kind: 'cooling-missed',
+        to: user.email,
+        subject: body.subject,
+        text: body.text,
+        html: body.html,
+        weekId: day.weekId,
+        idempotencyKey,
+      });
+      queued += 1;
+    }
+  }
+  return queued;
 }
 
 /** What the kitchen does about a missed stage, in the cooling check's words (shared/domain/cooling.ts). */
@@ -88,11 +164,7 @@ async function tellKitchen(
   r: ICoolingRecord,
   missed: { stageF: number; deadline: string },
 ): Promise<number> {
-  const members = await em.find(
-    Membership,
-    { workspace: ws.id, role: { $in: ['coach', 'assistant'] } },
-    { populate: ['user'], orderBy: { id: 'asc' } },
-  );
+  const members = await kitchenOf(em, ws.id);
   if (!members.length) return 0;
   const week = await em.findOneOrFail(Week, r.week.id);
   const order = toDateOrder(ws.dateOrder);

@@ -163,6 +163,35 @@ export function coolingMissedMail(p: {
   };
 }
 
+/**
+ * To each coach and kitchen assistant: a prep day under way (some of its trays written down in the cooling record)
+ * has a tray planned out a while ago that the record does not have (sent by the cooling watch).
+ */
+export function coolingNotWrittenMail(p: {
+  businessName: string;
+  name: string;
+  trayName: string;
+  prepLabel: string;
+  weekName: string;
+  /** Its planned time out, "10:31". */
+  plannedOut: string;
+  /** How long ago, "35 min". */
+  late: string;
+  link: string;
+}): MailBody {
+  const lines = [
+    `Hello ${p.name},`,
+    `${p.trayName} (prep day ${p.prepLabel}, ${p.weekName}) was planned out of the oven at ${p.plannedOut}, ${p.late} ago, and its cooling record does not have it yet.`,
+    'If it is out, write down when it came out: its cooling deadlines (70 °F (21 °C) within 2 hours, 41 °F (5 °C) within 6 hours in total, FDA Food Code §3-501.14) count from then.',
+    'If it is still in the oven, write it down when it comes out. If the day started later than planned, "Started at another time" on the bake-run page moves the plan.',
+  ];
+  return {
+    subject: `${p.businessName}: ${p.trayName} is not in the cooling record (planned out ${p.plannedOut})`,
+    text: `${lines.join('\n\n')}\n\nOpen the cooling record: ${p.link}\n`,
+    html: layout(lines, { href: p.link, label: 'Open the cooling record' }),
+  };
+}
+
 /** To a coach: a tray written down as thrown away was marked as kept after all (its portions count again). */
 export function trayKeptMail(p: { businessName: string; name: string; trayName: string; prepLabel: string; weekName: string; recordedBy: string; link: string }): MailBody {
   const lines = [

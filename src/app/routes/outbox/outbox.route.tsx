@@ -33,7 +33,7 @@ export function Component() {
     <div className="flex flex-col gap-6">
       <PageHeader
         title="Outbox"
-        lead="Every e-mail Trayline sends for your workspace: invitations, week plans, the prep-day papers for the kitchen, word of a tray thrown away and of a cooling deadline passed. Failed messages are tried again automatically (up to 5 times, waiting longer each time)."
+        lead="Every e-mail Trayline sends for your workspace: invitations, week plans, the prep-day papers for the kitchen, and word from the cooling record (a tray thrown away, a deadline passed, a tray not written down). Failed messages are tried again automatically (up to 5 times, waiting longer each time)."
       >
         {data?.devMailView && (
           <Link className="inline-flex min-h-11 items-center rounded-lg border border-line-strong px-4 font-bold hover:bg-paper-deep" to={paths.devMail}>

@@ -120,7 +120,7 @@ export function DatesTimesCard() {
               disabled={save.isPending}
               hint={
                 data.timeZone
-                  ? `Kitchen time now in ${data.timeZone.replace(/_/g, ' ')}: ${kitchenNow(data.timeZone)}. Trayline watches the cooling record at this time and e-mails every coach and kitchen assistant when a tray passes a cooling deadline with no reading showing it cooled.`
+                  ? `Kitchen time now in ${data.timeZone.replace(/_/g, ' ')}: ${kitchenNow(data.timeZone)}. Trayline watches the cooling record at this time and e-mails every coach and kitchen assistant when a tray passes a cooling deadline with no reading showing it cooled, or is not written down 30 minutes after its planned time out.`
                   : 'Not set: cooling deadlines are watched only on the bake-run page while it is open. Set it to have Trayline e-mail every coach and kitchen assistant when a tray passes one with no reading showing it cooled.'
               }
               onChange={(e) => {

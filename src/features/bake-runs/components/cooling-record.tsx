@@ -12,7 +12,8 @@ import { coolingQuery, useClearCooling, useSaveCooling } from '../api/cooling';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { currentClockStyle, localToday, timeLabel } from '@/lib/dates';
 import { addDays } from '@shared/domain/iso-date';
-import { clock, formatTemp, minutesSpan, nowLocal, type TempUnit } from './temperature';
+import { clock, formatTemp, nowLocal, type TempUnit } from './temperature';
+import { minutesSpan } from '@shared/domain/clock';
 import { useDeviceClock, useRunMinute } from './bake-run-timers';
 
 /** "HH:mm" typed for a reading, as a local date-time: on the day the tray came out, or the next day when earlier. */
@@ -382,8 +383,9 @@ function WatchLine({ timeZone, role }: { timeZone: string | null; role: CoolingR
   if (timeZone)
     return (
       <p className="text-sm text-ink-soft">
-        A tray past a deadline with no reading showing it cooled is e-mailed to every coach and kitchen assistant, by the
-        kitchen’s clock ({timeZone.replace(/_/g, ' ')}), even with this page closed.
+        A tray past a deadline with no reading showing it cooled, or not written down 30 minutes after its planned time
+        out, is e-mailed to every coach and kitchen assistant, by the kitchen’s clock ({timeZone.replace(/_/g, ' ')}),
+        even with this page closed.
       </p>
     );
   return (

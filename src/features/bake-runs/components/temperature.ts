@@ -30,12 +30,5 @@ export const BAND_CLASS: Record<1 | 2 | 3 | 4 | 5, string> = {
 /** The "HH:mm" of a local date-time, as a time input takes it (words for people: timeLabel in src/lib/dates.ts). */
 export const clock = (local: string) => local.slice(11, 16);
 
-/** A span of whole minutes in words: "17 min", "2 h", "2 h 5 min". */
-export function minutesSpan(minutes: number): string {
-  const h = Math.floor(minutes / 60);
-  const m = minutes % 60;
-  return h === 0 ? `${m} min` : m === 0 ? `${h} h` : `${h} h ${m} min`;
-}
-
 /** The device clock as a local "YYYY-MM-DDTHH:mm". */
 export const nowLocal = (d = new Date()) => `${localToday(d)}T${localHhmm(d)}`;

@@ -9,7 +9,7 @@ export const MAIL_KIND_WORDS: Record<MailKind, string> = {
   'bake-run': 'Bake run',
   'prep-day': 'Prep-day papers',
   'cooling-record': 'Cooling record: tray thrown away or kept',
-  'cooling-missed': 'Cooling record: a deadline passed',
+  'cooling-missed': 'Cooling record: a deadline passed or a tray not written down',
 };
 
 const LOOK: Record<OutboxStatus, { icon: string; label: string; cls: string }> = {
