@@ -1,5 +1,6 @@
 import os from 'node:os';
 import { Tinypool } from 'tinypool';
+import { LRUCache } from 'lru-cache';
 import type { BakeRunInput, BakeRunResult } from '@shared/domain/bake-run-types.js';
 
 /**
@@ -21,12 +22,29 @@ function workers(): Tinypool {
   return pool;
 }
 
-export function planBakeRunOffThread(input: BakeRunInput): Promise<BakeRunResult> {
-  return workers().run(input) as Promise<BakeRunResult>;
+/**
+ * Plans already made, by their whole input. The scheduler is deterministic (a fixed-seed search with a budget of
+ * evaluations, not of time), so a plan is a function of its input alone: the bake-run page read again, and the
+ * cooling watch reading a prep day under way once a minute, reuse it instead of computing it again. Not state that
+ * matters (a restart or an eviction only costs the computation); each caller gets its own copy.
+ */
+const planned = new LRUCache<string, Promise<BakeRunResult>>({ max: 200 });
+
+export async function planBakeRunOffThread(input: BakeRunInput): Promise<BakeRunResult> {
+  const key = JSON.stringify(input);
+  let plan = planned.get(key);
+  if (!plan) {
+    plan = workers().run(input) as Promise<BakeRunResult>;
+    planned.set(key, plan);
+    // A failed computation is not kept.
+    plan.catch(() => planned.delete(key));
+  }
+  return structuredClone(await plan);
 }
 
 /** Ends the worker threads (server shutdown, test teardown). */
 export async function closeBakeRunPool(): Promise<void> {
+  planned.clear();
   const p = pool;
   pool = null;
   await p?.destroy();
