@@ -10,7 +10,7 @@ import { Week } from '../weeks/week.entity.js';
 import { Membership } from '../auth/user.entity.js';
 import type { IWorkspace } from '../workspaces/workspace.entity.js';
 import { Outbox } from '../mail/outbox.entity.js';
-import { coolingMissedMail, coolingNotWrittenMail } from '../mail/mail-templates.js';
+import { coolingMissedMail, coolingNotWrittenMail, type MailBody } from '../mail/mail-templates.js';
 import type { Actor } from '../../http/authz.js';
 import { getWeekBakeRun } from './bake-run.service.js';
 import { appLink, mailKey, queueMail, type MailQueue } from '../mail/mail.service.js';
@@ -116,35 +116,45 @@ async function tellForgotten(
   const nowMinute = requireLocalMinutes(day.now) - requireLocalMinutes(run.start);
   const late = notWrittenDown(run.trays, day.records, nowMinute, NOT_WRITTEN_AFTER_MINUTES);
   if (!late.length) return 0;
-  const members = await kitchenOf(em, ws.id);
   let queued = 0;
   for (const tray of late) {
-    for (const m of members) {
-      const user = m.user.unwrap();
-      const idempotencyKey = mailKey('cnw', `${day.weekId}|${day.prepDate}|${tray.id}|${tray.outAt}|u${user.id}`);
-      if (await em.count(Outbox, { idempotencyKey })) continue;
-      const body = coolingNotWrittenMail({
+    queued += await mailKitchen(em, deps, ws, day.weekId, 'cnw', `${day.weekId}|${day.prepDate}|${tray.id}|${tray.outAt}`, (name) =>
+      coolingNotWrittenMail({
         businessName: ws.name,
-        name: user.name,
+        name,
         trayName: tray.name,
         prepLabel: shortDate(day.prepDate as IsoDate, order),
         weekName,
         plannedOut: clockText(tray.outAt, style),
         late: minutesSpan(nowMinute - tray.outMinute),
         link: appLink(deps.publicUrl, `/weeks/${day.weekId}/bake-run?prepDate=${day.prepDate}#cooling-record-title`),
-      });
-      await queueMail(em, deps.mail, {
-        workspaceId: ws.id,
-        kind: 'cooling-missed',
-        to: user.email,
-        subject: body.subject,
-        text: body.text,
-        html: body.html,
-        weekId: day.weekId,
-        idempotencyKey,
-      });
-      queued += 1;
-    }
+      }),
+    );
+  }
+  return queued;
+}
+
+/**
+ * One watch e-mail to each coach and kitchen assistant of the workspace, written for them by `write`; keyed by
+ * `identity` and the person, so a later run (or a retried job) sends nothing again. Returns how many were queued.
+ */
+async function mailKitchen(
+  em: EntityManager,
+  deps: CoolingWatchDeps,
+  ws: IWorkspace,
+  weekId: number,
+  prefix: string,
+  identity: string,
+  write: (name: string) => MailBody,
+): Promise<number> {
+  let queued = 0;
+  for (const m of await kitchenOf(em, ws.id)) {
+    const user = m.user.unwrap();
+    const idempotencyKey = mailKey(prefix, `${identity}|u${user.id}`);
+    if (await em.count(Outbox, { idempotencyKey })) continue;
+    const body = write(user.name);
+    await queueMail(em, deps.mail, { workspaceId: ws.id, kind: 'cooling-missed', to: user.email, subject: body.subject, text: body.text, html: body.html, weekId, idempotencyKey });
+    queued += 1;
   }
   return queued;
 }
@@ -164,8 +174,6 @@ async function tellKitchen(
   r: ICoolingRecord,
   missed: { stageF: number; deadline: string },
 ): Promise<number> {
-  const members = await kitchenOf(em, ws.id);
-  if (!members.length) return 0;
   const week = await em.findOneOrFail(Week, r.week.id);
   const order = toDateOrder(ws.dateOrder);
   const style = toClockStyle(ws.clock);
@@ -175,14 +183,10 @@ async function tellKitchen(
     .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
     .map((x) => `${clockFrom(x.at, r.outAt, style)} ${bothScales(x.tempF)}`);
   const query = r.prepDate === week.prepDate ? '' : `?prepDate=${r.prepDate}`;
-  let queued = 0;
-  for (const m of members) {
-    const user = m.user.unwrap();
-    const idempotencyKey = mailKey('cdm', `${r.id}|${from}|${missed.stageF}|u${user.id}`);
-    if (await em.count(Outbox, { idempotencyKey })) continue;
-    const body = coolingMissedMail({
+  return mailKitchen(em, deps, ws, week.id, 'cdm', `${r.id}|${from}|${missed.stageF}`, (name) =>
+    coolingMissedMail({
       businessName: ws.name,
-      name: user.name,
+      name,
       trayName: r.trayName,
       prepLabel: shortDate(r.prepDate as IsoDate, order),
       weekName: weekTitle(week, order),
@@ -193,18 +197,6 @@ async function tellKitchen(
       readings,
       said: whatToDo(missed.stageF, r.restartedAt != null),
       link: appLink(deps.publicUrl, `/weeks/${week.id}/bake-run${query}#cooling-record-title`),
-    });
-    await queueMail(em, deps.mail, {
-      workspaceId: ws.id,
-      kind: 'cooling-missed',
-      to: user.email,
-      subject: body.subject,
-      text: body.text,
-      html: body.html,
-      weekId: week.id,
-      idempotencyKey,
-    });
-    queued += 1;
-  }
-  return queued;
+    }),
+  );
 }
