@@ -74,3 +74,6 @@ export function deviceTimeZone(): string | null {
   const zone = new Intl.DateTimeFormat().resolvedOptions().timeZone;
   return zone ? canonicalTimeZone(zone) : null;
 }
+
+/** A zone's name as people read it: "America/Los_Angeles" → "America/Los Angeles". */
+export const zoneName = (zone: string): string => zone.replace(/_/g, ' ');

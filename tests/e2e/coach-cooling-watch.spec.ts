@@ -1,5 +1,6 @@
 import { expect, test, type APIRequestContext } from '@playwright/test';
 import { wallClockIn } from '../../shared/domain/time-zone';
+import { addDays, weekdayOf } from '../../shared/domain/iso-date';
 import { expectNoSeriousA11yViolations, SHOTS } from './support';
 
 // The coach's laptop is in the kitchen, in Chicago: a workspace opened on it starts in that zone.
@@ -10,13 +11,6 @@ const ZONE = 'America/Chicago';
 
 /** The kitchen's wall clock `minutesAgo` minutes ago, "YYYY-MM-DDTHH:mm". */
 const kitchenClock = (minutesAgo: number) => wallClockIn(new Date(Date.now() - minutesAgo * 60_000), ZONE);
-
-/** The Monday after an ISO date (the board of the prep day's week). */
-function mondayAfter(iso: string): string {
-  const d = new Date(`${iso}T00:00:00Z`);
-  d.setUTCDate(d.getUTCDate() + (((8 - d.getUTCDay()) % 7) || 7));
-  return d.toISOString().slice(0, 10);
-}
 
 async function json<T>(request: APIRequestContext, method: 'get' | 'post' | 'put' | 'patch' | 'delete', url: string, data?: unknown): Promise<T> {
   const res = await request[method](url, { headers: csrf, ...(data === undefined ? {} : { data }) });
@@ -58,7 +52,8 @@ test('a coach signs up from a Chicago laptop: the kitchen’s time zone is set; 
   // reading since (70 °F was due 5 minutes ago: FDA Food Code §3-501.14), and the page closed.
   const out = kitchenClock(125);
   const prepDate = out.slice(0, 10);
-  const startDate = mondayAfter(prepDate);
+  // The Monday after the prep day (Sunday is weekday 0): the board of the prep day's week.
+  const startDate = addDays(prepDate, 8 - (weekdayOf(prepDate) || 7));
   const [egg] = await json<{ items: { id: number }[] }>(page.request, 'get', '/api/ingredients?q=egg&pageSize=1').then((r) => r.items);
   const tray = await json<{ id: number; name: string }>(page.request, 'post', '/api/trays', {
     name: 'Watch-check egg slab',

@@ -3,7 +3,7 @@ import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import { DATE_ORDERS, shortDate, type DateOrder } from '@shared/domain/iso-date';
 import { CLOCK_STYLES, clockText, type ClockStyle } from '@shared/domain/clock';
-import { deviceTimeZone, timeZoneChoices, wallClockIn } from '@shared/domain/time-zone';
+import { deviceTimeZone, timeZoneChoices, wallClockIn, zoneName } from '@shared/domain/time-zone';
 import type { WorkspaceSettingsUpdateInput } from '@shared/schemas/ingredients.schema';
 import { SelectField } from '@/components/ui/field';
 import { Button } from '@/components/ui/button';
@@ -39,7 +39,7 @@ function zoneGroups(current: string | null): Array<[string, string[]]> {
   return [...groups.entries()].sort(([a], [b]) => (a === 'Other' ? 1 : b === 'Other' ? -1 : a.localeCompare(b)));
 }
 
-const placeOf = (zone: string) => (zone.includes('/') ? zone.slice(zone.indexOf('/') + 1) : zone).replace(/_/g, ' ').replace(/\//g, ' / ');
+const placeOf = (zone: string) => zoneName(zone.includes('/') ? zone.slice(zone.indexOf('/') + 1) : zone).replace(/\//g, ' / ');
 
 /** "Thu, Dec 3, 15:12" in the kitchen's zone now, as the workspace writes dates and times. */
 function kitchenNow(zone: string): string {
@@ -120,12 +120,12 @@ export function DatesTimesCard() {
               disabled={save.isPending}
               hint={
                 data.timeZone
-                  ? `Kitchen time now in ${data.timeZone.replace(/_/g, ' ')}: ${kitchenNow(data.timeZone)}. Trayline watches the cooling record at this time and e-mails every coach and kitchen assistant when a tray passes a cooling deadline with no reading showing it cooled, or is not written down 30 minutes after its planned time out.`
+                  ? `Kitchen time now in ${zoneName(data.timeZone)}: ${kitchenNow(data.timeZone)}. Trayline watches the cooling record at this time and e-mails every coach and kitchen assistant when a tray passes a cooling deadline with no reading showing it cooled, or is not written down 30 minutes after its planned time out.`
                   : 'Not set: cooling deadlines are watched only on the bake-run page while it is open. Set it to have Trayline e-mail every coach and kitchen assistant when a tray passes one with no reading showing it cooled.'
               }
               onChange={(e) => {
                 const timeZone = e.target.value || null;
-                change({ timeZone }, data.version, timeZone ? `Kitchen time zone: ${timeZone.replace(/_/g, ' ')}` : 'Kitchen time zone not set: the cooling watch is off');
+                change({ timeZone }, data.version, timeZone ? `Kitchen time zone: ${zoneName(timeZone)}` : 'Kitchen time zone not set: the cooling watch is off');
               }}
             >
               <option value="">Not set (no cooling e-mails)</option>
@@ -139,7 +139,7 @@ export function DatesTimesCard() {
                 </optgroup>
               ))}
             </SelectField>
-            <DeviceZoneOffer current={data.timeZone} disabled={save.isPending} choose={(timeZone) => change({ timeZone }, data.version, `Kitchen time zone: ${timeZone.replace(/_/g, ' ')}`)} />
+            <DeviceZoneOffer current={data.timeZone} disabled={save.isPending} choose={(timeZone) => change({ timeZone }, data.version, `Kitchen time zone: ${zoneName(timeZone)}`)} />
             {stale && (
               <Notice tone="warn" title="Someone else changed the workspace settings">
                 The current choice is shown again; choose once more to apply yours.
@@ -158,7 +158,7 @@ function DeviceZoneOffer({ current, disabled, choose }: { current: string | null
   if (!device || device === current) return null;
   return (
     <p className="flex flex-wrap items-center gap-2 text-sm text-ink-soft">
-      This device is in {device.replace(/_/g, ' ')}.
+      This device is in {zoneName(device)}.
       <Button type="button" variant="secondary" size="sm" disabled={disabled} onClick={() => choose(device)}>
         Use this device’s time zone
       </Button>

@@ -14,6 +14,7 @@ import { currentClockStyle, localToday, timeLabel } from '@/lib/dates';
 import { addDays } from '@shared/domain/iso-date';
 import { clock, formatTemp, nowLocal, type TempUnit } from './temperature';
 import { minutesSpan } from '@shared/domain/clock';
+import { zoneName } from '@shared/domain/time-zone';
 import { useDeviceClock, useRunMinute } from './bake-run-timers';
 
 /** "HH:mm" typed for a reading, as a local date-time: on the day the tray came out, or the next day when earlier. */
@@ -384,7 +385,7 @@ function WatchLine({ timeZone, role }: { timeZone: string | null; role: CoolingR
     return (
       <p className="text-sm text-ink-soft">
         A tray past a deadline with no reading showing it cooled, or not written down 30 minutes after its planned time
-        out, is e-mailed to every coach and kitchen assistant, by the kitchen’s clock ({timeZone.replace(/_/g, ' ')}),
+        out, is e-mailed to every coach and kitchen assistant, by the kitchen’s clock ({zoneName(timeZone)}),
         even with this page closed.
       </p>
     );
