@@ -6,8 +6,7 @@ import { requireLocalMinutes } from '@shared/domain/bake-run-time.js';
 import { wallClockIn } from '@shared/domain/time-zone.js';
 import { weekTitle } from '@shared/domain/week-board.js';
 import { CoolingRecord, type ICoolingRecord } from './bake-run.entity.js';
-import { Week } from '../weeks/week.entity.js';
-import { Membership } from '../auth/user.entity.js';
+import { Membership, type IMembership } from '../auth/user.entity.js';
 import type { IWorkspace } from '../workspaces/workspace.entity.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { coolingMissedMail, coolingNotWrittenMail, type MailBody } from '../mail/mail-templates.js';
@@ -68,9 +67,17 @@ export async function watchCooling(em: EntityManager, deps: CoolingWatchDeps, at
   const records = await em.find(
     CoolingRecord,
     { prepDate: { $gte: addDays(utcToday, -2), $lte: addDays(utcToday, 1) }, workspace: { timeZone: { $ne: null } } },
-    { populate: ['workspace'], orderBy: { id: 'asc' } },
+    { populate: ['workspace', 'week'], orderBy: { id: 'asc' } },
   );
   let queued = 0;
+  // Who is told, read once per workspace in a run.
+  const kitchens = new Map<number, Promise<IMembership[]>>();
+  const kitchenOf = (wsId: number) => {
+    let k = kitchens.get(wsId);
+    if (!k) kitchens.set(wsId, (k = em.find(Membership, { workspace: wsId, role: { $in: ['coach', 'assistant'] } }, { populate: ['user'], orderBy: { id: 'asc' } })));
+    return k;
+  };
+  const tell: Tell = { em, deps, kitchenOf };
   // The prep days under way: today's in the kitchen with at least one tray written down.
   const days = new Map<string, { ws: IWorkspace; weekId: number; prepDate: string; now: string; records: ICoolingRecord[] }>();
   for (const r of records) {
@@ -87,26 +94,29 @@ export async function watchCooling(em: EntityManager, deps: CoolingWatchDeps, at
     const missed = missedDeadline(entryOf(r), now);
     if (!missed) continue;
     if (requireLocalMinutes(now) - requireLocalMinutes(missed.deadline) > WATCH_WINDOW_HOURS * 60) continue;
-    queued += await tellKitchen(em, deps, ws, r, missed);
+    queued += await tellKitchen(tell, ws, r, missed);
   }
-  for (const day of days.values()) queued += await tellForgotten(em, deps, day);
+  for (const day of days.values()) queued += await tellForgotten(tell, day);
   return { watched: records.filter((r) => !r.discarded).length, queued };
 }
 
-/** The people a watch e-mail goes to: the workspace's coaches and kitchen assistants. */
-const kitchenOf = (em: EntityManager, workspaceId: number) =>
-  em.find(Membership, { workspace: workspaceId, role: { $in: ['coach', 'assistant'] } }, { populate: ['user'], orderBy: { id: 'asc' } });
+/** What a run tells with: its entity manager, the mail queue, and the people of each workspace it tells (its coaches and kitchen assistants, read once a run). */
+interface Tell {
+  em: EntityManager;
+  deps: CoolingWatchDeps;
+  kitchenOf: (workspaceId: number) => Promise<IMembership[]>;
+}
 
 /**
  * The trays of a prep day under way that its bake run planned out NOT_WRITTEN_AFTER_MINUTES ago or more and the
  * cooling record does not have (the page names them after 5 minutes; this tells the kitchen with the page closed).
  */
 async function tellForgotten(
-  em: EntityManager,
-  deps: CoolingWatchDeps,
+  tell: Tell,
   day: { ws: IWorkspace; weekId: number; prepDate: string; now: string; records: ICoolingRecord[] },
 ): Promise<number> {
   const { ws } = day;
+  const { em, deps } = tell;
   const order = toDateOrder(ws.dateOrder);
   const style = toClockStyle(ws.clock);
   // The run as the kitchen's pages read it (a start moved, a day planned again), by the workspace's own settings.
@@ -118,7 +128,7 @@ async function tellForgotten(
   if (!late.length) return 0;
   let queued = 0;
   for (const tray of late) {
-    queued += await mailKitchen(em, deps, ws, day.weekId, 'cnw', `${day.weekId}|${day.prepDate}|${tray.id}|${tray.outAt}`, (name) =>
+    queued += await mailKitchen(tell, ws, day.weekId, 'cnw', `${day.weekId}|${day.prepDate}|${tray.id}|${tray.outAt}`, (name) =>
       coolingNotWrittenMail({
         businessName: ws.name,
         name,
@@ -139,21 +149,22 @@ async function tellForgotten(
  * `identity` and the person, so a later run (or a retried job) sends nothing again. Returns how many were queued.
  */
 async function mailKitchen(
-  em: EntityManager,
-  deps: CoolingWatchDeps,
+  tell: Tell,
   ws: IWorkspace,
   weekId: number,
   prefix: string,
   identity: string,
   write: (name: string) => MailBody,
 ): Promise<number> {
+  const { em, deps } = tell;
+  const people = (await tell.kitchenOf(ws.id)).map((m) => ({ user: m.user.unwrap(), key: mailKey(prefix, `${identity}|u${m.user.id}`) }));
+  // The ones told by an earlier run, in one query.
+  const sent = new Set((await em.find(Outbox, { idempotencyKey: { $in: people.map((p) => p.key) } }, { fields: ['idempotencyKey'] })).map((o) => o.idempotencyKey));
   let queued = 0;
-  for (const m of await kitchenOf(em, ws.id)) {
-    const user = m.user.unwrap();
-    const idempotencyKey = mailKey(prefix, `${identity}|u${user.id}`);
-    if (await em.count(Outbox, { idempotencyKey })) continue;
+  for (const { user, key } of people) {
+    if (sent.has(key)) continue;
     const body = write(user.name);
-    await queueMail(em, deps.mail, { workspaceId: ws.id, kind: 'cooling-missed', to: user.email, subject: body.subject, text: body.text, html: body.html, weekId, idempotencyKey });
+    await queueMail(em, deps.mail, { workspaceId: ws.id, kind: 'cooling-missed', to: user.email, subject: body.subject, text: body.text, html: body.html, weekId, idempotencyKey: key });
     queued += 1;
   }
   return queued;
@@ -168,13 +179,12 @@ function whatToDo(stageF: number, reheated: boolean): string {
 }
 
 async function tellKitchen(
-  em: EntityManager,
-  deps: CoolingWatchDeps,
+  tell: Tell,
   ws: IWorkspace,
   r: ICoolingRecord,
   missed: { stageF: number; deadline: string },
 ): Promise<number> {
-  const week = await em.findOneOrFail(Week, r.week.id);
+  const week = r.week.unwrap();
   const order = toDateOrder(ws.dateOrder);
   const style = toClockStyle(ws.clock);
   // The cooling clock's start: a reheat starts it again, and the watch tells of the new start's deadlines too.
@@ -183,7 +193,7 @@ async function tellKitchen(
     .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
     .map((x) => `${clockFrom(x.at, r.outAt, style)} ${bothScales(x.tempF)}`);
   const query = r.prepDate === week.prepDate ? '' : `?prepDate=${r.prepDate}`;
-  return mailKitchen(em, deps, ws, week.id, 'cdm', `${r.id}|${from}|${missed.stageF}`, (name) =>
+  return mailKitchen(tell, ws, week.id, 'cdm', `${r.id}|${from}|${missed.stageF}`, (name) =>
     coolingMissedMail({
       businessName: ws.name,
       name,
@@ -196,7 +206,7 @@ async function tellKitchen(
       restartedAt: r.restartedAt ? clockFrom(r.restartedAt, r.outAt, style) : null,
       readings,
       said: whatToDo(missed.stageF, r.restartedAt != null),
-      link: appLink(deps.publicUrl, `/weeks/${week.id}/bake-run${query}#cooling-record-title`),
+      link: appLink(tell.deps.publicUrl, `/weeks/${week.id}/bake-run${query}#cooling-record-title`),
     }),
   );
 }
