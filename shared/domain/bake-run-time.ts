@@ -1,7 +1,9 @@
 /**
  * Local wall-clock times of a bake run: "YYYY-MM-DDTHH:mm", no time zone, minute resolution.
  * A bake run lasts hours, so a daylight-saving jump inside it is not modelled: minutes are added to the calendar
- * reading as if every day had 24 h (the run sheet shows the kitchen clock the cook reads at the start).
+ * reading as if every day had 24 h (the run sheet shows the kitchen clock the cook reads at the start). Cooling
+ * deadlines, which can run past 2 a.m., are counted in real hours once the kitchen's zone is known
+ * (`addWallMinutes` in time-zone.ts, used by `checkCooling`).
  */
 
 const LOCAL_RE = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})$/;

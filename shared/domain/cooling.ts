@@ -15,6 +15,7 @@ import { clockText, DEFAULT_CLOCK, type ClockStyle } from './clock';
 import type { BakeEvent, BakeRunResult } from './bake-run-types';
 import { addLocalMinutes, requireLocalMinutes } from './bake-run-time';
 import { toCelsiusRounded } from './temperature';
+import { addWallMinutes, instantOfWall } from './time-zone';
 
 /** FDA Food Code §3-501.14 (cooling): 135 °F → 70 °F within 2 h, and → 41 °F within 6 h in total. */
 export const FOOD_CODE_COOLING = Object.freeze({
@@ -58,6 +59,8 @@ export interface CoolingCheck {
   /** The reading that met each stage in time (local), or null. */
   reached70At: string | null;
   reached41At: string | null;
+  /** The kitchen's clock changes (daylight time) between the start and a deadline: the deadlines are real hours. */
+  clocksChanged: boolean;
   /** 'ok' while on time or done, 'block' when a stage is missed, 'info' once thrown away. */
   tone: 'ok' | 'block' | 'info';
   /** What to do now, in words (both temperature scales). */
@@ -69,6 +72,9 @@ const F41 = FOOD_CODE_COOLING.finalF;
 /** A temperature in both scales, as the record and its e-mails say it: "70 °F (21 °C)". */
 export const bothScales = (f: number) => `${f} °F (${toCelsiusRounded(f)} °C)`;
 
+/** Said with the deadlines when the kitchen's clock changes between the start and a deadline. */
+export const CLOCKS_CHANGED = 'The clocks change in between: the deadlines are 2 and 6 hours of real time.';
+
 /** What the cooling deadlines count from, in words: "it came out", or "cooling started again" after a reheat. */
 export const countedFrom = (entry: { restartedAt?: string | null }) => (entry.restartedAt ? 'cooling started again' : 'it came out');
 
@@ -79,27 +85,46 @@ export function clockFrom(at: string, day: string, style: ClockStyle = DEFAULT_C
 }
 
 /**
- * Where one tray's cooling stands at local time `now`: the stage it is in, its deadlines, and what to do. Readings
- * before `from` (before a restart) are kept in the record but not counted.
+ * Where one tray's cooling stands at `now`: the stage it is in, its deadlines, and what to do. Readings before `from`
+ * (before a restart) are kept in the record but not counted.
+ *
+ * The record is written in the kitchen's wall-clock time. With the kitchen's time zone the deadlines are real hours
+ * after the start, read on its wall clock (a tray out at 23:30 on the night the clock falls back must be at 41 °F by
+ * 04:30, not 05:30), and `now` may be the instant itself; without one, hours are counted on the calendar reading as
+ * if every day had 24 (an hour off only across a daylight-time change, and then on the safe side in spring only).
  */
-export function checkCooling(entry: CoolingEntry, now: string, style: ClockStyle = DEFAULT_CLOCK): CoolingCheck {
+export function checkCooling(
+  entry: CoolingEntry,
+  now: string | Date,
+  style: ClockStyle = DEFAULT_CLOCK,
+  zone: string | null = null,
+): CoolingCheck {
   const from = entry.restartedAt ?? entry.outAt;
-  const by70 = addLocalMinutes(from, FOOD_CODE_COOLING.firstStageMinutes);
-  const by41 = addLocalMinutes(from, FOOD_CODE_COOLING.totalMinutes);
-  const start = requireLocalMinutes(from);
+  // Minutes on one line for every time compared: real minutes in the kitchen's zone, else the calendar reading's.
+  const minutesOf = zone ? (local: string) => Math.floor(instantOfWall(local, zone) / 60_000) : requireLocalMinutes;
+  const after = (minutes: number) => (zone ? addWallMinutes(from, minutes, zone) : addLocalMinutes(from, minutes));
+  const by70 = after(FOOD_CODE_COOLING.firstStageMinutes);
+  const by41 = after(FOOD_CODE_COOLING.totalMinutes);
+  const start = minutesOf(from);
   const counted = entry.readings
-    .filter((r) => requireLocalMinutes(r.at) >= start)
-    .sort((a, b) => requireLocalMinutes(a.at) - requireLocalMinutes(b.at));
+    .filter((r) => minutesOf(r.at) >= start)
+    .sort((a, b) => minutesOf(a.at) - minutesOf(b.at));
   const last = counted.at(-1) ?? null;
+  if (typeof now !== 'string' && !zone) throw new RangeError('An instant needs the kitchen’s time zone to be read');
+  const nowRead = typeof now === 'string' ? minutesOf(now) : Math.floor(now.getTime() / 60_000);
   // "Now" is at least the latest reading (a device clock behind the thermometer's note does not undo it).
-  const nowM = Math.max(requireLocalMinutes(now), last ? requireLocalMinutes(last.at) : -Infinity);
-  const m70 = requireLocalMinutes(by70);
-  const m41 = requireLocalMinutes(by41);
+  const nowM = Math.max(nowRead, last ? minutesOf(last.at) : -Infinity);
+  const m70 = start + FOOD_CODE_COOLING.firstStageMinutes;
+  const m41 = start + FOOD_CODE_COOLING.totalMinutes;
   const hit70 = counted.find((r) => r.tempF <= F70);
-  const reached70At = hit70 && requireLocalMinutes(hit70.at) <= m70 ? hit70.at : null;
+  const reached70At = hit70 && minutesOf(hit70.at) <= m70 ? hit70.at : null;
   const hit41 = reached70At ? counted.find((r) => r.tempF <= F41) : undefined;
-  const reached41At = hit41 && requireLocalMinutes(hit41.at) <= m41 ? hit41.at : null;
-  const base = { from, by70, by41, reached70At, reached41At };
+  const reached41At = hit41 && minutesOf(hit41.at) <= m41 ? hit41.at : null;
+  // Across a daylight-time change the wall clock's deadlines are an hour off the calendar's: say why.
+  const clocksChanged =
+    by70 !== addLocalMinutes(from, FOOD_CODE_COOLING.firstStageMinutes) || by41 !== addLocalMinutes(from, FOOD_CODE_COOLING.totalMinutes);
+  const changed = clocksChanged ? ` ${CLOCKS_CHANGED}` : '';
+  const base = { from, by70, by41, reached70At, reached41At, clocksChanged };
   if (entry.discarded) return { ...base, state: 'discarded', tone: 'info', said: 'Thrown away.' };
   if (!reached70At && (nowM > m70 || hit70)) {
     return {
@@ -111,7 +136,8 @@ export function checkCooling(entry: CoolingEntry, now: string, style: ClockStyle
         (entry.restartedAt
           ? 'It has been reheated once already: throw it away'
           : `Reheat it to ${bothScales(165)} and start cooling again, or throw it away`) +
-        ' (common practice; your local food code decides).',
+        ' (common practice; your local food code decides).' +
+        changed,
     };
   }
   if (!reached70At) {
@@ -119,7 +145,7 @@ export function checkCooling(entry: CoolingEntry, now: string, style: ClockStyle
       ...base,
       state: 'to-70',
       tone: 'ok',
-      said: `Cool to ${bothScales(F70)} or below by ${clockFrom(by70, from, style)}, then to ${bothScales(F41)} or below by ${clockFrom(by41, from, style)}.`,
+      said: `Cool to ${bothScales(F70)} or below by ${clockFrom(by70, from, style)}, then to ${bothScales(F41)} or below by ${clockFrom(by41, from, style)}.${changed}`,
     };
   }
   if (reached41At) {
@@ -135,23 +161,24 @@ export function checkCooling(entry: CoolingEntry, now: string, style: ClockStyle
       ...base,
       state: 'missed-41',
       tone: 'block',
-      said: `Not at ${bothScales(F41)} by ${clockFrom(by41, from, style)}, 6 hours after ${countedFrom(entry)}: throw it away (common practice; your local food code decides).`,
+      said: `Not at ${bothScales(F41)} by ${clockFrom(by41, from, style)}, 6 hours after ${countedFrom(entry)}: throw it away (common practice; your local food code decides).${changed}`,
     };
   }
   return {
     ...base,
     state: 'to-41',
     tone: 'ok',
-    said: `${bothScales(F70)} reached at ${clockFrom(reached70At, from, style)}. Next: ${bothScales(F41)} or below by ${clockFrom(by41, from, style)} (in the fridge).`,
+    said: `${bothScales(F70)} reached at ${clockFrom(reached70At, from, style)}. Next: ${bothScales(F41)} or below by ${clockFrom(by41, from, style)} (in the fridge).${changed}`,
   };
 }
 
 /**
- * Where a record stands on what was written down alone, for a reader that does not know the kitchen's clock (the
- * printed run sheet, the coach's glance): a deadline counts as missed only when a reading shows it.
+ * Where a record stands on what was written down alone, for a reader that does not look at the clock (the printed
+ * run sheet, a kept or thrown-away tray's e-mail, the glance without the kitchen's zone): a deadline counts as missed
+ * only when a reading shows it. With the kitchen's zone its deadlines are real hours, as in `checkCooling`.
  */
-export function checkOnPaper(entry: CoolingEntry): CoolingCheck {
-  return checkCooling(entry, entry.outAt);
+export function checkOnPaper(entry: CoolingEntry, zone: string | null = null): CoolingCheck {
+  return checkCooling(entry, entry.outAt, DEFAULT_CLOCK, zone);
 }
 
 /** A tray's record as the run's timers read it: its id in the run and what was written down. */
@@ -162,9 +189,15 @@ export interface RecordedCooling extends CoolingEntry {
 /**
  * The run's steps with what the cooling record says: a tray written down as out no longer has its check and time out
  * to come, and its cooling deadlines count from when it really came out (or started cooling again); a tray cooled in
- * time or thrown away has no deadline left. Trays without a record keep their planned steps.
+ * time or thrown away has no deadline left. Trays without a record keep their planned steps. With the kitchen's time
+ * zone the deadlines are read as `checkCooling` reads them (real hours); the steps stay on the run's minute line.
  */
-export function eventsWithCooling(run: Pick<BakeRunResult, 'start' | 'events'>, records: readonly RecordedCooling[], now: string): BakeEvent[] {
+export function eventsWithCooling(
+  run: Pick<BakeRunResult, 'start' | 'events'>,
+  records: readonly RecordedCooling[],
+  now: string | Date,
+  zone: string | null = null,
+): BakeEvent[] {
   const byTray = new Map(records.map((r) => [r.runTrayId, r]));
   const start = requireLocalMinutes(run.start);
   const gone = new Set<BakeEvent['kind']>(['first-check', 'tray-out', 'cooling-start', 'cool-to-70-by', 'fridge-41-by']);
@@ -172,7 +205,7 @@ export function eventsWithCooling(run: Pick<BakeRunResult, 'start' | 'events'>, 
   for (const r of records) {
     const planned = run.events.find((e) => e.trayId === r.runTrayId && e.kind === 'cool-to-70-by');
     if (!planned) continue;
-    const check = checkCooling(r, now);
+    const check = checkCooling(r, now, DEFAULT_CLOCK, zone);
     const source = FOOD_CODE_COOLING.source;
     const push = (kind: BakeEvent['kind'], at: string, tempF: number) =>
       out.push({ at, minute: requireLocalMinutes(at) - start, kind, oven: planned.oven, trayId: r.runTrayId, tempF, source });

@@ -59,6 +59,48 @@ export function wallClockIn(instant: Date, zone: string): string {
   return `${parts.year}-${parts.month}-${parts.day}T${parts.hour}:${parts.minute}`;
 }
 
+const WALL_RE = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})$/;
+
+/** The wall reading as if it were UTC, in ms; throws on text that is not "YYYY-MM-DDTHH:mm". */
+function wallAsUtc(local: string): number {
+  const m = WALL_RE.exec(local);
+  if (!m) throw new RangeError(`Not a local date-time "YYYY-MM-DDTHH:mm": ${local}`);
+  const [y, mo, d, h, mi] = m.slice(1).map(Number);
+  return Date.UTC(y, mo - 1, d, h, mi);
+}
+
+/** How far the zone's wall clock is ahead of UTC at `ms`, in ms (whole minutes). */
+function offsetAt(ms: number, zone: string): number {
+  return wallAsUtc(wallClockIn(new Date(ms), zone)) - Math.floor(ms / 60_000) * 60_000;
+}
+
+const DAY_MS = 86_400_000;
+
+/**
+ * The instant (ms since the epoch) a kitchen's wall-clock reading names in `zone`. A reading the clock shows twice
+ * (the hour repeated when daylight time ends) is its first; a reading the clock skips (the hour lost when it begins)
+ * is moved on by the jump (2:30 on a spring-forward night is 3:30 daylight time). Both as the ECMA-262 Temporal
+ * proposal's "compatible" disambiguation does.
+ */
+export function instantOfWall(local: string, zone: string): number {
+  const wall = wallAsUtc(local);
+  // The offsets a day before and after: a zone changes its offset at most once in two days.
+  const before = offsetAt(wall - DAY_MS, zone);
+  const after = offsetAt(wall + DAY_MS, zone);
+  const fits = [before, after].map((o) => wall - o).filter((ms) => offsetAt(ms, zone) === wall - ms);
+  if (fits.length) return Math.min(...fits);
+  return wall - before;
+}
+
+/**
+ * `minutes` of real time after a kitchen's wall-clock reading, as that wall clock reads it: across a daylight-time
+ * change the reading moves by an hour more or less than the minutes (23:30 + 6 h on the night Chicago falls back is
+ * 04:30, not 05:30).
+ */
+export function addWallMinutes(local: string, minutes: number, zone: string): string {
+  return wallClockIn(new Date(instantOfWall(local, zone) + minutes * 60_000), zone);
+}
+
 /** The zone names a coach can choose from (the engine's list), with UTC first. */
 export function timeZoneChoices(): string[] {
   if (!choices) {

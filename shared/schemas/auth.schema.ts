@@ -89,6 +89,11 @@ export interface MeDto {
   dateOrder: DateOrder;
   /** How the workspace writes a time of day (the coach's setting; every page and document follows it). */
   clock: ClockStyle;
+  /**
+   * The kitchen's time zone (IANA name, the coach's setting), or null when not set: the bake run and its cooling
+   * record read the kitchen's clock in it, whatever zone the reading device is in.
+   */
+  timeZone: string | null;
 }
 
 /** One of the workspaces a person belongs to (GET /api/auth/workspaces): someone may work for two coaches. */

@@ -1,5 +1,6 @@
 import { dateWithYear, dayHeading, DEFAULT_DATE_ORDER, shortDate, type DateOrder } from '@shared/domain/iso-date';
 import { clockSpan, clockText, DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock';
+import { wallClockIn } from '@shared/domain/time-zone';
 
 /**
  * How this workspace writes dates ("Mon, Dec 7" or "Mon 7 Dec"; the coach's setting, read with the signed-in person:
@@ -17,6 +18,40 @@ let clockStyle: ClockStyle = DEFAULT_CLOCK;
 export function setClockStyle(next: ClockStyle): void {
   clockStyle = next;
 }
+
+/**
+ * The kitchen's time zone (the coach's setting, kept like the date order), or null when not set. The bake run and its
+ * cooling record are written in the kitchen's wall-clock time: a coach looking in from another zone reads them on the
+ * kitchen's clock, and "now" written from their device is the kitchen's now.
+ */
+let kitchenZone: string | null = null;
+
+export function setKitchenZone(next: string | null): void {
+  kitchenZone = next && knownHere(next) ? next : null;
+}
+
+/** Whether this browser knows the zone (a zone named by a newer list than the browser's reads as not set). */
+function knownHere(zone: string): boolean {
+  try {
+    wallClockIn(new Date(0), zone);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+export function currentKitchenZone(): string | null {
+  return kitchenZone;
+}
+
+/** The kitchen's wall clock at `d` (this device's clock read in the kitchen's zone, or as it is when none is set), "YYYY-MM-DDTHH:mm". */
+export function kitchenNow(d: Date = new Date()): string {
+  if (kitchenZone) return wallClockIn(d, kitchenZone);
+  return `${localToday(d)}T${localHhmm(d)}`;
+}
+
+/** The kitchen's date today, "YYYY-MM-DD". */
+export const kitchenToday = (d: Date = new Date()): string => kitchenNow(d).slice(0, 10);
 
 /** A time of day ("HH:MM" or a local "YYYY-MM-DDTHH:MM") as the workspace writes it: "13:45" or "1:45 PM". */
 export function timeLabel(time: string): string {

@@ -4,7 +4,7 @@ import type { Orm } from '@server/db/orm.js';
 import type { MailRuntime } from '@server/modules/mail/mail-runtime.js';
 import { watchCooling } from '@server/modules/bake-runs/cooling-watch.js';
 import { agentFor, testApp } from '../support/test-app.js';
-import { makeClient, makeOven, member, PASSWORD, twoTrayWeek, uniq, type Member } from '../support/factories.js';
+import { coachWorkspace, makeClient, makeOven, makeTray, makeWeek, member, PASSWORD, twoTrayWeek, uniq, type Member } from '../support/factories.js';
 import { sql } from '../support/db.js';
 
 // The cooling watch: FDA Food Code §3-501.14 (cooling): from 135 °F to 70 °F within 2 hours and to 41 °F within 6
@@ -60,6 +60,8 @@ describe('the kitchen time zone setting', () => {
     expect((await settings(coach, { timeZone: '+05:30' })).status).toBe(400);
     expect((await settings(coach, { timeZone: 42 })).status).toBe(400);
     expect((await settings(coach, { timeZone: 'Europe/Berlin' })).body).toMatchObject({ timeZone: 'Europe/Berlin', clock: '24h' });
+    // Every signed-in person of the workspace reads it with themselves: their pages read the kitchen's clock in it.
+    expect((await assistant.agent.get('/api/auth/me').expect(200)).body.timeZone).toBe('Europe/Berlin');
     // Only the coach changes it; nothing was written by the refused ones.
     const s = await coach.agent.get('/api/workspace/settings').expect(200);
     await assistant.agent.patch('/api/workspace/settings').send({ timeZone: 'UTC', version: s.body.version }).expect(403);
@@ -170,6 +172,40 @@ describe('the cooling watch', () => {
     await settings(coach, { timeZone: 'America/Chicago' }).then((r) => expect(r.status).toBe(200));
     // The server's clock is long past Jan 4, 2026 15:10 in Chicago.
     expect((await glance()).body.cooling.missed).toEqual([{ trayName: expect.any(String), prepDate: '2026-01-04' }]);
+  });
+});
+
+describe('the cooling watch on the night the clock changes', () => {
+  // 15 U.S.C. §260a: in 2026 Chicago falls back from 2:00 CDT (UTC−5) to 1:00 CST (UTC−6) on Sunday, November 1.
+  // A tray out at 23:30 CDT on Oct 31 (04:30Z) must be at 41 °F within 6 hours of real time: by 10:30Z, which the
+  // kitchen's clock reads as 04:30 CST (worked by hand; the calendar reading would say 05:30, an hour too late).
+  it('e-mails a missed 6-hour deadline at 04:31 by the kitchen’s clock, not at 05:31', async () => {
+    const coach = await coachWorkspace(app);
+    const assistant = await member(app, coach, 'assistant');
+    const tray = await makeTray(coach);
+    const { week } = await makeWeek(coach, { startDate: '2026-11-02', prepDate: '2026-10-31' });
+    await coach.agent
+      .put(`/api/weeks/${week.id}/trays`)
+      .send({ version: week.version, trays: [{ trayId: tray.id, prepDate: '2026-10-31', trayCount: 1 }] })
+      .expect(200);
+    await settings(coach, { timeZone: 'America/Chicago' }).then((r) => expect(r.status).toBe(200));
+    // 70 °F reached at 00:50 (in time); never written down at 41 °F.
+    await assistant.agent
+      .put(`/api/weeks/${week.id}/bake-run/cooling/${tray.id}-1`)
+      .send({ outAt: '2026-10-31T23:30', readings: [{ at: '2026-11-01T00:50', tempF: 65 }] })
+      .expect(200);
+    await watch(new Date('2026-11-01T10:30:00Z'));
+    expect(await mails(week.id)).toEqual([]);
+    await watch(new Date('2026-11-01T10:31:00Z'));
+    const sent = await mails(week.id);
+    expect(sent.map((m) => m.to).sort()).toEqual([coach.email, assistant.email].sort());
+    expect(sent[0].subject).toMatch(/ missed its cooling deadline: 41 °F \(5 °C\) by 04:30 the next day$/);
+    expect(sent[0].text).toContain('had to be at 41 °F (5 °C) or below by 04:30 the next day');
+    expect(sent[0].text).toContain('It came out at 23:30.');
+    expect(sent[0].text).toContain('Throw it away (common practice; your local food code decides). The clocks change in between: the deadlines are 2 and 6 hours of real time.');
+    // The coach's glance, at the same instant, counts it too.
+    const glance = await coach.agent.get('/api/weeks/glance?today=2026-11-01').expect(200);
+    expect(glance.body.cooling.missed).toEqual([{ trayName: expect.any(String), prepDate: '2026-10-31' }]);
   });
 });
 

@@ -5,6 +5,7 @@ import type { CoolingRecordDto } from '@shared/schemas/cooling.schema';
 import { CoolingRecord, readingAt } from '@/features/bake-runs/components/cooling-record';
 import { BakeRunTimers } from '@/features/bake-runs/components/bake-run-timers';
 import { minutesSpan } from '@shared/domain/clock';
+import { setKitchenZone } from '@/lib/dates';
 import { jsonResponse, renderInApp } from './render';
 
 // An invented run of two trays (only the fields the cooling record and the timers read), prep day Sun Jan 4, 2026.
@@ -72,6 +73,7 @@ beforeEach(() => {
   );
 });
 afterEach(() => {
+  setKitchenZone(null);
   vi.useRealTimers();
   vi.unstubAllGlobals();
 });
@@ -137,6 +139,17 @@ describe('the cooling record on prep day', () => {
     const watched = (await screen.findByText(/e-mailed to every coach and kitchen assistant/)).textContent;
     expect(watched).toContain('or not written down 30 minutes after its planned time out,');
     expect(watched).toContain('by the kitchen’s clock (America/Los Angeles), even with this page closed.');
+  });
+
+  it('reads the kitchen’s clock, not the device’s, once the kitchen has a time zone (a coach looking in from elsewhere)', async () => {
+    // 02:10 UTC on Jan 5 is 20:10 on Jan 4 in Chicago (CST, UTC−6; 15 U.S.C. §261): still the prep day in the kitchen.
+    vi.setSystemTime(new Date('2026-01-05T02:10:00Z'));
+    setKitchenZone('America/Chicago');
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="coach" />);
+    const cards = await screen.findAllByRole('listitem');
+    fireEvent.click(within(cards[0]).getByRole('button', { name: 'Out now' }));
+    await waitFor(() => expect(puts()).toEqual([['/api/weeks/7/bake-run/cooling/3-1', { outAt: '2026-01-04T20:10', prepDate: '2026-01-04' }]]));
+    expect(await screen.findByText(/Cool to 70 °F \(21 °C\) or below by 22:10, then to 41 °F \(5 °C\) or below by 02:10 the next day/)).toBeTruthy();
   });
 
   it('before prep day there is nothing to write down', async () => {

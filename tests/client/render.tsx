@@ -35,6 +35,7 @@ export function signedIn(overrides: Partial<MeDto> = {}): MeDto {
     unitSystem: 'us',
     dateOrder: 'month-day',
     clock: '24h',
+    timeZone: null,
     tempUnit: 'F',
     ...overrides,
   };

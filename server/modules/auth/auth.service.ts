@@ -107,10 +107,20 @@ export async function actorIn(em: EntityManager, actor: Actor, workspaceId: numb
 
 /** The signed-in person and their workspace: one prepared statement (every page load of the app asks for it). */
 export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
-  const [row] = await preparedRows<{ id: number; email: string; name: string; unitSystem: string; tempUnit: string; workspaceName: string; workspaceIsDemo: boolean }>(
+  const [row] = await preparedRows<{
+    id: number;
+    email: string;
+    name: string;
+    unitSystem: string;
+    tempUnit: string;
+    workspaceName: string;
+    workspaceIsDemo: boolean;
+    timeZone: string | null;
+  }>(
     em,
     'trayline_me',
-    `select u.id, u.email, u.name, u.unit_system as "unitSystem", u.temp_unit as "tempUnit", w.name as "workspaceName", w.is_demo as "workspaceIsDemo"
+    `select u.id, u.email, u.name, u.unit_system as "unitSystem", u.temp_unit as "tempUnit", w.name as "workspaceName", w.is_demo as "workspaceIsDemo",
+            w.time_zone as "timeZone"
        from app_user u, workspace w where u.id = $1 and w.id = $2`,
     [actor.userId, actor.workspaceId],
   );
@@ -129,6 +139,7 @@ export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
     // Read with the session (the actor statement), like the role.
     dateOrder: datesOf(actor),
     clock: clockOf(actor),
+    timeZone: row.timeZone ?? null,
   };
 }
 

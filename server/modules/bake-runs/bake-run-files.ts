@@ -28,5 +28,6 @@ export async function bakeRunPdf(em: EntityManager, actor: Actor, weekId: number
     clock: clockOf(actor),
     replanned: dto.settings.done && { from: dto.settings.done.from, kept: dto.settings.done.out.length },
     cooling: cooling.records,
+    timeZone: cooling.timeZone,
   });
 }

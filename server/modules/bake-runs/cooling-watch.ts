@@ -1,9 +1,9 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { addDays, shortDate, toDateOrder, type IsoDate } from '@shared/domain/iso-date.js';
-import { bothScales, checkCooling, clockFrom, FOOD_CODE_COOLING, notWrittenDown, type CoolingEntry } from '@shared/domain/cooling.js';
-import { clockText, minutesSpan, toClockStyle } from '@shared/domain/clock.js';
+import { bothScales, checkCooling, CLOCKS_CHANGED, clockFrom, FOOD_CODE_COOLING, notWrittenDown, type CoolingEntry } from '@shared/domain/cooling.js';
+import { clockText, DEFAULT_CLOCK, minutesSpan, toClockStyle } from '@shared/domain/clock.js';
 import { requireLocalMinutes } from '@shared/domain/bake-run-time.js';
-import { wallClockIn } from '@shared/domain/time-zone.js';
+import { instantOfWall, wallClockIn } from '@shared/domain/time-zone.js';
 import { weekTitle } from '@shared/domain/week-board.js';
 import { CoolingRecord, type ICoolingRecord } from './bake-run.entity.js';
 import { Membership, type IMembership } from '../auth/user.entity.js';
@@ -52,11 +52,20 @@ export interface CoolingWatchResult {
 
 const entryOf = (r: ICoolingRecord): CoolingEntry => ({ outAt: r.outAt, restartedAt: r.restartedAt ?? null, readings: r.readings, discarded: r.discarded });
 
-/** The deadline a record has missed at kitchen time `now` (local) and the stage's temperature (°F), or null. */
-export function missedDeadline(entry: CoolingEntry, now: string): { stageF: number; deadline: string } | null {
-  const check = checkCooling(entry, now);
-  if (check.state === 'missed-70') return { stageF: FOOD_CODE_COOLING.firstStageF, deadline: check.by70 };
-  if (check.state === 'missed-41') return { stageF: FOOD_CODE_COOLING.finalF, deadline: check.by41 };
+/**
+ * The deadline a record has missed at instant `at` in the kitchen's zone (its deadlines real hours after the start,
+ * read on the kitchen's wall clock), the stage's temperature (°F), and how many minutes ago; or null.
+ */
+export function missedDeadline(
+  entry: CoolingEntry,
+  at: Date,
+  zone: string,
+): { stageF: number; deadline: string; minutesAgo: number; clocksChanged: boolean } | null {
+  const check = checkCooling(entry, at, DEFAULT_CLOCK, zone);
+  const ago = (deadline: string) => Math.floor((at.getTime() - instantOfWall(deadline, zone)) / 60_000);
+  const { clocksChanged } = check;
+  if (check.state === 'missed-70') return { stageF: FOOD_CODE_COOLING.firstStageF, deadline: check.by70, minutesAgo: ago(check.by70), clocksChanged };
+  if (check.state === 'missed-41') return { stageF: FOOD_CODE_COOLING.finalF, deadline: check.by41, minutesAgo: ago(check.by41), clocksChanged };
   return null;
 }
 
@@ -91,9 +100,9 @@ export async function watchCooling(em: EntityManager, deps: CoolingWatchDeps, at
       days.set(key, day);
     }
     if (r.discarded) continue;
-    const missed = missedDeadline(entryOf(r), now);
+    const missed = missedDeadline(entryOf(r), at, ws.timeZone);
     if (!missed) continue;
-    if (requireLocalMinutes(now) - requireLocalMinutes(missed.deadline) > WATCH_WINDOW_HOURS * 60) continue;
+    if (missed.minutesAgo > WATCH_WINDOW_HOURS * 60) continue;
     queued += await tellKitchen(tell, ws, r, missed);
   }
   for (const day of days.values()) queued += await tellForgotten(tell, day);
@@ -182,7 +191,7 @@ async function tellKitchen(
   tell: Tell,
   ws: IWorkspace,
   r: ICoolingRecord,
-  missed: { stageF: number; deadline: string },
+  missed: { stageF: number; deadline: string; clocksChanged: boolean },
 ): Promise<number> {
   const week = r.week.unwrap();
   const order = toDateOrder(ws.dateOrder);
@@ -205,7 +214,7 @@ async function tellKitchen(
       outAt: clockFrom(r.outAt, r.outAt, style),
       restartedAt: r.restartedAt ? clockFrom(r.restartedAt, r.outAt, style) : null,
       readings,
-      said: whatToDo(missed.stageF, r.restartedAt != null),
+      said: whatToDo(missed.stageF, r.restartedAt != null) + (missed.clocksChanged ? ` ${CLOCKS_CHANGED}` : ''),
       link: appLink(tell.deps.publicUrl, `/weeks/${week.id}/bake-run${query}#cooling-record-title`),
     }),
   );

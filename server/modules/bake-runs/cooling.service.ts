@@ -3,9 +3,8 @@ import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import { longDate, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import type { CoolingListDto, CoolingRecordDto, CoolingRecordValues } from '@shared/schemas/cooling.schema.js';
 import type { GlanceDto } from '@shared/schemas/weeks.schema.js';
-import { wallClockIn } from '@shared/domain/time-zone.js';
 import { bothScales, checkCooling, checkOnPaper, clockFrom, countedFrom, FOOD_CODE_COOLING, type CoolingCheck } from '@shared/domain/cooling.js';
-import type { ClockStyle } from '@shared/domain/clock.js';
+import { DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
 import { clockOf, datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
@@ -67,9 +66,9 @@ export async function coolingTrouble(em: EntityManager, workspaceId: number, wee
     em.find(CoolingRecord, { week: weekId }, { orderBy: { prepDate: 'asc', outAt: 'asc' } }),
     em.findOneOrFail(Workspace, workspaceId, { fields: ['timeZone'] }),
   ]);
-  const now = ws.timeZone ? wallClockIn(at, ws.timeZone) : null;
+  const zone = ws.timeZone;
   const named = (r: ICoolingRecord) => ({ trayName: r.trayName, prepDate: r.prepDate as IsoDate });
-  const judged = (r: ICoolingRecord) => (now ? checkCooling(present(r), now) : checkOnPaper(present(r)));
+  const judged = (r: ICoolingRecord) => (zone ? checkCooling(present(r), at, DEFAULT_CLOCK, zone) : checkOnPaper(present(r)));
   return {
     thrownAway: rows.filter((r) => r.discarded).map(named),
     missed: rows.filter((r) => !r.discarded && judged(r).tone === 'block').map(named),
@@ -147,7 +146,7 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
   const coaches = await em.find(Membership, { workspace: actor.workspaceId, role: 'coach' }, { populate: ['user'], orderBy: { id: 'asc' } });
   const to = coaches.map((m) => m.user.unwrap()).filter((u) => u.id !== actor.userId);
   if (!to.length) return;
-  const ws = await em.findOneOrFail(Workspace, actor.workspaceId, { fields: ['name'] });
+  const ws = await em.findOneOrFail(Workspace, actor.workspaceId, { fields: ['name', 'timeZone'] });
   const order = datesOf(actor);
   const style = clockOf(actor);
   const said = {
@@ -158,7 +157,7 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
     recordedBy: r.recordedBy,
     link: appLink(alerts.publicUrl, `/weeks/${week.id}`),
   };
-  const paper = checkOnPaper({ ...present(r), discarded: false });
+  const paper = checkOnPaper({ ...present(r), discarded: false }, ws.timeZone ?? null);
   const readings = [...r.readings]
     .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
     .map((x) => `${clockFrom(x.at, r.outAt, style)} ${bothScales(x.tempF)}`);

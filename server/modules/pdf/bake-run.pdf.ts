@@ -20,6 +20,8 @@ export interface BakeRunPdfMeta {
   replanned?: { from: string; kept: number } | null;
   /** What the cooling record says so far (a sheet printed before the bake has none: its lines are written by hand). */
   cooling?: readonly (RecordedCooling & { recordedBy?: string })[];
+  /** The kitchen's time zone: its deadlines are real hours on the kitchen's clock (across a daylight-time change too). */
+  timeZone?: string | null;
 }
 
 /** A record's result as the paper says it; a stage still running is left to write. */
@@ -160,7 +162,7 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
         const r = records.get(t.id);
         // Blank lines to write on, the planned time out as a reminder.
         if (!r) return [`${t.name}\n(planned out ${clock(t.outAt)})`, '', '', '', '\n\n', '', ''];
-        const c = checkOnPaper(r);
+        const c = checkOnPaper(r, meta.timeZone ?? null);
         const readings = [...r.readings]
           .sort((a, b) => (a.at < b.at ? -1 : 1))
           .map((x) => `${clockFrom(x.at, r.outAt, style)} ${x.tempF} °F`)

@@ -10,6 +10,7 @@ import { checkCooling, clockFrom, eventsWithCooling, FOOD_CODE_COOLING, notWritt
 import { planBakeRun } from '@shared/domain/bake-run';
 import type { BakeRunInput } from '@shared/domain/bake-run-types';
 import { celsiusToFahrenheit } from '@shared/domain/temperature';
+import { DEFAULT_CLOCK } from '@shared/domain/clock';
 
 const entry = (over: Partial<CoolingEntry> = {}): CoolingEntry => ({ outAt: '2026-01-04T10:10', restartedAt: null, readings: [], discarded: false, ...over });
 const at = (hhmm: string) => `2026-01-04T${hhmm}`;
@@ -77,6 +78,49 @@ describe('the Food Code cooling stages', () => {
     expect(evening.said).toContain('by 02:30 the next day');
     expect(clockFrom('2026-01-04T22:30', at('20:30'))).toBe('22:30');
     expect(checkCooling(entry({ discarded: true }), at('12:11'))).toMatchObject({ state: 'discarded', tone: 'info' });
+  });
+});
+
+describe('the cooling deadlines across a daylight-time change, in the kitchen’s zone', () => {
+  // The Food Code counts hours of real time. The nights worked by hand from the legal rules (15 U.S.C. §260a: in 2026
+  // the US falls back at 2:00 on Nov 1 and springs forward at 2:00 on Mar 8; see tests/unit/domain/time-zone.test.ts).
+  const zone = 'America/Chicago';
+  const night = (over: Partial<CoolingEntry>) => entry({ outAt: '2026-10-31T23:30', ...over });
+
+  it('falls back: a tray out at 23:30 must be at 41 °F by 04:30, not the calendar’s 05:30', () => {
+    const c = checkCooling(night({}), '2026-10-31T23:40', DEFAULT_CLOCK, zone);
+    expect(c).toMatchObject({ state: 'to-70', by70: '2026-11-01T01:30', by41: '2026-11-01T04:30' });
+    expect(c.said).toContain('41 °F (5 °C) or below by 04:30 the next day');
+    expect(c.said).toContain('The clocks change in between: the deadlines are 2 and 6 hours of real time.');
+    // Without the zone, the calendar reading (an hour too late that night).
+    expect(checkCooling(night({}), '2026-10-31T23:40').by41).toBe('2026-11-01T05:30');
+    // At 04:31 (10:31Z) with 70 °F met and no 41 °F reading: missed, judged from the instant the watch reads.
+    const readings = [{ at: '2026-11-01T00:50', tempF: 65 }];
+    expect(checkCooling(night({ readings }), new Date('2026-11-01T10:31:00Z'), DEFAULT_CLOCK, zone).state).toBe('missed-41');
+    expect(checkCooling(night({ readings }), new Date('2026-11-01T10:30:00Z'), DEFAULT_CLOCK, zone).state).toBe('to-41');
+    // A reading at 04:45 is after the real deadline: it does not meet the stage.
+    const late = checkCooling(night({ readings: [...readings, { at: '2026-11-01T04:45', tempF: 40 }] }), '2026-11-01T04:45', DEFAULT_CLOCK, zone);
+    expect(late.state).toBe('missed-41');
+    expect(checkCooling(night({ readings: [...readings, { at: '2026-11-01T04:45', tempF: 40 }] }), '2026-11-01T04:45').state).toBe('cooled');
+  });
+
+  it('springs forward: a tray out at 23:30 has until 06:30 (the calendar’s 05:30 would be an hour early)', () => {
+    const c = checkCooling(entry({ outAt: '2026-03-07T23:30' }), '2026-03-07T23:40', DEFAULT_CLOCK, zone);
+    expect(c).toMatchObject({ by70: '2026-03-08T01:30', by41: '2026-03-08T06:30' });
+    const readings = [{ at: '2026-03-08T01:00', tempF: 60 }, { at: '2026-03-08T06:15', tempF: 40 }];
+    expect(checkCooling(entry({ outAt: '2026-03-07T23:30', readings }), '2026-03-08T06:20', DEFAULT_CLOCK, zone).state).toBe('cooled');
+  });
+
+  it('a day with no change reads the same with and without the zone', () => {
+    const readings = [{ at: at('11:30'), tempF: 68 }, { at: at('16:00'), tempF: 45 }];
+    expect(checkCooling(entry(), at('10:40'), DEFAULT_CLOCK, zone).said).not.toContain('clocks change');
+    for (const now of [at('10:40'), at('12:11'), at('16:11')]) {
+      expect(checkCooling(entry({ readings }), now, DEFAULT_CLOCK, zone)).toEqual(checkCooling(entry({ readings }), now));
+    }
+  });
+
+  it('an instant without a zone is refused (it has no wall clock to be read on)', () => {
+    expect(() => checkCooling(entry(), new Date('2026-01-04T16:00:00Z'))).toThrow(RangeError);
   });
 });
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { canonicalTimeZone, timeZoneChoices, wallClockIn } from '@shared/domain/time-zone';
+import { addWallMinutes, canonicalTimeZone, instantOfWall, timeZoneChoices, wallClockIn } from '@shared/domain/time-zone';
 
 // The kitchen's wall clock from the server's instant. Zone rules are the IANA time zone database's as the engine
 // carries it; the checks below are the legal rules those zones follow, worked for 2026 by hand:
@@ -71,5 +71,57 @@ describe('canonicalTimeZone', () => {
     expect(zones[0]).toBe('UTC');
     expect(zones).toContain('America/Chicago');
     for (const z of zones) expect(canonicalTimeZone(z)).toBe(z);
+  });
+});
+
+describe('instantOfWall and addWallMinutes (real minutes on the kitchen’s wall clock)', () => {
+  const ms = (iso: string) => Date.parse(iso);
+
+  it('reads an ordinary wall time in its zone (Chicago CST UTC−6 in January, CDT UTC−5 in July; 15 U.S.C. §261)', () => {
+    expect(instantOfWall('2026-01-04T12:00', 'America/Chicago')).toBe(ms('2026-01-04T18:00:00Z'));
+    expect(instantOfWall('2026-07-04T12:00', 'America/Chicago')).toBe(ms('2026-07-04T17:00:00Z'));
+    expect(instantOfWall('2026-12-31T23:30', 'UTC')).toBe(ms('2026-12-31T23:30:00Z'));
+  });
+
+  it('the hour repeated when Chicago falls back (Nov 1, 2026, 15 U.S.C. §260a) is read as its first, daylight time', () => {
+    // 1:30 happens at 06:30Z (CDT) and again at 07:30Z (CST); the first is the one before the change.
+    expect(instantOfWall('2026-11-01T01:30', 'America/Chicago')).toBe(ms('2026-11-01T06:30:00Z'));
+    expect(instantOfWall('2026-11-01T02:00', 'America/Chicago')).toBe(ms('2026-11-01T08:00:00Z'));
+  });
+
+  it('the hour skipped when Chicago springs forward (Mar 8, 2026) moves on by the jump: 2:30 is 3:30 CDT', () => {
+    expect(instantOfWall('2026-03-08T02:30', 'America/Chicago')).toBe(ms('2026-03-08T08:30:00Z'));
+    expect(wallClockIn(new Date(instantOfWall('2026-03-08T02:30', 'America/Chicago')), 'America/Chicago')).toBe('2026-03-08T03:30');
+  });
+
+  it('adds real hours across the night the clock changes (worked by hand from the rules above)', () => {
+    // Fall back: out 23:30 CDT (04:30Z) → 2 h = 06:30Z = 01:30 CDT; 6 h = 10:30Z = 04:30 CST (the calendar says 05:30).
+    expect(addWallMinutes('2026-10-31T23:30', 120, 'America/Chicago')).toBe('2026-11-01T01:30');
+    expect(addWallMinutes('2026-10-31T23:30', 360, 'America/Chicago')).toBe('2026-11-01T04:30');
+    // Spring forward: out 23:30 CST (05:30Z) → 6 h = 11:30Z = 06:30 CDT (the calendar says 05:30).
+    expect(addWallMinutes('2026-03-07T23:30', 360, 'America/Chicago')).toBe('2026-03-08T06:30');
+    // Berlin falls back Oct 25, 2026 at 01:00Z (Directive 2000/84/EC): out 22:00 CEST (20:00Z) → 6 h = 02:00Z = 03:00 CET.
+    expect(addWallMinutes('2026-10-24T22:00', 360, 'Europe/Berlin')).toBe('2026-10-25T03:00');
+    // A day with no change: the calendar's answer.
+    expect(addWallMinutes('2026-01-04T10:10', 360, 'America/Chicago')).toBe('2026-01-04T16:10');
+  });
+
+  it('names the instant the wall clock read, for any minute and zone but the repeated hour (property)', () => {
+    const zones = ['America/Chicago', 'Europe/Berlin', 'Australia/Adelaide', 'Asia/Tokyo', 'America/St_Johns', 'UTC'];
+    fc.assert(
+      fc.property(fc.integer({ min: 1_577_836_800_000, max: 2_051_222_400_000 }), fc.constantFrom(...zones), (t, zone) => {
+        const minute = Math.floor(t / 60_000) * 60_000;
+        const wall = wallClockIn(new Date(t), zone);
+        const back = instantOfWall(wall, zone);
+        // The same wall reading either way, and the same instant unless the reading repeats (then the first).
+        expect(wallClockIn(new Date(back), zone)).toBe(wall);
+        expect(back).toBeLessThanOrEqual(minute);
+        if (back !== minute) expect(minute - back).toBeLessThanOrEqual(60 * 60_000);
+      }),
+    );
+  });
+
+  it('refuses text that is not a local date-time', () => {
+    expect(() => instantOfWall('2026-01-04 12:00', 'UTC')).toThrow(RangeError);
   });
 });

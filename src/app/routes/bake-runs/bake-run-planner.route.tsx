@@ -12,10 +12,10 @@ import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton, QueryVi
 import { isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { counted } from '@/lib/words';
-import { dayLabel, localToday } from '@/lib/dates';
+import { dayLabel, kitchenToday } from '@/lib/dates';
 import { OvenChecks } from '@/features/bake-runs/components/oven-checks';
 
-const todayAt8 = () => `${localToday()}T08:00`;
+const todayAt8 = () => `${kitchenToday()}T08:00`;
 
 /** The bake-run hub: open a prep week's run, or try an ad-hoc run from bake rules and tray counts. */
 export function Component() {

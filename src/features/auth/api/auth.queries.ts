@@ -1,6 +1,6 @@
 import { queryOptions, type QueryClient } from '@tanstack/react-query';
 import { DEFAULT_DATE_ORDER } from '@shared/domain/iso-date';
-import { setClockStyle, setDateOrder } from '@/lib/dates';
+import { setClockStyle, setDateOrder, setKitchenZone } from '@/lib/dates';
 import { DEFAULT_CLOCK } from '@shared/domain/clock';
 import type { InvitationDto, MeDto, MemberDto, MyWorkspaceDto, Role } from '@shared/schemas/auth.schema';
 import { api } from '@/lib/api-client';
@@ -51,5 +51,6 @@ export function followDateOrder(qc: QueryClient): () => void {
     const me = event.query.state.data as MeDto | null | undefined;
     setDateOrder(me?.dateOrder ?? DEFAULT_DATE_ORDER);
     setClockStyle(me?.clock ?? DEFAULT_CLOCK);
+    setKitchenZone(me?.timeZone ?? null);
   });
 }

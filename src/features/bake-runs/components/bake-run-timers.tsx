@@ -8,8 +8,8 @@ import { Notice } from '@/components/ui/states';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { describeEvent } from './bake-run-sheet';
 import { OvenChecks } from './oven-checks';
-import { localHhmm, localToday, timeLabel } from '@/lib/dates';
-import { clock, nowLocal, type TempUnit } from './temperature';
+import { currentKitchenZone, kitchenNow, kitchenToday, timeLabel } from '@/lib/dates';
+import { clock, type TempUnit } from './temperature';
 
 /** The device clock, read again every `ms`. */
 export function useDeviceClock(ms: number): Date {
@@ -21,12 +21,12 @@ export function useDeviceClock(ms: number): Date {
   return now;
 }
 
-/** Minutes since the run's start on the device clock, or null when today is not the run's day. Ticks every 15 s. */
+/** Minutes since the run's start on the kitchen's clock, or null when today is not the run's day there. Ticks every 15 s. */
 export function useRunMinute(run: BakeRunResult | null): number | null {
   const now = useDeviceClock(15_000);
   if (!run) return null;
-  const minute = requireLocalMinutes(nowLocal(now)) - requireLocalMinutes(run.start);
-  return localToday(now) === run.start.slice(0, 10) ? minute : null;
+  const minute = requireLocalMinutes(kitchenNow(now)) - requireLocalMinutes(run.start);
+  return kitchenToday(now) === run.start.slice(0, 10) ? minute : null;
 }
 
 function beep() {
@@ -82,7 +82,7 @@ function ChangeRefused({ error, redo, notDone, onReload }: { error: unknown; red
 
 /** "Started at another time?": a time on the run's day; the timers, timeline and run sheet follow the new start. */
 function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
-  const [time, setTime] = useState(() => localHhmm(new Date()));
+  const [time, setTime] = useState(() => clock(kitchenNow()));
   // The time offered is "now" when the question is opened (the page may have been open since before the start),
   // until the person types their own.
   const typed = useRef(false);
@@ -95,7 +95,7 @@ function MoveStartForm({ run, move }: { run: BakeRunResult; move: MoveStart }) {
     <details
       className="rounded-lg border border-line p-3"
       onToggle={(e) => {
-        if (e.currentTarget.open && !typed.current) setTime(localHhmm(new Date()));
+        if (e.currentTarget.open && !typed.current) setTime(clock(kitchenNow()));
       }}
     >
       <summary className="min-h-11 cursor-pointer py-2 font-bold">Started at another time?</summary>
@@ -210,7 +210,7 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
   const outAtOf = new Map(run.trays.map((t) => [t.id, t.outAt]));
   /** The rest starts now, or when the last tray ticked comes out if that is later. */
   const suggestedFrom = (out: readonly string[]) =>
-    [localHhmm(new Date()), ...out.map((id) => outAtOf.get(id)?.slice(11) ?? '')].reduce((a, b) => (b > a ? b : a));
+    [clock(kitchenNow()), ...out.map((id) => outAtOf.get(id)?.slice(11) ?? '')].reduce((a, b) => (b > a ? b : a));
   const setOut = (out: string[]) => setForm((f) => ({ ...f, out, from: fromTyped ? f.from : suggestedFrom(out) }));
   const ovenName = new Map(kitchen.allOvens.map((o) => [o.id, o.name]));
   /**
@@ -409,7 +409,7 @@ export function BakeRunTimers({
   cooling?: readonly RecordedCooling[];
 }) {
   const [sound, setSound] = useState(false);
-  const events = cooling?.length ? eventsWithCooling(run, cooling, addLocalMinutes(run.start, nowMinute)) : run.events;
+  const events = cooling?.length ? eventsWithCooling(run, cooling, addLocalMinutes(run.start, nowMinute), currentKitchenZone()) : run.events;
   const rung = useRef(new Set<string>());
   const names = new Map(run.trays.map((t) => [t.id, t.name]));
   const trayName = (id: string | null) => (id ? names.get(id) ?? id : '');

@@ -10,9 +10,9 @@ import { TextField } from '@/components/ui/field';
 import { ErrorState, Notice } from '@/components/ui/states';
 import { coolingQuery, useClearCooling, useSaveCooling } from '../api/cooling';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
-import { currentClockStyle, localToday, timeLabel } from '@/lib/dates';
+import { currentClockStyle, currentKitchenZone, kitchenNow, kitchenToday, timeLabel } from '@/lib/dates';
 import { addDays } from '@shared/domain/iso-date';
-import { clock, formatTemp, nowLocal, type TempUnit } from './temperature';
+import { clock, formatTemp, type TempUnit } from './temperature';
 import { minutesSpan } from '@shared/domain/clock';
 import { zoneName } from '@shared/domain/time-zone';
 import { useDeviceClock, useRunMinute } from './bake-run-timers';
@@ -70,12 +70,12 @@ function Refused({ error }: { error: unknown }) {
 function NotOut({ tray, day, save, busy }: { tray: BakeTrayPlan; day: string; save: Write; busy: boolean }) {
   // On the day, before its planned time out: now (pulled early); once that time has passed, or on a later day
   // (written down afterwards): the planned time, to change to what happened.
-  const [time, setTime] = useState(() => (localToday() === day && nowLocal() < tray.outAt ? clock(nowLocal()) : clock(tray.outAt)));
+  const [time, setTime] = useState(() => (kitchenToday() === day && kitchenNow() < tray.outAt ? clock(kitchenNow()) : clock(tray.outAt)));
   return (
     <div className="no-print flex flex-wrap items-end gap-3">
       {/* Out now: only on the prep day itself (a later day gives the time it came out). */}
-      {localToday() === day && (
-        <Button type="button" busy={busy} onClick={() => save({ outAt: nowLocal() })}>
+      {kitchenToday() === day && (
+        <Button type="button" busy={busy} onClick={() => save({ outAt: kitchenNow() })}>
           Out now
         </Button>
       )}
@@ -87,7 +87,7 @@ function NotOut({ tray, day, save, busy }: { tray: BakeTrayPlan; day: string; sa
           save({ outAt: `${day}T${time}` });
         }}
       >
-        <TextField label={localToday() === day ? 'Or came out at' : 'Came out at'} type="time" required value={time} onChange={(e) => setTime(e.target.value)} className="w-40" />
+        <TextField label={kitchenToday() === day ? 'Or came out at' : 'Came out at'} type="time" required value={time} onChange={(e) => setTime(e.target.value)} className="w-40" />
         <Button type="submit" variant="secondary" busy={busy}>
           Write down
         </Button>
@@ -171,7 +171,7 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
           onSubmit={(e) => {
             e.preventDefault();
             const value = Number(temp.replace(',', '.'));
-            const at = readingAt(time || clock(nowLocal()), record.outAt);
+            const at = readingAt(time || clock(kitchenNow()), record.outAt);
             const reading = unit === 'C' ? { at, tempC: value } : { at, tempF: value };
             write({ readings: [...record.readings, reading] }, () => {
               setTemp('');
@@ -207,7 +207,7 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
           aria-label={`Reheated: ${record.trayName}`}
           onSubmit={(e) => {
             e.preventDefault();
-            write({ restartedAt: readingAt(restart || clock(nowLocal()), record.outAt) });
+            write({ restartedAt: readingAt(restart || clock(kitchenNow()), record.outAt) });
           }}
         >
           <TextField
@@ -264,16 +264,16 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
   const q = useQuery(coolingQuery(weekId, day));
   const save = useSaveCooling(weekId, day);
   const clear = useClearCooling(weekId, day);
-  const now = nowLocal(useDeviceClock(20_000));
+  const now = kitchenNow(useDeviceClock(20_000));
   // The tray the last write was for (its pending state and its refusal show on that tray only).
   const saving = save.variables?.runTrayId ?? null;
-  const started = localToday() >= day;
+  const started = kitchenToday() >= day;
   const trays = [...run.trays].sort((a, b) => a.outMinute - b.outMinute || (a.id < b.id ? -1 : 1));
   const inRun = new Set(trays.map((t) => t.id));
   const records = q.data?.records;
   const byId = useMemo(() => new Map((records ?? []).map((r) => [r.runTrayId, r])), [records]);
   // Each record judged once per tick of the clock (the count, the tray's line and the list below read it).
-  const checks = useMemo(() => new Map((records ?? []).map((r) => [r.runTrayId, checkCooling(r, now, currentClockStyle())])), [records, now]);
+  const checks = useMemo(() => new Map((records ?? []).map((r) => [r.runTrayId, checkCooling(r, now, currentClockStyle(), currentKitchenZone())])), [records, now]);
   const gone = (records ?? []).filter((r) => !inRun.has(r.runTrayId));
   // On the prep day: the trays due out by now that are not written down yet (the timers above name them too).
   const nowMinute = useRunMinute(run);

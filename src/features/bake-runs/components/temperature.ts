@@ -1,4 +1,3 @@
-import { localHhmm, localToday } from '@/lib/dates';
 import { toCelsiusRounded } from '@shared/domain/temperature';
 
 export type TempUnit = 'F' | 'C';
@@ -30,5 +29,4 @@ export const BAND_CLASS: Record<1 | 2 | 3 | 4 | 5, string> = {
 /** The "HH:mm" of a local date-time, as a time input takes it (words for people: timeLabel in src/lib/dates.ts). */
 export const clock = (local: string) => local.slice(11, 16);
 
-/** The device clock as a local "YYYY-MM-DDTHH:mm". */
-export const nowLocal = (d = new Date()) => `${localToday(d)}T${localHhmm(d)}`;
+

@@ -5,7 +5,7 @@ import { nextTripOf, prepDatesOf } from '@shared/domain/week-board';
 import { Card, EmptyState, Notice, Progress, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { TileLink } from '@/components/ui/tile-link';
-import { dayLabel, instantDayLabel, localToday, nextPrepDayTitle } from '@/lib/dates';
+import { dayLabel, instantDayLabel, kitchenToday, nextPrepDayTitle } from '@/lib/dates';
 import { currentWeekQuery, shoppingListQuery } from '../api/shopping.queries';
 
 function ShoppingProgress({ weekId, prepDate }: { weekId: number; prepDate: string | null }) {
@@ -30,7 +30,7 @@ function ShoppingProgress({ weekId, prepDate }: { weekId: number; prepDate: stri
  * is, and the week's bake run and labels.
  */
 export function KitchenGlance() {
-  const today = localToday();
+  const today = kitchenToday();
   const q = useQuery(currentWeekQuery(today));
   return (
     <QueryView
