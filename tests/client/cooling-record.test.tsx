@@ -150,6 +150,11 @@ describe('the cooling record on prep day', () => {
     fireEvent.click(within(cards[0]).getByRole('button', { name: 'Out now' }));
     await waitFor(() => expect(puts()).toEqual([['/api/weeks/7/bake-run/cooling/3-1', { outAt: '2026-01-04T20:10', prepDate: '2026-01-04' }]]));
     expect(await screen.findByText(/Cool to 70 °F \(21 °C\) or below by 22:10, then to 41 °F \(5 °C\) or below by 02:10 the next day/)).toBeTruthy();
+    // The page says whose clock its times are (the device's own reading depends on where the test runs).
+    const device = new Date();
+    const here = `${String(device.getHours()).padStart(2, '0')}:${String(device.getMinutes()).padStart(2, '0')}`;
+    const note = screen.getByText('This device is on another clock').closest('[role="note"]')?.textContent;
+    expect(note).toContain(`Times on this page, and the ones you type, are the kitchen’s (America/Chicago): 20:10 there now, ${here}`);
   });
 
   it('before prep day there is nothing to write down', async () => {

@@ -10,7 +10,7 @@ import { TextField } from '@/components/ui/field';
 import { ErrorState, Notice } from '@/components/ui/states';
 import { coolingQuery, useClearCooling, useSaveCooling } from '../api/cooling';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
-import { currentClockStyle, currentKitchenZone, kitchenNow, kitchenToday, timeLabel } from '@/lib/dates';
+import { currentClockStyle, currentKitchenZone, kitchenNow, kitchenToday, localHhmm, localToday, timeLabel } from '@/lib/dates';
 import { addDays } from '@shared/domain/iso-date';
 import { clock, formatTemp, type TempUnit } from './temperature';
 import { minutesSpan } from '@shared/domain/clock';
@@ -264,7 +264,8 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
   const q = useQuery(coolingQuery(weekId, day));
   const save = useSaveCooling(weekId, day);
   const clear = useClearCooling(weekId, day);
-  const now = kitchenNow(useDeviceClock(20_000));
+  const tick = useDeviceClock(20_000);
+  const now = kitchenNow(tick);
   // The tray the last write was for (its pending state and its refusal show on that tray only).
   const saving = save.variables?.runTrayId ?? null;
   const started = kitchenToday() >= day;
@@ -305,6 +306,7 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
         starts when the tray comes out. Your local food code and inspector decide what to keep and for how long.
       </p>
       {q.data && <WatchLine timeZone={q.data.timeZone} role={role} />}
+      <ElsewhereLine kitchen={now} device={tick} />
       {q.isPending ? (
         <div className="h-24 animate-pulse rounded-lg bg-paper-deep" aria-label="Loading the cooling record" />
       ) : q.isError ? (
@@ -376,6 +378,22 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
         </>
       )}
     </section>
+  );
+}
+
+/**
+ * Said when this device's clock reads otherwise than the kitchen's (a coach looking in from another zone): the times
+ * on the page, and the ones typed into it, are the kitchen's.
+ */
+function ElsewhereLine({ kitchen, device }: { kitchen: string; device: Date }) {
+  const zone = currentKitchenZone();
+  const here = `${localToday(device)}T${localHhmm(device)}`;
+  if (!zone || here === kitchen) return null;
+  return (
+    <Notice tone="info" title="This device is on another clock">
+      Times on this page, and the ones you type, are the kitchen’s ({zoneName(zone)}): {timeLabel(kitchen)} there now, {timeLabel(here)}{' '}
+      {here.slice(0, 10) === kitchen.slice(0, 10) ? '' : here.slice(0, 10) > kitchen.slice(0, 10) ? 'tomorrow ' : 'yesterday '}on this device.
+    </Notice>
   );
 }
 
