@@ -27,8 +27,17 @@ const CLOCK_WORDS: Record<ClockStyle, string> = {
   '12h': `${clockText(SAMPLE_TIME, '12h')} (12-hour clock)`,
 };
 
-/** The zones grouped by their region ("America", "Europe", …; "UTC" and the like under "Other"), for a select. */
+/**
+ * The zones grouped by their region ("America", "Europe", …; "UTC" and the like under "Other"), for a select. The
+ * last answer is kept: the card renders again on every save and tick, the list of some 420 zones does not change.
+ */
 function zoneGroups(current: string | null): Array<[string, string[]]> {
+  if (lastGroups?.current !== current) lastGroups = { current, groups: groupZones(current) };
+  return lastGroups.groups;
+}
+let lastGroups: { current: string | null; groups: Array<[string, string[]]> } | null = null;
+
+function groupZones(current: string | null): Array<[string, string[]]> {
   const zones = timeZoneChoices();
   if (current && !zones.includes(current)) zones.push(current);
   const groups = new Map<string, string[]>();
@@ -42,7 +51,7 @@ function zoneGroups(current: string | null): Array<[string, string[]]> {
 const placeOf = (zone: string) => zoneName(zone.includes('/') ? zone.slice(zone.indexOf('/') + 1) : zone).replace(/\//g, ' / ');
 
 /** "Thu, Dec 3, 15:12" in the kitchen's zone now, as the workspace writes dates and times. */
-function kitchenNow(zone: string): string {
+function kitchenTimeIn(zone: string): string {
   const wall = wallClockIn(new Date(), zone);
   return `${dayLabel(wall.slice(0, 10))}, ${timeLabel(wall)}`;
 }
@@ -120,7 +129,7 @@ export function DatesTimesCard() {
               disabled={save.isPending}
               hint={
                 data.timeZone
-                  ? `Kitchen time now in ${zoneName(data.timeZone)}: ${kitchenNow(data.timeZone)}. Trayline watches the cooling record at this time and e-mails every coach and kitchen assistant when a tray passes a cooling deadline with no reading showing it cooled, or is not written down 30 minutes after its planned time out.`
+                  ? `Kitchen time now in ${zoneName(data.timeZone)}: ${kitchenTimeIn(data.timeZone)}. Trayline watches the cooling record at this time and e-mails every coach and kitchen assistant when a tray passes a cooling deadline with no reading showing it cooled, or is not written down 30 minutes after its planned time out.`
                   : 'Not set: cooling deadlines are watched only on the bake-run page while it is open. Set it to have Trayline e-mail every coach and kitchen assistant when a tray passes one with no reading showing it cooled.'
               }
               onChange={(e) => {
