@@ -89,11 +89,12 @@ test('a coach signs up from a Chicago laptop: the kitchen’s time zone is set; 
   await expectNoSeriousA11yViolations(page, 'caught mail, cooling watch');
   await page.screenshot({ path: `${SHOTS}/cooling-watch-mail.png`, fullPage: true });
 
-  // Its link, opened on a phone that is not signed in: sign in, and land on the cooling record (below the run's
-  // numbers), its heading clear of the top bar.
+  // Its link, opened on the coach's phone away from the kitchen (in New York, an hour ahead) and not signed in: sign
+  // in, and land on the cooling record (below the run's numbers), its heading clear of the top bar; the page says its
+  // times are the kitchen's.
   const link = /Open the cooling record: (\S+)/.exec((await item.textContent()) ?? '')?.[1];
   expect(link).toMatch(new RegExp(`/weeks/${week.id}/bake-run#cooling-record-title$`));
-  const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, timezoneId: ZONE });
+  const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, timezoneId: 'America/New_York' });
   const reader = await phone.newPage();
   await reader.goto(link!);
   await reader.getByLabel('E-mail').fill(email);
@@ -104,6 +105,9 @@ test('a coach signs up from a Chicago laptop: the kitchen’s time zone is set; 
   await expect(heading).toBeInViewport();
   await expect(reader.getByRole('heading', { name: 'Watch-check egg slab' })).toBeInViewport();
   expect(await reader.evaluate(() => window.scrollY)).toBeGreaterThan(0);
+  await expect(reader.getByRole('note').filter({ hasText: 'This device is on another clock' })).toContainText(
+    'Times on this page, and the ones you type, are the kitchen’s (America/Chicago)',
+  );
   const bar = await reader.getByRole('banner').boundingBox();
   expect((await heading.boundingBox())!.y).toBeGreaterThanOrEqual(bar ? bar.y + bar.height : 0);
   await reader.screenshot({ path: `${SHOTS}/cooling-watch-link.png` });
