@@ -32,7 +32,7 @@ const CLOCK_WORDS: Record<ClockStyle, string> = {
  * last answer is kept: the card renders again on every save and tick, the list of some 420 zones does not change.
  */
 function zoneGroups(current: string | null): Array<[string, string[]]> {
-  if (lastGroups?.current !== current) lastGroups = { current, groups: groupZones(current) };
+  if (!lastGroups || lastGroups.current !== current) lastGroups = { current, groups: groupZones(current) };
   return lastGroups.groups;
 }
 let lastGroups: { current: string | null; groups: Array<[string, string[]]> } | null = null;
