@@ -238,3 +238,19 @@ export function notWrittenDown<T extends { id: string; outMinute: number }>(
     .filter((t) => !written.has(t.id) && nowMinute - t.outMinute >= after)
     .sort((a, b) => a.outMinute - b.outMinute || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
 }
+
+/** Where a tray's cooling ended (or stands), as the cooling log says it in one line. */
+export function coolingResult(c: CoolingCheck, style: ClockStyle = DEFAULT_CLOCK): string {
+  switch (c.state) {
+    case 'cooled':
+      return 'Cooled in time';
+    case 'missed-70':
+      return `Missed: not at ${bothScales(F70)} by ${clockFrom(c.by70, c.from, style)}`;
+    case 'missed-41':
+      return `Missed: not at ${bothScales(F41)} by ${clockFrom(c.by41, c.from, style)}`;
+    case 'discarded':
+      return 'Thrown away';
+    default:
+      return 'Still cooling';
+  }
+}

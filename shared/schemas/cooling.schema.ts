@@ -7,6 +7,8 @@ import { isLocalDateTime, parseLocalMinutes } from '../domain/bake-run-time';
 import { celsiusToFahrenheit } from '../domain/temperature';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 import { prepDateQuery, weekIdParam } from './bake-setup.schema';
+import { daysBetween, isIsoDate, type IsoDate } from '../domain/iso-date';
+import type { CoolingState } from '../domain/cooling';
 
 const localTime = (what: string) => z.string().refine(isLocalDateTime, { message: `${what} must be a local date-time "YYYY-MM-DDTHH:mm".` });
 
@@ -95,4 +97,50 @@ export interface CoolingListDto {
   records: CoolingRecordDto[];
   /** The kitchen's time zone, or null: with it the server e-mails a missed deadline (the cooling watch). */
   timeZone: string | null;
+}
+
+/** The longest stretch the cooling log reads at once (a year and a day: a leap year's). */
+export const COOLING_LOG_MAX_DAYS = 366;
+
+const logDate = (what: string) =>
+  z
+    .string({ message: `Give the ${what} date, like 2026-12-06.` })
+    .refine(isIsoDate, { message: `Give the ${what} date as a date like 2026-12-06.` })
+    .transform((v) => v as IsoDate);
+
+/** GET /api/cooling-log?from=&to= (and .csv): the prep days from `from` to `to`, both included. */
+export const coolingLogQuery = z
+  .object({ from: logDate('first prep'), to: logDate('last prep') })
+  .superRefine((v, ctx) => {
+    if (!isIsoDate(v.from) || !isIsoDate(v.to)) return;
+    const span = daysBetween(v.from, v.to);
+    if (span < 0) ctx.addIssue({ code: 'custom', path: ['to'], message: 'The last day comes on or after the first.' });
+    else if (span + 1 > COOLING_LOG_MAX_DAYS)
+      ctx.addIssue({ code: 'custom', path: ['to'], message: `At most ${COOLING_LOG_MAX_DAYS} days at once: choose a shorter stretch.` });
+  });
+export type CoolingLogQuery = z.output<typeof coolingLogQuery>;
+
+/** One tray's cooling in the log: what was written down and where it ended (or stands). */
+export interface CoolingLogRow extends Omit<CoolingRecordDto, 'version'> {
+  id: number;
+  prepDate: string;
+  /** The week it was baked for, or null once that week was deleted (the record stays in the log). */
+  weekId: number | null;
+  weekName: string | null;
+  /** Judged at the kitchen's time now (with its zone), else on its readings until its deadlines have surely passed. */
+  state: CoolingState;
+  by70: string;
+  by41: string;
+  reached70At: string | null;
+  reached41At: string | null;
+  /** What the log says of it: "Cooled in time", "Missed 70 °F (21 °C) by 12:10", "Thrown away", "Cooling". */
+  result: string;
+}
+
+/** GET /api/cooling-log: a stretch of prep days' cooling records, by prep date and time out. */
+export interface CoolingLogDto {
+  from: string;
+  to: string;
+  timeZone: string | null;
+  rows: CoolingLogRow[];
 }

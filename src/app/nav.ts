@@ -38,6 +38,7 @@ export const NAV: NavItem[] = [
   { to: paths.myTargets, label: 'My targets', roles: ['client'], group: 'mine' },
   { to: paths.trays, label: 'Base trays', roles: ['coach', 'assistant'], group: 'kitchen' },
   { to: paths.bakeRunPlanner, label: 'Bake run', roles: ['coach', 'assistant'], group: 'kitchen', active: /^\/(bake-run|weeks\/\d+\/bake-run)\/?$/ },
+  { to: paths.coolingLog, label: 'Cooling log', roles: ['coach', 'assistant'], group: 'kitchen' },
   { to: paths.bakeRules, label: 'Bake rules & ovens', roles: ['coach'], group: 'kitchen' },
   { to: paths.ingredients, label: 'Ingredients', roles: ['coach', 'assistant'], group: 'kitchen' },
   { to: paths.shoppingThisWeek, label: 'Shopping list', roles: ['coach', 'assistant'], group: 'shop', active: /^\/(shopping|weeks\/\d+\/shopping)\/?$/ },

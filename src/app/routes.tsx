@@ -31,6 +31,7 @@ export function appRoutes(qc: QueryClient): RouteObject[] {
     { path: paths.devMail, loader: requireRole(qc, ['coach']), lazy: () => import('./routes/outbox/dev-mail.route') },
     { path: paths.bakeRunPlanner, loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/bake-runs/bake-run-planner.route') },
     { path: paths.bakeRun(), loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/bake-runs/week-bake-run.route') },
+    { path: paths.coolingLog, loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/bake-runs/cooling-log.route') },
     { path: paths.bakeRules, loader: requireRole(qc, ['coach', 'assistant']), lazy: () => import('./routes/bake-runs/bake-rules.route') },
   ];
 }

@@ -22,6 +22,7 @@ export const paths = {
   bakeRun: (id: number | string = ':weekId') => `/weeks/${id}/bake-run`,
   bakeRules: '/bake-rules',
   bakeRunPlanner: '/bake-run',
+  coolingLog: '/cooling-log',
   /** A week's shopping list: the whole week, or the trip before `prepDate` (a week with two prep days). */
   shopping: (id: number | string = ':weekId', prepDate: string | null = null) => `/weeks/${id}/shopping${prepDate ? `?for=${prepDate}` : ''}`,
   labels: (id: number | string = ':weekId') => `/weeks/${id}/labels`,

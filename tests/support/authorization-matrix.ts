@@ -386,6 +386,10 @@ export const MATRIX: Record<string, MatrixRow> = {
     body: () => ({ cooks: 1, ovenIds: [1], version: 999 }),
     crossWorkspace: true,
   }),
+  // The cooling log reads the caller's own workspace only (another workspace's records are never in it: see
+  // tests/api/cooling-log.api.test.ts).
+  'GET /api/cooling-log': R(['coach', 'assistant'], { path: () => '/api/cooling-log?from=2026-01-01&to=2026-01-31' }),
+  'GET /api/cooling-log.csv': R(['coach', 'assistant'], { path: () => '/api/cooling-log.csv?from=2026-01-01&to=2026-01-31' }),
   'GET /api/weeks/:weekId/bake-run/cooling': R(['coach', 'assistant'], {
     path: (ctx) => `/api/weeks/${ctx.ids.bakeWeek}/bake-run/cooling`,
     crossWorkspace: true,

@@ -92,16 +92,20 @@ export type IBakeRunSetting = InferEntity<typeof BakeRunSetting>;
 /**
  * The cooling record of one tray of a prep day's run (shared/domain/cooling.ts): when it came out, the food
  * temperatures taken while it cooled (°F), a restart after a reheat, thrown away or not, and who wrote it down.
- * Kept by the tray's id in the run ("12-1") with its name then: a record outlives a later change of the run.
+ * Kept by the tray's id in the run ("12-1") with its name then: a record outlives a later change of the run, and
+ * the deletion of its week (it is part of the kitchen's food-safety log).
  */
 export const CoolingRecord = defineEntity({
   name: 'CoolingRecord',
   tableName: 'cooling_record',
   uniques: [{ properties: ['week', 'prepDate', 'runTrayId'] }],
+  // The cooling log reads a workspace's records by prep date.
+  indexes: [{ properties: ['workspace', 'prepDate'] }],
   properties: {
     id: p.integer().primary().autoincrement(),
     workspace: () => p.manyToOne(Workspace).ref(),
-    week: () => p.manyToOne(Week).ref().deleteRule('cascade'),
+    /** The week it was baked for; null once that week is deleted (the record stays in the kitchen's cooling log). */
+    week: () => p.manyToOne(Week).ref().nullable().deleteRule('set null'),
     prepDate: p.string().length(10),
     runTrayId: p.string().length(16),
     trayName: p.string().length(200),

@@ -20,7 +20,8 @@ import * as setup from './bake-setup.service.js';
 import * as runs from './bake-run.service.js';
 import { bakeRunIcs } from './bake-run-ics.js';
 import { bakeRunPdf, plannedBakeRun } from './bake-run-files.js';
-import { coolingDeleteQuery, coolingParams, coolingRecordSchema } from '@shared/schemas/cooling.schema.js';
+import { coolingDeleteQuery, coolingLogQuery, coolingParams, coolingRecordSchema } from '@shared/schemas/cooling.schema.js';
+import { coolingLog, coolingLogCsv } from './cooling-log.js';
 import * as cooling from './cooling.service.js';
 
 /** Bake rules and ovens (coach writes, assistant reads), the stateless calculator and a prep week's bake run. */
@@ -139,6 +140,21 @@ export function bakeRunRoutes(alerts: cooling.CoolingAlerts) {
     allow('coach', 'assistant'),
     validated({ params: coolingParams, query: coolingDeleteQuery }, async ({ params, query }, req) => {
       await cooling.deleteCooling(emOf(req), actorOf(req), params.weekId, params.runTrayId, query);
+    }),
+  );
+
+  // The kitchen's cooling log: every tray's record over a stretch of prep days (coach or assistant).
+  r.get(
+    '/cooling-log',
+    allow('coach', 'assistant'),
+    validated({ query: coolingLogQuery }, ({ query }, req) => coolingLog(emOf(req), actorOf(req), query)),
+  );
+  r.get(
+    '/cooling-log.csv',
+    allow('coach', 'assistant'),
+    validated({ query: coolingLogQuery }, async ({ query }, req, res) => {
+      const log = await coolingLog(emOf(req), actorOf(req), query);
+      res.type('text/csv; charset=utf-8').attachment(`cooling-log-${query.from}-to-${query.to}.csv`).send(coolingLogCsv(log));
     }),
   );
 

@@ -8,6 +8,7 @@ import { weekTitle } from '@shared/domain/week-board.js';
 import { CoolingRecord, type ICoolingRecord } from './bake-run.entity.js';
 import { Membership, type IMembership } from '../auth/user.entity.js';
 import type { IWorkspace } from '../workspaces/workspace.entity.js';
+import type { IWeek } from '../weeks/week.entity.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { coolingMissedMail, coolingNotWrittenMail, type MailBody } from '../mail/mail-templates.js';
 import type { Actor } from '../../http/authz.js';
@@ -75,7 +76,8 @@ export async function watchCooling(em: EntityManager, deps: CoolingWatchDeps, at
   const utcToday = at.toISOString().slice(0, 10) as IsoDate;
   const records = await em.find(
     CoolingRecord,
-    { prepDate: { $gte: addDays(utcToday, -2), $lte: addDays(utcToday, 1) }, workspace: { timeZone: { $ne: null } } },
+    // A record whose week was deleted stays in the cooling log, and is not watched (nothing to link to, nothing baked).
+    { prepDate: { $gte: addDays(utcToday, -2), $lte: addDays(utcToday, 1) }, workspace: { timeZone: { $ne: null } }, week: { $ne: null } },
     { populate: ['workspace', 'week'], orderBy: { id: 'asc' } },
   );
   let queued = 0;
@@ -91,11 +93,12 @@ export async function watchCooling(em: EntityManager, deps: CoolingWatchDeps, at
   const days = new Map<string, { ws: IWorkspace; weekId: number; prepDate: string; now: string; records: ICoolingRecord[] }>();
   for (const r of records) {
     const ws = r.workspace.unwrap();
-    if (!ws.timeZone) continue;
+    const week = r.week?.unwrap();
+    if (!ws.timeZone || !week) continue;
     const now = wallClockIn(at, ws.timeZone);
     if (r.prepDate === now.slice(0, 10)) {
-      const key = `${r.week.id}|${r.prepDate}`;
-      const day = days.get(key) ?? { ws, weekId: r.week.id, prepDate: r.prepDate, now, records: [] };
+      const key = `${week.id}|${r.prepDate}`;
+      const day = days.get(key) ?? { ws, weekId: week.id, prepDate: r.prepDate, now, records: [] };
       day.records.push(r);
       days.set(key, day);
     }
@@ -103,7 +106,7 @@ export async function watchCooling(em: EntityManager, deps: CoolingWatchDeps, at
     const missed = missedDeadline(entryOf(r), at, ws.timeZone);
     if (!missed) continue;
     if (missed.minutesAgo > WATCH_WINDOW_HOURS * 60) continue;
-    queued += await tellKitchen(tell, ws, r, missed);
+    queued += await tellKitchen(tell, ws, week, r, missed);
   }
   for (const day of days.values()) queued += await tellForgotten(tell, day);
   return { watched: records.filter((r) => !r.discarded).length, queued };
@@ -190,10 +193,10 @@ function whatToDo(stageF: number, reheated: boolean): string {
 async function tellKitchen(
   tell: Tell,
   ws: IWorkspace,
+  week: IWeek,
   r: ICoolingRecord,
   missed: { stageF: number; deadline: string; clocksChanged: boolean },
 ): Promise<number> {
-  const week = r.week.unwrap();
   const order = toDateOrder(ws.dateOrder);
   const style = toClockStyle(ws.clock);
   // The cooling clock's start: a reheat starts it again, and the watch tells of the new start's deadlines too.

@@ -263,13 +263,18 @@ function DeleteWeek({ board }: { board: BoardDto }) {
   const [error, setError] = useState<string | null>(null);
   const published = board.week.publishedVersion !== null;
   const ask = published
-    ? `Delete ${board.week.name}? It is published: its clients stop seeing these plates. The board, tray counts and shopping marks go too. This cannot be undone.`
-    : `Delete ${board.week.name}? Its board, tray counts and shopping marks go. This cannot be undone.`;
+    ? `Delete ${board.week.name}? It is published: its clients stop seeing these plates. The board, tray counts and shopping marks go too (its cooling records stay in the cooling log). This cannot be undone.`
+    : `Delete ${board.week.name}? Its board, tray counts and shopping marks go (its cooling records stay in the cooling log). This cannot be undone.`;
   return (
     <Card>
       <h2 className="mb-2 text-xl">Delete this week</h2>
       <p className="mb-3 text-sm text-ink-soft">
-        {published ? 'Published: clients see this week until it is deleted. ' : ''}To plan another week like it, copy it to a new week instead.
+        {published ? 'Published: clients see this week until it is deleted. ' : ''}To plan another week like it, copy it to a new week instead. Its
+        cooling records stay in the{' '}
+        <Link to={paths.coolingLog} className="font-bold underline">
+          cooling log
+        </Link>
+        .
       </p>
       <Button
         variant="danger"

@@ -8,4 +8,5 @@ export const bakeRunsKeys = {
   weekRun: (weekId: number, prepDate?: string) => [...bakeRunsKeys.weekRuns(), weekId, prepDate ?? null] as const,
   coolings: () => [...bakeRunsKeys.all, 'cooling'] as const,
   cooling: (weekId: number, prepDate: string) => [...bakeRunsKeys.coolings(), weekId, prepDate] as const,
+  coolingLog: (from: string, to: string) => [...bakeRunsKeys.coolings(), 'log', from, to] as const,
 };

@@ -1,5 +1,5 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CoolingListDto, CoolingRecordDto, CoolingRecordInput } from '@shared/schemas/cooling.schema';
+import type { CoolingListDto, CoolingLogDto, CoolingRecordDto, CoolingRecordInput } from '@shared/schemas/cooling.schema';
 import { api, qs } from '@/lib/api-client';
 import { bakeRunsKeys } from './bake-runs.keys';
 
@@ -10,6 +10,16 @@ export const coolingQuery = (weekId: number, prepDate: string) =>
     queryFn: () => api.get<CoolingListDto>(`/weeks/${weekId}/bake-run/cooling${qs({ prepDate })}`),
     refetchInterval: 60_000,
   });
+
+/** The kitchen's cooling log: every tray's record of the prep days `from`–`to` (coach or assistant). */
+export const coolingLogQuery = (from: string, to: string) =>
+  queryOptions({
+    queryKey: bakeRunsKeys.coolingLog(from, to),
+    queryFn: () => api.get<CoolingLogDto>(`/cooling-log${qs({ from, to })}`),
+  });
+
+/** The same log as a CSV file to download. */
+export const coolingLogCsvUrl = (from: string, to: string) => `/api/cooling-log.csv${qs({ from, to })}`;
 
 /** Writes down one tray's cooling (the whole record; `version` once it exists). */
 export function useSaveCooling(weekId: number, prepDate: string) {

@@ -1,0 +1,193 @@
+import { Link, useSearchParams } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import { addDays, daysBetween, isIsoDate, type IsoDate } from '@shared/domain/iso-date';
+import { bothScales, clockFrom } from '@shared/domain/cooling';
+import type { CoolingLogDto, CoolingLogRow } from '@shared/schemas/cooling.schema';
+import { COOLING_LOG_MAX_DAYS } from '@shared/schemas/cooling.schema';
+import { coolingLogCsvUrl, coolingLogQuery } from '@/features/bake-runs/api/cooling';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { Card, EmptyState, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
+import { paths } from '@/config/paths';
+import { currentClockStyle, dayLabel, kitchenToday } from '@/lib/dates';
+
+const linkButton =
+  'inline-flex min-h-11 items-center justify-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
+
+/** How many days the log shows when the address names none: the last four weeks and two days (common practice, no source). */
+const DEFAULT_DAYS = 30;
+
+/** The stretch asked for, or why it cannot be read (the same rules as the server's, said under the field). */
+function stretchOf(from: string, to: string): { from: string; to: string; error: { field: 'from' | 'to'; words: string } | null } {
+  if (!isIsoDate(from)) return { from, to, error: { field: 'from', words: 'Choose the first prep day.' } };
+  if (!isIsoDate(to)) return { from, to, error: { field: 'to', words: 'Choose the last prep day.' } };
+  const span = daysBetween(from, to);
+  if (span < 0) return { from, to, error: { field: 'to', words: 'The last day comes on or after the first.' } };
+  if (span + 1 > COOLING_LOG_MAX_DAYS) return { from, to, error: { field: 'to', words: `At most ${COOLING_LOG_MAX_DAYS} days at once: choose a shorter stretch.` } };
+  return { from, to, error: null };
+}
+
+const RESULT_TONE: Record<CoolingLogRow['state'], string> = {
+  cooled: 'bg-herb-50 text-herb-700 border-herb',
+  'missed-70': 'bg-signal-50 text-signal-700 border-signal-700',
+  'missed-41': 'bg-signal-50 text-signal-700 border-signal-700',
+  discarded: 'bg-paper-deep text-ink border-line-strong',
+  'to-70': 'bg-frost-50 text-ink border-frost',
+  'to-41': 'bg-frost-50 text-ink border-frost',
+};
+
+function Counts({ rows }: { rows: CoolingLogRow[] }) {
+  const n = (pred: (r: CoolingLogRow) => boolean) => rows.filter(pred).length;
+  const missed = n((r) => r.state === 'missed-70' || r.state === 'missed-41');
+  const cooling = n((r) => r.state === 'to-70' || r.state === 'to-41');
+  return (
+    <p className="text-base" role="status">
+      <span className="num font-bold">{rows.length}</span> {rows.length === 1 ? 'tray' : 'trays'} · <span className="num">{n((r) => r.state === 'cooled')}</span>{' '}
+      cooled in time
+      {missed > 0 && (
+        <span className="font-bold text-signal-700">
+          {' '}
+          · <span className="num">{missed}</span> missed a deadline
+        </span>
+      )}
+      {' · '}
+      <span className="num">{n((r) => r.state === 'discarded')}</span> thrown away
+      {cooling > 0 && (
+        <>
+          {' · '}
+          <span className="num">{cooling}</span> still cooling
+        </>
+      )}
+    </p>
+  );
+}
+
+/** One tray's line: what was written down and where it ended. */
+function TrayLine({ row }: { row: CoolingLogRow }) {
+  const style = currentClockStyle();
+  const at = (local: string) => clockFrom(local, row.prepDate, style);
+  return (
+    <li className="break-inside-avoid rounded-lg border border-line bg-paper-card p-3">
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <p className="font-bold">{row.trayName}</p>
+        <span className={`rounded-full border px-2 py-0.5 text-sm font-bold ${RESULT_TONE[row.state]}`}>{row.result}</span>
+      </div>
+      <p className="num mt-1 text-base">
+        Out {at(row.outAt)}
+        {row.restartedAt && <> · reheated, cooling again from {at(row.restartedAt)}</>} · 70 °F by {at(row.by70)} · 41 °F by {at(row.by41)}
+      </p>
+      <p className="num text-sm text-ink-soft">
+        {row.readings.length ? row.readings.map((r) => `${at(r.at)} ${bothScales(r.tempF)}`).join(' · ') : 'No temperature written down.'}
+      </p>
+      {row.note && <p className="text-sm">Note: {row.note}</p>}
+      <p className="text-sm text-ink-faint">Written down by {row.recordedBy}</p>
+    </li>
+  );
+}
+
+/** The log's records by prep day, each day with the week it was baked for (and the way to its bake run). */
+function ByPrepDay({ log }: { log: CoolingLogDto }) {
+  const days = [...new Set(log.rows.map((r) => r.prepDate))];
+  return (
+    <div className="flex flex-col gap-5">
+      <Counts rows={log.rows} />
+      {days.map((day) => {
+        const rows = log.rows.filter((r) => r.prepDate === day);
+        const { weekId, weekName } = rows[0];
+        return (
+          <section key={day} className="flex flex-col gap-2" aria-labelledby={`log-${day}`}>
+            <div className="flex flex-wrap items-baseline justify-between gap-2">
+              <h2 id={`log-${day}`} className="text-xl">
+                Prep day {dayLabel(day, true)}
+              </h2>
+              {weekId !== null ? (
+                <Link className="font-bold underline print:no-underline" to={`${paths.bakeRun(weekId)}?prepDate=${day}#cooling-record-title`}>
+                  {weekName}: bake run
+                </Link>
+              ) : (
+                <span className="text-ink-soft">Its week was deleted</span>
+              )}
+            </div>
+            <ul className="flex flex-col gap-2">
+              {rows.map((r) => (
+                <TrayLine key={r.id} row={r} />
+              ))}
+            </ul>
+          </section>
+        );
+      })}
+    </div>
+  );
+}
+
+/**
+ * The kitchen's cooling log (coach and assistant): every tray's cooling record over a stretch of prep days, whatever
+ * week it was baked for, with where it ended against the Food Code; to read, print or download as CSV.
+ */
+export function Component() {
+  const [params, setParams] = useSearchParams();
+  const today = kitchenToday() as IsoDate;
+  const stretch = stretchOf(params.get('from') ?? addDays(today, -(DEFAULT_DAYS - 1)), params.get('to') ?? today);
+  const log = useQuery({ ...coolingLogQuery(stretch.from, stretch.to), enabled: stretch.error === null });
+  const set = (field: 'from' | 'to', value: string) => {
+    const next = new URLSearchParams(params);
+    next.set('from', field === 'from' ? value : stretch.from);
+    next.set('to', field === 'to' ? value : stretch.to);
+    setParams(next, { replace: true });
+  };
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader
+        title="Cooling log"
+        lead="Every tray’s cooling record, prep day by prep day, whatever week it was baked for (a deleted week’s too): when it came out, the temperatures written down, and whether it reached 70 °F (21 °C) within 2 hours and 41 °F (5 °C) within 6 (FDA Food Code §3-501.14). Times are the kitchen’s clock. How long to keep a cooling log, and what it must show, is for your local food code and inspector to say."
+      />
+      <Card className="print:hidden">
+        <div className="flex flex-wrap items-end gap-3">
+          <TextField
+            label="First prep day"
+            type="date"
+            value={stretch.from}
+            onChange={(e) => set('from', e.target.value)}
+            error={stretch.error?.field === 'from' ? stretch.error.words : undefined}
+            className="w-48"
+          />
+          <TextField
+            label="Last prep day"
+            type="date"
+            value={stretch.to}
+            onChange={(e) => set('to', e.target.value)}
+            error={stretch.error?.field === 'to' ? stretch.error.words : undefined}
+            className="w-48"
+          />
+          {stretch.error === null && (
+            <>
+              <Button type="button" variant="secondary" onClick={() => window.print()}>
+                Print
+              </Button>
+              <a className={linkButton} href={coolingLogCsvUrl(stretch.from, stretch.to)} download>
+                Download CSV
+              </a>
+            </>
+          )}
+        </div>
+      </Card>
+      <p className="hidden print:block">
+        Prep days {dayLabel(stretch.from, true)} to {dayLabel(stretch.to, true)}
+      </p>
+      {stretch.error === null && (
+        <QueryView
+          query={log}
+          loading={<Skeleton className="h-40 w-full" label="Loading the cooling log" />}
+          isEmpty={(l) => l.rows.length === 0}
+          empty={
+            <EmptyState title="No cooling records for these prep days">
+              Trays are written down in the cooling record on a prep day’s bake-run page as they come out of the oven.
+            </EmptyState>
+          }
+        >
+          {(l) => <ByPrepDay log={l} />}
+        </QueryView>
+      )}
+    </div>
+  );
+}
