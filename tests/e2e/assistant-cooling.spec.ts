@@ -1,9 +1,10 @@
+import { readFile } from 'node:fs/promises';
 import { expect, test } from '@playwright/test';
 import { expectNoSeriousA11yViolations, signIn, SHOTS } from './support';
 
 test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, timezoneId: 'UTC' });
 
-test('on prep day the assistant writes a tray down as out and its temperatures as it cools', async ({ page }) => {
+test('on prep day the assistant writes a tray down as out and its temperatures as it cools, then finds it in the cooling log', async ({ page }) => {
   await signIn(page, 'assistant@trayline.test');
   const weeks = (await (await page.request.get('/api/weeks')).json()) as { id: number; publishedVersion: number | null }[];
   const weekId = (weeks.find((w) => w.publishedVersion !== null) ?? weeks[0]).id;
@@ -58,4 +59,30 @@ test('on prep day the assistant writes a tray down as out and its temperatures a
     outAt: `${dto.prepDate}T09:30`,
     readings: [{ at: `${dto.prepDate}T10:50`, tempF: 66 }],
   });
+
+  // The cooling log, from the menu: the last 30 days to the kitchen's today, the prep day with the tray's line.
+  await page.getByRole('button', { name: 'Menu' }).click();
+  await page.getByRole('link', { name: 'Cooling log' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Cooling log' })).toBeVisible();
+  await expect(page.getByLabel('Last prep day')).toHaveValue(dto.prepDate);
+  const day = page.getByRole('region', { name: new RegExp(`^Prep day `) }).filter({ has: page.getByText(first.name, { exact: true }) });
+  const line = day.getByRole('listitem').filter({ has: page.getByText(first.name, { exact: true }) });
+  await expect(line).toContainText('Out 09:30 · 70 °F by 11:30 · 41 °F by 15:30');
+  // 66 °F = 18.9 °C (NIST SP 811), 19 °C rounded.
+  await expect(line).toContainText('10:50 66 °F (19 °C)');
+  await expect(line).toContainText('Written down by');
+  // Its result: still cooling while the server cannot know the kitchen's time (no zone set, prep day within three
+  // days), or past the 6-hour deadline with no 41 °F reading once the prep day is older than that.
+  await expect(line).toContainText(/Still cooling|Missed: not at 41 °F \(5 °C\) by 15:30/);
+  await expectNoSeriousA11yViolations(page, 'cooling log');
+  await page.screenshot({ path: `${SHOTS}/assistant-cooling-log.png`, fullPage: true });
+  // The same stretch as a CSV file.
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download CSV' }).click()]);
+  expect(download.suggestedFilename()).toMatch(/^cooling-log-\d{4}-\d{2}-\d{2}-to-\d{4}-\d{2}-\d{2}\.csv$/);
+  const csv = await readFile((await download.path())!, 'utf8');
+  expect(csv.split('\r\n')[0]).toBe(
+    'Prep date,Week,Tray,Out at,Cooling started again at,Readings,70 °F by,41 °F by,70 °F reached at,41 °F reached at,Result,Note,Written down by',
+  );
+  expect(csv).toContain(`${dto.prepDate} 09:30`);
+  expect(csv).toContain(`${dto.prepDate} 10:50 66 °F (19 °C)`);
 });

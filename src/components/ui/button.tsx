@@ -8,6 +8,10 @@ const styles: Record<Variant, string> = {
   danger: 'bg-signal text-white hover:bg-signal-700',
 };
 
+/** A link (a download, another page) that looks like a secondary button, with the same touch target. */
+export const linkButton =
+  'inline-flex min-h-11 items-center justify-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
+
 export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   variant?: Variant;
   busy?: boolean;

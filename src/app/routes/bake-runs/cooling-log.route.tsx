@@ -5,14 +5,13 @@ import { bothScales, clockFrom } from '@shared/domain/cooling';
 import type { CoolingLogDto, CoolingLogRow } from '@shared/schemas/cooling.schema';
 import { COOLING_LOG_MAX_DAYS } from '@shared/schemas/cooling.schema';
 import { coolingLogCsvUrl, coolingLogQuery } from '@/features/bake-runs/api/cooling';
-import { Button } from '@/components/ui/button';
+import { Button, linkButton } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Card, EmptyState, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { currentClockStyle, dayLabel, kitchenToday } from '@/lib/dates';
+import { useMe } from '@/features/auth/hooks/use-me';
 
-const linkButton =
-  'inline-flex min-h-11 items-center justify-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
 
 /** How many days the log shows when the address names none: the last four weeks and two days (common practice, no source). */
 const DEFAULT_DAYS = 30;
@@ -126,6 +125,7 @@ function ByPrepDay({ log }: { log: CoolingLogDto }) {
  */
 export function Component() {
   const [params, setParams] = useSearchParams();
+  const me = useMe();
   const today = kitchenToday() as IsoDate;
   const stretch = stretchOf(params.get('from') ?? addDays(today, -(DEFAULT_DAYS - 1)), params.get('to') ?? today);
   const log = useQuery({ ...coolingLogQuery(stretch.from, stretch.to), enabled: stretch.error === null });
@@ -171,8 +171,9 @@ export function Component() {
           )}
         </div>
       </Card>
+      {/* On paper: whose log, which days, and when it was printed. */}
       <p className="hidden print:block">
-        Prep days {dayLabel(stretch.from, true)} to {dayLabel(stretch.to, true)}
+        {me.workspaceName} · prep days {dayLabel(stretch.from, true)} to {dayLabel(stretch.to, true)} · printed {dayLabel(today, true)}
       </p>
       {stretch.error === null && (
         <QueryView

@@ -3,14 +3,12 @@ import { useQuery } from '@tanstack/react-query';
 import { shoppingCsvUrl, shoppingListQuery, shoppingPdfUrl } from '@/features/shopping/api/shopping.queries';
 import { useMarkBought } from '@/features/shopping/api/use-shopping-mutations';
 import { money, ShoppingList } from '@/features/shopping/components/shopping-list';
-import { Button } from '@/components/ui/button';
+import { Button, linkButton } from '@/components/ui/button';
 import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton, Progress } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { errorMessage } from '@/lib/problem';
 import { dayLabel, momentLabel } from '@/lib/dates';
 
-const linkButton =
-  'inline-flex min-h-11 items-center justify-center rounded-lg border border-line-strong bg-paper-card px-4 font-bold text-ink hover:bg-paper-deep';
 
 const tripButton = (on: boolean) =>
   `inline-flex min-h-11 items-center rounded-lg border px-3 font-bold ${on ? 'border-ink bg-ink text-paper-card' : 'border-line-strong bg-paper-card text-ink hover:bg-paper-deep'}`;
