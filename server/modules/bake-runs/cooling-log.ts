@@ -18,8 +18,9 @@ import { CoolingRecord } from './bake-run.entity.js';
 /**
  * Where a record stands for the log at instant `at`. With the kitchen's zone, at the kitchen's time. Without it the
  * server does not know the kitchen's time: a record from three days back or more (later than any deadline in any
- * zone: the time out is on the prep day, a restart within a day of it, the last deadline 6 hours after, and no zone
- * is more than 14 hours behind UTC) is judged after its deadlines; a newer one on its readings alone.
+ * zone: the time out is on the prep day, a restart within a day of it, the last deadline 6 hours after, so at the
+ * latest 05:59 two days after the prep day, and no zone runs more than 12 hours behind UTC, from memory) is judged
+ * after its deadlines; a newer one on its readings alone.
  */
 export function logCheck(entry: CoolingEntry, prepDate: IsoDate, zone: string | null, at: Date, style: ClockStyle = DEFAULT_CLOCK): CoolingCheck {
   if (zone) return checkCooling(entry, at, style, zone);
