@@ -303,7 +303,12 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
       <p className="text-sm text-ink-soft">
         Write down each tray as it comes out, then the food temperature in the thickest part as it cools. FDA Food Code
         §3-501.14: to 70 °F (21 °C) within 2 hours and to 41 °F (5 °C) or below within 6 hours in total; the clock here
-        starts when the tray comes out. Your local food code and inspector decide what to keep and for how long.
+        starts when the tray comes out. Your local food code and inspector decide what to keep and for how long. Every
+        prep day’s records are in the{' '}
+        <Link to={paths.coolingLog} className="font-bold underline">
+          cooling log
+        </Link>
+        .
       </p>
       {q.data && <WatchLine timeZone={q.data.timeZone} role={role} />}
       <ElsewhereLine kitchen={now} device={tick} />
