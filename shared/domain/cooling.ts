@@ -250,7 +250,10 @@ export function coolingResult(c: CoolingCheck, style: ClockStyle = DEFAULT_CLOCK
       return `Missed: not at ${bothScales(F41)} by ${clockFrom(c.by41, c.from, style)}`;
     case 'discarded':
       return 'Thrown away';
+    // Within its deadlines, or judged on its readings alone (the kitchen's time unknown): what is true either way.
+    case 'to-70':
+      return `No reading at ${bothScales(F70)} yet (due by ${clockFrom(c.by70, c.from, style)})`;
     default:
-      return 'Still cooling';
+      return `${bothScales(F70)} reached; no reading at ${bothScales(F41)} yet (due by ${clockFrom(c.by41, c.from, style)})`;
   }
 }

@@ -156,7 +156,7 @@ describe('the cooling log', () => {
     await coach.agent.put(`/api/weeks/${week.id}/trays`).send({ version: week.version, trays: [{ trayId: tray.id, prepDate: today, trayCount: 1 }] }).expect(200);
     await assistant.agent.put(`/api/weeks/${week.id}/bake-run/cooling/${tray.id}-1`).send({ outAt: `${today}T00:05` }).expect(200);
     const row = async () => (await log(coach, `?from=${today}&to=${today}`).expect(200)).body.rows[0];
-    expect(await row()).toMatchObject({ state: 'to-70', result: 'Still cooling' });
+    expect(await row()).toMatchObject({ state: 'to-70', result: 'No reading at 70 °F (21 °C) yet (due by 02:05)' });
     // In Kiritimati (UTC+14) the kitchen's day is ahead: 00:05 today there was at least 10 hours ago, so both
     // deadlines have passed with no reading (from memory: Pacific/Kiritimati keeps UTC+14 all year).
     const s = await coach.agent.get('/api/workspace/settings').expect(200);

@@ -57,12 +57,13 @@ describe('the cooling log page', () => {
           row({}),
           row({ id: 2, runTrayId: '3-2', trayName: 'Egg slab (2/2)', readings: [{ at: '2026-01-04T14:20', tempF: 68 }], state: 'missed-41', result: 'Missed: not at 41 °F (5 °C) by 19:20', note: 'Fridge door left open' }),
           row({ id: 3, prepDate: '2026-01-11', weekId: null, weekName: null, outAt: '2026-01-11T09:00', readings: [], state: 'discarded', result: 'Thrown away' }),
+          row({ id: 4, prepDate: '2026-01-11', weekId: null, weekName: null, runTrayId: '3-2', outAt: '2026-01-11T09:10', readings: [{ at: '2026-01-11T10:00', tempF: 66 }], state: 'to-41', result: '70 °F (21 °C) reached; no reading at 41 °F (5 °C) yet (due by 15:10)' }),
         ]),
       );
     open();
     expect(await screen.findByRole('heading', { name: 'Prep day Sunday, Jan 4' })).toBeTruthy();
     expect(asked).toEqual(['/api/cooling-log?from=2026-01-01&to=2026-01-31']);
-    expect(screen.getByRole('status').textContent).toBe('3 trays · 1 cooled in time · 1 missed a deadline · 1 thrown away');
+    expect(screen.getByRole('status').textContent).toBe('4 trays · 1 cooled in time · 1 missed a deadline · 1 thrown away · 1 waiting for a reading');
     const first = screen.getByRole('region', { name: 'Prep day Sunday, Jan 4' });
     expect(within(first).getByRole('link', { name: 'Week of Mon, Jan 5: bake run' }).getAttribute('href')).toBe('/weeks/7/bake-run?prepDate=2026-01-04#cooling-record-title');
     const [cooled, missed] = within(first).getAllByRole('listitem');
@@ -74,6 +75,7 @@ describe('the cooling log page', () => {
     const second = screen.getByRole('region', { name: 'Prep day Sunday, Jan 11' });
     expect(second.textContent).toContain('Its week was deleted');
     expect(second.textContent).toContain('No temperature written down.');
+    expect(second.textContent).toContain('70 °F (21 °C) reached; no reading at 41 °F (5 °C) yet (due by 15:10)');
     expect(screen.getByRole('link', { name: 'Download CSV' }).getAttribute('href')).toBe('/api/cooling-log.csv?from=2026-01-01&to=2026-01-31');
   });
 

@@ -6,7 +6,7 @@
  * being said, with the local code deciding. Times and readings are made-up kitchen numbers.
  */
 import { describe, expect, it } from 'vitest';
-import { checkCooling, clockFrom, eventsWithCooling, FOOD_CODE_COOLING, notWrittenDown, WRITE_DOWN_AFTER_MINUTES, type CoolingEntry } from '@shared/domain/cooling';
+import { checkCooling, clockFrom, coolingResult, eventsWithCooling, FOOD_CODE_COOLING, notWrittenDown, WRITE_DOWN_AFTER_MINUTES, type CoolingEntry } from '@shared/domain/cooling';
 import { planBakeRun } from '@shared/domain/bake-run';
 import type { BakeRunInput } from '@shared/domain/bake-run-types';
 import { celsiusToFahrenheit } from '@shared/domain/temperature';
@@ -78,6 +78,19 @@ describe('the Food Code cooling stages', () => {
     expect(evening.said).toContain('by 02:30 the next day');
     expect(clockFrom('2026-01-04T22:30', at('20:30'))).toBe('22:30');
     expect(checkCooling(entry({ discarded: true }), at('12:11'))).toMatchObject({ state: 'discarded', tone: 'info' });
+  });
+});
+
+describe('the cooling log’s one-line result', () => {
+  it('says where each record ended or stands, in both scales, with the deadline it is about', () => {
+    const said = (e: CoolingEntry, now: string) => coolingResult(checkCooling(e, now));
+    expect(said(entry(), at('10:40'))).toBe('No reading at 70 °F (21 °C) yet (due by 12:10)');
+    expect(said(entry({ readings: [{ at: at('11:00'), tempF: 68 }] }), at('11:00'))).toBe('70 °F (21 °C) reached; no reading at 41 °F (5 °C) yet (due by 16:10)');
+    expect(said(entry({ readings: [{ at: at('11:00'), tempF: 68 }, { at: at('15:00'), tempF: 40 }] }), at('15:00'))).toBe('Cooled in time');
+    expect(said(entry(), at('12:11'))).toBe('Missed: not at 70 °F (21 °C) by 12:10');
+    expect(said(entry({ readings: [{ at: at('11:00'), tempF: 68 }] }), at('16:11'))).toBe('Missed: not at 41 °F (5 °C) by 16:10');
+    expect(said(entry({ discarded: true }), at('12:11'))).toBe('Thrown away');
+    expect(coolingResult(checkCooling(entry({ outAt: at('20:30') }), at('20:40')))).toBe('No reading at 70 °F (21 °C) yet (due by 22:30)');
   });
 });
 

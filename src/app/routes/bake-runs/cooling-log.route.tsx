@@ -54,7 +54,7 @@ function Counts({ rows }: { rows: CoolingLogRow[] }) {
       {cooling > 0 && (
         <>
           {' · '}
-          <span className="num">{cooling}</span> still cooling
+          <span className="num">{cooling}</span> waiting for a reading
         </>
       )}
     </p>
