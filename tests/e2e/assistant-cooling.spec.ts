@@ -62,7 +62,7 @@ test('on prep day the assistant writes a tray down as out and its temperatures a
 
   // The cooling log, from the menu: the last 30 days to the kitchen's today, the prep day with the tray's line.
   await page.getByRole('button', { name: 'Menu' }).click();
-  await page.getByRole('link', { name: 'Cooling log' }).click();
+  await page.getByRole('link', { name: 'Cooling log', exact: true }).click();
   await expect(page.getByRole('heading', { level: 1, name: 'Cooling log' })).toBeVisible();
   await expect(page.getByLabel('Last prep day')).toHaveValue(dto.prepDate);
   const day = page.getByRole('region', { name: new RegExp(`^Prep day `) }).filter({ has: page.getByText(first.name, { exact: true }) });
