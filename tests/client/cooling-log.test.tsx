@@ -77,6 +77,15 @@ describe('the cooling log page', () => {
     expect(second.textContent).toContain('No temperature written down.');
     expect(second.textContent).toContain('70 °F (21 °C) reached; no reading at 41 °F (5 °C) yet (due by 15:10)');
     expect(screen.getByRole('link', { name: 'Download CSV' }).getAttribute('href')).toBe('/api/cooling-log.csv?from=2026-01-01&to=2026-01-31');
+    // Without the kitchen's time zone, what the newest records are judged on.
+    expect(screen.getByText(/^The kitchen’s time zone is not set/).textContent).toContain('the last three days’ trays are judged on the temperatures written down alone');
+  });
+
+  it('says nothing of how records are judged once the kitchen has a time zone', async () => {
+    answer = () => jsonResponse({ ...log([row({})]), timeZone: 'America/Chicago' });
+    open();
+    expect(await screen.findByText('Cooled in time')).toBeTruthy();
+    expect(screen.queryByText(/time zone is not set/)).toBeNull();
   });
 
   it('says under the field when the last day comes before the first, and asks the server nothing', async () => {

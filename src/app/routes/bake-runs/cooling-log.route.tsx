@@ -90,6 +90,12 @@ function ByPrepDay({ log }: { log: CoolingLogDto }) {
   return (
     <div className="flex flex-col gap-5">
       <Counts rows={log.rows} />
+      {log.timeZone === null && (
+        <p className="text-sm text-ink-soft">
+          The kitchen’s time zone is not set, so Trayline does not know the kitchen’s time: the last three days’ trays are
+          judged on the temperatures written down alone (a deadline counts as missed only when a reading shows it).
+        </p>
+      )}
       {days.map((day) => {
         const rows = log.rows.filter((r) => r.prepDate === day);
         const { weekId, weekName } = rows[0];
