@@ -3,7 +3,7 @@
  * A bake run lasts hours, so a daylight-saving jump inside it is not modelled: minutes are added to the calendar
  * reading as if every day had 24 h (the run sheet shows the kitchen clock the cook reads at the start). Cooling
  * deadlines, which can run past 2 a.m., are counted in real hours once the kitchen's zone is known
- * (`addWallMinutes` in time-zone.ts, used by `checkCooling`).
+ * (`instantOfWall` and `wallClockIn` in time-zone.ts, in `checkCooling`).
  */
 
 const LOCAL_RE = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})$/;

@@ -15,7 +15,7 @@ import { clockText, DEFAULT_CLOCK, type ClockStyle } from './clock';
 import type { BakeEvent, BakeRunResult } from './bake-run-types';
 import { addLocalMinutes, requireLocalMinutes } from './bake-run-time';
 import { toCelsiusRounded } from './temperature';
-import { addWallMinutes, instantOfWall } from './time-zone';
+import { instantOfWall, wallClockIn } from './time-zone';
 
 /** FDA Food Code §3-501.14 (cooling): 135 °F → 70 °F within 2 h, and → 41 °F within 6 h in total. */
 export const FOOD_CODE_COOLING = Object.freeze({
@@ -102,24 +102,28 @@ export function checkCooling(
   const from = entry.restartedAt ?? entry.outAt;
   // Minutes on one line for every time compared: real minutes in the kitchen's zone, else the calendar reading's.
   const minutesOf = zone ? (local: string) => Math.floor(instantOfWall(local, zone) / 60_000) : requireLocalMinutes;
-  const after = (minutes: number) => (zone ? addWallMinutes(from, minutes, zone) : addLocalMinutes(from, minutes));
+  const start = minutesOf(from);
+  // The deadlines: real minutes after the start's instant, read on the kitchen's wall clock (23:30 + 6 h on the night
+  // Chicago falls back is 04:30, not 05:30); else on the calendar reading.
+  const after = (minutes: number) => (zone ? wallClockIn(new Date((start + minutes) * 60_000), zone) : addLocalMinutes(from, minutes));
   const by70 = after(FOOD_CODE_COOLING.firstStageMinutes);
   const by41 = after(FOOD_CODE_COOLING.totalMinutes);
-  const start = minutesOf(from);
+  // Each reading's minute read once (in a zone that is the costly part).
   const counted = entry.readings
-    .filter((r) => minutesOf(r.at) >= start)
-    .sort((a, b) => minutesOf(a.at) - minutesOf(b.at));
+    .map((r) => ({ at: r.at, tempF: r.tempF, m: minutesOf(r.at) }))
+    .filter((r) => r.m >= start)
+    .sort((a, b) => a.m - b.m);
   const last = counted.at(-1) ?? null;
   if (typeof now !== 'string' && !zone) throw new RangeError('An instant needs the kitchen’s time zone to be read');
   const nowRead = typeof now === 'string' ? minutesOf(now) : Math.floor(now.getTime() / 60_000);
   // "Now" is at least the latest reading (a device clock behind the thermometer's note does not undo it).
-  const nowM = Math.max(nowRead, last ? minutesOf(last.at) : -Infinity);
+  const nowM = Math.max(nowRead, last ? last.m : -Infinity);
   const m70 = start + FOOD_CODE_COOLING.firstStageMinutes;
   const m41 = start + FOOD_CODE_COOLING.totalMinutes;
   const hit70 = counted.find((r) => r.tempF <= F70);
-  const reached70At = hit70 && minutesOf(hit70.at) <= m70 ? hit70.at : null;
+  const reached70At = hit70 && hit70.m <= m70 ? hit70.at : null;
   const hit41 = reached70At ? counted.find((r) => r.tempF <= F41) : undefined;
-  const reached41At = hit41 && minutesOf(hit41.at) <= m41 ? hit41.at : null;
+  const reached41At = hit41 && hit41.m <= m41 ? hit41.at : null;
   // Across a daylight-time change the wall clock's deadlines are an hour off the calendar's: say why.
   const clocksChanged =
     by70 !== addLocalMinutes(from, FOOD_CODE_COOLING.firstStageMinutes) || by41 !== addLocalMinutes(from, FOOD_CODE_COOLING.totalMinutes);

@@ -87,18 +87,11 @@ export function instantOfWall(local: string, zone: string): number {
   // The offsets a day before and after: a zone changes its offset at most once in two days.
   const before = offsetAt(wall - DAY_MS, zone);
   const after = offsetAt(wall + DAY_MS, zone);
+  // The same offset a day either side: no change in between (every day but two a year), one answer.
+  if (before === after) return wall - before;
   const fits = [before, after].map((o) => wall - o).filter((ms) => offsetAt(ms, zone) === wall - ms);
   if (fits.length) return Math.min(...fits);
   return wall - before;
-}
-
-/**
- * `minutes` of real time after a kitchen's wall-clock reading, as that wall clock reads it: across a daylight-time
- * change the reading moves by an hour more or less than the minutes (23:30 + 6 h on the night Chicago falls back is
- * 04:30, not 05:30).
- */
-export function addWallMinutes(local: string, minutes: number, zone: string): string {
-  return wallClockIn(new Date(instantOfWall(local, zone) + minutes * 60_000), zone);
 }
 
 /** The zone names a coach can choose from (the engine's list), with UTC first. */

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { addWallMinutes, canonicalTimeZone, instantOfWall, timeZoneChoices, wallClockIn } from '@shared/domain/time-zone';
+import { canonicalTimeZone, instantOfWall, timeZoneChoices, wallClockIn } from '@shared/domain/time-zone';
 
 // The kitchen's wall clock from the server's instant. Zone rules are the IANA time zone database's as the engine
 // carries it; the checks below are the legal rules those zones follow, worked for 2026 by hand:
@@ -74,8 +74,10 @@ describe('canonicalTimeZone', () => {
   });
 });
 
-describe('instantOfWall and addWallMinutes (real minutes on the kitchen’s wall clock)', () => {
+describe('instantOfWall, and real minutes on the kitchen’s wall clock', () => {
   const ms = (iso: string) => Date.parse(iso);
+  /** `minutes` of real time after a wall reading, read on the same wall clock (as checkCooling counts its deadlines). */
+  const addWallMinutes = (local: string, minutes: number, zone: string) => wallClockIn(new Date(instantOfWall(local, zone) + minutes * 60_000), zone);
 
   it('reads an ordinary wall time in its zone (Chicago CST UTC−6 in January, CDT UTC−5 in July; 15 U.S.C. §261)', () => {
     expect(instantOfWall('2026-01-04T12:00', 'America/Chicago')).toBe(ms('2026-01-04T18:00:00Z'));
