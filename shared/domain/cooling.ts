@@ -72,6 +72,16 @@ const F41 = FOOD_CODE_COOLING.finalF;
 /** A temperature in both scales, as the record and its e-mails say it: "70 °F (21 °C)". */
 export const bothScales = (f: number) => `${f} °F (${toCelsiusRounded(f)} °C)`;
 
+/** The readings in the order they were taken (a record keeps them as written down). */
+export function inTakenOrder<R extends CoolingReading>(readings: readonly R[]): R[] {
+  return [...readings].sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0));
+}
+
+/** The readings as the log and the e-mails say them, in the order taken: "14:10 68 °F (20 °C)" (the next day said). */
+export function readingsSaid(readings: readonly CoolingReading[], day: string, style: ClockStyle = DEFAULT_CLOCK): string[] {
+  return inTakenOrder(readings).map((x) => `${clockFrom(x.at, day, style)} ${bothScales(x.tempF)}`);
+}
+
 /** Said with the deadlines when the kitchen's clock changes between the start and a deadline. */
 export const CLOCKS_CHANGED = 'The clocks change in between: the deadlines are 2 and 6 hours of real time.';
 
@@ -126,7 +136,8 @@ export function checkCooling(
   const reached41At = hit41 && hit41.m <= m41 ? hit41.at : null;
   // Across a daylight-time change the wall clock's deadlines are an hour off the calendar's: say why.
   const clocksChanged =
-    by70 !== addLocalMinutes(from, FOOD_CODE_COOLING.firstStageMinutes) || by41 !== addLocalMinutes(from, FOOD_CODE_COOLING.totalMinutes);
+    zone !== null &&
+    (by70 !== addLocalMinutes(from, FOOD_CODE_COOLING.firstStageMinutes) || by41 !== addLocalMinutes(from, FOOD_CODE_COOLING.totalMinutes));
   const changed = clocksChanged ? ` ${CLOCKS_CHANGED}` : '';
   const base = { from, by70, by41, reached70At, reached41At, clocksChanged };
   if (entry.discarded) return { ...base, state: 'discarded', tone: 'info', said: 'Thrown away.' };

@@ -120,8 +120,8 @@ export const coolingLogQuery = z
   });
 export type CoolingLogQuery = z.output<typeof coolingLogQuery>;
 
-/** One tray's cooling in the log: what was written down and where it ended (or stands). */
-export interface CoolingLogRow extends Omit<CoolingRecordDto, 'version'> {
+/** One tray's cooling in the log: what was written down (as the prep day's list gives it) and where it ended (or stands). */
+export interface CoolingLogRow extends CoolingRecordDto {
   id: number;
   prepDate: string;
   /** The week it was baked for, or null once that week was deleted (the record stays in the log). */

@@ -47,8 +47,11 @@ export function currentKitchenZone(): string | null {
 /** The kitchen's wall clock at `d` (this device's clock read in the kitchen's zone, or as it is when none is set), "YYYY-MM-DDTHH:mm". */
 export function kitchenNow(d: Date = new Date()): string {
   if (kitchenZone) return wallClockIn(d, kitchenZone);
-  return `${localToday(d)}T${localHhmm(d)}`;
+  return deviceNow(d);
 }
+
+/** This device's own clock at `d`, "YYYY-MM-DDTHH:mm". */
+export const deviceNow = (d: Date = new Date()): string => `${localToday(d)}T${localHhmm(d)}`;
 
 /** The kitchen's date today, "YYYY-MM-DD". */
 export const kitchenToday = (d: Date = new Date()): string => kitchenNow(d).slice(0, 10);

@@ -23,6 +23,7 @@ const row = (over: Partial<CoolingLogRow>): CoolingLogRow => ({
   note: '',
   recordedBy: 'Kit Moreno',
   updatedAt: '2026-01-04T18:00:10.000Z',
+  version: 1,
   state: 'cooled',
   by70: '2026-01-04T15:10',
   by41: '2026-01-04T19:10',

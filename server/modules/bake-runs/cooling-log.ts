@@ -7,13 +7,14 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import Papa from 'papaparse';
 import { addDays, type IsoDate } from '@shared/domain/iso-date.js';
 import { addLocalMinutes } from '@shared/domain/bake-run-time.js';
-import { bothScales, checkCooling, checkOnPaper, coolingResult, FOOD_CODE_COOLING, type CoolingCheck, type CoolingEntry } from '@shared/domain/cooling.js';
+import { bothScales, checkCooling, checkOnPaper, coolingResult, FOOD_CODE_COOLING, inTakenOrder, type CoolingCheck, type CoolingEntry } from '@shared/domain/cooling.js';
 import { DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
 import { weekTitle } from '@shared/domain/week-board.js';
 import type { CoolingLogDto, CoolingLogQuery, CoolingLogRow } from '@shared/schemas/cooling.schema.js';
 import { clockOf, datesOf, type Actor } from '../../http/authz.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { CoolingRecord } from './bake-run.entity.js';
+import { presentCooling } from './cooling.service.js';
 
 /**
  * Where a record stands for the log at instant `at`. With the kitchen's zone, at the kitchen's time. Without it the
@@ -43,23 +44,16 @@ export async function coolingLog(em: EntityManager, actor: Actor, q: CoolingLogQ
   const style = clockOf(actor);
   const order = datesOf(actor);
   const rows: CoolingLogRow[] = records.map((r) => {
-    const entry: CoolingEntry = { outAt: r.outAt, restartedAt: r.restartedAt ?? null, readings: r.readings, discarded: r.discarded };
-    const c = logCheck(entry, r.prepDate as IsoDate, zone, at, style);
+    const record = presentCooling(r);
+    const c = logCheck(record, r.prepDate as IsoDate, zone, at, style);
     const week = r.week?.unwrap() ?? null;
     return {
+      ...record,
       id: r.id,
       prepDate: r.prepDate,
       weekId: week?.id ?? null,
       weekName: week ? weekTitle(week, order) : null,
-      runTrayId: r.runTrayId,
-      trayName: r.trayName,
-      outAt: r.outAt,
-      restartedAt: r.restartedAt ?? null,
-      readings: [...r.readings].sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0)).map((x) => ({ at: x.at, tempF: x.tempF })),
-      discarded: r.discarded,
-      note: r.note,
-      recordedBy: r.recordedBy,
-      updatedAt: r.updatedAt.toISOString(),
+      readings: inTakenOrder(record.readings),
       state: c.state,
       by70: c.by70,
       by41: c.by41,

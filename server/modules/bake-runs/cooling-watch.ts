@@ -1,6 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { addDays, shortDate, toDateOrder, type IsoDate } from '@shared/domain/iso-date.js';
-import { bothScales, checkCooling, CLOCKS_CHANGED, clockFrom, FOOD_CODE_COOLING, notWrittenDown, type CoolingEntry } from '@shared/domain/cooling.js';
+import { bothScales, checkCooling, CLOCKS_CHANGED, clockFrom, FOOD_CODE_COOLING, notWrittenDown, readingsSaid, type CoolingEntry } from '@shared/domain/cooling.js';
 import { clockText, DEFAULT_CLOCK, minutesSpan, toClockStyle } from '@shared/domain/clock.js';
 import { requireLocalMinutes } from '@shared/domain/bake-run-time.js';
 import { instantOfWall, wallClockIn } from '@shared/domain/time-zone.js';
@@ -13,6 +13,7 @@ import { Outbox } from '../mail/outbox.entity.js';
 import { coolingMissedMail, coolingNotWrittenMail, type MailBody } from '../mail/mail-templates.js';
 import type { Actor } from '../../http/authz.js';
 import { getWeekBakeRun } from './bake-run.service.js';
+import { presentCooling } from './cooling.service.js';
 import { appLink, mailKey, queueMail, type MailQueue } from '../mail/mail.service.js';
 
 /**
@@ -51,7 +52,6 @@ export interface CoolingWatchResult {
   queued: number;
 }
 
-const entryOf = (r: ICoolingRecord): CoolingEntry => ({ outAt: r.outAt, restartedAt: r.restartedAt ?? null, readings: r.readings, discarded: r.discarded });
 
 /**
  * The deadline a record has missed at instant `at` in the kitchen's zone (its deadlines real hours after the start,
@@ -103,7 +103,7 @@ export async function watchCooling(em: EntityManager, deps: CoolingWatchDeps, at
       days.set(key, day);
     }
     if (r.discarded) continue;
-    const missed = missedDeadline(entryOf(r), at, ws.timeZone);
+    const missed = missedDeadline(presentCooling(r), at, ws.timeZone);
     if (!missed) continue;
     if (missed.minutesAgo > WATCH_WINDOW_HOURS * 60) continue;
     queued += await tellKitchen(tell, ws, week, r, missed);
@@ -201,9 +201,7 @@ async function tellKitchen(
   const style = toClockStyle(ws.clock);
   // The cooling clock's start: a reheat starts it again, and the watch tells of the new start's deadlines too.
   const from = r.restartedAt ?? r.outAt;
-  const readings = [...r.readings]
-    .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
-    .map((x) => `${clockFrom(x.at, r.outAt, style)} ${bothScales(x.tempF)}`);
+  const readings = readingsSaid(r.readings, r.outAt, style);
   const query = r.prepDate === week.prepDate ? '' : `?prepDate=${r.prepDate}`;
   return mailKitchen(tell, ws, week.id, 'cdm', `${r.id}|${from}|${missed.stageF}`, (name) =>
     coolingMissedMail({

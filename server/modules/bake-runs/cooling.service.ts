@@ -3,7 +3,7 @@ import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import { longDate, shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import type { CoolingListDto, CoolingRecordDto, CoolingRecordValues } from '@shared/schemas/cooling.schema.js';
 import type { GlanceDto } from '@shared/schemas/weeks.schema.js';
-import { bothScales, checkCooling, checkOnPaper, clockFrom, countedFrom, FOOD_CODE_COOLING, type CoolingCheck } from '@shared/domain/cooling.js';
+import { bothScales, checkCooling, checkOnPaper, clockFrom, countedFrom, FOOD_CODE_COOLING, readingsSaid, type CoolingCheck } from '@shared/domain/cooling.js';
 import { DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
 import { clockOf, datesOf, type Actor } from '../../http/authz.js';
 import { NotFound, StaleEdit, ValidationError } from '../../http/errors.js';
@@ -21,7 +21,8 @@ export interface CoolingAlerts {
   publicUrl: string;
 }
 
-function present(r: ICoolingRecord): CoolingRecordDto {
+/** A record as the API gives it (and as the cooling checks read it: a CoolingEntry). */
+export function presentCooling(r: ICoolingRecord): CoolingRecordDto {
   return {
     runTrayId: r.runTrayId,
     trayName: r.trayName,
@@ -52,7 +53,7 @@ export async function listCooling(em: EntityManager, actor: Actor, weekId: numbe
     em.find(CoolingRecord, { week: week.id, prepDate }, { orderBy: { outAt: 'asc', runTrayId: 'asc' } }),
     em.findOneOrFail(Workspace, actor.workspaceId, { fields: ['timeZone'] }),
   ]);
-  return { weekId: week.id, prepDate, records: rows.map(present), timeZone: ws.timeZone ?? null };
+  return { weekId: week.id, prepDate, records: rows.map(presentCooling), timeZone: ws.timeZone ?? null };
 }
 
 /**
@@ -68,7 +69,7 @@ export async function coolingTrouble(em: EntityManager, workspaceId: number, wee
   ]);
   const zone = ws.timeZone;
   const named = (r: ICoolingRecord) => ({ trayName: r.trayName, prepDate: r.prepDate as IsoDate });
-  const judged = (r: ICoolingRecord) => (zone ? checkCooling(present(r), at, DEFAULT_CLOCK, zone) : checkOnPaper(present(r)));
+  const judged = (r: ICoolingRecord) => (zone ? checkCooling(presentCooling(r), at, DEFAULT_CLOCK, zone) : checkOnPaper(presentCooling(r)));
   return {
     thrownAway: rows.filter((r) => r.discarded).map(named),
     missed: rows.filter((r) => !r.discarded && judged(r).tone === 'block').map(named),
@@ -111,19 +112,19 @@ export async function putCooling(
   return em.transactional(async (tx) => {
     const row = await tx.findOne(CoolingRecord, { week: week.id, prepDate, runTrayId });
     if (row) {
-      if (v.version !== row.version) throw new StaleEdit(row.version, present(row));
+      if (v.version !== row.version) throw new StaleEdit(row.version, presentCooling(row));
       const wasDiscarded = row.discarded;
       tx.assign(row, fields);
       await tx.flush();
       if (row.discarded !== wasDiscarded && alerts) await tellCoaches(tx, actor, week, row, alerts);
-      return present(row);
+      return presentCooling(row);
     }
     if (v.version !== undefined) throw new StaleEdit(null);
     const trayName = await runTrayName(tx, week, prepDate, runTrayId);
     const created = tx.create(CoolingRecord, { workspace: actor.workspaceId, week: week.id, prepDate, runTrayId, trayName, ...fields });
     await tx.flush();
     if (created.discarded && alerts) await tellCoaches(tx, actor, week, created, alerts);
-    return present(created);
+    return presentCooling(created);
   });
 }
 
@@ -157,10 +158,8 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
     recordedBy: r.recordedBy,
     link: appLink(alerts.publicUrl, `/weeks/${week.id}`),
   };
-  const paper = checkOnPaper({ ...present(r), discarded: false }, ws.timeZone ?? null);
-  const readings = [...r.readings]
-    .sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0))
-    .map((x) => `${clockFrom(x.at, r.outAt, style)} ${bothScales(x.tempF)}`);
+  const paper = checkOnPaper({ ...presentCooling(r), discarded: false }, ws.timeZone ?? null);
+  const readings = readingsSaid(r.readings, r.outAt, style);
   for (const coach of to) {
     const body = r.discarded
       ? trayThrownAwayMail({
@@ -192,7 +191,7 @@ export async function deleteCooling(em: EntityManager, actor: Actor, weekId: num
   const { week, prepDate } = await weekAndDate(em, actor, weekId, q.prepDate);
   const row = await em.findOne(CoolingRecord, { week: week.id, prepDate, runTrayId });
   if (!row) throw new NotFound('Cooling record');
-  if (q.version !== row.version) throw new StaleEdit(row.version, present(row));
+  if (q.version !== row.version) throw new StaleEdit(row.version, presentCooling(row));
   em.remove(row);
   await em.flush();
 }

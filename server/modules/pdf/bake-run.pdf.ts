@@ -4,7 +4,7 @@ import { toCelsiusRounded } from '@shared/domain/temperature.js';
 import { cautionsBlock, createDoc, finishDoc, heading, paragraph, table } from './pdf-document.js';
 import { DEFAULT_DATE_ORDER, longDate, type DateOrder } from '@shared/domain/iso-date.js';
 import { replannedSummary } from '@shared/domain/bake-run-words.js';
-import { checkOnPaper, clockFrom, FOOD_CODE_COOLING, type CoolingState, type RecordedCooling } from '@shared/domain/cooling.js';
+import { checkOnPaper, clockFrom, FOOD_CODE_COOLING, inTakenOrder, type CoolingState, type RecordedCooling } from '@shared/domain/cooling.js';
 import { clockText, DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
 
 export interface BakeRunPdfMeta {
@@ -163,8 +163,7 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
         // Blank lines to write on, the planned time out as a reminder.
         if (!r) return [`${t.name}\n(planned out ${clock(t.outAt)})`, '', '', '', '\n\n', '', ''];
         const c = checkOnPaper(r, meta.timeZone ?? null);
-        const readings = [...r.readings]
-          .sort((a, b) => (a.at < b.at ? -1 : 1))
+        const readings = inTakenOrder(r.readings)
           .map((x) => `${clockFrom(x.at, r.outAt, style)} ${x.tempF} °F`)
           .join(', ');
         const restart = r.restartedAt ? `Reheated, cooling again from ${clockFrom(r.restartedAt, r.outAt, style)}. ` : '';

@@ -1,9 +1,8 @@
 import { Link, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { addDays, daysBetween, isIsoDate, type IsoDate } from '@shared/domain/iso-date';
-import { bothScales, clockFrom } from '@shared/domain/cooling';
-import type { CoolingLogDto, CoolingLogRow } from '@shared/schemas/cooling.schema';
-import { COOLING_LOG_MAX_DAYS } from '@shared/schemas/cooling.schema';
+import { addDays, type IsoDate } from '@shared/domain/iso-date';
+import { clockFrom, readingsSaid } from '@shared/domain/cooling';
+import { coolingLogQuery as coolingLogQuerySchema, type CoolingLogDto, type CoolingLogRow } from '@shared/schemas/cooling.schema';
 import { coolingLogCsvUrl, coolingLogQuery } from '@/features/bake-runs/api/cooling';
 import { Button, linkButton } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -16,14 +15,12 @@ import { useMe } from '@/features/auth/hooks/use-me';
 /** How many days the log shows when the address names none: the last four weeks and two days (common practice, no source). */
 const DEFAULT_DAYS = 30;
 
-/** The stretch asked for, or why it cannot be read (the same rules as the server's, said under the field). */
+/** The stretch asked for, or why it cannot be read: the server's own query schema, its first word said under its field. */
 function stretchOf(from: string, to: string): { from: string; to: string; error: { field: 'from' | 'to'; words: string } | null } {
-  if (!isIsoDate(from)) return { from, to, error: { field: 'from', words: 'Choose the first prep day.' } };
-  if (!isIsoDate(to)) return { from, to, error: { field: 'to', words: 'Choose the last prep day.' } };
-  const span = daysBetween(from, to);
-  if (span < 0) return { from, to, error: { field: 'to', words: 'The last day comes on or after the first.' } };
-  if (span + 1 > COOLING_LOG_MAX_DAYS) return { from, to, error: { field: 'to', words: `At most ${COOLING_LOG_MAX_DAYS} days at once: choose a shorter stretch.` } };
-  return { from, to, error: null };
+  const read = coolingLogQuerySchema.safeParse({ from, to });
+  if (read.success) return { from, to, error: null };
+  const issue = read.error.issues[0];
+  return { from, to, error: { field: issue.path[0] === 'from' ? 'from' : 'to', words: issue.message } };
 }
 
 const RESULT_TONE: Record<CoolingLogRow['state'], string> = {
@@ -76,7 +73,7 @@ function TrayLine({ row }: { row: CoolingLogRow }) {
         {row.restartedAt && <> · reheated, cooling again from {at(row.restartedAt)}</>} · 70 °F by {at(row.by70)} · 41 °F by {at(row.by41)}
       </p>
       <p className="num text-sm text-ink-soft">
-        {row.readings.length ? row.readings.map((r) => `${at(r.at)} ${bothScales(r.tempF)}`).join(' · ') : 'No temperature written down.'}
+        {row.readings.length ? readingsSaid(row.readings, row.prepDate, style).join(' · ') : 'No temperature written down.'}
       </p>
       {row.note && <p className="text-sm">Note: {row.note}</p>}
       <p className="text-sm text-ink-faint">Written down by {row.recordedBy}</p>

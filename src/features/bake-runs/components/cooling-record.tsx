@@ -3,14 +3,14 @@ import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import type { BakeRunResult, BakeTrayPlan } from '@shared/domain/bake-run-types';
-import { checkCooling, clockFrom, notWrittenDown, type CoolingCheck } from '@shared/domain/cooling';
+import { checkCooling, clockFrom, inTakenOrder, notWrittenDown, type CoolingCheck } from '@shared/domain/cooling';
 import type { CoolingRecordDto, CoolingRecordInput } from '@shared/schemas/cooling.schema';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorState, Notice } from '@/components/ui/states';
 import { coolingQuery, useClearCooling, useSaveCooling } from '../api/cooling';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
-import { currentClockStyle, currentKitchenZone, kitchenNow, kitchenToday, localHhmm, localToday, timeLabel } from '@/lib/dates';
+import { currentClockStyle, currentKitchenZone, deviceNow, kitchenNow, kitchenToday, timeLabel } from '@/lib/dates';
 import { addDays } from '@shared/domain/iso-date';
 import { clock, formatTemp, type TempUnit } from './temperature';
 import { minutesSpan } from '@shared/domain/clock';
@@ -118,7 +118,7 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
   const fieldErrors = isApiError(error, 400) ? error.fieldErrors : {};
   const readingError = Object.entries(fieldErrors).find(([k]) => k.startsWith('readings.'))?.[1]?.[0];
   const write = (change: Partial<CoolingRecordInput>, done?: () => void) => save({ ...asInput(record), ...change }, done);
-  const readings = [...record.readings].sort((a, b) => (a.at < b.at ? -1 : a.at > b.at ? 1 : 0));
+  const readings = inTakenOrder(record.readings);
   return (
     <div className="flex flex-col gap-2">
       <p className="text-base">
@@ -392,7 +392,7 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
  */
 function ElsewhereLine({ kitchen, device }: { kitchen: string; device: Date }) {
   const zone = currentKitchenZone();
-  const here = `${localToday(device)}T${localHhmm(device)}`;
+  const here = deviceNow(device);
   if (!zone || here === kitchen) return null;
   return (
     <Notice tone="info" title="This device is on another clock">
