@@ -102,6 +102,14 @@ describe('the cooling log page', () => {
     expect(asked).toEqual(['/api/cooling-log?from=2026-01-31&to=2026-02-28']);
   });
 
+  it('a date field emptied is said under it, and the page stays (it fell over writing the printed heading)', async () => {
+    answer = () => jsonResponse(log([]));
+    open('?from=&to=2026-01-31');
+    expect((await screen.findByRole('alert')).textContent).toContain('Give the first prep date as a date like 2026-12-06.');
+    expect(screen.getByLabelText('First prep day').getAttribute('aria-invalid')).toBe('true');
+    expect(asked).toEqual([]);
+  });
+
   it('shows the loading state, then an error with a way to try again', async () => {
     answer = () => jsonResponse({ status: 500, title: 'Server error', detail: 'Something went wrong on our side' }, 500);
     open();

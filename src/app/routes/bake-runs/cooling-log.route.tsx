@@ -174,10 +174,12 @@ export function Component() {
           )}
         </div>
       </Card>
-      {/* On paper: whose log, which days, and when it was printed. */}
-      <p className="hidden print:block">
-        {me.workspaceName} · prep days {dayLabel(stretch.from, true)} to {dayLabel(stretch.to, true)} · printed {dayLabel(today, true)}
-      </p>
+      {stretch.error === null && (
+        // On paper: whose log, which days, and when it was printed.
+        <p className="hidden print:block">
+          {me.workspaceName} · prep days {dayLabel(stretch.from, true)} to {dayLabel(stretch.to, true)} · printed {dayLabel(today, true)}
+        </p>
+      )}
       {stretch.error === null && (
         <QueryView
           query={log}
