@@ -68,7 +68,7 @@ export function Notice({ tone = 'info', title, children }: { tone?: Tone; title?
 
 export function PageHeader({ title, children, lead }: { title: string; lead?: ReactNode; children?: ReactNode }) {
   return (
-    <header className="mb-6 flex flex-wrap items-end justify-between gap-3">
+    <header className="flex flex-wrap items-end justify-between gap-3">
       <div>
         <h1 className="text-3xl">{title}</h1>
         {lead && <p className="mt-1 text-ink-soft">{lead}</p>}

@@ -145,7 +145,8 @@ export function Component() {
         lead="Every tray’s cooling record, prep day by prep day, whatever week it was baked for (a deleted week’s too): when it came out, the temperatures written down, and whether it reached 70 °F (21 °C) within 2 hours and 41 °F (5 °C) within 6 (FDA Food Code §3-501.14). Times are the kitchen’s clock. How long to keep a cooling log, and what it must show, is for your local food code and inspector to say."
       />
       <Card className="print:hidden">
-        <div className="flex flex-wrap items-end gap-3">
+        {/* The fields' tops line up while one says what is wrong under it; the buttons sit on the fields' line otherwise. */}
+        <div className={`flex flex-wrap gap-3 ${stretch.error === null ? 'items-end' : 'items-start'}`}>
           <TextField
             label="First prep day"
             type="date"

@@ -8,7 +8,7 @@ export function Component() {
   const create = useCreateTray();
   const navigate = useNavigate();
   return (
-    <div>
+    <div className="flex flex-col gap-6">
       <PageHeader title="New base tray" lead="One recipe, one pan, a cut plan. The numbers update as you type." />
       <TrayEditor
         busy={create.isPending}
