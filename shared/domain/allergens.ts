@@ -10,6 +10,8 @@
  * (celery, mustard, …) as dislikes; those are not part of this legal list.
  */
 
+import { andList } from './words';
+
 export const MAJOR_ALLERGENS = [
   { code: 'milk', label: 'Milk', law: 'FALCPA 2004' },
   { code: 'egg', label: 'Egg', law: 'FALCPA 2004' },
@@ -46,4 +48,17 @@ export function allergenConflicts(
   const plate = new Set(plateAllergens);
   const client = new Set(clientAllergens);
   return ALLERGEN_CODES.filter((code) => plate.has(code) && client.has(code));
+}
+
+/**
+ * What a client reads beside a plate that holds allergens on their own list, allowed by the coach for that day (the
+ * coach's reason stays with the coach): said plainly, with what to do when it was not agreed. Null when none.
+ */
+export function allowedAllergenWords(codes: readonly AllergenCode[]): { title: string; body: string } | null {
+  if (!codes.length) return null;
+  const names = codes.map((c, i) => (i === 0 ? allergenLabel(c) : allergenLabel(c).toLowerCase()));
+  return {
+    title: `${andList(names)} ${codes.length === 1 ? 'is' : 'are'} on your allergen list`,
+    body: 'Your coach chose this plate for you knowing that. If you have not agreed it with your coach, do not eat it: ask them first.',
+  };
 }

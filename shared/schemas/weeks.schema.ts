@@ -216,6 +216,11 @@ export interface MyPlateDto {
   description: string;
   macros: PlateMacrosDto;
   allergens: AllergenCode[];
+  /**
+   * Allergens on the client's own list that the plate contains, allowed by the coach on this day (an override with a
+   * reason, kept for the coach): the client is told plainly. Absent in snapshots published before it was kept.
+   */
+  allowedAllergens?: AllergenCode[];
   trays: { trayId: number; name: string; portions: number; reheatSteps: string[] }[];
   addOns: { name: string; amountText: string; unit: string; note: string }[];
   assemblySteps: string[];

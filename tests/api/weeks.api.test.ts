@@ -16,6 +16,7 @@ import {
   type Member,
 } from '../support/factories.js';
 import ICAL from 'ical.js';
+import { pdfTextOf } from '../support/pdf-text.js';
 import { sql } from '../support/db.js';
 import { cellEatBy } from '@shared/domain/week-board.js';
 import { flatWarnings } from '@shared/domain/week-check.js';
@@ -456,6 +457,35 @@ describe('publishing and the client view', () => {
     const ics = await me.agent.get('/api/weeks/mine/thaw-reminders.ics?today=2026-01-12').expect(200);
     const events = new ICAL.Component(ICAL.parse(ics.text)).getAllSubcomponents('vevent');
     expect(events.map((e) => e.getFirstPropertyValue('dtstart')?.toString().slice(0, 10))).toEqual(['2026-01-11']);
+  });
+
+  it('a plate holding an allergen on the client\'s list, allowed by the coach, is said to the client on the page and in the PDF (the reason stays with the coach)', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach, { allergens: ['milk'], fridgeDays: 7 });
+    const plain = await makeAssembly(coach, (await makeTray(coach, {}, (await makeIngredient(coach, { allergens: [] })).id)).id, { name: 'No milk plate' });
+    const reason = 'Lactose-free version, agreed with the client in writing';
+    const filled = await coach.agent
+      .put(`/api/weeks/${week.id}/cells`)
+      .send({
+        version: week.version,
+        cells: [
+          { clientId: client.id, date: DAYS[0], slot: 'breakfast', assemblyId: plate.id, allergenOverrides: [{ allergen: 'milk', reason }] },
+          { clientId: client.id, date: DAYS[1], slot: 'breakfast', assemblyId: plain.id },
+        ],
+      })
+      .expect(200);
+    await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: filled.body.week.version }).expect(200);
+    const me = await member(app, coach, 'client', { clientId: client.id });
+    const mine = (await me.agent.get('/api/weeks/mine?today=2026-01-05').expect(200)).body;
+    expect(mine.days.map((d: { plates: { allergens: string[]; allowedAllergens: string[] }[] }) => d.plates.map((p) => [p.allergens, p.allowedAllergens]))).toEqual([
+      [[['milk'], ['milk']]],
+      [[[], []]],
+    ]);
+    expect(JSON.stringify(mine)).not.toContain(reason);
+    const text = await pdfTextOf(me.agent, '/api/weeks/mine/plan.pdf?today=2026-01-05');
+    expect(text).toContain('Milk is on your allergen list. Your coach chose this plate for you knowing that.');
+    expect(text.match(/on your allergen list/g)).toHaveLength(1);
+    expect(text).not.toContain(reason);
   });
 
   it('a client reads only their own published plates; edits stay hidden until the next publication', async () => {

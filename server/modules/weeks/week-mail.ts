@@ -1,7 +1,7 @@
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { amountAndName, type MeasureSystem } from '@shared/domain/units.js';
-import { allergenLabel } from '@shared/domain/allergens.js';
+import { allergenLabel, allowedAllergenWords } from '@shared/domain/allergens.js';
 import { CAUTIONS, thawTasks } from '@shared/domain/eat-by.js';
 import { reheatGroups } from '@shared/domain/reheat.js';
 import { snapshotTitle } from '@shared/domain/week-board.js';
@@ -42,6 +42,8 @@ function plateNotes(p: MyPlateDto, order: DateOrder, system?: MeasureSystem): st
   const notes: string[] = [];
   if (p.storage === 'frozen' && p.thawOn) notes.push(`Frozen: move it from the freezer to the fridge on the evening of ${longDate(p.thawOn, order)}.`);
   if (p.allergens.length) notes.push(`Contains: ${p.allergens.map(allergenLabel).join(', ')}.`);
+  const allowed = allowedAllergenWords(p.allowedAllergens ?? []);
+  if (allowed) notes.push(`${allowed.title}. ${allowed.body}`);
   if (p.addOns.length) notes.push(`Add: ${p.addOns.map((a) => amountAndName(a.amountText, a.unit, a.name, system)).join('; ')}.`);
   return notes;
 }

@@ -6,6 +6,7 @@ import { cellKey, computeBoard, snapshotTitle, type BoardResult } from '@shared/
 import { worded } from '@shared/domain/week-check.js';
 import { pickWeek, weekAfter } from '@shared/domain/week-days.js';
 import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
+import type { AllergenCode } from '@shared/domain/allergens.js';
 import type { MyDayDto, MyPlateDto, MyWeekDto, WeekPublicationDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
 import type { BoardAnswer } from '@shared/schemas/board-answer.js';
 import { datesOf, type Actor } from '../../http/authz.js';
@@ -25,7 +26,14 @@ function sumMacros(list: PlateMacrosDto[]): PlateMacrosDto {
   return out;
 }
 
-function myPlate(plate: AssemblyDto, slot: string, eat: BoardResult['cells'][number] | undefined, date: IsoDate, prepDate: IsoDate): MyPlateDto {
+function myPlate(
+  plate: AssemblyDto,
+  slot: string,
+  eat: BoardResult['cells'][number] | undefined,
+  date: IsoDate,
+  prepDate: IsoDate,
+  overrides: readonly { allergen: AllergenCode }[],
+): MyPlateDto {
   const storage = eat?.portions[0]?.storage ?? 'fridge';
   const eatBys = (eat?.portions ?? []).map((p) => p.eatBy).sort(compareIsoDates);
   return {
@@ -34,6 +42,7 @@ function myPlate(plate: AssemblyDto, slot: string, eat: BoardResult['cells'][num
     description: plate.description,
     macros: plate.macros,
     allergens: plate.allergens,
+    allowedAllergens: plate.allergens.filter((a) => overrides.some((o) => o.allergen === a)),
     trays: plate.trays.map((t) => ({ trayId: t.trayId, name: t.trayName, portions: t.portions, reheatSteps: t.reheatSteps })),
     addOns: plate.addOns.map((a) => ({ name: a.ingredientName, amountText: a.amountText, unit: a.unit, note: a.note })),
     assemblySteps: plate.assemblySteps,
@@ -65,7 +74,7 @@ export function buildSnapshot(d: BoardData, board: BoardAnswer, result: BoardRes
             if (!plate) return [];
             plate.trays.forEach((t) => trayIds.add(t.trayId));
             const e = eat.get(cellKey(c));
-            return [myPlate(plate, c.slot, e, date, e?.portions[0]?.prepDate ?? c.prepDate ?? d.week.prepDate)];
+            return [myPlate(plate, c.slot, e, date, e?.portions[0]?.prepDate ?? c.prepDate ?? d.week.prepDate, c.allergenOverrides ?? [])];
           });
         return { date, plates: list, totals: sumMacros(list.map((p) => p.macros)) };
       })

@@ -3,6 +3,7 @@ import {
   ALLERGEN_CODES,
   MAJOR_ALLERGENS,
   allergenConflicts,
+  allowedAllergenWords,
   allergenLabel,
   isAllergenCode,
   type AllergenCode,
@@ -60,4 +61,16 @@ describe('helpers', () => {
       expect(allergenConflicts(plate, client)).toEqual(conflicts);
     },
   );
+});
+
+describe('allowedAllergenWords (what a client reads of an allergen the coach allowed)', () => {
+  it('says nothing without one', () => {
+    expect(allowedAllergenWords([])).toBeNull();
+  });
+  it('names them in a list as English writes one (ECMA-402 list format, en-US) and says what to do', () => {
+    expect(allowedAllergenWords(['milk'])?.title).toBe('Milk is on your allergen list');
+    expect(allowedAllergenWords(['milk', 'wheat'])?.title).toBe('Milk and wheat are on your allergen list');
+    expect(allowedAllergenWords(['milk', 'wheat', 'sesame'])?.title).toBe('Milk, wheat, and sesame are on your allergen list');
+    expect(allowedAllergenWords(['egg'])?.body).toBe('Your coach chose this plate for you knowing that. If you have not agreed it with your coach, do not eat it: ask them first.');
+  });
 });
