@@ -50,15 +50,36 @@ export function allergenConflicts(
   return ALLERGEN_CODES.filter((code) => plate.has(code) && client.has(code));
 }
 
+/** A note a client reads beside a plate: `stop` when they should not eat it before asking their coach. */
+export interface ClientAllergenNote {
+  tone: 'warn' | 'stop';
+  title: string;
+  body: string;
+}
+
+const listed = (codes: readonly AllergenCode[]) => andList(codes.map((c, i) => (i === 0 ? allergenLabel(c) : allergenLabel(c).toLowerCase())));
+const onTheList = (codes: readonly AllergenCode[]) => `${listed(codes)} ${codes.length === 1 ? 'is' : 'are'} on your allergen list`;
+const IF_NOT_AGREED = 'If you have not agreed it with your coach, do not eat it: ask them first.';
+
 /**
- * What a client reads beside a plate that holds allergens on their own list, allowed by the coach for that day (the
- * coach's reason stays with the coach): said plainly, with what to do when it was not agreed. Null when none.
+ * What a client reads beside a plate that holds allergens on their own list (`onList`: the plate's allergens that are
+ * on the list as it stands now), said plainly with what to do. `allowed`: the allergens the coach allowed on that
+ * plate when the week was published (the coach's reason stays with the coach); undefined for a plan published before
+ * they were kept, when all that can be said is to check. One on the list now that the coach did not allow was added to
+ * the list after the plan was published (a conflict cannot be published): the client is told not to eat it.
  */
-export function allowedAllergenWords(codes: readonly AllergenCode[]): { title: string; body: string } | null {
-  if (!codes.length) return null;
-  const names = codes.map((c, i) => (i === 0 ? allergenLabel(c) : allergenLabel(c).toLowerCase()));
-  return {
-    title: `${andList(names)} ${codes.length === 1 ? 'is' : 'are'} on your allergen list`,
-    body: 'Your coach chose this plate for you knowing that. If you have not agreed it with your coach, do not eat it: ask them first.',
-  };
+export function clientAllergenNotes(onList: readonly AllergenCode[], allowed: readonly AllergenCode[] | undefined): ClientAllergenNote[] {
+  if (!onList.length) return [];
+  if (allowed === undefined) return [{ tone: 'warn', title: onTheList(onList), body: IF_NOT_AGREED }];
+  const ok = onList.filter((a) => allowed.includes(a));
+  const not = onList.filter((a) => !allowed.includes(a));
+  const notes: ClientAllergenNote[] = [];
+  if (not.length)
+    notes.push({
+      tone: 'stop',
+      title: `${onTheList(not)}, and this plate has ${not.length === 1 ? 'it' : 'them'}`,
+      body: `Your coach planned this plate before ${not.length === 1 ? 'it was' : 'they were'} on your list. Do not eat it: ask your coach first.`,
+    });
+  if (ok.length) notes.push({ tone: 'warn', title: onTheList(ok), body: `Your coach chose this plate for you knowing that. ${IF_NOT_AGREED}` });
+  return notes;
 }

@@ -221,6 +221,8 @@ export interface MyPlateDto {
    * reason, kept for the coach): the client is told plainly. Absent in snapshots published before it was kept.
    */
   allowedAllergens?: AllergenCode[];
+  /** The plate's allergens on the client's list as it stands when read (not stored: the list can change after publishing). */
+  onYourList?: AllergenCode[];
   trays: { trayId: number; name: string; portions: number; reheatSteps: string[] }[];
   addOns: { name: string; amountText: string; unit: string; note: string }[];
   assemblySteps: string[];

@@ -476,16 +476,40 @@ describe('publishing and the client view', () => {
       .expect(200);
     await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: filled.body.week.version }).expect(200);
     const me = await member(app, coach, 'client', { clientId: client.id });
-    const mine = (await me.agent.get('/api/weeks/mine?today=2026-01-05').expect(200)).body;
-    expect(mine.days.map((d: { plates: { allergens: string[]; allowedAllergens: string[] }[] }) => d.plates.map((p) => [p.allergens, p.allowedAllergens]))).toEqual([
-      [[['milk'], ['milk']]],
-      [[[], []]],
+    type Plates = { plates: { allergens: string[]; allowedAllergens: string[]; onYourList: string[] }[] }[];
+    const read = async () => (await me.agent.get('/api/weeks/mine?today=2026-01-05').expect(200)).body as { days: Plates };
+    const mine = await read();
+    expect(mine.days.map((d) => d.plates.map((p) => [p.allergens, p.allowedAllergens, p.onYourList]))).toEqual([
+      [[['milk'], ['milk'], ['milk']]],
+      [[[], [], []]],
     ]);
     expect(JSON.stringify(mine)).not.toContain(reason);
     const text = await pdfTextOf(me.agent, '/api/weeks/mine/plan.pdf?today=2026-01-05');
     expect(text).toContain('Milk is on your allergen list. Your coach chose this plate for you knowing that.');
     expect(text.match(/on your allergen list/g)).toHaveLength(1);
     expect(text).not.toContain(reason);
+
+    // Milk taken off the client's list after publishing: nothing more is said; put back with soy: said again.
+    const profile = (await coach.agent.get(`/api/clients/${client.id}`).expect(200)).body;
+    const off = (await coach.agent.patch(`/api/clients/${client.id}`).send({ allergens: [], version: profile.version }).expect(200)).body;
+    expect((await read()).days[0].plates[0].onYourList).toEqual([]);
+    expect(await pdfTextOf(me.agent, '/api/weeks/mine/plan.pdf?today=2026-01-05')).not.toContain('on your allergen list');
+    await coach.agent.patch(`/api/clients/${client.id}`).send({ allergens: ['milk', 'soy'], version: off.version }).expect(200);
+    expect((await read()).days[0].plates[0].onYourList).toEqual(['milk']);
+  });
+
+  it('an allergen put on the client\'s list after the week was published: the plate holding it says not to eat it before asking', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach, { fridgeDays: 7 });
+    const filled = await fillWeek(coach, week.id, week.version, client.id, plate.id, [DAYS[0]]);
+    await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: filled.body.week.version }).expect(200);
+    const profile = (await coach.agent.get(`/api/clients/${client.id}`).expect(200)).body;
+    await coach.agent.patch(`/api/clients/${client.id}`).send({ allergens: ['milk'], version: profile.version }).expect(200);
+    const me = await member(app, coach, 'client', { clientId: client.id });
+    const mine = (await me.agent.get('/api/weeks/mine?today=2026-01-05').expect(200)).body;
+    expect(mine.days[0].plates[0]).toMatchObject({ allergens: ['milk'], allowedAllergens: [], onYourList: ['milk'] });
+    const text = await pdfTextOf(me.agent, '/api/weeks/mine/plan.pdf?today=2026-01-05');
+    expect(text).toContain('Milk is on your allergen list, and this plate has it. Your coach planned this plate before it was on your list. Do not eat it: ask your coach first.');
   });
 
   it('a client reads only their own published plates; edits stay hidden until the next publication', async () => {

@@ -24,25 +24,34 @@ function show(body: unknown) {
 
 describe("a plate holding an allergen on the client's own list", () => {
   it('says so beside the plate, with what to do when it was not agreed', async () => {
-    show(week(plate('Spinach-feta wrap', { allergens: ['milk', 'egg', 'wheat'], allowedAllergens: ['milk', 'wheat'] })));
+    show(week(plate('Spinach-feta wrap', { allergens: ['milk', 'egg', 'wheat'], allowedAllergens: ['milk', 'wheat'], onYourList: ['milk', 'wheat'] })));
     await screen.findByRole('heading', { level: 2, name: 'Spinach-feta wrap' });
     expect(screen.getByText('Contains: Milk, Egg, Wheat')).toBeTruthy();
     const note = screen.getAllByRole('note').find((n) => n.textContent?.includes('on your allergen list'));
     expect(note?.textContent).toContain('Milk and wheat are on your allergen list');
     expect(note?.textContent).toContain('If you have not agreed it with your coach, do not eat it: ask them first.');
+    expect(screen.queryByRole('alert')).toBeNull();
+  });
+
+  it('put on their list after the week was published: an alert not to eat it before asking', async () => {
+    show(week(plate('Spinach-feta wrap', { allergens: ['milk', 'egg'], allowedAllergens: [], onYourList: ['egg'] })));
+    await screen.findByRole('heading', { level: 2, name: 'Spinach-feta wrap' });
+    const alert = screen.getByRole('alert');
+    expect(alert.textContent).toContain('Egg is on your allergen list, and this plate has it');
+    expect(alert.textContent).toContain('Do not eat it: ask your coach first.');
   });
 
   it('says nothing more of a plate without one', async () => {
-    show(week(plate('Egg slab', { allergens: ['egg'], allowedAllergens: [] })));
+    show(week(plate('Egg slab', { allergens: ['egg'], allowedAllergens: [], onYourList: [] })));
     await screen.findByRole('heading', { level: 2, name: 'Egg slab' });
     expect(screen.queryByText(/on your allergen list/)).toBeNull();
   });
 
-  it('reads a snapshot without the field as none', async () => {
-    show(week(plate('Egg slab', { allergens: ['egg'] })));
+  it('a plan published before the allowed ones were kept: only to check', async () => {
+    show(week(plate('Egg slab', { allergens: ['egg'], onYourList: ['egg'] })));
     await screen.findByRole('heading', { level: 2, name: 'Egg slab' });
-    expect(screen.getByText('Contains: Egg')).toBeTruthy();
-    expect(screen.queryByText(/on your allergen list/)).toBeNull();
+    const note = screen.getAllByRole('note').find((n) => n.textContent?.includes('on your allergen list'));
+    expect(note?.textContent).toBe('⚠Egg is on your allergen listIf you have not agreed it with your coach, do not eat it: ask them first.');
   });
 });
 

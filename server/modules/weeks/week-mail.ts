@@ -1,7 +1,7 @@
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { amountAndName, type MeasureSystem } from '@shared/domain/units.js';
-import { allergenLabel, allowedAllergenWords } from '@shared/domain/allergens.js';
+import { allergenLabel, clientAllergenNotes } from '@shared/domain/allergens.js';
 import { CAUTIONS, thawTasks } from '@shared/domain/eat-by.js';
 import { reheatGroups } from '@shared/domain/reheat.js';
 import { snapshotTitle } from '@shared/domain/week-board.js';
@@ -18,6 +18,7 @@ import { mealSlotsOf } from '../clients/client.service.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { Membership } from '../auth/user.entity.js';
 import { Week, WeekPublication } from './week.entity.js';
+import { withYourList } from './week-publish.service.js';
 
 /**
  * The week-plan PDF: one client's days from a PUBLISHED snapshot (what the client reads on "my plates"), never
@@ -42,8 +43,7 @@ function plateNotes(p: MyPlateDto, order: DateOrder, system?: MeasureSystem): st
   const notes: string[] = [];
   if (p.storage === 'frozen' && p.thawOn) notes.push(`Frozen: move it from the freezer to the fridge on the evening of ${longDate(p.thawOn, order)}.`);
   if (p.allergens.length) notes.push(`Contains: ${p.allergens.map(allergenLabel).join(', ')}.`);
-  const allowed = allowedAllergenWords(p.allowedAllergens ?? []);
-  if (allowed) notes.push(`${allowed.title}. ${allowed.body}`);
+  for (const n of clientAllergenNotes(p.onYourList ?? [], p.allowedAllergens)) notes.push(`${n.title}. ${n.body}`);
   if (p.addOns.length) notes.push(`Add: ${p.addOns.map((a) => amountAndName(a.amountText, a.unit, a.name, system)).join('; ')}.`);
   return notes;
 }
@@ -120,7 +120,7 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
       dateOrder: toDateOrder(ws.dateOrder),
       targets: { kcal: t.targetKcal, fatG: t.fatG, proteinG: t.proteinG, netCarbsG: t.netCarbCapG },
       targetsCover: targetsCover(client, slots),
-      days: pdfDays(mine.days, client.householdMultiplier, toDateOrder(ws.dateOrder), system),
+      days: pdfDays(withYourList(mine.days, client.allergens), client.householdMultiplier, toDateOrder(ws.dateOrder), system),
       note: p.note ?? null,
       cautions: CAUTIONS.map((c) => ({ text: c.text, source: c.source })),
     },

@@ -12,6 +12,7 @@ import type { BoardAnswer } from '@shared/schemas/board-answer.js';
 import { datesOf, type Actor } from '../../http/authz.js';
 import { Conflict, StaleEdit } from '../../http/errors.js';
 import { AssemblyItem } from '../assemblies/assembly.entity.js';
+import { Client } from '../clients/client.entity.js';
 import { Week, WeekPublication, WeekTray, type IWeek, type IWeekPublication } from './week.entity.js';
 import { boardInput, findWeek, getBoard, loadBoardData, presentBoard, prepDatesOf, type BoardData } from './week-board.service.js';
 import { todayIso } from './week.service.js';
@@ -150,19 +151,26 @@ async function latestPublications(em: EntityManager, workspaceId: number, limit:
 }
 
 /** The client's published week: the one covering `today`, else the next, else the latest. Null when none. */
+/** A client's published days with each plate's allergens that are on their list as it stands now (`onYourList`). */
+export function withYourList(days: readonly MyDayDto[], list: readonly string[]): MyDayDto[] {
+  return days.map((d) => ({ ...d, plates: d.plates.map((p) => ({ ...p, onYourList: p.allergens.filter((a) => list.includes(a)) })) }));
+}
+
 export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<MyWeekDto | null> {
   if (actor.clientId === null) return null;
   const weeks = await em.find(Week, { workspace: actor.workspaceId, publishedVersion: { $ne: null } }, { fields: ['id', 'startDate', 'publishedVersion'] });
   const current = pickWeek(weeks, today);
   if (!current) return null;
   const after = weekAfter(weeks, current);
-  const [pub, nextPub] = await Promise.all([
+  const [pub, nextPub, client] = await Promise.all([
     em.findOne(WeekPublication, { week: current.id, number: current.publishedVersion! }),
     after ? em.findOne(WeekPublication, { week: after.id, number: after.publishedVersion! }) : null,
+    em.findOne(Client, { id: actor.clientId, workspace: actor.workspaceId }, { fields: ['allergens'] }),
   ]);
   if (!pub) return null;
+  const list = client?.allergens ?? [];
   const mine = pub.snapshot.clients[String(actor.clientId)];
-  const nextDays = nextPub?.snapshot.clients[String(actor.clientId)]?.days ?? [];
+  const nextDays = withYourList(nextPub?.snapshot.clients[String(actor.clientId)]?.days ?? [], list);
   return {
     weekId: current.id,
     name: snapshotTitle(pub.snapshot, datesOf(actor)),
@@ -170,7 +178,7 @@ export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = t
     publishedAt: pub.publishedAt.toISOString(),
     startDate: pub.snapshot.startDate,
     endDate: pub.snapshot.endDate,
-    days: mine?.days ?? [],
+    days: withYourList(mine?.days ?? [], list),
     next:
       nextPub && nextDays.length
         ? {

@@ -3,7 +3,7 @@ import {
   ALLERGEN_CODES,
   MAJOR_ALLERGENS,
   allergenConflicts,
-  allowedAllergenWords,
+  clientAllergenNotes,
   allergenLabel,
   isAllergenCode,
   type AllergenCode,
@@ -63,14 +63,29 @@ describe('helpers', () => {
   );
 });
 
-describe('allowedAllergenWords (what a client reads of an allergen the coach allowed)', () => {
+describe('clientAllergenNotes (what a client reads of the allergens on their list that a plate holds)', () => {
+  const NOT_AGREED = 'If you have not agreed it with your coach, do not eat it: ask them first.';
   it('says nothing without one', () => {
-    expect(allowedAllergenWords([])).toBeNull();
+    expect(clientAllergenNotes([], ['milk'])).toEqual([]);
+    expect(clientAllergenNotes([], undefined)).toEqual([]);
   });
-  it('names them in a list as English writes one (ECMA-402 list format, en-US) and says what to do', () => {
-    expect(allowedAllergenWords(['milk'])?.title).toBe('Milk is on your allergen list');
-    expect(allowedAllergenWords(['milk', 'wheat'])?.title).toBe('Milk and wheat are on your allergen list');
-    expect(allowedAllergenWords(['milk', 'wheat', 'sesame'])?.title).toBe('Milk, wheat, and sesame are on your allergen list');
-    expect(allowedAllergenWords(['egg'])?.body).toBe('Your coach chose this plate for you knowing that. If you have not agreed it with your coach, do not eat it: ask them first.');
+  it('allowed by the coach: names them in a list as English writes one (ECMA-402 list format, en-US) and says what to do', () => {
+    expect(clientAllergenNotes(['milk'], ['milk'])).toEqual([
+      { tone: 'warn', title: 'Milk is on your allergen list', body: `Your coach chose this plate for you knowing that. ${NOT_AGREED}` },
+    ]);
+    expect(clientAllergenNotes(['milk', 'wheat'], ['milk', 'wheat'])[0].title).toBe('Milk and wheat are on your allergen list');
+    expect(clientAllergenNotes(['milk', 'wheat', 'sesame'], ['milk', 'wheat', 'sesame'])[0].title).toBe('Milk, wheat, and sesame are on your allergen list');
+  });
+  it('on the list and not allowed (added to the list after the plan was published): not to be eaten before asking, said first', () => {
+    expect(clientAllergenNotes(['milk', 'egg'], ['milk'])).toEqual([
+      { tone: 'stop', title: 'Egg is on your allergen list, and this plate has it', body: 'Your coach planned this plate before it was on your list. Do not eat it: ask your coach first.' },
+      { tone: 'warn', title: 'Milk is on your allergen list', body: `Your coach chose this plate for you knowing that. ${NOT_AGREED}` },
+    ]);
+    expect(clientAllergenNotes(['egg', 'soy'], [])).toEqual([
+      { tone: 'stop', title: 'Egg and soy are on your allergen list, and this plate has them', body: 'Your coach planned this plate before they were on your list. Do not eat it: ask your coach first.' },
+    ]);
+  });
+  it('a plan published before the allowed ones were kept: only to check', () => {
+    expect(clientAllergenNotes(['egg'], undefined)).toEqual([{ tone: 'warn', title: 'Egg is on your allergen list', body: NOT_AGREED }]);
   });
 });

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { allergenLabel, allowedAllergenWords } from '@shared/domain/allergens';
+import { allergenLabel, clientAllergenNotes } from '@shared/domain/allergens';
 import { REHEAT_MIN_C, REHEAT_MIN_F, thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
 import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
@@ -33,10 +33,13 @@ function Macros({ m }: { m: MyPlateDto['macros'] }) {
   );
 }
 
-/** An allergen on the client's own list that the coach allowed on this plate: said, with what to do if not agreed. */
-function AllowedAllergens({ codes }: { codes: MyPlateDto['allergens'] }) {
-  const words = allowedAllergenWords(codes);
-  return words && <Notice tone="warn" title={words.title}>{words.body}</Notice>;
+/** The plate's allergens on the client's own list: said, with what to do. */
+function YourAllergens({ plate }: { plate: MyPlateDto }) {
+  return clientAllergenNotes(plate.onYourList ?? [], plate.allowedAllergens).map((n) => (
+    <Notice key={n.tone} tone={n.tone === 'stop' ? 'block' : 'warn'} title={n.title}>
+      {n.body}
+    </Notice>
+  ));
 }
 
 function PlateCard({ plate }: { plate: MyPlateDto }) {
@@ -48,7 +51,7 @@ function PlateCard({ plate }: { plate: MyPlateDto }) {
       {plate.description && <p className="text-ink-soft">{plate.description}</p>}
       <Macros m={plate.macros} />
       {plate.allergens.length > 0 && <p className="text-sm">Contains: {plate.allergens.map(allergenLabel).join(', ')}</p>}
-      <AllowedAllergens codes={plate.allowedAllergens ?? []} />
+      <YourAllergens plate={plate} />
       {plate.storage === 'frozen' ? (
         <Notice tone="cold" title={`Frozen portion: move it to the fridge on the evening of ${plate.thawOn ? dayLabel(plate.thawOn, true) : 'the day before'}`}>
           Thaw in the refrigerator, never on the counter.
