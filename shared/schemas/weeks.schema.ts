@@ -235,6 +235,18 @@ export interface MyPlateDto {
   prepDate: IsoDate;
 }
 
+/**
+ * GET /api/clients/:id/published-allergens: the plates of published weeks, from today on, that hold an allergen on
+ * the client's list as it stands and that the coach did not allow when publishing (the list changed after). The
+ * client's phone and plan PDF tell them not to eat these; the coach changes them on the board and publishes again.
+ */
+export interface PublishedAllergenWeekDto {
+  weekId: number;
+  weekName: string;
+  publishedVersion: number;
+  plates: { date: IsoDate; slot: string; name: string; allergens: AllergenCode[] }[];
+}
+
 export interface MyDayDto {
   date: IsoDate;
   plates: MyPlateDto[];

@@ -512,6 +512,47 @@ describe('publishing and the client view', () => {
     expect(text).toContain('Milk is on your allergen list, and this plate has it. Your coach planned this plate before it was on your list. Do not eat it: ask your coach first.');
   });
 
+  it('the coach reads which published plates, from today on, hold an allergen put on the client\'s list after publishing', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach, { fridgeDays: 7 });
+    const plain = await makeAssembly(coach, (await makeTray(coach, {}, (await makeIngredient(coach, { allergens: [] })).id)).id, { name: 'No milk plate' });
+    const cells = [
+      { clientId: client.id, date: DAYS[0], slot: 'breakfast', assemblyId: plate.id },
+      { clientId: client.id, date: DAYS[1], slot: 'breakfast', assemblyId: plain.id },
+      { clientId: client.id, date: DAYS[2], slot: 'breakfast', assemblyId: plate.id },
+    ];
+    const filled = await coach.agent.put(`/api/weeks/${week.id}/cells`).send({ version: week.version, cells }).expect(200);
+    await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: filled.body.week.version }).expect(200);
+    const clash = (today: string) => coach.agent.get(`/api/clients/${client.id}/published-allergens?today=${today}`);
+    // Nothing on the list: nothing to say.
+    expect((await clash(DAYS[0]).expect(200)).body).toEqual([]);
+    const profile = (await coach.agent.get(`/api/clients/${client.id}`).expect(200)).body;
+    const changed = (await coach.agent.patch(`/api/clients/${client.id}`).send({ allergens: ['milk'], version: profile.version }).expect(200)).body;
+    const milk = (date: string) => ({ date, slot: 'breakfast', name: plate.name, allergens: ['milk'] });
+    expect((await clash(DAYS[0]).expect(200)).body).toEqual([{ weekId: week.id, weekName: 'Week of Mon, Jan 5', publishedVersion: 1, plates: [milk(DAYS[0]), milk(DAYS[2])] }]);
+    // From Wednesday on, Monday's plate is eaten: only Wednesday's is left; after the week, none.
+    expect((await clash(DAYS[2]).expect(200)).body[0].plates).toEqual([milk(DAYS[2])]);
+    expect((await clash('2026-01-12').expect(200)).body).toEqual([]);
+    // Published again with Monday's allowed and Wednesday's changed: nothing left.
+    const board = (await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body;
+    const fixed = await coach.agent
+      .put(`/api/weeks/${week.id}/cells`)
+      .send({
+        version: board.week.version,
+        cells: [
+          { ...cells[0], allergenOverrides: [{ allergen: 'milk', reason: 'Lactose-free version agreed with the client' }] },
+          { ...cells[2], assemblyId: plain.id },
+        ],
+      })
+      .expect(200);
+    await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: fixed.body.week.version }).expect(200);
+    expect((await clash(DAYS[0]).expect(200)).body).toEqual([]);
+    expect(changed.allergens).toEqual(['milk']);
+    // A bad day is named; another workspace's coach finds no such client.
+    expect((await clash('someday').expect(400)).body.errors.today).toBeDefined();
+    await (await coachWorkspace(app)).agent.get(`/api/clients/${client.id}/published-allergens`).expect(404);
+  });
+
   it('a client reads only their own published plates; edits stay hidden until the next publication', async () => {
     const coach = await coachWorkspace(app);
     const { tray, plate, client, week } = await setup(coach, { fridgeDays: 7 });

@@ -39,6 +39,7 @@ describe('archiving a client from their profile', () => {
         const method = init?.method ?? 'GET';
         calls.push({ method, url, body: init?.body ? JSON.parse(String(init.body)) : undefined });
         if (url.includes('/deliveries')) return jsonResponse({ clientId: 7, items: [] });
+        if (url.includes('/published-allergens')) return jsonResponse([]);
         if (method === 'PATCH') current = archived;
         return jsonResponse(current);
       }),
@@ -53,7 +54,7 @@ describe('archiving a client from their profile', () => {
   });
 
   it('does nothing when the coach changes their mind', async () => {
-    const fetchMock = vi.fn(async (url: string, _init?: RequestInit) => (url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : jsonResponse(profile())));
+    const fetchMock = vi.fn(async (url: string, _init?: RequestInit) => (url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : url.includes('/published-allergens') ? jsonResponse([]) : jsonResponse(profile())));
     vi.stubGlobal('confirm', vi.fn(() => false));
     vi.stubGlobal('fetch', fetchMock);
     renderProfile();
@@ -64,9 +65,51 @@ describe('archiving a client from their profile', () => {
 
   it('says an archived client with an account can still sign in, and where to end that', async () => {
     const archived = profile({ archivedAt: '2026-12-02T10:00:00.000Z', account: { email: 'olga@example.test', name: 'Olga Paused' } });
-    vi.stubGlobal('fetch', vi.fn(async (url: string) => (url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : jsonResponse(archived))));
+    vi.stubGlobal('fetch', vi.fn(async (url: string) => (url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : url.includes('/published-allergens') ? jsonResponse([]) : jsonResponse(archived))));
     renderProfile();
     expect(await screen.findByText(/Olga Paused can still sign in \(olga@example\.test\) and see the weeks they are on/)).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Team page' }).getAttribute('href')).toBe('/team');
+  });
+});
+
+describe('published plates holding an allergen now on the client\'s list', () => {
+  const answer = (allergens: unknown) =>
+    vi.fn(async (url: string) =>
+      url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : url.includes('/published-allergens') ? allergens : jsonResponse(profile({ allergens: ['egg'] })),
+    );
+
+  it('names each plate, its day and allergen, with the way to its week, and says what to do', async () => {
+    const fetchMock = answer(
+      jsonResponse([
+        {
+          weekId: 4, weekName: 'Week of Mon, Jan 12', publishedVersion: 2,
+          plates: [
+            { date: '2026-01-13', slot: 'breakfast', name: 'Egg slab wrap', allergens: ['egg'] },
+            { date: '2026-01-15', slot: 'lunch', name: 'Chive squares', allergens: ['egg', 'milk'] },
+          ],
+        },
+      ]),
+    );
+    vi.stubGlobal('fetch', fetchMock);
+    renderProfile();
+    const alert = await screen.findByText('2 published plates from today on hold an allergen now on Olga Paused’s list');
+    const box = alert.closest('[role="alert"]') as HTMLElement;
+    expect(box.textContent).toContain('breakfast: Egg slab wrap (Egg)');
+    expect(box.textContent).toContain('lunch: Chive squares (Egg and Milk)');
+    expect(box.textContent).toContain('Change them on the week board, or allow the allergen there with a reason, then publish again.');
+    expect(screen.getByRole('link', { name: 'Week of Mon, Jan 12' }).getAttribute('href')).toBe('/weeks/4');
+    expect(fetchMock.mock.calls.some(([url]) => /^\/api\/clients\/7\/published-allergens\?today=\d{4}-\d{2}-\d{2}$/.test(url))).toBe(true);
+  });
+
+  it('says nothing when there are none, and offers to check again when the check fails', async () => {
+    vi.stubGlobal('fetch', answer(jsonResponse([])));
+    renderProfile();
+    await screen.findByRole('button', { name: 'Archive' });
+    expect(screen.queryByText(/published plate/)).toBeNull();
+    vi.unstubAllGlobals();
+    vi.stubGlobal('fetch', answer(jsonResponse({ title: 'Server error' }, 500)));
+    renderProfile();
+    expect(await screen.findByText('Could not check the published weeks against this client’s allergens')).toBeTruthy();
+    expect(screen.getByRole('button', { name: 'Check again' })).toBeTruthy();
   });
 });

@@ -106,6 +106,10 @@ export const MATRIX: Record<string, MatrixRow> = {
     path: (ctx) => `/api/clients/${ctx.ids.client}`,
     crossWorkspace: true,
   }),
+  'GET /api/clients/:id/published-allergens': R(['coach'], {
+    path: (ctx) => `/api/clients/${ctx.ids.client}/published-allergens`,
+    crossWorkspace: true,
+  }),
   'PATCH /api/clients/:id': R(['coach'], {
     path: (ctx) => `/api/clients/${ctx.ids.client}`,
     body: () => ({ version: 1, name: 'Matrix client' }),

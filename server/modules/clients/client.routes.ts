@@ -4,6 +4,8 @@ import { actorOf, allow } from '../../http/authz.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import * as clients from './client.service.js';
+import { todayQuery } from '@shared/schemas/weeks.schema.js';
+import { publishedAllergens } from '../weeks/week-publish.service.js';
 
 export function clientRoutes() {
   const r = Router();
@@ -26,6 +28,13 @@ export function clientRoutes() {
   );
 
   // A client reads their own profile (no health notes); any other id is "not found".
+  // Coach: published plates holding an allergen put on the client's list after publishing.
+  r.get(
+    '/clients/:id/published-allergens',
+    allow('coach'),
+    validated({ params: clientIdParams, query: todayQuery }, ({ params, query }, req) => publishedAllergens(emOf(req), actorOf(req), params.id, query.today)),
+  );
+
   r.get(
     '/clients/:id',
     allow('coach', 'client'),

@@ -7,12 +7,13 @@ import { worded } from '@shared/domain/week-check.js';
 import { pickWeek, weekAfter } from '@shared/domain/week-days.js';
 import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
 import type { AllergenCode } from '@shared/domain/allergens.js';
-import type { MyDayDto, MyPlateDto, MyWeekDto, WeekPublicationDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
+import type { MyDayDto, MyPlateDto, MyWeekDto, PublishedAllergenWeekDto, WeekPublicationDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
 import type { BoardAnswer } from '@shared/schemas/board-answer.js';
 import { datesOf, type Actor } from '../../http/authz.js';
 import { Conflict, StaleEdit } from '../../http/errors.js';
 import { AssemblyItem } from '../assemblies/assembly.entity.js';
 import { Client } from '../clients/client.entity.js';
+import { findClient } from '../clients/client.service.js';
 import { Week, WeekPublication, WeekTray, type IWeek, type IWeekPublication } from './week.entity.js';
 import { boardInput, findWeek, getBoard, loadBoardData, presentBoard, prepDatesOf, type BoardData } from './week-board.service.js';
 import { todayIso } from './week.service.js';
@@ -150,11 +151,45 @@ async function latestPublications(em: EntityManager, workspaceId: number, limit:
   return weeks.filter((w) => byWeek.has(w.id)).map((w) => ({ week: w, pub: byWeek.get(w.id)! }));
 }
 
-/** The client's published week: the one covering `today`, else the next, else the latest. Null when none. */
 /** A client's published days with each plate's allergens that are on their list as it stands now (`onYourList`). */
 export function withYourList(days: readonly MyDayDto[], list: readonly string[]): MyDayDto[] {
   return days.map((d) => ({ ...d, plates: d.plates.map((p) => ({ ...p, onYourList: p.allergens.filter((a) => list.includes(a)) })) }));
 }
+
+/**
+ * The plates of the client's published weeks, from `today` on, holding an allergen on their list now that the coach
+ * did not allow when publishing (PublishedAllergenWeekDto). A plan published before the allowed ones were kept is
+ * left out: what was allowed in it cannot be told (the client's page asks them to check).
+ */
+export async function publishedAllergens(em: EntityManager, actor: Actor, clientId: number, today: IsoDate = todayIso()): Promise<PublishedAllergenWeekDto[]> {
+  const client = await findClient(em, actor, clientId);
+  const list = client.allergens;
+  if (!list.length) return [];
+  const weeks = await em.find(
+    Week,
+    { workspace: actor.workspaceId, publishedVersion: { $ne: null }, startDate: { $gte: addDays(today, -6) } },
+    { fields: ['id', 'startDate', 'publishedVersion'], orderBy: { startDate: 'asc', id: 'asc' } },
+  );
+  if (!weeks.length) return [];
+  const pubs = await em.find(WeekPublication, { $or: weeks.map((w) => ({ week: w.id, number: w.publishedVersion! })) });
+  const order = datesOf(actor);
+  return weeks.flatMap((w) => {
+    const pub = pubs.find((p) => p.week.id === w.id);
+    const days = pub?.snapshot.clients[String(clientId)]?.days ?? [];
+    const plates = days
+      .filter((d) => compareIsoDates(d.date, today) >= 0)
+      .flatMap((d) =>
+        d.plates.flatMap((p) => {
+          if (p.allowedAllergens === undefined) return [];
+          const allergens = p.allergens.filter((a) => list.includes(a) && !p.allowedAllergens!.includes(a));
+          return allergens.length ? [{ date: d.date, slot: p.slot, name: p.name, allergens }] : [];
+        }),
+      );
+    return pub && plates.length ? [{ weekId: w.id, weekName: snapshotTitle(pub.snapshot, order), publishedVersion: pub.number, plates }] : [];
+  });
+}
+
+/** The client's published week: the one covering `today`, else the next, else the latest. Null when none. */
 
 export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<MyWeekDto | null> {
   if (actor.clientId === null) return null;

@@ -5,6 +5,7 @@ import type { ClientDto } from '@shared/schemas/clients.schema';
 import { clientQuery } from '@/features/clients/api/clients.queries';
 import { useDeleteClient, useInviteClient, useUpdateClient } from '@/features/clients/api/use-client-mutations';
 import { ClientForm, clientToInput } from '@/features/clients/components/client-form';
+import { PublishedAllergens } from '@/features/clients/components/published-allergens';
 import { DeliveryLog } from '@/features/mail/components/delivery-log';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -164,6 +165,7 @@ export function Component() {
           {archiveError}
         </Notice>
       )}
+      <PublishedAllergens clientId={client.id} name={client.name} />
       <DemoNotice>An invented demo client: measurements, targets and notes are made up and are not advice.</DemoNotice>
       {stale && (
         <Notice tone="warn" title="Someone else changed this profile">

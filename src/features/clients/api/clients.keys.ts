@@ -5,4 +5,6 @@ export const clientKeys = {
   list: () => [...clientKeys.lists()] as const,
   details: () => [...clientKeys.all, 'detail'] as const,
   detail: (id: number) => [...clientKeys.details(), id] as const,
+  /** Published plates holding an allergen on the client's list as it stands (under the detail: a change refetches it). */
+  publishedAllergens: (id: number) => [...clientKeys.detail(id), 'published-allergens'] as const,
 };

@@ -23,7 +23,7 @@ export function useUpdateClient(id: number) {
     meta: { form: true },
     onSuccess: (c) => {
       qc.setQueryData(clientKeys.detail(id), c);
-      return qc.invalidateQueries({ queryKey: clientKeys.lists() });
+      return Promise.all([qc.invalidateQueries({ queryKey: clientKeys.lists() }), qc.invalidateQueries({ queryKey: clientKeys.publishedAllergens(id) })]);
     },
   });
 }

@@ -1,0 +1,53 @@
+import { Link } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import { allergenLabel } from '@shared/domain/allergens';
+import { andList } from '@shared/domain/words';
+import { publishedAllergensQuery } from '@/features/clients/api/clients.queries';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/states';
+import { dayLabel, kitchenToday } from '@/lib/dates';
+import { counted } from '@/lib/words';
+import { paths } from '@/config/paths';
+
+/**
+ * On a client's profile: the published plates, from today on, that hold an allergen put on the client's list after
+ * the week was published (a published week is what the client reads until the next publication). Says nothing while
+ * it loads or when there are none; a failed check says so, with a retry.
+ */
+export function PublishedAllergens({ clientId, name }: { clientId: number; name: string }) {
+  const q = useQuery(publishedAllergensQuery(clientId, kitchenToday()));
+  if (q.isError)
+    return (
+      <Notice tone="warn" title="Could not check the published weeks against this client’s allergens">
+        <Button variant="secondary" onClick={() => void q.refetch()}>
+          Check again
+        </Button>
+      </Notice>
+    );
+  const weeks = q.data ?? [];
+  const count = weeks.reduce((n, w) => n + w.plates.length, 0);
+  if (!count) return null;
+  return (
+    <Notice tone="block" title={`${counted(count, 'published plate')} from today on ${count === 1 ? 'holds' : 'hold'} an allergen now on ${name}’s list`}>
+      {weeks.map((w) => (
+        <div key={w.weekId} className="mt-2">
+          <Link to={paths.week(w.weekId)} className="font-bold underline">
+            {w.weekName}
+          </Link>{' '}
+          (published version {w.publishedVersion})
+          <ul className="list-disc pl-5">
+            {w.plates.map((p) => (
+              <li key={`${p.date}|${p.slot}`}>
+                {dayLabel(p.date)}, {p.slot.toLowerCase()}: {p.name} ({andList(p.allergens.map(allergenLabel))})
+              </li>
+            ))}
+          </ul>
+        </div>
+      ))}
+      <p className="mt-2">
+        They were published before it was on the list. {name}’s phone and plan PDF say not to eat them before asking you. Change them on the week
+        board, or allow the allergen there with a reason, then publish again.
+      </p>
+    </Notice>
+  );
+}
