@@ -1,17 +1,9 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, within } from '@testing-library/react';
-import { Component as MyPlates } from '@/app/routes/my/my-plates.route';
-import { jsonResponse, queryClientFor, renderInApp, signedIn } from './render';
 import { dayLabel } from '@/lib/dates';
+import { day, plate, showMyPlates } from './my-plates-fixtures';
 
 // A client's plates on the last evening of a week, with next week published: invented plates and numbers.
-const client = signedIn({ role: 'client', clientId: 3, email: 'dana@example.test', name: 'Dana' });
-const macros = { kcal: 420, fatG: 33, proteinG: 24, carbsG: 6, fiberG: 2, netCarbsG: 4 };
-const plate = (name: string, over: Record<string, unknown> = {}) => ({
-  slot: 'breakfast', name, description: '', macros, allergens: [], trays: [], addOns: [], assemblySteps: [], reheatSteps: [],
-  eatBy: '2026-01-14', storage: 'fridge', thawOn: null, prepDate: '2026-01-11', ...over,
-});
-const day = (date: string, ...plates: ReturnType<typeof plate>[]) => ({ date, plates, totals: macros });
 const week = (next: unknown, days = [day('2026-01-10', plate('Egg slab')), day('2026-01-11', plate('Chive square'))]) => ({
   weekId: 7, name: 'Week of Mon 5 Jan', publishedVersion: 2, publishedAt: '2026-01-03T18:00:00Z', startDate: '2026-01-05', endDate: '2026-01-11',
   days, next, cautions: [],
@@ -21,12 +13,8 @@ const nextWeek = {
   days: [day('2026-01-12', plate('Frozen frittata', { storage: 'frozen', thawOn: '2026-01-11', eatBy: null })), day('2026-01-13', plate('Bacon cup'))],
 };
 
-function show(body: unknown) {
-  // Sunday 11 January 2026, evening.
-  vi.useFakeTimers({ now: new Date(2026, 0, 11, 18), toFake: ['Date'] });
-  vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(body)));
-  renderInApp(<MyPlates />, queryClientFor(client));
-}
+// Sunday 11 January 2026, evening.
+const show = (body: unknown) => showMyPlates(body, new Date(2026, 0, 11, 18));
 
 describe("a client's plates with next week published", () => {
   it("tells them tonight to move next week's frozen Monday plate to the fridge, and lists next week's days to look ahead", async () => {

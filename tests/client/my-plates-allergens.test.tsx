@@ -1,26 +1,14 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { screen } from '@testing-library/react';
-import { Component as MyPlates } from '@/app/routes/my/my-plates.route';
-import { jsonResponse, queryClientFor, renderInApp, signedIn } from './render';
+import { day, plate, showMyPlates } from './my-plates-fixtures';
 
-// A client with milk on their allergen list, on a day whose plate the coach allowed with milk: invented plates and numbers.
-const client = signedIn({ role: 'client', clientId: 3, email: 'dana@example.test', name: 'Dana' });
-const macros = { kcal: 420, fatG: 33, proteinG: 24, carbsG: 6, fiberG: 2, netCarbsG: 4 };
-const plate = (name: string, over: Record<string, unknown> = {}) => ({
-  slot: 'breakfast', name, description: '', macros, allergens: [], trays: [], addOns: [], assemblySteps: [], reheatSteps: [],
-  eatBy: '2026-01-14', storage: 'fridge', thawOn: null, prepDate: '2026-01-11', ...over,
-});
+// A client with allergens on their list, on a day whose plate holds one: invented plates and numbers.
 const week = (today: ReturnType<typeof plate>) => ({
   weekId: 7, name: 'Week of Mon 12 Jan', publishedVersion: 1, publishedAt: '2026-01-10T18:00:00Z', startDate: '2026-01-12', endDate: '2026-01-18',
-  days: [{ date: '2026-01-12', plates: [today], totals: macros }], next: null, cautions: [],
+  days: [day('2026-01-12', today)], next: null, cautions: [],
 });
-
-function show(body: unknown) {
-  // Monday 12 January 2026, morning.
-  vi.useFakeTimers({ now: new Date(2026, 0, 12, 7), toFake: ['Date'] });
-  vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(body)));
-  renderInApp(<MyPlates />, queryClientFor(client));
-}
+// Monday 12 January 2026, morning.
+const show = (body: unknown) => showMyPlates(body, new Date(2026, 0, 12, 7));
 
 describe("a plate holding an allergen on the client's own list", () => {
   it('says so beside the plate, with what to do when it was not agreed', async () => {
