@@ -123,6 +123,26 @@ describe('sending a week', () => {
     expect(events.map((e) => [e.startDate.toString(), e.summary])).toEqual([['2026-01-05T19:00:00', `Move tomorrow's ${w.plateA.name} to the fridge`]]);
   });
 
+  it('the e-mail says how many plates hold an allergen on the client\'s list, and that the PDF says which', async () => {
+    const coach = await coachWorkspace(app);
+    const milky = await makeAssembly(coach, (await makeTray(coach, {}, (await makeIngredient(coach)).id)).id, { name: uniq('Cheese square') }); // milk
+    const eve = await makeClient(coach, { name: uniq('Eve'), email: `${uniq('eve')}@example.test`, allergens: ['milk'] });
+    const fay = await makeClient(coach, { name: uniq('Fay'), email: `${uniq('fay')}@example.test` });
+    const board = await makeWeek(coach);
+    const allowed = { allergenOverrides: [{ allergen: 'milk', reason: 'Hard cheese agreed with her' }] };
+    const cell = (clientId: number, date: string, extra = {}) => ({ clientId, date, slot: 'breakfast', assemblyId: milky.id, ...extra });
+    const filled = await coach.agent
+      .put(`/api/weeks/${board.week.id}/cells`)
+      .send({ version: board.week.version, cells: [cell(eve.id, DAYS[0], allowed), cell(eve.id, DAYS[1], allowed), cell(fay.id, DAYS[0])] })
+      .expect(200);
+    await coach.agent.post(`/api/weeks/${board.week.id}/publish`).send({ version: filled.body.week.version }).expect(200);
+    const res = await coach.agent.post(`/api/weeks/${board.week.id}/send`).send({}).expect(202);
+    const texts = new Map((await rowsOfBatch(res.body.batchId)).map((r) => [r.client_id, (r as Row & { text: string }).text]));
+    expect(texts.get(eve.id)).toContain('2 plates hold an allergen on your list: the PDF says which, beside each. If you have not agreed them with us, do not eat them: ask first.');
+    // Milk is not on Fay's list: nothing said.
+    expect(texts.get(fay.id)).not.toContain('allergen');
+  });
+
   it('to all: one e-mail per client with an e-mail on the published board; the PDF holds that client’s plates and macros', async () => {
     const coach = await coachWorkspace(app);
     const w = await publishedWeek(coach);

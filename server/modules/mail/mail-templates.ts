@@ -55,10 +55,18 @@ export function weekPlanMail(p: {
   link?: string;
   /** A calendar file of thaw reminders goes along (the week has a frozen plate). */
   thawReminders?: boolean;
+  /** How many of the plan's plates hold an allergen on the client's list (the PDF says which and what to do). */
+  allergenPlates?: number;
 }): MailBody {
+  const n = p.allergenPlates ?? 0;
   const lines = [
     `Hello ${p.clientName},`,
     `your plan for the week of ${p.weekLabel} is attached as a PDF: each day's plate, how to put it together and reheat it, the macros and the eat-by dates.`,
+    ...(n > 0
+      ? [
+          `${n === 1 ? 'One plate holds' : `${n} plates hold`} an allergen on your list: the PDF says which, beside ${n === 1 ? 'it' : 'each'}. If you have not agreed ${n === 1 ? 'it' : 'them'} with us, do not eat ${n === 1 ? 'it' : 'them'}: ask first.`,
+        ]
+      : []),
     ...(p.thawReminders
       ? ['Some plates come frozen: the calendar file attached reminds you on the evening before to move each one from the freezer to the fridge. Open it to add the reminders to your calendar.']
       : []),

@@ -102,9 +102,13 @@ export async function sendWeek(
     const weekLabel = longDate(pub.snapshot.startDate, toDateOrder(ws.dateOrder));
     const link = appLink(opts.publicUrl, '/my-plates');
     for (const r of recipients) {
+      const days = pub.snapshot.clients[String(r.clientId)]?.days ?? [];
       // A frozen plate in this client's plan: their thaw reminders go along as a calendar file.
-      const thaw = thawTasks(pub.snapshot.clients[String(r.clientId)]?.days ?? []).length > 0;
-      const body = weekPlanMail({ businessName: ws.name, clientName: r.name, weekLabel, note, link, thawReminders: thaw });
+      const thaw = thawTasks(days).length > 0;
+      // Plates holding an allergen on the client's list (allowed by the coach, or put on the list since): the PDF says which.
+      const list = byId.get(r.clientId)?.allergens ?? [];
+      const allergenPlates = days.flatMap((d) => d.plates).filter((p) => p.allergens.some((a) => list.includes(a))).length;
+      const body = weekPlanMail({ businessName: ws.name, clientName: r.name, weekLabel, note, link, thawReminders: thaw, allergenPlates });
       const payload: WeekPlanPayload = { weekId: week.id, clientId: r.clientId, publicationVersion: version, note };
       const spec = payload as unknown as Record<string, unknown>;
       await queueMail(tx, queue, {
