@@ -9,6 +9,7 @@ import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
 import { localToday, momentLabel, timeLabel } from '@/lib/dates';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
+import { linkButton } from '@/components/ui/button';
 import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/mail/api/week-mail.queries';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { counted } from '@/lib/words';
@@ -179,12 +180,12 @@ export function Component() {
     <div className="mx-auto flex max-w-xl flex-col gap-5">
       <PageHeader title={day?.date === today ? "Today's plate" : 'My plates'} lead={day ? dayLabel(day.date, true) : undefined}>
         {week.days.length > 0 && (
-          <a href={`${myPlanPdfUrl}?today=${today}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline" download>
+          <a href={`${myPlanPdfUrl}?today=${today}`} className={linkButton} download>
             Download my week (PDF)
           </a>
         )}
         {thawTasks(week.days).length > 0 && (
-          <a href={`${myThawRemindersUrl}?today=${today}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold underline" download>
+          <a href={`${myThawRemindersUrl}?today=${today}`} className={linkButton} download>
             Thaw reminders for my calendar
           </a>
         )}
