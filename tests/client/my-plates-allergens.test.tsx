@@ -19,6 +19,8 @@ describe("a plate holding an allergen on the client's own list", () => {
     expect(note?.textContent).toContain('Milk and wheat are on your allergen list');
     expect(note?.textContent).toContain('If you have not agreed it with your coach, do not eat it: ask them first.');
     expect(screen.queryByRole('alert')).toBeNull();
+    // The week at a glance marks the day too.
+    expect(screen.getByRole('button', { name: /allergen on your list/ }).textContent).toContain('Spinach-feta wrap');
   });
 
   it('put on their list after the week was published: an alert not to eat it before asking', async () => {
@@ -33,6 +35,7 @@ describe("a plate holding an allergen on the client's own list", () => {
     show(week(plate('Egg slab', { allergens: ['egg'], allowedAllergens: [], onYourList: [] })));
     await screen.findByRole('heading', { level: 2, name: 'Egg slab' });
     expect(screen.queryByText(/on your allergen list/)).toBeNull();
+    expect(screen.queryByText(/allergen on your list/)).toBeNull();
   });
 
   it('a plan published before the allowed ones were kept: only to check', async () => {

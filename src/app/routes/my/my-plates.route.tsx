@@ -170,6 +170,7 @@ export function Component() {
           {dayLabel(d.date)}
           {d.date === today && <span className="ml-1 text-xs text-herb-700">today</span>}
           {thaws.some((t) => t.thawOn === d.date) && <span className="ml-1 text-xs text-frost-700">❄ thaw tonight</span>}
+          {d.plates.some((p) => p.onYourList?.length) && <span className="ml-1 text-xs text-caution-700">⚠ allergen on your list</span>}
           <span className="block text-sm font-normal text-ink-soft">{d.plates.map((p) => p.name).join(' · ')}</span>
         </span>
         <span className="num text-sm">{Math.round(d.totals.kcal)} kcal · {d.totals.netCarbsG} g net</span>
