@@ -65,3 +65,20 @@ test('a client sees the evening to move a frozen plate to the fridge, and takes 
   expect(text).toMatch(/BEGIN:VEVENT[\s\S]*SUMMARY:Move tomorrow's .+ to the fridge/);
   await expectNoSeriousA11yViolations(page, 'my plates, thaw evening');
 });
+
+test('a client finds the day whose plate holds an allergen on their list, and reads what to do', async ({ page }) => {
+  // The demo's Priya has milk on her list; her Thursday breakfast, the spinach-feta wrap, holds milk, allowed by the
+  // coach with a reason (server/db/seeders/week-demo.ts). The reason stays with the coach.
+  await signIn(page, 'client2@trayline.test');
+  const marked = page.getByRole('button', { name: /allergen on your list/ });
+  await expect(marked).toHaveCount(1);
+  await expect(marked).toContainText('Spinach-feta slab wrap');
+  await marked.click();
+  await expect(marked).toHaveAttribute('aria-current', 'date');
+  const note = page.getByRole('note').filter({ hasText: 'Milk is on your allergen list' });
+  await expect(note).toBeVisible();
+  await expect(note).toContainText('If you have not agreed it with your coach, do not eat it: ask them first.');
+  await expect(page.getByText(/Small amount of baked dairy/)).toHaveCount(0);
+  await expectNoSeriousA11yViolations(page, 'my plates, an allergen on the list');
+  await note.screenshot({ path: `${SHOTS}/client-allergen-note.png` });
+});
