@@ -27,7 +27,6 @@ export function clientRoutes() {
     }),
   );
 
-  // A client reads their own profile (no health notes); any other id is "not found".
   // Coach: published plates holding an allergen put on the client's list after publishing.
   r.get(
     '/clients/:id/published-allergens',
@@ -35,6 +34,7 @@ export function clientRoutes() {
     validated({ params: clientIdParams, query: todayQuery }, ({ params, query }, req) => publishedAllergens(emOf(req), actorOf(req), params.id, query.today)),
   );
 
+  // A client reads their own profile (no health notes); any other id is "not found".
   r.get(
     '/clients/:id',
     allow('coach', 'client'),

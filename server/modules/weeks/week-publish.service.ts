@@ -190,7 +190,6 @@ export async function publishedAllergens(em: EntityManager, actor: Actor, client
 }
 
 /** The client's published week: the one covering `today`, else the next, else the latest. Null when none. */
-
 export async function myWeek(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<MyWeekDto | null> {
   if (actor.clientId === null) return null;
   const weeks = await em.find(Week, { workspace: actor.workspaceId, publishedVersion: { $ne: null } }, { fields: ['id', 'startDate', 'publishedVersion'] });
