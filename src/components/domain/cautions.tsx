@@ -6,7 +6,8 @@ export function Cautions({ topic, compact = false }: { topic?: 'food-safety' | '
   return (
     <section aria-labelledby="cautions-h" className="rounded-tray border border-frost bg-frost-50 p-4">
       <h2 id="cautions-h" className="mb-2 flex items-center gap-2 font-sans text-base font-bold">
-        <span aria-hidden>❄</span> Safety notes
+        {/* The cold-chain mark for food safety; a plain note mark for the diet caution alone. */}
+        <span aria-hidden>{topic === 'diet' ? 'ℹ' : '❄'}</span> {topic === 'diet' ? 'Diet caution' : 'Safety notes'}
       </h2>
       <ul className={`flex list-disc flex-col gap-1 pl-5 ${compact ? 'text-sm' : ''}`}>
         {items.map((c) => (
