@@ -138,7 +138,7 @@ describe('sending a week', () => {
     await coach.agent.post(`/api/weeks/${board.week.id}/publish`).send({ version: filled.body.week.version }).expect(200);
     const res = await coach.agent.post(`/api/weeks/${board.week.id}/send`).send({}).expect(202);
     const texts = new Map((await rowsOfBatch(res.body.batchId)).map((r) => [r.client_id, (r as Row & { text: string }).text]));
-    expect(texts.get(eve.id)).toContain('2 plates hold an allergen on your list: the PDF says which, beside each. If you have not agreed them with us, do not eat them: ask first.');
+    expect(texts.get(eve.id)).toContain('2 plates hold an allergen on your list: the PDF says which, and what to do, beside each.');
     // Milk is not on Fay's list: nothing said.
     expect(texts.get(fay.id)).not.toContain('allergen');
   });

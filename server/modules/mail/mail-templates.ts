@@ -64,7 +64,7 @@ export function weekPlanMail(p: {
     `your plan for the week of ${p.weekLabel} is attached as a PDF: each day's plate, how to put it together and reheat it, the macros and the eat-by dates.`,
     ...(n > 0
       ? [
-          `${n === 1 ? 'One plate holds' : `${n} plates hold`} an allergen on your list: the PDF says which, beside ${n === 1 ? 'it' : 'each'}. If you have not agreed ${n === 1 ? 'it' : 'them'} with us, do not eat ${n === 1 ? 'it' : 'them'}: ask first.`,
+          `${n === 1 ? 'One plate holds' : `${n} plates hold`} an allergen on your list: the PDF says which, and what to do, beside ${n === 1 ? 'it' : 'each'}.`,
         ]
       : []),
     ...(p.thawReminders
