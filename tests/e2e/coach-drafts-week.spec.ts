@@ -164,6 +164,7 @@ test('the coach drafts a week: base tray, plate, board (keyboard drag and cell p
   await page.keyboard.press('Enter');
   await expect(page.getByText('Every portion is baked')).toBeVisible();
   await expect(page.getByRole('note').filter({ hasText: /portions? short/ })).toHaveCount(0);
+  await expect(page.getByText('Nothing blocks publishing', { exact: true })).toBeVisible();
 
   // 6. Publish, then the bake run of that week shows its timeline.
   await page.getByRole('button', { name: 'Publish to clients' }).focus();

@@ -155,7 +155,7 @@ export function Component() {
       {error && <Notice tone="block" title={error} />}
 
       <div className="grid gap-3 sm:grid-cols-3">
-        <Notice tone={blocks.length ? 'block' : 'info'} title={`${counted(blocks.length, 'problem')} ${agrees(blocks.length, 'blocks', 'block')} publishing`}>
+        <Notice tone={blocks.length ? 'block' : 'info'} title={blocks.length ? `${counted(blocks.length, 'problem')} ${agrees(blocks.length, 'blocks', 'block')} publishing` : 'Nothing blocks publishing'}>
           {blocks.slice(0, 3).map((w, i) => (
             <p key={i}>{w.message}</p>
           ))}
