@@ -50,6 +50,14 @@ export function allergenConflicts(
   return ALLERGEN_CODES.filter((code) => plate.has(code) && client.has(code));
 }
 
+/**
+ * The allergens on a client's list that a published plate holds and the coach did not allow when publishing: put on
+ * the list since (a conflict cannot be published).
+ */
+export function notAllowed(onList: readonly AllergenCode[], allowed: readonly AllergenCode[]): AllergenCode[] {
+  return onList.filter((a) => !allowed.includes(a));
+}
+
 /** A note a client reads beside a plate: `stop` when they should not eat it before asking their coach. */
 export interface ClientAllergenNote {
   tone: 'warn' | 'stop';
@@ -72,7 +80,7 @@ export function clientAllergenNotes(onList: readonly AllergenCode[], allowed: re
   if (!onList.length) return [];
   if (allowed === undefined) return [{ tone: 'warn', title: onTheList(onList), body: IF_NOT_AGREED }];
   const ok = onList.filter((a) => allowed.includes(a));
-  const not = onList.filter((a) => !allowed.includes(a));
+  const not = notAllowed(onList, allowed);
   const notes: ClientAllergenNote[] = [];
   if (not.length)
     notes.push({

@@ -52,7 +52,6 @@ export interface CoolingWatchResult {
   queued: number;
 }
 
-
 /**
  * The deadline a record has missed at instant `at` in the kitchen's zone (its deadlines real hours after the start,
  * read on the kitchen's wall clock), the stage's temperature (°F), and how many minutes ago; or null.

@@ -12,7 +12,7 @@ import { findClient } from '../clients/client.service.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { Week, WeekPublication } from './week.entity.js';
 import { findWeek } from './week-board.service.js';
-import { myWeek } from './week-publish.service.js';
+import { myWeek, withYourList } from './week-publish.service.js';
 import { renderPublishedPlan, THAW_REMINDERS_ICS, WEEK_PLAN_PDF, type WeekPlanPayload } from './week-mail.js';
 import { thawTasks } from '@shared/domain/eat-by.js';
 import { weekTitle } from '@shared/domain/week-board.js';
@@ -106,8 +106,9 @@ export async function sendWeek(
       // A frozen plate in this client's plan: their thaw reminders go along as a calendar file.
       const thaw = thawTasks(days).length > 0;
       // Plates holding an allergen on the client's list (allowed by the coach, or put on the list since): the PDF says which.
-      const list = byId.get(r.clientId)?.allergens ?? [];
-      const allergenPlates = days.flatMap((d) => d.plates).filter((p) => p.allergens.some((a) => list.includes(a))).length;
+      const allergenPlates = withYourList(days, byId.get(r.clientId)?.allergens ?? [])
+        .flatMap((d) => d.plates)
+        .filter((p) => p.onYourList?.length).length;
       const body = weekPlanMail({ businessName: ws.name, clientName: r.name, weekLabel, note, link, thawReminders: thaw, allergenPlates });
       const payload: WeekPlanPayload = { weekId: week.id, clientId: r.clientId, publicationVersion: version, note };
       const spec = payload as unknown as Record<string, unknown>;

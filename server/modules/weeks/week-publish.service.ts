@@ -6,7 +6,7 @@ import { cellKey, computeBoard, snapshotTitle, type BoardResult } from '@shared/
 import { worded } from '@shared/domain/week-check.js';
 import { pickWeek, weekAfter } from '@shared/domain/week-days.js';
 import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
-import type { AllergenCode } from '@shared/domain/allergens.js';
+import { notAllowed, type AllergenCode } from '@shared/domain/allergens.js';
 import type { MyDayDto, MyPlateDto, MyWeekDto, PublishedAllergenWeekDto, WeekPublicationDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
 import type { BoardAnswer } from '@shared/schemas/board-answer.js';
 import { datesOf, type Actor } from '../../http/authz.js';
@@ -175,13 +175,13 @@ export async function publishedAllergens(em: EntityManager, actor: Actor, client
   const order = datesOf(actor);
   return weeks.flatMap((w) => {
     const pub = pubs.find((p) => p.week.id === w.id);
-    const days = pub?.snapshot.clients[String(clientId)]?.days ?? [];
+    const days = withYourList(pub?.snapshot.clients[String(clientId)]?.days ?? [], list);
     const plates = days
       .filter((d) => compareIsoDates(d.date, today) >= 0)
       .flatMap((d) =>
         d.plates.flatMap((p) => {
           if (p.allowedAllergens === undefined) return [];
-          const allergens = p.allergens.filter((a) => list.includes(a) && !p.allowedAllergens!.includes(a));
+          const allergens = notAllowed(p.onYourList ?? [], p.allowedAllergens);
           return allergens.length ? [{ date: d.date, slot: p.slot, name: p.name, allergens }] : [];
         }),
       );
