@@ -202,6 +202,8 @@ export interface GlanceDto {
    * (at the kitchen's time now when the workspace has a time zone, else on the readings alone).
    */
   cooling: { thrownAway: CoolingTrayDto[]; missed: CoolingTrayDto[] };
+  /** The week's published version, from today on: plates holding an allergen put on a client's list since. */
+  publishedAllergens: { clients: number; plates: number };
 }
 
 export interface CoolingTrayDto {
@@ -244,7 +246,25 @@ export interface PublishedAllergenWeekDto {
   weekId: number;
   weekName: string;
   publishedVersion: number;
-  plates: { date: IsoDate; slot: string; name: string; allergens: AllergenCode[] }[];
+  plates: PublishedAllergenPlateDto[];
+}
+
+export interface PublishedAllergenPlateDto {
+  date: IsoDate;
+  slot: string;
+  name: string;
+  /** The plate's allergens on the client's list now that the coach did not allow when publishing. */
+  allergens: AllergenCode[];
+}
+
+/**
+ * GET /api/weeks/:id/published-allergens: the same plates for one week's published version (from today on), client by
+ * client; `clients` is empty when none has any or the week is not published (`publishedVersion` null).
+ */
+export interface WeekPublishedAllergensDto {
+  weekId: number;
+  publishedVersion: number | null;
+  clients: { clientId: number; name: string; plates: PublishedAllergenPlateDto[] }[];
 }
 
 export interface MyDayDto {

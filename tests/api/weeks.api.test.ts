@@ -553,6 +553,44 @@ describe('publishing and the client view', () => {
     await (await coachWorkspace(app)).agent.get(`/api/clients/${client.id}/published-allergens`).expect(404);
   });
 
+  it('a week\'s published version is read against its clients\' lists as they stand: the week, client by client, and the home glance', async () => {
+    const coach = await coachWorkspace(app);
+    const { plate, client, week } = await setup(coach, { fridgeDays: 7 });
+    const other = await makeClient(coach, { name: 'Aaron Other' });
+    const cells = [DAYS[0], DAYS[3]].flatMap((date) => [client.id, other.id].map((clientId) => ({ clientId, date, slot: 'breakfast', assemblyId: plate.id })));
+    const draft = () => coach.agent.get(`/api/weeks/${week.id}/published-allergens?today=${DAYS[0]}`).expect(200);
+    // Not published: nothing clients follow yet.
+    expect((await draft()).body).toEqual({ weekId: week.id, publishedVersion: null, clients: [] });
+    const filled = await coach.agent.put(`/api/weeks/${week.id}/cells`).send({ version: week.version, cells }).expect(200);
+    await coach.agent.post(`/api/weeks/${week.id}/publish`).send({ version: filled.body.week.version }).expect(200);
+    const read = (today: string) => coach.agent.get(`/api/weeks/${week.id}/published-allergens?today=${today}`).expect(200);
+    const glance = async (today: string) => (await coach.agent.get(`/api/weeks/glance?today=${today}`).expect(200)).body.publishedAllergens;
+    expect((await read(DAYS[0])).body).toEqual({ weekId: week.id, publishedVersion: 1, clients: [] });
+    expect(await glance(DAYS[0])).toEqual({ clients: 0, plates: 0 });
+
+    // Milk put on the first client's list after publishing: their two plates, not the other client's.
+    const profile = (await coach.agent.get(`/api/clients/${client.id}`).expect(200)).body;
+    await coach.agent.patch(`/api/clients/${client.id}`).send({ allergens: ['milk'], version: profile.version }).expect(200);
+    const milk = (date: string) => ({ date, slot: 'breakfast', name: plate.name, allergens: ['milk'] });
+    expect((await read(DAYS[0])).body).toEqual({ weekId: week.id, publishedVersion: 1, clients: [{ clientId: client.id, name: client.name, plates: [milk(DAYS[0]), milk(DAYS[3])] }] });
+    expect(await glance(DAYS[0])).toEqual({ clients: 1, plates: 2 });
+    // From Tuesday on, Monday's plate is eaten.
+    expect((await read(DAYS[1])).body.clients[0].plates).toEqual([milk(DAYS[3])]);
+    expect(await glance(DAYS[1])).toEqual({ clients: 1, plates: 1 });
+    // Both clients, sorted by name; an archived client's plan still counts.
+    const second = (await coach.agent.get(`/api/clients/${other.id}`).expect(200)).body;
+    await coach.agent.patch(`/api/clients/${other.id}`).send({ allergens: ['milk', 'egg'], archived: true, version: second.version }).expect(200);
+    expect((await read(DAYS[0])).body.clients.map((c: { name: string; plates: unknown[] }) => [c.name, c.plates.length])).toEqual([
+      ['Aaron Other', 2],
+      [client.name, 2],
+    ]);
+    expect(await glance(DAYS[0])).toEqual({ clients: 2, plates: 4 });
+
+    // A bad day is named; another workspace's coach finds no such week.
+    expect((await coach.agent.get(`/api/weeks/${week.id}/published-allergens?today=soon`).expect(400)).body.errors.today).toBeDefined();
+    await (await coachWorkspace(app)).agent.get(`/api/weeks/${week.id}/published-allergens`).expect(404);
+  });
+
   it('a client reads only their own published plates; edits stay hidden until the next publication', async () => {
     const coach = await coachWorkspace(app);
     const { tray, plate, client, week } = await setup(coach, { fridgeDays: 7 });
@@ -657,6 +695,7 @@ describe('publishing and the client view', () => {
       nextPrepDate: null,
       setup: { trays: 0, plates: 0, clients: 0, ovens: 0, weeks: 0 },
       cooling: { thrownAway: [], missed: [] },
+      publishedAllergens: { clients: 0, plates: 0 },
     });
     // Nothing after this week yet; then a copy of it the week after, named with its state and plates.
     expect(glance.body.nextWeek).toBeNull();

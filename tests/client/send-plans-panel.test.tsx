@@ -1,7 +1,7 @@
 import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { jsonResponse as json, renderInApp } from './render';
-import type { BoardDto } from '@shared/schemas/weeks.schema';
+import type { BoardDto, WeekPublishedAllergensDto } from '@shared/schemas/weeks.schema';
 import { SendPlansPanel } from '@/features/mail/components/send-plans-panel';
 import { useQuery } from '@tanstack/react-query';
 import { clientsQuery } from '@/features/clients/api/clients.queries';
@@ -21,10 +21,10 @@ const board = (over: Partial<BoardDto['week']> = {}) =>
     ],
   }) as unknown as BoardDto;
 /** The panel as the week page gives it: the clients read through the API. */
-function PanelOnPage({ board: b }: { board: BoardDto }) {
-  return <SendPlansPanel board={b} clients={useQuery(clientsQuery())} />;
+function PanelOnPage({ board: b, clashes }: { board: BoardDto; clashes?: WeekPublishedAllergensDto }) {
+  return <SendPlansPanel board={b} clients={useQuery(clientsQuery())} clashes={clashes} />;
 }
-function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Response) {
+function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Response, clashes?: WeekPublishedAllergensDto) {
   const calls: { url: string; body: Record<string, unknown> | null }[] = [];
   vi.stubGlobal(
     'fetch',
@@ -39,7 +39,7 @@ function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Respo
       return json({ type: 'about:blank', title: 'Not found', status: 404, code: 'not_found', detail: url }, 404);
     }),
   );
-  renderInApp(<PanelOnPage board={b} />);
+  renderInApp(<PanelOnPage board={b} clashes={clashes} />);
   return calls;
 }
 
@@ -76,6 +76,28 @@ describe('send plans panel', () => {
     expect(typeof sent.requestId).toBe('string');
     await waitFor(() => expect(screen.getByText(/1 sent · 0 waiting · 0 failed/)).toBeTruthy());
     expect(calls.some((c) => c.url === '/api/outbox?batchId=b-1')).toBe(true);
+  });
+
+  it('warns of published plates holding an allergen put on a client’s list since, beside that client, and still lets the coach send', async () => {
+    const plates = [
+      { date: '2026-01-06', slot: 'Breakfast', name: 'Feta slab', allergens: ['milk' as const] },
+      { date: '2026-01-08', slot: 'Breakfast', name: 'Feta slab', allergens: ['milk' as const] },
+    ];
+    renderPanel(board(), () => json({}), { weekId: 7, publishedVersion: 2, clients: [{ clientId: 1, name: 'Ada Client', plates }] });
+    expect(await screen.findByText('Ada Client’s published plates hold an allergen put on their list since version 2')).toBeTruthy();
+    expect(screen.getByText(/Their PDFs say not to eat those plates before asking you/)).toBeTruthy();
+    const [ada, ben] = within(screen.getByRole('list', { name: 'Clients on this week' })).getAllByRole('listitem');
+    expect(ada.textContent).toContain('⚠ 2 plates with an allergen on their list');
+    expect(ben.textContent).not.toContain('⚠');
+    expect((screen.getByRole('button', { name: 'Send to 1 client' }) as HTMLButtonElement).disabled).toBe(false);
+  });
+
+  it('says nothing of a check made against an older published version', async () => {
+    const plates = [{ date: '2026-01-06', slot: 'Breakfast', name: 'Feta slab', allergens: ['milk' as const] }];
+    renderPanel(board(), () => json({}), { weekId: 7, publishedVersion: 1, clients: [{ clientId: 1, name: 'Ada Client', plates }] });
+    await screen.findByRole('list', { name: 'Clients on this week' });
+    expect(screen.queryByText(/published plates hold an allergen/)).toBeNull();
+    expect(screen.queryByText(/⚠/)).toBeNull();
   });
 
   it('shows why a send was refused and keeps the form', async () => {

@@ -1,12 +1,20 @@
 import { describe, expect, it, vi } from 'vitest';
-import { screen } from '@testing-library/react';
+import { cleanup, screen, within } from '@testing-library/react';
 import { jsonResponse as json, renderInApp } from './render';
 import { WeekGlance } from '@/features/weeks/components/week-glance';
 import { dayLabel } from '@/lib/dates';
 
 // The coach's "this week at a glance": invented glance values for the check; "today" is pinned with fake timers.
 const week = { id: 7, name: 'Week of Jan 5', startDate: '2026-01-05', endDate: '2026-01-11', prepDate: '2026-01-04', secondPrepDate: '2026-01-07', publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 9, version: 3 };
-const glance = (over: Record<string, unknown> = {}) => ({ week, warnings: 2, blocks: 0, portionsShort: 0, nextPrepDate: '2026-01-07', ...over });
+const glance = (over: Record<string, unknown> = {}) => ({
+  week,
+  warnings: 2,
+  blocks: 0,
+  portionsShort: 0,
+  nextPrepDate: '2026-01-07',
+  publishedAllergens: { clients: 0, plates: 0 },
+  ...over,
+});
 
 function show(body: unknown) {
   const fetch = vi.fn(async (_url: string) => json(body));
@@ -68,6 +76,22 @@ describe('week glance', () => {
     show(glance({ cooling: { thrownAway: [], missed: [] } }));
     await screen.findByText('2 warnings');
     expect(screen.queryByText(/Cooling record/)).toBeNull();
+  });
+
+  it('says when the published version holds plates with an allergen put on a client’s list since, and leads to the week', async () => {
+    show(glance({ publishedAllergens: { clients: 2, plates: 3 } }));
+    const notice = (await screen.findByText('Published version 1: 3 plates from today on hold an allergen put on 2 clients’ lists since')).closest('[role="alert"]')!;
+    expect(notice.textContent).toContain('Their phones and plan PDFs say not to eat them before asking you.');
+    expect(within(notice as HTMLElement).getByRole('link', { name: 'See which on the week' }).getAttribute('href')).toBe('/weeks/7');
+  });
+
+  it('words one plate on one client’s list, and says nothing when there is none', async () => {
+    show(glance({ publishedAllergens: { clients: 1, plates: 1 } }));
+    expect(await screen.findByText('Published version 1: 1 plate from today on holds an allergen put on a client’s list since')).toBeTruthy();
+    cleanup();
+    show(glance());
+    await screen.findByText('2 warnings');
+    expect(screen.queryByText(/Published version/)).toBeNull();
   });
 
   it('shows nothing when no week is planned', async () => {

@@ -183,6 +183,7 @@ export const MATRIX: Record<string, MatrixRow> = {
   }),
   'POST /api/weeks/:id/publish': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/publish`, body: () => ({ version: 999 }), crossWorkspace: true }),
   'GET /api/weeks/:id/publications': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/publications`, crossWorkspace: true }),
+  'GET /api/weeks/:id/published-allergens': R(['coach'], { path: (ctx) => `/api/weeks/${ctx.ids.week}/published-allergens`, crossWorkspace: true }),
   // Sending a week, delivery log, week-plan PDFs (issue 9)
   'GET /api/weeks/mine/plan.pdf': R(['client']),
   'GET /api/weeks/mine/thaw-reminders.ics': R(['client']),

@@ -9,7 +9,8 @@ import { findWeek, loadBoardData, prepDatesOf, type BoardData } from '../weeks/w
 import { cellPrepDate, tripDatesOf } from '@shared/domain/week-board.js';
 import { itemsOf as assemblyItemsOf } from '../assemblies/plate-facts.js';
 import type { IWeek } from '../weeks/week.entity.js';
-import { listWeeks, todayIso } from '../weeks/week.service.js';
+import { listWeeks } from '../weeks/week.service.js';
+import { todayIso } from '../weeks/week-board.service.js';
 import { kitchenWeek } from '@shared/domain/week-days.js';
 import type { IsoDate } from '@shared/domain/iso-date.js';
 import type { WeekSummaryDto } from '@shared/schemas/weeks.schema.js';

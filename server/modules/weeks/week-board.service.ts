@@ -21,6 +21,9 @@ import { plannedTargets } from '../clients/client.presenter.js';
 import type { ClientFacts } from '../clients/client.entity.js';
 import { Week, type IWeek, type IWeekCell } from './week.entity.js';
 
+/** Today's date in UTC: what a request that names no `today` is read against. */
+export const todayIso = (): IsoDate => new Date().toISOString().slice(0, 10);
+
 export function weekDays(w: Pick<IWeek, 'startDate'>): IsoDate[] {
   return Array.from({ length: BOARD_DAYS }, (_, i) => addDays(w.startDate, i));
 }

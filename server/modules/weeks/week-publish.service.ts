@@ -7,7 +7,16 @@ import { worded } from '@shared/domain/week-check.js';
 import { pickWeek, weekAfter } from '@shared/domain/week-days.js';
 import type { AssemblyDto, PlateMacrosDto } from '@shared/schemas/assemblies.schema.js';
 import { notAllowed, type AllergenCode } from '@shared/domain/allergens.js';
-import type { MyDayDto, MyPlateDto, MyWeekDto, PublishedAllergenWeekDto, WeekPublicationDto, WeekSnapshot } from '@shared/schemas/weeks.schema.js';
+import type {
+  MyDayDto,
+  MyPlateDto,
+  MyWeekDto,
+  PublishedAllergenPlateDto,
+  PublishedAllergenWeekDto,
+  WeekPublicationDto,
+  WeekPublishedAllergensDto,
+  WeekSnapshot,
+} from '@shared/schemas/weeks.schema.js';
 import type { BoardAnswer } from '@shared/schemas/board-answer.js';
 import { datesOf, type Actor } from '../../http/authz.js';
 import { Conflict, StaleEdit } from '../../http/errors.js';
@@ -15,8 +24,7 @@ import { AssemblyItem } from '../assemblies/assembly.entity.js';
 import { Client } from '../clients/client.entity.js';
 import { findClient } from '../clients/client.service.js';
 import { Week, WeekPublication, WeekTray, type IWeek, type IWeekPublication } from './week.entity.js';
-import { boardInput, findWeek, getBoard, loadBoardData, presentBoard, prepDatesOf, type BoardData } from './week-board.service.js';
-import { todayIso } from './week.service.js';
+import { boardInput, findWeek, getBoard, loadBoardData, presentBoard, prepDatesOf, todayIso, type BoardData } from './week-board.service.js';
 import { preparedRows } from '../../db/prepared.js';
 
 const r1 = (d: Decimal) => d.toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber();
@@ -157,14 +165,27 @@ export function withYourList(days: readonly MyDayDto[], list: readonly string[])
 }
 
 /**
- * The plates of the client's published weeks, from `today` on, holding an allergen on their list now that the coach
- * did not allow when publishing (PublishedAllergenWeekDto). A plan published before the allowed ones were kept is
- * left out: what was allowed in it cannot be told (the client's page asks them to check).
+ * One client's plates in a published snapshot, from `today` on, holding an allergen on their list as it stands now
+ * that the coach did not allow when publishing. A plan published before the allowed ones were kept is left out: what
+ * was allowed in it cannot be told (the client's page asks them to check).
  */
+function clashingPlates(snapshot: WeekSnapshot, clientId: number, list: readonly string[], today: IsoDate): PublishedAllergenPlateDto[] {
+  if (!list.length) return [];
+  return withYourList(snapshot.clients[String(clientId)]?.days ?? [], list)
+    .filter((d) => compareIsoDates(d.date, today) >= 0)
+    .flatMap((d) =>
+      d.plates.flatMap((p) => {
+        if (p.allowedAllergens === undefined) return [];
+        const allergens = notAllowed(p.onYourList ?? [], p.allowedAllergens);
+        return allergens.length ? [{ date: d.date, slot: p.slot, name: p.name, allergens }] : [];
+      }),
+    );
+}
+
+/** The plates of the client's published weeks, from `today` on, that `clashingPlates` finds, week by week. */
 export async function publishedAllergens(em: EntityManager, actor: Actor, clientId: number, today: IsoDate = todayIso()): Promise<PublishedAllergenWeekDto[]> {
   const client = await findClient(em, actor, clientId);
-  const list = client.allergens;
-  if (!list.length) return [];
+  if (!client.allergens.length) return [];
   const weeks = await em.find(
     Week,
     { workspace: actor.workspaceId, publishedVersion: { $ne: null }, startDate: { $gte: addDays(today, -6) } },
@@ -175,17 +196,30 @@ export async function publishedAllergens(em: EntityManager, actor: Actor, client
   const order = datesOf(actor);
   return weeks.flatMap((w) => {
     const pub = pubs.find((p) => p.week.id === w.id);
-    const days = withYourList(pub?.snapshot.clients[String(clientId)]?.days ?? [], list);
-    const plates = days
-      .filter((d) => compareIsoDates(d.date, today) >= 0)
-      .flatMap((d) =>
-        d.plates.flatMap((p) => {
-          if (p.allowedAllergens === undefined) return [];
-          const allergens = notAllowed(p.onYourList ?? [], p.allowedAllergens);
-          return allergens.length ? [{ date: d.date, slot: p.slot, name: p.name, allergens }] : [];
-        }),
-      );
+    const plates = pub ? clashingPlates(pub.snapshot, clientId, client.allergens, today) : [];
     return pub && plates.length ? [{ weekId: w.id, weekName: snapshotTitle(pub.snapshot, order), publishedVersion: pub.number, plates }] : [];
+  });
+}
+
+/**
+ * A week's published version, from `today` on, client by client: the plates `clashingPlates` finds (clients without
+ * any are left out). Each client's list is read as it stands now, an archived client's too (their plan still holds).
+ */
+export async function weekPublishedAllergens(em: EntityManager, actor: Actor, weekId: number, today: IsoDate = todayIso()): Promise<WeekPublishedAllergensDto> {
+  const week = await findWeek(em, actor, weekId);
+  const none = { weekId: week.id, publishedVersion: week.publishedVersion ?? null, clients: [] };
+  const pub = week.publishedVersion ? await em.findOne(WeekPublication, { week: week.id, number: week.publishedVersion }) : null;
+  return pub ? { ...none, clients: await clashesByClient(em, actor, pub.snapshot, today) } : none;
+}
+
+/** `clashingPlates` for every client in a snapshot, by name; one query for the clients' lists. */
+async function clashesByClient(em: EntityManager, actor: Actor, snapshot: WeekSnapshot, today: IsoDate): Promise<WeekPublishedAllergensDto['clients']> {
+  const ids = Object.keys(snapshot.clients).map(Number);
+  if (!ids.length) return [];
+  const clients = await em.find(Client, { id: { $in: ids }, workspace: actor.workspaceId }, { fields: ['id', 'name', 'allergens'], orderBy: { name: 'asc', id: 'asc' } });
+  return clients.flatMap((c) => {
+    const plates = clashingPlates(snapshot, c.id, c.allergens, today);
+    return plates.length ? [{ clientId: c.id, name: c.name, plates }] : [];
   });
 }
 

@@ -15,7 +15,7 @@ import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import * as weeks from './week.service.js';
 import { getBoard } from './week-board.service.js';
-import { listPublications, myWeek, publishWeek } from './week-publish.service.js';
+import { listPublications, myWeek, publishWeek, weekPublishedAllergens } from './week-publish.service.js';
 
 
 export function weekRoutes() {
@@ -114,6 +114,13 @@ export function weekRoutes() {
     validated({ params: weekIdParams, body: versionOnlySchema }, ({ params, body }, req) =>
       publishWeek(emOf(req), actorOf(req), params.id, body.version),
     ),
+  );
+
+  // The published version's plates holding an allergen put on a client's list since (what "Send plans" warns of).
+  r.get(
+    '/weeks/:id/published-allergens',
+    allow('coach'),
+    validated({ params: weekIdParams, query: todayQuery }, ({ params, query }, req) => weekPublishedAllergens(emOf(req), actorOf(req), params.id, query.today)),
   );
 
   r.get(

@@ -21,6 +21,7 @@ import { Conflict, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Tray } from '../trays/tray.entity.js';
 import { coolingTrouble } from '../bake-runs/cooling.service.js';
 import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell } from './week.entity.js';
+import { weekPublishedAllergens } from './week-publish.service.js';
 import {
   boardInput,
   findWeek,
@@ -30,6 +31,7 @@ import {
   prepDatesOf,
   presentBoard,
   presentWeekSummary,
+  todayIso,
   weekDays,
   type BoardCellRow,
   type BoardData,
@@ -41,8 +43,6 @@ type PutCells = z.output<typeof putCellsSchema>;
 type PutTrays = z.output<typeof putTraysSchema>;
 type CopyDay = z.output<typeof copyDaySchema>;
 type CopyWeek = z.output<typeof copyWeekSchema>;
-
-export const todayIso = (): IsoDate => new Date().toISOString().slice(0, 10);
 
 // ── Reading ─────────────────────────────────────────────────────────────────────────────────────────
 
@@ -459,9 +459,13 @@ async function setupCounts(em: EntityManager, workspaceId: number): Promise<Setu
 export async function glance(em: EntityManager, actor: Actor, today: IsoDate = todayIso()): Promise<GlanceDto> {
   const [weeks, setup] = await Promise.all([em.find(Week, { workspace: actor.workspaceId }), setupCounts(em, actor.workspaceId)]);
   const week = pickWeek(weeks, today);
-  if (!week) return { week: null, nextWeek: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup, cooling: { thrownAway: [], missed: [] } };
+  if (!week) return { week: null, nextWeek: null, warnings: 0, blocks: 0, portionsShort: 0, nextPrepDate: null, setup, cooling: { thrownAway: [], missed: [] }, publishedAllergens: { clients: 0, plates: 0 } };
   const after = weekAfter(weeks, week);
-  const [data, cooling] = await Promise.all([loadBoardData(em, actor, week), coolingTrouble(em, actor.workspaceId, week.id)]);
+  const [data, cooling, clashes] = await Promise.all([
+    loadBoardData(em, actor, week),
+    coolingTrouble(em, actor.workspaceId, week.id),
+    weekPublishedAllergens(em, actor, week.id, today),
+  ]);
   const result = computeBoard(boardInput(data));
   const nextPrepDate =
     weeks
@@ -485,6 +489,7 @@ export async function glance(em: EntityManager, actor: Actor, today: IsoDate = t
     nextPrepDate,
     setup,
     cooling,
+    publishedAllergens: { clients: clashes.clients.length, plates: clashes.clients.reduce((n, c) => n + c.plates.length, 0) },
   };
 }
 

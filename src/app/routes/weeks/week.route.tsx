@@ -5,7 +5,8 @@ import { allergenConflicts } from '@shared/domain/allergens';
 import { flatWarnings } from '@shared/domain/week-check';
 import type { BoardDto, CellInput } from '@shared/schemas/weeks.schema';
 import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
-import { boardQuery } from '@/features/weeks/api/weeks.queries';
+import { boardQuery, weekPublishedAllergensQuery } from '@/features/weeks/api/weeks.queries';
+import { PublishedAllergenClashes } from '@/features/weeks/components/published-allergen-clashes';
 import { weekKeys } from '@/features/weeks/api/weeks.keys';
 import { useCopyDay, useCoverTrays, useDeleteWeek, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek, type WeekPageState } from '@/features/weeks/api/use-week-mutations';
 import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/weeks/components/board-grid';
@@ -23,7 +24,7 @@ import { Cautions } from '@/components/domain/cautions';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { agrees, counted } from '@/lib/words';
-import { dayLabel } from '@/lib/dates';
+import { dayLabel, kitchenToday } from '@/lib/dates';
 
 type Pending = { kind: 'cells'; edit: CellEdit } | { kind: 'other'; label: string; run: (version: number) => void };
 
@@ -41,6 +42,9 @@ export function Component() {
   // The sending panels' people: the clients to send plans to, the team to send prep-day papers to.
   const clients = useQuery(clientsQuery());
   const team = useQuery(membersQuery());
+  // What clients follow (the published version) against their allergen lists as they stand.
+  const current = q.data?.week.publishedVersion ?? null;
+  const clashes = useQuery({ ...weekPublishedAllergensQuery(id, current, kitchenToday()), enabled: current !== null });
   const [conflict, setConflict] = useState<Pending | null>(null);
   const [allergen, setAllergen] = useState<{ edit: CellEdit; message: string } | null>(null);
   const [error, setError] = useState<string | null>(null);
@@ -97,6 +101,12 @@ export function Component() {
   };
 
   const blocks = warnings.filter((w) => w.severity === 'block');
+  /** One problem of the list: whose day, which day, what. */
+  const problemLine = (w: (typeof warnings)[number], i: number) => (
+    <p key={i}>
+      <span className="font-bold">{board.clients.find((c) => String(c.id) === String(w.clientId))?.name ?? 'A client'}</span>, {dayLabel(w.date)}: {w.message}
+    </p>
+  );
   const warns = warnings.filter((w) => w.severity === 'warn');
   const portions = portionSummary(board);
 
@@ -156,24 +166,21 @@ export function Component() {
 
       <div className="grid gap-3 sm:grid-cols-3">
         <Notice tone={blocks.length ? 'block' : 'info'} title={blocks.length ? `${counted(blocks.length, 'problem')} ${agrees(blocks.length, 'blocks', 'block')} publishing` : 'Nothing blocks publishing'}>
-          {blocks.slice(0, 3).map((w, i) => (
-            <p key={i}>{w.message}</p>
-          ))}
+          {blocks.slice(0, 3).map(problemLine)}
+          {blocks.length > 3 && <p>…and {blocks.length - 3} more, flagged on the board.</p>}
         </Notice>
         <Notice tone={warns.length ? 'warn' : 'info'} title={counted(warns.length, 'warning')}>
           {warns.length === 0
             ? 'No day over the net-carb cap or short of protein, no dislikes, no allergens allowed.'
-            : warns.slice(0, 3).map((w, i) => (
-                <p key={i}>
-                  <span className="font-bold">{board.clients.find((c) => String(c.id) === String(w.clientId))?.name ?? 'A client'}</span>, {dayLabel(w.date)}: {w.message}
-                </p>
-              ))}
+            : warns.slice(0, 3).map(problemLine)}
           {warns.length > 3 && <p>…and {warns.length - 3} more, flagged on the board.</p>}
         </Notice>
         <Notice tone={portions.tone} title={portions.title}>
           {portions.detail}
         </Notice>
       </div>
+
+      <PublishedAllergenClashes query={clashes} />
 
       {board.clients.length === 0 || (board.cells.length === 0 && board.plates.every((p) => p.archived)) ? (
         <EmptyState title={board.clients.length === 0 ? 'No clients to plan' : 'No plates yet'}>
@@ -200,7 +207,7 @@ export function Component() {
 
       <Card>
         <h2 className="mb-3 text-xl">Send plans</h2>
-        <SendPlansPanel board={board} clients={clients} />
+        <SendPlansPanel board={board} clients={clients} clashes={clashes.data} />
       </Card>
 
       <Card>

@@ -1,11 +1,10 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { allergenLabel } from '@shared/domain/allergens';
-import { andList } from '@shared/domain/words';
 import { publishedAllergensQuery } from '@/features/clients/api/clients.queries';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/states';
-import { dayLabel, kitchenToday } from '@/lib/dates';
+import { kitchenToday } from '@/lib/dates';
+import { AllergenPlates } from '@/components/domain/allergen-plates';
 import { counted } from '@/lib/words';
 import { paths } from '@/config/paths';
 
@@ -35,13 +34,7 @@ export function PublishedAllergens({ clientId, name }: { clientId: number; name:
             {w.weekName}
           </Link>{' '}
           (published version {w.publishedVersion})
-          <ul className="list-disc pl-5">
-            {w.plates.map((p) => (
-              <li key={`${p.date}|${p.slot}`}>
-                {dayLabel(p.date)}, {p.slot.toLowerCase()}: {p.name} ({andList(p.allergens.map(allergenLabel))})
-              </li>
-            ))}
-          </ul>
+          <AllergenPlates plates={w.plates} />
         </div>
       ))}
       <p className="mt-2">

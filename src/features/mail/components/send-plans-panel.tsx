@@ -2,7 +2,7 @@ import { useId, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { useQuery, type UseQueryResult } from '@tanstack/react-query';
 import type { ClientDto, ClientListItemDto } from '@shared/schemas/clients.schema';
-import type { BoardDto } from '@shared/schemas/weeks.schema';
+import type { BoardDto, WeekPublishedAllergensDto } from '@shared/schemas/weeks.schema';
 import { NOTE_MAX, SKIP_REASON_TEXT, type SendWeekResultDto } from '@shared/schemas/week-mail.schema';
 import { outboxBusy, outboxQuery } from '../api/mail.queries';
 import { Button } from '@/components/ui/button';
@@ -39,9 +39,18 @@ function BatchProgress({ result }: { result: SendWeekResultDto }) {
 
 /**
  * "Send plans": e-mail the week's PUBLISHED plan (PDF attached) to all clients on the board or to some, with a
- * personal note; then a live progress bar of the batch. `clients`: the workspace's clients (the page reads them).
+ * personal note; then a live progress bar of the batch. `clients`: the workspace's clients (the page reads them);
+ * `clashes`: the published version's plates holding an allergen put on a client's list since (the page reads them).
  */
-export function SendPlansPanel({ board, clients }: { board: BoardDto; clients: UseQueryResult<ClientListItemDto[]> }) {
+export function SendPlansPanel({
+  board,
+  clients,
+  clashes,
+}: {
+  board: BoardDto;
+  clients: UseQueryResult<ClientListItemDto[]>;
+  clashes?: WeekPublishedAllergensDto;
+}) {
   const send = useSendWeek(board.week.id);
   const [mode, setMode] = useState<'all' | 'some'>('all');
   const [chosen, setChosen] = useState<Set<number>>(new Set());
@@ -55,6 +64,7 @@ export function SendPlansPanel({ board, clients }: { board: BoardDto; clients: U
   const profiles = (clients.data ?? []).filter((c): c is ClientDto => 'email' in c);
   const listed = profiles.filter((c) => onBoard.has(c.id));
   const withEmail = listed.filter((c) => c.email);
+  const clashing = new Map((clashes?.publishedVersion === published ? clashes.clients : []).map((c) => [c.clientId, c.plates.length]));
 
   if (!published) {
     return <Notice tone="info" title="Publish the week first">Clients receive the published plan; publish it, then send it here.</Notice>;
@@ -95,6 +105,15 @@ export function SendPlansPanel({ board, clients }: { board: BoardDto; clients: U
           Clients receive version {published}, as published. Publish a new version first to send the changes.
         </Notice>
       )}
+      {clashing.size > 0 && (
+        <Notice
+          tone="warn"
+          title={`${clashing.size === 1 ? `${clashes!.clients[0].name}’s published plates hold an allergen put on their list` : `${clashing.size} clients’ published plates hold an allergen put on their lists`} since version ${published}`}
+        >
+          Their PDFs say not to eat those plates before asking you. To send plans without them, change the plates on the board (or allow the allergen
+          with a reason) and publish a new version first.
+        </Notice>
+      )}
       <form
         className="flex flex-col gap-4"
         onSubmit={(e) => {
@@ -125,6 +144,9 @@ export function SendPlansPanel({ board, clients }: { board: BoardDto; clients: U
                   <span>
                     {c.name}
                     <span className="block text-sm text-ink-soft">{c.email ?? 'No e-mail on the profile: add one to send'}</span>
+                    {clashing.has(c.id) && (
+                      <span className="block text-sm font-bold text-signal-700">⚠ {counted(clashing.get(c.id)!, 'plate')} with an allergen on their list</span>
+                    )}
                   </span>
                 </label>
                 <a className="text-sm underline" href={clientPlanPdfUrl(board.week.id, c.id)} target="_blank" rel="noreferrer">

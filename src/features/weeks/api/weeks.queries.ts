@@ -1,5 +1,5 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { GlanceDto, MyWeekDto, WeekPublicationDto, WeekSummaryDto } from '@shared/schemas/weeks.schema';
+import type { GlanceDto, MyWeekDto, WeekPublicationDto, WeekPublishedAllergensDto, WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import { api, qs } from '@/lib/api-client';
 import { weekKeys } from './weeks.keys';
@@ -17,3 +17,14 @@ export const myWeekQuery = (today: string) =>
 
 export const publicationsQuery = (id: number, current: number | null) =>
   queryOptions({ queryKey: weekKeys.publications(id, current), queryFn: () => api.get<WeekPublicationDto[]>(`/weeks/${id}/publications`) });
+
+/**
+ * The week's published version against its clients' allergen lists as they stand (from `today` on). Read again each
+ * time the week's page opens: a client's list is edited on another page.
+ */
+export const weekPublishedAllergensQuery = (id: number, current: number | null, today: string) =>
+  queryOptions({
+    queryKey: weekKeys.publishedAllergens(id, current, today),
+    queryFn: () => api.get<WeekPublishedAllergensDto>(`/weeks/${id}/published-allergens${qs({ today })}`),
+    staleTime: 0,
+  });

@@ -58,6 +58,21 @@ export function WeekGlance() {
         <Notice tone={g.portionsShort ? 'warn' : 'info'} title={g.portionsShort ? `${counted(g.portionsShort, 'portion')} short` : 'No portion short'} />
         <Notice tone="cold" title={g.nextPrepDate ? nextPrepDayTitle(g.nextPrepDate, today) : 'No prep day ahead'} />
       </div>
+      {g.publishedAllergens.plates > 0 && (
+        <div className="mt-3">
+          <Notice
+            tone="block"
+            title={`Published version ${g.week.publishedVersion}: ${counted(g.publishedAllergens.plates, 'plate')} from today on ${
+              g.publishedAllergens.plates === 1 ? 'holds' : 'hold'
+            } an allergen put on ${g.publishedAllergens.clients === 1 ? 'a client’s list' : `${g.publishedAllergens.clients} clients’ lists`} since`}
+          >
+            Their phones and plan PDFs say not to eat them before asking you.{' '}
+            <Link to={paths.week(g.week.id)} className="font-bold underline">
+              See which on the week
+            </Link>
+          </Notice>
+        </div>
+      )}
       <CoolingTrouble weekId={g.week.id} cooling={g.cooling} />
       <p className="mt-3">
         {g.nextWeek ? (

@@ -1,0 +1,68 @@
+import { expect, test, type Page } from '@playwright/test';
+import { expectNoSeriousA11yViolations, signIn, SHOTS } from './support';
+
+// The demo week (server/db/seeders/week-demo.ts) is published, and every plate on Dana Whitlock's days holds egg; Egg is
+// not on her list. The coach puts it there after publishing, sees the published plates named on the home page, the
+// week and its "Send plans" panel, then takes it off again (the later journeys read the demo as seeded).
+test.use({ timezoneId: 'UTC' });
+
+/** Fixes the clock: now when it is in the demo week, else noon on its last day (a run that crossed Sunday midnight). */
+async function clockInTheWeek(page: Page) {
+  const weeks = (await (await page.request.get('/api/weeks')).json()) as { name: string; startDate: string; endDate: string }[];
+  const week = weeks.find((w) => w.name === 'Demo week')!;
+  const now = new Date();
+  const day = now.toISOString().slice(0, 10);
+  await page.clock.setFixedTime(day >= week.startDate && day <= week.endDate ? now : new Date(`${week.endDate}T12:00:00Z`));
+}
+
+async function setEgg(page: Page, on: boolean) {
+  await page.goto('/clients');
+  await page.getByRole('link', { name: /Dana Whitlock/ }).first().click();
+  const egg = page.getByRole('checkbox', { name: 'Egg', exact: true });
+  await egg.setChecked(on);
+  const saved = page.waitForResponse((r) => r.request().method() === 'PATCH' && /\/api\/clients\/\d+$/.test(r.url()));
+  await page.getByRole('button', { name: 'Save changes' }).click();
+  expect((await saved).status()).toBe(200);
+}
+
+test("an allergen put on a client's list after publishing: the coach is shown the published plates that hold it", async ({ page }) => {
+  test.setTimeout(90_000);
+  await signIn(page, 'coach@trayline.test');
+  await clockInTheWeek(page);
+  await setEgg(page, true);
+  await expect(page.getByText(/^\d+ published plates? from today on holds? an allergen now on Dana Whitlock’s list$/)).toBeVisible();
+
+  // Home: this week at a glance says so, and leads to the week.
+  await page.goto('/');
+  const glance = page.getByRole('alert').filter({ hasText: /Published version \d+: \d+ plates? from today on holds? an allergen put on a client’s list since/ });
+  await expect(glance).toBeVisible();
+  await glance.getByRole('link', { name: 'See which on the week' }).click();
+
+  // The week: the plates named under Dana, with what to do.
+  await expect(page.getByRole('heading', { level: 1, name: 'Demo week' })).toBeVisible();
+  const notice = page.getByRole('alert').filter({ hasText: /Published version \d+: .* on Dana Whitlock’s list since/ });
+  await expect(notice).toBeVisible();
+  await expect(notice.getByRole('link', { name: 'Dana Whitlock' })).toHaveAttribute('href', /\/clients\/\d+$/);
+  await expect(notice.getByRole('listitem').first()).toHaveText(/^\w{3}, \w{3} \d+, (breakfast|lunch): .+ \(.*\bEgg\b.*\)$/);
+  await expect(notice).toContainText('Change them on the board, or allow the allergen there with a reason, then publish a new version.');
+  // The draft board blocks publishing on the same allergen, naming her.
+  await expect(page.getByRole('alert').filter({ hasText: /problems? blocks? publishing/ })).toContainText(/Dana Whitlock, .+: Egg is on the client's allergen list\./);
+
+  // "Send plans" warns, and marks her among the clients.
+  const panel = page.locator('section').filter({ has: page.getByRole('heading', { level: 2, name: 'Send plans' }) });
+  await expect(panel.getByText(/^Dana Whitlock’s published plates hold an allergen put on their list since version \d+$/)).toBeVisible();
+  await expect(panel.getByRole('listitem').filter({ hasText: 'Dana Whitlock' })).toContainText(/⚠ \d+ plates? with an allergen on their list/);
+  await expect(panel.getByRole('listitem').filter({ hasText: 'Priya Raman' })).not.toContainText('⚠');
+  await expectNoSeriousA11yViolations(page, 'week with published plates holding an allergen');
+  await page.screenshot({ path: `${SHOTS}/coach-allergen-after-publish.png`, fullPage: true });
+
+  // Taken off again: nothing more is said.
+  await setEgg(page, false);
+  await expect(page.getByText(/published plates? from today on/)).toHaveCount(0);
+  await page.goto('/weeks');
+  await page.getByRole('link', { name: 'Demo week' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Demo week' })).toBeVisible();
+  await expect(panel.getByRole('list', { name: 'Clients on this week' })).toBeVisible();
+  await expect(page.getByText(/^Published version \d+:/)).toHaveCount(0);
+  await expect(panel.getByText('⚠')).toHaveCount(0);
+});
