@@ -244,6 +244,11 @@ export interface ContainerLabelDto {
   macros: LabelMacrosDto | null;
   allergens: AllergenCode[];
   allergenText: string;
+  /**
+   * The plate's allergens on its client's list as it stands (allowed by the coach with a reason, or still to be
+   * solved on the board): the label marks them for whoever packs and whoever eats it. Empty for a spare portion.
+   */
+  onClientList: AllergenCode[];
   /** Address the QR code points at, and the QR code as a data URL (SVG). */
   url: string;
   qr: string;

@@ -55,6 +55,7 @@ describe('container labels', () => {
       macros: { calories: '50', fat: '5 g', carbohydrate: 'less than 1 g', protein: '3 g', netCarbs: 'less than 1 g' },
       allergens: ['milk'],
       allergenText: 'Contains: Milk',
+      onClientList: [],
     });
     expect(spare.url).toBe(`http://127.0.0.1:8080/trays/${w.tray.id}`);
     // The plate = 100 g slab + 1 oz (28.349523125 g, NIST) of the factory cheese (350 kcal, 30 g fat, 20 g protein,
@@ -62,6 +63,24 @@ describe('container labels', () => {
     // carbohydrate 0.7 + 0.567 = 1.27 g → 1 g; protein 2.6 + 5.67 = 8.27 g → 8 g.
     expect(mon.macros).toEqual({ calories: '150', fat: '13 g', carbohydrate: '1 g', protein: '8 g', netCarbs: '1 g' });
     expect(mon.title).toBe((await coach.agent.get(`/api/clients/${w.client.id}`)).body.name);
+  });
+
+  it('marks on a plate’s label the allergens on its client’s list, read as the list stands', async () => {
+    const coach = await coachWorkspace(app);
+    const w = await shoppingWeek(coach, { multiplier: '1' });
+    const labels = async () => (await coach.agent.get(`/api/weeks/${w.weekId}/labels?prepDate=2026-01-04`).expect(200)).body.labels as { kind: string; allergens: string[]; onClientList: string[] }[];
+    const before = await labels();
+    expect(before.filter((l) => l.kind === 'plate').map((l) => l.onClientList)).toEqual([[], []]);
+    // The plate holds milk (the factory cheese, and egg from the eggs); milk and soy put on the client's list.
+    expect(before[0].allergens).toContain('milk');
+    const profile = (await coach.agent.get(`/api/clients/${w.client.id}`).expect(200)).body;
+    await coach.agent.patch(`/api/clients/${w.client.id}`).send({ allergens: ['milk', 'soy'], version: profile.version }).expect(200);
+    const after = await labels();
+    expect(after.map((l) => [l.kind, l.onClientList])).toEqual([
+      ['plate', ['milk']],
+      ['plate', ['milk']],
+      ...after.filter((l) => l.kind === 'spare').map(() => ['spare', []]),
+    ]);
   });
 
   it('says how many portions a household container holds, and a frozen plate’s best-quality day instead of a freeze-by', async () => {

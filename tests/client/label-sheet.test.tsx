@@ -19,6 +19,7 @@ const label: ContainerLabelDto = {
   macros: { calories: '150', fat: '13 g', carbohydrate: '1 g', protein: '8 g', netCarbs: '1 g' },
   allergens: ['milk'],
   allergenText: 'Contains: Milk',
+  onClientList: [],
   url: 'http://example.test/my-plates?date=2026-01-06',
   qr: 'data:image/svg+xml;base64,PHN2Zy8+',
   shortTrays: [],
@@ -33,6 +34,14 @@ describe('a container label', () => {
     expect(text).toContain('Made Sun, Jan 4 · Eat by Tue, Jan 6');
     expect(text).toContain('Frozen; best quality by Sun, Mar 1');
     expect(text).not.toContain('Freeze by');
+  });
+
+  it('marks the allergens on the client’s own list in a bordered line of words (it prints without colour), and nothing when there is none', () => {
+    const marked = { ...label, allergens: ['milk', 'egg', 'wheat'], allergenText: 'Contains: Milk, Egg, Wheat', onClientList: ['milk', 'egg'] } satisfies ContainerLabelDto;
+    const { container, getByText } = render(<LabelSheet layout="a4-3x7" labels={[marked, label]} />);
+    const line = getByText('⚠ On the client’s allergen list: Milk, Egg');
+    expect(line.className).toMatch(/\bborder-black\b/);
+    expect(container.textContent!.match(/On the client’s allergen list/g)).toHaveLength(1);
   });
 
   it('a spare portion has no day or portions line, and a fridge portion says when to freeze it at the latest', () => {

@@ -20,6 +20,7 @@ const plate = (title: string, shortTrays: string[], clientId = 1): ContainerLabe
   macros: null,
   allergens: [],
   allergenText: 'No major allergens listed',
+  onClientList: [],
   url: 'http://example.test/my-plates?date=2026-01-05',
   qr: 'data:image/svg+xml;base64,PHN2Zy8+',
   shortTrays,

@@ -1,9 +1,10 @@
 import { expect, test, type Page } from '@playwright/test';
+import { PDFParse } from 'pdf-parse';
 import { expectNoSeriousA11yViolations, signIn, SHOTS } from './support';
 
 // The demo week (server/db/seeders/week-demo.ts) is published, and every plate on Dana Whitlock's days holds egg; Egg is
 // not on her list. The coach puts it there after publishing, sees the published plates named on the home page, the
-// week and its "Send plans" panel, then takes it off again (the later journeys read the demo as seeded).
+// week, its "Send plans" panel and her plate labels, then takes it off again (the later journeys read the demo as seeded).
 test.use({ timezoneId: 'UTC' });
 
 /** Fixes the clock: now when it is in the demo week, else noon on its last day (a run that crossed Sunday midnight). */
@@ -55,6 +56,17 @@ test("an allergen put on a client's list after publishing: the coach is shown th
   await expect(panel.getByRole('listitem').filter({ hasText: 'Priya Raman' })).not.toContainText('⚠');
   await expectNoSeriousA11yViolations(page, 'week with published plates holding an allergen');
   await page.screenshot({ path: `${SHOTS}/coach-allergen-after-publish.png`, fullPage: true });
+
+  // Her plate labels mark it, in words that print without colour (Chromium's print, background graphics off).
+  const danaId = (await notice.getByRole('link', { name: 'Dana Whitlock' }).getAttribute('href'))!.split('/').pop();
+  await page.goto(`${new URL(page.url()).pathname}/labels?client=${danaId}`);
+  await expect(page.getByText(/^\d+ labels? on \d+ sheets?, prep day/)).toBeVisible();
+  const marks = page.getByText(/^⚠ On the client’s allergen list: (.+, )?Egg(, .+)?$/);
+  await expect(marks.first()).toBeVisible();
+  const parser = new PDFParse({ data: new Uint8Array(await page.pdf({ preferCSSPageSize: true })) });
+  const printed = (await parser.getText()).text.replace(/\s+/g, ' ');
+  await parser.destroy();
+  expect(printed).toContain('On the client’s allergen list: Egg');
 
   // Taken off again: nothing more is said.
   await setEgg(page, false);

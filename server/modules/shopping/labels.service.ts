@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import QRCode from 'qrcode';
 import Decimal from 'decimal.js';
-import { allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
+import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
 import { eatByDate, freezerQualityDate } from '@shared/domain/eat-by.js';
 import { compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
 import { labelCarbohydrate, labelPanel } from '@shared/domain/label-rounding.js';
@@ -132,6 +132,7 @@ export async function weekLabels(
       macros: facts.complete ? labelMacros(facts.vector) : null,
       allergens: facts.allergens,
       allergenText: allergenText(facts.allergens),
+      onClientList: allergenConflicts(facts.allergens, client.allergens as AllergenCode[]),
       url: `${base}/my-plates?date=${cell.date}`,
       shortTrays: shortTrays.map((t) => t.trayName),
     });
@@ -161,6 +162,7 @@ export async function weekLabels(
         macros,
         allergens: tray.allergens,
         allergenText: allergenText(tray.allergens),
+        onClientList: [],
         url: `${base}/trays/${tray.id}`,
         shortTrays: [],
       });

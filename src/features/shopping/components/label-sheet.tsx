@@ -1,6 +1,7 @@
 import { LABEL_SHEETS, labelPosition, pagesOf, type LabelSheetCode } from '@shared/domain/label-sheets';
 import { REHEAT_MIN_C, REHEAT_MIN_F } from '@shared/domain/eat-by';
 import type { ContainerLabelDto } from '@shared/schemas/shopping.schema';
+import { allergenLabel } from '@shared/domain/allergens';
 import { dayLabel } from '@/lib/dates';
 
 function Label({ label, small }: { label: ContainerLabelDto; small: boolean }) {
@@ -42,6 +43,10 @@ function Label({ label, small }: { label: ContainerLabelDto; small: boolean }) {
           <p>Macros: incomplete (a line cannot be weighed)</p>
         )}
         <p className="truncate font-bold">{label.allergenText}</p>
+        {label.onClientList.length > 0 && (
+          // A border prints without "background graphics"; the words carry it without colour.
+          <p className="truncate border border-black px-[2px] font-bold">⚠ On the client’s allergen list: {label.onClientList.map(allergenLabel).join(', ')}</p>
+        )}
       </div>
       <img src={label.qr} alt={`QR code to ${label.url}`} className={`${small ? 'w-[14mm]' : 'w-[0.95in]'} shrink-0 self-center`} />
     </div>
