@@ -54,8 +54,12 @@ test('mid-morning the assistant plans the rest of the day again, keeping the tra
   await signIn(page, 'assistant@trayline.test');
   const weeks = (await (await page.request.get('/api/weeks')).json()) as { id: number; publishedVersion: number | null }[];
   const weekId = (weeks.find((w) => w.publishedVersion !== null) ?? weeks[0]).id;
-  type Tray = { id: string; outAt: string; outMinute: number };
+  type Tray = { id: string; inAt: string; outAt: string; outMinute: number };
   const before = (await (await page.request.get(`/api/weeks/${weekId}/bake-run`)).json()) as { prepDate: string; run: { trays: Tray[] } };
+  // The demo's cooling record of that day (server/db/seeders/cooling-demo.ts), written against the run as seeded.
+  const cooling = (await (await page.request.get(`/api/weeks/${weekId}/bake-run/cooling?prepDate=${before.prepDate}`)).json()) as {
+    records: { runTrayId: string; outAt: string }[];
+  };
   // The phone's clock: when the third tray of the plan comes out.
   const third = [...before.run.trays].sort((a, b) => a.outMinute - b.outMinute)[2];
   await page.clock.setFixedTime(new Date(`${third.outAt}:00Z`));
@@ -75,7 +79,8 @@ test('mid-morning the assistant plans the rest of the day again, keeping the tra
   await expectNoSeriousA11yViolations(page, 'bake run, planned again part-way');
   await page.getByRole('region', { name: 'Timers' }).screenshot({ path: `${SHOTS}/assistant-replan-midday.png` });
 
-  // Everyone reads the same day: the trays out as they were planned, with their cooling deadlines still counted.
+  // Everyone reads the same day: the trays out as they were planned, or at the time the cooling record has them out
+  // (when that is after they went in), with their cooling deadlines still counted.
   const after = (await (await page.request.get(`/api/weeks/${weekId}/bake-run`)).json()) as {
     settings: { done: { from: string; out: string[] } };
     run: { trays: Tray[]; events: { kind: string; trayId: string | null }[] };
@@ -83,7 +88,8 @@ test('mid-morning the assistant plans the rest of the day again, keeping the tra
   expect(after.settings.done).toEqual({ from: `${before.prepDate}T${from}`, out: expect.any(Array) });
   expect(after.settings.done.out).toHaveLength(ticked);
   expect(after.settings.done.out).toContain(third.id);
-  expect(after.run.trays.find((t) => t.id === third.id)?.outAt).toBe(third.outAt);
+  const recorded = cooling.records.find((r) => r.runTrayId === third.id)?.outAt;
+  expect(after.run.trays.find((t) => t.id === third.id)?.outAt).toBe(recorded && recorded >= third.inAt ? recorded : third.outAt);
   expect(after.run.events.filter((e) => e.trayId === third.id && e.kind === 'fridge-41-by')).toHaveLength(1);
 
   // Said by mistake: one button plans the whole day from its start again.
