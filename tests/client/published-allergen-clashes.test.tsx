@@ -7,13 +7,13 @@ import { PublishedAllergenClashes } from '@/features/weeks/components/published-
 import { dayLabel } from '@/lib/dates';
 
 // The week page's notice of published plates holding an allergen put on a client's list since; invented names.
-function OnPage() {
-  return <PublishedAllergenClashes query={useQuery(weekPublishedAllergensQuery(7, 3, '2026-01-06'))} />;
+function OnPage({ changedSince }: { changedSince?: boolean }) {
+  return <PublishedAllergenClashes query={useQuery(weekPublishedAllergensQuery(7, 3, '2026-01-06'))} changedSince={changedSince} />;
 }
-function show(answer: () => Response) {
+function show(answer: () => Response, changedSince?: boolean) {
   const fetch = vi.fn(async (_url: string) => answer());
   vi.stubGlobal('fetch', fetch);
-  renderInApp(<OnPage />);
+  renderInApp(<OnPage changedSince={changedSince} />);
   return fetch;
 }
 const plate = (date: string, name: string, allergens: string[]) => ({ date, slot: 'Breakfast', name, allergens });
@@ -41,7 +41,14 @@ describe('published allergen clashes on a week', () => {
 
   it('words one client and one plate', async () => {
     show(() => json({ weekId: 7, publishedVersion: 3, clients: [{ clientId: 4, name: 'Ada Client', plates: [plate('2026-01-06', 'Feta slab', ['milk'])] }] }));
-    expect(await screen.findByText('Published version 3: 1 plate from today on holds an allergen put on Ada Client’s list since')).toBeTruthy();
+    const title = await screen.findByText('Published version 3: 1 plate from today on holds an allergen put on Ada Client’s list since');
+    expect(title.closest('[role="alert"]')!.textContent).not.toContain('The board has changed since');
+  });
+
+  it('says the board changed since that version, when it did: publishing may already take care of them', async () => {
+    show(() => json({ weekId: 7, publishedVersion: 3, clients: [{ clientId: 4, name: 'Ada Client', plates: [plate('2026-01-06', 'Feta slab', ['milk'])] }] }), true);
+    const title = await screen.findByText(/^Published version 3:/);
+    expect(title.closest('[role="alert"]')!.textContent).toContain('The board has changed since version 3: if those changes take care of them, publish a new version now.');
   });
 
   it('says nothing when no plate holds one', async () => {

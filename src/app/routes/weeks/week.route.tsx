@@ -180,7 +180,7 @@ export function Component() {
         </Notice>
       </div>
 
-      <PublishedAllergenClashes query={clashes} />
+      <PublishedAllergenClashes query={clashes} changedSince={board.week.changedSincePublished} />
 
       {board.clients.length === 0 || (board.cells.length === 0 && board.plates.every((p) => p.archived)) ? (
         <EmptyState title={board.clients.length === 0 ? 'No clients to plan' : 'No plates yet'}>

@@ -15,7 +15,7 @@ export const clashCount = (d: WeekPublishedAllergensDto | undefined) => (d?.clie
  * publishing (what the clients follow until the next version). Nothing while it loads or when there are none; a failed
  * check says so, with a retry.
  */
-export function PublishedAllergenClashes({ query }: { query: UseQueryResult<WeekPublishedAllergensDto> }) {
+export function PublishedAllergenClashes({ query, changedSince = false }: { query: UseQueryResult<WeekPublishedAllergensDto>; changedSince?: boolean }) {
   if (query.isError)
     return (
       <Notice tone="warn" title="Could not check the published version against the clients’ allergens">
@@ -45,6 +45,7 @@ export function PublishedAllergenClashes({ query }: { query: UseQueryResult<Week
       <p className="mt-2">
         Their phones and plan PDFs say not to eat these before asking you. Change them on the board, or allow the allergen there with a reason, then
         publish a new version.
+        {changedSince && ` The board has changed since version ${publishedVersion}: if those changes take care of them, publish a new version now.`}
       </p>
     </Notice>
   );
