@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { fireEvent, screen, within } from '@testing-library/react';
+import { cleanup, fireEvent, screen, within } from '@testing-library/react';
 import type { ContainerLabelDto, LabelSheetDto, ShortTrayDto } from '@shared/schemas/shopping.schema';
 import { Component as LabelsPage } from '@/app/routes/shopping/labels.route';
 import { jsonResponse, renderAtRoute, signedIn } from './render';
@@ -72,6 +72,39 @@ describe('container labels of a prep day short of a tray', () => {
     await screen.findByLabelText('Sheet 1 of 1');
     expect(screen.queryByText('Not every container can be filled')).toBeNull();
     expect(screen.queryByText(/Short:/)).toBeNull();
+  });
+});
+
+describe('plate labels with an allergen on the client’s own list', () => {
+  const marked = (title: string, onClientList: ContainerLabelDto['onClientList'], date = '2026-01-05') => ({
+    ...plate(title, []),
+    planned: { date, slot: 'breakfast' },
+    subtitle: 'Feta slab wrap',
+    allergens: ['milk', 'egg'] as ContainerLabelDto['allergens'],
+    onClientList,
+  });
+
+  it('names them before printing, for the assistant: whose, which day, which plate, which allergen, and to ask the coach', async () => {
+    renderAs('assistant', sheet([], [marked('Ada Example', ['milk']), marked('Bo Example', []), marked('Cy Example', ['milk', 'egg'], '2026-01-06')]));
+    const notice = (await screen.findByText('2 plate labels mark an allergen on the client’s own list')).closest('[role="note"]') as HTMLElement;
+    expect(within(notice).getAllByRole('listitem').map((li) => li.textContent)).toEqual([
+      'Ada Example, Mon, Jan 5 breakfast: Feta slab wrap (Milk)',
+      'Cy Example, Tue, Jan 6 breakfast: Feta slab wrap (Milk, Egg)',
+    ]);
+    expect(notice.textContent).toContain('Each is marked on its label; pack them with care, apart from the rest. If one looks wrong, ask the coach before packing it.');
+    expect(notice.parentElement!.className).toContain('no-print');
+    expect(screen.getAllByText(/^⚠ On the client’s allergen list:/)).toHaveLength(2);
+  });
+
+  it('leads the coach to the week board, and says nothing when no label has one', async () => {
+    renderAs('coach', sheet([], [marked('Ada Example', ['milk'])]));
+    const one = (await screen.findByText('1 plate label marks an allergen on the client’s own list')).closest('[role="note"]') as HTMLElement;
+    expect(one.textContent).toContain('It is marked on its label; pack it with care, apart from the rest.');
+    expect(screen.getByRole('link', { name: 'week board' }).getAttribute('href')).toBe('/weeks/7');
+    cleanup();
+    renderAs('coach', sheet([], [marked('Ada Example', [])]));
+    await screen.findByLabelText('Sheet 1 of 1');
+    expect(screen.queryByText(/on the client’s own list/)).toBeNull();
   });
 });
 

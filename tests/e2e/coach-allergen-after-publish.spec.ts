@@ -63,6 +63,9 @@ test("an allergen put on a client's list after publishing: the coach is shown th
   await expect(page.getByText(/^\d+ labels? on \d+ sheets?, prep day/)).toBeVisible();
   const marks = page.getByText(/^⚠ On the client’s allergen list: (.+, )?Egg(, .+)?$/);
   await expect(marks.first()).toBeVisible();
+  // Named above the sheet too, as many as the labels marked.
+  const listed = (await page.getByText(/^\d+ plate labels? marks? an allergen on the client’s own list$/).textContent())!;
+  expect(Number(listed.split(' ')[0])).toBe(await marks.count());
   const parser = new PDFParse({ data: new Uint8Array(await page.pdf({ preferCSSPageSize: true })) });
   const printed = (await parser.getText()).text.replace(/\s+/g, ' ');
   await parser.destroy();

@@ -2,6 +2,7 @@ import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { LABEL_SHEETS, LABEL_SHEET_CODES, labelsPerSheet, sheetsFor, type LabelSheet as SheetLayout, type LabelSheetCode } from '@shared/domain/label-sheets';
 import type { ContainerLabelDto, ShortTrayDto } from '@shared/schemas/shopping.schema';
+import { allergenLabel } from '@shared/domain/allergens';
 import { labelSheetQuery } from '@/features/shopping/api/shopping.queries';
 import { LabelSheet } from '@/features/shopping/components/label-sheet';
 import { Button } from '@/components/ui/button';
@@ -55,6 +56,38 @@ function shortWhy(t: ShortTrayDto): string {
 }
 
 /**
+ * Plate labels holding an allergen on their client's own list (allowed by the coach with a reason, or still to be
+ * solved on the board): named before printing, so whoever packs knows which containers to take care with.
+ */
+function OwnListNotice({ labels, weekId, coach }: { labels: ContainerLabelDto[]; weekId: number; coach: boolean }) {
+  return (
+    <Notice tone="warn" title={`${counted(labels.length, 'plate label')} ${labels.length === 1 ? 'marks' : 'mark'} an allergen on the client’s own list`}>
+      <ul className="list-disc pl-5">
+        {labels.map((l) => (
+          <li key={`${l.clientId}|${l.planned?.date}|${l.planned?.slot}`}>
+            <b>{l.title}</b>, {l.planned ? `${dayLabel(l.planned.date)} ${l.planned.slot}` : ''}: {l.subtitle} ({l.onClientList.map(allergenLabel).join(', ')})
+          </li>
+        ))}
+      </ul>
+      <p className="mt-1">
+        {labels.length === 1 ? 'It is marked on its label; pack it with care, apart from the rest.' : 'Each is marked on its label; pack them with care, apart from the rest.'}{' '}
+        {coach ? (
+          <>
+            The{' '}
+            <Link className="font-bold underline" to={paths.week(weekId)}>
+              week board
+            </Link>{' '}
+            shows whether you allowed it with a reason or it still needs solving.
+          </>
+        ) : (
+          'If one looks wrong, ask the coach before packing it.'
+        )}
+      </p>
+    </Notice>
+  );
+}
+
+/**
  * The prep day is short of some trays (thrown away in the cooling record, or too few set): not every plate label
  * has food to go with it. Which plates change is the coach's choice on the week board; the labels follow the board.
  */
@@ -105,6 +138,7 @@ export function Component() {
   const clientId = clients.find(([id]) => String(id) === params.get('client'))?.[0] ?? null;
   const shown = q.data ? labelsOf(q.data.labels, withSpares, clientId) : [];
   const short = q.data ? shortOf(q.data.short, shown, clientId) : [];
+  const ownList = shown.filter((l) => l.onClientList.length > 0);
   const set = (k: string, v: string) => {
     const next = new URLSearchParams(params);
     next.set(k, v);
@@ -183,6 +217,11 @@ export function Component() {
             {short.length > 0 && (
               <div className="no-print">
                 <ShortNotice short={short} weekId={weekId} coach={coach} />
+              </div>
+            )}
+            {ownList.length > 0 && (
+              <div className="no-print">
+                <OwnListNotice labels={ownList} weekId={weekId} coach={coach} />
               </div>
             )}
             <p className="no-print num text-ink-soft">
