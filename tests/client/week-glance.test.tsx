@@ -30,9 +30,15 @@ describe('week glance', () => {
     expect(await screen.findByText(`Next prep day: ${dayLabel('2026-01-07', true)}`)).toBeTruthy();
     expect(String(fetch.mock.calls[0][0])).toBe('/api/weeks/glance?today=2026-01-05');
     expect(screen.getByText('3 warnings')).toBeTruthy();
-    expect(screen.getByText('1 blocks publishing')).toBeTruthy();
+    // The week is published (v1): the board's problems stop the next version.
+    expect(screen.getByText('1 blocks publishing a new version')).toBeTruthy();
     expect(screen.getByText('3 portions short')).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Week of Jan 5' }).getAttribute('href')).toBe('/weeks/7');
+  });
+
+  it('says the problems block publishing, for a week never published', async () => {
+    show(glance({ week: { ...week, publishedVersion: null }, blocks: 2 }));
+    expect(await screen.findByText('2 block publishing')).toBeTruthy();
   });
 
   it('says "(today)" when the next prep day is today', async () => {

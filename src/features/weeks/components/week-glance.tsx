@@ -53,7 +53,8 @@ export function WeekGlance() {
       </div>
       <div className="grid gap-3 sm:grid-cols-3">
         <Notice tone={g.blocks ? 'block' : g.warnings ? 'warn' : 'info'} title={counted(g.blocks + g.warnings, 'warning')}>
-          {g.blocks ? `${g.blocks} ${agrees(g.blocks, 'blocks', 'block')} publishing` : 'None blocks publishing'}
+          {/* The board's problems: they stop the next publication; clients keep the version published. */}
+          {g.blocks ? `${g.blocks} ${agrees(g.blocks, 'blocks', 'block')} publishing${g.week.publishedVersion ? ' a new version' : ''}` : 'None blocks publishing'}
         </Notice>
         <Notice tone={g.portionsShort ? 'warn' : 'info'} title={g.portionsShort ? `${counted(g.portionsShort, 'portion')} short` : 'No portion short'} />
         <Notice tone="cold" title={g.nextPrepDate ? nextPrepDayTitle(g.nextPrepDate, today) : 'No prep day ahead'} />
