@@ -2,7 +2,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { cleanup, screen, within } from '@testing-library/react';
 import { jsonResponse as json, renderInApp } from './render';
 import { WeekGlance } from '@/features/weeks/components/week-glance';
-import { dayLabel } from '@/lib/dates';
+import { dayLabel, setKitchenZone } from '@/lib/dates';
 
 // The coach's "this week at a glance": invented glance values for the check; "today" is pinned with fake timers.
 const week = { id: 7, name: 'Week of Jan 5', startDate: '2026-01-05', endDate: '2026-01-11', prepDate: '2026-01-04', secondPrepDate: '2026-01-07', publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 9, version: 3 };
@@ -34,6 +34,19 @@ describe('week glance', () => {
     expect(screen.getByText('1 blocks publishing a new version')).toBeTruthy();
     expect(screen.getByText('3 portions short')).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Week of Jan 5' }).getAttribute('href')).toBe('/weeks/7');
+  });
+
+  it('asks for the kitchen’s day when the kitchen has a time zone (a coach travelling, or past midnight elsewhere)', async () => {
+    // 2026-01-05 22:30 UTC is already Tuesday 6 January, 11:30, in Auckland (UTC+13 in January, IANA tz database).
+    vi.useFakeTimers({ now: new Date(Date.UTC(2026, 0, 5, 22, 30)), toFake: ['Date'] });
+    setKitchenZone('Pacific/Auckland');
+    try {
+      const fetch = show(glance());
+      await screen.findByText('2 warnings');
+      expect(String(fetch.mock.calls[0][0])).toBe('/api/weeks/glance?today=2026-01-06');
+    } finally {
+      setKitchenZone(null);
+    }
   });
 
   it('says the problems block publishing, for a week never published', async () => {

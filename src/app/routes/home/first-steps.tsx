@@ -4,7 +4,7 @@ import type { SetupCountsDto } from '@shared/schemas/weeks.schema';
 import { Card, ErrorState, Progress, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { glanceQuery } from '@/features/weeks/api/weeks.queries';
-import { localToday } from '@/lib/dates';
+import { kitchenToday } from '@/lib/dates';
 
 interface Step {
   count: keyof SetupCountsDto;
@@ -28,7 +28,7 @@ const STEPS: Step[] = [
  * home glance: one read shared with "This week at a glance"). Gone once every step is done.
  */
 export function FirstSteps() {
-  const q = useQuery(glanceQuery(localToday()));
+  const q = useQuery(glanceQuery(kitchenToday()));
   if (q.isPending) return <Skeleton className="h-40 w-full" label="Loading your first steps" />;
   if (q.isError) return <ErrorState error={q.error} retry={() => void q.refetch()} />;
   const setup = q.data.setup;

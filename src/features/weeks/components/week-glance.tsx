@@ -1,11 +1,10 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { glanceQuery } from '../api/weeks.queries';
-import { localToday } from '@/lib/dates';
 import { Card, ErrorState, Notice, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { agrees, counted } from '@/lib/words';
-import { dayLabel, nextPrepDayTitle } from '@/lib/dates';
+import { dayLabel, kitchenToday, nextPrepDayTitle } from '@/lib/dates';
 import type { GlanceDto } from '@shared/schemas/weeks.schema';
 
 /** Trays the cooling record has thrown away or past a deadline: the coach decides what to bake again or change. */
@@ -37,7 +36,8 @@ function CoolingTrouble({ weekId, cooling }: { weekId: number; cooling: GlanceDt
 
 /** The coach's "this week at a glance": warnings, portions short, the next prep day, cooling trouble. */
 export function WeekGlance() {
-  const today = localToday();
+  // The kitchen's day (its time zone when set, else this device's): the week, the next prep day and "from today on".
+  const today = kitchenToday();
   const q = useQuery(glanceQuery(today));
   if (q.isPending) return <Skeleton className="h-28 w-full" label="Loading this week" />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
