@@ -66,6 +66,17 @@ export function Notice({ tone = 'info', title, children }: { tone?: Tone; title?
   );
 }
 
+/** A check added to a page (not the page itself) that failed: says which, with "Check again". */
+export function CheckFailed({ title, retry }: { title: string; retry: () => void }) {
+  return (
+    <Notice tone="warn" title={title}>
+      <Button variant="secondary" onClick={retry}>
+        Check again
+      </Button>
+    </Notice>
+  );
+}
+
 export function PageHeader({ title, children, lead }: { title: string; lead?: ReactNode; children?: ReactNode }) {
   return (
     <header className="flex flex-wrap items-end justify-between gap-3">

@@ -1,8 +1,7 @@
 import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { publishedAllergensQuery } from '@/features/clients/api/clients.queries';
-import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/states';
+import { CheckFailed, Notice } from '@/components/ui/states';
 import { kitchenToday } from '@/lib/dates';
 import { AllergenPlates } from '@/components/domain/allergen-plates';
 import { counted } from '@/lib/words';
@@ -15,14 +14,7 @@ import { paths } from '@/config/paths';
  */
 export function PublishedAllergens({ clientId, name }: { clientId: number; name: string }) {
   const q = useQuery(publishedAllergensQuery(clientId, kitchenToday()));
-  if (q.isError)
-    return (
-      <Notice tone="warn" title="Could not check the published weeks against this client’s allergens">
-        <Button variant="secondary" onClick={() => void q.refetch()}>
-          Check again
-        </Button>
-      </Notice>
-    );
+  if (q.isError) return <CheckFailed title="Could not check the published weeks against this client’s allergens" retry={() => void q.refetch()} />;
   const weeks = q.data ?? [];
   const count = weeks.reduce((n, w) => n + w.plates.length, 0);
   if (!count) return null;

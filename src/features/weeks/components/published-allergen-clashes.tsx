@@ -2,8 +2,7 @@ import { Link } from 'react-router-dom';
 import type { UseQueryResult } from '@tanstack/react-query';
 import type { WeekPublishedAllergensDto } from '@shared/schemas/weeks.schema';
 import { AllergenPlates } from '@/components/domain/allergen-plates';
-import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/states';
+import { CheckFailed, Notice } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { counted } from '@/lib/words';
 
@@ -16,14 +15,7 @@ export const clashCount = (d: WeekPublishedAllergensDto | undefined) => (d?.clie
  * check says so, with a retry.
  */
 export function PublishedAllergenClashes({ query, changedSince = false }: { query: UseQueryResult<WeekPublishedAllergensDto>; changedSince?: boolean }) {
-  if (query.isError)
-    return (
-      <Notice tone="warn" title="Could not check the published version against the clients’ allergens">
-        <Button variant="secondary" onClick={() => void query.refetch()}>
-          Check again
-        </Button>
-      </Notice>
-    );
+  if (query.isError) return <CheckFailed title="Could not check the published version against the clients’ allergens" retry={() => void query.refetch()} />;
   const count = clashCount(query.data);
   if (!query.data || !count) return null;
   const { publishedVersion, clients } = query.data;
