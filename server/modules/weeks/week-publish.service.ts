@@ -206,7 +206,11 @@ export async function publishedAllergens(em: EntityManager, actor: Actor, client
  * any are left out). Each client's list is read as it stands now, an archived client's too (their plan still holds).
  */
 export async function weekPublishedAllergens(em: EntityManager, actor: Actor, weekId: number, today: IsoDate = todayIso()): Promise<WeekPublishedAllergensDto> {
-  const week = await findWeek(em, actor, weekId);
+  return publishedAllergensOf(em, actor, await findWeek(em, actor, weekId), today);
+}
+
+/** `weekPublishedAllergens` for a week row already read (of the actor's workspace): the home glance has it. */
+export async function publishedAllergensOf(em: EntityManager, actor: Actor, week: Pick<IWeek, 'id' | 'publishedVersion'>, today: IsoDate): Promise<WeekPublishedAllergensDto> {
   const none = { weekId: week.id, publishedVersion: week.publishedVersion ?? null, clients: [] };
   const pub = week.publishedVersion ? await em.findOne(WeekPublication, { week: week.id, number: week.publishedVersion }) : null;
   return pub ? { ...none, clients: await clashesByClient(em, actor, pub.snapshot, today) } : none;

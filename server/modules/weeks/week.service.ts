@@ -21,7 +21,7 @@ import { Conflict, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Tray } from '../trays/tray.entity.js';
 import { coolingTrouble } from '../bake-runs/cooling.service.js';
 import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell } from './week.entity.js';
-import { weekPublishedAllergens } from './week-publish.service.js';
+import { publishedAllergensOf } from './week-publish.service.js';
 import {
   boardInput,
   findWeek,
@@ -464,7 +464,7 @@ export async function glance(em: EntityManager, actor: Actor, today: IsoDate = t
   const [data, cooling, clashes] = await Promise.all([
     loadBoardData(em, actor, week),
     coolingTrouble(em, actor.workspaceId, week.id),
-    weekPublishedAllergens(em, actor, week.id, today),
+    publishedAllergensOf(em, actor, week, today),
   ]);
   const result = computeBoard(boardInput(data));
   const nextPrepDate =

@@ -7,7 +7,7 @@ import { paths } from '@/config/paths';
 import { counted } from '@/lib/words';
 
 /** How many plates the published version holds with an allergen put on a client's list since. */
-export const clashCount = (d: WeekPublishedAllergensDto | undefined) => (d?.clients ?? []).reduce((n, c) => n + c.plates.length, 0);
+const clashCount = (d: WeekPublishedAllergensDto | undefined) => (d?.clients ?? []).reduce((n, c) => n + c.plates.length, 0);
 
 /**
  * On a week's page: the published version's plates, from today on, holding an allergen put on a client's list after
