@@ -96,6 +96,24 @@ describe('the cooling record on prep day', () => {
     expect(screen.getByRole('status').textContent).toContain('1 of 2 out');
   });
 
+  it('takes a reading straight after "Out now" while the list is still being read again (a slow connection)', async () => {
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />);
+    const cards = await screen.findAllByRole('listitem');
+    // From here on the list's reads never answer: only the saved record, as the PUT gave it, is on the page.
+    const fetch = vi.mocked(globalThis.fetch);
+    const answer = fetch.getMockImplementation()!;
+    fetch.mockImplementation((url, init) => (!init?.method || init.method === 'GET' ? new Promise<Response>(() => {}) : answer(url, init)));
+    fireEvent.click(within(cards[0]).getByRole('button', { name: 'Out now' }));
+    await screen.findByText(/Cool to 70 °F \(21 °C\) or below by 10:40/);
+    const add = screen.getByRole('button', { name: 'Add reading' }) as HTMLButtonElement;
+    await waitFor(() => expect(add.disabled).toBe(false));
+    fireEvent.change(screen.getByLabelText('Food temperature (°F)'), { target: { value: '66' } });
+    fireEvent.change(screen.getByLabelText(/Taken at/), { target: { value: '10:15' } });
+    fireEvent.click(add);
+    await waitFor(() => expect(puts()).toHaveLength(2));
+    expect(puts()[1][1]).toMatchObject({ readings: [{ at: '2026-01-04T10:15', tempF: 66 }], version: 1 });
+  });
+
   it('puts a refused reading under its field, and says a missed deadline with what to do', async () => {
     records = [record({ readings: [{ at: '2026-01-04T10:30', tempF: 80 }] })];
     vi.setSystemTime(new Date(2026, 0, 4, 10, 40));

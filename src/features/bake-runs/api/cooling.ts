@@ -32,7 +32,9 @@ export function useSaveCooling(weekId: number, prepDate: string) {
       qc.setQueryData<CoolingListDto>(bakeRunsKeys.cooling(weekId, prepDate), (list) =>
         list ? { ...list, records: [...list.records.filter((r) => r.runTrayId !== saved.runTrayId), saved] } : list,
       );
-      return qc.invalidateQueries({ queryKey: bakeRunsKeys.cooling(weekId, prepDate) });
+      // The saved record shows at once: the list is read again in the background, not awaited, so the tray's next
+      // write (a reading straight after "Out now") is not held back by a busy button while it loads.
+      void qc.invalidateQueries({ queryKey: bakeRunsKeys.cooling(weekId, prepDate) });
     },
     // Someone else wrote it meanwhile: show theirs (the person then adds their change again).
     onError: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.cooling(weekId, prepDate) }),
