@@ -19,6 +19,8 @@ export const paths = {
   client: (id: number | string = ':clientId') => `/clients/${id}`,
   weeks: '/weeks',
   week: (id: number | string = ':weekId') => `/weeks/${id}`,
+  /** The week page with "Send plans" open on these clients. */
+  weekSend: (id: number | string, clientIds: number[]) => `/weeks/${id}?${clientIds.map((c) => `send=${c}`).join('&')}`,
   bakeRun: (id: number | string = ':weekId') => `/weeks/${id}/bake-run`,
   bakeRules: '/bake-rules',
   bakeRunPlanner: '/bake-run',

@@ -98,6 +98,8 @@ describe('published plates holding an allergen now on the client\'s list', () =>
     expect(box.textContent).toContain('lunch: Chive squares (Egg and Milk)');
     expect(box.textContent).toContain('Change them on the week board, or allow the allergen there with a reason, then publish again.');
     expect(screen.getByRole('link', { name: 'Week of Mon, Jan 12' }).getAttribute('href')).toBe('/weeks/4');
+    // The plan sent again is how a client who does not open the app hears of it: the week's "Send plans", on them alone.
+    expect(screen.getByRole('link', { name: 'E-mail Olga Paused this week’s plan again' }).getAttribute('href')).toBe('/weeks/4?send=7');
     expect(fetchMock.mock.calls.some(([url]) => /^\/api\/clients\/7\/published-allergens\?today=\d{4}-\d{2}-\d{2}$/.test(url))).toBe(true);
   });
 

@@ -21,10 +21,10 @@ const board = (over: Partial<BoardDto['week']> = {}) =>
     ],
   }) as unknown as BoardDto;
 /** The panel as the week page gives it: the clients read through the API. */
-function PanelOnPage({ board: b, clashes }: { board: BoardDto; clashes?: WeekPublishedAllergensDto }) {
-  return <SendPlansPanel board={b} clients={useQuery(clientsQuery())} clashes={clashes} />;
+function PanelOnPage({ board: b, clashes, preselect }: { board: BoardDto; clashes?: WeekPublishedAllergensDto; preselect?: number[] }) {
+  return <SendPlansPanel board={b} clients={useQuery(clientsQuery())} clashes={clashes} preselect={preselect} />;
 }
-function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Response, clashes?: WeekPublishedAllergensDto) {
+function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Response, clashes?: WeekPublishedAllergensDto, preselect?: number[]) {
   const calls: { url: string; body: Record<string, unknown> | null }[] = [];
   vi.stubGlobal(
     'fetch',
@@ -39,7 +39,7 @@ function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Respo
       return json({ type: 'about:blank', title: 'Not found', status: 404, code: 'not_found', detail: url }, 404);
     }),
   );
-  renderInApp(<PanelOnPage board={b} clashes={clashes} />);
+  renderInApp(<PanelOnPage board={b} clashes={clashes} preselect={preselect} />);
   return calls;
 }
 
@@ -90,6 +90,40 @@ describe('send plans panel', () => {
     expect(ada.textContent).toContain('⚠ 2 plates with an allergen on their list');
     expect(ben.textContent).not.toContain('⚠');
     expect((screen.getByRole('button', { name: 'Send to 1 client' }) as HTMLButtonElement).disabled).toBe(false);
+  });
+
+  it('chooses only the clients whose published plates hold an allergen on their list, with one press', async () => {
+    const plates = [{ date: '2026-01-06', slot: 'Breakfast', name: 'Feta slab', allergens: ['milk' as const] }];
+    const calls = renderPanel(board(), () => json({ batchId: 'b-2', queued: 1, publicationVersion: 2, skipped: [], repeated: false }, 202), {
+      weekId: 7,
+      publishedVersion: 2,
+      clients: [{ clientId: 1, name: 'Ada Client', plates }],
+    });
+    fireEvent.click(await screen.findByRole('button', { name: 'Send to Ada Client only' }));
+    expect((screen.getByRole('radio', { name: 'Only the clients I choose' }) as HTMLInputElement).checked).toBe(true);
+    const [ada, ben] = within(screen.getByRole('list', { name: 'Clients on this week' })).getAllByRole('checkbox') as HTMLInputElement[];
+    expect([ada.checked, ben.checked]).toEqual([true, false]);
+    fireEvent.click(screen.getByRole('button', { name: 'Send to 1 client' }));
+    await screen.findByText(/1 plan queued/);
+    expect(calls.find((c) => c.url === '/api/weeks/7/send')!.body).toMatchObject({ clientIds: [1] });
+  });
+
+  it('offers no such press when the only client concerned has no e-mail', async () => {
+    const plates = [{ date: '2026-01-06', slot: 'Breakfast', name: 'Feta slab', allergens: ['milk' as const] }];
+    renderPanel(board(), () => json({}), { weekId: 7, publishedVersion: 2, clients: [{ clientId: 2, name: 'Ben Client', plates }] });
+    expect(await screen.findByText('Ben Client’s published plates hold an allergen put on their list since version 2')).toBeTruthy();
+    expect(screen.queryByRole('button', { name: /only/ })).toBeNull();
+  });
+
+  it('starts on the clients a link names, counting only those it can send to', async () => {
+    // Ada (on the board, with an e-mail), Ben (no e-mail) and Cy (not on the board) named by the link.
+    const calls = renderPanel(board(), () => json({ batchId: 'b-3', queued: 1, publicationVersion: 2, skipped: [], repeated: false }, 202), undefined, [1, 2, 3]);
+    const list = await screen.findByRole('list', { name: 'Clients on this week' });
+    expect((screen.getByRole('radio', { name: 'Only the clients I choose' }) as HTMLInputElement).checked).toBe(true);
+    expect((within(list).getAllByRole('checkbox')[0] as HTMLInputElement).checked).toBe(true);
+    fireEvent.click(screen.getByRole('button', { name: 'Send to 1 client' }));
+    await screen.findByText(/1 plan queued/);
+    expect(calls.find((c) => c.url === '/api/weeks/7/send')!.body).toMatchObject({ clientIds: [1] });
   });
 
   it('says nothing of a check made against an older published version', async () => {

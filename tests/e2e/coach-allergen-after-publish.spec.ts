@@ -33,6 +33,15 @@ test("an allergen put on a client's list after publishing: the coach is shown th
   await setEgg(page, true);
   await expect(page.getByText(/^\d+ published plates? from today on holds? an allergen now on Dana Whitlock’s list$/)).toBeVisible();
 
+  // From her profile, the way to tell her by e-mail: the week's "Send plans" opens on her alone (not sent here).
+  await page.getByRole('link', { name: 'E-mail Dana Whitlock this week’s plan again' }).click();
+  const sendPanel = page.locator('section').filter({ has: page.getByRole('heading', { level: 2, name: 'Send plans' }) });
+  await expect(sendPanel.getByRole('radio', { name: 'Only the clients I choose' })).toBeChecked();
+  await expect(sendPanel.getByRole('listitem').filter({ hasText: 'Dana Whitlock' }).getByRole('checkbox')).toBeChecked();
+  await expect(sendPanel.getByRole('listitem').filter({ hasText: 'Priya Raman' }).getByRole('checkbox')).not.toBeChecked();
+  await expect(sendPanel.getByRole('heading', { level: 2, name: 'Send plans' })).toBeInViewport();
+  await expect(sendPanel.getByRole('button', { name: 'Send to 1 client' })).toBeEnabled();
+
   // Home: this week at a glance says so, and leads to the week.
   await page.goto('/');
   const glance = page.getByRole('alert').filter({ hasText: /Published version \d+: \d+ plates? from today on holds? an allergen put on a client’s list since/ });

@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { Link, useLocation, useNavigate, useParams } from 'react-router-dom';
+import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { allergenConflicts } from '@shared/domain/allergens';
 import { flatWarnings } from '@shared/domain/week-check';
@@ -31,6 +31,9 @@ type Pending = { kind: 'cells'; edit: CellEdit } | { kind: 'other'; label: strin
 export function Component() {
   const id = Number(useParams().weekId);
   const copied = (useLocation().state as WeekPageState | null)?.copied;
+  // "?send=3": a client's profile sends the coach here to e-mail that client's plan again.
+  const [search] = useSearchParams();
+  const sendTo = useMemo(() => search.getAll('send').map(Number).filter((n) => Number.isInteger(n) && n > 0), [search]);
   const qc = useQueryClient();
   const q = useQuery(boardQuery(id));
   const putCells = usePutCells(id);
@@ -205,9 +208,9 @@ export function Component() {
         <PublishedVersions board={board} />
       </Card>
 
-      <Card>
+      <Card className="scroll-mt-20">
         <h2 className="mb-3 text-xl">Send plans</h2>
-        <SendPlansPanel board={board} clients={clients} clashes={clashes.data} />
+        <SendPlansPanel board={board} clients={clients} clashes={clashes.data} preselect={sendTo} key={sendTo.join(",")} />
       </Card>
 
       <Card>

@@ -27,11 +27,15 @@ export function PublishedAllergens({ clientId, name }: { clientId: number; name:
           </Link>{' '}
           (published version {w.publishedVersion})
           <AllergenPlates plates={w.plates} />
+          <Link to={paths.weekSend(w.weekId, [clientId])} className="mt-1 inline-flex min-h-11 items-center font-bold underline">
+            E-mail {name} this week’s plan again
+          </Link>
         </div>
       ))}
       <p className="mt-2">
-        They were published before it was on the list. {name}’s phone and plan PDF say not to eat them before asking you. Change them on the week
-        board, or allow the allergen there with a reason, then publish again.
+        They were published before it was on the list. {name}’s phone and plan PDF say not to eat them before asking you; the plan sent again by
+        e-mail says so beside each plate, for a client who does not open the app. Change them on the week board, or allow the allergen there with a
+        reason, then publish again.
       </p>
     </Notice>
   );

@@ -1,4 +1,4 @@
-import { useId, useState } from 'react';
+import { useEffect, useId, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { useQuery, type UseQueryResult } from '@tanstack/react-query';
 import type { ClientDto, ClientListItemDto } from '@shared/schemas/clients.schema';
@@ -40,20 +40,31 @@ function BatchProgress({ result }: { result: SendWeekResultDto }) {
 /**
  * "Send plans": e-mail the week's PUBLISHED plan (PDF attached) to all clients on the board or to some, with a
  * personal note; then a live progress bar of the batch. `clients`: the workspace's clients (the page reads them);
- * `clashes`: the published version's plates holding an allergen put on a client's list since (the page reads them).
+ * `clashes`: the published version's plates holding an allergen put on a client's list since (the page reads them);
+ * `preselect`: clients to start with as "only the clients I choose" (a link from a client's profile names them), the
+ * panel then scrolled into view.
  */
 export function SendPlansPanel({
   board,
   clients,
   clashes,
+  preselect = [],
 }: {
   board: BoardDto;
   clients: UseQueryResult<ClientListItemDto[]>;
   clashes?: WeekPublishedAllergensDto;
+  preselect?: number[];
 }) {
   const send = useSendWeek(board.week.id);
-  const [mode, setMode] = useState<'all' | 'some'>('all');
-  const [chosen, setChosen] = useState<Set<number>>(new Set());
+  const [mode, setMode] = useState<'all' | 'some'>(preselect.length ? 'some' : 'all');
+  const [chosen, setChosen] = useState<Set<number>>(() => new Set(preselect));
+  const top = useRef<HTMLDivElement>(null);
+  const ready = !clients.isPending && !!board.week.publishedVersion;
+  const wantsView = preselect.length > 0;
+  useEffect(() => {
+    // The card around the panel (its heading) when there is one; the page's top bar covers its scroll margin.
+    if (ready && wantsView) (top.current?.closest('section') ?? top.current)?.scrollIntoView?.({ block: 'start' });
+  }, [ready, wantsView]);
   const [note, setNote] = useState('');
   const [result, setResult] = useState<SendWeekResultDto | null>(null);
   const [error, setError] = useState<string | null>(null);
@@ -65,6 +76,7 @@ export function SendPlansPanel({
   const listed = profiles.filter((c) => onBoard.has(c.id));
   const withEmail = listed.filter((c) => c.email);
   const clashing = new Map((clashes?.publishedVersion === published ? clashes.clients : []).map((c) => [c.clientId, c.plates.length]));
+  const clashingWithEmail = withEmail.filter((c) => clashing.has(c.id)).map((c) => c.id);
 
   if (!published) {
     return <Notice tone="info" title="Publish the week first">Clients receive the published plan; publish it, then send it here.</Notice>;
@@ -83,9 +95,13 @@ export function SendPlansPanel({
       return n;
     });
 
+  // A client chosen through a link who is not on the board or has no e-mail cannot be sent to: not counted, not sent.
+  const sendable = new Set(withEmail.map((c) => c.id));
+  const picked = [...chosen].filter((id) => sendable.has(id));
+
   const submit = () => {
     setError(null);
-    const clientIds = mode === 'some' ? [...chosen] : undefined;
+    const clientIds = mode === 'some' ? picked : undefined;
     send.mutate(
       { clientIds, note: note.trim() || undefined, requestId: crypto.randomUUID() },
       {
@@ -99,7 +115,7 @@ export function SendPlansPanel({
   };
 
   return (
-    <div className="flex flex-col gap-4">
+    <div ref={top} className="flex flex-col gap-4">
       {board.week.changedSincePublished && (
         <Notice tone="warn" title={`The board changed since version ${published} was published`}>
           Clients receive version {published}, as published. Publish a new version first to send the changes.
@@ -112,6 +128,20 @@ export function SendPlansPanel({
         >
           Their PDFs say not to eat those plates before asking you. To send plans without them, change the plates on the board (or allow the allergen
           with a reason) and publish a new version first.
+          {clashingWithEmail.length > 0 && (
+            <div className="mt-2">
+              <Button
+                size="sm"
+                variant="secondary"
+                onClick={() => {
+                  setMode('some');
+                  setChosen(new Set(clashingWithEmail));
+                }}
+              >
+                {clashing.size === 1 ? `Send to ${clashes!.clients[0].name} only` : `Choose only ${clashingWithEmail.length === 1 ? 'the one with an e-mail' : `these ${clashingWithEmail.length}`}`}
+              </Button>
+            </div>
+          )}
         </Notice>
       )}
       <form
@@ -166,8 +196,8 @@ export function SendPlansPanel({
         />
         {error && <Notice tone="block" title="Not sent">{error}</Notice>}
         <div className="flex flex-wrap items-center gap-3">
-          <Button type="submit" busy={send.isPending} disabled={send.isPending || (mode === 'some' && chosen.size === 0) || (mode === 'all' && withEmail.length === 0)}>
-            {mode === 'all' ? `Send to ${counted(withEmail.length, 'client')}` : `Send to ${counted(chosen.size, 'client')}`}
+          <Button type="submit" busy={send.isPending} disabled={send.isPending || (mode === 'some' && picked.length === 0) || (mode === 'all' && withEmail.length === 0)}>
+            {mode === 'all' ? `Send to ${counted(withEmail.length, 'client')}` : `Send to ${counted(picked.length, 'client')}`}
           </Button>
           <Link to={paths.outbox} className="underline">
             Open the outbox
