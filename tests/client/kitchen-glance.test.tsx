@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from 'vitest';
-import { screen } from '@testing-library/react';
+import { cleanup, screen } from '@testing-library/react';
 import { jsonResponse as json, renderInApp } from './render';
 import { KitchenGlance } from '@/features/shopping/components/kitchen-glance';
 import { dayLabel } from '@/lib/dates';
@@ -49,6 +49,18 @@ describe('kitchen glance', () => {
     expect((await screen.findByRole('link', { name: 'Shopping list' })).getAttribute('href')).toBe('/weeks/7/shopping');
     expect(await screen.findByRole('progressbar', { name: 'In the trolley' })).toBeTruthy();
     expect(vi.mocked(fetch).mock.calls.map(([u]) => u)).toContain('/api/weeks/7/shopping');
+  });
+
+  it('says when the week has no prep day left, and when it has ended with nothing planned after it', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 9, 9), toFake: ['Date'] });
+    show(week);
+    expect(await screen.findByText('No prep day ahead this week')).toBeTruthy();
+    expect(screen.getByText('The coach has not planned the next prep day yet.')).toBeTruthy();
+    cleanup();
+    vi.useFakeTimers({ now: new Date(2026, 0, 12, 9), toFake: ['Date'] });
+    show(week);
+    expect(await screen.findByText('No prep day planned')).toBeTruthy();
+    expect(screen.getByText(`Week of Jan 5 ended on ${dayLabel('2026-01-11', true)}; the coach has not planned the next week yet.`)).toBeTruthy();
   });
 
   it('shows the empty state when the coach has planned no week', async () => {

@@ -1,4 +1,4 @@
-import { describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, screen, within } from '@testing-library/react';
 import { jsonResponse as json, renderInApp } from './render';
 import { WeekGlance } from '@/features/weeks/components/week-glance';
@@ -24,6 +24,11 @@ function show(body: unknown) {
 }
 
 describe('week glance', () => {
+  // Inside the week (Tuesday 6 January) unless a check pins another day.
+  beforeEach(() => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 6, 9), toFake: ['Date'] });
+  });
+
   it('asks for the glance of the local day and names the next prep day, the warnings and the portions short', async () => {
     vi.useFakeTimers({ now: new Date(2026, 0, 5, 9), toFake: ['Date'] });
     const fetch = show(glance({ portionsShort: 3, blocks: 1 }));
@@ -111,6 +116,25 @@ describe('week glance', () => {
     show(glance());
     await screen.findByText('2 warnings');
     expect(screen.queryByText(/Published version/)).toBeNull();
+  });
+
+  it('says nothing is planned for this week when the latest week has ended, and offers to plan this one from it', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 12, 8), toFake: ['Date'] });
+    show(glance({ nextWeek: null, nextPrepDate: null, cooling: { thrownAway: [{ trayName: 'Egg slab', prepDate: '2026-01-07' }], missed: [] } }));
+    const notice = (await screen.findByText('Nothing planned for this week')).closest('[role]') as HTMLElement;
+    expect(notice.textContent).toContain(`The latest week, Week of Jan 5, ended on ${dayLabel('2026-01-11', true)}. Clients see no plate for today`);
+    expect(within(notice).getByRole('link', { name: 'Plan this week from it' }).getAttribute('href')).toBe('/weeks?from=7');
+    // The ended week's warnings, portions and cooling are not this week's news.
+    expect(screen.queryByText('2 warnings')).toBeNull();
+    expect(screen.queryByText(/Cooling record/)).toBeNull();
+  });
+
+  it('heads a week that has not started yet as coming up', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 2, 8), toFake: ['Date'] });
+    show(glance());
+    expect(await screen.findByRole('heading', { name: `Coming up: from ${dayLabel('2026-01-05', true)}` })).toBeTruthy();
+    expect(screen.queryByRole('heading', { name: 'This week at a glance' })).toBeNull();
+    expect(screen.getByText('2 warnings')).toBeTruthy();
   });
 
   it('shows nothing when no week is planned', async () => {

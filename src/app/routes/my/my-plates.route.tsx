@@ -7,6 +7,7 @@ import { useMe } from '@/features/auth/hooks/use-me';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema';
 import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
 import { localToday, momentLabel, timeLabel } from '@/lib/dates';
+import { compareIsoDates } from '@shared/domain/iso-date';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { linkButton } from '@/components/ui/button';
@@ -43,7 +44,7 @@ function YourAllergens({ plate }: { plate: MyPlateDto }) {
   ));
 }
 
-function PlateCard({ plate }: { plate: MyPlateDto }) {
+function PlateCard({ plate, today }: { plate: MyPlateDto; today: string }) {
   const { unitSystem } = useMe();
   return (
     <Card className="flex flex-col gap-3">
@@ -58,7 +59,14 @@ function PlateCard({ plate }: { plate: MyPlateDto }) {
           Thaw in the refrigerator, never on the counter.
         </Notice>
       ) : (
-        plate.eatBy && <Notice tone="cold" title={`Eat by ${dayLabel(plate.eatBy, true)}`}>Keep it in the fridge at 40 °F (4 °C) or below.</Notice>
+        plate.eatBy &&
+        (compareIsoDates(plate.eatBy, today) < 0 ? (
+          <Notice tone="block" title={`Past its eat-by date (${dayLabel(plate.eatBy, true)})`}>
+            If it is still in your fridge, throw it away: do not eat it.
+          </Notice>
+        ) : (
+          <Notice tone="cold" title={`Eat by ${dayLabel(plate.eatBy, true)}`}>Keep it in the fridge at 40 °F (4 °C) or below.</Notice>
+        ))
       )}
       <section>
         <h3 className="font-bold">What is on the plate</h3>
@@ -151,7 +159,10 @@ export function Component() {
   // The next published week's days too: the client can look ahead, and a frozen plate on its first day thaws on
   // this week's last evening.
   const allDays = [...week.days, ...(week.next?.days ?? [])];
-  const day = allDays.find((d) => d.date === (picked ?? today)) ?? (picked ? undefined : allDays.find((d) => d.date >= today) ?? allDays[0]);
+  // The latest published week has ended: the coach has not published one for today yet.
+  const ended = compareIsoDates(week.endDate, today) < 0;
+  // Today's plates, else the next day with plates; never a day gone by unless the client picks it.
+  const day = allDays.find((d) => d.date === (picked ?? today)) ?? (picked ? undefined : allDays.find((d) => compareIsoDates(d.date, today) > 0));
   const thaws = thawTasks(allDays);
   const shownDate = day?.date ?? picked ?? today;
   const dayButton = (d: MyDayDto) => (
@@ -169,7 +180,7 @@ export function Component() {
         <span>
           {dayLabel(d.date)}
           {d.date === today && <span className="ml-1 text-xs text-herb-700">today</span>}
-          {thaws.some((t) => t.thawOn === d.date) && <span className="ml-1 text-xs text-frost-700">❄ thaw tonight</span>}
+          {compareIsoDates(d.date, today) >= 0 && thaws.some((t) => t.thawOn === d.date) && <span className="ml-1 text-xs text-frost-700">❄ thaw tonight</span>}
           {d.plates.some((p) => p.onYourList?.length) && <span className="ml-1 text-xs text-caution-700">⚠ allergen on your list</span>}
           <span className="block text-sm font-normal text-ink-soft">{d.plates.map((p) => p.name).join(' · ')}</span>
         </span>
@@ -179,24 +190,37 @@ export function Component() {
   );
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-5">
-      <PageHeader title={day?.date === today ? "Today's plate" : 'My plates'} lead={day ? dayLabel(day.date, true) : undefined}>
+      <PageHeader
+        title={day?.date === today ? "Today's plate" : 'My plates'}
+        lead={day ? `${!picked && day.date !== today ? 'Next plate: ' : ''}${dayLabel(day.date, true)}` : dayLabel(shownDate, true)}
+      >
         {week.days.length > 0 && (
           <a href={`${myPlanPdfUrl}?today=${today}`} className={linkButton} download>
-            Download my week (PDF)
+            {ended ? 'Download last week (PDF)' : 'Download my week (PDF)'}
           </a>
         )}
-        {thawTasks(week.days).length > 0 && (
+        {!ended && thawTasks(week.days).length > 0 && (
           <a href={`${myThawRemindersUrl}?today=${today}`} className={linkButton} download>
             Thaw reminders for my calendar
           </a>
         )}
       </PageHeader>
       <DemoNotice>A demo account: this plan and its people are invented for trying Trayline.</DemoNotice>
-      <ThawTonight tasks={thaws.filter((t) => t.thawOn === shownDate)} date={shownDate} isToday={shownDate === today} />
-      {day ? day.plates.map((p) => <PlateCard key={p.slot} plate={p} />) : <EmptyState title="Nothing planned that day" />}
+      {compareIsoDates(shownDate, today) >= 0 && <ThawTonight tasks={thaws.filter((t) => t.thawOn === shownDate)} date={shownDate} isToday={shownDate === today} />}
+      {day ? (
+        day.plates.map((p) => <PlateCard key={p.slot} plate={p} today={today} />)
+      ) : picked ? (
+        <EmptyState title="Nothing planned that day" />
+      ) : ended ? (
+        <EmptyState title="Nothing planned today">
+          Your last plan ended on {dayLabel(week.endDate, true)}. Your coach has not published your next week yet: its plates show here once they do.
+        </EmptyState>
+      ) : (
+        <EmptyState title="No more plates this week">Your coach’s next week shows here once it is published.</EmptyState>
+      )}
       {week.days.length > 0 && (
       <Card>
-        <h2 className="mb-2 text-xl">The week at a glance</h2>
+        <h2 className="mb-2 text-xl">{ended ? 'Your last week' : 'The week at a glance'}</h2>
         <ul className="flex flex-col divide-y divide-line">{week.days.map(dayButton)}</ul>
         <p className="mt-2 text-xs text-ink-faint">
           Version {week.publishedVersion}, published {momentLabel(week.publishedAt)}.

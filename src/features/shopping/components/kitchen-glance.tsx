@@ -52,8 +52,15 @@ export function KitchenGlance() {
               <span className="text-ink-soft">{week.name}</span>
             </div>
             <div className="grid gap-3 sm:grid-cols-2">
-              <Notice tone="cold" title={ahead.length ? nextPrepDayTitle(ahead[0], today) : 'No prep day ahead this week'}>
+              <Notice
+                tone="cold"
+                title={ahead.length ? nextPrepDayTitle(ahead[0], today) : compareIsoDates(week.endDate, today) < 0 ? 'No prep day planned' : 'No prep day ahead this week'}
+              >
                 {ahead.length > 1 && `Then ${dayLabel(ahead[1], true)}.`}
+                {ahead.length === 0 &&
+                  (compareIsoDates(week.endDate, today) < 0
+                    ? `${week.name} ended on ${dayLabel(week.endDate, true)}; the coach has not planned the next week yet.`
+                    : 'The coach has not planned the next prep day yet.')}
               </Notice>
               <div className="flex flex-col gap-2 rounded-lg border border-line-strong bg-paper-card p-3">
                 <Link to={paths.shopping(week.id, trip)} className="font-bold underline">

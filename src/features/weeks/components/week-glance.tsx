@@ -6,6 +6,7 @@ import { paths } from '@/config/paths';
 import { agrees, counted } from '@/lib/words';
 import { dayLabel, kitchenToday, nextPrepDayTitle } from '@/lib/dates';
 import type { GlanceDto } from '@shared/schemas/weeks.schema';
+import { compareIsoDates } from '@shared/domain/iso-date';
 
 /** Trays the cooling record has thrown away or past a deadline: the coach decides what to bake again or change. */
 function CoolingTrouble({ weekId, cooling }: { weekId: number; cooling: GlanceDto['cooling'] | undefined }) {
@@ -43,10 +44,31 @@ export function WeekGlance() {
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   const g = q.data;
   if (!g.week) return null;
+  // The week read is today's, else the next to start, else the latest (which then has ended).
+  if (compareIsoDates(g.week.endDate, today) < 0) {
+    return (
+      <Card>
+        <h2 className="mb-3 text-xl">This week at a glance</h2>
+        <Notice tone="warn" title="Nothing planned for this week">
+          <p>
+            The latest week,{' '}
+            <Link to={paths.week(g.week.id)} className="underline">
+              {g.week.name}
+            </Link>
+            , ended on {dayLabel(g.week.endDate, true)}. Clients see no plate for today until a week that covers it is published.
+          </p>
+          <Link to={`${paths.weeks}?from=${g.week.id}`} className="inline-flex min-h-11 items-center font-bold underline">
+            Plan this week from it
+          </Link>
+        </Notice>
+      </Card>
+    );
+  }
+  const ahead = compareIsoDates(today, g.week.startDate) < 0;
   return (
     <Card>
       <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
-        <h2 className="text-xl">This week at a glance</h2>
+        <h2 className="text-xl">{ahead ? `Coming up: from ${dayLabel(g.week.startDate, true)}` : 'This week at a glance'}</h2>
         <Link to={paths.week(g.week.id)} className="font-bold underline">
           {g.week.name}
         </Link>
