@@ -317,6 +317,41 @@ describe('the week board', () => {
     expect(next.body.copied).toEqual({ meals: 2, leftBehind: 0 });
   });
 
+  it('copies a week with two prep days to a week with one: each tray counted on both days is counted once, added up', async () => {
+    const coach = await coachWorkspace(app);
+    const { tray, plate, client } = await setup(coach);
+    const two = (await makeWeek(coach, { startDate: '2026-02-02', prepDate: '2026-02-01', secondPrepDate: '2026-02-04' })).week;
+    const filled = await fillWeek(coach, two.id, two.version, client.id, plate.id, ['2026-02-02', '2026-02-06']);
+    expect(filled.status).toBe(200);
+    await coach.agent
+      .put(`/api/weeks/${two.id}/trays`)
+      .send({
+        version: filled.body.week.version,
+        trays: [
+          { trayId: tray.id, prepDate: '2026-02-01', trayCount: 1 },
+          { trayId: tray.id, prepDate: '2026-02-04', trayCount: 2 },
+        ],
+      })
+      .expect(200);
+    // It used to fail on the one-row-per-tray-and-prep-day rule (409 "That already exists").
+    const one = await coach.agent.post(`/api/weeks/${two.id}/copy`).send({ startDate: '2026-02-09', prepDate: '2026-02-08' }).expect(201);
+    expect(one.body.week).toMatchObject({ prepDate: '2026-02-08', secondPrepDate: null });
+    expect(one.body.trays).toEqual([expect.objectContaining({ trayId: tray.id, prepDate: '2026-02-08', trayCount: 3 })]);
+    expect(expandBoard(one.body as BoardAnswer).cells.map((c) => [c.date, c.prepDate ?? null])).toEqual([
+      ['2026-02-09', null],
+      ['2026-02-13', null],
+    ]);
+    // Copied with two prep days, each keeps its own.
+    const both = await coach.agent
+      .post(`/api/weeks/${two.id}/copy`)
+      .send({ startDate: '2026-02-16', prepDate: '2026-02-15', secondPrepDate: '2026-02-18' })
+      .expect(201);
+    expect(both.body.trays.map((t: { prepDate: string; trayCount: number }) => [t.prepDate, t.trayCount]).sort()).toEqual([
+      ['2026-02-15', 1],
+      ['2026-02-18', 2],
+    ]);
+  });
+
   it('an archived client stays on the weeks where they have plates, leaves the others and copied weeks', async () => {
     const coach = await coachWorkspace(app);
     const { plate, client, week } = await setup(coach);

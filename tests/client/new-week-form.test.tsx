@@ -113,6 +113,28 @@ describe('new week form', () => {
     });
   });
 
+  it('starts on the day a link gives (this week, from the glance), never proposing a prep day gone by', async () => {
+    // Wednesday 9 December 2026; the week of 30 Nov ended on Sunday 6 Dec (invented).
+    vi.useFakeTimers({ now: new Date(2026, 11, 9, 9), toFake: ['Date'] });
+    const earlier = {
+      id: 4, name: 'Week of 30 Nov', startDate: '2026-11-30', endDate: '2026-12-06', prepDate: '2026-11-29', secondPrepDate: '2026-12-02',
+      publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 14, version: 3,
+    };
+    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse([earlier])));
+    render(
+      <MemoryRouter initialEntries={['/weeks?from=4&start=2026-12-07']}>
+        <QueryClientProvider client={queryClientFor(coach)}>
+          <WeeksPage />
+        </QueryClientProvider>
+      </MemoryRouter>,
+    );
+    await screen.findByText(/Archived clients and archived plates stay behind/);
+    expect(field('First day of the board').value).toBe('2026-12-07');
+    // Its prep days shifted (Sun 6 Dec, Wed 9 Dec): the first is gone by, so today; the second, today too, is dropped.
+    expect(field('Prep day').value).toBe('2026-12-09');
+    expect(field('Second prep day').value).toBe('');
+  });
+
   it('opens the copied week saying what came over and what stayed behind', async () => {
     const earlier = {
       id: 4, name: 'Week of 30 Nov', startDate: '2026-11-30', endDate: '2026-12-06', prepDate: '2026-11-29', secondPrepDate: null,

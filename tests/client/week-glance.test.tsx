@@ -123,10 +123,21 @@ describe('week glance', () => {
     show(glance({ nextWeek: null, nextPrepDate: null, cooling: { thrownAway: [{ trayName: 'Egg slab', prepDate: '2026-01-07' }], missed: [] } }));
     const notice = (await screen.findByText('Nothing planned for this week')).closest('[role]') as HTMLElement;
     expect(notice.textContent).toContain(`The latest week, Week of Jan 5, ended on ${dayLabel('2026-01-11', true)}. Clients see no plate for today`);
-    expect(within(notice).getByRole('link', { name: 'Plan this week from it' }).getAttribute('href')).toBe('/weeks?from=7');
+    // This week's board keeps the ended week's rhythm (boards from Monday): Monday 12 January, today.
+    expect(within(notice).getByRole('link', { name: 'Plan this week from a copy of it' }).getAttribute('href')).toBe('/weeks?from=7&start=2026-01-12');
     // The ended week's warnings, portions and cooling are not this week's news.
     expect(screen.queryByText('2 warnings')).toBeNull();
     expect(screen.queryByText(/Cooling record/)).toBeNull();
+  });
+
+  it('starts this week on the weekday the ended week started on, when the coach looks in mid-week or weeks later', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 0, 14, 8), toFake: ['Date'] }); // Wednesday 14 January
+    show(glance({ nextWeek: null, nextPrepDate: null }));
+    expect((await screen.findByRole('link', { name: 'Plan this week from a copy of it' })).getAttribute('href')).toBe('/weeks?from=7&start=2026-01-12');
+    cleanup();
+    vi.useFakeTimers({ now: new Date(2026, 1, 1, 8), toFake: ['Date'] }); // Sunday 1 February
+    show(glance({ nextWeek: null, nextPrepDate: null }));
+    expect((await screen.findByRole('link', { name: 'Plan this week from a copy of it' })).getAttribute('href')).toBe('/weeks?from=7&start=2026-01-26');
   });
 
   it('heads a week that has not started yet as coming up', async () => {

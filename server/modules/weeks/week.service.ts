@@ -428,10 +428,17 @@ export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: C
         allergenOverrides: c.allergenOverrides,
       } as never);
     }
+    // A source with two prep days copied to a week with one: each tray's counts on both go to that one prep day,
+    // added up (a tray is counted once per prep day).
+    const counts = new Map<string, { tray: number; prepDate: IsoDate; trayCount: number }>();
     for (const t of await tx.find(WeekTray, { week: source.id })) {
       const prepDate = t.prepDate === source.secondPrepDate && v.secondPrepDate ? v.secondPrepDate : v.prepDate;
-      tx.create(WeekTray, { week: w.id, tray: t.tray.id, prepDate, trayCount: t.trayCount } as never);
+      const key = `${t.tray.id} ${prepDate}`;
+      const seen = counts.get(key);
+      if (seen) seen.trayCount += t.trayCount;
+      else counts.set(key, { tray: t.tray.id, prepDate, trayCount: t.trayCount });
     }
+    for (const t of counts.values()) tx.create(WeekTray, { week: w.id, ...t } as never);
     await tx.flush();
     return { newId: w.id, copied: { meals: cells.length, leftBehind: all - cells.length } };
   });

@@ -37,9 +37,15 @@ export function Component() {
   const [startPicked, setStartPicked] = useState(false);
   const [prepPicked, setPrepPicked] = useState(false);
   const [secondPicked, setSecondPicked] = useState(false);
-  const startDate = startPicked ? form.startDate : firstFreeMonday(localToday(), list.data ?? []);
-  const prepDate = prepPicked ? form.prepDate : source ? shifted(source, source.prepDate, startDate) : isIsoDate(startDate) ? addDays(startDate, -1) : '';
-  const secondPrepDate = secondPicked ? form.secondPrepDate : source ? shifted(source, source.secondPrepDate, startDate) : '';
+  // "?start=": a link that knows the first day ("plan this week" once the last week is over: from today).
+  const today = localToday();
+  const startParam = params.get('start');
+  const startDate = startPicked ? form.startDate : startParam && isIsoDate(startParam) ? startParam : firstFreeMonday(today, list.data ?? []);
+  // A proposed prep day is never a day gone by (a board from today is prepped today at the earliest).
+  const proposedPrep = source ? shifted(source, source.prepDate, startDate) : isIsoDate(startDate) ? addDays(startDate, -1) : '';
+  const prepDate = prepPicked ? form.prepDate : isIsoDate(proposedPrep) && proposedPrep < today ? today : proposedPrep;
+  const proposedSecond = source ? shifted(source, source.secondPrepDate, startDate) : '';
+  const secondPrepDate = secondPicked ? form.secondPrepDate : proposedSecond && proposedSecond <= prepDate ? '' : proposedSecond;
   const saving = create.isPending || copy.isPending;
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [formError, setFormError] = useState<string | null>(null);

@@ -6,7 +6,8 @@ import { paths } from '@/config/paths';
 import { agrees, counted } from '@/lib/words';
 import { dayLabel, kitchenToday, nextPrepDayTitle } from '@/lib/dates';
 import type { GlanceDto } from '@shared/schemas/weeks.schema';
-import { compareIsoDates } from '@shared/domain/iso-date';
+import { addDays, compareIsoDates, daysBetween } from '@shared/domain/iso-date';
+import { BOARD_DAYS } from '@shared/domain/week-days';
 
 /** Trays the cooling record has thrown away or past a deadline: the coach decides what to bake again or change. */
 function CoolingTrouble({ weekId, cooling }: { weekId: number; cooling: GlanceDto['cooling'] | undefined }) {
@@ -35,6 +36,12 @@ function CoolingTrouble({ weekId, cooling }: { weekId: number; cooling: GlanceDt
   );
 }
 
+/** The first day of the board that covers `today` in the ended week's rhythm (its boards start on the same weekday). */
+function thisWeekStart(endDate: string, today: string): string {
+  const gone = daysBetween(addDays(endDate, 1), today);
+  return addDays(endDate, 1 + gone - (gone % BOARD_DAYS));
+}
+
 /** The coach's "this week at a glance": warnings, portions short, the next prep day, cooling trouble. */
 export function WeekGlance() {
   // The kitchen's day (its time zone when set, else this device's): the week, the next prep day and "from today on".
@@ -57,8 +64,8 @@ export function WeekGlance() {
             </Link>
             , ended on {dayLabel(g.week.endDate, true)}. Clients see no plate for today until a week that covers it is published.
           </p>
-          <Link to={`${paths.weeks}?from=${g.week.id}`} className="inline-flex min-h-11 items-center font-bold underline">
-            Plan this week from it
+          <Link to={`${paths.weeks}?from=${g.week.id}&start=${thisWeekStart(g.week.endDate, today)}`} className="inline-flex min-h-11 items-center font-bold underline">
+            Plan this week from a copy of it
           </Link>
         </Notice>
       </Card>
