@@ -352,6 +352,49 @@ describe('the week board', () => {
     ]);
   });
 
+  it('moves both prep days in one edit (Sunday and Wednesday to Wednesday and Friday): counts and cell choices each follow their own day once', async () => {
+    const coach = await coachWorkspace(app);
+    const { tray, plate, client } = await setup(coach);
+    const two = (await makeWeek(coach, { startDate: '2026-03-02', prepDate: '2026-03-01', secondPrepDate: '2026-03-04' })).week;
+    // Thursday's plate from Sunday's prep (explicit), Friday's from Wednesday's.
+    const placed = await coach.agent
+      .put(`/api/weeks/${two.id}/cells`)
+      .send({
+        version: two.version,
+        cells: [
+          { clientId: client.id, date: '2026-03-05', slot: 'breakfast', assemblyId: plate.id, prepDate: '2026-03-01' },
+          { clientId: client.id, date: '2026-03-06', slot: 'breakfast', assemblyId: plate.id, prepDate: '2026-03-04' },
+        ],
+      })
+      .expect(200);
+    const counted = await coach.agent
+      .put(`/api/weeks/${two.id}/trays`)
+      .send({ version: placed.body.week.version, trays: [{ trayId: tray.id, prepDate: '2026-03-01', trayCount: 1 }, { trayId: tray.id, prepDate: '2026-03-04', trayCount: 2 }] })
+      .expect(200);
+    // It used to fail on the one-row-per-tray-and-prep-day rule (409 "That already exists"), or move Sunday's twice.
+    const moved = await coach.agent
+      .patch(`/api/weeks/${two.id}`)
+      .send({ version: counted.body.week.version, prepDate: '2026-03-04', secondPrepDate: '2026-03-06' })
+      .expect(200);
+    expect(moved.body.trays.map((t: { prepDate: string; trayCount: number }) => [t.prepDate, t.trayCount]).sort()).toEqual([
+      ['2026-03-04', 1],
+      ['2026-03-06', 2],
+    ]);
+    expect(expandBoard(moved.body as BoardAnswer).cells.map((c) => [c.date, c.prepDate])).toEqual([
+      ['2026-03-05', '2026-03-04'],
+      ['2026-03-06', '2026-03-06'],
+    ]);
+
+    // The second prep day dropped: its counts go to the first, added up; its cells back to the default.
+    const one = await coach.agent.patch(`/api/weeks/${two.id}`).send({ version: moved.body.week.version, secondPrepDate: null }).expect(200);
+    expect(one.body.trays).toEqual([expect.objectContaining({ trayId: tray.id, prepDate: '2026-03-04', trayCount: 3 })]);
+    expect(expandBoard(one.body as BoardAnswer).cells.map((c) => [c.date, c.prepDate ?? null])).toEqual([
+      ['2026-03-05', '2026-03-04'],
+      ['2026-03-06', null],
+    ]);
+    expect(await sql('select prep_date, tray_count from week_tray where week_id = $1', [two.id])).toEqual([{ prep_date: '2026-03-04', tray_count: 3 }]);
+  });
+
   it('an archived client stays on the weeks where they have plates, leaves the others and copied weeks', async () => {
     const coach = await coachWorkspace(app);
     const { plate, client, week } = await setup(coach);

@@ -165,19 +165,34 @@ export async function updateWeek(em: EntityManager, actor: Actor, id: number, v:
   checkPrepDates(week.startDate, prepDate, second);
   if (week.secondPrepDate && !second) await keepTripsBought(em, week, datesOf(actor));
   return commitWeekEdit(em, actor, week, async (tx, w) => {
-    // Counts and cell choices follow their prep date when it moves.
-    const moves: [IsoDate | null | undefined, IsoDate | null][] = [
-      [w.prepDate, prepDate],
-      [w.secondPrepDate, second ?? null],
-    ];
-    for (const [from, to] of moves) {
-      if (!from || from === to) continue;
-      if (to) {
-        await tx.nativeUpdate(WeekTray, { week: w.id, prepDate: from }, { prepDate: to });
-        await tx.nativeUpdate(WeekCell, { week: w.id, prepDate: from }, { prepDate: to });
-      } else {
-        await tx.nativeDelete(WeekTray, { week: w.id, prepDate: from });
-        await tx.nativeUpdate(WeekCell, { week: w.id, prepDate: from }, { prepDate: null });
+    // Tray counts and cell choices follow their prep day when it moves; a second prep day dropped hands its counts to
+    // the first (added up: the plates still need those portions) and its cells go back to the default. Both days can
+    // move in one edit (Sunday and Wednesday to Wednesday and Friday): every row is read before any is written, so
+    // nothing moves twice, and counts are deleted and written again (one row per tray and prep day).
+    const to = new Map<IsoDate, { tray: IsoDate; cell: IsoDate | null }>();
+    if (w.prepDate !== prepDate) to.set(w.prepDate, { tray: prepDate, cell: prepDate });
+    if (w.secondPrepDate && w.secondPrepDate !== (second ?? null)) to.set(w.secondPrepDate, second ? { tray: second, cell: second } : { tray: prepDate, cell: null });
+    if (to.size) {
+      const froms = [...to.keys()];
+      const cells = await tx.find(WeekCell, { week: w.id, prepDate: { $in: froms } }, { fields: ['id', 'prepDate'] });
+      for (const [from, target] of to) {
+        const ids = cells.filter((c) => c.prepDate === from).map((c) => c.id);
+        if (ids.length) await tx.nativeUpdate(WeekCell, { id: { $in: ids } }, { prepDate: target.cell });
+      }
+      const moved = await tx.find(WeekTray, { week: w.id, prepDate: { $in: froms } });
+      const counts = new Map<string, { tray: number; prepDate: IsoDate; trayCount: number }>();
+      for (const t of moved) {
+        const prep = to.get(t.prepDate)!.tray;
+        const key = `${t.tray.id} ${prep}`;
+        const seen = counts.get(key);
+        if (seen) seen.trayCount += t.trayCount;
+        else counts.set(key, { tray: t.tray.id, prepDate: prep, trayCount: t.trayCount });
+      }
+      await tx.nativeDelete(WeekTray, { week: w.id, prepDate: { $in: froms } });
+      for (const c of counts.values()) {
+        const kept = await tx.findOne(WeekTray, { week: w.id, tray: c.tray, prepDate: c.prepDate });
+        if (kept) kept.trayCount += c.trayCount;
+        else tx.create(WeekTray, { week: w.id, ...c } as never);
       }
     }
     if (v.name !== undefined) w.name = v.name;

@@ -30,7 +30,7 @@ export function PrepDates({ board, busy, error, onSave }: { board: BoardDto; bus
         value={second}
         error={fields.secondPrepDate?.[0]}
         onChange={(e) => setSecond(e.target.value)}
-        hint="Fresher portions for the end of the week"
+        hint="Fresher portions for the end of the week. Cleared, its tray counts join the first prep day’s."
       />
       {/* Level with the date inputs (below their labels), whatever the hints and errors under them. */}
       <div className="sm:pt-6">
