@@ -284,6 +284,23 @@ line name",dairy,100,5,1,10,3,0,100,,,,,,,,nowhere,label`,
     expect(row).toEqual({ fat_g: '39.6900', sodium_mg: '1717.0000' });
   });
 
+  it('reads the delimiter off the header line: a short semicolon file whose decimal commas outnumber its semicolons, and a tab file', async () => {
+    // Papa Parse's own guess took the commas of "44,0;4,6" for the delimiter in this file (ending with a line break, as
+    // a saved file does) and reported the header as one unknown column.
+    const semi = ['name;category;kcal;fat_g;protein_g;carbs_g;fiber_g;source', 'Semicolon mascarpone;dairy;429;44,0;4,6;4,8;0;package label', ''].join('\n');
+    await coachA.agent.post('/api/ingredients/import').attach('file', Buffer.from(semi), { filename: 'eu.csv', contentType: 'text/csv' }).expect(201);
+    const tabs = ['name\tcategory\tkcal\tfat_g\tprotein_g\tcarbs_g\tfiber_g\tsource', 'Tab mascarpone\tdairy\t429\t44.0\t4.6\t4.8\t0\tpackage label'].join('\n');
+    await coachA.agent.post('/api/ingredients/import').attach('file', Buffer.from(tabs), { filename: 'tabs.csv', contentType: 'text/csv' }).expect(201);
+    const rows = await sql<{ name: string; fat_g: string; protein_g: string }>(
+      `select name, fat_g, protein_g from ingredient where name like '% mascarpone' and workspace_id = $1 order by name`,
+      [coachA.workspaceId],
+    );
+    expect(rows).toEqual([
+      { name: 'Semicolon mascarpone', fat_g: '44.0000', protein_g: '4.6000' },
+      { name: 'Tab mascarpone', fat_g: '44.0000', protein_g: '4.6000' },
+    ]);
+  });
+
   it('reports a missing required column and an unknown one on line 1', async () => {
     const res = await coachA.agent
       .post('/api/ingredients/import')

@@ -81,6 +81,17 @@ interface CsvRow {
   cells: string[];
 }
 
+/**
+ * The delimiter of the file, read off its header line (column names hold none): a comma, a semicolon (what a
+ * spreadsheet writes where the comma is the decimal mark) or a tab. Papa Parse's own guess weighs the data lines too
+ * and takes the decimal commas of a short semicolon file ("44,0;4,6") for delimiters.
+ */
+export function headerDelimiter(text: string): string {
+  const header = /^[^\r\n]*/.exec(text)![0];
+  const count = (d: string) => header.split(d).length - 1;
+  return [';', '\t'].reduce((best, d) => (count(d) > count(best) ? d : best), ',');
+}
+
 /** Rows with the file line each starts on (quoted cells may span lines). */
 function parseRows(text: string): { rows: CsvRow[]; problems: ImportProblem[] } {
   const rows: CsvRow[] = [];
@@ -88,6 +99,7 @@ function parseRows(text: string): { rows: CsvRow[]; problems: ImportProblem[] } 
   let lastCursor = 0;
   let line = 1;
   Papa.parse<string[]>(text, {
+    delimiter: headerDelimiter(text),
     skipEmptyLines: false,
     step: (res) => {
       const start = lastCursor;

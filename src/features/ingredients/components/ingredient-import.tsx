@@ -53,7 +53,8 @@ export function IngredientImport() {
     <div className="flex flex-col gap-4">
       <p className="text-sm text-ink-soft">
         One ingredient per row, values per 100 g. Every row is checked first: if any row has a problem, nothing is saved
-        and the problems are listed by line. Up to 1 MB.{' '}
+        and the problems are listed by line. Commas, semicolons or tabs between the columns (as the header line has them),
+        and a decimal comma or point. Up to 1 MB.{' '}
         <a href={templateHref()} download="trayline-ingredients-template.csv" className="font-bold underline">
           Download a template
         </a>
