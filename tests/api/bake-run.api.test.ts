@@ -291,6 +291,34 @@ describe('the bake run of a prep week', () => {
   });
 });
 
+describe('a prep day moved on the week', () => {
+  it('takes its saved bake-run settings along (the start at the same clock time), even when both days move onto each other’s dates', async () => {
+    const { coach, week } = await twoTrayWeek();
+    const oven = await makeOven(coach, { name: 'Left', racks: 2, traysPerRack: 1 });
+    const saved = { start: '2026-01-04T09:30', cooks: 2, handsOnMinutes: {}, ovenIds: [oven.id] };
+    await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send(saved).expect(200);
+    const weekVersion = async () => (await coach.agent.get(`/api/weeks/${week.id}`).expect(200)).body.week.version as number;
+    const settingsOn = async (prepDate: string) => (await coach.agent.get(`/api/weeks/${week.id}/bake-run?prepDate=${prepDate}`).expect(200)).body.settings;
+
+    // Sunday's prep moved to Saturday: the kitchen's cooks and oven come along, the start on Saturday at 09:30.
+    await coach.agent.patch(`/api/weeks/${week.id}`).send({ version: await weekVersion(), prepDate: '2026-01-03' }).expect(200);
+    expect(await settingsOn('2026-01-03')).toMatchObject({ start: '2026-01-03T09:30', cooks: 2, ovenIds: [oven.id] });
+    // Moved is changed: a page still holding the version from before is told (409), never overwrites it.
+    await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ ...saved, start: '2026-01-03T10:00', version: 1 }).expect(409);
+
+    // A second prep day with its own settings; then Saturday and Wednesday move to Wednesday and Friday in one edit.
+    await coach.agent.patch(`/api/weeks/${week.id}`).send({ version: await weekVersion(), secondPrepDate: '2026-01-07' }).expect(200);
+    await coach.agent.put(`/api/weeks/${week.id}/bake-run/settings`).send({ ...saved, prepDate: '2026-01-07', start: '2026-01-07T14:00', cooks: 3 }).expect(200);
+    await coach.agent.patch(`/api/weeks/${week.id}`).send({ version: await weekVersion(), prepDate: '2026-01-07', secondPrepDate: '2026-01-09' }).expect(200);
+    expect(await settingsOn('2026-01-07')).toMatchObject({ start: '2026-01-07T09:30', cooks: 2 });
+    expect(await settingsOn('2026-01-09')).toMatchObject({ start: '2026-01-09T14:00', cooks: 3 });
+
+    // The second prep day dropped: its settings go (the first keeps its own).
+    await coach.agent.patch(`/api/weeks/${week.id}`).send({ version: await weekVersion(), secondPrepDate: null }).expect(200);
+    expect(await sql('select prep_date, cooks from bake_run_setting where week_id = $1', [week.id])).toEqual([{ prep_date: '2026-01-07', cooks: 2 }]);
+  });
+});
+
 describe('moving a run to the time the kitchen really started', () => {
   it('the assistant moves the start on prep day; the plan shifts, the other settings stay, a stale version is a 409', async () => {
     const { coach, assistant, week } = await twoTrayWeek();

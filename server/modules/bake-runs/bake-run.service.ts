@@ -5,7 +5,8 @@ import { planBakeRunOffThread } from '../../lib/bake-run-pool.js';
 import { prepDatesOf, weekTitle } from '@shared/domain/week-board.js';
 import type { BakeRunResult, BakeRunRules, BakeTray } from '@shared/domain/bake-run-types.js';
 import { bakeRunInputSchema, type BakeRunRequestBody } from '@shared/schemas/bake-run.schema.js';
-import { longDate, type DateOrder } from '@shared/domain/iso-date.js';
+import { daysBetween, longDate, type DateOrder } from '@shared/domain/iso-date.js';
+import { addLocalMinutes } from '@shared/domain/bake-run-time.js';
 import { clockText, type ClockStyle } from '@shared/domain/clock.js';
 import { movedOut, ovensAt, resumeRun, takeDone, type BakeRunDone } from '@shared/domain/bake-run-resume.js';
 import { resolveBakeRunRules } from '@shared/domain/bake-run-model.js';
@@ -171,6 +172,28 @@ async function weekTrays(em: EntityManager, week: IWeek, prepDate: string, setti
     }));
   });
   return { list, schedulerTrays, used: [...new Set(used)] };
+}
+
+/**
+ * A week's prep days moved (the week's own edit, inside its transaction; `to` maps each old prep day that changed to
+ * its new one, or to null when it is dropped): each day's saved bake-run settings go with it (cooks, ovens, hands-on
+ * minutes, and the start at the same clock time of the new day), so the kitchen's choices are not lost. A run under
+ * way (trays already out) stays on the day it was baked, as its cooling records do; a dropped day's settings go.
+ * Every row is read before any is written: both days can move in one edit onto each other's old dates.
+ */
+export async function followPrepDays(tx: EntityManager, weekId: number, to: ReadonlyMap<string, string | null>): Promise<void> {
+  const rows = await tx.find(BakeRunSetting, { week: weekId, prepDate: { $in: [...to.keys()] } });
+  const moving = rows.filter((r) => !r.done);
+  if (!moving.length) return;
+  // Off their dates first (one row per week and prep day), then onto the new ones.
+  for (const r of moving) await tx.nativeUpdate(BakeRunSetting, { id: r.id }, { prepDate: `~${r.id}`.slice(0, 10) });
+  for (const r of moving) {
+    const target = to.get(r.prepDate)!;
+    const taken = target !== null && (await tx.count(BakeRunSetting, { week: weekId, prepDate: target }));
+    if (target === null || taken) await tx.nativeDelete(BakeRunSetting, { id: r.id });
+    else await tx.nativeUpdate(BakeRunSetting, { id: r.id }, { prepDate: target, start: addLocalMinutes(r.start, daysBetween(r.prepDate, target) * 24 * 60) });
+  }
+  for (const r of moving) tx.getUnitOfWork().unsetIdentity(r);
 }
 
 export async function getWeekBakeRun(em: EntityManager, actor: Actor, weekId: number, wantedDate?: string): Promise<WeekBakeRunDto> {

@@ -20,6 +20,7 @@ import { datesOf, type Actor } from '../../http/authz.js';
 import { Conflict, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Tray } from '../trays/tray.entity.js';
 import { coolingTrouble } from '../bake-runs/cooling.service.js';
+import { followPrepDays } from '../bake-runs/bake-run.service.js';
 import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell } from './week.entity.js';
 import { publishedAllergensOf } from './week-publish.service.js';
 import {
@@ -173,6 +174,7 @@ export async function updateWeek(em: EntityManager, actor: Actor, id: number, v:
     if (w.prepDate !== prepDate) to.set(w.prepDate, { tray: prepDate, cell: prepDate });
     if (w.secondPrepDate && w.secondPrepDate !== (second ?? null)) to.set(w.secondPrepDate, second ? { tray: second, cell: second } : { tray: prepDate, cell: null });
     if (to.size) {
+      await followPrepDays(tx, w.id, new Map([...to].map(([from, target]) => [from, target.cell])));
       const froms = [...to.keys()];
       const cells = await tx.find(WeekCell, { week: w.id, prepDate: { $in: froms } }, { fields: ['id', 'prepDate'] });
       for (const [from, target] of to) {
