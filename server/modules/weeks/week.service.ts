@@ -21,7 +21,7 @@ import { Conflict, StaleEdit, ValidationError } from '../../http/errors.js';
 import { Tray } from '../trays/tray.entity.js';
 import { coolingTrouble } from '../bake-runs/cooling.service.js';
 import { followPrepDays } from '../bake-runs/bake-run.service.js';
-import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell } from './week.entity.js';
+import { Week, WeekCell, WeekPublication, WeekTray, type IWeek, type IWeekCell, type IWeekTray } from './week.entity.js';
 import { publishedAllergensOf } from './week-publish.service.js';
 import {
   boardInput,
@@ -159,6 +159,21 @@ export async function commitWeekEdit(
   return answer ? answer(version) : getBoard(em, actor, week.id);
 }
 
+/**
+ * Tray counts put on other prep days (`dayOf` maps each count's prep day to its new one): one count per tray and
+ * prep day, those landing on the same day added up.
+ */
+function countsOnPrepDays(rows: readonly IWeekTray[], dayOf: (prepDate: IsoDate) => IsoDate) {
+  const counts = new Map<string, { tray: number; prepDate: IsoDate; trayCount: number }>();
+  for (const t of rows) {
+    const prepDate = dayOf(t.prepDate);
+    const seen = counts.get(`${t.tray.id} ${prepDate}`);
+    if (seen) seen.trayCount += t.trayCount;
+    else counts.set(`${t.tray.id} ${prepDate}`, { tray: t.tray.id, prepDate, trayCount: t.trayCount });
+  }
+  return [...counts.values()];
+}
+
 export async function updateWeek(em: EntityManager, actor: Actor, id: number, v: UpdateWeek): Promise<BoardAnswer> {
   const week = await openForEdit(em, actor, id, v.version);
   const prepDate = v.prepDate ?? week.prepDate;
@@ -182,16 +197,9 @@ export async function updateWeek(em: EntityManager, actor: Actor, id: number, v:
         if (ids.length) await tx.nativeUpdate(WeekCell, { id: { $in: ids } }, { prepDate: target.cell });
       }
       const moved = await tx.find(WeekTray, { week: w.id, prepDate: { $in: froms } });
-      const counts = new Map<string, { tray: number; prepDate: IsoDate; trayCount: number }>();
-      for (const t of moved) {
-        const prep = to.get(t.prepDate)!.tray;
-        const key = `${t.tray.id} ${prep}`;
-        const seen = counts.get(key);
-        if (seen) seen.trayCount += t.trayCount;
-        else counts.set(key, { tray: t.tray.id, prepDate: prep, trayCount: t.trayCount });
-      }
+      const counts = countsOnPrepDays(moved, (d) => to.get(d)!.tray);
       await tx.nativeDelete(WeekTray, { week: w.id, prepDate: { $in: froms } });
-      for (const c of counts.values()) {
+      for (const c of counts) {
         const kept = await tx.findOne(WeekTray, { week: w.id, tray: c.tray, prepDate: c.prepDate });
         if (kept) kept.trayCount += c.trayCount;
         else tx.create(WeekTray, { week: w.id, ...c } as never);
@@ -447,15 +455,9 @@ export async function copyWeek(em: EntityManager, actor: Actor, id: number, v: C
     }
     // A source with two prep days copied to a week with one: each tray's counts on both go to that one prep day,
     // added up (a tray is counted once per prep day).
-    const counts = new Map<string, { tray: number; prepDate: IsoDate; trayCount: number }>();
-    for (const t of await tx.find(WeekTray, { week: source.id })) {
-      const prepDate = t.prepDate === source.secondPrepDate && v.secondPrepDate ? v.secondPrepDate : v.prepDate;
-      const key = `${t.tray.id} ${prepDate}`;
-      const seen = counts.get(key);
-      if (seen) seen.trayCount += t.trayCount;
-      else counts.set(key, { tray: t.tray.id, prepDate, trayCount: t.trayCount });
-    }
-    for (const t of counts.values()) tx.create(WeekTray, { week: w.id, ...t } as never);
+    const sourceCounts = await tx.find(WeekTray, { week: source.id });
+    const onNewDays = countsOnPrepDays(sourceCounts, (d) => (d === source.secondPrepDate && v.secondPrepDate ? v.secondPrepDate : v.prepDate));
+    for (const t of onNewDays) tx.create(WeekTray, { week: w.id, ...t } as never);
     await tx.flush();
     return { newId: w.id, copied: { meals: cells.length, leftBehind: all - cells.length } };
   });
