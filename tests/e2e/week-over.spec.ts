@@ -54,6 +54,13 @@ test('once the last week is over: the coach plans this week from a copy of it; t
   await signIn(assistant, 'assistant@trayline.test');
   await expect(assistant.getByText('No prep day planned')).toBeVisible();
   await expect(assistant.getByText(/ ended on .+; the coach has not planned the next week yet\.$/)).toBeVisible();
+  // "Shopping list" does not open the ended week's list as if it were to buy now.
+  await assistant.getByRole('button', { name: 'Menu' }).click();
+  await assistant.getByRole('link', { name: 'Shopping list' }).first().click();
+  await expect(assistant.getByRole('heading', { name: 'No prep day ahead' })).toBeVisible();
+  await expect(assistant.getByText(/’s prep days? \(.+\) ha(s|ve) passed, and the coach has not planned the next one yet\.$/)).toBeVisible();
+  await expect(assistant.getByRole('link', { name: /^Open .+’s shopping list$/ })).toBeVisible();
+  await expectNoSeriousA11yViolations(assistant, 'shopping list with no prep day ahead');
   await kitchen.close();
 
   // Dana's phone: no plate today, said as such, never the first day of the week gone by as if it were today.

@@ -5,5 +5,5 @@ import { paths } from '@/config/paths';
 
 /** "Shopping list" in the navigation: this week's list (in a week with two prep days, the next prep day's). */
 export function Component() {
-  return <CurrentWeekRedirect to={(w) => paths.shopping(w.id, nextTripOf(w, localToday()))} what="shopping list" />;
+  return <CurrentWeekRedirect to={(w) => paths.shopping(w.id, nextTripOf(w, localToday()))} what="shopping list" title="Shopping list" sayWhenPassed />;
 }

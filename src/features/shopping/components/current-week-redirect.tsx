@@ -1,13 +1,32 @@
-import { Navigate } from 'react-router-dom';
+import { Link, Navigate } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import { EmptyState, ErrorState, PageSkeleton } from '@/components/ui/states';
+import { compareIsoDates } from '@shared/domain/iso-date';
+import { prepDatesOf } from '@shared/domain/week-board';
+import { EmptyState, ErrorState, PageHeader, PageSkeleton } from '@/components/ui/states';
 import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { currentWeekQuery } from '../api/shopping.queries';
-import { localToday } from '@/lib/dates';
+import { dayLabel, localToday } from '@/lib/dates';
+import { andList } from '@shared/domain/words';
 
-/** Sends the person to the kitchen's week's page (the week of the next prep day; see kitchenWeek). */
-export function CurrentWeekRedirect({ to, what }: { to: (week: WeekSummaryDto) => string; what: string }) {
-  const q = useQuery(currentWeekQuery(localToday()));
+/**
+ * Sends the person to the kitchen's week's page (the week of the next prep day; see kitchenWeek). With `sayWhenPassed`
+ * (the shopping list), when no prep day is ahead (the coach has not planned the next one yet) it says so instead of
+ * opening a list whose prep days have passed as if it were this week's (an assistant could shop for it again), with
+ * the way to that week's page. Labels open as they are: printing one again after prep day is common.
+ */
+export function CurrentWeekRedirect({
+  to,
+  what,
+  title,
+  sayWhenPassed = false,
+}: {
+  to: (week: WeekSummaryDto) => string;
+  what: string;
+  title: string;
+  sayWhenPassed?: boolean;
+}) {
+  const today = localToday();
+  const q = useQuery(currentWeekQuery(today));
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   if (!q.data) {
@@ -17,5 +36,21 @@ export function CurrentWeekRedirect({ to, what }: { to: (week: WeekSummaryDto) =
       </EmptyState>
     );
   }
-  return <Navigate to={to(q.data)} replace />;
+  const week = q.data;
+  const prepDays = prepDatesOf(week);
+  if (!sayWhenPassed || prepDays.some((d) => compareIsoDates(d, today) >= 0)) return <Navigate to={to(week)} replace />;
+  return (
+    <div className="flex flex-col gap-5">
+      <PageHeader title={title} />
+      <EmptyState title="No prep day ahead">
+        <p>
+          {week.name}’s prep {prepDays.length === 1 ? 'day' : 'days'} ({andList(prepDays.map((d) => dayLabel(d, true)))}){' '}
+          {prepDays.length === 1 ? 'has' : 'have'} passed, and the coach has not planned the next one yet.
+        </p>
+        <Link to={to(week)} className="inline-flex min-h-11 items-center font-bold underline">
+          Open {week.name}’s {what}
+        </Link>
+      </EmptyState>
+    </div>
+  );
 }
