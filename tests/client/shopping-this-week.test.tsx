@@ -39,7 +39,7 @@ describe("the assistant's shopping list and labels from the navigation", () => {
   it('says no prep day is ahead rather than open a list whose prep days have passed, with the way to it', async () => {
     open('shopping', new Date(2026, 0, 9, 9));
     expect(await screen.findByRole('heading', { name: 'No prep day ahead' })).toBeTruthy();
-    expect(screen.getByText(`Week of Jan 5’s prep days (${dayLabel('2026-01-04', true)} and ${dayLabel('2026-01-07', true)}) have passed, and the coach has not planned the next one yet.`)).toBeTruthy();
+    expect(screen.getByText(`Week of Jan 5’s prep days (${dayLabel('2026-01-04', true)} and ${dayLabel('2026-01-07', true)}) have passed, and no later prep day is planned yet.`)).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Open Week of Jan 5’s shopping list' }).getAttribute('href')).toBe('/weeks/7/shopping');
     expect(screen.queryByText('the list opened')).toBeNull();
   });

@@ -45,7 +45,7 @@ export function CurrentWeekRedirect({
       <EmptyState title="No prep day ahead">
         <p>
           {week.name}’s prep {prepDays.length === 1 ? 'day' : 'days'} ({andList(prepDays.map((d) => dayLabel(d, true)))}){' '}
-          {prepDays.length === 1 ? 'has' : 'have'} passed, and the coach has not planned the next one yet.
+          {prepDays.length === 1 ? 'has' : 'have'} passed, and no later prep day is planned yet.
         </p>
         <Link to={to(week)} className="inline-flex min-h-11 items-center font-bold underline">
           Open {week.name}’s {what}
