@@ -199,8 +199,10 @@ export async function updateWeek(em: EntityManager, actor: Actor, id: number, v:
       const moved = await tx.find(WeekTray, { week: w.id, prepDate: { $in: froms } });
       const counts = countsOnPrepDays(moved, (d) => to.get(d)!.tray);
       await tx.nativeDelete(WeekTray, { week: w.id, prepDate: { $in: froms } });
+      // Counts already on a day they land on (the first prep day, when the second is dropped): read once, added to.
+      const staying = await tx.find(WeekTray, { week: w.id, prepDate: { $in: [...new Set(counts.map((c) => c.prepDate))] } });
       for (const c of counts) {
-        const kept = await tx.findOne(WeekTray, { week: w.id, tray: c.tray, prepDate: c.prepDate });
+        const kept = staying.find((t) => t.tray.id === c.tray && t.prepDate === c.prepDate);
         if (kept) kept.trayCount += c.trayCount;
         else tx.create(WeekTray, { week: w.id, ...c } as never);
       }

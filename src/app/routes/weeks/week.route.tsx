@@ -210,7 +210,7 @@ export function Component() {
 
       <Card className="scroll-mt-20">
         <h2 className="mb-3 text-xl">Send plans</h2>
-        <SendPlansPanel board={board} clients={clients} clashes={clashes.data} preselect={sendTo} key={sendTo.join(",")} />
+        <SendPlansPanel board={board} clients={clients} clashes={clashes.data} preselect={sendTo} key={sendTo.join(',')} />
       </Card>
 
       <Card>

@@ -45,6 +45,8 @@ export function KitchenGlance() {
         const ahead = prepDatesOf(week).filter((d) => compareIsoDates(d, today) >= 0);
         // A week with two prep days is shopped per prep day: the next one's list.
         const trip = nextTripOf(week, today);
+        // The week is over: nothing is planned after it yet (else the kitchen's week would be the next one).
+        const ended = compareIsoDates(week.endDate, today) < 0;
         return (
           <Card>
             <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
@@ -54,11 +56,11 @@ export function KitchenGlance() {
             <div className="grid gap-3 sm:grid-cols-2">
               <Notice
                 tone="cold"
-                title={ahead.length ? nextPrepDayTitle(ahead[0], today) : compareIsoDates(week.endDate, today) < 0 ? 'No prep day planned' : 'No prep day ahead this week'}
+                title={ahead.length ? nextPrepDayTitle(ahead[0], today) : ended ? 'No prep day planned' : 'No prep day ahead this week'}
               >
                 {ahead.length > 1 && `Then ${dayLabel(ahead[1], true)}.`}
                 {ahead.length === 0 &&
-                  (compareIsoDates(week.endDate, today) < 0
+                  (ended
                     ? `${week.name} ended on ${dayLabel(week.endDate, true)}; the coach has not planned the next week yet.`
                     : 'The coach has not planned the next prep day yet.')}
               </Notice>
