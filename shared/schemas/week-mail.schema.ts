@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { OutboxItemDto } from './mail.schema';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { isoDate } from './weeks.schema';
 
 /** Sending a published prep week to clients (e-mail with the week-plan PDF) and the delivery log. */
 
@@ -23,6 +24,11 @@ export const sendWeekSchema = z.object({
    * answers the same batch and queues nothing new.
    */
   requestId: z.uuid().optional(),
+  /**
+   * The coach's today (their device's date): sent mid-week, the e-mail says how many of the plates holding an
+   * allergen on the client's list are still ahead.
+   */
+  today: isoDate.optional(),
 });
 export type SendWeekInput = z.input<typeof sendWeekSchema>;
 

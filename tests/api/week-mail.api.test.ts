@@ -141,6 +141,21 @@ describe('sending a week', () => {
     expect(texts.get(eve.id)).toContain('2 plates hold an allergen on your list: the PDF says which, and what to do, beside each.');
     // Milk is not on Fay's list: nothing said.
     expect(texts.get(fay.id)).not.toContain('allergen');
+
+    // Sent with the coach's today: on the first day all are ahead (as above); mid-week, how many are still ahead;
+    // after the last, none (each press of Send is its own request).
+    const sentOn = async (today: string) => {
+      const r = await coach.agent.post(`/api/weeks/${board.week.id}/send`).send({ clientIds: [eve.id], today, requestId: randomUUID() }).expect(202);
+      return (await rowsOfBatch(r.body.batchId))[0] as Row & { text: string };
+    };
+    expect((await sentOn(DAYS[0])).text).toContain('2 plates hold an allergen on your list: the PDF says which, and what to do, beside each.');
+    // 2026-01-06 is a Tuesday (the workspace writes dates month first).
+    expect((await sentOn(DAYS[1])).text).toContain(
+      '2 plates this week hold an allergen on your list, 1 of them from Tuesday, Jan 6 on: the PDF says which, and what to do, beside each.',
+    );
+    expect((await sentOn('2026-01-09')).text).toContain('2 plates earlier this week held an allergen on your list, none from Friday, Jan 9 on: the PDF says which.');
+    const bad = await coach.agent.post(`/api/weeks/${board.week.id}/send`).send({ clientIds: [eve.id], today: '2026-13-01' }).expect(400);
+    expect(JSON.stringify(bad.body.errors)).toContain('today');
   });
 
   it('to all: one e-mail per client with an e-mail on the published board; the PDF holds that client’s plates and macros', async () => {

@@ -3,6 +3,7 @@ import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { jsonResponse as json, renderInApp } from './render';
 import type { BoardDto, WeekPublishedAllergensDto } from '@shared/schemas/weeks.schema';
 import { SendPlansPanel } from '@/features/mail/components/send-plans-panel';
+import { localToday } from '@/lib/dates';
 import { useQuery } from '@tanstack/react-query';
 import { clientsQuery } from '@/features/clients/api/clients.queries';
 
@@ -72,7 +73,8 @@ describe('send plans panel', () => {
 
     await screen.findByText(/1 plan queued/);
     const sent = calls.find((c) => c.url === '/api/weeks/7/send')!.body!;
-    expect(sent).toMatchObject({ clientIds: [1], note: 'Enjoy the week' });
+    // The coach's today goes along: sent mid-week, the e-mail counts the allergen plates still ahead.
+    expect(sent).toMatchObject({ clientIds: [1], note: 'Enjoy the week', today: localToday() });
     expect(typeof sent.requestId).toBe('string');
     await waitFor(() => expect(screen.getByText(/1 sent · 0 waiting · 0 failed/)).toBeTruthy());
     expect(calls.some((c) => c.url === '/api/outbox?batchId=b-1')).toBe(true);

@@ -57,16 +57,16 @@ export function weekPlanMail(p: {
   thawReminders?: boolean;
   /** How many of the plan's plates hold an allergen on the client's list (the PDF says which and what to do). */
   allergenPlates?: number;
+  /**
+   * Sent once the week has begun: how many of those plates are dated from `day` on ("Friday, Dec 4"), when some
+   * are behind.
+   */
+  allergenPlatesAhead?: { count: number; day: string };
 }): MailBody {
-  const n = p.allergenPlates ?? 0;
   const lines = [
     `Hello ${p.clientName},`,
     `your plan for the week of ${p.weekLabel} is attached as a PDF: each day's plate, how to put it together and reheat it, the macros and the eat-by dates.`,
-    ...(n > 0
-      ? [
-          `${n === 1 ? 'One plate holds' : `${n} plates hold`} an allergen on your list: the PDF says which, and what to do, beside ${n === 1 ? 'it' : 'each'}.`,
-        ]
-      : []),
+    ...allergenLine(p.allergenPlates ?? 0, p.allergenPlatesAhead),
     ...(p.thawReminders
       ? ['Some plates come frozen: the calendar file attached reminds you on the evening before to move each one from the freezer to the fridge. Open it to add the reminders to your calendar.']
       : []),
@@ -77,6 +77,19 @@ export function weekPlanMail(p: {
     text: `${lines.join('\n\n')}${p.link ? `\n\nSee it on your phone: ${p.link}` : ''}\n`,
     html: layout(lines, p.link ? { href: p.link, label: 'Open my plates' } : undefined),
   };
+}
+
+/** The plan e-mail's sentence on plates holding an allergen on the client's list (none when there is none). */
+function allergenLine(n: number, ahead?: { count: number; day: string }): string[] {
+  if (n <= 0) return [];
+  const plates = (k: number) => (k === 1 ? 'One plate' : `${k} plates`);
+  if (!ahead || ahead.count >= n) {
+    return [`${plates(n)} ${n === 1 ? 'holds' : 'hold'} an allergen on your list: the PDF says which, and what to do, beside ${n === 1 ? 'it' : 'each'}.`];
+  }
+  if (ahead.count === 0) {
+    return [`${plates(n)} earlier this week held an allergen on your list, none from ${ahead.day} on: the PDF says which.`];
+  }
+  return [`${plates(n)} this week hold an allergen on your list, ${ahead.count} of them from ${ahead.day} on: the PDF says which, and what to do, beside each.`];
 }
 
 /** To a kitchen assistant: a prep day's shopping list and bake run, attached as PDFs. */

@@ -6,7 +6,7 @@ import { appLink, mailKey, newBatchId, queueMail, requestBatchId, type MailQueue
 import { weekPlanMail } from '../mail/mail-templates.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { presentOutbox } from '../mail/outbox.service.js';
-import { longDate, toDateOrder } from '@shared/domain/iso-date.js';
+import { compareIsoDates, dayHeading, longDate, toDateOrder } from '@shared/domain/iso-date.js';
 import { Client } from '../clients/client.entity.js';
 import { findClient } from '../clients/client.service.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
@@ -62,7 +62,7 @@ export async function sendWeek(
   queue: MailQueue,
   actor: Actor,
   weekId: number,
-  input: { clientIds?: number[]; note?: string; requestId?: string },
+  input: { clientIds?: number[]; note?: string; requestId?: string; today?: string },
   opts: { publicUrl: string },
 ): Promise<SendWeekResultDto> {
   const week = await findWeek(em, actor, weekId);
@@ -99,17 +99,33 @@ export async function sendWeek(
     }
 
     const ws = await tx.findOneOrFail(Workspace, actor.workspaceId);
-    const weekLabel = longDate(pub.snapshot.startDate, toDateOrder(ws.dateOrder));
+    const order = toDateOrder(ws.dateOrder);
+    const weekLabel = longDate(pub.snapshot.startDate, order);
     const link = appLink(opts.publicUrl, '/my-plates');
     for (const r of recipients) {
       const days = pub.snapshot.clients[String(r.clientId)]?.days ?? [];
       // A frozen plate in this client's plan: their thaw reminders go along as a calendar file.
       const thaw = thawTasks(days).length > 0;
       // Plates holding an allergen on the client's list (allowed by the coach, or put on the list since): the PDF says which.
-      const allergenPlates = withYourList(days, byId.get(r.clientId)?.allergens ?? [])
-        .flatMap((d) => d.plates)
-        .filter((p) => p.onYourList?.length).length;
-      const body = weekPlanMail({ businessName: ws.name, clientName: r.name, weekLabel, note, link, thawReminders: thaw, allergenPlates });
+      const onList = withYourList(days, byId.get(r.clientId)?.allergens ?? []).flatMap((d) =>
+        d.plates.filter((p) => p.onYourList?.length).map(() => d.date),
+      );
+      // Sent once the week has begun: how many of those plates are still ahead of the coach's today.
+      const today = input.today;
+      const allergenPlatesAhead =
+        today && onList.some((date) => compareIsoDates(date, today) < 0)
+          ? { count: onList.filter((date) => compareIsoDates(date, today) >= 0).length, day: dayHeading(today, order) }
+          : undefined;
+      const body = weekPlanMail({
+        businessName: ws.name,
+        clientName: r.name,
+        weekLabel,
+        note,
+        link,
+        thawReminders: thaw,
+        allergenPlates: onList.length,
+        allergenPlatesAhead,
+      });
       const payload: WeekPlanPayload = { weekId: week.id, clientId: r.clientId, publicationVersion: version, note };
       const spec = payload as unknown as Record<string, unknown>;
       await queueMail(tx, queue, {

@@ -9,6 +9,7 @@ import { Button } from '@/components/ui/button';
 import { TextAreaField } from '@/components/ui/field';
 import { ErrorState, Notice, Progress, Skeleton } from '@/components/ui/states';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
+import { localToday } from '@/lib/dates';
 import { paths } from '@/config/paths';
 import { clientPlanPdfUrl } from '../api/week-mail.queries';
 import { useSendWeek } from '../api/use-send-week';
@@ -103,7 +104,7 @@ export function SendPlansPanel({
     setError(null);
     const clientIds = mode === 'some' ? picked : undefined;
     send.mutate(
-      { clientIds, note: note.trim() || undefined, requestId: crypto.randomUUID() },
+      { clientIds, note: note.trim() || undefined, requestId: crypto.randomUUID(), today: localToday() },
       {
         onSuccess: (r) => setResult(r),
         onError: (e) => {
