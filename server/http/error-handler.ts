@@ -23,6 +23,29 @@ const TITLES: Record<number, string> = {
   503: 'Service unavailable',
 };
 
+/**
+ * What a unique key clash means, by constraint (server/db/migrations): the words a person reads when two saves of
+ * the same thing cross. A constraint missing here answers "That already exists".
+ */
+export const DUPLICATE_WORDS: Record<string, { detail: string; field?: string }> = {
+  app_user_email_unique: { detail: 'An account with this e-mail already exists', field: 'email' },
+  ingredient_slug_unique: { detail: 'Your library already has an ingredient with this name', field: 'name' },
+  oven_workspace_id_name_unique: { detail: 'An oven with this name already exists', field: 'name' },
+  bake_rule_workspace_id_category_unique: { detail: 'This kind of tray already has a bake rule: reload to see it', field: 'category' },
+  pantry_item_workspace_id_ingredient_id_unique: { detail: 'This ingredient is already in the pantry: reload to see it', field: 'ingredientId' },
+  membership_user_id_workspace_id_unique: { detail: 'This person is already on the team' },
+  week_tray_week_id_tray_id_prep_date_unique: { detail: 'This tray is already counted on that prep day: reload the week and try again' },
+  week_cell_week_id_client_id_date_slot_unique: { detail: 'Someone else filled this plate at the same time: reload the week and try again' },
+  week_publication_week_id_number_unique: { detail: 'Someone else published this week at the same time: reload it to see the version clients have' },
+  bake_run_setting_week_id_prep_date_unique: { detail: 'Someone else saved this bake run at the same time: reload it and try again' },
+  cooling_record_week_id_prep_date_run_tray_id_unique: { detail: 'Someone else started this tray’s cooling record at the same time: reload it and add your reading' },
+  shopping_check_week_id_ingredient_id_unique: { detail: 'Someone else ticked this item at the same time: reload the list' },
+  shopping_check_week_id_trip_ingredient_id_unique: { detail: 'Someone else ticked this item at the same time: reload the list' },
+  shopping_purchase_week_id_unique: { detail: 'Someone else wrote down this shopping trip at the same time: reload the list' },
+  shopping_purchase_week_id_trip_unique: { detail: 'Someone else wrote down this shopping trip at the same time: reload the list' },
+  tray_photo_tray_id_unique: { detail: 'Someone else put a photo on this tray at the same time: reload it' },
+};
+
 function problem(status: number, code: string, detail: string, extra: Partial<Problem> = {}): Problem {
   return { type: `https://trayline.test/problems/${code}`, title: TITLES[status] ?? 'Error', status, code, detail, ...extra };
 }
@@ -57,7 +80,12 @@ export function errorHandler() {
     } else if (err instanceof NotFoundError) {
       body = problem(404, 'not_found', 'Not found');
     } else if (err instanceof UniqueConstraintViolationException) {
-      body = problem(409, 'duplicate', 'That already exists');
+      // The services check for a duplicate first; reaching here is two people saving the same thing at once, or a
+      // check missing (a defect): say what clashed, and log it so the second kind gets fixed.
+      const constraint = (err as unknown as { constraint?: string }).constraint;
+      const known = constraint ? DUPLICATE_WORDS[constraint] : undefined;
+      req.log?.warn({ constraint, table: (err as unknown as { table?: string }).table }, 'unique key clash');
+      body = problem(409, 'duplicate', known?.detail ?? 'That already exists', known?.field ? { errors: { [known.field]: [known.detail] } } : {});
     } else if (err instanceof ForeignKeyConstraintViolationException) {
       body = problem(409, 'in_use', 'This is still used elsewhere');
     } else if (isBodyParserError(err)) {

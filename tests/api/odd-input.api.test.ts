@@ -2,7 +2,10 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import express from 'express';
 import request from 'supertest';
-import { errorHandler } from '@server/http/error-handler.js';
+import { readdirSync, readFileSync } from 'node:fs';
+import { UniqueConstraintViolationException } from '@mikro-orm/core';
+import { Oven } from '@server/modules/bake-runs/bake-run.entity.js';
+import { DUPLICATE_WORDS, errorHandler } from '@server/http/error-handler.js';
 import { testApp } from '../support/test-app.js';
 import { coachWorkspace, makeIngredient, type Member } from '../support/factories.js';
 import { listApiRoutes } from '../support/routes.js';
@@ -53,6 +56,45 @@ describe('numbers past the database integer range', () => {
     probe.use(errorHandler());
     const res = await request(probe).get('/boom').expect(400);
     expect(res.body).toMatchObject({ status: 400, code: 'out_of_range', detail: 'A number in the request is out of range' });
+  });
+});
+
+describe('two saves of the same thing crossing (a unique key clash past the services\' own checks)', () => {
+  it('answers 409 naming what clashed and the field, from the constraint PostgreSQL reports', async () => {
+    const { orm } = await testApp();
+    await coach.agent.post('/api/ovens').send({ name: 'Clash oven', racks: 2, traysPerRack: 1, maxC: 260 }).expect(201);
+    // The row a second request would write had it read before the first committed: the database refuses it.
+    const em = orm.em.fork();
+    const clash = await em
+      .insert(Oven, { workspace: coach.workspaceId, name: 'Clash oven', racks: 2, traysPerRack: 1, createdAt: new Date(), updatedAt: new Date() })
+      .then(
+        () => null,
+        (e: unknown) => e,
+      );
+    expect(clash).toBeInstanceOf(UniqueConstraintViolationException);
+    const probe = express();
+    probe.post('/ovens', () => {
+      throw clash;
+    });
+    probe.use(errorHandler());
+    const res = await request(probe).post('/ovens').expect(409);
+    expect(res.body).toMatchObject({ code: 'duplicate', detail: 'An oven with this name already exists', errors: { name: ['An oven with this name already exists'] } });
+
+    // A clash on a key without words of its own still answers 409 (never a 500).
+    const unnamed = new UniqueConstraintViolationException(Object.assign(new Error('duplicate key'), { code: '23505', constraint: 'some_new_unique' }));
+    const other = express();
+    other.post('/x', () => {
+      throw unnamed;
+    });
+    other.use(errorHandler());
+    expect((await request(other).post('/x').expect(409)).body).toMatchObject({ code: 'duplicate', detail: 'That already exists' });
+  });
+
+  it('every constraint given words exists in the migrations (a renamed one would fall back silently)', () => {
+    const migrations = readdirSync('server/db/migrations')
+      .map((f) => readFileSync(`server/db/migrations/${f}`, 'utf8'))
+      .join('\n');
+    for (const name of Object.keys(DUPLICATE_WORDS)) expect(migrations, name).toContain(`"${name}"`);
   });
 });
 
