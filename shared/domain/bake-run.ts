@@ -41,11 +41,11 @@ import { FOOD_CODE_COOLING } from './cooling';
 export { FOOD_CODE_COOLING } from './cooling';
 
 export const BAKE_RUN_CAUTIONS: readonly string[] = Object.freeze([
-  'Cooling deadlines follow FDA Food Code §3-501.14 (135 °F to 70 °F within 2 hours, to 41 °F within 6 hours in ' +
+  'Cooling deadlines follow FDA Food Code §3-501.14 (135 °F (57 °C) to 70 °F (21 °C) within 2 hours, to 41 °F (5 °C) within 6 hours in ' +
     'total); the plan starts the clock when the tray comes out, which is earlier than the Food Code requires.',
   'Check doneness at the first check: bake times are common practice, not a standard; where a minimum internal ' +
     'temperature is given (USDA FSIS Safe Minimum Internal Temperatures), check it with a thermometer.',
-  'Do not leave perishable food out of refrigeration for more than 2 hours, 1 hour above 90 °F (USDA FSIS).',
+  'Do not leave perishable food out of refrigeration for more than 2 hours, 1 hour above 90 °F (32 °C) (USDA FSIS).',
   'Follow your local food code and licensed professionals; they take precedence over this plan.',
 ]);
 

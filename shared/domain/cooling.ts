@@ -14,7 +14,7 @@
 import { clockText, DEFAULT_CLOCK, type ClockStyle } from './clock';
 import type { BakeEvent, BakeRunResult } from './bake-run-types';
 import { addLocalMinutes, requireLocalMinutes } from './bake-run-time';
-import { toCelsiusRounded } from './temperature';
+import { bothScales, type TempScale } from './temperature';
 import { instantOfWall, wallClockIn } from './time-zone';
 
 /** FDA Food Code §3-501.14 (cooling): 135 °F → 70 °F within 2 h, and → 41 °F within 6 h in total. */
@@ -69,8 +69,8 @@ export interface CoolingCheck {
 
 const F70 = FOOD_CODE_COOLING.firstStageF;
 const F41 = FOOD_CODE_COOLING.finalF;
-/** A temperature in both scales, as the record and its e-mails say it: "70 °F (21 °C)". */
-export const bothScales = (f: number) => `${f} °F (${toCelsiusRounded(f)} °C)`;
+/** A temperature in both scales, as the record and its e-mails say it: "70 °F (21 °C)" (or °C first). */
+export { bothScales };
 
 /** The readings in the order they were taken (a record keeps them as written down). */
 export function inTakenOrder<R extends CoolingReading>(readings: readonly R[]): R[] {
@@ -78,8 +78,8 @@ export function inTakenOrder<R extends CoolingReading>(readings: readonly R[]): 
 }
 
 /** The readings as the log and the e-mails say them, in the order taken: "14:10 68 °F (20 °C)" (the next day said). */
-export function readingsSaid(readings: readonly CoolingReading[], day: string, style: ClockStyle = DEFAULT_CLOCK): string[] {
-  return inTakenOrder(readings).map((x) => `${clockFrom(x.at, day, style)} ${bothScales(x.tempF)}`);
+export function readingsSaid(readings: readonly CoolingReading[], day: string, style: ClockStyle = DEFAULT_CLOCK, first: TempScale = 'F'): string[] {
+  return inTakenOrder(readings).map((x) => `${clockFrom(x.at, day, style)} ${bothScales(x.tempF, first)}`);
 }
 
 /** Said with the deadlines when the kitchen's clock changes between the start and a deadline. */

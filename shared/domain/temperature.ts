@@ -43,3 +43,32 @@ export function toCelsiusRounded(tempF: Decimal.Value, decimals = 0): number {
 export function toFahrenheitRounded(tempC: Decimal.Value, decimals = 0): number {
   return celsiusToFahrenheit(tempC).toDecimalPlaces(decimals, Decimal.ROUND_HALF_UP).toNumber();
 }
+
+/** Which scale a person reads first (their preference: `tempUnit` on the signed-in person). */
+export type TempScale = 'F' | 'C';
+
+/**
+ * A temperature given in °F, written in both scales with the reader's first: "165 °F (74 °C)" or "74 °C (165 °F)".
+ * °C rounded to whole degrees (the published pairs: 165 °F / 74 °C, 41 °F / 5 °C, 0 °F / −18 °C).
+ */
+export function bothScales(tempF: number, first: TempScale = 'F'): string {
+  const c = toCelsiusRounded(tempF);
+  const cText = `${c < 0 ? '−' : ''}${Math.abs(c)} °C`;
+  const fText = `${tempF < 0 ? '−' : ''}${Math.abs(tempF)} °F`;
+  return first === 'C' ? `${cText} (${fText})` : `${fText} (${cText})`;
+}
+
+/** A temperature difference or rate given in °F, in the reader's scale alone ("25 °F" → "14 °C"; whole degrees). */
+export function deltaIn(deltaF: number, scale: TempScale): string {
+  if (scale === 'F') return `${deltaF} °F`;
+  return `${fahrenheitDeltaToCelsius(deltaF).toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toNumber()} °C`;
+}
+
+/**
+ * A text that writes its temperatures "165 °F (74 °C)" (the safety notes, the cooling record's words) in the
+ * reader's order: for °C first, each such pair becomes "74 °C (165 °F)". Other text is left as it is.
+ */
+export function inReadersScale(text: string, first: TempScale): string {
+  if (first === 'F') return text;
+  return text.replace(/([−-]?\d+(?:\.\d+)?) °F \(([−-]?\d+(?:\.\d+)?) °C\)/g, '$2 °C ($1 °F)');
+}

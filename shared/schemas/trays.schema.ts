@@ -93,11 +93,18 @@ export const trayLineSchema = z.object({
 });
 export type TrayLineInput = z.input<typeof trayLineSchema>;
 
+/** A tray's oven set point, whole °F (the form takes °C too: src/components/domain/oven-temperature-field.tsx). */
+export const TRAY_OVEN_LIMITS_F = { min: 150, max: 550 } as const;
+
 export const bakeInputSchema = z
   .object({
     /** A bake rule category (shared/domain/bake-rules-defaults.ts); the temperature and times may differ from it. */
     category: z.enum(BAKE_CATEGORIES, { message: 'Choose a bake category' }),
-    tempF: z.coerce.number().int({ message: 'Use whole degrees' }).min(150, { message: 'At least 150 °F' }).max(550, { message: 'At most 550 °F' }),
+    tempF: z.coerce
+      .number()
+      .int({ message: 'Use whole degrees' })
+      .min(TRAY_OVEN_LIMITS_F.min, { message: `At least ${TRAY_OVEN_LIMITS_F.min} °F` })
+      .max(TRAY_OVEN_LIMITS_F.max, { message: `At most ${TRAY_OVEN_LIMITS_F.max} °F` }),
     minMinutes: z.coerce.number().int({ message: 'Use whole minutes' }).min(1, { message: 'At least 1 minute' }).max(600),
     maxMinutes: z.coerce.number().int({ message: 'Use whole minutes' }).min(1, { message: 'At least 1 minute' }).max(600),
   })

@@ -3,6 +3,7 @@ import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import type { CoolingLogDto, CoolingLogRow } from '@shared/schemas/cooling.schema';
 import { Component as CoolingLog } from '@/app/routes/bake-runs/cooling-log.route';
 import { jsonResponse, renderAtRoute, signedIn } from './render';
+import { setTempScale } from '@/lib/temp-scale';
 
 // An invented log of two prep days (its judgements are the server's: tests/api/cooling-log.api.test.ts checks them
 // against FDA Food Code §3-501.14; this checks what the page shows of them).
@@ -45,7 +46,10 @@ beforeEach(() => {
     }),
   );
 });
-afterEach(() => vi.unstubAllGlobals());
+afterEach(() => {
+  vi.unstubAllGlobals();
+  setTempScale('F');
+});
 
 const log = (rows: CoolingLogRow[]): CoolingLogDto => ({ from: '2026-01-01', to: '2026-01-31', timeZone: null, rows });
 const open = (query = '?from=2026-01-01&to=2026-01-31') => renderAtRoute(<CoolingLog />, '/cooling-log', `/cooling-log${query}`, signedIn({ role: 'assistant' }));
@@ -68,7 +72,7 @@ describe('the cooling log page', () => {
     const first = screen.getByRole('region', { name: 'Prep day Sunday, Jan 4' });
     expect(within(first).getByRole('link', { name: 'Week of Mon, Jan 5: bake run' }).getAttribute('href')).toBe('/weeks/7/bake-run?prepDate=2026-01-04#cooling-record-title');
     const [cooled, missed] = within(first).getAllByRole('listitem');
-    expect(cooled.textContent).toContain('Out 13:10 · 70 °F by 15:10 · 41 °F by 19:10');
+    expect(cooled.textContent).toContain('Out 13:10 · 70 °F (21 °C) by 15:10 · 41 °F (5 °C) by 19:10');
     // 68 °F = 20 °C, 40 °F = 4.4 °C (NIST SP 811), both scales as the e-mails write them.
     expect(cooled.textContent).toContain('14:10 68 °F (20 °C) · 18:00 40 °F (4 °C)');
     expect(missed.textContent).toContain('Missed: not at 41 °F (5 °C) by 19:20');
@@ -80,6 +84,21 @@ describe('the cooling log page', () => {
     expect(screen.getByRole('link', { name: 'Download CSV' }).getAttribute('href')).toBe('/api/cooling-log.csv?from=2026-01-01&to=2026-01-31');
     // Without the kitchen's time zone, what the newest records are judged on.
     expect(screen.getByText(/^The kitchen’s time zone is not set/).textContent).toContain('the last three days’ trays are judged on the temperatures written down alone');
+  });
+
+  it('writes every temperature °C first for a reader who reads °C (their preference)', async () => {
+    setTempScale('C');
+    answer = () =>
+      jsonResponse(
+        log([row({}), row({ id: 2, runTrayId: '3-2', trayName: 'Egg slab (2/2)', readings: [{ at: '2026-01-04T14:20', tempF: 68 }], state: 'missed-41', result: 'Missed: not at 41 °F (5 °C) by 19:20' })]),
+      );
+    open();
+    const [cooled, missed] = within(await screen.findByRole('region', { name: 'Prep day Sunday, Jan 4' })).getAllByRole('listitem');
+    // FDA Food Code §3-501.14 writes the limits "21°C (70°F)" and "5°C (41°F)"; 68 °F = 20 °C (NIST SP 811).
+    expect(cooled.textContent).toContain('Out 13:10 · 21 °C (70 °F) by 15:10 · 5 °C (41 °F) by 19:10');
+    expect(cooled.textContent).toContain('14:10 20 °C (68 °F) · 18:00 4 °C (40 °F)');
+    expect(missed.textContent).toContain('Missed: not at 5 °C (41 °F) by 19:20');
+    expect(screen.getByText(/^Every tray’s cooling record/).textContent).toContain('whether it reached 21 °C (70 °F) within 2 hours and 5 °C (41 °F) within 6');
   });
 
   it('says nothing of how records are judged once the kitchen has a time zone', async () => {

@@ -87,7 +87,8 @@ describe('the cooling record on prep day', () => {
     fireEvent.click(within(cards[0]).getByRole('button', { name: 'Out now' }));
     await waitFor(() => expect(puts()).toEqual([['/api/weeks/7/bake-run/cooling/3-1', { outAt: '2026-01-04T08:40', prepDate: '2026-01-04' }]]));
     // 70 °F = 21 °C, 41 °F = 5 °C; deadlines 2 h and 6 h after 08:40 (FDA Food Code §3-501.14).
-    expect(await screen.findByText(/Cool to 70 °F \(21 °C\) or below by 10:40, then to 41 °F \(5 °C\) or below by 14:40/)).toBeTruthy();
+    // The page reads °C first (its switch): the Food Code limits too, "21°C (70°F)" and "5°C (41°F)" as §3-501.14 writes them.
+    expect(await screen.findByText(/Cool to 21 °C \(70 °F\) or below by 10:40, then to 5 °C \(41 °F\) or below by 14:40/)).toBeTruthy();
     fireEvent.change(screen.getByLabelText('Food temperature (°C)'), { target: { value: '20.5' } });
     fireEvent.change(screen.getByLabelText(/Taken at/), { target: { value: '10:15' } });
     fireEvent.click(screen.getByRole('button', { name: 'Add reading' }));

@@ -67,7 +67,7 @@ test('on prep day the assistant writes a tray down as out and its temperatures a
   await expect(page.getByLabel('Last prep day')).toHaveValue(dto.prepDate);
   const day = page.getByRole('region', { name: new RegExp(`^Prep day `) }).filter({ has: page.getByText(first.name, { exact: true }) });
   const line = day.getByRole('listitem').filter({ has: page.getByText(first.name, { exact: true }) });
-  await expect(line).toContainText('Out 09:30 · 70 °F by 11:30 · 41 °F by 15:30');
+  await expect(line).toContainText('Out 09:30 · 70 °F (21 °C) by 11:30 · 41 °F (5 °C) by 15:30');
   // 66 °F = 18.9 °C (NIST SP 811), 19 °C rounded.
   await expect(line).toContainText('10:50 66 °F (19 °C)');
   await expect(line).toContainText('Written down by');

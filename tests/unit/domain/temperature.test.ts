@@ -14,7 +14,11 @@ import {
   fahrenheitToCelsius,
   toCelsiusRounded,
   toFahrenheitRounded,
+  bothScales,
+  deltaIn,
+  inReadersScale,
 } from '@shared/domain/temperature';
+import { CAUTIONS } from '@shared/domain/eat-by';
 
 describe('temperature scales', () => {
   it.each([
@@ -73,5 +77,46 @@ describe('temperature scales', () => {
         expect(celsiusToFahrenheit(fahrenheitToCelsius(f)).toDecimalPlaces(10).toNumber()).toBe(f);
       }),
     );
+  });
+});
+
+describe('temperatures written for a reader who reads °F or °C first', () => {
+  it.each([
+    // FDA Food Code §3-403.11 writes the reheating limit "74°C (165°F)"; §3-501.14 "57°C (135°F)", "21°C (70°F)",
+    // "5°C (41°F)". USDA FSIS Cold Food Storage chart: freezer "0 °F (−18 °C)"; "Danger Zone": above 90 °F (32.2 °C).
+    [165, '165 °F (74 °C)', '74 °C (165 °F)'],
+    [135, '135 °F (57 °C)', '57 °C (135 °F)'],
+    [70, '70 °F (21 °C)', '21 °C (70 °F)'],
+    [41, '41 °F (5 °C)', '5 °C (41 °F)'],
+    [0, '0 °F (−18 °C)', '−18 °C (0 °F)'],
+    [90, '90 °F (32 °C)', '32 °C (90 °F)'],
+  ])('%s °F: "%s", or "%s"', (f, fFirst, cFirst) => {
+    expect(bothScales(f, 'F')).toBe(fFirst);
+    expect(bothScales(f, 'C')).toBe(cFirst);
+    // The °C written is convert-units' conversion rounded to whole degrees (a second reference).
+    expect(cFirst.startsWith(`${Math.round(convert(f).from('F').to('C'))}`.replace('-', '−'))).toBe(true);
+  });
+
+  it('a difference or rate converts without the 32° offset (NIST SP 811: 1 °F difference = 5/9 °C)', () => {
+    // 25 °F lower for convection (common practice, no source) is 13.9 °C: written 14 °C; 15 °F/min, 8.3 °C/min.
+    expect(deltaIn(25, 'C')).toBe('14 °C');
+    expect(deltaIn(15, 'C')).toBe('8 °C');
+    expect(deltaIn(25, 'F')).toBe('25 °F');
+    // js-quantities' temperature differences (degF → degC) as the second reference.
+    expect(Math.round(Qty(25, 'degF').to('degC').scalar)).toBe(14);
+  });
+
+  it('turns every "N °F (M °C)" of a text round for a reader of °C, and leaves the rest', () => {
+    const text = 'Cool from 135 °F (57 °C) to 70 °F (21 °C); reheat to 165 °F. Freezer 0 °F (−18 °C).';
+    expect(inReadersScale(text, 'C')).toBe('Cool from 57 °C (135 °F) to 21 °C (70 °F); reheat to 165 °F. Freezer −18 °C (0 °F).');
+    expect(inReadersScale(text, 'F')).toBe(text);
+    // Every safety note keeps its words and numbers, only their order changes.
+    for (const c of CAUTIONS) {
+      const turned = inReadersScale(c.text, 'C');
+      const numbers = (t: string) => (t.match(/[−-]?\d+(\.\d+)?/g) ?? []).sort();
+      expect(numbers(turned)).toEqual(numbers(c.text));
+      expect(turned.length).toBe(c.text.length);
+      expect(turned).not.toMatch(/\d °F \(/);
+    }
   });
 });

@@ -10,6 +10,7 @@ import { useMe } from '@/features/auth/hooks/use-me';
 import { Button, EditDeleteButtons } from '@/components/ui/button';
 import { EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { counted } from '@/lib/words';
+import { deltaIn } from '@shared/domain/temperature';
 
 /** Bake rules per food category and the workspace's ovens. The coach edits; assistants read. */
 export function Component() {
@@ -58,7 +59,7 @@ export function Component() {
                       {o.convection ? ' · convection' : ' · conventional'} · max {formatTemp(o.maxF, unit)}
                     </p>
                     <p className="num text-sm text-ink-soft">
-                      Heats {o.heatFPerMin} °F/min, cools {o.coolFPerMin} °F/min with the door ajar
+                      Heats {deltaIn(o.heatFPerMin, unit)}/min, cools {deltaIn(o.coolFPerMin, unit)}/min with the door ajar
                     </p>
                     {coach && (
                       <EditDeleteButtons
@@ -112,7 +113,7 @@ export function Component() {
                     </div>
                     <p className="text-sm text-ink-soft">{r.donenessCue}</p>
                     <p className="num text-sm">
-                      Hands-on {r.handsOnMinutes} min · rack {r.rackPreference} · convection −{r.convectionDeltaF} °F · crowding +{r.crowdingPct}% per
+                      Hands-on {r.handsOnMinutes} min · rack {r.rackPreference} · convection −{deltaIn(r.convectionDeltaF, unit)} · crowding +{r.crowdingPct}% per
                       extra tray
                       {r.minInternalF !== null && (
                         <>

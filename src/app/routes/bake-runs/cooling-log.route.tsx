@@ -1,7 +1,9 @@
 import { Link, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { addDays, type IsoDate } from '@shared/domain/iso-date';
-import { clockFrom, readingsSaid } from '@shared/domain/cooling';
+import { clockFrom, FOOD_CODE_COOLING, readingsSaid } from '@shared/domain/cooling';
+import { bothScales, inReadersScale } from '@shared/domain/temperature';
+import { useTempScale } from '@/lib/temp-scale';
 import { coolingLogQuery as coolingLogQuerySchema, type CoolingLogDto, type CoolingLogRow } from '@shared/schemas/cooling.schema';
 import { coolingLogCsvUrl, coolingLogQuery } from '@/features/bake-runs/api/cooling';
 import { Button, linkButton } from '@/components/ui/button';
@@ -61,19 +63,20 @@ function Counts({ rows }: { rows: CoolingLogRow[] }) {
 /** One tray's line: what was written down and where it ended. */
 function TrayLine({ row }: { row: CoolingLogRow }) {
   const style = currentClockStyle();
+  const scale = useTempScale();
   const at = (local: string) => clockFrom(local, row.prepDate, style);
   return (
     <li className="break-inside-avoid rounded-lg border border-line bg-paper-card p-3">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <p className="font-bold">{row.trayName}</p>
-        <span className={`rounded-full border px-2 py-0.5 text-sm font-bold ${RESULT_TONE[row.state]}`}>{row.result}</span>
+        <span className={`rounded-full border px-2 py-0.5 text-sm font-bold ${RESULT_TONE[row.state]}`}>{inReadersScale(row.result, scale)}</span>
       </div>
       <p className="num mt-1 text-base">
         Out {at(row.outAt)}
-        {row.restartedAt && <> · reheated, cooling again from {at(row.restartedAt)}</>} · 70 °F by {at(row.by70)} · 41 °F by {at(row.by41)}
+        {row.restartedAt && <> · reheated, cooling again from {at(row.restartedAt)}</>} · {bothScales(FOOD_CODE_COOLING.firstStageF, scale)} by {at(row.by70)} · {bothScales(FOOD_CODE_COOLING.finalF, scale)} by {at(row.by41)}
       </p>
       <p className="num text-sm text-ink-soft">
-        {row.readings.length ? readingsSaid(row.readings, row.prepDate, style).join(' · ') : 'No temperature written down.'}
+        {row.readings.length ? readingsSaid(row.readings, row.prepDate, style, scale).join(' · ') : 'No temperature written down.'}
       </p>
       {row.note && <p className="text-sm">Note: {row.note}</p>}
       <p className="text-sm text-ink-faint">Written down by {row.recordedBy}</p>
@@ -129,6 +132,7 @@ function ByPrepDay({ log }: { log: CoolingLogDto }) {
 export function Component() {
   const [params, setParams] = useSearchParams();
   const me = useMe();
+  const scale = useTempScale();
   const today = kitchenToday() as IsoDate;
   const stretch = stretchOf(params.get('from') ?? addDays(today, -(DEFAULT_DAYS - 1)), params.get('to') ?? today);
   const log = useQuery({ ...coolingLogQuery(stretch.from, stretch.to), enabled: stretch.error === null });
@@ -142,7 +146,10 @@ export function Component() {
     <div className="flex flex-col gap-6">
       <PageHeader
         title="Cooling log"
-        lead="Every tray’s cooling record, prep day by prep day, whatever week it was baked for (a deleted week’s too): when it came out, the temperatures written down, and whether it reached 70 °F (21 °C) within 2 hours and 41 °F (5 °C) within 6 (FDA Food Code §3-501.14). Times are the kitchen’s clock. How long to keep a cooling log, and what it must show, is for your local food code and inspector to say."
+        lead={inReadersScale(
+          'Every tray’s cooling record, prep day by prep day, whatever week it was baked for (a deleted week’s too): when it came out, the temperatures written down, and whether it reached 70 °F (21 °C) within 2 hours and 41 °F (5 °C) within 6 (FDA Food Code §3-501.14). Times are the kitchen’s clock. How long to keep a cooling log, and what it must show, is for your local food code and inspector to say.',
+          scale,
+        )}
       />
       <Card className="print:hidden">
         {/* The fields' tops line up while one says what is wrong under it; the buttons sit on the fields' line otherwise. */}

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { allergenLabel, clientAllergenNotes } from '@shared/domain/allergens';
-import { REHEAT_MIN_C, REHEAT_MIN_F, thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
+import { FRIDGE_MAX_F, REHEAT_MIN_F, thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
 import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema';
@@ -16,6 +16,8 @@ import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { counted } from '@/lib/words';
 import { dayLabel } from '@/lib/dates';
 import { reheatGroups, reheatGroupTitle, type ReheatSource } from '@shared/domain/reheat';
+import { bothScales } from '@shared/domain/temperature';
+import { useTempScale } from '@/lib/temp-scale';
 
 function Macros({ m }: { m: MyPlateDto['macros'] }) {
   return (
@@ -46,6 +48,7 @@ function YourAllergens({ plate }: { plate: MyPlateDto }) {
 
 function PlateCard({ plate, today }: { plate: MyPlateDto; today: string }) {
   const { unitSystem } = useMe();
+  const scale = useTempScale();
   return (
     <Card className="flex flex-col gap-3">
       <p className="text-sm uppercase tracking-wide text-ink-faint">{plate.slot}</p>
@@ -65,7 +68,7 @@ function PlateCard({ plate, today }: { plate: MyPlateDto; today: string }) {
             If it is still in your fridge, throw it away: do not eat it.
           </Notice>
         ) : (
-          <Notice tone="cold" title={`Eat by ${dayLabel(plate.eatBy, true)}`}>Keep it in the fridge at 40 °F (4 °C) or below.</Notice>
+          <Notice tone="cold" title={`Eat by ${dayLabel(plate.eatBy, true)}`}>Keep it in the fridge at {bothScales(FRIDGE_MAX_F, scale)} or below.</Notice>
         ))
       )}
       <section>
@@ -101,6 +104,7 @@ function PlateCard({ plate, today }: { plate: MyPlateDto; today: string }) {
 /** How to reheat the plate: the plate's own steps, or each tray's under its name (shared/domain/reheat.ts). */
 function Reheat({ plate }: { plate: ReheatSource }) {
   const groups = reheatGroups(plate);
+  const scale = useTempScale();
   return (
     <section className="flex flex-col gap-1">
       <h3 className="font-bold">Reheat</h3>
@@ -118,7 +122,7 @@ function Reheat({ plate }: { plate: ReheatSource }) {
         );
       })}
       <p>
-        Heat until every part reaches {REHEAT_MIN_F} °F ({REHEAT_MIN_C} °C).
+        Heat until every part reaches {bothScales(REHEAT_MIN_F, scale)}.
       </p>
     </section>
   );

@@ -12,6 +12,9 @@ import { counted } from '@/lib/words';
 import { dayLabel } from '@/lib/dates';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/hooks/use-me';
+import { useTempScale } from '@/lib/temp-scale';
+import { bothScales } from '@shared/domain/temperature';
+import { FRIDGE_MAX_F } from '@shared/domain/eat-by';
 
 /** The labels to print: one client's plates, or every plate (and the spare portions when asked). */
 const labelsOf = (labels: ContainerLabelDto[], withSpares: boolean, clientId: number | null) =>
@@ -123,6 +126,7 @@ function ShortNotice({ short, weekId, coach }: { short: ShortTrayDto[]; weekId: 
 export function Component() {
   const weekId = Number(useParams().weekId);
   const coach = useMe().role === 'coach';
+  const scale = useTempScale();
   const [params, setParams] = useSearchParams();
   const layout = (LABEL_SHEET_CODES as readonly string[]).includes(params.get('layout') ?? '')
     ? (params.get('layout') as LabelSheetCode)
@@ -204,7 +208,7 @@ export function Component() {
         </div>
         <Notice tone="cold" title="Print at actual size">
           Choose 100 % (not "fit to page") and no margins, then test on plain paper against your label sheet. Eat-by dates
-          are guidance, not a guarantee: keep the fridge at 40 °F (4 °C) or below, and your local food code comes first.
+          are guidance, not a guarantee: keep the fridge at {bothScales(FRIDGE_MAX_F, scale)} or below, and your local food code comes first.
         </Notice>
       </div>
       <QueryView

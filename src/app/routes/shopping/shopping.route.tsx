@@ -8,6 +8,9 @@ import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton, Progress } fr
 import { paths } from '@/config/paths';
 import { errorMessage } from '@/lib/problem';
 import { dayLabel, momentLabel } from '@/lib/dates';
+import { useTempScale } from '@/lib/temp-scale';
+import { bothScales } from '@shared/domain/temperature';
+import { HOT_DAY_THRESHOLD_F } from '@shared/domain/eat-by';
 
 
 const tripButton = (on: boolean) =>
@@ -45,6 +48,7 @@ export function Component() {
   const prepDate = params.get('for') || null;
   const q = useQuery(shoppingListQuery(weekId, prepDate));
   const bought = useMarkBought(weekId, prepDate);
+  const scale = useTempScale();
 
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
@@ -132,7 +136,7 @@ export function Component() {
         )}
         <p className="text-sm text-ink-faint">
           Packages are rounded up; costs are estimates from the ingredient library's prices. Keep cold food cold on the
-          way home and refrigerate it within 2 hours (1 hour above 90 °F).
+          way home and refrigerate it within 2 hours (1 hour above {bothScales(HOT_DAY_THRESHOLD_F, scale)}).
         </p>
       </div>
     </div>

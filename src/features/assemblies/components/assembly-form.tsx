@@ -9,6 +9,9 @@ import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { PlatePreview, previewParts } from './plate-preview';
+import { useTempScale } from '@/lib/temp-scale';
+import { bothScales } from '@shared/domain/temperature';
+import { REHEAT_MIN_F } from '@shared/domain/eat-by';
 
 export const emptyAssembly: AssemblyInput = { name: '', description: '', trays: [], addOns: [], assemblySteps: [], reheatSteps: [] };
 
@@ -81,6 +84,7 @@ export function AssemblyForm({ initial, names = {}, trayNames = {}, busy, formEr
   const trays = useFieldArray({ control: form.control, name: 'trays' });
   const addOns = useFieldArray({ control: form.control, name: 'addOns' });
   const trayOptions = useQuery(trayOptionsQuery());
+  const scale = useTempScale();
   const [steps, setSteps] = useState((initial.assemblySteps ?? []).join('\n'));
   const [reheat, setReheat] = useState((initial.reheatSteps ?? []).join('\n'));
   const err = form.formState.errors;
@@ -151,7 +155,7 @@ export function AssemblyForm({ initial, names = {}, trayNames = {}, busy, formEr
       <PlatePreview parts={previewParts({ trays: watchedTrays, addOns: watchedAddOns })} />
 
       <TextAreaField label="Assembly steps (one per line)" rows={3} value={steps} onChange={(e) => setSteps(e.target.value)} />
-      <TextAreaField label="Reheat steps (one per line)" rows={3} value={reheat} onChange={(e) => setReheat(e.target.value)} hint="Reheat until every part reaches 165 °F (74 °C)." />
+      <TextAreaField label="Reheat steps (one per line)" rows={3} value={reheat} onChange={(e) => setReheat(e.target.value)} hint={`Reheat until every part reaches ${bothScales(REHEAT_MIN_F, scale)}.`} />
       {formError && <Notice tone="block" title={formError} />}
       <div>
         <Button type="submit" busy={busy}>

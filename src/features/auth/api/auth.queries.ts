@@ -1,6 +1,7 @@
 import { queryOptions, type QueryClient } from '@tanstack/react-query';
 import { DEFAULT_DATE_ORDER } from '@shared/domain/iso-date';
 import { setClockStyle, setDateOrder, setKitchenZone } from '@/lib/dates';
+import { setTempScale } from '@/lib/temp-scale';
 import { DEFAULT_CLOCK } from '@shared/domain/clock';
 import type { InvitationDto, MeDto, MemberDto, MyWorkspaceDto, Role } from '@shared/schemas/auth.schema';
 import { api } from '@/lib/api-client';
@@ -41,7 +42,8 @@ export const invitationQuery = (token: string) =>
 
 /**
  * Keeps the pages' date and time words (src/lib/dates.ts) on the workspace's settings: whenever the signed-in person
- * is read or replaced (sign-in, a workspace switch, the coach changing a setting), the order and the clock follow. Returns the unsubscribe.
+ * is read or replaced (sign-in, a workspace switch, the coach changing a setting), the order and the clock follow,
+ * and so does the person's own °F / °C (src/lib/temp-scale.ts). Returns the unsubscribe.
  */
 export function followDateOrder(qc: QueryClient): () => void {
   const key = JSON.stringify(authKeys.me());
@@ -52,5 +54,6 @@ export function followDateOrder(qc: QueryClient): () => void {
     setDateOrder(me?.dateOrder ?? DEFAULT_DATE_ORDER);
     setClockStyle(me?.clock ?? DEFAULT_CLOCK);
     setKitchenZone(me?.timeZone ?? null);
+    setTempScale(me?.tempUnit ?? 'F');
   });
 }

@@ -7,6 +7,7 @@ import { BakeRunTimeline } from './bake-run-timeline';
 import { BakeRunTimers, useRunMinute, type KitchenChange, type MoveStart } from './bake-run-timers';
 import { BAND_CLASS, formatTemp, type TempUnit } from './temperature';
 import { timeLabel } from '@/lib/dates';
+import { inReadersScale } from '@shared/domain/temperature';
 
 /** °F / °C toggle, starting from the person's preference (a local choice, not saved). */
 export function UnitToggle({ unit, onChange }: { unit: TempUnit; onChange: (u: TempUnit) => void }) {
@@ -160,7 +161,7 @@ export function BakeRunView({
       <Notice tone="warn" title="Food safety">
         <ul className="list-disc pl-4">
           {run.cautions.map((c) => (
-            <li key={c}>{c}</li>
+            <li key={c}>{inReadersScale(c, unit)}</li>
           ))}
         </ul>
       </Notice>

@@ -3,7 +3,9 @@ import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import type { BakeRunResult, BakeTrayPlan } from '@shared/domain/bake-run-types';
-import { checkCooling, clockFrom, inTakenOrder, notWrittenDown, type CoolingCheck } from '@shared/domain/cooling';
+import { checkCooling, clockFrom, FOOD_CODE_COOLING, inTakenOrder, notWrittenDown, type CoolingCheck } from '@shared/domain/cooling';
+import { REHEAT_MIN_F } from '@shared/domain/eat-by';
+import { bothScales, inReadersScale } from '@shared/domain/temperature';
 import type { CoolingRecordDto, CoolingRecordInput } from '@shared/schemas/cooling.schema';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -133,7 +135,7 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
       </p>
       <p className={`text-base ${TONE_CLASS[check.tone]}`} role={check.tone === 'block' ? 'alert' : undefined}>
         {check.tone === 'block' ? '⚠ ' : check.state === 'cooled' ? '✓ ' : ''}
-        {check.said}
+        {inReadersScale(check.said, unit)}
       </p>
       {readings.length > 0 && (
         <ol className="num flex flex-col gap-1 text-base" aria-label={`Readings of ${record.trayName}`}>
@@ -211,7 +213,7 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
           }}
         >
           <TextField
-            label="Reheated to 165 °F (74 °C), cooling again from (empty: now)"
+            label={`Reheated to ${bothScales(REHEAT_MIN_F, unit)}, cooling again from (empty: now)`}
             type="time"
             value={restart}
             onChange={(e) => setRestart(e.target.value)}
@@ -302,7 +304,7 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
       </div>
       <p className="text-sm text-ink-soft">
         Write down each tray as it comes out, then the food temperature in the thickest part as it cools. FDA Food Code
-        §3-501.14: to 70 °F (21 °C) within 2 hours and to 41 °F (5 °C) or below within 6 hours in total; the clock here
+        §3-501.14: to {bothScales(FOOD_CODE_COOLING.firstStageF, unit)} within 2 hours and to {bothScales(FOOD_CODE_COOLING.finalF, unit)} or below within 6 hours in total; the clock here
         starts when the tray comes out. Your local food code and inspector decide what to keep and for how long. Every
         prep day’s records are in the{' '}
         <Link to={paths.coolingLog} className="font-bold underline">
@@ -374,7 +376,7 @@ export function CoolingRecord({ weekId, run, unit, role }: { weekId: number; run
               <ul className="flex flex-col gap-1 text-base">
                 {gone.map((r) => (
                   <li key={r.runTrayId}>
-                    {r.trayName}: out at <span className="num">{timeLabel(r.outAt)}</span>. {checks.get(r.runTrayId)?.said}
+                    {r.trayName}: out at <span className="num">{timeLabel(r.outAt)}</span>. {inReadersScale(checks.get(r.runTrayId)?.said ?? '', unit)}
                   </li>
                 ))}
               </ul>

@@ -1,10 +1,13 @@
 import { LABEL_SHEETS, labelPosition, pagesOf, type LabelSheetCode } from '@shared/domain/label-sheets';
-import { REHEAT_MIN_C, REHEAT_MIN_F } from '@shared/domain/eat-by';
+import { REHEAT_MIN_F } from '@shared/domain/eat-by';
+import { bothScales } from '@shared/domain/temperature';
+import { useTempScale } from '@/lib/temp-scale';
 import type { ContainerLabelDto } from '@shared/schemas/shopping.schema';
 import { allergenLabel } from '@shared/domain/allergens';
 import { dayLabel } from '@/lib/dates';
 
 function Label({ label, small }: { label: ContainerLabelDto; small: boolean }) {
+  const scale = useTempScale();
   const m = label.macros;
   return (
     <div className={`flex h-full gap-[2%] overflow-hidden p-[4%] leading-tight text-black ${small ? 'text-[6.5pt]' : 'text-[8.5pt]'}`}>
@@ -33,7 +36,7 @@ function Label({ label, small }: { label: ContainerLabelDto; small: boolean }) {
           </p>
         )}
         <p className="truncate">
-          Reheat: {label.reheat ?? 'until hot'} — to {REHEAT_MIN_F} °F ({REHEAT_MIN_C} °C)
+          Reheat: {label.reheat ?? 'until hot'} — to {bothScales(REHEAT_MIN_F, scale)}
         </p>
         {m ? (
           <p className="num">

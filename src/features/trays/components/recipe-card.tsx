@@ -2,12 +2,16 @@ import { allergenLabel } from '@shared/domain/allergens';
 import { amountAndName } from '@shared/domain/units';
 import { PAN_LINING_LABELS, type TrayDto } from '@shared/schemas/trays.schema';
 import { Card } from '@/components/ui/states';
+import { COOLING } from '@shared/domain/eat-by';
+import { bothScales } from '@shared/domain/temperature';
+import { useTempScale } from '@/lib/temp-scale';
 
 /**
  * The recipe as a printable card (the print stylesheet hides navigation and buttons marked `no-print`); with the
  * reader's `system`, a line typed in the other one also gives theirs ("16 oz (454 g) Cream cheese").
  */
 export function RecipeCard({ tray, system }: { tray: TrayDto; system?: 'us' | 'metric' }) {
+  const scale = useTempScale();
   const cut =
     tray.cutPlan.kind === 'grid'
       ? `${tray.cutPlan.rows} rows × ${tray.cutPlan.columns} columns (${tray.portions} portions)`
@@ -26,7 +30,7 @@ export function RecipeCard({ tray, system }: { tray: TrayDto; system?: 'us' | 'm
         <div>
           <dt className="inline font-bold">Bake: </dt>
           <dd className="inline">
-            {tray.bake.tempF} °F ({Math.round(((tray.bake.tempF - 32) * 5) / 9)} °C), {tray.bake.minMinutes}–{tray.bake.maxMinutes} min ·{' '}
+            {bothScales(tray.bake.tempF, scale)}, {tray.bake.minMinutes}–{tray.bake.maxMinutes} min ·{' '}
             {tray.bake.categoryLabel}
           </dd>
         </div>
@@ -56,7 +60,7 @@ export function RecipeCard({ tray, system }: { tray: TrayDto; system?: 'us' | 'm
           <li key={i}>{s}</li>
         ))}
         <li>
-          Every part reaches {tray.reheat.minF} °F ({tray.reheat.minC} °C) ({tray.reheat.source}).
+          Every part reaches {bothScales(tray.reheat.minF, scale)} ({tray.reheat.source}).
         </li>
       </ol>
       <p className="text-sm">
@@ -65,7 +69,8 @@ export function RecipeCard({ tray, system }: { tray: TrayDto; system?: 'us' | 'm
         ingredients; check package labels).
       </p>
       <p className="mt-2 text-xs text-ink-faint">
-        Cool from 135 °F to 70 °F within 2 hours and to 41 °F within 6 hours (FDA Food Code 3-501.14). Eat-by dates are guidance;
+        Cool from {bothScales(COOLING.startF, scale)} to {bothScales(COOLING.stageOneEndF, scale)} within 2 hours and to{' '}
+        {bothScales(COOLING.finalMaxF, scale)} within 6 hours (FDA Food Code 3-501.14). Eat-by dates are guidance;
         your local food code comes first.
       </p>
     </Card>

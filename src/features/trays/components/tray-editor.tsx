@@ -2,12 +2,14 @@ import { useMemo, useState } from 'react';
 import { Controller, useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { DEFAULT_BAKE_RULES } from '@shared/domain/bake-rules-defaults';
-import { STORAGE_DEFAULTS, REHEAT_MIN_C, REHEAT_MIN_F } from '@shared/domain/eat-by';
+import { FREEZER_MAX_F, STORAGE_DEFAULTS, REHEAT_MIN_F } from '@shared/domain/eat-by';
+import { bothScales } from '@shared/domain/temperature';
 import { STANDARD_PANS, STANDARD_PAN_CODES } from '@shared/domain/scaling';
 import type { RecipeCalcInput } from '@shared/schemas/ingredients.schema';
 import {
   PAN_LININGS,
   PAN_LINING_LABELS,
+  TRAY_OVEN_LIMITS_F,
   trayInputSchema,
   type TrayDto,
   type TrayInput,
@@ -19,6 +21,8 @@ import { Card, Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { ApiError } from '@/lib/problem';
 import { IngredientCombobox, unitAfterPick, unitChoices, type PickedIngredient } from '@/components/domain/ingredient-combobox';
+import { OvenTemperatureField } from '@/components/domain/oven-temperature-field';
+import { useTempScale } from '@/lib/temp-scale';
 import { NutritionPreview } from './nutrition-preview';
 import { emptyTrayValues, trayToValues } from './tray-form-values';
 
@@ -218,6 +222,7 @@ function LineRow(props: {
 
 function PanAndBake({ form }: { form: Form }) {
   const errors = form.formState.errors;
+  const scale = useTempScale();
   const panCode = useWatch({ control: form.control, name: 'pan.code' });
   const cutKind = useWatch({ control: form.control, name: 'cutPlan.kind' });
   const cutErr = errors.cutPlan as Record<string, { message?: string }> | undefined;
@@ -270,7 +275,21 @@ function PanAndBake({ form }: { form: Form }) {
             </option>
           ))}
         </SelectField>
-        <TextField label="Oven temperature (°F)" inputMode="numeric" error={errors.bake?.tempF?.message} {...form.register('bake.tempF')} />
+        <Controller
+          control={form.control}
+          name="bake.tempF"
+          render={({ field, fieldState }) => (
+            <OvenTemperatureField
+              scale={scale}
+              name={field.name}
+              valueF={field.value}
+              onChangeF={field.onChange}
+              onBlur={field.onBlur}
+              error={fieldState.error?.message}
+              limitsF={TRAY_OVEN_LIMITS_F}
+            />
+          )}
+        />
         <div className="grid grid-cols-2 gap-2">
           <TextField label="Shortest (min)" inputMode="numeric" error={errors.bake?.minMinutes?.message} {...form.register('bake.minMinutes')} />
           <TextField label="Longest (min)" inputMode="numeric" error={errors.bake?.maxMinutes?.message} {...form.register('bake.maxMinutes')} />
@@ -308,6 +327,7 @@ function PanAndBake({ form }: { form: Form }) {
 
 function StorageFields({ form }: { form: Form }) {
   const errors = form.formState.errors;
+  const scale = useTempScale();
   const egg = STORAGE_DEFAULTS['egg-dish'];
   return (
     <div className="grid gap-4 sm:grid-cols-2">
@@ -321,7 +341,7 @@ function StorageFields({ form }: { form: Form }) {
       <TextField
         label="Freezer weeks (quality)"
         inputMode="numeric"
-        hint="Food kept at 0 °F stays safe; the time is for quality."
+        hint={`Food kept at ${bothScales(FREEZER_MAX_F, scale)} stays safe; the time is for quality.`}
         error={errors.storage?.freezerWeeks?.message}
         {...form.register('storage.freezerWeeks')}
       />
@@ -333,7 +353,7 @@ function StorageFields({ form }: { form: Form }) {
             className="sm:col-span-2"
             label="Reheat steps (one per line)"
             rows={3}
-            hint={`Every step ends with all parts at ${REHEAT_MIN_F} °F (${REHEAT_MIN_C} °C) or above (FDA Food Code 3-403.11).`}
+            hint={`Every step ends with all parts at ${bothScales(REHEAT_MIN_F, scale)} or above (FDA Food Code 3-403.11).`}
             error={fieldState.error?.message ?? (errors.reheatSteps as { message?: string }[] | undefined)?.find?.((e) => e?.message)?.message}
             value={((field.value as string[] | undefined) ?? []).join('\n')}
             onChange={(e) => field.onChange(e.target.value.split('\n').map((s) => s.trimStart()).filter((s, i, all) => s !== '' || i === all.length - 1))}
