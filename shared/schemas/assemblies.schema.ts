@@ -3,7 +3,7 @@ import { typedNumber } from './typed-number';
 import type { AllergenCode } from '../domain/allergens';
 import type { NutrientNumbers } from '../domain/nutrition';
 import { trayLineSchema } from './trays.schema';
-import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { PG_INT_MAX, TOO_LARGE, editVersion } from './ids';
 
 /** Plates (assemblies): portions of base trays plus add-ons from the ingredient library. */
 
@@ -43,7 +43,7 @@ export type AssemblyInput = z.input<typeof createAssemblySchema>;
 export type AssemblyValues = z.output<typeof createAssemblySchema>;
 
 export const updateAssemblySchema = assemblyValuesSchema
-  .extend({ version: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE) })
+  .extend({ version: editVersion })
   .refine((v) => v.trays.length + v.addOns.length > 0, {
     path: ['trays'],
     message: 'Add at least one base tray portion or one add-on',
@@ -53,7 +53,7 @@ export type UpdateAssemblyValues = z.output<typeof updateAssemblySchema>;
 /** Archive a plate or bring it back (PUT /api/assemblies/:id/archived). */
 export const archiveAssemblySchema = z.object({
   archived: z.boolean({ message: 'Say whether the plate is archived (true or false)' }),
-  version: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE),
+  version: editVersion,
 });
 export type ArchiveAssemblyInput = z.input<typeof archiveAssemblySchema>;
 export type ArchiveAssemblyValues = z.output<typeof archiveAssemblySchema>;

@@ -9,9 +9,9 @@ import { z } from 'zod';
 import type { BakeRunResult } from '../domain/bake-run-types';
 import { isLocalDateTime } from '../domain/bake-run-time';
 import { celsiusToFahrenheit } from '../domain/temperature';
-import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { PG_INT_MAX, TOO_LARGE, editVersion } from './ids';
 
-const version = z.number().int().positive().max(PG_INT_MAX, TOO_LARGE);
+const version = editVersion;
 const wholeMinutes = (what: string) =>
   z
     .number({ message: `${what} must be a number.` })

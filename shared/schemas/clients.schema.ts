@@ -3,7 +3,7 @@ import { optionalEmailAddress as optionalEmail } from './email';
 import { typedNumber } from './typed-number';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import type { ActivityLevel, Goal, MacroTargets, Sex, TargetNote } from '../domain/targets';
-import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { PG_INT_MAX, TOO_LARGE, editVersion } from './ids';
 
 /** Client profiles: inputs and DTOs. Body measurements, targets and health notes are for the coach (and the client). */
 
@@ -89,10 +89,9 @@ export const updateClientSchema = z
     ...clientFields,
     /** true archives the client (they leave the list and new weeks), false restores them. */
     archived: z.boolean(),
-    version: z.number().int().positive().max(PG_INT_MAX, TOO_LARGE),
   })
   .partial()
-  .required({ version: true })
+  .extend({ version: editVersion })
   .refine(sharesWithinDay, { path: ['slotShares'], message: 'The meal shares add up to more than the whole day' });
 export type UpdateClientInput = z.input<typeof updateClientSchema>;
 export type UpdateClientData = z.output<typeof updateClientSchema>;

@@ -5,7 +5,7 @@ import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { NET_CARB_RULES, type AtwaterCheck, type NetCarbRuleKind, type NutrientNumbers } from '../domain/nutrition';
 import { ambiguousCommaMessage, AmountParseError, decimalCommaToPoint, isMassUnit, isVolumeUnit, MAX_AMOUNT, MAX_AMOUNT_MESSAGE, parseAmount, PLAIN_DECIMAL, unitKind, UnknownUnitError } from '../domain/units';
-import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { PG_INT_MAX, TOO_LARGE, editVersionText } from './ids';
 import { DATE_ORDERS, type DateOrder } from '../domain/iso-date';
 import { CLOCK_STYLES, type ClockStyle } from '../domain/clock';
 import { canonicalTimeZone, TIME_ZONE_MAX } from '../domain/time-zone';
@@ -247,7 +247,7 @@ export type IngredientInput = z.input<typeof ingredientInputSchema>;
 export type IngredientValues = z.output<typeof ingredientInputSchema>;
 
 export const ingredientUpdateSchema = ingredientFields
-  .extend({ version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }).max(PG_INT_MAX, TOO_LARGE) })
+  .extend({ version: editVersionText })
   .superRefine(crossCheck);
 export type IngredientUpdateInput = z.input<typeof ingredientUpdateSchema>;
 export type IngredientUpdateValues = z.output<typeof ingredientUpdateSchema>;
@@ -366,7 +366,7 @@ export const workspaceSettingsUpdateSchema = z.object({
     })
     .nullable()
     .optional(),
-  version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }).max(PG_INT_MAX, TOO_LARGE),
+  version: editVersionText,
 });
 export type WorkspaceSettingsUpdateInput = z.input<typeof workspaceSettingsUpdateSchema>;
 

@@ -8,7 +8,7 @@ import { ambiguousCommaMessage, decimalCommaToPoint, MAX_AMOUNT, MAX_AMOUNT_MESS
 import { LABEL_SHEET_CODES } from '../domain/label-sheets';
 import type { AllergenCode } from '../domain/allergens';
 import type { LabelSheetCode } from '../domain/label-sheets';
-import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { PG_INT_MAX, TOO_LARGE, editVersionText } from './ids';
 
 
 /** An amount typed as text or a number: a plain decimal string of 0 or more, at most 4 decimals. */
@@ -55,7 +55,7 @@ export type PantryCreateValues = z.output<typeof pantryCreateSchema>;
 export const pantryUpdateSchema = z.object({
   amount: amountField,
   unit: unitField,
-  version: z.coerce.number().int().min(1, { message: 'The version you started from is missing' }).max(PG_INT_MAX, TOO_LARGE),
+  version: editVersionText,
 });
 export type PantryUpdateInput = z.input<typeof pantryUpdateSchema>;
 export type PantryUpdateValues = z.output<typeof pantryUpdateSchema>;

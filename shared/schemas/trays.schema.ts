@@ -6,7 +6,7 @@ import { DEFAULT_BAKE_RULES, type BakeRuleCategory } from '../domain/bake-rules-
 import { MAX_AMOUNT, MAX_AMOUNT_MESSAGE, parseAmount } from '../domain/units';
 import type { NutrientNumbers } from '../domain/nutrition';
 import type { EnergyShares } from '../domain/nutrition';
-import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { PG_INT_MAX, TOO_LARGE, editVersionText } from './ids';
 
 /** Base trays: inputs (zod) and response DTOs, shared by the API and the client. */
 
@@ -146,7 +146,7 @@ export const createTraySchema = trayInputSchema;
 export type CreateTrayInput = TrayInput;
 
 export const updateTraySchema = trayInputSchema.extend({
-  version: z.coerce.number().int().min(1).max(PG_INT_MAX, TOO_LARGE),
+  version: editVersionText,
   archived: z.boolean().optional(),
 });
 export type UpdateTrayInput = z.input<typeof updateTraySchema>;

@@ -6,7 +6,7 @@ import { isIsoDate, type DateOrder, type IsoDate } from '../domain/iso-date';
 import type { MacroTargets } from '../domain/targets';
 import type { DayTotals, WordedWarning } from '../domain/week-check';
 import type { AssemblyDto, PlateMacrosDto } from './assemblies.schema';
-import { PG_INT_MAX, TOO_LARGE } from './ids';
+import { PG_INT_MAX, TOO_LARGE, editVersion } from './ids';
 
 /** Prep weeks, the week board, publishing. */
 
@@ -14,7 +14,7 @@ export const isoDate = z.string().refine(isIsoDate, { message: 'Use a date like 
 
 /** The person's "today" (their device's date), for the routes that pick a week by it. */
 export const todayQuery = z.object({ today: isoDate.optional() });
-const version = z.number().int().positive().max(PG_INT_MAX, TOO_LARGE);
+const version = editVersion;
 const allergen = z.enum(ALLERGEN_CODES as unknown as [AllergenCode, ...AllergenCode[]]);
 
 

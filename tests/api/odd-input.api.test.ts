@@ -7,7 +7,7 @@ import { UniqueConstraintViolationException } from '@mikro-orm/core';
 import { Oven } from '@server/modules/bake-runs/bake-run.entity.js';
 import { DUPLICATE_WORDS, errorHandler } from '@server/http/error-handler.js';
 import { testApp } from '../support/test-app.js';
-import { coachWorkspace, makeIngredient, type Member } from '../support/factories.js';
+import { coachWorkspace, makeClient, makeIngredient, type Member } from '../support/factories.js';
 import { listApiRoutes } from '../support/routes.js';
 
 // 2^31 − 1 is the largest PostgreSQL `integer` (PostgreSQL manual, "Numeric Types": integer, −2147483648 to
@@ -46,6 +46,22 @@ describe('numbers past the database integer range', () => {
     const week = (await coach.agent.post('/api/weeks').set('x-trayline-csrf', '1').send({ name: 'Range week', startDate: '2027-01-04', prepDate: '2027-01-03' }).expect(201)).body;
     const stale = await coach.agent.patch(`/api/weeks/${week.week.id}`).set('x-trayline-csrf', '1').send({ version: PAST_INTEGER, name: 'x' }).expect(400);
     expect(Object.keys(stale.body.errors)).toEqual(['version']);
+  });
+
+  it('an edit without the version it started from is a 400 naming version, in words (JSON or text, any route)', async () => {
+    const said = ['Send the version you started from (the record’s "version", a whole number from 1)'];
+    const week = (await coach.agent.post('/api/weeks').set('x-trayline-csrf', '1').send({ name: 'No version', startDate: '2027-02-01', prepDate: '2027-01-31' }).expect(201)).body;
+    const client = await makeClient(coach);
+    const edits = [
+      coach.agent.patch('/api/workspace/settings').send({ dateOrder: 'day-month' }),
+      coach.agent.patch(`/api/weeks/${week.week.id}`).send({ name: 'x' }),
+      coach.agent.patch(`/api/weeks/${week.week.id}`).send({ name: 'x', version: 'two' }),
+      coach.agent.patch(`/api/clients/${client.id}`).send({ name: 'No version' }),
+    ];
+    for (const edit of edits) {
+      const res = await edit.set('x-trayline-csrf', '1').expect(400);
+      expect(res.body.errors.version).toEqual(said);
+    }
   });
 
   it("the error handler answers PostgreSQL's out-of-range error (22003) with a 400, as a last line behind the schemas", async () => {
