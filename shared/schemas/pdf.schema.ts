@@ -1,3 +1,4 @@
+import type { TempScale } from '../domain/temperature';
 import type { DateOrder } from '../domain/iso-date';
 import type { ReheatGroup } from '../domain/reheat';
 /**
@@ -66,4 +67,6 @@ export interface WeekPlanPdfData {
   note?: string | null;
   /** Caution texts with their sources (shared/domain/eat-by.ts CAUTIONS by default). */
   cautions?: { text: string; source: string }[];
+  /** The scale the client reads first (their °F / °C preference when they have an account; absent: °F). */
+  tempScale?: TempScale;
 }

@@ -345,6 +345,16 @@ describe('week-plan PDF downloads', () => {
     // Back to US customary: nothing to convert.
     await client.agent.patch('/api/auth/me').send({ unitSystem: 'us' }).expect(200);
     expect(await coachCopy()).toMatch(/Add: 1 oz Test cheese/);
+
+    // Temperatures: °F first until the client reads °C first; then the plan writes °C first, as FDA Food Code
+    // §3-403.11 writes the reheating limit, "74°C (165°F)", and the safety notes the same way.
+    const flat = async () => (await coachCopy()).replace(/\s+/g, ' ');
+    expect(await flat()).toContain('Heat until every part reaches 165 °F (74 °C).');
+    await client.agent.patch('/api/auth/me').send({ tempUnit: 'C' }).expect(200);
+    const inC = await flat();
+    expect(inC).toContain('Heat until every part reaches 74 °C (165 °F).');
+    expect(inC).toContain('Keep the refrigerator at 4 °C (40 °F) or below and the freezer at −18 °C (0 °F) or below.');
+    expect(inC).not.toContain('165 °F (74 °C)');
   });
 
   it('an unpublished week has no plan PDF (409)', async () => {

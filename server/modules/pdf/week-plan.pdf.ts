@@ -1,5 +1,6 @@
 import Decimal from 'decimal.js';
-import { CAUTIONS, REHEAT_MIN_C, REHEAT_MIN_F } from '@shared/domain/eat-by.js';
+import { CAUTIONS, REHEAT_MIN_F } from '@shared/domain/eat-by.js';
+import { bothScales, inReadersScale } from '@shared/domain/temperature.js';
 import { reheatGroupTitle } from '@shared/domain/reheat.js';
 import type { PdfMacros, PdfTargets, WeekPlanPdfData } from '@shared/schemas/pdf.schema.js';
 import { cautionsBlock, createDoc, finishDoc, heading, list, paragraph, table, type Column } from './pdf-document.js';
@@ -83,11 +84,14 @@ export async function renderWeekPlanPdf(data: WeekPlanPdfData): Promise<{ filena
         const title = reheatGroupTitle(g, s.reheat.length);
         list(doc, title ? `Reheat: ${title}` : 'Reheat', g.steps);
       }
-      paragraph(doc, `Heat until every part reaches ${REHEAT_MIN_F} °F (${REHEAT_MIN_C} °C).`);
+      paragraph(doc, `Heat until every part reaches ${bothScales(REHEAT_MIN_F, data.tempScale)}.`);
       doc.moveDown(0.3);
     }
   }
-  cautionsBlock(doc, data.cautions ?? CAUTIONS.map((c) => ({ text: c.text, source: c.source })));
+  cautionsBlock(
+    doc,
+    (data.cautions ?? CAUTIONS).map((c) => ({ text: inReadersScale(c.text, data.tempScale ?? 'F'), source: c.source })),
+  );
   const slug = data.clientName.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'client';
   return { filename: `week-${data.weekStart}-${slug}.pdf`, buffer: await finishDoc(doc, meta) };
 }

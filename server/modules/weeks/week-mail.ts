@@ -109,6 +109,7 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
   // The client's own measure preference when they have an account (the plan is theirs to read); else as typed.
   const account = await em.findOne(Membership, { clientId: client.id, workspace: wsId, role: 'client' }, { populate: ['user'] });
   const system = account ? (account.user.$.unitSystem === 'metric' ? 'metric' : 'us') : undefined;
+  const tempScale = account?.user.$.tempUnit === 'C' ? 'C' : 'F';
   return {
     client,
     weekName: snapshotTitle(pub.snapshot, toDateOrder(ws.dateOrder)),
@@ -123,6 +124,7 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
       days: pdfDays(withYourList(mine.days, client.allergens), client.householdMultiplier, toDateOrder(ws.dateOrder), system),
       note: p.note ?? null,
       cautions: CAUTIONS.map((c) => ({ text: c.text, source: c.source })),
+      tempScale,
     },
   };
 }
