@@ -152,7 +152,7 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
       { header: 'Out', width: 0.09, align: 'right' },
       { header: '70 °F by', width: 0.1, align: 'right' },
       { header: '41 °F by', width: 0.1, align: 'right' },
-      { header: 'Readings (time, °F)', width: 0.27 },
+      { header: 'Readings (time, temperature)', width: 0.27 },
       { header: 'Result', width: 0.16 },
       { header: 'Initials', width: 0.08, align: 'center' },
     ],
@@ -164,7 +164,8 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
         if (!r) return [`${t.name}\n(planned out ${clock(t.outAt)})`, '', '', '', '\n\n', '', ''];
         const c = checkOnPaper(r, meta.timeZone ?? null);
         const readings = inTakenOrder(r.readings)
-          .map((x) => `${clockFrom(x.at, r.outAt, style)} ${x.tempF} °F`)
+          // One reading never splits across lines (no-break spaces inside it); the list wraps between readings.
+          .map((x) => `${clockFrom(x.at, r.outAt, style)} ${deg(x.tempF)}`.replace(/ /g, '\u00a0'))
           .join(', ');
         const restart = r.restartedAt ? `Reheated, cooling again from ${clockFrom(r.restartedAt, r.outAt, style)}. ` : '';
         return [t.name, clock(r.outAt), clockFrom(c.by70, r.outAt, style), clockFrom(c.by41, r.outAt, style), `${restart}${readings}`, RESULT[c.state], initials(r.recordedBy)];

@@ -190,8 +190,9 @@ describe('bake-run sheet PDF', () => {
     const { buffer } = await renderBakeRunPdf(run, { businessName: 'Oat & Ember Prep', title: 'Bake run, Sun 6 Dec', cooling });
     const flat = (await textOf(buffer)).text.replace(/\s+/g, ' ');
     expect(flat).toContain('Cooling record');
-    expect(flat).toMatch(/Egg slab 08:40 10:40 14:40 10:20 68 °F, 13:50 40 °F Cooled in time KM/);
-    expect(flat).toMatch(/Radish tray 08:45 10:45 14:45 10:50 74 °F Missed 70 °F: reheat or throw away KM/);
+    // Readings in both scales (a kitchen may write them in either): 68 °F = 20 °C, 40 °F = 4.4 °C, 74 °F = 23.3 °C (NIST SP 811).
+    expect(flat).toMatch(/Egg slab 08:40 10:40 14:40 10:20 68 °F \(20 °C\), 13:50 40 °F \(4 °C\) Cooled in time KM/);
+    expect(flat).toMatch(/Radish tray 08:45 10:45 14:45 10:50 74 °F \(23 °C\) Missed 70 °F: reheat or throw away KM/);
     // Not written down yet: its planned time out, and room to write.
     expect(flat).toMatch(/Almond slab \(planned out \d\d:\d\d\)/);
   });
