@@ -6,6 +6,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/problem';
 import { useSaveBakeRule } from '../api/use-bake-run-mutations';
 import type { TempUnit } from './temperature';
+import { sentAsF, shownIn, type ScaleKind } from './scale-fields';
 
 interface RuleForm {
   category: string;
@@ -27,7 +28,7 @@ interface RuleForm {
 
 const str = (v: number | null | undefined) => (v == null ? '' : String(v));
 
-/** Create or edit a bake rule (coach). The set temperature is typed in the person's unit. */
+/** Create or edit a bake rule (coach). Its temperatures and differences are typed in the page's unit (kept in °F). */
 export function BakeRuleFormCard({ rule, unit, onDone }: { rule: BakeRuleDto | null; unit: TempUnit; onDone: () => void }) {
   const save = useSaveBakeRule();
   const form = useForm<RuleForm>({
@@ -39,30 +40,36 @@ export function BakeRuleFormCard({ rule, unit, onDone }: { rule: BakeRuleDto | n
       minMinutes: str(rule?.minMinutes),
       maxMinutes: str(rule?.maxMinutes),
       handsOnMinutes: str(rule?.handsOnMinutes ?? 10),
-      toleranceF: str(rule?.toleranceF ?? 10),
+      toleranceF: shownIn(rule?.toleranceF ?? 10, 'delta', unit),
       donenessCue: rule?.donenessCue ?? '',
-      minInternalF: str(rule?.minInternalF),
+      minInternalF: shownIn(rule?.minInternalF, 'temp', unit),
       minInternalSource: rule?.minInternalSource ?? '',
       rackPreference: rule?.rackPreference ?? 'any',
-      convectionDeltaF: str(rule?.convectionDeltaF ?? 25),
+      convectionDeltaF: shownIn(rule?.convectionDeltaF ?? 25, 'delta', unit),
       crowdingPct: str(rule?.crowdingPct ?? 10),
       note: rule?.note ?? '',
     },
   });
   const err = form.formState.errors;
+  // Read while rendering, so react-hook-form tracks which fields were changed.
+  const touched = form.formState.dirtyFields;
   const submit = form.handleSubmit(async (v) => {
+    // Typed in the page's scale; the rule keeps °F (a field left as it was keeps its stored value exactly).
+    const asF = (name: 'toleranceF' | 'minInternalF' | 'convectionDeltaF', stored: number | null | undefined, kind: ScaleKind) =>
+      sentAsF(v[name], stored, !!touched[name], kind, unit);
     const body = {
       label: v.label,
-      ...(unit === 'C' ? { tempC: Number(v.tempC) } : { tempF: Number(v.tempF) }),
+      // The set temperature in °C is whole degrees: left as it was, the stored °F goes back (400 °F, not 399.2 °F).
+      ...(unit === 'C' ? (rule && !touched.tempC ? { tempF: rule.tempF } : { tempC: Number(v.tempC) }) : { tempF: Number(v.tempF) }),
       minMinutes: Number(v.minMinutes),
       maxMinutes: Number(v.maxMinutes),
       handsOnMinutes: Number(v.handsOnMinutes),
-      toleranceF: Number(v.toleranceF),
+      toleranceF: asF('toleranceF', rule?.toleranceF ?? 10, 'delta') as number,
       donenessCue: v.donenessCue,
-      minInternalF: v.minInternalF.trim() === '' ? null : Number(v.minInternalF),
+      minInternalF: asF('minInternalF', rule?.minInternalF, 'temp') as number | null,
       minInternalSource: v.minInternalSource.trim() === '' ? null : v.minInternalSource,
       rackPreference: v.rackPreference as BakeRuleDto['rackPreference'],
-      convectionDeltaF: Number(v.convectionDeltaF),
+      convectionDeltaF: asF('convectionDeltaF', rule?.convectionDeltaF ?? 25, 'delta') as number,
       crowdingPct: Number(v.crowdingPct),
       note: v.note,
     };
@@ -87,8 +94,8 @@ export function BakeRuleFormCard({ rule, unit, onDone }: { rule: BakeRuleDto | n
         <TextField label="Bake time from (min)" type="number" {...form.register('minMinutes')} error={err.minMinutes?.message} hint="One tray, uncrowded conventional oven" />
         <TextField label="Bake time to (min)" type="number" {...form.register('maxMinutes')} error={err.maxMinutes?.message} />
         <TextField label="Hands-on per tray (min)" type="number" {...form.register('handsOnMinutes')} error={err.handsOnMinutes?.message} />
-        <TextField label="Tolerance (± °F)" type="number" step="any" {...form.register('toleranceF')} error={err.toleranceF?.message} />
-        <TextField label="Minimum internal (°F)" type="number" step="any" {...form.register('minInternalF')} error={err.minInternalF?.message} hint="Blank when food safety names none" />
+        <TextField label={`Tolerance (± °${unit})`} type="number" step="any" {...form.register('toleranceF')} error={err.toleranceF?.message} />
+        <TextField label={`Minimum internal (°${unit})`} type="number" step="any" {...form.register('minInternalF')} error={err.minInternalF?.message} hint="Blank when food safety names none" />
         <TextField label="Source of the minimum" {...form.register('minInternalSource')} error={err.minInternalSource?.message} hint="e.g. USDA FSIS Safe Minimum Internal Temperatures chart" />
         <SelectField label="Rack" {...form.register('rackPreference')} error={err.rackPreference?.message}>
           {RACK_PREFERENCES.map((r) => (
@@ -97,7 +104,7 @@ export function BakeRuleFormCard({ rule, unit, onDone }: { rule: BakeRuleDto | n
             </option>
           ))}
         </SelectField>
-        <TextField label="Convection: lower by (°F)" type="number" step="any" {...form.register('convectionDeltaF')} error={err.convectionDeltaF?.message} hint="Default 25" />
+        <TextField label={`Convection: lower by (°${unit})`} type="number" step="any" {...form.register('convectionDeltaF')} error={err.convectionDeltaF?.message} hint={`Default ${shownIn(25, 'delta', unit)}`} />
         <TextField
           label="Crowding: + % time per extra tray"
           type="number"

@@ -7,36 +7,43 @@ import { isApiError } from '@/lib/problem';
 import { useSaveOven } from '../api/use-bake-run-mutations';
 import type { TempUnit } from './temperature';
 import { toCelsiusRounded } from '@shared/domain/temperature';
+import { sentAsF, shownIn } from './scale-fields';
 
 interface OvenForm {
   name: string;
   racks: number;
   traysPerRack: number;
   convection: boolean;
-  heatFPerMin: number;
-  coolFPerMin: number;
+  heatFPerMin: string;
+  coolFPerMin: string;
   maxF: number;
   maxC: number;
 }
 
-/** Create or edit an oven (coach). The maximum is typed in the person's unit; rates are °F per minute. */
+/** Create or edit an oven (coach). The maximum and the rates are typed in the page's unit (kept in °F). */
 export function OvenFormCard({ oven, unit, onDone }: { oven: OvenDto | null; unit: TempUnit; onDone: () => void }) {
   const save = useSaveOven();
   const form = useForm<OvenForm>({
-    defaultValues: oven
-      ? { ...oven }
-      : { name: '', racks: 2, traysPerRack: 1, convection: false, heatFPerMin: 25, coolFPerMin: 15, maxF: 500, maxC: toCelsiusRounded(500) },
+    defaultValues: {
+      ...(oven ?? { name: '', racks: 2, traysPerRack: 1, convection: false, maxF: 500, maxC: toCelsiusRounded(500) }),
+      heatFPerMin: shownIn(oven?.heatFPerMin ?? 25, 'delta', unit),
+      coolFPerMin: shownIn(oven?.coolFPerMin ?? 15, 'delta', unit),
+    },
   });
   const err = form.formState.errors;
+  // Read while rendering, so react-hook-form tracks which fields were changed.
+  const touched = form.formState.dirtyFields;
   const submit = form.handleSubmit(async (v) => {
+    // Rates typed in the page's unit per minute; the oven keeps °F (a rate left as it was keeps its stored value).
     const body = {
       name: v.name,
       racks: Number(v.racks),
       traysPerRack: Number(v.traysPerRack),
       convection: v.convection,
-      heatFPerMin: Number(v.heatFPerMin),
-      coolFPerMin: Number(v.coolFPerMin),
-      ...(unit === 'C' ? { maxC: Number(v.maxC) } : { maxF: Number(v.maxF) }),
+      heatFPerMin: sentAsF(v.heatFPerMin, oven?.heatFPerMin ?? 25, !!touched.heatFPerMin, 'delta', unit) as number,
+      coolFPerMin: sentAsF(v.coolFPerMin, oven?.coolFPerMin ?? 15, !!touched.coolFPerMin, 'delta', unit) as number,
+      // The maximum in °C is whole degrees: left as it was, the stored °F goes back (475 °F is 246 °C, 474.8 °F again).
+      ...(unit === 'C' ? (oven && !touched.maxC ? { maxF: oven.maxF } : { maxC: Number(v.maxC) }) : { maxF: Number(v.maxF) }),
     };
     try {
       await save.mutateAsync(oven ? { ...body, id: oven.id, version: oven.version } : body);
@@ -52,14 +59,21 @@ export function OvenFormCard({ oven, unit, onDone }: { oven: OvenDto | null; uni
         <TextField label="Name" {...form.register('name')} error={err.name?.message} />
         <TextField label="Racks" type="number" min={1} max={12} {...form.register('racks')} error={err.racks?.message} />
         <TextField label="Trays per rack" type="number" min={1} max={6} {...form.register('traysPerRack')} error={err.traysPerRack?.message} />
-        <TextField label="Heating rate (°F per minute)" type="number" step="any" {...form.register('heatFPerMin')} error={err.heatFPerMin?.message} hint="Default 25 (common practice, no source)" />
         <TextField
-          label="Cooling rate, door ajar (°F per minute)"
+          label={`Heating rate (°${unit} per minute)`}
+          type="number"
+          step="any"
+          {...form.register('heatFPerMin')}
+          error={err.heatFPerMin?.message}
+          hint={`Default ${shownIn(25, 'delta', unit)} (common practice, no source)`}
+        />
+        <TextField
+          label={`Cooling rate, door ajar (°${unit} per minute)`}
           type="number"
           step="any"
           {...form.register('coolFPerMin')}
           error={err.coolFPerMin?.message}
-          hint="Default 15 (common practice, no source)"
+          hint={`Default ${shownIn(15, 'delta', unit)} (common practice, no source)`}
         />
         {unit === 'C' ? (
           <TextField label="Maximum (°C)" type="number" step="any" {...form.register('maxC')} error={err.maxC?.message ?? err.maxF?.message} />
