@@ -58,10 +58,13 @@ export function bothScales(tempF: number, first: TempScale = 'F'): string {
   return first === 'C' ? `${cText} (${fText})` : `${fText} (${cText})`;
 }
 
-/** A temperature difference or rate given in °F, in the reader's scale alone ("25 °F" → "14 °C"; whole degrees). */
+/**
+ * A temperature difference or rate given in °F, in the reader's scale alone: "25 °F" → "13.9 °C" (to one decimal, as
+ * the oven and bake-rule forms show it; "18 °F" → "10 °C").
+ */
 export function deltaIn(deltaF: number, scale: TempScale): string {
   if (scale === 'F') return `${deltaF} °F`;
-  return `${fahrenheitDeltaToCelsius(deltaF).toDecimalPlaces(0, Decimal.ROUND_HALF_UP).toNumber()} °C`;
+  return `${fahrenheitDeltaToCelsius(deltaF).toDecimalPlaces(1, Decimal.ROUND_HALF_UP).toNumber()} °C`;
 }
 
 /**

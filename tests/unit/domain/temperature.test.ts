@@ -98,12 +98,13 @@ describe('temperatures written for a reader who reads °F or °C first', () => {
   });
 
   it('a difference or rate converts without the 32° offset (NIST SP 811: 1 °F difference = 5/9 °C)', () => {
-    // 25 °F lower for convection (common practice, no source) is 13.9 °C: written 14 °C; 15 °F/min, 8.3 °C/min.
-    expect(deltaIn(25, 'C')).toBe('14 °C');
-    expect(deltaIn(15, 'C')).toBe('8 °C');
+    // 25 °F lower for convection (common practice, no source) is 13.9 °C; 15 °F/min, 8.3 °C/min; 18 °F, 10 °C.
+    expect(deltaIn(25, 'C')).toBe('13.9 °C');
+    expect(deltaIn(15, 'C')).toBe('8.3 °C');
+    expect(deltaIn(18, 'C')).toBe('10 °C');
     expect(deltaIn(25, 'F')).toBe('25 °F');
     // js-quantities' temperature differences (degF → degC) as the second reference.
-    expect(Math.round(Qty(25, 'degF').to('degC').scalar)).toBe(14);
+    expect(Math.round(Qty(25, 'degF').to('degC').scalar * 10) / 10).toBe(13.9);
   });
 
   it('turns every "N °F (M °C)" of a text round for a reader of °C, and leaves the rest', () => {
