@@ -15,6 +15,7 @@ const profile = (overrides: Record<string, unknown> = {}) => ({
     mode: 'computed', reeKcal: 1370, tdeeKcal: 1884, targetKcal: 1884, netCarbCapG: 20, proteinG: 105, fatG: 150, notes: [],
     slots: { breakfast: { targetKcal: 565, netCarbCapG: 6, proteinG: 31.5, fatG: 45, share: 0.3 } },
   },
+  slotShares: { breakfast: 0.3 },
   account: null,
   invitation: null,
   createdAt: '2026-11-01T08:00:00.000Z',
@@ -113,5 +114,71 @@ describe('published plates holding an allergen now on the client\'s list', () =>
     renderProfile();
     expect(await screen.findByText('Could not check the published weeks against this client’s allergens')).toBeTruthy();
     expect(screen.getByRole('button', { name: 'Check again' })).toBeTruthy();
+  });
+});
+
+describe('two people editing one profile', () => {
+  it('keeps what was typed when someone else saved meanwhile, and saves it over theirs only when asked', async () => {
+    const theirs = profile({ name: 'Olga Theirs', version: 4 });
+    const patches: Record<string, unknown>[] = [];
+    let current = profile();
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string, init?: RequestInit) => {
+        if (url.includes('/deliveries')) return jsonResponse({ clientId: 7, items: [] });
+        if (url.includes('/published-allergens')) return jsonResponse([]);
+        if (init?.method === 'PATCH') {
+          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
+          patches.push(body);
+          // The first save started from version 3 while version 4 (someone else's) is saved: 409 with theirs.
+          if (body.version !== 4) {
+            current = theirs;
+            return jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current: theirs }, 409);
+          }
+          current = profile({ ...body, version: 5 });
+        }
+        return jsonResponse(current);
+      }),
+    );
+    renderProfile();
+    const name = (await screen.findByLabelText('Name')) as HTMLInputElement;
+    fireEvent.change(name, { target: { value: 'Olga Mine' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    const notice = await screen.findByText('Someone else saved this profile while you were editing');
+    expect(notice).toBeTruthy();
+    expect(screen.getByText('Their version (4) is saved. Your changes are still here in the form: nothing is lost.')).toBeTruthy();
+    // The page heading shows theirs; the form still holds what was typed.
+    await screen.findByRole('heading', { name: 'Olga Theirs' });
+    expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Mine');
+    fireEvent.click(screen.getByRole('button', { name: 'Keep mine and save again' }));
+    await screen.findByRole('heading', { name: 'Olga Mine' });
+    expect(patches.map((p) => [p.name, p.version])).toEqual([
+      ['Olga Mine', 3],
+      ['Olga Mine', 4],
+    ]);
+    expect(screen.queryByText('Someone else saved this profile while you were editing')).toBeNull();
+  });
+
+  it('loads their version when asked', async () => {
+    const theirs = profile({ name: 'Olga Theirs', version: 4 });
+    let current = profile();
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string, init?: RequestInit) => {
+        if (url.includes('/deliveries')) return jsonResponse({ clientId: 7, items: [] });
+        if (url.includes('/published-allergens')) return jsonResponse([]);
+        if (init?.method === 'PATCH') {
+          current = theirs;
+          return jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current: theirs }, 409);
+        }
+        return jsonResponse(current);
+      }),
+    );
+    renderProfile();
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Reload their version' }));
+    await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Theirs'));
+    expect(screen.queryByText('Someone else saved this profile while you were editing')).toBeNull();
   });
 });

@@ -85,3 +85,39 @@ describe('archiving a plate', () => {
     await waitFor(() => expect(screen.getByRole('status').textContent).toBe('Restored “Egg slab plate”: it is back in the list and the board’s pickers.'));
   });
 });
+
+describe('two people editing one plate', () => {
+  it('keeps what was typed when someone else saved meanwhile, and saves it over theirs only when asked', async () => {
+    const mine = { ...plate, trays: [{ trayId: 3, trayName: 'Egg slab', portions: 1 }] };
+    const theirs = { ...mine, name: 'Egg slab plate (theirs)', version: 2 };
+    const puts: Record<string, unknown>[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string, init?: RequestInit) => {
+        if (init?.method === 'PUT') {
+          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
+          puts.push(body);
+          if (body.version !== 2) return jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current: theirs }, 409);
+          return jsonResponse({ ...theirs, name: body.name, version: 3 });
+        }
+        if (url.includes('/assemblies')) return jsonResponse([mine]);
+        if (url.includes('/trays')) return jsonResponse([{ id: 3, name: 'Egg slab' }]);
+        // The live preview of the plate's numbers.
+        return jsonResponse({ macros: { kcal: 0, fatG: 0, proteinG: 0, carbsG: 0, fiberG: 0, netCarbsG: 0 }, allergens: [], complete: true, addOnGrams: [] });
+      }),
+    );
+    renderAtRoute(<PlatesPage />, '/plates', '/plates');
+    fireEvent.click(await screen.findByRole('button', { name: 'Edit Egg slab plate' }));
+    fireEvent.change(await screen.findByLabelText('Plate name'), { target: { value: 'Egg slab plate (mine)' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save plate' }));
+    expect(await screen.findByText('Someone else saved this plate while you were editing')).toBeTruthy();
+    expect((screen.getByLabelText('Plate name') as HTMLInputElement).value).toBe('Egg slab plate (mine)');
+    fireEvent.click(screen.getByRole('button', { name: 'Keep mine and save again' }));
+    await waitFor(() => expect(puts.map((p) => [p.name, p.version])).toEqual([
+      ['Egg slab plate (mine)', 1],
+      ['Egg slab plate (mine)', 2],
+    ]));
+    // Saved: the editor closes.
+    await waitFor(() => expect(screen.queryByLabelText('Plate name')).toBeNull());
+  });
+});

@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
-import type { ClientDto } from '@shared/schemas/clients.schema';
+import type { UseFormSetError } from 'react-hook-form';
+import type { ClientDto, CreateClientData, CreateClientInput } from '@shared/schemas/clients.schema';
 import { clientQuery } from '@/features/clients/api/clients.queries';
 import { useDeleteClient, useInviteClient, useUpdateClient } from '@/features/clients/api/use-client-mutations';
 import { ClientForm, clientToInput } from '@/features/clients/components/client-form';
@@ -10,6 +11,7 @@ import { DeliveryLog } from '@/features/mail/components/delivery-log';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Card, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { StaleEditNotice } from '@/components/ui/stale-edit-notice';
 import { Cautions } from '@/components/domain/cautions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
@@ -93,7 +95,11 @@ export function Component() {
   const del = useDeleteClient();
   const navigate = useNavigate();
   const [formError, setFormError] = useState<string | null>(null);
+  // Archive or restore refused because the profile changed meanwhile: the page shows the other version.
   const [stale, setStale] = useState(false);
+  // A save refused because someone else saved the profile meanwhile: the form keeps what was typed (it stays on the
+  // version it started from) until the coach reloads theirs or saves this over it.
+  const [held, setHeld] = useState<{ base: ClientDto; values: CreateClientData; current: ClientDto } | null>(null);
   const [archiveError, setArchiveError] = useState<string | null>(null);
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
@@ -102,6 +108,26 @@ export function Component() {
   const onStale = () => {
     setStale(true);
     q.refetch();
+  };
+  const formBase = held?.base ?? client;
+  const save = (values: CreateClientData, version: number, setError?: UseFormSetError<CreateClientInput>) => {
+    setFormError(null);
+    setStale(false);
+    update.mutate(
+      { ...values, version },
+      {
+        onSuccess: () => setHeld(null),
+        onError: (e) => {
+          markShown(e);
+          if (isApiError(e, 409) && e.problem.code === 'stale_version') {
+            setHeld({ base: formBase, values, current: (e.problem.current as ClientDto | undefined) ?? client });
+            q.refetch();
+            return;
+          }
+          setFormError(setError ? applyServerErrors(e, setError) : errorMessage(e));
+        },
+      },
+    );
   };
   const setArchived = (archived: boolean) => {
     setArchiveError(null);
@@ -169,32 +195,28 @@ export function Component() {
       <DemoNotice>An invented demo client: measurements, targets and notes are made up and are not advice.</DemoNotice>
       {stale && (
         <Notice tone="warn" title="Someone else changed this profile">
-          The form now shows their version; make your change again.
+          The page now shows their version; archive or restore again if you still mean to.
         </Notice>
+      )}
+      {held && (
+        <StaleEditNotice
+          what="profile"
+          version={held.current.version}
+          busy={update.isPending}
+          onReload={() => setHeld(null)}
+          onKeep={() => save(held.values, held.current.version)}
+        />
       )}
       <Card>
         <ClientForm
           unitSystem={me.unitSystem}
-          key={client.version}
-          initial={clientToInput(client)}
+          key={formBase.version}
+          initial={clientToInput(formBase)}
           slots={slots}
           submitLabel="Save changes"
           busy={update.isPending}
           formError={formError}
-          onSubmit={(values, setError) => {
-            setFormError(null);
-            setStale(false);
-            update.mutate(
-              { ...values, version: client.version },
-              {
-                onError: (e) => {
-                  markShown(e);
-                  if (isApiError(e, 409)) return onStale();
-                  setFormError(applyServerErrors(e, setError));
-                },
-              },
-            );
-          }}
+          onSubmit={(values, setError) => save(values, formBase.version, setError)}
         />
       </Card>
       <Card>

@@ -8,11 +8,13 @@ import { ingredientQuery } from '@/features/ingredients/api/ingredients.queries'
 import { ingredientKeys } from '@/features/ingredients/api/ingredients.keys';
 import { useCopyIngredient, useDeleteIngredient, useUpdateIngredient } from '@/features/ingredients/api/use-ingredient-mutations';
 import { formValuesOf, IngredientForm } from '@/features/ingredients/components/ingredient-form';
+import type { IngredientValues } from '@shared/schemas/ingredients.schema';
 import { IngredientFacts } from '@/features/ingredients/components/ingredient-facts';
 import { AtwaterFlag } from '@/features/ingredients/components/ingredient-bits';
 import { Button } from '@/components/ui/button';
 import { ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
-import { isApiError } from '@/lib/problem';
+import { StaleEditNotice } from '@/components/ui/stale-edit-notice';
+import { errorMessage, isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
 
 function EditOwn({ ingredient }: { ingredient: IngredientDto }) {
@@ -20,40 +22,53 @@ function EditOwn({ ingredient }: { ingredient: IngredientDto }) {
   const navigate = useNavigate();
   const update = useUpdateIngredient(ingredient.id);
   const del = useDeleteIngredient();
-  const [stale, setStale] = useState(false);
+  // A save refused because someone else saved the ingredient meanwhile: the form keeps what was typed (it is not
+  // remounted) until the coach reloads their version or saves this over it.
+  const [held, setHeld] = useState<{ values: IngredientValues; current: IngredientDto; baseVersion: number } | null>(null);
+  const [keepError, setKeepError] = useState<string | null>(null);
   const [formKey, setFormKey] = useState(0);
+  const save = async (values: IngredientValues, version: number) => {
+    setKeepError(null);
+    try {
+      await update.mutateAsync({ ...values, version });
+      setHeld(null);
+      toast.success('Saved');
+    } catch (err) {
+      if (isApiError(err, 409) && err.problem.code === 'stale_version') {
+        const current = err.problem.current as IngredientDto | undefined;
+        if (current) qc.setQueryData(ingredientKeys.detail(ingredient.id), current);
+        else await qc.invalidateQueries({ queryKey: ingredientKeys.detail(ingredient.id) });
+        setHeld({ values, current: current ?? ingredient, baseVersion: held?.baseVersion ?? version });
+        return;
+      }
+      throw err;
+    }
+  };
   return (
     <>
       <p>
         <AtwaterFlag check={ingredient.atwater} long />
       </p>
-      {stale && (
-        <Notice tone="warn" title="Someone else saved this ingredient while you were editing">
-          The form now shows their version. Make your change again and save.
-        </Notice>
+      {held && (
+        <StaleEditNotice
+          what="ingredient"
+          version={held.current.version}
+          busy={update.isPending}
+          onReload={() => {
+            setHeld(null);
+            setFormKey((k) => k + 1);
+          }}
+          onKeep={() => void save(held.values, held.current.version).catch((e: unknown) => setKeepError(errorMessage(e)))}
+        />
       )}
+      {keepError && <Notice tone="block" title={`Not saved: ${keepError}`} />}
       <IngredientForm
         key={`${ingredient.id}-${formKey}`}
         initial={formValuesOf(ingredient)}
         submitLabel="Save changes"
         busy={update.isPending}
-        onSave={async (values) => {
-          setStale(false);
-          try {
-            await update.mutateAsync({ ...values, version: ingredient.version });
-            toast.success('Saved');
-          } catch (err) {
-            if (isApiError(err, 409)) {
-              const current = err.problem.current as IngredientDto | undefined;
-              if (current) qc.setQueryData(ingredientKeys.detail(ingredient.id), current);
-              else await qc.invalidateQueries({ queryKey: ingredientKeys.detail(ingredient.id) });
-              setStale(true);
-              setFormKey((k) => k + 1);
-              return;
-            }
-            throw err;
-          }
-        }}
+        // The form's own Save sends the version it started from (a second 409 while the notice is up).
+        onSave={(values) => save(values, held?.baseVersion ?? ingredient.version)}
       />
       <div className="border-t border-line pt-4">
         <Button

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import type { AssemblyDto } from '@shared/schemas/assemblies.schema';
+import type { UseFormSetError } from 'react-hook-form';
+import type { AssemblyDto, AssemblyInput, AssemblyValues } from '@shared/schemas/assemblies.schema';
 import { amountAndName } from '@shared/domain/units';
 import { assembliesQuery } from '@/features/assemblies/api/assemblies.queries';
 import { useArchiveAssembly, useDeleteAssembly, useSaveAssembly } from '@/features/assemblies/api/use-assembly-mutations';
@@ -9,6 +10,7 @@ import { PlateMacros } from '@/features/assemblies/components/plate-macros';
 import { Button, EditDeleteButtons } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
+import { StaleEditNotice } from '@/components/ui/stale-edit-notice';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { useMe } from '@/features/auth/hooks/use-me';
@@ -18,28 +20,51 @@ import { filterByText } from '@/lib/words';
 import { allergenLabel } from '@shared/domain/allergens';
 
 function Editor({ plate, onDone }: { plate: AssemblyDto | null; onDone: () => void }) {
-  const save = useSaveAssembly(plate?.id ?? null);
+  // The plate the form started from; someone else's save meanwhile leaves it (and what was typed) until the coach
+  // reloads their version or saves this over it.
+  const [base, setBase] = useState(plate);
+  const [held, setHeld] = useState<{ values: AssemblyValues; current: AssemblyDto } | null>(null);
+  const save = useSaveAssembly(base?.id ?? null);
   const [formError, setFormError] = useState<string | null>(null);
+  const send = (values: AssemblyValues, version: number | undefined, setError?: UseFormSetError<AssemblyInput>) => {
+    setFormError(null);
+    save.mutate(version !== undefined ? { ...values, version } : values, {
+      onSuccess: onDone,
+      onError: (e) => {
+        markShown(e);
+        if (isApiError(e, 409) && e.problem.code === 'stale_version' && e.problem.current) {
+          setHeld({ values, current: e.problem.current as AssemblyDto });
+          return;
+        }
+        setFormError(isApiError(e, 409) ? errorMessage(e) : setError ? applyServerErrors(e, setError) : errorMessage(e));
+      },
+    });
+  };
   return (
     <Card>
-      <h2 className="mb-3 text-xl">{plate ? `Edit ${plate.name}` : 'New plate'}</h2>
+      <h2 className="mb-3 text-xl">{base ? `Edit ${base.name}` : 'New plate'}</h2>
+      {held && (
+        <div className="mb-3">
+          <StaleEditNotice
+            what="plate"
+            version={held.current.version}
+            busy={save.isPending}
+            onReload={() => {
+              setBase(held.current);
+              setHeld(null);
+            }}
+            onKeep={() => send(held.values, held.current.version)}
+          />
+        </div>
+      )}
       <AssemblyForm
-        key={plate ? `${plate.id}-${plate.version}` : 'new'}
-        initial={plate ? assemblyToInput(plate) : emptyAssembly}
-        names={Object.fromEntries((plate?.addOns ?? []).map((a) => [a.ingredientId, a.ingredientName]))}
-        trayNames={Object.fromEntries((plate?.trays ?? []).map((t) => [t.trayId, t.trayName]))}
+        key={base ? `${base.id}-${base.version}` : 'new'}
+        initial={base ? assemblyToInput(base) : emptyAssembly}
+        names={Object.fromEntries((base?.addOns ?? []).map((a) => [a.ingredientId, a.ingredientName]))}
+        trayNames={Object.fromEntries((base?.trays ?? []).map((t) => [t.trayId, t.trayName]))}
         busy={save.isPending}
         formError={formError}
-        onSubmit={(values, setError) => {
-          setFormError(null);
-          save.mutate(plate ? { ...values, version: plate.version } : values, {
-            onSuccess: onDone,
-            onError: (e) => {
-              markShown(e);
-              setFormError(isApiError(e, 409) ? 'Someone else changed this plate: close and open it again to see their version.' : applyServerErrors(e, setError));
-            },
-          });
-        }}
+        onSubmit={(values, setError) => send(values, base?.version, setError)}
       />
     </Card>
   );

@@ -18,6 +18,7 @@ import {
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Card, Notice } from '@/components/ui/states';
+import { StaleEditNotice } from '@/components/ui/stale-edit-notice';
 import { applyServerErrors } from '@/lib/form-errors';
 import { ApiError } from '@/lib/problem';
 import { IngredientCombobox, unitAfterPick, unitChoices, type PickedIngredient } from '@/components/domain/ingredient-combobox';
@@ -83,23 +84,7 @@ export function TrayEditor({ initial, busy, onSave, onSaved }: Props) {
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-6" aria-label="Base tray">
-      {stale && (
-        <div role="alert">
-          <Notice tone="warn" title="Someone else saved this tray while you were editing">
-            <p>
-              Their version ({stale.current.version}) is saved. Your changes are still here in the form: nothing is lost.
-            </p>
-            <div className="mt-2 flex flex-wrap gap-2">
-              <Button type="button" variant="secondary" size="sm" onClick={reloadTheirs}>
-                Reload their version
-              </Button>
-              <Button type="button" size="sm" busy={busy} onClick={keepMine}>
-                Keep mine and save again
-              </Button>
-            </div>
-          </Notice>
-        </div>
-      )}
+      {stale && <StaleEditNotice what="tray" version={stale.current.version} busy={busy} onReload={reloadTheirs} onKeep={keepMine} />}
       {formError && <Notice tone="block" title={formError} />}
 
       <Card>

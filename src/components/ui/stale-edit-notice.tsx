@@ -1,0 +1,24 @@
+import { Button } from './button';
+import { Notice } from './states';
+
+/**
+ * Someone else saved the record while this person was editing it (a 409 on a stale version): their changes stay in
+ * the form, and they choose: load the other version, or save theirs over it (knowingly, never silently).
+ */
+export function StaleEditNotice({ what, version, busy, onReload, onKeep }: { what: string; version: number; busy?: boolean; onReload: () => void; onKeep: () => void }) {
+  return (
+    <div role="alert">
+      <Notice tone="warn" title={`Someone else saved this ${what} while you were editing`}>
+        <p>Their version ({version}) is saved. Your changes are still here in the form: nothing is lost.</p>
+        <div className="mt-2 flex flex-wrap gap-2">
+          <Button type="button" variant="secondary" size="sm" onClick={onReload}>
+            Reload their version
+          </Button>
+          <Button type="button" size="sm" busy={busy} onClick={onKeep}>
+            Keep mine and save again
+          </Button>
+        </div>
+      </Notice>
+    </div>
+  );
+}

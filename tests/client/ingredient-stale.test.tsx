@@ -1,0 +1,95 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { Component as IngredientPage } from '@/app/routes/ingredients/ingredient.route';
+import { jsonResponse, renderAtRoute } from './render';
+
+// An invented workspace-own ingredient (a label typed by the coach), as GET /api/ingredients/:id answers it.
+const own = (overrides: Record<string, unknown> = {}) => ({
+  id: 501,
+  slug: 'ws-1-house-pesto',
+  name: 'House pesto',
+  category: 'condiments',
+  shared: false,
+  editable: true,
+  per100g: { kcal: 500, fatG: 50, satFatG: 8, proteinG: 6, carbsG: 6, fiberG: 2, sugarsG: 1, erythritolG: 0, alluloseG: 0, otherPolyolsG: 0, polyolsG: 0, netCarbsG: 4, sodiumMg: 600 },
+  densityGPerMl: null,
+  densitySource: null,
+  pieceWeights: {},
+  allergens: ['milk', 'tree-nuts'],
+  purchase: null,
+  priceCents: null,
+  aisle: 'condiments',
+  source: 'package label',
+  provenance: 'package-label',
+  fdcId: null,
+  note: null,
+  atwater: { storedKcal: 500, computedKcal: 498, deviation: 0.004, flagged: false, basis: 'relative' },
+  netCarbRule: 'half-other-polyols',
+  version: 2,
+  updatedAt: '2026-11-01T08:00:00.000Z',
+  ...overrides,
+});
+
+afterEach(() => vi.unstubAllGlobals());
+
+describe('two people editing one ingredient', () => {
+  it('keeps what was typed when someone else saved meanwhile; the form’s Save asks again, "Keep mine" saves over theirs', async () => {
+    const theirs = own({ name: 'Pesto (theirs)', version: 3 });
+    const puts: Record<string, unknown>[] = [];
+    let current = own();
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init?: RequestInit) => {
+        const method = init?.method ?? 'GET';
+        if (method === 'PUT' || method === 'PATCH') {
+          const body = JSON.parse(String(init!.body)) as Record<string, unknown>;
+          puts.push(body);
+          if (body.version !== 3) {
+            current = theirs;
+            return jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current: theirs }, 409);
+          }
+          current = own({ name: body.name, version: 4 });
+        }
+        return jsonResponse(current);
+      }),
+    );
+    renderAtRoute(<IngredientPage />, '/ingredients/:ingredientId', '/ingredients/501');
+    const name = (await screen.findByLabelText('Name')) as HTMLInputElement;
+    fireEvent.change(name, { target: { value: 'Pesto (mine)' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    expect(await screen.findByText('Someone else saved this ingredient while you were editing')).toBeTruthy();
+    await screen.findByRole('heading', { name: 'Pesto (theirs)' });
+    expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Pesto (mine)');
+    // The form's own Save still sends the version it started from: refused again, nothing overwritten.
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    await waitFor(() => expect(puts).toHaveLength(2));
+    fireEvent.click(await screen.findByRole('button', { name: 'Keep mine and save again' }));
+    await screen.findByRole('heading', { name: 'Pesto (mine)' });
+    expect(puts.map((p) => [p.name, p.version])).toEqual([
+      ['Pesto (mine)', 2],
+      ['Pesto (mine)', 2],
+      ['Pesto (mine)', 3],
+    ]);
+    await waitFor(() => expect(screen.queryByText('Someone else saved this ingredient while you were editing')).toBeNull());
+  });
+
+  it('loads their version when asked', async () => {
+    const theirs = own({ name: 'Pesto (theirs)', version: 3 });
+    let current = own();
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init?: RequestInit) => {
+        if (init?.method === 'PUT' || init?.method === 'PATCH') {
+          current = theirs;
+          return jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current: theirs }, 409);
+        }
+        return jsonResponse(current);
+      }),
+    );
+    renderAtRoute(<IngredientPage />, '/ingredients/:ingredientId', '/ingredients/501');
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Pesto (mine)' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Reload their version' }));
+    await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Pesto (theirs)'));
+  });
+});
