@@ -147,6 +147,8 @@ describe('two people editing one profile', () => {
     const notice = await screen.findByText('Someone else saved this profile while you were editing');
     expect(notice).toBeTruthy();
     expect(screen.getByText('Their version (4) is saved. Your changes are still here in the form: nothing is lost.')).toBeTruthy();
+    // Saved at the foot of a long form: the keyboard moves to the notice at its head (and it scrolls into view).
+    expect(document.activeElement?.getAttribute('role')).toBe('alert');
     // The page heading shows theirs; the form still holds what was typed.
     await screen.findByRole('heading', { name: 'Olga Theirs' });
     expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Mine');

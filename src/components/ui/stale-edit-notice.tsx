@@ -1,3 +1,4 @@
+import { useEffect, useRef } from 'react';
 import { Button } from './button';
 import { Notice } from './states';
 
@@ -6,8 +7,14 @@ import { Notice } from './states';
  * the form, and they choose: load the other version, or save theirs over it (knowingly, never silently).
  */
 export function StaleEditNotice({ what, version, busy, onReload, onKeep }: { what: string; version: number; busy?: boolean; onReload: () => void; onKeep: () => void }) {
+  // The save was pressed at the foot of a long form: bring the notice (at its head) into view, and the keyboard to it.
+  const ref = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    ref.current?.scrollIntoView?.({ block: 'center' });
+    ref.current?.focus({ preventScroll: true });
+  }, []);
   return (
-    <div role="alert">
+    <div role="alert" ref={ref} tabIndex={-1} className="scroll-mt-20 outline-none">
       <Notice tone="warn" title={`Someone else saved this ${what} while you were editing`}>
         <p>Their version ({version}) is saved. Your changes are still here in the form: nothing is lost.</p>
         <div className="mt-2 flex flex-wrap gap-2">
