@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { Component as ClientPage } from '@/app/routes/clients/client.route';
 import { emptyClient } from '@/features/clients/components/client-form';
-import { jsonResponse, renderAtRoute } from './render';
+import { jsonResponse, renderAtRoute, staleResponse } from './render';
 
 // An invented client profile, as the coach reads it (GET /api/clients/:id): the new-client form's starting values.
 const profile = (overrides: Record<string, unknown> = {}) => ({
@@ -118,7 +118,8 @@ describe('published plates holding an allergen now on the client\'s list', () =>
 });
 
 describe('two people editing one profile', () => {
-  it('keeps what was typed when someone else saved meanwhile, and saves it over theirs only when asked', async () => {
+  /** Someone else saves version 4 while this page holds version 3: a save from 3 is refused (409 with theirs). */
+  function raced() {
     const theirs = profile({ name: 'Olga Theirs', version: 4 });
     const patches: Record<string, unknown>[] = [];
     let current = profile();
@@ -130,16 +131,20 @@ describe('two people editing one profile', () => {
         if (init?.method === 'PATCH') {
           const body = JSON.parse(String(init.body)) as Record<string, unknown>;
           patches.push(body);
-          // The first save started from version 3 while version 4 (someone else's) is saved: 409 with theirs.
           if (body.version !== 4) {
             current = theirs;
-            return jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current: theirs }, 409);
+            return staleResponse(theirs);
           }
           current = profile({ ...body, version: 5 });
         }
         return jsonResponse(current);
       }),
     );
+    return patches;
+  }
+
+  it('keeps what was typed when someone else saved meanwhile, and saves it over theirs only when asked', async () => {
+    const patches = raced();
     renderProfile();
     const name = (await screen.findByLabelText('Name')) as HTMLInputElement;
     fireEvent.change(name, { target: { value: 'Olga Mine' } });
@@ -162,20 +167,7 @@ describe('two people editing one profile', () => {
   });
 
   it('loads their version when asked', async () => {
-    const theirs = profile({ name: 'Olga Theirs', version: 4 });
-    let current = profile();
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async (url: string, init?: RequestInit) => {
-        if (url.includes('/deliveries')) return jsonResponse({ clientId: 7, items: [] });
-        if (url.includes('/published-allergens')) return jsonResponse([]);
-        if (init?.method === 'PATCH') {
-          current = theirs;
-          return jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current: theirs }, 409);
-        }
-        return jsonResponse(current);
-      }),
-    );
+    raced();
     renderProfile();
     fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
     fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));

@@ -1,7 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { Component as IngredientPage } from '@/app/routes/ingredients/ingredient.route';
-import { jsonResponse, renderAtRoute } from './render';
+import { jsonResponse, renderAtRoute, staleResponse } from './render';
 
 // An invented workspace-own ingredient (a label typed by the coach), as GET /api/ingredients/:id answers it.
 const own = (overrides: Record<string, unknown> = {}) => ({
@@ -46,7 +46,7 @@ describe('two people editing one ingredient', () => {
           puts.push(body);
           if (body.version !== 3) {
             current = theirs;
-            return jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current: theirs }, 409);
+            return staleResponse(theirs);
           }
           current = own({ name: body.name, version: 4 });
         }
@@ -81,7 +81,7 @@ describe('two people editing one ingredient', () => {
       vi.fn(async (_url: string, init?: RequestInit) => {
         if (init?.method === 'PUT' || init?.method === 'PATCH') {
           current = theirs;
-          return jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current: theirs }, 409);
+          return staleResponse(theirs);
         }
         return jsonResponse(current);
       }),

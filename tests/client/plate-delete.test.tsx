@@ -1,7 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { Component as PlatesPage } from '@/app/routes/plates/plates.route';
-import { jsonResponse, renderAtRoute } from './render';
+import { jsonResponse, renderAtRoute, staleResponse } from './render';
 
 // One invented plate, as GET /api/assemblies lists it (only the fields the list reads).
 const plate = {
@@ -97,7 +97,7 @@ describe('two people editing one plate', () => {
         if (init?.method === 'PUT') {
           const body = JSON.parse(String(init.body)) as Record<string, unknown>;
           puts.push(body);
-          if (body.version !== 2) return jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current: theirs }, 409);
+          if (body.version !== 2) return staleResponse(theirs);
           return jsonResponse({ ...theirs, name: body.name, version: 3 });
         }
         if (url.includes('/assemblies')) return jsonResponse([mine]);

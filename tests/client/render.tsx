@@ -9,6 +9,10 @@ import { meQuery } from '@/features/auth/api/auth.queries';
 export const jsonResponse = (body: unknown, status = 200) =>
   new Response(JSON.stringify(body), { status, headers: { 'content-type': status >= 400 ? 'application/problem+json' : 'application/json' } });
 
+/** The 409 an edit from a stale version gets: someone else's save is `current` (server/http/errors.ts StaleEdit). */
+export const staleResponse = (current: unknown) =>
+  jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current }, 409);
+
 /** A query client for one test: no retries, so an error shows at once. */
 export const testQueryClient = () => new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
 
