@@ -25,6 +25,7 @@ import { Week, WeekTray, type IWeek } from '../weeks/week.entity.js';
 import { Tray } from '../trays/tray.entity.js';
 import { BakeRunSetting, BakeRule, CoolingRecord, type IBakeRule, type IBakeRunSetting } from './bake-run.entity.js';
 import { loadBakeRules, loadOvens, ovenInput, presentOven } from './bake-setup.service.js';
+import { deltaIn } from '@shared/domain/temperature.js';
 
 const num = (v: string | number): number => new Decimal(v).toNumber();
 
@@ -41,7 +42,9 @@ export function runRulesFrom(rules: readonly IBakeRule[]): { rules: Partial<Bake
   if (new Set(crowding).size > 1)
     cautions.push(`The bake rules in this run give different crowding rules; the plan uses the largest, +${Math.max(...crowding)}% per extra tray.`);
   if (new Set(deltas).size > 1)
-    cautions.push(`The bake rules in this run give different convection adjustments; the plan sets convection ovens ${delta} °F lower for every tray.`);
+    cautions.push(
+      `The bake rules in this run give different convection adjustments; the plan sets convection ovens ${deltaIn(delta, 'F')} (${deltaIn(delta, 'C')}) lower for every tray.`,
+    );
   return {
     rules: {
       crowdingPerExtraTray: new Decimal(Math.max(...crowding)).dividedBy(100).toNumber(),
