@@ -3,7 +3,7 @@ import type { BakeEvent, BakeOvenPlan, BakeRunResult, BakeRunRules, BakeTrayPlan
 import { BAKE_RUN_CAUTIONS, KIND_ORDER } from './bake-run.js';
 import { addLocalMinutes, requireLocalMinutes } from './bake-run-time.js';
 import { clockText, DEFAULT_CLOCK, type ClockStyle } from './clock.js';
-import { toCelsiusRounded } from './temperature.js';
+import { bothScales } from './temperature.js';
 
 /**
  * A run planned again part-way through prep day (an oven failed at ten, a cook went home): the trays already out of
@@ -109,7 +109,7 @@ const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one :
 function hotSaid(ovenF: Record<string, number> | undefined): string {
   const hot = Object.entries(ovenF ?? {});
   if (hot.length === 0) return 'each oven from cold (one still hot is ready sooner)';
-  const names = hot.map(([name, f]) => `${name} from ${f} °F (${toCelsiusRounded(f)} °C)`).join(', ');
+  const names = hot.map(([name, f]) => `${name} from ${bothScales(f)}`).join(', ');
   return `${names} (on at that time), any other oven from cold`;
 }
 

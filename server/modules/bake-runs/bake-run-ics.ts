@@ -1,10 +1,10 @@
 import ical, { ICalAlarmRelatesTo, ICalAlarmType } from 'ical-generator';
 import type { BakeRunResult } from '@shared/domain/bake-run-types.js';
-import { toCelsiusRounded } from '@shared/domain/temperature.js';
+import { bothScales } from '@shared/domain/temperature.js';
 import { floating } from '../../lib/ics.js';
 import { clockText, DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
 
-const deg = (f: number | null | undefined) => (f == null ? '' : `${f} °F (${toCelsiusRounded(f)} °C)`);
+const deg = (f: number | null | undefined) => (f == null ? '' : bothScales(f));
 
 
 /**

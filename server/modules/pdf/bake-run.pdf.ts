@@ -1,6 +1,6 @@
 import type { BakeEvent, BakeRunResult } from '@shared/domain/bake-run-types.js';
 import { CAUTIONS } from '@shared/domain/eat-by.js';
-import { toCelsiusRounded } from '@shared/domain/temperature.js';
+import { bothScales } from '@shared/domain/temperature.js';
 import { cautionsBlock, createDoc, finishDoc, heading, paragraph, table } from './pdf-document.js';
 import { DEFAULT_DATE_ORDER, longDate, type DateOrder } from '@shared/domain/iso-date.js';
 import { replannedSummary } from '@shared/domain/bake-run-words.js';
@@ -42,7 +42,7 @@ const initials = (name: string | undefined) =>
     .map((w) => w[0]!.toUpperCase())
     .join('');
 
-const deg = (f: number | null | undefined) => (f == null ? '' : `${f} °F (${toCelsiusRounded(f)} °C)`);
+const deg = (f: number | null | undefined) => (f == null ? '' : bothScales(f));
 
 function what(e: BakeEvent, trayName: (id: string | null) => string, clock: (local: string) => string): string {
   const tray = trayName(e.trayId);

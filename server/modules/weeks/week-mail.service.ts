@@ -102,6 +102,7 @@ export async function sendWeek(
     const order = toDateOrder(ws.dateOrder);
     const weekLabel = longDate(pub.snapshot.startDate, order);
     const link = appLink(opts.publicUrl, '/my-plates');
+    const today = input.today;
     for (const r of recipients) {
       const days = pub.snapshot.clients[String(r.clientId)]?.days ?? [];
       // A frozen plate in this client's plan: their thaw reminders go along as a calendar file.
@@ -111,7 +112,6 @@ export async function sendWeek(
         d.plates.filter((p) => p.onYourList?.length).map(() => d.date),
       );
       // Sent once the week has begun: how many of those plates are still ahead of the coach's today.
-      const today = input.today;
       const allergenPlatesAhead =
         today && onList.some((date) => compareIsoDates(date, today) < 0)
           ? { count: onList.filter((date) => compareIsoDates(date, today) >= 0).length, day: dayHeading(today, order) }

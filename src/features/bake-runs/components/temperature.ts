@@ -1,6 +1,7 @@
-import { toCelsiusRounded } from '@shared/domain/temperature';
+import { toCelsiusRounded, type TempScale } from '@shared/domain/temperature';
 
-export type TempUnit = 'F' | 'C';
+/** The °F / °C a page shows (its switch starts on the person's preference). */
+export type TempUnit = TempScale;
 
 /** A set point as the person reads it (°C rounded to whole degrees, as on oven dials). */
 export function formatTemp(tempF: number | null | undefined, unit: TempUnit): string {
