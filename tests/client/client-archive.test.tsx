@@ -175,4 +175,100 @@ describe('two people editing one profile', () => {
     await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Theirs'));
     expect(screen.queryByText('Someone else saved this profile while you were editing')).toBeNull();
   });
+
+  it('keeps what was typed when the coach archives or restores the client meanwhile, and saves it on the new version', async () => {
+    const patches: Record<string, unknown>[] = [];
+    let current = profile();
+    vi.stubGlobal('confirm', vi.fn(() => true));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string, init?: RequestInit) => {
+        if (url.includes('/deliveries')) return jsonResponse({ clientId: 7, items: [] });
+        if (url.includes('/published-allergens')) return jsonResponse([]);
+        if (init?.method === 'PATCH') {
+          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
+          patches.push(body);
+          if (body.version !== current.version) return staleResponse(current);
+          current = 'archived' in body
+            ? profile({ ...current, archivedAt: body.archived ? '2026-12-02T10:00:00.000Z' : null, version: current.version + 1 })
+            : profile({ ...current, ...body, version: current.version + 1 });
+        }
+        return jsonResponse(current);
+      }),
+    );
+    renderProfile();
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Archive' }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Restore' }));
+    await waitFor(() => expect(patches).toHaveLength(2));
+    await screen.findByRole('button', { name: 'Archive' });
+    // Archived (version 4) and restored (5) by this coach: the typing stays, with no notice of anyone else's save.
+    expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Mine');
+    expect(screen.queryByText(/Someone else saved/)).toBeNull();
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    await screen.findByRole('heading', { name: 'Olga Mine' });
+    expect(patches.map((p) => [p.archived ?? p.name, p.version])).toEqual([
+      [true, 3],
+      [false, 4],
+      ['Olga Mine', 5],
+    ]);
+  });
+});
+
+describe('a newer version arriving while the profile is open (a refetch on focus, another tab)', () => {
+  function serving() {
+    const state = { current: profile() };
+    const patches: Record<string, unknown>[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string, init?: RequestInit) => {
+        if (url.includes('/deliveries')) return jsonResponse({ clientId: 7, items: [] });
+        if (url.includes('/published-allergens')) return jsonResponse([]);
+        if (init?.method === 'PATCH') {
+          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
+          patches.push(body);
+          if (body.version !== state.current.version) return staleResponse(state.current);
+        }
+        return jsonResponse(state.current);
+      }),
+    );
+    return { state, patches };
+  }
+
+  it('shows it at once in a form with nothing typed', async () => {
+    const { state } = serving();
+    const { qc } = renderProfile();
+    await screen.findByLabelText('Name');
+    state.current = profile({ name: 'Olga Theirs', version: 4 });
+    await qc.invalidateQueries();
+    await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Theirs'));
+    expect(screen.queryByText(/Someone else saved/)).toBeNull();
+  });
+
+  it('keeps the typing, says so, and refuses a save over theirs until asked', async () => {
+    const { state, patches } = serving();
+    const { qc } = renderProfile();
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
+    state.current = profile({ name: 'Olga Theirs', version: 4 });
+    await qc.invalidateQueries();
+    await screen.findByRole('heading', { name: 'Olga Theirs' });
+    expect(screen.getByText('Someone else saved this profile (version 4) since you started typing')).toBeTruthy();
+    expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Mine');
+    // Save sends the version the typing started from: refused, never a silent save over theirs.
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    await screen.findByText('Someone else saved this profile while you were editing');
+    expect(patches.map((p) => p.version)).toEqual([3]);
+    expect(screen.queryByText(/since you started typing/)).toBeNull();
+  });
+
+  it('drops the typing and loads theirs when asked', async () => {
+    const { state } = serving();
+    const { qc } = renderProfile();
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
+    state.current = profile({ name: 'Olga Theirs', version: 4 });
+    await qc.invalidateQueries();
+    fireEvent.click(await screen.findByRole('button', { name: 'Drop my typing and load theirs' }));
+    await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Theirs'));
+    expect(screen.queryByText(/Someone else saved/)).toBeNull();
+  });
 });

@@ -92,4 +92,42 @@ describe('two people editing one ingredient', () => {
     fireEvent.click(await screen.findByRole('button', { name: 'Reload their version' }));
     await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Pesto (theirs)'));
   });
+
+  it('never saves over a version that arrived under the typing (a refetch on focus): the Save is refused and asks', async () => {
+    const puts: Record<string, unknown>[] = [];
+    let current = own();
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init?: RequestInit) => {
+        if (init?.method === 'PUT' || init?.method === 'PATCH') {
+          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
+          puts.push(body);
+          if (body.version !== current.version) return staleResponse(current);
+        }
+        return jsonResponse(current);
+      }),
+    );
+    const { qc } = renderAtRoute(<IngredientPage />, '/ingredients/:ingredientId', '/ingredients/501');
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Pesto (mine)' } });
+    current = own({ name: 'Pesto (theirs)', version: 3 });
+    await qc.invalidateQueries();
+    await screen.findByRole('heading', { name: 'Pesto (theirs)' });
+    expect(screen.getByText('Someone else saved this ingredient (version 3) since you started typing')).toBeTruthy();
+    expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Pesto (mine)');
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    expect(await screen.findByText('Someone else saved this ingredient while you were editing')).toBeTruthy();
+    // Sent from version 2, the one the typing started from; before, the refreshed 3 went and theirs was overwritten.
+    expect(puts.map((p) => [p.name, p.version])).toEqual([['Pesto (mine)', 2]]);
+  });
+
+  it('follows a newer version at once when nothing is typed', async () => {
+    let current = own();
+    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(current)));
+    const { qc } = renderAtRoute(<IngredientPage />, '/ingredients/:ingredientId', '/ingredients/501');
+    await screen.findByLabelText('Name');
+    current = own({ name: 'Pesto (theirs)', version: 3 });
+    await qc.invalidateQueries();
+    await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Pesto (theirs)'));
+    expect(screen.queryByText(/Someone else saved/)).toBeNull();
+  });
 });

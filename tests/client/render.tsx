@@ -52,15 +52,20 @@ export function queryClientFor(me: MeDto): QueryClient {
   return qc;
 }
 
-/** Renders a page that reads its route's params: `element` under `path`, opened at `url`, signed in as `me`. */
+/**
+ * Renders a page that reads its route's params: `element` under `path`, opened at `url`, signed in as `me`. The query
+ * client comes back with it (`qc`), for a test that refreshes data under the page.
+ */
 export function renderAtRoute(element: ReactElement, path: string, url: string, me: MeDto = signedIn()) {
-  return render(
+  const qc = queryClientFor(me);
+  const result = render(
     <MemoryRouter initialEntries={[url]}>
-      <QueryClientProvider client={queryClientFor(me)}>
+      <QueryClientProvider client={qc}>
         <Routes>
           <Route path={path} element={element} />
         </Routes>
       </QueryClientProvider>
     </MemoryRouter>,
   );
+  return { ...result, qc };
 }

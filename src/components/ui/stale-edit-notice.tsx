@@ -29,3 +29,19 @@ export function StaleEditNotice({ what, version, busy, onReload, onKeep }: { wha
     </div>
   );
 }
+
+/** Someone else saved the record while this person's typing waits in the form (found before they press Save). */
+export function NewerVersionNotice({ what, version, onReload }: { what: string; version: number; onReload: () => void }) {
+  return (
+    <div role="status">
+      <Notice tone="info" title={`Someone else saved this ${what} (version ${version}) since you started typing`}>
+        <p>Your typing stays in the form. Saving it will ask whether to keep yours or theirs.</p>
+        <div className="mt-2">
+          <Button type="button" variant="secondary" size="sm" onClick={onReload}>
+            Drop my typing and load theirs
+          </Button>
+        </div>
+      </Notice>
+    </div>
+  );
+}

@@ -11,7 +11,8 @@ import { DeliveryLog } from '@/features/mail/components/delivery-log';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Card, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
-import { StaleEditNotice } from '@/components/ui/stale-edit-notice';
+import { NewerVersionNotice, StaleEditNotice } from '@/components/ui/stale-edit-notice';
+import { useEditBase } from '@/lib/use-edit-base';
 import { Cautions } from '@/components/domain/cautions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
@@ -90,6 +91,13 @@ function InviteCard({ client }: { client: ClientDto }) {
 export function Component() {
   const id = Number(useParams().clientId);
   const q = useQuery(clientQuery(id));
+  if (q.isPending) return <PageSkeleton />;
+  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  return <ClientProfile client={q.data as ClientDto} refetch={() => void q.refetch()} />;
+}
+
+function ClientProfile({ client, refetch }: { client: ClientDto; refetch: () => void }) {
+  const id = client.id;
   const me = useMe();
   const update = useUpdateClient(id);
   const del = useDeleteClient();
@@ -97,31 +105,27 @@ export function Component() {
   const [formError, setFormError] = useState<string | null>(null);
   // Archive or restore refused because the profile changed meanwhile: the page shows the other version.
   const [stale, setStale] = useState(false);
-  // A save refused because someone else saved the profile meanwhile: the form keeps what was typed (it stays on the
-  // version it started from) until the coach reloads theirs or saves this over it.
-  const [held, setHeld] = useState<{ base: ClientDto; values: CreateClientData; current: ClientDto } | null>(null);
+  // The version the form's typing started from: a save refused because someone else saved meanwhile keeps what was
+  // typed until the coach reloads theirs or saves this over it; archiving keeps it too.
+  const edit = useEditBase<ClientDto, CreateClientData>(client);
   const [archiveError, setArchiveError] = useState<string | null>(null);
-  if (q.isPending) return <PageSkeleton />;
-  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
-  const client = q.data as ClientDto;
   const slots = Object.keys(client.targets.slots);
   const onStale = () => {
     setStale(true);
-    q.refetch();
+    refetch();
   };
-  const formBase = held?.base ?? client;
   const save = (values: CreateClientData, version: number, setError?: UseFormSetError<CreateClientInput>) => {
     setFormError(null);
     setStale(false);
     update.mutate(
       { ...values, version },
       {
-        onSuccess: () => setHeld(null),
+        onSuccess: edit.saved,
         onError: (e) => {
           markShown(e);
           if (isApiError(e, 409) && e.problem.code === 'stale_version') {
-            setHeld({ base: formBase, values, current: (e.problem.current as ClientDto | undefined) ?? client });
-            q.refetch();
+            edit.refused(values, (e.problem.current as ClientDto | undefined) ?? client);
+            refetch();
             return;
           }
           setFormError(setError ? applyServerErrors(e, setError) : errorMessage(e));
@@ -132,9 +136,11 @@ export function Component() {
   const setArchived = (archived: boolean) => {
     setArchiveError(null);
     setStale(false);
+    const before = client.version;
     update.mutate(
-      { archived, version: client.version },
+      { archived, version: before },
       {
+        onSuccess: (after) => edit.carried(before, after),
         onError: (e) => {
           markShown(e);
           if (isApiError(e, 409)) onStale();
@@ -198,25 +204,28 @@ export function Component() {
           The page now shows their version; archive or restore again if you still mean to.
         </Notice>
       )}
-      {held && (
+      {edit.held ? (
         <StaleEditNotice
           what="profile"
-          version={held.current.version}
+          version={edit.held.current.version}
           busy={update.isPending}
-          onReload={() => setHeld(null)}
-          onKeep={() => save(held.values, held.current.version)}
+          onReload={edit.reload}
+          onKeep={() => edit.held && save(edit.held.values, edit.held.current.version)}
         />
+      ) : (
+        edit.newerElsewhere && <NewerVersionNotice what="profile" version={edit.newerElsewhere.version} onReload={edit.reload} />
       )}
       <Card>
         <ClientForm
           unitSystem={me.unitSystem}
-          key={formBase.version}
-          initial={clientToInput(formBase)}
+          key={edit.base.version}
+          initial={clientToInput(edit.base)}
+          onDirtyChange={edit.onDirtyChange}
           slots={slots}
           submitLabel="Save changes"
           busy={update.isPending}
           formError={formError}
-          onSubmit={(values, setError) => save(values, formBase.version, setError)}
+          onSubmit={(values, setError) => save(values, edit.sendVersion, setError)}
         />
       </Card>
       <Card>

@@ -13,7 +13,8 @@ import { IngredientFacts } from '@/features/ingredients/components/ingredient-fa
 import { AtwaterFlag } from '@/features/ingredients/components/ingredient-bits';
 import { Button } from '@/components/ui/button';
 import { ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
-import { StaleEditNotice } from '@/components/ui/stale-edit-notice';
+import { NewerVersionNotice, StaleEditNotice } from '@/components/ui/stale-edit-notice';
+import { useEditBase } from '@/lib/use-edit-base';
 import { errorMessage, isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
 
@@ -22,53 +23,52 @@ function EditOwn({ ingredient }: { ingredient: IngredientDto }) {
   const navigate = useNavigate();
   const update = useUpdateIngredient(ingredient.id);
   const del = useDeleteIngredient();
-  // A save refused because someone else saved the ingredient meanwhile: the form keeps what was typed (it is not
-  // remounted) until the coach reloads their version or saves this over it.
-  const [held, setHeld] = useState<{ values: IngredientValues; current: IngredientDto; baseVersion: number } | null>(null);
+  // The version the form's typing started from: a save refused because someone else saved the ingredient meanwhile
+  // keeps what was typed (the form is not remounted) until the coach reloads their version or saves this over it.
+  const edit = useEditBase<IngredientDto, IngredientValues>(ingredient);
   const [keepError, setKeepError] = useState<string | null>(null);
-  const [formKey, setFormKey] = useState(0);
   const save = async (values: IngredientValues, version: number) => {
     setKeepError(null);
     try {
-      await update.mutateAsync({ ...values, version });
-      setHeld(null);
+      edit.saved(await update.mutateAsync({ ...values, version }));
       toast.success('Saved');
     } catch (err) {
       if (isApiError(err, 409) && err.problem.code === 'stale_version') {
         const current = err.problem.current as IngredientDto | undefined;
         if (current) qc.setQueryData(ingredientKeys.detail(ingredient.id), current);
         else await qc.invalidateQueries({ queryKey: ingredientKeys.detail(ingredient.id) });
-        setHeld({ values, current: current ?? ingredient, baseVersion: held?.baseVersion ?? version });
+        edit.refused(values, current ?? ingredient);
         return;
       }
       throw err;
     }
   };
+  const held = edit.held;
   return (
     <>
       <p>
         <AtwaterFlag check={ingredient.atwater} long />
       </p>
-      {held && (
+      {held ? (
         <StaleEditNotice
           what="ingredient"
           version={held.current.version}
           busy={update.isPending}
-          onReload={() => {
-            setHeld(null);
-            setFormKey((k) => k + 1);
-          }}
+          onReload={edit.reload}
           onKeep={() => void save(held.values, held.current.version).catch((e: unknown) => setKeepError(errorMessage(e)))}
         />
+      ) : (
+        edit.newerElsewhere && <NewerVersionNotice what="ingredient" version={edit.newerElsewhere.version} onReload={edit.reload} />
       )}
       {keepError && <Notice tone="block" title={`Not saved: ${keepError}`} />}
       <IngredientForm
-        key={`${ingredient.id}-${formKey}`}
-        initial={formValuesOf(ingredient)}
+        key={`${ingredient.id}-${edit.base.version}`}
+        initial={formValuesOf(edit.base)}
         submitLabel="Save changes"
         busy={update.isPending}
-        // The form's own Save sends the version it started from (a second 409 while the notice is up).
-        onSave={(values) => save(values, held?.baseVersion ?? ingredient.version)}
+        onDirtyChange={edit.onDirtyChange}
+        // The form's own Save sends the version its typing started from (a 409 when someone else saved meanwhile).
+        onSave={(values) => save(values, edit.sendVersion)}
       />
       <div className="border-t border-line pt-4">
         <Button

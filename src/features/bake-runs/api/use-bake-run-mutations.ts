@@ -12,6 +12,7 @@ import type {
   WeekBakeRunDto,
 } from '@shared/schemas/bake-setup.schema';
 import { api } from '@/lib/api-client';
+import { isApiError } from '@/lib/problem';
 import { bakeRunsKeys } from './bake-runs.keys';
 
 /** A tray of the ad-hoc planner may name a bake rule instead of its temperature and minutes. */
@@ -55,6 +56,8 @@ export function useSaveBakeRule() {
       id ? api.put<BakeRuleDto>(`/bake-rules/${id}`, body) : api.post<BakeRuleDto>('/bake-rules', body),
     meta: { form: true, silent: true },
     onSuccess: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.all }),
+    // Refused because someone else saved meanwhile: the page behind the open form shows theirs.
+    onError: (e) => (isApiError(e, 409) ? qc.invalidateQueries({ queryKey: bakeRunsKeys.all }) : undefined),
   });
 }
 
@@ -73,6 +76,8 @@ export function useSaveOven() {
       id ? api.put<OvenDto>(`/ovens/${id}`, body) : api.post<OvenDto>('/ovens', body),
     meta: { form: true, silent: true },
     onSuccess: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.all }),
+    // Refused because someone else saved meanwhile: the page behind the open form shows theirs.
+    onError: (e) => (isApiError(e, 409) ? qc.invalidateQueries({ queryKey: bakeRunsKeys.all }) : undefined),
   });
 }
 

@@ -1,9 +1,8 @@
-import { FormFooter } from './form-footer';
+import { FormFooter, usePinnedRecord } from './form-footer';
 import { useForm } from 'react-hook-form';
 import { RACK_PREFERENCES, type BakeRuleDto } from '@shared/schemas/bake-setup.schema';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { applyServerErrors } from '@/lib/form-errors';
-import { isApiError } from '@/lib/problem';
 import { useSaveBakeRule } from '../api/use-bake-run-mutations';
 import type { TempUnit } from './temperature';
 import { sentAsF, shownIn, type ScaleKind } from './scale-fields';
@@ -28,59 +27,67 @@ interface RuleForm {
 
 const str = (v: number | null | undefined) => (v == null ? '' : String(v));
 
+/** The form's values for a bake rule (a new one's defaults), temperatures and differences in the page's unit. */
+function ruleDefaults(rule: BakeRuleDto | null, unit: TempUnit): RuleForm {
+  return {
+    category: rule?.category ?? '',
+    label: rule?.label ?? '',
+    tempF: str(rule?.tempF),
+    tempC: str(rule?.tempC),
+    minMinutes: str(rule?.minMinutes),
+    maxMinutes: str(rule?.maxMinutes),
+    handsOnMinutes: str(rule?.handsOnMinutes ?? 10),
+    toleranceF: shownIn(rule?.toleranceF ?? 10, 'delta', unit),
+    donenessCue: rule?.donenessCue ?? '',
+    minInternalF: shownIn(rule?.minInternalF, 'temp', unit),
+    minInternalSource: rule?.minInternalSource ?? '',
+    rackPreference: rule?.rackPreference ?? 'any',
+    convectionDeltaF: shownIn(rule?.convectionDeltaF ?? 25, 'delta', unit),
+    crowdingPct: str(rule?.crowdingPct ?? 10),
+    note: rule?.note ?? '',
+  };
+}
+
 /** Create or edit a bake rule (coach). Its temperatures and differences are typed in the page's unit (kept in °F). */
-export function BakeRuleFormCard({ rule, unit, onDone }: { rule: BakeRuleDto | null; unit: TempUnit; onDone: () => void }) {
+export function BakeRuleFormCard({ rule: opened, unit, onDone }: { rule: BakeRuleDto | null; unit: TempUnit; onDone: () => void }) {
   const save = useSaveBakeRule();
-  const form = useForm<RuleForm>({
-    defaultValues: {
-      category: rule?.category ?? '',
-      label: rule?.label ?? '',
-      tempF: str(rule?.tempF),
-      tempC: str(rule?.tempC),
-      minMinutes: str(rule?.minMinutes),
-      maxMinutes: str(rule?.maxMinutes),
-      handsOnMinutes: str(rule?.handsOnMinutes ?? 10),
-      toleranceF: shownIn(rule?.toleranceF ?? 10, 'delta', unit),
-      donenessCue: rule?.donenessCue ?? '',
-      minInternalF: shownIn(rule?.minInternalF, 'temp', unit),
-      minInternalSource: rule?.minInternalSource ?? '',
-      rackPreference: rule?.rackPreference ?? 'any',
-      convectionDeltaF: shownIn(rule?.convectionDeltaF ?? 25, 'delta', unit),
-      crowdingPct: str(rule?.crowdingPct ?? 10),
-      note: rule?.note ?? '',
-    },
-  });
+  const form = useForm<RuleForm>({ defaultValues: ruleDefaults(opened, unit) });
+  const pinned = usePinnedRecord(opened, (theirs) => form.reset(ruleDefaults(theirs, unit)));
+  const rule = pinned.base;
   const err = form.formState.errors;
   // Read while rendering, so react-hook-form tracks which fields were changed.
   const touched = form.formState.dirtyFields;
-  const submit = form.handleSubmit(async (v) => {
-    // Typed in the page's scale; the rule keeps °F (a field left as it was keeps its stored value exactly).
-    const asF = (name: 'toleranceF' | 'minInternalF' | 'convectionDeltaF', stored: number | null | undefined, kind: ScaleKind) =>
-      sentAsF(v[name], stored, !!touched[name], kind, unit);
-    const body = {
-      label: v.label,
-      // The set temperature in °C is whole degrees: left as it was, the stored °F goes back (400 °F, not 399.2 °F).
-      ...(unit === 'C' ? (rule && !touched.tempC ? { tempF: rule.tempF } : { tempC: Number(v.tempC) }) : { tempF: Number(v.tempF) }),
-      minMinutes: Number(v.minMinutes),
-      maxMinutes: Number(v.maxMinutes),
-      handsOnMinutes: Number(v.handsOnMinutes),
-      toleranceF: asF('toleranceF', rule?.toleranceF ?? 10, 'delta') as number,
-      donenessCue: v.donenessCue,
-      minInternalF: asF('minInternalF', rule?.minInternalF, 'temp') as number | null,
-      minInternalSource: v.minInternalSource.trim() === '' ? null : v.minInternalSource,
-      rackPreference: v.rackPreference as BakeRuleDto['rackPreference'],
-      convectionDeltaF: asF('convectionDeltaF', rule?.convectionDeltaF ?? 25, 'delta') as number,
-      crowdingPct: Number(v.crowdingPct),
-      note: v.note,
-    };
-    try {
-      await save.mutateAsync(rule ? { ...body, id: rule.id, version: rule.version } : { ...body, category: v.category });
-      onDone();
-    } catch (e) {
-      const rest = applyServerErrors(e, form.setError);
-      if (rest && !isApiError(e, 409)) form.setError('root', { message: rest });
-    }
-  });
+  const submitAt = (version = rule?.version) =>
+    form.handleSubmit(async (v) => {
+      // Typed in the page's scale; the rule keeps °F (a field left as it was keeps its stored value exactly).
+      const asF = (name: 'toleranceF' | 'minInternalF' | 'convectionDeltaF', stored: number | null | undefined, kind: ScaleKind) =>
+        sentAsF(v[name], stored, !!touched[name], kind, unit);
+      const body = {
+        label: v.label,
+        // The set temperature in °C is whole degrees: left as it was, the stored °F goes back (400 °F, not 399.2 °F).
+        ...(unit === 'C' ? (rule && !touched.tempC ? { tempF: rule.tempF } : { tempC: Number(v.tempC) }) : { tempF: Number(v.tempF) }),
+        minMinutes: Number(v.minMinutes),
+        maxMinutes: Number(v.maxMinutes),
+        handsOnMinutes: Number(v.handsOnMinutes),
+        toleranceF: asF('toleranceF', rule?.toleranceF ?? 10, 'delta') as number,
+        donenessCue: v.donenessCue,
+        minInternalF: asF('minInternalF', rule?.minInternalF, 'temp') as number | null,
+        minInternalSource: v.minInternalSource.trim() === '' ? null : v.minInternalSource,
+        rackPreference: v.rackPreference as BakeRuleDto['rackPreference'],
+        convectionDeltaF: asF('convectionDeltaF', rule?.convectionDeltaF ?? 25, 'delta') as number,
+        crowdingPct: Number(v.crowdingPct),
+        note: v.note,
+      };
+      try {
+        await save.mutateAsync(rule && version !== undefined ? { ...body, id: rule.id, version } : { ...body, category: v.category });
+        onDone();
+      } catch (e) {
+        if (pinned.caught(e)) return;
+        const rest = applyServerErrors(e, form.setError);
+        if (rest) form.setError('root', { message: rest });
+      }
+    });
+  const submit = submitAt();
   return (
     <form onSubmit={submit} className="flex flex-col gap-3 rounded-tray border border-line bg-paper-card p-4" aria-label={rule ? `Edit ${rule.label}` : 'New bake rule'}>
       <div className="grid gap-3 sm:grid-cols-3">
@@ -116,7 +123,16 @@ export function BakeRuleFormCard({ rule, unit, onDone }: { rule: BakeRuleDto | n
       </div>
       <TextAreaField label="Doneness cue" rows={2} {...form.register('donenessCue')} error={err.donenessCue?.message} />
       <TextAreaField label="Note" rows={2} {...form.register('note')} error={err.note?.message} />
-      <FormFooter saveLabel="Save rule" error={save.error} rootError={err.root?.message} busy={save.isPending} onCancel={onDone} />
+      <FormFooter
+        saveLabel="Save rule"
+        what="bake rule"
+        theirs={pinned.theirs}
+        onReload={pinned.reload}
+        onKeep={() => pinned.theirs && void submitAt(pinned.theirs.version)()}
+        rootError={err.root?.message}
+        busy={save.isPending}
+        onCancel={onDone}
+      />
     </form>
   );
 }

@@ -1,9 +1,8 @@
-import { FormFooter } from './form-footer';
+import { FormFooter, usePinnedRecord } from './form-footer';
 import { useForm } from 'react-hook-form';
 import type { OvenDto } from '@shared/schemas/bake-setup.schema';
 import { TextField } from '@/components/ui/field';
 import { applyServerErrors } from '@/lib/form-errors';
-import { isApiError } from '@/lib/problem';
 import { useSaveOven } from '../api/use-bake-run-mutations';
 import type { TempUnit } from './temperature';
 import { toCelsiusRounded } from '@shared/domain/temperature';
@@ -20,39 +19,47 @@ interface OvenForm {
   maxC: number;
 }
 
+/** The form's values for an oven (a new one's defaults), rates and maximum in the page's unit. */
+function ovenDefaults(oven: OvenDto | null, unit: TempUnit): OvenForm {
+  return {
+    ...(oven ?? { name: '', racks: 2, traysPerRack: 1, convection: false, maxF: 500, maxC: toCelsiusRounded(500) }),
+    heatFPerMin: shownIn(oven?.heatFPerMin ?? 25, 'delta', unit),
+    coolFPerMin: shownIn(oven?.coolFPerMin ?? 15, 'delta', unit),
+  };
+}
+
 /** Create or edit an oven (coach). The maximum and the rates are typed in the page's unit (kept in °F). */
-export function OvenFormCard({ oven, unit, onDone }: { oven: OvenDto | null; unit: TempUnit; onDone: () => void }) {
+export function OvenFormCard({ oven: opened, unit, onDone }: { oven: OvenDto | null; unit: TempUnit; onDone: () => void }) {
   const save = useSaveOven();
-  const form = useForm<OvenForm>({
-    defaultValues: {
-      ...(oven ?? { name: '', racks: 2, traysPerRack: 1, convection: false, maxF: 500, maxC: toCelsiusRounded(500) }),
-      heatFPerMin: shownIn(oven?.heatFPerMin ?? 25, 'delta', unit),
-      coolFPerMin: shownIn(oven?.coolFPerMin ?? 15, 'delta', unit),
-    },
-  });
+  const form = useForm<OvenForm>({ defaultValues: ovenDefaults(opened, unit) });
+  const pinned = usePinnedRecord(opened, (theirs) => form.reset(ovenDefaults(theirs, unit)));
+  const oven = pinned.base;
   const err = form.formState.errors;
   // Read while rendering, so react-hook-form tracks which fields were changed.
   const touched = form.formState.dirtyFields;
-  const submit = form.handleSubmit(async (v) => {
-    // Rates typed in the page's unit per minute; the oven keeps °F (a rate left as it was keeps its stored value).
-    const body = {
-      name: v.name,
-      racks: Number(v.racks),
-      traysPerRack: Number(v.traysPerRack),
-      convection: v.convection,
-      heatFPerMin: sentAsF(v.heatFPerMin, oven?.heatFPerMin ?? 25, !!touched.heatFPerMin, 'delta', unit) as number,
-      coolFPerMin: sentAsF(v.coolFPerMin, oven?.coolFPerMin ?? 15, !!touched.coolFPerMin, 'delta', unit) as number,
-      // The maximum in °C is whole degrees: left as it was, the stored °F goes back (475 °F is 246 °C, 474.8 °F again).
-      ...(unit === 'C' ? (oven && !touched.maxC ? { maxF: oven.maxF } : { maxC: Number(v.maxC) }) : { maxF: Number(v.maxF) }),
-    };
-    try {
-      await save.mutateAsync(oven ? { ...body, id: oven.id, version: oven.version } : body);
-      onDone();
-    } catch (e) {
-      const rest = applyServerErrors(e, form.setError);
-      if (rest && !isApiError(e, 409)) form.setError('root', { message: rest });
-    }
-  });
+  const submitAt = (version = oven?.version) =>
+    form.handleSubmit(async (v) => {
+      // Rates typed in the page's unit per minute; the oven keeps °F (a rate left as it was keeps its stored value).
+      const body = {
+        name: v.name,
+        racks: Number(v.racks),
+        traysPerRack: Number(v.traysPerRack),
+        convection: v.convection,
+        heatFPerMin: sentAsF(v.heatFPerMin, oven?.heatFPerMin ?? 25, !!touched.heatFPerMin, 'delta', unit) as number,
+        coolFPerMin: sentAsF(v.coolFPerMin, oven?.coolFPerMin ?? 15, !!touched.coolFPerMin, 'delta', unit) as number,
+        // The maximum in °C is whole degrees: left as it was, the stored °F goes back (475 °F is 246 °C, 474.8 °F again).
+        ...(unit === 'C' ? (oven && !touched.maxC ? { maxF: oven.maxF } : { maxC: Number(v.maxC) }) : { maxF: Number(v.maxF) }),
+      };
+      try {
+        await save.mutateAsync(oven ? { ...body, id: oven.id, version } : body);
+        onDone();
+      } catch (e) {
+        if (pinned.caught(e)) return;
+        const rest = applyServerErrors(e, form.setError);
+        if (rest) form.setError('root', { message: rest });
+      }
+    });
+  const submit = submitAt();
   return (
     <form onSubmit={submit} className="flex flex-col gap-3 rounded-tray border border-line bg-paper-card p-4" aria-label={oven ? `Edit ${oven.name}` : 'New oven'}>
       <div className="grid gap-3 sm:grid-cols-3">
@@ -84,7 +91,16 @@ export function OvenFormCard({ oven, unit, onDone }: { oven: OvenDto | null; uni
       <label className="flex min-h-11 items-center gap-2">
         <input type="checkbox" className="h-5 w-5" {...form.register('convection')} /> Convection (fan) oven
       </label>
-      <FormFooter saveLabel="Save oven" error={save.error} rootError={err.root?.message} busy={save.isPending} onCancel={onDone} />
+      <FormFooter
+        saveLabel="Save oven"
+        what="oven"
+        theirs={pinned.theirs}
+        onReload={pinned.reload}
+        onKeep={() => pinned.theirs && void submitAt(pinned.theirs.version)()}
+        rootError={err.root?.message}
+        busy={save.isPending}
+        onCancel={onDone}
+      />
     </form>
   );
 }

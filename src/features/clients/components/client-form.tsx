@@ -16,6 +16,7 @@ import {
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
+import { useReportDirty } from '@/lib/use-edit-base';
 import { cmOf, feetInches, kgOf, perLb, poundsOf } from '@shared/domain/body-measures';
 import { decimalCommaToPoint } from '@shared/domain/units';
 
@@ -175,10 +176,13 @@ interface Props {
   /** The coach's measures: height and weight are typed in feet, inches and pounds (US) or centimetres and kilograms. */
   unitSystem: 'us' | 'metric';
   onSubmit: (values: CreateClientData, setError: ReturnType<typeof useForm<CreateClientInput, unknown, CreateClientData>>['setError']) => void;
+  /** Told whether the form holds unsaved typing. */
+  onDirtyChange?: (dirty: boolean) => void;
 }
 
-export function ClientForm({ initial, slots = [], busy, submitLabel, formError, unitSystem, onSubmit }: Props) {
+export function ClientForm({ initial, slots = [], busy, submitLabel, formError, unitSystem, onSubmit, onDirtyChange }: Props) {
   const form = useForm<CreateClientInput, unknown, CreateClientData>({ resolver: zodResolver(createClientSchema), defaultValues: initial });
+  useReportDirty(form.formState.isDirty, onDirtyChange);
   const { register, formState, control } = form;
   const values = useWatch({ control }) as Partial<CreateClientInput>;
   const err = formState.errors;

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { useFieldArray, useForm, useWatch } from 'react-hook-form';
+import { useReportDirty } from '@/lib/use-edit-base';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { MAJOR_ALLERGENS } from '@shared/domain/allergens';
 import {
@@ -83,11 +84,14 @@ export function IngredientForm({
   submitLabel,
   onSave,
   busy,
+  onDirtyChange,
 }: {
   initial: IngredientInput;
   submitLabel: string;
   onSave: (values: IngredientValues) => Promise<unknown>;
   busy?: boolean;
+  /** Told whether the form holds unsaved typing. */
+  onDirtyChange?: (dirty: boolean) => void;
 }) {
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<IngredientInput, unknown, IngredientValues>({
@@ -95,6 +99,7 @@ export function IngredientForm({
     defaultValues: initial,
   });
   const { register, formState, setValue, control } = form;
+  useReportDirty(formState.isDirty, onDirtyChange);
   const pieces = useFieldArray({ control, name: 'pieceWeights' as never });
   const errors = formState.errors as Record<string, unknown>;
   const errorAt = (path: string): string | undefined => {
