@@ -27,14 +27,28 @@ export function Component() {
   const navigate = useNavigate();
   const [view, setView] = useState<'edit' | 'card'>(me.role === 'coach' ? 'edit' : 'card');
   const [notice, setNotice] = useState<string | null>(null);
+  // Archived or restored here while the editor holds typing: the editor's Save, sent from the version before, goes
+  // on the version after (this coach's own change, not someone else's: no stale notice).
+  const [ownChange, setOwnChange] = useState<{ from: number; to: number } | null>(null);
 
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   const tray = q.data;
   const isCoach = me.role === 'coach';
 
-  const setArchived = (archived: boolean) =>
-    update.mutate({ ...trayToValues(tray), version: tray.version, archived }, { onSuccess: () => setNotice(archived ? 'Archived.' : 'Restored.') });
+  const setArchived = (archived: boolean) => {
+    const before = tray.version;
+    update.mutate(
+      { ...trayToValues(tray), version: before, archived },
+      {
+        onSuccess: (after) => {
+          setOwnChange((c) => ({ from: c && c.to === before ? c.from : before, to: after.version }));
+          setNotice(archived ? 'Archived.' : 'Restored.');
+        },
+      },
+    );
+  };
+  const versionFor = (version: number | undefined) => (version === undefined ? tray.version : version === ownChange?.from ? ownChange.to : version);
 
   return (
     <div className="flex flex-col gap-6">
@@ -97,7 +111,7 @@ export function Component() {
               key={`${tray.id}`}
               initial={tray}
               busy={update.isPending}
-              onSave={(values, version) => update.mutateAsync({ ...values, version: version ?? tray.version })}
+              onSave={(values, version) => update.mutateAsync({ ...values, version: versionFor(version) })}
               onSaved={() => setNotice('Saved.')}
             />
           ) : (
