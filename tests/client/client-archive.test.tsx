@@ -2,10 +2,10 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { Component as ClientPage } from '@/app/routes/clients/client.route';
 import { emptyClient } from '@/features/clients/components/client-form';
-import { jsonResponse, renderAtRoute, staleResponse } from './render';
+import { jsonResponse, renderAtRoute, staleResponse, stubVersionedRecord } from './render';
 
 // An invented client profile, as the coach reads it (GET /api/clients/:id): the new-client form's starting values.
-const profile = (overrides: Record<string, unknown> = {}) => ({
+const profile = (overrides: Record<string, unknown> = {}): Record<string, unknown> & { version: number } => ({
   ...emptyClient,
   id: 7,
   name: 'Olga Paused',
@@ -25,6 +25,16 @@ const profile = (overrides: Record<string, unknown> = {}) => ({
 });
 
 const renderProfile = () => renderAtRoute(<ClientPage />, '/clients/:clientId', '/clients/7');
+
+/** The profile as the API keeps it (versions, 409 on a stale one), with the page's side cards answered empty. */
+const serveProfile = () =>
+  stubVersionedRecord(
+    '/api/clients/7',
+    profile(),
+    (current, body) =>
+      'archived' in body ? { ...current, archivedAt: body.archived ? '2026-12-02T10:00:00.000Z' : null } : profile({ ...current, ...body }),
+    (url) => (url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : url.includes('/published-allergens') ? jsonResponse([]) : undefined),
+  );
 
 afterEach(() => vi.unstubAllGlobals());
 
@@ -177,25 +187,8 @@ describe('two people editing one profile', () => {
   });
 
   it('keeps what was typed when the coach archives or restores the client meanwhile, and saves it on the new version', async () => {
-    const patches: Record<string, unknown>[] = [];
-    let current = profile();
     vi.stubGlobal('confirm', vi.fn(() => true));
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async (url: string, init?: RequestInit) => {
-        if (url.includes('/deliveries')) return jsonResponse({ clientId: 7, items: [] });
-        if (url.includes('/published-allergens')) return jsonResponse([]);
-        if (init?.method === 'PATCH') {
-          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
-          patches.push(body);
-          if (body.version !== current.version) return staleResponse(current);
-          current = 'archived' in body
-            ? profile({ ...current, archivedAt: body.archived ? '2026-12-02T10:00:00.000Z' : null, version: current.version + 1 })
-            : profile({ ...current, ...body, version: current.version + 1 });
-        }
-        return jsonResponse(current);
-      }),
-    );
+    const { writes: patches } = serveProfile();
     renderProfile();
     fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
     fireEvent.click(screen.getByRole('button', { name: 'Archive' }));
@@ -216,27 +209,8 @@ describe('two people editing one profile', () => {
 });
 
 describe('a newer version arriving while the profile is open (a refetch on focus, another tab)', () => {
-  function serving() {
-    const state = { current: profile() };
-    const patches: Record<string, unknown>[] = [];
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async (url: string, init?: RequestInit) => {
-        if (url.includes('/deliveries')) return jsonResponse({ clientId: 7, items: [] });
-        if (url.includes('/published-allergens')) return jsonResponse([]);
-        if (init?.method === 'PATCH') {
-          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
-          patches.push(body);
-          if (body.version !== state.current.version) return staleResponse(state.current);
-        }
-        return jsonResponse(state.current);
-      }),
-    );
-    return { state, patches };
-  }
-
   it('shows it at once in a form with nothing typed', async () => {
-    const { state } = serving();
+    const { state } = serveProfile();
     const { qc } = renderProfile();
     await screen.findByLabelText('Name');
     state.current = profile({ name: 'Olga Theirs', version: 4 });
@@ -246,7 +220,7 @@ describe('a newer version arriving while the profile is open (a refetch on focus
   });
 
   it('keeps the typing, says so, and refuses a save over theirs until asked', async () => {
-    const { state, patches } = serving();
+    const { state, writes: patches } = serveProfile();
     const { qc } = renderProfile();
     fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
     state.current = profile({ name: 'Olga Theirs', version: 4 });
@@ -262,7 +236,7 @@ describe('a newer version arriving while the profile is open (a refetch on focus
   });
 
   it('drops the typing and loads theirs when asked', async () => {
-    const { state } = serving();
+    const { state } = serveProfile();
     const { qc } = renderProfile();
     fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
     state.current = profile({ name: 'Olga Theirs', version: 4 });

@@ -1,7 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { Component as IngredientPage } from '@/app/routes/ingredients/ingredient.route';
-import { jsonResponse, renderAtRoute, staleResponse } from './render';
+import { jsonResponse, renderAtRoute, staleResponse, stubVersionedRecord } from './render';
 
 // An invented workspace-own ingredient (a label typed by the coach), as GET /api/ingredients/:id answers it.
 const own = (overrides: Record<string, unknown> = {}) => ({
@@ -94,22 +94,10 @@ describe('two people editing one ingredient', () => {
   });
 
   it('never saves over a version that arrived under the typing (a refetch on focus): the Save is refused and asks', async () => {
-    const puts: Record<string, unknown>[] = [];
-    let current = own();
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async (_url: string, init?: RequestInit) => {
-        if (init?.method === 'PUT' || init?.method === 'PATCH') {
-          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
-          puts.push(body);
-          if (body.version !== current.version) return staleResponse(current);
-        }
-        return jsonResponse(current);
-      }),
-    );
+    const { state, writes } = stubVersionedRecord('/api/ingredients/501', own(), (_current, body) => own({ name: body.name }));
     const { qc } = renderAtRoute(<IngredientPage />, '/ingredients/:ingredientId', '/ingredients/501');
     fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Pesto (mine)' } });
-    current = own({ name: 'Pesto (theirs)', version: 3 });
+    state.current = own({ name: 'Pesto (theirs)', version: 3 });
     await qc.invalidateQueries();
     await screen.findByRole('heading', { name: 'Pesto (theirs)' });
     expect(screen.getByText('Someone else saved this ingredient (version 3) since you started typing')).toBeTruthy();
@@ -117,15 +105,14 @@ describe('two people editing one ingredient', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
     expect(await screen.findByText('Someone else saved this ingredient while you were editing')).toBeTruthy();
     // Sent from version 2, the one the typing started from; before, the refreshed 3 went and theirs was overwritten.
-    expect(puts.map((p) => [p.name, p.version])).toEqual([['Pesto (mine)', 2]]);
+    expect(writes.map((p) => [p.name, p.version])).toEqual([['Pesto (mine)', 2]]);
   });
 
   it('follows a newer version at once when nothing is typed', async () => {
-    let current = own();
-    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(current)));
+    const { state } = stubVersionedRecord('/api/ingredients/501', own(), (_current, body) => own({ name: body.name }));
     const { qc } = renderAtRoute(<IngredientPage />, '/ingredients/:ingredientId', '/ingredients/501');
     await screen.findByLabelText('Name');
-    current = own({ name: 'Pesto (theirs)', version: 3 });
+    state.current = own({ name: 'Pesto (theirs)', version: 3 });
     await qc.invalidateQueries();
     await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Pesto (theirs)'));
     expect(screen.queryByText(/Someone else saved/)).toBeNull();

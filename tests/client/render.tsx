@@ -1,5 +1,6 @@
 import type { ReactElement } from 'react';
 import { render } from '@testing-library/react';
+import { vi } from 'vitest';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { MemoryRouter, Route, Routes } from 'react-router-dom';
 import type { MeDto } from '@shared/schemas/auth.schema';
@@ -12,6 +13,37 @@ export const jsonResponse = (body: unknown, status = 200) =>
 /** The 409 an edit from a stale version gets: someone else's save is `current` (server/http/errors.ts StaleEdit). */
 export const staleResponse = (current: unknown) =>
   jsonResponse({ status: 409, code: 'stale_version', title: 'Conflict', detail: 'Someone else changed this since you opened it', current }, 409);
+
+/**
+ * Stubs fetch with one record the way the API keeps it: `GET url` answers `state.current`; a PUT or PATCH is kept in
+ * `writes` and refused (409 with the current record) unless it sends the current version, else `write` makes the new
+ * record (its version one up). A test changes `state.current` to play someone else's save. Any other URL is answered
+ * by `other`, or a 500 (the page's side cards are not what such a test checks).
+ */
+export function stubVersionedRecord<T extends { version: number }>(
+  url: string,
+  start: T,
+  write: (current: T, body: Record<string, unknown>) => Omit<T, 'version'>,
+  other: (url: string) => Response | undefined = () => undefined,
+) {
+  const state = { current: start };
+  const writes: Record<string, unknown>[] = [];
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (at: string, init?: RequestInit) => {
+      if (init?.method === 'PUT' || init?.method === 'PATCH') {
+        const body = JSON.parse(String(init.body)) as Record<string, unknown>;
+        writes.push(body);
+        if (body.version !== state.current.version) return staleResponse(state.current);
+        state.current = { ...write(state.current, body), version: state.current.version + 1 } as T;
+        return jsonResponse(state.current);
+      }
+      if (at === url) return jsonResponse(state.current);
+      return other(at) ?? jsonResponse({ title: 'Not in this test' }, 500);
+    }),
+  );
+  return { state, writes };
+}
 
 /** A query client for one test: no retries, so an error shows at once. */
 export const testQueryClient = () => new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });

@@ -2,7 +2,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import type { TrayDto } from '@shared/schemas/trays.schema';
 import { Component as TrayPage } from '@/app/routes/trays/tray-detail.route';
-import { jsonResponse, renderAtRoute, staleResponse } from './render';
+import { renderAtRoute, stubVersionedRecord } from './render';
 
 // An invented archived egg-slab tray (demo-like values), as GET /api/trays/:id answers it.
 const tray = (overrides: Partial<TrayDto> = {}): TrayDto => ({
@@ -33,65 +33,39 @@ const tray = (overrides: Partial<TrayDto> = {}): TrayDto => ({
 afterEach(() => vi.unstubAllGlobals());
 
 describe('the tray editor and saves made meanwhile', () => {
-  it('keeps the typing and saves it on the restored version, with no word of anyone else', async () => {
-    const puts: Record<string, unknown>[] = [];
-    let current = tray();
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async (url: string, init?: RequestInit) => {
-        if (init?.method === 'PUT') {
-          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
-          puts.push(body);
-          if (body.version !== current.version) return staleResponse(current);
-          current = tray({ name: String(body.name), archived: 'archived' in body ? Boolean(body.archived) : current.archived, version: current.version + 1 });
-          return jsonResponse(current);
-        }
-        if (url === '/api/trays/12') return jsonResponse(current);
-        // The page's side cards (portion card, shopping, live macros) are not what this checks.
-        return jsonResponse({ title: 'Not in this test' }, 500);
-      }),
+  const serve = (start: TrayDto) =>
+    stubVersionedRecord('/api/trays/12', start, (current, body) =>
+      tray({ name: String(body.name), archived: 'archived' in body ? Boolean(body.archived) : current.archived }),
     );
+
+  it('keeps the typing and saves it on the restored version, with no word of anyone else', async () => {
+    const { writes } = serve(tray());
     renderAtRoute(<TrayPage />, '/trays/:trayId', '/trays/12');
     fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Spinach egg slab, less salt' } });
     fireEvent.click(screen.getByRole('button', { name: 'Restore' }));
     await screen.findByText('Restored.');
     fireEvent.click(screen.getByRole('button', { name: /^Save/ }));
-    await waitFor(() => expect(puts).toHaveLength(2));
+    await waitFor(() => expect(writes).toHaveLength(2));
     await waitFor(() => expect(screen.getByRole('heading', { level: 1 }).textContent).toBe('Spinach egg slab, less salt'));
     expect(screen.queryByText(/Someone else saved/)).toBeNull();
     // The restore went from 3; the editor's save, begun on 3, goes on 4 (this coach's own restore).
-    expect(puts.map((p) => [p.name, p.archived, p.version])).toEqual([
+    expect(writes.map((p) => [p.name, p.archived, p.version])).toEqual([
       ['Spinach egg slab', false, 3],
       ['Spinach egg slab, less salt', undefined, 4],
     ]);
   });
 
   it('still says so when someone else saved the tray meanwhile, and saves over theirs only when asked', async () => {
-    const puts: Record<string, unknown>[] = [];
-    let current = tray({ archived: false });
-    vi.stubGlobal(
-      'fetch',
-      vi.fn(async (url: string, init?: RequestInit) => {
-        if (init?.method === 'PUT') {
-          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
-          puts.push(body);
-          if (body.version !== current.version) return staleResponse(current);
-          current = tray({ archived: false, name: String(body.name), version: current.version + 1 });
-          return jsonResponse(current);
-        }
-        if (url === '/api/trays/12') return jsonResponse(current);
-        return jsonResponse({ title: 'Not in this test' }, 500);
-      }),
-    );
+    const { state, writes } = serve(tray({ archived: false }));
     renderAtRoute(<TrayPage />, '/trays/:trayId', '/trays/12');
     fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Mine' } });
-    current = tray({ archived: false, name: 'Theirs', version: 4 });
+    state.current = tray({ archived: false, name: 'Theirs', version: 4 });
     fireEvent.click(screen.getByRole('button', { name: /^Save/ }));
     expect(await screen.findByText('Someone else saved this tray while you were editing')).toBeTruthy();
     expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Mine');
     fireEvent.click(screen.getByRole('button', { name: 'Keep mine and save again' }));
-    await waitFor(() => expect(puts).toHaveLength(2));
-    expect(puts.map((p) => [p.name, p.version])).toEqual([
+    await waitFor(() => expect(writes).toHaveLength(2));
+    expect(writes.map((p) => [p.name, p.version])).toEqual([
       ['Mine', 3],
       ['Mine', 4],
     ]);

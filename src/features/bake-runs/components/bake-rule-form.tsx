@@ -2,7 +2,6 @@ import { FormFooter, usePinnedRecord } from './form-footer';
 import { useForm } from 'react-hook-form';
 import { RACK_PREFERENCES, type BakeRuleDto } from '@shared/schemas/bake-setup.schema';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
-import { applyServerErrors } from '@/lib/form-errors';
 import { useSaveBakeRule } from '../api/use-bake-run-mutations';
 import type { TempUnit } from './temperature';
 import { sentAsF, shownIn, type ScaleKind } from './scale-fields';
@@ -82,9 +81,7 @@ export function BakeRuleFormCard({ rule: opened, unit, onDone }: { rule: BakeRul
         await save.mutateAsync(rule && version !== undefined ? { ...body, id: rule.id, version } : { ...body, category: v.category });
         onDone();
       } catch (e) {
-        if (pinned.caught(e)) return;
-        const rest = applyServerErrors(e, form.setError);
-        if (rest) form.setError('root', { message: rest });
+        pinned.failed(e, form.setError);
       }
     });
   const submit = submitAt();
@@ -123,16 +120,7 @@ export function BakeRuleFormCard({ rule: opened, unit, onDone }: { rule: BakeRul
       </div>
       <TextAreaField label="Doneness cue" rows={2} {...form.register('donenessCue')} error={err.donenessCue?.message} />
       <TextAreaField label="Note" rows={2} {...form.register('note')} error={err.note?.message} />
-      <FormFooter
-        saveLabel="Save rule"
-        what="bake rule"
-        theirs={pinned.theirs}
-        onReload={pinned.reload}
-        onKeep={() => pinned.theirs && void submitAt(pinned.theirs.version)()}
-        rootError={err.root?.message}
-        busy={save.isPending}
-        onCancel={onDone}
-      />
+      <FormFooter saveLabel="Save rule" what="bake rule" pinned={pinned} saveOn={(v) => void submitAt(v)()} rootError={err.root?.message} busy={save.isPending} onCancel={onDone} />
     </form>
   );
 }

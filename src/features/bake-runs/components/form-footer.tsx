@@ -2,6 +2,8 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/states';
 import { StaleEditNotice } from '@/components/ui/stale-edit-notice';
+import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
+import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/problem';
 
 /**
@@ -15,11 +17,14 @@ export function usePinnedRecord<T extends { version: number }>(record: T | null,
   return {
     base,
     theirs,
-    /** Keeps someone else's version from a refused save; false for any other error. */
-    caught: (e: unknown): boolean => {
-      if (!isApiError(e, 409) || e.problem.code !== 'stale_version' || !e.problem.current) return false;
-      setTheirs(e.problem.current as T);
-      return true;
+    /** A save's error: someone else's version kept from a refused save, any other on its fields or the whole form. */
+    failed: <F extends FieldValues>(e: unknown, setError: UseFormSetError<F>) => {
+      if (isApiError(e, 409) && e.problem.code === 'stale_version' && e.problem.current) {
+        setTheirs(e.problem.current as T);
+        return;
+      }
+      const rest = applyServerErrors(e, setError);
+      if (rest) setError('root' as Path<F>, { message: rest });
     },
     reload: () => {
       if (!theirs) return;
@@ -34,16 +39,17 @@ export function usePinnedRecord<T extends { version: number }>(record: T | null,
 export function FormFooter(props: {
   saveLabel: string;
   what: string;
-  theirs: { version: number } | null;
-  onReload: () => void;
-  onKeep: () => void;
+  pinned: { theirs: { version: number } | null; reload: () => void };
+  /** Saves the form again on `version` (theirs, knowingly). */
+  saveOn: (version: number) => void;
   rootError?: string;
   busy: boolean;
   onCancel: () => void;
 }) {
+  const theirs = props.pinned.theirs;
   return (
     <>
-      {props.theirs && <StaleEditNotice what={props.what} version={props.theirs.version} busy={props.busy} onReload={props.onReload} onKeep={props.onKeep} />}
+      {theirs && <StaleEditNotice what={props.what} version={theirs.version} busy={props.busy} onReload={props.pinned.reload} onKeep={() => props.saveOn(theirs.version)} />}
       {props.rootError && <Notice tone="block">{props.rootError}</Notice>}
       <div className="flex gap-2">
         <Button type="submit" busy={props.busy}>

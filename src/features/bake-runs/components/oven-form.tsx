@@ -2,7 +2,6 @@ import { FormFooter, usePinnedRecord } from './form-footer';
 import { useForm } from 'react-hook-form';
 import type { OvenDto } from '@shared/schemas/bake-setup.schema';
 import { TextField } from '@/components/ui/field';
-import { applyServerErrors } from '@/lib/form-errors';
 import { useSaveOven } from '../api/use-bake-run-mutations';
 import type { TempUnit } from './temperature';
 import { toCelsiusRounded } from '@shared/domain/temperature';
@@ -54,9 +53,7 @@ export function OvenFormCard({ oven: opened, unit, onDone }: { oven: OvenDto | n
         await save.mutateAsync(oven ? { ...body, id: oven.id, version } : body);
         onDone();
       } catch (e) {
-        if (pinned.caught(e)) return;
-        const rest = applyServerErrors(e, form.setError);
-        if (rest) form.setError('root', { message: rest });
+        pinned.failed(e, form.setError);
       }
     });
   const submit = submitAt();
@@ -91,16 +88,7 @@ export function OvenFormCard({ oven: opened, unit, onDone }: { oven: OvenDto | n
       <label className="flex min-h-11 items-center gap-2">
         <input type="checkbox" className="h-5 w-5" {...form.register('convection')} /> Convection (fan) oven
       </label>
-      <FormFooter
-        saveLabel="Save oven"
-        what="oven"
-        theirs={pinned.theirs}
-        onReload={pinned.reload}
-        onKeep={() => pinned.theirs && void submitAt(pinned.theirs.version)()}
-        rootError={err.root?.message}
-        busy={save.isPending}
-        onCancel={onDone}
-      />
+      <FormFooter saveLabel="Save oven" what="oven" pinned={pinned} saveOn={(v) => void submitAt(v)()} rootError={err.root?.message} busy={save.isPending} onCancel={onDone} />
     </form>
   );
 }
