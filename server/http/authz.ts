@@ -3,6 +3,7 @@ import { DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { Forbidden, NotFound, Unauthorized } from './errors.js';
 import type { Role } from '@shared/schemas/auth.schema.js';
+import type { TempScale } from '@shared/domain/temperature.js';
 
 /**
  * The one authorization layer. Every route's first handler is `allow(...)`: a role check, plus the workspace scope
@@ -18,6 +19,8 @@ export interface Actor {
    * Absent where an actor is made without it (US customary then).
    */
   unitSystem?: 'us' | 'metric';
+  /** The person's temperature scale, read with them: the papers they download put it first. Absent: °F. */
+  tempScale?: TempScale;
   role: Role;
   workspaceId: number;
   /** For a client member: their client profile id (their own plan data only). */
@@ -38,6 +41,9 @@ export const datesOf = (actor: Pick<Actor, 'dateOrder'>): DateOrder => actor.dat
 
 /** How the actor's workspace writes a time of day (24-hour unless the coach chose 12-hour). */
 export const clockOf = (actor: Pick<Actor, 'clock'>): ClockStyle => actor.clock ?? DEFAULT_CLOCK;
+
+/** The person's temperature scale (°F where an actor is made without it). */
+export const scaleOf = (actor: Pick<Actor, 'tempScale'>): TempScale => actor.tempScale ?? 'F';
 
 /** The measure system the actor's amounts are written in (US customary unless they chose metric). */
 export const measureOf = (actor: Pick<Actor, 'unitSystem'>): 'us' | 'metric' => actor.unitSystem ?? 'us';

@@ -282,7 +282,25 @@ describe('the bake run of a prep week', () => {
     await parser.destroy();
     expect(text).toContain('prep Sun, Jan 4');
     expect(text).not.toContain('prep 2026-01-04');
-    const ics = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.ics`).expect(200);
+    expect(text).toContain('Preheat to 350 °F (177 °C)');
+    // Downloaded by someone who reads °C (their own setting): °C first (350 °F = 177 °C, NIST SP 811), and the cooling
+    // columns' heads in °C (FDA Food Code §3-501.14 pairs 70 °F with 21 °C and 41 °F with 5 °C).
+    await assistant.agent.patch('/api/auth/me').send({ tempUnit: 'C' }).expect(200);
+    const inC = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.pdf`).buffer(true).expect(200);
+    const cParser = new PDFParse({ data: new Uint8Array(Buffer.from(inC.body)) });
+    const cText = (await cParser.getText()).text.replace(/\s+/g, ' ');
+    await cParser.destroy();
+    expect(cText).toContain('Preheat to 177 °C (350 °F)');
+    expect(cText).toContain('21 °C by 5 °C by');
+    const cIcs = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.ics`).expect(200);
+    expect(cIcs.text).toContain('SUMMARY:Preheat Left to 177 °C (350 °F)');
+    // The coach's own download keeps their °F.
+    const coachPdf = await coach.agent.get(`/api/weeks/${week.id}/bake-run.pdf`).buffer(true).expect(200);
+    const fParser = new PDFParse({ data: new Uint8Array(Buffer.from(coachPdf.body)) });
+    expect((await fParser.getText()).text.replace(/\s+/g, ' ')).toContain('70 °F by 41 °F by');
+    await fParser.destroy();
+    const ics = await coach.agent.get(`/api/weeks/${week.id}/bake-run.ics`).expect(200);
+    expect(ics.text).toContain('SUMMARY:Preheat Left to 350 °F (177 °C)');
     expect(ics.headers['content-type']).toMatch(/text\/calendar/);
     // RFC 5545 floating local times: preheat at 09:30 (just in time for the 09:42 start).
     expect(ics.text).toMatch(/BEGIN:VCALENDAR/);
@@ -484,7 +502,8 @@ describe('planning the rest of the day again part-way through', () => {
     const text = (await parser.getText()).text.replace(/\s+/g, ' ');
     await parser.destroy();
     expect(text).toContain('Planned again at 08:40: one tray already out is kept as planned, with their cooling deadlines; the one tray still to bake is planned from 08:40.');
-    const ics = await assistant.agent.get(`/api/weeks/${week.id}/bake-run.ics`).expect(200);
+    const ics = await coach.agent.get(`/api/weeks/${week.id}/bake-run.ics`).expect(200);
+    expect(ics.text).toContain('SUMMARY:Preheat Left to 350 °F (177 °C)');
     expect(ics.text).toMatch(/DTSTART:20260104T085200/);
     expect(ics.text).toMatch(/DTSTART:20260104T081200/);
     // Another read gives the same plan (it is stored, not kept in the process).

@@ -35,7 +35,7 @@ const PASSWORD_RESET_MINUTES = 60;
  * query as the session (session-store.ts).
  */
 export const ACTOR_SQL = (userIdExpr: string, workspaceIdExpr = 'null::int') =>
-  `select u.id as user_id, u.email, u.name, u.unit_system, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version, w.date_order, w.clock
+  `select u.id as user_id, u.email, u.name, u.unit_system, u.temp_unit, m.role, m.workspace_id, m.client_id, ns.version::text as nutrition_version, w.date_order, w.clock
      from membership m join app_user u on u.id = m.user_id join workspace w on w.id = m.workspace_id left join nutrition_stamp ns on ns.workspace_id = m.workspace_id
     where m.user_id = ${userIdExpr}
     order by coalesce(m.workspace_id = ${workspaceIdExpr}, false) desc, coalesce(m.workspace_id = u.last_workspace_id, false) desc, m.id asc
@@ -46,6 +46,7 @@ export interface ActorRow {
   email: string;
   name: string;
   unit_system: string;
+  temp_unit: string;
   role: string;
   workspace_id: number;
   client_id: number | null;
@@ -60,6 +61,7 @@ export function actorFromRow(m: ActorRow): Actor {
     email: m.email,
     name: m.name,
     unitSystem: m.unit_system === 'metric' ? 'metric' : 'us',
+    tempScale: m.temp_unit === 'C' ? 'C' : 'F',
     role: m.role as Role,
     workspaceId: Number(m.workspace_id),
     clientId: m.client_id == null ? null : Number(m.client_id),

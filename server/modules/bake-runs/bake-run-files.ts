@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { shortDate, type IsoDate } from '@shared/domain/iso-date.js';
 import type { WeekBakeRunDto } from '@shared/schemas/bake-setup.schema.js';
-import { clockOf, datesOf, type Actor } from '../../http/authz.js';
+import { clockOf, datesOf, scaleOf, type Actor } from '../../http/authz.js';
 import { Conflict } from '../../http/errors.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { renderBakeRunPdf } from '../pdf/bake-run.pdf.js';
@@ -29,5 +29,6 @@ export async function bakeRunPdf(em: EntityManager, actor: Actor, weekId: number
     replanned: dto.settings.done && { from: dto.settings.done.from, kept: dto.settings.done.out.length },
     cooling: cooling.records,
     timeZone: cooling.timeZone,
+    tempScale: scaleOf(actor),
   });
 }

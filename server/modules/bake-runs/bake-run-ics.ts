@@ -1,18 +1,17 @@
 import ical, { ICalAlarmRelatesTo, ICalAlarmType } from 'ical-generator';
 import type { BakeRunResult } from '@shared/domain/bake-run-types.js';
-import { bothScales } from '@shared/domain/temperature.js';
+import { bothScales, type TempScale } from '@shared/domain/temperature.js';
 import { floating } from '../../lib/ics.js';
 import { clockText, DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
-
-const deg = (f: number | null | undefined) => (f == null ? '' : bothScales(f));
-
 
 /**
  * The bake run as an iCalendar file (RFC 5545) made with ical-generator: floating local times (the kitchen clock,
  * no time zone), one event per preheat or set-point change, per cook's hands-on task, per tray in the oven (with
  * a reminder at the planned first check) and per food-safety cooling deadline (FDA Food Code §3-501.14).
  */
-export function bakeRunIcs(run: BakeRunResult, meta: { calendarName: string; uidPrefix: string; clock?: ClockStyle }): string {
+export function bakeRunIcs(run: BakeRunResult, meta: { calendarName: string; uidPrefix: string; clock?: ClockStyle; tempScale?: TempScale }): string {
+  // Both scales, the reader's first.
+  const deg = (f: number | null | undefined) => (f == null ? '' : bothScales(f, meta.tempScale ?? 'F'));
   const cal = ical({ name: meta.calendarName, prodId: { company: 'Trayline', product: 'bake-run', language: 'EN' } });
   const names = new Map(run.trays.map((t) => [t.id, t.name]));
   const add = (uid: string, start: string, end: string, summary: string, description = '') =>

@@ -12,7 +12,7 @@ import {
   prepDateQuery,
   weekIdParam,
 } from '@shared/schemas/bake-setup.schema.js';
-import { actorOf, allow, clockOf, datesOf } from '../../http/authz.js';
+import { actorOf, allow, clockOf, datesOf, scaleOf } from '../../http/authz.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import { shortDate } from '@shared/domain/iso-date.js';
@@ -173,7 +173,7 @@ export function bakeRunRoutes(alerts: cooling.CoolingAlerts) {
     allow('coach', 'assistant'),
     validated({ params: weekIdParam, query: prepDateQuery }, async ({ params, query }, req, res) => {
       const { dto, run } = await plannedBakeRun(emOf(req), actorOf(req), params.weekId, query.prepDate);
-      const text = bakeRunIcs(run, { calendarName: `Bake run, prep ${shortDate(dto.prepDate, datesOf(actorOf(req)))}`, uidPrefix: `week${dto.weekId}-${dto.prepDate}`, clock: clockOf(actorOf(req)) });
+      const text = bakeRunIcs(run, { calendarName: `Bake run, prep ${shortDate(dto.prepDate, datesOf(actorOf(req)))}`, uidPrefix: `week${dto.weekId}-${dto.prepDate}`, clock: clockOf(actorOf(req)), tempScale: scaleOf(actorOf(req)) });
       res.setHeader('content-type', 'text/calendar; charset=utf-8');
       res.setHeader('content-disposition', `attachment; filename="bake-run-${dto.prepDate}.ics"`);
       res.send(text);

@@ -1,6 +1,6 @@
 import type { BakeEvent, BakeRunResult } from '@shared/domain/bake-run-types.js';
 import { CAUTIONS } from '@shared/domain/eat-by.js';
-import { bothScales } from '@shared/domain/temperature.js';
+import { bothScales, inReadersScale, toCelsiusRounded, type TempScale } from '@shared/domain/temperature.js';
 import { cautionsBlock, createDoc, finishDoc, heading, paragraph, table } from './pdf-document.js';
 import { DEFAULT_DATE_ORDER, longDate, type DateOrder } from '@shared/domain/iso-date.js';
 import { replannedSummary } from '@shared/domain/bake-run-words.js';
@@ -22,17 +22,23 @@ export interface BakeRunPdfMeta {
   cooling?: readonly (RecordedCooling & { recordedBy?: string })[];
   /** The kitchen's time zone: its deadlines are real hours on the kitchen's clock (across a daylight-time change too). */
   timeZone?: string | null;
+  /** The reader's temperature scale, written first in every pair and alone in the cooling columns' heads (absent: °F). */
+  tempScale?: TempScale;
 }
 
+/** A temperature in the reader's scale alone, whole degrees ("70 °F", "21 °C"): short column heads and results. */
+const inScale = (f: number, scale: TempScale) => (scale === 'C' ? `${toCelsiusRounded(f)} °C` : `${f} °F`);
+
 /** A record's result as the paper says it; a stage still running is left to write. */
-const RESULT: Record<CoolingState, string> = {
-  'to-70': '',
-  'to-41': '',
-  cooled: 'Cooled in time',
-  'missed-70': 'Missed 70 °F: reheat or throw away',
-  'missed-41': 'Missed 41 °F: throw away',
-  discarded: 'Thrown away',
-};
+const resultSaid = (state: CoolingState, scale: TempScale): string =>
+  ({
+    'to-70': '',
+    'to-41': '',
+    cooled: 'Cooled in time',
+    'missed-70': `Missed ${inScale(FOOD_CODE_COOLING.firstStageF, scale)}: reheat or throw away`,
+    'missed-41': `Missed ${inScale(FOOD_CODE_COOLING.finalF, scale)}: throw away`,
+    discarded: 'Thrown away',
+  })[state];
 
 /** Initials of the person who wrote a record down ("Kit Moreno" → "KM"). */
 const initials = (name: string | undefined) =>
@@ -42,9 +48,9 @@ const initials = (name: string | undefined) =>
     .map((w) => w[0]!.toUpperCase())
     .join('');
 
-const deg = (f: number | null | undefined) => (f == null ? '' : bothScales(f));
+type Deg = (f: number | null | undefined) => string;
 
-function what(e: BakeEvent, trayName: (id: string | null) => string, clock: (local: string) => string): string {
+function what(e: BakeEvent, trayName: (id: string | null) => string, clock: (local: string) => string, deg: Deg): string {
   const tray = trayName(e.trayId);
   switch (e.kind) {
     case 'preheat':
@@ -79,6 +85,8 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
   const trayName = (id: string | null) => (id ? names.get(id) ?? id : '');
   const style = meta.clock ?? DEFAULT_CLOCK;
   const clock = (local: string) => clockText(local, style);
+  const scale = meta.tempScale ?? 'F';
+  const deg: Deg = (f) => (f == null ? '' : bothScales(f, scale));
   heading(doc, meta.title, 20);
   paragraph(doc, `${longDate(run.start.slice(0, 10), meta.dateOrder ?? DEFAULT_DATE_ORDER)}: start ${clock(run.start)}, last tray out ${clock(run.endAt)} (${run.sessionMinutes} minutes).`);
   if (meta.replanned) {
@@ -118,7 +126,7 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
       { header: 'Oven', width: 0.16 },
       { header: 'What', width: 0.74 },
     ],
-    run.events.map((e) => [clock(e.at), e.oven ?? '', what(e, trayName, clock)]),
+    run.events.map((e) => [clock(e.at), e.oven ?? '', what(e, trayName, clock, deg)]),
   );
 
   heading(doc, 'Trays', 14);
@@ -140,7 +148,7 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
   paragraph(
     doc,
     `Write the time each tray comes out, then the food temperature in the thickest part as it cools. ${FOOD_CODE_COOLING.source}: ` +
-      `to ${deg(70)} within 2 hours and to ${deg(41)} or below within 6 hours in total; the clock here starts when the tray comes out. ` +
+      `to ${deg(FOOD_CODE_COOLING.firstStageF)} within 2 hours and to ${deg(FOOD_CODE_COOLING.finalF)} or below within 6 hours in total; the clock here starts when the tray comes out. ` +
       'Your local food code and inspector decide what to keep and for how long.',
     { size: 9 },
   );
@@ -150,8 +158,8 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
     [
       { header: 'Tray', width: 0.2 },
       { header: 'Out', width: 0.09, align: 'right' },
-      { header: '70 °F by', width: 0.1, align: 'right' },
-      { header: '41 °F by', width: 0.1, align: 'right' },
+      { header: `${inScale(FOOD_CODE_COOLING.firstStageF, scale)} by`, width: 0.1, align: 'right' },
+      { header: `${inScale(FOOD_CODE_COOLING.finalF, scale)} by`, width: 0.1, align: 'right' },
       { header: 'Readings (time, temperature)', width: 0.27 },
       { header: 'Result', width: 0.16 },
       { header: 'Initials', width: 0.08, align: 'center' },
@@ -168,11 +176,11 @@ export async function renderBakeRunPdf(run: BakeRunResult, meta: BakeRunPdfMeta)
           .map((x) => `${clockFrom(x.at, r.outAt, style)} ${deg(x.tempF)}`.replace(/ /g, '\u00a0'))
           .join(', ');
         const restart = r.restartedAt ? `Reheated, cooling again from ${clockFrom(r.restartedAt, r.outAt, style)}. ` : '';
-        return [t.name, clock(r.outAt), clockFrom(c.by70, r.outAt, style), clockFrom(c.by41, r.outAt, style), `${restart}${readings}`, RESULT[c.state], initials(r.recordedBy)];
+        return [t.name, clock(r.outAt), clockFrom(c.by70, r.outAt, style), clockFrom(c.by41, r.outAt, style), `${restart}${readings}`, resultSaid(c.state, scale), initials(r.recordedBy)];
       }),
   );
 
-  const cooling = CAUTIONS.filter((c) => c.topic === 'food-safety').map((c) => ({ text: c.text, source: c.source }));
-  cautionsBlock(doc, [...run.cautions.map((text) => ({ text, source: 'Bake run' })), ...cooling]);
+  const cooling = CAUTIONS.filter((c) => c.topic === 'food-safety').map((c) => ({ text: inReadersScale(c.text, scale), source: c.source }));
+  cautionsBlock(doc, [...run.cautions.map((text) => ({ text: inReadersScale(text, scale), source: 'Bake run' })), ...cooling]);
   return { filename: meta.filename ?? 'bake-run.pdf', buffer: await finishDoc(doc, { businessName: meta.businessName, title: meta.title }) };
 }

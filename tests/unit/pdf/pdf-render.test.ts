@@ -195,5 +195,16 @@ describe('bake-run sheet PDF', () => {
     expect(flat).toMatch(/Radish tray 08:45 10:45 14:45 10:50 74 °F \(23 °C\) Missed 70 °F: reheat or throw away KM/);
     // Not written down yet: its planned time out, and room to write.
     expect(flat).toMatch(/Almond slab \(planned out \d\d:\d\d\)/);
+    expect(flat).toContain('70 °F by 41 °F by');
+
+    // Printed by someone who reads °C: °C first in every pair, the columns' heads and results in °C (FDA Food Code
+    // §3-501.14 pairs 70 °F with 21 °C and 41 °F with 5 °C; 350 °F = 177 °C, NIST SP 811).
+    const celsius = (await textOf((await renderBakeRunPdf(run, { businessName: 'Oat & Ember Prep', title: 'Bake run, Sun 6 Dec', cooling, tempScale: 'C' })).buffer)).text.replace(/\s+/g, ' ');
+    expect(celsius).toContain('21 °C by 5 °C by');
+    expect(celsius).toMatch(/Egg slab 08:40 10:40 14:40 10:20 20 °C \(68 °F\), 13:50 4 °C \(40 °F\) Cooled in time KM/);
+    expect(celsius).toMatch(/Radish tray 08:45 10:45 14:45 10:50 23 °C \(74 °F\) Missed 21 °C: reheat or throw away KM/);
+    expect(celsius).toContain('Preheat to 177 °C (350 °F)');
+    expect(celsius).toContain('to 21 °C (70 °F) within 2 hours and to 5 °C (41 °F) or below within 6 hours');
+    expect(celsius).not.toMatch(/\d °F \(/);
   });
 });
