@@ -85,6 +85,8 @@ describe('the cooling watch', () => {
   it('e-mails every coach and kitchen assistant once when a tray passes its 2-hour deadline with no reading at 70 °F, at the kitchen’s time', async () => {
     const { coach, assistant, tray, week } = await kitchenInChicago();
     const client = await member(app, coach, 'client', { clientId: (await makeClient(coach)).id });
+    // The assistant reads °C (their own setting): their e-mail puts °C first.
+    await assistant.agent.patch('/api/auth/me').send({ tempUnit: 'C' }).expect(200);
     // Out at 13:10; one reading, 120 °F at 13:40. The first stage's deadline is 15:10 (2 hours after).
     await assistant.agent
       .put(`/api/weeks/${week.id}/bake-run/cooling/${tray.id}-1`)
@@ -100,13 +102,21 @@ describe('the cooling watch', () => {
     // The coach and the assistant of this workspace; never a client.
     expect(sent.map((m) => m.to).sort()).toEqual([coach.email, assistant.email].sort());
     expect(sent.map((m) => m.to)).not.toContain(client.email);
-    const [first] = sent;
+    const first = sent.find((m) => m.to === coach.email)!;
     expect(first.status).toBe('queued');
     expect(first.subject).toMatch(/ missed its cooling deadline: 70 °F \(21 °C\) by 15:10$/);
     expect(first.text).toContain('had to be at 70 °F (21 °C) or below by 15:10, and no temperature written down in its cooling record shows it was. It came out at 13:10.');
     expect(first.text).toContain('Temperatures written down: 13:40 120 °F (49 °C).');
     expect(first.text).toContain('Reheat it to 165 °F (74 °C) and start cooling again, or throw it away (common practice; your local food code decides).');
     expect(first.text).toContain(`/weeks/${week.id}/bake-run#cooling-record-title`);
+    // The same words for the °C reader, each pair turned round (FDA Food Code §3-501.14 pairs 70 °F with 21 °C;
+    // 120 °F = 49 °C and 165 °F = 74 °C, NIST SP 811).
+    const inC = sent.find((m) => m.to === assistant.email)!;
+    expect(inC.subject).toMatch(/ missed its cooling deadline: 21 °C \(70 °F\) by 15:10$/);
+    expect(inC.text).toContain('had to be at 21 °C (70 °F) or below by 15:10');
+    expect(inC.text).toContain('Temperatures written down: 13:40 49 °C (120 °F).');
+    expect(inC.text).toContain('Reheat it to 74 °C (165 °F) and start cooling again');
+    expect(inC.text).not.toMatch(/\d °F \(/);
     // The next minutes' runs (and a retried job) send nothing again.
     await watch(chicago('15:12'));
     await watch(chicago('15:12'));

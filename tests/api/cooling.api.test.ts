@@ -121,6 +121,8 @@ describe('the cooling record of a prep day', () => {
   it('a tray written down as thrown away, or kept after all, is e-mailed to each coach who did not write it, once a change', async () => {
     const { assistant, coach, tray, week, base } = await twoTrayWeek();
     const second = await member(app, coach, 'coach');
+    // The second coach reads °C (their own setting).
+    await second.agent.patch('/api/auth/me').send({ tempUnit: 'C' }).expect(200);
     type Row = { to: string; subject: string; text: string; html: string };
     const mails = () =>
       sql<Row>(`select "to", subject, text, html from outbox where week_id = $1 and kind = 'cooling-record' order by id`, [week.id]);
@@ -139,12 +141,17 @@ describe('the cooling record of a prep day', () => {
       expect(m.subject).toBe(`${coach.email.split('@')[0]} kitchen: ${tray.name} (1/2) thrown away on prep day Sun, Jan 4`);
       // 75 °F = 23.9 °C, said to the whole degree (NIST SP 811: °C = (°F − 32) × 5/9).
       expect(m.text).toContain('It came out at 10:10.');
-      expect(m.text).toContain('Temperatures written down: 12:30 75 °F (24 °C).');
-      expect(m.text).toContain('It was not at 70 °F (21 °C) by 12:10, 2 hours after it came out (FDA Food Code §3-501.14).');
       expect(m.text).toContain('Note in the cooling record:\nLeft on the rack too long.');
       expect(m.text).toContain(`/weeks/${week.id}`);
       expect(m.html).toContain('Left on the rack too long.');
     }
+    const to = (email: string) => sent.find((m) => m.to === email)!;
+    expect(to(coach.email).text).toContain('Temperatures written down: 12:30 75 °F (24 °C).');
+    expect(to(coach.email).text).toContain('It was not at 70 °F (21 °C) by 12:10, 2 hours after it came out (FDA Food Code §3-501.14).');
+    // The °C reader's, each pair turned round.
+    expect(to(second.email).text).toContain('Temperatures written down: 12:30 24 °C (75 °F).');
+    expect(to(second.email).text).toContain('It was not at 21 °C (70 °F) by 12:10, 2 hours after it came out (FDA Food Code §3-501.14).');
+    expect(to(second.email).html).toContain('12:30 24 °C (75 °F)');
     // A note saved on the thrown-away record changes nothing to tell.
     await assistant.agent
       .put(path)

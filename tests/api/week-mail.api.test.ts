@@ -98,6 +98,9 @@ describe('sending a week', () => {
   it('a client with a frozen plate also gets the thaw reminders as a calendar file, and the e-mail says so', async () => {
     const coach = await coachWorkspace(app);
     const w = await publishedWeek(coach, { anaSecondDayFrozen: true });
+    // Ana has an account and reads °C: the calendar file is written for her.
+    const anaAccount = await member(app, coach, 'client', { clientId: w.ana.id });
+    await anaAccount.agent.patch('/api/auth/me').send({ tempUnit: 'C' }).expect(200);
     const res = await coach.agent.post(`/api/weeks/${w.weekId}/send`).send({ clientIds: [w.ana.id, w.ben.id] }).expect(202);
     const rows = await rowsOfBatch(res.body.batchId);
     const payload = (clientId: number) => ({ weekId: w.weekId, clientId, publicationVersion: 1, note: null });
@@ -121,6 +124,8 @@ describe('sending a week', () => {
     // Read back with ical.js (Mozilla's RFC 5545 parser): Tuesday's frozen plate thaws on Monday evening at 19:00.
     const events = new ICAL.Component(ICAL.parse(atts[1].content.toString('utf8'))).getAllSubcomponents('vevent').map((v) => new ICAL.Event(v));
     expect(events.map((e) => [e.startDate.toString(), e.summary])).toEqual([['2026-01-05T19:00:00', `Move tomorrow's ${w.plateA.name} to the fridge`]]);
+    // USDA FSIS: thaw in a refrigerator at 40 °F (4 °C) or below, °C first for her.
+    expect(events[0].description).toContain('Thaw it in the refrigerator at 4 °C (40 °F) or below');
   });
 
   it('the e-mail says how many plates hold an allergen on the client\'s list, and that the PDF says which', async () => {

@@ -175,6 +175,12 @@ describe('eat-by on the board', () => {
     expect(events.every((e) => e.summary === `Move tomorrow's ${plate.name} to the fridge`)).toBe(true);
     expect(events[0].description).toContain('For breakfast on Friday, January 9, 2026');
     expect(events.every((e) => e.component.getAllSubcomponents('valarm').length === 1)).toBe(true);
+    // USDA FSIS: thaw in a refrigerator at 40 °F (4 °C) or below; a client who reads °C gets °C first.
+    expect(events[0].description).toContain('Thaw it in the refrigerator at 40 °F (4 °C) or below');
+    await me.agent.patch('/api/auth/me').send({ tempUnit: 'C' }).expect(200);
+    const inC = await me.agent.get('/api/weeks/mine/thaw-reminders.ics?today=2026-01-05').expect(200);
+    const firstC = new ICAL.Event(new ICAL.Component(ICAL.parse(inC.text)).getAllSubcomponents('vevent')[0]);
+    expect(firstC.description).toContain('Thaw it in the refrigerator at 4 °C (40 °F) or below');
     const bad = await me.agent.get('/api/weeks/mine/thaw-reminders.ics?today=someday').expect(400);
     expect(Object.keys(bad.body.errors)).toEqual(['today']);
     const other = await member(app, coach, 'client', { clientId: (await makeClient(coach, { name: 'Nothing frozen' })).id });

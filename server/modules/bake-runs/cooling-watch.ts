@@ -10,7 +10,7 @@ import { Membership, type IMembership } from '../auth/user.entity.js';
 import type { IWorkspace } from '../workspaces/workspace.entity.js';
 import type { IWeek } from '../weeks/week.entity.js';
 import { Outbox } from '../mail/outbox.entity.js';
-import { coolingMissedMail, coolingNotWrittenMail, type MailBody } from '../mail/mail-templates.js';
+import { coolingMissedMail, coolingNotWrittenMail, forReader, type MailBody } from '../mail/mail-templates.js';
 import type { Actor } from '../../http/authz.js';
 import { getWeekBakeRun } from './bake-run.service.js';
 import { presentCooling } from './cooling.service.js';
@@ -174,7 +174,8 @@ async function mailKitchen(
   let queued = 0;
   for (const { user, key } of people) {
     if (sent.has(key)) continue;
-    const body = write(user.name);
+    // Each person reads the temperatures in their own scale first.
+    const body = forReader(write(user.name), user.tempUnit === 'C' ? 'C' : 'F');
     await queueMail(em, deps.mail, { workspaceId: ws.id, kind: 'cooling-missed', to: user.email, subject: body.subject, text: body.text, html: body.html, weekId, idempotencyKey: key });
     queued += 1;
   }

@@ -12,7 +12,7 @@ import { Tray } from '../trays/tray.entity.js';
 import { CoolingRecord, type ICoolingRecord } from './bake-run.entity.js';
 import { Membership } from '../auth/user.entity.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
-import { trayKeptMail, trayThrownAwayMail } from '../mail/mail-templates.js';
+import { forReader, trayKeptMail, trayThrownAwayMail } from '../mail/mail-templates.js';
 import { appLink, mailKey, queueMail, type MailQueue } from '../mail/mail.service.js';
 
 /** Where a thrown-away tray is told: the mail queue and the app's address for the link. */
@@ -161,7 +161,7 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
   const paper = checkOnPaper({ ...presentCooling(r), discarded: false }, ws.timeZone ?? null);
   const readings = readingsSaid(r.readings, r.outAt, style);
   for (const coach of to) {
-    const body = r.discarded
+    const written = r.discarded
       ? trayThrownAwayMail({
           ...said,
           name: coach.name,
@@ -173,6 +173,8 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
           note: r.note || null,
         })
       : trayKeptMail({ ...said, name: coach.name });
+    // In the coach's own scale first.
+    const body = forReader(written, coach.tempUnit === 'C' ? 'C' : 'F');
     await queueMail(em, alerts.mail, {
       workspaceId: actor.workspaceId,
       kind: 'cooling-record',

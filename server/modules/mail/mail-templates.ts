@@ -1,8 +1,18 @@
+import { inReadersScale, type TempScale } from '@shared/domain/temperature.js';
+
 /** E-mail bodies (plain text first, simple HTML second). Every value is escaped in the HTML part. */
 export interface MailBody {
   subject: string;
   text: string;
   html: string;
+}
+
+/**
+ * A body written with "N °F (M °C)" pairs, for a reader of `scale`: each pair °C first for a °C reader (subject,
+ * text and HTML alike); other text as it is.
+ */
+export function forReader(body: MailBody, scale: TempScale): MailBody {
+  return { subject: inReadersScale(body.subject, scale), text: inReadersScale(body.text, scale), html: inReadersScale(body.html, scale) };
 }
 
 export function escapeHtml(s: string): string {

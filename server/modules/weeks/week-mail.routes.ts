@@ -6,7 +6,7 @@ import {
   weekClientPlanParams,
   weekSendParams,
 } from '@shared/schemas/week-mail.schema.js';
-import { actorOf, allow, datesOf } from '../../http/authz.js';
+import { actorOf, allow, datesOf, scaleOf } from '../../http/authz.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import type { MailQueue } from '../mail/mail.service.js';
@@ -42,7 +42,7 @@ export function weekMailRoutes(deps: { mail: MailQueue; publicUrl: string }) {
     validated({ query: todayQuery }, async ({ query }, req, res) => {
       const week = await myWeek(emOf(req), actorOf(req), query.today);
       if (!week) throw new NotFound('Published week');
-      sendAttachment(res, thawRemindersFile(week, week.days, datesOf(actorOf(req))));
+      sendAttachment(res, thawRemindersFile(week, week.days, datesOf(actorOf(req)), scaleOf(actorOf(req))));
     }),
   );
 

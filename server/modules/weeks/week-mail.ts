@@ -1,3 +1,4 @@
+import type { TempScale } from '@shared/domain/temperature.js';
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { amountAndName, type MeasureSystem } from '@shared/domain/units.js';
@@ -134,10 +135,15 @@ export async function renderPublishedPlan(em: EntityManager, p: WeekPlanPayload,
 }
 
 /** A client's thaw reminders for a published week, as a calendar file (the download and the plan e-mail's). */
-export function thawRemindersFile(week: { weekId: number; name: string; startDate: string }, days: readonly MyDayDto[], order: DateOrder): RenderedAttachment {
+export function thawRemindersFile(
+  week: { weekId: number; name: string; startDate: string },
+  days: readonly MyDayDto[],
+  order: DateOrder,
+  tempScale: TempScale = 'F',
+): RenderedAttachment {
   return {
     filename: `thaw-reminders-${week.startDate}.ics`,
-    buffer: Buffer.from(thawRemindersIcs(thawTasks(days), { calendarName: `Thaw reminders, ${week.name}`, uidPrefix: `week${week.weekId}-thaw`, dateOrder: order })),
+    buffer: Buffer.from(thawRemindersIcs(thawTasks(days), { calendarName: `Thaw reminders, ${week.name}`, uidPrefix: `week${week.weekId}-thaw`, dateOrder: order, tempScale })),
     contentType: 'text/calendar; charset=utf-8',
   };
 }
@@ -148,7 +154,10 @@ export async function renderThawReminders(em: EntityManager, p: WeekPlanPayload)
   if (!pub) throw new NotFound('Published week');
   const days = pub.snapshot.clients[String(p.clientId)]?.days ?? [];
   const order = toDateOrder(pub.workspace.$.dateOrder);
-  return thawRemindersFile({ weekId: p.weekId, name: snapshotTitle(pub.snapshot, order), startDate: pub.snapshot.startDate }, days, order);
+  // In the client's own scale when they have an account, as their plan PDF.
+  const account = await em.findOne(Membership, { clientId: p.clientId, workspace: pub.workspace.id, role: 'client' }, { populate: ['user'] });
+  const scale = account?.user.$.tempUnit === 'C' ? 'C' : 'F';
+  return thawRemindersFile({ weekId: p.weekId, name: snapshotTitle(pub.snapshot, order), startDate: pub.snapshot.startDate }, days, order, scale);
 }
 
 function payloadOf(raw: Record<string, unknown>): WeekPlanPayload {
