@@ -37,8 +37,9 @@ export function useEditBase<T extends Versioned, V>(current: T): EditBase<T, V> 
   const [sendVersion, setSendVersion] = useState(current.version);
   const [dirty, setDirty] = useState(false);
   const [held, setHeld] = useState<{ values: V; current: T } | null>(null);
-  // A form with nothing typed shows the newest version (adjusted while rendering: no flash of the old one).
-  if (!dirty && !held && current.version !== base.version) {
+  // A form with nothing typed shows the newest version (adjusted while rendering: no flash of the old one); never an
+  // older one (a refetch still under way after "Reload their version").
+  if (!dirty && !held && current.version > base.version) {
     setBase(current);
     setSendVersion(current.version);
   }

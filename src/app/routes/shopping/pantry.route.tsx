@@ -23,7 +23,7 @@ export function Component() {
         {(d) => (
           <ul className="flex flex-col gap-2" aria-label="On hand">
             {d.items.map((item) => (
-              <PantryRow key={`${item.id}-${item.version}`} item={item} unitSystem={unitSystem} />
+              <PantryRow key={item.id} item={item} unitSystem={unitSystem} />
             ))}
           </ul>
         )}

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { PantryCreateValues, PantryItemDto, PantryUpdateValues } from '@shared/schemas/shopping.schema';
 import { api } from '@/lib/api-client';
+import { isApiError } from '@/lib/problem';
 import { pantryKeys, shoppingKeys } from './shopping.keys';
 
 function useRefresh() {
@@ -24,6 +25,8 @@ export function useUpdatePantryItem() {
     mutationFn: ({ id, ...v }: PantryUpdateValues & { id: number }) => api.patch<PantryItemDto>(`/pantry/${id}`, v),
     meta: { form: true },
     onSuccess: refresh,
+    // Refused because someone else changed it meanwhile: the list shows theirs (the row keeps what was typed).
+    onError: (e) => (isApiError(e, 409) ? refresh() : undefined),
   });
 }
 

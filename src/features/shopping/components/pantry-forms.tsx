@@ -12,6 +12,7 @@ import {
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
+import { StaleEditNotice } from '@/components/ui/stale-edit-notice';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { GRAMS_PER_UNIT, unitSymbol } from '@shared/domain/units';
@@ -111,23 +112,41 @@ export function startingAmount(item: Pick<PantryItemDto, 'amount' | 'unit'>, sys
   return { amount: String(Math.round(item.amount * 100) / 100), unit: item.unit };
 }
 
-/** One pantry row: change the amount (in any unit the ingredient knows) or remove it. */
+/**
+ * One pantry row: change the amount (in any unit the ingredient knows) or remove it. The amount typed stays on the
+ * version it started from: a refreshed list under it changes nothing typed (with nothing typed, the row shows the
+ * newest), and a save over someone else's change is refused and asks.
+ */
 export function PantryRow({ item, unitSystem }: { item: PantryItemDto; unitSystem: 'us' | 'metric' }) {
   const update = useUpdatePantryItem();
   const remove = useDeletePantryItem();
-  const [start] = useState(() => startingAmount(item, unitSystem));
-  const [amount, setAmount] = useState(start.amount);
-  const [unit, setUnit] = useState(start.unit);
+  const [base, setBase] = useState(item);
+  const [amount, setAmount] = useState(() => startingAmount(item, unitSystem).amount);
+  const [unit, setUnit] = useState(() => startingAmount(item, unitSystem).unit);
+  const [theirs, setTheirs] = useState<PantryItemDto | null>(null);
   const [error, setError] = useState<string | null>(null);
+  const show = (row: PantryItemDto) => {
+    const start = startingAmount(row, unitSystem);
+    setBase(row);
+    setAmount(start.amount);
+    setUnit(start.unit);
+    setTheirs(null);
+  };
+  const shown = startingAmount(base, unitSystem);
+  const typed = amount !== shown.amount || unit !== shown.unit;
+  // Nothing typed: the row follows the newest version (adjusted while rendering).
+  if (!typed && !theirs && item.version > base.version) show(item);
   const units = [...new Set([item.unit, ...MASS])];
-  const save = () => {
+  const save = (version = base.version) => {
     setError(null);
     update.mutate(
-      { id: item.id, amount, unit, version: item.version },
+      { id: item.id, amount, unit, version },
       {
+        onSuccess: show,
         onError: (e) => {
           markShown(e);
-          setError(isApiError(e, 409) ? 'Someone changed this since you opened it: the current amount is shown.' : errorMessage(e));
+          if (isApiError(e, 409) && e.problem.code === 'stale_version' && e.problem.current) setTheirs(e.problem.current as PantryItemDto);
+          else setError(errorMessage(e));
         },
       },
     );
@@ -147,13 +166,16 @@ export function PantryRow({ item, unitSystem }: { item: PantryItemDto; unitSyste
             </option>
           ))}
         </SelectField>
-        <Button variant="secondary" busy={update.isPending} onClick={save}>
+        <Button variant="secondary" busy={update.isPending} onClick={() => save()}>
           Save
         </Button>
         <Button variant="ghost" busy={remove.isPending} onClick={() => remove.mutate(item.id)}>
           Remove <span className="sr-only">{item.ingredientName}</span>
         </Button>
       </div>
+      {theirs && (
+        <StaleEditNotice what={`amount (now ${theirs.display})`} version={theirs.version} busy={update.isPending} onReload={() => show(theirs)} onKeep={() => save(theirs.version)} />
+      )}
       {error && <Notice tone="warn">{error}</Notice>}
     </li>
   );
