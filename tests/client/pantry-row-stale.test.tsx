@@ -1,9 +1,15 @@
 import { useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import type { PantryItemDto } from '@shared/schemas/shopping.schema';
 import { PantryRow } from '@/features/shopping/components/pantry-forms';
+import { pantryQuery } from '@/features/shopping/api/shopping.queries';
+import { toast } from 'sonner';
+import { createQueryClient } from '@/lib/query-client';
 import { jsonResponse, renderInApp, stubVersionedRecord } from './render';
+
+vi.mock('sonner', () => ({ toast: { error: vi.fn(), success: vi.fn() } }));
 
 // An invented pantry row: 900 g of almond flour (kept in grams; a US reader types ounces).
 const row = (o: Partial<PantryItemDto> = {}): PantryItemDto => ({
@@ -13,6 +19,8 @@ const row = (o: Partial<PantryItemDto> = {}): PantryItemDto => ({
 /** The row as the pantry page lists it; "Refetch" plays the list coming back with someone else's change. */
 function Listed({ newer }: { newer: PantryItemDto }) {
   const [item, setItem] = useState(row());
+  // The page's pantry list is on screen: a refused save refreshes it (a network round trip).
+  useQuery(pantryQuery());
   return (
     <>
       <button type="button" onClick={() => setItem(newer)}>
@@ -32,8 +40,10 @@ afterEach(() => vi.unstubAllGlobals());
 describe('a pantry amount changed by someone else meanwhile', () => {
   const theirs = row({ amount: 400, display: '400 g', version: 3 });
   const serve = () => {
-    const served = stubVersionedRecord('/api/pantry', row(), (_current, body) => row({ amount: Number(body.amount), display: `${String(body.amount)} g` }), (url) =>
-      url.startsWith('/api/pantry') || url.startsWith('/api/shopping') ? jsonResponse({ items: [] }) : undefined,
+    const served = stubVersionedRecord('/api/pantry/5', row(), (_current, body) => row({ amount: Number(body.amount), display: `${String(body.amount)} g` }), (url) =>
+      url.startsWith('/api/pantry') || url.startsWith('/api/shopping')
+        ? new Promise<Response>((resolve) => setTimeout(() => resolve(jsonResponse({ items: [] })), 30))
+        : undefined,
     );
     served.state.current = theirs;
     return served;
@@ -41,13 +51,16 @@ describe('a pantry amount changed by someone else meanwhile', () => {
 
   it('keeps the amount typed, refuses the save from the version it started on, and saves it over theirs only when asked', async () => {
     const { writes } = serve();
-    renderInApp(<Listed newer={theirs} />);
+    // The app's own query client: a failure the row shows is not repeated in a toast.
+    renderInApp(<Listed newer={theirs} />, createQueryClient());
     fireEvent.change(amount(), { target: { value: '650' } });
     fireEvent.click(screen.getByRole('button', { name: 'Refetch' }));
     expect(amount().value).toBe('650');
     fireEvent.click(screen.getByRole('button', { name: 'Save' }));
     expect(await screen.findByText('Someone else saved this amount (now 400 g) while you were editing')).toBeTruthy();
     expect(amount().value).toBe('650');
+    await new Promise((resolve) => setTimeout(resolve, 50));
+    expect(toast.error).not.toHaveBeenCalled();
     fireEvent.click(screen.getByRole('button', { name: 'Keep mine and save again' }));
     await waitFor(() => expect(writes).toHaveLength(2));
     expect(writes.map((w) => [w.amount, w.version])).toEqual([

@@ -24,7 +24,7 @@ export function stubVersionedRecord<T extends { version: number }>(
   url: string,
   start: T,
   write: (current: T, body: Record<string, unknown>) => Omit<T, 'version'>,
-  other: (url: string) => Response | undefined = () => undefined,
+  other: (url: string) => Response | Promise<Response> | undefined = () => undefined,
 ) {
   const state = { current: start };
   const writes: Record<string, unknown>[] = [];
@@ -39,7 +39,7 @@ export function stubVersionedRecord<T extends { version: number }>(
         return jsonResponse(state.current);
       }
       if (at === url) return jsonResponse(state.current);
-      return other(at) ?? jsonResponse({ title: 'Not in this test' }, 500);
+      return (await other(at)) ?? jsonResponse({ title: 'Not in this test' }, 500);
     }),
   );
   return { state, writes };

@@ -56,8 +56,11 @@ export function useSaveBakeRule() {
       id ? api.put<BakeRuleDto>(`/bake-rules/${id}`, body) : api.post<BakeRuleDto>('/bake-rules', body),
     meta: { form: true, silent: true },
     onSuccess: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.all }),
-    // Refused because someone else saved meanwhile: the page behind the open form shows theirs.
-    onError: (e) => (isApiError(e, 409) ? qc.invalidateQueries({ queryKey: bakeRunsKeys.all }) : undefined),
+    // Refused because someone else saved meanwhile: the page behind the open form shows theirs (not awaited: the
+    // form's notice comes at once).
+    onError: (e) => {
+      if (isApiError(e, 409)) void qc.invalidateQueries({ queryKey: bakeRunsKeys.all });
+    },
   });
 }
 
@@ -76,8 +79,11 @@ export function useSaveOven() {
       id ? api.put<OvenDto>(`/ovens/${id}`, body) : api.post<OvenDto>('/ovens', body),
     meta: { form: true, silent: true },
     onSuccess: () => qc.invalidateQueries({ queryKey: bakeRunsKeys.all }),
-    // Refused because someone else saved meanwhile: the page behind the open form shows theirs.
-    onError: (e) => (isApiError(e, 409) ? qc.invalidateQueries({ queryKey: bakeRunsKeys.all }) : undefined),
+    // Refused because someone else saved meanwhile: the page behind the open form shows theirs (not awaited: the
+    // form's notice comes at once).
+    onError: (e) => {
+      if (isApiError(e, 409)) void qc.invalidateQueries({ queryKey: bakeRunsKeys.all });
+    },
   });
 }
 

@@ -25,8 +25,11 @@ export function useUpdatePantryItem() {
     mutationFn: ({ id, ...v }: PantryUpdateValues & { id: number }) => api.patch<PantryItemDto>(`/pantry/${id}`, v),
     meta: { form: true },
     onSuccess: refresh,
-    // Refused because someone else changed it meanwhile: the list shows theirs (the row keeps what was typed).
-    onError: (e) => (isApiError(e, 409) ? refresh() : undefined),
+    // Refused because someone else changed it meanwhile: the list shows theirs (the row keeps what was typed). Not
+    // awaited: the row's own onError must run in this task, or the global toast repeats what the row says.
+    onError: (e) => {
+      if (isApiError(e, 409)) void refresh();
+    },
   });
 }
 
