@@ -47,6 +47,9 @@ export function toFahrenheitRounded(tempC: Decimal.Value, decimals = 0): number 
 /** Which scale a person reads first (their preference: `tempUnit` on the signed-in person). */
 export type TempScale = 'F' | 'C';
 
+/** A person's stored temperature setting as a scale: 'C' is °C, anything else °F (the default). */
+export const toTempScale = (stored: string | null | undefined): TempScale => (stored === 'C' ? 'C' : 'F');
+
 /**
  * A temperature given in °F, written in both scales with the reader's first: "165 °F (74 °C)" or "74 °C (165 °F)".
  * °C rounded to whole degrees (the published pairs: 165 °F / 74 °C, 41 °F / 5 °C, 0 °F / −18 °C).

@@ -23,6 +23,7 @@ import { hashToken, newToken } from './tokens.js';
 import { appLink, queueMail, RESET_QUEUE, type MailQueue, type ResetJobData } from '../mail/mail.service.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { invitationMail, passwordResetMail } from '../mail/mail-templates.js';
+import { toTempScale } from '@shared/domain/temperature.js';
 
 const INVITATION_DAYS = 14;
 const PASSWORD_RESET_MINUTES = 60;
@@ -61,7 +62,7 @@ export function actorFromRow(m: ActorRow): Actor {
     email: m.email,
     name: m.name,
     unitSystem: m.unit_system === 'metric' ? 'metric' : 'us',
-    tempScale: m.temp_unit === 'C' ? 'C' : 'F',
+    tempScale: toTempScale(m.temp_unit),
     role: m.role as Role,
     workspaceId: Number(m.workspace_id),
     clientId: m.client_id == null ? null : Number(m.client_id),

@@ -15,6 +15,7 @@ import type { Actor } from '../../http/authz.js';
 import { getWeekBakeRun } from './bake-run.service.js';
 import { presentCooling } from './cooling.service.js';
 import { appLink, mailKey, queueMail, type MailQueue } from '../mail/mail.service.js';
+import { toTempScale } from '@shared/domain/temperature.js';
 
 /**
  * The cooling watch: once a minute (a pg-boss schedule, server/modules/mail/mail-runtime.ts) the server reads its
@@ -175,7 +176,7 @@ async function mailKitchen(
   for (const { user, key } of people) {
     if (sent.has(key)) continue;
     // Each person reads the temperatures in their own scale first.
-    const body = forReader(write(user.name), user.tempUnit === 'C' ? 'C' : 'F');
+    const body = forReader(write(user.name), toTempScale(user.tempUnit));
     await queueMail(em, deps.mail, { workspaceId: ws.id, kind: 'cooling-missed', to: user.email, subject: body.subject, text: body.text, html: body.html, weekId, idempotencyKey: key });
     queued += 1;
   }

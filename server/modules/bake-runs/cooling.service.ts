@@ -14,6 +14,7 @@ import { Membership } from '../auth/user.entity.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { forReader, trayKeptMail, trayThrownAwayMail } from '../mail/mail-templates.js';
 import { appLink, mailKey, queueMail, type MailQueue } from '../mail/mail.service.js';
+import { toTempScale } from '@shared/domain/temperature.js';
 
 /** Where a thrown-away tray is told: the mail queue and the app's address for the link. */
 export interface CoolingAlerts {
@@ -174,7 +175,7 @@ async function tellCoaches(em: EntityManager, actor: Actor, week: IWeek, r: ICoo
         })
       : trayKeptMail({ ...said, name: coach.name });
     // In the coach's own scale first.
-    const body = forReader(written, coach.tempUnit === 'C' ? 'C' : 'F');
+    const body = forReader(written, toTempScale(coach.tempUnit));
     await queueMail(em, alerts.mail, {
       workspaceId: actor.workspaceId,
       kind: 'cooling-record',

@@ -1,4 +1,4 @@
-import type { TempScale } from '@shared/domain/temperature.js';
+import { toTempScale, type TempScale } from '@shared/domain/temperature.js';
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { amountAndName, type MeasureSystem } from '@shared/domain/units.js';
@@ -108,9 +108,9 @@ export async function publishedPlan(em: EntityManager, p: WeekPlanPayload, works
   const slots = await mealSlotsOf(em, wsId);
   const t = plannedTargets(client, slots);
   // The client's own measure preference when they have an account (the plan is theirs to read); else as typed.
-  const account = await em.findOne(Membership, { clientId: client.id, workspace: wsId, role: 'client' }, { populate: ['user'] });
-  const system = account ? (account.user.$.unitSystem === 'metric' ? 'metric' : 'us') : undefined;
-  const tempScale = account?.user.$.tempUnit === 'C' ? 'C' : 'F';
+  const account = await clientAccountOf(em, client.id, wsId);
+  const system = account ? (account.unitSystem === 'metric' ? 'metric' : 'us') : undefined;
+  const tempScale = toTempScale(account?.tempUnit);
   return {
     client,
     weekName: snapshotTitle(pub.snapshot, toDateOrder(ws.dateOrder)),
@@ -134,6 +134,12 @@ export async function renderPublishedPlan(em: EntityManager, p: WeekPlanPayload,
   return renderWeekPlanPdf((await publishedPlan(em, p, workspaceId)).data);
 }
 
+/** The account a client signs in with, if any: the plan and its calendar file follow its measure and scale. */
+async function clientAccountOf(em: EntityManager, clientId: number, workspaceId: number) {
+  const m = await em.findOne(Membership, { clientId, workspace: workspaceId, role: 'client' }, { populate: ['user'] });
+  return m?.user.$ ?? null;
+}
+
 /** A client's thaw reminders for a published week, as a calendar file (the download and the plan e-mail's). */
 export function thawRemindersFile(
   week: { weekId: number; name: string; startDate: string },
@@ -155,8 +161,7 @@ export async function renderThawReminders(em: EntityManager, p: WeekPlanPayload)
   const days = pub.snapshot.clients[String(p.clientId)]?.days ?? [];
   const order = toDateOrder(pub.workspace.$.dateOrder);
   // In the client's own scale when they have an account, as their plan PDF.
-  const account = await em.findOne(Membership, { clientId: p.clientId, workspace: pub.workspace.id, role: 'client' }, { populate: ['user'] });
-  const scale = account?.user.$.tempUnit === 'C' ? 'C' : 'F';
+  const scale = toTempScale((await clientAccountOf(em, p.clientId, pub.workspace.id))?.tempUnit);
   return thawRemindersFile({ weekId: p.weekId, name: snapshotTitle(pub.snapshot, order), startDate: pub.snapshot.startDate }, days, order, scale);
 }
 
