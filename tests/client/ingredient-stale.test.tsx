@@ -117,4 +117,30 @@ describe('two people editing one ingredient', () => {
     await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Pesto (theirs)'));
     expect(screen.queryByText(/Someone else saved/)).toBeNull();
   });
+
+  it('opens a copy made from this page with the copy’s own values and version', async () => {
+    const copy = own({ id: 502, slug: 'ws-1-house-pesto-copy', name: 'House pesto (copy)', version: 1 });
+    const puts: [string, Record<string, unknown>][] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (at: string, init?: RequestInit) => {
+        if (at === '/api/ingredients/501/copy') return jsonResponse(copy, 201);
+        if (init?.method === 'PUT' || init?.method === 'PATCH') {
+          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
+          puts.push([at, body]);
+          return at === '/api/ingredients/502' && body.version === 1 ? jsonResponse({ ...copy, name: body.name, version: 2 }) : staleResponse(copy);
+        }
+        return jsonResponse(at === '/api/ingredients/502' ? copy : own());
+      }),
+    );
+    renderAtRoute(<IngredientPage />, '/ingredients/:ingredientId', '/ingredients/501');
+    await screen.findByLabelText('Name');
+    fireEvent.click(screen.getByRole('button', { name: 'Copy to my library' }));
+    // Before, the form kept the original's values (and version 2) under the copy's heading, and its Save was refused.
+    await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('House pesto (copy)'));
+    fireEvent.change(screen.getByLabelText('Name'), { target: { value: 'Pesto, basil-free' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    await screen.findByRole('heading', { name: 'Pesto, basil-free' });
+    expect(puts.map(([at, p]) => [at, p.name, p.version])).toEqual([['/api/ingredients/502', 'Pesto, basil-free', 1]]);
+  });
 });

@@ -124,7 +124,8 @@ export function Component() {
         )}
       </PageHeader>
       {i.editable ? (
-        <EditOwn ingredient={i} />
+        // Keyed by the ingredient: "Copy to my library" opens the copy on the same route, with an edit state of its own.
+        <EditOwn key={i.id} ingredient={i} />
       ) : (
         <>
           {i.shared && me.role === 'coach' && (
