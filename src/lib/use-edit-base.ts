@@ -22,8 +22,13 @@ export interface EditBase<T extends Versioned, V> {
   refused: (values: V, current: T) => void;
   /** Drop what was typed and show the newest version. */
   reload: () => void;
-  /** This person changed the record outside the form (archived it…): typing that started on `before` carries over. */
-  carried: (before: number, after: T) => void;
+  /**
+   * This person is changing the record outside the form (archiving it…) from version `before`: until `carried`, the
+   * newer version it makes is theirs, not someone else's (no notice while the page refreshes after it).
+   */
+  carrying: (before: number) => void;
+  /** That change is done (`after`: the record it saved; null when it failed): typing that started on `before` carries over. */
+  carried: (before: number, after: T | null) => void;
 }
 
 /**
@@ -37,6 +42,7 @@ export function useEditBase<T extends Versioned, V>(current: T): EditBase<T, V> 
   const [sendVersion, setSendVersion] = useState(current.version);
   const [dirty, setDirty] = useState(false);
   const [held, setHeld] = useState<{ values: V; current: T } | null>(null);
+  const [own, setOwn] = useState<number | null>(null);
   // A form with nothing typed shows the newest version (adjusted while rendering: no flash of the old one); never an
   // older one (a refetch still under way after "Reload their version").
   if (!dirty && !held && current.version > base.version) {
@@ -53,13 +59,15 @@ export function useEditBase<T extends Versioned, V>(current: T): EditBase<T, V> 
     base,
     sendVersion,
     held,
-    newerElsewhere: dirty && !held && current.version > sendVersion ? current : null,
+    newerElsewhere: dirty && !held && own !== sendVersion && current.version > sendVersion ? current : null,
     onDirtyChange: setDirty,
     saved: show,
     refused: (values, theirs) => setHeld({ values, current: theirs }),
     reload: () => show(held && held.current.version > current.version ? held.current : current),
+    carrying: setOwn,
     carried: (before, after) => {
-      if (sendVersion === before) setSendVersion(after.version);
+      if (after && sendVersion === before) setSendVersion(after.version);
+      setOwn(null);
     },
   };
 }

@@ -208,6 +208,38 @@ describe('two people editing one profile', () => {
   });
 });
 
+describe('the coach’s own archive, while the page is still refreshing after it', () => {
+  it('never says someone else saved the profile, not even for a moment', async () => {
+    vi.stubGlobal('confirm', vi.fn(() => true));
+    // The page's side cards answer slowly after the archive, as over a real network.
+    let release = () => {};
+    let archived = false;
+    const slow = new Promise<void>((r) => (release = r));
+    stubVersionedRecord(
+      '/api/clients/7',
+      profile(),
+      (current, body) => {
+        archived = true;
+        return { ...current, archivedAt: body.archived ? '2026-12-02T10:00:00.000Z' : null };
+      },
+      async (url) => {
+        if (archived) await slow;
+        return url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : url.includes('/published-allergens') ? jsonResponse([]) : undefined;
+      },
+    );
+    renderProfile();
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Archive' }));
+    // The profile already shows version 4 (archived) while the side cards reload.
+    await screen.findByRole('button', { name: 'Restore' });
+    expect(screen.queryByText(/Someone else saved/)).toBeNull();
+    release();
+    await waitFor(() => expect(screen.queryByText(/Archived on/)).toBeTruthy());
+    expect(screen.queryByText(/Someone else saved/)).toBeNull();
+    expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Mine');
+  });
+});
+
 describe('a newer version arriving while the profile is open (a refetch on focus, another tab)', () => {
   it('shows it at once in a form with nothing typed', async () => {
     const { state } = serveProfile();

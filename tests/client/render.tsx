@@ -24,7 +24,7 @@ export function stubVersionedRecord<T extends { version: number }>(
   url: string,
   start: T,
   write: (current: T, body: Record<string, unknown>) => Omit<T, 'version'>,
-  other: (url: string) => Response | Promise<Response> | undefined = () => undefined,
+  other: (url: string) => Response | undefined | Promise<Response | undefined> = () => undefined,
 ) {
   const state = { current: start };
   const writes: Record<string, unknown>[] = [];

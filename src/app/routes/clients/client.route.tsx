@@ -93,7 +93,8 @@ export function Component() {
   const q = useQuery(clientQuery(id));
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
-  return <ClientProfile client={q.data as ClientDto} refetch={() => void q.refetch()} />;
+  // Keyed by the client: another client's profile on the same route starts an edit state of its own.
+  return <ClientProfile key={id} client={q.data as ClientDto} refetch={() => void q.refetch()} />;
 }
 
 function ClientProfile({ client, refetch }: { client: ClientDto; refetch: () => void }) {
@@ -137,10 +138,11 @@ function ClientProfile({ client, refetch }: { client: ClientDto; refetch: () => 
     setArchiveError(null);
     setStale(false);
     const before = client.version;
+    edit.carrying(before);
     update.mutate(
       { archived, version: before },
       {
-        onSuccess: (after) => edit.carried(before, after),
+        onSettled: (after) => edit.carried(before, after ?? null),
         onError: (e) => {
           markShown(e);
           if (isApiError(e, 409)) onStale();

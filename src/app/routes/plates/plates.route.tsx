@@ -10,7 +10,8 @@ import { PlateMacros } from '@/features/assemblies/components/plate-macros';
 import { Button, EditDeleteButtons } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
-import { StaleEditNotice } from '@/components/ui/stale-edit-notice';
+import { NewerVersionNotice, StaleEditNotice } from '@/components/ui/stale-edit-notice';
+import { useEditBase } from '@/lib/use-edit-base';
 import { applyServerErrors } from '@/lib/form-errors';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { useMe } from '@/features/auth/hooks/use-me';
@@ -19,12 +20,9 @@ import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
 import { filterByText } from '@/lib/words';
 import { allergenLabel } from '@shared/domain/allergens';
 
-function Editor({ plate, onDone }: { plate: AssemblyDto | null; onDone: () => void }) {
-  // The plate the form started from; someone else's save meanwhile leaves it (and what was typed) until the coach
-  // reloads their version or saves this over it.
-  const [base, setBase] = useState(plate);
-  const [held, setHeld] = useState<{ values: AssemblyValues; current: AssemblyDto } | null>(null);
-  const save = useSaveAssembly(base?.id ?? null);
+/** Saves a plate from the editor: field errors land on the form, a stale save (409 with theirs) goes to `onStale`. */
+function usePlateSave(id: number | null, onDone: () => void, onStale?: (values: AssemblyValues, current: AssemblyDto) => void) {
+  const save = useSaveAssembly(id);
   const [formError, setFormError] = useState<string | null>(null);
   const send = (values: AssemblyValues, version: number | undefined, setError?: UseFormSetError<AssemblyInput>) => {
     setFormError(null);
@@ -32,39 +30,72 @@ function Editor({ plate, onDone }: { plate: AssemblyDto | null; onDone: () => vo
       onSuccess: onDone,
       onError: (e) => {
         markShown(e);
-        if (isApiError(e, 409) && e.problem.code === 'stale_version' && e.problem.current) {
-          setHeld({ values, current: e.problem.current as AssemblyDto });
+        if (onStale && isApiError(e, 409) && e.problem.code === 'stale_version' && e.problem.current) {
+          onStale(values, e.problem.current as AssemblyDto);
           return;
         }
         setFormError(isApiError(e, 409) ? errorMessage(e) : setError ? applyServerErrors(e, setError) : errorMessage(e));
       },
     });
   };
+  return { send, formError, busy: save.isPending };
+}
+
+function NewPlate({ onDone }: { onDone: () => void }) {
+  const { send, formError, busy } = usePlateSave(null, onDone);
   return (
     <Card>
-      <h2 className="mb-3 text-xl">{base ? `Edit ${base.name}` : 'New plate'}</h2>
-      {held && (
+      <h2 className="mb-3 text-xl">New plate</h2>
+      <AssemblyForm initial={emptyAssembly} busy={busy} formError={formError} onSubmit={(values, setError) => send(values, undefined, setError)} />
+    </Card>
+  );
+}
+
+/** This coach's own archive or restore of a plate (from its card): typing in its editor carries over. */
+export interface OwnPlateChange {
+  id: number;
+  before: number;
+  /** The plate saved; null when the change failed; undefined while it is under way. */
+  after?: AssemblyDto | null;
+}
+
+function EditPlate({ plate, own, onDone }: { plate: AssemblyDto; own: OwnPlateChange | null; onDone: () => void }) {
+  // The version the form's typing started from: follows the newest while nothing is typed; someone else's save
+  // meanwhile leaves it (and what was typed) until the coach reloads theirs or saves this over it.
+  const edit = useEditBase<AssemblyDto, AssemblyValues>(plate);
+  const { send, formError, busy } = usePlateSave(plate.id, onDone, edit.refused);
+  const [seen, setSeen] = useState<OwnPlateChange | null>(null);
+  if (own !== seen) {
+    setSeen(own);
+    if (own?.id === plate.id) {
+      if (own.after === undefined) edit.carrying(own.before);
+      else edit.carried(own.before, own.after);
+    }
+  }
+  const { base, held } = edit;
+  return (
+    <Card>
+      <h2 className="mb-3 text-xl">Edit {base.name}</h2>
+      {held ? (
         <div className="mb-3">
-          <StaleEditNotice
-            what="plate"
-            version={held.current.version}
-            busy={save.isPending}
-            onReload={() => {
-              setBase(held.current);
-              setHeld(null);
-            }}
-            onKeep={() => send(held.values, held.current.version)}
-          />
+          <StaleEditNotice what="plate" version={held.current.version} busy={busy} onReload={edit.reload} onKeep={() => send(held.values, held.current.version)} />
         </div>
+      ) : (
+        edit.newerElsewhere && (
+          <div className="mb-3">
+            <NewerVersionNotice what="plate" version={edit.newerElsewhere.version} onReload={edit.reload} />
+          </div>
+        )
       )}
       <AssemblyForm
-        key={base ? `${base.id}-${base.version}` : 'new'}
-        initial={base ? assemblyToInput(base) : emptyAssembly}
-        names={Object.fromEntries((base?.addOns ?? []).map((a) => [a.ingredientId, a.ingredientName]))}
-        trayNames={Object.fromEntries((base?.trays ?? []).map((t) => [t.trayId, t.trayName]))}
-        busy={save.isPending}
+        key={base.version}
+        initial={assemblyToInput(base)}
+        names={Object.fromEntries(base.addOns.map((a) => [a.ingredientId, a.ingredientName]))}
+        trayNames={Object.fromEntries(base.trays.map((t) => [t.trayId, t.trayName]))}
+        busy={busy}
         formError={formError}
-        onSubmit={(values, setError) => send(values, base?.version, setError)}
+        onDirtyChange={edit.onDirtyChange}
+        onSubmit={(values, setError) => send(values, edit.sendVersion, setError)}
       />
     </Card>
   );
@@ -79,6 +110,7 @@ export function Component() {
   const del = useDeleteAssembly();
   const archive = useArchiveAssembly();
   const [editing, setEditing] = useState<AssemblyDto | 'new' | null>(null);
+  const [own, setOwn] = useState<OwnPlateChange | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [find, setFind] = useState('');
@@ -87,9 +119,11 @@ export function Component() {
   const setArchived = (p: AssemblyDto, archived: boolean) => {
     setError(null);
     setNotice(null);
+    setOwn({ id: p.id, before: p.version });
     archive.mutate(
       { id: p.id, archived, version: p.version },
       {
+        onSettled: (after) => setOwn({ id: p.id, before: p.version, after: after ?? null }),
         onSuccess: () => setNotice(archived ? `Archived “${p.name}”. ${ARCHIVE_MEANS}` : `Restored “${p.name}”: it is back in the list and the board’s pickers.`),
         onError: (e) => {
           markShown(e);
@@ -104,7 +138,14 @@ export function Component() {
         {coach && <Button onClick={() => setEditing(editing ? null : 'new')}>{editing ? 'Close' : 'New plate'}</Button>}
       </PageHeader>
       <DemoNotice>These plates are invented demo data for trying Trayline; their numbers come from the demo base trays.</DemoNotice>
-      {editing && <Editor plate={editing === 'new' ? null : editing} onDone={() => setEditing(null)} />}
+      {editing === 'new' ? (
+        <NewPlate onDone={() => setEditing(null)} />
+      ) : (
+        editing && (
+          // The newest the list holds (a refetch on focus, this coach's archive), keyed by plate: Edit on another plate opens that one.
+          <EditPlate key={editing.id} plate={list.data?.find((p) => p.id === editing.id) ?? editing} own={own} onDone={() => setEditing(null)} />
+        )
+      )}
       {error && <Notice tone="block" title={error} />}
       {notice && (
         // Scrolled into view: the card that was clicked may be far down the list (or gone from it).

@@ -11,6 +11,9 @@ import { RecipeCard } from '@/features/trays/components/recipe-card';
 import { PhotoUpload } from '@/features/trays/components/photo-upload';
 import { trayToValues } from '@/features/trays/components/tray-form-values';
 import { useMe } from '@/features/auth/hooks/use-me';
+import { useEditBase } from '@/lib/use-edit-base';
+import { errorMessage, isApiError } from '@/lib/problem';
+import type { TrayDto, TrayValues } from '@shared/schemas/trays.schema';
 import { Button } from '@/components/ui/button';
 import { Card, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
@@ -19,36 +22,48 @@ import { paths } from '@/config/paths';
 export function Component() {
   const { trayId } = useParams();
   const id = Number(trayId);
-  const me = useMe();
   const q = useQuery(trayQuery(id));
+  if (q.isPending) return <PageSkeleton />;
+  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  // Keyed by the tray: a duplicate opens on the same route, and must not keep the edit state of the one it came from.
+  return <TrayPage key={q.data.id} tray={q.data} />;
+}
+
+function TrayPage({ tray }: { tray: TrayDto }) {
+  const id = tray.id;
+  const me = useMe();
   const update = useUpdateTray(id);
   const duplicate = useDuplicateTray();
   const del = useDeleteTray();
   const navigate = useNavigate();
   const [view, setView] = useState<'edit' | 'card'>(me.role === 'coach' ? 'edit' : 'card');
   const [notice, setNotice] = useState<string | null>(null);
-  // Archived or restored here while the editor holds typing: the editor's Save, sent from the version before, goes
-  // on the version after (this coach's own change, not someone else's: no stale notice).
-  const [ownChange, setOwnChange] = useState<{ from: number; to: number } | null>(null);
-
-  if (q.isPending) return <PageSkeleton />;
-  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
-  const tray = q.data;
+  const [archiveError, setArchiveError] = useState<string | null>(null);
+  // The version the editor's typing started from: follows the newest while nothing is typed; this coach's own archive
+  // or restore carries the typing over (their change, not someone else's: no stale notice).
+  const edit = useEditBase<TrayDto, TrayValues>(tray);
   const isCoach = me.role === 'coach';
 
   const setArchived = (archived: boolean) => {
+    setNotice(null);
+    setArchiveError(null);
     const before = tray.version;
+    edit.carrying(before);
     update.mutate(
       { ...trayToValues(tray), version: before, archived },
       {
-        onSuccess: (after) => {
-          setOwnChange((c) => ({ from: c && c.to === before ? c.from : before, to: after.version }));
-          setNotice(archived ? 'Archived.' : 'Restored.');
-        },
+        onSettled: (after) => edit.carried(before, after ?? null),
+        onSuccess: () => setNotice(archived ? 'Archived.' : 'Restored.'),
+        // The save is not toasted (the editor shows its own errors): say here why nothing changed.
+        onError: (e) =>
+          setArchiveError(
+            isApiError(e, 409)
+              ? `Not ${archived ? 'archived' : 'restored'}: someone else changed this tray meanwhile, and the page now shows their version. Try again if you still mean to.`
+              : `Not ${archived ? 'archived' : 'restored'}: ${errorMessage(e)}`,
+          ),
       },
     );
   };
-  const versionFor = (version: number | undefined) => (version === undefined ? tray.version : version === ownChange?.from ? ownChange.to : version);
 
   return (
     <div className="flex flex-col gap-6">
@@ -97,6 +112,7 @@ export function Component() {
         )}
       </PageHeader>
       {notice && <Notice tone="info" title={notice} />}
+      {archiveError && <Notice tone="block" title={archiveError} />}
       {tray.isDemo && <Notice tone="info" title="Demo tray">Invented for trying Trayline; amounts and times are illustrative.</Notice>}
       {view === 'edit' && isCoach && (
         // On paper the recipe card comes first, as it does in the card view (the editor does not print).
@@ -108,10 +124,9 @@ export function Component() {
         <div className={`flex flex-col gap-6 ${view === 'edit' && isCoach ? 'print:hidden' : ''}`}>
           {view === 'edit' && isCoach ? (
             <TrayEditor
-              key={`${tray.id}`}
-              initial={tray}
+              edit={edit}
               busy={update.isPending}
-              onSave={(values, version) => update.mutateAsync({ ...values, version: versionFor(version) })}
+              onSave={(values, version) => update.mutateAsync({ ...values, version: version ?? edit.sendVersion })}
               onSaved={() => setNotice('Saved.')}
             />
           ) : (

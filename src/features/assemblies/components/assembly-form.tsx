@@ -10,6 +10,7 @@ import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { PlatePreview, previewParts } from './plate-preview';
 import { useTempScale } from '@/lib/temp-scale';
+import { useReportDirty } from '@/lib/use-edit-base';
 import { bothScales } from '@shared/domain/temperature';
 import { REHEAT_MIN_F } from '@shared/domain/eat-by';
 
@@ -36,6 +37,8 @@ interface Props {
   busy?: boolean;
   formError?: string | null;
   onSubmit: (v: AssemblyValues, setError: UseFormSetError<AssemblyInput>) => void;
+  /** Told whether the form holds unsaved typing (the steps' text areas included). */
+  onDirtyChange?: (dirty: boolean) => void;
 }
 
 type PlateForm = UseFormReturn<AssemblyInput, unknown, AssemblyValues>;
@@ -79,7 +82,7 @@ function AddOnRow({ form, index: i, initialName, onRemove }: { form: PlateForm; 
   );
 }
 
-export function AssemblyForm({ initial, names = {}, trayNames = {}, busy, formError, onSubmit }: Props) {
+export function AssemblyForm({ initial, names = {}, trayNames = {}, busy, formError, onSubmit, onDirtyChange }: Props) {
   const form = useForm<AssemblyInput, unknown, AssemblyValues>({ resolver: zodResolver(createAssemblySchema), defaultValues: initial });
   const trays = useFieldArray({ control: form.control, name: 'trays' });
   const addOns = useFieldArray({ control: form.control, name: 'addOns' });
@@ -87,6 +90,10 @@ export function AssemblyForm({ initial, names = {}, trayNames = {}, busy, formEr
   const scale = useTempScale();
   const [steps, setSteps] = useState((initial.assemblySteps ?? []).join('\n'));
   const [reheat, setReheat] = useState((initial.reheatSteps ?? []).join('\n'));
+  useReportDirty(
+    form.formState.isDirty || steps !== (initial.assemblySteps ?? []).join('\n') || reheat !== (initial.reheatSteps ?? []).join('\n'),
+    onDirtyChange,
+  );
   const err = form.formState.errors;
   const watchedTrays = useWatch({ control: form.control, name: 'trays' });
   const watchedAddOns = useWatch({ control: form.control, name: 'addOns' });

@@ -9,6 +9,7 @@ import type {
   UpdateTrayInput,
 } from '@shared/schemas/trays.schema';
 import { api } from '@/lib/api-client';
+import { isApiError } from '@/lib/problem';
 import { traysKeys } from './trays.keys';
 
 export function useCreateTray() {
@@ -33,6 +34,10 @@ export function useUpdateTray(id: number) {
       qc.setQueryData(traysKeys.detail(id), tray);
       qc.invalidateQueries({ queryKey: traysKeys.portionCard(id) });
       return qc.invalidateQueries({ queryKey: traysKeys.lists() });
+    },
+    // Refused on a stale version: the page shows the version saved meanwhile (the editor keeps the typing).
+    onError: (e) => {
+      if (isApiError(e, 409) && e.problem.code === 'stale_version' && e.problem.current) qc.setQueryData(traysKeys.detail(id), e.problem.current as TrayDto);
     },
   });
 }

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { Controller, useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { DEFAULT_BAKE_RULES } from '@shared/domain/bake-rules-defaults';
@@ -18,7 +18,8 @@ import {
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Card, Notice } from '@/components/ui/states';
-import { StaleEditNotice } from '@/components/ui/stale-edit-notice';
+import { NewerVersionNotice, StaleEditNotice } from '@/components/ui/stale-edit-notice';
+import { useReportDirty, type EditBase } from '@/lib/use-edit-base';
 import { applyServerErrors } from '@/lib/form-errors';
 import { ApiError } from '@/lib/problem';
 import { IngredientCombobox, unitAfterPick, unitChoices, type PickedIngredient } from '@/components/domain/ingredient-combobox';
@@ -30,9 +31,10 @@ import { emptyTrayValues, trayToValues } from './tray-form-values';
 type Form = ReturnType<typeof useForm<TrayInput, unknown, TrayValues>>;
 
 interface Props {
-  initial?: TrayDto;
+  /** An existing tray: the version the typing started from (follows the newest while nothing is typed). */
+  edit?: EditBase<TrayDto, TrayValues>;
   busy: boolean;
-  /** Saves; resolves with the saved tray or rejects with the ApiError. */
+  /** Saves (with the version to save on, for an existing tray); resolves with the saved tray or rejects with the ApiError. */
   onSave: (values: TrayValues, version?: number) => Promise<TrayDto>;
   onSaved: (tray: TrayDto) => void;
 }
@@ -40,51 +42,54 @@ interface Props {
 /** Per-line facts the unit select needs (piece names, whether a volume can be weighed). */
 type LineFacts = Record<number, PickedIngredient>;
 
-export function TrayEditor({ initial, busy, onSave, onSaved }: Props) {
+export function TrayEditor({ edit, busy, onSave, onSaved }: Props) {
+  const initial = edit?.base;
   const form: Form = useForm<TrayInput, unknown, TrayValues>({
     resolver: zodResolver(trayInputSchema),
     defaultValues: initial ? trayToValues(initial) : emptyTrayValues(),
   });
-  const [version, setVersion] = useState(initial?.version);
-  const [names, setNames] = useState<Record<number, string>>(() =>
-    Object.fromEntries((initial?.lines ?? []).map((l) => [l.ingredientId, l.ingredientName])),
-  );
+  // Ingredient names by id: the shown version's lines, and those picked here.
+  const [picked, setPicked] = useState<Record<number, string>>({});
+  const names = useMemo((): Record<number, string> => ({ ...Object.fromEntries((initial?.lines ?? []).map((l) => [l.ingredientId, l.ingredientName])), ...picked }), [initial, picked]);
   const [facts, setFacts] = useState<LineFacts>({});
   const [formError, setFormError] = useState<string | null>(null);
-  const [stale, setStale] = useState<{ current: TrayDto; values: TrayValues } | null>(null);
   const lines = useFieldArray({ control: form.control, name: 'lines' });
   const errors = form.formState.errors;
+  useReportDirty(form.formState.isDirty, edit?.onDirtyChange);
+  // The version shown changed (a newer one followed with nothing typed, theirs reloaded, this save): the form shows it,
+  // reset in place (no remount: the keyboard stays where it was).
+  const shown = useRef(initial?.version);
+  useEffect(() => {
+    if (!initial || initial.version === shown.current) return;
+    shown.current = initial.version;
+    form.reset(trayToValues(initial));
+  }, [initial, form]);
 
-  const save = async (values: TrayValues, v = version) => {
+  const save = async (values: TrayValues, version = edit?.sendVersion) => {
     setFormError(null);
     try {
-      const saved = await onSave(values, v);
-      setVersion(saved.version);
-      setStale(null);
+      const saved = await onSave(values, version);
       form.reset(trayToValues(saved));
+      edit?.saved(saved);
       onSaved(saved);
     } catch (err) {
-      if (err instanceof ApiError && err.status === 409 && err.problem.code === 'stale_version') {
-        setStale({ current: err.problem.current as TrayDto, values });
+      if (edit && err instanceof ApiError && err.status === 409 && err.problem.code === 'stale_version') {
+        edit.refused(values, err.problem.current as TrayDto);
         return;
       }
       setFormError(applyServerErrors(err, form.setError));
     }
   };
   const onSubmit = form.handleSubmit((values) => save(values));
-
-  const reloadTheirs = () => {
-    if (!stale) return;
-    form.reset(trayToValues(stale.current));
-    setNames((n) => ({ ...n, ...Object.fromEntries(stale.current.lines.map((l) => [l.ingredientId, l.ingredientName])) }));
-    setVersion(stale.current.version);
-    setStale(null);
-  };
-  const keepMine = () => stale && save(stale.values, stale.current.version);
+  const held = edit?.held;
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-6" aria-label="Base tray">
-      {stale && <StaleEditNotice what="tray" version={stale.current.version} busy={busy} onReload={reloadTheirs} onKeep={keepMine} />}
+      {held ? (
+        <StaleEditNotice what="tray" version={held.current.version} busy={busy} onReload={edit.reload} onKeep={() => void save(held.values, held.current.version)} />
+      ) : (
+        edit?.newerElsewhere && <NewerVersionNotice what="tray" version={edit.newerElsewhere.version} onReload={edit.reload} />
+      )}
       {formError && <Notice tone="block" title={formError} />}
 
       <Card>
@@ -112,7 +117,7 @@ export function TrayEditor({ initial, busy, onSave, onSaved }: Props) {
               name={names[form.getValues(`lines.${i}.ingredientId`) as number] ?? ''}
               facts={facts[form.getValues(`lines.${i}.ingredientId`) as number]}
               onPick={(ing) => {
-                setNames((n) => ({ ...n, [ing.id]: ing.name }));
+                setPicked((n) => ({ ...n, [ing.id]: ing.name }));
                 setFacts((f) => ({ ...f, [ing.id]: ing }));
               }}
               onMove={(to) => lines.move(i, to)}
