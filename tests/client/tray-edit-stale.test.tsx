@@ -75,9 +75,11 @@ describe('the tray editor and saves made meanwhile', () => {
     const { state } = serve(tray({ archived: false }));
     const { qc } = renderAtRoute(<TrayPage />, '/trays/:trayId', '/trays/12');
     await screen.findByLabelText('Name');
-    state.current = tray({ archived: false, name: 'Theirs', version: 4 });
+    state.current = tray({ archived: false, name: 'Theirs', tags: ['breakfast', 'egg-free'], version: 4 });
     await qc.invalidateQueries();
     await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Theirs'));
+    // Every field shows theirs, the tags' text box too (it keeps its own text while typing).
+    expect((screen.getByLabelText(/^Tags/) as HTMLInputElement).value).toBe('breakfast, egg-free');
     expect(screen.queryByText(/Someone else saved/)).toBeNull();
     expect(screen.queryByText('Unsaved changes')).toBeNull();
   });

@@ -365,8 +365,16 @@ function StorageFields({ form }: { form: Form }) {
   );
 }
 
+const tagsOf = (text: string) => text.split(',').map((t) => t.trim().toLowerCase()).filter(Boolean);
+
 function TagsField({ value, onChange, error }: { value: string[]; onChange: (v: string[]) => void; error?: string }) {
   const [text, setText] = useState(value.join(', '));
+  const [seen, setSeen] = useState(value);
+  // Tags set from outside (the form reset to a newer version, theirs reloaded) show; what was typed stays as typed.
+  if (value !== seen) {
+    setSeen(value);
+    if (tagsOf(text).join(',') !== value.join(',')) setText(value.join(', '));
+  }
   return (
     <TextField
       className="sm:col-span-2"
@@ -376,7 +384,7 @@ function TagsField({ value, onChange, error }: { value: string[]; onChange: (v: 
       value={text}
       onChange={(e) => {
         setText(e.target.value);
-        onChange(e.target.value.split(',').map((t) => t.trim().toLowerCase()).filter(Boolean));
+        onChange(tagsOf(e.target.value));
       }}
     />
   );
