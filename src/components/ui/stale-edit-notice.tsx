@@ -1,4 +1,4 @@
-import { useEffect, useRef } from 'react';
+import { useEffect, useRef, type ReactNode } from 'react';
 import { Button } from './button';
 import { Notice } from './states';
 
@@ -6,8 +6,11 @@ import { Notice } from './states';
  * Someone else saved the record while this person was editing it (a 409 on a stale version): their changes stay in
  * the form, and they choose: load the other version, or save theirs over it (knowingly, never silently).
  */
-export function StaleEditNotice({ what, version, busy, onReload, onKeep }: { what: string; version: number; busy?: boolean; onReload: () => void; onKeep: () => void }) {
-  // The save was pressed at the foot of a long form: bring the notice (at its head) into view, and the keyboard to it.
+/**
+ * An alert about an action pressed far from where the alert shows (a Save at the foot of a long form, a card low on a
+ * long page): brought into view when it appears, with the keyboard on it.
+ */
+export function RevealedAlert({ children }: { children: ReactNode }) {
   const ref = useRef<HTMLDivElement>(null);
   useEffect(() => {
     ref.current?.scrollIntoView?.({ block: 'center' });
@@ -15,6 +18,14 @@ export function StaleEditNotice({ what, version, busy, onReload, onKeep }: { wha
   }, []);
   return (
     <div role="alert" ref={ref} tabIndex={-1} className="scroll-mt-20 outline-none">
+      {children}
+    </div>
+  );
+}
+
+export function StaleEditNotice({ what, version, busy, onReload, onKeep }: { what: string; version: number; busy?: boolean; onReload: () => void; onKeep: () => void }) {
+  return (
+    <RevealedAlert>
       <Notice tone="warn" title={`Someone else saved this ${what} while you were editing`}>
         <p>Their version ({version}) is saved. Your changes are still here in the form: nothing is lost.</p>
         <div className="mt-2 flex flex-wrap gap-2">
@@ -26,7 +37,7 @@ export function StaleEditNotice({ what, version, busy, onReload, onKeep }: { wha
           </Button>
         </div>
       </Notice>
-    </div>
+    </RevealedAlert>
   );
 }
 

@@ -10,7 +10,7 @@ import { PublishedAllergenClashes } from '@/features/weeks/components/published-
 import { weekKeys } from '@/features/weeks/api/weeks.keys';
 import { useCopyDay, useCoverTrays, useDeleteWeek, usePublishWeek, usePutCells, usePutTrays, useUpdateWeek, type WeekPageState } from '@/features/weeks/api/use-week-mutations';
 import { AllergenOverridePrompt, BoardGrid, type CellEdit } from '@/features/weeks/components/board-grid';
-import { InventoryPanel, portionSummary } from '@/features/weeks/components/inventory-panel';
+import { countsWithTyped, InventoryPanel, portionSummary } from '@/features/weeks/components/inventory-panel';
 import { PublishedVersions } from '@/features/weeks/components/published-versions';
 import { PrepDates } from '@/features/weeks/components/prep-dates';
 import { CopyDayCard } from '@/features/weeks/components/copy-day-card';
@@ -19,6 +19,7 @@ import { clientsQuery } from '@/features/clients/api/clients.queries';
 import { membersQuery } from '@/features/auth/api/auth.queries';
 import { PrepDayMailPanel } from '@/features/mail/components/prep-day-mail-panel';
 import { Button } from '@/components/ui/button';
+import { RevealedAlert } from '@/components/ui/stale-edit-notice';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
@@ -49,6 +50,8 @@ export function Component() {
   const current = q.data?.week.publishedVersion ?? null;
   const clashes = useQuery({ ...weekPublishedAllergensQuery(id, current, kitchenToday()), enabled: current !== null });
   const [conflict, setConflict] = useState<Pending | null>(null);
+  const [kept, setKept] = useState(0);
+  const [conflictSeq, setConflictSeq] = useState(0);
   const [allergen, setAllergen] = useState<{ edit: CellEdit; message: string } | null>(null);
   const [error, setError] = useState<string | null>(null);
   const busy = putCells.isPending || putTrays.isPending || cover.isPending || copyDay.isPending || publish.isPending || update.isPending;
@@ -68,6 +71,7 @@ export function Component() {
       if (current) qc.setQueryData(weekKeys.detail(id), expandBoard(current));
       else void q.refetch();
       setConflict(pending);
+      setConflictSeq((n) => n + 1);
       return;
     }
     if (pending.kind === 'cells' && isApiError(e, 400)) {
@@ -144,25 +148,36 @@ export function Component() {
       )}
 
       {conflict && (
-        <Notice tone="warn" title="Someone else changed this week since you opened it">
-          <p>The board now shows their version (v{board.week.version}). Your change was not saved: {conflict.kind === 'cells' ? conflict.edit.label : conflict.label}.</p>
-          <div className="mt-2 flex gap-2">
-            <Button
-              size="sm"
-              onClick={() => {
-                const c = conflict;
-                setConflict(null);
-                if (c.kind === 'cells') sendCells(c.edit, board.week.version);
-                else c.run(board.week.version);
-              }}
-            >
-              Apply my change on top of theirs
-            </Button>
-            <Button size="sm" variant="secondary" onClick={() => setConflict(null)}>
-              Keep theirs
-            </Button>
-          </div>
-        </Notice>
+        // Brought into view with the keyboard on it: the change may have been pressed far down the page (tray counts).
+        <RevealedAlert key={conflictSeq}>
+          <Notice tone="warn" title="Someone else changed this week since you opened it">
+            <p>The board now shows their version (v{board.week.version}). Your change was not saved: {conflict.kind === 'cells' ? conflict.edit.label : conflict.label}.</p>
+            <div className="mt-2 flex gap-2">
+              <Button
+                size="sm"
+                onClick={() => {
+                  const c = conflict;
+                  setConflict(null);
+                  if (c.kind === 'cells') sendCells(c.edit, board.week.version);
+                  else c.run(board.week.version);
+                }}
+              >
+                Apply my change on top of theirs
+              </Button>
+              <Button
+                size="sm"
+                variant="secondary"
+                onClick={() => {
+                  setConflict(null);
+                  // Typed prep days go too: the card shows theirs.
+                  setKept((k) => k + 1);
+                }}
+              >
+                Keep theirs
+              </Button>
+            </div>
+          </Notice>
+        </RevealedAlert>
       )}
       {allergen && <AllergenOverridePrompt message={allergen.message} busy={putCells.isPending} onConfirm={overrideAndSend} onCancel={() => setAllergen(null)} />}
       {error && <Notice tone="block" title={error} />}
@@ -237,16 +252,22 @@ export function Component() {
             const run = (version: number) => cover.mutate({ version }, { onError: onFail({ kind: 'other', label: 'set tray counts', run }) });
             withVersion('cover', run);
           }}
-          onSave={(trays) => {
-            const run = (version: number) => putTrays.mutate({ version, trays }, { onError: onFail({ kind: 'other', label: 'save tray counts', run }) });
-            withVersion('trays', run);
+          onSave={(typed, typedOn) => {
+            // Sent from the version the counts were typed on, put over the board as it is when sent: "Apply my change on
+            // top of theirs" keeps the counts someone else changed meanwhile, and changes only the ones typed here.
+            const run = (version: number) => {
+              const latest = (qc.getQueryData(weekKeys.detail(id)) as BoardDto | undefined) ?? board;
+              putTrays.mutate({ version, trays: countsWithTyped(latest, typed) }, { onError: onFail({ kind: 'other', label: 'save tray counts', run }) });
+            };
+            setError(null);
+            run(typedOn);
           }}
         />
       </Card>
 
       <Card>
         <h2 className="mb-3 text-xl">Prep days</h2>
-        <PrepDates board={board} busy={update.isPending} error={update.error} onSave={(prepDate, secondPrepDate) => {
+        <PrepDates key={kept} board={board} busy={update.isPending} error={update.error} onSave={(prepDate, secondPrepDate, typedOn) => {
           const run = (version: number) =>
             update.mutate({ version, prepDate, secondPrepDate }, {
               // A stale version goes to the merge prompt; any other refusal is shown in this card, beside its fields.
@@ -255,7 +276,9 @@ export function Component() {
                 if (isApiError(e, 409) && e.problem.code === 'stale_version') onFail({ kind: 'other', label: 'change the prep days', run })(e);
               },
             });
-          withVersion('prep', run);
+          // Sent from the version the dates were typed on: someone else's change meanwhile is the merge prompt.
+          setError(null);
+          run(typedOn);
         }} />
       </Card>
 

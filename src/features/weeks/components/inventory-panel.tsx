@@ -7,6 +7,12 @@ import { counted } from '@/lib/words';
 /** Each base tray's count per prep day, keyed "trayId|prepDate". */
 const trayCounts = (board: Pick<BoardDto, 'trays'>) => new Map(board.trays.map((t) => [`${t.trayId}|${t.prepDate}`, t.trayCount]));
 
+/** Every tray count of `board` with the typed ones put over it: what a save of typed counts sends (the API replaces all). */
+export function countsWithTyped(board: Pick<BoardDto, 'trays'>, typed: Map<string, number>): PutTraysInput['trays'] {
+  const all = new Map([...trayCounts(board), ...typed]);
+  return [...all.entries()].map(([k, trayCount]) => ({ trayId: Number(k.split('|')[0]), prepDate: k.split('|')[1], trayCount }));
+}
+
 /**
  * The board's one-line portion count: what is short, else whether the trays bake more than the board needs. A tray
  * count above the trays that cover its prep day's need bakes whole trays nobody eats (a copied week, plates moved
@@ -44,17 +50,29 @@ export function portionSummary(board: Pick<BoardDto, 'inventory' | 'trays'>): { 
  * Portions needed (cells × household) against portions baked (tray counts × cut plan, less the trays the cooling
  * record has thrown away), per tray and prep day.
  */
-export function InventoryPanel({ board, busy, onCover, onSave }: { board: BoardDto; busy: boolean; onCover: () => void; onSave: (trays: PutTraysInput['trays']) => void }) {
+export function InventoryPanel({
+  board,
+  busy,
+  onCover,
+  onSave,
+}: {
+  board: BoardDto;
+  busy: boolean;
+  onCover: () => void;
+  /** The counts typed (`trayId|prepDate` → trays), and the board version they were typed on. */
+  onSave: (typed: Map<string, number>, version: number) => void;
+}) {
   const names = new Map(board.trays.map((t) => [t.trayId, t.name]));
   for (const p of board.plates) for (const t of p.trays) names.set(t.trayId, t.trayName);
   const counts = trayCounts(board);
   const [draft, setDraft] = useState<Record<string, string>>({});
+  // The board version the first count was typed on: a save from it is refused (409) when someone else changed the week.
+  const [draftVersion, setDraftVersion] = useState<number | null>(null);
   const rows = board.inventory.flatMap((t) => t.byPrepDate.map((p) => ({ trayId: Number(t.trayId), ...p })));
   const save = () => {
-    const all = new Map(counts);
-    for (const [k, v] of Object.entries(draft)) all.set(k, Math.max(0, Math.floor(Number(v) || 0)));
-    onSave([...all.entries()].map(([k, trayCount]) => ({ trayId: Number(k.split('|')[0]), prepDate: k.split('|')[1], trayCount })));
+    onSave(new Map(Object.entries(draft).map(([k, v]) => [k, Math.max(0, Math.floor(Number(v) || 0))])), draftVersion ?? board.week.version);
     setDraft({});
+    setDraftVersion(null);
   };
   if (!rows.length) return <p className="text-ink-soft">Place plates on the board to count portions.</p>;
   return (
@@ -85,7 +103,10 @@ export function InventoryPanel({ board, busy, onCover, onSave }: { board: BoardD
                       inputMode="numeric"
                       className="num w-16 rounded border border-line-strong bg-paper-card px-2 py-1 text-right"
                       value={draft[key] ?? String(counts.get(key) ?? 0)}
-                      onChange={(e) => setDraft({ ...draft, [key]: e.target.value })}
+                      onChange={(e) => {
+                        setDraft({ ...draft, [key]: e.target.value });
+                        setDraftVersion((v) => v ?? board.week.version);
+                      }}
                     />
                   </td>
                   <td className="num text-right">
