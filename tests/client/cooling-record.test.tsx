@@ -6,7 +6,7 @@ import { CoolingRecord, readingAt } from '@/features/bake-runs/components/coolin
 import { BakeRunTimers } from '@/features/bake-runs/components/bake-run-timers';
 import { minutesSpan } from '@shared/domain/clock';
 import { setKitchenZone } from '@/lib/dates';
-import { jsonResponse, renderInApp } from './render';
+import { jsonResponse, renderInApp, testQueryClient } from './render';
 
 // An invented run of two trays (only the fields the cooling record and the timers read), prep day Sun Jan 4, 2026.
 const tray = (id: string, name: string, outAt: string, outMinute: number) => ({ id, name, oven: 'Left', outAt: `2026-01-04T${outAt}`, outMinute });
@@ -130,6 +130,24 @@ describe('the cooling record on prep day', () => {
     fireEvent.change(screen.getByLabelText(/cooling again from/), { target: { value: '10:50' } });
     fireEvent.click(screen.getByRole('button', { name: 'Cool again from then' }));
     await waitFor(() => expect(puts().at(-1)![1]).toMatchObject({ restartedAt: '2026-01-04T10:50', version: 1 }));
+  });
+
+  it('shows a note written elsewhere when the page refreshes, unless a note is being typed here', async () => {
+    records = [record()];
+    const qc = testQueryClient();
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />, qc);
+    const field = async () => (await screen.findByLabelText('Note')) as HTMLInputElement;
+    expect((await field()).value).toBe('');
+    // The coach notes something on their laptop; this phone reads the records again (every minute, or on focus).
+    records = [record({ note: 'Moved to the walk-in at 10:05', version: 2 })];
+    await qc.invalidateQueries();
+    // Before, the box kept the note it opened with: "Save note" then put the old text back over the coach's.
+    await waitFor(async () => expect((await field()).value).toBe('Moved to the walk-in at 10:05'));
+    fireEvent.change(await field(), { target: { value: 'Moved to the walk-in at 10:05; lid on' } });
+    records = [record({ note: 'Another note', version: 3 })];
+    await qc.invalidateQueries();
+    await screen.findByText('Note: Another note');
+    expect((await field()).value).toBe('Moved to the walk-in at 10:05; lid on');
   });
 
   it('throws a tray away, and says its portions no longer count and who is told', async () => {

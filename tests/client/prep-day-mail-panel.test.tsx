@@ -1,10 +1,10 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { fireEvent, render, screen, waitFor } from '@testing-library/react';
 import type { BoardDto } from '@shared/schemas/weeks.schema';
 import type { MemberDto } from '@shared/schemas/auth.schema';
 import { PrepDayMailPanel, addressesOf } from '@/features/mail/components/prep-day-mail-panel';
-import { jsonResponse, renderInApp } from './render';
-import { useQuery } from '@tanstack/react-query';
+import { jsonResponse, renderInApp, testQueryClient } from './render';
+import { QueryClientProvider, useQuery } from '@tanstack/react-query';
 import { membersQuery } from '@/features/auth/api/auth.queries';
 
 // An invented week 4 with two prep days (only the fields the panel reads), and an invented team.
@@ -54,6 +54,30 @@ describe('prep-day papers for the kitchen', () => {
     expect(first.body).toEqual({ prepDate: '2026-01-07', requestId: expect.stringMatching(/^[0-9a-f-]{36}$/), assistantIds: [2, 3] });
     // A new press after a success is a new request.
     expect(second.body.requestId).not.toBe(first.body.requestId);
+  });
+
+  it('sends for the prep day chosen as it is now: a second prep day moved to another date is still the one chosen', async () => {
+    const fetchMock = fakeApi([jsonResponse(sentTo('Kit', 'Lee'), 202)]);
+    const qc = testQueryClient();
+    const { rerender } = render(
+      <QueryClientProvider client={qc}>
+        <PanelOnPage board={board} />
+      </QueryClientProvider>,
+    );
+    await screen.findByRole('checkbox', { name: /Kit/ });
+    fireEvent.change(screen.getByLabelText('For prep day'), { target: { value: '2026-01-07' } });
+    // The second prep day moved to the 8th (someone else, or this coach further down the page).
+    const moved = { ...board, prepDates: ['2026-01-04', '2026-01-08'] } as unknown as BoardDto;
+    rerender(
+      <QueryClientProvider client={qc}>
+        <PanelOnPage board={moved} />
+      </QueryClientProvider>,
+    );
+    expect((screen.getByLabelText('For prep day') as HTMLSelectElement).value).toBe('2026-01-08');
+    fireEvent.click(sendButton());
+    // Before, the gone day (the 7th) was sent, and refused as no prep day of the week.
+    await waitFor(() => expect(posts(fetchMock)).toHaveLength(1));
+    expect(posts(fetchMock)[0].body.prepDate).toBe('2026-01-08');
   });
 
   it('leaves out an assistant unticked and adds other addresses', async () => {

@@ -116,6 +116,12 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
   const [temp, setTemp] = useState('');
   const [time, setTime] = useState('');
   const [note, setNote] = useState(record.note);
+  const [noteSeen, setNoteSeen] = useState(record.note);
+  // A note changed elsewhere (the page refreshes while the tray cools) shows here unless one is being typed.
+  if (record.note !== noteSeen) {
+    setNoteSeen(record.note);
+    if (note === noteSeen) setNote(record.note);
+  }
   const [restart, setRestart] = useState('');
   const fieldErrors = isApiError(error, 400) ? error.fieldErrors : {};
   const readingError = Object.entries(fieldErrors).find(([k]) => k.startsWith('readings.'))?.[1]?.[0];

@@ -25,7 +25,10 @@ export const addressesOf = (text: string) => text.split(/[\s,;]+/).filter(Boolea
 export function PrepDayMailPanel({ board, team }: { board: BoardDto; team: UseQueryResult<MemberDto[]> }) {
   const send = useSendPrepDay(board.week.id);
   const assistants = (team.data ?? []).filter((m) => m.role === 'assistant');
-  const [prepDate, setPrepDate] = useState(board.prepDates[0]);
+  // Which prep day (first or second): the week's prep days can move under the page, and the choice goes with them.
+  const [picked, setPicked] = useState(0);
+  const prepDate = board.prepDates[picked] ?? board.prepDates[0];
+  const setPrepDate = (date: string) => setPicked(Math.max(0, board.prepDates.indexOf(date)));
   const [note, setNote] = useState('');
   // Left out (user ids): an assistant who joins later is in by default.
   const [leftOut, setLeftOut] = useState<number[]>([]);
