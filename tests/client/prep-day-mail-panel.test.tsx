@@ -5,6 +5,7 @@ import type { MemberDto } from '@shared/schemas/auth.schema';
 import { PrepDayMailPanel, addressesOf } from '@/features/mail/components/prep-day-mail-panel';
 import { jsonResponse, renderInApp, testQueryClient } from './render';
 import { QueryClientProvider, useQuery } from '@tanstack/react-query';
+import { MemoryRouter } from 'react-router-dom';
 import { membersQuery } from '@/features/auth/api/auth.queries';
 
 // An invented week 4 with two prep days (only the fields the panel reads), and an invented team.
@@ -59,19 +60,24 @@ describe('prep-day papers for the kitchen', () => {
   it('sends for the prep day chosen as it is now: a second prep day moved to another date is still the one chosen', async () => {
     const fetchMock = fakeApi([jsonResponse(sentTo('Kit', 'Lee'), 202)]);
     const qc = testQueryClient();
+    // In a router (the panel links to the outbox) and a query client, kept across the rerender below.
     const { rerender } = render(
-      <QueryClientProvider client={qc}>
-        <PanelOnPage board={board} />
-      </QueryClientProvider>,
+      <MemoryRouter>
+        <QueryClientProvider client={qc}>
+          <PanelOnPage board={board} />
+        </QueryClientProvider>
+      </MemoryRouter>,
     );
     await screen.findByRole('checkbox', { name: /Kit/ });
     fireEvent.change(screen.getByLabelText('For prep day'), { target: { value: '2026-01-07' } });
     // The second prep day moved to the 8th (someone else, or this coach further down the page).
     const moved = { ...board, prepDates: ['2026-01-04', '2026-01-08'] } as unknown as BoardDto;
     rerender(
-      <QueryClientProvider client={qc}>
-        <PanelOnPage board={moved} />
-      </QueryClientProvider>,
+      <MemoryRouter>
+        <QueryClientProvider client={qc}>
+          <PanelOnPage board={moved} />
+        </QueryClientProvider>
+      </MemoryRouter>,
     );
     expect((screen.getByLabelText('For prep day') as HTMLSelectElement).value).toBe('2026-01-08');
     fireEvent.click(sendButton());
