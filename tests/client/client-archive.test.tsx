@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import { Component as ClientPage } from '@/app/routes/clients/client.route';
 import { emptyClient } from '@/features/clients/components/client-form';
 import { jsonResponse, renderAtRoute, staleResponse, stubVersionedRecord } from './render';
@@ -237,6 +237,41 @@ describe('the coach’s own archive, while the page is still refreshing after it
     await waitFor(() => expect(screen.queryByText(/Archived on/)).toBeTruthy());
     expect(screen.queryByText(/Someone else saved/)).toBeNull();
     expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Mine');
+  });
+});
+
+describe('leaving the profile', () => {
+  it('asks while typing is held, and not once it is saved, even while the page is still refreshing after the save', async () => {
+    const confirm = vi.fn(() => false);
+    vi.stubGlobal('confirm', confirm);
+    let saved = false;
+    let release = () => {};
+    const slow = new Promise<void>((r) => (release = r));
+    stubVersionedRecord(
+      '/api/clients/7',
+      profile(),
+      (current, body) => {
+        saved = true;
+        return profile({ ...current, ...body });
+      },
+      async (url) => {
+        if (saved) await slow;
+        return url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : url.includes('/published-allergens') ? jsonResponse([]) : undefined;
+      },
+    );
+    const { router } = renderProfile();
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Renamed' } });
+    await act(() => router.navigate('/clients'));
+    expect(confirm).toHaveBeenCalledTimes(1);
+    expect(router.state.location.pathname).toBe('/clients/7');
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    await screen.findByRole('heading', { name: 'Olga Renamed' });
+    // The side cards are still being read again: the save is in, so leaving is not asked about.
+    await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Renamed'));
+    await act(() => router.navigate('/clients'));
+    expect(confirm).toHaveBeenCalledTimes(1);
+    expect(router.state.location.pathname).toBe('/clients');
+    release();
   });
 });
 

@@ -137,4 +137,30 @@ describe('the plate editor and versions saved meanwhile', () => {
     ]);
     await waitFor(() => expect(screen.queryByLabelText('Plate name')).toBeNull());
   });
+
+  it('asks before typing in one plate is dropped for another plate or by Close; a save closes without asking', async () => {
+    const confirm = vi.fn(() => false);
+    vi.stubGlobal('confirm', confirm);
+    const { writes } = serve();
+    renderAtRoute(<PlatesPage />, '/plates', '/plates');
+    fireEvent.click(await screen.findByRole('button', { name: 'Edit Egg slab plate' }));
+    fireEvent.change(await screen.findByLabelText('Plate name'), { target: { value: 'Mine' } });
+    await waitFor(() => expect(screen.getByRole('button', { name: 'Save plate' })).toBeTruthy());
+    fireEvent.click(screen.getByRole('button', { name: 'Edit Bacon cup plate' }));
+    expect(confirm).toHaveBeenLastCalledWith('Drop what you typed in “Egg slab plate”? It is not saved.');
+    expect(nameField().value).toBe('Mine');
+    fireEvent.click(screen.getByRole('button', { name: 'Close' }));
+    expect(confirm).toHaveBeenCalledTimes(2);
+    expect(nameField().value).toBe('Mine');
+    fireEvent.click(screen.getByRole('button', { name: 'Save plate' }));
+    await waitFor(() => expect(screen.queryByLabelText('Plate name')).toBeNull());
+    expect(writes).toHaveLength(1);
+    expect(confirm).toHaveBeenCalledTimes(2);
+    // With nothing typed, Edit on another plate just opens it.
+    fireEvent.click(screen.getByRole('button', { name: 'Edit Bacon cup plate' }));
+    await screen.findByRole('heading', { name: 'Edit Bacon cup plate' });
+    fireEvent.click(screen.getByRole('button', { name: 'Edit Mine' }));
+    await screen.findByRole('heading', { name: 'Edit Mine' });
+    expect(confirm).toHaveBeenCalledTimes(2);
+  });
 });

@@ -2,7 +2,7 @@ import type { ReactElement } from 'react';
 import { render } from '@testing-library/react';
 import { vi } from 'vitest';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { MemoryRouter, Route, Routes } from 'react-router-dom';
+import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import type { MeDto } from '@shared/schemas/auth.schema';
 import { meQuery } from '@/features/auth/api/auth.queries';
 
@@ -50,11 +50,9 @@ export const testQueryClient = () => new QueryClient({ defaultOptions: { queries
 
 /** Renders a page part as the app does: inside a router and a query client. */
 export function renderInApp(ui: ReactElement, qc: QueryClient = testQueryClient()) {
-  return render(
-    <MemoryRouter>
-      <QueryClientProvider client={qc}>{ui}</QueryClientProvider>
-    </MemoryRouter>,
-  );
+  // A data router, as the app's: a page that guards unsaved typing (useBlocker) needs one.
+  const router = createMemoryRouter([{ path: '*', element: <QueryClientProvider client={qc}>{ui}</QueryClientProvider> }]);
+  return render(<RouterProvider router={router} />);
 }
 
 /** An invented signed-in person (a coach in US measures unless told otherwise). */
@@ -90,14 +88,14 @@ export function queryClientFor(me: MeDto): QueryClient {
  */
 export function renderAtRoute(element: ReactElement, path: string, url: string, me: MeDto = signedIn()) {
   const qc = queryClientFor(me);
-  const result = render(
-    <MemoryRouter initialEntries={[url]}>
-      <QueryClientProvider client={qc}>
-        <Routes>
-          <Route path={path} element={element} />
-        </Routes>
-      </QueryClientProvider>
-    </MemoryRouter>,
+  const router = createMemoryRouter(
+    [
+      { path, element: <QueryClientProvider client={qc}>{element}</QueryClientProvider> },
+      // Any other page of the app: where a link or a navigation of the page leads.
+      { path: '*', element: <p>Another page</p> },
+    ],
+    { initialEntries: [url] },
   );
-  return { ...result, qc };
+  const result = render(<RouterProvider router={router} />);
+  return { ...result, qc, router };
 }

@@ -20,6 +20,7 @@ import { paths } from '@/config/paths';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { dateWithYearLabel, instantDayLabel } from '@/lib/dates';
+import { useTellBoth, useUnsavedGuard } from '@/lib/use-unsaved-guard';
 
 /** What archiving a client does, said where the coach archives and on an archived profile. */
 const ARCHIVE_MEANS =
@@ -109,6 +110,8 @@ function ClientProfile({ client, refetch }: { client: ClientDto; refetch: () => 
   // The version the form's typing started from: a save refused because someone else saved meanwhile keeps what was
   // typed until the coach reloads theirs or saves this over it; archiving keeps it too.
   const edit = useEditBase<ClientDto, CreateClientData>(client);
+  const guard = useUnsavedGuard();
+  const onDirtyChange = useTellBoth(edit.onDirtyChange, guard.onDirtyChange);
   const [archiveError, setArchiveError] = useState<string | null>(null);
   const slots = Object.keys(client.targets.slots);
   const onStale = () => {
@@ -174,7 +177,13 @@ function ClientProfile({ client, refetch }: { client: ClientDto; refetch: () => 
           busy={del.isPending}
           onClick={() => {
             const ask = `Delete ${client.name} for good? Their plates on every week board go too.${client.archivedAt ? '' : ' To keep their history, archive them instead.'}`;
-            if (window.confirm(ask)) del.mutate(id, { onSuccess: () => navigate(paths.clients) });
+            if (window.confirm(ask))
+              del.mutate(id, {
+                onSuccess: () => {
+                  guard.allow();
+                  navigate(paths.clients);
+                },
+              });
           }}
         >
           Delete
@@ -222,7 +231,7 @@ function ClientProfile({ client, refetch }: { client: ClientDto; refetch: () => 
           unitSystem={me.unitSystem}
           key={edit.base.version}
           initial={clientToInput(edit.base)}
-          onDirtyChange={edit.onDirtyChange}
+          onDirtyChange={onDirtyChange}
           slots={slots}
           submitLabel="Save changes"
           busy={update.isPending}

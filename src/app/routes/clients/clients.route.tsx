@@ -14,6 +14,7 @@ import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
 import { filterByText } from '@/lib/words';
 import { useMe } from '@/features/auth/hooks/use-me';
+import { useUnsavedGuard } from '@/lib/use-unsaved-guard';
 
 const isFull = (c: ClientListItemDto): c is ClientDto => 'targets' in c;
 
@@ -93,11 +94,19 @@ export function Component() {
   const create = useCreateClient();
   const navigate = useNavigate();
   const [adding, setAdding] = useState(false);
+  const guard = useUnsavedGuard();
   const [formError, setFormError] = useState<string | null>(null);
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title="Clients" lead="Profiles, daily targets, allergens and dislikes.">
-        <Button onClick={() => setAdding((a) => !a)} aria-expanded={adding}>
+        <Button
+          onClick={() => {
+            if (adding && guard.dirty && !window.confirm('Close the new client? What you typed is not saved.')) return;
+            if (adding) guard.onDirtyChange(false);
+            setAdding((a) => !a);
+          }}
+          aria-expanded={adding}
+        >
           {adding ? 'Close' : 'New client'}
         </Button>
       </PageHeader>
@@ -111,10 +120,14 @@ export function Component() {
             submitLabel="Save client"
             busy={create.isPending}
             formError={formError}
+            onDirtyChange={guard.onDirtyChange}
             onSubmit={(values, setError) => {
               setFormError(null);
               create.mutate(values, {
-                onSuccess: (c) => navigate(paths.client(c.id)),
+                onSuccess: (c) => {
+                  guard.allow();
+                  navigate(paths.client(c.id));
+                },
                 onError: (e) => setFormError(applyServerErrors(e, setError)),
               });
             }}

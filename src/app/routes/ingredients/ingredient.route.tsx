@@ -17,6 +17,7 @@ import { NewerVersionNotice, StaleEditNotice } from '@/components/ui/stale-edit-
 import { useEditBase } from '@/lib/use-edit-base';
 import { errorMessage, isApiError } from '@/lib/problem';
 import { paths } from '@/config/paths';
+import { useTellBoth, useUnsavedGuard } from '@/lib/use-unsaved-guard';
 
 function EditOwn({ ingredient }: { ingredient: IngredientDto }) {
   const qc = useQueryClient();
@@ -26,6 +27,8 @@ function EditOwn({ ingredient }: { ingredient: IngredientDto }) {
   // The version the form's typing started from: a save refused because someone else saved the ingredient meanwhile
   // keeps what was typed (the form is not remounted) until the coach reloads their version or saves this over it.
   const edit = useEditBase<IngredientDto, IngredientValues>(ingredient);
+  const guard = useUnsavedGuard();
+  const onDirtyChange = useTellBoth(edit.onDirtyChange, guard.onDirtyChange);
   const [keepError, setKeepError] = useState<string | null>(null);
   const save = async (values: IngredientValues, version: number) => {
     setKeepError(null);
@@ -66,7 +69,7 @@ function EditOwn({ ingredient }: { ingredient: IngredientDto }) {
         initial={formValuesOf(edit.base)}
         submitLabel="Save changes"
         busy={update.isPending}
-        onDirtyChange={edit.onDirtyChange}
+        onDirtyChange={onDirtyChange}
         // The form's own Save sends the version its typing started from (a 409 when someone else saved meanwhile).
         onSave={(values) => save(values, edit.sendVersion)}
       />
@@ -79,6 +82,7 @@ function EditOwn({ ingredient }: { ingredient: IngredientDto }) {
             del.mutate(ingredient.id, {
               onSuccess: () => {
                 toast.success('Deleted');
+                guard.allow();
                 navigate(paths.ingredients);
               },
             });

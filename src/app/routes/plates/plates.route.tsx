@@ -19,6 +19,7 @@ import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
 import { filterByText } from '@/lib/words';
 import { allergenLabel } from '@shared/domain/allergens';
+import { useTellBoth, useUnsavedGuard } from '@/lib/use-unsaved-guard';
 
 /** Saves a plate from the editor: field errors land on the form, a stale save (409 with theirs) goes to `onStale`. */
 function usePlateSave(id: number | null, onDone: () => void, onStale?: (values: AssemblyValues, current: AssemblyDto) => void) {
@@ -41,12 +42,12 @@ function usePlateSave(id: number | null, onDone: () => void, onStale?: (values: 
   return { send, formError, busy: save.isPending };
 }
 
-function NewPlate({ onDone }: { onDone: () => void }) {
+function NewPlate({ onDone, onDirtyChange }: { onDone: () => void; onDirtyChange: (dirty: boolean) => void }) {
   const { send, formError, busy } = usePlateSave(null, onDone);
   return (
     <Card>
       <h2 className="mb-3 text-xl">New plate</h2>
-      <AssemblyForm initial={emptyAssembly} busy={busy} formError={formError} onSubmit={(values, setError) => send(values, undefined, setError)} />
+      <AssemblyForm initial={emptyAssembly} busy={busy} formError={formError} onDirtyChange={onDirtyChange} onSubmit={(values, setError) => send(values, undefined, setError)} />
     </Card>
   );
 }
@@ -59,10 +60,11 @@ export interface OwnPlateChange {
   after?: AssemblyDto | null;
 }
 
-function EditPlate({ plate, own, onDone }: { plate: AssemblyDto; own: OwnPlateChange | null; onDone: () => void }) {
+function EditPlate({ plate, own, onDone, onDirtyChange }: { plate: AssemblyDto; own: OwnPlateChange | null; onDone: () => void; onDirtyChange: (dirty: boolean) => void }) {
   // The version the form's typing started from: follows the newest while nothing is typed; someone else's save
   // meanwhile leaves it (and what was typed) until the coach reloads theirs or saves this over it.
   const edit = useEditBase<AssemblyDto, AssemblyValues>(plate);
+  const tellBoth = useTellBoth(edit.onDirtyChange, onDirtyChange);
   const { send, formError, busy } = usePlateSave(plate.id, onDone, edit.refused);
   const [seen, setSeen] = useState<OwnPlateChange | null>(null);
   if (own !== seen) {
@@ -94,7 +96,7 @@ function EditPlate({ plate, own, onDone }: { plate: AssemblyDto; own: OwnPlateCh
         trayNames={Object.fromEntries(base.trays.map((t) => [t.trayId, t.trayName]))}
         busy={busy}
         formError={formError}
-        onDirtyChange={edit.onDirtyChange}
+        onDirtyChange={tellBoth}
         onSubmit={(values, setError) => send(values, edit.sendVersion, setError)}
       />
     </Card>
@@ -111,6 +113,19 @@ export function Component() {
   const archive = useArchiveAssembly();
   const [editing, setEditing] = useState<AssemblyDto | 'new' | null>(null);
   const [own, setOwn] = useState<OwnPlateChange | null>(null);
+  const guard = useUnsavedGuard();
+  /** Opens another plate's editor, a new one, or none: typing in the open one is dropped only when the coach says so. */
+  const openEditor = (next: AssemblyDto | 'new' | null) => {
+    const what = editing === 'new' ? 'the new plate' : `“${editing?.name}”`;
+    if (editing && guard.dirty && !window.confirm(`Drop what you typed in ${what}? It is not saved.`)) return;
+    guard.onDirtyChange(false);
+    setEditing(next);
+  };
+  /** Saved: the editor closes (nothing typed is left behind). */
+  const saved = () => {
+    guard.onDirtyChange(false);
+    setEditing(null);
+  };
   const [error, setError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [find, setFind] = useState('');
@@ -135,15 +150,15 @@ export function Component() {
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title="Plates" lead="Portions of base trays plus add-ons, with their macros, allergens and steps.">
-        {coach && <Button onClick={() => setEditing(editing ? null : 'new')}>{editing ? 'Close' : 'New plate'}</Button>}
+        {coach && <Button onClick={() => openEditor(editing ? null : 'new')}>{editing ? 'Close' : 'New plate'}</Button>}
       </PageHeader>
       <DemoNotice>These plates are invented demo data for trying Trayline; their numbers come from the demo base trays.</DemoNotice>
       {editing === 'new' ? (
-        <NewPlate onDone={() => setEditing(null)} />
+        <NewPlate onDone={saved} onDirtyChange={guard.onDirtyChange} />
       ) : (
         editing && (
           // The newest the list holds (a refetch on focus, this coach's archive), keyed by plate: Edit on another plate opens that one.
-          <EditPlate key={editing.id} plate={list.data?.find((p) => p.id === editing.id) ?? editing} own={own} onDone={() => setEditing(null)} />
+          <EditPlate key={editing.id} plate={list.data?.find((p) => p.id === editing.id) ?? editing} own={own} onDone={saved} onDirtyChange={guard.onDirtyChange} />
         )
       )}
       {error && <Notice tone="block" title={error} />}
@@ -214,7 +229,7 @@ export function Component() {
                           <div className="mt-auto flex flex-wrap gap-2">
                             <EditDeleteButtons
                               name={p.name}
-                              onEdit={() => setEditing(p)}
+                              onEdit={() => (editing !== 'new' && editing?.id === p.id ? undefined : openEditor(p))}
                               onDelete={() => {
                                 if (!window.confirm(`Delete the plate "${p.name}"? A plate planned on a week board is archived instead.`)) return;
                                 setError(null);

@@ -17,6 +17,7 @@ import type { TrayDto, TrayValues } from '@shared/schemas/trays.schema';
 import { Button } from '@/components/ui/button';
 import { Card, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
+import { useUnsavedGuard } from '@/lib/use-unsaved-guard';
 
 /** One base tray: the editor (coach) or the recipe (assistant, client), the portion card, scaling and a print view. */
 export function Component() {
@@ -42,6 +43,7 @@ function TrayPage({ tray }: { tray: TrayDto }) {
   // The version the editor's typing started from: follows the newest while nothing is typed; this coach's own archive
   // or restore carries the typing over (their change, not someone else's: no stale notice).
   const edit = useEditBase<TrayDto, TrayValues>(tray);
+  const guard = useUnsavedGuard();
   const isCoach = me.role === 'coach';
 
   const setArchived = (archived: boolean) => {
@@ -101,7 +103,11 @@ function TrayPage({ tray }: { tray: TrayDto }) {
                 onClick={() => {
                   if (!window.confirm(`Delete “${tray.name}”? A tray used by a plan is archived instead.`)) return;
                   del.mutate(id, {
-                    onSuccess: (res) => (res?.archived ? setNotice('A plan uses this tray, so it was archived instead.') : navigate(paths.trays)),
+                    onSuccess: (res) => {
+                      if (res?.archived) return setNotice('A plan uses this tray, so it was archived instead.');
+                      guard.allow();
+                      navigate(paths.trays);
+                    },
                   });
                 }}
               >
@@ -122,16 +128,19 @@ function TrayPage({ tray }: { tray: TrayDto }) {
       )}
       <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
         <div className={`flex flex-col gap-6 ${view === 'edit' && isCoach ? 'print:hidden' : ''}`}>
-          {view === 'edit' && isCoach ? (
-            <TrayEditor
-              edit={edit}
-              busy={update.isPending}
-              onSave={(values, version) => update.mutateAsync({ ...values, version: version ?? edit.sendVersion })}
-              onSaved={() => setNotice('Saved.')}
-            />
-          ) : (
-            <RecipeCard tray={tray} system={me.unitSystem} />
+          {isCoach && (
+            // Kept mounted while the recipe card is looked at: what was typed is still there on coming back.
+            <div hidden={view !== 'edit'}>
+              <TrayEditor
+                edit={edit}
+                busy={update.isPending}
+                onSave={(values, version) => update.mutateAsync({ ...values, version: version ?? edit.sendVersion })}
+                onSaved={() => setNotice('Saved.')}
+                onDirtyChange={guard.onDirtyChange}
+              />
+            </div>
           )}
+          {(view === 'card' || !isCoach) && <RecipeCard tray={tray} system={me.unitSystem} />}
         </div>
         <div className="flex flex-col gap-6">
           <Card className="print:hidden">

@@ -9,9 +9,12 @@ export function useSaveAssembly(id: number | null) {
     mutationFn: (input: AssemblyInput & { version?: number }) =>
       id === null ? api.post<AssemblyDto>('/assemblies', input) : api.put<AssemblyDto>(`/assemblies/${id}`, input),
     meta: { form: true },
+    // The saved plate shows in the list at once, read again behind it without holding up the save's own callbacks
+    // (the editor closes as soon as the save is in: nothing typed is left to ask about).
     onSuccess: (a) => {
       qc.setQueryData(assemblyKeys.detail(a.id), a);
-      return qc.invalidateQueries({ queryKey: assemblyKeys.lists() });
+      qc.setQueriesData<AssemblyDto[]>({ queryKey: assemblyKeys.lists() }, (list) => (Array.isArray(list) ? list.map((p) => (p.id === a.id ? a : p)) : list));
+      void qc.invalidateQueries({ queryKey: assemblyKeys.lists() });
     },
   });
 }

@@ -21,9 +21,12 @@ export function useUpdateClient(id: number) {
   return useMutation({
     mutationFn: (input: UpdateClientInput) => api.patch<ClientDto>(`/clients/${id}`, input),
     meta: { form: true },
+    // The saved profile shows at once; the lists and the published-allergen card are read again without holding up the
+    // save's own callbacks (the form is clean as soon as the save is in: leaving then is not asked about).
     onSuccess: (c) => {
       qc.setQueryData(clientKeys.detail(id), c);
-      return Promise.all([qc.invalidateQueries({ queryKey: clientKeys.lists() }), qc.invalidateQueries({ queryKey: clientKeys.publishedAllergens(id) })]);
+      void qc.invalidateQueries({ queryKey: clientKeys.lists() });
+      void qc.invalidateQueries({ queryKey: clientKeys.publishedAllergens(id) });
     },
   });
 }

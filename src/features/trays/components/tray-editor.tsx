@@ -37,12 +37,14 @@ interface Props {
   /** Saves (with the version to save on, for an existing tray); resolves with the saved tray or rejects with the ApiError. */
   onSave: (values: TrayValues, version?: number) => Promise<TrayDto>;
   onSaved: (tray: TrayDto) => void;
+  /** Told whether the form holds unsaved typing (the page's guard against leaving it). */
+  onDirtyChange?: (dirty: boolean) => void;
 }
 
 /** Per-line facts the unit select needs (piece names, whether a volume can be weighed). */
 type LineFacts = Record<number, PickedIngredient>;
 
-export function TrayEditor({ edit, busy, onSave, onSaved }: Props) {
+export function TrayEditor({ edit, busy, onSave, onSaved, onDirtyChange }: Props) {
   const initial = edit?.base;
   const form: Form = useForm<TrayInput, unknown, TrayValues>({
     resolver: zodResolver(trayInputSchema),
@@ -56,6 +58,7 @@ export function TrayEditor({ edit, busy, onSave, onSaved }: Props) {
   const lines = useFieldArray({ control: form.control, name: 'lines' });
   const errors = form.formState.errors;
   useReportDirty(form.formState.isDirty, edit?.onDirtyChange);
+  useReportDirty(form.formState.isDirty, onDirtyChange);
   // The version shown changed (a newer one followed with nothing typed, theirs reloaded, this save): the form shows it,
   // reset in place (no remount: the keyboard stays where it was).
   const shown = useRef(initial?.version);

@@ -1,0 +1,129 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { act, fireEvent, screen, waitFor } from '@testing-library/react';
+import type { TrayDto } from '@shared/schemas/trays.schema';
+import { Component as TrayPage } from '@/app/routes/trays/tray-detail.route';
+import { LEAVE_QUESTION, useUnsavedGuard, type UnsavedGuard } from '@/lib/use-unsaved-guard';
+import { renderAtRoute, stubVersionedRecord } from './render';
+
+// An invented egg-slab tray, as GET /api/trays/:id answers it.
+const tray = (overrides: Partial<TrayDto> = {}): TrayDto => ({
+  id: 12,
+  name: 'Spinach egg slab',
+  description: '',
+  lines: [{ id: 1, position: 0, ingredientId: 30, ingredientName: 'Egg, whole, raw', amountText: '12', unit: 'each', note: '', grams: 600 }],
+  pan: { code: 'half-sheet', label: 'Half sheet', length: 18, width: 13, unit: 'in' },
+  panLining: 'parchment',
+  bake: { category: 'egg-slab', categoryLabel: 'Egg slab', tempF: 350, minMinutes: 20, maxMinutes: 25 },
+  yieldFactor: 1,
+  cutPlan: { kind: 'grid', rows: 3, columns: 4 },
+  portions: 12,
+  storage: { fridgeDays: 4, freezerWeeks: 8 },
+  reheatSteps: [],
+  reheat: { minF: 165, minC: 74, source: 'FDA Food Code 3-403.11' },
+  allergens: ['egg'],
+  tags: [],
+  photo: null,
+  isDemo: false,
+  archived: false,
+  version: 3,
+  createdAt: '2026-11-01T08:00:00.000Z',
+  updatedAt: '2026-11-01T08:00:00.000Z',
+  ...overrides,
+});
+
+afterEach(() => vi.unstubAllGlobals());
+
+const openTray = () => {
+  stubVersionedRecord('/api/trays/12', tray(), (current, body) => ({ ...current, name: String(body.name) }));
+  return renderAtRoute(<TrayPage />, '/trays/:trayId', '/trays/12');
+};
+
+describe('leaving a page that holds typing', () => {
+  it('asks first; "Cancel" stays with the typing, "OK" leaves', async () => {
+    const confirm = vi.fn(() => false);
+    vi.stubGlobal('confirm', confirm);
+    const { router } = openTray();
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Typed, not saved' } });
+    await screen.findByText('Unsaved changes');
+    await act(() => router.navigate('/trays'));
+    expect(confirm).toHaveBeenCalledWith(LEAVE_QUESTION);
+    expect(router.state.location.pathname).toBe('/trays/12');
+    expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Typed, not saved');
+    confirm.mockReturnValue(true);
+    await act(() => router.navigate('/trays'));
+    await screen.findByText('Another page');
+    expect(router.state.location.pathname).toBe('/trays');
+  });
+
+  it('leaves without asking when nothing is typed, or once the typing is saved', async () => {
+    const confirm = vi.fn(() => false);
+    vi.stubGlobal('confirm', confirm);
+    const { router } = openTray();
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Saved first' } });
+    fireEvent.click(screen.getByRole('button', { name: /^Save/ }));
+    await screen.findByText('Saved.');
+    await waitFor(() => expect(screen.queryByText('Unsaved changes')).toBeNull());
+    await act(() => router.navigate('/trays'));
+    await screen.findByText('Another page');
+    expect(confirm).not.toHaveBeenCalled();
+  });
+
+  it('has the browser ask before the tab is closed or reloaded, only while typing is held', async () => {
+    openTray();
+    const before = () => {
+      const e = new Event('beforeunload', { cancelable: true });
+      window.dispatchEvent(e);
+      return e.defaultPrevented;
+    };
+    await screen.findByLabelText('Name');
+    expect(before()).toBe(false);
+    fireEvent.change(screen.getByLabelText('Name'), { target: { value: 'Typed' } });
+    await waitFor(() => expect(before()).toBe(true));
+  });
+
+  it('keeps the typing while the recipe card is looked at', async () => {
+    openTray();
+    fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Typed, then a look at the card' } });
+    fireEvent.click(screen.getByRole('tab', { name: 'Recipe card' }));
+    fireEvent.click(screen.getByRole('tab', { name: 'Edit' }));
+    // Before, the editor was unmounted by the card view: everything typed was gone.
+    expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Typed, then a look at the card');
+  });
+
+  it('lets the page’s own navigation after a save go unasked (allow), and only that one', async () => {
+    const confirm = vi.fn(() => false);
+    vi.stubGlobal('confirm', confirm);
+    let guard: UnsavedGuard | null = null;
+    function Page() {
+      guard = useUnsavedGuard();
+      return <p>A form holding typing</p>;
+    }
+    const { router } = renderAtRoute(<Page />, '/things/new', '/things/new');
+    await screen.findByText('A form holding typing');
+    act(() => guard!.onDirtyChange(true));
+    // Saved: the page goes to what it made (as a create does) without asking.
+    act(() => guard!.allow());
+    await act(() => router.navigate('/things/7'));
+    expect(router.state.location.pathname).toBe('/things/7');
+    expect(confirm).not.toHaveBeenCalled();
+  });
+
+  it('lets a move within the same page go unasked (another query of the same path)', async () => {
+    const confirm = vi.fn(() => false);
+    vi.stubGlobal('confirm', confirm);
+    let guard: UnsavedGuard | null = null;
+    function Page() {
+      guard = useUnsavedGuard();
+      return <p>A list with a filter</p>;
+    }
+    const { router } = renderAtRoute(<Page />, '/things', '/things');
+    await screen.findByText('A list with a filter');
+    act(() => guard!.onDirtyChange(true));
+    await act(() => router.navigate('/things?page=2'));
+    expect(router.state.location.search).toBe('?page=2');
+    expect(confirm).not.toHaveBeenCalled();
+    await act(() => router.navigate('/elsewhere'));
+    expect(confirm).toHaveBeenCalledTimes(1);
+    expect(router.state.location.pathname).toBe('/things');
+  });
+});
