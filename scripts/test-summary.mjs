@@ -5,7 +5,15 @@ import fs from 'node:fs';
 let passed = 0;
 let failed = 0;
 let skipped = 0;
-const [vitestFile, playwrightFile, checksFile] = process.argv.slice(2);
+const [vitestFile, playwrightFile, checksFile, vitestRcFile] = process.argv.slice(2);
+
+function readText(file) {
+  try {
+    return fs.readFileSync(file, 'utf8');
+  } catch {
+    return null;
+  }
+}
 
 function read(file) {
   try {
@@ -24,6 +32,13 @@ if (v) {
   ).length;
   failed += (v.numFailedTests ?? 0) + brokenFiles;
   skipped += (v.numPendingTests ?? 0) + (v.numTodoTests ?? 0);
+  // Vitest failed the run with no failed test in its report: an error outside any test (an unhandled error or
+  // rejection a test left behind). Counted as one failure, so the closing line agrees with the exit status.
+  const rc = vitestRcFile ? Number(readText(vitestRcFile)?.trim() ?? '0') : 0;
+  if (rc !== 0 && (v.numFailedTests ?? 0) + brokenFiles === 0) {
+    failed += 1;
+    console.error(`vitest exited with ${rc} and no failed test: an error outside the tests (see "Errors" above), counted as one failure`);
+  }
 } else {
   failed += 1;
   console.error('vitest report missing: counted as one failure');
