@@ -11,6 +11,11 @@ export interface UnsavedGuard {
   dirty: boolean;
   /** The page's own next navigation goes unasked (it follows a save, or a delete already confirmed). */
   allow: () => void;
+  /**
+   * An inline form is about to close or give way to another (not a navigation): true when nothing is typed or the
+   * person agrees to `question` (the typing is then dropped), false to keep it.
+   */
+  drop: (question: string) => boolean;
 }
 
 /**
@@ -50,7 +55,12 @@ export function useUnsavedGuard(): UnsavedGuard {
   const allow = useCallback(() => {
     allowed.current = true;
   }, []);
-  return { onDirtyChange: setDirty, dirty, allow };
+  const drop = (question: string) => {
+    if (dirty && !window.confirm(question)) return false;
+    setDirty(false);
+    return true;
+  };
+  return { onDirtyChange: setDirty, dirty, allow, drop };
 }
 
 /** One `onDirtyChange` that tells two listeners (the edit base and the guard). */

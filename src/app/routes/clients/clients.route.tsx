@@ -101,8 +101,7 @@ export function Component() {
       <PageHeader title="Clients" lead="Profiles, daily targets, allergens and dislikes.">
         <Button
           onClick={() => {
-            if (adding && guard.dirty && !window.confirm('Close the new client? What you typed is not saved.')) return;
-            if (adding) guard.onDirtyChange(false);
+            if (adding && !guard.drop('Close the new client? What you typed is not saved.')) return;
             setAdding((a) => !a);
           }}
           aria-expanded={adding}

@@ -53,7 +53,7 @@ function NewPlate({ onDone, onDirtyChange }: { onDone: () => void; onDirtyChange
 }
 
 /** This coach's own archive or restore of a plate (from its card): typing in its editor carries over. */
-export interface OwnPlateChange {
+interface OwnPlateChange {
   id: number;
   before: number;
   /** The plate saved; null when the change failed; undefined while it is under way. */
@@ -66,7 +66,7 @@ function EditPlate({ plate, own, onDone, onDirtyChange }: { plate: AssemblyDto; 
   const edit = useEditBase<AssemblyDto, AssemblyValues>(plate);
   const tellBoth = useTellBoth(edit.onDirtyChange, onDirtyChange);
   const { send, formError, busy } = usePlateSave(plate.id, onDone, edit.refused);
-  const [seen, setSeen] = useState<OwnPlateChange | null>(null);
+  const [seen, setSeen] = useState(own);
   if (own !== seen) {
     setSeen(own);
     if (own?.id === plate.id) {
@@ -117,8 +117,7 @@ export function Component() {
   /** Opens another plate's editor, a new one, or none: typing in the open one is dropped only when the coach says so. */
   const openEditor = (next: AssemblyDto | 'new' | null) => {
     const what = editing === 'new' ? 'the new plate' : `“${editing?.name}”`;
-    if (editing && guard.dirty && !window.confirm(`Drop what you typed in ${what}? It is not saved.`)) return;
-    guard.onDirtyChange(false);
+    if (editing && !guard.drop(`Drop what you typed in ${what}? It is not saved.`)) return;
     setEditing(next);
   };
   /** Saved: the editor closes (nothing typed is left behind). */

@@ -17,7 +17,7 @@ import type { TrayDto, TrayValues } from '@shared/schemas/trays.schema';
 import { Button } from '@/components/ui/button';
 import { Card, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
-import { useUnsavedGuard } from '@/lib/use-unsaved-guard';
+import { useTellBoth, useUnsavedGuard } from '@/lib/use-unsaved-guard';
 
 /** One base tray: the editor (coach) or the recipe (assistant, client), the portion card, scaling and a print view. */
 export function Component() {
@@ -44,6 +44,7 @@ function TrayPage({ tray }: { tray: TrayDto }) {
   // or restore carries the typing over (their change, not someone else's: no stale notice).
   const edit = useEditBase<TrayDto, TrayValues>(tray);
   const guard = useUnsavedGuard();
+  const onDirtyChange = useTellBoth(edit.onDirtyChange, guard.onDirtyChange);
   const isCoach = me.role === 'coach';
 
   const setArchived = (archived: boolean) => {
@@ -136,7 +137,7 @@ function TrayPage({ tray }: { tray: TrayDto }) {
                 busy={update.isPending}
                 onSave={(values, version) => update.mutateAsync({ ...values, version: version ?? edit.sendVersion })}
                 onSaved={() => setNotice('Saved.')}
-                onDirtyChange={guard.onDirtyChange}
+                onDirtyChange={onDirtyChange}
               />
             </div>
           )}

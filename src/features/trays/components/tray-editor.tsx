@@ -37,7 +37,7 @@ interface Props {
   /** Saves (with the version to save on, for an existing tray); resolves with the saved tray or rejects with the ApiError. */
   onSave: (values: TrayValues, version?: number) => Promise<TrayDto>;
   onSaved: (tray: TrayDto) => void;
-  /** Told whether the form holds unsaved typing (the page's guard against leaving it). */
+  /** Told whether the form holds unsaved typing (the edit base's and the page's guard, for an existing tray). */
   onDirtyChange?: (dirty: boolean) => void;
 }
 
@@ -57,7 +57,6 @@ export function TrayEditor({ edit, busy, onSave, onSaved, onDirtyChange }: Props
   const [formError, setFormError] = useState<string | null>(null);
   const lines = useFieldArray({ control: form.control, name: 'lines' });
   const errors = form.formState.errors;
-  useReportDirty(form.formState.isDirty, edit?.onDirtyChange);
   useReportDirty(form.formState.isDirty, onDirtyChange);
   // The version shown changed (a newer one followed with nothing typed, theirs reloaded, this save): the form shows it,
   // reset in place (no remount: the keyboard stays where it was).
