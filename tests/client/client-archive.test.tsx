@@ -313,3 +313,22 @@ describe('a newer version arriving while the profile is open (a refetch on focus
     expect(screen.queryByText(/Someone else saved/)).toBeNull();
   });
 });
+
+describe('the invitation card’s e-mail', () => {
+  it('shows the e-mail saved on the profile since the page opened, and keeps one being typed', async () => {
+    const { state } = serveProfile();
+    const { qc } = renderProfile();
+    const invite = (await screen.findByLabelText('E-mail')) as HTMLInputElement;
+    expect(invite.value).toBe('');
+    // Saved in the form above: the invitation goes to the address just saved, not to the empty box it opened with.
+    fireEvent.change(screen.getByLabelText('E-mail (for the invitation)'), { target: { value: 'olga@example.test' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    await waitFor(() => expect((screen.getByLabelText('E-mail') as HTMLInputElement).value).toBe('olga@example.test'));
+    // Typed here, then changed on the profile elsewhere: what was typed stays.
+    fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: 'olga.home@example.test' } });
+    state.current = profile({ ...state.current, email: 'olga.work@example.test', version: state.current.version + 1 });
+    await act(() => qc.invalidateQueries());
+    await waitFor(() => expect((screen.getByLabelText('E-mail (for the invitation)') as HTMLInputElement).value).toBe('olga.work@example.test'));
+    expect((screen.getByLabelText('E-mail') as HTMLInputElement).value).toBe('olga.home@example.test');
+  });
+});

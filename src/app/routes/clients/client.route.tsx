@@ -20,6 +20,7 @@ import { paths } from '@/config/paths';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { dateWithYearLabel, instantDayLabel } from '@/lib/dates';
+import { useFollowedText } from '@/lib/use-followed-text';
 import { useTellBoth, useUnsavedGuard } from '@/lib/use-unsaved-guard';
 
 /** What archiving a client does, said where the coach archives and on an archived profile. */
@@ -28,7 +29,8 @@ const ARCHIVE_MEANS =
 
 function InviteCard({ client }: { client: ClientDto }) {
   const invite = useInviteClient(client.id);
-  const [email, setEmail] = useState(client.email ?? '');
+  // The profile's e-mail, saved since this page opened (the form above, someone else), shows here unless one is typed.
+  const [email, setEmail] = useFollowedText(client.email ?? '');
   const [link, setLink] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   if (client.archivedAt && !client.account) {

@@ -12,6 +12,7 @@ import { TextField } from '@/components/ui/field';
 import { ErrorState, Notice } from '@/components/ui/states';
 import { coolingQuery, useClearCooling, useSaveCooling } from '../api/cooling';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
+import { useFollowedText } from '@/lib/use-followed-text';
 import { currentClockStyle, currentKitchenZone, deviceNow, kitchenNow, kitchenToday, timeLabel } from '@/lib/dates';
 import { addDays } from '@shared/domain/iso-date';
 import { clock, formatTemp, type TempUnit } from './temperature';
@@ -115,13 +116,8 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
 }) {
   const [temp, setTemp] = useState('');
   const [time, setTime] = useState('');
-  const [note, setNote] = useState(record.note);
-  const [noteSeen, setNoteSeen] = useState(record.note);
   // A note changed elsewhere (the page refreshes while the tray cools) shows here unless one is being typed.
-  if (record.note !== noteSeen) {
-    setNoteSeen(record.note);
-    if (note === noteSeen) setNote(record.note);
-  }
+  const [note, setNote] = useFollowedText(record.note);
   const [restart, setRestart] = useState('');
   const fieldErrors = isApiError(error, 400) ? error.fieldErrors : {};
   const readingError = Object.entries(fieldErrors).find(([k]) => k.startsWith('readings.'))?.[1]?.[0];
