@@ -167,13 +167,17 @@ describe('two people editing one profile', () => {
     // The page heading shows theirs; the form still holds what was typed.
     await screen.findByRole('heading', { name: 'Olga Theirs' });
     expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Mine');
-    fireEvent.click(screen.getByRole('button', { name: 'Keep mine and save again' }));
+    const keep = screen.getByRole('button', { name: 'Keep mine and save again' });
+    keep.focus();
+    fireEvent.click(keep);
     await screen.findByRole('heading', { name: 'Olga Mine' });
     expect(patches.map((p) => [p.name, p.version])).toEqual([
       ['Olga Mine', 3],
       ['Olga Mine', 4],
     ]);
     expect(screen.queryByText('Someone else saved this profile while you were editing')).toBeNull();
+    // The notice answered goes; the keyboard goes on to the form it was about, not back to the top of the page.
+    await waitFor(() => expect(document.activeElement).toBe(screen.getByLabelText('Name')));
   });
 
   it('loads their version when asked', async () => {
@@ -181,9 +185,12 @@ describe('two people editing one profile', () => {
     renderProfile();
     fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
     fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
-    fireEvent.click(await screen.findByRole('button', { name: 'Reload their version' }));
+    const reload = await screen.findByRole('button', { name: 'Reload their version' });
+    reload.focus();
+    fireEvent.click(reload);
     await waitFor(() => expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Olga Theirs'));
     expect(screen.queryByText('Someone else saved this profile while you were editing')).toBeNull();
+    await waitFor(() => expect(document.activeElement).toBe(screen.getByLabelText('Name')));
   });
 
   it('keeps what was typed when the coach archives or restores the client meanwhile, and saves it on the new version', async () => {

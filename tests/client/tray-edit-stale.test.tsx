@@ -41,12 +41,17 @@ describe('the tray editor and saves made meanwhile', () => {
     fireEvent.click(screen.getByRole('button', { name: /^Save/ }));
     expect(await screen.findByText('Someone else saved this tray while you were editing')).toBeTruthy();
     expect((screen.getByLabelText('Name') as HTMLInputElement).value).toBe('Mine');
-    fireEvent.click(screen.getByRole('button', { name: 'Keep mine and save again' }));
+    const keep = screen.getByRole('button', { name: 'Keep mine and save again' });
+    keep.focus();
+    fireEvent.click(keep);
     await waitFor(() => expect(writes).toHaveLength(2));
     expect(writes.map((p) => [p.name, p.version])).toEqual([
       ['Mine', 3],
       ['Mine', 4],
     ]);
+    // The notice goes once the save is in; the keyboard goes on to the tray's first field.
+    await waitFor(() => expect(screen.queryByText('Someone else saved this tray while you were editing')).toBeNull());
+    await waitFor(() => expect(document.activeElement).toBe(screen.getByLabelText('Name')));
   });
 
   it('follows a newer version at once when nothing is typed', async () => {

@@ -1,4 +1,4 @@
-import { useEffect, useRef, type ReactNode } from 'react';
+import { useEffect, useLayoutEffect, useRef, type ReactNode } from 'react';
 import { Button } from './button';
 import { Notice } from './states';
 
@@ -12,15 +12,57 @@ import { Notice } from './states';
  */
 export function RevealedAlert({ children }: { children: ReactNode }) {
   const ref = useRef<HTMLDivElement>(null);
+  // Whether the keyboard is in the alert (a focused button turned busy loses focus to the page without leaving it).
+  const holdsKeyboard = useRef(false);
   useEffect(() => {
     ref.current?.scrollIntoView?.({ block: 'center' });
     ref.current?.focus({ preventScroll: true });
   }, []);
+  // Answered (its own buttons make it go): the keyboard goes on to what follows it (the form it was about) rather
+  // than to the top of the page. A layout effect's cleanup runs while the alert is still in the document.
+  useLayoutEffect(() => {
+    const node = ref.current;
+    return () => {
+      if (!node || !holdsKeyboard.current) return;
+      const active = document.activeElement;
+      if (active && active !== document.body && !node.contains(active)) return;
+      const place = { parent: node.parentElement, next: node.nextElementSibling };
+      setTimeout(() => focusFollowing(place));
+    };
+  }, []);
   return (
-    <div role="alert" ref={ref} tabIndex={-1} className="scroll-mt-20 outline-none">
+    <div
+      role="alert"
+      ref={ref}
+      tabIndex={-1}
+      className="scroll-mt-20 outline-none"
+      onFocus={() => (holdsKeyboard.current = true)}
+      onBlur={(e) => {
+        if (e.relatedTarget && !e.currentTarget.contains(e.relatedTarget as Node)) holdsKeyboard.current = false;
+      }}
+    >
       {children}
     </div>
   );
+}
+
+const FOCUSABLE = 'input:not([type="hidden"]):not([disabled]), select:not([disabled]), textarea:not([disabled]), button:not([disabled]), a[href]';
+
+/** Puts the keyboard on the first field or button after where an alert was, unless something else took it meanwhile. */
+function focusFollowing({ parent, next }: { parent: Element | null; next: Element | null }) {
+  const active = document.activeElement;
+  if (active && active !== document.body) return;
+  // Nothing after it, or what followed it went too: the keyboard stays where the browser put it.
+  if (!parent?.isConnected || !next || next.parentElement !== parent) return;
+  const siblings = Array.from(parent.children);
+  for (const el of siblings.slice(siblings.indexOf(next))) {
+    const target = el.matches(FOCUSABLE) ? el : el.querySelector(FOCUSABLE);
+    if (target instanceof HTMLElement) {
+      target.focus({ preventScroll: true });
+      target.scrollIntoView?.({ block: 'nearest' });
+      return;
+    }
+  }
 }
 
 export function StaleEditNotice({ what, version, busy, onReload, onKeep }: { what: string; version: number; busy?: boolean; onReload: () => void; onKeep: () => void }) {
