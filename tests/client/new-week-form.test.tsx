@@ -1,10 +1,10 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { act, fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { MemoryRouter, Route, Routes } from 'react-router-dom';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { Component as WeeksPage } from '@/app/routes/weeks/weeks.route';
 import { Component as WeekPage } from '@/app/routes/weeks/week.route';
-import { jsonResponse, queryClientFor, renderInApp, signedIn } from './render';
+import { jsonResponse, queryClientFor, renderAtRoute, renderInApp, signedIn } from './render';
 
 // The coach's "New week" form; an invented coach, "today" pinned with fake timers (Wednesday 2 December 2026).
 const coach = signedIn();
@@ -133,6 +133,28 @@ describe('new week form', () => {
     // Its prep days shifted (Sun 6 Dec, Wed 9 Dec): the first is gone by, so today; the second, today too, is dropped.
     expect(field('Prep day').value).toBe('2026-12-09');
     expect(field('Second prep day').value).toBe('');
+  });
+
+  it('follows the address: the menu link from a copy form opens a new empty week, unless another week was picked', async () => {
+    const earlier = {
+      id: 4, name: 'Week of 30 Nov', startDate: '2026-11-30', endDate: '2026-12-06', prepDate: '2026-11-29', secondPrepDate: null,
+      publishedVersion: 1, publishedAt: null, changedSincePublished: false, cellCount: 14, version: 3,
+    };
+    const later = { ...earlier, id: 5, name: 'Week of 7 Dec', startDate: '2026-12-07', endDate: '2026-12-13', prepDate: '2026-12-06' };
+    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse([earlier, later])));
+    const { router } = renderAtRoute(<WeeksPage />, '/weeks', '/weeks?from=4', coach);
+    const from = () => screen.getByLabelText('Start from') as HTMLSelectElement;
+    await waitFor(() => expect(from().value).toBe('4'));
+    await act(() => router.navigate('/weeks'));
+    await waitFor(() => expect(from().value).toBe(''));
+    expect(screen.getByRole('button', { name: 'Create' })).toBeTruthy();
+    // Opened from the later week's board, then the earlier one picked here: the coach's pick stays.
+    await act(() => router.navigate('/weeks?from=5'));
+    await waitFor(() => expect(from().value).toBe('5'));
+    fireEvent.change(from(), { target: { value: '4' } });
+    await act(() => router.navigate('/weeks'));
+    expect(from().value).toBe('4');
+    expect(screen.getByRole('button', { name: 'Copy' })).toBeTruthy();
   });
 
   it('opens the copied week saying what came over and what stayed behind', async () => {

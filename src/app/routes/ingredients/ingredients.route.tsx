@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import {
@@ -20,6 +20,7 @@ import { Pager } from '@/components/ui/pager';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
+import { useFollowedText } from '@/lib/use-followed-text';
 
 const PAGE_SIZE = 25;
 type Scope = 'all' | 'mine' | 'shared';
@@ -54,7 +55,8 @@ export function Component() {
   const me = useMe();
   const isCoach = me.role === 'coach';
   const { filters, update } = useFilters();
-  const [search, setSearch] = useState(filters.q);
+  // The address's search shown in the box: it follows a new address (the menu's "Ingredients" link, Back) unless typed.
+  const [search, setSearch] = useFollowedText(filters.q);
   useEffect(() => {
     const t = setTimeout(() => {
       if (search !== filters.q) update({ q: search });

@@ -14,6 +14,7 @@ import { Card, EmptyState, Notice, PageHeader, QueryView, Skeleton } from '@/com
 import { isApiError, errorMessage, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { dayLabel } from '@/lib/dates';
+import { useFollowedText } from '@/lib/use-followed-text';
 
 /** A date of the source week moved to the new board: the same day of the week. */
 function shifted(source: WeekSummaryDto, date: string | null, startDate: string): string {
@@ -29,8 +30,9 @@ export function Component() {
   const navigate = useNavigate();
   const [params] = useSearchParams();
   const [form, setForm] = useState({ name: '', startDate: '', prepDate: '', secondPrepDate: '' });
-  // "Copy to a new week" on a board opens this page with ?from=<id>: the form starts from that week.
-  const [fromId, setFromId] = useState(params.get('from') ?? '');
+  // "Copy to a new week" on a board opens this page with ?from=<id>: the form starts from that week (and follows the
+  // address, the menu's "Prep weeks" link from here included, unless another week was picked here).
+  const [fromId, setFromId] = useFollowedText(params.get('from') ?? '');
   const source = list.data?.find((w) => String(w.id) === fromId) ?? null;
   // Until the coach picks them: the board starts on the first Monday no week plans yet; a copy's prep days fall on
   // the same days of the week as its source's, a new board's the day before it starts.
