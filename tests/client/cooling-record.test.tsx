@@ -148,6 +148,33 @@ describe('the cooling record on prep day', () => {
     await qc.invalidateQueries();
     await screen.findByText('Note: Another note');
     expect((await field()).value).toBe('Moved to the walk-in at 10:05; lid on');
+    // Saving it would replace theirs: the box says so, and the save asks first (here: not now).
+    expect(screen.getByText('Someone else changed the note meanwhile (shown below); saving puts yours in its place.')).toBeTruthy();
+    const confirm = vi.fn(() => false);
+    vi.stubGlobal('confirm', confirm);
+    fireEvent.click(screen.getByRole('button', { name: 'Save note' }));
+    expect(confirm).toHaveBeenCalledWith('The note was changed meanwhile to “Another note”. Put yours in its place?');
+    expect(puts()).toHaveLength(0);
+    // Asked again and meant: saved, and the box is plain again.
+    confirm.mockReturnValue(true);
+    fireEvent.click(screen.getByRole('button', { name: 'Save note' }));
+    await waitFor(() => expect(puts()).toHaveLength(1));
+    expect(puts()[0][1]).toMatchObject({ note: 'Moved to the walk-in at 10:05; lid on', version: 3 });
+    await screen.findByText('Note: Moved to the walk-in at 10:05; lid on');
+    expect(screen.queryByText(/saving puts yours in its place/)).toBeNull();
+  });
+
+  it('saves a note without asking when nobody else changed it meanwhile', async () => {
+    records = [record()];
+    const confirm = vi.fn(() => true);
+    vi.stubGlobal('confirm', confirm);
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />);
+    fireEvent.change(await screen.findByLabelText('Note'), { target: { value: 'Lid on at 10:20' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save note' }));
+    await waitFor(() => expect(puts()).toHaveLength(1));
+    expect(confirm).not.toHaveBeenCalled();
+    await screen.findByText('Note: Lid on at 10:20');
+    expect(screen.queryByText(/saving puts yours in its place/)).toBeNull();
   });
 
   it('throws a tray away, and says its portions no longer count and who is told', async () => {

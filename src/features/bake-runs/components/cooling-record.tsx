@@ -117,7 +117,7 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
   const [temp, setTemp] = useState('');
   const [time, setTime] = useState('');
   // A note changed elsewhere (the page refreshes while the tray cools) shows here unless one is being typed.
-  const [note, setNote] = useFollowedText(record.note);
+  const [note, setNote, noteEdit] = useFollowedText(record.note);
   const [restart, setRestart] = useState('');
   const fieldErrors = isApiError(error, 400) ? error.fieldErrors : {};
   const readingError = Object.entries(fieldErrors).find(([k]) => k.startsWith('readings.'))?.[1]?.[0];
@@ -234,10 +234,21 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
           aria-label={`Note for ${record.trayName}`}
           onSubmit={(e) => {
             e.preventDefault();
+            // Someone else's note came in while this one was typed: it is replaced only when asked.
+            const theirs = record.note ? `changed meanwhile to “${record.note}”` : 'removed meanwhile';
+            if (noteEdit.changedUnderTyping && !window.confirm(`The note was ${theirs}. Put yours in its place?`)) return;
             write({ note });
           }}
         >
-          <TextField label="Note" value={note} maxLength={500} onChange={(e) => setNote(e.target.value)} error={fieldErrors.note?.[0]} className="min-w-64 flex-1" />
+          <TextField
+            label="Note"
+            value={note}
+            maxLength={500}
+            onChange={(e) => setNote(e.target.value)}
+            error={fieldErrors.note?.[0]}
+            hint={noteEdit.changedUnderTyping ? `Someone else ${record.note ? 'changed the note meanwhile (shown below)' : 'removed the note meanwhile'}; saving puts yours in its place.` : undefined}
+            className="min-w-64 flex-1"
+          />
           <Button type="submit" variant="secondary" busy={busy}>
             Save note
           </Button>
