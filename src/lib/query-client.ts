@@ -8,7 +8,7 @@ import { ApiError, errorMessage, wasShown } from './problem';
  * else becomes a toast here, once.
  */
 export function createQueryClient() {
-  return new QueryClient({
+  const client: QueryClient = new QueryClient({
     defaultOptions: {
       queries: {
         staleTime: 30_000,
@@ -27,12 +27,23 @@ export function createQueryClient() {
           if (!wasShown(err)) toast.error(errorMessage(err));
         }, 0);
       },
+      // A saved change can move numbers that other pages show from their own reads (a tray's amounts move its plates'
+      // macros, the week board's cells and checks, the shopping list; a client's allergens the board's warnings):
+      // every read in the cache is marked stale, so the next page that shows one reads it again, not 30 s later.
+      // Nothing is read again now (the page on screen refreshes what it shows through its own mutation's callbacks);
+      // a calculation that stores nothing (meta.readOnly) leaves the cache as it is.
+      onSuccess: (_data, _vars, _ctx, mutation) => {
+        if (mutation.meta?.readOnly) return;
+        void client.invalidateQueries({ refetchType: 'none' });
+      },
     }),
   });
+  return client;
 }
 
 declare module '@tanstack/react-query' {
   interface Register {
-    mutationMeta: { form?: boolean; silent?: boolean };
+    /** form: field errors go onto the form; silent: the page shows every failure; readOnly: computes, stores nothing. */
+    mutationMeta: { form?: boolean; silent?: boolean; readOnly?: boolean };
   }
 }

@@ -41,6 +41,6 @@ export function useArchiveAssembly() {
 export function usePlatePreview() {
   return useMutation({
     mutationFn: (input: PlatePreviewInput) => api.post<PlatePreviewDto>('/assemblies/preview', input),
-    meta: { silent: true },
+    meta: { silent: true, readOnly: true },
   });
 }

@@ -22,7 +22,7 @@ export type CalcBakeRunBody = Omit<BakeRunRequestBody, 'trays'> & { trays: CalcT
 export function useCalcBakeRun() {
   return useMutation({
     mutationFn: (body: CalcBakeRunBody) => api.post<BakeRunResult>('/calc/bake-run', body),
-    meta: { form: true, silent: true },
+    meta: { form: true, silent: true, readOnly: true },
   });
 }
 

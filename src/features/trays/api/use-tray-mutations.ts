@@ -85,7 +85,7 @@ export function useUploadTrayPhoto(id: number) {
 export function useScaleTray(id: number) {
   return useMutation({
     mutationFn: (input: ScaleTrayInput) => api.post<ScaleResultDto>(`/trays/${id}/scale`, input),
-    meta: { form: true },
+    meta: { form: true, readOnly: true },
   });
 }
 
@@ -93,6 +93,6 @@ export function useScaleTray(id: number) {
 export function useRecipePreview() {
   return useMutation({
     mutationFn: (input: RecipeCalcInput) => api.post<RecipeCalcDto>('/calc/recipe', input),
-    meta: { silent: true },
+    meta: { silent: true, readOnly: true },
   });
 }
