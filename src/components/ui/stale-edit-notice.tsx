@@ -10,7 +10,7 @@ import { Notice } from './states';
  * An alert about an action pressed far from where the alert shows (a Save at the foot of a long form, a card low on a
  * long page): brought into view when it appears, with the keyboard on it.
  */
-export function RevealedAlert({ children }: { children: ReactNode }) {
+export function RevealedAlert({ children, handOn = false }: { children: ReactNode; handOn?: boolean }) {
   const ref = useRef<HTMLDivElement>(null);
   // Whether the keyboard is in the alert (a focused button turned busy loses focus to the page without leaving it).
   const holdsKeyboard = useRef(false);
@@ -18,18 +18,18 @@ export function RevealedAlert({ children }: { children: ReactNode }) {
     ref.current?.scrollIntoView?.({ block: 'center' });
     ref.current?.focus({ preventScroll: true });
   }, []);
-  // Answered (its own buttons make it go): the keyboard goes on to what follows it (the form it was about) rather
-  // than to the top of the page. A layout effect's cleanup runs while the alert is still in the document.
+  // `handOn`: answered (its own buttons make it go), the keyboard goes on to what follows it (the form it was about)
+  // rather than to the top of the page. A layout effect's cleanup runs while the alert is still in the document.
   useLayoutEffect(() => {
     const node = ref.current;
     return () => {
-      if (!node || !holdsKeyboard.current) return;
+      if (!handOn || !node || !holdsKeyboard.current) return;
       const active = document.activeElement;
       if (active && active !== document.body && !node.contains(active)) return;
       const place = { parent: node.parentElement, next: node.nextElementSibling };
       setTimeout(() => focusFollowing(place));
     };
-  }, []);
+  }, [handOn]);
   return (
     <div
       role="alert"
@@ -67,7 +67,7 @@ function focusFollowing({ parent, next }: { parent: Element | null; next: Elemen
 
 export function StaleEditNotice({ what, version, busy, onReload, onKeep }: { what: string; version: number; busy?: boolean; onReload: () => void; onKeep: () => void }) {
   return (
-    <RevealedAlert>
+    <RevealedAlert handOn>
       <Notice tone="warn" title={`Someone else saved this ${what} while you were editing`}>
         <p>Their version ({version}) is saved. Your changes are still here in the form: nothing is lost.</p>
         <div className="mt-2 flex flex-wrap gap-2">
