@@ -1,6 +1,7 @@
 import { isRouteErrorResponse, Link, useRouteError } from 'react-router-dom';
 import { ErrorState } from '@/components/ui/states';
 import { paths } from '@/config/paths';
+import { useDocumentTitle } from '@/lib/use-document-title';
 
 /** Per-route error boundary: a section's failure stays in that section. */
 export function RouteError() {
@@ -14,6 +15,7 @@ export function RouteError() {
 }
 
 export function NotFoundPage() {
+  useDocumentTitle('Page not found');
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-4 p-8">
       <h1 className="text-3xl">Nothing on this tray</h1>

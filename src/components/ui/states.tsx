@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { errorMessage } from '@/lib/problem';
+import { useDocumentTitle } from '@/lib/use-document-title';
 import { Button } from './button';
 
 /** Placeholder blocks while data loads. */
@@ -77,7 +78,9 @@ export function CheckFailed({ title, retry }: { title: string; retry: () => void
   );
 }
 
-export function PageHeader({ title, children, lead }: { title: string; lead?: ReactNode; children?: ReactNode }) {
+/** A page's heading; its title is the browser tab's too, unless `tabTitle` names the tab otherwise. */
+export function PageHeader({ title, children, lead, tabTitle }: { title: string; lead?: ReactNode; children?: ReactNode; tabTitle?: string }) {
+  useDocumentTitle(tabTitle ?? title);
   return (
     <header className="flex flex-wrap items-end justify-between gap-3">
       <div>

@@ -1,7 +1,9 @@
 import type { ReactNode } from 'react';
 import { TrayMark } from '@/app/layout/app-shell';
+import { useDocumentTitle } from '@/lib/use-document-title';
 
 export function AuthLayout({ title, children, lead }: { title: string; lead?: ReactNode; children: ReactNode }) {
+  useDocumentTitle(title);
   return (
     <main className="flex min-h-screen items-start justify-center px-4 py-10 md:items-center">
       <div className="w-full max-w-md">

@@ -15,7 +15,7 @@ export function Component() {
   const links = NAV.filter((n) => n.roles.includes(me.role) && n.to !== paths.home);
   return (
     <div className="flex flex-col gap-6">
-      <PageHeader title={`Hello, ${me.name.split(' ')[0]}`} lead={me.workspaceName} />
+      <PageHeader title={`Hello, ${me.name.split(' ')[0]}`} tabTitle="This week" lead={me.workspaceName} />
       {me.role === 'coach' && <FirstSteps />}
       {me.role === 'coach' && <WeekGlance />}
       {me.role === 'assistant' && <KitchenGlance />}
