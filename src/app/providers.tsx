@@ -7,7 +7,14 @@ import { onUnauthorized } from '@/lib/api-client';
 import { authKeys } from '@/features/auth/api/auth.keys';
 import { followDateOrder } from '@/features/auth/api/auth.queries';
 import { paths } from '@/config/paths';
+import { followUnauthorized, SessionGate } from '@/features/auth/components/session-ended';
 import { createRouter } from './router';
+
+/** The sign-in page, then back to where the router is. */
+function signInPath(router: ReturnType<typeof createRouter>) {
+  const here = router.state.location;
+  return `${paths.signIn}?next=${encodeURIComponent(here.pathname + here.search + here.hash)}`;
+}
 
 export function AppProviders() {
   const [queryClient] = useState(() => {
@@ -18,20 +25,22 @@ export function AppProviders() {
   const [router] = useState(() => createRouter(queryClient));
   useEffect(
     () =>
-      // A 401 anywhere: forget the session and go to sign-in, then come back here.
-      onUnauthorized(() => {
-        queryClient.setQueryData(authKeys.me(), null);
-        const here = router.state.location;
-        if (here.pathname !== paths.signIn) {
-          const next = encodeURIComponent(here.pathname + here.search + here.hash);
-          void router.navigate(`${paths.signIn}?next=${next}`);
-        }
-      }),
+      // A 401 anywhere: under a signed-in page, the "Signed out" dialog (the page and its typing stay); with nobody
+      // signed in, the sign-in page.
+      onUnauthorized(
+        followUnauthorized(queryClient, () => {
+          queryClient.setQueryData(authKeys.me(), null);
+          if (router.state.location.pathname !== paths.signIn) void router.navigate(signInPath(router));
+        }),
+      ),
     [queryClient, router],
   );
   return (
     <QueryClientProvider client={queryClient}>
-      <RouterProvider router={router} />
+      {/* Someone else signing in: a fresh load of the sign-in page (the browser asks first if typing would go). */}
+      <SessionGate signInElsewhere={() => window.location.assign(signInPath(router))}>
+        <RouterProvider router={router} />
+      </SessionGate>
       <Toaster position="top-center" richColors closeButton />
     </QueryClientProvider>
   );

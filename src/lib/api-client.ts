@@ -3,13 +3,20 @@ import { ApiError } from './problem';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
-/** Listeners told about a 401 anywhere (the router sends the person to sign-in and back). */
-const unauthorizedListeners = new Set<() => void>();
-export function onUnauthorized(fn: () => void) {
+/**
+ * Listeners told about a 401 anywhere but the sign-in calls: `fromMe` when it was the signed-in check itself
+ * (GET /auth/me, which answers a 401 as "nobody" rather than as an error).
+ */
+type UnauthorizedListener = (how: { fromMe: boolean }) => void;
+const unauthorizedListeners = new Set<UnauthorizedListener>();
+export function onUnauthorized(fn: UnauthorizedListener) {
   unauthorizedListeners.add(fn);
   return () => {
     unauthorizedListeners.delete(fn);
   };
+}
+export function notifyUnauthorized(how: { fromMe: boolean }) {
+  unauthorizedListeners.forEach((fn) => fn(how));
 }
 
 async function request<T>(method: Method, path: string, body?: unknown, init: RequestInit = {}): Promise<T> {
@@ -43,7 +50,7 @@ async function request<T>(method: Method, path: string, body?: unknown, init: Re
       typeof data === 'object' && data && 'status' in data
         ? (data as Problem)
         : { type: 'about:blank', title: res.statusText, status: res.status, code: 'http', detail: String(data) };
-    if (res.status === 401 && !path.startsWith('/auth/')) unauthorizedListeners.forEach((fn) => fn());
+    if (res.status === 401 && !path.startsWith('/auth/')) notifyUnauthorized({ fromMe: false });
     throw new ApiError(problem);
   }
   return data as T;

@@ -4,7 +4,7 @@ import { setClockStyle, setDateOrder, setKitchenZone } from '@/lib/dates';
 import { setTempScale } from '@/lib/temp-scale';
 import { DEFAULT_CLOCK } from '@shared/domain/clock';
 import type { InvitationDto, MeDto, MemberDto, MyWorkspaceDto, Role } from '@shared/schemas/auth.schema';
-import { api } from '@/lib/api-client';
+import { api, notifyUnauthorized } from '@/lib/api-client';
 import { isApiError } from '@/lib/problem';
 import { authKeys } from './auth.keys';
 
@@ -16,7 +16,11 @@ export const meQuery = () =>
       try {
         return await api.get<MeDto>('/auth/me');
       } catch (e) {
-        if (isApiError(e, 401)) return null;
+        if (isApiError(e, 401)) {
+          // Read again under an open page (window focus): the session ended there (see session-ended.tsx).
+          notifyUnauthorized({ fromMe: true });
+          return null;
+        }
         throw e;
       }
     },
