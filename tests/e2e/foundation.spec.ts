@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test';
-import { signIn, SHOTS } from './support';
+import { expectNoSeriousA11yViolations, signIn, SHOTS } from './support';
 
 test('the SPA loads with our fonts, and an unknown page shows the 404 page', async ({ page }) => {
   await page.goto('/sign-in');
@@ -28,4 +28,32 @@ test('navigation follows the role: the assistant has no team page', async ({ pag
   await page.screenshot({ path: `${SHOTS}/assistant-home.png`, fullPage: true });
   await page.goto('/team');
   await expect(page.getByRole('heading', { name: 'Nothing on this tray' })).toBeVisible();
+});
+
+test('signed out in another tab while typing: the page and its typing stay, the coach signs in again there and saves', async ({ page }) => {
+  await signIn(page, 'coach@trayline.test');
+  await page.getByRole('link', { name: 'Base trays' }).first().click();
+  await page.getByRole('link', { name: 'Cream-cheese almond batter slab' }).first().click();
+  const method = page.getByLabel('Description and method');
+  await method.fill('Whisk the cream cheese smooth before the eggs go in.');
+  // Another tab of the same browser signs out.
+  const other = await page.context().newPage();
+  await other.goto('/settings');
+  await other.getByRole('button', { name: /Sign out/ }).first().click();
+  await expect(other).toHaveURL(/\/sign-in/);
+  await other.close();
+
+  await page.getByRole('button', { name: 'Save changes' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Signed out' });
+  await expect(dialog).toBeVisible();
+  await expect(method).toHaveValue('Whisk the cream cheese smooth before the eggs go in.');
+  await expectNoSeriousA11yViolations(page, 'the signed-out dialog over a tray');
+  await page.screenshot({ path: `${SHOTS}/session-ended.png` });
+  // The keyboard is in the dialog: the password, then Enter.
+  await page.keyboard.type('trayline-demo');
+  await page.keyboard.press('Enter');
+  await expect(dialog).toBeHidden();
+  await page.getByRole('button', { name: 'Save changes' }).click();
+  await expect(page.getByText('Saved.')).toBeVisible();
+  await expect(method).toHaveValue('Whisk the cream cheese smooth before the eggs go in.');
 });
