@@ -90,6 +90,9 @@ describe('a session that ends under an open page', () => {
     expect((screen.getByLabelText('Note') as HTMLInputElement).value).toBe('Moved to the walk-in at 10:05');
     expect(screen.getByText('Signed in: Ada Coach').closest('[inert]')).toBeTruthy();
     expect(document.activeElement).toBe(screen.getByLabelText('Password'));
+    // The page's other reads are refused too (here, one more): still the dialog, never the sign-in page.
+    await expect(api.get('/note')).rejects.toThrow();
+    expect(screen.getAllByRole('dialog')).toHaveLength(1);
     expect(toSignIn).not.toHaveBeenCalled();
 
     // A wrong password says so in the dialog.

@@ -51,8 +51,11 @@ export function useSessionEnded(): MeDto | null {
  */
 export function followUnauthorized(qc: QueryClient, toSignIn: () => void) {
   return ({ fromMe }: { fromMe: boolean }) => {
-    const me = qc.getQueryData<MeDto | null>(authKeys.me()) ?? storeOf(qc).me;
-    if (me && !storeOf(qc).me) setEnded(qc, me);
+    const ended = storeOf(qc).me;
+    // Every read the page had in flight is refused too: the dialog is already up for the first.
+    if (ended) return;
+    const me = qc.getQueryData<MeDto | null>(authKeys.me());
+    if (me) setEnded(qc, me);
     else if (!fromMe) toSignIn();
   };
 }
