@@ -37,8 +37,9 @@ export function AppProviders() {
   );
   return (
     <QueryClientProvider client={queryClient}>
-      {/* Someone else signing in: a fresh load of the sign-in page (the browser asks first if typing would go). */}
-      <SessionGate signInElsewhere={() => window.location.assign(signInPath(router))}>
+      {/* Someone else signing in: a fresh load of the sign-in page, to their own start (this page may not be theirs);
+          the browser asks first if typing would go. */}
+      <SessionGate signInElsewhere={() => window.location.assign(paths.signIn)}>
         <RouterProvider router={router} />
       </SessionGate>
       <Toaster position="top-center" richColors closeButton />
