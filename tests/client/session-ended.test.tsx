@@ -3,6 +3,8 @@ import { act, fireEvent, render, screen, waitFor } from '@testing-library/react'
 import { QueryClientProvider, useMutation, useQuery, type QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { api, onUnauthorized } from '@/lib/api-client';
+import { applyServerErrors } from '@/lib/form-errors';
+import { ApiError } from '@/lib/problem';
 import { meQuery } from '@/features/auth/api/auth.queries';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { followUnauthorized, SessionGate } from '@/features/auth/components/session-ended';
@@ -159,5 +161,16 @@ describe('a session that ends under an open page', () => {
     session = false;
     await expect(api.get('/note')).rejects.toThrow();
     expect(toSignIn).toHaveBeenCalledTimes(1);
+  });
+});
+
+describe('a form whose save meets an ended session', () => {
+  it('keeps no error of its own (the dialog says it), while a wrong password on the sign-in page still says so', () => {
+    const setError = vi.fn();
+    const ended = new ApiError({ type: 'about:blank', title: 'Unauthorized', status: 401, code: 'unauthorized', detail: 'Sign in to continue' });
+    const wrong = new ApiError({ type: 'about:blank', title: 'Unauthorized', status: 401, code: 'bad_credentials', detail: 'Wrong e-mail or password' });
+    expect(applyServerErrors(ended, setError)).toBeNull();
+    expect(applyServerErrors(wrong, setError)).toBe('Wrong e-mail or password');
+    expect(setError).not.toHaveBeenCalled();
   });
 });
