@@ -20,7 +20,8 @@ export default defineConfig({
   root: here('./src'),
   plugins: [react(), tailwindcss()],
   resolve: { alias },
-  publicDir: false,
+  // Copied as they are to the root of the build: the home-screen manifest and its icons (fixed names it refers to).
+  publicDir: here('./src/public'),
   build: { outDir: here('./dist/client'), emptyOutDir: true, sourcemap: false },
   server: {
     port: Number(process.env.VITE_PORT ?? 5173),

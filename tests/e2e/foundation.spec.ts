@@ -9,6 +9,16 @@ test('the SPA loads with our fonts, and an unknown page shows the 404 page', asy
     return [...document.fonts].filter((f) => f.status === 'loaded').map((f) => f.family.replace(/"/g, ''));
   });
   expect(fontsLoaded).toEqual(expect.arrayContaining(['Atkinson Hyperlegible', 'Fraunces']));
+  await expect(page).toHaveTitle('Sign in · Trayline');
+  // The home-screen manifest as Chromium reads it (no parse errors), and each icon it names is served as a PNG.
+  const cdp = await page.context().newCDPSession(page);
+  const manifest = await cdp.send('Page.getAppManifest');
+  expect(manifest.errors).toEqual([]);
+  const icons = (JSON.parse(manifest.data ?? '{}') as { icons: { src: string }[] }).icons.map((i) => i.src);
+  for (const src of [...new Set(icons), '/apple-touch-icon.png']) {
+    const res = await page.request.get(src);
+    expect(`${src} ${res.status()} ${res.headers()['content-type']}`).toBe(`${src} 200 image/png`);
+  }
   await page.goto('/no-such-page');
   await expect(page.getByRole('heading', { name: 'Nothing on this tray' })).toBeVisible();
 });
