@@ -19,6 +19,18 @@ export function notifyUnauthorized(how: { fromMe: boolean }) {
   unauthorizedListeners.forEach((fn) => fn(how));
 }
 
+/** Listeners told when the person whose session ended signs in again in place (a refused preview sends again). */
+const resumedListeners = new Set<() => void>();
+export function onSessionResumed(fn: () => void) {
+  resumedListeners.add(fn);
+  return () => {
+    resumedListeners.delete(fn);
+  };
+}
+export function notifySessionResumed() {
+  resumedListeners.forEach((fn) => fn());
+}
+
 async function request<T>(method: Method, path: string, body?: unknown, init: RequestInit = {}): Promise<T> {
   const headers: Record<string, string> = { accept: 'application/json' };
   const isForm = typeof FormData !== 'undefined' && body instanceof FormData;

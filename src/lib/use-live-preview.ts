@@ -1,5 +1,7 @@
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import type { UseMutationResult } from '@tanstack/react-query';
+import { onSessionResumed } from './api-client';
+import { isApiError } from './problem';
 
 /**
  * Sends a form's current input to a preview mutation once the typing stops (`delayMs` after the last change), and
@@ -18,4 +20,18 @@ export function useLivePreview<I, O>(input: I | null, preview: UseMutationResult
     // The mutation object changes identity on every state change; the key alone decides.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [key]);
+  // Refused because the session ended: sent again once the person signs in again in place (the input is unchanged,
+  // so nothing else would send it, and the refusal would stay on screen).
+  const last = useRef({ preview, sent });
+  useEffect(() => {
+    last.current = { preview, sent };
+  });
+  useEffect(
+    () =>
+      onSessionResumed(() => {
+        const { preview: p, sent: s } = last.current;
+        if (s && isApiError(p.error, 401)) p.mutate(JSON.parse(s) as I);
+      }),
+    [],
+  );
 }

@@ -1,9 +1,10 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { act, fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { QueryClientProvider, useMutation, useQuery, type QueryClient } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { api, onUnauthorized } from '@/lib/api-client';
 import { applyServerErrors } from '@/lib/form-errors';
+import { useLivePreview } from '@/lib/use-live-preview';
 import { ApiError } from '@/lib/problem';
 import { meQuery } from '@/features/auth/api/auth.queries';
 import { useMe } from '@/features/auth/hooks/use-me';
@@ -71,6 +72,7 @@ beforeEach(() => {
       if (!session) return jsonResponse({ status: 401, code: 'unauthorized', title: 'Not signed in' }, 401);
       if (url === '/api/auth/me') return jsonResponse(coach);
       if (url === '/api/note' && init?.method === 'PUT') noteOnServer = body.note;
+      if (url === '/api/preview') return jsonResponse({ kcal: 246 });
       return jsonResponse({ note: noteOnServer });
     }),
   );
@@ -161,6 +163,34 @@ describe('a session that ends under an open page', () => {
     session = false;
     await expect(api.get('/note')).rejects.toThrow();
     expect(toSignIn).toHaveBeenCalledTimes(1);
+  });
+});
+
+function PreviewPage() {
+  useMe();
+  const preview = useMutation({ mutationFn: (input: { grams: number }) => api.post<{ kcal: number }>('/preview', input), meta: { silent: true, readOnly: true } });
+  const input = useMemo(() => ({ grams: 100 }), []);
+  useLivePreview(input, preview, 10);
+  return <p>{preview.data ? `${preview.data.kcal} kcal` : preview.isError ? 'The numbers cannot be worked out yet' : '…'}</p>;
+}
+
+describe('a live preview refused because the session ended', () => {
+  it('is sent again once the person signs in again, though nothing in the form changed', async () => {
+    session = false;
+    const qc = queryClientFor(coach);
+    stop = onUnauthorized(followUnauthorized(qc, toSignIn));
+    render(
+      <QueryClientProvider client={qc}>
+        <SessionGate signInElsewhere={elsewhere}>
+          <PreviewPage />
+        </SessionGate>
+      </QueryClientProvider>,
+    );
+    await screen.findByRole('dialog', { name: 'Signed out' });
+    expect(screen.getByText('The numbers cannot be worked out yet')).toBeTruthy();
+    fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'right-password' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Sign in and carry on' }));
+    expect(await screen.findByText('246 kcal')).toBeTruthy();
   });
 });
 

@@ -3,7 +3,7 @@ import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-q
 import type { MeDto } from '@shared/schemas/auth.schema';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
-import { api } from '@/lib/api-client';
+import { api, notifySessionResumed } from '@/lib/api-client';
 import { paths } from '@/config/paths';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
 import { authKeys } from '../api/auth.keys';
@@ -98,8 +98,10 @@ function SessionEndedDialog({ me, signInElsewhere }: { me: MeDto; signInElsewher
     onSuccess: (again) => {
       qc.setQueryData(authKeys.me(), again);
       setEnded(qc, null);
-      // The page's reads refused meanwhile come back; typing held in forms stays (nothing is cleared).
+      // The page's reads refused meanwhile come back; typing held in forms stays (nothing is cleared). A live
+      // preview refused meanwhile sends again (useLivePreview).
       void qc.invalidateQueries();
+      notifySessionResumed();
     },
     onError: (e) => {
       markShown(e);
