@@ -40,13 +40,12 @@ const toSignIn = vi.fn();
 const elsewhere = vi.fn();
 let stop = () => {};
 
-function show(qc: QueryClient = queryClientFor(coach)) {
+/** A page as the app shows it: under the session gate, with 401s followed as the app's providers follow them. */
+function show(page = <NotePage />, qc: QueryClient = queryClientFor(coach)) {
   stop = onUnauthorized(followUnauthorized(qc, toSignIn));
   render(
     <QueryClientProvider client={qc}>
-      <SessionGate signInElsewhere={elsewhere}>
-        <NotePage />
-      </SessionGate>
+      <SessionGate signInElsewhere={elsewhere}>{page}</SessionGate>
     </QueryClientProvider>,
   );
   return qc;
@@ -177,15 +176,7 @@ function PreviewPage() {
 describe('a live preview refused because the session ended', () => {
   it('is sent again once the person signs in again, though nothing in the form changed', async () => {
     session = false;
-    const qc = queryClientFor(coach);
-    stop = onUnauthorized(followUnauthorized(qc, toSignIn));
-    render(
-      <QueryClientProvider client={qc}>
-        <SessionGate signInElsewhere={elsewhere}>
-          <PreviewPage />
-        </SessionGate>
-      </QueryClientProvider>,
-    );
+    show(<PreviewPage />);
     await screen.findByRole('dialog', { name: 'Signed out' });
     expect(screen.getByText('The numbers cannot be worked out yet')).toBeTruthy();
     fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'right-password' } });
