@@ -38,6 +38,29 @@ const serveProfile = () =>
 
 afterEach(() => vi.unstubAllGlobals());
 
+/**
+ * The profile as the API keeps it, its side cards answering slowly once a write went in (as over a real network):
+ * `release()` lets them answer. `write` makes the written version.
+ */
+function serveProfileSlowAfterWrite(write: (current: ReturnType<typeof profile>, body: Record<string, unknown>) => Record<string, unknown>) {
+  let release = () => {};
+  let written = false;
+  const slow = new Promise<void>((r) => (release = r));
+  stubVersionedRecord(
+    '/api/clients/7',
+    profile(),
+    (current, body) => {
+      written = true;
+      return write(current, body);
+    },
+    async (url) => {
+      if (written) await slow;
+      return url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : url.includes('/published-allergens') ? jsonResponse([]) : undefined;
+    },
+  );
+  return { release: () => release() };
+}
+
 describe('archiving a client from their profile', () => {
   it('asks first, sends the version read, then shows since when and offers Restore', async () => {
     const archived = profile({ archivedAt: '2026-12-02T10:00:00.000Z', version: 4 });
@@ -219,21 +242,7 @@ describe('the coach’s own archive, while the page is still refreshing after it
   it('never says someone else saved the profile, not even for a moment', async () => {
     vi.stubGlobal('confirm', vi.fn(() => true));
     // The page's side cards answer slowly after the archive, as over a real network.
-    let release = () => {};
-    let archived = false;
-    const slow = new Promise<void>((r) => (release = r));
-    stubVersionedRecord(
-      '/api/clients/7',
-      profile(),
-      (current, body) => {
-        archived = true;
-        return { ...current, archivedAt: body.archived ? '2026-12-02T10:00:00.000Z' : null };
-      },
-      async (url) => {
-        if (archived) await slow;
-        return url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : url.includes('/published-allergens') ? jsonResponse([]) : undefined;
-      },
-    );
+    const { release } = serveProfileSlowAfterWrite((current, body) => ({ ...current, archivedAt: body.archived ? '2026-12-02T10:00:00.000Z' : null }));
     renderProfile();
     fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Mine' } });
     fireEvent.click(screen.getByRole('button', { name: 'Archive' }));
@@ -251,21 +260,7 @@ describe('leaving the profile', () => {
   it('asks while typing is held, and not once it is saved, even while the page is still refreshing after the save', async () => {
     const confirm = vi.fn(() => false);
     vi.stubGlobal('confirm', confirm);
-    let saved = false;
-    let release = () => {};
-    const slow = new Promise<void>((r) => (release = r));
-    stubVersionedRecord(
-      '/api/clients/7',
-      profile(),
-      (current, body) => {
-        saved = true;
-        return profile({ ...current, ...body });
-      },
-      async (url) => {
-        if (saved) await slow;
-        return url.includes('/deliveries') ? jsonResponse({ clientId: 7, items: [] }) : url.includes('/published-allergens') ? jsonResponse([]) : undefined;
-      },
-    );
+    const { release } = serveProfileSlowAfterWrite((current, body) => profile({ ...current, ...body }));
     const { router } = renderProfile();
     fireEvent.change(await screen.findByLabelText('Name'), { target: { value: 'Olga Renamed' } });
     await act(() => router.navigate('/clients'));

@@ -14,6 +14,25 @@ const openTray = () => {
   return renderAtRoute(<TrayPage />, '/trays/:trayId', '/trays/12');
 };
 
+/**
+ * A bare page holding the guard, saying `text`, opened at `path` and holding typing; the person answers "no" to any
+ * question (`confirm`). `guard()` is the guard it holds.
+ */
+async function openGuardedPage(text: string, path: string) {
+  const confirm = vi.fn(() => false);
+  vi.stubGlobal('confirm', confirm);
+  let held: UnsavedGuard | null = null;
+  function Page() {
+    held = useUnsavedGuard();
+    return <p>{text}</p>;
+  }
+  const { router } = renderAtRoute(<Page />, path, path);
+  await screen.findByText(text);
+  const guard = () => held!;
+  act(() => guard().onDirtyChange(true));
+  return { router, guard, confirm };
+}
+
 describe('leaving a page that holds typing', () => {
   it('asks first; "Cancel" stays with the typing, "OK" leaves', async () => {
     const confirm = vi.fn(() => false);
@@ -67,34 +86,16 @@ describe('leaving a page that holds typing', () => {
   });
 
   it('lets the page’s own navigation after a save go unasked (allow), and only that one', async () => {
-    const confirm = vi.fn(() => false);
-    vi.stubGlobal('confirm', confirm);
-    let guard: UnsavedGuard | null = null;
-    function Page() {
-      guard = useUnsavedGuard();
-      return <p>A form holding typing</p>;
-    }
-    const { router } = renderAtRoute(<Page />, '/things/new', '/things/new');
-    await screen.findByText('A form holding typing');
-    act(() => guard!.onDirtyChange(true));
+    const { router, guard, confirm } = await openGuardedPage('A form holding typing', '/things/new');
     // Saved: the page goes to what it made (as a create does) without asking.
-    act(() => guard!.allow());
+    act(() => guard().allow());
     await act(() => router.navigate('/things/7'));
     expect(router.state.location.pathname).toBe('/things/7');
     expect(confirm).not.toHaveBeenCalled();
   });
 
   it('lets a move within the same page go unasked (another query of the same path)', async () => {
-    const confirm = vi.fn(() => false);
-    vi.stubGlobal('confirm', confirm);
-    let guard: UnsavedGuard | null = null;
-    function Page() {
-      guard = useUnsavedGuard();
-      return <p>A list with a filter</p>;
-    }
-    const { router } = renderAtRoute(<Page />, '/things', '/things');
-    await screen.findByText('A list with a filter');
-    act(() => guard!.onDirtyChange(true));
+    const { router, confirm } = await openGuardedPage('A list with a filter', '/things');
     await act(() => router.navigate('/things?page=2'));
     expect(router.state.location.search).toBe('?page=2');
     expect(confirm).not.toHaveBeenCalled();
