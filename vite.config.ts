@@ -20,9 +20,11 @@ export default defineConfig({
   root: here('./src'),
   plugins: [react(), tailwindcss()],
   resolve: { alias },
-  // Copied as they are to the root of the build: the home-screen manifest and its icons (fixed names it refers to).
+  // Copied as they are to the root of the build: the home-screen manifest and its icons (fixed names it refers to),
+  // and the service worker (/sw.js: its scope is the folder it is served from).
   publicDir: here('./src/public'),
-  build: { outDir: here('./dist/client'), emptyOutDir: true, sourcemap: false },
+  // asset-manifest.json lists the build's files: the service worker (src/public/sw.js) keeps them all for offline use.
+  build: { outDir: here('./dist/client'), emptyOutDir: true, sourcemap: false, manifest: 'asset-manifest.json' },
   server: {
     port: Number(process.env.VITE_PORT ?? 5173),
     proxy: { '/api': `http://127.0.0.1:${apiPort}` },

@@ -23,6 +23,11 @@ export default tseslint.config(
     },
   },
   {
+    // The service worker (plain JavaScript, copied as it is into the build).
+    files: ['src/public/**/*.js'],
+    languageOptions: { globals: { ...globals.serviceworker } },
+  },
+  {
     files: ['src/**/*.{ts,tsx}', 'tests/client/**/*.{ts,tsx}'],
     languageOptions: { globals: { ...globals.browser } },
     plugins: { 'react-hooks': reactHooks },

@@ -1,13 +1,16 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { redirect, type LoaderFunctionArgs } from 'react-router-dom';
-import { meQuery } from '@/features/auth/api/auth.queries';
 import { paths } from '@/config/paths';
+import { signedInPerson } from './offline-plan';
 import type { Role } from '@shared/schemas/auth.schema';
 
-/** Loader for the signed-in area: no session → sign-in, then back here (the section a link named too: "#…"). */
+/**
+ * Loader for the signed-in area: no session → sign-in, then back here (the section a link named too: "#…"). Without a
+ * network, a client's saved plan stands in (./offline-plan.ts).
+ */
 export function requireSignedIn(qc: QueryClient) {
   return async ({ request }: LoaderFunctionArgs) => {
-    const me = await qc.ensureQueryData(meQuery());
+    const me = await signedInPerson(qc);
     if (!me) {
       const url = new URL(request.url);
       // The router's request carries no fragment: on the page first opened (a link from an e-mail) the browser's has it.
@@ -20,8 +23,9 @@ export function requireSignedIn(qc: QueryClient) {
 
 /** Loader for a page only some roles may open. */
 export function requireRole(qc: QueryClient, roles: Role[]) {
+  // Run beside the signed-in area's loader (React Router runs them together): the same reading of the person.
   return async () => {
-    const me = await qc.ensureQueryData(meQuery());
+    const me = await signedInPerson(qc);
     if (me && !roles.includes(me.role)) throw new Response('Not found', { status: 404 });
     return null;
   };

@@ -9,6 +9,8 @@ import { followDateOrder } from '@/features/auth/api/auth.queries';
 import { paths } from '@/config/paths';
 import { followUnauthorized, SessionGate } from '@/features/auth/components/session-ended';
 import { createRouter } from './router';
+import { followSavedPlan } from './offline-plan';
+import { followNetwork } from '@/lib/online';
 
 /** The sign-in page, then back to where the router is. */
 function signInPath(router: ReturnType<typeof createRouter>) {
@@ -18,8 +20,10 @@ function signInPath(router: ReturnType<typeof createRouter>) {
 
 export function AppProviders() {
   const [queryClient] = useState(() => {
+    followNetwork();
     const qc = createQueryClient();
     followDateOrder(qc);
+    followSavedPlan(qc);
     return qc;
   });
   const [router] = useState(() => createRouter(queryClient));

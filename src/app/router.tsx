@@ -3,7 +3,7 @@ import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { requireSignedIn } from './guards';
 import { AppShell } from './layout/app-shell';
-import { PageSkeleton } from '@/components/ui/states';
+import { OfflineLine, PageSkeleton } from '@/components/ui/states';
 import { NotFoundPage, RouteError } from './route-error';
 import { appRoutes } from './routes';
 
@@ -13,7 +13,8 @@ export function createRouter(qc: QueryClient) {
       errorElement: <RouteError />,
       // Shown while the first page's code and the signed-in check load (a page reload, a link opened in a new tab).
       hydrateFallbackElement: (
-        <div className="mx-auto max-w-7xl px-4 py-6 md:px-8">
+        <div className="mx-auto flex max-w-7xl flex-col gap-4 px-4 py-6 md:px-8">
+          <OfflineLine>Trayline opens once you are back online.</OfflineLine>
           <PageSkeleton />
         </div>
       ),

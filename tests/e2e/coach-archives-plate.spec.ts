@@ -11,8 +11,10 @@ test('the coach retires a plate the demo week plans: archived, off the board’s
   await page.goto('/plates');
   page.once('dialog', (d) => void d.accept());
   await page.getByRole('button', { name: `Delete ${plate}` }).click();
-  await expect(page.getByRole('status')).toContainText(`“${plate}” is planned for`);
-  await expect(page.getByRole('status')).toContainText('so it was archived instead');
+  // The page's own status line (the frame's offline line is a status region too, empty while online).
+  const said = page.getByRole('main').getByRole('status').filter({ hasText: /\S/ });
+  await expect(said).toContainText(`“${plate}” is planned for`);
+  await expect(said).toContainText('so it was archived instead');
   await expect(page.getByRole('heading', { name: plate })).toHaveCount(0);
 
   // The board: its cells still show the plate, marked archived; the palette no longer offers it.
@@ -28,7 +30,7 @@ test('the coach retires a plate the demo week plans: archived, off the board’s
   await page.screenshot({ path: `${SHOTS}/coach-archived-plates.png` });
   await page.getByRole('button', { name: `Restore ${plate}` }).focus();
   await page.keyboard.press('Enter');
-  await expect(page.getByRole('status')).toHaveText(`Restored “${plate}”: it is back in the list and the board’s pickers.`);
+  await expect(said).toHaveText(`Restored “${plate}”: it is back in the list and the board’s pickers.`);
   await page.goto(`/weeks/${weekId}`);
   await expect(page.getByRole('complementary', { name: 'Plates' }).getByText(plate)).toBeVisible();
 });

@@ -3,7 +3,7 @@ import { WorkspaceSwitch } from '@/features/auth/components/workspace-switch';
 import { Link, NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { useLogout } from '@/features/auth/api/use-auth-mutations';
-import { PageSkeleton } from '@/components/ui/states';
+import { OfflineLine, PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { NAV, NAV_GROUPS, navItemActive, type NavItem } from '../nav';
 import { ROLE_WORDS } from '@/lib/words';
@@ -66,6 +66,7 @@ export function AppShell() {
       </aside>
       <div className="min-w-0">
         <main id="main" className="mx-auto max-w-7xl px-4 py-6 md:px-8">
+          <OfflineLine className="mb-4">What this page already shows stays; anything else loads, and saving goes through, once you are back online (keep the page open).</OfflineLine>
           <Suspense fallback={<PageSkeleton />}>
             <Outlet />
           </Suspense>

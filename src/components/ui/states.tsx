@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { errorMessage } from '@/lib/problem';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { useOnline } from '@/lib/online';
 import { Button } from './button';
 
 /** Placeholder blocks while data loads. */
@@ -144,4 +145,24 @@ export function QueryView<T>({
   if (query.isError || query.data === undefined) return <ErrorState error={query.error} retry={() => void query.refetch()} />;
   if (isEmpty?.(query.data)) return <>{empty}</>;
   return <>{children(query.data)}</>;
+}
+
+/**
+ * A line said while the device has no network (src/lib/online.ts), in a live region so that a screen reader hears it
+ * come and go (the region itself stays, empty, while online). `children`: what it means where it shows.
+ */
+export function OfflineLine({ children, className = '' }: { children: ReactNode; className?: string }) {
+  const online = useOnline();
+  return (
+    <div role="status" className="no-print">
+      {!online && (
+        <p className={`flex gap-2 rounded-lg border-l-4 border-caution bg-caution-50 p-3 text-sm ${className}`}>
+          <span aria-hidden>⚠</span>
+          <span>
+            <b>You are offline.</b> {children}
+          </span>
+        </p>
+      )}
+    </div>
+  );
 }

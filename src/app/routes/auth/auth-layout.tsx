@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { TrayMark } from '@/app/layout/app-shell';
 import { useDocumentTitle } from '@/lib/use-document-title';
+import { OfflineLine } from '@/components/ui/states';
 
 export function AuthLayout({ title, children, lead }: { title: string; lead?: ReactNode; children: ReactNode }) {
   useDocumentTitle(title);
@@ -10,6 +11,7 @@ export function AuthLayout({ title, children, lead }: { title: string; lead?: Re
         <div className="mb-6 flex items-center gap-2 font-display text-3xl">
           <TrayMark className="h-9 w-9" /> Trayline
         </div>
+        <OfflineLine className="mb-4">Signing in waits until you are back online.</OfflineLine>
         <section className="rounded-tray bg-paper-card p-6 shadow-tray">
           <h1 className="mb-1 text-2xl">{title}</h1>
           {lead && <p className="mb-4 text-ink-soft">{lead}</p>}

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { allergenLabel, clientAllergenNotes } from '@shared/domain/allergens';
 import { FRIDGE_MAX_F, REHEAT_MIN_F, thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
@@ -6,11 +6,13 @@ import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema';
 import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
+import { savedPlan, savePlan } from '@/features/weeks/api/saved-plan';
 import { localToday, momentLabel, timeLabel } from '@/lib/dates';
 import { compareIsoDates } from '@shared/domain/iso-date';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
-import { linkButton } from '@/components/ui/button';
+import { Button, linkButton } from '@/components/ui/button';
+import { useOnline } from '@/lib/online';
 import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/mail/api/week-mail.queries';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { counted } from '@/lib/words';
@@ -145,21 +147,65 @@ function ThawTonight({ tasks, date, isToday }: { tasks: ThawTask[]; date: string
   );
 }
 
+/** Said above a plan read from the device (saved-plan.ts) because the server could not be asked. */
+function SavedCopy({ savedAt, offline, retry }: { savedAt: number; offline: boolean; retry: () => void }) {
+  return (
+    // Offline, the frame above already says so.
+    <Notice tone="warn" title={offline ? 'Your plan as saved on this device' : 'Trayline cannot be reached: this is your plan as saved on this device'}>
+      <p>
+        Saved {momentLabel(new Date(savedAt).toISOString())}. If your coach has changed your plan since, the change shows here once
+        you are back online.
+      </p>
+      {!offline && (
+        <p className="mt-2">
+          <Button variant="secondary" onClick={retry}>
+            Try again
+          </Button>
+        </p>
+      )}
+    </Notice>
+  );
+}
+
 export function Component() {
   const today = localToday();
+  const me = useMe();
+  const online = useOnline();
   const q = useQuery(myWeekQuery(today));
   const [picked, setPicked] = useState<string | null>(null);
-  if (q.isPending) return <PageSkeleton />;
-  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
-  const week = q.data;
+  // Each answer is saved on the device: the page opens from it without a network.
+  useEffect(() => {
+    if (q.isSuccess) savePlan(me, q.data, q.dataUpdatedAt);
+  }, [me, q.isSuccess, q.data, q.dataUpdatedAt]);
+  // No answer for today (no network, or a server that cannot be reached): the plan saved on this device, if any.
+  const saved = q.data === undefined && (q.isError || q.fetchStatus === 'paused') ? savedPlan(me.id) : null;
+  if (!saved && q.isPending) {
+    return q.fetchStatus === 'paused' ? (
+      <div className="flex flex-col gap-6">
+        <PageHeader title="My plates" />
+        <EmptyState title="You are offline">
+          Your plan has not been saved on this device yet. It shows here once you are back online, and from then on
+          without a network too.
+        </EmptyState>
+      </div>
+    ) : (
+      <PageSkeleton />
+    );
+  }
+  if (!saved && q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  const week = saved ? saved.week : (q.data ?? null);
+  const savedCopy = saved && <SavedCopy savedAt={saved.savedAt} offline={!online} retry={() => void q.refetch()} />;
   if (!week || (week.days.length === 0 && !week.next)) {
     return (
       <div className="flex flex-col gap-6">
         <PageHeader title="My plates" />
+        {savedCopy}
         <EmptyState title="No plan yet">Your coach has not published a week for you yet.</EmptyState>
       </div>
     );
   }
+  // Files come from the server: offered while it can be reached.
+  const canDownload = online && !saved;
   // The next published week's days too: the client can look ahead, and a frozen plate on its first day thaws on
   // this week's last evening.
   const allDays = [...week.days, ...(week.next?.days ?? [])];
@@ -198,17 +244,18 @@ export function Component() {
         title={day?.date === today ? "Today's plate" : 'My plates'}
         lead={day ? `${!picked && day.date !== today ? 'Next plate: ' : ''}${dayLabel(day.date, true)}` : dayLabel(shownDate, true)}
       >
-        {week.days.length > 0 && (
+        {canDownload && week.days.length > 0 && (
           <a href={`${myPlanPdfUrl}?today=${today}`} className={linkButton} download>
             {ended ? 'Download last week (PDF)' : 'Download my week (PDF)'}
           </a>
         )}
-        {!ended && thawTasks(week.days).length > 0 && (
+        {canDownload && !ended && thawTasks(week.days).length > 0 && (
           <a href={`${myThawRemindersUrl}?today=${today}`} className={linkButton} download>
             Thaw reminders for my calendar
           </a>
         )}
       </PageHeader>
+      {savedCopy}
       <DemoNotice>A demo account: this plan and its people are invented for trying Trayline.</DemoNotice>
       {compareIsoDates(shownDate, today) >= 0 && <ThawTonight tasks={thaws.filter((t) => t.thawOn === shownDate)} date={shownDate} isToday={shownDate === today} />}
       {day ? (
@@ -239,16 +286,18 @@ export function Component() {
           </p>
           <ul className="flex flex-col divide-y divide-line">{week.next.days.map(dayButton)}</ul>
           {/* Its own files: the plan and thaw reminders of the week that starts then. */}
-          <p className="mt-2 flex flex-wrap gap-x-2">
-            <a href={`${myPlanPdfUrl}?today=${week.next.startDate}`} className="inline-flex min-h-11 items-center font-bold underline" download>
-              Download next week (PDF)
-            </a>
-            {thawTasks(week.next.days).length > 0 && (
-              <a href={`${myThawRemindersUrl}?today=${week.next.startDate}`} className="inline-flex min-h-11 items-center font-bold underline" download>
-                Its thaw reminders for my calendar
+          {canDownload && (
+            <p className="mt-2 flex flex-wrap gap-x-2">
+              <a href={`${myPlanPdfUrl}?today=${week.next.startDate}`} className="inline-flex min-h-11 items-center font-bold underline" download>
+                Download next week (PDF)
               </a>
-            )}
-          </p>
+              {thawTasks(week.next.days).length > 0 && (
+                <a href={`${myThawRemindersUrl}?today=${week.next.startDate}`} className="inline-flex min-h-11 items-center font-bold underline" download>
+                  Its thaw reminders for my calendar
+                </a>
+              )}
+            </p>
+          )}
         </Card>
       )}
       <Cautions compact />
