@@ -1,7 +1,7 @@
 import { describe, expect, it, vi } from 'vitest';
-import { render, screen } from '@testing-library/react';
+import { fireEvent, render, screen } from '@testing-library/react';
 import { QueryClientProvider } from '@tanstack/react-query';
-import { testQueryClient } from './render';
+import { jsonResponse, signedIn, testQueryClient } from './render';
 import { RouterProvider } from 'react-router-dom';
 import { createRouter } from '@/app/router';
 
@@ -20,5 +20,38 @@ describe('app router', () => {
     expect(await screen.findByRole('status', { name: 'Loading page' })).toBeTruthy();
     expect(warn.mock.calls.map((c) => String(c[0])).filter((m) => /HydrateFallback/i.test(m))).toEqual([]);
     answer(new Response(JSON.stringify({ status: 401, title: 'Not signed in' }), { status: 401, headers: { 'content-type': 'application/problem+json' } }));
+  });
+
+  it('signing out shows nothing of an error while the sign-in page loads (after a reload its code is not there yet)', async () => {
+    let signedOut = false;
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string) => {
+        if (url.endsWith('/auth/logout')) {
+          signedOut = true;
+          return new Response(null, { status: 204 });
+        }
+        if (url.endsWith('/auth/me')) return signedOut ? jsonResponse({ title: 'Not signed in' }, 401) : jsonResponse(signedIn({ role: 'client', clientId: 3 }));
+        if (url.includes('/weeks/mine')) return jsonResponse(null);
+        return jsonResponse([]);
+      }),
+    );
+    window.history.pushState({}, '', '/my-plates');
+    const qc = testQueryClient();
+    render(
+      <QueryClientProvider client={qc}>
+        <RouterProvider router={createRouter(qc)} />
+      </QueryClientProvider>,
+    );
+    expect(await screen.findByRole('heading', { name: 'No plan yet' })).toBeTruthy();
+    const errors: string[] = [];
+    const watch = new MutationObserver(() => {
+      if (document.body.textContent?.includes('Could not load this')) errors.push(document.body.textContent);
+    });
+    watch.observe(document.body, { subtree: true, childList: true, characterData: true });
+    fireEvent.click(screen.getAllByRole('button', { name: 'Sign out' })[0]);
+    expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeTruthy();
+    watch.disconnect();
+    expect(errors).toEqual([]);
   });
 });

@@ -1,7 +1,8 @@
 import { Suspense, useState } from 'react';
 import { WorkspaceSwitch } from '@/features/auth/components/workspace-switch';
 import { Link, NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
-import { useMe } from '@/features/auth/hooks/use-me';
+import { useSignedInOrLeaving } from '@/features/auth/hooks/use-me';
+import type { MeDto } from '@shared/schemas/auth.schema';
 import { useLogout } from '@/features/auth/api/use-auth-mutations';
 import { OfflineLine, PageSkeleton } from '@/components/ui/states';
 import { paths } from '@/config/paths';
@@ -14,7 +15,21 @@ import { ROLE_WORDS } from '@/lib/words';
  * The navigation lists only what the person's role may open.
  */
 export function AppShell() {
-  const me = useMe();
+  const me = useSignedInOrLeaving();
+  // Signed out (the sign-in page's code may still be on its way): nothing of the signed-in area, not an error.
+  if (!me) return <Leaving />;
+  return <SignedInFrame me={me} />;
+}
+
+function Leaving() {
+  return (
+    <div className="mx-auto max-w-7xl px-4 py-6 md:px-8">
+      <PageSkeleton />
+    </div>
+  );
+}
+
+function SignedInFrame({ me }: { me: MeDto }) {
   const logout = useLogout();
   const navigate = useNavigate();
   const location = useLocation();
