@@ -131,6 +131,9 @@ export function createApp({ orm, pool, env, mail, logger, schema = schemaGate(or
     const dist = path.resolve(env.CLIENT_DIST);
     if (fs.existsSync(path.join(dist, 'index.html'))) {
       app.use(express.static(dist, { index: false, maxAge: '1h' }));
+      // A build's file that is not there (a page of an earlier build asking for its code after a deploy) is a 404,
+      // never the app's page in its place: the page says it could not load, and a browser keeps no HTML as code.
+      app.use('/assets', (_req, res) => res.status(404).type('text/plain').send('Not found'));
       app.get('/{*splat}', (_req, res) => res.sendFile(path.join(dist, 'index.html')));
     }
   }

@@ -96,7 +96,8 @@ async function builtFile(request) {
   const kept = await caches.match(request, { cacheName: FILE_CACHE });
   if (kept) return kept;
   const answer = await fetch(request);
-  if (answer.ok) {
+  // Never a page kept as code (a server that answers a missing file with its page).
+  if (answer.ok && !(answer.headers.get('content-type') ?? '').includes('text/html')) {
     const files = await caches.open(FILE_CACHE);
     await files.put(request, answer.clone());
   }
