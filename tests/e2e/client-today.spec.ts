@@ -90,10 +90,13 @@ test("a client's plates open on the phone without a network, from the plan saved
   await expect(first).not.toBeEmpty();
   const shown = await first.textContent();
   // The app kept for offline use (the service worker keeps the page, then the build's files) and the plan saved.
-  await page.waitForFunction(async () => {
-    await navigator.serviceWorker.ready;
-    return (await caches.match('/', { cacheName: 'trayline-page-v1' })) !== undefined;
-  });
+  // (Polled through evaluate, which waits for the answer: waitForFunction would take the promise itself as "true".)
+  const pageKept = () =>
+    page.evaluate(async () => {
+      await navigator.serviceWorker.ready;
+      return (await caches.match('/', { cacheName: 'trayline-page-v1' })) !== undefined;
+    });
+  await expect.poll(pageKept, { timeout: 20_000 }).toBe(true);
   await page.waitForFunction(() => localStorage.getItem('trayline.saved-plan') !== null);
 
   await context.setOffline(true);
