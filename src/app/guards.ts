@@ -1,12 +1,12 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { redirect, type LoaderFunctionArgs } from 'react-router-dom';
 import { paths } from '@/config/paths';
-import { signedInPerson } from './offline-plan';
+import { signedInPerson } from './offline';
 import type { Role } from '@shared/schemas/auth.schema';
 
 /**
  * Loader for the signed-in area: no session → sign-in, then back here (the section a link named too: "#…"). Without a
- * network, a client's saved plan stands in (./offline-plan.ts).
+ * network, the person whose answers are kept on this device stands in (./offline.ts).
  */
 export function requireSignedIn(qc: QueryClient) {
   return async ({ request }: LoaderFunctionArgs) => {

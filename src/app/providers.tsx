@@ -9,7 +9,7 @@ import { followDateOrder } from '@/features/auth/api/auth.queries';
 import { paths } from '@/config/paths';
 import { followUnauthorized, SessionGate } from '@/features/auth/components/session-ended';
 import { createRouter } from './router';
-import { followSavedPlan } from './offline-plan';
+import { followKeptPerson } from './offline';
 import { followNetwork } from '@/lib/online';
 
 /** The sign-in page, then back to where the router is. */
@@ -23,7 +23,7 @@ export function AppProviders() {
     followNetwork();
     const qc = createQueryClient();
     followDateOrder(qc);
-    followSavedPlan(qc);
+    followKeptPerson(qc);
     return qc;
   });
   const [router] = useState(() => createRouter(queryClient));

@@ -1,7 +1,7 @@
 // Trayline's service worker: lets the app open without a network (a client's plates on a phone in a kitchen with no
 // signal). It keeps the page itself (index.html) and the build's files (/assets/…), nothing else: the API's answers
-// never pass through here (the page keeps its own saved copy of a client's plan, src/features/weeks/api/
-// saved-plan.ts), so nobody's data sits in this cache and every request to /api/ goes to the server as it is.
+// never pass through here (pages keep their own copies of what must open offline, src/lib/device-copy.ts), so
+// nobody's data sits in this cache and every request to /api/ goes to the server as it is.
 //
 // - A page (a navigation, any path outside /api/): the network first; its answer is kept as "the page". Without a
 //   network, the kept page answers (the router then shows the path asked for).

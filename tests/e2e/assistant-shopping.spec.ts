@@ -82,3 +82,53 @@ test('the assistant checks two items on the shopping list (they sink, strike thr
   await expect(page.getByRole('link', { name: 'Bake run' }).first()).toBeVisible();
   await expectNoSeriousA11yViolations(page, 'assistant home');
 });
+
+test.describe('with the service worker', () => {
+  test.use({ serviceWorkers: 'allow' });
+
+  test('the assistant shops with no signal: the list kept on the phone opens offline, and its ticks reach the server once back online, even after the page was closed', async ({ page, context }) => {
+    await signIn(page, 'assistant@trayline.test');
+    await clockOnTheDemoMonday(page);
+    await page.goto('/shopping');
+    await expect(page).toHaveURL(/\/weeks\/\d+\/shopping\?for=\d{4}-\d{2}-\d{2}$/);
+    const listUrl = new URL(page.url());
+    const api = `/api${listUrl.pathname}${listUrl.search.replace('for=', 'prepDate=')}`;
+    const checkedOnServer = async () => ((await (await page.request.get(api)).json()) as { checkedCount: number }).checkedCount;
+    const before = await checkedOnServer();
+    await expect(page.getByText(new RegExp(`^${before} of \\d+ checked`))).toBeVisible();
+    // Kept: the app (the service worker's page and files; polled through evaluate, which waits for the answer) and the list.
+    const pageKept = () =>
+      page.evaluate(async () => {
+        await navigator.serviceWorker.ready;
+        return (await caches.match('/', { cacheName: 'trayline-page-v1' })) !== undefined;
+      });
+    await expect.poll(pageKept, { timeout: 20_000 }).toBe(true);
+    await page.waitForFunction(() => Object.keys(localStorage).some((k) => k.startsWith('trayline.kept.answer.shopping:')));
+
+    // In the store: no signal. "Shopping list" offers the list kept on the phone.
+    await context.setOffline(true);
+    await page.goto('/shopping');
+    await expect(page.getByRole('heading', { name: 'You are offline' })).toBeVisible();
+    await page.getByRole('link', { name: /^Open the shopping list saved / }).click();
+    await expect(page.getByText('Your list as saved on this device')).toBeVisible();
+    await expect(page.getByRole('link', { name: 'CSV' })).toHaveCount(0);
+    const name = await itemName(page, 0);
+    await page.getByRole('checkbox', { name: new RegExp(`^${name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`) }).check();
+    await expect(page.getByText(new RegExp(`^${before + 1} of \\d+ checked`))).toBeVisible();
+    await expectNoSeriousA11yViolations(page, 'shopping list offline');
+    await page.screenshot({ path: `${SHOTS}/assistant-shopping-offline.png` });
+
+    // The phone closes the page; opened again, still offline, the tick is there.
+    await page.close();
+    const again = await context.newPage();
+    await again.goto(listUrl.pathname + listUrl.search);
+    await expect(again.getByText('Your list as saved on this device')).toBeVisible();
+    await expect(again.getByText(new RegExp(`^${before + 1} of \\d+ checked`))).toBeVisible();
+
+    // Back online: the tick goes to the server, and the page says nothing more of a saved copy.
+    await context.setOffline(false);
+    await expect.poll(async () => ((await (await again.request.get(api)).json()) as { checkedCount: number }).checkedCount, { timeout: 15_000 }).toBe(before + 1);
+    await expect(again.getByText('Your list as saved on this device')).toHaveCount(0);
+    expect(await again.evaluate(() => Object.keys(localStorage).filter((k) => k.startsWith('trayline.kept.answer.shopping-ticks:')))).toEqual([]);
+  });
+});

@@ -83,46 +83,50 @@ test('a client finds the day whose plate holds an allergen on their list, and re
   await note.screenshot({ path: `${SHOTS}/client-allergen-note.png` });
 });
 
-test("a client's plates open on the phone without a network, from the plan saved there; signing out forgets it", async ({ page, context }) => {
-  await signIn(page, 'client2@trayline.test');
-  await expect(page).toHaveURL(/\/my-plates$/);
-  const first = page.locator('main').getByRole('heading', { level: 2 }).first();
-  await expect(first).not.toBeEmpty();
-  const shown = await first.textContent();
-  // The app kept for offline use (the service worker keeps the page, then the build's files) and the plan saved.
-  // (Polled through evaluate, which waits for the answer: waitForFunction would take the promise itself as "true".)
-  const pageKept = () =>
-    page.evaluate(async () => {
-      await navigator.serviceWorker.ready;
-      return (await caches.match('/', { cacheName: 'trayline-page-v1' })) !== undefined;
-    });
-  await expect.poll(pageKept, { timeout: 20_000 }).toBe(true);
-  await page.waitForFunction(() => localStorage.getItem('trayline.saved-plan') !== null);
+test.describe('with the service worker', () => {
+  test.use({ serviceWorkers: 'allow' });
 
-  await context.setOffline(true);
-  await page.reload();
-  await expect(page.getByText('You are offline.')).toBeVisible();
-  await expect(page.getByText('Your plan as saved on this device')).toBeVisible();
-  await expect(first).toHaveText(shown ?? '');
-  // Files come from the server: not offered offline.
-  await expect(page.getByRole('link', { name: /Download my week/ })).toHaveCount(0);
-  await expectNoSeriousA11yViolations(page, 'my plates offline');
-  await page.screenshot({ path: `${SHOTS}/client-offline.png`, fullPage: true });
+  test("a client's plates open on the phone without a network, from the plan saved there; signing out forgets it", async ({ page, context }) => {
+    await signIn(page, 'client2@trayline.test');
+    await expect(page).toHaveURL(/\/my-plates$/);
+    const first = page.locator('main').getByRole('heading', { level: 2 }).first();
+    await expect(first).not.toBeEmpty();
+    const shown = await first.textContent();
+    // The app kept for offline use (the service worker keeps the page, then the build's files) and the plan saved.
+    // (Polled through evaluate, which waits for the answer: waitForFunction would take the promise itself as "true".)
+    const pageKept = () =>
+      page.evaluate(async () => {
+        await navigator.serviceWorker.ready;
+        return (await caches.match('/', { cacheName: 'trayline-page-v1' })) !== undefined;
+      });
+    await expect.poll(pageKept, { timeout: 20_000 }).toBe(true);
+    await page.waitForFunction(() => localStorage.getItem('trayline.kept.answer.my-week') !== null);
 
-  // Back online: read again from the server, the files offered again.
-  await context.setOffline(false);
-  await expect(page.getByText('Your plan as saved on this device')).toHaveCount(0);
-  await expect(page.getByText('You are offline.')).toHaveCount(0);
-  await expect(page.getByRole('link', { name: /Download my week/ }).or(page.getByRole('link', { name: /Download last week/ }))).toBeVisible();
+    await context.setOffline(true);
+    await page.reload();
+    await expect(page.getByText('You are offline.')).toBeVisible();
+    await expect(page.getByText('Your plan as saved on this device')).toBeVisible();
+    await expect(first).toHaveText(shown ?? '');
+    // Files come from the server: not offered offline.
+    await expect(page.getByRole('link', { name: /Download my week/ })).toHaveCount(0);
+    await expectNoSeriousA11yViolations(page, 'my plates offline');
+    await page.screenshot({ path: `${SHOTS}/client-offline.png`, fullPage: true });
 
-  // Signing out forgets the plan: offline, the phone then only says Trayline opens once back online.
-  await page.getByRole('button', { name: 'Menu' }).click();
-  await page.getByRole('button', { name: /Sign out/ }).click();
-  await expect(page).toHaveURL(/\/sign-in/);
-  expect(await page.evaluate(() => localStorage.getItem('trayline.saved-plan'))).toBeNull();
-  await context.setOffline(true);
-  await page.goto('/my-plates');
-  await expect(page.getByText('Trayline opens once you are back online.')).toBeVisible();
-  await expect(page.getByText(shown ?? '')).toHaveCount(0);
-  await context.setOffline(false);
+    // Back online: read again from the server, the files offered again.
+    await context.setOffline(false);
+    await expect(page.getByText('Your plan as saved on this device')).toHaveCount(0);
+    await expect(page.getByText('You are offline.')).toHaveCount(0);
+    await expect(page.getByRole('link', { name: /Download my week/ }).or(page.getByRole('link', { name: /Download last week/ }))).toBeVisible();
+
+    // Signing out forgets the plan: offline, the phone then only says Trayline opens once back online.
+    await page.getByRole('button', { name: 'Menu' }).click();
+    await page.getByRole('button', { name: /Sign out/ }).click();
+    await expect(page).toHaveURL(/\/sign-in/);
+    expect(await page.evaluate(() => localStorage.getItem('trayline.kept.answer.my-week'))).toBeNull();
+    await context.setOffline(true);
+    await page.goto('/my-plates');
+    await expect(page.getByText('Trayline opens once you are back online.')).toBeVisible();
+    await expect(page.getByText(shown ?? '')).toHaveCount(0);
+    await context.setOffline(false);
+  });
 });

@@ -17,6 +17,9 @@ export default defineConfig({
   use: {
     baseURL: `http://127.0.0.1:${port}`,
     trace: 'off',
+    // The service worker (src/public/sw.js) keeps the whole build for offline use as a context first opens the app:
+    // the journeys without a network allow it (test.use), the others leave it out and load only what they open.
+    serviceWorkers: 'block',
     screenshot: 'only-on-failure',
     launchOptions: {
       executablePath: '/usr/bin/chromium',

@@ -6,7 +6,8 @@ import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
 import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema';
 import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
-import { savedPlan, savePlan } from '@/features/weeks/api/saved-plan';
+import { keepAnswer, keptAnswer } from '@/lib/device-copy';
+import type { MyWeekDto } from '@shared/schemas/weeks.schema';
 import { localToday, momentLabel, timeLabel } from '@/lib/dates';
 import { compareIsoDates } from '@shared/domain/iso-date';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
@@ -147,7 +148,10 @@ function ThawTonight({ tasks, date, isToday }: { tasks: ThawTask[]; date: string
   );
 }
 
-/** Said above a plan read from the device (saved-plan.ts) because the server could not be asked. */
+/** The kept answer's name (src/lib/device-copy.ts). */
+const KEPT = 'my-week';
+
+/** Said above a plan read from the device (src/lib/device-copy.ts) because the server could not be asked. */
 function SavedCopy({ savedAt, offline, retry }: { savedAt: number; offline: boolean; retry: () => void }) {
   return (
     // Offline, the frame above already says so.
@@ -175,10 +179,11 @@ export function Component() {
   const [picked, setPicked] = useState<string | null>(null);
   // Each answer is saved on the device: the page opens from it without a network.
   useEffect(() => {
-    if (q.isSuccess) savePlan(me, q.data, q.dataUpdatedAt);
+    if (q.isSuccess) keepAnswer(KEPT, me, q.data, q.dataUpdatedAt);
   }, [me, q.isSuccess, q.data, q.dataUpdatedAt]);
   // No answer for today (no network, or a server that cannot be reached): the plan saved on this device, if any.
-  const saved = q.data === undefined && (q.isError || q.fetchStatus === 'paused') ? savedPlan(me.id) : null;
+  const kept = q.data === undefined && (q.isError || q.fetchStatus === 'paused') ? keptAnswer<MyWeekDto | null>(KEPT, me) : null;
+  const saved = kept && { week: kept.data, savedAt: kept.savedAt };
   if (!saved && q.isPending) {
     return q.fetchStatus === 'paused' ? (
       <div className="flex flex-col gap-6">

@@ -1,7 +1,12 @@
+import { useEffect } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { shoppingCsvUrl, shoppingListQuery, shoppingPdfUrl } from '@/features/shopping/api/shopping.queries';
-import { useMarkBought } from '@/features/shopping/api/use-shopping-mutations';
+import { keptListName, useMarkBought } from '@/features/shopping/api/use-shopping-mutations';
+import { useMe } from '@/features/auth/hooks/use-me';
+import { forgetAnswer, keptNames } from '@/lib/device-copy';
+import { useKeptAnswer } from '@/lib/use-kept-answer';
+import { useOnline } from '@/lib/online';
 import { money, ShoppingList } from '@/features/shopping/components/shopping-list';
 import { Button, linkButton } from '@/components/ui/button';
 import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton, Progress } from '@/components/ui/states';
@@ -46,13 +51,52 @@ export function Component() {
   const weekId = Number(useParams().weekId);
   const [params] = useSearchParams();
   const prepDate = params.get('for') || null;
-  const q = useQuery(shoppingListQuery(weekId, prepDate));
+  const me = useMe();
+  const online = useOnline();
+  const query = shoppingListQuery(weekId, prepDate);
+  const q = useQuery(query);
   const bought = useMarkBought(weekId, prepDate);
   const scale = useTempScale();
+  // Kept on the device, so the list opens in a store with no signal (one week's lists: another week's are let go).
+  const kept = keptListName(weekId, prepDate);
+  const fromDevice = useKeptAnswer(q, query.queryKey, kept, me);
+  useEffect(() => {
+    if (q.isSuccess) for (const n of keptNames('shopping:')) if (!n.startsWith(`shopping:${weekId}:`)) forgetAnswer(n);
+  }, [q.isSuccess, weekId]);
 
-  if (q.isPending) return <PageSkeleton />;
-  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  if (q.data === undefined) {
+    if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+    return <PageSkeleton />;
+  }
   const list = q.data;
+  // What the page says about where the list comes from when it is not the server's answer of a moment ago.
+  const source =
+    fromDevice !== null ? (
+      <Notice tone="warn" title={online ? 'Trayline cannot be reached: this is your list as saved on this device' : 'Your list as saved on this device'}>
+        <p>
+          Saved {momentLabel(new Date(fromDevice).toISOString())}. Ticks are kept on this device and sent once you are back online;
+          changes made elsewhere since then show then too.
+        </p>
+        {online && (
+          <p className="mt-2">
+            <Button variant="secondary" busy={q.isFetching} onClick={() => void q.refetch()}>
+              Try again
+            </Button>
+          </p>
+        )}
+      </Notice>
+    ) : (
+      q.isError && (
+        <Notice tone="warn" title="Could not read the list again">
+          <p>{errorMessage(q.error)} It shows as it was last read.</p>
+          <p className="mt-2">
+            <Button variant="secondary" busy={q.isFetching} onClick={() => void q.refetch()}>
+              Try again
+            </Button>
+          </p>
+        </Notice>
+      )
+    );
   const trip = list.prepDate ? `the list for prep ${dayLabel(list.prepDate)}` : list.tripDates.length ? "the whole week's list" : 'the list';
 
   const markBought = () => {
@@ -75,17 +119,23 @@ export function Component() {
         <Button variant="secondary" onClick={() => window.print()}>
           Print
         </Button>
-        <a className={linkButton} href={shoppingCsvUrl(weekId, list.prepDate)} download>
-          CSV
-        </a>
-        <a className={linkButton} href={shoppingPdfUrl(weekId, list.prepDate)} download>
-          PDF
-        </a>
+        {/* Files come from the server: offered while it can be reached. */}
+        {online && fromDevice === null && (
+          <>
+            <a className={linkButton} href={shoppingCsvUrl(weekId, list.prepDate)} download>
+              CSV
+            </a>
+            <a className={linkButton} href={shoppingPdfUrl(weekId, list.prepDate)} download>
+              PDF
+            </a>
+          </>
+        )}
         <Link className={linkButton} to={paths.pantry}>
           Pantry
         </Link>
       </PageHeader>
 
+      {source}
       {list.tripDates.length > 0 && <TripChoice weekId={weekId} tripDates={list.tripDates} prepDate={list.prepDate} />}
       {list.alsoBought.length > 0 && (
         <Notice tone="warn" title="Another list of this week was marked bought">

@@ -5,7 +5,7 @@ import { prepDatesOf } from '@shared/domain/week-board';
 import { EmptyState, ErrorState, PageHeader, PageSkeleton } from '@/components/ui/states';
 import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { currentWeekQuery } from '../api/shopping.queries';
-import { dayLabel, localToday } from '@/lib/dates';
+import { dayLabel, localToday, momentLabel } from '@/lib/dates';
 import { andList } from '@shared/domain/words';
 
 /**
@@ -19,14 +19,31 @@ export function CurrentWeekRedirect({
   what,
   title,
   sayWhenPassed = false,
+  kept,
 }: {
   to: (week: WeekSummaryDto) => string;
   what: string;
   title: string;
   sayWhenPassed?: boolean;
+  /** Where the copy kept on this device is (the shopping list), for the way to it while the server cannot say. */
+  kept?: () => { path: string; savedAt: number } | null;
 }) {
   const today = localToday();
   const q = useQuery(currentWeekQuery(today));
+  const copy = q.data === undefined && (q.isError || q.fetchStatus === 'paused') ? kept?.() : null;
+  if (copy) {
+    return (
+      <div className="flex flex-col gap-5">
+        <PageHeader title={title} />
+        <EmptyState title={q.isError ? 'Trayline cannot be reached' : 'You are offline'}>
+          <p>This week’s {what} shows once Trayline can be asked. The one saved on this device opens now.</p>
+          <Link to={copy.path} className="inline-flex min-h-11 items-center font-bold underline">
+            Open the {what} saved {momentLabel(new Date(copy.savedAt).toISOString())}
+          </Link>
+        </EmptyState>
+      </div>
+    );
+  }
   if (q.isPending) return <PageSkeleton />;
   if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   if (!q.data) {

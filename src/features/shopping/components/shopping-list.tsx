@@ -1,6 +1,6 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import type { ShoppingAisleDto, ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
-import { useSetCheck } from '../api/use-shopping-mutations';
+import { pendingTicks, useSetCheck } from '../api/use-shopping-mutations';
 import { localHhmm, timeLabel } from '@/lib/dates';
 
 export const money = (cents: number) => `$${(cents / 100).toFixed(2)}`;
@@ -86,6 +86,12 @@ function AisleGroup({ aisle, onToggle }: { aisle: ShoppingAisleDto; onToggle: (i
 
 export function ShoppingList({ list, weekId }: { list: ShoppingListDto; weekId: number }) {
   const setCheck = useSetCheck(weekId, list.prepDate);
+  const { mutate } = setCheck;
+  // Ticks made on this device that the server has not had yet (the page was closed without a network): sent now
+  // (or, still offline, as soon as the network is back). Setting a mark is idempotent: one sent twice is harmless.
+  useEffect(() => {
+    for (const t of pendingTicks(weekId, list.prepDate)) mutate(t);
+  }, [weekId, list.prepDate, mutate]);
   const toggle = (item: ShoppingItemDto, checked: boolean) => setCheck.mutate({ ingredientId: item.ingredientId, checked });
   return (
     <div className="flex flex-col gap-6 print:gap-3">

@@ -2,8 +2,9 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import { onlineManager } from '@tanstack/react-query';
 import { Component as MyPlates } from '@/app/routes/my/my-plates.route';
-import { followSavedPlan, signedInPerson } from '@/app/offline-plan';
-import { forgetSavedPlan, savedPlan, savePlan, SAVED_PLAN_DAYS } from '@/features/weeks/api/saved-plan';
+import { followKeptPerson, signedInPerson } from '@/app/offline';
+import { forgetKept, keepAnswer, keptAnswer, keptPerson, KEEP_DAYS } from '@/lib/device-copy';
+import type { MeDto } from '@shared/schemas/auth.schema';
 import { authKeys } from '@/features/auth/api/auth.keys';
 import type { MyWeekDto } from '@shared/schemas/weeks.schema';
 import { client, day, plate } from './my-plates-fixtures';
@@ -17,6 +18,9 @@ const week = (name: string) =>
   }) as unknown as MyWeekDto;
 const wednesday = new Date(2026, 0, 7, 7);
 const savedAt = new Date(2026, 0, 6, 20, 15).getTime();
+const savePlan = (me: MeDto, w: MyWeekDto, at?: number) => keepAnswer('my-week', me, w, at);
+/** The plan kept for `me` (the client unless told), as of `now`. */
+const keptPlan = (me: Pick<MeDto, 'id' | 'workspaceId'> = client, now?: number) => keptAnswer<MyWeekDto | null>('my-week', me, now);
 const minesAsked = (fetch: ReturnType<typeof vi.fn>) => fetch.mock.calls.filter(([u]) => String(u).includes('/weeks/mine')).length;
 
 function openMyPlates(fetch: ReturnType<typeof vi.fn>) {
@@ -25,14 +29,14 @@ function openMyPlates(fetch: ReturnType<typeof vi.fn>) {
   return renderInApp(<MyPlates />, queryClientFor(client));
 }
 
-afterEach(() => forgetSavedPlan());
+afterEach(() => forgetKept());
 
 describe("a client's plan saved on their device", () => {
   it('keeps each answer of the server, with the person it belongs to', async () => {
     openMyPlates(vi.fn(async () => jsonResponse(week('Chive square'))));
     expect(await screen.findByRole('heading', { level: 2, name: 'Chive square' })).toBeTruthy();
-    await waitFor(() => expect(savedPlan(client.id)?.week?.days[0].plates[0].name).toBe('Chive square'));
-    expect(savedPlan(client.id)?.me.email).toBe(client.email);
+    await waitFor(() => expect(keptPlan()?.data?.days[0].plates[0].name).toBe('Chive square'));
+    expect(keptPerson()?.email).toBe(client.email);
     // Files come from the server: offered while it answers.
     expect(screen.getByRole('link', { name: 'Download my week (PDF)' })).toBeTruthy();
   });
@@ -52,7 +56,7 @@ describe("a client's plan saved on their device", () => {
     act(() => onlineManager.setOnline(true));
     expect(await screen.findByRole('heading', { level: 2, name: 'Fresh square' })).toBeTruthy();
     expect(screen.queryByText('Your plan as saved on this device')).toBeNull();
-    await waitFor(() => expect(savedPlan(client.id)?.week?.days[0].plates[0].name).toBe('Fresh square'));
+    await waitFor(() => expect(keptPlan()?.data?.days[0].plates[0].name).toBe('Fresh square'));
   });
 
   it('shows the saved plan when the server cannot be reached, with "Try again"', async () => {
@@ -86,29 +90,31 @@ describe("a client's plan saved on their device", () => {
     expect(screen.queryByText('Their square')).toBeNull();
   });
 
-  it(`keeps a plan ${SAVED_PLAN_DAYS} days, and a client's only`, () => {
+  it(`keeps an answer ${KEEP_DAYS} days, for its person in their workspace`, () => {
     savePlan(client, week('Saved square'), savedAt);
-    expect(savedPlan(client.id, savedAt + SAVED_PLAN_DAYS * 86_400_000)).not.toBeNull();
-    expect(savedPlan(client.id, savedAt + SAVED_PLAN_DAYS * 86_400_000 + 1)).toBeNull();
-    forgetSavedPlan();
-    savePlan(signedIn({ role: 'coach' }), week('Coach square'), savedAt);
-    expect(savedPlan(undefined, savedAt)).toBeNull();
+    expect(keptPlan(client, savedAt + KEEP_DAYS * 86_400_000)).not.toBeNull();
+    expect(keptPlan(client, savedAt + KEEP_DAYS * 86_400_000 + 1)).toBeNull();
+    expect(keptPerson(savedAt + KEEP_DAYS * 86_400_000 + 1)).toBeNull();
+    expect(keptPlan({ id: client.id + 1, workspaceId: client.workspaceId }, savedAt)).toBeNull();
+    expect(keptPlan({ id: client.id, workspaceId: client.workspaceId + 1 }, savedAt)).toBeNull();
   });
 
   it('is forgotten when its person signs out, is found signed out, or someone else signs in; kept for the same person', () => {
     const qc = testQueryClient();
-    const stop = followSavedPlan(qc);
-    savePlan(client, week('Saved square'));
+    const stop = followKeptPerson(qc);
+    const keep = () => savePlan(client, week('Saved square'));
+    keep();
     qc.setQueryData(authKeys.me(), { ...client });
-    expect(savedPlan(client.id)).not.toBeNull();
+    expect(keptPlan()).not.toBeNull();
     qc.setQueryData(authKeys.me(), null);
-    expect(savedPlan(client.id)).toBeNull();
-    savePlan(client, week('Saved square'));
+    expect(keptPlan()).toBeNull();
+    expect(keptPerson()).toBeNull();
+    keep();
     qc.setQueryData(authKeys.me(), signedIn({ id: 2, role: 'coach' }));
-    expect(savedPlan()).toBeNull();
-    savePlan(client, week('Saved square'));
+    expect(keptPlan()).toBeNull();
+    keep();
     qc.setQueryData(authKeys.me(), { ...client, workspaceId: client.workspaceId + 1 });
-    expect(savedPlan()).toBeNull();
+    expect(keptPlan()).toBeNull();
     stop();
   });
 });
