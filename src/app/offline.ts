@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { MeDto } from '@shared/schemas/auth.schema';
 import { authKeys } from '@/features/auth/api/auth.keys';
-import { meQuery } from '@/features/auth/api/auth.queries';
+import { followMe, meQuery } from '@/features/auth/api/auth.queries';
 import { forgetKept, keptPerson } from '@/lib/device-copy';
 import { isOnline } from '@/lib/online';
 import { isApiError } from '@/lib/problem';
@@ -35,11 +35,7 @@ function restoreKeptPerson(qc: QueryClient): boolean {
  * ended, or someone else signed in (or the same person in another coach's workspace). Returns the unsubscribe.
  */
 export function followKeptPerson(qc: QueryClient): () => void {
-  const key = JSON.stringify(authKeys.me());
-  return qc.getQueryCache().subscribe((event) => {
-    if (event.type !== 'updated' && event.type !== 'added') return;
-    if (JSON.stringify(event.query.queryKey) !== key) return;
-    const me = event.query.state.data as MeDto | null | undefined;
+  return followMe(qc, (me) => {
     if (me === undefined) return;
     const owner = keptPerson();
     if (!owner) return;

@@ -5,18 +5,23 @@ import { jsonResponse, signedIn, testQueryClient } from './render';
 import { RouterProvider } from 'react-router-dom';
 import { createRouter } from '@/app/router';
 
+/** The whole app's router, with its own query client, at the browser's address. */
+function renderApp() {
+  const qc = testQueryClient();
+  render(
+    <QueryClientProvider client={qc}>
+      <RouterProvider router={createRouter(qc)} />
+    </QueryClientProvider>,
+  );
+}
+
 describe('app router', () => {
   it('shows a loading page while the first page and the signed-in check load, without React Router’s missing-fallback warning', async () => {
     let answer: (r: Response) => void = () => {};
     vi.stubGlobal('fetch', vi.fn(() => new Promise<Response>((resolve) => (answer = resolve))));
     const warn = vi.spyOn(console, 'warn').mockImplementation(() => {});
     window.history.pushState({}, '', '/');
-    const qc = testQueryClient();
-    render(
-      <QueryClientProvider client={qc}>
-        <RouterProvider router={createRouter(qc)} />
-      </QueryClientProvider>,
-    );
+    renderApp();
     expect(await screen.findByRole('status', { name: 'Loading page' })).toBeTruthy();
     expect(warn.mock.calls.map((c) => String(c[0])).filter((m) => /HydrateFallback/i.test(m))).toEqual([]);
     answer(new Response(JSON.stringify({ status: 401, title: 'Not signed in' }), { status: 401, headers: { 'content-type': 'application/problem+json' } }));
@@ -37,12 +42,7 @@ describe('app router', () => {
       }),
     );
     window.history.pushState({}, '', '/my-plates');
-    const qc = testQueryClient();
-    render(
-      <QueryClientProvider client={qc}>
-        <RouterProvider router={createRouter(qc)} />
-      </QueryClientProvider>,
-    );
+    renderApp();
     expect(await screen.findByRole('heading', { name: 'No plan yet' })).toBeTruthy();
     const errors: string[] = [];
     const watch = new MutationObserver(() => {

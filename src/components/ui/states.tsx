@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { errorMessage } from '@/lib/problem';
 import { useDocumentTitle } from '@/lib/use-document-title';
 import { useOnline } from '@/lib/online';
+import { momentLabel } from '@/lib/dates';
 import { Button } from './button';
 
 /** Placeholder blocks while data loads. */
@@ -164,5 +165,41 @@ export function OfflineLine({ children, className = '' }: { children: ReactNode;
         </p>
       )}
     </div>
+  );
+}
+
+/**
+ * Said above what a page shows from the copy kept on this device (src/lib/device-copy.ts) because the server could
+ * not be asked: when it was saved, what that means (`children`), and "Try again" while the device is online (the
+ * server is out of reach). Offline, the app's frame already says so.
+ */
+export function KeptCopyNotice({
+  what,
+  savedAt,
+  online,
+  retry,
+  retrying = false,
+  children,
+}: {
+  what: string;
+  savedAt: number;
+  online: boolean;
+  retry: () => void;
+  retrying?: boolean;
+  children: ReactNode;
+}) {
+  return (
+    <Notice tone="warn" title={online ? `Trayline cannot be reached: this is your ${what} as saved on this device` : `Your ${what} as saved on this device`}>
+      <p>
+        Saved {momentLabel(new Date(savedAt).toISOString())}. {children}
+      </p>
+      {online && (
+        <p className="mt-2">
+          <Button variant="secondary" busy={retrying} onClick={retry}>
+            Try again
+          </Button>
+        </p>
+      )}
+    </Notice>
   );
 }

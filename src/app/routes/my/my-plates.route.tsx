@@ -4,15 +4,14 @@ import { allergenLabel, clientAllergenNotes } from '@shared/domain/allergens';
 import { FRIDGE_MAX_F, REHEAT_MIN_F, thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
 import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
-import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema';
+import type { MyDayDto, MyPlateDto, MyWeekDto } from '@shared/schemas/weeks.schema';
 import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
 import { keepAnswer, keptAnswer } from '@/lib/device-copy';
-import type { MyWeekDto } from '@shared/schemas/weeks.schema';
 import { localToday, momentLabel, timeLabel } from '@/lib/dates';
 import { compareIsoDates } from '@shared/domain/iso-date';
-import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { Card, EmptyState, ErrorState, KeptCopyNotice, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
-import { Button, linkButton } from '@/components/ui/button';
+import { linkButton } from '@/components/ui/button';
 import { useOnline } from '@/lib/online';
 import { myPlanPdfUrl, myThawRemindersUrl } from '@/features/mail/api/week-mail.queries';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
@@ -151,26 +150,6 @@ function ThawTonight({ tasks, date, isToday }: { tasks: ThawTask[]; date: string
 /** The kept answer's name (src/lib/device-copy.ts). */
 const KEPT = 'my-week';
 
-/** Said above a plan read from the device (src/lib/device-copy.ts) because the server could not be asked. */
-function SavedCopy({ savedAt, offline, retry }: { savedAt: number; offline: boolean; retry: () => void }) {
-  return (
-    // Offline, the frame above already says so.
-    <Notice tone="warn" title={offline ? 'Your plan as saved on this device' : 'Trayline cannot be reached: this is your plan as saved on this device'}>
-      <p>
-        Saved {momentLabel(new Date(savedAt).toISOString())}. If your coach has changed your plan since, the change shows here once
-        you are back online.
-      </p>
-      {!offline && (
-        <p className="mt-2">
-          <Button variant="secondary" onClick={retry}>
-            Try again
-          </Button>
-        </p>
-      )}
-    </Notice>
-  );
-}
-
 export function Component() {
   const today = localToday();
   const me = useMe();
@@ -199,7 +178,11 @@ export function Component() {
   }
   if (!saved && q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
   const week = saved ? saved.week : (q.data ?? null);
-  const savedCopy = saved && <SavedCopy savedAt={saved.savedAt} offline={!online} retry={() => void q.refetch()} />;
+  const savedCopy = saved && (
+    <KeptCopyNotice what="plan" savedAt={saved.savedAt} online={online} retry={() => void q.refetch()} retrying={q.isFetching}>
+      If your coach has changed your plan since, the change shows here once you are back online.
+    </KeptCopyNotice>
+  );
   if (!week || (week.days.length === 0 && !week.next)) {
     return (
       <div className="flex flex-col gap-6">

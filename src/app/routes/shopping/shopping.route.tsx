@@ -9,7 +9,7 @@ import { useKeptAnswer } from '@/lib/use-kept-answer';
 import { useOnline } from '@/lib/online';
 import { money, ShoppingList } from '@/features/shopping/components/shopping-list';
 import { Button, linkButton } from '@/components/ui/button';
-import { EmptyState, ErrorState, Notice, PageHeader, PageSkeleton, Progress } from '@/components/ui/states';
+import { EmptyState, ErrorState, KeptCopyNotice, Notice, PageHeader, PageSkeleton, Progress } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { errorMessage } from '@/lib/problem';
 import { dayLabel, momentLabel } from '@/lib/dates';
@@ -72,19 +72,9 @@ export function Component() {
   // What the page says about where the list comes from when it is not the server's answer of a moment ago.
   const source =
     fromDevice !== null ? (
-      <Notice tone="warn" title={online ? 'Trayline cannot be reached: this is your list as saved on this device' : 'Your list as saved on this device'}>
-        <p>
-          Saved {momentLabel(new Date(fromDevice).toISOString())}. Ticks are kept on this device and sent once you are back online;
-          changes made elsewhere since then show then too.
-        </p>
-        {online && (
-          <p className="mt-2">
-            <Button variant="secondary" busy={q.isFetching} onClick={() => void q.refetch()}>
-              Try again
-            </Button>
-          </p>
-        )}
-      </Notice>
+      <KeptCopyNotice what="list" savedAt={fromDevice} online={online} retry={() => void q.refetch()} retrying={q.isFetching}>
+        Ticks are kept on this device and sent once you are back online; changes made elsewhere since then show then too.
+      </KeptCopyNotice>
     ) : (
       q.isError && (
         <Notice tone="warn" title="Could not read the list again">

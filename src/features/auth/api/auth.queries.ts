@@ -50,14 +50,23 @@ export const invitationQuery = (token: string) =>
  * and so does the person's own °F / °C (src/lib/temp-scale.ts). Returns the unsubscribe.
  */
 export function followDateOrder(qc: QueryClient): () => void {
-  const key = JSON.stringify(authKeys.me());
-  return qc.getQueryCache().subscribe((event) => {
-    if (event.type !== 'updated' && event.type !== 'added') return;
-    if (JSON.stringify(event.query.queryKey) !== key) return;
-    const me = event.query.state.data as MeDto | null | undefined;
+  return followMe(qc, (me) => {
     setDateOrder(me?.dateOrder ?? DEFAULT_DATE_ORDER);
     setClockStyle(me?.clock ?? DEFAULT_CLOCK);
     setKitchenZone(me?.timeZone ?? null);
     setTempScale(me?.tempUnit ?? 'F');
+  });
+}
+
+/**
+ * Calls `listener` whenever the signed-in person is read or replaced in the cache (undefined: not read yet; null:
+ * nobody signed in). Returns the unsubscribe.
+ */
+export function followMe(qc: QueryClient, listener: (me: MeDto | null | undefined) => void): () => void {
+  const key = JSON.stringify(authKeys.me());
+  return qc.getQueryCache().subscribe((event) => {
+    if (event.type !== 'updated' && event.type !== 'added') return;
+    if (JSON.stringify(event.query.queryKey) !== key) return;
+    listener(event.query.state.data as MeDto | null | undefined);
   });
 }
