@@ -81,6 +81,23 @@ describe('the shopping list without a network', () => {
     expect(await screen.findByText('0 of 2 checked', { exact: false })).toBeTruthy();
   });
 
+  it('rolls back a tick that fails on the way (the server out of reach) and keeps nothing to send later', async () => {
+    let reachable = true;
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init?: RequestInit) => {
+        if (init?.method === 'PUT' && !reachable) throw new TypeError('Failed to fetch');
+        return jsonResponse(list());
+      }),
+    );
+    open();
+    expect(await screen.findByText('0 of 2 checked', { exact: false })).toBeTruthy();
+    reachable = false;
+    fireEvent.click(screen.getByRole('checkbox', { name: /Item 1/ }));
+    await waitFor(() => expect((screen.getByRole('checkbox', { name: /Item 1/ }) as HTMLInputElement).checked).toBe(false));
+    expect(pendingTicks(7, null)).toEqual([]);
+  });
+
   it('shows the kept list with "Try again" when the server cannot be reached', async () => {
     vi.useFakeTimers({ now: new Date(2026, 0, 7, 9), toFake: ['Date'] });
     keepAnswer(keptListName(7, null), assistant, list(), new Date(2026, 0, 6, 18, 30).getTime());

@@ -2,7 +2,6 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MarkBoughtDto, ShoppingCheckDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
 import { api } from '@/lib/api-client';
 import { forgetAnswer, keepForKeptPerson, keptAnswer, keptNames, keptPerson } from '@/lib/device-copy';
-import { isApiError } from '@/lib/problem';
 import { pantryKeys, shoppingKeys } from './shopping.keys';
 
 type CheckVars = { ingredientId: number; checked: boolean };
@@ -74,9 +73,10 @@ export function useSetCheck(weekId: number, prepDate: string | null = null) {
       }
       return { previous };
     },
-    onError: (e, v, ctx) => {
-      // Refused by the server (not merely unsent): rolled back, nothing left to send.
-      if (isApiError(e) && e.status >= 400) setPending(weekId, prepDate, v, false);
+    onError: (_e, v, ctx) => {
+      // Refused, or failed on the way (the page rolls it back and says so): nothing left to send. Only a tap that is
+      // waiting (offline) or on its way stays kept.
+      setPending(weekId, prepDate, v, false);
       const now = qc.getQueryData<ShoppingListDto>(key);
       const before = ctx?.previous?.aisles.flatMap((a) => a.items).find((i) => i.ingredientId === v.ingredientId);
       if (now && before) qc.setQueryData<ShoppingListDto>(key, withCheck(now, v.ingredientId, before.check));
