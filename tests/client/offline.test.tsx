@@ -2,6 +2,8 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import { onlineManager } from '@tanstack/react-query';
 import { Component as MyPlates } from '@/app/routes/my/my-plates.route';
+import { Component as MyTargets } from '@/app/routes/my/my-targets.route';
+import { emptyClient } from '@/features/clients/components/client-form';
 import { followKeptPerson, signedInPerson } from '@/app/offline';
 import { forgetKept, keepAnswer, keptAnswer, keptPerson, KEEP_DAYS } from '@/lib/device-copy';
 import type { MeDto } from '@shared/schemas/auth.schema';
@@ -116,6 +118,31 @@ describe("a client's plan saved on their device", () => {
     qc.setQueryData(authKeys.me(), { ...client, workspaceId: client.workspaceId + 1 });
     expect(keptPlan()).toBeNull();
     stop();
+  });
+});
+
+describe("a client's targets without a network", () => {
+  // The client's own profile as GET /api/clients/:id answers it (invented numbers).
+  const own = (kcal: number) => ({
+    ...emptyClient, id: client.clientId, name: client.name, allergens: ['milk'], dislikes: [],
+    targets: { mode: 'computed', reeKcal: 1370, tdeeKcal: kcal, targetKcal: kcal, netCarbCapG: 20, proteinG: 105, fatG: 150, notes: [], slots: {} },
+    slotShares: {}, version: 1,
+  });
+
+  it('are kept with the plan, open offline from there, and say when they were saved', async () => {
+    vi.useFakeTimers({ now: wednesday, toFake: ['Date'] });
+    keepAnswer('my-targets', client, own(1884), savedAt);
+    onlineManager.setOnline(false);
+    const fetch = vi.fn(async () => jsonResponse(own(1900)));
+    vi.stubGlobal('fetch', fetch);
+    renderInApp(<MyTargets />, queryClientFor(client));
+    expect(await screen.findByText('Your targets as saved on this device')).toBeTruthy();
+    expect(screen.getByText('1884 kcal')).toBeTruthy();
+    expect(fetch).not.toHaveBeenCalled();
+    act(() => onlineManager.setOnline(true));
+    expect(await screen.findByText('1900 kcal')).toBeTruthy();
+    expect(screen.queryByText('Your targets as saved on this device')).toBeNull();
+    await waitFor(() => expect(keptAnswer<{ targets: { targetKcal: number } }>('my-targets', client)?.data.targets.targetKcal).toBe(1900));
   });
 });
 

@@ -101,6 +101,12 @@ test.describe('with the service worker', () => {
       });
     await expect.poll(pageKept, { timeout: 20_000 }).toBe(true);
     await page.waitForFunction(() => localStorage.getItem('trayline.kept.answer.my-week') !== null);
+    // Their targets, opened once online, are kept too.
+    await page.goto('/my-targets');
+    await expect(page.getByRole('heading', { level: 1, name: 'My targets' })).toBeVisible();
+    await page.waitForFunction(() => localStorage.getItem('trayline.kept.answer.my-targets') !== null);
+    await page.goto('/my-plates');
+    await expect(first).toHaveText(shown ?? '');
 
     await context.setOffline(true);
     await page.reload();
@@ -111,6 +117,11 @@ test.describe('with the service worker', () => {
     await expect(page.getByRole('link', { name: /Download my week/ })).toHaveCount(0);
     await expectNoSeriousA11yViolations(page, 'my plates offline');
     await page.screenshot({ path: `${SHOTS}/client-offline.png`, fullPage: true });
+    await page.goto('/my-targets');
+    await expect(page.getByText('Your targets as saved on this device')).toBeVisible();
+    await expect(page.getByText(/^\d+ kcal$/).first()).toBeVisible();
+    await page.goto('/my-plates');
+    await expect(page.getByText('Your plan as saved on this device')).toBeVisible();
 
     // Back online: read again from the server, the files offered again.
     await context.setOffline(false);

@@ -2,20 +2,31 @@ import { useQuery } from '@tanstack/react-query';
 import { allergenLabel } from '@shared/domain/allergens';
 import { clientQuery } from '@/features/clients/api/clients.queries';
 import { useMe } from '@/features/auth/hooks/use-me';
-import { Card, EmptyState, ErrorState, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { Card, EmptyState, ErrorState, KeptCopyNotice, PageHeader, PageSkeleton } from '@/components/ui/states';
+import { useKeptAnswer } from '@/lib/use-kept-answer';
+import { useOnline } from '@/lib/online';
 import { Cautions } from '@/components/domain/cautions';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { SlotShares } from '@/features/clients/components/slot-shares';
 
 function Linked({ clientId }: { clientId: number }) {
-  const q = useQuery(clientQuery(clientId));
-  if (q.isPending) return <PageSkeleton />;
-  if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
+  const me = useMe();
+  const online = useOnline();
+  const query = clientQuery(clientId);
+  const q = useQuery(query);
+  // Kept on the device with the plan: the page opens without a network too.
+  const fromDevice = useKeptAnswer(q, query.queryKey, 'my-targets', me);
+  if (q.data === undefined) return q.isError ? <ErrorState error={q.error} retry={() => q.refetch()} /> : <PageSkeleton />;
   const c = q.data;
   const t = c.targets;
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-5">
       <PageHeader title="My targets" lead={t.mode === 'computed' ? 'Computed by your coach from your profile' : 'Set by your coach'} />
+      {fromDevice !== null && (
+        <KeptCopyNotice what="targets" savedAt={fromDevice} online={online} retry={() => void q.refetch()} retrying={q.isFetching}>
+          If your coach has changed them since, the change shows here once you are back online.
+        </KeptCopyNotice>
+      )}
       <DemoNotice>A demo account: these targets belong to an invented person and are not advice.</DemoNotice>
       <Card>
         <dl className="grid grid-cols-2 gap-3">
