@@ -1,4 +1,4 @@
-import { useEffect, useSyncExternalStore } from 'react';
+import { useEffect, useMemo, useSyncExternalStore } from 'react';
 import { hashKey, useQueryClient, type QueryClient, type QueryKey, type UseQueryResult } from '@tanstack/react-query';
 import type { MeDto } from '@shared/schemas/auth.schema';
 import { keepAnswer, keptAnswer } from './device-copy';
@@ -17,13 +17,20 @@ function setShown(qc: QueryClient, key: string, savedAt: number | null) {
   for (const l of s.listeners) l();
 }
 
+/** What the page shows from the device: when it was saved (null: the server's answer), and whether one is on its way in. */
+export interface KeptState {
+  fromDevice: number | null;
+  /** No answer yet, and a kept one is being put in its place: show the page loading, not an error or "offline". */
+  seeding: boolean;
+}
+
 /**
  * A read that opens without a network: each of its answers is kept on the device (./device-copy.ts, as `name`, for
  * `me`); when no answer can be had (offline, or the server out of reach) and one is kept, it is put in the query's
- * place, so the page works on it as on the server's (a shopping tick changes it and is kept too). Returns when that
- * kept answer was saved while it is what the page shows, null once the server has answered.
+ * place, so the page works on it as on the server's (a shopping tick changes it and is kept too). `fromDevice` says
+ * when that kept answer was saved while it is what the page shows, null once the server has answered.
  */
-export function useKeptAnswer<T>(q: UseQueryResult<T>, queryKey: QueryKey, name: string, me: MeDto): number | null {
+export function useKeptAnswer<T>(q: UseQueryResult<T>, queryKey: QueryKey, name: string, me: MeDto): KeptState {
   const qc = useQueryClient();
   const key = hashKey(queryKey);
   const store = storeOf(qc);
@@ -38,15 +45,15 @@ export function useKeptAnswer<T>(q: UseQueryResult<T>, queryKey: QueryKey, name:
     if (q.isSuccess) keepAnswer(name, me, q.data, q.dataUpdatedAt);
   }, [name, me, q.isSuccess, q.data, q.dataUpdatedAt]);
   const noAnswer = q.data === undefined && (q.isError || q.fetchStatus === 'paused');
+  // Read from storage once each time the read goes without an answer, not on every render.
+  const kept = useMemo(() => (noAnswer ? keptAnswer<T>(name, me) : null), [noAnswer, name, me]);
   useEffect(() => {
-    if (!noAnswer) return;
-    const kept = keptAnswer<T>(name, me);
     if (!kept) return;
     setShown(qc, key, kept.savedAt);
     qc.setQueryData(queryKey, kept.data, { updatedAt: kept.savedAt });
     // queryKey is named by `key` (its hash).
     // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [noAnswer, name, me, qc, key]);
+  }, [kept, qc, key]);
   // The server's own answer (not data set on this device) ends it.
   useEffect(
     () =>
@@ -55,5 +62,5 @@ export function useKeptAnswer<T>(q: UseQueryResult<T>, queryKey: QueryKey, name:
       }),
     [qc, key],
   );
-  return fromDevice;
+  return { fromDevice, seeding: kept !== null && q.data === undefined };
 }

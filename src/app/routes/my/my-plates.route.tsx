@@ -1,12 +1,12 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { allergenLabel, clientAllergenNotes } from '@shared/domain/allergens';
 import { FRIDGE_MAX_F, REHEAT_MIN_F, thawTasks, THAW_REMINDER_TIME, type ThawTask } from '@shared/domain/eat-by';
 import { amountAndName } from '@shared/domain/units';
 import { useMe } from '@/features/auth/hooks/use-me';
-import type { MyDayDto, MyPlateDto, MyWeekDto } from '@shared/schemas/weeks.schema';
+import type { MyDayDto, MyPlateDto } from '@shared/schemas/weeks.schema';
 import { myWeekQuery } from '@/features/weeks/api/weeks.queries';
-import { keepAnswer, keptAnswer } from '@/lib/device-copy';
+import { useKeptAnswer } from '@/lib/use-kept-answer';
 import { localToday, momentLabel, timeLabel } from '@/lib/dates';
 import { compareIsoDates } from '@shared/domain/iso-date';
 import { Card, EmptyState, ErrorState, KeptCopyNotice, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
@@ -147,39 +147,32 @@ function ThawTonight({ tasks, date, isToday }: { tasks: ThawTask[]; date: string
   );
 }
 
-/** The kept answer's name (src/lib/device-copy.ts). */
-const KEPT = 'my-week';
-
 export function Component() {
   const today = localToday();
   const me = useMe();
   const online = useOnline();
-  const q = useQuery(myWeekQuery(today));
+  const query = myWeekQuery(today);
+  const q = useQuery(query);
   const [picked, setPicked] = useState<string | null>(null);
-  // Each answer is saved on the device: the page opens from it without a network.
-  useEffect(() => {
-    if (q.isSuccess) keepAnswer(KEPT, me, q.data, q.dataUpdatedAt);
-  }, [me, q.isSuccess, q.data, q.dataUpdatedAt]);
-  // No answer for today (no network, or a server that cannot be reached): the plan saved on this device, if any.
-  const kept = q.data === undefined && (q.isError || q.fetchStatus === 'paused') ? keptAnswer<MyWeekDto | null>(KEPT, me) : null;
-  const saved = kept && { week: kept.data, savedAt: kept.savedAt };
-  if (!saved && q.isPending) {
-    return q.fetchStatus === 'paused' ? (
-      <div className="flex flex-col gap-6">
-        <PageHeader title="My plates" />
-        <EmptyState title="You are offline">
-          Your plan has not been saved on this device yet. It shows here once you are back online, and from then on
-          without a network too.
-        </EmptyState>
-      </div>
-    ) : (
-      <PageSkeleton />
-    );
+  // Each answer is kept on the device; without one for today (offline, or the server out of reach), the kept plan.
+  const { fromDevice, seeding } = useKeptAnswer(q, query.queryKey, 'my-week', me);
+  if (q.data === undefined) {
+    if (q.fetchStatus === 'paused' && !seeding) {
+      return (
+        <div className="flex flex-col gap-6">
+          <PageHeader title="My plates" />
+          <EmptyState title="You are offline">
+            Your plan has not been saved on this device yet. It shows here once you are back online, and from then on
+            without a network too.
+          </EmptyState>
+        </div>
+      );
+    }
+    return q.isError && !seeding ? <ErrorState error={q.error} retry={() => q.refetch()} /> : <PageSkeleton />;
   }
-  if (!saved && q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
-  const week = saved ? saved.week : (q.data ?? null);
-  const savedCopy = saved && (
-    <KeptCopyNotice what="plan" savedAt={saved.savedAt} online={online} retry={() => void q.refetch()} retrying={q.isFetching}>
+  const week = q.data;
+  const savedCopy = fromDevice !== null && (
+    <KeptCopyNotice what="plan" savedAt={fromDevice} online={online} retry={() => void q.refetch()} retrying={q.isFetching}>
       If your coach has changed your plan since, the change shows here once you are back online.
     </KeptCopyNotice>
   );
@@ -193,7 +186,7 @@ export function Component() {
     );
   }
   // Files come from the server: offered while it can be reached.
-  const canDownload = online && !saved;
+  const canDownload = online && fromDevice === null;
   // The next published week's days too: the client can look ahead, and a frozen plate on its first day thaws on
   // this week's last evening.
   const allDays = [...week.days, ...(week.next?.days ?? [])];

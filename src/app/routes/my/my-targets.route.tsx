@@ -15,8 +15,8 @@ function Linked({ clientId }: { clientId: number }) {
   const query = clientQuery(clientId);
   const q = useQuery(query);
   // Kept on the device with the plan: the page opens without a network too.
-  const fromDevice = useKeptAnswer(q, query.queryKey, 'my-targets', me);
-  if (q.data === undefined) return q.isError ? <ErrorState error={q.error} retry={() => q.refetch()} /> : <PageSkeleton />;
+  const { fromDevice, seeding } = useKeptAnswer(q, query.queryKey, 'my-targets', me);
+  if (q.data === undefined) return q.isError && !seeding ? <ErrorState error={q.error} retry={() => q.refetch()} /> : <PageSkeleton />;
   const c = q.data;
   const t = c.targets;
   return (

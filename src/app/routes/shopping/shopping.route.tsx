@@ -59,15 +59,12 @@ export function Component() {
   const scale = useTempScale();
   // Kept on the device, so the list opens in a store with no signal (one week's lists: another week's are let go).
   const kept = keptListName(weekId, prepDate);
-  const fromDevice = useKeptAnswer(q, query.queryKey, kept, me);
+  const { fromDevice, seeding } = useKeptAnswer(q, query.queryKey, kept, me);
   useEffect(() => {
     if (q.isSuccess) for (const n of keptNames('shopping:')) if (!n.startsWith(`shopping:${weekId}:`)) forgetAnswer(n);
   }, [q.isSuccess, weekId]);
 
-  if (q.data === undefined) {
-    if (q.isError) return <ErrorState error={q.error} retry={() => q.refetch()} />;
-    return <PageSkeleton />;
-  }
+  if (q.data === undefined) return q.isError && !seeding ? <ErrorState error={q.error} retry={() => q.refetch()} /> : <PageSkeleton />;
   const list = q.data;
   // What the page says about where the list comes from when it is not the server's answer of a moment ago.
   const source =
