@@ -1,9 +1,9 @@
 import { expect, test, type Page } from '@playwright/test';
-import { expectNoSeriousA11yViolations, signIn } from './support';
+import { expectNoSeriousA11yViolations, expectNoSidewaysScroll, signIn } from './support';
 
 /**
  * Every page of each role through axe (WCAG 2 A and AA, serious and critical): the coach at a laptop and on a phone,
- * the assistant and a client on a phone. Ids come from the demo workspace through the API.
+ * the assistant and a client on a phone (where no page may scroll sideways as a whole). Ids come from the demo workspace through the API.
  */
 async function demoIds(page: Page) {
   const get = async <T,>(path: string) => (await (await page.request.get(path)).json()) as T;
@@ -21,6 +21,7 @@ async function checkPages(page: Page, paths: string[]) {
     // Pages read their data after the heading shows: wait until no skeleton or spinner is left.
     await expect(page.locator('[aria-busy="true"], .animate-pulse')).toHaveCount(0);
     await expectNoSeriousA11yViolations(page, path);
+    if ((page.viewportSize()?.width ?? 1024) < 640) await expectNoSidewaysScroll(page, path);
   }
 }
 

@@ -23,6 +23,26 @@ export async function expectNoSeriousA11yViolations(page: Page, context = '') {
   expect(report, `axe violations${context ? ` on ${context}` : ''} at ${page.url()}`).toEqual([]);
 }
 
+/**
+ * WCAG 2.2 1.4.10 (Reflow): on a phone the page does not scroll sideways as a whole (a wide table may scroll inside
+ * its own frame). Names the elements that stick out past the right edge outside any scrolling frame.
+ */
+export async function expectNoSidewaysScroll(page: Page, context = '') {
+  const out = await page.evaluate(() => {
+    const width = document.documentElement.clientWidth;
+    if (document.documentElement.scrollWidth <= width) return [];
+    const inFrame = (el: Element) => {
+      for (let p = el.parentElement; p; p = p.parentElement) if (getComputedStyle(p).overflowX !== 'visible') return true;
+      return false;
+    };
+    return [...document.querySelectorAll('body *')]
+      .filter((el) => el.getBoundingClientRect().right > width + 1 && !inFrame(el))
+      .slice(0, 4)
+      .map((el) => `${el.tagName.toLowerCase()}${el.id ? `#${el.id}` : ''} "${(el.textContent ?? '').trim().slice(0, 40)}"`);
+  });
+  expect(out, `the page scrolls sideways${context ? ` on ${context}` : ''} at ${page.url()}`).toEqual([]);
+}
+
 /** A name no other test (or earlier run) has used. */
 export function unique(prefix: string) {
   return `${prefix} ${Date.now().toString(36)}${Math.floor(Math.random() * 1296).toString(36)}`;

@@ -61,7 +61,8 @@ export function IngredientImport() {
         .
       </p>
       <form onSubmit={submit} className="flex flex-wrap items-end gap-3">
-        <div className="flex flex-col gap-1">
+        {/* min-w-0 and w-full: a file field's own width (its button and "No file chosen") is wider than a phone's card. */}
+        <div className="flex w-full min-w-0 flex-col gap-1 sm:w-auto">
           <label htmlFor={inputId} className="text-sm font-bold">CSV file</label>
           <input
             ref={fileRef}
@@ -69,7 +70,7 @@ export function IngredientImport() {
             type="file"
             accept=".csv,text/csv"
             onChange={(e) => setFile(e.target.files?.[0] ?? null)}
-            className="min-h-11 rounded-lg border border-line-strong bg-paper-card px-3 py-2"
+            className="min-h-11 w-full min-w-0 rounded-lg border border-line-strong bg-paper-card px-3 py-2 text-sm"
           />
         </div>
         <Button type="submit" variant="secondary" busy={upload.isPending}>
