@@ -16,6 +16,7 @@ import { NotFound, Forbidden } from './http/errors.js';
 import { requestContext } from './http/request-context.js';
 import { configurePassport } from './modules/auth/passport.js';
 import { createSessionStore } from './modules/auth/session-store.js';
+import { SESSION_MAX_AGE_MS } from './modules/auth/devices.js';
 import { authRoutes } from './modules/auth/auth.routes.js';
 import { healthRoutes } from './modules/health/health.routes.js';
 import { apiModules } from './modules/index.js';
@@ -34,8 +35,6 @@ export interface AppDeps {
 
 /** CSRF: cookie-authenticated writes must carry this header (a cross-site form cannot set it; SameSite=Lax too). */
 export const CSRF_HEADER = 'x-trayline-csrf';
-
-const SESSION_MAX_AGE_MS = 14 * 86_400_000;
 
 /** Builds the app without listening (tests use it through supertest). */
 export function createApp({ orm, pool, env, mail, logger, schema = schemaGate(orm) }: AppDeps): Express {

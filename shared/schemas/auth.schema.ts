@@ -62,6 +62,29 @@ export const changePasswordSchema = z.object({
 });
 export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
 
+/** What changing the password did besides: the other devices signed in as this person were signed out. */
+export interface PasswordChangedDto {
+  otherDevicesSignedOut: number;
+}
+
+/**
+ * A device (a browser session) signed in as this person, in any of their workspaces. `id` is a handle for ending it,
+ * not the session's secret id. `device` and `signedInAt` are null for a session started before they were recorded;
+ * `lastActiveAt` is within a minute of the last request made with it (the current one: now).
+ */
+export interface SignedInDeviceDto {
+  id: string;
+  current: boolean;
+  device: string | null;
+  signedInAt: string | null;
+  lastActiveAt: string;
+}
+export const deviceIdSchema = z.string().regex(/^[0-9a-f]{24}$/, { message: 'Not a signed-in device of yours' });
+
+export interface DevicesSignedOutDto {
+  signedOut: number;
+}
+
 export const requestPasswordResetSchema = z.object({ email });
 export const resetPasswordSchema = z.object({ token: z.string().min(20).max(200), newPassword: password });
 

@@ -189,8 +189,108 @@ describe('invitations', () => {
     const bad = await coach.agent.post('/api/auth/password').send({ currentPassword: 'nope', newPassword: 'another-long-password' });
     expect(bad.status).toBe(400);
     expect(bad.body.errors.currentPassword).toBeDefined();
-    await coach.agent.post('/api/auth/password').send({ currentPassword: PASSWORD, newPassword: 'another-long-password' }).expect(204);
+    const ok = await coach.agent.post('/api/auth/password').send({ currentPassword: PASSWORD, newPassword: 'another-long-password' }).expect(200);
+    expect(ok.body).toEqual({ otherDevicesSignedOut: 0 });
     await agentFor(app).post('/api/auth/login').send({ email: coach.email, password: 'another-long-password' }).expect(200);
+  });
+});
+
+// User-Agent headers as two real browsers send them (Chrome on Android, Safari on macOS: the browsers' own formats).
+const PHONE_UA = 'Mozilla/5.0 (Linux; Android 14; Pixel 7) AppleWebKit/537.36 (KHTML, like Gecko) Chrome/120.0.0.0 Mobile Safari/537.36';
+const LAPTOP_UA = 'Mozilla/5.0 (Macintosh; Intel Mac OS X 10_15_7) AppleWebKit/605.1.15 (KHTML, like Gecko) Version/17.1 Safari/605.1.15';
+
+async function signedInOn(email: string, userAgent: string, password = PASSWORD) {
+  const agent = agentFor(app).set('user-agent', userAgent);
+  await agent.post('/api/auth/login').send({ email, password }).expect(200);
+  return agent;
+}
+
+describe('the devices signed in as a person', () => {
+  it('lists each sign-in with its device, this one first; nobody else’s; the session id never leaves the server', async () => {
+    const coach = await coachWorkspace(app);
+    const other = await coachWorkspace(app);
+    const phone = await signedInOn(coach.email, PHONE_UA);
+    const before = Date.now();
+    const laptop = await signedInOn(coach.email, LAPTOP_UA);
+    const list = (await laptop.get('/api/auth/devices').expect(200)).body as { id: string; current: boolean; device: string | null; signedInAt: string | null; lastActiveAt: string }[];
+    expect(list).toHaveLength(3); // the sign-up's session, the phone, the laptop
+    expect(list[0]).toMatchObject({ current: true, device: 'Safari on a macOS computer' });
+    expect(Date.parse(list[0].signedInAt!)).toBeGreaterThanOrEqual(before - 1000);
+    expect(list.filter((d) => d.current)).toHaveLength(1);
+    expect(list.map((d) => d.device)).toContain('Chrome on an Android phone');
+    for (const d of list) expect(d.id).toMatch(/^[0-9a-f]{24}$/);
+    const sids = (await sql<{ sid: string }>(`select sid from "session" where (sess->'passport'->>'user') = $1`, [String(coach.userId)])).map((r) => r.sid);
+    expect(sids).toHaveLength(3);
+    expect(JSON.stringify(list)).not.toMatch(new RegExp(sids.join('|')));
+    // Only the words are kept, not the header.
+    const [stored] = await sql<{ sess: string }>(`select sess::text from "session" where (sess->>'device') = 'Chrome on an Android phone' and (sess->'passport'->>'user') = $1`, [String(coach.userId)]);
+    expect(stored.sess).not.toContain('Pixel 7');
+    // The phone sees the same devices, itself first; another person sees only their own.
+    const fromPhone = (await phone.get('/api/auth/devices').expect(200)).body as typeof list;
+    expect(fromPhone[0]).toMatchObject({ current: true, device: 'Chrome on an Android phone' });
+    expect(new Set(fromPhone.map((d) => d.id))).toEqual(new Set(list.map((d) => d.id)));
+    const theirs = (await other.agent.get('/api/auth/devices').expect(200)).body as typeof list;
+    expect(theirs).toHaveLength(1);
+    expect(list.map((d) => d.id)).not.toContain(theirs[0].id);
+  });
+
+  it('signs out one other device: its next request is 401; this device cannot be signed out here; another person’s is 404', async () => {
+    const coach = await coachWorkspace(app);
+    const other = await coachWorkspace(app);
+    const phone = await signedInOn(coach.email, PHONE_UA);
+    const list = (await coach.agent.get('/api/auth/devices').expect(200)).body as { id: string; current: boolean; device: string }[];
+    const phoneId = list.find((d) => d.device === 'Chrome on an Android phone')!.id;
+    const mine = list.find((d) => d.current)!.id;
+    // Someone else cannot end it, nor learn that it exists (404, as for a handle that names nothing).
+    await other.agent.delete(`/api/auth/devices/${phoneId}`).expect(404);
+    await phone.get('/api/auth/me').expect(200);
+    const self = await coach.agent.delete(`/api/auth/devices/${mine}`).expect(400);
+    expect(self.body.errors.id).toBeDefined();
+    await coach.agent.get('/api/auth/me').expect(200);
+    await coach.agent.delete(`/api/auth/devices/${phoneId}`).expect(204);
+    await phone.get('/api/auth/me').expect(401);
+    await coach.agent.delete(`/api/auth/devices/${phoneId}`).expect(404);
+    const bad = await coach.agent.delete('/api/auth/devices/not-a-handle').expect(400);
+    expect(bad.body.errors.id).toBeDefined();
+  });
+
+  it('"sign out everywhere else" ends every other session of the person in every workspace, not this one', async () => {
+    const coach = await coachWorkspace(app);
+    const stranger = await coachWorkspace(app);
+    const phone = await signedInOn(coach.email, PHONE_UA);
+    const laptop = await signedInOn(coach.email, LAPTOP_UA);
+    const res = await laptop.post('/api/auth/devices/sign-out-others').expect(200);
+    expect(res.body).toEqual({ signedOut: 2 });
+    await phone.get('/api/auth/me').expect(401);
+    await coach.agent.get('/api/auth/me').expect(401);
+    await laptop.get('/api/auth/me').expect(200);
+    await stranger.agent.get('/api/auth/me').expect(200);
+    expect((await laptop.post('/api/auth/devices/sign-out-others').expect(200)).body).toEqual({ signedOut: 0 });
+  });
+
+  it('changing the password signs out the other devices, in the same transaction as the new password', async () => {
+    const coach = await coachWorkspace(app);
+    const phone = await signedInOn(coach.email, PHONE_UA);
+    const res = await coach.agent.post('/api/auth/password').send({ currentPassword: PASSWORD, newPassword: 'a-brand-new-password' }).expect(200);
+    expect(res.body).toEqual({ otherDevicesSignedOut: 1 });
+    await phone.get('/api/auth/me').expect(401);
+    await coach.agent.get('/api/auth/me').expect(200);
+    // A wrong current password changes nothing and signs nobody out.
+    const again = await signedInOn(coach.email, PHONE_UA, 'a-brand-new-password');
+    await coach.agent.post('/api/auth/password').send({ currentPassword: 'wrong-wrong', newPassword: 'yet-another-password' }).expect(400);
+    await again.get('/api/auth/me').expect(200);
+  });
+
+  it('a session from before devices were noted lists without its device and sign-in time', async () => {
+    const coach = await coachWorkspace(app);
+    const phone = await signedInOn(coach.email, PHONE_UA);
+    await sql(`update "session" set sess = (sess::jsonb - 'device' - 'signedInAt')::json where (sess->>'device') = 'Chrome on an Android phone' and (sess->'passport'->>'user') = $1`, [String(coach.userId)]);
+    const list = (await coach.agent.get('/api/auth/devices').expect(200)).body as { current: boolean; device: string | null; signedInAt: string | null; lastActiveAt: string }[];
+    const old = list.find((d) => !d.current && d.device === null)!;
+    expect(old).toMatchObject({ device: null, signedInAt: null });
+    // Active within the last minute (the stored expiry is the last request's plus 14 days, rewritten a minute behind).
+    expect(Math.abs(Date.parse(old.lastActiveAt) - Date.now())).toBeLessThan(90_000);
+    await phone.get('/api/auth/me').expect(200);
   });
 });
 

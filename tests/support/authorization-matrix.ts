@@ -38,6 +38,11 @@ export const MATRIX: Record<string, MatrixRow> = {
   'GET /api/auth/me': R('signed-in'),
   'PATCH /api/auth/me': R('signed-in'),
   'POST /api/auth/password': R('signed-in'),
+  'GET /api/auth/devices': R('signed-in'),
+  // A handle that names no session: allowed roles get past the guard to a 404 (auth.api.test.ts ends real ones).
+  'DELETE /api/auth/devices/:id': R('signed-in', { path: () => `/api/auth/devices/${'0'.repeat(24)}` }),
+  // Each matrix member has one session (the one calling), so there is nothing else to end.
+  'POST /api/auth/devices/sign-out-others': R('signed-in'),
   'POST /api/auth/password-reset': R('public', { body: () => ({ email: `matrix-reset-${Date.now()}@example.test` }) }),
   'POST /api/auth/password-reset/confirm': R('public', {
     body: () => ({ token: 'unknown-token-unknown-token', newPassword: 'a-new-password-123' }),

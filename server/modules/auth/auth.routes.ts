@@ -10,6 +10,8 @@ import {
   requestPasswordResetSchema,
   resetPasswordSchema,
   createInvitationSchema,
+  deviceIdSchema,
+  type DevicesSignedOutDto,
   loginSchema,
   registerSchema,
   updatePreferencesSchema,
@@ -21,6 +23,7 @@ import { PgRateLimitStore } from '../../http/rate-limit-store.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import * as auth from './auth.service.js';
+import * as devices from './devices.js';
 import { NO_WORKSPACE, authenticateLocal, signIn, signOut } from './passport.js';
 import type { IInvitation } from './user.entity.js';
 import type { MailQueue } from '../mail/mail.service.js';
@@ -138,9 +141,28 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
   r.post(
     '/auth/password',
     allow('signed-in'),
-    validated({ body: changePasswordSchema }, async ({ body }, req) => {
-      await auth.changePassword(emOf(req), actorOf(req), body);
+    validated({ body: changePasswordSchema }, ({ body }, req) => auth.changePassword(emOf(req), actorOf(req), body, req.sessionID)),
+  );
+
+  // The devices signed in as this person (Settings): list them, sign one out, or all but this one.
+  r.get(
+    '/auth/devices',
+    allow('signed-in'),
+    validated({}, (_i, req) => devices.listDevices(emOf(req), actorOf(req).userId, req.sessionID)),
+  );
+  r.delete(
+    '/auth/devices/:id',
+    allow('signed-in'),
+    validated({ params: z.object({ id: deviceIdSchema }) }, async ({ params }, req) => {
+      await devices.signOutDevice(emOf(req), actorOf(req).userId, req.sessionID, params.id);
     }),
+  );
+  r.post(
+    '/auth/devices/sign-out-others',
+    allow('signed-in'),
+    validated({}, async (_i, req): Promise<DevicesSignedOutDto> => ({
+      signedOut: await devices.signOutOtherDevices(emOf(req), actorOf(req).userId, req.sessionID),
+    })),
   );
 
   r.get(

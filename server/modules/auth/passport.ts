@@ -6,6 +6,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Actor } from '../../http/authz.js';
 import { checkCredentials, loadActor } from './auth.service.js';
 import { preloadedActor } from './session-store.js';
+import { noteSignIn } from './devices.js';
 
 declare module 'express-session' {
   interface SessionData {
@@ -67,9 +68,18 @@ export function authenticateLocal(req: Request, res: Response, next: NextFunctio
   });
 }
 
-/** Signs the actor in; passport regenerates the session id (no session fixation). */
+/**
+ * Signs the actor in; passport regenerates the session id (no session fixation). The new session notes when and
+ * from what device (Settings lists the devices signed in).
+ */
 export function signIn(req: Request, actor: Actor): Promise<void> {
-  return new Promise((resolve, reject) => req.login(actor, (err) => (err ? reject(err) : resolve())));
+  return new Promise((resolve, reject) =>
+    req.login(actor, (err) => {
+      if (err) return reject(err);
+      noteSignIn(req);
+      resolve();
+    }),
+  );
 }
 
 export function signOut(req: Request): Promise<void> {

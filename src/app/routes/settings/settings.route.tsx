@@ -11,6 +11,7 @@ import { Card, Notice, PageHeader } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { NetCarbRuleCard } from '@/features/ingredients/components/net-carb-rule-card';
 import { DatesTimesCard } from './dates-times-card';
+import { SignedInDevices } from '@/features/auth/components/signed-in-devices';
 
 export function Component() {
   const me = useMe();
@@ -24,9 +25,9 @@ export function Component() {
   const onSubmit = form.handleSubmit((values) => {
     setFormError(null);
     change.mutate(values, {
-      onSuccess: () => {
+      onSuccess: ({ otherDevicesSignedOut: n }) => {
         form.reset();
-        toast.success('Password changed');
+        toast.success(n === 0 ? 'Password changed' : `Password changed; ${n === 1 ? '1 other device was' : `${n} other devices were`} signed out`);
       },
       onError: (err) => setFormError(applyServerErrors(err, form.setError)),
     });
@@ -77,10 +78,18 @@ export function Component() {
             error={form.formState.errors.newPassword?.message}
             {...form.register('newPassword')}
           />
+          <p className="text-sm text-ink-soft">Changing it signs out every other device signed in as you.</p>
           <Button type="submit" busy={change.isPending} className="self-start">
             Change password
           </Button>
         </form>
+      </Card>
+      <Card>
+        <h2 className="mb-1 text-xl">Signed-in devices</h2>
+        <p className="mb-3 text-sm text-ink-soft">
+          Where you are signed in, in every workspace you belong to. Sign out a phone you lost or a computer you shared.
+        </p>
+        <SignedInDevices />
       </Card>
     </div>
   );

@@ -4,5 +4,6 @@ export const authKeys = {
   invitations: () => [...authKeys.all, 'invitations'] as const,
   members: () => [...authKeys.all, 'members'] as const,
   workspaces: () => [...authKeys.all, 'workspaces'] as const,
+  devices: () => [...authKeys.all, 'devices'] as const,
   invitation: (token: string) => [...authKeys.all, 'invitation', token] as const,
 };

@@ -3,7 +3,7 @@ import { DEFAULT_DATE_ORDER } from '@shared/domain/iso-date';
 import { setClockStyle, setDateOrder, setKitchenZone } from '@/lib/dates';
 import { setTempScale } from '@/lib/temp-scale';
 import { DEFAULT_CLOCK } from '@shared/domain/clock';
-import type { InvitationDto, MeDto, MemberDto, MyWorkspaceDto, Role } from '@shared/schemas/auth.schema';
+import type { InvitationDto, MeDto, MemberDto, MyWorkspaceDto, Role, SignedInDeviceDto } from '@shared/schemas/auth.schema';
 import { api, notifyUnauthorized } from '@/lib/api-client';
 import { isApiError } from '@/lib/problem';
 import { authKeys } from './auth.keys';
@@ -33,6 +33,9 @@ export const invitationsQuery = () =>
 /** The workspaces the signed-in person belongs to (someone may work for two coaches). */
 export const myWorkspacesQuery = () =>
   queryOptions({ queryKey: authKeys.workspaces(), queryFn: () => api.get<MyWorkspaceDto[]>('/auth/workspaces'), staleTime: 5 * 60_000 });
+
+/** The devices signed in as this person (Settings), this one first. */
+export const devicesQuery = () => queryOptions({ queryKey: authKeys.devices(), queryFn: () => api.get<SignedInDeviceDto[]>('/auth/devices') });
 
 /** Everyone with access to the workspace (coach only): the Team page, the prep-day papers' recipients. */
 export const membersQuery = () => queryOptions({ queryKey: authKeys.members(), queryFn: () => api.get<MemberDto[]>('/members') });

@@ -3,10 +3,12 @@ import type {
   AcceptInvitationInput,
   ChangePasswordInput,
   CreateInvitationInput,
+  DevicesSignedOutDto,
   InvitationDto,
   LoginInput,
   MeDto,
   MemberDto,
+  PasswordChangedDto,
   RegisterInput,
   UpdatePreferencesInput,
 } from '@shared/schemas/auth.schema';
@@ -68,10 +70,31 @@ export function useUpdatePreferences() {
   });
 }
 
+/** A new password; the server signs out every other device at the same time (the list of devices follows). */
 export function useChangePassword() {
+  const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: ChangePasswordInput) => api.post<void>('/auth/password', input),
+    mutationFn: (input: ChangePasswordInput) => api.post<PasswordChangedDto>('/auth/password', input),
     meta: { form: true },
+    onSuccess: () => qc.invalidateQueries({ queryKey: authKeys.devices() }),
+  });
+}
+
+/** Signs out one other device signed in as this person (by its handle from the list). */
+export function useSignOutDevice() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) => api.delete<void>(`/auth/devices/${id}`),
+    onSettled: () => qc.invalidateQueries({ queryKey: authKeys.devices() }),
+  });
+}
+
+/** Signs out every device signed in as this person but this one. */
+export function useSignOutOtherDevices() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.post<DevicesSignedOutDto>('/auth/devices/sign-out-others'),
+    onSettled: () => qc.invalidateQueries({ queryKey: authKeys.devices() }),
   });
 }
 

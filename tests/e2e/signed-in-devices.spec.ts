@@ -1,0 +1,63 @@
+import { expect, test } from '@playwright/test';
+import { SHOTS, expectNoSeriousA11yViolations, signIn } from './support';
+
+// A fresh kitchen assistant (invited here, so no other journey's sessions are touched) signed in on a phone and a
+// laptop: from the laptop's Settings they sign the phone out, then change their password, which signs out the phone
+// again; the laptop stays signed in throughout.
+test('a person sees the devices signed in as them, signs one out, and a new password signs out the others', async ({ page, browser }) => {
+  const email = `devices-${Date.now().toString(36)}@example.test`;
+  const password = 'a-long-kitchen-password';
+  await signIn(page, 'coach@trayline.test');
+  await page.goto('/team');
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByRole('button', { name: 'Invite' }).click();
+  const link = await page.getByLabel('Invitation link').inputValue();
+
+  const phoneContext = await browser.newContext({
+    viewport: { width: 393, height: 851 },
+    isMobile: true,
+    userAgent: 'Mozilla/5.0 (Linux; Android 14; Pixel 7) AppleWebKit/537.36 (KHTML, like Gecko) Chrome/131.0.0.0 Mobile Safari/537.36',
+  });
+  const phone = await phoneContext.newPage();
+  await phone.goto(new URL(link).pathname);
+  await phone.getByLabel('Your name').fill('Sam Devices');
+  await phone.getByLabel('Choose a password').fill(password);
+  await phone.getByRole('button', { name: 'Join' }).click();
+  await expect(phone.getByRole('heading', { name: 'Hello, Sam' })).toBeVisible();
+
+  const laptopContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const laptop = await laptopContext.newPage();
+  await signIn(laptop, email, password);
+  await laptop.goto('/settings');
+  const devices = laptop.getByRole('list', { name: 'Devices signed in as you' }).getByRole('listitem');
+  await expect(devices).toHaveCount(2);
+  await expect(devices.first()).toContainText('(this device)');
+  await expect(devices.nth(1)).toContainText('Chrome on an Android phone');
+  await expect(devices.nth(1)).toContainText('active now');
+  await expectNoSeriousA11yViolations(laptop, 'settings with two devices');
+  await laptop.screenshot({ path: `${SHOTS}/signed-in-devices.png`, fullPage: true });
+
+  // Signing the phone out: at its next step it is on the sign-in page.
+  await devices.nth(1).getByRole('button', { name: /^Sign out Chrome on an Android phone/ }).click();
+  await expect(devices).toHaveCount(1);
+  await expect(laptop.getByText('You are signed in on this device only.')).toBeVisible();
+  await phone.reload();
+  await expect(phone).toHaveURL(/\/sign-in/);
+
+  // Signed in on the phone again, then a new password on the laptop: the phone is signed out, the laptop is not.
+  await signIn(phone, email, password);
+  await laptop.reload();
+  await expect(devices).toHaveCount(2);
+  await laptop.getByLabel('Current password').fill(password);
+  await laptop.getByLabel('New password').fill('an-even-longer-kitchen-password');
+  await laptop.getByRole('button', { name: 'Change password' }).click();
+  await expect(laptop.getByText('Password changed; 1 other device was signed out')).toBeVisible();
+  await expect(devices).toHaveCount(1);
+  await phone.reload();
+  await expect(phone).toHaveURL(/\/sign-in/);
+  await laptop.reload();
+  await expect(laptop.getByRole('heading', { name: 'Settings' })).toBeVisible();
+
+  await phoneContext.close();
+  await laptopContext.close();
+});
