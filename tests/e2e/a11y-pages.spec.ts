@@ -85,5 +85,6 @@ test('the keyboard’s focus is visible on every stop of the sign-in page', asyn
     expect(seen.outline, seen.name).toBe('solid 3px rgb(43, 122, 140)');
   }
   expect(stops.some((s) => s.startsWith('BUTTON Sign in'))).toBe(true);
+  expect(stops.some((s) => s.startsWith('BUTTON Show'))).toBe(true);
   expect(stops.some((s) => s.startsWith('A '))).toBe(true);
 });

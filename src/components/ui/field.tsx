@@ -1,4 +1,4 @@
-import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
+import { forwardRef, useCallback, useEffect, useId, useRef, useState, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 import { dayLabel } from '@/lib/dates';
 
 interface FieldShellProps {
@@ -47,6 +47,62 @@ export const TextField = forwardRef<HTMLInputElement, InputProps>(function TextF
     <FieldShell label={label} error={error} hint={hint} className={className}>
       {({ id, describedBy }) => (
         <input ref={ref} id={id} aria-describedby={describedBy} aria-invalid={!!error} className={control} {...rest} />
+      )}
+    </FieldShell>
+  );
+});
+
+/**
+ * A password box with a Show / Hide button beside the dots (NIST SP 800-63B §5.1.1.2: offer to display the secret
+ * while it is typed, which phones need most). Shown, it is a text box without capitals, correction or spelling
+ * marks; it goes back to dots when its form is sent, so a password manager still sees a password field.
+ */
+export const PasswordField = forwardRef<HTMLInputElement, Omit<InputProps, 'type'>>(function PasswordField(
+  { label, error, hint, className, ...rest },
+  ref,
+) {
+  const [shown, setShown] = useState(false);
+  const own = useRef<HTMLInputElement | null>(null);
+  const setRef = useCallback(
+    (el: HTMLInputElement | null) => {
+      own.current = el;
+      if (typeof ref === 'function') ref(el);
+      else if (ref) ref.current = el;
+    },
+    [ref],
+  );
+  useEffect(() => {
+    const form = own.current?.form;
+    if (!form || !shown) return;
+    const hide = () => setShown(false);
+    form.addEventListener('submit', hide);
+    return () => form.removeEventListener('submit', hide);
+  }, [shown]);
+  return (
+    <FieldShell label={label} error={error} hint={hint} className={className}>
+      {({ id, describedBy }) => (
+        <div className="relative">
+          <input
+            ref={setRef}
+            id={id}
+            aria-describedby={describedBy}
+            aria-invalid={!!error}
+            className={`${control} pr-20`}
+            {...rest}
+            type={shown ? 'text' : 'password'}
+            autoCapitalize="none"
+            autoCorrect="off"
+            spellCheck={false}
+          />
+          <button
+            type="button"
+            aria-controls={id}
+            onClick={() => setShown((v) => !v)}
+            className="absolute inset-y-1 right-1 min-w-16 rounded-md px-3 text-sm font-bold text-ink underline underline-offset-2 hover:bg-paper-deep"
+          >
+            {shown ? 'Hide' : 'Show'} <span className="sr-only">password</span>
+          </button>
+        </div>
       )}
     </FieldShell>
   );

@@ -7,7 +7,7 @@ import { acceptInvitationSchema, type AcceptInvitationInput } from '@shared/sche
 import { invitationQuery } from '@/features/auth/api/auth.queries';
 import { useAcceptInvitation } from '@/features/auth/api/use-auth-mutations';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { PasswordField, TextField } from '@/components/ui/field';
 import { ErrorState, Notice, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
@@ -43,9 +43,8 @@ export function Component() {
       <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
         {formError && <Notice tone="block" title={formError} />}
         <TextField label="Your name" autoComplete="name" error={form.formState.errors.name?.message} {...form.register('name')} />
-        <TextField
+        <PasswordField
           label="Choose a password"
-          type="password"
           autoComplete="new-password"
           hint="At least 10 characters. If this e-mail already has a Trayline account, enter its password."
           error={form.formState.errors.password?.message}

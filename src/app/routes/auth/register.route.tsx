@@ -5,7 +5,7 @@ import { Link, useNavigate } from 'react-router-dom';
 import { registerSchema, type RegisterInput } from '@shared/schemas/auth.schema';
 import { useRegister } from '@/features/auth/api/use-auth-mutations';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { PasswordField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
@@ -36,9 +36,8 @@ export function Component() {
         <TextField label="Your name" autoComplete="name" error={e.name?.message} {...form.register('name')} />
         <TextField label="Business name" autoComplete="organization" error={e.businessName?.message} {...form.register('businessName')} />
         <TextField label="E-mail" type="email" autoComplete="email" error={e.email?.message} {...form.register('email')} />
-        <TextField
+        <PasswordField
           label="Password"
-          type="password"
           autoComplete="new-password"
           hint="At least 10 characters."
           error={e.password?.message}

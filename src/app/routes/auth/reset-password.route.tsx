@@ -5,7 +5,7 @@ import { Link, useParams } from 'react-router-dom';
 import { z } from 'zod';
 import { useConfirmPasswordReset } from '@/features/auth/api/use-password-reset';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { PasswordField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
@@ -49,8 +49,8 @@ export function Component() {
               <Link className="font-bold underline" to={paths.forgotPassword}>Ask for a new link</Link>
             </Notice>
           )}
-          <TextField label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." error={form.formState.errors.newPassword?.message} {...form.register('newPassword')} />
-          <TextField label="New password again" type="password" autoComplete="new-password" error={form.formState.errors.confirm?.message} {...form.register('confirm')} />
+          <PasswordField label="New password" autoComplete="new-password" hint="At least 10 characters." error={form.formState.errors.newPassword?.message} {...form.register('newPassword')} />
+          <PasswordField label="New password again" autoComplete="new-password" error={form.formState.errors.confirm?.message} {...form.register('confirm')} />
           <Button type="submit" busy={confirm.isPending}>Set the new password</Button>
         </form>
       )}

@@ -5,7 +5,7 @@ import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { loginSchema, type LoginInput } from '@shared/schemas/auth.schema';
 import { useLogin } from '@/features/auth/api/use-auth-mutations';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { PasswordField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
@@ -34,9 +34,8 @@ export function Component() {
       <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
         {formError && <Notice tone="block" title={formError} />}
         <TextField label="E-mail" type="email" autoComplete="email" error={form.formState.errors.email?.message} {...form.register('email')} />
-        <TextField
+        <PasswordField
           label="Password"
-          type="password"
           autoComplete="current-password"
           error={form.formState.errors.password?.message}
           {...form.register('password')}

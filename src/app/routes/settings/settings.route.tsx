@@ -6,7 +6,7 @@ import { changePasswordSchema, type ChangePasswordInput } from '@shared/schemas/
 import { useMe } from '@/features/auth/hooks/use-me';
 import { useChangePassword, useUpdatePreferences } from '@/features/auth/api/use-auth-mutations';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
+import { PasswordField, SelectField } from '@/components/ui/field';
 import { Card, Notice, PageHeader } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { NetCarbRuleCard } from '@/features/ingredients/components/net-carb-rule-card';
@@ -63,16 +63,14 @@ export function Component() {
         <h2 className="mb-3 text-xl">Password</h2>
         <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
           {formError && <Notice tone="block" title={formError} />}
-          <TextField
+          <PasswordField
             label="Current password"
-            type="password"
             autoComplete="current-password"
             error={form.formState.errors.currentPassword?.message}
             {...form.register('currentPassword')}
           />
-          <TextField
+          <PasswordField
             label="New password"
-            type="password"
             autoComplete="new-password"
             hint="At least 10 characters."
             error={form.formState.errors.newPassword?.message}

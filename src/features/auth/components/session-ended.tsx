@@ -2,7 +2,7 @@ import { useEffect, useRef, useState, useSyncExternalStore, type ReactNode } fro
 import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { MeDto } from '@shared/schemas/auth.schema';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { PasswordField } from '@/components/ui/field';
 import { api, notifySessionResumed } from '@/lib/api-client';
 import { paths } from '@/config/paths';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
@@ -140,10 +140,9 @@ function SessionEndedDialog({ me, signInElsewhere }: { me: MeDto; signInElsewher
           <p>
             Signing in as <strong>{me.email}</strong>
           </p>
-          <TextField
+          <PasswordField
             ref={field}
             label="Password"
-            type="password"
             autoComplete="current-password"
             value={password}
             onChange={(e) => setPassword(e.target.value)}
