@@ -26,7 +26,7 @@ export function Component() {
     setFormError(null);
     accept.mutate(values, {
       onSuccess: (me) => navigate(me.role === 'client' ? paths.myPlates : paths.home),
-      onError: (err) => setFormError(applyServerErrors(err, form.setError)),
+      onError: (err) => setFormError(applyServerErrors(err, form.setError, form.getValues())),
     });
   });
   if (invitation.isPending) return <AuthLayout title="Join a workspace"><Skeleton className="h-40 w-full" /></AuthLayout>;

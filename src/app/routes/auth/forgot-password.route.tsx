@@ -20,7 +20,7 @@ export function Component() {
     setFormError(null);
     request.mutate(values, {
       onSuccess: () => setSentTo(values.email),
-      onError: (err) => setFormError(applyServerErrors(err, form.setError)),
+      onError: (err) => setFormError(applyServerErrors(err, form.setError, form.getValues())),
     });
   });
   return (

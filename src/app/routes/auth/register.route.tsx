@@ -26,7 +26,7 @@ export function Component() {
     setFormError(null);
     register.mutate({ ...values, dateOrder: deviceDateOrder(), clock: deviceClockStyle(), timeZone: deviceTimeZone() ?? undefined }, {
       onSuccess: () => navigate(paths.home),
-      onError: (err) => setFormError(applyServerErrors(err, form.setError)),
+      onError: (err) => setFormError(applyServerErrors(err, form.setError, form.getValues())),
     });
   });
   return (

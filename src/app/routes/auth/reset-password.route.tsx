@@ -32,7 +32,7 @@ export function Component() {
       { token, newPassword: values.newPassword },
       {
         onSuccess: () => setDone(true),
-        onError: (err) => setFormError(applyServerErrors(err, form.setError)),
+        onError: (err) => setFormError(applyServerErrors(err, form.setError, form.getValues())),
       },
     );
   });

@@ -26,7 +26,7 @@ export function Component() {
     setFormError(null);
     login.mutate(values, {
       onSuccess: (me) => navigate(safeNext(params.get('next'), me.role === 'client' ? paths.myPlates : paths.home)),
-      onError: (err) => setFormError(applyServerErrors(err, form.setError)),
+      onError: (err) => setFormError(applyServerErrors(err, form.setError, form.getValues())),
     });
   });
   return (

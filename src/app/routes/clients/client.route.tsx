@@ -134,7 +134,7 @@ function ClientProfile({ client, refetch }: { client: ClientDto; refetch: () => 
             refetch();
             return;
           }
-          setFormError(setError ? applyServerErrors(e, setError) : errorMessage(e));
+          setFormError(setError ? applyServerErrors(e, setError, values) : errorMessage(e));
         },
       },
     );

@@ -127,7 +127,7 @@ export function Component() {
                   guard.allow();
                   navigate(paths.client(c.id));
                 },
-                onError: (e) => setFormError(applyServerErrors(e, setError)),
+                onError: (e) => setFormError(applyServerErrors(e, setError, values)),
               });
             }}
           />

@@ -35,7 +35,7 @@ function usePlateSave(id: number | null, onDone: () => void, onStale?: (values: 
           onStale(values, e.problem.current as AssemblyDto);
           return;
         }
-        setFormError(isApiError(e, 409) ? errorMessage(e) : setError ? applyServerErrors(e, setError) : errorMessage(e));
+        setFormError(isApiError(e, 409) ? errorMessage(e) : setError ? applyServerErrors(e, setError, values) : errorMessage(e));
       },
     });
   };

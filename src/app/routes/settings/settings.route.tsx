@@ -29,7 +29,7 @@ export function Component() {
         form.reset();
         toast.success(n === 0 ? 'Password changed' : `Password changed; ${n === 1 ? '1 other device was' : `${n} other devices were`} signed out`);
       },
-      onError: (err) => setFormError(applyServerErrors(err, form.setError)),
+      onError: (err) => setFormError(applyServerErrors(err, form.setError, form.getValues())),
     });
   });
   return (

@@ -35,7 +35,7 @@ export function Component() {
         setLink(inv.link ?? null);
         form.reset({ email: '', role: values.role });
       },
-      onError: (err) => setFormError(applyServerErrors(err, form.setError)),
+      onError: (err) => setFormError(applyServerErrors(err, form.setError, form.getValues())),
     });
   });
   return (

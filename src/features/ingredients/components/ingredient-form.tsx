@@ -114,7 +114,7 @@ export function IngredientForm({
     try {
       await onSave(values);
     } catch (err) {
-      setFormError(applyServerErrors(err, form.setError));
+      setFormError(applyServerErrors(err, form.setError, form.getValues()));
     }
   });
 

@@ -66,7 +66,7 @@ export function AddPantryItem({ unitSystem }: { unitSystem: 'us' | 'metric' }) {
     setFormError(null);
     create.mutate(values, {
       onSuccess: () => form.reset(empty),
-      onError: (e) => setFormError(isApiError(e, 409) ? errorMessage(e) : applyServerErrors(e, form.setError)),
+      onError: (e) => setFormError(isApiError(e, 409) ? errorMessage(e) : applyServerErrors(e, form.setError, form.getValues())),
     });
   });
   const err = form.formState.errors;

@@ -79,7 +79,7 @@ export function TrayEditor({ edit, busy, onSave, onSaved, onDirtyChange }: Props
         edit.refused(values, err.problem.current as TrayDto);
         return;
       }
-      setFormError(applyServerErrors(err, form.setError));
+      setFormError(applyServerErrors(err, form.setError, form.getValues()));
     }
   };
   const onSubmit = form.handleSubmit((values) => save(values));
