@@ -18,9 +18,12 @@ const version = editVersion;
 const allergen = z.enum(ALLERGEN_CODES as unknown as [AllergenCode, ...AllergenCode[]]);
 
 
+/** The longest name a prep week may have (characters). */
+export const WEEK_NAME_MAX = 120;
+
 export const createWeekSchema = z
   .object({
-    name: z.string().trim().max(120).default(''),
+    name: z.string().trim().max(WEEK_NAME_MAX).default(''),
     /** The first day of the board. */
     startDate: isoDate,
     prepDate: isoDate,
@@ -34,7 +37,7 @@ export type CreateWeekInput = z.input<typeof createWeekSchema>;
 
 export const updateWeekSchema = z.object({
   version,
-  name: z.string().trim().max(120).optional(),
+  name: z.string().trim().max(WEEK_NAME_MAX).optional(),
   prepDate: isoDate.optional(),
   secondPrepDate: isoDate.nullable().optional(),
 });
@@ -81,7 +84,7 @@ export const copyDaySchema = z.object({
 export type CopyDayInput = z.input<typeof copyDaySchema>;
 
 export const copyWeekSchema = z.object({
-  name: z.string().trim().max(120).default(''),
+  name: z.string().trim().max(WEEK_NAME_MAX).default(''),
   startDate: isoDate,
   prepDate: isoDate,
   secondPrepDate: isoDate.nullable().optional(),

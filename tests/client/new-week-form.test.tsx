@@ -54,6 +54,33 @@ describe('new week form', () => {
     expect(field('First day of the board').getAttribute('aria-invalid')).toBe('true');
   });
 
+  it('a refusal no field shows (the week to copy from is gone) is said under the form; a name has its own error and a length cap', async () => {
+    vi.useFakeTimers({ now: new Date(2026, 11, 2, 9), toFake: ['Date'] });
+    let answer = { errors: { fromId: ['The week to copy from is not there any more'] } as Record<string, string[]> };
+    const source = {
+      id: 5, name: 'Last week', startDate: '2026-11-30', endDate: '2026-12-06', prepDate: '2026-11-29', secondPrepDate: null,
+      publishedVersion: null, publishedAt: null, changedSincePublished: false, cellCount: 3, version: 1,
+    };
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init?: RequestInit) =>
+        init?.method === 'POST'
+          ? jsonResponse({ type: 'about:blank', title: 'Bad request', status: 400, code: 'validation', detail: 'Invalid input', ...answer }, 400)
+          : jsonResponse([source]),
+      ),
+    );
+    renderInApp(<WeeksPage />, queryClientFor(coach));
+    fireEvent.change(await screen.findByLabelText('Start from'), { target: { value: '5' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Copy' }));
+    expect(await screen.findByText('The week to copy from is not there any more')).toBeTruthy();
+    expect(field('Name (optional)').maxLength).toBe(120);
+    answer = { errors: { name: ['Too long'] } };
+    fireEvent.click(screen.getByRole('button', { name: 'Copy' }));
+    expect(await screen.findByText('Too long')).toBeTruthy();
+    expect(field('Name (optional)').getAttribute('aria-invalid')).toBe('true');
+    expect(screen.queryByText('The week to copy from is not there any more')).toBeNull();
+  });
+
   it("lists each week with its kitchen pages: an assistant reaches last week's labels, not the board", async () => {
     const last = {
       id: 4, name: 'Week of 30 Nov', startDate: '2026-11-30', endDate: '2026-12-06', prepDate: '2026-11-29', secondPrepDate: null,

@@ -3,7 +3,7 @@ import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { addDays, daysBetween, isIsoDate } from '@shared/domain/iso-date';
 import { firstFreeMonday } from '@shared/domain/week-days';
-import type { WeekSummaryDto } from '@shared/schemas/weeks.schema';
+import { WEEK_NAME_MAX, type WeekSummaryDto } from '@shared/schemas/weeks.schema';
 import { weeksQuery } from '@/features/weeks/api/weeks.queries';
 import { localToday } from '@/lib/dates';
 import { useCopyWeek, useCreateWeek, type WeekPageState } from '@/features/weeks/api/use-week-mutations';
@@ -15,6 +15,9 @@ import { isApiError, errorMessage, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { dayLabel } from '@/lib/dates';
 import { useFollowedText } from '@/lib/use-followed-text';
+
+/** The fields of the new-week form that show their own error. */
+const SHOWN_FIELDS = new Set(['name', 'startDate', 'prepDate', 'secondPrepDate']);
 
 /** A date of the source week moved to the new board: the same day of the week. */
 function shifted(source: WeekSummaryDto, date: string | null, startDate: string): string {
@@ -67,8 +70,12 @@ export function Component() {
               const input = { name: form.name, startDate, prepDate, secondPrepDate: secondPrepDate || null };
               const onError = (err: unknown) => {
                 markShown(err);
-                if (isApiError(err, 400)) setErrors(Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k.replace(/^body\./, ''), v])));
-                else setFormError(errorMessage(err));
+                if (!isApiError(err, 400)) return setFormError(errorMessage(err));
+                const fields = Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k.replace(/^body\./, ''), v]));
+                setErrors(fields);
+                // What no field below shows (the source week, say) is said under the form, never dropped.
+                const unseen = Object.entries(fields).filter(([k]) => !SHOWN_FIELDS.has(k)).map(([, v]) => v[0]);
+                if (unseen.length > 0 || Object.keys(fields).length === 0) setFormError(unseen.join(' ') || errorMessage(err));
               };
               if (source)
                 copy.mutate(
@@ -98,7 +105,7 @@ export function Component() {
                 ))}
               </SelectField>
             )}
-            <TextField label="Name (optional)" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} />
+            <TextField label="Name (optional)" value={form.name} maxLength={WEEK_NAME_MAX} error={errors.name?.[0]} onChange={(e) => setForm({ ...form, name: e.target.value })} />
             <TextField label="First day of the board" type="date" value={startDate} error={errors.startDate?.[0]} onChange={(e) => {
                 setStartPicked(true);
                 setForm({ ...form, startDate: e.target.value });
