@@ -36,3 +36,12 @@ export function errorMessage(e: unknown): string {
   if (e instanceof Error) return e.message;
   return 'Something went wrong';
 }
+
+/**
+ * What a refusal says where no field shows it: the first field's reason when the answer names fields (a 400 says
+ * "Invalid input" as a whole), else the message. Marks it shown.
+ */
+export function reasonOf(e: unknown): string {
+  markShown(e);
+  return (e instanceof ApiError ? Object.values(e.fieldErrors)[0]?.[0] : undefined) ?? errorMessage(e);
+}

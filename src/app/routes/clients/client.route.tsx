@@ -15,7 +15,7 @@ import { NewerVersionNotice, StaleEditNotice } from '@/components/ui/stale-edit-
 import { useEditBase } from '@/lib/use-edit-base';
 import { Cautions } from '@/components/domain/cautions';
 import { applyServerErrors } from '@/lib/form-errors';
-import { errorMessage, isApiError, markShown } from '@/lib/problem';
+import { errorMessage, isApiError, markShown, reasonOf } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { DemoNotice } from '@/features/auth/components/demo-notice';
 import { useMe } from '@/features/auth/hooks/use-me';
@@ -70,7 +70,7 @@ function InviteCard({ client }: { client: ClientDto }) {
             onSuccess: (inv) => setLink(inv.link ?? null),
             onError: (err) => {
               markShown(err);
-              setError(isApiError(err) ? (Object.values(err.fieldErrors)[0]?.[0] ?? err.message) : errorMessage(err));
+              setError(reasonOf(err));
             },
           });
         }}

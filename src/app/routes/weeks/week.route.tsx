@@ -22,7 +22,7 @@ import { Button } from '@/components/ui/button';
 import { RevealedAlert } from '@/components/ui/stale-edit-notice';
 import { Card, EmptyState, ErrorState, Notice, PageHeader, PageSkeleton } from '@/components/ui/states';
 import { Cautions } from '@/components/domain/cautions';
-import { errorMessage, isApiError, markShown } from '@/lib/problem';
+import { errorMessage, isApiError, markShown, reasonOf } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { agrees, counted } from '@/lib/words';
 import { dayLabel, kitchenToday } from '@/lib/dates';
@@ -81,7 +81,7 @@ export function Component() {
         return;
       }
     }
-    setError(isApiError(e) ? (Object.values(e.fieldErrors)[0]?.[0] ?? e.message) : errorMessage(e));
+    setError(reasonOf(e));
   };
 
   const sendCells = (edit: CellEdit, version = board.week.version) => {

@@ -8,7 +8,7 @@ import { outboxBusy, outboxQuery } from '../api/mail.queries';
 import { Button } from '@/components/ui/button';
 import { TextAreaField } from '@/components/ui/field';
 import { ErrorState, Notice, Progress, Skeleton } from '@/components/ui/states';
-import { errorMessage, isApiError, markShown } from '@/lib/problem';
+import { markShown, reasonOf } from '@/lib/problem';
 import { localToday } from '@/lib/dates';
 import { paths } from '@/config/paths';
 import { clientPlanPdfUrl } from '../api/week-mail.queries';
@@ -109,7 +109,7 @@ export function SendPlansPanel({
         onSuccess: (r) => setResult(r),
         onError: (e) => {
           markShown(e);
-          setError(isApiError(e) ? (Object.values(e.fieldErrors)[0]?.[0] ?? e.message) : errorMessage(e));
+          setError(reasonOf(e));
         },
       },
     );

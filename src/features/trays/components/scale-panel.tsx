@@ -4,7 +4,7 @@ import type { ScaleTrayInput, TrayDto } from '@shared/schemas/trays.schema';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Card, Notice } from '@/components/ui/states';
-import { errorMessage } from '@/lib/problem';
+import { reasonOf } from '@/lib/problem';
 import { useScaleTray } from '../api/use-tray-mutations';
 import { counted } from '@/lib/words';
 
@@ -65,7 +65,8 @@ export function ScalePanel({ tray, system }: { tray: TrayDto; system: 'us' | 'me
           <input type="checkbox" checked={metric} onChange={(e) => setMetric(e.target.checked)} /> Show metric amounts
         </label>
       </form>
-      {scale.isError && !fieldError && <Notice tone="block" title={errorMessage(scale.error)} />}
+      {/* Any refusal the amount box does not show (another pan, an error of another field) is said here. */}
+      {scale.isError && (mode === 'pan' || !(fieldError?.factor || fieldError?.targetPortions)) && <Notice tone="block" title={reasonOf(scale.error)} />}
       {r && (
         <div className="mt-4" aria-live="polite">
           <p className="num mb-2 font-bold">
