@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { PG_INT_MAX, TOO_LARGE } from './ids';
 
-export const MAIL_KINDS = ['invitation', 'password-reset', 'week-plan', 'shopping-list', 'bake-run', 'prep-day', 'cooling-record', 'cooling-missed'] as const;
+export const MAIL_KINDS = ['invitation', 'password-reset', 'password-changed', 'week-plan', 'shopping-list', 'bake-run', 'prep-day', 'cooling-record', 'cooling-missed'] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];
 
 export const OUTBOX_STATUSES = ['queued', 'sending', 'sent', 'failed', 'retrying'] as const;

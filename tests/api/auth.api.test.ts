@@ -268,17 +268,30 @@ describe('the devices signed in as a person', () => {
     expect((await laptop.post('/api/auth/devices/sign-out-others').expect(200)).body).toEqual({ signedOut: 0 });
   });
 
-  it('changing the password signs out the other devices, in the same transaction as the new password', async () => {
+  it('changing the password signs out the other devices and e-mails the owner, in the same transaction as the new password', async () => {
     const coach = await coachWorkspace(app);
     const phone = await signedInOn(coach.email, PHONE_UA);
-    const res = await coach.agent.post('/api/auth/password').send({ currentPassword: PASSWORD, newPassword: 'a-brand-new-password' }).expect(200);
-    expect(res.body).toEqual({ otherDevicesSignedOut: 1 });
+    const laptop = await signedInOn(coach.email, LAPTOP_UA);
+    const res = await laptop.post('/api/auth/password').send({ currentPassword: PASSWORD, newPassword: 'a-brand-new-password' }).expect(200);
+    expect(res.body).toEqual({ otherDevicesSignedOut: 2 });
     await phone.get('/api/auth/me').expect(401);
-    await coach.agent.get('/api/auth/me').expect(200);
-    // A wrong current password changes nothing and signs nobody out.
+    await coach.agent.get('/api/auth/me').expect(401);
+    await laptop.get('/api/auth/me').expect(200);
+    const mails = await sql<{ workspace_id: number | null; subject: string; text: string }>(
+      `select workspace_id, subject, text from outbox where "to" = $1 and kind = 'password-changed'`,
+      [coach.email],
+    );
+    expect(mails).toHaveLength(1);
+    expect(mails[0].workspace_id).toBeNull();
+    expect(mails[0].subject).toBe('Your Trayline password was changed');
+    expect(mails[0].text).toContain(`The password of your Trayline account (${coach.email}) was just changed in Settings from Safari on a macOS computer.`);
+    expect(mails[0].text).toContain('The 2 other devices signed in as you were signed out.');
+    expect(mails[0].text).toMatch(/Choose a new password: http\S*\/forgot-password\n/);
+    // A wrong current password changes nothing, signs nobody out and sends nothing.
     const again = await signedInOn(coach.email, PHONE_UA, 'a-brand-new-password');
-    await coach.agent.post('/api/auth/password').send({ currentPassword: 'wrong-wrong', newPassword: 'yet-another-password' }).expect(400);
+    await laptop.post('/api/auth/password').send({ currentPassword: 'wrong-wrong', newPassword: 'yet-another-password' }).expect(400);
     await again.get('/api/auth/me').expect(200);
+    expect(await sql(`select id from outbox where "to" = $1 and kind = 'password-changed'`, [coach.email])).toHaveLength(1);
   });
 
   it('a session from before devices were noted lists without its device and sign-in time', async () => {

@@ -342,6 +342,12 @@ describe('password reset', () => {
     await coach.agent.get('/api/auth/me').expect(401);
     const again = await agentFor(app).post('/api/auth/password-reset/confirm').send({ token, newPassword: 'another-password-1' }).expect(400);
     expect(again.body.errors.token).toBeDefined();
+    // The owner is told it changed (once: the refused second use sends nothing); that e-mail holds no secret.
+    const told = await sql<{ text: string }>(`select text from outbox where "to" = $1 and kind = 'password-changed'`, [coach.email]);
+    expect(told).toHaveLength(1);
+    expect(told[0].text).toContain('was just changed with a reset link sent to this address.');
+    expect(told[0].text).toContain('Every device that was signed in has been signed out.');
+    expect(told[0].text).not.toContain(token);
 
     const ghost = `${uniq('ghost')}@example.test`;
     await agentFor(app).post('/api/auth/password-reset').send({ email: ghost }).expect(204);

@@ -141,7 +141,9 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
   r.post(
     '/auth/password',
     allow('signed-in'),
-    validated({ body: changePasswordSchema }, ({ body }, req) => auth.changePassword(emOf(req), actorOf(req), body, req.sessionID)),
+    validated({ body: changePasswordSchema }, ({ body }, req) =>
+      auth.changePassword(emOf(req), actorOf(req), body, { sid: req.sessionID, device: req.session.device ?? devices.describeDevice(req.get('user-agent')) }, opts),
+    ),
   );
 
   // The devices signed in as this person (Settings): list them, sign one out, or all but this one.
@@ -212,7 +214,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
     allow('public'),
     resetByIp,
     validated({ body: resetPasswordSchema }, async ({ body }, req) => {
-      await auth.confirmPasswordReset(emOf(req), body.token, body.newPassword);
+      await auth.confirmPasswordReset(emOf(req), body.token, body.newPassword, opts);
     }),
   );
 

@@ -56,6 +56,32 @@ export function passwordResetMail(p: { link: string; minutes: number }): MailBod
   };
 }
 
+/**
+ * Sent when an account's password changes (in Settings, or through a reset link), so that a change its owner did not
+ * make does not go unnoticed. Holds no secret: the link goes to the page that asks for a reset link.
+ */
+export function passwordChangedMail(p: { email: string; device: string | null; how: 'settings' | 'reset'; signedOut: number | 'all'; forgotLink: string }): MailBody {
+  // "A browser that did not say which" reads on in lower case; a browser's name keeps its capital.
+  const from = p.device ? ` from ${p.device.replace(/^A /, 'a ')}` : '';
+  const how = p.how === 'settings' ? `in Settings${from}` : 'with a reset link sent to this address';
+  const out =
+    p.signedOut === 'all'
+      ? 'Every device that was signed in has been signed out.'
+      : p.signedOut === 0
+        ? 'No other device was signed in.'
+        : `${p.signedOut === 1 ? 'The other device' : `The ${p.signedOut} other devices`} signed in as you ${p.signedOut === 1 ? 'was' : 'were'} signed out.`;
+  const lines = [
+    `The password of your Trayline account (${p.email}) was just changed ${how}.`,
+    out,
+    'If this was you, there is nothing to do. If it was not, choose a new password at once with the link below, and tell your coach.',
+  ];
+  return {
+    subject: 'Your Trayline password was changed',
+    text: `${lines.join('\n\n')}\n\nChoose a new password: ${p.forgotLink}\n`,
+    html: layout(lines, { href: p.forgotLink, label: 'Choose a new password' }),
+  };
+}
+
 /** A client's week (the PDF is attached by the job). `note` is the coach's personal note. */
 export function weekPlanMail(p: {
   businessName: string;

@@ -4,6 +4,7 @@ import type { MailKind, OutboxStatus } from '@shared/schemas/mail.schema';
 export const MAIL_KIND_WORDS: Record<MailKind, string> = {
   invitation: 'Invitation',
   'password-reset': 'Password reset',
+  'password-changed': 'Password changed',
   'week-plan': 'Week plan',
   'shopping-list': 'Shopping list',
   'bake-run': 'Bake run',
