@@ -1,29 +1,21 @@
 import { expect, test } from '@playwright/test';
-import { SHOTS, expectNoSeriousA11yViolations, signIn } from './support';
+import { SHOTS, expectNoSeriousA11yViolations, inviteAssistant, signIn } from './support';
 
 // A fresh kitchen assistant (invited here, so no other journey's sessions are touched) signed in on a phone and a
 // laptop: from the laptop's Settings they sign the phone out, then change their password, which signs out the phone
 // again; the laptop stays signed in throughout.
 test('a person sees the devices signed in as them, signs one out, and a new password signs out the others', async ({ page, browser }) => {
-  const email = `devices-${Date.now().toString(36)}@example.test`;
   const password = 'a-long-kitchen-password';
   await signIn(page, 'coach@trayline.test');
-  await page.goto('/team');
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByRole('button', { name: 'Invite' }).click();
-  const link = await page.getByLabel('Invitation link').inputValue();
-
-  const phoneContext = await browser.newContext({
-    viewport: { width: 393, height: 851 },
-    isMobile: true,
-    userAgent: 'Mozilla/5.0 (Linux; Android 14; Pixel 7) AppleWebKit/537.36 (KHTML, like Gecko) Chrome/131.0.0.0 Mobile Safari/537.36',
+  const { email, context: phoneContext, page: phone } = await inviteAssistant(page, browser, {
+    name: 'Sam Devices',
+    password,
+    context: {
+      viewport: { width: 393, height: 851 },
+      isMobile: true,
+      userAgent: 'Mozilla/5.0 (Linux; Android 14; Pixel 7) AppleWebKit/537.36 (KHTML, like Gecko) Chrome/131.0.0.0 Mobile Safari/537.36',
+    },
   });
-  const phone = await phoneContext.newPage();
-  await phone.goto(new URL(link).pathname);
-  await phone.getByLabel('Your name').fill('Sam Devices');
-  await phone.getByLabel('Choose a password').fill(password);
-  await phone.getByRole('button', { name: 'Join' }).click();
-  await expect(phone.getByRole('heading', { name: 'Hello, Sam' })).toBeVisible();
 
   const laptopContext = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   const laptop = await laptopContext.newPage();

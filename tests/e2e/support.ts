@@ -1,5 +1,5 @@
 import AxeBuilder from '@axe-core/playwright';
-import { expect, type Page } from '@playwright/test';
+import { expect, type Browser, type BrowserContextOptions, type Page } from '@playwright/test';
 
 export const DEMO_PASSWORD = 'trayline-demo';
 export const SHOTS = '.data/screenshots';
@@ -46,4 +46,29 @@ export async function expectNoSidewaysScroll(page: Page, context = '') {
 /** A name no other test (or earlier run) has used. */
 export function unique(prefix: string) {
   return `${prefix} ${Date.now().toString(36)}${Math.floor(Math.random() * 1296).toString(36)}`;
+}
+
+/**
+ * The coach (signed in on `coach`) invites a new kitchen assistant from the Team page, who joins from the link in a
+ * browser of their own (a phone-sized one unless `context` says otherwise). A fresh account: a journey that changes
+ * its sessions or password touches no other journey's.
+ */
+export async function inviteAssistant(
+  coach: Page,
+  browser: Browser,
+  opts: { name: string; password: string; email?: string; context?: BrowserContextOptions },
+) {
+  const email = opts.email ?? `${unique('helper').replace(/\s+/g, '-').toLowerCase()}@example.test`;
+  await coach.goto('/team');
+  await coach.getByLabel('E-mail').fill(email);
+  await coach.getByRole('button', { name: 'Invite' }).click();
+  const link = await coach.getByLabel('Invitation link').inputValue();
+  const context = await browser.newContext(opts.context ?? { viewport: { width: 393, height: 851 } });
+  const page = await context.newPage();
+  await page.goto(new URL(link).pathname);
+  await page.getByLabel('Your name').fill(opts.name);
+  await page.getByLabel('Choose a password').fill(opts.password);
+  await page.getByRole('button', { name: 'Join' }).click();
+  await expect(page.getByRole('heading', { name: `Hello, ${opts.name.split(' ')[0]}` })).toBeVisible();
+  return { email, context, page };
 }

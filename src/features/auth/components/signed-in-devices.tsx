@@ -1,11 +1,10 @@
-import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { toast } from 'sonner';
 import type { SignedInDeviceDto } from '@shared/schemas/auth.schema';
 import { Button } from '@/components/ui/button';
-import { Notice, QueryView, Skeleton } from '@/components/ui/states';
+import { QueryView, Skeleton } from '@/components/ui/states';
+import { useRefusal } from '@/components/ui/refusal';
 import { momentLabel } from '@/lib/dates';
-import { errorMessage } from '@/lib/problem';
 import { devicesQuery } from '../api/auth.queries';
 import { useSignOutDevice, useSignOutOtherDevices } from '../api/use-auth-mutations';
 
@@ -28,7 +27,7 @@ export function SignedInDevices() {
   const list = useQuery(devicesQuery());
   const one = useSignOutDevice();
   const others = useSignOutOtherDevices();
-  const [error, setError] = useState<{ title: string; detail: string } | null>(null);
+  const refusal = useRefusal();
   return (
     <QueryView query={list} loading={<Skeleton className="h-20 w-full" label="Loading the devices signed in" />}>
       {(devices) => {
@@ -55,10 +54,10 @@ export function SignedInDevices() {
                       busy={one.isPending && one.variables === d.id}
                       aria-label={`Sign out ${deviceName(d)}${d.signedInAt ? `, signed in ${momentLabel(d.signedInAt)}` : ''}`}
                       onClick={() => {
-                        setError(null);
+                        refusal.clear();
                         one.mutate(d.id, {
                           onSuccess: () => toast.success(`${deviceName(d)} is signed out`),
-                          onError: (e) => setError({ title: 'That device was not signed out', detail: errorMessage(e) }),
+                          onError: refusal.say('That device was not signed out'),
                         });
                       }}
                     >
@@ -77,21 +76,17 @@ export function SignedInDevices() {
                 busy={others.isPending}
                 onClick={() => {
                   if (!window.confirm(`Sign out ${rest.length === 1 ? 'the other device' : `the ${rest.length} other devices`}? Whoever uses ${rest.length === 1 ? 'it' : 'them'} must sign in again; this device stays signed in.`)) return;
-                  setError(null);
+                  refusal.clear();
                   others.mutate(undefined, {
                     onSuccess: (r) => toast.success(r.signedOut === 1 ? '1 other device signed out' : `${r.signedOut} other devices signed out`),
-                    onError: (e) => setError({ title: 'The other devices were not signed out', detail: errorMessage(e) }),
+                    onError: refusal.say('The other devices were not signed out'),
                   });
                 }}
               >
                 Sign out everywhere else
               </Button>
             )}
-            {error && (
-              <Notice tone="block" title={error.title}>
-                {error.detail}
-              </Notice>
-            )}
+            {refusal.notice}
           </div>
         );
       }}

@@ -1,9 +1,8 @@
-import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import type { MemberDto } from '@shared/schemas/auth.schema';
 import { Button } from '@/components/ui/button';
-import { Notice, QueryView, Skeleton } from '@/components/ui/states';
-import { errorMessage } from '@/lib/problem';
+import { QueryView, Skeleton } from '@/components/ui/states';
+import { useRefusal } from '@/components/ui/refusal';
 import { ROLE_WORDS } from '@/lib/words';
 import { dateWithYearLabel } from '@/lib/dates';
 import { membersQuery } from '../api/auth.queries';
@@ -29,7 +28,7 @@ export function TeamMembers({ workspaceName }: { workspaceName: string }) {
   const list = useQuery(membersQuery());
   const remove = useRemoveMember();
   const changeRole = useChangeMemberRole();
-  const [error, setError] = useState<{ title: string; detail: string } | null>(null);
+  const refusal = useRefusal();
   return (
     <QueryView
       query={list}
@@ -62,8 +61,8 @@ export function TeamMembers({ workspaceName }: { workspaceName: string }) {
                         aria-label={m.role === 'coach' ? `Make ${m.name} a kitchen assistant` : `Make ${m.name} a coach`}
                         onClick={() => {
                           if (!window.confirm(roleQuestion(m))) return;
-                          setError(null);
-                          changeRole.mutate({ id: m.id, role: m.role === 'coach' ? 'assistant' : 'coach' }, { onError: (e) => setError({ title: 'Role not changed', detail: errorMessage(e) }) });
+                          refusal.clear();
+                          changeRole.mutate({ id: m.id, role: m.role === 'coach' ? 'assistant' : 'coach' }, { onError: refusal.say('Role not changed') });
                         }}
                       >
                         {m.role === 'coach' ? 'Make kitchen assistant' : 'Make coach'}
@@ -76,8 +75,8 @@ export function TeamMembers({ workspaceName }: { workspaceName: string }) {
                       aria-label={`Remove ${m.name}'s access`}
                       onClick={() => {
                         if (!window.confirm(removeQuestion(m, workspaceName))) return;
-                        setError(null);
-                        remove.mutate(m.id, { onError: (e) => setError({ title: 'Access not removed', detail: errorMessage(e) }) });
+                        refusal.clear();
+                        remove.mutate(m.id, { onError: refusal.say('Access not removed') });
                       }}
                     >
                       Remove access
@@ -87,11 +86,7 @@ export function TeamMembers({ workspaceName }: { workspaceName: string }) {
               </li>
             ))}
           </ul>
-          {error && (
-            <Notice tone="block" title={error.title}>
-              {error.detail}
-            </Notice>
-          )}
+          {refusal.notice}
         </div>
       )}
     </QueryView>
