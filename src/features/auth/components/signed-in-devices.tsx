@@ -4,6 +4,7 @@ import type { SignedInDeviceDto } from '@shared/schemas/auth.schema';
 import { Button } from '@/components/ui/button';
 import { QueryView, Skeleton } from '@/components/ui/states';
 import { useRefusal } from '@/components/ui/refusal';
+import { ActionList, ActionRow } from '@/components/ui/action-list';
 import { momentLabel } from '@/lib/dates';
 import { devicesQuery } from '../api/auth.queries';
 import { useSignOutDevice, useSignOutOtherDevices } from '../api/use-auth-mutations';
@@ -34,39 +35,37 @@ export function SignedInDevices() {
         const rest = devices.filter((d) => !d.current);
         return (
           <div className="flex flex-col gap-3">
-            <ul aria-label="Devices signed in as you" className="flex flex-col">
+            <ActionList label="Devices signed in as you">
               {devices.map((d) => (
-                <li key={d.id} className="flex flex-wrap items-center justify-between gap-x-4 gap-y-1 border-b border-line py-2">
-                  <div className="min-w-0">
-                    <p className="font-bold">
-                      {deviceName(d)}
-                      {d.current && <span className="font-normal text-ink-soft"> (this device)</span>}
-                    </p>
-                    <p className="text-sm text-ink-soft">
+                <ActionRow
+                  key={d.id}
+                  title={deviceName(d)}
+                  aside={d.current && 'this device'}
+                  detail={
+                    <>
                       {d.signedInAt ? <>Signed in <span className="num">{momentLabel(d.signedInAt)}</span></> : 'Signed in earlier'}
                       {!d.current && <> · {lastActiveLabel(d.lastActiveAt)}</>}
-                    </p>
-                  </div>
-                  {!d.current && (
-                    <Button
-                      size="sm"
-                      variant="ghost"
-                      busy={one.isPending && one.variables === d.id}
-                      aria-label={`Sign out ${deviceName(d)}${d.signedInAt ? `, signed in ${momentLabel(d.signedInAt)}` : ''}`}
-                      onClick={() => {
-                        refusal.clear();
-                        one.mutate(d.id, {
-                          onSuccess: () => toast.success(`${deviceName(d)} is signed out`),
-                          onError: refusal.say('That device was not signed out'),
-                        });
-                      }}
-                    >
-                      Sign out
-                    </Button>
-                  )}
-                </li>
+                    </>
+                  }
+                  actions={
+                    !d.current && (
+                      <Button
+                        size="sm"
+                        variant="ghost"
+                        busy={one.isPending && one.variables === d.id}
+                        aria-label={`Sign out ${deviceName(d)}${d.signedInAt ? `, signed in ${momentLabel(d.signedInAt)}` : ''}`}
+                        onClick={() => {
+                          refusal.clear();
+                          one.mutate(d.id, { onSuccess: () => toast.success(`${deviceName(d)} is signed out`), onError: refusal.say('That device was not signed out') });
+                        }}
+                      >
+                        Sign out
+                      </Button>
+                    )
+                  }
+                />
               ))}
-            </ul>
+            </ActionList>
             {rest.length === 0 ? (
               <p className="text-sm text-ink-soft">You are signed in on this device only.</p>
             ) : (

@@ -3,6 +3,7 @@ import type { MemberDto } from '@shared/schemas/auth.schema';
 import { Button } from '@/components/ui/button';
 import { QueryView, Skeleton } from '@/components/ui/states';
 import { useRefusal } from '@/components/ui/refusal';
+import { ActionList, ActionRow } from '@/components/ui/action-list';
 import { ROLE_WORDS } from '@/lib/words';
 import { dateWithYearLabel } from '@/lib/dates';
 import { membersQuery } from '../api/auth.queries';
@@ -37,55 +38,56 @@ export function TeamMembers({ workspaceName }: { workspaceName: string }) {
     >
       {(data) => (
         <div className="flex flex-col gap-3">
-          <ul aria-label="People with access" className="flex flex-col">
+          <ActionList label="People with access">
             {data.map((m) => (
-              <li key={m.id} className="flex flex-wrap items-center justify-between gap-x-4 gap-y-1 border-b border-line py-2">
-                <div className="min-w-0">
-                  <p className="font-bold">
-                    {m.name}
-                    {m.you && <span className="font-normal text-ink-soft"> (you)</span>}
-                  </p>
-                  <p className="text-sm text-ink-soft">
+              <ActionRow
+                key={m.id}
+                title={m.name}
+                aside={m.you && 'you'}
+                detail={
+                  <>
                     <span className="text-ink">{ROLE_WORDS[m.role]}</span>
                     {m.clientName && m.clientName !== m.name && <> · profile {m.clientName}</>} · <span className="break-all">{m.email}</span> · joined{' '}
                     <span className="num">{joined(m.joinedAt)}</span>
-                  </p>
-                </div>
-                {!m.you && (
-                  <div className="flex flex-wrap gap-2">
-                    {m.role !== 'client' && (
+                  </>
+                }
+                actions={
+                  !m.you && (
+                    <>
+                      {m.role !== 'client' && (
+                        <Button
+                          size="sm"
+                          variant="ghost"
+                          busy={changeRole.isPending && changeRole.variables?.id === m.id}
+                          aria-label={m.role === 'coach' ? `Make ${m.name} a kitchen assistant` : `Make ${m.name} a coach`}
+                          onClick={() => {
+                            if (!window.confirm(roleQuestion(m))) return;
+                            refusal.clear();
+                            changeRole.mutate({ id: m.id, role: m.role === 'coach' ? 'assistant' : 'coach' }, { onError: refusal.say('Role not changed') });
+                          }}
+                        >
+                          {m.role === 'coach' ? 'Make kitchen assistant' : 'Make coach'}
+                        </Button>
+                      )}
                       <Button
                         size="sm"
                         variant="ghost"
-                        busy={changeRole.isPending && changeRole.variables?.id === m.id}
-                        aria-label={m.role === 'coach' ? `Make ${m.name} a kitchen assistant` : `Make ${m.name} a coach`}
+                        busy={remove.isPending && remove.variables === m.id}
+                        aria-label={`Remove ${m.name}'s access`}
                         onClick={() => {
-                          if (!window.confirm(roleQuestion(m))) return;
+                          if (!window.confirm(removeQuestion(m, workspaceName))) return;
                           refusal.clear();
-                          changeRole.mutate({ id: m.id, role: m.role === 'coach' ? 'assistant' : 'coach' }, { onError: refusal.say('Role not changed') });
+                          remove.mutate(m.id, { onError: refusal.say('Access not removed') });
                         }}
                       >
-                        {m.role === 'coach' ? 'Make kitchen assistant' : 'Make coach'}
+                        Remove access
                       </Button>
-                    )}
-                    <Button
-                      size="sm"
-                      variant="ghost"
-                      busy={remove.isPending && remove.variables === m.id}
-                      aria-label={`Remove ${m.name}'s access`}
-                      onClick={() => {
-                        if (!window.confirm(removeQuestion(m, workspaceName))) return;
-                        refusal.clear();
-                        remove.mutate(m.id, { onError: refusal.say('Access not removed') });
-                      }}
-                    >
-                      Remove access
-                    </Button>
-                  </div>
-                )}
-              </li>
+                    </>
+                  )
+                }
+              />
             ))}
-          </ul>
+          </ActionList>
           {refusal.notice}
         </div>
       )}
