@@ -148,6 +148,19 @@ describe('the kitchen as it is on prep day', () => {
     expect(reload).toHaveBeenCalled();
   });
 
+  it('says a refusal about a field the form does not show (nothing ticked, so no "plan the rest from") instead of dropping it', () => {
+    render(
+      <BakeRunTimers
+        run={runAt('2026-01-04T08:00')}
+        unit="F"
+        nowMinute={-20}
+        kitchen={kitchenOf({ error: problem(400, 'validation', 'Invalid', { from: ['The run starts at 08:00: plan the rest from then or later.'] }) })}
+      />,
+    );
+    expect(screen.getByText('Not planned again')).toBeTruthy();
+    expect(screen.getByText('The run starts at 08:00: plan the rest from then or later.')).toBeTruthy();
+  });
+
   // Part-way through the day (invented run): the slabs came out at 08:37 and 08:45; the crackers went into the left
   // oven at 09:40 and are due at 10:15.
   const midDay = {

@@ -59,9 +59,22 @@ export interface MoveStart {
 
 /**
  * Why a change of the day's run was not made: someone changed the run meanwhile (409: load their version, then redo
- * it), or another failure. A refused field (400) is said beside the field instead.
+ * it), or another failure. A refused field (400) is said beside the field instead; with `said` (which fields the form
+ * shows), a 400 about any other field is said here, never dropped.
  */
-function ChangeRefused({ error, redo, notDone, onReload }: { error: unknown; redo: string; notDone: string; onReload: () => void }) {
+function ChangeRefused({
+  error,
+  redo,
+  notDone,
+  onReload,
+  said,
+}: {
+  error: unknown;
+  redo: string;
+  notDone: string;
+  onReload: () => void;
+  said?: (field: string) => boolean;
+}) {
   if (isApiError(error, 409)) {
     markShown(error);
     return (
@@ -73,7 +86,17 @@ function ChangeRefused({ error, redo, notDone, onReload }: { error: unknown; red
       </Notice>
     );
   }
-  return error && !isApiError(error, 400) ? (
+  if (isApiError(error, 400)) {
+    const unsaid = Object.entries(error.fieldErrors).filter(([field]) => !said?.(field.replace(/^body\./, '')));
+    if (!said || (Object.keys(error.fieldErrors).length > 0 && unsaid.length === 0)) return null;
+    markShown(error);
+    return (
+      <Notice tone="block" title={notDone}>
+        {unsaid[0]?.[1][0] ?? errorMessage(error)}
+      </Notice>
+    );
+  }
+  return error ? (
     <Notice tone="block" title={notDone}>
       {errorMessage(error)}
     </Notice>
@@ -366,6 +389,7 @@ function KitchenForm({ kitchen, run, nowMinute }: { kitchen: KitchenChange; run:
         error={kitchen.error}
         redo="change the kitchen"
         notDone="Not planned again"
+        said={(field) => ['ovenIds', 'cooks', 'out'].includes(field) || field.startsWith('outAt.') || (field === 'from' && form.out.length > 0)}
         onReload={() => {
           // What is on screen now; the reload's newer version then replaces it (nothing is typed over it).
           setSent(null);
