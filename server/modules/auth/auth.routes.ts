@@ -163,7 +163,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
     '/auth/devices/sign-out-others',
     allow('signed-in'),
     validated({}, async (_i, req): Promise<DevicesSignedOutDto> => ({
-      signedOut: await devices.signOutOtherDevices(emOf(req), actorOf(req).userId, req.sessionID),
+      signedOut: await devices.endSessions(emOf(req), actorOf(req).userId, req.sessionID),
     })),
   );
 

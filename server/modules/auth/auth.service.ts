@@ -22,7 +22,7 @@ import { loadClients } from '../clients/client.service.js';
 import { Invitation, Membership, PasswordReset, User, type IUser } from './user.entity.js';
 import { burnVerify, hashPassword, verifyPassword } from './passwords.js';
 import { hashToken, newToken } from './tokens.js';
-import { signOutOtherDevices } from './devices.js';
+import { endSessions } from './devices.js';
 import { appLink, queueMail, RESET_QUEUE, type MailQueue, type ResetJobData } from '../mail/mail.service.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { invitationMail, passwordChangedMail, passwordResetMail } from '../mail/mail-templates.js';
@@ -294,7 +294,7 @@ export async function changePassword(
     const again = await tx.findOneOrFail(User, actor.userId);
     again.passwordHash = passwordHash;
     await tx.flush();
-    const otherDevicesSignedOut = await signOutOtherDevices(tx, actor.userId, current.sid);
+    const otherDevicesSignedOut = await endSessions(tx, actor.userId, current.sid);
     await queuePasswordChanged(tx, notify, again.email, { device: current.device, how: 'settings', signedOut: otherDevicesSignedOut });
     return { otherDevicesSignedOut };
   });
@@ -391,9 +391,7 @@ export async function confirmPasswordReset(em: EntityManager, token: string, new
     const open = await tx.find(PasswordReset, { user: user.id, usedAt: null });
     for (const r of open) r.usedAt = now;
     await tx.flush();
-    await tx
-      .getConnection()
-      .execute(`delete from "session" where (sess->'passport'->>'user') = ?`, [String(user.id)], 'run', tx.getTransactionContext());
+    await endSessions(tx, user.id);
     await queuePasswordChanged(tx, notify, user.email, { device: null, how: 'reset', signedOut: 'all' });
   });
 }

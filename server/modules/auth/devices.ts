@@ -91,12 +91,16 @@ export async function signOutDevice(em: EntityManager, userId: number, currentSi
   await conn.execute(`delete from "session" where ${HANDLE_SQL} = ? and ${MINE_SQL}`, [handle, String(userId)], 'run', em.getTransactionContext());
 }
 
-/** Signs out every device of this person's but the current one; how many were signed in (ended ones go too). */
-export async function signOutOtherDevices(em: EntityManager, userId: number, currentSid: string): Promise<number> {
+/**
+ * Ends the person's sessions, all of them or all but `except` (the device asking), in the caller's transaction; how
+ * many were live (ended ones go too). Every way out goes through here: signing out elsewhere, a new password, a
+ * reset link, the last access removed.
+ */
+export async function endSessions(em: EntityManager, userId: number, except: string | null = null): Promise<number> {
   const [row] = await em.getConnection().execute<{ n: number }[]>(
-    `with gone as (delete from "session" where (sess->'passport'->>'user') = ? and sid <> ? returning expire)
+    `with gone as (delete from "session" where (sess->'passport'->>'user') = ? and sid is distinct from ? returning expire)
      select count(*) filter (where expire >= now())::int as n from gone`,
-    [String(userId), currentSid],
+    [String(userId), except],
     'all',
     em.getTransactionContext(),
   );

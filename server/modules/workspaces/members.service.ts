@@ -2,6 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import type { MemberDto, Role } from '@shared/schemas/auth.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { Conflict, NotFound, ValidationError } from '../../http/errors.js';
+import { endSessions } from '../auth/devices.js';
 
 interface MemberRow {
   id: number;
@@ -98,13 +99,6 @@ export async function removeMember(em: EntityManager, actor: Actor, id: number):
     if (row.userId === actor.userId) throw new Conflict('You cannot remove your own access: another coach of the workspace can');
     await conn.execute('delete from membership where id = ?', [id], 'run', ctx);
     const [left] = await conn.execute<{ n: number }[]>('select count(*)::int as n from membership where user_id = ?', [row.userId], 'all', ctx);
-    if (left.n === 0) {
-      await conn.execute(
-        `delete from session where (sess->'passport'->>'user') = ?`,
-        [String(row.userId)],
-        'run',
-        ctx,
-      );
-    }
+    if (left.n === 0) await endSessions(tx, row.userId);
   });
 }
