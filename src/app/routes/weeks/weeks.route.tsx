@@ -15,6 +15,7 @@ import { isApiError, errorMessage, markShown } from '@/lib/problem';
 import { paths } from '@/config/paths';
 import { dayLabel } from '@/lib/dates';
 import { useFollowedText } from '@/lib/use-followed-text';
+import { splitFieldErrors } from '@/lib/form-errors';
 
 /** The fields of the new-week form that show their own error. */
 const SHOWN_FIELDS = new Set(['name', 'startDate', 'prepDate', 'secondPrepDate']);
@@ -71,11 +72,10 @@ export function Component() {
               const onError = (err: unknown) => {
                 markShown(err);
                 if (!isApiError(err, 400)) return setFormError(errorMessage(err));
-                const fields = Object.fromEntries(Object.entries(err.fieldErrors).map(([k, v]) => [k.replace(/^body\./, ''), v]));
-                setErrors(fields);
                 // What no field below shows (the source week, say) is said under the form, never dropped.
-                const unseen = Object.entries(fields).filter(([k]) => !SHOWN_FIELDS.has(k)).map(([, v]) => v[0]);
-                if (unseen.length > 0 || Object.keys(fields).length === 0) setFormError(unseen.join(' ') || errorMessage(err));
+                const { onFields, unseen } = splitFieldErrors(err, (name) => SHOWN_FIELDS.has(name));
+                setErrors(onFields);
+                if (unseen.length > 0 || Object.keys(onFields).length === 0) setFormError(unseen.join(' ') || errorMessage(err));
               };
               if (source)
                 copy.mutate(

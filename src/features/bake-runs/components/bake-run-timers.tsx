@@ -6,6 +6,7 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { errorMessage, isApiError, markShown } from '@/lib/problem';
+import { splitFieldErrors } from '@/lib/form-errors';
 import { describeEvent } from './bake-run-sheet';
 import { OvenChecks } from './oven-checks';
 import { currentKitchenZone, kitchenNow, kitchenToday, timeLabel } from '@/lib/dates';
@@ -87,12 +88,13 @@ function ChangeRefused({
     );
   }
   if (isApiError(error, 400)) {
-    const unsaid = Object.entries(error.fieldErrors).filter(([field]) => !said?.(field.replace(/^body\./, '')));
-    if (!said || (Object.keys(error.fieldErrors).length > 0 && unsaid.length === 0)) return null;
+    if (!said) return null;
+    const { onFields, unseen } = splitFieldErrors(error, said);
+    if (Object.keys(onFields).length > 0 && unseen.length === 0) return null;
     markShown(error);
     return (
       <Notice tone="block" title={notDone}>
-        {unsaid[0]?.[1][0] ?? errorMessage(error)}
+        {unseen[0] ?? errorMessage(error)}
       </Notice>
     );
   }
