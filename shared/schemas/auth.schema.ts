@@ -15,9 +15,18 @@ const password = z
   .max(200, { message: 'Use at most 200 characters' });
 const personName = z.string().trim().min(1, { message: 'Enter a name' }).max(120);
 
+/** A session not kept signed in (a shared computer) also ends after this many hours without a request. */
+export const UNKEPT_SESSION_IDLE_HOURS = 12;
+
 export const loginSchema = z.object({
   email,
   password: z.string().min(1, { message: 'Enter your password' }).max(200),
+  /**
+   * Keep this device signed in (the default): for two weeks from its last use. False, for a shared or kitchen
+   * computer: the session ends when the browser closes (or after UNKEPT_SESSION_IDLE_HOURS unused), and the app keeps
+   * nothing on the device for use offline.
+   */
+  staySignedIn: z.boolean({ message: 'Say whether to keep this device signed in: true or false' }).optional(),
 });
 export type LoginInput = z.infer<typeof loginSchema>;
 
@@ -78,6 +87,8 @@ export interface SignedInDeviceDto {
   device: string | null;
   signedInAt: string | null;
   lastActiveAt: string;
+  /** Signed in without "Keep me signed in": it ends when that browser closes. */
+  untilBrowserCloses: boolean;
 }
 export const deviceIdSchema = z.string().regex(/^[0-9a-f]{24}$/, { message: 'Not a signed-in device of yours' });
 
@@ -117,6 +128,11 @@ export interface MeDto {
    * record read the kitchen's clock in it, whatever zone the reading device is in.
    */
   timeZone: string | null;
+  /**
+   * This session was kept signed in at sign-in (the default). False on a shared computer: the session ends when the
+   * browser closes, and the app keeps nothing on the device for use offline.
+   */
+  staysSignedIn: boolean;
 }
 
 /** One of the workspaces a person belongs to (GET /api/auth/workspaces): someone may work for two coaches. */

@@ -32,13 +32,14 @@ function restoreKeptPerson(qc: QueryClient): boolean {
 
 /**
  * Forgets what is kept on this device as soon as the signed-in person is not its owner: signed out, the session found
- * ended, or someone else signed in (or the same person in another coach's workspace). Returns the unsubscribe.
+ * ended, or someone else signed in (or the same person in another coach's workspace), or its owner signed in without
+ * "Keep me signed in" (a shared computer keeps nothing). Returns the unsubscribe.
  */
 export function followKeptPerson(qc: QueryClient): () => void {
   return followMe(qc, (me) => {
     if (me === undefined) return;
     const owner = keptPerson();
     if (!owner) return;
-    if (me === null || me.id !== owner.id || me.workspaceId !== owner.workspaceId) forgetKept();
+    if (me === null || me.id !== owner.id || me.workspaceId !== owner.workspaceId || me.staysSignedIn === false) forgetKept();
   });
 }

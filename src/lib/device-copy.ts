@@ -3,7 +3,8 @@ import type { MeDto } from '@shared/schemas/auth.schema';
 /**
  * Answers of the server kept on this device (localStorage), so that pages open without a network: a client's plan,
  * the shopping list in a store with no signal. Each answer is kept with the person it belongs to; the app forgets
- * them all as soon as the signed-in person is someone else or nobody (src/app/offline.ts). Kept KEEP_DAYS at most.
+ * them all as soon as the signed-in person is someone else or nobody, or signed in without "Keep me signed in"
+ * (src/app/offline.ts). Kept KEEP_DAYS at most.
  */
 const PREFIX = 'trayline.kept.';
 const PERSON = `${PREFIX}person`;
@@ -53,8 +54,12 @@ function write(key: string, value: unknown): void {
 
 const fresh = (savedAt: unknown, now: number) => typeof savedAt === 'number' && now - savedAt <= KEEP_DAYS * DAY_MS && savedAt <= now + DAY_MS;
 
-/** Keeps the server's answer `name` for `me` (the person too: offline, they are taken as signed in). */
+/**
+ * Keeps the server's answer `name` for `me` (the person too: offline, they are taken as signed in). Nothing is kept
+ * for a person signed in without "Keep me signed in" (a shared computer).
+ */
 export function keepAnswer<T>(name: string, me: MeDto, data: T, savedAt = Date.now()): void {
+  if (me.staysSignedIn === false) return;
   write(PERSON, { version: VERSION, me, savedAt } satisfies KeptPerson);
   write(`${ANSWER}${name}`, { version: VERSION, personId: me.id, workspaceId: me.workspaceId, savedAt, data } satisfies KeptAnswer<T>);
 }

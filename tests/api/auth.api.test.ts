@@ -307,6 +307,70 @@ describe('the devices signed in as a person', () => {
   });
 });
 
+describe('keep me signed in', () => {
+  const cookieOf = (res: { headers: Record<string, unknown> }) => String(res.headers['set-cookie'] ?? '');
+  const expireOf = async (userId: number, kept: boolean) =>
+    (
+      await sql<{ ms: string }>(
+        `select (extract(epoch from expire) * 1000)::bigint::text as ms from "session" where (sess->'passport'->>'user') = $1 and ((sess->>'staySignedIn') is distinct from 'false') = $2`,
+        [String(userId), kept],
+      )
+    ).map((r) => Number(r.ms));
+
+  it('kept (the default): a cookie with an expiry two weeks on; not kept: a cookie without one, and the server ends it after 12 idle hours', async () => {
+    const coach = await coachWorkspace(app);
+    const kept = agentFor(app);
+    const keptRes = await kept.post('/api/auth/login').send({ email: coach.email, password: PASSWORD }).expect(200);
+    expect(keptRes.body.staysSignedIn).toBe(true);
+    // RFC 6265 §4.1.2.1–4.1.2.2 (from memory): a cookie with Expires (or Max-Age) is kept until then; one without
+    // either is a session cookie, which the browser drops when it closes.
+    const keptExpiry = /Expires=([^;]+)/i.exec(cookieOf(keptRes))?.[1];
+    expect(Date.parse(keptExpiry!) - Date.now()).toBeGreaterThan(13.9 * 86_400_000);
+
+    const shared = agentFor(app);
+    const before = Date.now();
+    const sharedRes = await shared.post('/api/auth/login').send({ email: coach.email, password: PASSWORD, staySignedIn: false }).expect(200);
+    expect(cookieOf(sharedRes)).toMatch(/trayline\.sid=/);
+    expect(cookieOf(sharedRes)).not.toMatch(/Expires=|Max-Age=/i);
+    expect(sharedRes.body.staysSignedIn).toBe(false);
+    // Each later answer renews the cookie, still without an expiry; /me says so too.
+    const me = await shared.get('/api/auth/me').expect(200);
+    expect(me.body.staysSignedIn).toBe(false);
+    expect(cookieOf(me)).not.toMatch(/Expires=|Max-Age=/i);
+    expect((await kept.get('/api/auth/me').expect(200)).body.staysSignedIn).toBe(true);
+    // Stored until 12 hours after its last request (the kept one: 14 days).
+    const [sharedExpire] = await expireOf(coach.userId, false);
+    expect(sharedExpire - before).toBeGreaterThan(12 * 3_600_000 - 60_000);
+    expect(sharedExpire - Date.now()).toBeLessThanOrEqual(12 * 3_600_000 + 1000);
+    for (const ms of await expireOf(coach.userId, true)) expect(ms - Date.now()).toBeGreaterThan(13.9 * 86_400_000);
+
+    // Eleven hours without a request: the next one renews it to 12 hours from now.
+    await sql(`update "session" set expire = now() + interval '1 hour' where (sess->'passport'->>'user') = $1 and (sess->>'staySignedIn') = 'false'`, [String(coach.userId)]);
+    await shared.get('/api/auth/me').expect(200);
+    const [renewed] = await expireOf(coach.userId, false);
+    expect(renewed - Date.now()).toBeGreaterThan(12 * 3_600_000 - 120_000);
+    // Past its 12 hours: ended.
+    await sql(`update "session" set expire = now() - interval '1 second' where (sess->'passport'->>'user') = $1 and (sess->>'staySignedIn') = 'false'`, [String(coach.userId)]);
+    await shared.get('/api/auth/me').expect(401);
+    await kept.get('/api/auth/me').expect(200);
+  });
+
+  it('the device list says which devices sign out when their browser closes; a bad value is a 400 naming the field', async () => {
+    const coach = await coachWorkspace(app);
+    const shared = agentFor(app).set('user-agent', LAPTOP_UA);
+    await shared.post('/api/auth/login').send({ email: coach.email, password: PASSWORD, staySignedIn: false }).expect(200);
+    const list = (await coach.agent.get('/api/auth/devices').expect(200)).body as { current: boolean; device: string; untilBrowserCloses: boolean; lastActiveAt: string }[];
+    expect(list.find((d) => d.current)).toMatchObject({ untilBrowserCloses: false });
+    const laptop = list.find((d) => !d.current)!;
+    expect(laptop).toMatchObject({ device: 'Safari on a macOS computer', untilBrowserCloses: true });
+    // Its last request was just now (the stored expiry minus its own 12 hours, not 14 days).
+    expect(Math.abs(Date.parse(laptop.lastActiveAt) - Date.now())).toBeLessThan(90_000);
+
+    const bad = await agentFor(app).post('/api/auth/login').send({ email: coach.email, password: PASSWORD, staySignedIn: 'yes' }).expect(400);
+    expect(bad.body.errors.staySignedIn).toBeDefined();
+  });
+});
+
 describe('client invitations', () => {
   it('refuses to link a client profile of another workspace (400 naming clientId)', async () => {
     const coachA = await coachWorkspace(app);

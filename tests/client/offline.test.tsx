@@ -121,6 +121,32 @@ describe("a client's plan saved on their device", () => {
   });
 });
 
+describe('a device not kept signed in (a shared computer)', () => {
+  const shared = { ...client, staysSignedIn: false };
+
+  it('keeps nothing of its person for offline use', async () => {
+    const qc = queryClientFor(shared);
+    vi.useFakeTimers({ now: wednesday, toFake: ['Date'] });
+    vi.stubGlobal('fetch', vi.fn(async () => jsonResponse(week('Chive square'))));
+    renderInApp(<MyPlates />, qc);
+    expect(await screen.findByRole('heading', { level: 2, name: 'Chive square' })).toBeTruthy();
+    expect(keptPlan()).toBeNull();
+    expect(keptPerson()).toBeNull();
+  });
+
+  it('forgets what an earlier kept sign-in of the same person saved, once they sign in here without keeping', () => {
+    const qc = testQueryClient();
+    const stop = followKeptPerson(qc);
+    savePlan(client, week('Saved square'));
+    qc.setQueryData(authKeys.me(), { ...client });
+    expect(keptPlan()).not.toBeNull();
+    qc.setQueryData(authKeys.me(), shared);
+    expect(keptPlan()).toBeNull();
+    expect(keptPerson()).toBeNull();
+    stop();
+  });
+});
+
 describe("a client's targets without a network", () => {
   // The client's own profile as GET /api/clients/:id answers it (invented numbers).
   const own = (kcal: number) => ({

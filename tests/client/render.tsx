@@ -70,6 +70,7 @@ export function signedIn(overrides: Partial<MeDto> = {}): MeDto {
     dateOrder: 'month-day',
     clock: '24h',
     timeZone: null,
+    staysSignedIn: true,
     tempUnit: 'F',
     ...overrides,
   };

@@ -107,9 +107,10 @@ describe('a session that ends under an open page', () => {
     fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'right-password' } });
     fireEvent.click(screen.getByRole('button', { name: 'Sign in and carry on' }));
     await waitFor(() => expect(screen.queryByRole('dialog')).toBeNull());
+    // Kept signed in as the ended session was.
     expect(logins).toEqual([
-      { email: 'coach@example.test', password: 'wrong' },
-      { email: 'coach@example.test', password: 'right-password' },
+      { email: 'coach@example.test', password: 'wrong', staySignedIn: true },
+      { email: 'coach@example.test', password: 'right-password', staySignedIn: true },
     ]);
     const calls = vi.mocked(globalThis.fetch).mock.calls.map(([url, init]) => `${init?.method ?? 'GET'} ${url}`);
     expect(calls).toContain('PUT /api/auth/workspace');
@@ -143,6 +144,18 @@ describe('a session that ends under an open page', () => {
     session = false;
     fireEvent.click(screen.getByRole('button', { name: 'Save' }));
     expect(await screen.findByRole('dialog', { name: 'Signed out' })).toBeTruthy();
+  });
+
+  it('signs in again on a shared computer as it was: not kept signed in', async () => {
+    show(<NotePage />, queryClientFor(signedIn({ staysSignedIn: false })));
+    await screen.findByText('Saved note: Lid on');
+    session = false;
+    fireEvent.click(screen.getByRole('button', { name: 'Save' }));
+    await screen.findByRole('dialog', { name: 'Signed out' });
+    fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'right-password' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Sign in and carry on' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).toBeNull());
+    expect(logins).toEqual([{ email: 'coach@example.test', password: 'right-password', staySignedIn: false }]);
   });
 
   it('asks for the password before sending anything', async () => {

@@ -9,11 +9,12 @@ import { jsonResponse, renderInApp } from './render';
 // words do not depend on the machine's time zone.
 const at = (day: number, h: number, min: number) => new Date(2026, 11, day, h, min).toISOString();
 const device = (id: string, more: Partial<SignedInDeviceDto>): SignedInDeviceDto => ({
-  id: id.repeat(24).slice(0, 24), current: false, device: null, signedInAt: null, lastActiveAt: at(2, 9, 0), ...more,
+  id: id.repeat(24).slice(0, 24), current: false, device: null, signedInAt: null, lastActiveAt: at(2, 9, 0), untilBrowserCloses: false, ...more,
 });
 const laptop = device('a', { current: true, device: 'Safari on a macOS computer', signedInAt: at(1, 8, 5), lastActiveAt: new Date().toISOString() });
 const phone = device('b', { device: 'Chrome on an Android phone', signedInAt: at(2, 15, 13), lastActiveAt: at(3, 7, 40) });
 const old = device('c', {});
+const kitchen = device('d', { device: 'Firefox on a Linux computer', signedInAt: at(2, 6, 0), lastActiveAt: at(2, 6, 30), untilBrowserCloses: true });
 
 beforeEach(() => setClockStyle('12h'));
 afterEach(() => {
@@ -37,13 +38,15 @@ function stubDevicesApi(list: () => SignedInDeviceDto[], change: (method: string
 
 describe('signed-in devices (Settings)', () => {
   it('lists this device first, then the others with when they signed in and were last used; only others can be signed out', async () => {
-    stubDevicesApi(() => [laptop, phone, old], () => jsonResponse({}, 500));
+    stubDevicesApi(() => [laptop, phone, old, kitchen], () => jsonResponse({}, 500));
     renderInApp(<SignedInDevices />);
     const rows = within(await screen.findByRole('list', { name: 'Devices signed in as you' })).getAllByRole('listitem');
     expect(rows.map((r) => r.textContent)).toEqual([
       'Safari on a macOS computer (this device)Signed in Tue, Dec 1, 8:05 AM',
       'Chrome on an Android phoneSigned in Wed, Dec 2, 3:13 PM · last active Thu, Dec 3, 7:40 AMSign out',
       'A device signed in before Trayline noted devicesSigned in earlier · last active Wed, Dec 2, 9:00 AMSign out',
+      // Signed in without "Keep me signed in".
+      'Firefox on a Linux computerSigned in Wed, Dec 2, 6:00 AM · last active Wed, Dec 2, 6:30 AM · until its browser closesSign out',
     ]);
     expect(within(rows[0]).queryByRole('button')).toBeNull();
     expect(screen.getByRole('button', { name: 'Sign out Chrome on an Android phone, signed in Wed, Dec 2, 3:13 PM' })).toBeTruthy();

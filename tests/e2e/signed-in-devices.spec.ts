@@ -53,3 +53,48 @@ test('a person sees the devices signed in as them, signs one out, and a new pass
   await phoneContext.close();
   await laptopContext.close();
 });
+
+// A demo client on a shared family computer: signed in without "Keep me signed in", their plates show as usual but
+// nothing is kept in the browser's storage for offline use (a kept sign-in on the same browser keeps their plan),
+// and the session cookie has no expiry, so the browser drops it when it closes (RFC 6265 §4.1.2.1–2,
+// from memory). Their own phone lists that computer as signed in "until its browser closes".
+test('signed in without "Keep me signed in": nothing kept for offline use, a cookie that ends with the browser', async ({ browser }) => {
+  const email = 'client4@trayline.test';
+  const keptNames = (p: import('@playwright/test').Page) =>
+    p.evaluate(() => Object.keys(localStorage).filter((k) => k.startsWith('trayline.kept.')));
+
+  const shared = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const computer = await shared.newPage();
+  await signIn(computer, email);
+  await expect(computer.getByRole('heading', { level: 1, name: "Today's plate" })).toBeVisible();
+  await expect.poll(() => keptNames(computer)).toContain('trayline.kept.answer.my-week');
+  await computer.getByRole('button', { name: /Sign out/ }).click();
+  await expect(computer).toHaveURL(/\/sign-in/);
+
+  await computer.getByLabel('E-mail').fill(email);
+  await computer.getByLabel('Password').fill('trayline-demo');
+  const keep = computer.getByRole('checkbox', { name: 'Keep me signed in on this device' });
+  await expect(keep).toBeChecked();
+  await keep.uncheck();
+  const plan = computer.waitForResponse((r) => r.url().includes('/api/weeks/mine') && r.ok());
+  await computer.getByRole('button', { name: 'Sign in' }).click();
+  await expect(computer.getByRole('heading', { level: 1, name: "Today's plate" })).toBeVisible();
+  await plan;
+  await expect(computer.getByText('Loading')).toHaveCount(0);
+  expect(await keptNames(computer)).toEqual([]);
+  const [cookie] = (await shared.cookies()).filter((c) => c.name === 'trayline.sid');
+  expect(cookie.expires).toBe(-1); // a session cookie
+
+  const phoneContext = await browser.newContext({ viewport: { width: 393, height: 851 }, isMobile: true });
+  const phone = await phoneContext.newPage();
+  await signIn(phone, email);
+  await phone.goto('/settings');
+  const devices = phone.getByRole('list', { name: 'Devices signed in as you' }).getByRole('listitem');
+  await expect(devices.filter({ hasText: 'until its browser closes' })).toHaveCount(1);
+  await expect(devices.first()).toContainText('(this device)');
+  await expect(devices.first()).not.toContainText('until its browser closes');
+  await phone.screenshot({ path: `${SHOTS}/signed-in-devices-shared.png`, fullPage: true });
+
+  await phoneContext.close();
+  await shared.close();
+});

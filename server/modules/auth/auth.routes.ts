@@ -17,7 +17,7 @@ import {
   updatePreferencesSchema,
   type InvitationDto,
 } from '@shared/schemas/auth.schema.js';
-import { actorOf, allow } from '../../http/authz.js';
+import { actorOf, allow, type Actor } from '../../http/authz.js';
 import { BadCredentials, Forbidden, TooMany } from '../../http/errors.js';
 import { PgRateLimitStore } from '../../http/rate-limit-store.js';
 import { emOf } from '../../http/request-context.js';
@@ -30,6 +30,9 @@ import type { MailQueue } from '../mail/mail.service.js';
 import { PG_INT_MAX, TOO_LARGE } from '@shared/schemas/ids.js';
 
 const FIFTEEN_MIN = 15 * 60_000;
+
+/** The signed-in person, with whether this session was kept signed in at sign-in. */
+const meOf = (req: Request, actor: Actor) => auth.me(emOf(req), actor, req.session.staySignedIn !== false);
 
 function presentInvitation(inv: IInvitation, link?: string): InvitationDto {
   return {
@@ -79,8 +82,8 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
       req.body = body; // normalised e-mail for passport-local
       const { actor, message } = await authenticateLocal(req, res, () => undefined);
       if (!actor) throw message === NO_WORKSPACE ? new Forbidden(message) : new BadCredentials();
-      await signIn(req, actor);
-      return auth.me(emOf(req), actor);
+      await signIn(req, actor, body.staySignedIn !== false);
+      return meOf(req, actor);
     }),
   );
 
@@ -93,7 +96,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
       const actor = (await auth.loadActor(em, userId))!;
       await signIn(req, actor);
       res.status(201);
-      return auth.me(em, actor);
+      return meOf(req, actor);
     }),
   );
 
@@ -108,7 +111,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
   r.get(
     '/auth/me',
     allow('signed-in'),
-    validated({}, (_i, req) => auth.me(emOf(req), actorOf(req))),
+    validated({}, (_i, req) => meOf(req, actorOf(req))),
   );
 
   r.patch(
@@ -116,7 +119,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
     allow('signed-in'),
     validated({ body: updatePreferencesSchema }, async ({ body }, req) => {
       await auth.updatePreferences(emOf(req), actorOf(req), body);
-      return auth.me(emOf(req), actorOf(req));
+      return meOf(req, actorOf(req));
     }),
   );
 
@@ -134,7 +137,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
       req.session.workspaceId = actor.workspaceId;
       req.user = actor;
       req.actor = actor;
-      return auth.me(emOf(req), actor);
+      return meOf(req, actor);
     }),
   );
 
@@ -244,7 +247,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
       const actor = (await auth.loadActor(em, userId, workspaceId))!;
       await signIn(req, actor);
       req.session.workspaceId = workspaceId;
-      return auth.me(em, actor);
+      return meOf(req, actor);
     }),
   );
 

@@ -111,8 +111,11 @@ export async function actorIn(em: EntityManager, actor: Actor, workspaceId: numb
   return next;
 }
 
-/** The signed-in person and their workspace: one prepared statement (every page load of the app asks for it). */
-export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
+/**
+ * The signed-in person and their workspace: one prepared statement (every page load of the app asks for it).
+ * `staysSignedIn` is the session's own (kept signed in at sign-in, or until the browser closes).
+ */
+export async function me(em: EntityManager, actor: Actor, staysSignedIn: boolean): Promise<MeDto> {
   const [row] = await preparedRows<{
     id: number;
     email: string;
@@ -146,6 +149,7 @@ export async function me(em: EntityManager, actor: Actor): Promise<MeDto> {
     dateOrder: datesOf(actor),
     clock: clockOf(actor),
     timeZone: row.timeZone ?? null,
+    staysSignedIn,
   };
 }
 

@@ -1,7 +1,7 @@
 import Bowser from 'bowser';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Request } from 'express';
-import type { SignedInDeviceDto } from '@shared/schemas/auth.schema.js';
+import { UNKEPT_SESSION_IDLE_HOURS, type SignedInDeviceDto } from '@shared/schemas/auth.schema.js';
 import { NotFound, ValidationError } from '../../http/errors.js';
 
 declare module 'express-session' {
@@ -10,11 +10,18 @@ declare module 'express-session' {
     signedInAt?: string;
     /** The device in a few words ("Chrome on an Android phone"), read off its User-Agent at sign-in; not the header. */
     device?: string;
+    /** False: signed in without "Keep me signed in" (a cookie that ends with the browser); absent: kept. */
+    staySignedIn?: false;
   }
 }
 
 /** A session lasts 14 days from its last request (a rolling cookie). */
 export const SESSION_MAX_AGE_MS = 14 * 86_400_000;
+/**
+ * A session not kept signed in has a cookie without an expiry (the browser drops it when it closes); the server
+ * cannot see the browser close, so it ends the session itself after this long without a request.
+ */
+export const UNKEPT_SESSION_IDLE_MS = UNKEPT_SESSION_IDLE_HOURS * 3_600_000;
 
 const KIND: Record<string, string> = { mobile: 'phone', tablet: 'tablet', desktop: 'computer', tv: 'TV' };
 
@@ -31,10 +38,19 @@ export function describeDevice(userAgent: string | undefined): string {
   return `${browser} on ${/^[aeiou]/i.test(where) ? 'an' : 'a'} ${where}`;
 }
 
-/** Notes on a session just signed in when and from what. Called by every sign-in (passport.ts `signIn`). */
-export function noteSignIn(req: Request): void {
+/**
+ * Notes on a session just signed in when and from what, and whether it stays signed in: one that does not gets a
+ * cookie without an expiry, so the browser forgets it when it closes. Called by every sign-in (passport.ts `signIn`).
+ */
+export function noteSignIn(req: Request, staySignedIn: boolean): void {
   req.session.signedInAt = new Date().toISOString();
   req.session.device = describeDevice(req.get('user-agent'));
+  if (staySignedIn) {
+    delete req.session.staySignedIn;
+  } else {
+    req.session.staySignedIn = false;
+    req.session.cookie.expires = null;
+  }
 }
 
 /**
@@ -49,6 +65,7 @@ interface DeviceRow {
   current: boolean;
   device: string | null;
   signed_in_at: string | null;
+  kept: boolean;
   expire_ms: string;
 }
 
@@ -56,7 +73,7 @@ interface DeviceRow {
 export async function listDevices(em: EntityManager, userId: number, currentSid: string): Promise<SignedInDeviceDto[]> {
   const rows = await em.getConnection().execute<DeviceRow[]>(
     `select ${HANDLE_SQL} as handle, sid = ? as current, sess->>'device' as device, sess->>'signedInAt' as signed_in_at,
-            (extract(epoch from expire) * 1000)::bigint::text as expire_ms
+            (sess->>'staySignedIn') is distinct from 'false' as kept, (extract(epoch from expire) * 1000)::bigint::text as expire_ms
        from "session" where ${MINE_SQL}`,
     [currentSid, String(userId)],
     'all',
@@ -70,7 +87,8 @@ export async function listDevices(em: EntityManager, userId: number, currentSid:
       device: r.device,
       signedInAt: r.signed_in_at && !Number.isNaN(Date.parse(r.signed_in_at)) ? new Date(r.signed_in_at).toISOString() : null,
       // The stored expiry is the last request's plus the session's life (rewritten when a minute behind).
-      lastActiveAt: new Date(r.current ? now : Math.min(now, Number(r.expire_ms) - SESSION_MAX_AGE_MS)).toISOString(),
+      lastActiveAt: new Date(r.current ? now : Math.min(now, Number(r.expire_ms) - (r.kept ? SESSION_MAX_AGE_MS : UNKEPT_SESSION_IDLE_MS))).toISOString(),
+      untilBrowserCloses: !r.kept,
     }))
     .sort((a, b) => Number(b.current) - Number(a.current) || b.lastActiveAt.localeCompare(a.lastActiveAt));
 }

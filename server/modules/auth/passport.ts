@@ -70,13 +70,14 @@ export function authenticateLocal(req: Request, res: Response, next: NextFunctio
 
 /**
  * Signs the actor in; passport regenerates the session id (no session fixation). The new session notes when and
- * from what device (Settings lists the devices signed in).
+ * from what device (Settings lists the devices signed in), and whether it stays signed in (`staySignedIn`, the
+ * default) or ends with the browser (a shared computer).
  */
-export function signIn(req: Request, actor: Actor): Promise<void> {
+export function signIn(req: Request, actor: Actor, staySignedIn = true): Promise<void> {
   return new Promise((resolve, reject) =>
     req.login(actor, (err) => {
       if (err) return reject(err);
-      noteSignIn(req);
+      noteSignIn(req, staySignedIn);
       resolve();
     }),
   );

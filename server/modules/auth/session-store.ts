@@ -4,6 +4,7 @@ import type { Request } from 'express';
 import type { Pool } from 'pg';
 import type { Actor } from '../../http/authz.js';
 import { ACTOR_SQL, actorFromRow, type ActorRow } from './auth.service.js';
+import { UNKEPT_SESSION_IDLE_MS } from './devices.js';
 
 /** How far the stored session expiry may lag the cookie's before a request rewrites it (seconds). */
 export const TOUCH_SLACK_S = 60;
@@ -35,6 +36,13 @@ type PreloadCarrier = { [PRELOAD]?: SessionPreload };
 export function preloadedActor(req: Request, userId: number): Actor | null {
   const p = (req as unknown as PreloadCarrier)[PRELOAD];
   return p?.actor && p.actor.userId === userId ? p.actor : null;
+}
+
+/** When a session ends, epoch seconds: its cookie's expiry, or for a cookie without one the unkept session's idle limit. */
+function expireSecondsOf(sess: session.SessionData, maxAgeMs: number): number {
+  const expires = sess.cookie?.expires;
+  const ms = expires ? new Date(expires).getTime() : Date.now() + (sess.staySignedIn === false ? UNKEPT_SESSION_IDLE_MS : maxAgeMs);
+  return Math.ceil(ms / 1000);
 }
 
 /**
@@ -81,9 +89,21 @@ export function createSessionStore(pool: Pool, maxAgeMs: number): session.Store 
       return super.createSession(req, sess);
     }
 
+    /**
+     * Stores the session until its cookie expires; a cookie without an expiry (not kept signed in: the browser drops it
+     * when it closes) until UNKEPT_SESSION_IDLE_MS after this request.
+     */
+    override set(sid: string, sess: session.SessionData, done?: (err?: unknown) => void): void {
+      pool
+        .query(
+          'insert into session (sess, expire, sid) values ($1, to_timestamp($2), $3) on conflict (sid) do update set sess = $1, expire = to_timestamp($2)',
+          [sess, expireSecondsOf(sess, maxAgeMs), sid],
+        )
+        .then(() => done?.(), (err: unknown) => done?.(err));
+    }
+
     override touch(sid: string, sess: session.SessionData, done?: (err?: unknown) => void): void {
-      const expires = sess.cookie?.expires;
-      const expireS = Math.ceil((expires ? new Date(expires).getTime() : Date.now() + maxAgeMs) / 1000);
+      const expireS = expireSecondsOf(sess, maxAgeMs);
       const req = (sess as unknown as { req?: Request }).req;
       const stored = req ? (req as unknown as PreloadCarrier)[PRELOAD]?.expireS : undefined;
       if (stored !== undefined && stored >= expireS - TOUCH_SLACK_S) {

@@ -108,6 +108,28 @@ export const PasswordField = forwardRef<HTMLInputElement, Omit<InputProps, 'type
   );
 });
 
+/** A checkbox with its words beside it and an optional hint under them (read out with the box). */
+export const CheckField = forwardRef<HTMLInputElement, Omit<InputProps, 'type' | 'error'>>(function CheckField(
+  { label, hint, className = '', ...rest },
+  ref,
+) {
+  const id = useId();
+  const hintId = hint ? `${id}-hint` : undefined;
+  return (
+    <div className={`flex flex-col gap-1 ${className}`}>
+      <label htmlFor={id} className="flex min-h-11 items-center gap-2 font-bold text-ink">
+        <input ref={ref} id={id} type="checkbox" aria-describedby={hintId} className="h-5 w-5 shrink-0 accent-herb" {...rest} />
+        {label}
+      </label>
+      {hint && (
+        <p id={hintId} className="text-sm text-ink-faint">
+          {hint}
+        </p>
+      )}
+    </div>
+  );
+});
+
 type SelectProps = SelectHTMLAttributes<HTMLSelectElement> & { label: string; error?: string; hint?: ReactNode };
 export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function SelectField(
   { label, error, hint, className, children, ...rest },

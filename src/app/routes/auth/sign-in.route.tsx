@@ -2,10 +2,10 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
-import { loginSchema, type LoginInput } from '@shared/schemas/auth.schema';
+import { loginSchema, UNKEPT_SESSION_IDLE_HOURS, type LoginInput } from '@shared/schemas/auth.schema';
 import { useLogin } from '@/features/auth/api/use-auth-mutations';
 import { Button } from '@/components/ui/button';
-import { PasswordField, TextField } from '@/components/ui/field';
+import { CheckField, PasswordField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
@@ -21,7 +21,7 @@ export function Component() {
   const navigate = useNavigate();
   const login = useLogin();
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm<LoginInput>({ resolver: zodResolver(loginSchema), defaultValues: { email: '', password: '' } });
+  const form = useForm<LoginInput>({ resolver: zodResolver(loginSchema), defaultValues: { email: '', password: '', staySignedIn: true } });
   const onSubmit = form.handleSubmit((values) => {
     setFormError(null);
     login.mutate(values, {
@@ -43,6 +43,11 @@ export function Component() {
         <Link className="-mt-2 self-start text-sm font-bold underline" to={paths.forgotPassword}>
           Forgot password?
         </Link>
+        <CheckField
+          label="Keep me signed in on this device"
+          hint={`Untick on a shared or kitchen computer: you are signed out when the browser closes (or after ${UNKEPT_SESSION_IDLE_HOURS} hours unused), and nothing is kept on it for use offline.`}
+          {...form.register('staySignedIn')}
+        />
         <Button type="submit" busy={login.isPending}>
           Sign in
         </Button>

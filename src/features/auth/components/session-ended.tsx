@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState, useSyncExternalStore, type ReactNode } from 'react';
 import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import type { MeDto } from '@shared/schemas/auth.schema';
+import { UNKEPT_SESSION_IDLE_HOURS, type MeDto } from '@shared/schemas/auth.schema';
 import { Button } from '@/components/ui/button';
 import { PasswordField } from '@/components/ui/field';
 import { api, notifySessionResumed } from '@/lib/api-client';
@@ -86,7 +86,7 @@ function SessionEndedDialog({ me, signInElsewhere }: { me: MeDto; signInElsewher
   const signIn = useMutation({
     meta: { silent: true },
     mutationFn: async () => {
-      const again = await api.post<MeDto>('/auth/login', { email: me.email, password });
+      const again = await api.post<MeDto>('/auth/login', { email: me.email, password, staySignedIn: me.staysSignedIn !== false });
       if (again.workspaceId === me.workspaceId) return again;
       // Signed in to another of their workspaces by default: back to the one the page belongs to, if it still is theirs.
       try {
@@ -118,7 +118,7 @@ function SessionEndedDialog({ me, signInElsewhere }: { me: MeDto; signInElsewher
         </h2>
         <p className="mt-2 text-ink-soft">
           Your session ended (signed out in another tab or on another device, a changed password, or two weeks without
-          use). This page stays as it is, with anything you typed. Sign in again to carry on, then save again where you
+          use; {UNKEPT_SESSION_IDLE_HOURS} hours on a device not kept signed in). This page stays as it is, with anything you typed. Sign in again to carry on, then save again where you
           were saving.
         </p>
         <form

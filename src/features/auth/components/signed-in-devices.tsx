@@ -45,6 +45,7 @@ export function SignedInDevices() {
                     <>
                       {d.signedInAt ? <>Signed in <span className="num">{momentLabel(d.signedInAt)}</span></> : 'Signed in earlier'}
                       {!d.current && <> · {lastActiveLabel(d.lastActiveAt)}</>}
+                      {d.untilBrowserCloses && <> · until its browser closes</>}
                     </>
                   }
                   actions={
