@@ -112,6 +112,14 @@ export function createApp({ orm, pool, env, mail, logger, schema = schemaGate(or
     if (req.user) req.actor = req.user;
     next();
   });
+  // The API's answers are someone's data: never kept by a shared cache (private), and a browser asks again each time
+  // (no-cache; its copy still saves a transfer when the ETag matches). On a device not kept signed in (a shared
+  // computer) the browser keeps no copy at all (no-store; noteSignIn sets it on the sign-in's own answer). A route
+  // that says otherwise (a tray photo, a plan PDF) sets its own.
+  api.use((req, res, next) => {
+    res.setHeader('cache-control', req.session?.staySignedIn === false ? 'no-store' : 'private, no-cache');
+    next();
+  });
   api.use((req, _res, next) => {
     const safe = req.method === 'GET' || req.method === 'HEAD' || req.method === 'OPTIONS';
     if (!safe && req.get(CSRF_HEADER) !== '1') return next(new Forbidden(`Missing ${CSRF_HEADER} header`));

@@ -338,6 +338,13 @@ describe('keep me signed in', () => {
     expect(me.body.staysSignedIn).toBe(false);
     expect(cookieOf(me)).not.toMatch(/Expires=|Max-Age=/i);
     expect((await kept.get('/api/auth/me').expect(200)).body.staysSignedIn).toBe(true);
+    // RFC 9111 §5.2.2 (from memory): "private" keeps an answer out of shared caches; "no-cache" has the browser ask
+    // again before reusing its copy; "no-store" keeps no copy at all, which a shared computer wants.
+    expect(keptRes.headers['cache-control']).toBe('private, no-cache');
+    expect((await kept.get('/api/clients').expect(200)).headers['cache-control']).toBe('private, no-cache');
+    expect(sharedRes.headers['cache-control']).toBe('no-store');
+    expect(me.headers['cache-control']).toBe('no-store');
+    expect((await shared.get('/api/clients').expect(200)).headers['cache-control']).toBe('no-store');
     // Stored until 12 hours after its last request (the kept one: 14 days).
     const [sharedExpire] = await expireOf(coach.userId, false);
     expect(sharedExpire - before).toBeGreaterThan(12 * 3_600_000 - 60_000);

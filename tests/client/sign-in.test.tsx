@@ -30,7 +30,7 @@ describe('"Keep me signed in" at sign-in', () => {
     expect(keep.checked).toBe(true);
     const hint = document.getElementById(keep.getAttribute('aria-describedby')!);
     expect(hint?.textContent).toBe(
-      'Untick on a shared or kitchen computer: you are signed out when the browser closes (or after 12 hours unused), and nothing is kept on it for use offline.',
+      'Untick on a shared or kitchen computer: you are signed out when the browser closes (or after 12 hours unused), and your plans and lists are not kept on it for use offline.',
     );
     await waitFor(() => expect(bodies).toEqual([{ email: 'coach@example.test', password: 'a-long-password', staySignedIn: true }]));
   });

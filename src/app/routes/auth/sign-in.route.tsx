@@ -45,7 +45,7 @@ export function Component() {
         </Link>
         <CheckField
           label="Keep me signed in on this device"
-          hint={`Untick on a shared or kitchen computer: you are signed out when the browser closes (or after ${UNKEPT_SESSION_IDLE_HOURS} hours unused), and nothing is kept on it for use offline.`}
+          hint={`Untick on a shared or kitchen computer: you are signed out when the browser closes (or after ${UNKEPT_SESSION_IDLE_HOURS} hours unused), and your plans and lists are not kept on it for use offline.`}
           {...form.register('staySignedIn')}
         />
         <Button type="submit" busy={login.isPending}>
