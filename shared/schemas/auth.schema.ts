@@ -18,15 +18,17 @@ const personName = z.string().trim().min(1, { message: 'Enter a name' }).max(120
 /** A session not kept signed in (a shared computer) also ends after this many hours without a request. */
 export const UNKEPT_SESSION_IDLE_HOURS = 12;
 
+/**
+ * Keep this device signed in (the default): for two weeks from its last use. False, for a shared or kitchen
+ * computer: the session ends when the browser closes (or after UNKEPT_SESSION_IDLE_HOURS unused), and the app keeps
+ * no plan or list on the device for use offline. Sent by the sign-in and the invitation's join.
+ */
+const staySignedIn = z.boolean({ message: 'Say whether to keep this device signed in: true or false' }).optional();
+
 export const loginSchema = z.object({
   email,
   password: z.string().min(1, { message: 'Enter your password' }).max(200),
-  /**
-   * Keep this device signed in (the default): for two weeks from its last use. False, for a shared or kitchen
-   * computer: the session ends when the browser closes (or after UNKEPT_SESSION_IDLE_HOURS unused), and the app keeps
-   * nothing on the device for use offline.
-   */
-  staySignedIn: z.boolean({ message: 'Say whether to keep this device signed in: true or false' }).optional(),
+  staySignedIn,
 });
 export type LoginInput = z.infer<typeof loginSchema>;
 
@@ -62,7 +64,7 @@ export const changeMemberRoleSchema = z.object({
 });
 export type ChangeMemberRoleInput = z.infer<typeof changeMemberRoleSchema>;
 
-export const acceptInvitationSchema = z.object({ name: personName, password });
+export const acceptInvitationSchema = z.object({ name: personName, password, staySignedIn });
 export type AcceptInvitationInput = z.infer<typeof acceptInvitationSchema>;
 
 export const changePasswordSchema = z.object({

@@ -376,6 +376,22 @@ describe('keep me signed in', () => {
     const bad = await agentFor(app).post('/api/auth/login').send({ email: coach.email, password: PASSWORD, staySignedIn: 'yes' }).expect(400);
     expect(bad.body.errors.staySignedIn).toBeDefined();
   });
+
+  it('joining by an invitation on a shared computer: the same session that ends with the browser', async () => {
+    const coach = await coachWorkspace(app);
+    const inv = await coach.agent.post('/api/invitations').send({ email: `${uniq('assistant')}@example.test`, role: 'assistant' }).expect(201);
+    const token = String(inv.body.link).split('/invite/')[1];
+    const laptop = agentFor(app);
+    const bad = await laptop.post(`/api/invitations/${token}/accept`).send({ name: 'Kitchen Person', password: PASSWORD, staySignedIn: 1 }).expect(400);
+    expect(bad.body.errors.staySignedIn).toBeDefined();
+    const res = await laptop.post(`/api/invitations/${token}/accept`).send({ name: 'Kitchen Person', password: PASSWORD, staySignedIn: false }).expect(200);
+    expect(res.body.staysSignedIn).toBe(false);
+    expect(cookieOf(res)).toMatch(/trayline\.sid=/);
+    expect(cookieOf(res)).not.toMatch(/Expires=|Max-Age=/i);
+    const [expire] = await expireOf(res.body.id, false);
+    expect(expire - Date.now()).toBeLessThanOrEqual(12 * 3_600_000 + 1000);
+    expect((await laptop.get('/api/auth/me').expect(200)).body.staysSignedIn).toBe(false);
+  });
 });
 
 describe('client invitations', () => {

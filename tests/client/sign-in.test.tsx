@@ -1,6 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { Component as SignIn } from '@/app/routes/auth/sign-in.route';
+import { Component as Join } from '@/app/routes/auth/accept-invite.route';
 import { jsonResponse, renderInApp, signedIn } from './render';
 
 // The sign-in page with an invented coach's e-mail; the API answers every sign-in.
@@ -39,5 +40,29 @@ describe('"Keep me signed in" at sign-in', () => {
     const { bodies, keep } = signInWith(true);
     expect(keep.checked).toBe(false);
     await waitFor(() => expect(bodies).toEqual([{ email: 'coach@example.test', password: 'a-long-password', staySignedIn: false }]));
+  });
+});
+
+describe('"Keep me signed in" when joining by an invitation', () => {
+  it('is offered there too, ticked, and unticked asks for a sign-in that ends with the browser', async () => {
+    const bodies: Record<string, unknown>[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init?: RequestInit) => {
+        if (init?.method === 'POST') {
+          bodies.push(JSON.parse(String(init.body)));
+          return jsonResponse(signedIn({ role: 'assistant' }));
+        }
+        return jsonResponse({ email: 'kitchen@example.test', role: 'assistant', workspaceName: 'Example Prep' });
+      }),
+    );
+    renderInApp(<Join />);
+    const keep = (await screen.findByRole('checkbox', { name: 'Keep me signed in on this device' })) as HTMLInputElement;
+    expect(keep.checked).toBe(true);
+    fireEvent.change(screen.getByLabelText('Your name'), { target: { value: 'Kit Chen' } });
+    fireEvent.change(screen.getByLabelText('Choose a password'), { target: { value: 'a-long-password' } });
+    fireEvent.click(keep);
+    fireEvent.click(screen.getByRole('button', { name: 'Join' }));
+    await waitFor(() => expect(bodies).toEqual([{ name: 'Kit Chen', password: 'a-long-password', staySignedIn: false }]));
   });
 });

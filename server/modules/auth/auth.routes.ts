@@ -245,7 +245,7 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
       const { userId, workspaceId } = await auth.acceptInvitation(em, params.token, body);
       // Someone who already works elsewhere lands in the workspace that invited them.
       const actor = (await auth.loadActor(em, userId, workspaceId))!;
-      await signIn(req, actor);
+      await signIn(req, actor, body.staySignedIn !== false);
       req.session.workspaceId = workspaceId;
       return meOf(req, actor);
     }),

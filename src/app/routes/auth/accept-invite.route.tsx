@@ -8,6 +8,7 @@ import { invitationQuery } from '@/features/auth/api/auth.queries';
 import { useAcceptInvitation } from '@/features/auth/api/use-auth-mutations';
 import { Button } from '@/components/ui/button';
 import { PasswordField, TextField } from '@/components/ui/field';
+import { StaySignedInField } from '@/features/auth/components/stay-signed-in-field';
 import { ErrorState, Notice, Skeleton } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
@@ -21,7 +22,7 @@ export function Component() {
   const invitation = useQuery(invitationQuery(token));
   const accept = useAcceptInvitation(token);
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm<AcceptInvitationInput>({ resolver: zodResolver(acceptInvitationSchema), defaultValues: { name: '', password: '' } });
+  const form = useForm<AcceptInvitationInput>({ resolver: zodResolver(acceptInvitationSchema), defaultValues: { name: '', password: '', staySignedIn: true } });
   const onSubmit = form.handleSubmit((values) => {
     setFormError(null);
     accept.mutate(values, {
@@ -50,6 +51,7 @@ export function Component() {
           error={form.formState.errors.password?.message}
           {...form.register('password')}
         />
+        <StaySignedInField {...form.register('staySignedIn')} />
         <Button type="submit" busy={accept.isPending}>Join</Button>
       </form>
     </AuthLayout>

@@ -2,10 +2,11 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
-import { loginSchema, UNKEPT_SESSION_IDLE_HOURS, type LoginInput } from '@shared/schemas/auth.schema';
+import { loginSchema, type LoginInput } from '@shared/schemas/auth.schema';
 import { useLogin } from '@/features/auth/api/use-auth-mutations';
 import { Button } from '@/components/ui/button';
-import { CheckField, PasswordField, TextField } from '@/components/ui/field';
+import { PasswordField, TextField } from '@/components/ui/field';
+import { StaySignedInField } from '@/features/auth/components/stay-signed-in-field';
 import { Notice } from '@/components/ui/states';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
@@ -43,11 +44,7 @@ export function Component() {
         <Link className="-mt-2 self-start text-sm font-bold underline" to={paths.forgotPassword}>
           Forgot password?
         </Link>
-        <CheckField
-          label="Keep me signed in on this device"
-          hint={`Untick on a shared or kitchen computer: you are signed out when the browser closes (or after ${UNKEPT_SESSION_IDLE_HOURS} hours unused), and your plans and lists are not kept on it for use offline.`}
-          {...form.register('staySignedIn')}
-        />
+        <StaySignedInField {...form.register('staySignedIn')} />
         <Button type="submit" busy={login.isPending}>
           Sign in
         </Button>
