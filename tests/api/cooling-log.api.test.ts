@@ -146,6 +146,21 @@ describe('the cooling log', () => {
     expect(rows[2][10]).toBe('Thrown away');
   });
 
+  it('writes the reader’s scale first (their Settings), both scales still in every cell and heading', async () => {
+    const { assistant } = await kitchenWithRecords();
+    await assistant.agent.patch('/api/auth/me').send({ tempUnit: 'C' }).expect(200);
+    const res = await assistant.agent.get('/api/cooling-log.csv?from=2026-01-01&to=2026-01-31').expect(200);
+    const [header, ...rows] = Papa.parse<string[]>(res.text.trim(), { skipEmptyLines: true }).data;
+    // The FDA Food Code (3-501.14) writes its cooling limits as 21 °C (70 °F) and 5 °C (41 °F) (from memory).
+    expect(header.slice(6, 10)).toEqual(['21 °C (70 °F) by', '5 °C (41 °F) by', '21 °C (70 °F) reached at', '5 °C (41 °F) reached at']);
+    expect(rows[0][5]).toBe('2026-01-04 14:10 20 °C (68 °F); 2026-01-04 18:00 4 °C (40 °F)');
+    expect(rows[1][10]).toBe('Missed: not at 5 °C (41 °F) by 19:20');
+    // In °F again: °F first.
+    await assistant.agent.patch('/api/auth/me').send({ tempUnit: 'F' }).expect(200);
+    const again = await assistant.agent.get('/api/cooling-log.csv?from=2026-01-01&to=2026-01-31').expect(200);
+    expect(again.text).toContain('70 °F (21 °C) by');
+  });
+
   it('judges a record of the last days on its readings alone while the kitchen has no time zone, and at the kitchen’s time once it has', async () => {
     const { coach, assistant } = await twoTrayWeek(app);
     const tray = await makeTray(coach);

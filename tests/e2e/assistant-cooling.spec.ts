@@ -81,7 +81,7 @@ test('on prep day the assistant writes a tray down as out and its temperatures a
   expect(download.suggestedFilename()).toMatch(/^cooling-log-\d{4}-\d{2}-\d{2}-to-\d{4}-\d{2}-\d{2}\.csv$/);
   const csv = await readFile((await download.path())!, 'utf8');
   expect(csv.split('\r\n')[0]).toBe(
-    'Prep date,Week,Tray,Out at,Cooling started again at,Readings,70 °F by,41 °F by,70 °F reached at,41 °F reached at,Result,Note,Written down by',
+    'Prep date,Week,Tray,Out at,Cooling started again at,Readings,70 °F (21 °C) by,41 °F (5 °C) by,70 °F (21 °C) reached at,41 °F (5 °C) reached at,Result,Note,Written down by',
   );
   expect(csv).toContain(`${dto.prepDate} 09:30`);
   expect(csv).toContain(`${dto.prepDate} 10:50 66 °F (19 °C)`);

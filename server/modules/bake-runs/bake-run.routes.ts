@@ -154,7 +154,7 @@ export function bakeRunRoutes(alerts: cooling.CoolingAlerts) {
     allow('coach', 'assistant'),
     validated({ query: coolingLogQuery }, async ({ query }, req, res) => {
       const log = await coolingLog(emOf(req), actorOf(req), query);
-      res.type('text/csv; charset=utf-8').attachment(`cooling-log-${query.from}-to-${query.to}.csv`).send(coolingLogCsv(log));
+      res.type('text/csv; charset=utf-8').attachment(`cooling-log-${query.from}-to-${query.to}.csv`).send(coolingLogCsv(log, scaleOf(actorOf(req))));
     }),
   );
 

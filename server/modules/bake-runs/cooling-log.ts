@@ -9,6 +9,7 @@ import { addDays, type IsoDate } from '@shared/domain/iso-date.js';
 import { addLocalMinutes } from '@shared/domain/bake-run-time.js';
 import { bothScales, checkCooling, checkOnPaper, coolingResult, FOOD_CODE_COOLING, inTakenOrder, type CoolingCheck, type CoolingEntry } from '@shared/domain/cooling.js';
 import { DEFAULT_CLOCK, type ClockStyle } from '@shared/domain/clock.js';
+import { inReadersScale, type TempScale } from '@shared/domain/temperature.js';
 import { weekTitle } from '@shared/domain/week-board.js';
 import type { CoolingLogDto, CoolingLogQuery, CoolingLogRow } from '@shared/schemas/cooling.schema.js';
 import { clockOf, datesOf, type Actor } from '../../http/authz.js';
@@ -72,10 +73,10 @@ export const COOLING_LOG_CSV_COLUMNS = [
   'Out at',
   'Cooling started again at',
   'Readings',
-  '70 °F by',
-  '41 °F by',
-  '70 °F reached at',
-  '41 °F reached at',
+  `${bothScales(FOOD_CODE_COOLING.firstStageF)} by`,
+  `${bothScales(FOOD_CODE_COOLING.finalF)} by`,
+  `${bothScales(FOOD_CODE_COOLING.firstStageF)} reached at`,
+  `${bothScales(FOOD_CODE_COOLING.finalF)} reached at`,
   'Result',
   'Note',
   'Written down by',
@@ -86,9 +87,10 @@ const when = (local: string | null) => (local ? local.replace('T', ' ') : '');
 
 /**
  * The log as CSV (RFC 4180 via papaparse), one row per tray; times are the kitchen's ("2026-12-02 14:05"),
- * temperatures in both scales as written on the page. Cells a spreadsheet would run as a formula are escaped.
+ * temperatures in both scales as written on the page, the reader's first. Cells a spreadsheet would run as a
+ * formula are escaped.
  */
-export function coolingLogCsv(log: CoolingLogDto): string {
+export function coolingLogCsv(log: CoolingLogDto, scale: TempScale = 'F'): string {
   const data = log.rows.map((r) => [
     r.prepDate,
     r.weekName ?? '(week deleted)',
@@ -104,5 +106,7 @@ export function coolingLogCsv(log: CoolingLogDto): string {
     r.note,
     r.recordedBy,
   ]);
-  return Papa.unparse({ fields: [...COOLING_LOG_CSV_COLUMNS], data }, { escapeFormulae: true, newline: '\r\n' });
+  // Both scales everywhere, the reader's first (their Settings), as on the page.
+  const flip = (cell: string) => inReadersScale(cell, scale);
+  return Papa.unparse({ fields: COOLING_LOG_CSV_COLUMNS.map(flip), data: data.map((row) => row.map(flip)) }, { escapeFormulae: true, newline: '\r\n' });
 }
