@@ -146,16 +146,23 @@ describe('a session that ends under an open page', () => {
     expect(await screen.findByRole('dialog', { name: 'Signed out' })).toBeTruthy();
   });
 
-  it('signs in again on a shared computer as it was: not kept signed in', async () => {
+  it('on a shared computer hides the page meanwhile, and signs in again as it was: not kept signed in', async () => {
     show(<NotePage />, queryClientFor(signedIn({ staysSignedIn: false })));
     await screen.findByText('Saved note: Lid on');
+    fireEvent.change(screen.getByLabelText('Note'), { target: { value: 'Walk-in at 10:05' } });
     session = false;
     fireEvent.click(screen.getByRole('button', { name: 'Save' }));
-    await screen.findByRole('dialog', { name: 'Signed out' });
+    const dialog = await screen.findByRole('dialog', { name: 'Signed out' });
+    // The page is hidden behind it (the next person at a shared computer sees none of it), its typing kept.
+    expect(dialog.textContent).toContain('This page stays as it is, with anything you typed, hidden until you sign in again');
+    const page = screen.getByText('Signed in: Ada Coach').closest('[inert]')!;
+    expect(page.className).toContain('invisible');
     fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'right-password' } });
     fireEvent.click(screen.getByRole('button', { name: 'Sign in and carry on' }));
     await waitFor(() => expect(screen.queryByRole('dialog')).toBeNull());
     expect(logins).toEqual([{ email: 'coach@example.test', password: 'right-password', staySignedIn: false }]);
+    expect(screen.getByText('Signed in: Ada Coach').closest('.invisible')).toBeNull();
+    expect((screen.getByLabelText('Note') as HTMLInputElement).value).toBe('Walk-in at 10:05');
   });
 
   it('asks for the password before sending anything', async () => {

@@ -57,7 +57,7 @@ test('a person sees the devices signed in as them, signs one out, and a new pass
 // A demo client on a shared family computer: signed in without "Keep me signed in", their plates show as usual but
 // nothing is kept in the browser's storage for offline use (a kept sign-in on the same browser keeps their plan),
 // and the session cookie has no expiry, so the browser drops it when it closes (RFC 6265 §4.1.2.1–2,
-// from memory). Their own phone lists that computer as signed in "until its browser closes".
+// from memory). Their own phone lists that computer as signed in "until its browser closes", and signs it out.
 test('signed in without "Keep me signed in": nothing kept for offline use, a cookie that ends with the browser', async ({ browser }) => {
   const email = 'client4@trayline.test';
   const keptNames = (p: import('@playwright/test').Page) =>
@@ -103,6 +103,16 @@ test('signed in without "Keep me signed in": nothing kept for offline use, a coo
   await expect(devices.first()).not.toContainText('until its browser closes');
   await expect(devices.nth(1)).toContainText('until its browser closes');
   await phone.screenshot({ path: `${SHOTS}/signed-in-devices-shared.png`, fullPage: true });
+
+  // Signed out from the phone: at the computer's next step (its targets), the page is hidden behind the "Signed out"
+  // dialog, so the next person at it sees none of it.
+  await devices.nth(1).getByRole('button', { name: /^Sign out/ }).click();
+  await expect(devices).toHaveCount(1);
+  await computer.getByRole('link', { name: 'My targets' }).click();
+  const dialog = computer.getByRole('dialog', { name: 'Signed out' });
+  await expect(dialog).toContainText('hidden until you sign in again');
+  await expect(computer.getByRole('link', { name: 'My plates' })).toBeHidden();
+  await computer.screenshot({ path: `${SHOTS}/shared-computer-signed-out.png` });
 
   await phoneContext.close();
   await shared.close();

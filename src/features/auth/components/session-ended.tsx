@@ -62,13 +62,16 @@ export function followUnauthorized(qc: QueryClient, toSignIn: () => void) {
 
 /**
  * The app under the "Signed out" dialog: while it shows, the page behind it keeps its state but takes no input
- * (`inert`), and the keyboard is in the dialog.
+ * (`inert`), and the keyboard is in the dialog. On a device not kept signed in, the page is hidden meanwhile.
  */
 export function SessionGate({ children, signInElsewhere }: { children: ReactNode; signInElsewhere: () => void }) {
   const me = useSessionEnded();
   return (
     <>
-      <div inert={!!me}>{children}</div>
+      {/* On a device not kept signed in (a shared computer) the page is also hidden: the next person at it sees none of it. */}
+      <div inert={!!me} className={me?.staysSignedIn === false ? 'invisible' : undefined}>
+        {children}
+      </div>
       {me && <SessionEndedDialog me={me} signInElsewhere={signInElsewhere} />}
     </>
   );
@@ -118,8 +121,9 @@ function SessionEndedDialog({ me, signInElsewhere }: { me: MeDto; signInElsewher
         </h2>
         <p className="mt-2 text-ink-soft">
           Your session ended (signed out in another tab or on another device, a changed password, or two weeks without
-          use; {UNKEPT_SESSION_IDLE_HOURS} hours on a device not kept signed in). This page stays as it is, with anything you typed. Sign in again to carry on, then save again where you
-          were saving.
+          use; {UNKEPT_SESSION_IDLE_HOURS} hours on a device not kept signed in). This page stays as it is, with anything you typed
+          {me.staysSignedIn === false ? ', hidden until you sign in again (this device is not kept signed in)' : ''}. Sign in again to
+          carry on, then save again where you were saving.
         </p>
         <form
           className="mt-4 flex flex-col gap-4"
