@@ -40,7 +40,8 @@ export function describeDevice(userAgent: string | undefined): string {
 
 /**
  * Notes on a session just signed in when and from what, and whether it stays signed in: one that does not gets a
- * cookie without an expiry, so the browser forgets it when it closes, and its answers are not kept by the browser. Called by every sign-in (passport.ts `signIn`).
+ * cookie without an expiry, so the browser forgets it when it closes, and its answers are not kept by the browser.
+ * Called by every sign-in (passport.ts `signIn`).
  */
 export function noteSignIn(req: Request, staySignedIn: boolean): void {
   req.session.signedInAt = new Date().toISOString();
