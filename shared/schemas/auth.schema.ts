@@ -132,7 +132,7 @@ export interface MeDto {
   timeZone: string | null;
   /**
    * This session was kept signed in at sign-in (the default). False on a shared computer: the session ends when the
-   * browser closes, and the app keeps nothing on the device for use offline.
+   * browser closes, and the app keeps no plan or list on the device for use offline (its own files only).
    */
   staysSignedIn: boolean;
 }
