@@ -6,6 +6,7 @@
  */
 import Decimal from 'decimal.js';
 import { pieceWeightOf, toGrams, unitKind, type IngredientFacts, type UnitCode } from './units';
+import { compareNames } from './words';
 
 /** How the store sells one package: `{ label: 'dozen', size: 12, unit: 'large', price: '4.29' }`. */
 export interface PurchaseUnit {
@@ -191,9 +192,9 @@ export function groupByAisle(items: readonly ShoppingItem[], aisleOrder: readonl
     .sort(([a], [b]) => {
       const [ra, ia] = rank(a);
       const [rb, ib] = rank(b);
-      return ra - rb || ia - ib || a.localeCompare(b);
+      return ra - rb || ia - ib || compareNames(a, b);
     })
-    .map(([aisle, list]) => ({ aisle, items: [...list].sort((x, y) => x.name.localeCompare(y.name)) }));
+    .map(([aisle, list]) => ({ aisle, items: [...list].sort((x, y) => compareNames(x.name, y.name)) }));
 }
 
 /** The whole shopping list from the week's needs, the ingredients, and the pantry. */

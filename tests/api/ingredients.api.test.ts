@@ -6,6 +6,7 @@ import { coachWorkspace, ingredientInput, makeAssembly, makeIngredient, makeTray
 import { sql } from '../support/db.js';
 import { seedReferenceIngredients } from '@server/db/seeders/ingredient-seed.js';
 import { SEED_INGREDIENTS } from '@server/db/seeders/data/ingredients.data.js';
+import { compareNames } from '@shared/domain/words.js';
 
 let app: Express;
 let coachA: Member;
@@ -62,8 +63,9 @@ describe('GET /api/ingredients (search, paging, sort)', () => {
     expect(res.body.total).toBe(SEED_INGREDIENTS.length);
     expect(res.body.items).toHaveLength(10);
     expect(res.body).toMatchObject({ page: 1, pageSize: 10, netCarbRule: 'half-other-polyols' });
-    const names: string[] = res.body.items.map((i: { name: string }) => i.name.toLowerCase());
-    expect(names).toEqual([...names].sort());
+    // In name order (UTS #10 / CLDR root with numeric digits; tests/api/name-order.api.test.ts).
+    const names: string[] = res.body.items.map((i: { name: string }) => i.name);
+    expect(names).toEqual([...names].sort(compareNames));
     const item = res.body.items[0];
     expect(Object.keys(item.per100g)).toEqual(
       expect.arrayContaining(['kcal', 'netCarbsG', 'proteinG', 'fatG', 'sodiumMg', 'polyolsG']),

@@ -1,4 +1,4 @@
-import { ForeignKeyConstraintViolationException, sql, type FilterQuery } from '@mikro-orm/core';
+import { ForeignKeyConstraintViolationException, type FilterQuery } from '@mikro-orm/core';
 import { preparedRows } from '../../db/prepared.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { isAllergenCode, type AllergenCode } from '@shared/domain/allergens.js';
@@ -253,7 +253,7 @@ export async function listIngredients(em: EntityManager, actor: Actor, query: In
   const field = (desc ? q.sort.slice(1) : q.sort) as keyof IIngredient;
   const dir = desc ? 'desc' : 'asc';
   const orderBy =
-    field === 'name' ? [{ [sql.lower('name')]: dir }, { id: 'asc' }] : [{ [field]: dir }, { [sql.lower('name')]: 'asc' }, { id: 'asc' }];
+    field === 'name' ? [{ name: dir }, { id: 'asc' }] : [{ [field]: dir }, { name: 'asc' }, { id: 'asc' }];
   const [rows, total] = await em.findAndCount(Ingredient, { $and: and } as FilterQuery<IIngredient>, {
     orderBy: orderBy as never,
     limit: q.pageSize,

@@ -4,6 +4,7 @@ import Decimal from 'decimal.js';
 import { allergenConflicts, allergenLabel, type AllergenCode } from '@shared/domain/allergens.js';
 import { eatByDate, freezerQualityDate } from '@shared/domain/eat-by.js';
 import { compareIsoDates, type IsoDate } from '@shared/domain/iso-date.js';
+import { compareNames } from '@shared/domain/words.js';
 import { labelCarbohydrate, labelPanel } from '@shared/domain/label-rounding.js';
 import { toVector, type NutrientVector } from '@shared/domain/nutrition.js';
 import { cellPrepDate, computeBoard } from '@shared/domain/week-board.js';
@@ -169,7 +170,7 @@ export async function weekLabels(
     }
   }
 
-  drafts.sort((a, b) => a.sort.localeCompare(b.sort));
+  drafts.sort((a, b) => compareNames(a.sort, b.sort));
   const labels = await Promise.all(drafts.map(async ({ sort: _sort, ...d }) => ({ ...d, qr: await qrDataUrl(d.url) })));
-  return { layout: q.layout, prepDate, prepDates, labels, short: short.sort((a, b) => a.trayName.localeCompare(b.trayName)) };
+  return { layout: q.layout, prepDate, prepDates, labels, short: short.sort((a, b) => compareNames(a.trayName, b.trayName)) };
 }

@@ -2,6 +2,7 @@ import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { toBaseAmount, baseUnitOf, type PantryStock } from '@shared/domain/shopping.js';
 import { normalizeUnit, UnitConversionError, UnknownUnitError, type MeasureSystem } from '@shared/domain/units.js';
+import { compareNames } from '@shared/domain/words.js';
 import type {
   PantryCreateValues,
   PantryItemDto,
@@ -61,7 +62,7 @@ export async function listPantry(em: EntityManager, actor: Actor): Promise<Pantr
   const rows = await em.find(PantryItem, { workspace: actor.workspaceId }, { orderBy: { id: 'asc' } });
   const ings = await loadShoppingIngredients(em, actor, rows.map((r) => r.ingredient.id));
   const items = rows.map((r) => presentPantryItem(r, ings.get(r.ingredient.id), measureOf(actor)));
-  items.sort((a, b) => a.ingredientName.localeCompare(b.ingredientName));
+  items.sort((a, b) => compareNames(a.ingredientName, b.ingredientName));
   return { items };
 }
 

@@ -7,6 +7,7 @@ import { weekPlanMail } from '../mail/mail-templates.js';
 import { Outbox } from '../mail/outbox.entity.js';
 import { presentOutbox } from '../mail/outbox.service.js';
 import { compareIsoDates, dayHeading, longDate, toDateOrder } from '@shared/domain/iso-date.js';
+import { compareNames } from '@shared/domain/words.js';
 import { Client } from '../clients/client.entity.js';
 import { findClient } from '../clients/client.service.js';
 import { Workspace } from '../workspaces/workspace.entity.js';
@@ -88,7 +89,7 @@ export async function sendWeek(
       else if (!c.email?.trim()) skip('no-email');
       else recipients.push({ clientId: id, name: c.name, email: c.email.trim() });
     }
-    recipients.sort((a, b) => a.name.localeCompare(b.name) || a.clientId - b.clientId);
+    recipients.sort((a, b) => compareNames(a.name, b.name) || a.clientId - b.clientId);
 
     const ids = recipients.map((r) => r.clientId);
     const earlier = input.requestId ? null : ids.length ? await recentSameBatch(tx, actor.workspaceId, week.id, version, note, ids) : null;

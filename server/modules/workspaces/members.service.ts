@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { MemberDto, Role } from '@shared/schemas/auth.schema.js';
+import { compareNames } from '@shared/domain/words.js';
 import type { Actor } from '../../http/authz.js';
 import { Conflict, NotFound, ValidationError } from '../../http/errors.js';
 import { endSessions } from '../auth/devices.js';
@@ -38,7 +39,7 @@ export async function listMembers(em: EntityManager, actor: Actor): Promise<Memb
       joinedAt: new Date(r.created_at).toISOString(),
       you: Number(r.user_id) === actor.userId,
     }))
-    .sort((a, b) => (ROLE_ORDER[a.role] ?? 9) - (ROLE_ORDER[b.role] ?? 9) || a.name.localeCompare(b.name) || a.id - b.id);
+    .sort((a, b) => (ROLE_ORDER[a.role] ?? 9) - (ROLE_ORDER[b.role] ?? 9) || compareNames(a.name, b.name) || a.id - b.id);
 }
 
 /** The member row of this workspace, locked for the change (404 outside the workspace). */

@@ -14,6 +14,7 @@ import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { useTempScale } from '@/lib/temp-scale';
 import { bothScales } from '@shared/domain/temperature';
+import { compareNames } from '@shared/domain/words';
 import { FRIDGE_MAX_F } from '@shared/domain/eat-by';
 
 /** The labels to print: one client's plates, or every plate (and the spare portions when asked). */
@@ -22,7 +23,7 @@ const labelsOf = (labels: ContainerLabelDto[], withSpares: boolean, clientId: nu
 
 /** The clients with a plate label, by name (the choice of whose labels to print). */
 const clientsOf = (labels: ContainerLabelDto[]) =>
-  [...new Map(labels.filter((l) => l.clientId !== null).map((l) => [l.clientId!, l.title])).entries()].sort((a, b) => a[1].localeCompare(b[1]));
+  [...new Map(labels.filter((l) => l.clientId !== null).map((l) => [l.clientId!, l.title])).entries()].sort((a, b) => compareNames(a[1], b[1]));
 
 const COLUMN_WORDS: Record<number, readonly string[]> = { 2: ['left', 'right'], 3: ['left', 'middle', 'right'] };
 
