@@ -16,10 +16,11 @@ import type { BoardCellDto, BoardDayDto, BoardDto, CellInput } from '@shared/sch
 import type { WordedWarning } from '@shared/domain/week-check';
 import { cellEatBy } from '@shared/domain/week-board';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
+import { CheckField, SelectField, TextField } from '@/components/ui/field';
 import { counted, filterByText } from '@/lib/words';
 import { dayLabel, localToday } from '@/lib/dates';
 import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
+import { PinnedDays } from './pinned-days';
 
 /** A phone-sized screen (Tailwind's sm breakpoint, 640 px): the board starts on one day there. */
 function narrowScreen(): boolean {
@@ -223,6 +224,14 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const plates = useMemo(() => new Map(board.plates.map((p) => [p.id, p])), [board.plates]);
   const cells = useMemo(() => new Map(board.cells.map((c) => [cellId(c.clientId, c.date, c.slot), c])), [board.cells]);
   const checks = useMemo(() => new Map(board.checks.map((c) => [`${c.clientId}|${c.date}`, c])), [board.checks]);
+  // A long board (60 clients) is read a client at a time, or only where something needs fixing.
+  const [findClient, setFindClient] = useState('');
+  const [onlyFlagged, setOnlyFlagged] = useState(false);
+  const flagged = useMemo(() => new Set(board.checks.filter((c) => c.warnings.length > 0).map((c) => c.clientId)), [board.checks]);
+  const rows = useMemo(() => {
+    const some = onlyFlagged ? board.clients.filter((c) => flagged.has(c.id)) : board.clients;
+    return filterByText(some, findClient, (c) => [c.name]);
+  }, [board.clients, flagged, onlyFlagged, findClient]);
 
   const place = (clientId: number, date: string, slot: string, assemblyId: number | null, extra: Partial<CellInput> = {}) => {
     const old = cells.get(cellId(clientId, date, slot));
@@ -315,6 +324,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   // The selected cell's details open in a row right under its client (on a long board the end of the grid is far
   // away), as wide as the visible part of the grid and pinned to its left edge while the grid scrolls sideways.
   const gridBox = useRef<HTMLDivElement>(null);
+  const gridTable = useRef<HTMLTableElement>(null);
   const [panelWidth, setPanelWidth] = useState<number | null>(null);
   useEffect(() => {
     const el = gridBox.current;
@@ -463,6 +473,21 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
               </option>
             ))}
           </SelectField>
+          {(board.clients.length > FILTER_FROM || flagged.size > 0) && (
+            <div className="flex flex-wrap items-end gap-x-6 gap-y-1">
+              {board.clients.length > FILTER_FROM && (
+                <ListFilter label="Find a client" placeholder="name" value={findClient} onChange={setFindClient} shown={rows.length} total={board.clients.length} />
+              )}
+              {flagged.size > 0 && (
+                <CheckField
+                  label={`Only clients with a warning (${flagged.size} of ${board.clients.length})`}
+                  checked={onlyFlagged}
+                  onChange={(e) => setOnlyFlagged(e.target.checked)}
+                />
+              )}
+            </div>
+          )}
+          <PinnedDays gridBox={gridBox} table={gridTable} days={days} />
           {/* The grid scrolls sideways inside its card; the client column stays put. Focusable so arrow keys scroll it. */}
           <div
             ref={gridBox}
@@ -471,7 +496,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
             tabIndex={0}
             className="min-w-0 flex-1 overflow-x-auto rounded-lg border border-line bg-paper-card pb-1"
           >
-            <table className={`w-full border-separate border-spacing-1 ${days.length > 1 ? 'min-w-[60rem]' : ''}`}>
+            <table ref={gridTable} className={`w-full border-separate border-spacing-1 ${days.length > 1 ? 'min-w-[60rem]' : ''}`}>
               <caption className="caption-top px-1 pt-1 text-left text-xs text-ink-faint">
                 Targets under each name and each day's totals count the board's meals ({board.slots.join(', ')}): the client's share of the day for them.
               </caption>
@@ -486,7 +511,24 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
                 </tr>
               </thead>
               <tbody>
-                {board.clients.map((client) => (
+                {rows.length === 0 && (
+                  <tr>
+                    <td colSpan={days.length + 1} className="p-3 text-ink-soft">
+                      No client on this board {findClient.trim() ? `matches “${findClient.trim()}”` : 'has a warning'}.{' '}
+                      <button
+                        type="button"
+                        className="min-h-11 font-bold underline"
+                        onClick={() => {
+                          setFindClient('');
+                          setOnlyFlagged(false);
+                        }}
+                      >
+                        Show every client
+                      </button>
+                    </td>
+                  </tr>
+                )}
+                {rows.map((client) => (
                   <Fragment key={client.id}>
                     <ClientRow
                       client={client}
