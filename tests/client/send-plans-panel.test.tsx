@@ -25,14 +25,20 @@ const board = (over: Partial<BoardDto['week']> = {}) =>
 function PanelOnPage({ board: b, clashes, preselect }: { board: BoardDto; clashes?: WeekPublishedAllergensDto; preselect?: number[] }) {
   return <SendPlansPanel board={b} clients={useQuery(clientsQuery())} clashes={clashes} preselect={preselect} />;
 }
-function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Response, clashes?: WeekPublishedAllergensDto, preselect?: number[]) {
+function renderPanel(
+  b: BoardDto,
+  send: (body: Record<string, unknown>) => Response,
+  clashes?: WeekPublishedAllergensDto,
+  preselect?: number[],
+  profiles: readonly Record<string, unknown>[] = clients,
+) {
   const calls: { url: string; body: Record<string, unknown> | null }[] = [];
   vi.stubGlobal(
     'fetch',
     vi.fn(async (url: string, init?: RequestInit) => {
       const body = init?.body ? (JSON.parse(String(init.body)) as Record<string, unknown>) : null;
       calls.push({ url, body });
-      if (url === '/api/clients') return json(clients);
+      if (url === '/api/clients') return json(profiles);
       if (url === '/api/weeks/7/send') return send(body!);
       if (url.startsWith('/api/outbox')) {
         return json({ items: [], total: 1, page: 1, pageSize: 25, counts: { queued: 0, sending: 0, retrying: 0, sent: 1, failed: 0 }, batches: [] });
@@ -45,6 +51,34 @@ function renderPanel(b: BoardDto, send: (body: Record<string, unknown>) => Respo
 }
 
 describe('send plans panel', () => {
+  it('finds a client among many when choosing, and keeps those chosen while the search hides them', async () => {
+    const many = ['Ann Bell', 'Bo Chen', 'Cy Diaz', 'Di Evans', 'Ed Ford', 'Flo Gray', 'Gus Hale', 'Hal Ito', 'Ivy Jones'].map((name, i) => ({
+      id: 10 + i,
+      name,
+      email: `c${i}@example.test`,
+      householdMultiplier: '1',
+    }));
+    const b = {
+      week: { id: 7, publishedVersion: 2, changedSincePublished: false },
+      cells: many.map((c) => ({ clientId: c.id, date: '2026-01-05', slot: 'breakfast', assemblyId: 1, prepDate: null, storage: 'fridge', allergenOverrides: [] })),
+    } as unknown as BoardDto;
+    const calls = renderPanel(b, () => json({ batchId: 'b-2', queued: 2, publicationVersion: 2, skipped: [], repeated: false }, 202), undefined, undefined, many);
+    const list = await screen.findByRole('list', { name: 'Clients on this week' });
+    expect(screen.queryByLabelText('Find a client')).toBeNull(); // all of them: nothing to find
+    fireEvent.click(screen.getByRole('radio', { name: 'Only the clients I choose' }));
+    fireEvent.change(screen.getByLabelText('Find a client'), { target: { value: 'gray' } });
+    expect(within(list).getAllByRole('listitem')).toHaveLength(1);
+    expect(screen.getByText('1 of 9 shown')).toBeTruthy();
+    fireEvent.click(within(list).getByRole('checkbox', { name: /Flo Gray/ }));
+    fireEvent.change(screen.getByLabelText('Find a client'), { target: { value: 'c8@' } });
+    fireEvent.click(within(list).getByRole('checkbox', { name: /Ivy Jones/ }));
+    fireEvent.change(screen.getByLabelText('Find a client'), { target: { value: '' } });
+    expect(within(list).getAllByRole('listitem')).toHaveLength(9);
+    fireEvent.click(screen.getByRole('button', { name: 'Send to 2 clients' }));
+    await screen.findByText(/2 plans queued/);
+    expect(calls.find((c) => c.url === '/api/weeks/7/send')!.body).toMatchObject({ clientIds: [15, 18] });
+  });
+
   it('asks to publish first when the week was never published', () => {
     renderPanel(board({ publishedVersion: null }), () => json({}));
     expect(screen.getByText('Publish the week first')).toBeTruthy();

@@ -13,7 +13,8 @@ import { localToday } from '@/lib/dates';
 import { paths } from '@/config/paths';
 import { clientPlanPdfUrl } from '../api/week-mail.queries';
 import { useSendWeek } from '../api/use-send-week';
-import { counted } from '@/lib/words';
+import { counted, filterByText } from '@/lib/words';
+import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
 
 /** Live progress of one batch: polls the outbox filtered by the batch until nothing waits. */
 function BatchProgress({ result }: { result: SendWeekResultDto }) {
@@ -67,6 +68,7 @@ export function SendPlansPanel({
     if (ready && wantsView) (top.current?.closest('section') ?? top.current)?.scrollIntoView?.({ block: 'start' });
   }, [ready, wantsView]);
   const [note, setNote] = useState('');
+  const [find, setFind] = useState('');
   const [result, setResult] = useState<SendWeekResultDto | null>(null);
   const [error, setError] = useState<string | null>(null);
   const groupId = useId();
@@ -76,6 +78,8 @@ export function SendPlansPanel({
   const profiles = (clients.data ?? []).filter((c): c is ClientDto => 'email' in c);
   const listed = profiles.filter((c) => onBoard.has(c.id));
   const withEmail = listed.filter((c) => c.email);
+  // Choosing among many clients: a search over the list (what is chosen stays chosen when it is filtered out).
+  const shownClients = filterByText(listed, find, (c) => [c.name, c.email ?? '']);
   const clashing = new Map((clashes?.publishedVersion === published ? clashes.clients : []).map((c) => [c.clientId, c.plates.length]));
   const clashingWithEmail = withEmail.filter((c) => clashing.has(c.id)).map((c) => c.id);
 
@@ -162,8 +166,11 @@ export function SendPlansPanel({
             <input type="radio" name={`${groupId}-mode`} checked={mode === 'some'} onChange={() => setMode('some')} />
             Only the clients I choose
           </label>
+          {mode === 'some' && listed.length > FILTER_FROM && (
+            <ListFilter label="Find a client" placeholder="name or e-mail" value={find} onChange={setFind} shown={shownClients.length} total={listed.length} />
+          )}
           <ul className="grid gap-1 sm:grid-cols-2" aria-label="Clients on this week">
-            {listed.map((c) => (
+            {(mode === 'some' ? shownClients : listed).map((c) => (
               <li key={c.id} className="flex flex-wrap items-center justify-between gap-2 rounded-lg bg-paper px-3 py-2">
                 <label className="flex min-h-9 items-center gap-2">
                   <input
