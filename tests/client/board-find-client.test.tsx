@@ -38,9 +38,9 @@ describe('a long board, a client at a time', () => {
     expect(screen.getByText('1 of 9 shown')).toBeTruthy();
   });
 
-  it('shows only the clients with a warning, and says so when a search finds none of them', () => {
+  it('shows only the clients with something flagged, and says so when a search finds none of them', () => {
     render(<BoardGrid board={board} busy={false} onEdit={vi.fn()} />);
-    const only = screen.getByLabelText('Only clients with a warning (1 of 9)') as HTMLInputElement;
+    const only = screen.getByLabelText('Only clients with something flagged (1 of 9)') as HTMLInputElement;
     fireEvent.click(only);
     expect(rowNames()).toHaveLength(1);
     expect(rowNames()[0]).toContain('Ed Ford');
@@ -52,6 +52,16 @@ describe('a long board, a client at a time', () => {
     expect(rowNames()).toHaveLength(9);
     expect(only.checked).toBe(false);
     expect((screen.getByLabelText('Find a client') as HTMLInputElement).value).toBe('');
+  });
+
+  it('follows the page when the page holds the choice (the week’s problem list shows only those clients)', () => {
+    const onOnlyFlagged = vi.fn();
+    render(<BoardGrid board={board} busy={false} onEdit={vi.fn()} onlyFlagged onOnlyFlagged={onOnlyFlagged} />);
+    expect(rowNames()).toHaveLength(1);
+    const only = screen.getByLabelText('Only clients with something flagged (1 of 9)') as HTMLInputElement;
+    expect(only.checked).toBe(true);
+    fireEvent.click(only);
+    expect(onOnlyFlagged).toHaveBeenCalledWith(false);
   });
 
   it('keeps the copy of the row of days out of sight (and of screen readers) while the table’s own row shows', () => {

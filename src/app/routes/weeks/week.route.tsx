@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
 import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { allergenConflicts } from '@shared/domain/allergens';
@@ -53,6 +53,22 @@ export function Component() {
   const [kept, setKept] = useState(0);
   const [conflictSeq, setConflictSeq] = useState(0);
   const [allergen, setAllergen] = useState<{ edit: CellEdit; message: string } | null>(null);
+  // The board shows only the clients with something flagged: its own box, or the problem list's "Show only them".
+  const [onlyFlagged, setOnlyFlagged] = useState(false);
+  const boardTop = useRef<HTMLDivElement>(null);
+  const showFlagged = () => {
+    setOnlyFlagged(true);
+    // The keyboard lands on the board's box (ticked), which brings the board into view.
+    requestAnimationFrame(() => boardTop.current?.querySelector<HTMLInputElement>('input[data-only-flagged]')?.focus());
+  };
+  const moreFlagged = (n: number) => (
+    <p>
+      …and {n} more, flagged on the board.{' '}
+      <button type="button" className="min-h-11 font-bold underline" onClick={showFlagged}>
+        Show only those clients
+      </button>
+    </p>
+  );
   const [error, setError] = useState<string | null>(null);
   const busy = putCells.isPending || putTrays.isPending || cover.isPending || copyDay.isPending || publish.isPending || update.isPending;
 
@@ -185,13 +201,13 @@ export function Component() {
       <div className="grid gap-3 sm:grid-cols-3">
         <Notice tone={blocks.length ? 'block' : 'info'} title={blocks.length ? `${counted(blocks.length, 'problem')} ${agrees(blocks.length, 'blocks', 'block')} publishing` : 'Nothing blocks publishing'}>
           {blocks.slice(0, 3).map(problemLine)}
-          {blocks.length > 3 && <p>…and {blocks.length - 3} more, flagged on the board.</p>}
+          {blocks.length > 3 && moreFlagged(blocks.length - 3)}
         </Notice>
         <Notice tone={warns.length ? 'warn' : 'info'} title={counted(warns.length, 'warning')}>
           {warns.length === 0
             ? 'No day over the net-carb cap or short of protein, no dislikes, no allergens allowed.'
             : warns.slice(0, 3).map(problemLine)}
-          {warns.length > 3 && <p>…and {warns.length - 3} more, flagged on the board.</p>}
+          {warns.length > 3 && moreFlagged(warns.length - 3)}
         </Notice>
         <Notice tone={portions.tone} title={portions.title}>
           {portions.detail}
@@ -213,9 +229,11 @@ export function Component() {
           )}
         </EmptyState>
       ) : (
-        <Card>
-          <BoardGrid board={board} busy={busy} onEdit={(edit) => sendCells(edit)} />
-        </Card>
+        <div ref={boardTop}>
+          <Card>
+            <BoardGrid board={board} busy={busy} onEdit={(edit) => sendCells(edit)} onlyFlagged={onlyFlagged} onOnlyFlagged={setOnlyFlagged} />
+          </Card>
+        </div>
       )}
 
       <Card>

@@ -206,10 +206,13 @@ interface Props {
   board: BoardDto;
   busy: boolean;
   onEdit: (edit: CellEdit) => void;
+  /** Only the clients with something flagged, when the page controls it (the week's problem list links to it). */
+  onlyFlagged?: boolean;
+  onOnlyFlagged?: (on: boolean) => void;
 }
 
 /** The week board: clients × days (× meal slots). Drag a plate onto a cell, or select a cell and pick a plate. */
-export function BoardGrid({ board, busy, onEdit }: Props) {
+export function BoardGrid({ board, busy, onEdit, onlyFlagged: flaggedProp, onOnlyFlagged }: Props) {
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor));
   const [selected, setSelected] = useState<string | null>(null);
   const [findPlate, setFindPlate] = useState('');
@@ -226,7 +229,9 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
   const checks = useMemo(() => new Map(board.checks.map((c) => [`${c.clientId}|${c.date}`, c])), [board.checks]);
   // A long board (60 clients) is read a client at a time, or only where something needs fixing.
   const [findClient, setFindClient] = useState('');
-  const [onlyFlagged, setOnlyFlagged] = useState(false);
+  const [ownFlagged, setOwnFlagged] = useState(false);
+  const onlyFlagged = flaggedProp ?? ownFlagged;
+  const setOnlyFlagged = onOnlyFlagged ?? setOwnFlagged;
   const flagged = useMemo(() => new Set(board.checks.filter((c) => c.warnings.length > 0).map((c) => c.clientId)), [board.checks]);
   const rows = useMemo(() => {
     const some = onlyFlagged ? board.clients.filter((c) => flagged.has(c.id)) : board.clients;
@@ -480,7 +485,8 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
               )}
               {flagged.size > 0 && (
                 <CheckField
-                  label={`Only clients with a warning (${flagged.size} of ${board.clients.length})`}
+                  data-only-flagged=""
+                  label={`Only clients with something flagged (${flagged.size} of ${board.clients.length})`}
                   checked={onlyFlagged}
                   onChange={(e) => setOnlyFlagged(e.target.checked)}
                 />
@@ -514,7 +520,7 @@ export function BoardGrid({ board, busy, onEdit }: Props) {
                 {rows.length === 0 && (
                   <tr>
                     <td colSpan={days.length + 1} className="p-3 text-ink-soft">
-                      No client on this board {findClient.trim() ? `matches “${findClient.trim()}”` : 'has a warning'}.{' '}
+                      No client on this board {findClient.trim() ? `matches “${findClient.trim()}”` : 'has anything flagged'}.{' '}
                       <button
                         type="button"
                         className="min-h-11 font-bold underline"
