@@ -64,6 +64,19 @@ describe('a long board, a client at a time', () => {
     expect(onOnlyFlagged).toHaveBeenCalledWith(false);
   });
 
+  it('keeps the row whose cell is open when its last warning is fixed, until the cell is closed', () => {
+    const { rerender } = render(<BoardGrid board={board} busy={false} onEdit={vi.fn()} onlyFlagged onOnlyFlagged={vi.fn()} />);
+    fireEvent.click(screen.getByRole('button', { name: /^Ed Ford, Mon, Jan 5, breakfast: empty$/ }));
+    expect(screen.getByRole('region', { name: 'Selected cell' })).toBeTruthy();
+    // The board answers again without the warning (the coach placed a plate with enough protein).
+    rerender(<BoardGrid board={{ ...board, checks: [] }} busy={false} onEdit={vi.fn()} onlyFlagged onOnlyFlagged={vi.fn()} />);
+    expect(rowNames()).toHaveLength(1);
+    expect(screen.getByRole('region', { name: 'Selected cell' })).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: /^Close/ }));
+    expect(rowNames()).toHaveLength(0);
+    expect(screen.getByText(/No client on this board has anything flagged/)).toBeTruthy();
+  });
+
   it('keeps the copy of the row of days out of sight (and of screen readers) while the table’s own row shows', () => {
     render(<BoardGrid board={board} busy={false} onEdit={vi.fn()} />);
     const pinned = screen.getByTestId('pinned-days');

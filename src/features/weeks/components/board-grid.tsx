@@ -233,10 +233,13 @@ export function BoardGrid({ board, busy, onEdit, onlyFlagged: flaggedProp, onOnl
   const onlyFlagged = flaggedProp ?? ownFlagged;
   const setOnlyFlagged = onOnlyFlagged ?? setOwnFlagged;
   const flagged = useMemo(() => new Set(board.checks.filter((c) => c.warnings.length > 0).map((c) => c.clientId)), [board.checks]);
+  // The client whose cell is open stays while it is open: fixing its last warning does not take the row (and the
+  // keyboard in its panel) away; it goes when the cell is closed.
+  const openClient = selected ? Number(selected.split('|')[1]) : null;
   const rows = useMemo(() => {
-    const some = onlyFlagged ? board.clients.filter((c) => flagged.has(c.id)) : board.clients;
+    const some = onlyFlagged ? board.clients.filter((c) => flagged.has(c.id) || c.id === openClient) : board.clients;
     return filterByText(some, findClient, (c) => [c.name]);
-  }, [board.clients, flagged, onlyFlagged, findClient]);
+  }, [board.clients, flagged, onlyFlagged, findClient, openClient]);
 
   const place = (clientId: number, date: string, slot: string, assemblyId: number | null, extra: Partial<CellInput> = {}) => {
     const old = cells.get(cellId(clientId, date, slot));
