@@ -53,7 +53,7 @@ export function Component() {
   const [kept, setKept] = useState(0);
   const [conflictSeq, setConflictSeq] = useState(0);
   const [allergen, setAllergen] = useState<{ edit: CellEdit; message: string } | null>(null);
-  // The board shows only the clients with something flagged: its own box, or the problem list's "Show only them".
+  // The board shows only the clients with something flagged: its own box, or the problem list's "Show only those clients".
   const [onlyFlagged, setOnlyFlagged] = useState(false);
   const boardTop = useRef<HTMLDivElement>(null);
   const showFlagged = () => {

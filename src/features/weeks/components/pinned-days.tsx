@@ -58,10 +58,14 @@ export function PinnedDays({
     };
     window.addEventListener('scroll', later, { passive: true });
     window.addEventListener('resize', later, { passive: true });
+    // The board grows or shrinks without a scroll too (a client found, a cell's panel opened).
+    const ro = typeof ResizeObserver === 'undefined' ? null : new ResizeObserver(later);
+    ro?.observe(box);
     check();
     return () => {
       window.removeEventListener('scroll', later);
       window.removeEventListener('resize', later);
+      ro?.disconnect();
       if (frame) cancelAnimationFrame(frame);
     };
   }, [gridBox, table]);
