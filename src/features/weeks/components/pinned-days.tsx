@@ -86,16 +86,17 @@ export function PinnedDays({
   useEffect(() => {
     const box = gridBox.current;
     if (!box) return;
+    // The table's corner is pinned at the box's edge once the scroll has taken up the table's spacing before it
+    // (read once here, not on every scroll: this runs again whenever the copy is drawn anew).
+    const spacing = copy.current ? parseFloat(getComputedStyle(copy.current).borderSpacing) || 0 : 0;
     const follow = () => {
       if (copy.current) copy.current.style.transform = `translateX(${-box.scrollLeft}px)`;
-      // The table's corner is pinned at the box's edge once the scroll has taken up the table's spacing before it.
-      const spacing = copy.current ? parseFloat(getComputedStyle(copy.current).borderSpacing) || 0 : 0;
       if (corner.current) corner.current.style.transform = `translateX(${Math.max(0, box.scrollLeft - spacing)}px)`;
     };
     box.addEventListener('scroll', follow, { passive: true });
     follow();
     return () => box.removeEventListener('scroll', follow);
-  }, [gridBox, shown]);
+  }, [gridBox, shown, widths]);
 
   return (
     <div ref={pin} className="no-print pointer-events-none sticky top-[57px] z-20 h-0 md:top-0" aria-hidden="true" data-testid="pinned-days">
