@@ -24,3 +24,23 @@ describe('the trays of a bake run', () => {
     expect(rows).toHaveLength(run.trays.length + 1);
   });
 });
+
+describe('the parts of a bake run to jump to', () => {
+  it('names each part the page shows, each link landing on that part’s heading', () => {
+    // A run planned for another day (no timers) and no cooling record: the planner's page.
+    const { unmount } = render(<BakeRunView run={run} unit="F" />);
+    const nav = screen.getByRole('navigation', { name: 'On this page' });
+    const links = within(nav).getAllByRole('link');
+    expect(links.map((a) => a.textContent)).toEqual(['Timeline', 'Trays', 'Run sheet', 'Food safety']);
+    for (const a of links) {
+      const target = document.getElementById(a.getAttribute('href')!.slice(1));
+      expect(target, a.textContent!).not.toBeNull();
+      expect(target!.textContent).toContain(a.textContent!);
+    }
+    unmount();
+    // A prep week's page: its cooling record is a part too.
+    render(<BakeRunView run={run} unit="F" coolingRecord={<h2 id="cooling-record-title">Cooling record</h2>} />);
+    const withRecord = within(screen.getByRole('navigation', { name: 'On this page' })).getAllByRole('link');
+    expect(withRecord.map((a) => a.getAttribute('href'))).toEqual(['#cooling-record-title', '#run-timeline', '#run-trays', '#run-sheet', '#run-safety']);
+  });
+});

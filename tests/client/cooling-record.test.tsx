@@ -190,6 +190,33 @@ describe('the cooling record on prep day', () => {
     expect(await screen.findByText(/any other coach of the team gets an e-mail about it\./)).toBeTruthy();
   });
 
+  it('a tray cooled in time reads short: its readings on one line, the changes folded away until asked for', async () => {
+    // Out 08:36; 66 °F at 10:05 (70 °F within 2 h) and 39 °F at 12:10 (41 °F within 6 h): FDA Food Code §3-501.14 met.
+    records = [record({ readings: [{ at: '2026-01-04T12:10', tempF: 39 }, { at: '2026-01-04T10:05', tempF: 66 }] })];
+    vi.setSystemTime(new Date(2026, 0, 4, 12, 30));
+    const confirm = vi.fn(() => true);
+    vi.stubGlobal('confirm', confirm);
+    renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="assistant" />);
+    const card = (await screen.findByText(/^✓ /)).closest('li')!;
+    expect(within(card).getByText('Readings: 10:05 66 °F · 12:10 39 °F')).toBeTruthy();
+    // Nothing left to write down: no reading form; "Thrown away" and each reading's "Remove" wait in the fold.
+    expect(within(card).queryByRole('form', { name: /Add a reading/ })).toBeNull();
+    const fold = within(card).getByText('Change this record').closest('details')!;
+    expect(fold.open).toBe(false);
+    for (const name of ['Thrown away', 'Remove the 10:05 reading', 'Remove the 12:10 reading', 'Save note']) {
+      expect(within(card).getAllByRole('button', { name })).toEqual([within(fold).getByRole('button', { name })]);
+    }
+    // A reading written down by mistake is still removed from there.
+    fireEvent.click(within(fold).getByRole('button', { name: 'Remove the 12:10 reading' }));
+    expect(confirm).toHaveBeenCalledWith('Remove the 12:10 reading of 39 °F?');
+    await waitFor(() => expect(puts()).toHaveLength(1));
+    expect(puts()[0][1]).toMatchObject({ readings: [{ at: '2026-01-04T10:05', tempF: 66 }], version: 1 });
+    // Not cooled any more (41 °F still to reach): the card opens out again with its reading form.
+    expect(await within(card).findByRole('button', { name: 'Add reading' })).toBeTruthy();
+    expect(within(card).queryByText(/^Readings: /)).toBeNull();
+    expect(within(card).getByText('Note, or written down by mistake?')).toBeTruthy();
+  });
+
   it('says whether a missed deadline is e-mailed: by the kitchen’s clock once it has a time zone; else the coach gets the way to Settings', async () => {
     const { unmount } = renderInApp(<CoolingRecord weekId={7} run={run} unit="F" role="coach" />);
     const off = await screen.findByText(/^Missed deadlines show on this page only/);

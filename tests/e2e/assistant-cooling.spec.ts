@@ -51,6 +51,17 @@ test('on prep day the assistant writes a tray down as out and its temperatures a
   await expectNoSeriousA11yViolations(page, 'bake run, cooling record');
   await card.screenshot({ path: `${SHOTS}/assistant-cooling.png` });
 
+  // A prep day's page is long on a phone: its parts are a tap away, each landing below the phone's top bar.
+  const parts = page.getByRole('navigation', { name: 'On this page' });
+  await expect(parts.getByRole('link')).toHaveText(['Now and next', 'Cooling record', 'Timeline', 'Trays', 'Run sheet', 'Food safety']);
+  const bar = (await page.locator('header').first().boundingBox())!;
+  for (const [link, heading] of [['Run sheet', 'Run sheet'], ['Now and next', 'Now and next']]) {
+    await parts.getByRole('link', { name: link }).click();
+    const h = page.getByRole('heading', { name: heading, exact: true });
+    await expect(h).toBeInViewport();
+    expect((await h.boundingBox())!.y).toBeGreaterThanOrEqual(bar.y + bar.height);
+  }
+
   // Everyone reads it: the API has the record, in °F, written by the assistant.
   const after = (await (await page.request.get(`/api/weeks/${weekId}/bake-run/cooling?prepDate=${dto.prepDate}`)).json()) as {
     records: { runTrayId: string; outAt: string; readings: { at: string; tempF: number }[]; recordedBy: string }[];

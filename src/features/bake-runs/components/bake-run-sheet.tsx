@@ -57,9 +57,12 @@ export function BakeRunSheet({ run, unit, nowMinute }: { run: BakeRunResult; uni
         const cold = e.kind === 'cool-to-70-by' || e.kind === 'fridge-41-by';
         return (
           <li key={i} className={`flex break-inside-avoid items-start gap-3 px-3 py-3 text-lg sm:text-base ${done ? 'text-ink-faint' : ''} ${cold ? 'bg-frost-50' : ''}`}>
-            <span className="num w-20 shrink-0 whitespace-nowrap font-bold">{timeLabel(e.at)}</span>
-            <span aria-hidden className="w-16 shrink-0 pt-0.5 text-xs font-bold tracking-wide text-ink-soft">
-              {TAG[e.kind] ?? ''}
+            {/* On a phone the kind of step sits under its time, leaving the step's words the width of the screen. */}
+            <span className="flex w-20 shrink-0 flex-col sm:w-auto sm:flex-row sm:gap-3">
+              <span className="num whitespace-nowrap font-bold sm:w-20">{timeLabel(e.at)}</span>
+              <span aria-hidden className="text-xs font-bold tracking-wide text-ink-soft sm:w-16 sm:pt-0.5">
+                {TAG[e.kind] ?? ''}
+              </span>
             </span>
             <span className="flex-1">
               {describeEvent(e, trayName, unit)}

@@ -459,7 +459,9 @@ export function BakeRunTimers({
   return (
     <section aria-label="Timers" className="no-print flex flex-col gap-2 rounded-tray border-2 border-oven-4 bg-paper-card p-4" aria-live="polite">
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <h2 className="text-xl">Now and next</h2>
+        <h2 id="now-and-next" className="text-xl">
+          Now and next
+        </h2>
         <label className="flex min-h-11 items-center gap-2 text-base">
           <input type="checkbox" className="h-5 w-5" checked={sound} onChange={(e) => setSound(e.target.checked)} /> Sound at checks and outs
         </label>

@@ -47,8 +47,33 @@ function Legend({ unit }: { unit: TempUnit }) {
   );
 }
 
+/** The page's parts, to jump to: a prep day's run is long, most of all on a phone. */
+function OnThisPage({ timers, cooling }: { timers: boolean; cooling: boolean }) {
+  const parts: [string, string][] = [
+    ...(timers ? ([['now-and-next', 'Now and next']] as [string, string][]) : []),
+    ...(cooling ? ([['cooling-record-title', 'Cooling record']] as [string, string][]) : []),
+    ['run-timeline', 'Timeline'],
+    ['run-trays', 'Trays'],
+    ['run-sheet', 'Run sheet'],
+    ['run-safety', 'Food safety'],
+  ];
+  return (
+    <nav aria-label="On this page" className="no-print">
+      <ul className="flex flex-wrap gap-2">
+        {parts.map(([id, words]) => (
+          <li key={id}>
+            <a href={`#${id}`} className="inline-flex min-h-11 items-center rounded-lg border border-line bg-paper-card px-3 font-bold text-ink hover:bg-paper-deep">
+              {words}
+            </a>
+          </li>
+        ))}
+      </ul>
+    </nav>
+  );
+}
+
 /**
- * A planned bake run: summary, timers on prep day, the cooling record (a saved run), the timeline, the trays and the
+ * A planned bake run: summary, the parts to jump to, timers on prep day, the cooling record (a saved run), the timeline, the trays and the
  * run sheet, the cautions.
  */
 export function BakeRunView({
@@ -84,18 +109,23 @@ export function BakeRunView({
           </div>
         ))}
       </dl>
+      <OnThisPage timers={nowMinute !== null} cooling={coolingRecord !== undefined} />
       {nowMinute !== null && <BakeRunTimers run={run} unit={unit} nowMinute={nowMinute} move={move} kitchen={kitchen} cooling={cooling} />}
       {coolingRecord}
       {/* Not on paper: a long day is wider than the page and would print cut off; the trays and the run sheet carry it all. */}
       <section className="flex flex-col gap-2 print:hidden">
         <div className="flex flex-wrap items-center justify-between gap-2">
-          <h2 className="text-xl">Timeline</h2>
+          <h2 id="run-timeline" className="text-xl">
+            Timeline
+          </h2>
           <Legend unit={unit} />
         </div>
         <BakeRunTimeline run={run} unit={unit} nowMinute={nowMinute} />
       </section>
       <section className="flex flex-col gap-2">
-        <h2 className="text-xl">Trays</h2>
+        <h2 id="run-trays" className="text-xl">
+          Trays
+        </h2>
         {/* On a phone each tray is a card (seven columns do not fit a hand-held screen); wider screens get the table. */}
         <ul className="flex flex-col gap-2 sm:hidden" aria-label="Trays of the run">
           {run.trays.map((t) => (
@@ -155,16 +185,20 @@ export function BakeRunView({
         </div>
       </section>
       <section className="flex flex-col gap-2">
-        <h2 className="text-xl">Run sheet</h2>
+        <h2 id="run-sheet" className="text-xl">
+          Run sheet
+        </h2>
         <BakeRunSheet run={run} unit={unit} nowMinute={nowMinute} />
       </section>
-      <Notice tone="warn" title="Food safety">
-        <ul className="list-disc pl-4">
-          {run.cautions.map((c) => (
-            <li key={c}>{inReadersScale(c, unit)}</li>
-          ))}
-        </ul>
-      </Notice>
+      <div id="run-safety">
+        <Notice tone="warn" title="Food safety">
+          <ul className="list-disc pl-4">
+            {run.cautions.map((c) => (
+              <li key={c}>{inReadersScale(c, unit)}</li>
+            ))}
+          </ul>
+        </Notice>
+      </div>
     </div>
   );
 }

@@ -123,6 +123,38 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
   const readingError = Object.entries(fieldErrors).find(([k]) => k.startsWith('readings.'))?.[1]?.[0];
   const write = (change: Partial<CoolingRecordInput>, done?: () => void) => save({ ...asInput(record), ...change }, done);
   const readings = inTakenOrder(record.readings);
+  // Cooled in time: nothing more to write down, so the card stays short (the changes are folded away).
+  const settled = check.state === 'cooled';
+  const readingList = readings.length > 0 && (
+    <ol className="num flex flex-col gap-1 text-base" aria-label={`Readings of ${record.trayName}`}>
+      {readings.map((r, i) => (
+        <li key={`${r.at}-${i}`} className="flex min-h-9 items-center gap-3">
+          <span className="w-32">{clockFrom(r.at, record.outAt, currentClockStyle())}</span>
+          <span className="font-bold">{formatTemp(r.tempF, unit === 'C' ? 'C' : 'F')}</span>
+          {unit === 'C' && <span className="text-sm text-ink-soft">({formatTemp(r.tempF, 'F')})</span>}
+          <Button
+            size="sm"
+            variant="ghost"
+            className="no-print"
+            aria-label={`Remove the ${timeLabel(r.at)} reading`}
+            disabled={busy}
+            onClick={() => {
+              if (window.confirm(`Remove the ${timeLabel(r.at)} reading of ${formatTemp(r.tempF, unit)}?`)) write({ readings: record.readings.filter((x) => x !== r) });
+            }}
+          >
+            Remove
+          </Button>
+        </li>
+      ))}
+    </ol>
+  );
+  const thrownAway = (
+    <div className="no-print flex flex-wrap gap-2">
+      <Button type="button" variant={check.tone === 'block' ? 'danger' : 'ghost'} disabled={busy} onClick={() => write({ discarded: !record.discarded })}>
+        {record.discarded ? 'Not thrown away after all' : 'Thrown away'}
+      </Button>
+    </div>
+  );
   return (
     <div className="flex flex-col gap-2">
       <p className="text-base">
@@ -136,31 +168,15 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
         <span className="text-sm text-ink-soft"> · written down by {record.recordedBy}</span>
       </p>
       <p className={`text-base ${TONE_CLASS[check.tone]}`} role={check.tone === 'block' ? 'alert' : undefined}>
-        {check.tone === 'block' ? '⚠ ' : check.state === 'cooled' ? '✓ ' : ''}
+        {check.tone === 'block' ? '⚠ ' : settled ? '✓ ' : ''}
         {inReadersScale(check.said, unit)}
       </p>
-      {readings.length > 0 && (
-        <ol className="num flex flex-col gap-1 text-base" aria-label={`Readings of ${record.trayName}`}>
-          {readings.map((r, i) => (
-            <li key={`${r.at}-${i}`} className="flex min-h-9 items-center gap-3">
-              <span className="w-32">{clockFrom(r.at, record.outAt, currentClockStyle())}</span>
-              <span className="font-bold">{formatTemp(r.tempF, unit === 'C' ? 'C' : 'F')}</span>
-              {unit === 'C' && <span className="text-sm text-ink-soft">({formatTemp(r.tempF, 'F')})</span>}
-              <Button
-                size="sm"
-                variant="ghost"
-                className="no-print"
-                aria-label={`Remove the ${timeLabel(r.at)} reading`}
-                disabled={busy}
-                onClick={() => {
-                  if (window.confirm(`Remove the ${timeLabel(r.at)} reading of ${formatTemp(r.tempF, unit)}?`)) write({ readings: record.readings.filter((x) => x !== r) });
-                }}
-              >
-                Remove
-              </Button>
-            </li>
-          ))}
-        </ol>
+      {!settled && readingList}
+      {settled && readings.length > 0 && (
+        // A tray cooled in time is done: its readings on one line (on paper too), the changes folded away.
+        <p className="num text-base">
+          Readings: {readings.map((r) => `${clockFrom(r.at, record.outAt, currentClockStyle())} ${formatTemp(r.tempF, unit)}`).join(' · ')}
+        </p>
       )}
       {record.discarded && (
         <p className="text-sm text-ink-soft">
@@ -200,11 +216,7 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
           </Button>
         </form>
       )}
-      <div className="no-print flex flex-wrap gap-2">
-        <Button type="button" variant={check.tone === 'block' ? 'danger' : 'ghost'} disabled={busy} onClick={() => write({ discarded: !record.discarded })}>
-          {record.discarded ? 'Not thrown away after all' : 'Thrown away'}
-        </Button>
-      </div>
+      {!settled && thrownAway}
       {check.state === 'missed-70' && !record.restartedAt && (
         <form
           className="no-print flex flex-wrap items-end gap-2"
@@ -228,7 +240,13 @@ function Written({ record, check, unit, write: save, error, busy, onClear, clear
         </form>
       )}
       <details className="no-print">
-        <summary className="min-h-11 cursor-pointer py-2">Note, or written down by mistake?</summary>
+        <summary className="min-h-11 cursor-pointer py-2">{settled ? 'Change this record' : 'Note, or written down by mistake?'}</summary>
+        {settled && (
+          <div className="mt-1 flex flex-col gap-2">
+            {readingList}
+            {thrownAway}
+          </div>
+        )}
         <form
           className="mt-1 flex flex-wrap items-end gap-2"
           aria-label={`Note for ${record.trayName}`}
