@@ -454,6 +454,34 @@ export function checkWeek(days: readonly DayCheckInput[]): { days: DayCheck[]; w
   return { days: checked, warnings: flatWarnings(checked) };
 }
 
+/** Problems of one kind (each allergen apart, allowed by the coach apart from still to solve): how many, and whose. */
+export interface WarningGroup {
+  kind: WarningKind;
+  /** The allergen of an allergen group (the other kinds: null). */
+  allergen: AllergenCode | null;
+  /** An allergen allowed by the coach with a reason (the other kinds: false). */
+  allowed: boolean;
+  count: number;
+  /** The clients concerned, each once, in the order first met. */
+  clientIds: string[];
+}
+
+/** A list of problems by kind, the most frequent first (a tie in the order first met): the long list at a glance. */
+export function warningGroups(warnings: readonly WeekWarning[]): WarningGroup[] {
+  const groups = new Map<string, WarningGroup>();
+  for (const w of warnings) {
+    const allergen = w.kind === 'allergen' ? w.allergen : null;
+    const allowed = w.kind === 'allergen' && w.overridden;
+    const key = `${w.kind}|${allergen}|${allowed}`;
+    const g = groups.get(key) ?? { kind: w.kind, allergen, allowed, count: 0, clientIds: [] };
+    groups.set(key, g);
+    g.count++;
+    if (!g.clientIds.includes(w.clientId)) g.clientIds.push(w.clientId);
+  }
+  // Array.prototype.sort is stable (ECMA-262 since 2019): equal counts keep the order first met.
+  return [...groups.values()].sort((a, b) => b.count - a.count);
+}
+
 /** The warnings of checked days as one list, blocks first (the board's problem list; the week board page builds it). */
 export function flatWarnings<W extends WeekWarning>(days: readonly { warnings: readonly W[] }[]): W[] {
   const warnings = days.flatMap((d) => d.warnings);

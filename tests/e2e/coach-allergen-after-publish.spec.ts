@@ -55,8 +55,16 @@ test("an allergen put on a client's list after publishing: the coach is shown th
   await expect(notice.getByRole('link', { name: 'Dana Whitlock' })).toHaveAttribute('href', /\/clients\/\d+$/);
   await expect(notice.getByRole('listitem').first()).toHaveText(/^\w{3}, \w{3} \d+, (breakfast|lunch): .+ \(.*\bEgg\b.*\)$/);
   await expect(notice).toContainText('Change them on the board, or allow the allergen there with a reason, then publish a new version.');
-  // The draft board blocks publishing on the same allergen, naming her.
-  await expect(page.getByRole('alert').filter({ hasText: /problems? blocks? publishing/ })).toContainText(/Dana Whitlock, .+: Egg is on the client's allergen list\./);
+  // The draft board blocks publishing on the same allergen, naming her (more than three problems: by kind, with the allergen).
+  await expect(page.getByRole('alert').filter({ hasText: /problems? blocks? publishing/ })).toContainText(/\d+ meals holding egg, on the client’s allergen list: Dana Whitlock/);
+
+  // Each is flagged on its day: the list leads to the board's clients with something flagged, her among them.
+  await page.getByRole('alert').filter({ hasText: /problems? blocks? publishing/ }).getByRole('button', { name: 'Show only those clients' }).click();
+  const flagged = page.getByRole('checkbox', { name: /^Only clients with something flagged/ });
+  await expect(flagged).toBeChecked();
+  await expect(flagged).toBeFocused();
+  await expect(page.getByRole('region', { name: 'Week board, scrolls sideways' }).getByRole('rowheader', { name: /Dana Whitlock/ })).toBeVisible();
+  await flagged.uncheck();
 
   // "Send plans" warns, and marks her among the clients.
   const panel = page.locator('section').filter({ has: page.getByRole('heading', { level: 2, name: 'Send plans' }) });

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import Decimal from 'decimal.js';
 import {
+  warningGroups,
   DEFAULT_CHECK_RULES,
   checkDay,
   checkWeek,
@@ -253,5 +254,35 @@ describe('checkWeek', () => {
       ['b', 'allergen', 'block'],
       ['a', 'net-carbs-over', 'warn'],
     ]);
+  });
+});
+
+describe('the problem list by kind (worked by hand; no outside source: a count)', () => {
+  const base = { severity: 'warn' as const, date: '2026-01-05' as const };
+  const carbs = (clientId: string) => ({ ...base, clientId, kind: 'net-carbs-over' as const, actualG: 30, capG: 25 });
+  const allergen = (clientId: string, overridden: boolean, code: 'egg' | 'milk' = 'egg') => ({ ...base, clientId, kind: 'allergen' as const, slot: 'lunch', allergen: code, overridden });
+  const dislike = (clientId: string) => ({ ...base, clientId, kind: 'dislike' as const, slot: 'lunch', term: 'olives' });
+
+  it('counts each kind, names each client once, the most frequent kind first', () => {
+    const groups = warningGroups([dislike('7'), carbs('1'), carbs('2'), carbs('1'), allergen('3', false), allergen('4', true), allergen('3', false), allergen('3', false, 'milk')]);
+    expect(groups).toEqual([
+      { kind: 'net-carbs-over', allergen: null, allowed: false, count: 3, clientIds: ['1', '2'] },
+      { kind: 'allergen', allergen: 'egg', allowed: false, count: 2, clientIds: ['3'] },
+      // Equal counts keep the order first met (a stable sort); an allergen allowed is apart from one still to solve, each allergen apart.
+      { kind: 'dislike', allergen: null, allowed: false, count: 1, clientIds: ['7'] },
+      { kind: 'allergen', allergen: 'egg', allowed: true, count: 1, clientIds: ['4'] },
+      { kind: 'allergen', allergen: 'milk', allowed: false, count: 1, clientIds: ['3'] },
+    ]);
+  });
+
+  it('counts every problem once: the groups add up to the list', () => {
+    fc.assert(
+      fc.property(fc.array(fc.tuple(fc.constantFrom('1', '2', '3'), fc.integer({ min: 0, max: 2 }))), (picks) => {
+        const list = picks.map(([c, k]) => (k === 0 ? carbs(c) : k === 1 ? dislike(c) : allergen(c, c === '2')));
+        const groups = warningGroups(list);
+        expect(groups.reduce((n, g) => n + g.count, 0)).toBe(list.length);
+        for (const g of groups) expect(new Set(g.clientIds).size).toBe(g.clientIds.length);
+      }),
+    );
   });
 });

@@ -3,6 +3,7 @@ import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'reac
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { allergenConflicts } from '@shared/domain/allergens';
 import { flatWarnings } from '@shared/domain/week-check';
+import { WarningGroups } from '@/features/weeks/components/warning-groups';
 import type { BoardDto, CellInput } from '@shared/schemas/weeks.schema';
 import { expandBoard, type BoardAnswer } from '@shared/schemas/board-answer';
 import { boardQuery, weekPublishedAllergensQuery } from '@/features/weeks/api/weeks.queries';
@@ -61,14 +62,6 @@ export function Component() {
     // The keyboard lands on the board's box (ticked), which brings the board into view.
     requestAnimationFrame(() => boardTop.current?.querySelector<HTMLInputElement>('input[data-only-flagged]')?.focus());
   };
-  const moreFlagged = (n: number) => (
-    <p>
-      …and {n} more, flagged on the board.{' '}
-      <button type="button" className="min-h-11 font-bold underline" onClick={showFlagged}>
-        Show only those clients
-      </button>
-    </p>
-  );
   const [error, setError] = useState<string | null>(null);
   const busy = putCells.isPending || putTrays.isPending || cover.isPending || copyDay.isPending || publish.isPending || update.isPending;
 
@@ -124,10 +117,11 @@ export function Component() {
   };
 
   const blocks = warnings.filter((w) => w.severity === 'block');
-  /** One problem of the list: whose day, which day, what. */
+  const clientName = (id: string) => board.clients.find((c) => String(c.id) === String(id))?.name ?? 'A client';
+  /** One problem of the list (three or fewer; a longer list reads by kind): whose day, which day, what. */
   const problemLine = (w: (typeof warnings)[number], i: number) => (
     <p key={i}>
-      <span className="font-bold">{board.clients.find((c) => String(c.id) === String(w.clientId))?.name ?? 'A client'}</span>, {dayLabel(w.date)}: {w.message}
+      <span className="font-bold">{clientName(w.clientId)}</span>, {dayLabel(w.date)}: {w.message}
     </p>
   );
   const warns = warnings.filter((w) => w.severity === 'warn');
@@ -200,14 +194,14 @@ export function Component() {
 
       <div className="grid gap-3 sm:grid-cols-3">
         <Notice tone={blocks.length ? 'block' : 'info'} title={blocks.length ? `${counted(blocks.length, 'problem')} ${agrees(blocks.length, 'blocks', 'block')} publishing` : 'Nothing blocks publishing'}>
-          {blocks.slice(0, 3).map(problemLine)}
-          {blocks.length > 3 && moreFlagged(blocks.length - 3)}
+          {blocks.length > 3 ? <WarningGroups warnings={blocks} clientName={clientName} onShowFlagged={showFlagged} /> : blocks.map(problemLine)}
         </Notice>
         <Notice tone={warns.length ? 'warn' : 'info'} title={counted(warns.length, 'warning')}>
           {warns.length === 0
             ? 'No day over the net-carb cap or short of protein, no dislikes, no allergens allowed.'
-            : warns.slice(0, 3).map(problemLine)}
-          {warns.length > 3 && moreFlagged(warns.length - 3)}
+            : warns.length > 3
+              ? <WarningGroups warnings={warns} clientName={clientName} onShowFlagged={showFlagged} />
+              : warns.map(problemLine)}
         </Notice>
         <Notice tone={portions.tone} title={portions.title}>
           {portions.detail}
