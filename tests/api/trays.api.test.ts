@@ -3,6 +3,7 @@ import fs from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
+import request from 'supertest';
 import Decimal from 'decimal.js';
 import type { Express } from 'express';
 import { testApp } from '../support/test-app.js';
@@ -353,6 +354,18 @@ describe('photos', () => {
     const thumb = await coach.agent.get(`/api/trays/${tray.id}/thumbnail`).buffer(true).expect(200);
     expect(thumb.headers['content-type']).toMatch(/image\/webp/);
     expect((await sharp(thumb.body as Buffer).metadata()).width).toBe(480);
+    // Asked again each time (RFC 9111 §5.2.2.4 no-cache: a stored copy is used only once the server says so), with
+    // its ETag a 304 (RFC 9110 §13.1.2 If-None-Match): signed out, the same question is refused.
+    for (const served of [photo, thumb]) {
+      expect(served.headers['cache-control']).toBe('private, no-cache');
+      expect(served.headers.etag).toBeTruthy();
+    }
+    const which = { photo: photo.headers.etag as string, thumbnail: thumb.headers.etag as string };
+    for (const [name, etag] of Object.entries(which)) {
+      const again = await coach.agent.get(`/api/trays/${tray.id}/${name}`).set('if-none-match', etag).expect(304);
+      expect(again.body).toEqual({});
+      await request(app).get(`/api/trays/${tray.id}/${name}`).set('if-none-match', etag).expect(401);
+    }
     // Deleting the tray removes the files too.
     await coach.agent.delete(`/api/trays/${tray.id}`).expect(204);
     await expect(fs.access(path.join(filesDir, row.file_path))).rejects.toThrow();

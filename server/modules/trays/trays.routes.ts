@@ -115,7 +115,9 @@ export function trayRoutes(opts: { filesDir: string }) {
         const actor = actorOf(req);
         await trays.findTray(em, actor, params.id);
         const file = await trayPhotoFile(em, actor, params.id, which, opts.filesDir);
-        res.setHeader('cache-control', 'private, max-age=3600');
+        // Asked again each time it is shown (a 304 when unchanged): a signed-out browser on a shared computer keeps
+        // no copy it would show without asking who is signed in.
+        res.setHeader('cache-control', 'private, no-cache');
         res.setHeader('x-content-type-options', 'nosniff');
         res.type(file.contentType);
         await new Promise<void>((resolve, reject) =>
