@@ -18,6 +18,7 @@ import { Workspace } from '@server/modules/workspaces/workspace.entity.js';
 let app: Express;
 let closeOwn: () => Promise<void>;
 let filesDir: string;
+let tempDir: string;
 let coach: Member;
 let assistant: Member;
 let client: Member;
@@ -27,7 +28,9 @@ let seedDemo: (m: Member) => Promise<void>;
 
 
 beforeAll(async () => {
-  filesDir = await fs.mkdtemp(path.join(os.tmpdir(), 'trayline-trays-'));
+  tempDir = await fs.mkdtemp(path.join(os.tmpdir(), 'trayline-trays-'));
+  // Under a folder whose name starts with a dot, as the app's own default (FILES_DIR=.data/files).
+  filesDir = path.join(tempDir, '.data', 'files');
   const own = await testApp({ FILES_DIR: filesDir });
   app = own.app;
   seedDemo = async (m: Member) => {
@@ -52,7 +55,7 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await closeOwn();
-  await fs.rm(filesDir, { recursive: true, force: true });
+  await fs.rm(tempDir, { recursive: true, force: true });
 });
 
 const slugId = async (slug: string) =>
@@ -366,6 +369,10 @@ describe('photos', () => {
       expect(again.body).toEqual({});
       await request(app).get(`/api/trays/${tray.id}/${name}`).set('if-none-match', etag).expect(401);
     }
+    // A file gone from the disk (a restore without the files folder) is a 404 naming the photo, not a server error.
+    await fs.rm(path.join(filesDir, row.thumb_path));
+    const gone = await coach.agent.get(`/api/trays/${tray.id}/thumbnail`).expect(404);
+    expect(gone.body).toMatchObject({ status: 404, detail: 'Photo not found' });
     // Deleting the tray removes the files too.
     await coach.agent.delete(`/api/trays/${tray.id}`).expect(204);
     await expect(fs.access(path.join(filesDir, row.file_path))).rejects.toThrow();

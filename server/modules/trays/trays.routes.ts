@@ -121,9 +121,12 @@ export function trayRoutes(opts: { filesDir: string }) {
         res.setHeader('x-content-type-options', 'nosniff');
         res.type(file.contentType);
         await new Promise<void>((resolve, reject) =>
-          res.sendFile(file.path, { etag: false, headers: { etag: file.etag } }, (err) => {
+          // `dotfiles: 'allow'`: the path is ours, resolved inside FILES_DIR, whose default (.data/files) is a
+          // dot-folder that `send` would otherwise answer as not found.
+          res.sendFile(file.path, { etag: false, dotfiles: 'allow', headers: { etag: file.etag } }, (err) => {
             if (!err) return resolve();
-            reject((err as NodeJS.ErrnoException).code === 'ENOENT' ? new NotFound('Photo') : err);
+            const missing = (err as NodeJS.ErrnoException).code === 'ENOENT' || (err as { status?: number }).status === 404;
+            reject(missing ? new NotFound('Photo') : err);
           }),
         );
       }),
