@@ -6,8 +6,8 @@ import sharp from 'sharp';
 import request from 'supertest';
 import Decimal from 'decimal.js';
 import type { Express } from 'express';
-import { testApp } from '../support/test-app.js';
-import { coachWorkspace, makeIngredient, makeTray, member, trayInput, type Member } from '../support/factories.js';
+import { agentFor, testApp } from '../support/test-app.js';
+import { coachWorkspace, makeIngredient, makeTray, member, PASSWORD, trayInput, type Member } from '../support/factories.js';
 import { sql } from '../support/db.js';
 import { seedReferenceIngredients } from '@server/db/seeders/ingredient-seed.js';
 import { SEED_INGREDIENTS } from '@server/db/seeders/data/ingredients.data.js';
@@ -363,6 +363,10 @@ describe('photos', () => {
       expect(served.headers['cache-control']).toBe('private, no-cache');
       expect(served.headers.etag).toBeTruthy();
     }
+    // Signed in on a shared computer (not kept signed in): no copy kept at all (RFC 9111 §5.2.2.5 no-store).
+    const shared = agentFor(app);
+    await shared.post('/api/auth/login').send({ email: coach.email, password: PASSWORD, staySignedIn: false }).expect(200);
+    expect((await shared.get(`/api/trays/${tray.id}/thumbnail`).buffer(true).expect(200)).headers['cache-control']).toBe('no-store');
     const which = { photo: photo.headers.etag as string, thumbnail: thumb.headers.etag as string };
     for (const [name, etag] of Object.entries(which)) {
       const again = await coach.agent.get(`/api/trays/${tray.id}/${name}`).set('if-none-match', etag).expect(304);

@@ -115,9 +115,8 @@ export function trayRoutes(opts: { filesDir: string }) {
         const actor = actorOf(req);
         await trays.findTray(em, actor, params.id);
         const file = await trayPhotoFile(em, actor, params.id, which, opts.filesDir);
-        // Asked again each time it is shown (a 304 when unchanged): a signed-out browser on a shared computer keeps
-        // no copy it would show without asking who is signed in.
-        res.setHeader('cache-control', 'private, no-cache');
+        // Cache-Control as every API answer (server/app.ts): asked again each time it shows, a 304 when unchanged;
+        // no copy at all kept for a session not kept signed in (a shared computer).
         res.setHeader('x-content-type-options', 'nosniff');
         res.type(file.contentType);
         await new Promise<void>((resolve, reject) =>
