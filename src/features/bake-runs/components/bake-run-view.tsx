@@ -49,14 +49,10 @@ function Legend({ unit }: { unit: TempUnit }) {
 
 /** The page's parts, to jump to: a prep day's run is long, most of all on a phone. */
 function OnThisPage({ timers, cooling }: { timers: boolean; cooling: boolean }) {
-  const parts: [string, string][] = [
-    ...(timers ? ([['now-and-next', 'Now and next']] as [string, string][]) : []),
-    ...(cooling ? ([['cooling-record-title', 'Cooling record']] as [string, string][]) : []),
-    ['run-timeline', 'Timeline'],
-    ['run-trays', 'Trays'],
-    ['run-sheet', 'Run sheet'],
-    ['run-safety', 'Food safety'],
-  ];
+  const parts: [id: string, words: string][] = [];
+  if (timers) parts.push(['now-and-next', 'Now and next']);
+  if (cooling) parts.push(['cooling-record-title', 'Cooling record']);
+  parts.push(['run-timeline', 'Timeline'], ['run-trays', 'Trays'], ['run-sheet', 'Run sheet'], ['run-safety', 'Food safety']);
   return (
     <nav aria-label="On this page" className="no-print">
       <ul className="flex flex-wrap gap-2">

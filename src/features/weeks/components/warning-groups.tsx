@@ -3,13 +3,11 @@ import { andList, compareNames } from '@shared/domain/words';
 import { allergenLabel } from '@shared/domain/allergens';
 import { counted } from '@/lib/words';
 
-/** What a group of problems is, with its count: days for a day's totals, meals for a planned plate. */
-const WHAT: Record<WarningKind, (n: number) => string> = {
+/** What a group of problems is, with its count: days for a day's totals, meals for a planned plate (an allergen: groupWords). */
+const WHAT: Record<Exclude<WarningKind, 'allergen'>, (n: number) => string> = {
   'net-carbs-over': (n) => `${counted(n, 'day')} over the net-carb cap`,
   'protein-short': (n) => `${counted(n, 'day')} short of protein`,
   'energy-over': (n) => `${counted(n, 'day')} over the energy limit`,
-  // warningGroups names each allergen apart: groupWords says which.
-  allergen: (n) => `${counted(n, 'meal')} with an allergen on the client’s list`,
   dislike: (n) => `${counted(n, 'meal')} with a dislike`,
   'past-eat-by': (n) => `${counted(n, 'meal')} past the eat-by date`,
   'before-prep': (n) => `${counted(n, 'meal')} before the tray is made`,
@@ -20,7 +18,11 @@ const WHAT: Record<WarningKind, (n: number) => string> = {
 export function groupWords(g: WarningGroup, clientName: (id: string) => string): string {
   const names = g.clientIds.map(clientName).sort(compareNames);
   const whose = names.length <= 3 ? andList(names) : andList([...names.slice(0, 2), counted(names.length - 2, 'other client')]);
-  const what = g.allergen ? `${counted(g.count, 'meal')} holding ${allergenLabel(g.allergen).toLowerCase()}, on the client’s allergen list` : WHAT[g.kind](g.count);
+  // warningGroups puts each allergen in a group of its own.
+  const what =
+    g.kind === 'allergen'
+      ? `${counted(g.count, 'meal')} holding ${g.allergen ? allergenLabel(g.allergen).toLowerCase() : 'an allergen'}, on the client’s allergen list`
+      : WHAT[g.kind](g.count);
   return `${what}${g.allowed ? ', allowed by the coach' : ''}: ${whose}`;
 }
 
