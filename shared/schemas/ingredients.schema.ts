@@ -468,12 +468,27 @@ export interface ImportProblem {
   line: number;
   column: string;
   reason: string;
+  /** `name_taken`: the name is one of the workspace's own ingredients (an import that updates would take the row). */
+  code?: 'name_taken';
 }
 
 export interface ImportResultDto {
+  /** New ingredients, and their ids. */
   created: number;
   ids: number[];
+  /** Own ingredients whose values the file replaced (an import that updates), and their ids. */
+  updated: number;
+  updatedIds: number[];
+  /** Their names as the file gives them, in the file's order. */
+  updatedNames: string[];
+  /** Rows naming an own ingredient with the values it already has (left as they were). */
+  unchanged: number;
 }
+
+/** What an import does with a row named like one of the workspace's own ingredients. */
+export const importOptionsSchema = z.object({
+  existing: z.enum(['refuse', 'update'], { message: 'Choose "refuse" (a name already in your library is a problem) or "update"' }).default('refuse'),
+});
 
 /** The CSV columns of an import, in order (a template can be downloaded from the library page). */
 export const IMPORT_COLUMNS = [

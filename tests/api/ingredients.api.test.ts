@@ -333,6 +333,105 @@ line name",dairy,100,5,1,10,3,0,100,,,,,,,,nowhere,label`,
   });
 });
 
+describe('POST /api/ingredients/import with existing=update (change in a spreadsheet, import again)', () => {
+  const header = 'name,category,kcal,fat_g,sat_fat_g,protein_g,carbs_g,fiber_g,sodium_mg,density_g_per_ml,piece_weights,allergens,purchase_amount,purchase_unit,purchase_label,price_cents,aisle,source';
+  const upload = (who: Member, csv: string, existing?: string) => {
+    const req = who.agent.post('/api/ingredients/import');
+    if (existing !== undefined) req.field('existing', existing);
+    return req.attach('file', Buffer.from(csv), { filename: 'mine.csv', contentType: 'text/csv' });
+  };
+  const row = async (workspaceId: number, name: string) =>
+    (await sql<{ id: number; version: number; price_cents: number | null; kcal: string; density_source: string | null; piece_weights: Record<string, number> }>(
+      'select id, version, price_cents, kcal, density_source, piece_weights from ingredient where workspace_id = $1 and name = $2',
+      [workspaceId, name],
+    ))[0];
+
+  it('gives a named own ingredient the file’s values (its version moves on, a form open on it meets a 409), creates the new ones, and counts the rest unchanged', async () => {
+    const coach = await coachWorkspace(app);
+    const first = [
+      header,
+      `Cream cheese (house),dairy,342,34,19,6,4.1,0,321,1.02,,milk,8,oz,8 oz block,249,dairy-eggs,package label`,
+      `Seed crackers (house),wraps-breads,480,38,4,18,20,16,350,,cracker:4,sesame,1,each,1 box,599,bakery,package label`,
+    ].join('\n');
+    expect((await upload(coach, first).expect(201)).body).toMatchObject({ created: 2, updated: 0, unchanged: 0 });
+    // Set by hand since (the form): where its density came from, which the file does not carry.
+    await sql(`update ingredient set density_source = 'weighed a cup' where workspace_id = $1 and name = 'Cream cheese (house)'`, [coach.workspaceId]);
+    const before = await row(coach.workspaceId, 'Cream cheese (house)');
+    const crackers = await row(coach.workspaceId, 'Seed crackers (house)');
+
+    // The price of the cream cheese changes (same name in another case); the crackers' row says what is stored
+    // ("38.0" is 38); one new row.
+    const second = [
+      header,
+      `cream cheese (HOUSE),dairy,342,34,19,6,4.1,0,321,1.02,,milk,8,oz,8 oz block,279,dairy-eggs,package label`,
+      `Seed crackers (house),wraps-breads,480,38.0,4,18,20,16,350,,cracker:4,sesame,1,each,1 box,599,bakery,package label`,
+      `Pork rinds (house),meat,544,31,11,61,0,0,1818,,,,3,oz,3 oz bag,299,health-food,package label`,
+    ].join('\n');
+    const res = await upload(coach, second, 'update').expect(201);
+    expect(res.body).toMatchObject({ created: 1, updated: 1, unchanged: 1, updatedIds: [before.id], updatedNames: ['cream cheese (HOUSE)'] });
+    const after = await row(coach.workspaceId, 'cream cheese (HOUSE)');
+    expect(after).toMatchObject({ id: before.id, version: before.version + 1, price_cents: 279, density_source: 'weighed a cup' });
+    expect(await row(coach.workspaceId, 'Seed crackers (house)')).toEqual(crackers);
+
+    // The coach's form, opened before the import, saves on the old version: 409 (optimistic locking), nothing lost.
+    const form = ingredientInput({ name: 'Cream cheese (house)', version: before.version });
+    const stale = await coach.agent.patch(`/api/ingredients/${before.id}`).set('x-trayline-csrf', '1').send(form);
+    expect(stale.status).toBe(409);
+    expect((await row(coach.workspaceId, 'cream cheese (HOUSE)')).price_cents).toBe(279);
+  });
+
+  it('reads its own export back as all unchanged, and leaves the shared library alone (a shared name becomes an own row)', async () => {
+    const coach = await coachWorkspace(app);
+    const csv = [
+      header,
+      `"=Sweet drops (house)",sweeteners,0,0,0,0,100,0,5,1.1,,,60,ml,2 fl oz bottle,1099,baking,package label`,
+      `"Bread, seeded (house)",wraps-breads,265.5,18.25,2.1,11,12.75,8.5,320,0.45,slice:32; heel:20,"sesame; egg",1,each,"1 loaf",799,bakery,package label`,
+    ].join('\n');
+    await upload(coach, csv).expect(201);
+    const versions = await sql('select id, version from ingredient where workspace_id = $1 order by id', [coach.workspaceId]);
+    const exported = (await coach.agent.get('/api/ingredients.csv').expect(200)).text;
+    // The formula-like name went out escaped ("'=…", OWASP CSV injection) and comes back as the same ingredient.
+    expect(exported).toContain(`"'=Sweet drops (house)"`);
+    expect((await upload(coach, exported, 'update').expect(201)).body).toMatchObject({ created: 0, updated: 0, unchanged: 2 });
+    expect(await sql('select id, version from ingredient where workspace_id = $1 order by id', [coach.workspaceId])).toEqual(versions);
+
+    const shared = await sql('select * from ingredient where slug = $1', ['egg-whole']);
+    const [{ name }] = await sql<{ name: string }>('select name from ingredient where slug = $1', ['egg-whole']);
+    const sharedName = [header, `"${name}",eggs,1,1,0,1,0,0,1,,,egg,,,,,,my scale`].join('\n');
+    expect((await upload(coach, sharedName, 'update').expect(201)).body).toMatchObject({ created: 1, updated: 0 });
+    expect(await sql('select * from ingredient where slug = $1', ['egg-whole'])).toEqual(shared);
+  });
+
+  it('writes nothing when any row fails (the good rows’ updates included), refuses a name twice in the file, and names a bad option', async () => {
+    const coach = await coachWorkspace(app);
+    await upload(coach, [header, `Butter (house),dairy,717,81,51,0.9,0.1,0,11,,,milk,1,lb,1 lb,499,dairy-eggs,label`].join('\n')).expect(201);
+    const before = await row(coach.workspaceId, 'Butter (house)');
+    const bad = [
+      header,
+      `Butter (house),dairy,717,81,51,0.9,0.1,0,11,,,milk,1,lb,1 lb,549,dairy-eggs,label`,
+      `Ghee (house),fats-oils,lots,99,60,0,0,0,0,,,milk,,,,,,label`,
+      `butter (house),dairy,717,81,51,0.9,0.1,0,11,,,milk,1,lb,1 lb,599,dairy-eggs,label`,
+    ].join('\n');
+    const res = await upload(coach, bad, 'update').expect(400);
+    expect(res.body.report).toEqual([
+      { line: 3, column: 'kcal', reason: expect.stringMatching(/Energy/) },
+      { line: 4, column: 'name', reason: 'Same name as line 2' },
+    ]);
+    expect(await row(coach.workspaceId, 'Butter (house)')).toEqual(before);
+    expect(await ownCount(coach.workspaceId)).toBe(1);
+
+    // Without the option (or with "refuse"), a name already in the library is a problem, as before.
+    const again = [header, `Butter (house),dairy,717,81,51,0.9,0.1,0,11,,,milk,1,lb,1 lb,549,dairy-eggs,label`].join('\n');
+    for (const existing of [undefined, 'refuse']) {
+      const refused = await upload(coach, again, existing).expect(400);
+      expect(refused.body.report).toEqual([{ line: 2, column: 'name', reason: 'Your library already has "Butter (house)"', code: 'name_taken' }]);
+    }
+    const odd = await upload(coach, again, 'merge').expect(400);
+    expect(odd.body.errors).toHaveProperty('existing');
+    expect(await row(coach.workspaceId, 'Butter (house)')).toEqual(before);
+  });
+});
+
 describe('POST /api/calc/recipe', () => {
   it('worked example: 12 large eggs + ½ cup heavy cream, 6 portions, yield 0.9', async () => {
     const egg = await idOf('egg-whole');
@@ -503,12 +602,12 @@ describe('GET /api/ingredients.csv (the coach’s own ingredients, in the import
     // Only the coach's own rows: no shared reference row, nothing of another workspace.
     expect(lines).toHaveLength(3);
 
-    // Read back by another workspace's import: the same values (the escaped name keeps its leading quote).
+    // Read back by another workspace's import: the same values (the escaped name loses the quote the export put on it).
     await other.agent.post('/api/ingredients/import').attach('file', Buffer.from(res.text), { filename: 'ingredients.csv', contentType: 'text/csv' }).expect(201);
     const cols = 'name, category, kcal, fat_g, sat_fat_g, protein_g, carbs_g, fiber_g, sugars_g, erythritol_g, allulose_g, other_polyols_g, sodium_mg, density_g_per_ml, piece_weights, allergens, purchase_amount, purchase_unit, purchase_label, price_cents, aisle, source, note';
     const mine = await sql(`select ${cols} from ingredient where workspace_id = $1 order by name`, [coach.workspaceId]);
     const theirs = await sql(`select ${cols} from ingredient where workspace_id = $1 order by name`, [other.workspaceId]);
-    expect(theirs).toEqual(mine.map((row) => ({ ...row, name: (row as { name: string }).name.replace(/^=/, "'=") })));
+    expect(theirs).toEqual(mine);
 
     // The assistant and the client may not take the library away.
     await (await member(app, coach, 'assistant')).agent.get('/api/ingredients.csv').expect(403);

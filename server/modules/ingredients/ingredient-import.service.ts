@@ -13,7 +13,7 @@ import {
 } from '@shared/schemas/ingredients.schema.js';
 import type { Actor } from '../../http/authz.js';
 import { HttpError } from '../../http/errors.js';
-import { Ingredient } from './ingredient.entity.js';
+import { Ingredient, type IIngredient } from './ingredient.entity.js';
 import { ownNames, rowData } from './ingredient.service.js';
 
 /**
@@ -127,9 +127,15 @@ const ALLERGEN_BY_WORD = new Map<string, string>(
   ]),
 );
 
+/**
+ * A cell as written, without the quote the export puts before a cell a spreadsheet would run as a formula (OWASP CSV
+ * injection): "'=Sweet drops" reads back as "=Sweet drops", so a file exported and imported again names the same rows.
+ */
+export const unescapeFormula = (cell: string): string => (/^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell);
+
 /** One CSV record → the input object of the form schema (cells as text; the schema does the checking). */
 function toInput(rec: Record<string, string>, line: number, problems: ImportProblem[]) {
-  const cell = (c: ImportColumn) => (rec[c] ?? '').trim();
+  const cell = (c: ImportColumn) => unescapeFormula((rec[c] ?? '').trim());
   const pieceWeights = splitList(cell('piece_weights')).map((part) => {
     const m = /^(.+?)\s*[:=]\s*(.+)$/.exec(part);
     if (!m) {
@@ -171,7 +177,10 @@ function toInput(rec: Record<string, string>, line: number, problems: ImportProb
   };
 }
 
-/** Checks every row; returns the values to write, or the full report of problems. */
+/**
+ * Checks every row; returns the values to write, or the full report of problems. A name already in the library
+ * (`existingNames`, lower case) is a problem unless the import updates those rows (`existingNames` then empty).
+ */
 export function checkCsv(text: string, existingNames: Set<string>): { values: IngredientValues[]; report: ImportProblem[] } {
   const { rows, problems: report } = parseRows(text);
   if (!rows.length) return { values: [], report: [{ line: 1, column: 'row', reason: 'The file is empty' }] };
@@ -207,7 +216,7 @@ export function checkCsv(text: string, existingNames: Set<string>): { values: In
       for (const issue of parsed.error.issues) rowProblems.push({ line, column: columnOf(issue.path), reason: issue.message });
     } else {
       const key = parsed.data.name.toLowerCase();
-      if (existingNames.has(key)) rowProblems.push({ line, column: 'name', reason: `Your library already has "${parsed.data.name}"` });
+      if (existingNames.has(key)) rowProblems.push({ line, column: 'name', reason: `Your library already has "${parsed.data.name}"`, code: 'name_taken' });
       else if (seen.has(key)) rowProblems.push({ line, column: 'name', reason: `Same name as line ${seen.get(key)}` });
       seen.set(key, line);
       values.push(parsed.data);
@@ -227,17 +236,70 @@ function dedupe(problems: ImportProblem[]): ImportProblem[] {
   });
 }
 
-/** All rows or none: a report of every problem (400), else every row created in one transaction. */
-export async function importIngredientsCsv(em: EntityManager, actor: Actor, buffer: Buffer): Promise<ImportResultDto> {
+/** What the import does with a row named like an ingredient already in the workspace's library. */
+export type ImportExisting = 'refuse' | 'update';
+
+const DECIMAL_FIELDS = [
+  'kcal', 'fatG', 'satFatG', 'proteinG', 'carbsG', 'fiberG', 'sugarsG', 'erythritolG', 'alluloseG', 'otherPolyolsG',
+  'sodiumMg', 'densityGPerMl', 'purchaseAmount',
+] as const;
+const TEXT_FIELDS = ['name', 'category', 'purchaseUnit', 'purchaseLabel', 'aisle', 'source', 'note'] as const;
+
+type RowData = ReturnType<typeof rowData>;
+
+const sameDecimal = (a: string | number | null | undefined, b: string | number | null | undefined) =>
+  a === null || a === undefined || b === null || b === undefined ? (a ?? null) === (b ?? null) : new Decimal(a).eq(b);
+
+/**
+ * Whether a row of the file says anything the stored ingredient does not: numbers compared as numbers ("0.95" is
+ * 0.9500), piece weights and allergens as sets, a blank text as no text. The density's source is not in the file.
+ */
+export function differsFrom(row: IIngredient, data: RowData): boolean {
+  if (DECIMAL_FIELDS.some((f) => !sameDecimal(row[f], data[f]))) return true;
+  if (TEXT_FIELDS.some((f) => (row[f] ?? '') !== (data[f] ?? ''))) return true;
+  if ((row.priceCents ?? null) !== (data.priceCents ?? null)) return true;
+  const pieces = Object.entries(row.pieceWeights ?? {});
+  if (pieces.length !== Object.keys(data.pieceWeights).length) return true;
+  if (pieces.some(([name, grams]) => !(name in data.pieceWeights) || !sameDecimal(grams, data.pieceWeights[name]))) return true;
+  const allergens = new Set(row.allergens ?? []);
+  return allergens.size !== new Set(data.allergens).size || data.allergens.some((a) => !allergens.has(a));
+}
+
+/**
+ * All rows or none: a report of every problem (400), else every row written in one transaction. A row named like
+ * one of the workspace's own ingredients is a problem (`refuse`), or replaces that ingredient's values (`update`:
+ * as an edit by hand would, its version moving on, so a form open on it meets a 409; a row that changes nothing
+ * leaves it as it is). The shared library is never written: a row named like a shared ingredient is a new own one.
+ */
+export async function importIngredientsCsv(
+  em: EntityManager,
+  actor: Actor,
+  buffer: Buffer,
+  existing: ImportExisting = 'refuse',
+): Promise<ImportResultDto> {
   const text = csvText(buffer);
-  const { values, report } = checkCsv(text, await ownNames(em, actor));
+  const { values, report } = checkCsv(text, existing === 'update' ? new Set() : await ownNames(em, actor));
   if (report.length) throw new ImportRejected(report);
-  const ids = await em.transactional(async (tx) => {
-    const rows = values.map((v) => tx.create(Ingredient, { ...rowData(v), workspace: actor.workspaceId, provenance: 'workspace' }));
+  return em.transactional(async (tx) => {
+    const own = existing === 'update' ? await tx.find(Ingredient, { workspace: actor.workspaceId }) : [];
+    const byName = new Map(own.map((r) => [r.name.trim().toLowerCase(), r]));
+    const created: IIngredient[] = [];
+    const updated: IIngredient[] = [];
+    let unchanged = 0;
+    for (const v of values) {
+      const data = rowData(v);
+      const row = byName.get(v.name.trim().toLowerCase());
+      if (!row) created.push(tx.create(Ingredient, { ...data, workspace: actor.workspaceId, provenance: 'workspace' }));
+      else if (!differsFrom(row, data)) unchanged += 1;
+      else {
+        // The density's source stays what it was unless the file gives another density.
+        tx.assign(row, { ...data, densitySource: sameDecimal(row.densityGPerMl, data.densityGPerMl) ? row.densitySource : data.densitySource });
+        updated.push(row);
+      }
+    }
     await tx.flush();
-    return rows.map((r) => r.id);
+    return { created: created.length, ids: created.map((r) => r.id), updated: updated.length, updatedIds: updated.map((r) => r.id), updatedNames: updated.map((r) => r.name), unchanged };
   });
-  return { created: ids.length, ids };
 }
 
 const plain = (v: string | number | null | undefined): string => (v === null || v === undefined ? '' : new Decimal(v).toString());

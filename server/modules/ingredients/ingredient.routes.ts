@@ -1,6 +1,7 @@
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
 import {
+  importOptionsSchema,
   ingredientIdParams,
   ingredientInputSchema,
   ingredientListQuerySchema,
@@ -71,9 +72,10 @@ export function ingredientRoutes() {
     '/ingredients/import',
     allow('coach'),
     uploadCsv,
-    validated({}, async (_i, req, res) => {
+    // Form fields beside the file: `existing` = refuse (the default) | update.
+    validated({ body: importOptionsSchema }, async ({ body }, req, res) => {
       if (!req.file) throw ValidationError.field('file', 'Attach a CSV file (form field "file")');
-      const result = await importIngredientsCsv(emOf(req), actorOf(req), req.file.buffer);
+      const result = await importIngredientsCsv(emOf(req), actorOf(req), req.file.buffer, body.existing);
       res.status(201);
       return result;
     }),

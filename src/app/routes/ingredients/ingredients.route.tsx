@@ -152,8 +152,9 @@ export function Component() {
           <IngredientImport />
           <h2 className="mb-2 mt-6 text-xl">Keep a copy</h2>
           <p className="text-sm text-ink-soft">
-            Your own ingredients (not the shared library) as a CSV in the same columns, to keep or to import into another
-            workspace.{' '}
+            Your own ingredients (not the shared library) as a CSV in the same columns: to keep, to change in a
+            spreadsheet (prices, say) and import again with “Update the ones already in my library” ticked, or to import
+            into another workspace.{' '}
             <a href="/api/ingredients.csv" download className="font-bold underline">
               Download my ingredients (CSV)
             </a>

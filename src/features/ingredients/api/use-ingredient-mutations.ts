@@ -59,14 +59,16 @@ export function useCopyIngredient() {
 export function useImportIngredients() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (file: File) => {
+    mutationFn: ({ file, updateExisting }: { file: File; updateExisting: boolean }) => {
       const form = new FormData();
+      form.append('existing', updateExisting ? 'update' : 'refuse');
       form.append('file', file);
       return api.post<ImportResultDto>('/ingredients/import', form);
     },
     // Every failure (the row report, 413, 415) is shown beside the upload, not as a toast.
     meta: { silent: true },
-    onSuccess: () => qc.invalidateQueries({ queryKey: ingredientKeys.lists() }),
+    // Updated rows change their own pages too (and every number made from them): refresh every ingredient query.
+    onSuccess: () => qc.invalidateQueries({ queryKey: ingredientKeys.all, predicate: (q) => q.queryKey[1] !== 'workspace-settings' }),
   });
 }
 

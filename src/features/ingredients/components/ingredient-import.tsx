@@ -1,11 +1,12 @@
 import { useId, useRef, useState } from 'react';
 import { toast } from 'sonner';
-import { IMPORT_COLUMNS, type ImportProblem } from '@shared/schemas/ingredients.schema';
+import { IMPORT_COLUMNS, type ImportProblem, type ImportResultDto } from '@shared/schemas/ingredients.schema';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/states';
 import { ApiError, errorMessage } from '@/lib/problem';
 import { useImportIngredients } from '../api/use-ingredient-mutations';
 import { counted } from '@/lib/words';
+import { andList } from '@shared/domain/words';
 
 const EXAMPLE_ROW = [
   'Basil pesto (example)', 'condiments', '450', '45', '7', '5', '6', '2', '3', '0', '0', '0', '700', '0.95', '',
@@ -18,12 +19,26 @@ function templateHref(): string {
   return `data:text/csv;charset=utf-8,${encodeURIComponent(csv)}`;
 }
 
+/** "2 new ingredients, 3 updated, 40 unchanged": what an import did, the parts it did only. */
+export function importWords(res: ImportResultDto): string {
+  const parts = [
+    res.created > 0 && counted(res.created, 'new ingredient'),
+    res.updated > 0 && `${res.updated} updated`,
+    res.unchanged > 0 && `${res.unchanged} unchanged`,
+  ].filter(Boolean);
+  return parts.length ? `Imported: ${parts.join(', ')}` : 'Imported: nothing to change';
+}
+
 /** CSV upload of workspace-own ingredients; a refused file shows its row report as a table. */
 export function IngredientImport() {
   const inputId = useId();
+  const updateHintId = useId();
+  const [updateExisting, setUpdateExisting] = useState(false);
   const fileRef = useRef<HTMLInputElement>(null);
   const [file, setFile] = useState<File | null>(null);
   const [report, setReport] = useState<ImportProblem[] | null>(null);
+  // The last import's changes to the library's own rows, named (a toast's count does not say which).
+  const [updated, setUpdated] = useState<string[]>([]);
   const [error, setError] = useState<string | null>(null);
   const upload = useImportIngredients();
 
@@ -31,13 +46,15 @@ export function IngredientImport() {
     e.preventDefault();
     setReport(null);
     setError(null);
+    setUpdated([]);
     if (!file) {
       setError('Choose a CSV file first');
       return;
     }
-    upload.mutate(file, {
+    upload.mutate({ file, updateExisting }, {
       onSuccess: (res) => {
-        toast.success(`Imported ${counted(res.created, 'ingredient')}`);
+        toast.success(importWords(res));
+        setUpdated(res.updatedNames);
         setFile(null);
         if (fileRef.current) fileRef.current.value = '';
       },
@@ -76,8 +93,38 @@ export function IngredientImport() {
         <Button type="submit" variant="secondary" busy={upload.isPending}>
           Import
         </Button>
+        <div className="flex w-full flex-col gap-1">
+          <label className="flex min-h-11 items-center gap-2 font-bold">
+            <input
+              type="checkbox"
+              className="h-5 w-5 accent-herb"
+              checked={updateExisting}
+              onChange={(e) => setUpdateExisting(e.target.checked)}
+              aria-describedby={updateHintId}
+            />
+            Update the ones already in my library
+          </label>
+          <p id={updateHintId} className="text-sm text-ink-soft">
+            {updateExisting
+              ? 'A row named like one of your ingredients gives it the file’s values, as an edit by hand would: the base trays and plates that use it count with them (a published week keeps what it was published with until you publish it again). A row that changes nothing leaves it as it is. The shared library is never changed.'
+              : 'Not ticked: a row named like one of your ingredients is listed as a problem, and nothing is saved.'}
+          </p>
+        </div>
       </form>
-      {error && <Notice tone="block" title={error} />}
+      {error && (
+        <Notice tone="block" title={error}>
+          {!updateExisting && report?.some((p) => p.code === 'name_taken') && (
+            <p>
+              To give the ingredients already in your library the file’s values, tick “Update the ones already in my library” and import again.
+            </p>
+          )}
+        </Notice>
+      )}
+      {updated.length > 0 && (
+        <Notice tone="info" title={`Updated from the file: ${counted(updated.length, 'ingredient')}`}>
+          <p>{andList(updated.length > 12 ? [...updated.slice(0, 12), `${updated.length - 12} more`] : updated)}.</p>
+        </Notice>
+      )}
       {report && report.length > 0 && (
         <div className="relative overflow-x-auto">
           <table className="w-full text-left text-sm">
