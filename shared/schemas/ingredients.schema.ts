@@ -152,6 +152,9 @@ const optionalText = (max: number) =>
     .pipe(z.string().max(max, { message: `At most ${max} characters` }))
     .transform((v) => (v === '' ? null : v));
 
+/** The largest package price, in cents ($100,000). */
+const MAX_PRICE_CENTS = 10_000_000;
+
 const ingredientFields = z.object({
   name: z.string().trim().min(1, { message: 'Enter a name' }).max(160, { message: 'At most 160 characters' }),
   category: z.enum(INGREDIENT_CATEGORIES, { message: `Choose a category (${INGREDIENT_CATEGORIES.join(', ')})` }),
@@ -184,7 +187,7 @@ const ingredientFields = z.object({
         .number({ message: 'Enter the price in cents' })
         .int({ message: 'Enter the price in whole cents' })
         .min(0, { message: 'The price cannot be negative' })
-        .max(10_000_000, { message: 'At most $100,000' })
+        .max(MAX_PRICE_CENTS, { message: 'At most $100,000' })
         .nullable(),
     ),
   aisle: z
@@ -245,6 +248,39 @@ function crossCheck(v: Fields, ctx: z.RefinementCtx) {
 export const ingredientInputSchema = ingredientFields.superRefine(crossCheck);
 export type IngredientInput = z.input<typeof ingredientInputSchema>;
 export type IngredientValues = z.output<typeof ingredientInputSchema>;
+
+/**
+ * A package price as people type it, in dollars and cents ("3.99", "$3.99", "3,99", "4"), to whole cents (399). The
+ * API keeps and takes cents (`priceCents`, an integer: no float rounding in a sum of prices); the form reads dollars.
+ */
+export const priceDollarsText = z
+  .union([z.string(), z.number(), z.null()])
+  .optional()
+  .transform((v, ctx): number | null => {
+    const typed = v === null || v === undefined ? '' : String(v).trim().replace(/^\$\s*/, '');
+    if (typed === '') return null;
+    const point = decimalCommaToPoint(typed);
+    if (point === null) {
+      ctx.addIssue({ code: 'custom', message: `Price: ${ambiguousCommaMessage(typed)}` });
+      return z.NEVER;
+    }
+    if (!/^(?:\d+(?:\.\d{0,2})?|\.\d{1,2})$/.test(point)) {
+      ctx.addIssue({ code: 'custom', message: /^\d*\.\d{3,}$/.test(point) ? 'Give the price to the cent, e.g. 3.99' : 'Enter the price in dollars, e.g. 3.99' });
+      return z.NEVER;
+    }
+    const cents = new Decimal(point).times(100);
+    if (cents.gt(MAX_PRICE_CENTS)) {
+      ctx.addIssue({ code: 'custom', message: 'At most $100,000' });
+      return z.NEVER;
+    }
+    return cents.toNumber();
+  });
+
+/** Cents as the price field shows them: 399 → "3.99", none → "". */
+export const dollarsText = (cents: number | null | undefined): string => (cents === null || cents === undefined ? '' : new Decimal(cents).div(100).toFixed(2));
+
+/** The ingredient form's schema: the API's, with the price typed in dollars (the values it gives are the API's). */
+export const ingredientFormSchema = ingredientFields.extend({ priceCents: priceDollarsText }).superRefine(crossCheck);
 
 export const ingredientUpdateSchema = ingredientFields
   .extend({ version: editVersionText })

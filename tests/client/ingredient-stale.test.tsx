@@ -144,3 +144,34 @@ describe('two people editing one ingredient', () => {
     expect(puts.map(([at, p]) => [at, p.name, p.version])).toEqual([['/api/ingredients/502', 'Pesto, basil-free', 1]]);
   });
 });
+
+describe('the price of a package, typed in dollars', () => {
+  it('shows the stored cents as dollars, and saves what is typed ("4,25") as cents; a third decimal is refused on the field', async () => {
+    const patches: Record<string, unknown>[] = [];
+    let current = own({ priceCents: 399, purchase: { amount: 6.7, unit: 'oz', label: '6.7 oz jar' } });
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (_url: string, init?: RequestInit) => {
+        if (init?.method === 'PATCH') {
+          const body = JSON.parse(String(init.body)) as Record<string, unknown>;
+          patches.push(body);
+          current = own({ ...current, priceCents: body.priceCents, version: 3 });
+        }
+        return jsonResponse(current);
+      }),
+    );
+    renderAtRoute(<IngredientPage />, '/ingredients/:ingredientId', '/ingredients/501');
+    const price = (await screen.findByLabelText('Price per package ($)')) as HTMLInputElement;
+    expect(price.value).toBe('3.99');
+
+    fireEvent.change(price, { target: { value: '4.255' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    expect(await screen.findByText('Give the price to the cent, e.g. 3.99')).toBeTruthy();
+    expect(patches).toEqual([]);
+
+    fireEvent.change(price, { target: { value: '4,25' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes' }));
+    await waitFor(() => expect(patches).toHaveLength(1));
+    expect(patches[0]).toMatchObject({ priceCents: 425, version: 2 });
+  });
+});

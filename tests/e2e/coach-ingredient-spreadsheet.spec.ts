@@ -40,5 +40,5 @@ test('the coach downloads their own ingredients, changes a price in a spreadshee
   // Its page shows the new price.
   await page.getByLabel('Search by name').fill('House herb salt');
   await page.getByRole('link', { name: 'House herb salt (demo)' }).click();
-  await expect(page.getByLabel('Price per package (cents)')).toHaveValue(row.price_cents);
+  await expect(page.getByLabel('Price per package ($)')).toHaveValue((Number(row.price_cents) / 100).toFixed(2));
 });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import { typedNumber } from '@shared/schemas/typed-number';
-import { recipeCalcSchema } from '@shared/schemas/ingredients.schema';
+import { dollarsText, ingredientFormSchema, ingredientInputSchema, priceDollarsText, recipeCalcSchema } from '@shared/schemas/ingredients.schema';
 import { assemblyTrayItemSchema } from '@shared/schemas/assemblies.schema';
 import { panInputSchema, trayInputSchema } from '@shared/schemas/trays.schema';
 import { kgOf, cmOf } from '@shared/domain/body-measures';
@@ -87,5 +87,43 @@ describe('client profile', () => {
   it('refuses a weight of "1,000" as ambiguous on weightKg', () => {
     const r = createClientSchema.safeParse({ ...client, weightKg: '1,000' });
     expect(messages(r)).toEqual(['weightKg: Weight (kg): "1,000" is ambiguous: write 1000 for a whole number or use a point for decimals.']);
+  });
+});
+
+describe('a package price typed in dollars (the ingredient form)', () => {
+  // Whole cents, exact: 0.1 + 0.2 style float error would be a wrong price (decimal.js does the ×100).
+  it.each([
+    ['3.99', 399],
+    ['$3.99', 399],
+    [' $ 12 ', 1200],
+    ['3,99', 399],
+    ['0.1', 10],
+    ['.5', 50],
+    ['4.', 400],
+    ['1.10', 110],
+    ['', null],
+    [null, null],
+  ])('%j is %s cents', (typed, cents) => {
+    expect(priceDollarsText.parse(typed)).toBe(cents);
+  });
+
+  it.each([
+    ['3.999', 'Give the price to the cent, e.g. 3.99'],
+    ['-3', 'Enter the price in dollars, e.g. 3.99'],
+    ['three', 'Enter the price in dollars, e.g. 3.99'],
+    ['100000.01', 'At most $100,000'],
+    ['1,500', 'Price: "1,500" is ambiguous: write 1500 for a whole number or use a point for decimals.'],
+  ])('refuses %j: %s', (typed, message) => {
+    expect(messages(priceDollarsText.safeParse(typed))).toEqual([`: ${message}`]);
+  });
+
+  it('shows cents as dollars, and the form gives the API its cents back', () => {
+    expect([dollarsText(399), dollarsText(5), dollarsText(0), dollarsText(null)]).toEqual(['3.99', '0.05', '0.00', '']);
+    const form = ingredientFormSchema.parse({
+      name: 'Example cheese', category: 'dairy', kcal: '350', fatG: '30', proteinG: '20', carbsG: '2', source: 'package label', priceCents: dollarsText(1299),
+    });
+    expect(form.priceCents).toBe(1299);
+    // The API's own field stays in cents (what the CSV import and other callers send).
+    expect(ingredientInputSchema.parse({ name: 'Example cheese', category: 'dairy', kcal: '350', fatG: '30', proteinG: '20', carbsG: '2', source: 'x', priceCents: '1299' }).priceCents).toBe(1299);
   });
 });

@@ -2,6 +2,7 @@ import type { IngredientDto } from '@shared/schemas/ingredients.schema';
 import { INGREDIENT_CATEGORY_LABELS, STORE_AISLE_LABELS } from '@shared/schemas/ingredients.schema';
 import { NET_CARB_RULES } from '@shared/domain/nutrition';
 import { Card } from '@/components/ui/states';
+import { money } from '@/lib/money';
 import { AllergenList, AtwaterFlag, fmt } from './ingredient-bits';
 
 function Row({ label, value, unit }: { label: string; value: number; unit: string }) {
@@ -62,7 +63,7 @@ export function IngredientFacts({ ingredient: i }: { ingredient: IngredientDto }
           <dt className="font-bold">Package</dt>
           <dd>
             {i.purchase ? i.purchase.label : '—'}
-            {i.priceCents !== null && <span className="num"> · ${(i.priceCents / 100).toFixed(2)}</span>}
+            {i.priceCents !== null && <span className="num"> · {money(i.priceCents)}</span>}
           </dd>
           <dt className="font-bold">Aisle</dt>
           <dd>{i.aisle ? STORE_AISLE_LABELS[i.aisle] : '—'}</dd>

@@ -6,7 +6,8 @@ import { MAJOR_ALLERGENS } from '@shared/domain/allergens';
 import {
   INGREDIENT_CATEGORIES,
   INGREDIENT_CATEGORY_LABELS,
-  ingredientInputSchema,
+  dollarsText,
+  ingredientFormSchema,
   STORE_AISLE_CODES,
   STORE_AISLE_LABELS,
   type IngredientDto,
@@ -43,7 +44,8 @@ export function formValuesOf(dto: IngredientDto): IngredientInput {
     pieceWeights: Object.entries(dto.pieceWeights).map(([name, grams]) => ({ name, grams: String(grams) })),
     allergens: dto.allergens,
     purchase: dto.purchase ? { amount: String(dto.purchase.amount), unit: dto.purchase.unit, label: dto.purchase.label } : null,
-    priceCents: s(dto.priceCents),
+    // Typed in dollars; the form's schema gives cents back.
+    priceCents: dollarsText(dto.priceCents),
     aisle: dto.aisle ?? '',
     source: dto.source,
     note: dto.note ?? '',
@@ -95,7 +97,7 @@ export function IngredientForm({
 }) {
   const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<IngredientInput, unknown, IngredientValues>({
-    resolver: zodResolver(ingredientInputSchema),
+    resolver: zodResolver(ingredientFormSchema),
     defaultValues: initial,
   });
   const { register, formState, setValue, control } = form;
@@ -220,9 +222,9 @@ export function IngredientForm({
           </>
         )}
         <TextField
-          label="Price per package (cents)"
-          inputMode="numeric"
-          hint="Optional; $3.99 is 399."
+          label="Price per package ($)"
+          inputMode="decimal"
+          hint="Optional, e.g. 3.99."
           error={errorAt('priceCents')}
           {...register('priceCents')}
         />

@@ -2,8 +2,8 @@ import { useEffect, useState } from 'react';
 import type { ShoppingAisleDto, ShoppingItemDto, ShoppingListDto } from '@shared/schemas/shopping.schema';
 import { pendingTicks, useSetCheck } from '../api/use-shopping-mutations';
 import { localHhmm, timeLabel } from '@/lib/dates';
+import { money } from '@/lib/money';
 
-export const money = (cents: number) => `$${(cents / 100).toFixed(2)}`;
 
 export function buyText(item: ShoppingItemDto): string {
   if (item.toBuy <= 0) return 'From the pantry';

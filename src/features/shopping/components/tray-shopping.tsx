@@ -3,7 +3,8 @@ import { useQuery } from '@tanstack/react-query';
 import { TextField } from '@/components/ui/field';
 import { ErrorState, Skeleton } from '@/components/ui/states';
 import { shoppingPreviewQuery } from '../api/shopping.queries';
-import { buyText, money } from './shopping-list';
+import { buyText } from './shopping-list';
+import { money } from '@/lib/money';
 
 const MAX_TRAYS = 50;
 

@@ -2,8 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { allergenLabel } from '@shared/domain/allergens';
 import { Card, ErrorState, Skeleton } from '@/components/ui/states';
 import { portionCardQuery } from '../api/trays.queries';
-
-const money = (cents: number) => `$${(cents / 100).toFixed(2)}`;
+import { money } from '@/lib/money';
 
 /** One portion of a tray: weight, size in the pan, macros with net carbs, energy shares, cost when priced. */
 export function PortionCard({ trayId }: { trayId: number }) {
