@@ -1,10 +1,12 @@
 import pg from 'pg';
 import { afterAll, beforeAll, expect } from 'vitest';
-import { truncateAll } from './db.js';
+import { truncateAll, workerDatabase } from './db.js';
 import { closeTestApp } from './test-app.js';
 
-// Tables are truncated before each API test file; files run one after another.
+// Each worker has a database of its own (a copy of the migrated template), and runs its files one after another:
+// the tables are truncated before each file.
 beforeAll(async () => {
+  await workerDatabase();
   await truncateAll();
 });
 
