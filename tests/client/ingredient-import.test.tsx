@@ -42,6 +42,8 @@ describe('the import form', () => {
     const file = new File(['name,category\n'], 'mine.csv', { type: 'text/csv' });
     const chooser = screen.getByLabelText('CSV file');
     const box = screen.getByRole('checkbox', { name: 'Update the ones already in my library' });
+    // Chosen before pressing Import: the box comes before the button in reading (and Tab) order.
+    expect(box.compareDocumentPosition(screen.getByRole('button', { name: 'Import' })) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
     // Not ticked: the hint says a known name is a problem.
     const hint = () => document.getElementById(box.getAttribute('aria-describedby')!)?.textContent;
     expect(hint()).toMatch(/^Not ticked: a row named like one of your ingredients is listed as a problem/);

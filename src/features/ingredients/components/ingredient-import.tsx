@@ -90,9 +90,7 @@ export function IngredientImport() {
             className="min-h-11 w-full min-w-0 rounded-lg border border-line-strong bg-paper-card px-3 py-2 text-sm"
           />
         </div>
-        <Button type="submit" variant="secondary" busy={upload.isPending}>
-          Import
-        </Button>
+        {/* Chosen before pressing Import: the option comes first in reading and keyboard order. */}
         <div className="flex w-full flex-col gap-1">
           <label className="flex min-h-11 items-center gap-2 font-bold">
             <input
@@ -110,6 +108,9 @@ export function IngredientImport() {
               : 'Not ticked: a row named like one of your ingredients is listed as a problem, and nothing is saved.'}
           </p>
         </div>
+        <Button type="submit" variant="secondary" busy={upload.isPending}>
+          Import
+        </Button>
       </form>
       {error && (
         <Notice tone="block" title={error}>
