@@ -30,6 +30,7 @@ const TITLES: Record<number, string> = {
 export const DUPLICATE_WORDS: Record<string, { detail: string; field?: string }> = {
   app_user_email_unique: { detail: 'An account with this e-mail already exists', field: 'email' },
   ingredient_slug_unique: { detail: 'Your library already has an ingredient with this name', field: 'name' },
+  ingredient_workspace_id_name_unique: { detail: 'Your library already has an ingredient with this name (saved at the same time): reload to see it', field: 'name' },
   oven_workspace_id_name_unique: { detail: 'An oven with this name already exists', field: 'name' },
   bake_rule_workspace_id_category_unique: { detail: 'This kind of tray already has a bake rule: reload to see it', field: 'category' },
   pantry_item_workspace_id_ingredient_id_unique: { detail: 'This ingredient is already in the pantry: reload to see it', field: 'ingredientId' },

@@ -168,6 +168,23 @@ describe('workspace-own ingredients (CRUD, isolation, locking)', () => {
     expect(res.body.errors.name[0]).toMatch(/already has/);
   });
 
+  it('keeps one row when the same new name is saved twice at the same instant (the database’s unique index), in any case', async () => {
+    for (let round = 0; round < 5; round++) {
+      const name = uniq('Racing cheese');
+      const answers = await Promise.all([
+        coachA.agent.post('/api/ingredients').send(ingredientInput({ name })),
+        coachA.agent.post('/api/ingredients').send(ingredientInput({ name: name.toUpperCase() })),
+      ]);
+      const statuses = answers.map((a) => a.status).sort();
+      // The service's check sees the other row (400), or both pass it and the index refuses the second (409).
+      expect([[201, 400], [201, 409]]).toContainEqual(statuses);
+      const refused = answers.find((a) => a.status !== 201)!;
+      expect(refused.body.errors.name[0]).toMatch(/already has/);
+      const rows = await sql('select id from ingredient where workspace_id = $1 and lower(name) = lower($2)', [coachA.workspaceId, name]);
+      expect(rows).toHaveLength(1);
+    }
+  });
+
   it('keeps workspaces apart: the other coach neither lists nor reads nor edits the row (404)', async () => {
     const mine = await makeIngredient(coachA, { name: uniq('Secret spice') });
     const list = await coachB.agent.get(`/api/ingredients?q=${encodeURIComponent('Secret spice')}`).expect(200);

@@ -15,6 +15,13 @@ export const Ingredient = defineEntity({
   name: 'Ingredient',
   tableName: 'ingredient',
   indexes: [{ properties: ['workspace', 'name'] }],
+  // An own name once per workspace, whatever its case (Migration20261208000000_ingredient_name_unique).
+  uniques: [
+    {
+      name: 'ingredient_workspace_id_name_unique',
+      expression: 'create unique index "ingredient_workspace_id_name_unique" on "ingredient" ("workspace_id", lower("name")) where "workspace_id" is not null',
+    },
+  ],
   properties: {
     id: p.integer().primary().autoincrement(),
     // Cascade, never set-null: a deleted workspace's rows must not turn into shared reference rows.
