@@ -19,8 +19,9 @@ export const TEST_DATABASE_URL = process.env.VITEST_POOL_ID
   ? databaseUrl(TEST_TEMPLATE_URL, `${workerPrefix()}${process.env.VITEST_POOL_ID}`)
   : TEST_TEMPLATE_URL;
 
-async function adminQuery<T extends pg.QueryResultRow>(q: string, args: unknown[] = []): Promise<T[]> {
-  const c = new pg.Client({ connectionString: databaseUrl(TEST_TEMPLATE_URL, 'postgres') });
+/** One statement on its own connection to the database at `url`, answering its rows. */
+async function queryAt<T extends pg.QueryResultRow>(url: string, q: string, args: unknown[] = []): Promise<T[]> {
+  const c = new pg.Client({ connectionString: url });
   await c.connect();
   try {
     return (await c.query<T>(q, args)).rows;
@@ -28,6 +29,9 @@ async function adminQuery<T extends pg.QueryResultRow>(q: string, args: unknown[
     await c.end();
   }
 }
+
+/** Creating and dropping databases: through the server's `postgres` database. */
+const adminQuery = <T extends pg.QueryResultRow>(q: string, args: unknown[] = []) => queryAt<T>(databaseUrl(TEST_TEMPLATE_URL, 'postgres'), q, args);
 
 /** Drops the workers' copies a run before this one left (the global setup, before migrating the template). */
 export async function dropWorkerDatabases(): Promise<void> {
@@ -45,26 +49,15 @@ export async function workerDatabase(): Promise<void> {
 
 /** Empties every table but the migrations log: each test file builds its own rows through the factories. */
 export async function truncateAll(url = TEST_DATABASE_URL): Promise<void> {
-  const client = new pg.Client({ connectionString: url });
-  await client.connect();
-  try {
-    const { rows } = await client.query<{ tablename: string }>(
-      `select tablename from pg_tables where schemaname = 'public' and tablename not like 'mikro_orm_migrations%'`,
-    );
-    const tables = rows.map((r) => `"${r.tablename}"`).filter((t) => !t.startsWith('"pgboss'));
-    if (tables.length) await client.query(`truncate ${tables.join(', ')} restart identity cascade`);
-  } finally {
-    await client.end();
-  }
+  const rows = await queryAt<{ tablename: string }>(
+    url,
+    `select tablename from pg_tables where schemaname = 'public' and tablename not like 'mikro_orm_migrations%'`,
+  );
+  const tables = rows.map((r) => `"${r.tablename}"`).filter((t) => !t.startsWith('"pgboss'));
+  if (tables.length) await queryAt(url, `truncate ${tables.join(', ')} restart identity cascade`);
 }
 
 /** Reads the test database directly, to assert the state an API call left behind. */
 export async function sql<T extends pg.QueryResultRow>(q: string, args: unknown[] = []): Promise<T[]> {
-  const c = new pg.Client({ connectionString: TEST_DATABASE_URL });
-  await c.connect();
-  try {
-    return (await c.query<T>(q, args)).rows;
-  } finally {
-    await c.end();
-  }
+  return queryAt<T>(TEST_DATABASE_URL, q, args);
 }

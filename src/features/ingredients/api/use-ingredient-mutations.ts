@@ -1,4 +1,4 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type {
   ImportResultDto,
   IngredientDto,
@@ -55,6 +55,10 @@ export function useCopyIngredient() {
   });
 }
 
+/** Every ingredient query but the workspace settings: lists and pages, whose numbers an import or the net-carb rule changed. */
+const refreshIngredientNumbers = (qc: QueryClient) =>
+  qc.invalidateQueries({ queryKey: ingredientKeys.all, predicate: (q) => q.queryKey[1] !== 'workspace-settings' });
+
 /** CSV upload; a 400 carries the row report (`problem.report`), shown by the caller. */
 export function useImportIngredients() {
   const qc = useQueryClient();
@@ -67,8 +71,8 @@ export function useImportIngredients() {
     },
     // Every failure (the row report, 413, 415) is shown beside the upload, not as a toast.
     meta: { silent: true },
-    // Updated rows change their own pages too (and every number made from them): refresh every ingredient query.
-    onSuccess: () => qc.invalidateQueries({ queryKey: ingredientKeys.all, predicate: (q) => q.queryKey[1] !== 'workspace-settings' }),
+    // Updated rows change their own pages too, not only the lists.
+    onSuccess: () => refreshIngredientNumbers(qc),
   });
 }
 
@@ -79,7 +83,7 @@ export function useUpdateWorkspaceSettings() {
     mutationFn: (input: WorkspaceSettingsUpdateInput) => api.patch<WorkspaceSettingsDto>('/workspace/settings', input),
     onSuccess: (dto) => {
       qc.setQueryData(ingredientKeys.settings(), dto);
-      return qc.invalidateQueries({ queryKey: ingredientKeys.all, predicate: (q) => q.queryKey[1] !== 'workspace-settings' });
+      return refreshIngredientNumbers(qc);
     },
   });
 }
