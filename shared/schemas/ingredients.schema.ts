@@ -1,6 +1,7 @@
 import Decimal from 'decimal.js';
 import { z } from 'zod';
 import { typedNumber } from './typed-number';
+import type { CrossIssues } from './csv-import';
 import { unitTextSchema } from './units.schema';
 import { ALLERGEN_CODES, type AllergenCode } from '../domain/allergens';
 import { NET_CARB_RULES, type AtwaterCheck, type NetCarbRuleKind, type NutrientNumbers } from '../domain/nutrition';
@@ -155,7 +156,7 @@ const optionalText = (max: number) =>
 /** The largest package price, in cents ($100,000). */
 const MAX_PRICE_CENTS = 10_000_000;
 
-const ingredientFields = z.object({
+export const ingredientFields = z.object({
   name: z.string().trim().min(1, { message: 'Enter a name' }).max(160, { message: 'At most 160 characters' }),
   category: z.enum(INGREDIENT_CATEGORIES, { message: `Choose a category (${INGREDIENT_CATEGORIES.join(', ')})` }),
   kcal: decimalField('energy (kcal per 100 g)', 1000, 'required'),
@@ -205,29 +206,38 @@ const ingredientFields = z.object({
 
 type Fields = z.output<typeof ingredientFields>;
 
-/** Checks between fields: parts never exceed their whole, and a purchase unit must be measurable. */
-function crossCheck(v: Fields, ctx: z.RefinementCtx) {
+/**
+ * Checks between fields: parts never exceed their whole, and a purchase unit must be measurable. Each check looks
+ * only at fields it has, so a CSV row can be checked on the fields that read (readRow) in the same pass as the rest.
+ */
+export function crossCheck(v: Partial<Fields>, ctx: CrossIssues) {
   const d = (x: string) => new Decimal(x);
-  if (d(v.satFatG).gt(d(v.fatG))) {
+  if (v.satFatG !== undefined && v.fatG !== undefined && d(v.satFatG).gt(d(v.fatG))) {
     ctx.addIssue({ code: 'custom', path: ['satFatG'], message: 'Saturated fat is part of fat: it cannot be more than fat' });
   }
-  const carbParts = d(v.fiberG).plus(v.erythritolG).plus(v.alluloseG).plus(v.otherPolyolsG);
-  if (carbParts.gt(d(v.carbsG))) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['carbsG'],
-      message: `Total carbohydrate includes fiber, sugar alcohols and allulose (${carbParts.toFixed()} g here): it must be at least that`,
-    });
+  const parts = [v.fiberG, v.erythritolG, v.alluloseG, v.otherPolyolsG];
+  if (v.carbsG !== undefined && parts.every((x) => x !== undefined)) {
+    const carbParts = parts.reduce((sum, x) => sum.plus(x!), d('0'));
+    if (carbParts.gt(d(v.carbsG))) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['carbsG'],
+        message: `Total carbohydrate includes fiber, sugar alcohols and allulose (${carbParts.toFixed()} g here): it must be at least that`,
+      });
+    }
   }
   // The macronutrients of 100 g cannot weigh more than 100 g (0.5 g of rounding allowed).
-  const macros = d(v.fatG).plus(v.proteinG).plus(v.carbsG);
-  if (macros.gt(100.5)) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['carbsG'],
-      message: `Fat, protein and carbohydrate add up to ${macros.toFixed()} g in 100 g: check the values`,
-    });
+  if (v.fatG !== undefined && v.proteinG !== undefined && v.carbsG !== undefined) {
+    const macros = d(v.fatG).plus(v.proteinG).plus(v.carbsG);
+    if (macros.gt(100.5)) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['carbsG'],
+        message: `Fat, protein and carbohydrate add up to ${macros.toFixed()} g in 100 g: check the values`,
+      });
+    }
   }
+  if (!v.pieceWeights) return;
   const names = v.pieceWeights.map((p) => p.name);
   names.forEach((n, i) => {
     if (names.indexOf(n) !== i) ctx.addIssue({ code: 'custom', path: ['pieceWeights', i, 'name'], message: `"${n}" is listed twice` });
@@ -499,14 +509,7 @@ export interface RecipeCalcDto {
   lines: RecipeCalcLineDto[];
 }
 
-/** One problem of a CSV import: the file line (the header is line 1), the column and why. */
-export interface ImportProblem {
-  line: number;
-  column: string;
-  reason: string;
-  /** `name_taken`: the name is one of the workspace's own ingredients (an import that updates would take the row). */
-  code?: 'name_taken';
-}
+export type { ImportProblem } from './csv-import';
 
 export interface ImportResultDto {
   /** New ingredients, and their ids. */

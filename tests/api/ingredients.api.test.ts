@@ -271,6 +271,7 @@ describe('POST /api/ingredients/import (CSV, all or nothing)', () => {
       `"Multi
 line name",dairy,100,5,1,10,3,0,100,,,,,,,,nowhere,label`,
       `Too much sat fat,dairy,100,5,9,10,3,0,100,,,,,,,,,label`,
+      `Two rounds in one,dairy,lots,5,9,10,3,4,100,,,,,,,,,label`,
     ].join('\n');
     const res = await coachA.agent.post('/api/ingredients/import').attach('file', Buffer.from(csv), { filename: 'bad.csv', contentType: 'text/csv' }).expect(400);
     expect(res.body.code).toBe('import_rejected');
@@ -282,6 +283,11 @@ line name",dairy,100,5,1,10,3,0,100,,,,,,,,nowhere,label`,
         { line: 4, column: 'aisle', reason: expect.stringMatching(/Choose a store aisle/) },
         // Line 6 reads well field by field; the check between fields names saturated fat.
         { line: 6, column: 'sat_fat_g', reason: expect.stringMatching(/cannot be more than fat/) },
+        // A row with a field that does not read still has its other fields checked against each other in the same
+        // report (saturated fat over fat, fiber over total carbohydrate), so the file is mended in one round.
+        { line: 7, column: 'kcal', reason: expect.stringMatching(/number/) },
+        { line: 7, column: 'sat_fat_g', reason: expect.stringMatching(/cannot be more than fat/) },
+        { line: 7, column: 'carbs_g', reason: expect.stringMatching(/includes fiber/) },
       ]),
     );
     expect(res.body.report.some((p: { line: number }) => p.line === 2)).toBe(false);

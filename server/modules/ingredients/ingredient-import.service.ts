@@ -2,8 +2,11 @@ import Papa from 'papaparse';
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { MAJOR_ALLERGENS } from '@shared/domain/allergens.js';
+import { readRow } from '@shared/schemas/csv-import.js';
 import {
+  crossCheck,
   IMPORT_COLUMNS,
+  ingredientFields,
   ingredientInputSchema,
   REQUIRED_IMPORT_COLUMNS,
   type ImportColumn,
@@ -12,7 +15,7 @@ import {
   type IngredientValues,
 } from '@shared/schemas/ingredients.schema.js';
 import type { Actor } from '../../http/authz.js';
-import { HttpError } from '../../http/errors.js';
+import { cellOf, csvText, dedupe, ImportRejected, readCsv, splitList } from '../../lib/csv-import.js';
 import { Ingredient, type IIngredient } from './ingredient.entity.js';
 import { ownNames, rowData } from './ingredient.service.js';
 
@@ -22,13 +25,6 @@ import { ownNames, rowData } from './ingredient.service.js';
  * reason). Otherwise all rows are created in ONE transaction.
  */
 export const MAX_IMPORT_ROWS = 2000;
-
-export class ImportRejected extends HttpError {
-  constructor(public readonly report: ImportProblem[]) {
-    const msg = `The file was not imported: ${report.length} problem${report.length === 1 ? '' : 's'} (nothing was saved)`;
-    super(400, 'import_rejected', msg, { errors: { file: [msg] }, report });
-  }
-}
 
 /** Field path of the schema → CSV column. */
 const FIELD_COLUMNS: Record<string, ImportColumn> = {
@@ -64,62 +60,6 @@ function columnOf(path: readonly PropertyKey[]): string {
   return FIELD_COLUMNS[a] ?? a ?? 'row';
 }
 
-/** Reads the upload as UTF-8 text; refuses binary content. */
-export function csvText(buffer: Buffer): string {
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(buffer);
-  } catch {
-    throw new HttpError(415, 'unsupported_media_type', 'The file is not UTF-8 text: save it as "CSV UTF-8" and try again');
-  }
-  if (text.includes('\u0000')) throw new HttpError(415, 'unsupported_media_type', 'The file is not a CSV text file');
-  return text.replace(/^\uFEFF/, '');
-}
-
-interface CsvRow {
-  line: number;
-  cells: string[];
-}
-
-/**
- * The delimiter of the file, read off its header line (column names hold none): a comma, a semicolon (what a
- * spreadsheet writes where the comma is the decimal mark) or a tab. Papa Parse's own guess weighs the data lines too
- * and takes the decimal commas of a short semicolon file ("44,0;4,6") for delimiters.
- */
-export function headerDelimiter(text: string): string {
-  const header = /^[^\r\n]*/.exec(text)![0];
-  const count = (d: string) => header.split(d).length - 1;
-  return [';', '\t'].reduce((best, d) => (count(d) > count(best) ? d : best), ',');
-}
-
-/** Rows with the file line each starts on (quoted cells may span lines). */
-function parseRows(text: string): { rows: CsvRow[]; problems: ImportProblem[] } {
-  const rows: CsvRow[] = [];
-  const problems: ImportProblem[] = [];
-  let lastCursor = 0;
-  let line = 1;
-  Papa.parse<string[]>(text, {
-    delimiter: headerDelimiter(text),
-    skipEmptyLines: false,
-    step: (res) => {
-      const start = lastCursor;
-      lastCursor = res.meta.cursor;
-      const cells = res.data;
-      for (const err of res.errors) problems.push({ line, column: 'row', reason: err.message });
-      if (!(cells.length === 1 && cells[0].trim() === '')) rows.push({ line, cells });
-      line += (text.slice(start, lastCursor).match(/\r\n|\r|\n/g) ?? []).length;
-    },
-  });
-  return { rows, problems };
-}
-
-function splitList(cell: string): string[] {
-  return cell
-    .split(/[;|,]/)
-    .map((s) => s.trim())
-    .filter(Boolean);
-}
-
 const ALLERGEN_BY_WORD = new Map<string, string>(
   MAJOR_ALLERGENS.flatMap((a) => [
     [a.code, a.code],
@@ -127,15 +67,9 @@ const ALLERGEN_BY_WORD = new Map<string, string>(
   ]),
 );
 
-/**
- * A cell as written, without the quote the export puts before a cell a spreadsheet would run as a formula (OWASP CSV
- * injection): "'=Sweet drops" reads back as "=Sweet drops", so a file exported and imported again names the same rows.
- */
-export const unescapeFormula = (cell: string): string => (/^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell);
-
 /** One CSV record → the input object of the form schema (cells as text; the schema does the checking). */
 function toInput(rec: Record<string, string>, line: number, problems: ImportProblem[]) {
-  const cell = (c: ImportColumn) => unescapeFormula((rec[c] ?? '').trim());
+  const cell = (c: ImportColumn) => cellOf(rec, c);
   const pieceWeights = splitList(cell('piece_weights')).map((part) => {
     const m = /^(.+?)\s*[:=]\s*(.+)$/.exec(part);
     if (!m) {
@@ -182,38 +116,20 @@ function toInput(rec: Record<string, string>, line: number, problems: ImportProb
  * (`existingNames`, lower case) is a problem unless the import updates those rows (`existingNames` then empty).
  */
 export function checkCsv(text: string, existingNames: Set<string>): { values: IngredientValues[]; report: ImportProblem[] } {
-  const { rows, problems: report } = parseRows(text);
-  if (!rows.length) return { values: [], report: [{ line: 1, column: 'row', reason: 'The file is empty' }] };
-  const header = rows[0].cells.map((h) => h.trim().toLowerCase());
-  const known = new Set<string>(IMPORT_COLUMNS);
-  header.forEach((h) => {
-    if (!known.has(h)) report.push({ line: rows[0].line, column: h || '(blank)', reason: `Unknown column; use: ${IMPORT_COLUMNS.join(', ')}` });
+  const { records, report } = readCsv(text, {
+    columns: IMPORT_COLUMNS,
+    required: REQUIRED_IMPORT_COLUMNS,
+    maxRows: MAX_IMPORT_ROWS,
+    nouns: 'ingredients',
   });
-  header.forEach((h, i) => {
-    if (header.indexOf(h) !== i) report.push({ line: rows[0].line, column: h, reason: 'This column appears twice' });
-  });
-  for (const col of REQUIRED_IMPORT_COLUMNS) {
-    if (!header.includes(col)) report.push({ line: rows[0].line, column: col, reason: 'Required column is missing' });
-  }
-  const data = rows.slice(1);
-  if (!data.length) report.push({ line: rows[0].line + 1, column: 'row', reason: 'The file has a header but no ingredients' });
-  if (data.length > MAX_IMPORT_ROWS) {
-    report.push({ line: data[MAX_IMPORT_ROWS].line, column: 'row', reason: `At most ${MAX_IMPORT_ROWS} ingredients per file` });
-  }
-  if (report.length) return { values: [], report };
-
   const values: IngredientValues[] = [];
   const seen = new Map<string, number>();
-  for (const { line, cells } of data) {
-    if (cells.length !== header.length) {
-      report.push({ line, column: 'row', reason: `Has ${cells.length} cells; the header has ${header.length}` });
-      continue;
-    }
-    const rec = Object.fromEntries(header.map((h, i) => [h, cells[i] ?? '']));
+  for (const { line, cells } of records) {
     const rowProblems: ImportProblem[] = [];
-    const parsed = ingredientInputSchema.safeParse(toInput(rec, line, rowProblems));
+    // Field problems and the checks between the fields that read, in one pass.
+    const parsed = readRow(ingredientFields, ingredientInputSchema, crossCheck, toInput(cells, line, rowProblems));
     if (!parsed.success) {
-      for (const issue of parsed.error.issues) rowProblems.push({ line, column: columnOf(issue.path), reason: issue.message });
+      for (const issue of parsed.issues) rowProblems.push({ line, column: columnOf(issue.path), reason: issue.message });
     } else {
       const key = parsed.data.name.toLowerCase();
       if (existingNames.has(key)) rowProblems.push({ line, column: 'name', reason: `Your library already has "${parsed.data.name}"`, code: 'name_taken' });
@@ -224,16 +140,6 @@ export function checkCsv(text: string, existingNames: Set<string>): { values: In
     report.push(...dedupe(rowProblems));
   }
   return { values, report };
-}
-
-function dedupe(problems: ImportProblem[]): ImportProblem[] {
-  const keys = new Set<string>();
-  return problems.filter((p) => {
-    const k = `${p.line}|${p.column}|${p.reason}`;
-    if (keys.has(k)) return false;
-    keys.add(k);
-    return true;
-  });
 }
 
 /** What the import does with a row named like an ingredient already in the workspace's library. */

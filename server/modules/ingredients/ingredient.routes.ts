@@ -1,5 +1,4 @@
-import { Router, type RequestHandler } from 'express';
-import multer from 'multer';
+import { Router } from 'express';
 import {
   importOptionsSchema,
   ingredientIdParams,
@@ -9,7 +8,7 @@ import {
   recipeCalcSchema,
 } from '@shared/schemas/ingredients.schema.js';
 import { actorOf, allow } from '../../http/authz.js';
-import { HttpError, ValidationError } from '../../http/errors.js';
+import { uploadCsv, uploadedFile } from '../../http/upload-csv.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import { exportIngredientsCsv, importIngredientsCsv } from './ingredient-import.service.js';
@@ -22,32 +21,6 @@ import {
   listIngredients,
   updateIngredient,
 } from './ingredient.service.js';
-
-export const MAX_IMPORT_BYTES = 1024 * 1024;
-
-const CSV_TYPES = new Set(['text/csv', 'application/csv', 'text/plain', 'application/vnd.ms-excel', 'text/comma-separated-values']);
-
-const upload = multer({
-  storage: multer.memoryStorage(),
-  limits: { fileSize: MAX_IMPORT_BYTES, files: 1, fields: 10 },
-  fileFilter: (_req, file, cb) => {
-    const looksCsv = CSV_TYPES.has(file.mimetype.toLowerCase()) && /\.(csv|txt)$/i.test(file.originalname);
-    if (looksCsv) return cb(null, true);
-    cb(new HttpError(415, 'unsupported_media_type', `"${file.originalname}" is not a CSV file (text/csv, .csv)`));
-  },
-}).single('file');
-
-/** multer with its errors turned into problems: 413 over 1 MB, 400 for a malformed upload. */
-const uploadCsv: RequestHandler = (req, res, next) => {
-  upload(req, res, (err: unknown) => {
-    if (!err) return next();
-    if (err instanceof multer.MulterError) {
-      if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, 'too_large', 'The file is larger than 1 MB'));
-      return next(ValidationError.field('file', `The upload could not be read (${err.message})`));
-    }
-    next(err);
-  });
-};
 
 export function ingredientRoutes() {
   const r = Router();
@@ -74,8 +47,7 @@ export function ingredientRoutes() {
     uploadCsv,
     // Form fields beside the file: `existing` = refuse (the default) | update.
     validated({ body: importOptionsSchema }, async ({ body }, req, res) => {
-      if (!req.file) throw ValidationError.field('file', 'Attach a CSV file (form field "file")');
-      const result = await importIngredientsCsv(emOf(req), actorOf(req), req.file.buffer, body.existing);
+      const result = await importIngredientsCsv(emOf(req), actorOf(req), uploadedFile(req), body.existing);
       res.status(201);
       return result;
     }),
