@@ -40,6 +40,19 @@ export function allergenLabel(code: AllergenCode): string {
   return found.label;
 }
 
+const ALLERGEN_BY_WORD = new Map<string, AllergenCode>(
+  MAJOR_ALLERGENS.flatMap((a) => [
+    [a.code, a.code],
+    [a.label.toLowerCase(), a.code],
+  ]),
+);
+
+/** An allergen as a spreadsheet cell names it ("Tree nuts", "tree nuts", "tree-nuts"), or undefined. */
+export function allergenFromWord(word: string): AllergenCode | undefined {
+  const w = word.trim().toLowerCase();
+  return ALLERGEN_BY_WORD.get(w) ?? ALLERGEN_BY_WORD.get(w.replace(/\s+/g, '-'));
+}
+
 /** Allergens present in both lists, once each, in display order. */
 export function allergenConflicts(
   plateAllergens: readonly AllergenCode[],

@@ -150,3 +150,54 @@ export interface ClientDto extends ClientSelfDto {
 }
 
 export type ClientListItemDto = ClientDto | ClientSummaryDto;
+
+/**
+ * The CSV columns of a client import. Height and weight take their unit in the cell ("168 cm", "5 ft 6 in",
+ * "163 lb"), a number alone being read in the importing coach's units; protein per kg or per lb of body weight; the
+ * four target columns, given together, type the targets by hand (else Trayline computes them).
+ */
+export const CLIENT_IMPORT_COLUMNS = [
+  'name', 'email', 'portions_per_plate', 'sex', 'age', 'height', 'weight', 'activity', 'goal', 'net_carb_cap_g',
+  'protein_g_per_kg', 'protein_g_per_lb', 'target_kcal', 'target_net_carbs_g', 'target_protein_g', 'target_fat_g',
+  'allergens', 'dislikes', 'health_notes',
+] as const;
+export type ClientImportColumn = (typeof CLIENT_IMPORT_COLUMNS)[number];
+export const REQUIRED_CLIENT_IMPORT_COLUMNS: readonly ClientImportColumn[] = ['name', 'sex', 'age', 'height', 'weight', 'activity', 'goal'];
+/** The typed-by-hand targets: all four or none. */
+export const CLIENT_TARGET_COLUMNS = ['target_kcal', 'target_net_carbs_g', 'target_protein_g', 'target_fat_g'] as const satisfies readonly ClientImportColumn[];
+
+/** Form fields beside the file: the units a height or weight written as a number alone is read in. */
+export const clientImportOptionsSchema = z.object({
+  units: z.enum(['us', 'metric'], { message: 'Choose "us" (inches and pounds) or "metric" (centimetres and kilograms)' }).optional(),
+});
+
+export interface ClientImportResultDto {
+  /** New client profiles, their ids and names in the file's order. */
+  created: number;
+  ids: number[];
+  names: string[];
+  /** How many of them have an e-mail (no invitation is sent by an import). */
+  withEmail: number;
+}
+
+/**
+ * The template a coach downloads: the columns (protein per lb for US measures, per kg for metric) and two example
+ * rows in the coach's units, one with computed targets and one with typed ones. The import reads it as it is.
+ */
+export function clientImportTemplate(units: 'us' | 'metric'): [columns: ClientImportColumn[], rows: string[][]] {
+  const us = units === 'us';
+  const columns = CLIENT_IMPORT_COLUMNS.filter((c) => c !== (us ? 'protein_g_per_kg' : 'protein_g_per_lb'));
+  const rows: Partial<Record<ClientImportColumn, string>>[] = [
+    {
+      name: 'Example client (delete this row)', email: 'someone@example.com', portions_per_plate: '1', sex: 'female', age: '42',
+      height: us ? '5 ft 6 in' : '168 cm', weight: us ? '163 lb' : '74 kg', activity: 'light', goal: 'lose', net_carb_cap_g: '20',
+      protein_g_per_kg: '1.5', protein_g_per_lb: '0.7', allergens: 'tree nuts; milk', dislikes: 'olives; cilantro',
+    },
+    {
+      name: 'Example with typed targets (delete this row)', portions_per_plate: '2', sex: 'male', age: '55',
+      height: us ? '70 in' : '178 cm', weight: us ? '190 lb' : '86 kg', activity: 'moderate', goal: 'maintain',
+      target_kcal: '2200', target_net_carbs_g: '25', target_protein_g: '130', target_fat_g: '170',
+    },
+  ];
+  return [columns, rows.map((r) => columns.map((c) => r[c] ?? ''))];
+}

@@ -111,6 +111,7 @@ export const MATRIX: Record<string, MatrixRow> = {
     path: (ctx) => `/api/clients/${ctx.ids.client}`,
     crossWorkspace: true,
   }),
+  'POST /api/clients/import': R(['coach']),
   'GET /api/clients/:id/published-allergens': R(['coach'], {
     path: (ctx) => `/api/clients/${ctx.ids.client}/published-allergens`,
     crossWorkspace: true,

@@ -1,8 +1,10 @@
 import { Router } from 'express';
-import { clientIdParams, createClientSchema, updateClientSchema } from '@shared/schemas/clients.schema.js';
+import { clientIdParams, clientImportOptionsSchema, createClientSchema, updateClientSchema } from '@shared/schemas/clients.schema.js';
 import { actorOf, allow } from '../../http/authz.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
+import { uploadCsv, uploadedFile } from '../../http/upload-csv.js';
+import { importClientsCsv } from './client-import.service.js';
 import * as clients from './client.service.js';
 import { todayQuery } from '@shared/schemas/weeks.schema.js';
 import { publishedAllergens } from '../weeks/week-publish.service.js';
@@ -24,6 +26,20 @@ export function clientRoutes() {
       const dto = await clients.createClient(emOf(req), actorOf(req), body);
       res.status(201);
       return dto;
+    }),
+  );
+
+  // Coach: client profiles from a CSV file, all rows or none (a row-level report otherwise); no invitation is sent.
+  // Form field beside the file: `units` = us | metric, for a height or weight written as a number alone (default:
+  // the coach's own units).
+  r.post(
+    '/clients/import',
+    allow('coach'),
+    uploadCsv,
+    validated({ body: clientImportOptionsSchema }, async ({ body }, req, res) => {
+      const result = await importClientsCsv(emOf(req), actorOf(req), uploadedFile(req), body.units);
+      res.status(201);
+      return result;
     }),
   );
 

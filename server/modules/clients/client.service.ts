@@ -95,7 +95,8 @@ export async function getClient(em: EntityManager, actor: Actor, id: number) {
   return presentClient(row, slots, acc.get(row.id) ?? null, inv.get(row.id) ?? null);
 }
 
-function fields(input: Partial<CreateClientData>) {
+/** A profile's stored columns from the form's values (only those given). */
+export function clientRowFields(input: Partial<CreateClientData>) {
   const out: Partial<IClient> = {};
   const keys = [
     'name', 'email', 'householdMultiplier', 'sex', 'ageYears', 'heightCm', 'weightKg', 'activity', 'goal',
@@ -113,7 +114,7 @@ export async function createClient(em: EntityManager, actor: Actor, input: Creat
     allergens: [],
     dislikes: [],
     healthNotes: '',
-    ...fields(input),
+    ...clientRowFields(input),
   } as never) as IClient;
   await em.flush();
   return getClient(em, actor, row.id);
@@ -124,7 +125,7 @@ export async function updateClient(em: EntityManager, actor: Actor, id: number, 
   if (row.version !== input.version) {
     throw new StaleEdit(row.version, await getClient(em, actor, id));
   }
-  const next = fields(input);
+  const next = clientRowFields(input);
   const mode = next.targetMode ?? row.targetMode;
   const manual = next.manualTargets !== undefined ? next.manualTargets : row.manualTargets;
   if (mode === 'manual' && !manual) {

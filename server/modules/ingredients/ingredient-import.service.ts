@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import Decimal from 'decimal.js';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { MAJOR_ALLERGENS } from '@shared/domain/allergens.js';
+import { allergenFromWord } from '@shared/domain/allergens.js';
 import { readRow } from '@shared/schemas/csv-import.js';
 import {
   crossCheck,
@@ -60,13 +60,6 @@ function columnOf(path: readonly PropertyKey[]): string {
   return FIELD_COLUMNS[a] ?? a ?? 'row';
 }
 
-const ALLERGEN_BY_WORD = new Map<string, string>(
-  MAJOR_ALLERGENS.flatMap((a) => [
-    [a.code, a.code],
-    [a.label.toLowerCase(), a.code],
-  ]),
-);
-
 /** One CSV record → the input object of the form schema (cells as text; the schema does the checking). */
 function toInput(rec: Record<string, string>, line: number, problems: ImportProblem[]) {
   const cell = (c: ImportColumn) => cellOf(rec, c);
@@ -79,8 +72,7 @@ function toInput(rec: Record<string, string>, line: number, problems: ImportProb
     return { name: m[1], grams: m[2] };
   });
   const allergens = splitList(cell('allergens')).map((word) => {
-    const code = ALLERGEN_BY_WORD.get(word.toLowerCase()) ?? ALLERGEN_BY_WORD.get(word.toLowerCase().replace(/\s+/g, '-'));
-    return code ?? word;
+    return allergenFromWord(word) ?? word;
   });
   const hasPurchase = cell('purchase_amount') || cell('purchase_unit') || cell('purchase_label');
   return {

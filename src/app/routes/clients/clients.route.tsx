@@ -15,6 +15,8 @@ import { FILTER_FROM, ListFilter } from '@/components/ui/list-filter';
 import { filterByText } from '@/lib/words';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { useUnsavedGuard } from '@/lib/use-unsaved-guard';
+import { ClientImport } from '@/features/clients/components/client-import';
+import { Cautions } from '@/components/domain/cautions';
 
 const isFull = (c: ClientListItemDto): c is ClientDto => 'targets' in c;
 
@@ -140,13 +142,19 @@ export function Component() {
           isEmpty={(data) => data.length === 0}
           empty={
             <EmptyState title="No clients yet" action={<Button onClick={() => setAdding(true)}>Add your first client</Button>}>
-              Add a client to compute their targets and place plates for them on the week board.
+              Add a client to compute their targets and place plates for them on the week board, or bring your list of
+              clients from a spreadsheet below.
             </EmptyState>
           }
         >
           {(data) => <ClientList clients={data} />}
         </QueryView>
       </Card>
+      <Card>
+        <h2 className="mb-3 text-xl">Clients from a spreadsheet</h2>
+        <ClientImport units={me.unitSystem} />
+      </Card>
+      <Cautions topic="diet" compact />
     </div>
   );
 }

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ClientDto, CreateClientInput, UpdateClientInput } from '@shared/schemas/clients.schema';
+import type { ClientDto, ClientImportResultDto, CreateClientInput, UpdateClientInput } from '@shared/schemas/clients.schema';
 import type { CreateInvitationInput, InvitationDto } from '@shared/schemas/auth.schema';
 import { api } from '@/lib/api-client';
 import { clientKeys } from './clients.keys';
@@ -48,5 +48,21 @@ export function useInviteClient(id: number) {
     meta: { form: true },
     // The profile and the list now show the open invitation.
     onSuccess: () => qc.invalidateQueries({ queryKey: clientKeys.all }),
+  });
+}
+
+/** Client profiles from a CSV file (POST /api/clients/import); a height or weight as a number alone is read in `units`. */
+export function useImportClients() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ file, units }: { file: File; units: 'us' | 'metric' }) => {
+      const form = new FormData();
+      form.append('units', units);
+      form.append('file', file);
+      return api.post<ClientImportResultDto>('/clients/import', form);
+    },
+    // Every failure (the row report, 413, 415) is shown beside the upload, not as a toast.
+    meta: { silent: true },
+    onSuccess: () => qc.invalidateQueries({ queryKey: clientKeys.lists() }),
   });
 }

@@ -1,0 +1,61 @@
+import fs from 'node:fs';
+import Papa from 'papaparse';
+import { expect, test } from '@playwright/test';
+import { expectNoSeriousA11yViolations, SHOTS, unique } from './support';
+
+test.use({ viewport: { width: 1366, height: 900 }, acceptDownloads: true });
+
+test('a new coach brings their clients from a spreadsheet: the template, a mistake listed by line, then every client at once', async ({ page }, info) => {
+  // A workspace of its own: the demo's clients stay as the other journeys know them.
+  await page.goto('/register');
+  await page.getByLabel('Your name').fill('Rae Example');
+  await page.getByLabel('Business name').fill('Example Low-Carb Kitchen');
+  await page.getByLabel('E-mail').fill(`${unique('rae').replace(' ', '.')}@example.test`);
+  await page.getByLabel('Password', { exact: true }).fill('a-long-password-1');
+  await page.getByRole('button', { name: 'Open workspace' }).click();
+  await expect(page.getByRole('heading', { name: 'First steps' })).toBeVisible();
+
+  await page.goto('/clients');
+  await expect(page.getByText('or bring your list of clients from a spreadsheet below')).toBeVisible();
+  const download = page.waitForEvent('download');
+  await page.getByRole('link', { name: 'Download a template' }).click();
+  const template = Papa.parse<Record<string, string>>(fs.readFileSync((await (await download).path())!, 'utf8'), { header: true, skipEmptyLines: true });
+  const columns = template.meta.fields!;
+  expect(columns).toContain('protein_g_per_lb'); // a new account works in US measures
+  // The coach's own clients in place of the examples (one height mistyped as feet with a decimal point).
+  const rows = [
+    { name: 'Demo client Mara', email: 'mara@example.test', sex: 'female', age: '40', height: '5.5', weight: '143 lb', activity: 'light', goal: 'maintain', allergens: 'tree nuts' },
+    { name: 'Demo client Otis', sex: 'male', age: '52', height: '5 ft 11 in', weight: '210', activity: 'moderate', goal: 'lose', dislikes: 'olives; mushrooms' },
+    { name: 'Demo client Pia', sex: 'female', age: '29', height: '168 cm', weight: '61 kg', activity: 'active', goal: 'gain', target_kcal: '2300', target_net_carbs_g: '30', target_protein_g: '110', target_fat_g: '180' },
+  ];
+  const file = (name: string) => {
+    const path = info.outputPath(name);
+    fs.writeFileSync(path, Papa.unparse(rows, { columns, newline: '\r\n' }));
+    return path;
+  };
+
+  const chooser = page.getByLabel('CSV file');
+  await chooser.setInputFiles(file('clients.csv'));
+  await page.getByRole('button', { name: 'Import clients' }).click();
+  await expect(page.getByRole('alert')).toContainText('The file was not imported: 1 problem');
+  await expect(page.getByRole('cell', { name: /"5.5" would be 5.5 inches: write 5 ft 7 in/ })).toBeVisible();
+  await expect(page.getByRole('link', { name: 'Demo client Otis' })).toHaveCount(0);
+
+  rows[0].height = `5' 5"`;
+  await chooser.setInputFiles(file('clients-mended.csv'));
+  await page.getByRole('button', { name: 'Import clients' }).click();
+  await expect(page.getByText('Imported: 3 new clients')).toBeVisible();
+  const note = page.getByRole('note').filter({ hasText: 'Added from the file: 3 clients' });
+  await expect(note).toContainText('1 of them has an e-mail address. No invitation was sent');
+  await expect(page.getByRole('alert')).toHaveCount(0);
+  // The list has them, none invited.
+  await expect(page.getByRole('row').filter({ hasText: 'Demo client Pia' })).toContainText('2300');
+  await expect(page.getByRole('row').filter({ hasText: 'Demo client Mara' })).toContainText('Not invited');
+  await expectNoSeriousA11yViolations(page, 'clients, after an import');
+  await page.screenshot({ path: `${SHOTS}/coach-client-import.png`, fullPage: true });
+
+  // A profile from the file reads as one typed in the form: 5 ft 5 in and 143 lb shown back in US measures.
+  await note.getByRole('link', { name: 'Demo client Mara' }).click();
+  await expect(page.getByRole('heading', { name: 'Demo client Mara' })).toBeVisible();
+  await expect(page.getByLabel('Weight (lb)')).toHaveValue('143');
+});
