@@ -177,3 +177,22 @@ export interface InvitationDto {
   /** Only present in the response that creates it: the token is stored hashed. */
   link?: string;
 }
+
+/** POST /api/invitations/clients: invite these client profiles at once, each at the e-mail on their profile. */
+export const inviteClientsSchema = z.object({
+  clientIds: z
+    .array(z.number().int().positive().max(PG_INT_MAX, TOO_LARGE), { message: 'List the clients to invite' })
+    .min(1, { message: 'Choose at least one client' })
+    .max(500, { message: 'At most 500 clients at once' }),
+});
+export type InviteClientsInput = z.infer<typeof inviteClientsSchema>;
+
+/** Why a client asked for was not invited. */
+export type InviteSkipReason = 'archived' | 'no-email' | 'joined' | 'invited' | 'member';
+
+export interface InviteClientsResultDto {
+  invited: { clientId: number; name: string; email: string }[];
+  skipped: { clientId: number; name: string; reason: InviteSkipReason }[];
+  /** The outbox batch of the invitation e-mails (null when none was sent). */
+  batchId: string | null;
+}

@@ -5,7 +5,7 @@ import { expectNoSeriousA11yViolations, SHOTS, unique } from './support';
 
 test.use({ viewport: { width: 1366, height: 900 }, acceptDownloads: true });
 
-test('a new coach brings their clients from a spreadsheet: the template, a mistake listed by line, then every client at once', async ({ page }, info) => {
+test('a new coach brings their clients from a spreadsheet: the template, a mistake listed by line, every client at once, then their invitations', async ({ page }, info) => {
   // A workspace of its own: the demo's clients stay as the other journeys know them.
   await page.goto('/register');
   await page.getByLabel('Your name').fill('Rae Example');
@@ -53,6 +53,17 @@ test('a new coach brings their clients from a spreadsheet: the template, a mista
   await expect(page.getByRole('row').filter({ hasText: 'Demo client Mara' })).toContainText('Not invited');
   await expectNoSeriousA11yViolations(page, 'clients, after an import');
   await page.screenshot({ path: `${SHOTS}/coach-client-import.png`, fullPage: true });
+
+  // Invitations when the coach is ready: one press lists who gets an e-mail; nothing goes before "Send".
+  await expect(page.getByText('1 client has an e-mail address and no invitation yet.')).toBeVisible();
+  await page.getByRole('button', { name: 'Invite them…' }).click();
+  const toSend = page.getByRole('group', { name: 'Invitations to send' });
+  await expect(toSend.getByRole('listitem')).toHaveText(['Demo client Mara mara@example.test']);
+  await toSend.getByRole('button', { name: 'Send 1 invitation' }).click();
+  await expect(page.getByRole('note').filter({ hasText: 'Invited: 1 client' })).toContainText('follow them in the outbox');
+  await expect(page.getByRole('row').filter({ hasText: 'Demo client Mara' })).toContainText('Invited');
+  await expect(page.getByText('no invitation yet')).toHaveCount(0);
+  await page.screenshot({ path: `${SHOTS}/coach-client-invite-all.png`, fullPage: true });
 
   // A profile from the file reads as one typed in the form: 5 ft 5 in and 143 lb shown back in US measures.
   await note.getByRole('link', { name: 'Demo client Mara' }).click();

@@ -10,6 +10,7 @@ import {
   requestPasswordResetSchema,
   resetPasswordSchema,
   createInvitationSchema,
+  inviteClientsSchema,
   deviceIdSchema,
   type DevicesSignedOutDto,
   loginSchema,
@@ -183,6 +184,17 @@ export function authRoutes(opts: { pool: Pool; loginLimit: number; publicUrl: st
       const { invitation, link } = await auth.createInvitation(emOf(req), actorOf(req), body, opts.publicUrl, opts.mail);
       res.status(201);
       return presentInvitation(invitation, link);
+    }),
+  );
+
+  // Client profiles invited at once, each at the e-mail on their profile; those who cannot be are skipped and said why.
+  r.post(
+    '/invitations/clients',
+    allow('coach'),
+    validated({ body: inviteClientsSchema }, async ({ body }, req, res) => {
+      const result = await auth.inviteClients(emOf(req), actorOf(req), body.clientIds, opts.publicUrl, opts.mail);
+      res.status(result.invited.length ? 201 : 200);
+      return result;
     }),
   );
 

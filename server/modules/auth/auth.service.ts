@@ -10,6 +10,8 @@ import type {
   AcceptInvitationInput,
   ChangePasswordInput,
   CreateInvitationInput,
+  InviteClientsResultDto,
+  InviteSkipReason,
   MeDto,
   MyWorkspaceDto,
   PasswordChangedDto,
@@ -20,6 +22,8 @@ import type {
 import { Workspace } from '../workspaces/workspace.entity.js';
 import { loadClients } from '../clients/client.service.js';
 import { Invitation, Membership, PasswordReset, User, type IUser } from './user.entity.js';
+import { Client } from '../clients/client.entity.js';
+import { LockMode } from '@mikro-orm/core';
 import { burnVerify, hashPassword, verifyPassword } from './passwords.js';
 import { hashToken, newToken } from './tokens.js';
 import { endSessions } from './devices.js';
@@ -201,32 +205,86 @@ export async function createInvitation(
   if (existing) {
     throw new ValidationError('Already a member', { email: ['This person is already a member of your workspace'] });
   }
+  // The invitation and its e-mail (outbox row + send job) are committed together or not at all.
+  return em.transactional(async (tx) => {
+    const ws = await tx.findOneOrFail(Workspace, actor.workspaceId);
+    return queueInvitation(tx, actor, ws.name, { email: input.email, role: input.role, clientId: input.clientId ?? null }, publicUrl, mail);
+  });
+}
+
+/** One invitation and its e-mail, in the caller's transaction. */
+async function queueInvitation(
+  tx: EntityManager,
+  actor: Actor,
+  workspaceName: string,
+  to: { email: string; role: CreateInvitationInput['role']; clientId: number | null },
+  publicUrl: string,
+  mail: MailQueue,
+  batchId?: string,
+) {
   const { token, hash } = newToken();
   const link = appLink(publicUrl, `/invite/${token}`);
-  // The invitation and its e-mail (outbox row + send job) are committed together or not at all.
-  const inv = await em.transactional(async (tx) => {
-    const row = tx.create(Invitation, {
-      workspace: actor.workspaceId,
-      email: input.email,
-      role: input.role,
-      clientId: input.clientId ?? null,
-      tokenHash: hash,
-      expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
-      invitedBy: actor.userId,
-    });
-    await tx.flush();
-    const ws = await tx.findOneOrFail(Workspace, actor.workspaceId);
-    const body = invitationMail({ workspaceName: ws.name, inviterName: actor.name, role: input.role, link, days: INVITATION_DAYS });
-    await queueMail(tx, mail, {
-      workspaceId: actor.workspaceId,
-      kind: 'invitation',
-      to: input.email,
-      ...body,
-      clientId: input.clientId ?? null,
-    });
-    return row;
+  const invitation = tx.create(Invitation, {
+    workspace: actor.workspaceId,
+    email: to.email,
+    role: to.role,
+    clientId: to.clientId,
+    tokenHash: hash,
+    expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+    invitedBy: actor.userId,
   });
-  return { invitation: inv, link };
+  await tx.flush();
+  const body = invitationMail({ workspaceName, inviterName: actor.name, role: to.role, link, days: INVITATION_DAYS });
+  await queueMail(tx, mail, { workspaceId: actor.workspaceId, kind: 'invitation', to: to.email, ...body, clientId: to.clientId, batchId });
+  return { invitation, link };
+}
+
+/**
+ * Invites client profiles at once, each at the e-mail on their profile (after an import, say). In one transaction,
+ * with the profiles locked, so two presses at once send one invitation each: a client who is archived, has no
+ * e-mail, has joined, has an invitation still open, or whose e-mail is already a member's is skipped and said why.
+ * An id that is not one of the workspace's clients is a 400 naming `clientIds` (nothing sent).
+ */
+export async function inviteClients(em: EntityManager, actor: Actor, clientIds: number[], publicUrl: string, mail: MailQueue): Promise<InviteClientsResultDto> {
+  const ids = [...new Set(clientIds)];
+  return em.transactional(async (tx) => {
+    const clients = await tx.find(Client, { id: { $in: ids }, workspace: actor.workspaceId }, { lockMode: LockMode.PESSIMISTIC_WRITE, orderBy: { name: 'asc', id: 'asc' } });
+    if (clients.length !== ids.length) {
+      const known = new Set(clients.map((c) => c.id));
+      throw ValidationError.field('clientIds', `No such client in your workspace: ${ids.filter((id) => !known.has(id)).join(', ')}`);
+    }
+    // One after another: a transaction is one connection.
+    const joined = await tx.find(Membership, { workspace: actor.workspaceId, clientId: { $in: ids } });
+    const open = await tx.find(Invitation, { workspace: actor.workspaceId, clientId: { $in: ids }, acceptedAt: null, expiresAt: { $gt: new Date() } });
+    const emails = clients.flatMap((c) => (c.email ? [c.email] : []));
+    const members = await tx.find(Membership, { workspace: actor.workspaceId, user: { email: { $in: emails } } }, { populate: ['user'] });
+    const joinedIds = new Set(joined.map((m) => m.clientId));
+    const invitedIds = new Set(open.map((i) => i.clientId));
+    const memberEmails = new Set(members.map((m) => m.user.unwrap().email.toLowerCase()));
+    const result: InviteClientsResultDto = { invited: [], skipped: [], batchId: null };
+    const ws = await tx.findOneOrFail(Workspace, actor.workspaceId);
+    for (const c of clients) {
+      const reason: InviteSkipReason | null = c.archivedAt
+        ? 'archived'
+        : !c.email
+          ? 'no-email'
+          : joinedIds.has(c.id)
+            ? 'joined'
+            : invitedIds.has(c.id)
+              ? 'invited'
+              : memberEmails.has(c.email.toLowerCase())
+                ? 'member'
+                : null;
+      if (reason) {
+        result.skipped.push({ clientId: c.id, name: c.name, reason });
+        continue;
+      }
+      result.batchId ??= randomUUID();
+      await queueInvitation(tx, actor, ws.name, { email: c.email!, role: 'client', clientId: c.id }, publicUrl, mail, result.batchId);
+      result.invited.push({ clientId: c.id, name: c.name, email: c.email! });
+    }
+    return result;
+  });
 }
 
 export async function listInvitations(em: EntityManager, actor: Actor) {

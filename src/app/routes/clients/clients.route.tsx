@@ -16,6 +16,7 @@ import { filterByText } from '@/lib/words';
 import { useMe } from '@/features/auth/hooks/use-me';
 import { useUnsavedGuard } from '@/lib/use-unsaved-guard';
 import { ClientImport } from '@/features/clients/components/client-import';
+import { InviteClients } from '@/features/clients/components/invite-clients';
 import { Cautions } from '@/components/domain/cautions';
 
 const isFull = (c: ClientListItemDto): c is ClientDto => 'targets' in c;
@@ -147,7 +148,12 @@ export function Component() {
             </EmptyState>
           }
         >
-          {(data) => <ClientList clients={data} />}
+          {(data) => (
+            <div className="flex flex-col gap-4">
+              <InviteClients clients={data.filter(isFull)} />
+              <ClientList clients={data} />
+            </div>
+          )}
         </QueryView>
       </Card>
       <Card>

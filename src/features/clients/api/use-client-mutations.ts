@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ClientDto, ClientImportResultDto, CreateClientInput, UpdateClientInput } from '@shared/schemas/clients.schema';
-import type { CreateInvitationInput, InvitationDto } from '@shared/schemas/auth.schema';
+import type { CreateInvitationInput, InvitationDto, InviteClientsInput, InviteClientsResultDto } from '@shared/schemas/auth.schema';
 import { api } from '@/lib/api-client';
 import { clientKeys } from './clients.keys';
 
@@ -64,5 +64,15 @@ export function useImportClients() {
     // Every failure (the row report, 413, 415) is shown beside the upload, not as a toast.
     meta: { silent: true },
     onSuccess: () => qc.invalidateQueries({ queryKey: clientKeys.lists() }),
+  });
+}
+
+/** Invites these client profiles at once, each at the e-mail on their profile (POST /api/invitations/clients). */
+export function useInviteClients() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (clientIds: number[]) => api.post<InviteClientsResultDto>('/invitations/clients', { clientIds } satisfies InviteClientsInput),
+    // The profiles and the list now show the open invitations.
+    onSuccess: () => qc.invalidateQueries({ queryKey: clientKeys.all }),
   });
 }
