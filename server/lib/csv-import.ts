@@ -1,4 +1,5 @@
 import Papa from 'papaparse';
+import Decimal from 'decimal.js';
 import type { ImportProblem } from '@shared/schemas/csv-import.js';
 import { HttpError } from '../http/errors.js';
 
@@ -135,3 +136,6 @@ export function dedupe(problems: ImportProblem[]): ImportProblem[] {
     return true;
   });
 }
+
+/** A stored decimal as an export writes it: "0.9500" → "0.95", none → "". */
+export const plainDecimal = (v: string | number | null | undefined): string => (v === null || v === undefined ? '' : new Decimal(v).toString());

@@ -167,6 +167,37 @@ describe('POST /api/clients/import (CSV of client profiles, all or nothing)', ()
     expect((await clientRows(coachA.workspaceId)).map((r) => r.name)).toEqual([name]);
   });
 
+  it('exports what the import reads back: another workspace importing the file gets the same profiles', async () => {
+    const coachA = await coachWorkspace(app);
+    const coachB = await coachWorkspace(app);
+    const csv = [
+      HEADER,
+      `Kai Demo,kai@example.test,2,male,61,5'9",201 lb,sedentary,lose,25,,0.6,,,,,"peanuts; soy","liver, sardines","Type 2 diabetes: agree carbs with the GP.
+Second line, with a comma"`,
+      `=Leo Demo,,1,female,35,171 cm,58.4 kg,active,gain,30,1.8,,2400,30,105,185,,,`,
+      `Mia Demo,,1,female,50,160 cm,70 kg,light,maintain,,,,,,,,,,`,
+    ].join('\n');
+    const first = await send(coachA, csv).expect(201);
+    // An archived client is not in the copy.
+    const mia = first.body.ids[first.body.names.indexOf('Mia Demo')];
+    await coachA.agent.patch(`/api/clients/${mia}`).send({ version: 1, archived: true }).expect(200);
+
+    const exported = await coachA.agent.get('/api/clients.csv').expect(200);
+    expect(exported.headers['content-type']).toMatch(/^text\/csv/);
+    expect(exported.headers['content-disposition']).toMatch(/^attachment; filename="?clients.csv"?$/);
+    const parsed = Papa.parse<Record<string, string>>(exported.text, { header: true, skipEmptyLines: true });
+    expect(parsed.data.map((r) => r.name)).toEqual(["'=Leo Demo", 'Kai Demo']); // a formula-like cell is escaped (OWASP)
+    // 5 ft 9 in = 175.26 cm, 201 lb = 91.17 kg (NIST HB 44 App. C), written with their units.
+    expect(parsed.data[1]).toMatchObject({ height: '175.26 cm', weight: '91.17 kg', protein_g_per_kg: '1.32', allergens: 'peanuts; soy', target_kcal: '' });
+    expect(parsed.data[0]).toMatchObject({ target_kcal: '2400', target_fat_g: '185' });
+
+    await send(coachB, exported.text, { units: 'us' }).expect(201);
+    const kept = (await clientRows(coachA.workspaceId)).filter((r) => r.name !== 'Mia Demo');
+    expect(await clientRows(coachB.workspaceId)).toEqual(kept);
+    const listB = await coachB.agent.get('/api/clients').expect(200);
+    expect(listB.body.find((c: { name: string }) => c.name === '=Leo Demo').targets).toMatchObject({ mode: 'manual', targetKcal: 2400 });
+  });
+
   it('answers 400 naming the field for a bad option or no file, 415 for a file that is not CSV, 403 to an assistant', async () => {
     const coach = await coachWorkspace(app);
     const bad = await send(coach, HEADER, { units: 'furlongs' }).expect(400);

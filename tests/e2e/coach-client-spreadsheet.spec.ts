@@ -65,6 +65,16 @@ test('a new coach brings their clients from a spreadsheet: the template, a mista
   await expect(page.getByText('no invitation yet')).toHaveCount(0);
   await page.screenshot({ path: `${SHOTS}/coach-client-invite-all.png`, fullPage: true });
 
+  // A copy to keep: the three clients, measures with their units.
+  const copy = page.waitForEvent('download');
+  await page.getByRole('link', { name: 'Download my clients (CSV)' }).click();
+  const kept = Papa.parse<Record<string, string>>(fs.readFileSync((await (await copy).path())!, 'utf8'), { header: true, skipEmptyLines: true }).data;
+  expect(kept.map((r) => [r.name, r.height])).toEqual([
+    ['Demo client Mara', '165.1 cm'],
+    ['Demo client Otis', '180.34 cm'],
+    ['Demo client Pia', '168 cm'],
+  ]);
+
   // A profile from the file reads as one typed in the form: 5 ft 5 in and 143 lb shown back in US measures.
   await note.getByRole('link', { name: 'Demo client Mara' }).click();
   await expect(page.getByRole('heading', { name: 'Demo client Mara' })).toBeVisible();

@@ -112,6 +112,7 @@ export const MATRIX: Record<string, MatrixRow> = {
     crossWorkspace: true,
   }),
   'POST /api/clients/import': R(['coach']),
+  'GET /api/clients.csv': R(['coach']),
   'GET /api/clients/:id/published-allergens': R(['coach'], {
     path: (ctx) => `/api/clients/${ctx.ids.client}/published-allergens`,
     crossWorkspace: true,

@@ -1,3 +1,4 @@
+import Papa from 'papaparse';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { allergenFromWord, MAJOR_ALLERGENS } from '@shared/domain/allergens.js';
 import { heightCmFromText, perKgOfPerLb, weightKgFromText, type BodyUnits } from '@shared/domain/body-measures.js';
@@ -16,12 +17,12 @@ import {
 } from '@shared/schemas/clients.schema.js';
 import type { ActivityLevel, Goal } from '@shared/domain/targets.js';
 import type { Actor } from '../../http/authz.js';
-import { cellOf, csvText, dedupe, ImportRejected, readCsv, splitList } from '../../lib/csv-import.js';
+import { cellOf, csvText, dedupe, ImportRejected, plainDecimal, readCsv, splitList } from '../../lib/csv-import.js';
 import { Client } from './client.entity.js';
 import { clientRowFields } from './client.service.js';
 
 /**
- * CSV import of client profiles, for a coach who starts with a list of clients in a spreadsheet: every row is
+ * CSV import (and export) of client profiles, for a coach who starts with a list of clients in a spreadsheet: every row is
  * checked with the same zod schema as the profile form (after its cells are read as people write them: "5 ft 6 in",
  * "163 lb", "Lightly active", "tree nuts; milk"); when any row fails nothing is written and the answer is a 400 with
  * a row-level report (line, column, reason). Otherwise all profiles are created in ONE transaction. No invitation is
@@ -242,4 +243,42 @@ export async function importClientsCsv(em: EntityManager, actor: Actor, buffer: 
       withEmail: values.filter((v) => v.email).length,
     };
   });
+}
+
+/** The export's columns: the import's, protein per kg only (as stored). */
+export const CLIENT_EXPORT_COLUMNS = CLIENT_IMPORT_COLUMNS.filter((c) => c !== 'protein_g_per_lb');
+
+/**
+ * The workspace's clients (not the archived ones) as a CSV the import reads back: height and weight exact as stored,
+ * with their unit ("165.1 cm", "64.86 kg", so any coach's import reads them alike), typed targets in the four target
+ * columns (blank when computed), allergens by code, health notes included (the file is the coach's). Ordered by name;
+ * cells a spreadsheet would run as a formula are escaped.
+ */
+export async function exportClientsCsv(em: EntityManager, actor: Actor): Promise<string> {
+  const rows = await em.find(Client, { workspace: actor.workspaceId, archivedAt: null }, { orderBy: { name: 'asc', id: 'asc' } });
+  const data = rows.map((c) => {
+    const t = c.targetMode === 'manual' ? c.manualTargets : null;
+    const cells: Record<(typeof CLIENT_EXPORT_COLUMNS)[number], string> = {
+      name: c.name,
+      email: c.email ?? '',
+      portions_per_plate: plainDecimal(c.householdMultiplier),
+      sex: c.sex,
+      age: String(c.ageYears),
+      height: `${plainDecimal(c.heightCm)} cm`,
+      weight: `${plainDecimal(c.weightKg)} kg`,
+      activity: c.activity,
+      goal: c.goal,
+      net_carb_cap_g: plainDecimal(c.netCarbCapG),
+      protein_g_per_kg: plainDecimal(c.proteinGPerKg),
+      target_kcal: plainDecimal(t?.targetKcal),
+      target_net_carbs_g: plainDecimal(t?.netCarbCapG),
+      target_protein_g: plainDecimal(t?.proteinG),
+      target_fat_g: plainDecimal(t?.fatG),
+      allergens: (c.allergens ?? []).join('; '),
+      dislikes: (c.dislikes ?? []).join('; '),
+      health_notes: c.healthNotes ?? '',
+    };
+    return CLIENT_EXPORT_COLUMNS.map((col) => cells[col]);
+  });
+  return Papa.unparse({ fields: [...CLIENT_EXPORT_COLUMNS], data }, { escapeFormulae: true, newline: '\r\n' });
 }

@@ -4,7 +4,7 @@ import { actorOf, allow } from '../../http/authz.js';
 import { emOf } from '../../http/request-context.js';
 import { validated } from '../../http/validate.js';
 import { uploadCsv, uploadedFile } from '../../http/upload-csv.js';
-import { importClientsCsv } from './client-import.service.js';
+import { exportClientsCsv, importClientsCsv } from './client-import.service.js';
 import * as clients from './client.service.js';
 import { todayQuery } from '@shared/schemas/weeks.schema.js';
 import { publishedAllergens } from '../weeks/week-publish.service.js';
@@ -40,6 +40,15 @@ export function clientRoutes() {
       const result = await importClientsCsv(emOf(req), actorOf(req), uploadedFile(req), body.units);
       res.status(201);
       return result;
+    }),
+  );
+
+  // Coach: the clients (not archived) as a CSV the import reads back, health notes included.
+  r.get(
+    '/clients.csv',
+    allow('coach'),
+    validated({}, async (_i, req, res) => {
+      res.type('text/csv; charset=utf-8').attachment('clients.csv').send(await exportClientsCsv(emOf(req), actorOf(req)));
     }),
   );
 

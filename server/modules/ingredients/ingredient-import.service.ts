@@ -15,7 +15,7 @@ import {
   type IngredientValues,
 } from '@shared/schemas/ingredients.schema.js';
 import type { Actor } from '../../http/authz.js';
-import { cellOf, csvText, dedupe, ImportRejected, readCsv, splitList } from '../../lib/csv-import.js';
+import { cellOf, csvText, dedupe, ImportRejected, plainDecimal, readCsv, splitList } from '../../lib/csv-import.js';
 import { Ingredient, type IIngredient } from './ingredient.entity.js';
 import { ownNames, rowData } from './ingredient.service.js';
 
@@ -200,8 +200,6 @@ export async function importIngredientsCsv(
   });
 }
 
-const plain = (v: string | number | null | undefined): string => (v === null || v === undefined ? '' : new Decimal(v).toString());
-
 /**
  * The workspace's own ingredients as a CSV the import reads back (the same columns, per 100 g; piece weights as
  * "large:50; slice:28", allergens by code), ordered by name: a copy of the coach's data to keep, or to import into
@@ -214,23 +212,23 @@ export async function exportIngredientsCsv(em: EntityManager, actor: Actor): Pro
     const cells: Record<ImportColumn, string | number> = {
       name: r.name,
       category: r.category,
-      kcal: plain(r.kcal),
-      fat_g: plain(r.fatG),
-      sat_fat_g: plain(r.satFatG),
-      protein_g: plain(r.proteinG),
-      carbs_g: plain(r.carbsG),
-      fiber_g: plain(r.fiberG),
-      sugars_g: plain(r.sugarsG),
-      erythritol_g: plain(r.erythritolG),
-      allulose_g: plain(r.alluloseG),
-      other_polyols_g: plain(r.otherPolyolsG),
-      sodium_mg: plain(r.sodiumMg),
-      density_g_per_ml: plain(r.densityGPerMl),
+      kcal: plainDecimal(r.kcal),
+      fat_g: plainDecimal(r.fatG),
+      sat_fat_g: plainDecimal(r.satFatG),
+      protein_g: plainDecimal(r.proteinG),
+      carbs_g: plainDecimal(r.carbsG),
+      fiber_g: plainDecimal(r.fiberG),
+      sugars_g: plainDecimal(r.sugarsG),
+      erythritol_g: plainDecimal(r.erythritolG),
+      allulose_g: plainDecimal(r.alluloseG),
+      other_polyols_g: plainDecimal(r.otherPolyolsG),
+      sodium_mg: plainDecimal(r.sodiumMg),
+      density_g_per_ml: plainDecimal(r.densityGPerMl),
       piece_weights: Object.entries(r.pieceWeights ?? {})
-        .map(([name, grams]) => `${name}:${plain(grams)}`)
+        .map(([name, grams]) => `${name}:${plainDecimal(grams)}`)
         .join('; '),
       allergens: (r.allergens ?? []).join('; '),
-      purchase_amount: plain(r.purchaseAmount),
+      purchase_amount: plainDecimal(r.purchaseAmount),
       purchase_unit: r.purchaseUnit ?? '',
       purchase_label: r.purchaseLabel ?? '',
       price_cents: r.priceCents ?? '',

@@ -159,6 +159,15 @@ export function Component() {
       <Card>
         <h2 className="mb-3 text-xl">Clients from a spreadsheet</h2>
         <ClientImport units={me.unitSystem} />
+        <h2 className="mb-2 mt-6 text-xl">Keep a copy</h2>
+        <p className="text-sm text-ink-soft">
+          Your clients (not the archived ones) in the same columns, heights and weights in centimetres and kilograms with
+          their unit: to keep, or to import into another workspace. It holds health notes and e-mail addresses: keep the
+          file somewhere private.{' '}
+          <a href="/api/clients.csv" download className="font-bold underline">
+            Download my clients (CSV)
+          </a>
+        </p>
       </Card>
       <Cautions topic="diet" compact />
     </div>
