@@ -62,7 +62,9 @@ export function InviteClients({ clients }: { clients: ClientDto[] }) {
       )}
       {open && ready.length > 0 && (
         <div className="flex flex-col gap-2 rounded-lg border border-line-strong p-3" role="group" aria-label="Invitations to send">
-          <p className="font-bold">Each of them gets an e-mail with a link to their own plates, good for 14 days:</p>
+          <p className="font-bold">
+            {ready.length === 1 ? 'They get' : 'Each of them gets'} an e-mail with a link to their own plates, good for 14 days:
+          </p>
           <ul className="flex max-h-64 list-disc flex-col gap-0.5 overflow-y-auto pl-5 text-sm">
             {ready.map((c) => (
               <li key={c.id}>
