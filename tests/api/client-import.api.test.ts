@@ -115,6 +115,7 @@ describe('POST /api/clients/import (CSV of client profiles, all or nothing)', ()
       'eve demo,,1,female,40,165 cm,65 kg,light,maintain,,,,,,,,,,',
       'Good Demo,,1,female,41,166 cm,66 kg,light,maintain,,,,,,,,,,',
       'Young Demo,,1,female,9,120 cm,30 kg,light,maintain,,,,,,,,,,',
+      'Half year Demo,,1,female,40.5,165 cm,65 kg,light,maintain,,,,,,,,,,',
     ].join('\n');
     const res = await send(coach, csv).expect(400);
     expect(res.body.code).toBe('import_rejected');
@@ -135,10 +136,12 @@ describe('POST /api/clients/import (CSV of client profiles, all or nothing)', ()
         { line: 6, column: 'name', reason: expect.stringMatching(/"eve demo" is already one of your clients/), code: 'name_taken' },
         { line: 7, column: 'name', reason: 'Same name as line 2' },
         { line: 8, column: 'age', reason: 'Age must be 14 or more' },
+        { line: 9, column: 'age', reason: 'Age: enter whole years' },
       ]),
     );
     // Each cell is reported once: an unreadable cell is not reported again as missing.
     expect(report.filter((p) => p.line === 3 && p.column === 'sex')).toHaveLength(1);
+    expect(report.filter((p) => p.line === 9)).toHaveLength(1);
     expect(report.some((p) => p.line === 2)).toBe(false);
     expect((await clientRows(coach.workspaceId)).map((r) => r.name)).toEqual(['Eve Demo']);
   });

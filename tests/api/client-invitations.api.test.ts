@@ -91,6 +91,10 @@ describe('POST /api/invitations/clients (client profiles invited at once)', () =
     const theirs = await addClient(coachB, { email: `${uniq('jon')}@example.test` });
     const cross = await coachA.agent.post('/api/invitations/clients').send({ clientIds: [mine.id, theirs.id] }).expect(400);
     expect(cross.body.errors.clientIds).toEqual([`No such client in your workspace: ${theirs.id}`]);
+    // Nobody to invite is not an error: a profile without an e-mail is skipped, and said why.
+    const noEmail = await addClient(coachA, { email: null });
+    const skipped = await coachA.agent.post('/api/invitations/clients').send({ clientIds: [noEmail.id] }).expect(200);
+    expect(skipped.body).toEqual({ invited: [], skipped: [{ clientId: noEmail.id, name: noEmail.name, reason: 'no-email' }], batchId: null });
     const none = await coachA.agent.post('/api/invitations/clients').send({ clientIds: [] }).expect(400);
     expect(none.body.errors.clientIds).toBeDefined();
     const assistant = await member(app, coachA, 'assistant');

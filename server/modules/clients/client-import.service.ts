@@ -102,7 +102,11 @@ function toInput(rec: Record<string, string>, line: number, units: BodyUnits, pr
   if (!sex) problem('sex', sexText ? `"${sexText}": write female or male (the equation for daily energy has a form for each)` : 'Give female or male');
 
   const ageText = cell('age');
-  const ageYears = ageText ? number('age', 'Age') : undefined;
+  let ageYears = ageText ? number('age', 'Age') : undefined;
+  if (ageYears !== undefined && !Number.isInteger(ageYears)) {
+    problem('age', 'Age: enter whole years');
+    ageYears = undefined;
+  }
   if (!ageText) problem('age', 'Give the age in years');
 
   const height = heightCmFromText(cell('height'), units);
