@@ -73,7 +73,7 @@ describe('clients from a spreadsheet', () => {
     await waitFor(() => expect(toast.success).toHaveBeenLastCalledWith('Imported: 2 new clients'));
     const note = screen.getByText('Added from the file: 2 clients').closest('[role="note"]');
     expect(note?.textContent).toContain('Ana Demo, Ben Demo.');
-    expect(note?.textContent).toContain('1 of them has an e-mail address. No invitation was sent');
+    expect(note?.textContent).toContain('1 of them has an e-mail address. The import sent no invitation');
     expect(screen.getByRole('link', { name: 'Ana Demo' }).getAttribute('href')).toBe('/clients/41');
     expect(screen.queryByRole('alert')).toBeNull();
     expect(screen.queryByRole('table')).toBeNull();

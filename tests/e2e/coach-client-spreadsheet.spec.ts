@@ -46,7 +46,7 @@ test('a new coach brings their clients from a spreadsheet: the template, a mista
   await page.getByRole('button', { name: 'Import clients' }).click();
   await expect(page.getByText('Imported: 3 new clients')).toBeVisible();
   const note = page.getByRole('note').filter({ hasText: 'Added from the file: 3 clients' });
-  await expect(note).toContainText('1 of them has an e-mail address. No invitation was sent');
+  await expect(note).toContainText('1 of them has an e-mail address. The import sent no invitation');
   await expect(page.getByRole('alert')).toHaveCount(0);
   // The list has them, none invited.
   await expect(page.getByRole('row').filter({ hasText: 'Demo client Pia' })).toContainText('2300');

@@ -29,8 +29,8 @@ function Added({ result }: { result: ClientImportResultDto }) {
       </p>
       <p>
         {result.withEmail > 0
-          ? `${result.withEmail} of them ${agrees(result.withEmail, 'has', 'have')} an e-mail address. No invitation was sent: invite them all from above the list, or each from their page, when you are ready.`
-          : 'No invitation was sent: add an e-mail address on a client’s page to invite them.'}{' '}
+          ? `${result.withEmail} of them ${agrees(result.withEmail, 'has', 'have')} an e-mail address. The import sent no invitation: invite them all from above the list, or each from their page, when you are ready.`
+          : 'The import sent no invitation: add an e-mail address on a client’s page to invite them.'}{' '}
         Check each profile’s targets before you plan their week.
       </p>
     </Notice>
