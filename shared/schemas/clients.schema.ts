@@ -35,6 +35,9 @@ const decimalText = (label: string, min: number, max: number) =>
   );
 
 
+/** What a new profile starts with where the coach gives nothing: the form's first values and a blank CSV cell. */
+export const CLIENT_DEFAULTS = { householdMultiplier: '1', netCarbCapG: '20', proteinGPerKg: '1.5' } as const;
+
 const allergenSchema = z.enum(ALLERGEN_CODES as unknown as [AllergenCode, ...AllergenCode[]]);
 const term = z.string().trim().min(1).max(80);
 const slotName = z.string().trim().min(1).max(40);

@@ -233,7 +233,7 @@ async function queueInvitation(
     expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
     invitedBy: actor.userId,
   });
-  await tx.flush();
+  // Written with its e-mail's outbox row (queueMail flushes both): one round trip per invitation, not two.
   const body = invitationMail({ workspaceName, inviterName: actor.name, role: to.role, link, days: INVITATION_DAYS });
   await queueMail(tx, mail, { workspaceId: actor.workspaceId, kind: 'invitation', to: to.email, ...body, clientId: to.clientId, batchId });
   return { invitation, link };

@@ -6,6 +6,7 @@ import { ambiguousCommaMessage, decimalCommaToPoint } from '@shared/domain/units
 import type { ImportProblem } from '@shared/schemas/csv-import.js';
 import {
   ACTIVITY_LABELS,
+  CLIENT_DEFAULTS,
   CLIENT_IMPORT_COLUMNS,
   CLIENT_TARGET_COLUMNS,
   createClientSchema,
@@ -19,7 +20,7 @@ import type { ActivityLevel, Goal } from '@shared/domain/targets.js';
 import type { Actor } from '../../http/authz.js';
 import { cellOf, csvText, dedupe, ImportRejected, plainDecimal, readCsv, splitList } from '../../lib/csv-import.js';
 import { Client } from './client.entity.js';
-import { clientRowFields } from './client.service.js';
+import { newClientRow } from './client.service.js';
 
 /**
  * CSV import (and export) of client profiles, for a coach who starts with a list of clients in a spreadsheet: every row is
@@ -54,18 +55,20 @@ const TARGET_FIELDS: Record<string, (typeof CLIENT_TARGET_COLUMNS)[number]> = {
   fatG: 'target_fat_g',
 };
 
-const SEX_WORDS: Record<string, 'female' | 'male'> = { f: 'female', female: 'female', woman: 'female', w: 'female', m: 'male', male: 'male', man: 'male' };
-
+/** A cell's word as the maps below key it: lower case, one space for runs of spaces, "_" or "-", no "(…)" at the end. */
 const word = (s: string) => s.trim().toLowerCase().replace(/\s*\(.*\)\s*$/, '').replace(/[\s_-]+/g, ' ');
 
-const ACTIVITY_WORDS = new Map<string, ActivityLevel>([
-  ...Object.entries(ACTIVITY_LABELS).flatMap(([code, label]) => [
-    [word(code.replace('-', ' ')), code as ActivityLevel] as const,
+const SEX_WORDS = new Map<string, 'female' | 'male'>([
+  ['f', 'female'], ['female', 'female'], ['woman', 'female'], ['w', 'female'],
+  ['m', 'male'], ['male', 'male'], ['man', 'male'],
+]);
+/** By code ("very-active" → "very active") and by the form's words ("Lightly active (1–3 days a week)"). */
+const ACTIVITY_WORDS = new Map<string, ActivityLevel>(
+  Object.entries(ACTIVITY_LABELS).flatMap(([code, label]) => [
+    [word(code), code as ActivityLevel] as const,
     [word(label), code as ActivityLevel] as const,
   ]),
-  ['lightly active', 'light'],
-  ['moderately active', 'moderate'],
-]);
+);
 const GOAL_WORDS = new Map<string, Goal>(
   Object.entries(GOAL_LABELS).flatMap(([code, label]) => [
     [code, code as Goal] as const,
@@ -98,7 +101,7 @@ function toInput(rec: Record<string, string>, line: number, units: BodyUnits, pr
   };
 
   const sexText = cell('sex');
-  const sex = SEX_WORDS[sexText.toLowerCase()];
+  const sex = SEX_WORDS.get(word(sexText));
   if (!sex) problem('sex', sexText ? `"${sexText}": write female or male (the equation for daily energy has a form for each)` : 'Give female or male');
 
   const ageText = cell('age');
@@ -159,15 +162,15 @@ function toInput(rec: Record<string, string>, line: number, units: BodyUnits, pr
   return {
     name: cell('name'),
     email: cell('email'),
-    householdMultiplier: decimal('portions_per_plate', '1'),
+    householdMultiplier: decimal('portions_per_plate', CLIENT_DEFAULTS.householdMultiplier),
     sex,
     ageYears,
     heightCm: height.ok ? height.value : undefined,
     weightKg: weight.ok ? weight.value : undefined,
     activity,
     goal,
-    netCarbCapG: decimal('net_carb_cap_g', '20'),
-    proteinGPerKg: proteinGPerKg ?? '1.5',
+    netCarbCapG: decimal('net_carb_cap_g', CLIENT_DEFAULTS.netCarbCapG),
+    proteinGPerKg: proteinGPerKg ?? CLIENT_DEFAULTS.proteinGPerKg,
     targetMode: manualTargets ? 'manual' : 'computed',
     manualTargets,
     allergens: [...new Set(allergens)],
@@ -236,13 +239,11 @@ export async function importClientsCsv(em: EntityManager, actor: Actor, buffer: 
   const { values, report } = checkClientCsv(text, existing, units ?? actor.unitSystem ?? 'us');
   if (report.length) throw new ImportRejected(report);
   return em.transactional(async (tx) => {
-    const created = values.map((v) =>
-      tx.create(Client, { workspace: actor.workspaceId, slotShares: {}, allergens: [], dislikes: [], healthNotes: '', ...clientRowFields(v) } as never),
-    );
+    const created = values.map((v) => newClientRow(tx, actor.workspaceId, v));
     await tx.flush();
     return {
       created: created.length,
-      ids: created.map((r) => (r as { id: number }).id),
+      ids: created.map((r) => r.id),
       names: values.map((v) => v.name),
       withEmail: values.filter((v) => v.email).length,
     };
@@ -250,7 +251,7 @@ export async function importClientsCsv(em: EntityManager, actor: Actor, buffer: 
 }
 
 /** The export's columns: the import's, protein per kg only (as stored). */
-export const CLIENT_EXPORT_COLUMNS = CLIENT_IMPORT_COLUMNS.filter((c) => c !== 'protein_g_per_lb');
+const CLIENT_EXPORT_COLUMNS = CLIENT_IMPORT_COLUMNS.filter((c) => c !== 'protein_g_per_lb');
 
 /**
  * The workspace's clients (not the archived ones) as a CSV the import reads back: height and weight exact as stored,

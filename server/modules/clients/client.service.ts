@@ -107,15 +107,20 @@ export function clientRowFields(input: Partial<CreateClientData>) {
   return out;
 }
 
-export async function createClient(em: EntityManager, actor: Actor, input: CreateClientData) {
-  const row = em.create(Client, {
-    workspace: actor.workspaceId,
+/** A new profile of the workspace from the form's values (written at the next flush): the form and the import. */
+export function newClientRow(em: EntityManager, workspaceId: number, input: CreateClientData): IClient {
+  return em.create(Client, {
+    workspace: workspaceId,
     slotShares: {},
     allergens: [],
     dislikes: [],
     healthNotes: '',
     ...clientRowFields(input),
   } as never) as IClient;
+}
+
+export async function createClient(em: EntityManager, actor: Actor, input: CreateClientData) {
+  const row = newClientRow(em, actor.workspaceId, input);
   await em.flush();
   return getClient(em, actor, row.id);
 }

@@ -6,6 +6,7 @@ import { computeTargets, type ActivityLevel, type Goal, type Sex } from '@shared
 import {
   ACTIVITY_LABELS,
   ACTIVITY_LEVELS,
+  CLIENT_DEFAULTS,
   GOAL_LABELS,
   GOALS,
   createClientSchema,
@@ -23,7 +24,7 @@ import { decimalCommaToPoint } from '@shared/domain/units';
 export const emptyClient: CreateClientInput = {
   name: '',
   email: '',
-  householdMultiplier: '1',
+  householdMultiplier: CLIENT_DEFAULTS.householdMultiplier,
   sex: 'female',
   ageYears: 40,
   heightCm: '165',
@@ -31,8 +32,8 @@ export const emptyClient: CreateClientInput = {
   activity: 'light',
   goal: 'maintain',
   goalAdjustment: null,
-  netCarbCapG: '20',
-  proteinGPerKg: '1.5',
+  netCarbCapG: CLIENT_DEFAULTS.netCarbCapG,
+  proteinGPerKg: CLIENT_DEFAULTS.proteinGPerKg,
   targetMode: 'computed',
   manualTargets: null,
   slotShares: {},
